@@ -1,0 +1,35 @@
+/** The exit codes of the larder command, shown in --help. */
+export const EXIT = {
+  ok: 0,
+  /** Something unexpected went wrong inside larder. */
+  internal: 1,
+  /** The command line or batch input is wrong (unknown option, bad unit, impossible size). */
+  usage: 2,
+  /** A formula file is missing, unreadable or invalid. */
+  formula: 3,
+  /** A critical limit is exceeded: the batch must not be made. */
+  critical: 4,
+} as const;
+
+/** The exit-code table as printed at the end of --help. */
+export const EXIT_CODES_HELP = `
+Exit codes:
+  0  done
+  1  unexpected internal error
+  2  bad command line or batch input (unknown option, bad unit, impossible size)
+  3  formula file missing, unreadable or invalid
+  4  critical limit exceeded: the batch is refused`;
+
+/** A failure that ends the command with a message and a given exit code. */
+export class CliError extends Error {
+  override readonly name = 'CliError';
+
+  constructor(
+    message: string,
+    readonly exitCode: number,
+    /** Extra lines printed after the message (problems in a file). */
+    readonly details: readonly string[] = [],
+  ) {
+    super(message);
+  }
+}

@@ -1,0 +1,123 @@
+import { execFileSync } from 'node:child_process';
+import { statSync } from 'node:fs';
+import { Command } from 'commander';
+import { formatProblem, readFormula, type FormulaProblem, type FormulaReading } from '../../shared/index.ts';
+import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
+import { formulaFilesIn, formulasFolder, isFormulaFile, readFormulaFile } from '../formula-files.ts';
+import type { Io } from '../io.ts';
+
+interface CheckOptions {
+  staged?: boolean;
+  json?: boolean;
+}
+
+/** One file's outcome. */
+interface FileReport {
+  file: string;
+  id?: string;
+  kind?: string;
+  ok: boolean;
+  problems: FormulaProblem[];
+}
+
+/** Draw progress when there are this many files or more, and the terminal can show it. */
+const PROGRESS_FROM = 50;
+
+/** `larder check [PATHS…]`: validate formula files; with --staged, the files staged in git. */
+export function checkCommand(io: Io): Command {
+  return new Command('check')
+    .description('check formula files: YAML, schema, percentages and nitrite limits')
+    .argument('[paths...]', 'files or folders to check (default: $LARDER_FORMULAS or ./formulas)')
+    .option('--staged', 'check the formula files staged in git, as staged (for a pre-commit hook)')
+    .option('--json', 'print the report as JSON')
+    .addHelpText(
+      'after',
+      `
+Examples:
+  larder check                      every formula under ./formulas
+  larder check formulas/bacon.yaml  one file
+  larder check --staged             in .git/hooks/pre-commit: refuse a commit with a bad formula
+${EXIT_CODES_HELP}`,
+    )
+    .action((paths: string[], options: CheckOptions) => runCheck(paths, options, io));
+}
+
+function runCheck(paths: string[], options: CheckOptions, io: Io): void {
+  const readings = options.staged ? readStaged() : readPaths(paths.length ? paths : [formulasFolder()], io);
+  const reports = readings.map(({ file, reading }): FileReport => ({
+    file,
+    id: reading.formula?.id,
+    kind: reading.formula?.kind,
+    ok: !reading.problems.some((p) => p.severity === 'error'),
+    problems: [...reading.problems],
+  }));
+  markDuplicateIds(reports);
+  const failed = reports.filter((r) => !r.ok).length;
+  const warnings = reports.reduce((n, r) => n + r.problems.filter((p) => p.severity === 'warning').length, 0);
+  const summary = { files: reports.length, ok: reports.length - failed, failed, warnings };
+  if (options.json) {
+    io.out(`${JSON.stringify({ summary, files: reports }, null, 2)}\n`);
+  } else {
+    for (const report of reports) for (const problem of report.problems) io.out(`${formatProblem(problem)}\n`);
+    io.out(`Checked ${summary.files} formula file(s): ${summary.ok} ok, ${summary.failed} with errors, ${summary.warnings} warning(s).\n`);
+  }
+  if (failed > 0) process.exitCode = EXIT.formula;
+}
+
+function readPaths(paths: string[], io: Io): { file: string; reading: FormulaReading }[] {
+  const files: string[] = [];
+  for (const target of paths) {
+    let isFolder: boolean;
+    try {
+      isFolder = statSync(target).isDirectory();
+    } catch {
+      throw new CliError(`${target}: no such file or folder`, EXIT.formula);
+    }
+    files.push(...(isFolder ? formulaFilesIn(target) : [target]));
+  }
+  const showProgress = io.errIsTty && files.length >= PROGRESS_FROM;
+  return files.map((file, i) => {
+    if (showProgress && (i % 25 === 0 || i === files.length - 1)) io.err(`\rchecking ${i + 1}/${files.length}`);
+    const reading = readFormulaFile(file);
+    if (showProgress && i === files.length - 1) io.err('\n');
+    return { file, reading };
+  });
+}
+
+function git(args: string[]): string {
+  try {
+    return execFileSync('git', args, { encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'], maxBuffer: 64 * 1024 * 1024 });
+  } catch (error) {
+    const stderr = String((error as { stderr?: unknown }).stderr ?? '').trim();
+    throw new CliError(`--staged needs a git repository: ${stderr || String(error)}`, EXIT.usage);
+  }
+}
+
+function readStaged(): { file: string; reading: FormulaReading }[] {
+  const names = git(['diff', '--cached', '--name-only', '--diff-filter=ACMR', '-z'])
+    .split('\0')
+    .filter((name) => name && isFormulaFile(name));
+  // Check what is staged, not what is in the working tree: that is what the commit will hold.
+  return names.map((file) => ({ file, reading: readFormula(git(['show', `:${file}`]), file) }));
+}
+
+function markDuplicateIds(reports: FileReport[]): void {
+  const firstFile = new Map<string, string>();
+  for (const report of reports) {
+    if (!report.id) continue;
+    const first = firstFile.get(report.id);
+    if (first === undefined) {
+      firstFile.set(report.id, report.file);
+      continue;
+    }
+    report.ok = false;
+    report.problems.push({
+      file: report.file,
+      line: 0,
+      column: 0,
+      path: ['id'],
+      severity: 'error',
+      message: `the id "${report.id}" is already used by ${first}; every formula needs its own id`,
+    });
+  }
+}

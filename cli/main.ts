@@ -1,0 +1,30 @@
+import { CommanderError } from 'commander';
+import { CliError, EXIT } from './cli-error.ts';
+import { PROCESS_IO, type Io } from './io.ts';
+import { createProgram } from './program.ts';
+
+/**
+ * Runs larder with the given arguments and returns the exit code. Every failure ends here as a
+ * message (JSON with --json) and an exit code; a stack trace is printed only for a real bug.
+ */
+export async function run(argv: readonly string[], io: Io = PROCESS_IO): Promise<number> {
+  const json = argv.includes('--json');
+  try {
+    await createProgram(io).parseAsync([...argv], { from: 'user' });
+    return typeof process.exitCode === 'number' ? process.exitCode : EXIT.ok;
+  } catch (error) {
+    if (error instanceof CommanderError) {
+      // --help and --version end this way too, with code 0; commander has already printed.
+      return error.exitCode === 0 ? EXIT.ok : EXIT.usage;
+    }
+    if (error instanceof CliError) {
+      if (json) io.out(`${JSON.stringify({ error: { message: error.message, exitCode: error.exitCode, details: error.details } }, null, 2)}\n`);
+      else io.err(`larder: ${error.message}\n${error.details.map((line) => `${line}\n`).join('')}`);
+      return error.exitCode;
+    }
+    io.err(`larder: unexpected error, please report it:\n${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
+    return EXIT.internal;
+  }
+}
+
+process.exitCode = await run(process.argv.slice(2));

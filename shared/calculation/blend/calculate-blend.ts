@@ -1,0 +1,167 @@
+import { Decimal, HUNDRED, fraction, sum } from '../../decimal.ts';
+import type { BlendFormula, Yields } from '../../formula/formula-types.ts';
+import { CAUTIONS, allergenCaution } from '../../reference/cautions.ts';
+import { parseMass } from '../../units/mass.ts';
+import { collectAllergens } from '../allergens.ts';
+import { BatchError } from '../batch-error.ts';
+import type { BatchInput } from '../batch-input.ts';
+import type {
+  AmountLine,
+  CalcResult,
+  Caution,
+  Figure,
+  LineGroup,
+  Portions,
+  YieldStage,
+} from '../calc-result.ts';
+import { yieldStages } from '../yields.ts';
+import { componentFat, componentLabel, formulaTargetFat } from './blend-fat.ts';
+import { blendMeat } from './blend-size.ts';
+import { fatStandardCheck } from './fat-standard-check.ts';
+import { blendFatPercent } from './pearson-square.ts';
+import { portionsOf } from './portion.ts';
+
+/** The target fat: the batch's --target-fat, else the formula's target. */
+function targetFat(formula: BlendFormula, batch: BatchInput): { value: Decimal; note: string } {
+  if (batch.targetFat === undefined) return { value: formulaTargetFat(formula), note: 'from the formula' };
+  if (batch.targetFat.isNegative() || batch.targetFat.greaterThan(HUNDRED)) {
+    throw new BatchError(`--target-fat must be between 0 and 100 %, not ${batch.targetFat} %`, 'target-fat');
+  }
+  return { value: batch.targetFat, note: 'from --target-fat' };
+}
+
+/** The portion weight: the batch's --portion, else the formula's; none when neither gives one. */
+function portionGrams(formula: BlendFormula, batch: BatchInput): Figure | undefined {
+  if (batch.portion !== undefined) {
+    if (!batch.portion.greaterThan(0)) {
+      throw new BatchError(`--portion must be more than 0 g, not ${batch.portion} g`, 'portion');
+    }
+    return { label: 'portion', kind: 'mass', value: batch.portion, note: 'from --portion' };
+  }
+  if (formula.portion === undefined) return undefined;
+  const note = `from the formula (${formula.portion})`;
+  return { label: 'portion', kind: 'mass', value: parseMass(formula.portion), note };
+}
+
+/**
+ * Yield stages of a blend. Trimming happens to the meat alone, so the weight to buy comes from
+ * the meat; every later step (cook…) happens to the seasoned batch, so those stages start from
+ * the whole raw batch. Without seasoning both are the raw blend weight.
+ */
+function blendYields(meat: Decimal, batch: Decimal, yields: Yields): YieldStage[] {
+  const { trim, ...afterTrim } = yields;
+  return [
+    ...yieldStages(meat, trim === undefined ? undefined : { trim }),
+    ...yieldStages(batch, afterTrim),
+  ];
+}
+
+function blendCautions(formula: BlendFormula, allergens: readonly string[]): Caution[] {
+  const cautions: Caution[] = [];
+  // A mixed blend may hold poultry, which needs the higher temperature: print both.
+  if (formula.species !== 'poultry') cautions.push(CAUTIONS.groundMeatCooking);
+  if (formula.species === 'poultry' || formula.species === 'mixed') {
+    cautions.push(CAUTIONS.groundPoultryCooking);
+  }
+  cautions.push(CAUTIONS.keepCold);
+  const allergen = allergenCaution(allergens);
+  if (allergen) cautions.push(allergen);
+  // The formula's own cautions are added by calculate(), before the local-codes reminder.
+  cautions.push(CAUTIONS.localCodes);
+  return cautions;
+}
+
+/**
+ * Works out a batch of a two-component meat blend at a target fat (Pearson square, check-values
+ * P-1, P-2), with its seasoning, portions, yields, fat-standard check and cautions.
+ *
+ * The batch is sized by exactly one of `total` (raw meat weight), `onHand` (one component fixed)
+ * or `want` (finished weight, worked back through the yields; the yields apply to the seasoned
+ * batch). Figures are computed back from the amounts, not copied from the target.
+ * @param formula a blend formula that passed checkBlendFormula
+ * @param batch the batch inputs, already parsed
+ * @throws BatchError when the batch cannot be made: no size or several, a size not more than 0,
+ *   an unknown on-hand key, a target fat outside 0–100 % or not between the two components
+ */
+export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcResult {
+  const [first, second] = formula.components;
+  const target = targetFat(formula, batch);
+  const seasoning = formula.ingredients ?? [];
+  const seasoningFraction = fraction(sum(seasoning.map((i) => new Decimal(i.pct))));
+  const fats = { first: componentFat(first), second: componentFat(second), target: target.value };
+  const size = blendMeat(formula, batch, fats, seasoningFraction);
+
+  const meat = size.amounts.first.plus(size.amounts.second);
+  const meatLines: AmountLine[] = [
+    { component: first, grams: size.amounts.first },
+    { component: second, grams: size.amounts.second },
+  ].map(({ component, grams }) => ({
+    name: componentLabel(component),
+    grams,
+    percent: grams.div(meat).times(HUNDRED),
+    role: 'component',
+  }));
+  const seasoningLines: AmountLine[] = seasoning.map((ingredient) => {
+    const percent = new Decimal(ingredient.pct);
+    return { name: ingredient.name, grams: meat.times(percent).div(HUNDRED), percent, role: 'ingredient' };
+  });
+  const groups: LineGroup[] = [
+    { title: 'Meat', percentOf: 'blend weight', lines: meatLines, totalLabel: 'Total meat' },
+  ];
+  if (seasoningLines.length > 0) {
+    groups.push({
+      title: 'Seasoning',
+      percentOf: 'meat weight',
+      lines: seasoningLines,
+      totalLabel: 'Total seasoning',
+    });
+  }
+  const batchGrams = sum([...meatLines, ...seasoningLines].map((line) => line.grams));
+
+  const fat = blendFatPercent([
+    { grams: size.amounts.first, fat: fats.first },
+    { grams: size.amounts.second, fat: fats.second },
+  ]);
+  const figures: Figure[] = [
+    { label: 'blend fat', kind: 'percent', value: fat },
+    { label: 'chemical lean', kind: 'percent', value: HUNDRED.minus(fat) },
+    { label: 'total batch weight', kind: 'mass', value: batchGrams },
+  ];
+
+  const portion = portionGrams(formula, batch);
+  let portions: Portions | undefined;
+  if (portion) {
+    portions = portionsOf(batchGrams, portion.value as Decimal);
+    const cook = formula.yields?.cook;
+    if (cook !== undefined) {
+      figures.push({
+        label: 'cooked portion',
+        kind: 'mass',
+        value: portions.pieceGrams.times(new Decimal(cook)).div(HUNDRED),
+        note: `at ${cook} % cook yield`,
+      });
+    }
+  }
+
+  const allergens = collectAllergens(seasoning.map((i) => i.allergens));
+  const inputs: Figure[] = [
+    { label: 'target fat', kind: 'percent', value: target.value, note: target.note },
+    ...size.inputs,
+  ];
+  if (portion) inputs.push(portion);
+
+  return {
+    formula: { id: formula.id, title: formula.title, kind: formula.kind },
+    inputs,
+    groups,
+    steps: formula.steps ?? [],
+    figures,
+    checks: formula.standard ? [fatStandardCheck(formula.standard, fat)] : [],
+    warnings: [],
+    cautions: blendCautions(formula, allergens),
+    allergens,
+    ...(formula.yields ? { yields: blendYields(meat, batchGrams, formula.yields) } : {}),
+    ...(portions ? { portions } : {}),
+    ...(formula.notes === undefined ? {} : { notes: formula.notes }),
+  };
+}

@@ -1,0 +1,91 @@
+import type { Decimal } from '../../decimal.ts';
+import type { BlendFormula } from '../../formula/formula-types.ts';
+import { type ContentProblem, contentError, contentWarning } from '../../formula/formula-problem.ts';
+import { FAT_STANDARDS } from '../../reference/fat-standards.ts';
+import { parseMass } from '../../units/mass.ts';
+import { QuantityError } from '../../units/quantity-error.ts';
+import { fatFrom, formatPercent, unreachableMessage } from './blend-fat.ts';
+import { isReachable } from './pearson-square.ts';
+
+/** The fat of a component or target, or a problem when it gives neither fat nor lean, or both. */
+function fatOrProblem(
+  value: { fat?: number; lean?: number },
+  path: (string | number)[],
+  problems: ContentProblem[],
+): Decimal | undefined {
+  const hasFat = value.fat !== undefined;
+  const hasLean = value.lean !== undefined;
+  if (hasFat === hasLean) {
+    problems.push(contentError(path, 'give either fat or lean (chemical lean), not both or neither'));
+    return undefined;
+  }
+  return fatFrom(value, path.join('.'));
+}
+
+function checkPortion(portion: string, problems: ContentProblem[]): void {
+  try {
+    const grams = parseMass(portion);
+    if (!grams.greaterThan(0)) {
+      problems.push(contentError(['portion'], `a portion must weigh more than 0 g, not "${portion}"`));
+    }
+  } catch (error) {
+    if (!(error instanceof QuantityError)) throw error;
+    problems.push(contentError(['portion'], error.message));
+  }
+}
+
+/**
+ * Checks what the schema cannot about a blend formula: the component keys are unique, the
+ * target lies between the two components' fats (check-values P-2), the portion is a mass over
+ * 0 g, and the seasoning names are unique (ignoring case). Warns when the target is over the
+ * fat standard the formula names.
+ * @returns the problems found; none when the formula can be used
+ */
+export function checkBlendFormula(formula: BlendFormula): ContentProblem[] {
+  const problems: ContentProblem[] = [];
+  const [first, second] = formula.components;
+
+  if (first.key === second.key) {
+    problems.push(
+      contentError(
+        ['components', 1, 'key'],
+        `the key "${second.key}" is used by both trimmings; give each its own key`,
+      ),
+    );
+  }
+
+  const fatA = fatOrProblem(first, ['components', 0], problems);
+  const fatB = fatOrProblem(second, ['components', 1], problems);
+  const target = fatOrProblem(formula.target, ['target'], problems);
+  if (fatA && fatB && target && !isReachable(fatA, fatB, target)) {
+    problems.push(contentError(['target'], unreachableMessage(fatA, fatB, target)));
+  }
+
+  if (target && formula.standard) {
+    const standard = FAT_STANDARDS[formula.standard];
+    if (target.greaterThan(standard.maxFatPercent)) {
+      problems.push(
+        contentWarning(
+          ['target'],
+          `the target of ${formatPercent(target)} fat is over the ${formatPercent(standard.maxFatPercent)} ` +
+            `allowed for ${standard.product} (${standard.source})`,
+        ),
+      );
+    }
+  }
+
+  if (formula.portion !== undefined) checkPortion(formula.portion, problems);
+
+  const seen = new Set<string>();
+  (formula.ingredients ?? []).forEach((ingredient, i) => {
+    const name = ingredient.name.trim().toLowerCase();
+    if (seen.has(name)) {
+      problems.push(
+        contentError(['ingredients', i, 'name'], `"${ingredient.name}" is listed twice in the seasoning`),
+      );
+    }
+    seen.add(name);
+  });
+
+  return problems;
+}

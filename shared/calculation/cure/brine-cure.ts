@@ -1,0 +1,61 @@
+import { Decimal, fraction, sum } from '../../decimal.ts';
+import type { CureFormula } from '../../formula/formula-types.ts';
+import { BatchError } from '../batch-error.ts';
+import { brineStrength, salinometerDegrees } from './brine-strength.ts';
+import { ppmAtEquilibrium } from './ingoing.ts';
+import { ingredientLine, substanceGrams, type MethodOutcome, type WeighedIngredient } from './cure-lines.ts';
+
+/**
+ * Equilibrium brine: the meat is held in water with each ingredient a percentage of meat plus
+ * water, until salt and cure are even throughout. Ingoing ppm = substance × 1 000 000 / (green
+ * weight + pickle weight), FSIS 7620.3 ch. 3 immersion "Method Two".
+ * @param waterGrams water weight given for this batch; otherwise the formula's water_pct is used
+ */
+export function brineCure(formula: CureFormula, greenGrams: Decimal, waterGrams?: Decimal): MethodOutcome {
+  const waterPct = formula.brine?.water_pct;
+  if (!waterGrams && waterPct === undefined) {
+    throw new BatchError('this brine formula gives no water_pct; say how much water with --water', 'water');
+  }
+  const water = waterGrams ?? greenGrams.times(fraction(new Decimal(waterPct ?? 0)));
+  const system = greenGrams.plus(water);
+  const weighed: WeighedIngredient[] = formula.ingredients.map((ingredient) => ({
+    ingredient,
+    grams: system.times(fraction(new Decimal(ingredient.pct))),
+  }));
+  const pickle = water.plus(sum(weighed.map((w) => w.grams)));
+  const salt = substanceGrams(weighed, 'salt');
+  const strength = brineStrength(salt, water);
+  return {
+    groups: [
+      {
+        title: 'Brine',
+        percentOf: 'meat + water',
+        lines: [
+          { name: 'water', grams: water, role: 'water' },
+          ...weighed.map((w) => ingredientLine(w, new Decimal(w.ingredient.pct))),
+        ],
+        totalLabel: 'Brine',
+      },
+    ],
+    inputs: [
+      {
+        label: 'Water',
+        kind: 'mass',
+        value: water,
+        note: waterGrams ? 'as given' : `${waterPct} % of green weight, from the formula`,
+      },
+    ],
+    figures: [
+      { label: 'Brine strength', kind: 'percent', value: strength, note: 'salt ÷ (salt + water)' },
+      { label: 'Salinometer', kind: 'salinometer', value: salinometerDegrees(strength), note: '60 °F scale' },
+      {
+        label: 'Salt in the meat at equilibrium',
+        kind: 'percent',
+        value: salt.div(greenGrams.plus(pickle)).times(100),
+        note: 'of meat + brine',
+      },
+    ],
+    warnings: [],
+    ppm: (substance) => ppmAtEquilibrium(substanceGrams(weighed, substance), greenGrams, pickle),
+  };
+}

@@ -1,0 +1,20 @@
+import { checkBlendFormula } from '../calculation/blend/check-blend-formula.ts';
+import { checkCureFormula } from '../calculation/cure/check-cure-formula.ts';
+import { checkDoughFormula } from '../calculation/dough/check-dough-formula.ts';
+import { checkMixFormula } from '../calculation/mix/check-mix-formula.ts';
+import type { ContentProblem } from './formula-problem.ts';
+import type { Formula } from './formula-types.ts';
+
+/** The checks a schema cannot express, for a formula that already matches the schema. */
+export function checkFormulaContent(formula: Formula): ContentProblem[] {
+  switch (formula.kind) {
+    case 'cure':
+      return checkCureFormula(formula);
+    case 'dough':
+      return checkDoughFormula(formula);
+    case 'blend':
+      return checkBlendFormula(formula);
+    case 'mix':
+      return checkMixFormula(formula);
+  }
+}

@@ -1,0 +1,81 @@
+import { LineCounter, parseDocument } from 'yaml';
+import { schemaErrors } from '../validation/formula-validator.ts';
+import { schemaProblems } from '../validation/schema-messages.ts';
+import { checkFormulaContent } from './check-formula.ts';
+import type { ContentProblem, FormulaProblem } from './formula-problem.ts';
+import type { Formula } from './formula-types.ts';
+import { locate } from './locate.ts';
+import { yamlErrorMessage } from './yaml-messages.ts';
+
+/** Largest formula file we read; real formulas are a few kilobytes. */
+export const MAX_FORMULA_BYTES = 256 * 1024;
+/** Most aliases a formula may expand; guards against "billion laughs" files. */
+const MAX_ALIAS_COUNT = 50;
+
+/** A formula read from text: the formula when it can be used, and every problem found. */
+export interface FormulaReading {
+  /** Present when there are no errors (warnings allowed). */
+  readonly formula?: Formula;
+  readonly problems: readonly FormulaProblem[];
+}
+
+/**
+ * Reads formula YAML: syntax, then the JSON Schema, then the checks the schema cannot express.
+ * Every problem carries the file, line and column. Pure: the caller reads the file.
+ * @param text the file's content
+ * @param file the name to print in problems
+ */
+export function readFormula(text: string, file: string): FormulaReading {
+  const whole = (message: string): FormulaReading => ({
+    problems: [{ file, line: 0, column: 0, path: [], message, severity: 'error' }],
+  });
+  if (text.length > MAX_FORMULA_BYTES) {
+    return whole(`the file is larger than ${MAX_FORMULA_BYTES / 1024} KB; a formula is a few kilobytes`);
+  }
+  if (text.trim() === '') return whole('the file is empty');
+
+  const lineCounter = new LineCounter();
+  const doc = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: true });
+  if (doc.errors.length > 0) {
+    const problems = doc.errors.map((error): FormulaProblem => {
+      const { line, col } = lineCounter.linePos(error.pos[0]);
+      return { file, line, column: col, path: [], message: yamlErrorMessage(error), severity: 'error' };
+    });
+    return { problems };
+  }
+
+  let value: unknown;
+  try {
+    value = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+  } catch (error) {
+    // yaml throws here for an unresolved alias or an alias bomb; both are the file's fault.
+    return whole(`YAML: ${error instanceof Error ? error.message : String(error)}`);
+  }
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) {
+    return whole('a formula file is a set of keys (formula:, id:, title:, kind:, …)');
+  }
+
+  const place = (problem: ContentProblem): FormulaProblem => ({ ...problem, file, ...locate(doc, lineCounter, problem.path) });
+  const errors = schemaErrors(value);
+  if (errors.length > 0) return { problems: sortByPosition(schemaProblems(errors, value).map(place)) };
+
+  const formula = value as Formula;
+  const problems = sortByPosition(checkFormulaContent(formula).map(place));
+  return problems.some((p) => p.severity === 'error') ? { problems } : { formula, problems };
+}
+
+function sortByPosition(problems: FormulaProblem[]): FormulaProblem[] {
+  return problems.sort((a, b) => a.line - b.line || a.column - b.column);
+}
+
+/** A problem as one line of text: "file:line:column: error: message". */
+export function formatProblem(problem: FormulaProblem): string {
+  const where = problem.line > 0 ? `${problem.file}:${problem.line}:${problem.column}` : problem.file;
+  const key = problem.path.length ? ` (at ${pathText(problem.path)})` : '';
+  return `${where}: ${problem.severity}: ${problem.message}${key}`;
+}
+
+/** A formula path as people read it: ingredients[3].pct, counting list items from 1. */
+export function pathText(path: FormulaProblem['path']): string {
+  return path.map((part, i) => (typeof part === 'number' ? `[${part + 1}]` : i === 0 ? part : `.${part}`)).join('');
+}

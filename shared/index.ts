@@ -1,0 +1,22 @@
+// The public face of the calculation core: the CLI, the server and the console import from here.
+export { Decimal, dec, sum, type DecimalInput } from './decimal.ts';
+export * from './units/mass.ts';
+export * from './units/length.ts';
+export * from './units/volume.ts';
+export * from './units/temperature.ts';
+export * from './units/percent.ts';
+export * from './units/scale-amount.ts';
+export { QuantityError } from './units/quantity-error.ts';
+export type * from './formula/formula-types.ts';
+export type { FormulaProblem, ContentProblem, FormulaPath } from './formula/formula-problem.ts';
+export { readFormula, formatProblem, pathText, MAX_FORMULA_BYTES, type FormulaReading } from './formula/read-formula.ts';
+export { FORMULA_SCHEMA } from './validation/formula-validator.ts';
+export type * from './calculation/calc-result.ts';
+export { failsCriticalLimit } from './calculation/calc-result.ts';
+export type { BatchInput } from './calculation/batch-input.ts';
+export { BatchError } from './calculation/batch-error.ts';
+export { parseBatchOptions, optionName, type RawBatchOptions } from './calculation/parse-batch-options.ts';
+export { calculate } from './calculation/calculate.ts';
+export { isIsoDate, addDays } from './calculation/dates.ts';
+export { presentResult, roundingNote } from './presentation/present-result.ts';
+export type * from './presentation/presented-result.ts';

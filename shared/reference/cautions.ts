@@ -1,0 +1,94 @@
+import type { Caution } from '../calculation/calc-result.ts';
+
+/**
+ * The standard cautions, each with its source. Calculations pick the ones that apply; every
+ * result also carries {@link LOCAL_CODES}.
+ */
+export const CAUTIONS = {
+  localCodes: {
+    id: 'local-codes',
+    text:
+      'Larderbook checks against US federal rules and published guidance. Your local food code, ' +
+      'your HACCP plan and licensed practice come first; where they differ, follow them.',
+  },
+  curingSaltHandling: {
+    id: 'curing-salt-handling',
+    text:
+      'Curing salt is poisonous in spoonful amounts. Keep it dyed, labelled and stored apart from ' +
+      'table salt; weigh it on a scale that reads 0.1 g, never by volume.',
+    source: 'common practice, no source',
+  },
+  nitriteOnGreenWeight: {
+    id: 'nitrite-on-green-weight',
+    text:
+      'Ingoing nitrite is figured on the green (raw, uncured) weight of the meat, and limits are ' +
+      'compared on the unrounded figure, before the amounts are rounded for the scale.',
+    source: 'USDA FSIS Directive 7620.3, Processing Inspectors\' Calculations Handbook, ch. 3',
+  },
+  cureUnderRefrigeration: {
+    id: 'cure-under-refrigeration',
+    text: 'Cure under refrigeration: keep the meat (and any brine) at 2–4 °C (36–40 °F) throughout.',
+    source: 'USDA, Pork: Slaughtering, Cutting, Preserving, and Cooking on the Farm (Farmers\' Bulletin), dry and sweet pickle cures',
+  },
+  curedMeatIsRaw: {
+    id: 'cured-meat-is-raw',
+    text:
+      'Cured meat is still raw. Cook it unless your validated process makes it ready to eat: ' +
+      'whole cuts to 63 °C (145 °F) with a 3-minute rest, ground products to 71 °C (160 °F).',
+    source: 'USDA FSIS Safe Minimum Internal Temperature Chart',
+  },
+  brineStrengthSaltOnly: {
+    id: 'brine-strength-salt-only',
+    text:
+      'Brine strength counts sodium chloride only. Sugar and other dissolved ingredients make a ' +
+      'salinometer read higher than the strength printed here.',
+    source: 'common practice, no source',
+  },
+  injectedMeat: {
+    id: 'injected-meat',
+    text:
+      'Injecting carries surface bacteria into the meat. Keep needles and brine clean and cold, ' +
+      'and make fresh brine for each batch.',
+    source: 'common practice, no source',
+  },
+  groundMeatCooking: {
+    id: 'ground-meat-cooking',
+    text:
+      'Cook ground beef, pork, lamb and veal to 71 °C (160 °F). Under the FDA Food Code a ' +
+      'restaurant may cook comminuted meat to 68 °C (155 °F) held for 17 seconds (15 s in older ' +
+      'editions: check yours).',
+    source: 'USDA FSIS Safe Minimum Internal Temperature Chart; FDA Food Code §3-401.11',
+  },
+  groundPoultryCooking: {
+    id: 'ground-poultry-cooking',
+    text: 'Cook ground poultry to 74 °C (165 °F).',
+    source: 'USDA FSIS Safe Minimum Internal Temperature Chart',
+  },
+  keepCold: {
+    id: 'keep-cold',
+    text: 'Hold raw meat and cold sauces at 5 °C (41 °F) or below.',
+    source: 'FDA Food Code, cold holding',
+  },
+  rawEgg: {
+    id: 'raw-egg',
+    text:
+      'Contains raw egg: use pasteurized eggs, keep at 5 °C (41 °F) or below, and tell guests ' +
+      'who ask; raw egg is a Salmonella risk for the young, old, pregnant and unwell.',
+    source: 'FDA Food Code, cold holding and consumer advisory (§3-603.11)',
+  },
+  rawDough: {
+    id: 'raw-dough',
+    text: 'Raw dough contains raw flour (and often raw egg): do not taste it before baking.',
+    source: 'from memory (FDA consumer advice on raw dough)',
+  },
+} as const satisfies Record<string, Caution>;
+
+/** The allergen caution for a list of allergens, or none when the list is empty. */
+export function allergenCaution(allergens: readonly string[]): Caution | undefined {
+  if (allergens.length === 0) return undefined;
+  return {
+    id: 'allergens',
+    text: `Contains: ${allergens.join(', ')}. Keep utensils and surfaces apart and label the product.`,
+    source: 'Food Allergen Labeling and Consumer Protection Act of 2004; FASTER Act of 2021 (sesame)',
+  };
+}
