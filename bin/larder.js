@@ -4,7 +4,9 @@ import { existsSync } from 'node:fs';
 
 const bundle = new URL('../dist/cli/larder.js', import.meta.url);
 if (!existsSync(bundle)) {
-  process.stderr.write('larder: the command is not built yet; run `npm run build:cli` (npm install does it).\n');
+  process.stderr.write(
+    'larder: the command is not built yet; run `npm run build:cli` (npm install does it).\n',
+  );
   process.exit(1);
 }
 await import(bundle.href);

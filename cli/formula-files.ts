@@ -1,6 +1,12 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
-import { MAX_FORMULA_BYTES, formatProblem, readFormula, type Formula, type FormulaReading } from '../shared/index.ts';
+import {
+  MAX_FORMULA_BYTES,
+  formatProblem,
+  readFormula,
+  type Formula,
+  type FormulaReading,
+} from '../shared/index.ts';
 import { CliError, EXIT } from './cli-error.ts';
 
 /** The folder formulas are looked up in by id: --formulas, else $LARDER_FORMULAS, else ./formulas. */
@@ -16,9 +22,12 @@ export function isFormulaFile(name: string): boolean {
 /** Every formula file under a folder, sorted, depth first. */
 export function formulaFilesIn(folder: string): string[] {
   const found: string[] = [];
-  for (const entry of readdirSync(folder, { withFileTypes: true }).sort((a, b) => a.name.localeCompare(b.name))) {
+  for (const entry of readdirSync(folder, { withFileTypes: true }).sort((a, b) =>
+    a.name.localeCompare(b.name),
+  )) {
     const full = path.join(folder, entry.name);
-    if (entry.isDirectory() && !entry.name.startsWith('.') && entry.name !== 'node_modules') found.push(...formulaFilesIn(full));
+    if (entry.isDirectory() && !entry.name.startsWith('.') && entry.name !== 'node_modules')
+      found.push(...formulaFilesIn(full));
     else if (entry.isFile() && isFormulaFile(entry.name)) found.push(full);
   }
   return found;
@@ -29,13 +38,31 @@ export function readFormulaFile(file: string): FormulaReading {
   let text: string;
   try {
     if (statSync(file).size > MAX_FORMULA_BYTES) {
-      return { problems: [{ file, line: 0, column: 0, path: [], severity: 'error', message: `the file is larger than ${MAX_FORMULA_BYTES / 1024} KB; a formula is a few kilobytes` }] };
+      return {
+        problems: [
+          {
+            file,
+            line: 0,
+            column: 0,
+            path: [],
+            severity: 'error',
+            message: `the file is larger than ${MAX_FORMULA_BYTES / 1024} KB; a formula is a few kilobytes`,
+          },
+        ],
+      };
     }
     text = readFileSync(file, 'utf8');
   } catch (error) {
     // The file may vanish or be unreadable between listing and reading; report it like any problem.
     const code = (error as NodeJS.ErrnoException).code;
-    const message = code === 'ENOENT' ? 'no such file' : code === 'EACCES' ? 'permission denied' : code === 'EISDIR' ? 'this is a folder, not a file' : String(error);
+    const message =
+      code === 'ENOENT'
+        ? 'no such file'
+        : code === 'EACCES'
+          ? 'permission denied'
+          : code === 'EISDIR'
+            ? 'this is a folder, not a file'
+            : String(error);
     return { problems: [{ file, line: 0, column: 0, path: [], severity: 'error', message }] };
   }
   return readFormula(text, file);
@@ -46,12 +73,19 @@ export function readFormulaFile(file: string): FormulaReading {
  * formulas folder), reads and checks it.
  * @throws CliError (exit 3) when it cannot be found or has errors
  */
-export function loadFormula(reference: string, folder: string): { formula: Formula; file: string; warnings: string[] } {
+export function loadFormula(
+  reference: string,
+  folder: string,
+): { formula: Formula; file: string; warnings: string[] } {
   const file = resolveFormula(reference, folder);
   const reading = readFormulaFile(file);
   if (!reading.formula) {
     const errors = reading.problems.filter((p) => p.severity === 'error');
-    throw new CliError(`${file}: the formula has ${errors.length} error(s)`, EXIT.formula, reading.problems.map(formatProblem));
+    throw new CliError(
+      `${file}: the formula has ${errors.length} error(s)`,
+      EXIT.formula,
+      reading.problems.map(formatProblem),
+    );
   }
   return { formula: reading.formula, file, warnings: reading.problems.map(formatProblem) };
 }
@@ -66,14 +100,23 @@ function resolveFormula(reference: string, folder: string): string {
     if (exists(candidate)) return candidate;
   }
   if (!exists(folder)) {
-    throw new CliError(`no formula "${reference}": the formulas folder ${folder} does not exist (set --formulas or LARDER_FORMULAS)`, EXIT.formula);
+    throw new CliError(
+      `no formula "${reference}": the formulas folder ${folder} does not exist (set --formulas or LARDER_FORMULAS)`,
+      EXIT.formula,
+    );
   }
   // The id may differ from the file name; look inside each file's id: line.
-  const idLine = new RegExp(`^id:\\s*['"]?${reference.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}['"]?\\s*(#.*)?$`, 'm');
+  const idLine = new RegExp(
+    `^id:\\s*['"]?${reference.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}['"]?\\s*(#.*)?$`,
+    'm',
+  );
   for (const file of formulaFilesIn(folder)) {
     if (idLine.test(readFileSync(file, 'utf8'))) return file;
   }
-  throw new CliError(`no formula "${reference}" in ${folder}: give a file path or one of the ids that \`larder check\` lists`, EXIT.formula);
+  throw new CliError(
+    `no formula "${reference}" in ${folder}: give a file path or one of the ids that \`larder check\` lists`,
+    EXIT.formula,
+  );
 }
 
 function exists(file: string): boolean {

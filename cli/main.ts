@@ -18,11 +18,16 @@ export async function run(argv: readonly string[], io: Io = PROCESS_IO): Promise
       return error.exitCode === 0 ? EXIT.ok : EXIT.usage;
     }
     if (error instanceof CliError) {
-      if (json) io.out(`${JSON.stringify({ error: { message: error.message, exitCode: error.exitCode, details: error.details } }, null, 2)}\n`);
+      if (json)
+        io.out(
+          `${JSON.stringify({ error: { message: error.message, exitCode: error.exitCode, details: error.details } }, null, 2)}\n`,
+        );
       else io.err(`larder: ${error.message}\n${error.details.map((line) => `${line}\n`).join('')}`);
       return error.exitCode;
     }
-    io.err(`larder: unexpected error, please report it:\n${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
+    io.err(
+      `larder: unexpected error, please report it:\n${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`,
+    );
     return EXIT.internal;
   }
 }

@@ -9,14 +9,18 @@ import type { Io } from './io.ts';
 /** Builds the larder command with every verb; used by the bin entry and by tests. */
 export function createProgram(io: Io): Command {
   const program = new Command('larder')
-    .description('Larderbook: exact batches from formula files (cures, dough, blends, mixes) for production kitchens')
+    .description(
+      'Larderbook: exact batches from formula files (cures, dough, blends, mixes) for production kitchens',
+    )
     .version(packageJson.version, '-V, --version', 'print the version')
     .showHelpAfterError('(run with --help for usage)')
     .configureOutput({ writeOut: (text) => io.out(text), writeErr: (text) => io.err(text) })
     .exitOverride()
     .addHelpText('after', EXIT_CODES_HELP);
   for (const command of [calcCommand(io), checkCommand(io), newCommand(io)]) {
-    command.exitOverride().configureOutput({ writeOut: (text) => io.out(text), writeErr: (text) => io.err(text) });
+    command
+      .exitOverride()
+      .configureOutput({ writeOut: (text) => io.out(text), writeErr: (text) => io.err(text) });
     command.showHelpAfterError('(run with --help for usage)');
     program.addCommand(command);
   }

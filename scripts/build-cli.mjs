@@ -12,5 +12,7 @@ await build({
   legalComments: 'none',
   logLevel: 'warning',
   // Bundled CommonJS packages (ajv) call require(); give the ES module bundle one.
-  banner: { js: "import { createRequire as __larderRequire } from 'node:module'; const require = __larderRequire(import.meta.url);" },
+  banner: {
+    js: "import { createRequire as __larderRequire } from 'node:module'; const require = __larderRequire(import.meta.url);",
+  },
 });

@@ -9,13 +9,23 @@ export * from './units/scale-amount.ts';
 export { QuantityError } from './units/quantity-error.ts';
 export type * from './formula/formula-types.ts';
 export type { FormulaProblem, ContentProblem, FormulaPath } from './formula/formula-problem.ts';
-export { readFormula, formatProblem, pathText, MAX_FORMULA_BYTES, type FormulaReading } from './formula/read-formula.ts';
+export {
+  readFormula,
+  formatProblem,
+  pathText,
+  MAX_FORMULA_BYTES,
+  type FormulaReading,
+} from './formula/read-formula.ts';
 export { FORMULA_SCHEMA } from './validation/formula-validator.ts';
 export type * from './calculation/calc-result.ts';
 export { failsCriticalLimit } from './calculation/calc-result.ts';
 export type { BatchInput } from './calculation/batch-input.ts';
 export { BatchError } from './calculation/batch-error.ts';
-export { parseBatchOptions, optionName, type RawBatchOptions } from './calculation/parse-batch-options.ts';
+export {
+  parseBatchOptions,
+  optionName,
+  type RawBatchOptions,
+} from './calculation/parse-batch-options.ts';
 export { calculate } from './calculation/calculate.ts';
 export { isIsoDate, addDays } from './calculation/dates.ts';
 export { presentResult, roundingNote } from './presentation/present-result.ts';

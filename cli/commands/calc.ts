@@ -14,13 +14,37 @@ import { renderBatchSheet } from '../output/batch-sheet.ts';
 
 /** Batch options: flag, value name, help. Commander turns --largest-piece into largestPiece. */
 const BATCH_OPTIONS: readonly [keyof RawBatchOptions, string, string][] = [
-  ['meat', '--meat <weight>', 'cure: green (trimmed, uncured) meat weight, e.g. 4.26kg or "9 lb 6 oz"'],
-  ['want', '--want <weight>', 'cure, blend: finished weight wanted; worked back through the yields'],
+  [
+    'meat',
+    '--meat <weight>',
+    'cure: green (trimmed, uncured) meat weight, e.g. 4.26kg or "9 lb 6 oz"',
+  ],
+  [
+    'want',
+    '--want <weight>',
+    'cure, blend: finished weight wanted; worked back through the yields',
+  ],
   ['thickness', '--thickness <length>', 'cure: thickness of the thickest piece, e.g. 4cm or 1.5in'],
-  ['largestPiece', '--largest-piece <weight>', 'cure: weight of the heaviest piece, for per-kg or per-lb hold rules'],
-  ['water', '--water <amount>', "brine cure: water by weight or volume (1 L = 1 kg), instead of the formula's"],
-  ['pump', '--pump <percent>', "pump cure: brine injected, % of green weight, instead of the formula's"],
-  ['pumpedWeight', '--pumped-weight <weight>', 'pump cure: weight after injecting; checks the pump % reached'],
+  [
+    'largestPiece',
+    '--largest-piece <weight>',
+    'cure: weight of the heaviest piece, for per-kg or per-lb hold rules',
+  ],
+  [
+    'water',
+    '--water <amount>',
+    "brine cure: water by weight or volume (1 L = 1 kg), instead of the formula's",
+  ],
+  [
+    'pump',
+    '--pump <percent>',
+    "pump cure: brine injected, % of green weight, instead of the formula's",
+  ],
+  [
+    'pumpedWeight',
+    '--pumped-weight <weight>',
+    'pump cure: weight after injecting; checks the pump % reached',
+  ],
   ['pieces', '--pieces <count>', 'dough: number of pieces'],
   ['piece', '--piece <weight>', "dough: piece weight, instead of the formula's"],
   ['loss', '--loss <percent>', 'dough: dough lost in mixing and dividing, % of the mixed dough'],
@@ -30,11 +54,27 @@ const BATCH_OPTIONS: readonly [keyof RawBatchOptions, string, string][] = [
   ['room', '--room <temperature>', 'dough: room temperature'],
   ['flourTemp', '--flour-temp <temperature>', 'dough: flour temperature'],
   ['prefermentTemp', '--preferment-temp <temperature>', 'dough: preferment temperature'],
-  ['tap', '--tap <temperature>', 'dough: tap water temperature; ice is added when colder water is needed'],
-  ['friction', '--friction <rise>', "dough: mixer friction factor as a temperature rise, e.g. 14F, instead of the formula's"],
-  ['yeast', '--yeast <kind>', 'dough: use fresh, active-dry or instant yeast instead of the formula\'s'],
+  [
+    'tap',
+    '--tap <temperature>',
+    'dough: tap water temperature; ice is added when colder water is needed',
+  ],
+  [
+    'friction',
+    '--friction <rise>',
+    "dough: mixer friction factor as a temperature rise, e.g. 14F, instead of the formula's",
+  ],
+  [
+    'yeast',
+    '--yeast <kind>',
+    "dough: use fresh, active-dry or instant yeast instead of the formula's",
+  ],
   ['targetFat', '--target-fat <percent>', "blend: fat % wanted, instead of the formula's"],
-  ['onHand', '--on-hand <key=weight>', 'blend: one trimming fixed by what is on hand, e.g. lean=12kg'],
+  [
+    'onHand',
+    '--on-hand <key=weight>',
+    'blend: one trimming fixed by what is on hand, e.g. lean=12kg',
+  ],
   ['portion', '--portion <weight>', "blend: portion weight, instead of the formula's"],
   ['base', '--base <weight>', 'mix: weight of the base ingredient'],
   ['start', '--start <date>', 'day the batch starts, YYYY-MM-DD (default: today)'],
@@ -51,9 +91,16 @@ export function calcCommand(io: Io): Command {
   const command = new Command('calc')
     .description('work out one batch of a formula: what to weigh, checks, hold time and cautions')
     .argument('<formula>', 'formula file path, or a formula id from the formulas folder')
-    .addOption(new Option('--units <system>', 'print in metric or US units').choices(['metric', 'us']).default(process.env.LARDER_UNITS === 'us' ? 'us' : 'metric'))
+    .addOption(
+      new Option('--units <system>', 'print in metric or US units')
+        .choices(['metric', 'us'])
+        .default(process.env.LARDER_UNITS === 'us' ? 'us' : 'metric'),
+    )
     .option('--json', 'print the result as JSON (exact values as strings)')
-    .option('--formulas <folder>', 'folder to look formula ids up in (default: $LARDER_FORMULAS or ./formulas)');
+    .option(
+      '--formulas <folder>',
+      'folder to look formula ids up in (default: $LARDER_FORMULAS or ./formulas)',
+    );
   for (const [, flags, help] of BATCH_OPTIONS) command.option(flags, help);
   return command
     .addHelpText(

@@ -1,9 +1,19 @@
 import { execFileSync } from 'node:child_process';
 import { statSync } from 'node:fs';
 import { Command } from 'commander';
-import { formatProblem, readFormula, type FormulaProblem, type FormulaReading } from '../../shared/index.ts';
+import {
+  formatProblem,
+  readFormula,
+  type FormulaProblem,
+  type FormulaReading,
+} from '../../shared/index.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
-import { formulaFilesIn, formulasFolder, isFormulaFile, readFormulaFile } from '../formula-files.ts';
+import {
+  formulaFilesIn,
+  formulasFolder,
+  isFormulaFile,
+  readFormulaFile,
+} from '../formula-files.ts';
 import type { Io } from '../io.ts';
 
 interface CheckOptions {
@@ -43,7 +53,9 @@ ${EXIT_CODES_HELP}`,
 }
 
 function runCheck(paths: string[], options: CheckOptions, io: Io): void {
-  const readings = options.staged ? readStaged() : readPaths(paths.length ? paths : [formulasFolder()], io);
+  const readings = options.staged
+    ? readStaged()
+    : readPaths(paths.length ? paths : [formulasFolder()], io);
   const reports = readings.map(({ file, reading }): FileReport => ({
     file,
     id: reading.formula?.id,
@@ -53,13 +65,19 @@ function runCheck(paths: string[], options: CheckOptions, io: Io): void {
   }));
   markDuplicateIds(reports);
   const failed = reports.filter((r) => !r.ok).length;
-  const warnings = reports.reduce((n, r) => n + r.problems.filter((p) => p.severity === 'warning').length, 0);
+  const warnings = reports.reduce(
+    (n, r) => n + r.problems.filter((p) => p.severity === 'warning').length,
+    0,
+  );
   const summary = { files: reports.length, ok: reports.length - failed, failed, warnings };
   if (options.json) {
     io.out(`${JSON.stringify({ summary, files: reports }, null, 2)}\n`);
   } else {
-    for (const report of reports) for (const problem of report.problems) io.out(`${formatProblem(problem)}\n`);
-    io.out(`Checked ${summary.files} formula file(s): ${summary.ok} ok, ${summary.failed} with errors, ${summary.warnings} warning(s).\n`);
+    for (const report of reports)
+      for (const problem of report.problems) io.out(`${formatProblem(problem)}\n`);
+    io.out(
+      `Checked ${summary.files} formula file(s): ${summary.ok} ok, ${summary.failed} with errors, ${summary.warnings} warning(s).\n`,
+    );
   }
   if (failed > 0) process.exitCode = EXIT.formula;
 }
@@ -77,7 +95,8 @@ function readPaths(paths: string[], io: Io): { file: string; reading: FormulaRea
   }
   const showProgress = io.errIsTty && files.length >= PROGRESS_FROM;
   return files.map((file, i) => {
-    if (showProgress && (i % 25 === 0 || i === files.length - 1)) io.err(`\rchecking ${i + 1}/${files.length}`);
+    if (showProgress && (i % 25 === 0 || i === files.length - 1))
+      io.err(`\rchecking ${i + 1}/${files.length}`);
     const reading = readFormulaFile(file);
     if (showProgress && i === files.length - 1) io.err('\n');
     return { file, reading };
@@ -86,7 +105,11 @@ function readPaths(paths: string[], io: Io): { file: string; reading: FormulaRea
 
 function git(args: string[]): string {
   try {
-    return execFileSync('git', args, { encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'], maxBuffer: 64 * 1024 * 1024 });
+    return execFileSync('git', args, {
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'pipe'],
+      maxBuffer: 64 * 1024 * 1024,
+    });
   } catch (error) {
     const stderr = String((error as { stderr?: unknown }).stderr ?? '').trim();
     throw new CliError(`--staged needs a git repository: ${stderr || String(error)}`, EXIT.usage);

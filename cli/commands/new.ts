@@ -2,7 +2,12 @@ import { existsSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command, Option } from 'commander';
-import { formatProblem, readFormula, type CureMethod, type FormulaKind } from '../../shared/index.ts';
+import {
+  formatProblem,
+  readFormula,
+  type CureMethod,
+  type FormulaKind,
+} from '../../shared/index.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { starterFormula } from '../starters/starters.ts';
@@ -27,10 +32,18 @@ function schemaFile(): string {
 export function newCommand(io: Io): Command {
   return new Command('new')
     .description('write a commented starter formula file')
-    .addArgument(new Command().createArgument('<kind>', 'cure, dough, blend or mix').choices(['cure', 'dough', 'blend', 'mix']))
+    .addArgument(
+      new Command()
+        .createArgument('<kind>', 'cure, dough, blend or mix')
+        .choices(['cure', 'dough', 'blend', 'mix']),
+    )
     .option('--id <id>', 'formula id: lower-case letters, digits and dashes (default: new-KIND)')
     .option('--title <title>', 'title printed on the batch sheet')
-    .addOption(new Option('--method <method>', 'cure only: dry, brine or pump').choices(['dry', 'brine', 'pump']).default('dry'))
+    .addOption(
+      new Option('--method <method>', 'cure only: dry, brine or pump')
+        .choices(['dry', 'brine', 'pump'])
+        .default('dry'),
+    )
     .option('--out <file>', 'where to write it, or - for standard output (default: ID.yaml here)')
     .option('--force', 'overwrite an existing file')
     .option('--json', 'print what was written as JSON')
@@ -49,19 +62,35 @@ ${EXIT_CODES_HELP}`,
 function runNew(kind: FormulaKind, options: NewOptions, io: Io): void {
   const id = options.id ?? `new-${kind}`;
   const out = options.out ?? `${id}.yaml`;
-  const schemaPath = out === '-' ? schemaFile() : path.relative(path.dirname(path.resolve(out)), schemaFile());
-  const text = starterFormula(kind, { id, title: options.title ?? `New ${kind} formula`, method: options.method, schemaPath });
+  const schemaPath =
+    out === '-' ? schemaFile() : path.relative(path.dirname(path.resolve(out)), schemaFile());
+  const text = starterFormula(kind, {
+    id,
+    title: options.title ?? `New ${kind} formula`,
+    method: options.method,
+    schemaPath,
+  });
   // The starter must itself pass the checks; a bad --id or --title shows here, before anything is written.
   const reading = readFormula(text, out);
-  if (!reading.formula) throw new CliError('the starter would not be a valid formula', EXIT.usage, reading.problems.map(formatProblem));
+  if (!reading.formula)
+    throw new CliError(
+      'the starter would not be a valid formula',
+      EXIT.usage,
+      reading.problems.map(formatProblem),
+    );
   if (out === '-') {
     io.out(text);
     return;
   }
-  if (existsSync(out) && !options.force) throw new CliError(`${out} already exists; choose another --out or add --force`, EXIT.usage);
+  if (existsSync(out) && !options.force)
+    throw new CliError(`${out} already exists; choose another --out or add --force`, EXIT.usage);
   // Write beside the target and rename, so an interrupted write never leaves half a file.
   const temporary = `${out}.${process.pid}.tmp`;
   writeFileSync(temporary, text, { flag: 'wx' });
   renameSync(temporary, out);
-  io.out(options.json ? `${JSON.stringify({ file: out, id, kind })}\n` : `Wrote ${out} (${kind}). Edit it, then run: larder check ${out}\n`);
+  io.out(
+    options.json
+      ? `${JSON.stringify({ file: out, id, kind })}\n`
+      : `Wrote ${out} (${kind}). Edit it, then run: larder check ${out}\n`,
+  );
 }

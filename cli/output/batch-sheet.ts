@@ -18,12 +18,20 @@ function groupLines(group: PresentedGroup): string[] {
     line.name,
     hasPercent ? (line.percent ?? '') : '',
     line.amount,
-    [line.gramsShown ? `(${line.gramsShown})` : '', line.role === 'curing-salt' ? '← curing salt' : '', line.note ?? '']
+    [
+      line.gramsShown ? `(${line.gramsShown})` : '',
+      line.role === 'curing-salt' ? '← curing salt' : '',
+      line.note ?? '',
+    ]
       .filter(Boolean)
       .join(' '),
   ]);
-  const table = [['', hasPercent ? `% of ${group.percentOf ?? ''}`.trim() : '', 'weigh', ''], ...rows];
-  if (group.total) table.push([group.total.label, group.total.percent ?? '', group.total.amount, '(total)']);
+  const table = [
+    ['', hasPercent ? `% of ${group.percentOf ?? ''}`.trim() : '', 'weigh', ''],
+    ...rows,
+  ];
+  if (group.total)
+    table.push([group.total.label, group.total.percent ?? '', group.total.amount, '(total)']);
   const lines = textTable(table, ['left', 'right', 'right', 'left']);
   if (group.total) {
     const width = Math.max(...lines.map((line) => line.length));
@@ -34,7 +42,10 @@ function groupLines(group: PresentedGroup): string[] {
 
 /** The batch sheet as text, in the order the work is done: weigh, method, hold, check. */
 export function renderBatchSheet(result: PresentedResult): string {
-  const out: string[] = [result.formula.title, `${result.formula.id} · ${result.formula.kind} · ${result.units === 'us' ? 'US' : 'metric'} units`];
+  const out: string[] = [
+    result.formula.title,
+    `${result.formula.id} · ${result.formula.kind} · ${result.units === 'us' ? 'US' : 'metric'} units`,
+  ];
   if (result.critical) {
     out.push('', '*** REFUSED: critical limit exceeded. Do not make this batch. ***');
   }
@@ -42,31 +53,57 @@ export function renderBatchSheet(result: PresentedResult): string {
   // A refused batch gets no amounts to weigh, so nobody works from it by mistake.
   if (!result.critical) {
     for (const group of result.groups) out.push(...groupLines(group));
-    if (result.steps.length) out.push(...heading('Method'), ...result.steps.map((step, i) => `  ${i + 1}. ${step}`));
+    if (result.steps.length)
+      out.push(...heading('Method'), ...result.steps.map((step, i) => `  ${i + 1}. ${step}`));
     if (result.schedule) {
       const s = result.schedule;
-      out.push(...heading('Hold'), `  ${s.days} days: ${s.rule}`, `  Start ${s.start}  →  ready ${s.ready}`);
+      out.push(
+        ...heading('Hold'),
+        `  ${s.days} days: ${s.rule}`,
+        `  Start ${s.start}  →  ready ${s.ready}`,
+      );
       if (s.flipEveryDays) out.push(`  Turn or overhaul every ${s.flipEveryDays} days.`);
     }
   }
   if (result.checks.length) {
     out.push(...heading('Check'));
     for (const check of result.checks) {
-      out.push(`  ${check.verdict.padEnd(4)}  ${check.label}: ${check.sentence}`, `        source: ${check.source}`);
+      out.push(
+        `  ${check.verdict.padEnd(4)}  ${check.label}: ${check.sentence}`,
+        `        source: ${check.source}`,
+      );
     }
   }
   if (result.figures.length) out.push(...heading('Figures'), ...figureRows(result.figures));
   if (!result.critical && result.yields?.length) {
-    out.push(...heading('Yields'), ...textTable(result.yields.map((y) => [y.step, y.percent, y.amount]), ['left', 'right', 'right']));
+    out.push(
+      ...heading('Yields'),
+      ...textTable(
+        result.yields.map((y) => [y.step, y.percent, y.amount]),
+        ['left', 'right', 'right'],
+      ),
+    );
   }
   if (!result.critical && result.portions) {
     const p = result.portions;
     out.push(...heading('Portions'), `  ${p.count} × ${p.piece}, ${p.remainder} left over`);
   }
-  if (result.warnings.length) out.push(...heading('Warnings'), ...result.warnings.map((w) => `  ! ${w}`));
-  out.push(...heading('Cautions'), ...result.cautions.map((c) => `  - ${c.text}${c.source ? ` [${c.source}]` : ''}`));
-  if (result.notes) out.push(...heading('Notes'), ...result.notes.trim().split('\n').map((line) => `  ${line}`));
+  if (result.warnings.length)
+    out.push(...heading('Warnings'), ...result.warnings.map((w) => `  ! ${w}`));
+  out.push(
+    ...heading('Cautions'),
+    ...result.cautions.map((c) => `  - ${c.text}${c.source ? ` [${c.source}]` : ''}`),
+  );
+  if (result.notes)
+    out.push(
+      ...heading('Notes'),
+      ...result.notes
+        .trim()
+        .split('\n')
+        .map((line) => `  ${line}`),
+    );
   out.push('', result.rounding);
-  if (result.critical) out.push('', '*** REFUSED: critical limit exceeded. Do not make this batch. ***');
+  if (result.critical)
+    out.push('', '*** REFUSED: critical limit exceeded. Do not make this batch. ***');
   return out.join('\n') + '\n';
 }

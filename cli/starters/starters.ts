@@ -43,8 +43,18 @@ steps:
 `;
 
 /** A commented starter formula of a kind, ready to edit and pass `larder check`. */
-export function starterFormula(kind: FormulaKind, options: { id: string; title: string; method: CureMethod; schemaPath: string }): string {
-  const body = kind === 'cure' ? CURE_STARTERS[options.method] : kind === 'dough' ? DOUGH : kind === 'blend' ? BLEND : MIX;
+export function starterFormula(
+  kind: FormulaKind,
+  options: { id: string; title: string; method: CureMethod; schemaPath: string },
+): string {
+  const body =
+    kind === 'cure'
+      ? CURE_STARTERS[options.method]
+      : kind === 'dough'
+        ? DOUGH
+        : kind === 'blend'
+          ? BLEND
+          : MIX;
   return `# yaml-language-server: $schema=${options.schemaPath}
 formula: 1                 # file format version
 id: ${options.id}

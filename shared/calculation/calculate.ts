@@ -27,7 +27,11 @@ function byKind(formula: Formula, batch: BatchInput): CalcResult {
  */
 export function calculate(formula: Formula, batch: BatchInput): CalcResult {
   const result = byKind(formula, batch);
-  const own: Caution[] = (formula.cautions ?? []).map((text, i) => ({ id: `formula-${i + 1}`, text, source: 'this formula' }));
+  const own: Caution[] = (formula.cautions ?? []).map((text, i) => ({
+    id: `formula-${i + 1}`,
+    text,
+    source: 'this formula',
+  }));
   const standard = result.cautions.filter((caution) => caution.id !== CAUTIONS.localCodes.id);
   return { ...result, cautions: [...standard, ...own, CAUTIONS.localCodes] };
 }

@@ -23,7 +23,8 @@ function mass(maxKg: number): Reader {
   return (text, option) => {
     const grams = parseMass(text);
     if (grams.isZero()) throw new BatchError(`--${option} must be more than 0`, option);
-    if (grams.greaterThan(KG.times(maxKg))) throw new BatchError(`--${option} ${text} is more than ${maxKg} kg; check the unit`, option);
+    if (grams.greaterThan(KG.times(maxKg)))
+      throw new BatchError(`--${option} ${text} is more than ${maxKg} kg; check the unit`, option);
     return grams;
   };
 }
@@ -33,7 +34,10 @@ function ranged(parse: (text: string) => Decimal, min: number, max: number, unit
   return (text, option) => {
     const value = parse(text);
     if (value.lessThan(min) || value.greaterThan(max)) {
-      throw new BatchError(`--${option} must be between ${min} and ${max} ${unit}, not ${text}`, option);
+      throw new BatchError(
+        `--${option} must be between ${min} and ${max} ${unit}, not ${text}`,
+        option,
+      );
     }
     return value;
   };
@@ -46,7 +50,8 @@ function waterReader(text: string, option: string): Decimal {
   } catch (error) {
     if (!(error instanceof QuantityError)) throw error;
     const litres = parseVolume(text);
-    if (litres.isZero() || litres.greaterThan(1000)) throw new BatchError(`--${option} must be more than 0 and at most 1000 L`, option);
+    if (litres.isZero() || litres.greaterThan(1000))
+      throw new BatchError(`--${option} must be more than 0 and at most 1000 L`, option);
     return waterGramsFromLitres(litres);
   }
 }
@@ -64,7 +69,8 @@ const OPTIONS: Record<keyof BatchInput, { kinds: readonly FormulaKind[]; read: R
   start: {
     kinds: ALL,
     read: (text, option) => {
-      if (!isIsoDate(text)) throw new BatchError(`--${option} takes a date written YYYY-MM-DD, not "${text}"`, option);
+      if (!isIsoDate(text))
+        throw new BatchError(`--${option} takes a date written YYYY-MM-DD, not "${text}"`, option);
       return text;
     },
   },
@@ -79,7 +85,8 @@ const OPTIONS: Record<keyof BatchInput, { kinds: readonly FormulaKind[]; read: R
     kinds: ['dough'],
     read: (text, option) => {
       const count = parseCount(text);
-      if (count < 1 || count > 100_000) throw new BatchError(`--${option} must be between 1 and 100000`, option);
+      if (count < 1 || count > 100_000)
+        throw new BatchError(`--${option} must be between 1 and 100000`, option);
       return count;
     },
   },
@@ -95,7 +102,8 @@ const OPTIONS: Record<keyof BatchInput, { kinds: readonly FormulaKind[]; read: R
   yeast: {
     kinds: ['dough'],
     read: (text, option) => {
-      if (!(YEASTS as readonly string[]).includes(text)) throw new BatchError(`--${option} must be one of ${YEASTS.join(', ')}`, option);
+      if (!(YEASTS as readonly string[]).includes(text))
+        throw new BatchError(`--${option} must be one of ${YEASTS.join(', ')}`, option);
       return text;
     },
   },
@@ -107,7 +115,11 @@ const OPTIONS: Record<keyof BatchInput, { kinds: readonly FormulaKind[]; read: R
 };
 
 /** Options that apply only to one cure method. */
-const CURE_METHOD_OPTIONS: Partial<Record<keyof BatchInput, string>> = { water: 'brine', pump: 'pump', pumpedWeight: 'pump' };
+const CURE_METHOD_OPTIONS: Partial<Record<keyof BatchInput, string>> = {
+  water: 'brine',
+  pump: 'pump',
+  pumpedWeight: 'pump',
+};
 
 /** The command-line spelling of an option: largestPiece → largest-piece. */
 export function optionName(key: string): string {
@@ -126,15 +138,20 @@ export function parseBatchOptions(raw: RawBatchOptions, formula: Formula): Batch
     const option = optionName(key);
     const spec = OPTIONS[key as keyof BatchInput];
     if (!spec) throw new BatchError(`there is no batch option --${option}`, option);
-    if (!spec.kinds.includes(formula.kind)) throw new BatchError(`--${option} does not apply to a ${formula.kind} formula`, option);
+    if (!spec.kinds.includes(formula.kind))
+      throw new BatchError(`--${option} does not apply to a ${formula.kind} formula`, option);
     const method = CURE_METHOD_OPTIONS[key as keyof BatchInput];
     if (method && formula.kind === 'cure' && formula.method !== method) {
-      throw new BatchError(`--${option} applies only to ${method} cures; this one is ${formula.method}`, option);
+      throw new BatchError(
+        `--${option} applies only to ${method} cures; this one is ${formula.method}`,
+        option,
+      );
     }
     try {
       input[key] = spec.read(String(text), option);
     } catch (error) {
-      if (error instanceof QuantityError) throw new BatchError(`--${option}: ${error.message}`, option);
+      if (error instanceof QuantityError)
+        throw new BatchError(`--${option}: ${error.message}`, option);
       throw error;
     }
   }

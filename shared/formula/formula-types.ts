@@ -8,15 +8,7 @@ export type FormulaKind = 'cure' | 'dough' | 'blend' | 'mix';
 
 /** The nine major food allergens of US law (FALCPA 2004 plus sesame, FASTER Act 2021). */
 export type Allergen =
-  | 'milk'
-  | 'egg'
-  | 'fish'
-  | 'shellfish'
-  | 'tree-nuts'
-  | 'peanuts'
-  | 'wheat'
-  | 'soy'
-  | 'sesame';
+  'milk' | 'egg' | 'fish' | 'shellfish' | 'tree-nuts' | 'peanuts' | 'wheat' | 'soy' | 'sesame';
 
 /** Keys every formula has. */
 export interface FormulaBase {

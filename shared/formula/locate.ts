@@ -7,7 +7,10 @@ export interface Position {
   readonly column: number;
 }
 
-function positionOf(node: { range?: [number, number, number] | null } | null | undefined, lineCounter: LineCounter): Position | undefined {
+function positionOf(
+  node: { range?: [number, number, number] | null } | null | undefined,
+  lineCounter: LineCounter,
+): Position | undefined {
   if (!node?.range) return undefined;
   const { line, col } = lineCounter.linePos(node.range[0]);
   return { line, column: col };
@@ -23,7 +26,9 @@ export function locate(doc: Document, lineCounter: LineCounter, path: FormulaPat
   let found = positionOf(doc.contents as Node | null, lineCounter) ?? { line: 1, column: 1 };
   for (const part of path) {
     if (isMap(node)) {
-      const pair = node.items.find((item) => isScalar(item.key) && String(item.key.value) === String(part));
+      const pair = node.items.find(
+        (item) => isScalar(item.key) && String(item.key.value) === String(part),
+      );
       if (!pair) break;
       found = positionOf(pair.key as Node, lineCounter) ?? found;
       node = pair.value;

@@ -30,7 +30,9 @@ export function readFormula(text: string, file: string): FormulaReading {
     problems: [{ file, line: 0, column: 0, path: [], message, severity: 'error' }],
   });
   if (text.length > MAX_FORMULA_BYTES) {
-    return whole(`the file is larger than ${MAX_FORMULA_BYTES / 1024} KB; a formula is a few kilobytes`);
+    return whole(
+      `the file is larger than ${MAX_FORMULA_BYTES / 1024} KB; a formula is a few kilobytes`,
+    );
   }
   if (text.trim() === '') return whole('the file is empty');
 
@@ -39,7 +41,14 @@ export function readFormula(text: string, file: string): FormulaReading {
   if (doc.errors.length > 0) {
     const problems = doc.errors.map((error): FormulaProblem => {
       const { line, col } = lineCounter.linePos(error.pos[0]);
-      return { file, line, column: col, path: [], message: yamlErrorMessage(error), severity: 'error' };
+      return {
+        file,
+        line,
+        column: col,
+        path: [],
+        message: yamlErrorMessage(error),
+        severity: 'error',
+      };
     });
     return { problems };
   }
@@ -55,9 +64,14 @@ export function readFormula(text: string, file: string): FormulaReading {
     return whole('a formula file is a set of keys (formula:, id:, title:, kind:, …)');
   }
 
-  const place = (problem: ContentProblem): FormulaProblem => ({ ...problem, file, ...locate(doc, lineCounter, problem.path) });
+  const place = (problem: ContentProblem): FormulaProblem => ({
+    ...problem,
+    file,
+    ...locate(doc, lineCounter, problem.path),
+  });
   const errors = schemaErrors(value);
-  if (errors.length > 0) return { problems: sortByPosition(schemaProblems(errors, value).map(place)) };
+  if (errors.length > 0)
+    return { problems: sortByPosition(schemaProblems(errors, value).map(place)) };
 
   const formula = value as Formula;
   const problems = sortByPosition(checkFormulaContent(formula).map(place));
@@ -70,12 +84,15 @@ function sortByPosition(problems: FormulaProblem[]): FormulaProblem[] {
 
 /** A problem as one line of text: "file:line:column: error: message". */
 export function formatProblem(problem: FormulaProblem): string {
-  const where = problem.line > 0 ? `${problem.file}:${problem.line}:${problem.column}` : problem.file;
+  const where =
+    problem.line > 0 ? `${problem.file}:${problem.line}:${problem.column}` : problem.file;
   const key = problem.path.length ? ` (at ${pathText(problem.path)})` : '';
   return `${where}: ${problem.severity}: ${problem.message}${key}`;
 }
 
 /** A formula path as people read it: ingredients[3].pct, counting list items from 1. */
 export function pathText(path: FormulaProblem['path']): string {
-  return path.map((part, i) => (typeof part === 'number' ? `[${part + 1}]` : i === 0 ? part : `.${part}`)).join('');
+  return path
+    .map((part, i) => (typeof part === 'number' ? `[${part + 1}]` : i === 0 ? part : `.${part}`))
+    .join('');
 }

@@ -1,7 +1,12 @@
-import { Decimal } from '../decimal.ts';
+import type { Decimal } from '../decimal.ts';
 import type { FigureKind } from '../calculation/calc-result.ts';
 import { MILLIMETRES_PER_INCH } from '../units/length.ts';
-import { formatScaleAmount, isMinorAmount, roundForScale, type UnitSystem } from '../units/scale-amount.ts';
+import {
+  formatScaleAmount,
+  isMinorAmount,
+  roundForScale,
+  type UnitSystem,
+} from '../units/scale-amount.ts';
 import { celsiusDifferenceToFahrenheit, celsiusToFahrenheit } from '../units/temperature.ts';
 
 /** Rounds to the nearest half: 23.26 → 23.5. */
@@ -40,7 +45,11 @@ export function formatPercent(percent: Decimal): string {
 }
 
 /** Prints a figure of any kind in the chosen units. */
-export function formatFigure(kind: FigureKind, value: Decimal | string, system: UnitSystem): string {
+export function formatFigure(
+  kind: FigureKind,
+  value: Decimal | string,
+  system: UnitSystem,
+): string {
   if (typeof value === 'string') return value;
   switch (kind) {
     case 'mass':
@@ -56,7 +65,9 @@ export function formatFigure(kind: FigureKind, value: Decimal | string, system: 
     case 'salinometer':
       return `${value.toFixed(1)} °SAL`;
     case 'length':
-      return system === 'us' ? `${value.div(MILLIMETRES_PER_INCH).toFixed(2)} in` : `${value.div(10).toFixed(1)} cm`;
+      return system === 'us'
+        ? `${value.div(MILLIMETRES_PER_INCH).toFixed(2)} in`
+        : `${value.div(10).toFixed(1)} cm`;
     case 'count':
       return value.toFixed(0);
     case 'days':

@@ -1,8 +1,28 @@
 import { Decimal, sum } from '../decimal.ts';
-import { failsCriticalLimit, type AmountLine, type CalcResult, type Figure, type LimitCheck, type LineGroup } from '../calculation/calc-result.ts';
-import { formatGramsFine, formatScaleAmount, isMinorAmount, roundForScale, type ScaleAmount, type UnitSystem } from '../units/scale-amount.ts';
+import {
+  failsCriticalLimit,
+  type AmountLine,
+  type CalcResult,
+  type Figure,
+  type LimitCheck,
+  type LineGroup,
+} from '../calculation/calc-result.ts';
+import {
+  formatGramsFine,
+  formatScaleAmount,
+  isMinorAmount,
+  roundForScale,
+  type ScaleAmount,
+  type UnitSystem,
+} from '../units/scale-amount.ts';
 import { formatFigure, formatMass, formatPercent, formatPpm } from './format-figure.ts';
-import type { PresentedCheck, PresentedFigure, PresentedGroup, PresentedLine, PresentedResult } from './presented-result.ts';
+import type {
+  PresentedCheck,
+  PresentedFigure,
+  PresentedGroup,
+  PresentedLine,
+  PresentedResult,
+} from './presented-result.ts';
 
 /** How amounts are rounded, printed on every sheet. */
 export function roundingNote(system: UnitSystem): string {
@@ -21,7 +41,9 @@ function presentLine(line: AmountLine, system: UnitSystem, rounded: ScaleAmount)
   return {
     name: line.name,
     amount: formatScaleAmount(rounded),
-    ...(system === 'us' && line.role === 'curing-salt' ? { gramsShown: formatGramsFine(line.grams) } : {}),
+    ...(system === 'us' && line.role === 'curing-salt'
+      ? { gramsShown: formatGramsFine(line.grams) }
+      : {}),
     grams: line.grams.toString(),
     ...(line.percent ? { percent: formatPercent(line.percent) } : {}),
     role: line.role,
@@ -32,12 +54,19 @@ function presentLine(line: AmountLine, system: UnitSystem, rounded: ScaleAmount)
 function presentGroup(group: LineGroup, system: UnitSystem): PresentedGroup {
   const rounded = group.lines.map((line) => roundForScale(line.grams, system, weighsFine(line)));
   const lines = group.lines.map((line, i) => presentLine(line, system, rounded[i]));
-  if (!group.totalLabel || rounded.length === 0) return { title: group.title, percentOf: group.percentOf, lines };
+  if (!group.totalLabel || rounded.length === 0)
+    return { title: group.title, percentOf: group.percentOf, lines };
   // The total is the sum of what is printed, so a cook adding up the sheet gets the same figure.
   const places = Math.max(...rounded.map((r) => r.places));
-  const total: ScaleAmount = { value: sum(rounded.map((r) => r.value)), unit: rounded[0].unit, places };
+  const total: ScaleAmount = {
+    value: sum(rounded.map((r) => r.value)),
+    unit: rounded[0].unit,
+    places,
+  };
   const percents = group.lines.map((line) => line.percent);
-  const percentTotal = percents.every((p): p is Decimal => p !== undefined) ? formatPercent(sum(percents)) : undefined;
+  const percentTotal = percents.every((p): p is Decimal => p !== undefined)
+    ? formatPercent(sum(percents))
+    : undefined;
   return {
     title: group.title,
     percentOf: group.percentOf,
@@ -62,10 +91,14 @@ function presentFigure(figure: Figure, system: UnitSystem): PresentedFigure {
 
 function presentCheck(check: LimitCheck): PresentedCheck {
   const shown = check.unit === 'ppm' ? formatPpm(check.value) : formatPercent(check.value);
-  const limit = check.unit === 'ppm' ? `${check.limit.toString()} ppm` : `${check.limit.toString()} %`;
+  const limit =
+    check.unit === 'ppm' ? `${check.limit.toString()} ppm` : `${check.limit.toString()} %`;
   // When rounding makes the value look equal to the limit, show the exact figure that decided.
-  const looksEqual = new Decimal(shown.split(' ')[0]).equals(check.limit) && check.status !== 'pass';
-  const value = looksEqual ? `${shown} (${check.value.toDecimalPlaces(4).toString()} unrounded)` : shown;
+  const looksEqual =
+    new Decimal(shown.split(' ')[0]).equals(check.limit) && check.status !== 'pass';
+  const value = looksEqual
+    ? `${shown} (${check.value.toDecimalPlaces(4).toString()} unrounded)`
+    : shown;
   const verdict = check.status === 'pass' ? 'PASS' : check.status === 'fail' ? 'FAIL' : 'WARN';
   let sentence: string;
   if (check.comparison === 'at-most') {

@@ -17,7 +17,11 @@ export interface PresentedResult {
   /** Whether a critical limit failed: the batch must not be made. */
   readonly critical: boolean;
   readonly warnings: readonly string[];
-  readonly cautions: readonly { readonly id: string; readonly text: string; readonly source?: string }[];
+  readonly cautions: readonly {
+    readonly id: string;
+    readonly text: string;
+    readonly source?: string;
+  }[];
   readonly allergens: readonly Allergen[];
   readonly schedule?: {
     readonly start: string;
@@ -26,8 +30,18 @@ export interface PresentedResult {
     readonly rule: string;
     readonly flipEveryDays?: number;
   };
-  readonly yields?: readonly { readonly step: string; readonly percent: string; readonly amount: string; readonly grams: string }[];
-  readonly portions?: { readonly piece: string; readonly count: number; readonly remainder: string; readonly remainderGrams: string };
+  readonly yields?: readonly {
+    readonly step: string;
+    readonly percent: string;
+    readonly amount: string;
+    readonly grams: string;
+  }[];
+  readonly portions?: {
+    readonly piece: string;
+    readonly count: number;
+    readonly remainder: string;
+    readonly remainderGrams: string;
+  };
   /** How amounts were rounded, in words. */
   readonly rounding: string;
   readonly notes?: string;
@@ -59,7 +73,12 @@ export interface PresentedGroup {
   readonly percentOf?: string;
   readonly lines: readonly PresentedLine[];
   /** The printed lines added up, and the exact total. */
-  readonly total?: { readonly label: string; readonly amount: string; readonly grams: string; readonly percent?: string };
+  readonly total?: {
+    readonly label: string;
+    readonly amount: string;
+    readonly grams: string;
+    readonly percent?: string;
+  };
 }
 
 export interface PresentedCheck {

@@ -23,12 +23,13 @@ export const CAUTIONS = {
     text:
       'Ingoing nitrite is figured on the green (raw, uncured) weight of the meat, and limits are ' +
       'compared on the unrounded figure, before the amounts are rounded for the scale.',
-    source: 'USDA FSIS Directive 7620.3, Processing Inspectors\' Calculations Handbook, ch. 3',
+    source: "USDA FSIS Directive 7620.3, Processing Inspectors' Calculations Handbook, ch. 3",
   },
   cureUnderRefrigeration: {
     id: 'cure-under-refrigeration',
     text: 'Cure under refrigeration: keep the meat (and any brine) at 2–4 °C (36–40 °F) throughout.',
-    source: 'USDA, Pork: Slaughtering, Cutting, Preserving, and Cooking on the Farm (Farmers\' Bulletin), dry and sweet pickle cures',
+    source:
+      "USDA, Pork: Slaughtering, Cutting, Preserving, and Cooking on the Farm (Farmers' Bulletin), dry and sweet pickle cures",
   },
   curedMeatIsRaw: {
     id: 'cured-meat-is-raw',
@@ -89,6 +90,7 @@ export function allergenCaution(allergens: readonly string[]): Caution | undefin
   return {
     id: 'allergens',
     text: `Contains: ${allergens.join(', ')}. Keep utensils and surfaces apart and label the product.`,
-    source: 'Food Allergen Labeling and Consumer Protection Act of 2004; FASTER Act of 2021 (sesame)',
+    source:
+      'Food Allergen Labeling and Consumer Protection Act of 2004; FASTER Act of 2021 (sesame)',
   };
 }

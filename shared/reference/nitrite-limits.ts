@@ -24,12 +24,24 @@ const NO_NITRATE = new Decimal(0);
  * printed in the rule (the handbook's 156 for ¼ oz per 100 lb, which is 156.25 by arithmetic).
  * Comminuted products take their cure mixed in, so only the dry method applies to them.
  */
-export const NITRITE_RULES: Readonly<Record<CureProduct, Partial<Record<CureMethod, NitriteRule>>>> = {
+export const NITRITE_RULES: Readonly<
+  Record<CureProduct, Partial<Record<CureMethod, NitriteRule>>>
+> = {
   bacon: {
     // source: 9 CFR 424.22(b) — dry-cured bacon 200 ppm
-    dry: { rule: 'dry-cured bacon', maxPpm: new Decimal(200), source: BACON_RULE, maxNitratePpm: NO_NITRATE },
+    dry: {
+      rule: 'dry-cured bacon',
+      maxPpm: new Decimal(200),
+      source: BACON_RULE,
+      maxNitratePpm: NO_NITRATE,
+    },
     // source: 9 CFR 424.22(b) — immersion-cured bacon 120 ppm
-    brine: { rule: 'immersion-cured bacon', maxPpm: new Decimal(120), source: BACON_RULE, maxNitratePpm: NO_NITRATE },
+    brine: {
+      rule: 'immersion-cured bacon',
+      maxPpm: new Decimal(120),
+      source: BACON_RULE,
+      maxNitratePpm: NO_NITRATE,
+    },
     // source: 9 CFR 424.22(b) — pumped and/or massaged bacon 120 ppm with 550 ppm ascorbate/erythorbate
     pump: {
       rule: 'pumped bacon',
@@ -42,16 +54,34 @@ export const NITRITE_RULES: Readonly<Record<CureProduct, Partial<Record<CureMeth
   'whole-muscle': {
     // source: 9 CFR 424.21(c) "1 oz per 100 lb meat (dry cure)" = 625 ppm; FSIS 7620.3 ch. 3
     // nitrate: 3½ oz per 100 lb (dry cure) = 2187.5 ppm, same table
-    dry: { rule: 'dry-cured product other than bacon', maxPpm: new Decimal(625), source: CURING_AGENT_TABLE, maxNitratePpm: new Decimal('2187.5') },
+    dry: {
+      rule: 'dry-cured product other than bacon',
+      maxPpm: new Decimal(625),
+      source: CURING_AGENT_TABLE,
+      maxNitratePpm: new Decimal('2187.5'),
+    },
     // source: 9 CFR 424.21(c), 200 ppm for pickle-cured (immersion) products; FSIS 7620.3 ch. 3
-    brine: { rule: 'immersion-cured product other than bacon', maxPpm: new Decimal(200), source: CURING_AGENT_TABLE },
+    brine: {
+      rule: 'immersion-cured product other than bacon',
+      maxPpm: new Decimal(200),
+      source: CURING_AGENT_TABLE,
+    },
     // source: 9 CFR 424.21(c), "2 lb to 100 gal pickle at 10 percent pump level", 200 ppm cap
-    pump: { rule: 'pumped product other than bacon', maxPpm: new Decimal(200), source: CURING_AGENT_TABLE },
+    pump: {
+      rule: 'pumped product other than bacon',
+      maxPpm: new Decimal(200),
+      source: CURING_AGENT_TABLE,
+    },
   },
   comminuted: {
     // source: 9 CFR 424.21(c) "¼ oz per 100 lb chopped meat"; FSIS 7620.3 ch. 3 prints 156 ppm
     // nitrate: 2¾ oz per 100 lb chopped meat = 1718.75 ppm, same table
-    dry: { rule: 'comminuted (ground or chopped) product', maxPpm: new Decimal(156), source: CURING_AGENT_TABLE, maxNitratePpm: new Decimal('1718.75') },
+    dry: {
+      rule: 'comminuted (ground or chopped) product',
+      maxPpm: new Decimal(156),
+      source: CURING_AGENT_TABLE,
+      maxNitratePpm: new Decimal('1718.75'),
+    },
   },
 };
 
@@ -61,7 +91,8 @@ export const NITRITE_RULES: Readonly<Record<CureProduct, Partial<Record<CureMeth
  * source: USDA FSIS Directive 7620.3, ch. 3 introduction
  */
 export const USUAL_MINIMUM_PPM = new Decimal(120);
-export const USUAL_MINIMUM_SOURCE = 'USDA FSIS Directive 7620.3, ch. 3 (policy for Keep Refrigerated cured products)';
+export const USUAL_MINIMUM_SOURCE =
+  'USDA FSIS Directive 7620.3, ch. 3 (policy for Keep Refrigerated cured products)';
 
 /**
  * Above this much sodium nitrite in one ingredient we warn: kitchen curing salts hold about

@@ -6,8 +6,12 @@ import { tokenize } from './tokenize.ts';
 export const MILLIMETRES_PER_INCH = new Decimal('25.4');
 
 const MILLIMETRES_PER_UNIT: ReadonlyMap<string, Decimal> = new Map([
-  ...['mm', 'millimetre', 'millimetres', 'millimeter', 'millimeters'].map((u) => [u, new Decimal(1)] as const),
-  ...['cm', 'centimetre', 'centimetres', 'centimeter', 'centimeters'].map((u) => [u, new Decimal(10)] as const),
+  ...['mm', 'millimetre', 'millimetres', 'millimeter', 'millimeters'].map(
+    (u) => [u, new Decimal(1)] as const,
+  ),
+  ...['cm', 'centimetre', 'centimetres', 'centimeter', 'centimeters'].map(
+    (u) => [u, new Decimal(10)] as const,
+  ),
   ...['in', 'inch', 'inches'].map((u) => [u, MILLIMETRES_PER_INCH] as const),
 ]);
 
@@ -22,10 +26,12 @@ export function parseLength(text: string): Decimal {
   if (typeof terms === 'string') throw new QuantityError(text, EXPECTED, terms);
   return sum(
     terms.map((term) => {
-      if (term.unit === '') throw new QuantityError(text, EXPECTED, 'a unit is missing (mm, cm or in)');
+      if (term.unit === '')
+        throw new QuantityError(text, EXPECTED, 'a unit is missing (mm, cm or in)');
       const factor = MILLIMETRES_PER_UNIT.get(term.unit);
       if (!factor) throw new QuantityError(text, EXPECTED, `"${term.unit}" is not a length unit`);
-      if (term.value.isNegative()) throw new QuantityError(text, EXPECTED, 'a length cannot be negative');
+      if (term.value.isNegative())
+        throw new QuantityError(text, EXPECTED, 'a length cannot be negative');
       return term.value.times(factor);
     }),
   );

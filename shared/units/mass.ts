@@ -26,10 +26,12 @@ export function parseMass(text: string): Decimal {
   const terms = tokenize(text);
   if (typeof terms === 'string') throw new QuantityError(text, EXPECTED, terms);
   const grams = terms.map((term) => {
-    if (term.unit === '') throw new QuantityError(text, EXPECTED, 'a unit is missing (g, kg, oz or lb)');
+    if (term.unit === '')
+      throw new QuantityError(text, EXPECTED, 'a unit is missing (g, kg, oz or lb)');
     const factor = GRAMS_PER_UNIT.get(term.unit);
     if (!factor) throw new QuantityError(text, EXPECTED, `"${term.unit}" is not a mass unit`);
-    if (term.value.isNegative()) throw new QuantityError(text, EXPECTED, 'a mass cannot be negative');
+    if (term.value.isNegative())
+      throw new QuantityError(text, EXPECTED, 'a mass cannot be negative');
     return term.value.times(factor);
   });
   return sum(grams);

@@ -1,4 +1,4 @@
-import { Decimal } from '../decimal.ts';
+import type { Decimal } from '../decimal.ts';
 import { QuantityError } from './quantity-error.ts';
 import { tokenize } from './tokenize.ts';
 

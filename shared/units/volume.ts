@@ -14,7 +14,9 @@ export const LITRES_PER_US_GALLON = new Decimal('3.785411784');
 export const WATER_GRAMS_PER_LITRE = new Decimal(1000);
 
 const LITRES_PER_UNIT: ReadonlyMap<string, Decimal> = new Map([
-  ...['ml', 'millilitre', 'millilitres', 'milliliter', 'milliliters'].map((u) => [u, new Decimal('0.001')] as const),
+  ...['ml', 'millilitre', 'millilitres', 'milliliter', 'milliliters'].map(
+    (u) => [u, new Decimal('0.001')] as const,
+  ),
   ...['l', 'litre', 'litres', 'liter', 'liters'].map((u) => [u, new Decimal(1)] as const),
   ...['qt', 'quart', 'quarts'].map((u) => [u, LITRES_PER_US_GALLON.div(4)] as const),
   ...['gal', 'gallon', 'gallons'].map((u) => [u, LITRES_PER_US_GALLON] as const),
@@ -31,10 +33,12 @@ export function parseVolume(text: string): Decimal {
   if (typeof terms === 'string') throw new QuantityError(text, EXPECTED, terms);
   return sum(
     terms.map((term) => {
-      if (term.unit === '') throw new QuantityError(text, EXPECTED, 'a unit is missing (ml, L, qt or gal)');
+      if (term.unit === '')
+        throw new QuantityError(text, EXPECTED, 'a unit is missing (ml, L, qt or gal)');
       const factor = LITRES_PER_UNIT.get(term.unit);
       if (!factor) throw new QuantityError(text, EXPECTED, `"${term.unit}" is not a volume unit`);
-      if (term.value.isNegative()) throw new QuantityError(text, EXPECTED, 'a volume cannot be negative');
+      if (term.value.isNegative())
+        throw new QuantityError(text, EXPECTED, 'a volume cannot be negative');
       return term.value.times(factor);
     }),
   );

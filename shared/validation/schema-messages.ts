@@ -50,7 +50,8 @@ function valueAt(root: unknown, path: FormulaPath): unknown {
 }
 
 function allowedKeys(error: ErrorObject): string[] {
-  const properties = (error.parentSchema as { properties?: Record<string, unknown> } | undefined)?.properties;
+  const properties = (error.parentSchema as { properties?: Record<string, unknown> } | undefined)
+    ?.properties;
   return properties ? Object.keys(properties) : [];
 }
 
@@ -70,49 +71,101 @@ function describe(error: ErrorObject, root: unknown): ContentProblem | undefined
       const key = String(p.additionalProperty);
       const allowed = allowedKeys(error);
       const guess = closestWord(key, allowed);
-      const hint = guess ? `; did you mean "${guess}"?` : allowed.length ? ` (allowed here: ${allowed.join(', ')})` : '';
+      const hint = guess
+        ? `; did you mean "${guess}"?`
+        : allowed.length
+          ? ` (allowed here: ${allowed.join(', ')})`
+          : '';
       return { path: [...path, key], message: `unknown key "${key}"${hint}`, severity: 'error' };
     }
     case 'required':
       return { path, message: `"${String(p.missingProperty)}" is missing`, severity: 'error' };
     case 'type':
-      return { path, message: `${what} should be ${typeWords(String(p.type))}, not ${quote(value)}`, severity: 'error' };
+      return {
+        path,
+        message: `${what} should be ${typeWords(String(p.type))}, not ${quote(value)}`,
+        severity: 'error',
+      };
     case 'enum': {
       const options = (p.allowedValues as unknown[]).map(String);
       const guess = typeof value === 'string' ? closestWord(value, options) : undefined;
       const hint = guess ? `; did you mean "${guess}"?` : '';
-      return { path, message: `${what} must be one of ${options.join(', ')}, not ${quote(value)}${hint}`, severity: 'error' };
+      return {
+        path,
+        message: `${what} must be one of ${options.join(', ')}, not ${quote(value)}${hint}`,
+        severity: 'error',
+      };
     }
     case 'const':
-      return { path, message: `${what} must be ${quote(p.allowedValue)}, not ${quote(value)}`, severity: 'error' };
+      return {
+        path,
+        message: `${what} must be ${quote(p.allowedValue)}, not ${quote(value)}`,
+        severity: 'error',
+      };
     case 'minimum':
-      return { path, message: `${what} must be at least ${String(p.limit)}, not ${quote(value)}`, severity: 'error' };
+      return {
+        path,
+        message: `${what} must be at least ${String(p.limit)}, not ${quote(value)}`,
+        severity: 'error',
+      };
     case 'exclusiveMinimum':
-      return { path, message: `${what} must be more than ${String(p.limit)}, not ${quote(value)}`, severity: 'error' };
+      return {
+        path,
+        message: `${what} must be more than ${String(p.limit)}, not ${quote(value)}`,
+        severity: 'error',
+      };
     case 'maximum':
-      return { path, message: `${what} must be at most ${String(p.limit)}, not ${quote(value)}`, severity: 'error' };
+      return {
+        path,
+        message: `${what} must be at most ${String(p.limit)}, not ${quote(value)}`,
+        severity: 'error',
+      };
     case 'exclusiveMaximum':
-      return { path, message: `${what} must be less than ${String(p.limit)}, not ${quote(value)}`, severity: 'error' };
+      return {
+        path,
+        message: `${what} must be less than ${String(p.limit)}, not ${quote(value)}`,
+        severity: 'error',
+      };
     case 'minItems':
-      return { path, message: `${what} needs at least ${String(p.limit)} item(s)`, severity: 'error' };
+      return {
+        path,
+        message: `${what} needs at least ${String(p.limit)} item(s)`,
+        severity: 'error',
+      };
     case 'maxItems':
-      return { path, message: `${what} may have at most ${String(p.limit)} item(s)`, severity: 'error' };
+      return {
+        path,
+        message: `${what} may have at most ${String(p.limit)} item(s)`,
+        severity: 'error',
+      };
     case 'minLength':
       return { path, message: `${what} must not be empty`, severity: 'error' };
     case 'maxLength':
-      return { path, message: `${what} is too long (at most ${String(p.limit)} characters)`, severity: 'error' };
+      return {
+        path,
+        message: `${what} is too long (at most ${String(p.limit)} characters)`,
+        severity: 'error',
+      };
     case 'minProperties':
       return { path, message: `${what} must have at least one key`, severity: 'error' };
     case 'uniqueItems':
       return { path, message: `${what} lists the same thing twice`, severity: 'error' };
     case 'pattern': {
       const key = String(path[path.length - 1]);
-      return { path, message: `${what} ${PATTERN_MESSAGES[key] ?? `does not have the expected form`}, not ${quote(value)}`, severity: 'error' };
+      return {
+        path,
+        message: `${what} ${PATTERN_MESSAGES[key] ?? `does not have the expected form`}, not ${quote(value)}`,
+        severity: 'error',
+      };
     }
     case 'oneOf': {
       // Our oneOf is always "fat or lean": say which way it went wrong.
       const both = value !== null && typeof value === 'object' && 'fat' in value && 'lean' in value;
-      return { path, message: both ? 'give "fat" or "lean", not both' : 'give "fat" or "lean"', severity: 'error' };
+      return {
+        path,
+        message: both ? 'give "fat" or "lean", not both' : 'give "fat" or "lean"',
+        severity: 'error',
+      };
     }
     default:
       return { path, message: error.message ?? 'is not valid', severity: 'error' };

@@ -1,4 +1,5 @@
-import { Decimal, ONE } from '../../decimal.ts';
+import type { Decimal } from '../../decimal.ts';
+import { ONE } from '../../decimal.ts';
 import type { BlendFormula } from '../../formula/formula-types.ts';
 import { BatchError } from '../batch-error.ts';
 import type { BatchInput } from '../batch-input.ts';
@@ -124,9 +125,7 @@ function onHandMeat(
   }
   const added = partnerForFixed(fixedFat, otherFat, fats.target, onHand.grams);
   const amounts =
-    index === 0
-      ? { first: onHand.grams, second: added }
-      : { first: added, second: onHand.grams };
+    index === 0 ? { first: onHand.grams, second: added } : { first: added, second: onHand.grams };
   return {
     amounts,
     inputs: [{ label: `on hand: ${fixed.name}`, kind: 'mass', value: onHand.grams }],

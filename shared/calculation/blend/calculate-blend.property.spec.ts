@@ -15,7 +15,11 @@ const TOLERANCE = dec('1e-30');
 
 /** Two component fats and a target between them, in tenths of a percent (exact decimals). */
 const fatsAndTarget = fc
-  .tuple(fc.integer({ min: 0, max: 1000 }), fc.integer({ min: 0, max: 1000 }), fc.integer({ min: 0, max: 1000 }))
+  .tuple(
+    fc.integer({ min: 0, max: 1000 }),
+    fc.integer({ min: 0, max: 1000 }),
+    fc.integer({ min: 0, max: 1000 }),
+  )
   .map(([a, b, share]) => {
     const low = Math.min(a, b);
     const high = Math.max(a, b);
@@ -52,7 +56,10 @@ function fatFigure(result: CalcResult): Decimal {
 }
 
 function close(actual: Decimal, expected: Decimal): boolean {
-  return actual.minus(expected).abs().lessThanOrEqualTo(TOLERANCE.times(Math.max(1, expected.abs().toNumber())));
+  return actual
+    .minus(expected)
+    .abs()
+    .lessThanOrEqualTo(TOLERANCE.times(Math.max(1, expected.abs().toNumber())));
 }
 
 describe('calculateBlend, properties', () => {
@@ -72,8 +79,12 @@ describe('calculateBlend, properties', () => {
     fc.assert(
       fc.property(fatsAndTarget, totalGrams, factor, ({ a, b, target }, total, k) => {
         const one = meatGrams(calculateBlend(formula(a, b), { total, targetFat: target }));
-        const scaled = meatGrams(calculateBlend(formula(a, b), { total: total.times(k), targetFat: target }));
-        one.forEach((g, i) => assert.ok(close(scaled[i], g.times(k)), `${scaled[i]} ≠ ${g} × ${k}`));
+        const scaled = meatGrams(
+          calculateBlend(formula(a, b), { total: total.times(k), targetFat: target }),
+        );
+        one.forEach((g, i) =>
+          assert.ok(close(scaled[i], g.times(k)), `${scaled[i]} ≠ ${g} × ${k}`),
+        );
       }),
     );
   });

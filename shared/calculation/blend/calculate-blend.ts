@@ -23,9 +23,13 @@ import { portionsOf } from './portion.ts';
 
 /** The target fat: the batch's --target-fat, else the formula's target. */
 function targetFat(formula: BlendFormula, batch: BatchInput): { value: Decimal; note: string } {
-  if (batch.targetFat === undefined) return { value: formulaTargetFat(formula), note: 'from the formula' };
+  if (batch.targetFat === undefined)
+    return { value: formulaTargetFat(formula), note: 'from the formula' };
   if (batch.targetFat.isNegative() || batch.targetFat.greaterThan(HUNDRED)) {
-    throw new BatchError(`--target-fat must be between 0 and 100 %, not ${batch.targetFat} %`, 'target-fat');
+    throw new BatchError(
+      `--target-fat must be between 0 and 100 %, not ${batch.targetFat} %`,
+      'target-fat',
+    );
   }
   return { value: batch.targetFat, note: 'from --target-fat' };
 }
@@ -103,7 +107,12 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
   }));
   const seasoningLines: AmountLine[] = seasoning.map((ingredient) => {
     const percent = new Decimal(ingredient.pct);
-    return { name: ingredient.name, grams: meat.times(percent).div(HUNDRED), percent, role: 'ingredient' };
+    return {
+      name: ingredient.name,
+      grams: meat.times(percent).div(HUNDRED),
+      percent,
+      role: 'ingredient',
+    };
   });
   const groups: LineGroup[] = [
     { title: 'Meat', percentOf: 'blend weight', lines: meatLines, totalLabel: 'Total meat' },

@@ -1,6 +1,10 @@
 import type { Decimal } from '../../decimal.ts';
 import type { BlendFormula } from '../../formula/formula-types.ts';
-import { type ContentProblem, contentError, contentWarning } from '../../formula/formula-problem.ts';
+import {
+  type ContentProblem,
+  contentError,
+  contentWarning,
+} from '../../formula/formula-problem.ts';
 import { FAT_STANDARDS } from '../../reference/fat-standards.ts';
 import { parseMass } from '../../units/mass.ts';
 import { QuantityError } from '../../units/quantity-error.ts';
@@ -16,7 +20,9 @@ function fatOrProblem(
   const hasFat = value.fat !== undefined;
   const hasLean = value.lean !== undefined;
   if (hasFat === hasLean) {
-    problems.push(contentError(path, 'give either fat or lean (chemical lean), not both or neither'));
+    problems.push(
+      contentError(path, 'give either fat or lean (chemical lean), not both or neither'),
+    );
     return undefined;
   }
   return fatFrom(value, path.join('.'));
@@ -26,7 +32,9 @@ function checkPortion(portion: string, problems: ContentProblem[]): void {
   try {
     const grams = parseMass(portion);
     if (!grams.greaterThan(0)) {
-      problems.push(contentError(['portion'], `a portion must weigh more than 0 g, not "${portion}"`));
+      problems.push(
+        contentError(['portion'], `a portion must weigh more than 0 g, not "${portion}"`),
+      );
     }
   } catch (error) {
     if (!(error instanceof QuantityError)) throw error;
@@ -81,7 +89,10 @@ export function checkBlendFormula(formula: BlendFormula): ContentProblem[] {
     const name = ingredient.name.trim().toLowerCase();
     if (seen.has(name)) {
       problems.push(
-        contentError(['ingredients', i, 'name'], `"${ingredient.name}" is listed twice in the seasoning`),
+        contentError(
+          ['ingredients', i, 'name'],
+          `"${ingredient.name}" is listed twice in the seasoning`,
+        ),
       );
     }
     seen.add(name);

@@ -30,6 +30,14 @@ describe('pearsonSquare', () => {
     assert.ok(second.equals(dec('75000')));
   });
 
+  it('should add the two masses up to the batch exactly when the split is a repeating decimal', () => {
+    // own example, derived: 10 % and 40 % to 20 %: parts 20 and 10, so the lean share is 2/3,
+    // which no decimal holds exactly; the rest must still make up the 0.23 g batch to the digit.
+    const { first, second } = pearsonSquare(dec('10'), dec('40'), dec('20'), dec('0.23'));
+    assert.ok(first.plus(second).equals(dec('0.23')));
+    assert.equal(first.toFixed(30), dec('0.23').times(2).div(3).toFixed(30));
+  });
+
   it('should take all of one component when the target equals its fat', () => {
     const { first, second } = pearsonSquare(dec('10'), dec('50'), dec('50'), dec('8000'));
     assert.ok(first.isZero());

@@ -73,11 +73,15 @@ export function partnerForFixed(
   fixedGrams: Decimal,
 ): Decimal {
   if (!isReachable(fixedFat, otherFat, target)) {
-    throw new RangeError(`partnerForFixed: ${target} % is not between ${fixedFat} % and ${otherFat} %`);
+    throw new RangeError(
+      `partnerForFixed: ${target} % is not between ${fixedFat} % and ${otherFat} %`,
+    );
   }
   if (fixedFat.equals(target)) return ZERO;
   if (otherFat.equals(target)) {
-    throw new RangeError('partnerForFixed: the target equals the other fat; no finite amount reaches it');
+    throw new RangeError(
+      'partnerForFixed: the target equals the other fat; no finite amount reaches it',
+    );
   }
   return fixedGrams.times(fixedFat.minus(target)).div(target.minus(otherFat));
 }

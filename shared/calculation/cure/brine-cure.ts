@@ -3,7 +3,12 @@ import type { CureFormula } from '../../formula/formula-types.ts';
 import { BatchError } from '../batch-error.ts';
 import { brineStrength, salinometerDegrees } from './brine-strength.ts';
 import { ppmAtEquilibrium } from './ingoing.ts';
-import { ingredientLine, substanceGrams, type MethodOutcome, type WeighedIngredient } from './cure-lines.ts';
+import {
+  ingredientLine,
+  substanceGrams,
+  type MethodOutcome,
+  type WeighedIngredient,
+} from './cure-lines.ts';
 
 /**
  * Equilibrium brine: the meat is held in water with each ingredient a percentage of meat plus
@@ -11,10 +16,17 @@ import { ingredientLine, substanceGrams, type MethodOutcome, type WeighedIngredi
  * weight + pickle weight), FSIS 7620.3 ch. 3 immersion "Method Two".
  * @param waterGrams water weight given for this batch; otherwise the formula's water_pct is used
  */
-export function brineCure(formula: CureFormula, greenGrams: Decimal, waterGrams?: Decimal): MethodOutcome {
+export function brineCure(
+  formula: CureFormula,
+  greenGrams: Decimal,
+  waterGrams?: Decimal,
+): MethodOutcome {
   const waterPct = formula.brine?.water_pct;
   if (!waterGrams && waterPct === undefined) {
-    throw new BatchError('this brine formula gives no water_pct; say how much water with --water', 'water');
+    throw new BatchError(
+      'this brine formula gives no water_pct; say how much water with --water',
+      'water',
+    );
   }
   const water = waterGrams ?? greenGrams.times(fraction(new Decimal(waterPct ?? 0)));
   const system = greenGrams.plus(water);
@@ -47,7 +59,12 @@ export function brineCure(formula: CureFormula, greenGrams: Decimal, waterGrams?
     ],
     figures: [
       { label: 'Brine strength', kind: 'percent', value: strength, note: 'salt ÷ (salt + water)' },
-      { label: 'Salinometer', kind: 'salinometer', value: salinometerDegrees(strength), note: '60 °F scale' },
+      {
+        label: 'Salinometer',
+        kind: 'salinometer',
+        value: salinometerDegrees(strength),
+        note: '60 °F scale',
+      },
       {
         label: 'Salt in the meat at equilibrium',
         kind: 'percent',

@@ -23,14 +23,23 @@ import type { MethodOutcome } from './cure-lines.ts';
 export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResult {
   const rule = nitriteRuleFor(formula.product, formula.method);
   if (!rule) {
-    throw new BatchError(`a ${formula.product} product cannot be cured by the ${formula.method} method; use dry (mixed in)`);
+    throw new BatchError(
+      `a ${formula.product} product cannot be cured by the ${formula.method} method; use dry (mixed in)`,
+    );
   }
   const { green, inputs } = greenWeight(formula, batch);
   const outcome = cureByMethod(formula, green, batch);
-  const levels = { nitrite: outcome.ppm('nitrite'), nitrate: outcome.ppm('nitrate'), accelerator: outcome.ppm('accelerator') };
+  const levels = {
+    nitrite: outcome.ppm('nitrite'),
+    nitrate: outcome.ppm('nitrate'),
+    accelerator: outcome.ppm('accelerator'),
+  };
   const { checks, warnings: checkWarnings } = checkIngoingLevels(rule, levels);
 
-  const hold = estimateHold(formula.hold, formula.method, { thicknessMm: batch.thickness, largestPieceGrams: batch.largestPiece });
+  const hold = estimateHold(formula.hold, formula.method, {
+    thicknessMm: batch.thickness,
+    largestPieceGrams: batch.largestPiece,
+  });
   const warnings = [...outcome.warnings, ...checkWarnings, ...concentrationWarnings(formula)];
   let schedule: Schedule | undefined;
   if ('missing' in hold) {
@@ -45,7 +54,8 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
     };
   }
   if (batch.thickness) inputs.push({ label: 'Thickness', kind: 'length', value: batch.thickness });
-  if (batch.largestPiece) inputs.push({ label: 'Heaviest piece', kind: 'mass', value: batch.largestPiece });
+  if (batch.largestPiece)
+    inputs.push({ label: 'Heaviest piece', kind: 'mass', value: batch.largestPiece });
 
   const allergens = collectAllergens(formula.ingredients.map((i) => i.allergens));
   const stages = yieldStages(green, formula.yields);
@@ -55,8 +65,21 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
     groups: outcome.groups,
     steps: formula.steps ?? [],
     figures: [
-      { label: 'Ingoing sodium nitrite', kind: 'ppm', value: levels.nitrite, note: 'on green weight, unrounded for the check' },
-      ...(levels.accelerator.isZero() ? [] : [{ label: 'Ingoing ascorbate/erythorbate', kind: 'ppm' as const, value: levels.accelerator }]),
+      {
+        label: 'Ingoing sodium nitrite',
+        kind: 'ppm',
+        value: levels.nitrite,
+        note: 'on green weight, unrounded for the check',
+      },
+      ...(levels.accelerator.isZero()
+        ? []
+        : [
+            {
+              label: 'Ingoing ascorbate/erythorbate',
+              kind: 'ppm' as const,
+              value: levels.accelerator,
+            },
+          ]),
       ...outcome.figures,
     ],
     checks,
@@ -69,21 +92,41 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
   };
 }
 
-function greenWeight(formula: CureFormula, batch: BatchInput): { green: Decimal; inputs: Figure[] } {
-  if (batch.meat && batch.want) throw new BatchError('give either --meat or --want, not both', 'want');
-  if (batch.meat) return { green: batch.meat, inputs: [{ label: 'Green weight', kind: 'mass', value: batch.meat }] };
+function greenWeight(
+  formula: CureFormula,
+  batch: BatchInput,
+): { green: Decimal; inputs: Figure[] } {
+  if (batch.meat && batch.want)
+    throw new BatchError('give either --meat or --want, not both', 'want');
+  if (batch.meat)
+    return {
+      green: batch.meat,
+      inputs: [{ label: 'Green weight', kind: 'mass', value: batch.meat }],
+    };
   if (batch.want) {
-    if (!formula.yields) throw new BatchError('this formula has no yields, so --want cannot be worked back; give --meat', 'want');
+    if (!formula.yields)
+      throw new BatchError(
+        'this formula has no yields, so --want cannot be worked back; give --meat',
+        'want',
+      );
     const green = referenceFromFinished(batch.want, formula.yields);
     return {
       green,
       inputs: [
         { label: 'Finished weight wanted', kind: 'mass', value: batch.want },
-        { label: 'Green weight', kind: 'mass', value: green, note: "worked back through the formula's yields" },
+        {
+          label: 'Green weight',
+          kind: 'mass',
+          value: green,
+          note: "worked back through the formula's yields",
+        },
       ],
     };
   }
-  throw new BatchError('say how much meat: --meat with the green (trimmed, uncured) weight', 'meat');
+  throw new BatchError(
+    'say how much meat: --meat with the green (trimmed, uncured) weight',
+    'meat',
+  );
 }
 
 function cureByMethod(formula: CureFormula, green: Decimal, batch: BatchInput): MethodOutcome {

@@ -1,13 +1,27 @@
 import { Decimal } from '../../decimal.ts';
-import { contentError, contentWarning, type ContentProblem } from '../../formula/formula-problem.ts';
+import {
+  contentError,
+  contentWarning,
+  type ContentProblem,
+} from '../../formula/formula-problem.ts';
 import type { CureFormula, HoldRule } from '../../formula/formula-types.ts';
 import { nitriteRuleFor } from '../../reference/nitrite-limits.ts';
 import { BatchError } from '../batch-error.ts';
 import { calculateCure } from './calculate-cure.ts';
 
 const SUBSTANCES = ['nitrite', 'nitrate', 'salt', 'accelerator'] as const;
-const HOLD_RATES: readonly (keyof HoldRule)[] = ['days_per_cm', 'days_per_inch', 'days_per_kg', 'days_per_lb', 'days'];
-const BRINE_KEYS_BY_METHOD = { dry: [], brine: ['water_pct'], pump: ['pump_pct', 'cover_pct', 'extra_pct'] } as const;
+const HOLD_RATES: readonly (keyof HoldRule)[] = [
+  'days_per_cm',
+  'days_per_inch',
+  'days_per_kg',
+  'days_per_lb',
+  'days',
+];
+const BRINE_KEYS_BY_METHOD = {
+  dry: [],
+  brine: ['water_pct'],
+  pump: ['pump_pct', 'cover_pct', 'extra_pct'],
+} as const;
 /** A notional batch for checking the formula's own levels: 1 kg, the levels do not depend on size. */
 const SAMPLE_GREEN_GRAMS = new Decimal(1000);
 
@@ -19,10 +33,19 @@ const SAMPLE_GREEN_GRAMS = new Decimal(1000);
 export function checkCureFormula(formula: CureFormula): ContentProblem[] {
   const problems: ContentProblem[] = [];
   if (!nitriteRuleFor(formula.product, formula.method)) {
-    problems.push(contentError(['method'], `a ${formula.product} product takes its cure mixed in: use method "dry"`));
+    problems.push(
+      contentError(
+        ['method'],
+        `a ${formula.product} product takes its cure mixed in: use method "dry"`,
+      ),
+    );
     return problems;
   }
-  problems.push(...checkBrineKeys(formula), ...checkIngredients(formula), ...checkHold(formula.hold));
+  problems.push(
+    ...checkBrineKeys(formula),
+    ...checkIngredients(formula),
+    ...checkHold(formula.hold),
+  );
   if (problems.some((p) => p.severity === 'error')) return problems;
   return [...problems, ...checkLevels(formula)];
 }
@@ -32,14 +55,26 @@ function checkBrineKeys(formula: CureFormula): ContentProblem[] {
   const allowed: readonly string[] = BRINE_KEYS_BY_METHOD[formula.method];
   for (const key of Object.keys(formula.brine ?? {})) {
     if (!allowed.includes(key)) {
-      problems.push(contentError(['brine', key], `"${key}" does not apply to the ${formula.method} method`));
+      problems.push(
+        contentError(['brine', key], `"${key}" does not apply to the ${formula.method} method`),
+      );
     }
   }
   if (formula.method === 'brine' && formula.brine?.water_pct === undefined) {
-    problems.push(contentError(['brine'], 'a brine cure needs brine: { water_pct: … }, the water as % of green weight'));
+    problems.push(
+      contentError(
+        ['brine'],
+        'a brine cure needs brine: { water_pct: … }, the water as % of green weight',
+      ),
+    );
   }
   if (formula.method === 'pump' && formula.brine?.pump_pct === undefined) {
-    problems.push(contentError(['brine'], 'a pump cure needs brine: { pump_pct: … }, the brine injected as % of green weight'));
+    problems.push(
+      contentError(
+        ['brine'],
+        'a pump cure needs brine: { pump_pct: … }, the brine injected as % of green weight',
+      ),
+    );
   }
   return problems;
 }
@@ -49,12 +84,18 @@ function checkIngredients(formula: CureFormula): ContentProblem[] {
   const names = new Set<string>();
   formula.ingredients.forEach((ingredient, i) => {
     const name = ingredient.name.trim().toLowerCase();
-    if (names.has(name)) problems.push(contentError(['ingredients', i, 'name'], `"${ingredient.name}" is listed twice`));
+    if (names.has(name))
+      problems.push(
+        contentError(['ingredients', i, 'name'], `"${ingredient.name}" is listed twice`),
+      );
     names.add(name);
     const declared = SUBSTANCES.reduce((total, key) => total + (ingredient[key] ?? 0), 0);
     if (declared > 100) {
       problems.push(
-        contentError(['ingredients', i], `"${ingredient.name}" declares ${declared} % of nitrite, nitrate, salt and accelerator together; that is more than 100 %`),
+        contentError(
+          ['ingredients', i],
+          `"${ingredient.name}" declares ${declared} % of nitrite, nitrate, salt and accelerator together; that is more than 100 %`,
+        ),
       );
     }
   });
@@ -64,8 +105,12 @@ function checkIngredients(formula: CureFormula): ContentProblem[] {
 function checkHold(hold: HoldRule | undefined): ContentProblem[] {
   if (!hold) return [];
   const rates = HOLD_RATES.filter((key) => hold[key] !== undefined);
-  if (rates.length > 1) return [contentError(['hold'], `give one of ${HOLD_RATES.join(', ')}, not ${rates.join(' and ')}`)];
-  if (rates.length === 0) return [contentError(['hold'], `say how long: one of ${HOLD_RATES.join(', ')}`)];
+  if (rates.length > 1)
+    return [
+      contentError(['hold'], `give one of ${HOLD_RATES.join(', ')}, not ${rates.join(' and ')}`),
+    ];
+  if (rates.length === 0)
+    return [contentError(['hold'], `say how long: one of ${HOLD_RATES.join(', ')}`)];
   return [];
 }
 
@@ -83,11 +128,26 @@ function checkLevels(formula: CureFormula): ContentProblem[] {
     const figure = `${check.value.toFixed(1)} ppm`;
     const limit = `${check.limit.toString()} ppm`;
     if (check.status === 'fail' && check.critical) {
-      problems.push(contentError(['ingredients'], `critical limit exceeded: ${check.label.toLowerCase()} ${figure} is over ${limit} for ${check.rule} (${check.source})`));
+      problems.push(
+        contentError(
+          ['ingredients'],
+          `critical limit exceeded: ${check.label.toLowerCase()} ${figure} is over ${limit} for ${check.rule} (${check.source})`,
+        ),
+      );
     } else if (check.status === 'fail') {
-      problems.push(contentWarning(['ingredients'], `${check.label} ${figure} is under the ${limit} required for ${check.rule} (${check.source})`));
+      problems.push(
+        contentWarning(
+          ['ingredients'],
+          `${check.label} ${figure} is under the ${limit} required for ${check.rule} (${check.source})`,
+        ),
+      );
     } else if (check.status === 'warn') {
-      problems.push(contentWarning(['ingredients'], `${check.label.toLowerCase()} ${figure} is below ${limit} (${check.source})`));
+      problems.push(
+        contentWarning(
+          ['ingredients'],
+          `${check.label.toLowerCase()} ${figure} is below ${limit} (${check.source})`,
+        ),
+      );
     }
   }
   return problems;

@@ -22,8 +22,15 @@ export interface MethodOutcome {
 }
 
 /** Grams of a substance carried by the weighed ingredients. */
-export function substanceGrams(weighed: readonly WeighedIngredient[], substance: CureSubstance): Decimal {
-  return sum(weighed.map(({ ingredient, grams }) => grams.times(fraction(new Decimal(ingredient[substance] ?? 0)))));
+export function substanceGrams(
+  weighed: readonly WeighedIngredient[],
+  substance: CureSubstance,
+): Decimal {
+  return sum(
+    weighed.map(({ ingredient, grams }) =>
+      grams.times(fraction(new Decimal(ingredient[substance] ?? 0))),
+    ),
+  );
 }
 
 /** Whether an ingredient carries nitrite or nitrate, and so is weighed and printed as curing salt. */

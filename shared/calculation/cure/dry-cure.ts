@@ -1,7 +1,12 @@
 import { Decimal, fraction } from '../../decimal.ts';
 import type { CureFormula } from '../../formula/formula-types.ts';
 import { ppmOfGreenWeight } from './ingoing.ts';
-import { ingredientLine, substanceGrams, type MethodOutcome, type WeighedIngredient } from './cure-lines.ts';
+import {
+  ingredientLine,
+  substanceGrams,
+  type MethodOutcome,
+  type WeighedIngredient,
+} from './cure-lines.ts';
 
 /**
  * Dry (equilibrium) cure: each ingredient is a percentage of green weight and all of the mix goes

@@ -1,4 +1,5 @@
-import { Decimal, MILLION, fraction } from '../../decimal.ts';
+import type { Decimal } from '../../decimal.ts';
+import { MILLION, fraction } from '../../decimal.ts';
 
 // The FSIS calculation formulas. Any consistent mass unit works; we use grams throughout.
 // source: USDA FSIS Directive 7620.3, Processing Inspectors' Calculations Handbook (1995), ch. 3

@@ -1,6 +1,10 @@
 import type { Decimal } from '../../decimal.ts';
 import type { LimitCheck } from '../calc-result.ts';
-import { USUAL_MINIMUM_PPM, USUAL_MINIMUM_SOURCE, type NitriteRule } from '../../reference/nitrite-limits.ts';
+import {
+  USUAL_MINIMUM_PPM,
+  USUAL_MINIMUM_SOURCE,
+  type NitriteRule,
+} from '../../reference/nitrite-limits.ts';
 
 /** Ingoing levels of one batch, ppm of green weight, unrounded. */
 export interface IngoingLevels {

@@ -4,7 +4,12 @@ import type { Figure } from '../calc-result.ts';
 import { BatchError } from '../batch-error.ts';
 import { SATURATED_BRINE_SALT_PCT, brineStrength, salinometerDegrees } from './brine-strength.ts';
 import { ppmOfPumpedPickle, pumpPercentFromWeights } from './ingoing.ts';
-import { ingredientLine, substanceGrams, type MethodOutcome, type WeighedIngredient } from './cure-lines.ts';
+import {
+  ingredientLine,
+  substanceGrams,
+  type MethodOutcome,
+  type WeighedIngredient,
+} from './cure-lines.ts';
 
 /** The pump-method sizes a batch may override. */
 export interface PumpOptions {
@@ -21,15 +26,27 @@ export interface PumpOptions {
  * Ingoing ppm = substance in pickle × pump fraction × 1 000 000 / pickle weight (FSIS 7620.3 ch. 3),
  * on the pump % actually reached when the pumped weight is known.
  */
-export function pumpCure(formula: CureFormula, greenGrams: Decimal, options: PumpOptions): MethodOutcome {
-  const designPump = options.pump ?? (formula.brine?.pump_pct === undefined ? undefined : new Decimal(formula.brine.pump_pct));
+export function pumpCure(
+  formula: CureFormula,
+  greenGrams: Decimal,
+  options: PumpOptions,
+): MethodOutcome {
+  const designPump =
+    options.pump ??
+    (formula.brine?.pump_pct === undefined ? undefined : new Decimal(formula.brine.pump_pct));
   if (!designPump) {
-    throw new BatchError('this pump formula gives no pump_pct; say how much brine to inject with --pump', 'pump');
+    throw new BatchError(
+      'this pump formula gives no pump_pct; say how much brine to inject with --pump',
+      'pump',
+    );
   }
-  if (!designPump.isPositive() || designPump.isZero()) throw new BatchError('--pump must be more than 0 %', 'pump');
+  if (!designPump.isPositive() || designPump.isZero())
+    throw new BatchError('--pump must be more than 0 %', 'pump');
 
   // Share of the brine taken by each ingredient, % by weight.
-  const shares = formula.ingredients.map((ingredient) => new Decimal(ingredient.pct).div(designPump).times(HUNDRED));
+  const shares = formula.ingredients.map((ingredient) =>
+    new Decimal(ingredient.pct).div(designPump).times(HUNDRED),
+  );
   const solids = sum(shares);
   if (solids.greaterThanOrEqualTo(HUNDRED)) {
     throw new BatchError(
@@ -37,7 +54,11 @@ export function pumpCure(formula: CureFormula, greenGrams: Decimal, options: Pum
       'pump',
     );
   }
-  const saltShare = sum(formula.ingredients.map((ingredient, i) => shares[i].times(fraction(new Decimal(ingredient.salt ?? 0)))));
+  const saltShare = sum(
+    formula.ingredients.map((ingredient, i) =>
+      shares[i].times(fraction(new Decimal(ingredient.salt ?? 0))),
+    ),
+  );
   const waterShare = HUNDRED.minus(solids);
   const strength = brineStrength(saltShare, waterShare);
   if (strength.greaterThan(SATURATED_BRINE_SALT_PCT)) {
@@ -56,7 +77,9 @@ export function pumpCure(formula: CureFormula, greenGrams: Decimal, options: Pum
     grams: made.times(fraction(shares[i])),
   }));
 
-  const actualPump = options.pumpedWeight ? pumpPercentFromWeights(options.pumpedWeight, greenGrams) : undefined;
+  const actualPump = options.pumpedWeight
+    ? pumpPercentFromWeights(options.pumpedWeight, greenGrams)
+    : undefined;
   if (actualPump && !actualPump.isPositive()) {
     throw new BatchError('the pumped weight must be more than the green weight', 'pumped-weight');
   }
@@ -69,11 +92,21 @@ export function pumpCure(formula: CureFormula, greenGrams: Decimal, options: Pum
   }
 
   const inputs: Figure[] = [
-    { label: 'Pump (brine made for)', kind: 'percent', value: designPump, note: options.pump ? 'as given' : 'from the formula' },
+    {
+      label: 'Pump (brine made for)',
+      kind: 'percent',
+      value: designPump,
+      note: options.pump ? 'as given' : 'from the formula',
+    },
   ];
   if (options.pumpedWeight && actualPump) {
     inputs.push({ label: 'Weight after injecting', kind: 'mass', value: options.pumpedWeight });
-    inputs.push({ label: 'Pump reached', kind: 'percent', value: actualPump, note: '(pumped − green) ÷ green' });
+    inputs.push({
+      label: 'Pump reached',
+      kind: 'percent',
+      value: actualPump,
+      note: '(pumped − green) ÷ green',
+    });
   }
 
   return {
@@ -82,7 +115,12 @@ export function pumpCure(formula: CureFormula, greenGrams: Decimal, options: Pum
         title: 'Brine make-up',
         percentOf: 'brine',
         lines: [
-          { name: 'water', grams: made.times(fraction(waterShare)), percent: waterShare, role: 'water' },
+          {
+            name: 'water',
+            grams: made.times(fraction(waterShare)),
+            percent: waterShare,
+            role: 'water',
+          },
           ...weighed.map((w, i) => ingredientLine(w, shares[i])),
         ],
         totalLabel: 'Brine made',
@@ -92,9 +130,16 @@ export function pumpCure(formula: CureFormula, greenGrams: Decimal, options: Pum
     figures: [
       { label: 'Brine to inject', kind: 'mass', value: injected },
       { label: 'Target weight after injecting', kind: 'mass', value: greenGrams.plus(injected) },
-      ...(cover.greaterThan(ZERO) ? [{ label: 'Cover brine', kind: 'mass' as const, value: cover }] : []),
+      ...(cover.greaterThan(ZERO)
+        ? [{ label: 'Cover brine', kind: 'mass' as const, value: cover }]
+        : []),
       { label: 'Brine strength', kind: 'percent', value: strength, note: 'salt ÷ (salt + water)' },
-      { label: 'Salinometer', kind: 'salinometer', value: salinometerDegrees(strength), note: '60 °F scale' },
+      {
+        label: 'Salinometer',
+        kind: 'salinometer',
+        value: salinometerDegrees(strength),
+        note: '60 °F scale',
+      },
     ],
     warnings,
     ppm: (substance) => ppmOfPumpedPickle(substanceGrams(weighed, substance), pumpForChecks, made),

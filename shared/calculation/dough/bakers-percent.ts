@@ -1,4 +1,5 @@
-import { Decimal, HUNDRED, dec, sum } from '../../decimal.ts';
+import type { Decimal } from '../../decimal.ts';
+import { HUNDRED, dec, sum } from '../../decimal.ts';
 import type { DoughIngredient } from '../../formula/formula-types.ts';
 
 /**
@@ -38,7 +39,8 @@ export function flourPercent(ingredients: readonly DoughIngredient[]): Decimal {
  * @param totalPercent the total formula percentage, more than 0
  */
 export function flourForDough(doughGrams: Decimal, totalPercent: Decimal): Decimal {
-  if (!totalPercent.greaterThan(0)) throw new RangeError('flourForDough: the formula adds up to 0 %');
+  if (!totalPercent.greaterThan(0))
+    throw new RangeError('flourForDough: the formula adds up to 0 %');
   // Multiply before dividing so that round figures stay exact (28 470 × 100 ÷ 170).
   return doughGrams.times(HUNDRED).div(totalPercent);
 }

@@ -1,4 +1,5 @@
-import { Decimal, dec, sum } from '../../decimal.ts';
+import type { Decimal } from '../../decimal.ts';
+import { dec, sum } from '../../decimal.ts';
 import type { DoughFormula } from '../../formula/formula-types.ts';
 import { allergenCaution, CAUTIONS } from '../../reference/cautions.ts';
 import { DEFAULT_YEAST_FACTORS, type YeastFactors } from '../../reference/yeast-factors.ts';
@@ -10,7 +11,11 @@ import { lineAtPercent, toAmountLine, type DoughLine } from './dough-line.ts';
 import { effectiveHydration, plainWaterHydration } from './hydration.ts';
 import { prefermentLine, splitPreferment } from './preferment.ts';
 import { portionsOf, scaleDough } from './scale-dough.ts';
-import { planWaterTemperature, splitWaterWithIce, type TemperaturePlan } from './temperature-plan.ts';
+import {
+  planWaterTemperature,
+  splitWaterWithIce,
+  type TemperaturePlan,
+} from './temperature-plan.ts';
 import { convertYeastLine, yeastLabel } from './yeast.ts';
 
 /** Options of a dough calculation that are not batch inputs. */
@@ -21,12 +26,22 @@ export interface DoughOptions {
 
 const OF_TOTAL_FLOUR = "total flour (baker's %)";
 
-function group(title: string, percentOf: string, lines: readonly DoughLine[], totalLabel: string): LineGroup {
+function group(
+  title: string,
+  percentOf: string,
+  lines: readonly DoughLine[],
+  totalLabel: string,
+): LineGroup {
   return { title, percentOf, lines: lines.map(toAmountLine), totalLabel };
 }
 
 /** Ices the plain water of the lines weighed at the mixer, when the plan calls for it. */
-function withIce(lines: DoughLine[], plan: TemperaturePlan, tap: Decimal | undefined, warnings: string[]): DoughLine[] {
+function withIce(
+  lines: DoughLine[],
+  plan: TemperaturePlan,
+  tap: Decimal | undefined,
+  warnings: string[],
+): DoughLine[] {
   if (!plan.iceFraction || tap === undefined) return lines;
   if (!lines.some((line) => line.role === 'water')) {
     warnings.push(
@@ -43,13 +58,18 @@ function cautionsFor(formula: DoughFormula): Caution[] {
   const allergen = allergenCaution(allergens);
   return [
     CAUTIONS.rawDough,
-    ...(formula.ingredients.some((ingredient) => ingredient.raw_egg === true) ? [CAUTIONS.rawEgg] : []),
+    ...(formula.ingredients.some((ingredient) => ingredient.raw_egg === true)
+      ? [CAUTIONS.rawEgg]
+      : []),
     ...(allergen ? [allergen] : []),
     // The formula's own cautions are not added here: calculate() puts them before local codes.
     CAUTIONS.localCodes,
   ];
 }
 
+// Flour moisture is left out on purpose: baker's hydration is the liquid added to the flour,
+// which is how formulas are written and compared.
+// source for the range in the note: USDA SR26, NDB 20080, 20081, 20083, field Water_(g)
 function hydrationFigures(overall: readonly DoughLine[]): Figure[] {
   return [
     {
@@ -58,7 +78,7 @@ function hydrationFigures(overall: readonly DoughLine[]): Figure[] {
       value: effectiveHydration(overall),
       note:
         'water in every ingredient with water_pct or a food (USDA SR Legacy, Release 26), % of total ' +
-        "flour; the flour's own moisture (about 11–13 g per 100 g) is not counted",
+        "flour; the flour's own moisture (10.7–13.4 g per 100 g in USDA SR26) is not counted",
     },
     {
       label: 'Hydration (plain water only)',
@@ -87,7 +107,9 @@ export function calculateDough(
 ): CalcResult {
   const errors = checkDoughFormula(formula).filter((problem) => problem.severity === 'error');
   if (errors.length > 0) {
-    throw new Error(`Formula "${formula.id}" cannot be used: ${errors.map((e) => e.message).join(' ')}`);
+    throw new Error(
+      `Formula "${formula.id}" cannot be used: ${errors.map((e) => e.message).join(' ')}`,
+    );
   }
   const factors = options.yeastFactors ?? DEFAULT_YEAST_FACTORS;
   const scale = scaleDough(formula, batch);
@@ -101,11 +123,15 @@ export function calculateDough(
   if (toKind) {
     inputs.push({ label: 'Yeast', kind: 'text', value: yeastLabel(toKind), note: factors.name });
     if (!formula.ingredients.some((ingredient) => ingredient.yeast !== undefined)) {
-      warnings.push('--yeast was ignored: no ingredient of this formula is marked with its kind of yeast (yeast:).');
+      warnings.push(
+        '--yeast was ignored: no ingredient of this formula is marked with its kind of yeast (yeast:).',
+      );
     }
   }
 
-  const asWritten = formula.ingredients.map((ingredient) => lineAtPercent(ingredient, dec(ingredient.pct), flour));
+  const asWritten = formula.ingredients.map((ingredient) =>
+    lineAtPercent(ingredient, dec(ingredient.pct), flour),
+  );
   const overall = convert(asWritten);
   // Only what the yeast conversion changed, so that the mixed dough stays exactly the scaled
   // weight otherwise (a sum of 40-digit quotients can be off in the 35th decimal).
@@ -118,14 +144,21 @@ export function calculateDough(
   const figures: Figure[] = [{ label: 'Total flour', kind: 'mass', value: flour }];
   const preferment = formula.preferment;
   if (!preferment) {
-    groups.push(group('Dough', OF_TOTAL_FLOUR, withIce(overall, plan, batch.tap, warnings), 'Dough'));
+    groups.push(
+      group('Dough', OF_TOTAL_FLOUR, withIce(overall, plan, batch.tap, warnings), 'Dough'),
+    );
   } else {
     const split = splitPreferment(formula.ingredients, preferment, flour);
     const prefermentLines = convert(split.preferment);
     const final = [...convert(split.final), prefermentLine(preferment, prefermentLines)];
     groups.push(
       group(`Preferment: ${preferment.name}`, 'preferment flour', prefermentLines, preferment.name),
-      group('Final dough', OF_TOTAL_FLOUR, withIce(final, plan, batch.tap, warnings), 'Final dough'),
+      group(
+        'Final dough',
+        OF_TOTAL_FLOUR,
+        withIce(final, plan, batch.tap, warnings),
+        'Final dough',
+      ),
       group('Overall formula (reference)', OF_TOTAL_FLOUR, overall, 'Overall'),
     );
     figures.push({

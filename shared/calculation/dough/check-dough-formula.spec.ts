@@ -4,12 +4,16 @@ import type { ContentProblem } from '../../formula/formula-problem.ts';
 import { checkDoughFormula } from './check-dough-formula.ts';
 import { bunDough, doughFormula, leanDough, POOLISH, poolishDough } from './dough-fixtures.ts';
 
-const paths = (problems: ContentProblem[]) => problems.map((problem) => [problem.severity, problem.path]);
+const paths = (problems: ContentProblem[]) =>
+  problems.map((problem) => [problem.severity, problem.path]);
 
 describe('checking a dough formula', () => {
   it('should find nothing wrong with sound formulas', () => {
     assert.deepEqual(checkDoughFormula(leanDough()), []);
-    assert.deepEqual(checkDoughFormula(bunDough({ piece: '80 g', ddt: { target: '78 °F', friction: '14 °F' } })), []);
+    assert.deepEqual(
+      checkDoughFormula(bunDough({ piece: '80 g', ddt: { target: '78 °F', friction: '14 °F' } })),
+      [],
+    );
     assert.deepEqual(checkDoughFormula(poolishDough()), []);
   });
 
@@ -50,14 +54,23 @@ describe('checking a dough formula', () => {
   });
 
   it('should want every preferment ingredient in the overall formula', () => {
-    const preferment = { ...POOLISH, ingredients: [...POOLISH.ingredients, { name: 'Rye flour', pct: 5 }] };
+    const preferment = {
+      ...POOLISH,
+      ingredients: [...POOLISH.ingredients, { name: 'Rye flour', pct: 5 }],
+    };
     const problems = checkDoughFormula(poolishDough(preferment));
     assert.deepEqual(paths(problems), [['error', ['preferment', 'ingredients', 3, 'name']]]);
     assert.match(problems[0].message, /"Rye flour".*not in the overall formula/);
   });
 
   it('should want the preferment flours to add up to 100 % of its own flour', () => {
-    const preferment = { ...POOLISH, ingredients: [{ name: 'Bread flour', pct: 90 }, { name: 'Water', pct: 100 }] };
+    const preferment = {
+      ...POOLISH,
+      ingredients: [
+        { name: 'Bread flour', pct: 90 },
+        { name: 'Water', pct: 100 },
+      ],
+    };
     const problems = checkDoughFormula(poolishDough(preferment));
     assert.deepEqual(paths(problems), [['error', ['preferment', 'ingredients']]]);
     assert.match(problems[0].message, /90 %/);
@@ -76,8 +89,12 @@ describe('checking a dough formula', () => {
   });
 
   it('should want a piece weight that is a weight above 0', () => {
-    assert.deepEqual(paths(checkDoughFormula(leanDough({ piece: 'ninety' }))), [['error', ['piece']]]);
-    assert.deepEqual(paths(checkDoughFormula(leanDough({ piece: '90 ml' }))), [['error', ['piece']]]);
+    assert.deepEqual(paths(checkDoughFormula(leanDough({ piece: 'ninety' }))), [
+      ['error', ['piece']],
+    ]);
+    assert.deepEqual(paths(checkDoughFormula(leanDough({ piece: '90 ml' }))), [
+      ['error', ['piece']],
+    ]);
     assert.deepEqual(paths(checkDoughFormula(leanDough({ piece: '0 g' }))), [['error', ['piece']]]);
     assert.deepEqual(checkDoughFormula(leanDough({ piece: '3 oz' })), []);
   });

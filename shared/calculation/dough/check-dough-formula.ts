@@ -91,7 +91,11 @@ function checkPreferment(formula: DoughFormula): ContentProblem[] {
   if (!preferment) return [];
   const problems: ContentProblem[] = [];
   const seen = new Set<string>();
-  const matched: { entry: { name: string; pct: number }; index: number; ingredient: DoughIngredient }[] = [];
+  const matched: {
+    entry: { name: string; pct: number };
+    index: number;
+    ingredient: DoughIngredient;
+  }[] = [];
   preferment.ingredients.forEach((entry, index) => {
     const key = nameKey(entry.name);
     const ingredient = findIngredient(formula.ingredients, entry.name);
@@ -152,11 +156,16 @@ function checkPieceAndTemperatures(formula: DoughFormula): ContentProblem[] {
   if (formula.piece !== undefined) {
     try {
       if (!parseMass(formula.piece).greaterThan(0)) {
-        problems.push(contentError(['piece'], `The piece weight "${formula.piece}" must be more than 0.`));
+        problems.push(
+          contentError(['piece'], `The piece weight "${formula.piece}" must be more than 0.`),
+        );
       }
     } catch (error) {
       problems.push(
-        contentError(['piece'], `The piece weight "${formula.piece}" is not a weight: ${reason(error)}.`),
+        contentError(
+          ['piece'],
+          `The piece weight "${formula.piece}" is not a weight: ${reason(error)}.`,
+        ),
       );
     }
   }

@@ -1,4 +1,6 @@
+import { type Decimal, sum } from '../../decimal.ts';
 import type { DoughFormula, DoughIngredient, Preferment } from '../../formula/formula-types.ts';
+import type { CalcResult, Figure, LineGroup } from '../calc-result.ts';
 
 // Formulas shared by the dough specs; kept out of the *.spec.ts files so each spec stays short.
 
@@ -7,14 +9,23 @@ export function doughFormula(
   ingredients: DoughIngredient[],
   extra: Partial<Omit<DoughFormula, 'ingredients' | 'kind'>> = {},
 ): DoughFormula {
-  return { formula: 1, id: 'test-dough', title: 'Test dough', kind: 'dough', ingredients, ...extra };
+  return {
+    formula: 1,
+    id: 'test-dough',
+    title: 'Test dough',
+    kind: 'dough',
+    ingredients,
+    ...extra,
+  };
 }
 
 /**
  * Lean bread, flour 100, water 67, salt 2, yeast 1 = 170 %.
  * source: course worksheet, pieces × piece weight (issuing school not identified; check-values WE-14)
  */
-export function leanDough(extra: Partial<Omit<DoughFormula, 'ingredients' | 'kind'>> = {}): DoughFormula {
+export function leanDough(
+  extra: Partial<Omit<DoughFormula, 'ingredients' | 'kind'>> = {},
+): DoughFormula {
   return doughFormula(
     [
       { name: 'Bread flour', pct: 100, flour: true, allergens: ['wheat'] },
@@ -30,7 +41,9 @@ export function leanDough(extra: Partial<Omit<DoughFormula, 'ingredients' | 'kin
  * Enriched buns, 182.8 %: bread flour 100, whole milk 50, whole egg 10, butter 10, honey 5,
  * water 5, instant yeast 1, salt 1.8. own example, derived (check-values WE-16)
  */
-export function bunDough(extra: Partial<Omit<DoughFormula, 'ingredients' | 'kind'>> = {}): DoughFormula {
+export function bunDough(
+  extra: Partial<Omit<DoughFormula, 'ingredients' | 'kind'>> = {},
+): DoughFormula {
   return doughFormula(
     [
       { name: 'Bread flour', pct: 100, flour: true, allergens: ['wheat'] },
@@ -71,4 +84,27 @@ export function poolishDough(preferment: Preferment = POOLISH): DoughFormula {
     ],
     { preferment },
   );
+}
+
+/** A group's lines as name → grams to a number of decimals. */
+export function gramsByName(group: LineGroup, places: number): Record<string, string> {
+  return Object.fromEntries(group.lines.map((line) => [line.name, line.grams.toFixed(places)]));
+}
+
+/** The exact sum of a group's lines, grams. */
+export function groupTotal(group: LineGroup): Decimal {
+  return sum(group.lines.map((line) => line.grams));
+}
+
+/** A result's figure by label. */
+export function figure(result: CalcResult, label: string): Figure | undefined {
+  return result.figures.find((f) => f.label === label);
+}
+
+/** A result's numeric figure by label; throws when there is none. */
+export function figureValue(result: CalcResult, label: string): Decimal {
+  const value = figure(result, label)?.value;
+  if (value === undefined || typeof value === 'string')
+    throw new Error(`no numeric figure "${label}"`);
+  return value;
 }

@@ -1,4 +1,5 @@
-import { Decimal, HUNDRED, ZERO, dec, sum } from '../../decimal.ts';
+import type { Decimal } from '../../decimal.ts';
+import { HUNDRED, ZERO, dec, sum } from '../../decimal.ts';
 import { WATER_CONTENT } from '../../reference/water-content.ts';
 import type { DoughLine } from './dough-line.ts';
 

@@ -59,6 +59,8 @@ describe('splitting off a preferment', () => {
 
   it('should refuse a preferment that needs more than the overall formula holds', () => {
     const preferment = { ...POOLISH, flour_pct: 80 };
-    assert.throws(() => splitPreferment(poolishDough(preferment).ingredients, preferment, dec(1000)));
+    assert.throws(() =>
+      splitPreferment(poolishDough(preferment).ingredients, preferment, dec(1000)),
+    );
   });
 });

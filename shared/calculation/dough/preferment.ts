@@ -50,7 +50,10 @@ export function splitPreferment(
   const taken = new Map<DoughIngredient, Decimal>();
   const lines = preferment.ingredients.map((entry) => {
     const ingredient = requireIngredient(ingredients, entry.name);
-    taken.set(ingredient, (taken.get(ingredient) ?? new Decimal(0)).plus(prefermentShare(preferment, entry.pct)));
+    taken.set(
+      ingredient,
+      (taken.get(ingredient) ?? new Decimal(0)).plus(prefermentShare(preferment, entry.pct)),
+    );
     return lineAtPercent(ingredient, dec(entry.pct), prefermentFlour);
   });
   const final: DoughLine[] = [];
@@ -58,7 +61,9 @@ export function splitPreferment(
     const left = dec(ingredient.pct).minus(taken.get(ingredient) ?? 0);
     if (left.isNegative()) {
       // checkDoughFormula() reports this; reaching it here is a programming error.
-      throw new Error(`the preferment needs more ${ingredient.name} than the overall formula holds`);
+      throw new Error(
+        `the preferment needs more ${ingredient.name} than the overall formula holds`,
+      );
     }
     if (!left.isZero()) final.push(lineAtPercent(ingredient, left, flourGrams));
   }

@@ -70,11 +70,14 @@ describe('scaling a dough batch', () => {
   });
 
   it('should refuse a batch without a size', () => {
-    assert.throws(() => scaleDough(leanDough(), {}), (error: unknown) => {
-      assert.ok(error instanceof BatchError);
-      assert.match(error.message, /--pieces.*--total.*--flour/);
-      return true;
-    });
+    assert.throws(
+      () => scaleDough(leanDough(), {}),
+      (error: unknown) => {
+        assert.ok(error instanceof BatchError);
+        assert.match(error.message, /--pieces.*--total.*--flour/);
+        return true;
+      },
+    );
   });
 
   it('should refuse a batch with two sizes and name the second option', () => {
@@ -103,12 +106,22 @@ describe('scaling a dough batch', () => {
   });
 
   it('should refuse impossible sizes', () => {
-    const refuses = (option: string) => (error: unknown) => error instanceof BatchError && error.option === option;
+    const refuses = (option: string) => (error: unknown) =>
+      error instanceof BatchError && error.option === option;
     assert.throws(() => scaleDough(leanDough(), { pieces: 0, piece: dec(80) }), refuses('pieces'));
-    assert.throws(() => scaleDough(leanDough(), { pieces: 2.5, piece: dec(80) }), refuses('pieces'));
+    assert.throws(
+      () => scaleDough(leanDough(), { pieces: 2.5, piece: dec(80) }),
+      refuses('pieces'),
+    );
     assert.throws(() => scaleDough(leanDough(), { pieces: 4, piece: dec(0) }), refuses('piece'));
-    assert.throws(() => scaleDough(leanDough(), { pieces: 4, piece: dec(80), loss: dec(100) }), refuses('loss'));
-    assert.throws(() => scaleDough(leanDough(), { pieces: 4, piece: dec(80), loss: dec(-1) }), refuses('loss'));
+    assert.throws(
+      () => scaleDough(leanDough(), { pieces: 4, piece: dec(80), loss: dec(100) }),
+      refuses('loss'),
+    );
+    assert.throws(
+      () => scaleDough(leanDough(), { pieces: 4, piece: dec(80), loss: dec(-1) }),
+      refuses('loss'),
+    );
     assert.throws(() => scaleDough(leanDough(), { total: dec(0) }), refuses('total'));
     assert.throws(() => scaleDough(leanDough(), { flour: dec(-5) }), refuses('flour'));
   });

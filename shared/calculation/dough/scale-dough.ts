@@ -1,4 +1,5 @@
-import { Decimal, HUNDRED, ONE, ZERO, dec } from '../../decimal.ts';
+import type { Decimal } from '../../decimal.ts';
+import { HUNDRED, ONE, ZERO, dec } from '../../decimal.ts';
 import type { DoughFormula } from '../../formula/formula-types.ts';
 import { parseMass } from '../../units/mass.ts';
 import { BatchError } from '../batch-error.ts';
@@ -42,7 +43,10 @@ export function doughForPieces(count: number, pieceGrams: Decimal, lossPct: Deci
   return dec(count).times(pieceGrams).div(kept);
 }
 
-function pieceWeight(formula: DoughFormula, batch: BatchInput): { grams: Decimal; fromFormula: boolean } {
+function pieceWeight(
+  formula: DoughFormula,
+  batch: BatchInput,
+): { grams: Decimal; fromFormula: boolean } {
   if (batch.piece !== undefined) return { grams: batch.piece, fromFormula: false };
   if (formula.piece !== undefined) return { grams: parseMass(formula.piece), fromFormula: true };
   throw new BatchError(
@@ -60,13 +64,22 @@ function scaleByPieces(formula: DoughFormula, batch: BatchInput, totalPct: Decim
   if (!piece.grams.greaterThan(ZERO)) {
     throw new BatchError('The piece weight must be more than 0 g.', 'piece');
   }
-  const lossGiven = batch.loss ?? (formula.loss_pct === undefined ? undefined : dec(formula.loss_pct));
+  const lossGiven =
+    batch.loss ?? (formula.loss_pct === undefined ? undefined : dec(formula.loss_pct));
   const loss = lossGiven ?? ZERO;
   if (loss.isNegative() || loss.greaterThanOrEqualTo(HUNDRED)) {
-    throw new BatchError(`The loss allowance must be from 0 % to under 100 %, not ${loss.toString()} %.`, 'loss');
+    throw new BatchError(
+      `The loss allowance must be from 0 % to under 100 %, not ${loss.toString()} %.`,
+      'loss',
+    );
   }
   const doughGrams = doughForPieces(count, piece.grams, loss);
-  const lossSource = batch.loss !== undefined ? '' : lossGiven !== undefined ? 'from the formula; ' : 'none given, 0 %; ';
+  const lossSource =
+    batch.loss !== undefined
+      ? ''
+      : lossGiven !== undefined
+        ? 'from the formula; '
+        : 'none given, 0 %; ';
   return {
     mode: 'pieces',
     doughGrams,
@@ -110,7 +123,10 @@ export function scaleDough(formula: DoughFormula, batch: BatchInput): DoughScale
     );
   }
   if (batch.pieces === undefined && batch.piece !== undefined) {
-    throw new BatchError('--piece is the weight of one piece and needs --pieces (how many).', 'piece');
+    throw new BatchError(
+      '--piece is the weight of one piece and needs --pieces (how many).',
+      'piece',
+    );
   }
   const totalPct = totalFormulaPercent(formula.ingredients);
   if (batch.pieces !== undefined) return scaleByPieces(formula, batch, totalPct);
@@ -120,7 +136,8 @@ export function scaleDough(formula: DoughFormula, batch: BatchInput): DoughScale
       ? ['--loss applies only when scaling by --pieces; it was ignored for this batch.']
       : [];
   if (batch.total !== undefined) {
-    if (!batch.total.greaterThan(ZERO)) throw new BatchError('--total must be more than 0 g.', 'total');
+    if (!batch.total.greaterThan(ZERO))
+      throw new BatchError('--total must be more than 0 g.', 'total');
     return {
       mode: 'total',
       doughGrams: batch.total,

@@ -1,4 +1,5 @@
-import { Decimal, HUNDRED, ONE, ZERO } from '../../decimal.ts';
+import type { Decimal } from '../../decimal.ts';
+import { HUNDRED, ONE, ZERO } from '../../decimal.ts';
 import type { DoughFormula } from '../../formula/formula-types.ts';
 import { parseTemperature, parseTemperatureDifference } from '../../units/temperature.ts';
 import type { BatchInput } from '../batch-input.ts';
@@ -30,7 +31,10 @@ function temperatureInput(label: string, value: Decimal, note?: string): Figure 
   return { label, kind: 'temperature', value, ...(note ? { note } : {}) };
 }
 
-function ddtOf(formula: DoughFormula, batch: BatchInput): { value: Decimal; fromFormula: boolean } | undefined {
+function ddtOf(
+  formula: DoughFormula,
+  batch: BatchInput,
+): { value: Decimal; fromFormula: boolean } | undefined {
   if (batch.ddt !== undefined) return { value: batch.ddt, fromFormula: false };
   if (formula.ddt) return { value: parseTemperature(formula.ddt.target), fromFormula: true };
   return undefined;
@@ -48,7 +52,10 @@ function temperatureOptionsGiven(batch: BatchInput): string[] {
   return given.filter(([value]) => value !== undefined).map(([, option]) => option);
 }
 
-function frictionOf(formula: DoughFormula, batch: BatchInput): { value: Decimal; note?: string; warning?: string } {
+function frictionOf(
+  formula: DoughFormula,
+  batch: BatchInput,
+): { value: Decimal; note?: string; warning?: string } {
   if (batch.friction !== undefined) return { value: batch.friction };
   if (formula.ddt?.friction !== undefined) {
     return { value: parseTemperatureDifference(formula.ddt.friction), note: 'from the formula' };
@@ -76,16 +83,23 @@ export function planWaterTemperature(
   if (!ddt) {
     const given = temperatureOptionsGiven(batch);
     const warnings = given.length
-      ? [`${given.join(', ')} ${given.length > 1 ? 'were' : 'was'} given, but there is no desired dough temperature: give --ddt or set ddt.target in the formula.`]
+      ? [
+          `${given.join(', ')} ${given.length > 1 ? 'were' : 'was'} given, but there is no desired dough temperature: give --ddt or set ddt.target in the formula.`,
+        ]
       : [];
     return { inputs: [], figures: [], warnings };
   }
   const inputs: Figure[] = [
-    temperatureInput('Desired dough temperature', ddt.value, ddt.fromFormula ? 'from the formula' : undefined),
+    temperatureInput(
+      'Desired dough temperature',
+      ddt.value,
+      ddt.fromFormula ? 'from the formula' : undefined,
+    ),
   ];
   const warnings: string[] = [];
   if (batch.room !== undefined) inputs.push(temperatureInput('Room temperature', batch.room));
-  if (batch.flourTemp !== undefined) inputs.push(temperatureInput('Flour temperature', batch.flourTemp));
+  if (batch.flourTemp !== undefined)
+    inputs.push(temperatureInput('Flour temperature', batch.flourTemp));
   if (withPreferment && batch.prefermentTemp !== undefined) {
     inputs.push(temperatureInput('Preferment temperature', batch.prefermentTemp));
   }
@@ -100,7 +114,9 @@ export function planWaterTemperature(
     withPreferment && batch.prefermentTemp === undefined ? '--preferment-temp' : undefined,
   ].filter((option): option is string => option !== undefined);
   if (missing.length > 0) {
-    warnings.push(`The water temperature was not worked out: give ${missing.join(' and ')} (°C or °F).`);
+    warnings.push(
+      `The water temperature was not worked out: give ${missing.join(' and ')} (°C or °F).`,
+    );
     return { inputs, figures: [], warnings };
   }
 
@@ -139,10 +155,19 @@ export function planWaterTemperature(
       note: `(tap − water) ÷ (tap + ${ICE_MELT_DEGREES_C.toString()}), ice at 0 °C`,
     });
   }
-  return { inputs, figures, warnings, waterC, ...(ice.fraction ? { iceFraction: ice.fraction } : {}) };
+  return {
+    inputs,
+    figures,
+    warnings,
+    waterC,
+    ...(ice.fraction ? { iceFraction: ice.fraction } : {}),
+  };
 }
 
-function planIce(waterC: Decimal, tap: Decimal | undefined): { fraction?: Decimal; warnings: string[] } {
+function planIce(
+  waterC: Decimal,
+  tap: Decimal | undefined,
+): { fraction?: Decimal; warnings: string[] } {
   const belowFreezing = waterC.lessThan(ZERO);
   if (tap === undefined) {
     if (!belowFreezing) return { warnings: [] };
@@ -176,7 +201,11 @@ function planIce(waterC: Decimal, tap: Decimal | undefined): { fraction?: Decima
  * @param fraction share of the water to weigh as ice, 0 < fraction < 1
  * @param tapC tap water temperature, °C, for the note
  */
-export function splitWaterWithIce(lines: readonly DoughLine[], fraction: Decimal, tapC: Decimal): DoughLine[] {
+export function splitWaterWithIce(
+  lines: readonly DoughLine[],
+  fraction: Decimal,
+  tapC: Decimal,
+): DoughLine[] {
   const rest = ONE.minus(fraction);
   return lines.flatMap((line) => {
     if (line.role !== 'water') return [line];

@@ -6,18 +6,33 @@ import {
   parseTemperature,
   parseTemperatureDifference,
 } from '../../units/temperature.ts';
-import { frictionFromTrial, ICE_MELT_DEGREES_C, iceFraction, waterTemperature } from './water-temperature.ts';
+import {
+  frictionFromTrial,
+  ICE_MELT_DEGREES_C,
+  iceFraction,
+  waterTemperature,
+} from './water-temperature.ts';
 
 describe('water temperature for a desired dough temperature', () => {
   it('should need 87 °F water for DDT 75 °F, room and flour 65 °F, friction 8', () => {
     // source: San Francisco Baking Institute, Artisan I workshop reference material (2009) (WE-19)
-    const water = waterTemperature({ ddt: dec(75), room: dec(65), flour: dec(65), friction: dec(8) });
+    const water = waterTemperature({
+      ddt: dec(75),
+      room: dec(65),
+      flour: dec(65),
+      friction: dec(8),
+    });
     assert.equal(water.toString(), '87');
   });
 
   it('should need 65 °F water for DDT 80 °F, flour 65 °F, room 75 °F, friction 35', () => {
     // source: Pizza Today trade magazine, June 2018 (WE-19)
-    const water = waterTemperature({ ddt: dec(80), room: dec(75), flour: dec(65), friction: dec(35) });
+    const water = waterTemperature({
+      ddt: dec(80),
+      room: dec(75),
+      flour: dec(65),
+      friction: dec(35),
+    });
     assert.equal(water.toString(), '65');
   });
 
@@ -67,7 +82,12 @@ describe('water temperature for a desired dough temperature', () => {
   it('should find a friction factor of 38 from a trial mix', () => {
     // own example, derived (WE-20, D-7)
     assert.equal(
-      frictionFromTrial({ mixed: dec(80), room: dec(72), flour: dec(70), water: dec(60) }).toString(),
+      frictionFromTrial({
+        mixed: dec(80),
+        room: dec(72),
+        flour: dec(70),
+        water: dec(60),
+      }).toString(),
       '38',
     );
   });

@@ -75,7 +75,8 @@ const SPECIFIC_HEAT_OF_WATER = new Decimal('4.186');
  * figures match the published form.
  * from memory: 333.55 J/g ÷ 4.186 J/(g·K) = 79.68…
  */
-export const ICE_MELT_DEGREES_C: Decimal = LATENT_HEAT_OF_FUSION.div(SPECIFIC_HEAT_OF_WATER).toDecimalPlaces(1);
+export const ICE_MELT_DEGREES_C: Decimal =
+  LATENT_HEAT_OF_FUSION.div(SPECIFIC_HEAT_OF_WATER).toDecimalPlaces(1);
 
 /**
  * Share of the water to weigh as ice (at 0 °C) so that tap water and ice together act like water

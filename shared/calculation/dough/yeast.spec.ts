@@ -19,8 +19,14 @@ describe('converting yeast', () => {
 
   it('should turn 30 g fresh yeast into 15.0 g active dry and 10.0 g instant by the common set', () => {
     // common practice, no source (WE-22, D-10)
-    assert.equal(convertYeast(dec(30), 'fresh', 'active-dry', COMMON_YEAST_FACTORS).toFixed(1), '15.0');
-    assert.equal(convertYeast(dec(30), 'fresh', 'instant', COMMON_YEAST_FACTORS).toFixed(1), '10.0');
+    assert.equal(
+      convertYeast(dec(30), 'fresh', 'active-dry', COMMON_YEAST_FACTORS).toFixed(1),
+      '15.0',
+    );
+    assert.equal(
+      convertYeast(dec(30), 'fresh', 'instant', COMMON_YEAST_FACTORS).toFixed(1),
+      '10.0',
+    );
   });
 
   it('should use the published set by default', () => {

@@ -49,12 +49,14 @@ export function convertYeastLine(
 ): DoughLine {
   const from = line.yeast;
   if (from === undefined || from === to) return line;
+  // Keep the formula's own name in the note unless it only repeats the kind ("instant yeast").
+  const ownName = line.name.trim().toLowerCase() === yeastLabel(from) ? '' : ` (${line.name})`;
   return {
     ...line,
     name: capitalized(yeastLabel(to)),
     grams: convertYeast(line.grams, from, to, factors),
     percent: convertYeast(line.percent, from, to, factors),
     yeast: to,
-    note: `converted from ${line.grams.toFixed(1)} g ${yeastLabel(from)} (${line.name}), ${factors.name}`,
+    note: `converted from ${line.grams.toFixed(1)} g ${yeastLabel(from)}${ownName}, ${factors.name}`,
   };
 }

@@ -25,7 +25,11 @@ export function baseIngredient(formula: MixFormula): MixIngredient {
 }
 
 /** The base weight from --base, or from --total ÷ (Σ pct ÷ 100), with the input echoed. */
-function baseGrams(formula: MixFormula, base: MixIngredient, batch: BatchInput): { grams: Decimal; input: Figure } {
+function baseGrams(
+  formula: MixFormula,
+  base: MixIngredient,
+  batch: BatchInput,
+): { grams: Decimal; input: Figure } {
   if (batch.base !== undefined && batch.total !== undefined) {
     throw new BatchError('Give only one of --base or --total, not both.', 'total');
   }
@@ -33,7 +37,10 @@ function baseGrams(formula: MixFormula, base: MixIngredient, batch: BatchInput):
     if (!batch.base.greaterThan(0)) {
       throw new BatchError(`--base must be more than 0 g, not ${batch.base} g`, 'base');
     }
-    return { grams: batch.base, input: { label: `base: ${base.name}`, kind: 'mass', value: batch.base } };
+    return {
+      grams: batch.base,
+      input: { label: `base: ${base.name}`, kind: 'mass', value: batch.base },
+    };
   }
   if (batch.total !== undefined) {
     if (!batch.total.greaterThan(0)) {

@@ -1,6 +1,10 @@
 import { Decimal, HUNDRED } from '../../decimal.ts';
 import type { MixFormula } from '../../formula/formula-types.ts';
-import { type ContentProblem, contentError, contentWarning } from '../../formula/formula-problem.ts';
+import {
+  type ContentProblem,
+  contentError,
+  contentWarning,
+} from '../../formula/formula-problem.ts';
 
 /**
  * Checks what the schema cannot about a mix formula: exactly one ingredient is the base, the
@@ -33,7 +37,10 @@ export function checkMixFormula(formula: MixFormula): ContentProblem[] {
     const base = formula.ingredients[i];
     if (!new Decimal(base.pct).equals(HUNDRED)) {
       problems.push(
-        contentError(['ingredients', i, 'pct'], `the base "${base.name}" must be at 100 %, not ${base.pct} %`),
+        contentError(
+          ['ingredients', i, 'pct'],
+          `the base "${base.name}" must be at 100 %, not ${base.pct} %`,
+        ),
       );
     }
   }
@@ -42,7 +49,9 @@ export function checkMixFormula(formula: MixFormula): ContentProblem[] {
   formula.ingredients.forEach((ingredient, i) => {
     const name = ingredient.name.trim().toLowerCase();
     if (seen.has(name)) {
-      problems.push(contentError(['ingredients', i, 'name'], `"${ingredient.name}" is listed twice`));
+      problems.push(
+        contentError(['ingredients', i, 'name'], `"${ingredient.name}" is listed twice`),
+      );
     }
     seen.add(name);
     if (ingredient.raw_egg && !(ingredient.allergens ?? []).includes('egg')) {
