@@ -82,7 +82,7 @@ export function blendMeat(
   if (batch.total !== undefined) {
     requirePositive(batch.total, 'total');
     meat = batch.total;
-    input = { label: 'meat weight', kind: 'mass', value: meat };
+    input = { label: 'Meat weight', kind: 'mass', value: meat };
   } else {
     const want = batch.want as Decimal;
     requirePositive(want, 'want');
@@ -90,7 +90,7 @@ export function blendMeat(
     // less its seasoning.
     meat = referenceFromFinished(want, formula.yields).div(ONE.plus(seasoning));
     const note = formula.yields ? 'worked back through the yields' : 'no yields: raw weight';
-    input = { label: 'finished weight wanted', kind: 'mass', value: want, note };
+    input = { label: 'Finished weight wanted', kind: 'mass', value: want, note };
   }
   return {
     amounts: pearsonSquare(fats.first, fats.second, fats.target, meat),

@@ -64,7 +64,7 @@ describe('calculateBlend, portions', () => {
     assert.ok(result.portions?.pieceGrams.equals(dec('113.3980925')));
     assert.equal(result.portions?.count, 176);
     assert.ok(result.portions?.remainderGrams.equals(dec('41.93572')));
-    assert.equal(result.inputs.at(-1)?.label, 'portion');
+    assert.equal(result.inputs.at(-1)?.label, 'Portion');
   });
 
   it('should prefer --portion to the formula portion and count the seasoning in', () => {
@@ -80,7 +80,7 @@ describe('calculateBlend, portions', () => {
     const result = calculateBlend(we25({ portion: '0.25 lb', yields: { cook: 72 } }), {
       total: dec('20000'),
     });
-    assert.ok(figure(result, 'cooked portion').equals(dec('81.6466266')));
+    assert.ok(figure(result, 'Cooked portion').equals(dec('81.6466266')));
   });
 
   it('should give no portions when neither the batch nor the formula has one', () => {
@@ -138,9 +138,9 @@ describe('calculateBlend, cautions and echoes', () => {
     assert.deepEqual(
       result.inputs.map((f) => [f.label, (f.value as Decimal).toString(), f.note]),
       [
-        ['target fat', '20', 'from the formula'],
-        ['meat weight', '1000', undefined],
-        ['portion', '150', 'from the formula (150 g)'],
+        ['Target fat', '20', 'from the formula'],
+        ['Meat weight', '1000', undefined],
+        ['Portion', '150', 'from the formula (150 g)'],
       ],
     );
     assert.deepEqual(result.steps, ['Grind cold.']);

@@ -52,7 +52,7 @@ function meatGrams(result: CalcResult): Decimal[] {
 }
 
 function fatFigure(result: CalcResult): Decimal {
-  return result.figures.find((f) => f.label === 'blend fat')?.value as Decimal;
+  return result.figures.find((f) => f.label === 'Blend fat')?.value as Decimal;
 }
 
 function close(actual: Decimal, expected: Decimal): boolean {

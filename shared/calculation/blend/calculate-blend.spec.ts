@@ -20,9 +20,9 @@ describe('calculateBlend, sizes', () => {
         ['50/50 trim (50 % fat)', 'component', '25000', '25'],
       ],
     );
-    assert.ok(figure(result, 'blend fat').equals(dec('20')));
-    assert.ok(figure(result, 'chemical lean').equals(dec('80')));
-    assert.ok(figure(result, 'total batch weight').equals(dec('100000')));
+    assert.ok(figure(result, 'Blend fat').equals(dec('20')));
+    assert.ok(figure(result, 'Chemical lean').equals(dec('80')));
+    assert.ok(figure(result, 'Total batch weight').equals(dec('100000')));
     assert.equal(result.groups.length, 1);
   });
 
@@ -31,8 +31,8 @@ describe('calculateBlend, sizes', () => {
     // 1.2 + 2.0 = 3.2 kg fat = 20 % of 16 kg.
     const result = calculateBlend(we25(), { onHand: { key: 'lean', grams: dec('12000') } });
     assert.deepEqual(grams(result, 'Meat'), ['12000.000', '4000.000']);
-    assert.ok(figure(result, 'blend fat').equals(dec('20')));
-    assert.ok(figure(result, 'total batch weight').equals(dec('16000')));
+    assert.ok(figure(result, 'Blend fat').equals(dec('20')));
+    assert.ok(figure(result, 'Total batch weight').equals(dec('16000')));
     assert.equal(result.inputs[1].label, 'on hand: lean 90/10 trim');
   });
 
@@ -54,7 +54,7 @@ describe('calculateBlend, sizes', () => {
     const result = calculateBlend(formula, { total: dec('100000') });
     assert.deepEqual(grams(result, 'Meat'), ['75000.000', '25000.000']);
     assert.equal(result.groups[0].lines[0].name, 'lean trim (10 % fat)');
-    assert.ok(figure(result, 'chemical lean').equals(dec('80')));
+    assert.ok(figure(result, 'Chemical lean').equals(dec('80')));
   });
 
   it('should use --target-fat instead of the formula target', () => {
@@ -68,7 +68,7 @@ describe('calculateBlend, sizes', () => {
     // source: check-values WE-29 (P-5; USDA ARS Table of Cooking Yields): 50 / 0.72 = 69.444 kg,
     // split by WE-25: 75 % = 52.083 kg, 25 % = 17.361 kg.
     const result = calculateBlend(we25({ yields: { cook: 72 } }), { want: dec('50000') });
-    assert.equal(figure(result, 'total batch weight').toFixed(3), '69444.444');
+    assert.equal(figure(result, 'Total batch weight').toFixed(3), '69444.444');
     assert.deepEqual(grams(result, 'Meat'), ['52083.333', '17361.111']);
     assert.equal(result.yields?.[0].step, 'cook');
     assert.equal(result.yields?.[0].grams.toFixed(3), '50000.000');
@@ -76,7 +76,7 @@ describe('calculateBlend, sizes', () => {
 
   it('should take the finished weight as the raw weight when there are no yields', () => {
     const result = calculateBlend(we25(), { want: dec('8000') });
-    assert.ok(figure(result, 'total batch weight').equals(dec('8000')));
+    assert.ok(figure(result, 'Total batch weight').equals(dec('8000')));
     assert.equal(result.yields, undefined);
   });
 
@@ -103,7 +103,7 @@ describe('calculateBlend, sizes', () => {
         ['cook', '50000.000'],
       ],
     );
-    assert.equal(figure(result, 'total batch weight').toFixed(3), '69444.444');
+    assert.equal(figure(result, 'Total batch weight').toFixed(3), '69444.444');
   });
 
   it('should add a Seasoning group in percent of the meat weight', () => {
@@ -119,8 +119,8 @@ describe('calculateBlend, sizes', () => {
     assert.equal(seasoning.title, 'Seasoning');
     assert.equal(seasoning.percentOf, 'meat weight');
     assert.deepEqual(grams(result, 'Seasoning'), ['150.000', '50.000']);
-    assert.ok(figure(result, 'total batch weight').equals(dec('10200')));
+    assert.ok(figure(result, 'Total batch weight').equals(dec('10200')));
     // The blend fat is the meat's: seasoning does not change what the trims were mixed to.
-    assert.ok(figure(result, 'blend fat').equals(dec('20')));
+    assert.ok(figure(result, 'Blend fat').equals(dec('20')));
   });
 });

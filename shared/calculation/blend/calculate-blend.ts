@@ -40,11 +40,11 @@ function portionGrams(formula: BlendFormula, batch: BatchInput): Figure | undefi
     if (!batch.portion.greaterThan(0)) {
       throw new BatchError(`--portion must be more than 0 g, not ${batch.portion} g`, 'portion');
     }
-    return { label: 'portion', kind: 'mass', value: batch.portion, note: 'from --portion' };
+    return { label: 'Portion', kind: 'mass', value: batch.portion, note: 'from --portion' };
   }
   if (formula.portion === undefined) return undefined;
   const note = `from the formula (${formula.portion})`;
-  return { label: 'portion', kind: 'mass', value: parseMass(formula.portion), note };
+  return { label: 'Portion', kind: 'mass', value: parseMass(formula.portion), note };
 }
 
 /**
@@ -132,9 +132,9 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
     { grams: size.amounts.second, fat: fats.second },
   ]);
   const figures: Figure[] = [
-    { label: 'blend fat', kind: 'percent', value: fat },
-    { label: 'chemical lean', kind: 'percent', value: HUNDRED.minus(fat) },
-    { label: 'total batch weight', kind: 'mass', value: batchGrams },
+    { label: 'Blend fat', kind: 'percent', value: fat },
+    { label: 'Chemical lean', kind: 'percent', value: HUNDRED.minus(fat) },
+    { label: 'Total batch weight', kind: 'mass', value: batchGrams },
   ];
 
   const portion = portionGrams(formula, batch);
@@ -144,7 +144,7 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
     const cook = formula.yields?.cook;
     if (cook !== undefined) {
       figures.push({
-        label: 'cooked portion',
+        label: 'Cooked portion',
         kind: 'mass',
         value: portions.pieceGrams.times(new Decimal(cook)).div(HUNDRED),
         note: `at ${cook} % cook yield`,
@@ -154,7 +154,7 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
 
   const allergens = collectAllergens(seasoning.map((i) => i.allergens));
   const inputs: Figure[] = [
-    { label: 'target fat', kind: 'percent', value: target.value, note: target.note },
+    { label: 'Target fat', kind: 'percent', value: target.value, note: target.note },
     ...size.inputs,
   ];
   if (portion) inputs.push(portion);

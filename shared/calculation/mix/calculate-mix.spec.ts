@@ -45,7 +45,7 @@ function lineGrams(result: CalcResult): string[] {
 }
 
 function total(result: CalcResult): Decimal {
-  return result.figures.find((f) => f.label === 'total weight')?.value as Decimal;
+  return result.figures.find((f) => f.label === 'Total weight')?.value as Decimal;
 }
 
 function batchError(option: string | undefined, pattern: RegExp): (error: unknown) => boolean {
@@ -64,7 +64,7 @@ describe('calculateMix', () => {
     const result = calculateMix(aioli(), { base: dec('2000') });
     const group = result.groups[0];
     assert.equal(group.title, 'Mix');
-    assert.equal(group.percentOf, 'olive oil (base)');
+    assert.equal(group.percentOf, 'base');
     assert.deepEqual(lineGrams(result), ['2000', '240', '100', '120', '30']);
     assert.deepEqual(
       group.lines.map((line) => line.percent?.toString()),
@@ -84,7 +84,7 @@ describe('calculateMix', () => {
     assert.ok(total(result).equals(dec('2490')));
     assert.deepEqual(
       result.inputs.map((f) => f.label),
-      ['total weight'],
+      ['Total weight'],
     );
   });
 

@@ -49,7 +49,7 @@ function baseGrams(
     const allPercent = sum(formula.ingredients.map((ingredient) => new Decimal(ingredient.pct)));
     // Multiply before dividing: one rounding, and none when the percentages divide the total.
     const grams = batch.total.times(HUNDRED).div(allPercent);
-    return { grams, input: { label: 'total weight', kind: 'mass', value: batch.total } };
+    return { grams, input: { label: 'Total weight', kind: 'mass', value: batch.total } };
   }
   throw new BatchError(
     `Give the batch size with --base (weight of ${base.name}) or --total (weight of the whole mix).`,
@@ -102,9 +102,9 @@ export function calculateMix(formula: MixFormula, batch: BatchInput): CalcResult
   return {
     formula: { id: formula.id, title: formula.title, kind: formula.kind },
     inputs: [size.input],
-    groups: [{ title: 'Mix', percentOf: `${base.name} (base)`, lines, totalLabel: 'Total' }],
+    groups: [{ title: 'Mix', percentOf: 'base', lines, totalLabel: 'Total' }],
     steps: formula.steps ?? [],
-    figures: [{ label: 'total weight', kind: 'mass', value: total }],
+    figures: [{ label: 'Total weight', kind: 'mass', value: total }],
     checks: [],
     warnings: [],
     cautions,
