@@ -2,7 +2,15 @@ import assert from 'node:assert/strict';
 import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
-import { calculate, failsCriticalLimit, formatProblem, parseBatchOptions, readFormula, type Formula, type RawBatchOptions } from '../../shared/index.ts';
+import {
+  calculate,
+  failsCriticalLimit,
+  formatProblem,
+  parseBatchOptions,
+  readFormula,
+  type Formula,
+  type RawBatchOptions,
+} from '../../shared/index.ts';
 
 const FOLDER = 'formulas';
 const files = readdirSync(FOLDER).filter((name) => name.endsWith('.yaml'));
@@ -17,13 +25,29 @@ const SAMPLE: Record<Formula['kind'], RawBatchOptions> = {
 
 describe('the demo formulas', () => {
   it('should include every kind the brief asks for', () => {
-    const kinds = files.map((file) => readFormula(readFileSync(path.join(FOLDER, file), 'utf8'), file).formula);
-    const methods = kinds.filter((f) => f?.kind === 'cure').map((f) => (f?.kind === 'cure' ? `${f.product}/${f.method}` : ''));
+    const kinds = files.map(
+      (file) => readFormula(readFileSync(path.join(FOLDER, file), 'utf8'), file).formula,
+    );
+    const methods = kinds
+      .filter((f) => f?.kind === 'cure')
+      .map((f) => (f?.kind === 'cure' ? `${f.product}/${f.method}` : ''));
     assert.ok(methods.includes('bacon/dry'), 'a dry-cured bacon');
-    assert.ok(methods.some((m) => m.endsWith('/brine')), 'a brine-cured item');
-    assert.ok(methods.some((m) => m.endsWith('/pump')), 'an injected item');
-    assert.ok(kinds.some((f) => f?.kind === 'blend' && f.portion), 'a grind blend with portions');
-    assert.ok(kinds.some((f) => f?.kind === 'dough' && f.preferment), 'a dough with a preferment');
+    assert.ok(
+      methods.some((m) => m.endsWith('/brine')),
+      'a brine-cured item',
+    );
+    assert.ok(
+      methods.some((m) => m.endsWith('/pump')),
+      'an injected item',
+    );
+    assert.ok(
+      kinds.some((f) => f?.kind === 'blend' && f.portion),
+      'a grind blend with portions',
+    );
+    assert.ok(
+      kinds.some((f) => f?.kind === 'dough' && f.preferment),
+      'a dough with a preferment',
+    );
     assert.ok(kinds.filter((f) => f?.kind === 'mix').length >= 2, 'a sauce and a seasoning blend');
   });
 
@@ -38,7 +62,10 @@ describe('the demo formulas', () => {
       });
 
       it('should point editors at the schema and be named for its id', () => {
-        assert.match(text.split('\n')[0], /^# yaml-language-server: \$schema=\.\.\/shared\/schema\/formula\.schema\.json$/);
+        assert.match(
+          text.split('\n')[0],
+          /^# yaml-language-server: \$schema=\.\.\/shared\/schema\/formula\.schema\.json$/,
+        );
         assert.equal(`${reading.formula?.id}.yaml`, file);
       });
 
