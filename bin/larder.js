@@ -1,12 +1,15 @@
 #!/usr/bin/env node
-// The larder command: runs the bundle built by `npm run build:cli` (run on npm install).
-import { existsSync } from 'node:fs';
+// The larder command. Runs the bundle in dist/cli/, building it first when it is missing or
+// older than its sources (a fresh clone, or after a pull); the build takes well under a second.
+import { pathToFileURL } from 'node:url';
+import { BUNDLE, buildCli, isStale } from '../scripts/cli-bundle.mjs';
 
-const bundle = new URL('../dist/cli/larder.js', import.meta.url);
-if (!existsSync(bundle)) {
-  process.stderr.write(
-    'larder: the command is not built yet; run `npm run build:cli` (npm install does it).\n',
-  );
-  process.exit(1);
+if (isStale()) {
+  try {
+    await buildCli();
+  } catch (error) {
+    process.stderr.write(`larder: could not build the command (run npm install first): ${error.message}\n`);
+    process.exit(1);
+  }
 }
-await import(bundle.href);
+await import(pathToFileURL(BUNDLE).href);
