@@ -8,7 +8,9 @@ if (isStale()) {
   try {
     await buildCli();
   } catch (error) {
-    process.stderr.write(`larder: could not build the command (run npm install first): ${error.message}\n`);
+    process.stderr.write(
+      `larder: could not build the command (run npm install first): ${error.message}\n`,
+    );
     process.exit(1);
   }
 }

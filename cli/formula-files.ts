@@ -95,22 +95,21 @@ function resolveFormula(reference: string, folder: string): string {
     if (!exists(reference)) throw new CliError(`${reference}: no such file`, EXIT.formula);
     return reference;
   }
-  for (const ext of ['.yaml', '.yml']) {
-    const candidate = path.join(folder, reference + ext);
-    if (exists(candidate)) return candidate;
-  }
   if (!exists(folder)) {
     throw new CliError(
       `no formula "${reference}": the formulas folder ${folder} does not exist (set --formulas or LARDER_FORMULAS)`,
       EXIT.formula,
     );
   }
-  // The id may differ from the file name; look inside each file's id: line.
+  // Look for the id inside the files, the one named for it first: a file's name may differ
+  // from the id it holds, and the id is what counts.
   const idLine = new RegExp(
     `^id:\\s*['"]?${reference.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}['"]?\\s*(#.*)?$`,
     'm',
   );
-  for (const file of formulaFilesIn(folder)) {
+  const named = new Set(['.yaml', '.yml'].map((ext) => path.join(folder, reference + ext)));
+  const files = formulaFilesIn(folder).sort((a, b) => Number(named.has(b)) - Number(named.has(a)));
+  for (const file of files) {
     if (idLine.test(readFileSync(file, 'utf8'))) return file;
   }
   throw new CliError(

@@ -15,7 +15,12 @@ export async function run(argv: readonly string[], io: Io = PROCESS_IO): Promise
   } catch (error) {
     if (error instanceof CommanderError) {
       // --help and --version end this way too, with code 0; commander has already printed.
-      return error.exitCode === 0 ? EXIT.ok : EXIT.usage;
+      if (error.exitCode === 0) return EXIT.ok;
+      if (json)
+        io.out(
+          `${JSON.stringify({ error: { message: error.message.replace(/^error: /, ''), exitCode: EXIT.usage, details: [] } }, null, 2)}\n`,
+        );
+      return EXIT.usage;
     }
     if (error instanceof CliError) {
       if (json)
@@ -30,6 +35,14 @@ export async function run(argv: readonly string[], io: Io = PROCESS_IO): Promise
     );
     return EXIT.internal;
   }
+}
+
+// A reader that stops early (`larder calc … | head`) closes the pipe: that is not an error.
+for (const stream of [process.stdout, process.stderr]) {
+  stream.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw error;
+  });
 }
 
 process.exitCode = await run(process.argv.slice(2));

@@ -51,6 +51,8 @@ export async function buildCli() {
       js: "import { createRequire as __larderRequire } from 'node:module'; const require = __larderRequire(import.meta.url);",
     },
   });
-  const ours = Object.keys(result.metafile.inputs).filter((file) => !file.startsWith('node_modules/'));
+  const ours = Object.keys(result.metafile.inputs).filter(
+    (file) => !file.startsWith('node_modules/'),
+  );
   writeFileSync(SOURCES, `${JSON.stringify([...ALWAYS, ...ours], null, 1)}\n`);
 }

@@ -1,4 +1,4 @@
-import { Command, Option } from 'commander';
+import { Command, InvalidArgumentError, Option } from 'commander';
 import {
   BatchError,
   calculate,
@@ -80,6 +80,15 @@ const BATCH_OPTIONS: readonly [keyof RawBatchOptions, string, string][] = [
   ['start', '--start <date>', 'day the batch starts, YYYY-MM-DD (default: today)'],
 ];
 
+/** A value parser that refuses an option given twice, instead of silently keeping the last. */
+function onlyOnce(flags: string): (value: string, previous: string | undefined) => string {
+  return (value, previous) => {
+    if (previous !== undefined)
+      throw new InvalidArgumentError(`${flags.split(' ')[0]} is given twice`);
+    return value;
+  };
+}
+
 interface CalcOptions extends RawBatchOptions {
   units: UnitSystem;
   json?: boolean;
@@ -101,16 +110,16 @@ export function calcCommand(io: Io): Command {
       '--formulas <folder>',
       'folder to look formula ids up in (default: $LARDER_FORMULAS or ./formulas)',
     );
-  for (const [, flags, help] of BATCH_OPTIONS) command.option(flags, help);
+  for (const [, flags, help] of BATCH_OPTIONS) command.option(flags, help, onlyOnce(flags));
   return command
     .addHelpText(
       'after',
       `
 Examples:
-  larder calc formulas/hickory-belly.yaml --meat 4.26kg --thickness 4cm
-  larder calc hickory-belly --meat "9 lb 6 oz" --units us
-  larder calc brisket-pump --meat 6kg --pumped-weight 6.66kg
-  larder calc pit-bun --pieces 48 --piece 90g --loss 3 --room 22C --flour-temp 20C --tap 16C
+  larder calc formulas/quillmoor-belly.yaml --meat 4.26kg --thickness 4cm
+  larder calc quillmoor-belly --meat "9 lb 6 oz" --thickness 1.5in --units us
+  larder calc ham-pump --meat 6kg --largest-piece 3kg --pumped-weight 6.7kg
+  larder calc pit-bun --pieces 48 --piece 90g --loss 3 --room 22C --flour-temp 20C --preferment-temp 19C --tap 16C
   larder calc chuck-grind --total 20kg --target-fat 20
   larder calc chuck-grind --on-hand lean=12kg --json
 ${EXIT_CODES_HELP}`,

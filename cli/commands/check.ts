@@ -1,5 +1,6 @@
 import { execFileSync } from 'node:child_process';
 import { statSync } from 'node:fs';
+import path from 'node:path';
 import { Command } from 'commander';
 import {
   formatProblem,
@@ -45,7 +46,7 @@ export function checkCommand(io: Io): Command {
       `
 Examples:
   larder check                      every formula under ./formulas
-  larder check formulas/bacon.yaml  one file
+  larder check formulas/ham-pump.yaml  one file
   larder check --staged             in .git/hooks/pre-commit: refuse a commit with a bad formula
 ${EXIT_CODES_HELP}`,
     )
@@ -93,12 +94,16 @@ function readPaths(paths: string[], io: Io): { file: string; reading: FormulaRea
     }
     files.push(...(isFolder ? formulaFilesIn(target) : [target]));
   }
-  const showProgress = io.errIsTty && files.length >= PROGRESS_FROM;
-  return files.map((file, i) => {
-    if (showProgress && (i % 25 === 0 || i === files.length - 1))
-      io.err(`\rchecking ${i + 1}/${files.length}`);
+  if (files.length === 0)
+    throw new CliError(`no formula files (*.yaml, *.yml) in ${paths.join(', ')}`, EXIT.formula);
+  // The same file named twice (a file and its folder) is checked once.
+  const unique = [...new Map(files.map((file) => [path.resolve(file), file])).values()];
+  const showProgress = io.errIsTty && unique.length >= PROGRESS_FROM;
+  return unique.map((file, i) => {
+    if (showProgress && (i % 25 === 0 || i === unique.length - 1))
+      io.err(`\rchecking ${i + 1}/${unique.length}`);
     const reading = readFormulaFile(file);
-    if (showProgress && i === files.length - 1) io.err('\n');
+    if (showProgress && i === unique.length - 1) io.err('\n');
     return { file, reading };
   });
 }
@@ -117,6 +122,15 @@ function git(args: string[]): string {
 }
 
 function readStaged(): { file: string; reading: FormulaReading }[] {
+  // Outside a repository git diff falls back to comparing files; ask first, to fail plainly.
+  try {
+    execFileSync('git', ['rev-parse', '--is-inside-work-tree'], { stdio: 'ignore' });
+  } catch {
+    throw new CliError(
+      '--staged needs a git repository, and this folder is not in one',
+      EXIT.usage,
+    );
+  }
   const names = git(['diff', '--cached', '--name-only', '--diff-filter=ACMR', '-z'])
     .split('\0')
     .filter((name) => name && isFormulaFile(name));

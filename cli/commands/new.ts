@@ -1,4 +1,4 @@
-import { existsSync, renameSync, writeFileSync } from 'node:fs';
+import { existsSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command, Option } from 'commander';
@@ -15,7 +15,7 @@ import { starterFormula } from '../starters/starters.ts';
 interface NewOptions {
   id?: string;
   title?: string;
-  method: CureMethod;
+  method?: CureMethod;
   out?: string;
   force?: boolean;
   json?: boolean;
@@ -40,9 +40,11 @@ export function newCommand(io: Io): Command {
     .option('--id <id>', 'formula id: lower-case letters, digits and dashes (default: new-KIND)')
     .option('--title <title>', 'title printed on the batch sheet')
     .addOption(
-      new Option('--method <method>', 'cure only: dry, brine or pump')
-        .choices(['dry', 'brine', 'pump'])
-        .default('dry'),
+      new Option('--method <method>', 'cure only: dry, brine or pump (default: dry)').choices([
+        'dry',
+        'brine',
+        'pump',
+      ]),
     )
     .option('--out <file>', 'where to write it, or - for standard output (default: ID.yaml here)')
     .option('--force', 'overwrite an existing file')
@@ -61,13 +63,21 @@ ${EXIT_CODES_HELP}`,
 
 function runNew(kind: FormulaKind, options: NewOptions, io: Io): void {
   const id = options.id ?? `new-${kind}`;
+  if (!/^[a-z0-9][a-z0-9-]{1,62}$/.test(id)) {
+    throw new CliError(
+      `--id "${id}" may hold only lower-case letters, digits and dashes, 2 to 63 characters`,
+      EXIT.usage,
+    );
+  }
+  if (options.method && kind !== 'cure')
+    throw new CliError('--method applies only to cure formulas', EXIT.usage);
   const out = options.out ?? `${id}.yaml`;
   const schemaPath =
     out === '-' ? schemaFile() : path.relative(path.dirname(path.resolve(out)), schemaFile());
   const text = starterFormula(kind, {
     id,
     title: options.title ?? `New ${kind} formula`,
-    method: options.method,
+    method: options.method ?? 'dry',
     schemaPath,
   });
   // The starter must itself pass the checks; a bad --id or --title shows here, before anything is written.
@@ -82,15 +92,32 @@ function runNew(kind: FormulaKind, options: NewOptions, io: Io): void {
     io.out(text);
     return;
   }
-  if (existsSync(out) && !options.force)
-    throw new CliError(`${out} already exists; choose another --out or add --force`, EXIT.usage);
-  // Write beside the target and rename, so an interrupted write never leaves half a file.
-  const temporary = `${out}.${process.pid}.tmp`;
-  writeFileSync(temporary, text, { flag: 'wx' });
-  renameSync(temporary, out);
+  writeAtomically(out, text, options.force ?? false);
   io.out(
     options.json
       ? `${JSON.stringify({ file: out, id, kind })}\n`
       : `Wrote ${out} (${kind}). Edit it, then run: larder check ${out}\n`,
   );
+}
+
+/** Writes beside the target and renames, so an interrupted write never leaves half a file. */
+function writeAtomically(out: string, text: string, force: boolean): void {
+  const folder = path.dirname(path.resolve(out));
+  if (!existsSync(folder))
+    throw new CliError(`the folder ${path.dirname(out)} does not exist`, EXIT.usage);
+  if (existsSync(out)) {
+    if (statSync(out).isDirectory())
+      throw new CliError(`${out} is a folder; give a file name with --out`, EXIT.usage);
+    if (!force)
+      throw new CliError(`${out} already exists; choose another --out or add --force`, EXIT.usage);
+  }
+  const temporary = `${out}.${process.pid}.tmp`;
+  try {
+    writeFileSync(temporary, text, { flag: 'wx' });
+    renameSync(temporary, out);
+  } catch (error) {
+    // A full disk or a permission problem: report it plainly and leave nothing behind.
+    rmSync(temporary, { force: true });
+    throw new CliError(`could not write ${out}: ${(error as Error).message}`, EXIT.usage);
+  }
 }

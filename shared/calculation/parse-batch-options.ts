@@ -23,6 +23,9 @@ function mass(maxKg: number): Reader {
   return (text, option) => {
     const grams = parseMass(text);
     if (grams.isZero()) throw new BatchError(`--${option} must be more than 0`, option);
+    // Below a gram nothing on the sheet could be weighed; it is a typo for kg or lb.
+    if (grams.lessThan(1))
+      throw new BatchError(`--${option} ${text} is less than 1 g; check the unit`, option);
     if (grams.greaterThan(KG.times(maxKg)))
       throw new BatchError(`--${option} ${text} is more than ${maxKg} kg; check the unit`, option);
     return grams;

@@ -11,6 +11,7 @@ import {
   formatGramsFine,
   formatScaleAmount,
   isMinorAmount,
+  KILOGRAM_DISPLAY_FROM,
   roundForScale,
   type ScaleAmount,
   type UnitSystem,
@@ -37,10 +38,15 @@ function weighsFine(line: AmountLine): boolean {
   return line.role === 'curing-salt' || isMinorAmount(line.grams);
 }
 
-function presentLine(line: AmountLine, system: UnitSystem, rounded: ScaleAmount): PresentedLine {
+function presentLine(
+  line: AmountLine,
+  system: UnitSystem,
+  rounded: ScaleAmount,
+  inKilograms: boolean,
+): PresentedLine {
   return {
     name: line.name,
-    amount: formatScaleAmount(rounded),
+    amount: formatScaleAmount(rounded, inKilograms),
     ...(system === 'us' && line.role === 'curing-salt'
       ? { gramsShown: formatGramsFine(line.grams) }
       : {}),
@@ -53,7 +59,9 @@ function presentLine(line: AmountLine, system: UnitSystem, rounded: ScaleAmount)
 
 function presentGroup(group: LineGroup, system: UnitSystem): PresentedGroup {
   const rounded = group.lines.map((line) => roundForScale(line.grams, system, weighsFine(line)));
-  const lines = group.lines.map((line, i) => presentLine(line, system, rounded[i]));
+  const exactTotal = sum(group.lines.map((line) => line.grams));
+  const inKilograms = exactTotal.greaterThanOrEqualTo(KILOGRAM_DISPLAY_FROM);
+  const lines = group.lines.map((line, i) => presentLine(line, system, rounded[i], inKilograms));
   if (!group.totalLabel || rounded.length === 0)
     return { title: group.title, percentOf: group.percentOf, lines };
   // The total is the sum of what is printed, so a cook adding up the sheet gets the same figure.
@@ -73,8 +81,8 @@ function presentGroup(group: LineGroup, system: UnitSystem): PresentedGroup {
     lines,
     total: {
       label: group.totalLabel,
-      amount: formatScaleAmount(total),
-      grams: sum(group.lines.map((line) => line.grams)).toString(),
+      amount: formatScaleAmount(total, inKilograms),
+      grams: exactTotal.toString(),
       ...(percentTotal ? { percent: percentTotal } : {}),
     },
   };
@@ -129,8 +137,20 @@ function presentCheck(check: LimitCheck): PresentedCheck {
   };
 }
 
-/** Rounds and formats a calculation for printing or JSON, in metric or US units. */
+/**
+ * Rounds and formats a calculation for printing or JSON, in metric or US units. A result that
+ * fails a critical limit is presented without anything to weigh, so that no sheet, screen or
+ * script can make the refused batch from it.
+ */
 export function presentResult(result: CalcResult, system: UnitSystem): PresentedResult {
+  if (failsCriticalLimit(result)) {
+    const { yields: _yields, portions: _portions, ...rest } = result;
+    return presentAll({ ...rest, groups: [] }, system);
+  }
+  return presentAll(result, system);
+}
+
+function presentAll(result: CalcResult, system: UnitSystem): PresentedResult {
   return {
     formula: result.formula,
     units: system,

@@ -14,7 +14,7 @@ export interface ScaleAmount {
 }
 
 /** Above this many grams a metric line is printed in kilograms (three decimals, still 1 g). */
-const KILOGRAM_DISPLAY_FROM = new Decimal(10_000);
+export const KILOGRAM_DISPLAY_FROM = new Decimal(10_000);
 /** Below this many grams an ingredient is "minor" and weighed to 0.1 g. source: product brief */
 export const MINOR_INGREDIENT_BELOW_GRAMS = new Decimal(100);
 
@@ -38,16 +38,21 @@ export function isMinorAmount(grams: Decimal): boolean {
   return grams.lessThan(MINOR_INGREDIENT_BELOW_GRAMS);
 }
 
-/** Prints a rounded amount: "95.9 g", "12.345 kg", "6.3 oz", "2 lb 3.4 oz". */
-export function formatScaleAmount(amount: ScaleAmount): string {
+/**
+ * Prints a rounded amount: "95.9 g", "12.345 kg", "6.3 oz", "2 lb 3.4 oz". Metric amounts of
+ * 10 kg or more print in kilograms; so do all 1 g lines of a block whose total reaches 10 kg
+ * (`inKilograms`), so that one column reads in one unit. Minor 0.1 g lines stay in grams.
+ */
+export function formatScaleAmount(amount: ScaleAmount, inKilograms = false): string {
   if (amount.unit === 'oz') {
     const pounds = amount.value.div(16).floor();
     const ounces = amount.value.minus(pounds.times(16));
     if (pounds.isZero()) return `${ounces.toFixed(1)} oz`;
     return `${pounds.toFixed(0)} lb ${ounces.toFixed(1)} oz`;
   }
-  if (amount.places === 0 && amount.value.greaterThanOrEqualTo(KILOGRAM_DISPLAY_FROM)) {
-    return `${amount.value.div(1000).toFixed(3)} kg`;
+  const large = amount.value.greaterThanOrEqualTo(KILOGRAM_DISPLAY_FROM);
+  if ((amount.places === 0 && (inKilograms || large)) || (amount.places > 0 && large)) {
+    return `${amount.value.div(1000).toFixed(amount.places + 3)} kg`;
   }
   return `${amount.value.toFixed(amount.places)} g`;
 }

@@ -127,10 +127,13 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
   }
   const batchGrams = sum([...meatLines, ...seasoningLines].map((line) => line.grams));
 
+  // Dividing at 40 digits leaves noise in the last digit (30 % can come back as 30.000…001 %),
+  // which would fail a ceiling the blend meets exactly; 20 places is still far finer than any
+  // lab measures fat.
   const fat = blendFatPercent([
     { grams: size.amounts.first, fat: fats.first },
     { grams: size.amounts.second, fat: fats.second },
-  ]);
+  ]).toDecimalPlaces(20);
   const figures: Figure[] = [
     { label: 'Blend fat', kind: 'percent', value: fat },
     { label: 'Chemical lean', kind: 'percent', value: HUNDRED.minus(fat) },

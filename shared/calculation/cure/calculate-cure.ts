@@ -40,7 +40,12 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
     thicknessMm: batch.thickness,
     largestPieceGrams: batch.largestPiece,
   });
-  const warnings = [...outcome.warnings, ...checkWarnings, ...concentrationWarnings(formula)];
+  const warnings = [
+    ...outcome.warnings,
+    ...checkWarnings,
+    ...concentrationWarnings(formula),
+    ...smallCuringSaltWarnings(outcome),
+  ];
   let schedule: Schedule | undefined;
   if ('missing' in hold) {
     warnings.push(`No ready date: ${hold.missing}.`);
@@ -146,6 +151,21 @@ function concentrationWarnings(formula: CureFormula): string[] {
     .map(
       (i) =>
         `"${i.name}" is ${i.nitrite} % sodium nitrite, far stronger than a kitchen curing salt (about 6 %). Check the label; concentrated nitrite is a poisoning hazard.`,
+    );
+}
+
+/** Below this a curing-salt line is hard to weigh well on a 0.1 g scale. (common practice, no source) */
+const SMALLEST_WELL_WEIGHED_GRAMS = 1;
+
+function smallCuringSaltWarnings(outcome: MethodOutcome): string[] {
+  return outcome.groups
+    .flatMap((group) => group.lines)
+    .filter(
+      (line) => line.role === 'curing-salt' && line.grams.lessThan(SMALLEST_WELL_WEIGHED_GRAMS),
+    )
+    .map(
+      (line) =>
+        `"${line.name}" comes to ${line.grams.toFixed(2)} g: a 0.1 g scale can be off by 5 % or more at that size. Weigh it on a 0.01 g scale, or make a larger batch.`,
     );
 }
 
