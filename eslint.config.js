@@ -4,7 +4,16 @@ import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['dist/', 'node_modules/', '.angular/', 'coverage/', 'test-artifacts/'] },
+  {
+    ignores: [
+      'dist/',
+      'node_modules/',
+      '.angular/',
+      'coverage/',
+      'test-artifacts/',
+      '**/*.generated.js',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
