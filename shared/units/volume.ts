@@ -1,6 +1,5 @@
-import { Decimal, sum } from '../decimal.ts';
-import { QuantityError } from './quantity-error.ts';
-import { tokenize } from './tokenize.ts';
+import { Decimal } from '../decimal.ts';
+import { parseWithTable, spellings, type UnitTable } from './unit-table.ts';
 
 /** Litres in one US gallon (231 cubic inches), exact. source: NIST SP 811 (2008), Appendix B.8 */
 export const LITRES_PER_US_GALLON = new Decimal('3.785411784');
@@ -13,35 +12,27 @@ export const LITRES_PER_US_GALLON = new Decimal('3.785411784');
  */
 export const WATER_GRAMS_PER_LITRE = new Decimal(1000);
 
-const LITRES_PER_UNIT: ReadonlyMap<string, Decimal> = new Map([
-  ...['ml', 'millilitre', 'millilitres', 'milliliter', 'milliliters'].map(
-    (u) => [u, new Decimal('0.001')] as const,
-  ),
-  ...['l', 'litre', 'litres', 'liter', 'liters'].map((u) => [u, new Decimal(1)] as const),
-  ...['qt', 'quart', 'quarts'].map((u) => [u, LITRES_PER_US_GALLON.div(4)] as const),
-  ...['gal', 'gallon', 'gallons'].map((u) => [u, LITRES_PER_US_GALLON] as const),
-]);
-
-const EXPECTED = 'a volume of water such as "12 L", "1500 ml" or "3 gal" (US gallons)';
+const VOLUME: UnitTable = {
+  factors: new Map([
+    ...spellings(
+      ['ml', 'millilitre', 'millilitres', 'milliliter', 'milliliters'],
+      new Decimal('0.001'),
+    ),
+    ...spellings(['l', 'litre', 'litres', 'liter', 'liters'], new Decimal(1)),
+    ...spellings(['qt', 'quart', 'quarts'], LITRES_PER_US_GALLON.div(4)),
+    ...spellings(['gal', 'gallon', 'gallons'], LITRES_PER_US_GALLON),
+  ]),
+  expected: 'a volume of water such as "12 L", "1500 ml" or "3 gal" (US gallons)',
+  noun: 'volume',
+  unitHint: 'ml, L, qt or gal',
+};
 
 /**
  * Reads a volume of water and returns it in litres.
  * @throws QuantityError when the text is not a volume
  */
 export function parseVolume(text: string): Decimal {
-  const terms = tokenize(text);
-  if (typeof terms === 'string') throw new QuantityError(text, EXPECTED, terms);
-  return sum(
-    terms.map((term) => {
-      if (term.unit === '')
-        throw new QuantityError(text, EXPECTED, 'a unit is missing (ml, L, qt or gal)');
-      const factor = LITRES_PER_UNIT.get(term.unit);
-      if (!factor) throw new QuantityError(text, EXPECTED, `"${term.unit}" is not a volume unit`);
-      if (term.value.isNegative())
-        throw new QuantityError(text, EXPECTED, 'a volume cannot be negative');
-      return term.value.times(factor);
-    }),
-  );
+  return parseWithTable(text, VOLUME);
 }
 
 /** Grams of water in a volume of litres, by the convention of {@link WATER_GRAMS_PER_LITRE}. */
