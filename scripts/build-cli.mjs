@@ -1,4 +1,4 @@
-// `npm run build:cli`: bundle the larder command (see cli-bundle.mjs).
-import { buildCli } from './cli-bundle.mjs';
+// `npm run build:cli`: bundle the larder command (see bundles.mjs).
+import { buildBundle } from './bundles.mjs';
 
-await buildCli();
+await buildBundle('cli');

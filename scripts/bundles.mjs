@@ -1,0 +1,71 @@
+// Builds the larder command and the server into single JavaScript bundles with esbuild, and
+// tells whether a bundle is older than its sources. bin/larder.js and scripts/start.mjs use it
+// so that a fresh clone (or a pull) never runs a missing or stale build, without an install
+// script on the package (which `npx larder` would refuse under strict-allow-scripts).
+import { readFileSync, statSync, writeFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+/** Files outside the import graph that still change a bundle. */
+const ALWAYS = ['package.json', 'package-lock.json', 'scripts/bundles.mjs'];
+
+/** The bundles: the CLI carries its packages (fast start); the server loads them from node_modules. */
+export const BUNDLES = {
+  cli: { entry: 'cli/main.ts', outfile: `${root}dist/cli/larder.js`, packages: 'bundle' },
+  server: { entry: 'server/main.ts', outfile: `${root}dist/server/main.js`, packages: 'external' },
+};
+
+function modifiedMs(file) {
+  try {
+    return statSync(file).mtimeMs;
+  } catch {
+    return undefined;
+  }
+}
+
+/** Whether a bundle is missing, or any source it was built from changed since. */
+export function isStale(name) {
+  const { outfile } = BUNDLES[name];
+  const built = modifiedMs(outfile);
+  if (built === undefined) return true;
+  let sources;
+  try {
+    sources = JSON.parse(readFileSync(`${outfile}.sources.json`, 'utf8'));
+  } catch {
+    return true;
+  }
+  return sources.some((file) => (modifiedMs(root + file) ?? Infinity) > built);
+}
+
+/** Bundles one entry point and everything of ours it imports. */
+export async function buildBundle(name) {
+  const { entry, outfile, packages } = BUNDLES[name];
+  const { build } = await import('esbuild');
+  const result = await build({
+    absWorkingDir: root,
+    entryPoints: [entry],
+    outfile,
+    bundle: true,
+    packages,
+    platform: 'node',
+    format: 'esm',
+    target: 'node20',
+    sourcemap: true,
+    metafile: true,
+    legalComments: 'none',
+    logLevel: 'warning',
+    // Bundled CommonJS packages (ajv's runtime) call require(); give the ES module bundle one.
+    banner: {
+      js: "import { createRequire as __larderRequire } from 'node:module'; const require = __larderRequire(import.meta.url);",
+    },
+  });
+  const ours = Object.keys(result.metafile.inputs).filter(
+    (file) => !file.startsWith('node_modules/'),
+  );
+  writeFileSync(`${outfile}.sources.json`, `${JSON.stringify([...ALWAYS, ...ours], null, 1)}\n`);
+}
+
+/** Builds a bundle when it is missing or stale. */
+export async function ensureBundle(name) {
+  if (isStale(name)) await buildBundle(name);
+}

@@ -1,0 +1,69 @@
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import passport from 'passport';
+import type { AppContext } from './app-context.ts';
+import { auditRouter } from './audit/audit-router.ts';
+import { authenticate, useBasicStrategy } from './auth/authenticate.ts';
+import { requireCsrfToken } from './auth/csrf.ts';
+import { sessionMiddleware } from './auth/session.ts';
+import { sessionRouter } from './auth/session-router.ts';
+import { calcRouter } from './calc/calc-router.ts';
+import { consoleRouter, cspNonce } from './http/console-files.ts';
+import { apiNotFound, errorHandler } from './http/error-handler.ts';
+import { peopleRouter } from './people/people-router.ts';
+
+/** Largest JSON body the API reads; a formula is a few kilobytes. */
+const JSON_LIMIT = '512kb';
+
+/**
+ * Builds the Express application: security headers, sessions, the API routers, the console,
+ * a JSON 404 and the one error handler. Never listens; main.ts and the tests do that.
+ */
+export function createApp(context: AppContext): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(cspNonce);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: [
+            "'self'",
+            (_req, res) => `'nonce-${String((res as express.Response).locals.cspNonce)}'`,
+          ],
+          fontSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      // Plain http on 127.0.0.1 in the demo: no HSTS.
+      strictTransportSecurity: false,
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: JSON_LIMIT }));
+  api.use(sessionMiddleware(context.db, context.config.sessionSecret, false));
+  api.use(passport.initialize());
+  useBasicStrategy(context.people, context.audit);
+  api.get('/health', (_req, res) => void res.json({ ok: true }));
+  api.use('/session', sessionRouter(context.people, context.audit, context.config.signInLimit));
+  // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes.
+  api.use(authenticate(context.people), requireCsrfToken);
+  api.use('/calc', calcRouter(context));
+  api.use('/people', peopleRouter(context));
+  api.use('/audit', auditRouter(context));
+  api.use(apiNotFound);
+
+  app.use('/api', api);
+  app.use(consoleRouter(context.config.consoleDir));
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,107 @@
+import { QueryTypes, type Transaction } from 'sequelize';
+import type { Database } from '../db/database.ts';
+
+/** The things the audit log records. */
+export type AuditAction =
+  | 'sign-in'
+  | 'sign-in-failed'
+  | 'sign-out'
+  | 'formula-save'
+  | 'formula-create'
+  | 'formula-upload'
+  | 'formula-disk-change'
+  | 'batch-record'
+  | 'batch-status'
+  | 'batch-sign-off'
+  | 'person-add'
+  | 'person-change'
+  | 'password-reset';
+
+/** One entry of the audit log. */
+export interface AuditEvent {
+  readonly id: number;
+  readonly at: string;
+  readonly actorId: number | null;
+  readonly actorName: string | null;
+  readonly action: AuditAction;
+  readonly subject: string | null;
+  readonly detail: unknown;
+  readonly ip: string | null;
+}
+
+/** What to append: who did what to what. */
+export interface AuditEntry {
+  actor?: { id: number; username: string } | null;
+  /** For failed sign-ins: the name that was tried. */
+  actorName?: string;
+  action: AuditAction;
+  subject?: string;
+  detail?: unknown;
+  ip?: string;
+}
+
+interface AuditRow {
+  id: number;
+  at: string;
+  actor_id: number | null;
+  actor_name: string | null;
+  action: AuditAction;
+  subject: string | null;
+  detail: string | null;
+  ip: string | null;
+}
+
+/** The append-only audit log: there is no update and no delete. */
+export class AuditRepository {
+  constructor(private readonly db: Database) {}
+
+  async append(entry: AuditEntry, transaction?: Transaction): Promise<void> {
+    await this.db.sequelize.query(
+      'INSERT INTO audit_events (at, actor_id, actor_name, action, subject, detail, ip) VALUES (?, ?, ?, ?, ?, ?, ?)',
+      {
+        replacements: [
+          new Date().toISOString(),
+          entry.actor?.id ?? null,
+          entry.actor?.username ?? entry.actorName ?? null,
+          entry.action,
+          entry.subject ?? null,
+          entry.detail === undefined ? null : JSON.stringify(entry.detail),
+          entry.ip ?? null,
+        ],
+        transaction,
+      },
+    );
+  }
+
+  /** The newest entries first, `limit` at a time, before the entry with id `before`. */
+  async list(options: {
+    limit: number;
+    before?: number;
+    action?: AuditAction;
+  }): Promise<AuditEvent[]> {
+    const where: string[] = [];
+    const values: unknown[] = [];
+    if (options.before !== undefined) {
+      where.push('id < ?');
+      values.push(options.before);
+    }
+    if (options.action) {
+      where.push('action = ?');
+      values.push(options.action);
+    }
+    const rows = await this.db.sequelize.query<AuditRow>(
+      `SELECT * FROM audit_events ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY id DESC LIMIT ?`,
+      { replacements: [...values, options.limit], type: QueryTypes.SELECT },
+    );
+    return rows.map((row) => ({
+      id: row.id,
+      at: row.at,
+      actorId: row.actor_id,
+      actorName: row.actor_name,
+      action: row.action,
+      subject: row.subject,
+      detail: row.detail === null ? null : (JSON.parse(row.detail) as unknown),
+      ip: row.ip,
+    }));
+  }
+}

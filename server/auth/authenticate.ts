@@ -1,0 +1,99 @@
+import passport from 'passport';
+import { BasicStrategy } from 'passport-http';
+import type { NextFunction, Request, RequestHandler, Response } from 'express';
+import type { AuditRepository } from '../audit/audit-repository.ts';
+import { AppError, forbidden } from '../http/app-error.ts';
+import type { PeopleRepository } from '../people/people-repository.ts';
+import type { Person, Role } from '../people/person.ts';
+import './request-person.ts';
+
+/** Registers HTTP Basic sign-in for scripts and the CLI; each attempt is audited. */
+export function useBasicStrategy(people: PeopleRepository, audit: AuditRepository): void {
+  passport.use(
+    new BasicStrategy(
+      { passReqToCallback: true },
+      (
+        req: Request,
+        username: string,
+        password: string,
+        done: (error: unknown, person?: Person | false) => void,
+      ) => {
+        people
+          .authenticate(username, password)
+          .then(async (person) => {
+            if (!person)
+              await audit.append({
+                actorName: username,
+                action: 'sign-in-failed',
+                detail: { via: 'basic' },
+                ip: req.ip,
+              });
+            done(null, person ?? false);
+          })
+          .catch(done);
+      },
+    ),
+  );
+}
+
+/**
+ * Who is asking: the session's person (looked up on every request, so a deactivated person's
+ * session ends at once) or HTTP Basic credentials. Anonymous requests get 401.
+ */
+export function authenticate(people: PeopleRepository): RequestHandler {
+  const basic = passport.authenticate('basic', {
+    session: false,
+    failWithError: true,
+  }) as RequestHandler;
+  return (req: Request, res: Response, next: NextFunction) => {
+    const personId = req.session?.personId;
+    if (personId !== undefined) {
+      people
+        .findById(personId)
+        .then((person) => {
+          if (!person?.active) {
+            req.session.destroy(() =>
+              next(new AppError(401, 'unauthenticated', 'your session has ended; sign in again')),
+            );
+            return;
+          }
+          req.person = person;
+          req.authVia = 'session';
+          next();
+        })
+        .catch(next);
+      return;
+    }
+    if (req.headers.authorization?.startsWith('Basic ')) {
+      basic(req, res, (error?: unknown) => {
+        if (error || !req.user) {
+          next(
+            new AppError(
+              401,
+              'unauthenticated',
+              'wrong username or password, or the account is not active',
+            ),
+          );
+          return;
+        }
+        req.person = req.user as Person;
+        req.authVia = 'basic';
+        next();
+      });
+      return;
+    }
+    res.setHeader('WWW-Authenticate', 'Basic realm="Larderbook", charset="UTF-8"');
+    next(new AppError(401, 'unauthenticated', 'sign in first'));
+  };
+}
+
+/** Lets the request through only for the given roles; the server enforces, whatever the console shows. */
+export function requireRole(...roles: Role[]): RequestHandler {
+  return (req, _res, next) => {
+    const role = req.person?.role;
+    if (!role) return next(new AppError(401, 'unauthenticated', 'sign in first'));
+    if (!roles.includes(role))
+      return next(forbidden(`this needs the role ${roles.join(' or ')}; you are ${role}`));
+    next();
+  };
+}

@@ -1,0 +1,27 @@
+import type { Request } from 'express';
+import type { Person } from '../people/person.ts';
+import { AppError } from '../http/app-error.ts';
+
+declare module 'express-session' {
+  interface SessionData {
+    /** The signed-in person. */
+    personId: number;
+    /** The token state-changing requests from the console must echo in X-CSRF-Token. */
+    csrfToken: string;
+  }
+}
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    /** Who made the request, once authenticated. */
+    person?: Person;
+    /** How they proved it: a session cookie (console) or HTTP Basic (scripts, CLI). */
+    authVia?: 'session' | 'basic';
+  }
+}
+
+/** The authenticated person of a request; routes behind `authenticate` always have one. */
+export function personOf(req: Request): Person {
+  if (!req.person) throw new AppError(401, 'unauthenticated', 'sign in first');
+  return req.person;
+}

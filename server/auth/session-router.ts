@@ -1,0 +1,103 @@
+import { Router, type Request } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import type { AuditRepository } from '../audit/audit-repository.ts';
+import { AppError } from '../http/app-error.ts';
+import { validateBody } from '../http/validate-body.ts';
+import type { PeopleRepository } from '../people/people-repository.ts';
+import type { Person } from '../people/person.ts';
+import { newCsrfToken } from './csrf.ts';
+import { SESSION_COOKIE } from './session.ts';
+import './request-person.ts';
+
+const SIGN_IN_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['username', 'password'],
+  properties: {
+    username: { type: 'string', minLength: 1, maxLength: 64 },
+    password: { type: 'string', minLength: 1, maxLength: 256 },
+  },
+} as const;
+
+/** Starts a fresh session for a person: a new id (no fixation) and a new CSRF token. */
+function startSession(req: Request, person: Person): Promise<string> {
+  return new Promise((resolve, reject) => {
+    req.session.regenerate((error) => {
+      if (error) return reject(error as Error);
+      req.session.personId = person.id;
+      req.session.csrfToken = newCsrfToken();
+      req.session.save((saveError) =>
+        saveError ? reject(saveError as Error) : resolve(req.session.csrfToken ?? ''),
+      );
+    });
+  });
+}
+
+/**
+ * /api/session: sign in with a form (POST), see who is signed in (GET), sign out (DELETE).
+ * Sign-in attempts are limited per address.
+ */
+export function sessionRouter(
+  people: PeopleRepository,
+  audit: AuditRepository,
+  signInLimit: number,
+): Router {
+  const router = Router();
+  const limiter = rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit: signInLimit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, _res, next) =>
+      next(
+        new AppError(
+          429,
+          'too-many-attempts',
+          'too many sign-in attempts; wait 15 minutes and try again',
+        ),
+      ),
+  });
+
+  router.post('/', limiter, validateBody(SIGN_IN_BODY), async (req, res) => {
+    const { username, password } = req.body as { username: string; password: string };
+    const person = await people.authenticate(username, password);
+    if (!person) {
+      await audit.append({
+        actorName: username,
+        action: 'sign-in-failed',
+        detail: { via: 'form' },
+        ip: req.ip,
+      });
+      throw new AppError(
+        401,
+        'unauthenticated',
+        'wrong username or password, or the account is not active',
+      );
+    }
+    const csrfToken = await startSession(req, person);
+    await audit.append({ actor: person, action: 'sign-in', detail: { via: 'form' }, ip: req.ip });
+    res.status(201).json({ person, csrfToken });
+  });
+
+  router.get('/', async (req, res) => {
+    const personId = req.session?.personId;
+    const person = personId === undefined ? undefined : await people.findById(personId);
+    if (!person?.active) throw new AppError(401, 'unauthenticated', 'not signed in');
+    res.json({ person, csrfToken: req.session.csrfToken });
+  });
+
+  router.delete('/', async (req, res) => {
+    const personId = req.session?.personId;
+    if (personId !== undefined) {
+      const person = await people.findById(personId);
+      if (person) await audit.append({ actor: person, action: 'sign-out', ip: req.ip });
+    }
+    await new Promise<void>((resolve) =>
+      req.session ? req.session.destroy(() => resolve()) : resolve(),
+    );
+    res.clearCookie(SESSION_COOKIE);
+    res.status(204).end();
+  });
+
+  return router;
+}

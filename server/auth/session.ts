@@ -1,0 +1,31 @@
+import session from 'express-session';
+import connectSessionSequelize from 'connect-session-sequelize';
+import type { RequestHandler } from 'express';
+import type { Database } from '../db/database.ts';
+
+/** How long a console session lasts without use. */
+export const SESSION_IDLE_MS = 12 * 60 * 60 * 1000;
+/** The session cookie's name. */
+export const SESSION_COOKIE = 'larder.sid';
+
+/**
+ * Sessions kept in SQLite, with an httpOnly, SameSite=Strict cookie. The table comes from our
+ * migrations, so the store is never asked to create it.
+ */
+export function sessionMiddleware(db: Database, secret: string, secure: boolean): RequestHandler {
+  const SequelizeStore = connectSessionSequelize(session.Store);
+  const store = new SequelizeStore({
+    db: db.sequelize,
+    checkExpirationInterval: 15 * 60 * 1000,
+    expiration: SESSION_IDLE_MS,
+  });
+  return session({
+    name: SESSION_COOKIE,
+    secret,
+    store,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: { httpOnly: true, sameSite: 'strict', secure, maxAge: SESSION_IDLE_MS },
+  });
+}

@@ -1,0 +1,82 @@
+import {
+  BatchError,
+  calculate,
+  parseBatchOptions,
+  presentResult,
+  readFormula,
+  type Formula,
+  type PresentedResult,
+  type RawBatchOptions,
+  type UnitSystem,
+} from '../../shared/index.ts';
+import { AppError } from '../http/app-error.ts';
+
+/** The batch part of a calculation request: options as the CLI takes them, values as strings. */
+export const BATCH_OPTIONS_SCHEMA = {
+  type: 'object',
+  additionalProperties: false,
+  properties: Object.fromEntries(
+    [
+      'start',
+      'want',
+      'meat',
+      'thickness',
+      'largestPiece',
+      'water',
+      'pump',
+      'pumpedWeight',
+      'pieces',
+      'piece',
+      'loss',
+      'flour',
+      'ddt',
+      'room',
+      'flourTemp',
+      'prefermentTemp',
+      'tap',
+      'friction',
+      'yeast',
+      'total',
+      'targetFat',
+      'onHand',
+      'portion',
+      'base',
+    ].map((key) => [key, { type: 'string', minLength: 1, maxLength: 60 }]),
+  ),
+} as const;
+
+export const UNITS_SCHEMA = { enum: ['metric', 'us'] } as const;
+
+/** Reads formula YAML sent in a request; 422 with every problem (line, column) when it cannot be used. */
+export function formulaFromText(yaml: string, name: string): Formula {
+  const reading = readFormula(yaml, name);
+  if (!reading.formula) {
+    throw new AppError(
+      422,
+      'invalid-formula',
+      `the formula has ${reading.problems.filter((p) => p.severity === 'error').length} error(s)`,
+      reading.problems,
+    );
+  }
+  return reading.formula;
+}
+
+/** Calculates and presents one batch, turning batch-input mistakes into 400s that name the option. */
+export function calculateBatch(
+  formula: Formula,
+  raw: RawBatchOptions,
+  units: UnitSystem,
+): PresentedResult {
+  try {
+    return presentResult(calculate(formula, parseBatchOptions(raw, formula)), units);
+  } catch (error) {
+    if (error instanceof BatchError)
+      throw new AppError(
+        400,
+        'bad-batch',
+        error.message,
+        error.option ? [{ option: error.option }] : [],
+      );
+    throw error;
+  }
+}

@@ -1,0 +1,60 @@
+import { Router } from 'express';
+import type { RawBatchOptions, UnitSystem } from '../../shared/index.ts';
+import type { AppContext } from '../app-context.ts';
+import { validateBody } from '../http/validate-body.ts';
+import {
+  BATCH_OPTIONS_SCHEMA,
+  UNITS_SCHEMA,
+  calculateBatch,
+  formulaFromText,
+} from './calc-request.ts';
+
+const CALC_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['formula', 'batch'],
+  properties: {
+    formula: {
+      oneOf: [
+        { type: 'string', pattern: '^[a-z0-9][a-z0-9-]{1,62}$' },
+        {
+          type: 'object',
+          additionalProperties: false,
+          required: ['yaml'],
+          properties: { yaml: { type: 'string', minLength: 1, maxLength: 262144 } },
+        },
+      ],
+    },
+    batch: BATCH_OPTIONS_SCHEMA,
+    units: UNITS_SCHEMA,
+  },
+} as const;
+
+interface CalcBody {
+  formula: string | { yaml: string };
+  batch: RawBatchOptions;
+  units?: UnitSystem;
+}
+
+/**
+ * POST /api/calc: a stateless calculation of any formula (by id, or YAML sent inline) — the same
+ * JSON `larder calc --json` prints. A refused batch comes back with critical: true and no amounts.
+ */
+export function calcRouter(context: AppContext): Router {
+  const router = Router();
+  router.post('/', validateBody(CALC_BODY), async (req, res) => {
+    const body = req.body as CalcBody;
+    const formula =
+      typeof body.formula === 'string'
+        ? (await context.formulas.current(body.formula)).formula
+        : formulaFromText(body.formula.yaml, 'inline formula');
+    res.json(
+      calculateBatch(
+        formula,
+        { start: new Date().toISOString().slice(0, 10), ...body.batch },
+        body.units ?? 'metric',
+      ),
+    );
+  });
+  return router;
+}

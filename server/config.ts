@@ -1,0 +1,92 @@
+import path from 'node:path';
+
+/** How the server runs: a demo with invented data, or production. */
+export type ServerMode = 'demo' | 'production';
+
+/** Everything the server reads from its environment, checked once at start. */
+export interface ServerConfig {
+  readonly mode: ServerMode;
+  readonly host: string;
+  readonly port: number;
+  /** Folder for the database file and other data. */
+  readonly dataDir: string;
+  /** The SQLite database file. */
+  readonly databaseFile: string;
+  /** The folder of formula YAML files: the source of truth for formulas. */
+  readonly formulasDir: string;
+  readonly sessionSecret: string;
+  /** Folder of the built console, served at /; absent when the console is not built. */
+  readonly consoleDir: string;
+  /** Sign-in attempts allowed per address in a 15-minute window. */
+  readonly signInLimit: number;
+}
+
+/** A setting that cannot be used; the server refuses to start with the message. */
+export class ConfigError extends Error {
+  override readonly name = 'ConfigError';
+}
+
+/** The settings, their environment variables and defaults, as documented in the README. */
+export const SETTINGS = [
+  ['LARDER_MODE', 'demo', 'demo (invented data, demo sign-ins) or production'],
+  ['LARDER_HOST', '127.0.0.1', 'address to listen on'],
+  ['LARDER_PORT', '4310', 'port to listen on (0 picks a free one)'],
+  ['LARDER_DATA', './data', 'folder for the database file'],
+  ['LARDER_DB', '$LARDER_DATA/larderbook.sqlite', 'the SQLite database file'],
+  ['LARDER_FORMULAS', './formulas', 'folder of formula YAML files'],
+  [
+    'LARDER_SESSION_SECRET',
+    '(demo: a fixed demo value; production: required)',
+    'secret for signing session cookies, 32+ characters',
+  ],
+  ['LARDER_CONSOLE', './dist/console/browser', 'folder of the built console'],
+  ['LARDER_SIGN_IN_LIMIT', '10', 'sign-in attempts per address per 15 minutes'],
+] as const;
+
+// A fixed secret is fine for the demo's invented data and never accepted in production.
+const DEMO_SECRET = 'larderbook-demo-only-session-secret-not-for-production';
+
+function integer(
+  env: NodeJS.ProcessEnv,
+  name: string,
+  fallback: number,
+  min: number,
+  max: number,
+): number {
+  const text = env[name];
+  if (text === undefined || text === '') return fallback;
+  const value = Number(text);
+  if (!Number.isInteger(value) || value < min || value > max) {
+    throw new ConfigError(`${name} must be a whole number from ${min} to ${max}, not "${text}"`);
+  }
+  return value;
+}
+
+/**
+ * Reads and checks the settings. Production refuses to start without a real session secret.
+ * @throws ConfigError naming the setting at fault
+ */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
+  const mode = env.LARDER_MODE ?? 'demo';
+  if (mode !== 'demo' && mode !== 'production') {
+    throw new ConfigError(`LARDER_MODE must be demo or production, not "${mode}"`);
+  }
+  const secret = env.LARDER_SESSION_SECRET;
+  if (mode === 'production' && (!secret || secret.length < 32)) {
+    throw new ConfigError(
+      'production needs LARDER_SESSION_SECRET: a random secret of at least 32 characters',
+    );
+  }
+  const dataDir = path.resolve(env.LARDER_DATA ?? 'data');
+  return {
+    mode,
+    host: env.LARDER_HOST ?? '127.0.0.1',
+    port: integer(env, 'LARDER_PORT', 4310, 0, 65535),
+    dataDir,
+    databaseFile: path.resolve(env.LARDER_DB ?? path.join(dataDir, 'larderbook.sqlite')),
+    formulasDir: path.resolve(env.LARDER_FORMULAS ?? 'formulas'),
+    sessionSecret: secret ?? DEMO_SECRET,
+    consoleDir: path.resolve(env.LARDER_CONSOLE ?? 'dist/console/browser'),
+    signInLimit: integer(env, 'LARDER_SIGN_IN_LIMIT', 10, 1, 10_000),
+  };
+}

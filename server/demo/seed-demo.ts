@@ -1,0 +1,14 @@
+import type { AppContext } from '../app-context.ts';
+import { DEMO_PEOPLE } from './demo-people.ts';
+
+/**
+ * Fills an empty demo database with the invented kitchen's people. Runs only in demo mode and
+ * only when there is nobody yet, so restarting the demo keeps what was done in it.
+ */
+export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }> {
+  if ((await context.people.count()) > 0) return { seeded: false };
+  await context.db.write(async (transaction) => {
+    for (const person of DEMO_PEOPLE) await context.people.add(person, transaction);
+  });
+  return { seeded: true };
+}

@@ -1,0 +1,60 @@
+import type { Formula } from '../../shared/index.ts';
+import { AppError, notFound } from '../http/app-error.ts';
+import { readFormulaFolder, type FormulaFile } from './formula-files.ts';
+
+/** A formula that can be calculated, with the revision it was read at. */
+export interface CurrentFormula {
+  readonly formula: Formula;
+  readonly revision: string;
+  readonly file: FormulaFile;
+}
+
+/**
+ * The formulas folder, read fresh on each call so that edits on disk (a git pull) are seen at
+ * once. The YAML files stay the source of truth.
+ */
+export class FormulaStore {
+  constructor(readonly folder: string) {}
+
+  /** Every formula file, valid or not. */
+  async files(): Promise<FormulaFile[]> {
+    try {
+      return await readFormulaFolder(this.folder);
+    } catch (error) {
+      // A missing or unreadable folder is a setup problem the person asking can act on.
+      const code = (error as NodeJS.ErrnoException).code;
+      throw new AppError(
+        503,
+        'formulas-unavailable',
+        `the formulas folder cannot be read (${code ?? String(error)})`,
+      );
+    }
+  }
+
+  /** The file holding a formula id, or undefined. */
+  async find(id: string): Promise<FormulaFile | undefined> {
+    const files = await this.files();
+    return (
+      files.find((file) => file.reading.formula?.id === id) ??
+      files.find((file) => file.name.replace(/\.ya?ml$/i, '') === id)
+    );
+  }
+
+  /**
+   * The formula with this id as it is now.
+   * @throws AppError 404 when there is none, 422 when its file has errors
+   */
+  async current(id: string): Promise<CurrentFormula> {
+    const file = await this.find(id);
+    if (!file) throw notFound(`no formula "${id}"`);
+    const formula = file.reading.formula;
+    if (!formula)
+      throw new AppError(
+        422,
+        'invalid-formula',
+        `the formula file ${file.name} has errors`,
+        file.reading.problems,
+      );
+    return { formula, revision: file.revision, file };
+  }
+}

@@ -1,0 +1,53 @@
+import type { AddressInfo } from 'node:net';
+import { createApp } from './app.ts';
+import { ConfigError, loadConfig } from './config.ts';
+import { openDatabase } from './db/database.ts';
+import { DEMO_PEOPLE } from './demo/demo-people.ts';
+import { seedDemo } from './demo/seed-demo.ts';
+import { openContext } from './main-context.ts';
+
+/* eslint-disable no-console -- the server talks to whoever started it */
+
+async function main(): Promise<void> {
+  let config;
+  try {
+    config = loadConfig();
+  } catch (error) {
+    if (error instanceof ConfigError) {
+      console.error(`larderbook: ${error.message}`);
+      process.exit(2);
+    }
+    throw error;
+  }
+  const context = await openContext(config);
+  if (config.mode === 'demo') await seedDemo(context);
+  const server = createApp(context).listen(config.port, config.host);
+  server.on('listening', async () => {
+    const { port } = server.address() as AddressInfo;
+    console.log(
+      `Larderbook (${config.mode}) at http://${config.host}:${port}/  ·  database ${config.databaseFile}  ·  formulas ${config.formulasDir}`,
+    );
+    if (config.mode === 'demo') {
+      console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
+      for (const person of DEMO_PEOPLE)
+        console.log(
+          `  ${person.role.padEnd(8)}  ${person.username.padEnd(6)}  password: ${person.password}`,
+        );
+    } else if ((await context.people.count()) === 0) {
+      console.log(
+        'No people yet: create the first admin with  larder users add USERNAME --role admin',
+      );
+    }
+  });
+  server.on('error', (error) => {
+    console.error(`larderbook: cannot listen on ${config.host}:${config.port}: ${error.message}`);
+    process.exit(1);
+  });
+  const stop = (): void => {
+    server.close(() => void context.db.close().then(() => process.exit(0)));
+  };
+  process.on('SIGTERM', stop);
+  process.on('SIGINT', stop);
+}
+
+await main();

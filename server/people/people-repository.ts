@@ -1,0 +1,196 @@
+import { QueryTypes, type Transaction } from 'sequelize';
+import type { Database } from '../db/database.ts';
+import { hashPassword, verifyPassword } from '../auth/passwords.ts';
+import type { Person, Role } from './person.ts';
+
+interface PersonRow {
+  id: number;
+  username: string;
+  display_name: string;
+  email: string | null;
+  role: Role;
+  active: number;
+  demo: number;
+  created_at: string;
+  updated_at: string;
+  password_hash: string;
+}
+
+function toPerson(row: PersonRow): Person {
+  return {
+    id: row.id,
+    username: row.username,
+    displayName: row.display_name,
+    email: row.email,
+    role: row.role,
+    active: row.active === 1,
+    demo: row.demo === 1,
+    createdAt: row.created_at,
+    updatedAt: row.updated_at,
+  };
+}
+
+/** What it takes to add a person. */
+export interface NewPerson {
+  username: string;
+  displayName: string;
+  email?: string | null;
+  role: Role;
+  password: string;
+  demo?: boolean;
+}
+
+/** People and their passwords: plain objects in, plain objects out. */
+export class PeopleRepository {
+  constructor(private readonly db: Database) {}
+
+  /** Everyone, active first, then by name. */
+  async list(): Promise<Person[]> {
+    const rows = await this.db.sequelize.query<PersonRow>(
+      'SELECT * FROM people ORDER BY active DESC, display_name, id',
+      {
+        type: QueryTypes.SELECT,
+      },
+    );
+    return rows.map(toPerson);
+  }
+
+  async findById(id: number, transaction?: Transaction): Promise<Person | undefined> {
+    const [row] = await this.db.sequelize.query<PersonRow>('SELECT * FROM people WHERE id = ?', {
+      replacements: [id],
+      type: QueryTypes.SELECT,
+      transaction,
+    });
+    return row ? toPerson(row) : undefined;
+  }
+
+  async findByUsername(username: string): Promise<Person | undefined> {
+    const [row] = await this.db.sequelize.query<PersonRow>(
+      'SELECT * FROM people WHERE username = ?',
+      {
+        replacements: [username],
+        type: QueryTypes.SELECT,
+      },
+    );
+    return row ? toPerson(row) : undefined;
+  }
+
+  /** How many people there are, for "is this the first admin". */
+  async count(): Promise<number> {
+    const [row] = await this.db.sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM people', {
+      type: QueryTypes.SELECT,
+    });
+    return row.n;
+  }
+
+  /**
+   * The person a username and password belong to, when the password is right and the person is
+   * active; otherwise undefined (without saying which part was wrong).
+   */
+  async authenticate(username: string, password: string): Promise<Person | undefined> {
+    const [row] = await this.db.sequelize.query<PersonRow>(
+      'SELECT * FROM people WHERE username = ?',
+      {
+        replacements: [username],
+        type: QueryTypes.SELECT,
+      },
+    );
+    // Hash even for an unknown name, so the answer takes as long either way.
+    const ok = await verifyPassword(password, row?.password_hash ?? DUMMY_HASH);
+    return row && ok && row.active === 1 ? toPerson(row) : undefined;
+  }
+
+  async add(person: NewPerson, transaction?: Transaction): Promise<Person> {
+    const now = new Date().toISOString();
+    const hash = await hashPassword(person.password);
+    await this.db.sequelize.query(
+      `INSERT INTO people (username, display_name, email, role, password_hash, active, demo, created_at, updated_at)
+       VALUES (?, ?, ?, ?, ?, 1, ?, ?, ?)`,
+      {
+        replacements: [
+          person.username,
+          person.displayName,
+          person.email ?? null,
+          person.role,
+          hash,
+          person.demo ? 1 : 0,
+          now,
+          now,
+        ],
+        transaction,
+      },
+    );
+    const [row] = await this.db.sequelize.query<PersonRow>(
+      'SELECT * FROM people WHERE username = ?',
+      {
+        replacements: [person.username],
+        type: QueryTypes.SELECT,
+        transaction,
+      },
+    );
+    return toPerson(row);
+  }
+
+  /** Changes name, e-mail, role or active state; returns the person as they are now. */
+  async update(
+    id: number,
+    changes: { displayName?: string; email?: string | null; role?: Role; active?: boolean },
+    transaction?: Transaction,
+  ): Promise<Person | undefined> {
+    const sets: string[] = [];
+    const values: unknown[] = [];
+    if (changes.displayName !== undefined) {
+      sets.push('display_name = ?');
+      values.push(changes.displayName);
+    }
+    if (changes.email !== undefined) {
+      sets.push('email = ?');
+      values.push(changes.email);
+    }
+    if (changes.role !== undefined) {
+      sets.push('role = ?');
+      values.push(changes.role);
+    }
+    if (changes.active !== undefined) {
+      sets.push('active = ?');
+      values.push(changes.active ? 1 : 0);
+    }
+    if (sets.length > 0) {
+      await this.db.sequelize.query(
+        `UPDATE people SET ${sets.join(', ')}, updated_at = ? WHERE id = ?`,
+        {
+          replacements: [...values, new Date().toISOString(), id],
+          transaction,
+        },
+      );
+    }
+    return this.findById(id, transaction);
+  }
+
+  async setPassword(id: number, password: string, transaction?: Transaction): Promise<void> {
+    const hash = await hashPassword(password);
+    await this.db.sequelize.query(
+      'UPDATE people SET password_hash = ?, updated_at = ? WHERE id = ?',
+      {
+        replacements: [hash, new Date().toISOString(), id],
+        transaction,
+      },
+    );
+  }
+
+  /** How many active admins there are, so the last one is never demoted or deactivated. */
+  async activeAdmins(transaction?: Transaction): Promise<number> {
+    const [row] = await this.db.sequelize.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM people WHERE role = 'admin' AND active = 1",
+      {
+        type: QueryTypes.SELECT,
+        transaction,
+      },
+    );
+    return row.n;
+  }
+}
+
+// A valid hash of a random password, used to spend the same time on unknown usernames.
+const DUMMY_HASH =
+  'scrypt$32768$8$1$AAAAAAAAAAAAAAAAAAAAAA==$AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA=';

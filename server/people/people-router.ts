@@ -1,0 +1,174 @@
+import { Router, type Request } from 'express';
+import type { AppContext } from '../app-context.ts';
+import { requireRole } from '../auth/authenticate.ts';
+import { MIN_PASSWORD_LENGTH, randomPassword } from '../auth/passwords.ts';
+import { personOf } from '../auth/request-person.ts';
+import { AppError, badRequest, conflict, notFound } from '../http/app-error.ts';
+import { validateBody } from '../http/validate-body.ts';
+import { ROLES, type Role } from './person.ts';
+
+const USERNAME = { type: 'string', pattern: '^[a-z][a-z0-9._-]{1,31}$' } as const;
+const DISPLAY_NAME = { type: 'string', minLength: 1, maxLength: 80 } as const;
+const EMAIL = {
+  anyOf: [
+    { type: 'string', pattern: '^[^@\\s]+@[^@\\s]+\\.[^@\\s]+$', maxLength: 200 },
+    { type: 'null' },
+  ],
+} as const;
+const PASSWORD = { type: 'string', minLength: MIN_PASSWORD_LENGTH, maxLength: 256 } as const;
+const ROLE = { enum: ROLES } as const;
+
+const ADD_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['username', 'displayName', 'role'],
+  properties: {
+    username: USERNAME,
+    displayName: DISPLAY_NAME,
+    email: EMAIL,
+    role: ROLE,
+    password: PASSWORD,
+  },
+} as const;
+
+const CHANGE_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  minProperties: 1,
+  properties: { displayName: DISPLAY_NAME, email: EMAIL, role: ROLE, active: { type: 'boolean' } },
+} as const;
+
+const RESET_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  properties: { password: PASSWORD },
+} as const;
+
+const OWN_PASSWORD_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['current', 'password'],
+  properties: { current: { type: 'string', minLength: 1, maxLength: 256 }, password: PASSWORD },
+} as const;
+
+function idParam(req: Request): number {
+  const id = Number(req.params.id);
+  if (!Number.isSafeInteger(id) || id < 1) throw badRequest('the person id must be a whole number');
+  return id;
+}
+
+/** /api/people: admins manage people; anyone changes their own password. */
+export function peopleRouter({ db, people, audit }: AppContext): Router {
+  const router = Router();
+
+  router.put('/me/password', validateBody(OWN_PASSWORD_BODY), async (req, res) => {
+    const me = personOf(req);
+    const { current, password } = req.body as { current: string; password: string };
+    if (!(await people.authenticate(me.username, current)))
+      throw new AppError(403, 'wrong-password', 'the current password is wrong');
+    await db.write(async (transaction) => {
+      await people.setPassword(me.id, password, transaction);
+      await audit.append(
+        {
+          actor: me,
+          action: 'password-reset',
+          subject: me.username,
+          detail: { own: true },
+          ip: req.ip,
+        },
+        transaction,
+      );
+    });
+    res.status(204).end();
+  });
+
+  router.use(requireRole('admin'));
+
+  router.get('/', async (_req, res) => {
+    res.json({ people: await people.list() });
+  });
+
+  router.post('/', validateBody(ADD_BODY), async (req, res) => {
+    const body = req.body as {
+      username: string;
+      displayName: string;
+      email?: string | null;
+      role: Role;
+      password?: string;
+    };
+    if (await people.findByUsername(body.username))
+      throw conflict('username-taken', `the username "${body.username}" is taken`);
+    const password = body.password ?? randomPassword();
+    const person = await db.write(async (transaction) => {
+      const added = await people.add({ ...body, password }, transaction);
+      await audit.append(
+        {
+          actor: personOf(req),
+          action: 'person-add',
+          subject: added.username,
+          detail: { role: added.role },
+          ip: req.ip,
+        },
+        transaction,
+      );
+      return added;
+    });
+    // A generated password is shown this once, for the admin to pass on.
+    res.status(201).json(body.password ? { person } : { person, password });
+  });
+
+  router.patch('/:id', validateBody(CHANGE_BODY), async (req, res) => {
+    const id = idParam(req);
+    const changes = req.body as {
+      displayName?: string;
+      email?: string | null;
+      role?: Role;
+      active?: boolean;
+    };
+    const person = await db.write(async (transaction) => {
+      const before = await people.findById(id, transaction);
+      if (!before) throw notFound(`no person with id ${id}`);
+      const losesAdmin =
+        before.role === 'admin' &&
+        before.active &&
+        (changes.active === false || (changes.role && changes.role !== 'admin'));
+      if (losesAdmin && (await people.activeAdmins(transaction)) <= 1) {
+        throw conflict(
+          'last-admin',
+          'this is the last active admin; make someone else admin first',
+        );
+      }
+      const after = await people.update(id, changes, transaction);
+      await audit.append(
+        {
+          actor: personOf(req),
+          action: 'person-change',
+          subject: before.username,
+          detail: changes,
+          ip: req.ip,
+        },
+        transaction,
+      );
+      return after;
+    });
+    res.json({ person });
+  });
+
+  router.post('/:id/password', validateBody(RESET_BODY), async (req, res) => {
+    const id = idParam(req);
+    const given = (req.body as { password?: string }).password;
+    const password = given ?? randomPassword();
+    await db.write(async (transaction) => {
+      const person = await people.findById(id, transaction);
+      if (!person) throw notFound(`no person with id ${id}`);
+      await people.setPassword(id, password, transaction);
+      await audit.append(
+        { actor: personOf(req), action: 'password-reset', subject: person.username, ip: req.ip },
+        transaction,
+      );
+    });
+    res.json(given ? {} : { password });
+  });
+
+  return router;
+}

@@ -1,0 +1,149 @@
+import { cpSync, mkdtempSync, rmSync } from 'node:fs';
+import type { AddressInfo } from 'node:net';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import type { AppContext } from '../../server/app-context.ts';
+import { createApp } from '../../server/app.ts';
+import { loadConfig } from '../../server/config.ts';
+import { seedDemo } from '../../server/demo/seed-demo.ts';
+import { openContext } from '../../server/main-context.ts';
+import { REPO_ROOT } from './run-larder.ts';
+
+/** The demo sign-ins the test server starts with. */
+export const PASSWORDS = {
+  rosa: 'quillmoor-admin',
+  tobin: 'quillmoor-cook',
+  imke: 'quillmoor-review',
+} as const;
+export type DemoUser = keyof typeof PASSWORDS;
+
+/** A running test server on a temporary database and a copy of the demo formulas. */
+export interface TestServer {
+  readonly url: string;
+  readonly context: AppContext;
+  /** The temporary folder: data/, formulas/. */
+  readonly dir: string;
+  readonly formulasDir: string;
+  /** A client that signs every request with HTTP Basic as a demo person (or anonymously). */
+  as(user: DemoUser | 'anonymous'): ApiClient;
+  /** A client signed in through the form, with its session cookie and CSRF token. */
+  signIn(user: DemoUser): Promise<ApiClient>;
+}
+
+/** A tiny JSON client over fetch. */
+export interface ApiClient {
+  request(
+    method: string,
+    route: string,
+    body?: unknown,
+    headers?: Record<string, string>,
+  ): Promise<ApiResponse>;
+  get(route: string, headers?: Record<string, string>): Promise<ApiResponse>;
+  post(route: string, body?: unknown, headers?: Record<string, string>): Promise<ApiResponse>;
+}
+
+export interface ApiResponse {
+  readonly status: number;
+  readonly headers: Headers;
+  readonly text: string;
+  /** The parsed JSON body (undefined when the body is not JSON). */
+  readonly json: any; // eslint-disable-line @typescript-eslint/no-explicit-any -- tests read any shape
+}
+
+interface AfterHook {
+  after(fn: () => unknown): void;
+}
+
+async function send(
+  url: string,
+  method: string,
+  body: unknown,
+  headers: Record<string, string>,
+): Promise<ApiResponse> {
+  const init: RequestInit = { method, headers: { ...headers } };
+  if (body !== undefined) {
+    init.body = typeof body === 'string' ? body : JSON.stringify(body);
+    (init.headers as Record<string, string>)['content-type'] ??= 'application/json';
+  }
+  const response = await fetch(url, init);
+  const text = await response.text();
+  let json: unknown;
+  try {
+    json = text ? JSON.parse(text) : undefined;
+  } catch {
+    json = undefined;
+  }
+  return { status: response.status, headers: response.headers, text, json };
+}
+
+function client(base: string, headers: () => Record<string, string>): ApiClient {
+  const request = (
+    method: string,
+    route: string,
+    body?: unknown,
+    extra: Record<string, string> = {},
+  ): Promise<ApiResponse> => send(base + route, method, body, { ...headers(), ...extra });
+  return {
+    request,
+    get: (route, extra) => request('GET', route, undefined, extra),
+    post: (route, body, extra) => request('POST', route, body, extra),
+  };
+}
+
+/**
+ * Starts the real server (createApp over a real SQLite file) on an ephemeral port, with the demo
+ * people and a copy of formulas/, and stops it when the test ends.
+ */
+export async function startTestServer(
+  t: AfterHook,
+  env: Record<string, string> = {},
+): Promise<TestServer> {
+  const dir = mkdtempSync(path.join(tmpdir(), 'larder-api-'));
+  t.after(() => rmSync(dir, { recursive: true, force: true }));
+  const formulasDir = path.join(dir, 'formulas');
+  cpSync(path.join(REPO_ROOT, 'formulas'), formulasDir, { recursive: true });
+  const config = loadConfig({
+    LARDER_MODE: 'demo',
+    LARDER_DATA: path.join(dir, 'data'),
+    LARDER_FORMULAS: formulasDir,
+    LARDER_CONSOLE: path.join(dir, 'no-console'),
+    LARDER_SIGN_IN_LIMIT: '1000',
+    ...env,
+  });
+  const context = await openContext(config);
+  t.after(() => context.db.close());
+  await seedDemo(context);
+  const server = createApp(context).listen(0, '127.0.0.1');
+  await new Promise<void>((resolve) => server.once('listening', () => resolve()));
+  t.after(() => new Promise<void>((resolve) => server.close(() => resolve())));
+  server.closeIdleConnections?.();
+  const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+
+  return {
+    url,
+    context,
+    dir,
+    formulasDir,
+    as: (user) =>
+      client(url, (): Record<string, string> =>
+        user === 'anonymous'
+          ? {}
+          : {
+              authorization: `Basic ${Buffer.from(`${user}:${PASSWORDS[user]}`).toString('base64')}`,
+            },
+      ),
+    signIn: async (user) => {
+      const response = await send(
+        `${url}/api/session`,
+        'POST',
+        { username: user, password: PASSWORDS[user] },
+        {},
+      );
+      if (response.status !== 201)
+        throw new Error(`sign-in as ${user} failed: ${response.status} ${response.text}`);
+      const cookie = (response.headers.get('set-cookie') ?? '').split(';')[0];
+      const csrf = response.json.csrfToken as string;
+      return client(url, () => ({ cookie, 'x-csrf-token': csrf }));
+    },
+  };
+}
