@@ -1,7 +1,6 @@
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app.ts';
 import { ConfigError, loadConfig } from './config.ts';
-import { openDatabase } from './db/database.ts';
 import { DEMO_PEOPLE } from './demo/demo-people.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
