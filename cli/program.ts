@@ -4,6 +4,7 @@ import { EXIT_CODES_HELP } from './cli-error.ts';
 import { calcCommand } from './commands/calc.ts';
 import { checkCommand } from './commands/check.ts';
 import { newCommand } from './commands/new.ts';
+import { usersCommand } from './commands/users.ts';
 import type { Io } from './io.ts';
 
 /** Builds the larder command with every verb; used by the bin entry and by tests. */
@@ -17,7 +18,7 @@ export function createProgram(io: Io): Command {
     .configureOutput({ writeOut: (text) => io.out(text), writeErr: (text) => io.err(text) })
     .exitOverride()
     .addHelpText('after', EXIT_CODES_HELP);
-  for (const command of [calcCommand(io), checkCommand(io), newCommand(io)]) {
+  for (const command of [calcCommand(io), checkCommand(io), newCommand(io), usersCommand(io)]) {
     command
       .exitOverride()
       .configureOutput({ writeOut: (text) => io.out(text), writeErr: (text) => io.err(text) });

@@ -2,16 +2,27 @@
 // tells whether a bundle is older than its sources. bin/larder.js and scripts/start.mjs use it
 // so that a fresh clone (or a pull) never runs a missing or stale build, without an install
 // script on the package (which `npx larder` would refuse under strict-allow-scripts).
-import { readFileSync, statSync, writeFileSync } from 'node:fs';
+import { readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 /** Files outside the import graph that still change a bundle. */
 const ALWAYS = ['package.json', 'package-lock.json', 'scripts/bundles.mjs'];
 
-/** The bundles: the CLI carries its packages (fast start); the server loads them from node_modules. */
+/**
+ * The bundles. The CLI carries its packages (fast start) except the database stack, which only
+ * the record-keeping verbs load, from a separate chunk; the server loads its packages from
+ * node_modules.
+ */
 export const BUNDLES = {
-  cli: { entry: 'cli/main.ts', outfile: `${root}dist/cli/larder.js`, packages: 'bundle' },
+  cli: {
+    entry: 'cli/main.ts',
+    outfile: `${root}dist/cli/larder.js`,
+    packages: 'bundle',
+    external: ['sequelize', 'sqlite3', 'umzug', 'connect-session-sequelize', 'express-session'],
+    splitting: true,
+  },
   server: { entry: 'server/main.ts', outfile: `${root}dist/server/main.js`, packages: 'external' },
 };
 
@@ -39,14 +50,20 @@ export function isStale(name) {
 
 /** Bundles one entry point and everything of ours it imports. */
 export async function buildBundle(name) {
-  const { entry, outfile, packages } = BUNDLES[name];
+  const { entry, outfile, packages, external = [], splitting = false } = BUNDLES[name];
   const { build } = await import('esbuild');
+  // Old chunks have hashed names that nothing would overwrite.
+  rmSync(path.join(path.dirname(outfile), 'chunks'), { recursive: true, force: true });
   const result = await build({
     absWorkingDir: root,
-    entryPoints: [entry],
-    outfile,
+    entryPoints: { [path.basename(outfile, '.js')]: entry },
+    // Splitting writes chunks beside the entry; it needs an output folder rather than a file.
+    outdir: path.dirname(outfile),
+    chunkNames: 'chunks/[name]-[hash]',
+    splitting,
     bundle: true,
     packages,
+    external,
     platform: 'node',
     format: 'esm',
     target: 'node20',

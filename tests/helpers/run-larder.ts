@@ -13,6 +13,13 @@ const BUNDLE = path.join(REPO_ROOT, 'dist', 'cli', 'larder.js');
 
 /** Settings a user may have that would change what larder prints; tests start without them. */
 const CLEARED_VARIABLES = [
+  'LARDER_DATA',
+  'LARDER_DB',
+  'LARDER_MODE',
+  'LARDER_NEW_PASSWORD',
+  'LARDER_SERVER',
+  'LARDER_USER',
+  'LARDER_PASSWORD',
   'LARDER_FORMULAS',
   'LARDER_UNITS',
   'NODE_TEST_CONTEXT',
