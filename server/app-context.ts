@@ -1,4 +1,5 @@
 import type { AuditRepository } from './audit/audit-repository.ts';
+import type { BatchRepository } from './batches/batch-repository.ts';
 import type { ServerConfig } from './config.ts';
 import type { Database } from './db/database.ts';
 import type { FormulaStore } from './formulas/formula-store.ts';
@@ -11,4 +12,5 @@ export interface AppContext {
   readonly people: PeopleRepository;
   readonly audit: AuditRepository;
   readonly formulas: FormulaStore;
+  readonly batches: BatchRepository;
 }

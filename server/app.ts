@@ -7,7 +7,9 @@ import { authenticate, useBasicStrategy } from './auth/authenticate.ts';
 import { requireCsrfToken } from './auth/csrf.ts';
 import { sessionMiddleware } from './auth/session.ts';
 import { sessionRouter } from './auth/session-router.ts';
+import { batchesCsv, batchesRouter } from './batches/batches-router.ts';
 import { calcRouter } from './calc/calc-router.ts';
+import { formulasRouter } from './formulas/formulas-router.ts';
 import { consoleRouter, cspNonce } from './http/console-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
 import { peopleRouter } from './people/people-router.ts';
@@ -58,6 +60,10 @@ export function createApp(context: AppContext): Express {
   // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes.
   api.use(authenticate(context.people), requireCsrfToken);
   api.use('/calc', calcRouter(context));
+  api.use('/formulas', formulasRouter(context));
+  api.use('/batches', batchesRouter(context));
+  // A mount at /batches does not match /batches.csv, so the export is a route of its own.
+  api.get('/batches.csv', batchesCsv(context));
   api.use('/people', peopleRouter(context));
   api.use('/audit', auditRouter(context));
   api.use(apiNotFound);

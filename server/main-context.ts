@@ -1,5 +1,6 @@
 import type { AppContext } from './app-context.ts';
 import { AuditRepository } from './audit/audit-repository.ts';
+import { BatchRepository } from './batches/batch-repository.ts';
 import type { ServerConfig } from './config.ts';
 import { openDatabase } from './db/database.ts';
 import { FormulaStore } from './formulas/formula-store.ts';
@@ -8,11 +9,13 @@ import { PeopleRepository } from './people/people-repository.ts';
 /** Opens the database and builds the repositories the routers share; used by main and the tests. */
 export async function openContext(config: ServerConfig): Promise<AppContext> {
   const db = await openDatabase(config.databaseFile);
+  const audit = new AuditRepository(db);
   return {
     config,
     db,
     people: new PeopleRepository(db),
-    audit: new AuditRepository(db),
+    audit,
     formulas: new FormulaStore(config.formulasDir),
+    batches: new BatchRepository(db, audit),
   };
 }

@@ -55,7 +55,9 @@ interface AuditRow {
 export class AuditRepository {
   constructor(private readonly db: Database) {}
 
+  /** Appends an entry: inside the caller's transaction, or as a write of its own. */
   async append(entry: AuditEntry, transaction?: Transaction): Promise<void> {
+    if (!transaction) return this.db.write((own) => this.append(entry, own));
     await this.db.sequelize.query(
       'INSERT INTO audit_events (at, actor_id, actor_name, action, subject, detail, ip) VALUES (?, ?, ?, ?, ?, ?, ?)',
       {

@@ -3,7 +3,7 @@ import connectSessionSequelize from 'connect-session-sequelize';
 import type { RequestHandler } from 'express';
 import type { Database } from '../db/database.ts';
 
-/** How long a console session lasts without use. */
+/** How long a console session lasts after signing in. */
 export const SESSION_IDLE_MS = 12 * 60 * 60 * 1000;
 /** The session cookie's name. */
 export const SESSION_COOKIE = 'larder.sid';
@@ -25,7 +25,8 @@ export function sessionMiddleware(db: Database, secret: string, secure: boolean)
     store,
     resave: false,
     saveUninitialized: false,
-    rolling: true,
+    // Not rolling: touching the session on every request would make every read a write.
+    rolling: false,
     cookie: { httpOnly: true, sameSite: 'strict', secure, maxAge: SESSION_IDLE_MS },
   });
 }

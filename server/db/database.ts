@@ -3,12 +3,14 @@ import path from 'node:path';
 import { Sequelize, Transaction } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as initial from './migrations/001-initial.ts';
+import { WriteQueue, retryWhileBusy } from './write-queue.ts';
+import * as batchSortIndexes from './migrations/002-batch-sort-indexes.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
 
 /** Every schema change, in order. Bundled, so listed here rather than found on disk. */
-const MIGRATIONS = [initial];
+const MIGRATIONS = [initial, batchSortIndexes];
 
 /** An open database: the Sequelize instance the repositories share. */
 export interface Database {
@@ -16,6 +18,29 @@ export interface Database {
   /** Runs `work` in one write transaction that takes the write lock at once (BEGIN IMMEDIATE). */
   write<T>(work: (transaction: Transaction) => Promise<T>): Promise<T>;
   close(): Promise<void>;
+}
+
+/**
+ * Sets the busy timeout and sync mode on every SQLite connection as it is first handed out.
+ * Sequelize's SQLite dialect opens one connection per transaction and never runs the
+ * afterConnect hook, so we wrap its connection manager instead.
+ */
+function configureEachConnection(sequelize: Sequelize): void {
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection(options?: object): Promise<SqliteConnection>;
+  };
+  const getConnection = manager.getConnection.bind(manager);
+  const configured = new WeakSet<SqliteConnection>();
+  manager.getConnection = async (options) => {
+    const connection = await getConnection(options);
+    if (!configured.has(connection)) {
+      connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
+      // WAL with NORMAL sync keeps every committed transaction through a crash of the process.
+      connection.exec('PRAGMA synchronous = NORMAL');
+      configured.add(connection);
+    }
+    return connection;
+  };
 }
 
 interface SqliteConnection {
@@ -30,12 +55,7 @@ interface SqliteConnection {
 export async function openDatabase(file: string): Promise<Database> {
   if (file !== ':memory:') mkdirSync(path.dirname(file), { recursive: true });
   const sequelize = new Sequelize({ dialect: 'sqlite', storage: file, logging: false });
-  sequelize.addHook('afterConnect', (connection) => {
-    const sqlite = connection as SqliteConnection;
-    sqlite.configure('busyTimeout', BUSY_TIMEOUT_MS);
-    // WAL with NORMAL sync keeps every committed transaction through a crash of the process.
-    sqlite.exec('PRAGMA synchronous = NORMAL');
-  });
+  configureEachConnection(sequelize);
   await sequelize.query('PRAGMA journal_mode = WAL');
   const umzug = new Umzug({
     migrations: MIGRATIONS.map((migration) => ({
@@ -46,9 +66,15 @@ export async function openDatabase(file: string): Promise<Database> {
     logger: undefined,
   });
   await umzug.up();
+  const queue = new WriteQueue();
   return {
     sequelize,
-    write: (work) => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, work),
+    // One write transaction at a time in this process (see write-queue.ts), retried while another
+    // process or an autocommit statement holds the lock.
+    write: (work) =>
+      queue.run(() =>
+        retryWhileBusy(() => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, work)),
+      ),
     close: () => sequelize.close(),
   };
 }

@@ -1,14 +1,17 @@
 import type { AppContext } from '../app-context.ts';
 import { DEMO_PEOPLE } from './demo-people.ts';
+import { seedBatches } from './seed-batches.ts';
 
 /**
- * Fills an empty demo database with the invented kitchen's people. Runs only in demo mode and
- * only when there is nobody yet, so restarting the demo keeps what was done in it.
+ * Fills an empty demo database with the invented kitchen's people and a few weeks of their
+ * batches. Runs only in demo mode and only when there is nobody yet, so restarting the demo
+ * keeps what was done in it.
  */
 export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }> {
   if ((await context.people.count()) > 0) return { seeded: false };
   await context.db.write(async (transaction) => {
     for (const person of DEMO_PEOPLE) await context.people.add(person, transaction);
   });
+  await seedBatches(context);
   return { seeded: true };
 }

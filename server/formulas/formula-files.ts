@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import { readFile, readdir } from 'node:fs/promises';
 import path from 'node:path';
+import { parseDocument } from 'yaml';
 import { readFormula, type FormulaReading } from '../../shared/index.ts';
 
 /** One formula file as it is on disk now. */
@@ -41,4 +42,66 @@ export async function readFormulaFolder(folder: string): Promise<FormulaFile[]> 
   const names = (await readdir(folder)).filter((name) => /\.ya?ml$/i.test(name)).sort();
   const files = await Promise.all(names.map((name) => readFormulaFileAt(folder, name)));
   return files.filter((file): file is FormulaFile => file !== undefined);
+}
+
+/**
+ * What a formula id looks like (the schema's pattern). Ids are the only thing a formula file's
+ * path is ever built from, so every id from a request is checked against this first.
+ */
+export const FORMULA_ID = /^[a-z0-9][a-z0-9-]{1,62}$/;
+
+/** Whether a value is a well-formed formula id. */
+export function isFormulaId(value: unknown): value is string {
+  return typeof value === 'string' && FORMULA_ID.test(value);
+}
+
+/** A file name without its .yaml / .yml ending. */
+export function fileStem(name: string): string {
+  return name.replace(/\.ya?ml$/i, '');
+}
+
+/**
+ * The id a file answers to: its formula's id when it reads cleanly, else its file name without
+ * the ending when that is a well-formed id (an invalid file is still a formula someone edits).
+ */
+export function formulaIdOf(file: FormulaFile): string | undefined {
+  const id = file.reading.formula?.id;
+  if (id !== undefined) return id;
+  const stem = fileStem(file.name);
+  return isFormulaId(stem) ? stem : undefined;
+}
+
+/**
+ * Picks the file for each id among files read together, the way FormulaStore.find does: a
+ * formula's own id first (the first file by name when two claim one id), then the file name of a
+ * file that cannot be read as a formula.
+ */
+export function filesById(files: readonly FormulaFile[]): Map<string, FormulaFile> {
+  const chosen = new Map<string, FormulaFile>();
+  for (const file of files) {
+    const id = file.reading.formula?.id;
+    if (id !== undefined && !chosen.has(id)) chosen.set(id, file);
+  }
+  for (const file of files) {
+    const id = formulaIdOf(file);
+    if (!file.reading.formula && id !== undefined && !chosen.has(id)) chosen.set(id, file);
+  }
+  return chosen;
+}
+
+/** Title and kind of a file, read loosely when the file has errors; null when not there. */
+export function formulaFacts(file: FormulaFile): { title: string | null; kind: string | null } {
+  const formula = file.reading.formula;
+  if (formula) return { title: formula.title, kind: formula.kind };
+  let value: unknown;
+  try {
+    value = parseDocument(file.text).toJS({ maxAliasCount: 50 });
+  } catch {
+    value = undefined;
+  }
+  const record = (value && typeof value === 'object' ? value : {}) as Record<string, unknown>;
+  return {
+    title: typeof record.title === 'string' ? record.title : null,
+    kind: typeof record.kind === 'string' ? record.kind : null,
+  };
 }

@@ -1,6 +1,6 @@
 import type { Formula } from '../../shared/index.ts';
 import { AppError, notFound } from '../http/app-error.ts';
-import { readFormulaFolder, type FormulaFile } from './formula-files.ts';
+import { filesById, readFormulaFolder, type FormulaFile } from './formula-files.ts';
 
 /** A formula that can be calculated, with the revision it was read at. */
 export interface CurrentFormula {
@@ -38,6 +38,14 @@ export class FormulaStore {
       files.find((file) => file.reading.formula?.id === id) ??
       files.find((file) => file.name.replace(/\.ya?ml$/i, '') === id)
     );
+  }
+
+  /**
+   * The file that answers to exactly this id (see filesById): unlike find, never a valid formula
+   * of another id that happens to have this file name. The formulas API reads and writes by this.
+   */
+  async fileOf(id: string): Promise<FormulaFile | undefined> {
+    return filesById(await this.files()).get(id);
   }
 
   /**

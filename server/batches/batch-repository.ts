@@ -1,0 +1,198 @@
+import { QueryTypes, type Transaction } from 'sequelize';
+import type { AuditRepository } from '../audit/audit-repository.ts';
+import type { Database } from '../db/database.ts';
+import { notFound } from '../http/app-error.ts';
+import type { Batch, BatchStatus, BatchSummary, ChangeOptions, NewBatch } from './batch.ts';
+import { encodeCursor, type BatchFilter, type ListQuery } from './batch-query.ts';
+import {
+  BATCHES_WITH_PEOPLE,
+  SUMMARY_COLUMNS,
+  toBatch,
+  toEvent,
+  toSummary,
+  type BatchEventRow,
+  type BatchRow,
+} from './batch-rows.ts';
+import { countSql, pageSql } from './batch-sql.ts';
+import { BatchWrites } from './batch-writes.ts';
+
+/** One page of the batch log, with opaque cursors to the pages either side and the filter's count. */
+export interface BatchPage {
+  readonly items: Batch[];
+  readonly next: string | null;
+  readonly prev: string | null;
+  readonly total: number;
+}
+
+/** How often a record is tried again when another writer took its lot code first. */
+const LOT_ATTEMPTS = 5;
+
+type SortedRow = BatchRow & { sort_key: string | number };
+
+function isLotConflict(error: unknown): boolean {
+  const e = error as { name?: string; fields?: unknown; parent?: { message?: string } };
+  return (
+    e.name === 'SequelizeUniqueConstraintError' &&
+    (JSON.stringify(e.fields ?? '').includes('lot_code') ||
+      (e.parent?.message ?? '').includes('lot_code'))
+  );
+}
+
+/**
+ * Recorded batches and their events. Every change is one write transaction that updates the
+ * batch, appends a batch event and appends to the audit log; nothing is updated without an event
+ * and nothing is ever deleted. Returns plain objects.
+ */
+export class BatchRepository {
+  /** The same changes inside a transaction the caller holds, without reading the batch back. */
+  readonly writes: BatchWrites;
+
+  constructor(
+    private readonly db: Database,
+    audit: AuditRepository,
+  ) {
+    this.writes = new BatchWrites(db, audit);
+  }
+
+  /** One write transaction (queued and retried while busy by the database itself). */
+  private write<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
+    return this.db.write(work);
+  }
+
+  private select<T extends object>(
+    sql: string,
+    values: readonly unknown[],
+    transaction?: Transaction,
+  ): Promise<T[]> {
+    return this.db.sequelize.query<T>(sql, {
+      replacements: values as unknown[],
+      type: QueryTypes.SELECT,
+      transaction,
+    });
+  }
+
+  /**
+   * Stores a calculated batch under the next free lot code of its day and formula, with its
+   * 'recorded' event and audit entry, in one write transaction. Should another process take the
+   * lot code first, the UNIQUE index refuses the insert and the record is tried again.
+   */
+  async record(batch: NewBatch, options: ChangeOptions): Promise<Batch> {
+    for (let attempt = 1; ; attempt++) {
+      try {
+        return await this.write(async (t) =>
+          this.mustGet(await this.writes.insert(t, batch, options), t),
+        );
+      } catch (error) {
+        if (attempt >= LOT_ATTEMPTS || !isLotConflict(error)) throw error;
+      }
+    }
+  }
+
+  /**
+   * Moves a batch to another status along the allowed moves, with an event and an audit entry.
+   * @throws AppError 404 no such lot, 409 'bad-transition', 400 discarding without a reason
+   */
+  changeStatus(
+    lot: string,
+    to: BatchStatus,
+    reason: string | null,
+    options: ChangeOptions,
+  ): Promise<Batch> {
+    return this.write(async (t) => {
+      await this.writes.move(t, lot, to, reason, options);
+      return this.mustGet(lot, t);
+    });
+  }
+
+  /**
+   * Records the reviewer's sign-off, once, with an event and an audit entry.
+   * @throws AppError 404 no such lot, 409 'already-signed-off' or 'not-signable'
+   */
+  signOff(lot: string, note: string | null, options: ChangeOptions): Promise<Batch> {
+    return this.write(async (t) => {
+      await this.writes.signOff(t, lot, note, options);
+      return this.mustGet(lot, t);
+    });
+  }
+
+  /** One batch with its events, oldest first; undefined when there is no such lot. */
+  async get(lot: string, transaction?: Transaction): Promise<Batch | undefined> {
+    const [row] = await this.select<BatchRow>(
+      `SELECT ${SUMMARY_COLUMNS}, b.result FROM ${BATCHES_WITH_PEOPLE} WHERE b.lot_code = ?`,
+      [lot],
+      transaction,
+    );
+    if (!row) return undefined;
+    const events = await this.select<BatchEventRow>(
+      `SELECT e.id, e.at, e.actor_id, p.display_name AS actor_name, e.type, e.from_status,
+         e.to_status, e.reason
+       FROM batch_events e LEFT JOIN people p ON p.id = e.actor_id
+       WHERE e.batch_id = ? ORDER BY e.id`,
+      [row.id],
+      transaction,
+    );
+    return toBatch(row, events.map(toEvent));
+  }
+
+  private async mustGet(lot: string, transaction?: Transaction): Promise<Batch> {
+    const batch = await this.get(lot, transaction);
+    if (!batch) throw notFound(`no batch with lot code ${lot}`);
+    return batch;
+  }
+
+  /** How many batches match a filter (all of them by default). */
+  async count(filter: BatchFilter = {}): Promise<number> {
+    const { sql, values } = countSql(filter);
+    const [row] = await this.select<{ n: number }>(sql, values);
+    return row.n;
+  }
+
+  /** One page of the log: the batches with their results, cursors either side, the total. */
+  async list(query: ListQuery): Promise<BatchPage> {
+    const { sql, values } = pageSql(query, true);
+    const rows = await this.select<SortedRow>(sql, values);
+    const more = rows.length > query.limit;
+    const page = rows.slice(0, query.limit);
+    const backwards = query.cursor?.direction === 'prev';
+    if (backwards) page.reverse();
+    const cursorAt = (row: SortedRow | undefined, direction: 'next' | 'prev'): string | null =>
+      row
+        ? encodeCursor(query.sort, query.order, { key: row.sort_key, id: row.id, direction })
+        : null;
+    const first = page[0];
+    const last = page[page.length - 1];
+    return {
+      items: page.map((row) => toBatch(row)),
+      // Backwards, the page we came from lies ahead; forwards, the one we came from lies behind.
+      next: backwards || more ? cursorAt(last, 'next') : null,
+      prev: backwards
+        ? more
+          ? cursorAt(first, 'prev')
+          : null
+        : query.cursor
+          ? cursorAt(first, 'prev')
+          : null,
+      total: await this.count(query.filter),
+    };
+  }
+
+  /**
+   * Every batch a query matches, as summaries (no result), `pageSize` at a time along the same
+   * keyset as the list, so an export of any size holds one page in memory.
+   */
+  async *summaryPages(
+    query: Omit<ListQuery, 'limit' | 'cursor'>,
+    pageSize = 500,
+  ): AsyncGenerator<BatchSummary[]> {
+    let page: ListQuery = { ...query, limit: pageSize };
+    for (;;) {
+      const { sql, values } = pageSql(page, false);
+      const rows = await this.select<SortedRow>(sql, values);
+      const kept = rows.slice(0, pageSize);
+      if (kept.length > 0) yield kept.map(toSummary);
+      if (rows.length <= pageSize) return;
+      const last = kept[kept.length - 1];
+      page = { ...page, cursor: { key: last.sort_key, id: last.id, direction: 'next' } };
+    }
+  }
+}

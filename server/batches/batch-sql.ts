@@ -1,0 +1,115 @@
+import { addDays } from '../../shared/index.ts';
+import { SORTS, type BatchFilter, type ListQuery, type SortKey } from './batch-query.ts';
+import { BATCHES_WITH_PEOPLE, SUMMARY_COLUMNS } from './batch-rows.ts';
+import { prefixRange } from './lot-code.ts';
+
+/** An SQL fragment with its replacement values in order. */
+export interface SqlPart {
+  readonly sql: string;
+  readonly values: readonly unknown[];
+}
+
+/** Statuses a batch leaves within days: however long the log, few batches are in them. */
+const ACTIVE_STATUSES: readonly string[] = ['planned', 'in-progress', 'curing', 'proofing'];
+
+/**
+ * The WHERE clauses of a filter (on batches as `b`).
+ *
+ * When a page is walked along a sort other than recorded (`walking`), the broad filters — formula,
+ * kind, operator, a status list with done or discarded — are written `+column`, which keeps SQLite
+ * from driving the query with their index: it then walks the sort's index and filters, reading
+ * about limit ÷ share-of-matches rows, instead of fetching a quarter of a million matches to sort
+ * them (SQLite has no statistics to tell it a kind matches 25 % of the log). Narrow filters —
+ * active statuses, a lot prefix, a recorded date range, not signed off — keep their indexes. With
+ * the recorded sort every filter has an index in recorded order (001), so all stay plain.
+ */
+export function whereOf(
+  filter: BatchFilter,
+  walking?: SortKey,
+): { clauses: string[]; values: unknown[] } {
+  const clauses: string[] = [];
+  const values: unknown[] = [];
+  const broad = (column: string, sort?: SortKey): string =>
+    walking && walking !== 'recorded' && walking !== sort ? `+${column}` : column;
+  if (filter.formula !== undefined) {
+    clauses.push(`${broad('b.formula_id', 'formula')} = ?`);
+    values.push(filter.formula);
+  }
+  if (filter.kind !== undefined) {
+    clauses.push(`${broad('b.kind')} = ?`);
+    values.push(filter.kind);
+  }
+  if (filter.statuses !== undefined) {
+    const active = filter.statuses.every((status) => ACTIVE_STATUSES.includes(status));
+    clauses.push(
+      `${active ? 'b.status' : broad('b.status')} IN (${filter.statuses.map(() => '?').join(', ')})`,
+    );
+    values.push(...filter.statuses);
+  }
+  if (filter.operatorId !== undefined) {
+    clauses.push(`${broad('b.operator_id')} = ?`);
+    values.push(filter.operatorId);
+  }
+  // recorded_at is an ISO timestamp in UTC: a day is [that day, the next day).
+  if (filter.from !== undefined) {
+    clauses.push('b.recorded_at >= ?');
+    values.push(filter.from);
+  }
+  if (filter.to !== undefined) {
+    clauses.push('b.recorded_at < ?');
+    values.push(addDays(filter.to, 1));
+  }
+  if (filter.lot !== undefined) {
+    // A range rather than LIKE, so the UNIQUE index on lot_code is walked, not the table.
+    const [low, high] = prefixRange(filter.lot);
+    clauses.push('b.lot_code >= ? AND b.lot_code < ?');
+    values.push(low, high);
+  }
+  if (filter.signedOff !== undefined)
+    clauses.push(filter.signedOff ? 'b.signed_off_at IS NOT NULL' : 'b.signed_off_at IS NULL');
+  return { clauses, values };
+}
+
+function where(clauses: readonly string[]): string {
+  return clauses.length ? `WHERE ${clauses.join(' AND ')}` : '';
+}
+
+/** How many batches a filter matches. */
+export function countSql(filter: BatchFilter): SqlPart {
+  const { clauses, values } = whereOf(filter);
+  return { sql: `SELECT COUNT(*) AS n FROM batches b ${where(clauses)}`, values };
+}
+
+/**
+ * One page of a sorted list, read one row beyond the limit to learn whether there is more.
+ * A backward page (a prev cursor) is read in reverse order and must be turned round by the caller.
+ * `sort_key` is the value of the sort expression, for the cursors.
+ */
+export function pageSql(query: ListQuery, withResult: boolean): SqlPart {
+  const { clauses, values } = whereOf(query.filter, query.sort);
+  const sort = SORTS[query.sort];
+  const backwards = query.cursor?.direction === 'prev';
+  const descending = (query.order === 'desc') !== backwards;
+  if (query.cursor) {
+    const comparison = descending ? '<' : '>';
+    if (query.sort === 'formula' && query.filter.formula !== undefined) {
+      // One formula sorted by formula: the key is the same on every row, so the id alone places
+      // the cursor, and SQLite seeks (formula_id = ?, rowid > ?) on the formula index.
+      clauses.push(`b.id ${comparison} ?`);
+      values.push(query.cursor.id);
+    } else {
+      // A row value: SQLite seeks the index on the sort column straight to (key, rowid).
+      clauses.push(`(${sort.expr}, b.id) ${comparison} (?, ?)`);
+      values.push(query.cursor.key, query.cursor.id);
+    }
+  }
+  const direction = descending ? 'DESC' : 'ASC';
+  return {
+    sql: `SELECT ${SUMMARY_COLUMNS}${withResult ? ', b.result' : ''}, ${sort.expr} AS sort_key
+      FROM ${BATCHES_WITH_PEOPLE}
+      ${where(clauses)}
+      ORDER BY ${sort.expr} ${direction}, b.id ${direction}
+      LIMIT ?`,
+    values: [...values, query.limit + 1],
+  };
+}

@@ -1,0 +1,231 @@
+import { QueryTypes, type Transaction } from 'sequelize';
+import type { AuditAction, AuditRepository } from '../audit/audit-repository.ts';
+import type { Database } from '../db/database.ts';
+import { badRequest, conflict, notFound } from '../http/app-error.ts';
+import {
+  UNSIGNABLE_STATUSES,
+  refusedMove,
+  type BatchEvent,
+  type BatchStatus,
+  type ChangeOptions,
+  type NewBatch,
+} from './batch.ts';
+import { MAX_LOT_SEQUENCE, lotCode, lotPrefix, prefixRange } from './lot-code.ts';
+
+/**
+ * The changes to batches, each made inside a write transaction the caller holds: the row, a
+ * batch event and (unless writing demo history) an audit entry, always together.
+ */
+export class BatchWrites {
+  constructor(
+    private readonly db: Database,
+    private readonly audit: AuditRepository,
+  ) {}
+
+  private async select<T extends object>(
+    t: Transaction,
+    sql: string,
+    values: unknown[],
+  ): Promise<T[]> {
+    return this.db.sequelize.query<T>(sql, {
+      replacements: values,
+      type: QueryTypes.SELECT,
+      transaction: t,
+    });
+  }
+
+  private async run(t: Transaction, sql: string, values: unknown[]): Promise<void> {
+    await this.db.sequelize.query(sql, { replacements: values, transaction: t });
+  }
+
+  private async event(
+    t: Transaction,
+    batchId: number,
+    at: string,
+    options: ChangeOptions,
+    event: Pick<BatchEvent, 'type' | 'from' | 'to' | 'reason'>,
+  ): Promise<void> {
+    await this.run(
+      t,
+      'INSERT INTO batch_events (batch_id, at, actor_id, type, from_status, to_status, reason) VALUES (?, ?, ?, ?, ?, ?, ?)',
+      [batchId, at, options.actor.id, event.type, event.from, event.to, event.reason],
+    );
+  }
+
+  private async audited(
+    t: Transaction,
+    options: ChangeOptions,
+    action: AuditAction,
+    lot: string,
+    detail: object,
+  ): Promise<void> {
+    if (options.audit === false) return;
+    await this.audit.append(
+      {
+        actor: options.actor,
+        action,
+        subject: lot,
+        detail,
+        ...(options.ip === undefined ? {} : { ip: options.ip }),
+      },
+      t,
+    );
+  }
+
+  /**
+   * Inserts a batch under the next free lot code of its start day and formula initials, found
+   * in this same transaction (BEGIN IMMEDIATE holds the write lock, so no other record can take
+   * it meanwhile). Returns the lot code.
+   */
+  async insert(t: Transaction, batch: NewBatch, options: ChangeOptions): Promise<string> {
+    const at = options.at ?? new Date().toISOString();
+    const prefix = lotPrefix(batch.startedOn, batch.formula.id);
+    const [low, high] = prefixRange(prefix);
+    const [last] = await this.select<{ n: number | null }>(
+      t,
+      'SELECT MAX(CAST(substr(lot_code, ?) AS INTEGER)) AS n FROM batches WHERE lot_code >= ? AND lot_code < ?',
+      [prefix.length + 1, low, high],
+    );
+    const sequence = (last?.n ?? 0) + 1;
+    if (sequence > MAX_LOT_SEQUENCE)
+      throw conflict(
+        'lot-codes-exhausted',
+        `${MAX_LOT_SEQUENCE} batches of ${batch.formula.id} already start on ${batch.startedOn}`,
+      );
+    const lot = lotCode(prefix, sequence);
+    const [id] = (await this.db.sequelize.query(
+      `INSERT INTO batches (lot_code, formula_id, formula_revision, formula_title, kind, status,
+         operator_id, started_on, ready_on, recorded_at, updated_at, units, inputs, result,
+         checks_passed, nitrite_ppm, notes)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+      {
+        type: QueryTypes.INSERT,
+        transaction: t,
+        replacements: [
+          lot,
+          batch.formula.id,
+          batch.formula.revision,
+          batch.formula.title,
+          batch.kind,
+          batch.status,
+          batch.operatorId,
+          batch.startedOn,
+          batch.readyOn,
+          at,
+          at,
+          batch.units,
+          JSON.stringify(batch.inputs),
+          JSON.stringify(batch.result),
+          batch.checksPassed ? 1 : 0,
+          batch.nitritePpm,
+          batch.notes,
+        ],
+      },
+    )) as unknown as [number, number];
+    await this.event(t, id, at, options, {
+      type: 'recorded',
+      from: null,
+      to: batch.status,
+      reason: null,
+    });
+    await this.audited(t, options, 'batch-record', lot, {
+      formula: batch.formula.id,
+      revision: batch.formula.revision,
+      status: batch.status,
+      checksPassed: batch.checksPassed,
+      ...(batch.nitritePpm === null ? {} : { nitritePpm: batch.nitritePpm }),
+    });
+    return lot;
+  }
+
+  private async current(
+    t: Transaction,
+    lot: string,
+  ): Promise<{
+    id: number;
+    status: BatchStatus;
+    kind: NewBatch['kind'];
+    signed_off_at: string | null;
+  }> {
+    const [row] = await this.select<{
+      id: number;
+      status: BatchStatus;
+      kind: NewBatch['kind'];
+      signed_off_at: string | null;
+    }>(t, 'SELECT id, status, kind, signed_off_at FROM batches WHERE lot_code = ?', [lot]);
+    if (!row) throw notFound(`no batch with lot code ${lot}`);
+    return row;
+  }
+
+  /**
+   * Moves a batch along the allowed moves; discarding needs a reason.
+   * @throws AppError 400 discarding without a reason, 404 no such lot, 409 'bad-transition'
+   */
+  async move(
+    t: Transaction,
+    lot: string,
+    to: BatchStatus,
+    reason: string | null,
+    options: ChangeOptions,
+  ): Promise<void> {
+    if (to === 'discarded' && !reason?.trim())
+      throw badRequest('discarding a batch needs a reason', [
+        { field: 'reason', message: 'is needed to discard a batch' },
+      ]);
+    const at = options.at ?? new Date().toISOString();
+    const batch = await this.current(t, lot);
+    const refused =
+      batch.status === to
+        ? `the batch is already ${to}`
+        : refusedMove(batch.status, to, batch.kind);
+    if (refused) throw conflict('bad-transition', refused, [{ from: batch.status, to }]);
+    await this.run(
+      t,
+      `UPDATE batches SET status = ?, updated_at = ?,
+         discard_reason = CASE WHEN ? = 'discarded' THEN ? ELSE discard_reason END
+       WHERE id = ?`,
+      [to, at, to, reason, batch.id],
+    );
+    await this.event(t, batch.id, at, options, { type: 'status', from: batch.status, to, reason });
+    await this.audited(t, options, 'batch-status', lot, {
+      from: batch.status,
+      to,
+      ...(reason ? { reason } : {}),
+    });
+  }
+
+  /**
+   * Records the reviewer's sign-off, once; planned and discarded batches cannot be signed off.
+   * @throws AppError 404 no such lot, 409 'already-signed-off' or 'not-signable'
+   */
+  async signOff(
+    t: Transaction,
+    lot: string,
+    note: string | null,
+    options: ChangeOptions,
+  ): Promise<void> {
+    const at = options.at ?? new Date().toISOString();
+    const batch = await this.current(t, lot);
+    if (batch.signed_off_at !== null)
+      throw conflict('already-signed-off', `batch ${lot} was signed off at ${batch.signed_off_at}`);
+    if (UNSIGNABLE_STATUSES.includes(batch.status))
+      throw conflict('not-signable', `a ${batch.status} batch cannot be signed off`, [
+        { status: batch.status },
+      ]);
+    await this.run(
+      t,
+      'UPDATE batches SET signed_off_by = ?, signed_off_at = ?, updated_at = ? WHERE id = ?',
+      [options.actor.id, at, at, batch.id],
+    );
+    await this.event(t, batch.id, at, options, {
+      type: 'sign-off',
+      from: null,
+      to: null,
+      reason: note,
+    });
+    await this.audited(t, options, 'batch-sign-off', lot, {
+      status: batch.status,
+      ...(note ? { note } : {}),
+    });
+  }
+}

@@ -1,0 +1,152 @@
+import { Router, type Request, type RequestHandler, type Response } from 'express';
+import type { AppContext } from '../app-context.ts';
+import { requireRole } from '../auth/authenticate.ts';
+import { personOf } from '../auth/request-person.ts';
+import { BATCH_OPTIONS_SCHEMA, UNITS_SCHEMA } from '../calc/calc-request.ts';
+import { notFound } from '../http/app-error.ts';
+import { validateBody } from '../http/validate-body.ts';
+import { BATCH_STATUSES, RECORD_STATUSES, type BatchStatus, type ChangeOptions } from './batch.ts';
+import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
+import { parseListQuery } from './batch-query.ts';
+import { LOT_CODE_PATTERN } from './lot-code.ts';
+import { prepareBatch, type RecordRequest } from './prepare-batch.ts';
+
+const RECORD_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['formula', 'batch'],
+  properties: {
+    formula: { type: 'string', pattern: '^[a-z0-9][a-z0-9-]{1,62}$' },
+    batch: BATCH_OPTIONS_SCHEMA,
+    units: UNITS_SCHEMA,
+    status: { enum: RECORD_STATUSES },
+    notes: { type: 'string', maxLength: 2000 },
+  },
+} as const;
+
+const STATUS_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['to'],
+  properties: {
+    to: { enum: BATCH_STATUSES },
+    reason: { type: 'string', minLength: 1, maxLength: 500 },
+  },
+} as const;
+
+const SIGN_OFF_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  properties: { note: { type: 'string', minLength: 1, maxLength: 500 } },
+} as const;
+
+/** The lot code of a route, upper-cased; 404 for anything that cannot be one. */
+function lotParam(req: Request): string {
+  const lot = String(req.params.lot).toUpperCase();
+  if (!LOT_CODE_PATTERN.test(lot)) throw notFound(`no batch with lot code ${req.params.lot}`);
+  return lot;
+}
+
+function changeBy(req: Request): ChangeOptions {
+  return { actor: personOf(req), ...(req.ip === undefined ? {} : { ip: req.ip }) };
+}
+
+/** A body-less POST counts as an empty object, so `{}` need not be sent. */
+const emptyBody: RequestHandler = (req, _res, next) => {
+  req.body ??= {};
+  next();
+};
+
+/**
+ * /api/batches: the batch log. Every signed-in role reads; admins and cooks record batches and
+ * move them along; admins and reviewers sign them off.
+ */
+export function batchesRouter({ batches, formulas }: AppContext): Router {
+  const router = Router();
+
+  router.get('/', async (req, res) => {
+    res.json(await batches.list(parseListQuery(req.query, true)));
+  });
+
+  router.post('/', requireRole('admin', 'cook'), validateBody(RECORD_BODY), async (req, res) => {
+    const request = req.body as RecordRequest;
+    const operator = personOf(req);
+    const current = await formulas.current(request.formula);
+    const today = new Date().toISOString().slice(0, 10);
+    const batch = await batches.record(
+      prepareBatch(current, request, operator.id, today),
+      changeBy(req),
+    );
+    res.status(201).location(`/api/batches/${batch.lotCode}`).json({ batch });
+  });
+
+  router.get('/:lot', async (req, res) => {
+    const lot = lotParam(req);
+    const batch = await batches.get(lot);
+    if (!batch) throw notFound(`no batch with lot code ${lot}`);
+    res.json({ batch });
+  });
+
+  router.post(
+    '/:lot/status',
+    requireRole('admin', 'cook'),
+    validateBody(STATUS_BODY),
+    async (req, res) => {
+      const { to, reason } = req.body as { to: BatchStatus; reason?: string };
+      const batch = await batches.changeStatus(
+        lotParam(req),
+        to,
+        reason?.trim() || null,
+        changeBy(req),
+      );
+      res.json({ batch });
+    },
+  );
+
+  router.post(
+    '/:lot/sign-off',
+    requireRole('admin', 'reviewer'),
+    emptyBody,
+    validateBody(SIGN_OFF_BODY),
+    async (req, res) => {
+      const { note } = req.body as { note?: string };
+      const batch = await batches.signOff(lotParam(req), note?.trim() || null, changeBy(req));
+      res.json({ batch });
+    },
+  );
+
+  return router;
+}
+
+/** Resolves when the response can take more, or has closed. */
+function drained(res: Response): Promise<void> {
+  return new Promise((resolve) => {
+    const done = (): void => {
+      res.off('drain', done);
+      res.off('close', done);
+      resolve();
+    };
+    res.on('drain', done);
+    res.on('close', done);
+  });
+}
+
+/**
+ * GET /api/batches.csv: the filtered, sorted log as CSV for an inspector or a spreadsheet,
+ * streamed page by page along the keyset so a large export never sits in memory.
+ */
+export function batchesCsv({ batches }: AppContext): RequestHandler {
+  return async (req, res) => {
+    const query = parseListQuery(req.query, false);
+    const stamp = new Date().toISOString().slice(0, 10);
+    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    res.setHeader('Content-Disposition', `attachment; filename="larderbook-batches-${stamp}.csv"`);
+    res.setHeader('Cache-Control', 'no-store');
+    res.write(CSV_HEADER);
+    for await (const page of batches.summaryPages(query)) {
+      if (res.destroyed) break;
+      if (!res.write(page.map(batchCsvLine).join(''))) await drained(res);
+    }
+    res.end();
+  };
+}

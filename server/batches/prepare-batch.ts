@@ -1,0 +1,67 @@
+import type { RawBatchOptions, UnitSystem } from '../../shared/index.ts';
+import { calculateBatch } from '../calc/calc-request.ts';
+import type { CurrentFormula } from '../formulas/formula-store.ts';
+import { AppError } from '../http/app-error.ts';
+import type { NewBatch, RECORD_STATUSES } from './batch.ts';
+
+/** What a cook sends to record a batch: the same options as a calculation, and the status. */
+export interface RecordRequest {
+  /** Formula id; the batch is calculated from the formula's current revision. */
+  readonly formula: string;
+  /** Batch options as strings with their units, as for /api/calc and `larder calc`. */
+  readonly batch: RawBatchOptions;
+  readonly units?: UnitSystem;
+  readonly status?: (typeof RECORD_STATUSES)[number];
+  readonly notes?: string;
+}
+
+/**
+ * Calculates a batch on the server from the formula as it is now and turns it into what is
+ * stored. A batch that fails a critical limit (a cure over its nitrite ceiling) is refused here,
+ * before anything is written.
+ * @param today ISO date used when the request gives no start date
+ * @throws AppError 400 for batch options that cannot make a batch, 422 'critical-limit' when refused
+ */
+export function prepareBatch(
+  current: CurrentFormula,
+  request: RecordRequest,
+  operatorId: number,
+  today: string,
+): NewBatch {
+  const { formula, revision } = current;
+  const inputs: RawBatchOptions = { start: today, ...request.batch };
+  const units = request.units ?? 'metric';
+  const result = calculateBatch(formula, inputs, units);
+  const failed = result.checks.filter((check) => check.critical && check.status === 'fail');
+  if (result.critical) {
+    throw new AppError(
+      422,
+      'critical-limit',
+      `the batch is refused and was not recorded: ${failed.map((check) => check.sentence).join('; ')}`,
+      failed.map((check) => ({
+        check: check.id,
+        label: check.label,
+        value: check.exact,
+        limit: check.limit,
+        rule: check.rule,
+        source: check.source,
+        sentence: check.sentence,
+      })),
+    );
+  }
+  const nitrite = result.checks.find((check) => check.id === 'nitrite-max');
+  return {
+    formula: { id: formula.id, revision, title: formula.title },
+    kind: formula.kind,
+    status: request.status ?? 'in-progress',
+    operatorId,
+    startedOn: inputs.start ?? today,
+    readyOn: result.schedule?.ready ?? null,
+    units,
+    inputs,
+    result,
+    checksPassed: !result.checks.some((check) => check.status === 'fail'),
+    nitritePpm: formula.kind === 'cure' ? (nitrite?.exact ?? null) : null,
+    notes: request.notes?.trim() || null,
+  };
+}

@@ -1,0 +1,255 @@
+import { QueryTypes, type Transaction } from 'sequelize';
+import type { AuditRepository } from '../audit/audit-repository.ts';
+import type { Database } from '../db/database.ts';
+import {
+  filesById,
+  formulaFacts,
+  formulaIdOf,
+  readFormulaFileAt,
+  type FormulaFile,
+} from './formula-files.ts';
+import type { CurrentFormula, FormulaStore } from './formula-store.ts';
+
+/** How a revision came to be: through the API, or found on disk (a git pull, an editor). */
+export type RevisionSource = 'save' | 'upload' | 'disk' | 'create' | 'delete';
+
+/** Who made a revision through the API. */
+export interface RevisionAuthor {
+  readonly id: number;
+  readonly username: string;
+  readonly displayName: string;
+}
+
+/** One row of a formula's history, as the API shows it (without the YAML). */
+export interface FormulaRevision {
+  /** Row id: orders revisions, newest highest. */
+  readonly rowId: number;
+  readonly formulaId: string;
+  /** sha-256 of the YAML text. */
+  readonly revision: string;
+  readonly source: RevisionSource;
+  readonly message: string;
+  readonly title: string | null;
+  readonly kind: string | null;
+  /** null for revisions found on disk. */
+  readonly author: RevisionAuthor | null;
+  /** The git commit that recorded it, when the formulas folder is a git work tree. */
+  readonly commit: string | null;
+  readonly at: string;
+}
+
+/** What it takes to record a revision. */
+export interface NewRevision {
+  readonly formulaId: string;
+  readonly revision: string;
+  readonly yaml: string;
+  readonly title: string | null;
+  readonly kind: string | null;
+  readonly message: string;
+  readonly source: RevisionSource;
+  readonly authorId: number | null;
+}
+
+interface RevisionRow {
+  id: number;
+  formula_id: string;
+  revision: string;
+  yaml?: string;
+  title: string | null;
+  kind: string | null;
+  message: string;
+  source: RevisionSource;
+  author_id: number | null;
+  commit_sha: string | null;
+  created_at: string;
+  username: string | null;
+  display_name: string | null;
+}
+
+const SELECT_ROWS = `SELECT r.id, r.formula_id, r.revision, r.title, r.kind, r.message, r.source,
+  r.author_id, r.commit_sha, r.created_at, p.username, p.display_name
+  FROM formula_revisions r LEFT JOIN people p ON p.id = r.author_id`;
+
+function toRevision(row: RevisionRow): FormulaRevision {
+  return {
+    rowId: row.id,
+    formulaId: row.formula_id,
+    revision: row.revision,
+    source: row.source,
+    message: row.message,
+    title: row.title,
+    kind: row.kind,
+    author:
+      row.author_id === null
+        ? null
+        : {
+            id: row.author_id,
+            username: row.username ?? '',
+            displayName: row.display_name ?? row.username ?? '',
+          },
+    commit: row.commit_sha,
+    at: row.created_at,
+  };
+}
+
+/**
+ * The formula_revisions table: every text a formula has had, who made it and how. The YAML files
+ * stay the source of truth; this is their history. A revision found on disk that is not the
+ * formula's latest recorded one (first sight, a git pull, an editor) is recorded as source "disk".
+ */
+export class FormulaHistory {
+  // The latest revision recorded per formula id, so reads need not ask the database each time.
+  private readonly latestSeen = new Map<string, string>();
+
+  constructor(
+    private readonly store: FormulaStore,
+    private readonly db: Database,
+    private readonly audit: AuditRepository,
+  ) {}
+
+  /** Records a revision; returns its row id. */
+  async insert(revision: NewRevision, transaction: Transaction): Promise<number> {
+    // sqlite answers an INSERT with [last row id, rows changed].
+    const [rowId] = (await this.db.sequelize.query(
+      `INSERT INTO formula_revisions
+         (formula_id, revision, yaml, title, kind, message, source, author_id, created_at)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+      {
+        replacements: [
+          revision.formulaId,
+          revision.revision,
+          revision.yaml,
+          revision.title,
+          revision.kind,
+          revision.message,
+          revision.source,
+          revision.authorId,
+          new Date().toISOString(),
+        ],
+        type: QueryTypes.INSERT,
+        transaction,
+      },
+    )) as unknown as [number, number];
+    return rowId;
+  }
+
+  /** Stores the git commit of a revision once git has made it. */
+  async setCommit(rowId: number, commit: string): Promise<void> {
+    await this.db.sequelize.query('UPDATE formula_revisions SET commit_sha = ? WHERE id = ?', {
+      replacements: [commit, rowId],
+    });
+  }
+
+  /** The newest revision row of a formula. */
+  async latest(formulaId: string, transaction?: Transaction): Promise<FormulaRevision | undefined> {
+    const [row] = await this.db.sequelize.query<RevisionRow>(
+      `${SELECT_ROWS} WHERE r.formula_id = ? ORDER BY r.id DESC LIMIT 1`,
+      { replacements: [formulaId], type: QueryTypes.SELECT, transaction },
+    );
+    return row ? toRevision(row) : undefined;
+  }
+
+  /** The newest revision row of every formula, by formula id. */
+  async latestOfEach(): Promise<Map<string, FormulaRevision>> {
+    const rows = await this.db.sequelize.query<RevisionRow>(
+      `${SELECT_ROWS} WHERE r.id IN (SELECT MAX(id) FROM formula_revisions GROUP BY formula_id)`,
+      { type: QueryTypes.SELECT },
+    );
+    return new Map(rows.map((row) => [row.formula_id, toRevision(row)]));
+  }
+
+  /** A formula's revisions, newest first. */
+  async list(formulaId: string): Promise<FormulaRevision[]> {
+    const rows = await this.db.sequelize.query<RevisionRow>(
+      `${SELECT_ROWS} WHERE r.formula_id = ? ORDER BY r.id DESC`,
+      { replacements: [formulaId], type: QueryTypes.SELECT },
+    );
+    return rows.map(toRevision);
+  }
+
+  /** The newest row holding one revision of a formula, with its YAML. */
+  async find(
+    formulaId: string,
+    revision: string,
+  ): Promise<(FormulaRevision & { yaml: string }) | undefined> {
+    const [row] = await this.db.sequelize.query<RevisionRow & { yaml: string }>(
+      `SELECT r.id, r.formula_id, r.revision, r.yaml, r.title, r.kind, r.message, r.source,
+         r.author_id, r.commit_sha, r.created_at, p.username, p.display_name
+       FROM formula_revisions r LEFT JOIN people p ON p.id = r.author_id
+       WHERE r.formula_id = ? AND r.revision = ? ORDER BY r.id DESC LIMIT 1`,
+      { replacements: [formulaId, revision], type: QueryTypes.SELECT },
+    );
+    return row ? { ...toRevision(row), yaml: row.yaml } : undefined;
+  }
+
+  /** Notes that a formula's latest recorded revision is this one (after a committed write). */
+  remember(formulaId: string, revision: string): void {
+    this.latestSeen.set(formulaId, revision);
+  }
+
+  /**
+   * Records, as source "disk", every file whose text is not its formula's latest recorded
+   * revision. Each file is read again inside the write transaction, so a save that renamed its
+   * file and recorded its row in one transaction is never mistaken for a change on disk, and two
+   * readers never record one change twice.
+   */
+  async note(files: readonly FormulaFile[]): Promise<void> {
+    const pending = [...filesById(files)].filter(
+      ([id, file]) => this.latestSeen.get(id) !== file.revision,
+    );
+    if (pending.length === 0) return;
+    const seen: [string, string][] = [];
+    await this.db.write(async (transaction) => {
+      for (const [id, file] of pending) {
+        const fresh = await readFormulaFileAt(this.store.folder, file.name);
+        if (!fresh || formulaIdOf(fresh) !== id) continue;
+        await this.noteInTransaction(id, fresh, transaction);
+        seen.push([id, fresh.revision]);
+      }
+    });
+    for (const [id, revision] of seen) this.remember(id, revision);
+  }
+
+  /**
+   * Inside a write transaction: records the file as found on disk unless it is the formula's
+   * latest recorded revision; a change to a known formula is audited.
+   */
+  async noteInTransaction(id: string, file: FormulaFile, transaction: Transaction): Promise<void> {
+    const latest = await this.latest(id, transaction);
+    if (latest?.revision === file.revision) return;
+    const { title, kind } = formulaFacts(file);
+    await this.insert(
+      {
+        formulaId: id,
+        revision: file.revision,
+        yaml: file.text,
+        title,
+        kind,
+        message: latest ? 'changed on disk' : 'found on disk',
+        source: 'disk',
+        authorId: null,
+      },
+      transaction,
+    );
+    if (latest) {
+      await this.audit.append(
+        {
+          action: 'formula-disk-change',
+          subject: id,
+          detail: { file: file.name, from: latest.revision, to: file.revision },
+        },
+        transaction,
+      );
+    }
+  }
+
+  /**
+   * FormulaStore.current, with the revision recorded in the history first. For callers that keep
+   * the revision (a batch record): call it before, not inside, a write transaction of your own.
+   */
+  async current(id: string): Promise<CurrentFormula> {
+    const current = await this.store.current(id);
+    await this.note([current.file]);
+    return current;
+  }
+}

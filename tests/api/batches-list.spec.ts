@@ -1,0 +1,286 @@
+import assert from 'node:assert/strict';
+import { after, before, describe, it } from 'node:test';
+import { QueryTypes } from 'sequelize';
+import { parseListQuery, type SortKey } from '../../server/batches/batch-query.ts';
+import { countSql, pageSql } from '../../server/batches/batch-sql.ts';
+import { startTestServer, type ApiClient, type TestServer } from '../helpers/test-server.ts';
+
+interface Item {
+  lotCode: string;
+  formula: { id: string };
+  kind: string;
+  status: string;
+  operator: { id: number };
+  startedOn: string;
+  readyOn: string | null;
+  recordedAt: string;
+  signedOff: unknown;
+}
+
+const RANK: Record<string, number> = {
+  planned: 1,
+  'in-progress': 2,
+  curing: 3,
+  proofing: 4,
+  done: 5,
+  discarded: 6,
+};
+
+/** The value each sort orders by, as the API documents it. */
+const SORT_KEY: Record<SortKey, (b: Item) => string | number> = {
+  recorded: (b) => b.recordedAt,
+  lot: (b) => b.lotCode,
+  started: (b) => b.startedOn,
+  ready: (b) => b.readyOn ?? '9999-12-31',
+  status: (b) => RANK[b.status],
+  formula: (b) => b.formula.id,
+};
+
+interface Walk {
+  items: Item[];
+  pages: Item[][];
+  total: number;
+  last: { prev: string | null };
+}
+
+/** Follows `next` from the first page to the last, checking each page's shape. */
+async function walk(client: ApiClient, query: string, limit = 200): Promise<Walk> {
+  const pages: Item[][] = [];
+  let url = `/api/batches?limit=${limit}${query ? `&${query}` : ''}`;
+  let total = -1;
+  let last = { prev: null as string | null };
+  for (let guard = 0; guard < 1000; guard++) {
+    const response = await client.get(url);
+    assert.equal(response.status, 200, `${url}: ${response.text}`);
+    const { items, next, prev } = response.json;
+    if (total === -1) total = response.json.total;
+    assert.equal(response.json.total, total, 'the total stays the same on every page');
+    assert.ok(items.length <= limit);
+    pages.push(items);
+    last = { prev };
+    if (!next) break;
+    assert.equal(items.length, limit, 'only the last page is short');
+    url = `/api/batches?limit=${limit}${query ? `&${query}` : ''}&cursor=${next}`;
+  }
+  return { items: pages.flat(), pages, total, last };
+}
+
+const lots = (items: readonly Item[]): string[] => items.map((b) => b.lotCode);
+
+describe('listing batches', () => {
+  let server: TestServer;
+  let reader: ApiClient;
+  let all: Item[];
+  const stops: (() => unknown)[] = [];
+
+  before(async () => {
+    server = await startTestServer({ after: (fn) => void stops.push(fn) });
+    // A session, so that the many pages below do not each pay for a password hash.
+    reader = await server.signIn('imke');
+    // A few of our own beside the demo weeks: two on one day, a planned one, one by rosa.
+    const record = async (user: 'tobin' | 'rosa', body: object): Promise<void> => {
+      const response = await server.as(user).post('/api/batches', body);
+      assert.equal(response.status, 201, response.text);
+    };
+    const belly = { formula: 'quillmoor-belly', batch: { meat: '4.3kg', thickness: '4cm' } };
+    await record('tobin', { ...belly, batch: { ...belly.batch, start: '2024-02-29' } });
+    await record('tobin', { ...belly, batch: { ...belly.batch, start: '2024-02-29' } });
+    await record('rosa', { formula: 'brisket-rub', batch: { base: '1kg', start: '2024-03-01' } });
+    await record('tobin', { ...belly, status: 'planned' });
+    all = (await walk(reader, '')).items;
+  });
+  after(async () => {
+    for (const stop of stops.reverse()) await stop();
+  });
+
+  it('should list the newest first, 50 to a page, with the total', async () => {
+    const response = await reader.get('/api/batches');
+    assert.equal(response.status, 200);
+    assert.equal(response.json.items.length, Math.min(50, all.length));
+    assert.equal(response.json.total, all.length);
+    assert.equal(response.json.prev, null);
+    assert.ok(all.length > 50, 'the demo weeks fill more than a page');
+    assert.equal(typeof response.json.next, 'string');
+    const times = all.map((b) => b.recordedAt);
+    assert.deepEqual(times, [...times].sort().reverse());
+    assert.equal(new Set(lots(all)).size, all.length);
+    assert.ok(response.json.items[0].result.checks, 'list items carry their result');
+  });
+
+  it('should walk every sort, both ways, with no batch missed or repeated', async () => {
+    for (const sort of Object.keys(SORT_KEY) as SortKey[]) {
+      for (const order of ['asc', 'desc']) {
+        const query = `sort=${sort}&order=${order}`;
+        const forward = await walk(reader, query, 7);
+        const seen = lots(forward.items);
+        assert.equal(forward.total, all.length, query);
+        assert.equal(seen.length, all.length, `${query}: every batch once`);
+        assert.deepEqual([...seen].sort(), [...lots(all)].sort(), `${query}: the same batches`);
+        const keys = forward.items.map(SORT_KEY[sort]);
+        for (let i = 1; i < keys.length; i++)
+          assert.ok(
+            order === 'asc' ? keys[i - 1] <= keys[i] : keys[i - 1] >= keys[i],
+            `${query}: ${String(keys[i - 1])} then ${String(keys[i])}`,
+          );
+        // Back from the last page along prev: the same pages in reverse.
+        const back: Item[][] = [];
+        let prev = forward.last.prev;
+        while (prev) {
+          const response = await reader.get(`/api/batches?limit=7&${query}&cursor=${prev}`);
+          assert.equal(response.status, 200, response.text);
+          back.unshift(response.json.items);
+          prev = response.json.prev;
+          assert.equal(typeof response.json.next, 'string', 'a page reached backwards has a next');
+        }
+        assert.deepEqual(
+          back.map(lots),
+          forward.pages.slice(0, -1).map(lots),
+          `${query}: prev retraces next`,
+        );
+      }
+    }
+  });
+
+  it('should filter by formula, kind, status list, operator, dates, lot prefix and sign-off', async () => {
+    const people = (await server.as('rosa').get('/api/people')).json.people as {
+      id: number;
+      username: string;
+    }[];
+    const rosa = people.find((p) => p.username === 'rosa')?.id ?? 0;
+    const middle = all[Math.floor(all.length / 2)].recordedAt.slice(0, 10);
+    const day = (b: Item): string => b.recordedAt.slice(0, 10);
+    const lotPrefix = all.find((b) => b.formula.id === 'pit-bun')?.lotCode.slice(0, 6) ?? '';
+    const cases: [string, (b: Item) => boolean][] = [
+      ['formula=quillmoor-belly', (b) => b.formula.id === 'quillmoor-belly'],
+      ['kind=dough', (b) => b.kind === 'dough'],
+      ['status=curing', (b) => b.status === 'curing'],
+      [
+        'status=curing,planned,discarded',
+        (b) => ['curing', 'planned', 'discarded'].includes(b.status),
+      ],
+      [`operator=${rosa}`, (b) => b.operator.id === rosa],
+      [`from=${middle}`, (b) => day(b) >= middle],
+      [`to=${middle}`, (b) => day(b) <= middle],
+      [`from=${middle}&to=${middle}`, (b) => day(b) === middle],
+      [`lot=${lotPrefix.toLowerCase()}`, (b) => b.lotCode.startsWith(lotPrefix)],
+      ['lot=240229-QB', (b) => b.lotCode.startsWith('240229-QB')],
+      ['signedOff=true', (b) => b.signedOff !== null],
+      ['signedOff=false', (b) => b.signedOff === null],
+      [
+        'kind=cure&status=done,curing&signedOff=false',
+        (b) => b.kind === 'cure' && ['done', 'curing'].includes(b.status) && b.signedOff === null,
+      ],
+      ['kind=cure&sort=lot', (b) => b.kind === 'cure'],
+      ['formula=pit-bun&sort=started&order=asc', (b) => b.formula.id === 'pit-bun'],
+      ['status=done&sort=status', (b) => b.status === 'done'],
+      ['status=curing&sort=ready', (b) => b.status === 'curing'],
+      ['formula=no-such-formula', () => false],
+    ];
+    for (const [query, keep] of cases) {
+      const expected = all.filter(keep);
+      const got = await walk(reader, query, 10);
+      assert.equal(got.total, expected.length, query);
+      assert.deepEqual([...lots(got.items)].sort(), [...lots(expected)].sort(), query);
+    }
+    assert.ok(all.some((b) => b.signedOff !== null) && all.some((b) => b.status === 'curing'));
+  });
+
+  it('should refuse unknown, repeated or malformed parameters and cursors of another list', async () => {
+    const first = await reader.get('/api/batches?limit=5&sort=lot');
+    const cursor = first.json.next as string;
+    const cases: [string, string][] = [
+      ['colour=red', 'bad-request'],
+      ['status=cooking', 'bad-request'],
+      ['status=done&status=curing', 'bad-request'],
+      ['kind=sausage', 'bad-request'],
+      ['operator=tobin', 'bad-request'],
+      ['from=2026-02-30', 'bad-request'],
+      ['from=2026-03-02&to=2026-03-01', 'bad-request'],
+      ['lot=26%25', 'bad-request'],
+      ['signedOff=yes', 'bad-request'],
+      ['sort=weight', 'bad-request'],
+      ['order=up', 'bad-request'],
+      ['limit=0', 'bad-request'],
+      ['limit=201', 'bad-request'],
+      ['limit=1.5', 'bad-request'],
+      ['cursor=not-a-cursor', 'bad-cursor'],
+      [
+        `cursor=${Buffer.from('{"s":"lot","o":"asc","k":1,"i":1,"d":"n"}').toString('base64url')}&sort=lot`,
+        'bad-cursor',
+      ],
+      [`cursor=${cursor}`, 'bad-cursor'],
+      [`cursor=${cursor}&sort=lot&order=desc`, 'bad-cursor'],
+    ];
+    for (const [query, code] of cases) {
+      const response = await reader.get(`/api/batches?${query}`);
+      assert.equal(response.status, 400, `${query}: ${response.text}`);
+      assert.equal(response.json.error.code, code, query);
+      assert.ok(response.json.error.details.length > 0, query);
+    }
+    assert.equal((await reader.get(`/api/batches?limit=5&sort=lot&cursor=${cursor}`)).status, 200);
+  });
+
+  it('should answer 404 for a lot that does not exist', async () => {
+    for (const lot of ['240229-QB-99', 'not-a-lot', '%00']) {
+      const response = await reader.get(`/api/batches/${lot}`);
+      assert.equal(response.status, 404, lot);
+      assert.equal(response.json.error.code, 'not-found');
+    }
+  });
+
+  it('should seek every page along an index instead of sorting, whatever the sort', async () => {
+    const plan = async (sql: string, values: readonly unknown[]): Promise<string> => {
+      const rows = await server.context.db.sequelize.query<{ detail: string }>(
+        `EXPLAIN QUERY PLAN ${sql}`,
+        { replacements: values as unknown[], type: QueryTypes.SELECT },
+      );
+      return rows.map((row) => row.detail).join(' | ');
+    };
+    const columns: Record<SortKey, string> = {
+      recorded: 'recorded_at',
+      lot: 'lot_code',
+      started: 'started_on',
+      ready: 'ready_key',
+      status: 'status_rank',
+      formula: 'formula_id',
+    };
+    for (const sort of Object.keys(columns) as SortKey[]) {
+      for (const filters of [{}, { kind: 'cure' }, { formula: 'pit-bun', operator: '2' }]) {
+        // Sorting one formula by formula orders by id alone, on that formula's index.
+        const pinned = sort === 'formula' && 'formula' in filters;
+        for (const order of ['asc', 'desc']) {
+          const query = parseListQuery({ ...filters, sort, order }, true);
+          const key = sort === 'status' ? 3 : '2026-01-01';
+          for (const direction of ['next', 'prev'] as const) {
+            const { sql, values } = pageSql({ ...query, cursor: { key, id: 10, direction } }, true);
+            const detail = await plan(sql, values);
+            const label = `${JSON.stringify(filters)} ${sort} ${order} ${direction}: ${detail}`;
+            assert.doesNotMatch(detail, /TEMP B-TREE/, label);
+            // 001's (recorded_at, id) seeks on recorded_at, which is all but unique; every other
+            // sort seeks straight to the cursor's (key, rowid).
+            const seek = pinned
+              ? /SEARCH b USING INDEX batches_formula_order \(formula_id=\? AND rowid[<>]\?\)/
+              : sort === 'recorded'
+                ? /SEARCH b USING INDEX \w+ \((\w+=\? AND )?recorded_at[<>]\?\)/
+                : new RegExp(
+                    `SEARCH b USING INDEX \\w+ \\(.*\\(${columns[sort]},rowid\\)[<>]\\(\\?,\\?\\)\\)`,
+                  );
+            assert.match(detail, seek, label);
+          }
+        }
+      }
+    }
+    // Narrow filters keep their own index: a lot prefix, curing now, the unsigned queue.
+    const narrow: [Record<string, string>, RegExp][] = [
+      [{ lot: '2612' }, /sqlite_autoindex_batches_1 \(lot_code>\? AND lot_code<\?\)/],
+      [{ status: 'curing', sort: 'ready' }, /batches_status_ready_order \(status=\?\)/],
+      [{ status: 'done', signedOff: 'false' }, /batches_unsigned \(status=\?\)/],
+    ];
+    for (const [filters, index] of narrow) {
+      const query = parseListQuery(filters, true);
+      assert.match(await plan(pageSql(query, true).sql, pageSql(query, true).values), index);
+      const count = countSql(query.filter);
+      assert.match(await plan(count.sql, count.values), index);
+    }
+  });
+});

@@ -1,0 +1,204 @@
+import assert from 'node:assert/strict';
+import { describe, it } from 'node:test';
+import { startTestServer, type ApiClient, type TestServer } from '../helpers/test-server.ts';
+
+const BELLY = {
+  formula: 'quillmoor-belly',
+  batch: { meat: '4.26kg', thickness: '4cm', start: '2024-02-29' },
+} as const;
+const BUN = { formula: 'pit-bun', batch: { pieces: '24', start: '2024-02-29' } } as const;
+
+/** Records a batch and returns its lot code. */
+async function record(client: ApiClient, body: object): Promise<string> {
+  const response = await client.post('/api/batches', body);
+  assert.equal(response.status, 201, response.text);
+  return response.json.batch.lotCode as string;
+}
+
+/** The batch as it is now, with its events. */
+async function read(server: TestServer, lot: string) {
+  const response = await server.as('rosa').get(`/api/batches/${lot}`);
+  assert.equal(response.status, 200, response.text);
+  return response.json.batch as {
+    status: string;
+    updatedAt: string;
+    discardReason: string | null;
+    signedOff: { by: { displayName: string }; at: string } | null;
+    events: {
+      type: string;
+      by: { displayName: string };
+      from: string;
+      to: string;
+      reason: string;
+    }[];
+  };
+}
+
+describe('moving a batch along', () => {
+  it('should take a cure from planned to done, appending an event and an audit entry each time', async (t) => {
+    const server = await startTestServer(t);
+    const tobin = await server.signIn('tobin');
+    const lot = await record(tobin, { ...BELLY, status: 'planned' });
+    let updatedAt = (await read(server, lot)).updatedAt;
+    for (const to of ['in-progress', 'curing', 'done']) {
+      const response = await tobin.post(`/api/batches/${lot}/status`, { to });
+      assert.equal(response.status, 200, response.text);
+      assert.equal(response.json.batch.status, to);
+      assert.ok(response.json.batch.updatedAt >= updatedAt);
+      updatedAt = response.json.batch.updatedAt;
+    }
+    const batch = await read(server, lot);
+    assert.deepEqual(
+      batch.events.map((e) => [e.type, e.from, e.to, e.by.displayName]),
+      [
+        ['recorded', null, 'planned', 'Tobin Ashgrove (cook)'],
+        ['status', 'planned', 'in-progress', 'Tobin Ashgrove (cook)'],
+        ['status', 'in-progress', 'curing', 'Tobin Ashgrove (cook)'],
+        ['status', 'curing', 'done', 'Tobin Ashgrove (cook)'],
+      ],
+    );
+    const audit = await server.as('rosa').get('/api/audit?action=batch-status');
+    const mine = (audit.json.events as { subject: string; detail: { to: string } }[]).filter(
+      (e) => e.subject === lot,
+    );
+    assert.deepEqual(
+      mine.map((e) => e.detail.to),
+      ['done', 'curing', 'in-progress'],
+    );
+  });
+
+  it('should let doughs proof and cures cure, not the other way round', async (t) => {
+    const server = await startTestServer(t);
+    const rosa = server.as('rosa');
+    const bun = await record(rosa, BUN);
+    const belly = await record(rosa, BELLY);
+    const curingBun = await rosa.post(`/api/batches/${bun}/status`, { to: 'curing' });
+    assert.equal(curingBun.status, 409, curingBun.text);
+    assert.equal(curingBun.json.error.code, 'bad-transition');
+    const proofingBelly = await rosa.post(`/api/batches/${belly}/status`, { to: 'proofing' });
+    assert.equal(proofingBelly.status, 409, proofingBelly.text);
+    assert.equal((await rosa.post(`/api/batches/${bun}/status`, { to: 'proofing' })).status, 200);
+    assert.equal((await rosa.post(`/api/batches/${bun}/status`, { to: 'done' })).status, 200);
+    // A cure may also go straight to done (a same-day cure such as hot links).
+    assert.equal((await rosa.post(`/api/batches/${belly}/status`, { to: 'done' })).status, 200);
+  });
+
+  it('should refuse the moves the workflow does not allow and leave the batch as it was', async (t) => {
+    const server = await startTestServer(t);
+    const tobin = await server.signIn('tobin');
+    const planned = await record(tobin, { ...BELLY, status: 'planned' });
+    const done = await record(tobin, BELLY);
+    await tobin.post(`/api/batches/${done}/status`, { to: 'done' });
+    const discarded = await record(tobin, BELLY);
+    await tobin.post(`/api/batches/${discarded}/status`, { to: 'discarded', reason: 'dropped' });
+    const refusals: [string, object, number, string][] = [
+      [planned, { to: 'done' }, 409, 'bad-transition'],
+      [planned, { to: 'curing' }, 409, 'bad-transition'],
+      [planned, { to: 'planned' }, 409, 'bad-transition'],
+      [done, { to: 'discarded', reason: 'changed our mind' }, 409, 'bad-transition'],
+      [done, { to: 'in-progress' }, 409, 'bad-transition'],
+      [discarded, { to: 'in-progress' }, 409, 'bad-transition'],
+      [planned, { to: 'cooking' }, 400, 'bad-request'],
+      [planned, {}, 400, 'bad-request'],
+      [planned, { to: 'in-progress', why: 'x' }, 400, 'bad-request'],
+      [planned, { to: 'in-progress', reason: 7 }, 400, 'bad-request'],
+      ['240229-QB-99', { to: 'in-progress' }, 404, 'not-found'],
+    ];
+    const before = await Promise.all([planned, done, discarded].map((lot) => read(server, lot)));
+    for (const [lot, body, status, code] of refusals) {
+      const response = await tobin.post(`/api/batches/${lot}/status`, body);
+      assert.equal(response.status, status, `${lot} ${JSON.stringify(body)}: ${response.text}`);
+      assert.equal(response.json.error.code, code, JSON.stringify(body));
+    }
+    const afterwards = await Promise.all(
+      [planned, done, discarded].map((lot) => read(server, lot)),
+    );
+    assert.deepEqual(afterwards, before);
+    const reviewer = await server.as('imke').post(`/api/batches/${planned}/status`, {
+      to: 'in-progress',
+    });
+    assert.equal(reviewer.status, 403);
+  });
+
+  it('should need a reason to discard a batch, and keep it', async (t) => {
+    const server = await startTestServer(t);
+    const tobin = server.as('tobin');
+    const lot = await record(tobin, BELLY);
+    for (const body of [{ to: 'discarded' }, { to: 'discarded', reason: '   ' }]) {
+      const response = await tobin.post(`/api/batches/${lot}/status`, body);
+      assert.equal(response.status, 400, response.text);
+    }
+    assert.equal((await read(server, lot)).status, 'in-progress');
+    const reason = 'Vacuum bag split in the walk-in; the belly sat in its own brine, unbagged.';
+    const response = await tobin.post(`/api/batches/${lot}/status`, { to: 'discarded', reason });
+    assert.equal(response.status, 200, response.text);
+    const batch = await read(server, lot);
+    assert.equal(batch.status, 'discarded');
+    assert.equal(batch.discardReason, reason);
+    assert.equal(batch.events.at(-1)?.reason, reason);
+  });
+});
+
+describe('signing a batch off', () => {
+  it('should let a reviewer sign off once, and refuse a second sign-off and a cook', async (t) => {
+    const server = await startTestServer(t);
+    const lot = await record(server.as('tobin'), BELLY);
+    await server.as('tobin').post(`/api/batches/${lot}/status`, { to: 'curing' });
+    const cook = await server.as('tobin').post(`/api/batches/${lot}/sign-off`, {});
+    assert.equal(cook.status, 403, cook.text);
+    assert.equal(cook.json.error.code, 'forbidden');
+
+    const imke = await server.signIn('imke');
+    const signed = await imke.post(`/api/batches/${lot}/sign-off`, {
+      note: 'Cure weights checked against the scale print-out.',
+    });
+    assert.equal(signed.status, 200, signed.text);
+    assert.equal(signed.json.batch.signedOff.by.displayName, 'Imke Saltaire (food safety)');
+    const batch = await read(server, lot);
+    assert.deepEqual(
+      { ...batch.events.at(-1), at: undefined },
+      {
+        type: 'sign-off',
+        at: undefined,
+        by: signed.json.batch.signedOff.by,
+        from: null,
+        to: null,
+        reason: 'Cure weights checked against the scale print-out.',
+      },
+    );
+    const audit = await server.as('rosa').get('/api/audit?action=batch-sign-off');
+    assert.equal(audit.json.events[0].subject, lot);
+    assert.equal(audit.json.events[0].actorName, 'imke');
+
+    const again = await server.as('rosa').post(`/api/batches/${lot}/sign-off`, {});
+    assert.equal(again.status, 409, again.text);
+    assert.equal(again.json.error.code, 'already-signed-off');
+    assert.deepEqual((await read(server, lot)).signedOff, batch.signedOff);
+    // Signed off while curing, it still goes on to done.
+    assert.equal(
+      (await server.as('tobin').post(`/api/batches/${lot}/status`, { to: 'done' })).status,
+      200,
+    );
+  });
+
+  it('should let an admin sign off without a body, and refuse planned and discarded batches', async (t) => {
+    const server = await startTestServer(t);
+    const rosa = server.as('rosa');
+    const done = await record(rosa, BUN);
+    await rosa.post(`/api/batches/${done}/status`, { to: 'done' });
+    const bare = await rosa.request('POST', `/api/batches/${done}/sign-off`);
+    assert.equal(bare.status, 200, bare.text);
+    const planned = await record(rosa, { ...BUN, status: 'planned' });
+    const discarded = await record(rosa, BUN);
+    await rosa.post(`/api/batches/${discarded}/status`, { to: 'discarded', reason: 'overproofed' });
+    for (const lot of [planned, discarded]) {
+      const response = await rosa.post(`/api/batches/${lot}/sign-off`, {});
+      assert.equal(response.status, 409, response.text);
+      assert.equal(response.json.error.code, 'not-signable');
+      assert.equal((await read(server, lot)).signedOff, null);
+    }
+    const bad = await rosa.post(`/api/batches/${done}/sign-off`, { note: 'x'.repeat(501) });
+    assert.equal(bad.status, 400);
+    assert.equal((await rosa.post('/api/batches/240229-PB-99/sign-off', {})).status, 404);
+  });
+});
