@@ -16,9 +16,12 @@ export default tseslint.config(
       '**/*.generated.js',
     ],
   },
-  js.configs.recommended,
-  ...tseslint.configs.recommended,
   {
+    files: ['**/*.ts', '**/*.js', '**/*.mjs'],
+    extends: [js.configs.recommended, ...tseslint.configs.recommended],
+  },
+  {
+    files: ['**/*.ts', '**/*.js', '**/*.mjs'],
     languageOptions: { globals: { ...globals.node } },
     rules: {
       '@typescript-eslint/no-unused-vars': [
