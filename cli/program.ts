@@ -1,6 +1,7 @@
 import { Command } from 'commander';
 import packageJson from '../package.json' with { type: 'json' };
 import { EXIT_CODES_HELP } from './cli-error.ts';
+import { batchesCommand } from './commands/batches.ts';
 import { calcCommand } from './commands/calc.ts';
 import { checkCommand } from './commands/check.ts';
 import { newCommand } from './commands/new.ts';
@@ -18,7 +19,13 @@ export function createProgram(io: Io): Command {
     .configureOutput({ writeOut: (text) => io.out(text), writeErr: (text) => io.err(text) })
     .exitOverride()
     .addHelpText('after', EXIT_CODES_HELP);
-  for (const command of [calcCommand(io), checkCommand(io), newCommand(io), usersCommand(io)]) {
+  for (const command of [
+    calcCommand(io),
+    checkCommand(io),
+    newCommand(io),
+    batchesCommand(io),
+    usersCommand(io),
+  ]) {
     command
       .exitOverride()
       .configureOutput({ writeOut: (text) => io.out(text), writeErr: (text) => io.err(text) });

@@ -4,6 +4,7 @@ import {
   calculate,
   parseBatchOptions,
   presentResult,
+  type PresentedResult,
   type RawBatchOptions,
   type UnitSystem,
 } from '../../shared/index.ts';
@@ -93,6 +94,10 @@ interface CalcOptions extends RawBatchOptions {
   units: UnitSystem;
   json?: boolean;
   formulas?: string;
+  record?: boolean;
+  server?: string;
+  status?: 'planned' | 'in-progress';
+  notes?: string;
 }
 
 /** `larder calc FORMULA`: the batch sheet for one batch. */
@@ -109,7 +114,22 @@ export function calcCommand(io: Io): Command {
     .option(
       '--formulas <folder>',
       'folder to look formula ids up in (default: $LARDER_FORMULAS or ./formulas)',
-    );
+    )
+    .option(
+      '--record',
+      'record the batch with its lot code (as $LARDER_USER, password in $LARDER_PASSWORD)',
+    )
+    .option(
+      '--server <url>',
+      'with --record: record on this Larderbook server instead of this machine (default: $LARDER_SERVER)',
+    )
+    .addOption(
+      new Option('--status <status>', 'with --record: planned or in-progress (default)').choices([
+        'planned',
+        'in-progress',
+      ]),
+    )
+    .option('--notes <text>', 'with --record: a note kept with the batch');
   for (const [, flags, help] of BATCH_OPTIONS) command.option(flags, help, onlyOnce(flags));
   return command
     .addHelpText(
@@ -122,15 +142,22 @@ Examples:
   larder calc pit-bun --pieces 48 --piece 90g --loss 3 --room 22C --flour-temp 20C --preferment-temp 19C --tap 16C
   larder calc chuck-grind --total 20kg --target-fat 20
   larder calc chuck-grind --on-hand lean=12kg --json
+  LARDER_USER=tobin LARDER_PASSWORD=… larder calc quillmoor-belly --meat 4.26kg --thickness 4cm --record
+  larder calc quillmoor-belly --meat 4.26kg --record --server http://127.0.0.1:4310
 ${EXIT_CODES_HELP}`,
     )
     .action((reference: string, options: CalcOptions) => runCalc(reference, options, io));
 }
 
-function runCalc(reference: string, options: CalcOptions, io: Io): void {
-  const { formula, warnings } = loadFormula(reference, formulasFolder(options.formulas));
+async function runCalc(reference: string, options: CalcOptions, io: Io): Promise<void> {
+  const { formula, file, warnings } = loadFormula(reference, formulasFolder(options.formulas));
   const raw: RawBatchOptions = { start: today() };
   for (const [key] of BATCH_OPTIONS) if (options[key] !== undefined) raw[key] = options[key];
+  for (const warning of warnings) io.err(`${warning}\n`);
+  if (!options.record && (options.server || options.status || options.notes)) {
+    throw new CliError('--server, --status and --notes go with --record', EXIT.usage);
+  }
+  if (options.record) return recordBatch(formula.id, file, raw, options, io);
   let result;
   try {
     result = calculate(formula, parseBatchOptions(raw, formula));
@@ -139,7 +166,50 @@ function runCalc(reference: string, options: CalcOptions, io: Io): void {
     throw error;
   }
   const presented = presentResult(result, options.units);
-  for (const warning of warnings) io.err(`${warning}\n`);
   io.out(options.json ? `${JSON.stringify(presented, null, 2)}\n` : renderBatchSheet(presented));
   if (presented.critical) process.exitCode = EXIT.critical;
+}
+
+/** Records the batch here or on a server; a refused batch exits 4 and nothing is recorded. */
+async function recordBatch(
+  formulaId: string,
+  file: string,
+  raw: RawBatchOptions,
+  options: CalcOptions,
+  io: Io,
+): Promise<void> {
+  const serverUrl = options.server ?? process.env.LARDER_SERVER;
+  const request = {
+    formula: formulaId,
+    batch: raw,
+    units: options.units,
+    ...(options.status ? { status: options.status } : {}),
+    ...(options.notes ? { notes: options.notes } : {}),
+  };
+  let batch: RecordedBatch;
+  if (serverUrl) {
+    const { callServer } = await import('../remote/server-client.ts');
+    ({ batch } = await callServer<{ batch: RecordedBatch }>(
+      { url: serverUrl },
+      'POST',
+      '/api/batches',
+      request,
+    ));
+  } else {
+    const { recordLocally } = await import('../local/batches-local.ts');
+    batch = await recordLocally({ ...request, formulaFile: file, formulaId }, today());
+  }
+  if (options.json) return io.out(`${JSON.stringify(batch, null, 2)}\n`);
+  io.out(renderBatchSheet(batch.result));
+  io.out(
+    `\nRecorded: lot ${batch.lotCode} · ${batch.status} · by ${batch.operator.displayName}${serverUrl ? ` · on ${serverUrl}` : ''}\n`,
+  );
+}
+
+/** The parts of a recorded batch this command prints. */
+interface RecordedBatch {
+  lotCode: string;
+  status: string;
+  operator: { displayName: string };
+  result: PresentedResult;
 }

@@ -1,5 +1,6 @@
 import { Router, type Request, type RequestHandler, type Response } from 'express';
 import type { AppContext } from '../app-context.ts';
+import { FormulaHistory } from '../formulas/formula-history.ts';
 import { requireRole } from '../auth/authenticate.ts';
 import { personOf } from '../auth/request-person.ts';
 import { BATCH_OPTIONS_SCHEMA, UNITS_SCHEMA } from '../calc/calc-request.ts';
@@ -61,8 +62,10 @@ const emptyBody: RequestHandler = (req, _res, next) => {
  * /api/batches: the batch log. Every signed-in role reads; admins and cooks record batches and
  * move them along; admins and reviewers sign them off.
  */
-export function batchesRouter({ batches, formulas }: AppContext): Router {
+export function batchesRouter({ batches, formulas, db, audit }: AppContext): Router {
   const router = Router();
+  // Reading through the history records the revision a batch is made from, if it is new on disk.
+  const history = new FormulaHistory(formulas, db, audit);
 
   router.get('/', async (req, res) => {
     res.json(await batches.list(parseListQuery(req.query, true)));
@@ -71,7 +74,7 @@ export function batchesRouter({ batches, formulas }: AppContext): Router {
   router.post('/', requireRole('admin', 'cook'), validateBody(RECORD_BODY), async (req, res) => {
     const request = req.body as RecordRequest;
     const operator = personOf(req);
-    const current = await formulas.current(request.formula);
+    const current = await history.current(request.formula);
     const today = new Date().toISOString().slice(0, 10);
     const batch = await batches.record(
       prepareBatch(current, request, operator.id, today),

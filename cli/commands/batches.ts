@@ -1,0 +1,184 @@
+import { Command } from 'commander';
+import type { PresentedResult } from '../../shared/index.ts';
+import { EXIT_CODES_HELP } from '../cli-error.ts';
+import type { Io } from '../io.ts';
+import { renderBatchSheet } from '../output/batch-sheet.ts';
+import { textTable } from '../output/text-table.ts';
+
+/** The parts of a batch these verbs print. */
+interface BatchView {
+  lotCode: string;
+  formula: { id: string; title: string };
+  kind: string;
+  status: string;
+  operator: { displayName: string };
+  startedOn: string;
+  readyOn: string | null;
+  checksPassed: boolean;
+  signedOff: { by: { displayName: string }; at: string } | null;
+  result: PresentedResult;
+  events?: {
+    at: string;
+    type: string;
+    actor: { displayName: string } | null;
+    from: string | null;
+    to: string | null;
+    reason: string | null;
+  }[];
+}
+
+interface Page {
+  items: BatchView[];
+  next: string | null;
+  total: number;
+}
+
+const FILTERS = [
+  'formula',
+  'kind',
+  'status',
+  'operator',
+  'from',
+  'to',
+  'lot',
+  'sort',
+  'order',
+  'limit',
+  'cursor',
+] as const;
+
+interface ListOptions extends Partial<Record<(typeof FILTERS)[number], string>> {
+  server?: string;
+  json?: boolean;
+}
+
+function serverOf(options: { server?: string }): string | undefined {
+  return options.server ?? process.env.LARDER_SERVER;
+}
+
+/** `larder batches list|show`: read the batch log, on this machine or on a server. */
+export function batchesCommand(io: Io): Command {
+  const batches = new Command('batches').description(
+    'read the batch log (this machine, or --server)',
+  );
+
+  batches
+    .command('list')
+    .description('list recorded batches, newest first')
+    .option('--formula <id>', 'only this formula')
+    .option('--kind <kind>', 'only cure, dough, blend or mix')
+    .option(
+      '--status <list>',
+      'only these statuses, comma-separated (planned,in-progress,curing,proofing,done,discarded)',
+    )
+    .option('--operator <id>', 'only batches recorded by this person id')
+    .option('--from <date>', 'recorded on or after YYYY-MM-DD')
+    .option('--to <date>', 'recorded on or before YYYY-MM-DD')
+    .option('--lot <prefix>', 'lot codes starting with this')
+    .option('--sort <key>', 'recorded, lot, started, ready, status or formula')
+    .option('--order <order>', 'asc or desc')
+    .option('--limit <n>', 'batches per page, 1–200 (default 50)')
+    .option('--cursor <cursor>', 'the page after this one (printed at the end of a page)')
+    .option('--server <url>', 'read from this server (default: $LARDER_SERVER, else this machine)')
+    .option('--json', 'print the page as JSON')
+    .addHelpText(
+      'after',
+      `\nSigns in as $LARDER_USER with $LARDER_PASSWORD.\n\nExamples:\n  larder batches list --status curing,proofing\n  larder batches list --formula quillmoor-belly --from 2026-11-01 --json\n${EXIT_CODES_HELP}`,
+    )
+    .action(async (options: ListOptions) => {
+      const query: Record<string, string> = {};
+      for (const key of FILTERS) if (options[key] !== undefined) query[key] = options[key];
+      const server = serverOf(options);
+      let page: Page;
+      if (server) {
+        const { callServer } = await import('../remote/server-client.ts');
+        page = await callServer<Page>(
+          { url: server },
+          'GET',
+          `/api/batches?${new URLSearchParams(query)}`,
+        );
+      } else {
+        const { listLocally } = await import('../local/batches-local.ts');
+        page = (await listLocally(query)) as unknown as Page;
+      }
+      if (options.json) return io.out(`${JSON.stringify(page, null, 2)}\n`);
+      const rows = page.items.map((b) => [
+        b.lotCode,
+        b.formula.id,
+        b.status,
+        b.startedOn,
+        b.readyOn ?? '',
+        b.checksPassed ? 'pass' : 'FAIL',
+        b.signedOff ? 'signed' : '',
+        b.operator.displayName,
+      ]);
+      const header = [
+        'lot',
+        'formula',
+        'status',
+        'started',
+        'ready',
+        'checks',
+        'sign-off',
+        'operator',
+      ];
+      io.out(
+        `${textTable(
+          [header, ...rows],
+          header.map(() => 'left'),
+        ).join('\n')}\n`,
+      );
+      io.out(
+        `${page.items.length} of ${page.total} batch(es)${page.next ? `; next page: --cursor ${page.next}` : ''}\n`,
+      );
+    });
+
+  batches
+    .command('show')
+    .description('one batch: its sheet as recorded, checks, and every event')
+    .argument('<lot>', 'lot code')
+    .option('--server <url>', 'read from this server (default: $LARDER_SERVER, else this machine)')
+    .option('--json', 'print the batch as JSON')
+    .action(async (lot: string, options: { server?: string; json?: boolean }) => {
+      const server = serverOf(options);
+      let batch: BatchView;
+      if (server) {
+        const { callServer } = await import('../remote/server-client.ts');
+        ({ batch } = await callServer<{ batch: BatchView }>(
+          { url: server },
+          'GET',
+          `/api/batches/${encodeURIComponent(lot)}`,
+        ));
+      } else {
+        const { showLocally } = await import('../local/batches-local.ts');
+        batch = (await showLocally(lot)) as unknown as BatchView;
+      }
+      if (options.json) return io.out(`${JSON.stringify(batch, null, 2)}\n`);
+      io.out(
+        `Lot ${batch.lotCode} · ${batch.status} · started ${batch.startedOn}${batch.readyOn ? ` · ready ${batch.readyOn}` : ''} · by ${batch.operator.displayName}\n`,
+      );
+      io.out(
+        batch.signedOff
+          ? `Signed off by ${batch.signedOff.by.displayName} at ${batch.signedOff.at}\n`
+          : 'Not signed off.\n',
+      );
+      io.out(`\n${renderBatchSheet(batch.result)}`);
+      if (batch.events?.length) {
+        io.out('\nEVENTS\n');
+        const rows = batch.events.map((e) => [
+          e.at,
+          e.type,
+          e.from && e.to ? `${e.from} → ${e.to}` : (e.to ?? ''),
+          e.actor?.displayName ?? '',
+          e.reason ?? '',
+        ]);
+        io.out(`${textTable(rows, ['left', 'left', 'left', 'left', 'left']).join('\n')}\n`);
+      }
+    });
+
+  for (const command of batches.commands)
+    command
+      .exitOverride()
+      .configureOutput({ writeOut: (t) => io.out(t), writeErr: (t) => io.err(t) });
+  return batches;
+}

@@ -1,0 +1,118 @@
+import assert from 'node:assert/strict';
+import path from 'node:path';
+import { describe, it } from 'node:test';
+import { assertCleanFailure, assertExit, runLarder, stdoutJson } from '../helpers/run-larder.ts';
+import { makeTempDir } from '../helpers/temp-files.ts';
+import { PASSWORDS, startTestServer } from '../helpers/test-server.ts';
+
+const BELLY = [
+  'calc',
+  'quillmoor-belly',
+  '--meat',
+  '4.26kg',
+  '--thickness',
+  '4cm',
+  '--start',
+  '2026-12-02',
+];
+const REFUSED = ['calc', 'maple-pump-belly', '--meat', '10kg', '--pumped-weight', '11.2kg'];
+
+interface RecordedBatch {
+  lotCode: string;
+  status: string;
+  nitritePpm: string;
+  result: { checks: { id: string; exact: string }[] };
+}
+
+describe('larder calc --record and larder batches', () => {
+  it('should record on this machine, list and show the batch, and refuse an over-limit cure', async (t) => {
+    const data = path.join(makeTempDir(t), 'data');
+    assertExit(
+      await runLarder(['users', 'add', 'tobin', '--role', 'cook'], {
+        env: { LARDER_DATA: data, LARDER_NEW_PASSWORD: 'tobin-pass-1' },
+      }),
+      0,
+    );
+    const env = { LARDER_DATA: data, LARDER_USER: 'tobin', LARDER_PASSWORD: 'tobin-pass-1' };
+
+    const recorded = await runLarder([...BELLY, '--record', '--json'], { env });
+    assertExit(recorded, 0);
+    const batch = stdoutJson<RecordedBatch>(recorded);
+    // Lot code: start date, the formula id's initials, a sequence. source: our lot code format (README)
+    assert.equal(batch.lotCode, '261202-QB-01');
+    // 0.25 % × 6.25 % × 10^6 = 156.25 ppm. source: USDA FSIS Directive 7620.3 ch. 3, dry-cure formula
+    assert.equal(batch.nitritePpm, '156.25');
+
+    const list = await runLarder(['batches', 'list', '--json'], { env });
+    assertExit(list, 0);
+    assert.deepEqual(
+      stdoutJson<{ items: { lotCode: string }[] }>(list).items.map((b) => b.lotCode),
+      ['261202-QB-01'],
+    );
+    const show = await runLarder(['batches', 'show', '261202-qb-01'], { env });
+    assertExit(show, 0);
+    assert.match(show.stdout, /Lot 261202-QB-01 · in-progress/);
+    assert.match(show.stdout, /EVENTS/);
+
+    // Pumped to 12 % instead of 10 %: 144 ppm over the 120 ppm of 9 CFR 424.22(b); FSIS 7620.3 pumped formula.
+    const refused = await runLarder([...REFUSED, '--record'], { env });
+    assertCleanFailure(
+      refused,
+      4,
+      /refused and was not recorded: critical limit exceeded: 144\.0 ppm/,
+    );
+    const after = await runLarder(['batches', 'list', '--json'], { env });
+    assert.equal(stdoutJson<{ total: number }>(after).total, 1);
+  });
+
+  it('should refuse to record without credentials or as a reviewer', async (t) => {
+    const data = path.join(makeTempDir(t), 'data');
+    assertExit(
+      await runLarder(['users', 'add', 'imke', '--role', 'reviewer'], {
+        env: { LARDER_DATA: data, LARDER_NEW_PASSWORD: 'imke-pass-12' },
+      }),
+      0,
+    );
+    assertCleanFailure(
+      await runLarder([...BELLY, '--record'], { env: { LARDER_DATA: data } }),
+      2,
+      /set LARDER_USER and LARDER_PASSWORD/,
+    );
+    assertCleanFailure(
+      await runLarder([...BELLY, '--record'], {
+        env: { LARDER_DATA: data, LARDER_USER: 'imke', LARDER_PASSWORD: 'imke-pass-12' },
+      }),
+      2,
+      /imke is a reviewer; this needs admin or cook/,
+    );
+  });
+
+  it('should record on a server that the API then lists', async (t) => {
+    const server = await startTestServer(t);
+    const env = { LARDER_USER: 'tobin', LARDER_PASSWORD: PASSWORDS.tobin };
+    const before = (await server.as('imke').get('/api/batches?formula=quillmoor-belly&limit=1'))
+      .json.total as number;
+    const recorded = await runLarder([...BELLY, '--record', '--server', server.url], { env });
+    assertExit(recorded, 0);
+    const lot = /Recorded: lot (\S+)/.exec(recorded.stdout)?.[1];
+    assert.ok(lot, recorded.stdout);
+    const listed = await server.as('imke').get(`/api/batches?lot=${lot}`);
+    assert.equal(listed.json.items[0].lotCode, lot);
+    assert.equal(
+      (await server.as('imke').get('/api/batches?formula=quillmoor-belly&limit=1')).json.total,
+      before + 1,
+    );
+    const shown = await runLarder(['batches', 'show', lot, '--server', server.url, '--json'], {
+      env,
+    });
+    assertExit(shown, 0);
+    assert.equal(stdoutJson<RecordedBatch>(shown).lotCode, lot);
+
+    const refused = await runLarder([...REFUSED, '--record', '--server', server.url], { env });
+    assertCleanFailure(refused, 4, /critical limit exceeded/);
+    const wrong = await runLarder([...BELLY, '--record', '--server', server.url], {
+      env: { LARDER_USER: 'tobin', LARDER_PASSWORD: 'wrong-password' },
+    });
+    assertCleanFailure(wrong, 2, /wrong username or password/);
+  });
+});
