@@ -33,7 +33,11 @@ export const SETTINGS = [
   ['LARDER_PORT', '4310', 'port to listen on (0 picks a free one)'],
   ['LARDER_DATA', './data', 'folder for the database file'],
   ['LARDER_DB', '$LARDER_DATA/larderbook.sqlite', 'the SQLite database file'],
-  ['LARDER_FORMULAS', './formulas', 'folder of formula YAML files'],
+  [
+    'LARDER_FORMULAS',
+    'demo: $LARDER_DATA/formulas (a copy of ./formulas); production: ./formulas',
+    'folder of formula YAML files',
+  ],
   [
     'LARDER_SESSION_SECRET',
     '(demo: a fixed demo value; production: required)',
@@ -84,7 +88,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     port: integer(env, 'LARDER_PORT', 4310, 0, 65535),
     dataDir,
     databaseFile: path.resolve(env.LARDER_DB ?? path.join(dataDir, 'larderbook.sqlite')),
-    formulasDir: path.resolve(env.LARDER_FORMULAS ?? 'formulas'),
+    // The demo edits a copy of the demo formulas in its data folder, never the checkout's own files.
+    formulasDir: path.resolve(
+      env.LARDER_FORMULAS ?? (mode === 'demo' ? path.join(dataDir, 'formulas') : 'formulas'),
+    ),
     sessionSecret: secret ?? DEMO_SECRET,
     consoleDir: path.resolve(env.LARDER_CONSOLE ?? 'dist/console/browser'),
     signInLimit: integer(env, 'LARDER_SIGN_IN_LIMIT', 10, 1, 10_000),

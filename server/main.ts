@@ -2,6 +2,7 @@ import type { AddressInfo } from 'node:net';
 import { createApp } from './app.ts';
 import { ConfigError, loadConfig } from './config.ts';
 import { DEMO_PEOPLE } from './demo/demo-people.ts';
+import { ensureDemoFormulas } from './demo/demo-formulas.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
 
@@ -18,6 +19,7 @@ async function main(): Promise<void> {
     }
     throw error;
   }
+  if (config.mode === 'demo') ensureDemoFormulas(config.formulasDir);
   const context = await openContext(config);
   if (config.mode === 'demo') await seedDemo(context);
   const server = createApp(context).listen(config.port, config.host);

@@ -60,12 +60,22 @@ function firstLine(error: unknown): string {
   return text.split('\n').find((line) => line.trim() !== '') ?? 'unknown error';
 }
 
-/** Whether a folder is inside a git work tree (false when git is not installed). */
+/**
+ * Whether a folder is a kept part of a git work tree: inside one, and not ignored by it (the
+ * demo's formulas live in the ignored data folder of the Larderbook checkout, which must not
+ * get commits). False when git is not installed.
+ */
 export async function isGitWorkTree(folder: string): Promise<boolean> {
   try {
-    return (await git(folder, ['rev-parse', '--is-inside-work-tree'])).trim() === 'true';
+    if ((await git(folder, ['rev-parse', '--is-inside-work-tree'])).trim() !== 'true') return false;
   } catch {
     return false;
+  }
+  try {
+    await git(folder, ['check-ignore', '-q', '.']);
+    return false; // exit 0: the folder is ignored
+  } catch {
+    return true; // exit 1: not ignored
   }
 }
 
