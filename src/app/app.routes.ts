@@ -1,3 +1,31 @@
 import { Routes } from '@angular/router';
+import { authGuard, roleGuard } from './core/auth/auth-guard';
 
-export const routes: Routes = [];
+export const routes: Routes = [
+  {
+    path: 'sign-in',
+    title: 'Sign in · Larderbook',
+    loadComponent: () => import('./core/auth/sign-in/sign-in'),
+  },
+  {
+    path: '',
+    canMatch: [authGuard],
+    loadComponent: () => import('./core/layout/shell/shell'),
+    children: [
+      { path: '', pathMatch: 'full', redirectTo: 'batches' },
+      { path: 'formulas', loadChildren: () => import('./formulas/formulas.routes') },
+      { path: 'batches', loadChildren: () => import('./batches/batches.routes') },
+      { path: 'curing', loadChildren: () => import('./curing/curing.routes') },
+      {
+        path: 'people',
+        canMatch: [roleGuard('admin')],
+        loadChildren: () => import('./people/people.routes'),
+      },
+      {
+        path: '**',
+        title: 'Not found · Larderbook',
+        loadComponent: () => import('./core/layout/not-found/not-found'),
+      },
+    ],
+  },
+];

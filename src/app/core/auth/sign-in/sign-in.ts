@@ -1,0 +1,61 @@
+import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatFormField, MatLabel, MatError } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { Router } from '@angular/router';
+import { ApiError } from '../../api/api-error';
+import { SessionStore } from '../session-store';
+
+/** The sign-in page. */
+@Component({
+  selector: 'app-sign-in',
+  imports: [
+    ReactiveFormsModule,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatInput,
+    MatButton,
+    MatProgressBar,
+  ],
+  templateUrl: './sign-in.html',
+  styleUrl: './sign-in.css',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class SignIn {
+  private readonly session = inject(SessionStore);
+  private readonly router = inject(Router);
+
+  /** Where to go after signing in (from the query string). */
+  readonly returnUrl = input<string>();
+
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    username: ['', Validators.required],
+    password: ['', Validators.required],
+  });
+  protected readonly busy = signal(false);
+  protected readonly failure = signal<string | null>(null);
+
+  protected async signIn(): Promise<void> {
+    if (this.form.invalid || this.busy()) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.busy.set(true);
+    this.failure.set(null);
+    const { username, password } = this.form.getRawValue();
+    try {
+      await this.session.signIn(username.trim(), password);
+      const target = this.returnUrl();
+      await this.router.navigateByUrl(
+        target?.startsWith('/') && !target.startsWith('//') ? target : '/batches',
+      );
+    } catch (error) {
+      this.failure.set(error instanceof ApiError ? error.message : 'Signing in failed; try again.');
+    } finally {
+      this.busy.set(false);
+    }
+  }
+}

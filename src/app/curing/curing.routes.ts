@@ -1,0 +1,5 @@
+import { Routes } from '@angular/router';
+
+export default [
+  { path: '', title: 'Curing now · Larderbook', loadComponent: () => import('./placeholder') },
+] satisfies Routes;
