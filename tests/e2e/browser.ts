@@ -1,0 +1,94 @@
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { REPO_ROOT } from '../helpers/run-larder.ts';
+import {
+  PASSWORDS,
+  startTestServer,
+  type DemoUser,
+  type TestServer,
+} from '../helpers/test-server.ts';
+
+/** Debian's Chromium; the tests never download a browser. */
+const CHROMIUM = process.env.LARDER_CHROMIUM ?? '/usr/bin/chromium';
+/** Where screenshots of the main screens are kept as test artifacts. */
+export const ARTIFACTS = path.join(REPO_ROOT, 'test-artifacts');
+
+interface AfterHook {
+  after(fn: () => unknown): void;
+}
+
+/** A running server with the built console, and a browser to drive it. */
+export interface ConsoleSession {
+  readonly server: TestServer;
+  readonly browser: Browser;
+  /** A fresh page (own cookies) signed in as a demo person, or at the sign-in page. */
+  page(user?: DemoUser): Promise<Page>;
+  /** Saves a screenshot of a page under test-artifacts/. */
+  screenshot(page: Page, name: string): Promise<void>;
+}
+
+/** Console errors a page logged, except the expected 401 of asking "who am I" before sign-in. */
+export function collectConsoleErrors(page: Page): string[] {
+  const errors: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error' && !/status of 401/.test(message.text()))
+      errors.push(message.text());
+  });
+  page.on('pageerror', (error) => errors.push(error.message));
+  return errors;
+}
+
+/** Signs in through the form, as a person would. */
+export async function signIn(page: Page, user: DemoUser): Promise<void> {
+  await page.getByLabel('Username').fill(user);
+  await page.getByLabel('Password').fill(PASSWORDS[user]);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+}
+
+/**
+ * Starts the real server (temporary database, demo data, the built console from dist/console)
+ * and headless Chromium; both stop when the test ends. No request leaves 127.0.0.1.
+ */
+export async function startConsole(t: AfterHook): Promise<ConsoleSession> {
+  const server = await startTestServer(t, {
+    LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser'),
+  });
+  const browser = await chromium.launch({
+    executablePath: CHROMIUM,
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+    ],
+  });
+  t.after(() => browser.close());
+  mkdirSync(ARTIFACTS, { recursive: true });
+  return {
+    server,
+    browser,
+    page: async (user) => {
+      const context = await browser.newContext({
+        viewport: { width: 1280, height: 860 },
+        acceptDownloads: true,
+      });
+      // Anything not on the test server is refused: fonts and icons must ship with the app.
+      await context.route(
+        (url) => url.hostname !== '127.0.0.1',
+        (route) => route.abort(),
+      );
+      const page = await context.newPage();
+      await page.goto(`${server.url}/`, { waitUntil: 'networkidle' });
+      if (user) await signIn(page, user);
+      return page;
+    },
+    screenshot: async (page, name) => {
+      await page.screenshot({ path: path.join(ARTIFACTS, `${name}.png`), fullPage: true });
+    },
+  };
+}
