@@ -12,6 +12,7 @@ import { calcRouter } from './calc/calc-router.ts';
 import { formulasRouter } from './formulas/formulas-router.ts';
 import { consoleRouter, cspNonce } from './http/console-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
+import { requireJsonBody } from './http/require-json.ts';
 import { peopleRouter } from './people/people-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
@@ -51,7 +52,7 @@ export function createApp(context: AppContext): Express {
   );
 
   const api = express.Router();
-  api.use(express.json({ limit: JSON_LIMIT }));
+  api.use(express.json({ limit: JSON_LIMIT }), requireJsonBody);
   api.use(sessionMiddleware(context.db, context.config.sessionSecret, false));
   api.use(passport.initialize());
   useBasicStrategy(context.people, context.audit);

@@ -2,20 +2,24 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
 
 /** The things the audit log records. */
-export type AuditAction =
-  | 'sign-in'
-  | 'sign-in-failed'
-  | 'sign-out'
-  | 'formula-save'
-  | 'formula-create'
-  | 'formula-upload'
-  | 'formula-disk-change'
-  | 'batch-record'
-  | 'batch-status'
-  | 'batch-sign-off'
-  | 'person-add'
-  | 'person-change'
-  | 'password-reset';
+export const AUDIT_ACTIONS = [
+  'sign-in',
+  'sign-in-failed',
+  'sign-out',
+  'formula-save',
+  'formula-create',
+  'formula-upload',
+  'formula-disk-change',
+  'batch-record',
+  'batch-status',
+  'batch-sign-off',
+  'person-add',
+  'person-change',
+  'password-reset',
+] as const;
+
+/** One of {@link AUDIT_ACTIONS}. */
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 
 /** One entry of the audit log. */
 export interface AuditEvent {

@@ -88,6 +88,10 @@ export function sessionRouter(
 
   router.delete('/', async (req, res) => {
     const personId = req.session?.personId;
+    // Signing out changes state too: a signed-in session must show its CSRF token.
+    if (personId !== undefined && req.get('x-csrf-token') !== req.session.csrfToken) {
+      throw new AppError(403, 'csrf', 'missing or wrong X-CSRF-Token header; reload the console');
+    }
     if (personId !== undefined) {
       const person = await people.findById(personId);
       if (person) await audit.append({ actor: person, action: 'sign-out', ip: req.ip });

@@ -220,12 +220,12 @@ export function parseListQuery(query: Record<string, unknown>, paged: boolean): 
   if (!/^\d{1,3}$/.test(limitText ?? '50') || limit < 1 || limit > MAX_LIMIT)
     problems.push({ field: 'limit', message: `must be a whole number from 1 to ${MAX_LIMIT}` });
 
+  const cursorText = single(query, 'cursor', problems);
   if (problems.length > 0)
     throw badRequest(
       `the query is not valid: ${problems.map((p) => `${p.field} ${p.message}`).join('; ')}`,
       problems,
     );
-  const cursorText = single(query, 'cursor', problems);
   const cursor = cursorText === undefined ? undefined : decodeCursor(cursorText, sort, order);
   return { filter, sort, order, limit, ...(cursor ? { cursor } : {}) };
 }

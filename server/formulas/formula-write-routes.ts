@@ -60,7 +60,12 @@ const readUpload: RequestHandler = (req, res, next) => {
       );
       return;
     }
-    next(error);
+    // The form parser's own errors (a cut-off body, no boundary) are the request's fault too.
+    next(
+      error === undefined || error instanceof AppError
+        ? error
+        : badRequest(`the upload is not valid multipart/form-data: ${(error as Error).message}`),
+    );
   });
 };
 

@@ -1,3 +1,4 @@
+import { allowQuery } from '../http/require-json.ts';
 import { Router } from 'express';
 import { readFormula, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
@@ -100,7 +101,7 @@ export function formulasRouter(context: AppContext): Router {
     return row.yaml;
   };
 
-  router.get('/', anyone, async (req, res) => {
+  router.get('/', anyone, allowQuery('kind'), async (req, res) => {
     const kind = req.query.kind;
     if (kind !== undefined && (typeof kind !== 'string' || !KINDS.includes(kind)))
       throw badRequest(`kind must be one of ${KINDS.join(', ')}`, [{ field: 'kind' }]);

@@ -48,7 +48,8 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, _req, res, nex
   ) {
     appError = new AppError(parserError.status, 'bad-request', (error as Error).message);
   } else {
-    console.error(error); // eslint-disable-line no-console -- the server log is the place for a bug
+    // Only the stack: a database error's own fields carry the SQL with its values (a password hash).
+    console.error(error instanceof Error ? (error.stack ?? error.message) : error); // eslint-disable-line no-console -- the server log is the place for a bug
     appError = new AppError(
       500,
       'internal',

@@ -64,12 +64,13 @@ export class PeopleRepository {
     return row ? toPerson(row) : undefined;
   }
 
-  async findByUsername(username: string): Promise<Person | undefined> {
+  async findByUsername(username: string, transaction?: Transaction): Promise<Person | undefined> {
     const [row] = await this.db.sequelize.query<PersonRow>(
       'SELECT * FROM people WHERE username = ?',
       {
         replacements: [username],
         type: QueryTypes.SELECT,
+        transaction,
       },
     );
     return row ? toPerson(row) : undefined;

@@ -52,9 +52,16 @@ const OWN_PASSWORD_BODY = {
 } as const;
 
 function idParam(req: Request): number {
-  const id = Number(req.params.id);
-  if (!Number.isSafeInteger(id) || id < 1) throw badRequest('the person id must be a whole number');
+  const text = String(req.params.id);
+  const id = Number(text);
+  if (!/^[1-9]\d{0,15}$/.test(text) || !Number.isSafeInteger(id))
+    throw badRequest('the person id must be a whole number');
   return id;
+}
+
+/** Whether an error is SQLite refusing a second person with the same username. */
+function isUsernameTaken(error: unknown): boolean {
+  return (error as { name?: string }).name === 'SequelizeUniqueConstraintError';
 }
 
 /** /api/people: admins manage people; anyone changes their own password. */
@@ -96,11 +103,14 @@ export function peopleRouter({ db, people, audit }: AppContext): Router {
       role: Role;
       password?: string;
     };
-    if (await people.findByUsername(body.username))
-      throw conflict('username-taken', `the username "${body.username}" is taken`);
     const password = body.password ?? randomPassword();
+    const taken = conflict('username-taken', `the username "${body.username}" is taken`);
     const person = await db.write(async (transaction) => {
-      const added = await people.add({ ...body, password }, transaction);
+      // Checked inside the write, so two adds of one name at once cannot both pass.
+      if (await people.findByUsername(body.username, transaction)) throw taken;
+      const added = await people.add({ ...body, password }, transaction).catch((error: unknown) => {
+        throw isUsernameTaken(error) ? taken : error;
+      });
       await audit.append(
         {
           actor: personOf(req),

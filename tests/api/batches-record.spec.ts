@@ -200,8 +200,8 @@ describe('bad requests to record a batch', () => {
       [
         'text, not JSON',
         'formula=quillmoor-belly',
-        400,
-        'bad-request',
+        415,
+        'unsupported-media-type',
         { 'content-type': 'text/plain' },
       ],
     ];
