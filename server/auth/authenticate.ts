@@ -49,15 +49,20 @@ export function authenticate(people: PeopleRepository): RequestHandler {
     const personId = req.session?.personId;
     if (personId !== undefined) {
       people
-        .findById(personId)
-        .then((person) => {
-          if (!person?.active) {
+        .findForSession(personId)
+        .then((found) => {
+          // Deactivated, or the password changed since this session signed in: the session ends.
+          const signedInAt = req.session.signedInAt ?? '';
+          const ended =
+            !found?.person.active ||
+            (found.sessionsValidFrom !== null && signedInAt < found.sessionsValidFrom);
+          if (!found || ended) {
             req.session.destroy(() =>
               next(new AppError(401, 'unauthenticated', 'your session has ended; sign in again')),
             );
             return;
           }
-          req.person = person;
+          req.person = found.person;
           req.authVia = 'session';
           next();
         })

@@ -8,6 +8,8 @@ declare module 'express-session' {
     personId: number;
     /** The token state-changing requests from the console must echo in X-CSRF-Token. */
     csrfToken: string;
+    /** When the person signed in (ISO); a later password reset ends the session. */
+    signedInAt: string;
   }
 }
 

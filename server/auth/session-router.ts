@@ -26,6 +26,7 @@ function startSession(req: Request, person: Person): Promise<string> {
       if (error) return reject(error as Error);
       req.session.personId = person.id;
       req.session.csrfToken = newCsrfToken();
+      req.session.signedInAt = new Date().toISOString();
       req.session.save((saveError) =>
         saveError ? reject(saveError as Error) : resolve(req.session.csrfToken ?? ''),
       );

@@ -14,6 +14,7 @@ interface PersonRow {
   created_at: string;
   updated_at: string;
   password_hash: string;
+  sessions_valid_from: string | null;
 }
 
 function toPerson(row: PersonRow): Person {
@@ -168,15 +169,33 @@ export class PeopleRepository {
     return this.findById(id, transaction);
   }
 
-  async setPassword(id: number, password: string, transaction?: Transaction): Promise<void> {
+  /**
+   * The person a session belongs to, with the time their sessions must have started to still
+   * count (moved to now by a password reset); null when every session counts.
+   */
+  async findForSession(
+    id: number,
+  ): Promise<{ person: Person; sessionsValidFrom: string | null } | undefined> {
+    const [row] = await this.db.sequelize.query<PersonRow>('SELECT * FROM people WHERE id = ?', {
+      replacements: [id],
+      type: QueryTypes.SELECT,
+    });
+    return row ? { person: toPerson(row), sessionsValidFrom: row.sessions_valid_from } : undefined;
+  }
+
+  /** Sets a password and ends the person's sessions signed in before now; returns the cut-off. */
+  async setPassword(id: number, password: string, transaction?: Transaction): Promise<string> {
     const hash = await hashPassword(password);
+    const now = new Date().toISOString();
     await this.db.sequelize.query(
-      'UPDATE people SET password_hash = ?, updated_at = ? WHERE id = ?',
+      // A new password ends every session signed in with the old one.
+      'UPDATE people SET password_hash = ?, updated_at = ?, sessions_valid_from = ? WHERE id = ?',
       {
-        replacements: [hash, new Date().toISOString(), id],
+        replacements: [hash, now, now, id],
         transaction,
       },
     );
+    return now;
   }
 
   /** How many active admins there are, so the last one is never demoted or deactivated. */

@@ -73,8 +73,8 @@ export function peopleRouter({ db, people, audit }: AppContext): Router {
     const { current, password } = req.body as { current: string; password: string };
     if (!(await people.authenticate(me.username, current)))
       throw new AppError(403, 'wrong-password', 'the current password is wrong');
-    await db.write(async (transaction) => {
-      await people.setPassword(me.id, password, transaction);
+    const cutoff = await db.write(async (transaction) => {
+      const changedAt = await people.setPassword(me.id, password, transaction);
       await audit.append(
         {
           actor: me,
@@ -85,7 +85,10 @@ export function peopleRouter({ db, people, audit }: AppContext): Router {
         },
         transaction,
       );
+      return changedAt;
     });
+    // Other sessions with the old password end; the one making the change carries on.
+    if (req.authVia === 'session') req.session.signedInAt = cutoff;
     res.status(204).end();
   });
 

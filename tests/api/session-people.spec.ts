@@ -76,6 +76,35 @@ describe('sign-in and people', () => {
     );
   });
 
+  it('should end sessions signed in before a password reset, but keep the one that changed its own', async (t) => {
+    const server = await startTestServer(t);
+    const phone = await server.signIn('tobin');
+    const tablet = await server.signIn('tobin');
+    const changed = await tablet.request('PUT', '/api/people/me/password', {
+      current: 'quillmoor-cook',
+      password: 'new-cook-pass-1',
+    });
+    assert.equal(changed.status, 204);
+    assert.equal((await tablet.get('/api/batches?limit=1')).status, 200);
+    assert.equal((await phone.get('/api/batches?limit=1')).status, 401);
+
+    const people = (await server.as('rosa').get('/api/people')).json.people as {
+      id: number;
+      username: string;
+    }[];
+    const imke = people.find((p) => p.username === 'imke')?.id;
+    const reviewer = await server.signIn('imke');
+    assert.equal(
+      (
+        await server
+          .as('rosa')
+          .post(`/api/people/${imke}/password`, { password: 'reset-by-admin-1' })
+      ).status,
+      200,
+    );
+    assert.equal((await reviewer.get('/api/batches?limit=1')).status, 401);
+  });
+
   it('should never demote or deactivate the last active admin', async (t) => {
     const server = await startTestServer(t);
     const people = (await server.as('rosa').get('/api/people')).json.people as {

@@ -31,7 +31,8 @@ describe('signing in to the console', () => {
       assert.match(areas, /Curing now/);
       assert.equal(/People/.test(areas), user === 'rosa', 'only admins see People');
       if (user === 'rosa') await session.screenshot(page, 'shell-admin');
-      await page.getByRole('button', { name: 'Sign out' }).click();
+      await page.getByRole('button', { name: 'Your account' }).click();
+      await page.getByRole('menuitem', { name: 'Sign out' }).click();
       await page.waitForURL(/\/sign-in/);
       assert.deepEqual(errors, []);
     });

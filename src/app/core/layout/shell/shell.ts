@@ -1,9 +1,11 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
-import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatIconButton } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
 import { MatListItem, MatListItemIcon, MatListItemTitle, MatNavList } from '@angular/material/list';
+import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
 import { MatSidenav, MatSidenavContainer, MatSidenavContent } from '@angular/material/sidenav';
 import { MatToolbar } from '@angular/material/toolbar';
 import { MatTooltip } from '@angular/material/tooltip';
@@ -39,7 +41,9 @@ const ROLE_NAMES: Record<Role, string> = { admin: 'Admin', cook: 'Cook', reviewe
     RouterLinkActive,
     MatToolbar,
     MatIcon,
-    MatButton,
+    MatMenu,
+    MatMenuItem,
+    MatMenuTrigger,
     MatIconButton,
     MatTooltip,
     MatSidenav,
@@ -57,6 +61,7 @@ const ROLE_NAMES: Record<Role, string> = { admin: 'Admin', cook: 'Cook', reviewe
 export default class Shell {
   private readonly session = inject(SessionStore);
   private readonly router = inject(Router);
+  private readonly dialog = inject(MatDialog);
 
   /** Whether the screen is narrow (a phone, a tablet held upright): the navigation slides over. */
   protected readonly narrow = toSignal(
@@ -74,6 +79,11 @@ export default class Shell {
     const role = this.person()?.role;
     return AREAS.filter((area) => !area.roles || (role !== undefined && area.roles.includes(role)));
   });
+
+  protected async changePassword(): Promise<void> {
+    const { openChangePassword } = await import('../../../people/change-password/change-password');
+    openChangePassword(this.dialog);
+  }
 
   protected async signOut(): Promise<void> {
     await this.session.signOut();

@@ -1,0 +1,11 @@
+import type { QueryInterface } from 'sequelize';
+
+/**
+ * A per-person cut-off for sessions: a password reset or a deactivation moves it to now, and any
+ * session signed in before it ends at its next request.
+ */
+export const name = '003-session-cutoff';
+
+export async function up(queryInterface: QueryInterface): Promise<void> {
+  await queryInterface.sequelize.query('ALTER TABLE people ADD COLUMN sessions_valid_from TEXT');
+}
