@@ -1,5 +1,20 @@
 import { Routes } from '@angular/router';
 
 export default [
-  { path: '', title: 'People · Larderbook', loadComponent: () => import('./placeholder') },
+  {
+    path: '',
+    loadComponent: () => import('./people-page/people-page'),
+    children: [
+      {
+        path: '',
+        title: 'People · Larderbook',
+        loadComponent: () => import('./people-list/people-list'),
+      },
+      {
+        path: 'audit',
+        title: 'Audit log · People · Larderbook',
+        loadComponent: () => import('./audit-log/audit-log'),
+      },
+    ],
+  },
 ] satisfies Routes;

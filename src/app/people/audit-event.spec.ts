@@ -1,0 +1,78 @@
+import assert from 'node:assert/strict';
+import { describe, it } from 'node:test';
+import { actionText, detailText } from './audit-event.ts';
+
+describe('audit event words', () => {
+  describe('actionText', () => {
+    it('should name a known action in words', () => {
+      assert.equal(actionText({ action: 'batch-sign-off', detail: null }), 'Signed a batch off');
+    });
+
+    it('should tell a person changing their own password from an admin reset', () => {
+      assert.equal(
+        actionText({ action: 'password-reset', detail: { own: true } }),
+        'Changed their own password',
+      );
+      assert.equal(actionText({ action: 'password-reset', detail: null }), 'Reset a password');
+    });
+  });
+
+  describe('detailText', () => {
+    const cases: { name: string; event: Parameters<typeof detailText>[0]; expected: string }[] = [
+      {
+        name: 'a form sign-in',
+        event: { action: 'sign-in', detail: { via: 'form' } },
+        expected: 'with the sign-in form',
+      },
+      {
+        name: 'a failed sign-in over HTTP Basic',
+        event: { action: 'sign-in-failed', detail: { via: 'basic' } },
+        expected: 'from the command line or a script',
+      },
+      {
+        name: 'a formula save with its message and shortened revisions',
+        event: {
+          action: 'formula-save',
+          detail: {
+            revision: 'a'.repeat(64),
+            previousRevision: 'b'.repeat(64),
+            message: 'Less salt',
+          },
+        },
+        expected: '“Less salt” · revision aaaaaaaa · was bbbbbbbb',
+      },
+      {
+        name: 'a batch moved on with a reason',
+        event: {
+          action: 'batch-status',
+          detail: { from: 'in-progress', to: 'discarded', reason: 'Dropped on the floor' },
+        },
+        expected: 'in progress → discarded · reason: Dropped on the floor',
+      },
+      {
+        name: 'a person deactivated and made a cook',
+        event: { action: 'person-change', detail: { active: false, role: 'cook' } },
+        expected: 'deactivated, role → cook',
+      },
+      {
+        name: 'an e-mail removed',
+        event: { action: 'person-change', detail: { email: null } },
+        expected: 'e-mail removed',
+      },
+      { name: 'a sign-out', event: { action: 'sign-out', detail: null }, expected: '' },
+    ];
+    for (const { name, event, expected } of cases) {
+      it(`should summarise ${name}`, () => {
+        assert.equal(detailText(event), expected);
+      });
+    }
+
+    it('should list the fields of an action it does not know', () => {
+      const event = {
+        action: 'oven-fire',
+        detail: { oven: 2, out: true },
+      } as unknown as Parameters<typeof detailText>[0];
+      assert.equal(detailText(event), 'oven: 2, out: true');
+    });
+  });
+});

@@ -1,0 +1,205 @@
+/** The things the audit log records (the server's list). */
+export type AuditAction =
+  | 'sign-in'
+  | 'sign-in-failed'
+  | 'sign-out'
+  | 'formula-save'
+  | 'formula-create'
+  | 'formula-upload'
+  | 'formula-disk-change'
+  | 'batch-record'
+  | 'batch-status'
+  | 'batch-sign-off'
+  | 'person-add'
+  | 'person-change'
+  | 'password-reset';
+
+/** One entry of the audit log, as GET /api/audit returns it. */
+export interface AuditEvent {
+  readonly id: number;
+  /** When it happened (ISO 8601). */
+  readonly at: string;
+  readonly actorId: number | null;
+  /** Who did it; for a failed sign-in, the username that was tried. */
+  readonly actorName: string | null;
+  readonly action: AuditAction;
+  /** What it was done to: a username, a formula id or a lot code. */
+  readonly subject: string | null;
+  readonly detail: unknown;
+  readonly ip: string | null;
+}
+
+/** One page of the audit log; `next` is the `before` of the following page, null at the end. */
+export interface AuditPage {
+  readonly events: readonly AuditEvent[];
+  readonly next: number | null;
+}
+
+/** Every action in words, in the order the filter lists them. */
+export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly label: string }[] = [
+  { value: 'sign-in', label: 'Signed in' },
+  { value: 'sign-in-failed', label: 'Sign-in failed' },
+  { value: 'sign-out', label: 'Signed out' },
+  { value: 'formula-save', label: 'Saved a formula' },
+  { value: 'formula-create', label: 'Created a formula' },
+  { value: 'formula-upload', label: 'Uploaded a formula' },
+  { value: 'formula-disk-change', label: 'Formula file changed on disk' },
+  { value: 'batch-record', label: 'Recorded a batch' },
+  { value: 'batch-status', label: 'Moved a batch on' },
+  { value: 'batch-sign-off', label: 'Signed a batch off' },
+  { value: 'person-add', label: 'Added a person' },
+  { value: 'person-change', label: 'Changed a person' },
+  { value: 'password-reset', label: 'Reset a password' },
+];
+
+const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));
+
+const STATUS_WORDS: Readonly<Record<string, string>> = {
+  planned: 'planned',
+  'in-progress': 'in progress',
+  curing: 'curing',
+  proofing: 'proofing',
+  done: 'done',
+  discarded: 'discarded',
+};
+
+/**
+ * What happened, in words.
+ * @param event An audit entry.
+ * @returns A short phrase such as "Signed in"; unknown actions come back as the server wrote them.
+ */
+export function actionText(event: Pick<AuditEvent, 'action' | 'detail'>): string {
+  if (event.action === 'password-reset' && fieldsOf(event.detail)['own'] === true) {
+    return 'Changed their own password';
+  }
+  return ACTION_LABELS.get(event.action) ?? event.action;
+}
+
+/**
+ * The entry's detail in one line: the facts a reader needs, not the raw JSON.
+ * @param event An audit entry.
+ * @returns A summary, or an empty string when the entry carries no detail worth showing.
+ */
+export function detailText(event: Pick<AuditEvent, 'action' | 'detail'>): string {
+  const detail = fieldsOf(event.detail);
+  switch (event.action) {
+    case 'sign-in':
+    case 'sign-in-failed':
+      return viaText(detail['via']);
+    case 'formula-save':
+    case 'formula-create':
+    case 'formula-upload':
+      return join(
+        [
+          present(detail['message']) ? `“${wordsOf(detail['message'])}”` : '',
+          present(detail['revision']) ? `revision ${shortRevision(detail['revision'])}` : '',
+          present(detail['previousRevision'])
+            ? `was ${shortRevision(detail['previousRevision'])}`
+            : '',
+          present(detail['uploadedAs']) ? `from the file ${wordsOf(detail['uploadedAs'])}` : '',
+        ],
+        ' · ',
+      );
+    case 'formula-disk-change':
+      return join(
+        [
+          present(detail['file']) ? wordsOf(detail['file']) : '',
+          present(detail['to'])
+            ? `revision ${shortRevision(detail['from'])} → ${shortRevision(detail['to'])}`
+            : '',
+        ],
+        ' · ',
+      );
+    case 'batch-record':
+      return join(
+        [
+          present(detail['formula']) ? `formula ${wordsOf(detail['formula'])}` : '',
+          present(detail['status']) ? `status ${statusText(detail['status'])}` : '',
+        ],
+        ', ',
+      );
+    case 'batch-status':
+      return join(
+        [
+          `${statusText(detail['from'])} → ${statusText(detail['to'])}`,
+          present(detail['reason']) ? `reason: ${wordsOf(detail['reason'])}` : '',
+        ],
+        ' · ',
+      );
+    case 'batch-sign-off':
+      return join(
+        [
+          present(detail['status']) ? `at status ${statusText(detail['status'])}` : '',
+          present(detail['note']) ? `note: ${wordsOf(detail['note'])}` : '',
+        ],
+        ' · ',
+      );
+    case 'person-add':
+      return present(detail['role']) ? `role ${wordsOf(detail['role'])}` : '';
+    case 'person-change':
+      return personChangeText(detail);
+    case 'password-reset':
+    case 'sign-out':
+      return '';
+    default:
+      return genericText(detail);
+  }
+}
+
+function personChangeText(detail: Record<string, unknown>): string {
+  const parts: string[] = [];
+  for (const [key, value] of Object.entries(detail)) {
+    if (key === 'active') parts.push(value === false ? 'deactivated' : 'reactivated');
+    else if (key === 'role') parts.push(`role → ${wordsOf(value)}`);
+    else if (key === 'displayName') parts.push(`name → ${wordsOf(value)}`);
+    else if (key === 'email')
+      parts.push(present(value) ? `e-mail → ${wordsOf(value)}` : 'e-mail removed');
+    else parts.push(`${key} → ${wordsOf(value)}`);
+  }
+  return parts.join(', ');
+}
+
+function viaText(via: unknown): string {
+  if (via === 'form') return 'with the sign-in form';
+  if (via === 'basic') return 'from the command line or a script';
+  return present(via) ? `via ${wordsOf(via)}` : '';
+}
+
+function statusText(status: unknown): string {
+  if (!present(status)) return '?';
+  const text = wordsOf(status);
+  return STATUS_WORDS[text] ?? text;
+}
+
+function genericText(detail: Record<string, unknown>): string {
+  return Object.entries(detail)
+    .map(([key, value]) => `${key}: ${wordsOf(value)}`)
+    .join(', ');
+}
+
+function fieldsOf(detail: unknown): Record<string, unknown> {
+  return detail !== null && typeof detail === 'object' && !Array.isArray(detail)
+    ? (detail as Record<string, unknown>)
+    : {};
+}
+
+function present(value: unknown): boolean {
+  return value !== undefined && value !== null && value !== '';
+}
+
+function wordsOf(value: unknown): string {
+  if (typeof value === 'string') return value;
+  if (typeof value === 'number' || typeof value === 'boolean') return String(value);
+  if (value === null || value === undefined) return '';
+  return JSON.stringify(value);
+}
+
+// Revisions are SHA-256 hex digests; eight characters tell them apart in a log, as git does.
+function shortRevision(revision: unknown): string {
+  const text = wordsOf(revision);
+  return /^[0-9a-f]{9,}$/.test(text) ? text.slice(0, 8) : text || '?';
+}
+
+function join(parts: readonly string[], separator: string): string {
+  return parts.filter((part) => part !== '').join(separator);
+}

@@ -1,0 +1,146 @@
+import { DOCUMENT } from '@angular/common';
+import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@angular/core';
+import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatDialog, MatDialogConfig } from '@angular/material/dialog';
+import { MatIcon } from '@angular/material/icon';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import {
+  MatCell,
+  MatCellDef,
+  MatColumnDef,
+  MatHeaderCell,
+  MatHeaderCellDef,
+  MatHeaderRow,
+  MatHeaderRowDef,
+  MatRow,
+  MatRowDef,
+  MatTable,
+} from '@angular/material/table';
+import { MatTooltip } from '@angular/material/tooltip';
+import { Router } from '@angular/router';
+import { Person } from '../../core/api/api-types';
+import { SessionStore } from '../../core/auth/session-store';
+import { PasswordResetDialog } from '../password-reset-dialog/password-reset-dialog';
+import { PeopleStore } from '../people-store';
+import { PersonAddDialog } from '../person-add-dialog/person-add-dialog';
+import { PersonEditDialog } from '../person-edit-dialog/person-edit-dialog';
+import { PersonStatusDialog } from '../person-status-dialog/person-status-dialog';
+import { roleLabel } from '../role-options';
+
+const FORM_DIALOG: MatDialogConfig = { width: '520px', maxWidth: '95vw' };
+const CONFIRM_DIALOG: MatDialogConfig = { width: '480px', maxWidth: '95vw', role: 'alertdialog' };
+
+/** Everyone who can sign in, with their role and status, and what an admin can do about them. */
+@Component({
+  selector: 'app-people-list',
+  imports: [
+    MatTable,
+    MatColumnDef,
+    MatHeaderCellDef,
+    MatHeaderCell,
+    MatCellDef,
+    MatCell,
+    MatHeaderRowDef,
+    MatHeaderRow,
+    MatRowDef,
+    MatRow,
+    MatButton,
+    MatIconButton,
+    MatIcon,
+    MatTooltip,
+    MatProgressBar,
+  ],
+  templateUrl: './people-list.html',
+  styleUrl: './people-list.css',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class PeopleList implements OnInit {
+  private readonly store = inject(PeopleStore);
+  private readonly session = inject(SessionStore);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly router = inject(Router);
+  private readonly document = inject(DOCUMENT);
+
+  protected readonly people = this.store.people;
+  protected readonly loading = this.store.loading;
+  protected readonly loaded = this.store.loaded;
+  protected readonly failure = this.store.failure;
+  protected readonly meId = computed(() => this.session.person()?.id ?? null);
+  protected readonly columns = ['name', 'username', 'role', 'email', 'status', 'actions'];
+  protected readonly roleLabel = roleLabel;
+  /** "5 people: 4 active, 1 inactive". */
+  protected readonly summary = computed(() => {
+    const people = this.people();
+    const inactive = people.filter((person) => !person.active).length;
+    const total = `${people.length} ${people.length === 1 ? 'person' : 'people'}`;
+    return inactive === 0
+      ? total
+      : `${total}: ${people.length - inactive} active, ${inactive} inactive`;
+  });
+
+  ngOnInit(): void {
+    void this.store.load();
+  }
+
+  protected reload(): void {
+    void this.store.load();
+  }
+
+  protected addPerson(): void {
+    this.dialog
+      .open<PersonAddDialog, void, Person>(PersonAddDialog, FORM_DIALOG)
+      .afterClosed()
+      .subscribe((person) => {
+        if (person)
+          this.tell(`${person.displayName} is added as ${roleLabel(person.role).toLowerCase()}.`);
+      });
+  }
+
+  protected editPerson(person: Person): void {
+    this.dialog
+      .open<PersonEditDialog, Person, Person>(PersonEditDialog, { ...FORM_DIALOG, data: person })
+      .afterClosed()
+      .subscribe((changed) => {
+        if (!changed) return;
+        if (changed.id === this.meId() && changed.role !== 'admin') {
+          // The session still says admin; a fresh page load asks the server who we are now.
+          this.document.location.assign('/batches');
+          return;
+        }
+        this.tell(`Changes to ${changed.displayName} are saved.`);
+      });
+  }
+
+  protected switchActive(person: Person): void {
+    this.dialog
+      .open<PersonStatusDialog, Person, Person>(PersonStatusDialog, {
+        ...CONFIRM_DIALOG,
+        data: person,
+      })
+      .afterClosed()
+      .subscribe((changed) => {
+        if (!changed) return;
+        if (changed.id === this.meId() && !changed.active) {
+          // The server has ended our own session with the change.
+          this.session.forget();
+          void this.router.navigate(['/sign-in']);
+          return;
+        }
+        this.tell(
+          changed.active
+            ? `${changed.displayName} is active again and can sign in.`
+            : `${changed.displayName} is deactivated; their session has ended.`,
+        );
+      });
+  }
+
+  protected resetPassword(person: Person): void {
+    this.dialog.open(PasswordResetDialog, { ...CONFIRM_DIALOG, data: person });
+  }
+
+  private tell(message: string): void {
+    this.snackBar.open(message, 'OK', { duration: 6000 });
+  }
+}

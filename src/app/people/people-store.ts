@@ -1,0 +1,121 @@
+import { HttpClient } from '@angular/common/http';
+import { Injectable, computed, inject, signal } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
+import { Person, Role } from '../core/api/api-types';
+import { failureText } from './failure-text';
+
+/** What an admin fills in to add a person; without a password the server makes one up. */
+export interface NewPerson {
+  readonly username: string;
+  readonly displayName: string;
+  readonly email: string | null;
+  readonly role: Role;
+  readonly password?: string;
+}
+
+/** What an admin may change about a person (PATCH /api/people/:id). */
+export type PersonChanges = Partial<Pick<Person, 'displayName' | 'email' | 'role' | 'active'>>;
+
+/** A person just added, with the password the server made up for them (null when one was given). */
+export interface AddedPerson {
+  readonly person: Person;
+  readonly password: string | null;
+}
+
+interface PeopleState {
+  readonly people: readonly Person[];
+  readonly loading: boolean;
+  readonly failure: string | null;
+  /** Whether the list has come back from the server at least once. */
+  readonly loaded: boolean;
+}
+
+/** The people of the kitchen, for admins: the list, and every change to it through the API. */
+@Injectable({ providedIn: 'root' })
+export class PeopleStore {
+  private readonly http = inject(HttpClient);
+  private readonly state = signal<PeopleState>({
+    people: [],
+    loading: false,
+    failure: null,
+    loaded: false,
+  });
+
+  /** Everyone, active people first, as the server orders them. */
+  readonly people = computed(() => this.state().people);
+  /** Whether the list is being fetched. */
+  readonly loading = computed(() => this.state().loading);
+  /** Why the list could not be fetched, or null. */
+  readonly failure = computed(() => this.state().failure);
+  /** Whether the list has been fetched at least once. */
+  readonly loaded = computed(() => this.state().loaded);
+
+  /** Fetches the list again; a failure is kept in `failure`, never thrown. */
+  async load(): Promise<void> {
+    this.state.update((state) => ({ ...state, loading: true, failure: null }));
+    try {
+      const { people } = await firstValueFrom(this.http.get<{ people: Person[] }>('/api/people'));
+      this.state.set({ people, loading: false, failure: null, loaded: true });
+    } catch (error) {
+      const failure = failureText(error, 'The list of people could not be loaded.');
+      this.state.update((state) => ({ ...state, loading: false, failure }));
+    }
+  }
+
+  /**
+   * Adds a person. Rejects with an ApiError (409 when the username is taken).
+   * @returns The person, and the generated password when none was given: it is shown only once.
+   */
+  async add(draft: NewPerson): Promise<AddedPerson> {
+    const answer = await firstValueFrom(
+      this.http.post<{ person: Person; password?: string }>('/api/people', draft),
+    );
+    this.state.update((state) => ({
+      ...state,
+      people: sortPeople([...state.people, answer.person]),
+    }));
+    return { person: answer.person, password: answer.password ?? null };
+  }
+
+  /**
+   * Changes name, e-mail, role or whether a person is active. Rejects with an ApiError (409 when
+   * it would leave no active admin).
+   */
+  async change(id: number, changes: PersonChanges): Promise<Person> {
+    const { person } = await firstValueFrom(
+      this.http.patch<{ person: Person }>(`/api/people/${id}`, changes),
+    );
+    // Changed in place, so the row an admin just acted on does not jump away from under them.
+    this.state.update((state) => ({
+      ...state,
+      people: state.people.map((p) => (p.id === person.id ? person : p)),
+    }));
+    return person;
+  }
+
+  /**
+   * Gives a person a new password made up by the server.
+   * @returns The new password: it is shown only once.
+   */
+  async resetPassword(id: number): Promise<string> {
+    const { password } = await firstValueFrom(
+      this.http.post<{ password: string }>(`/api/people/${id}/password`, {}),
+    );
+    return password;
+  }
+
+  /** Changes the signed-in person's own password; rejects with an ApiError (403 when `current` is wrong). */
+  async changeOwnPassword(current: string, password: string): Promise<void> {
+    await firstValueFrom(this.http.put<void>('/api/people/me/password', { current, password }));
+  }
+}
+
+// The server's order: active first, then by display name.
+function sortPeople(people: readonly Person[]): Person[] {
+  return [...people].sort(
+    (a, b) =>
+      Number(b.active) - Number(a.active) ||
+      a.displayName.localeCompare(b.displayName) ||
+      a.id - b.id,
+  );
+}

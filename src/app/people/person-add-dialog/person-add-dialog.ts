@@ -1,0 +1,131 @@
+import {
+  ChangeDetectionStrategy,
+  Component,
+  Injector,
+  afterNextRender,
+  inject,
+  signal,
+  viewChild,
+} from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButton, MatIconButton } from '@angular/material/button';
+import {
+  MatDialogActions,
+  MatDialogClose,
+  MatDialogContent,
+  MatDialogRef,
+  MatDialogTitle,
+} from '@angular/material/dialog';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatOption, MatSelect } from '@angular/material/select';
+import { ApiError } from '../../core/api/api-error';
+import { Person, Role } from '../../core/api/api-types';
+import { failureText } from '../failure-text';
+import { GeneratedPassword } from '../generated-password/generated-password';
+import { AddedPerson, PeopleStore } from '../people-store';
+import {
+  DISPLAY_NAME_MAX,
+  EMAIL_MAX,
+  EMAIL_PATTERN,
+  PASSWORD_MAX,
+  PASSWORD_MIN,
+  USERNAME_PATTERN,
+} from '../person-rules';
+import { ROLE_OPTIONS } from '../role-options';
+
+/**
+ * Adds a person. Closes with the new person; when the server made up the password, the dialog
+ * first shows it once and stays open until the admin is done with it.
+ */
+@Component({
+  selector: 'app-person-add-dialog',
+  imports: [
+    ReactiveFormsModule,
+    MatDialogTitle,
+    MatDialogContent,
+    MatDialogActions,
+    MatDialogClose,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatError,
+    MatSuffix,
+    MatInput,
+    MatSelect,
+    MatOption,
+    MatButton,
+    MatIconButton,
+    MatIcon,
+    MatProgressBar,
+    GeneratedPassword,
+  ],
+  templateUrl: './person-add-dialog.html',
+  styleUrl: './person-add-dialog.css',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class PersonAddDialog {
+  private readonly store = inject(PeopleStore);
+  private readonly dialogRef = inject<MatDialogRef<PersonAddDialog, Person>>(MatDialogRef);
+  private readonly injector = inject(Injector);
+  private readonly reveal = viewChild(GeneratedPassword);
+
+  protected readonly roles = ROLE_OPTIONS;
+  protected readonly rules = { DISPLAY_NAME_MAX, PASSWORD_MIN };
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    username: ['', [Validators.required, Validators.pattern(USERNAME_PATTERN)]],
+    displayName: ['', [Validators.required, Validators.maxLength(DISPLAY_NAME_MAX)]],
+    email: ['', [Validators.pattern(EMAIL_PATTERN), Validators.maxLength(EMAIL_MAX)]],
+    role: ['cook' as Role],
+    password: ['', [Validators.minLength(PASSWORD_MIN), Validators.maxLength(PASSWORD_MAX)]],
+  });
+  protected readonly busy = signal(false);
+  protected readonly failure = signal<string | null>(null);
+  protected readonly passwordShown = signal(false);
+  /** The person added with a generated password, while that password is on screen. */
+  protected readonly added = signal<AddedPerson | null>(null);
+
+  protected async addPerson(): Promise<void> {
+    if (this.form.invalid || this.busy()) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.busy.set(true);
+    this.failure.set(null);
+    const { username, displayName, email, role, password } = this.form.getRawValue();
+    try {
+      const added = await this.store.add({
+        username: username.trim(),
+        displayName: displayName.trim(),
+        email: email.trim() || null,
+        role,
+        ...(password ? { password } : {}),
+      });
+      if (added.password === null) {
+        this.dialogRef.close(added.person);
+        return;
+      }
+      // The password exists nowhere else now: no closing by Escape or a stray click outside.
+      this.dialogRef.disableClose = true;
+      this.added.set(added);
+      afterNextRender(() => this.reveal()?.focus(), { injector: this.injector });
+    } catch (error) {
+      if (error instanceof ApiError && error.code === 'username-taken') {
+        this.form.controls.username.setErrors({ taken: true });
+      }
+      this.failure.set(failureText(error, 'The person could not be added; try again.'));
+    } finally {
+      this.busy.set(false);
+    }
+  }
+
+  protected togglePassword(): void {
+    this.passwordShown.update((shown) => !shown);
+  }
+
+  protected finish(): void {
+    this.dialogRef.close(this.added()?.person);
+  }
+}
