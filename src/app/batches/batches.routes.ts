@@ -1,5 +1,25 @@
-import { Routes } from '@angular/router';
+import type { ResolveFn, Routes } from '@angular/router';
+import { roleGuard } from '../core/auth/auth-guard';
+
+/** A batch page's title names its lot. */
+const lotTitle: ResolveFn<string> = (route) =>
+  `Lot ${String(route.paramMap.get('lot') ?? '').toUpperCase()} · Larderbook`;
 
 export default [
-  { path: '', title: 'Batch log · Larderbook', loadComponent: () => import('./placeholder') },
+  {
+    path: '',
+    title: 'Batch log · Larderbook',
+    loadComponent: () => import('./batch-log/batch-log-page'),
+  },
+  {
+    path: 'new',
+    title: 'Record a batch · Larderbook',
+    canMatch: [roleGuard('admin', 'cook')],
+    loadComponent: () => import('./record-batch/record-batch-page'),
+  },
+  {
+    path: ':lot',
+    title: lotTitle,
+    loadComponent: () => import('./batch-page/batch-page'),
+  },
 ] satisfies Routes;

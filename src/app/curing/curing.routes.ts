@@ -1,5 +1,9 @@
-import { Routes } from '@angular/router';
+import type { Routes } from '@angular/router';
 
 export default [
-  { path: '', title: 'Curing now · Larderbook', loadComponent: () => import('./placeholder') },
+  {
+    path: '',
+    title: 'Curing now · Larderbook',
+    loadComponent: () => import('./curing-now/curing-now'),
+  },
 ] satisfies Routes;

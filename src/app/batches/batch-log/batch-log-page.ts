@@ -1,0 +1,165 @@
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  signal,
+  untracked,
+} from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { MatButton } from '@angular/material/button';
+import {
+  MatExpansionPanel,
+  MatExpansionPanelHeader,
+  MatExpansionPanelTitle,
+} from '@angular/material/expansion';
+import { MatIcon } from '@angular/material/icon';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatSort, MatSortHeader, type Sort } from '@angular/material/sort';
+import { MatTableModule } from '@angular/material/table';
+import { ActivatedRoute, Router, RouterLink, type ParamMap } from '@angular/router';
+import { SessionStore } from '../../core/auth/session-store';
+import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import type { Batch, FormulaKind } from '../batch-types';
+import { FormulaOptions } from '../formula-options';
+import { NitriteChart } from '../nitrite-chart/nitrite-chart';
+import { BatchFilters, type FilterChange } from './batch-filters';
+import { BatchLog } from './batch-log';
+import { CursorPaginator } from './cursor-paginator';
+import {
+  csvHref,
+  isFiltered,
+  paramsFromQuery,
+  queryFromParams,
+  type LogQuery,
+  type LogSort,
+  type PageSize,
+} from './log-query';
+
+const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
+  cure: 'Cure',
+  dough: 'Dough',
+  blend: 'Blend',
+  mix: 'Mix',
+};
+
+/**
+ * The batch log: every recorded batch, sorted, filtered and paged on the server, with the view
+ * kept in the address bar so it can be shared and reloaded; a CSV export of exactly that view;
+ * and, folded away, the ingoing nitrite of a cure formula over time.
+ */
+@Component({
+  selector: 'app-batch-log-page',
+  imports: [
+    RouterLink,
+    MatTableModule,
+    MatSort,
+    MatSortHeader,
+    MatButton,
+    MatIcon,
+    MatProgressBar,
+    MatExpansionPanel,
+    MatExpansionPanelHeader,
+    MatExpansionPanelTitle,
+    BatchFilters,
+    CursorPaginator,
+    BatchStatusChip,
+    IsoDayPipe,
+    NitriteChart,
+  ],
+  templateUrl: './batch-log-page.html',
+  styleUrl: './batch-log-page.css',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class BatchLogPage {
+  private readonly router = inject(Router);
+  private readonly route = inject(ActivatedRoute);
+  private readonly session = inject(SessionStore);
+  protected readonly log = inject(BatchLog);
+  protected readonly formulaOptions = inject(FormulaOptions);
+
+  private readonly params = toSignal(this.route.queryParamMap, { requireSync: true });
+  protected readonly query = computed(() => queryFromParams(paramRecord(this.params())));
+  /** The page's batches as the table shows them. */
+  protected readonly rows = computed(() =>
+    this.log.items().map((batch) => ({ ...batch, kindWords: KIND_WORDS[batch.kind] })),
+  );
+  protected readonly exportHref = computed(() => csvHref(this.query()));
+  protected readonly filtered = computed(() => isFiltered(this.query()));
+  protected readonly canRecord = computed(() => this.session.hasRole('admin', 'cook'));
+  protected readonly columns = [
+    'lot',
+    'formula',
+    'kind',
+    'operator',
+    'started',
+    'ready',
+    'status',
+    'checks',
+    'signedOff',
+  ];
+  /** The sorted column; none when the log is in its own order (newest recorded first). */
+  protected readonly sortActive = computed(() =>
+    this.query().sort === 'recorded' ? '' : this.query().sort,
+  );
+  protected readonly sortDirection = computed(() =>
+    this.query().sort === 'recorded' ? '' : this.query().order,
+  );
+  /** The cure formula the chart opens on: the one filtered by, else the first cure. */
+  protected readonly chartFormula = computed(() => {
+    const id = this.query().formula;
+    const cures = this.formulaOptions.cures();
+    return cures.find((f) => f.id === id)?.id ?? cures[0]?.id ?? null;
+  });
+  protected readonly chartOpened = signal(false);
+
+  constructor() {
+    effect(() => {
+      const query = this.query();
+      untracked(() => this.log.show(query));
+    });
+    void this.formulaOptions.load();
+  }
+
+  protected filterBy(change: FilterChange): void {
+    this.showView({ ...this.query(), ...change });
+  }
+
+  protected sortBy(sort: Sort): void {
+    if (sort.direction === '') this.showView({ ...this.query(), sort: 'recorded', order: 'desc' });
+    else this.showView({ ...this.query(), sort: sort.active as LogSort, order: sort.direction });
+  }
+
+  protected resize(size: PageSize): void {
+    this.showView({ ...this.query(), size });
+  }
+
+  protected clearFilters(): void {
+    this.filterBy({
+      formula: null,
+      kind: null,
+      statuses: [],
+      operator: null,
+      from: null,
+      to: null,
+      lot: null,
+    });
+  }
+
+  protected trackBatch(_index: number, batch: Pick<Batch, 'lotCode'>): string {
+    return batch.lotCode;
+  }
+
+  private showView(query: LogQuery): void {
+    const params = Object.fromEntries(
+      Object.entries(paramsFromQuery(query)).filter(([, value]) => value !== null),
+    );
+    void this.router.navigate([], { relativeTo: this.route, queryParams: params });
+  }
+}
+
+function paramRecord(map: ParamMap): Record<string, string | undefined> {
+  return Object.fromEntries(map.keys.map((key) => [key, map.get(key) ?? undefined]));
+}

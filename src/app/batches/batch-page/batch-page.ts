@@ -1,0 +1,138 @@
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  untracked,
+} from '@angular/core';
+import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIcon } from '@angular/material/icon';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+import { SessionStore } from '../../core/auth/session-store';
+import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
+import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { BatchLog } from '../batch-log/batch-log';
+import { allowedMoves, type StatusMove } from '../batch-status';
+import type { FormulaKind } from '../batch-types';
+import { BatchStore } from './batch-store';
+import { DiscardDialog, type DiscardDialogData } from './discard-dialog';
+import { SignOffDialog, type SignOff, type SignOffDialogData } from './sign-off-dialog';
+import { StatusTimeline } from './status-timeline';
+
+const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
+  cure: 'Cure',
+  dough: 'Dough',
+  blend: 'Blend',
+  mix: 'Mix',
+};
+
+/**
+ * One batch: its lot code, formula and revision, status and the history of every change, the
+ * batch sheet it was recorded with, and what the signed-in role may do next (move it along, sign
+ * it off). Prints as a clean batch sheet with lines to sign.
+ */
+@Component({
+  selector: 'app-batch-page',
+  imports: [
+    RouterLink,
+    MatButton,
+    MatIconButton,
+    MatIcon,
+    MatProgressBar,
+    BatchSheet,
+    BatchStatusChip,
+    IsoDayPipe,
+    StatusTimeline,
+  ],
+  providers: [BatchStore],
+  templateUrl: './batch-page.html',
+  styleUrl: './batch-page.css',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class BatchPage {
+  private readonly session = inject(SessionStore);
+  private readonly dialog = inject(MatDialog);
+  private readonly log = inject(BatchLog);
+  protected readonly store = inject(BatchStore);
+
+  /** The lot code from the address. */
+  readonly lot = input.required<string>();
+
+  protected readonly batch = this.store.batch;
+  protected readonly kindWords = KIND_WORDS;
+  protected readonly moves = computed<StatusMove[]>(() => {
+    const batch = this.batch();
+    if (!batch || !this.session.hasRole('admin', 'cook')) return [];
+    return allowedMoves(batch.status, batch.kind);
+  });
+  protected readonly canSignOff = computed(() => {
+    const batch = this.batch();
+    return (
+      !!batch &&
+      !batch.signedOff &&
+      batch.status !== 'planned' &&
+      batch.status !== 'discarded' &&
+      this.session.hasRole('admin', 'reviewer')
+    );
+  });
+  /** Why a reviewer cannot sign off yet, when they could later. */
+  protected readonly signOffWaits = computed(() => {
+    const batch = this.batch();
+    return (
+      !!batch &&
+      !batch.signedOff &&
+      batch.status === 'planned' &&
+      this.session.hasRole('admin', 'reviewer')
+    );
+  });
+  /** The reviewer's note, kept on the sign-off event. */
+  protected readonly signOffNote = computed(
+    () => this.batch()?.events?.findLast((e) => e.type === 'sign-off')?.reason ?? null,
+  );
+  protected readonly shortRevision = computed(() => this.batch()?.formula.revision.slice(0, 12));
+
+  constructor() {
+    effect(() => {
+      const lot = this.lot();
+      // Only the lot code starts a read; what the read itself touches must not start another.
+      untracked(() => void this.store.load(lot));
+    });
+  }
+
+  protected async moveTo(move: StatusMove): Promise<void> {
+    const batch = this.batch();
+    if (!batch) return;
+    let reason: string | undefined;
+    if (move.needsReason) {
+      const dialog = this.dialog.open<DiscardDialog, DiscardDialogData, string>(DiscardDialog, {
+        data: { lotCode: batch.lotCode },
+        width: '520px',
+      });
+      reason = await firstValueFrom(dialog.afterClosed());
+      if (!reason) return;
+    }
+    if (await this.store.move(move.to, reason)) this.log.invalidate();
+  }
+
+  protected async signOff(): Promise<void> {
+    const batch = this.batch();
+    if (!batch) return;
+    const dialog = this.dialog.open<SignOffDialog, SignOffDialogData, SignOff>(SignOffDialog, {
+      data: { lotCode: batch.lotCode },
+      width: '520px',
+    });
+    const answer = await firstValueFrom(dialog.afterClosed());
+    if (!answer) return;
+    if (await this.store.signOff(answer.note || undefined)) this.log.invalidate();
+  }
+
+  protected print(): void {
+    window.print();
+  }
+}

@@ -1,0 +1,79 @@
+import assert from 'node:assert/strict';
+import { describe, it } from 'node:test';
+import type { FormulaFacts } from '../batch-types';
+import { batchOptions, fieldOf, fieldsFor, inFormWords, withUnit } from './batch-fields.ts';
+
+const cure = (method: 'dry' | 'brine' | 'pump'): FormulaFacts => ({
+  id: 'x',
+  title: 'X',
+  kind: 'cure',
+  method,
+});
+
+describe('fieldsFor', () => {
+  it('should offer water only to a brine cure and pump only to a pump cure', () => {
+    const keys = (method: 'dry' | 'brine' | 'pump'): string[] =>
+      fieldsFor(cure(method)).map((x) => x.key);
+    assert.deepEqual(keys('dry'), ['meat', 'thickness', 'largestPiece']);
+    assert.deepEqual(keys('brine'), ['meat', 'thickness', 'largestPiece', 'water']);
+    assert.deepEqual(keys('pump'), ['meat', 'thickness', 'largestPiece', 'pump', 'pumpedWeight']);
+  });
+
+  it('should ask a preferment temperature only of a dough with a preferment', () => {
+    const plain = fieldsFor({ id: 'b', title: 'B', kind: 'dough' }).map((x) => x.key);
+    const sponge = fieldsFor({ id: 'b', title: 'B', kind: 'dough', preferment: {} }).map(
+      (x) => x.key,
+    );
+    assert.equal(plain.includes('prefermentTemp'), false);
+    assert.equal(sponge.includes('prefermentTemp'), true);
+  });
+});
+
+describe('withUnit', () => {
+  it('should give a bare number the box’s unit', () => {
+    assert.equal(withUnit('4.26', 'mass', 'metric'), '4.26 kg');
+    assert.equal(withUnit('9,4', 'mass', 'us'), '9.4 lb');
+    assert.equal(withUnit('90', 'small-mass', 'metric'), '90 g');
+    assert.equal(withUnit('4', 'length', 'metric'), '4 cm');
+    assert.equal(withUnit('26', 'temperature', 'metric'), '26C');
+    assert.equal(withUnit('78', 'temperature', 'us'), '78F');
+  });
+
+  it('should leave percentages and counts as plain numbers', () => {
+    assert.equal(withUnit('12', 'percent', 'metric'), '12');
+    assert.equal(withUnit('48', 'count', 'us'), '48');
+  });
+
+  it('should send a value with its own unit as typed', () => {
+    assert.equal(withUnit(' 9 lb 6 oz ', 'mass', 'metric'), '9 lb 6 oz');
+    assert.equal(withUnit('12 L', 'mass', 'metric'), '12 L');
+  });
+});
+
+describe('batchOptions', () => {
+  it('should leave out empty boxes and join on-hand as KEY=WEIGHT', () => {
+    const fields = fieldsFor({ id: 'g', title: 'G', kind: 'blend' });
+    assert.deepEqual(
+      batchOptions(
+        fields,
+        { total: '', targetFat: '20', onHand: '12' },
+        'metric',
+        'lean',
+        '2026-12-02',
+      ),
+      { targetFat: '20', onHand: 'lean=12 kg', start: '2026-12-02' },
+    );
+  });
+});
+
+describe('inFormWords and fieldOf', () => {
+  it('should name the box instead of the command-line option', () => {
+    const fields = fieldsFor(cure('dry'));
+    assert.equal(
+      inFormWords('--largest-piece 0.5 g is less than 1 g; check the unit', fields),
+      '“Weight of the heaviest piece” 0.5 g is less than 1 g; check the unit',
+    );
+    assert.equal(fieldOf([{ option: 'largest-piece' }]), 'largestPiece');
+    assert.equal(fieldOf([]), null);
+  });
+});

@@ -1,0 +1,196 @@
+import type { FormulaFacts, RawBatchOptions } from '../batch-types';
+
+/** What a batch option measures, which decides the unit a bare number is taken in. */
+export type Measure = 'mass' | 'small-mass' | 'length' | 'percent' | 'count' | 'temperature';
+
+/** The batch options the record form offers (keys of the API's batch options). */
+export type FieldKey =
+  | 'meat'
+  | 'thickness'
+  | 'largestPiece'
+  | 'water'
+  | 'pump'
+  | 'pumpedWeight'
+  | 'pieces'
+  | 'piece'
+  | 'loss'
+  | 'flour'
+  | 'total'
+  | 'ddt'
+  | 'room'
+  | 'flourTemp'
+  | 'prefermentTemp'
+  | 'tap'
+  | 'targetFat'
+  | 'onHand'
+  | 'base';
+
+/** One box of the record form. */
+export interface BatchField {
+  readonly key: FieldKey;
+  readonly label: string;
+  readonly measure: Measure;
+  /** A line under the box: what to enter, or that the formula's own value is used when empty. */
+  readonly hint: string;
+}
+
+/** Unit systems a batch sheet can be printed in. */
+export type Units = 'metric' | 'us';
+
+const f = (key: FieldKey, label: string, measure: Measure, hint: string): BatchField => ({
+  key,
+  label,
+  measure,
+  hint,
+});
+
+/**
+ * The boxes a formula's batch takes, in the order a cook thinks of them; options that apply only
+ * to another cure method (water for brine, pump for injected) are left out.
+ */
+export function fieldsFor(formula: FormulaFacts): BatchField[] {
+  switch (formula.kind) {
+    case 'cure':
+      return [
+        f('meat', 'Green meat weight', 'mass', 'Trimmed, raw, uncured'),
+        f('thickness', 'Thickness of the thickest piece', 'length', 'For the hold time'),
+        f('largestPiece', 'Weight of the heaviest piece', 'mass', 'For per-weight hold rules'),
+        ...(formula.method === 'brine'
+          ? [f('water', 'Water', 'mass', 'By weight, or in litres (12 L); empty: the formula’s')]
+          : []),
+        ...(formula.method === 'pump'
+          ? [
+              f(
+                'pump',
+                'Pump',
+                'percent',
+                'Brine injected, % of green weight; empty: the formula’s',
+              ),
+              f(
+                'pumpedWeight',
+                'Weight after injecting',
+                'mass',
+                'Nitrite is checked on the pump reached',
+              ),
+            ]
+          : []),
+      ];
+    case 'dough':
+      return [
+        f('pieces', 'Pieces', 'count', 'How many to divide'),
+        f('piece', 'Piece weight', 'small-mass', 'Empty: the formula’s'),
+        f('loss', 'Loss allowance', 'percent', 'Dough lost in mixing and dividing'),
+        f('flour', 'Total flour', 'mass', 'Or scale to a flour weight'),
+        f('total', 'Mixed dough weight', 'mass', 'Or scale to a dough weight'),
+        f('ddt', 'Desired dough temperature', 'temperature', 'Empty: the formula’s'),
+        f('room', 'Room temperature', 'temperature', 'For the water temperature'),
+        f('flourTemp', 'Flour temperature', 'temperature', 'For the water temperature'),
+        ...(formula.preferment
+          ? [
+              f(
+                'prefermentTemp',
+                'Preferment temperature',
+                'temperature',
+                'For the water temperature',
+              ),
+            ]
+          : []),
+        f('tap', 'Tap water temperature', 'temperature', 'Ice is added when the tap is too warm'),
+      ];
+    case 'blend':
+      return [
+        f('total', 'Meat weight', 'mass', 'The blend’s total'),
+        f('targetFat', 'Target fat', 'percent', 'Empty: the formula’s'),
+        f('onHand', 'On hand', 'mass', 'One trimming fixed by what you have'),
+      ];
+    case 'mix':
+      return [
+        f('base', 'Base ingredient weight', 'mass', 'Scale to the base'),
+        f('total', 'Total weight', 'mass', 'Or scale to the total'),
+      ];
+  }
+}
+
+const UNITS: Readonly<Record<Units, Readonly<Record<Measure, string>>>> = {
+  metric: {
+    mass: 'kg',
+    'small-mass': 'g',
+    length: 'cm',
+    percent: '%',
+    count: '',
+    temperature: '°C',
+  },
+  us: { mass: 'lb', 'small-mass': 'oz', length: 'in', percent: '%', count: '', temperature: '°F' },
+};
+
+/** The unit a bare number in a box is taken in, shown beside the box. */
+export function unitOf(measure: Measure, units: Units): string {
+  return UNITS[units][measure];
+}
+
+/** The unit of every measure in a unit system. */
+export function unitsOf(units: Units): Readonly<Record<Measure, string>> {
+  return UNITS[units];
+}
+
+const BARE_NUMBER = /^\s*(\d+(?:[.,]\d+)?)\s*$/;
+
+/**
+ * The text the API reads for a box: a bare number gets the box's unit ("4.26" → "4.26 kg"; a
+ * decimal comma is read as a point); anything with a unit is sent as typed ("9 lb 6 oz", "12 L").
+ */
+export function withUnit(text: string, measure: Measure, units: Units): string {
+  const bare = BARE_NUMBER.exec(text);
+  if (!bare) return text.trim();
+  const number = bare[1].replace(',', '.');
+  const unit = unitOf(measure, units);
+  if (measure === 'percent' || measure === 'count') return number;
+  return measure === 'temperature' ? `${number}${unit === '°C' ? 'C' : 'F'}` : `${number} ${unit}`;
+}
+
+/**
+ * The batch options for the API from what was typed: empty boxes are left out, bare numbers get
+ * their unit, and "on hand" becomes KEY=WEIGHT.
+ */
+export function batchOptions(
+  fields: readonly BatchField[],
+  values: Readonly<Partial<Record<FieldKey, string>>>,
+  units: Units,
+  onHandKey: string | null,
+  start: string | null,
+): RawBatchOptions {
+  const options: Record<string, string> = {};
+  for (const field of fields) {
+    const text = values[field.key]?.trim() ?? '';
+    if (text === '') continue;
+    const value = withUnit(text, field.measure, units);
+    if (field.key === 'onHand') {
+      if (onHandKey) options['onHand'] = `${onHandKey}=${value}`;
+    } else options[field.key] = value;
+  }
+  if (start) options['start'] = start;
+  return options;
+}
+
+/**
+ * An API message about a batch option in the form's words: "--largest-piece" becomes the box's
+ * label, since the console has boxes, not command-line options.
+ */
+export function inFormWords(message: string, fields: readonly BatchField[]): string {
+  const text = message.replace(/--([a-z]+(?:-[a-z]+)*)/g, (whole, option: string) => {
+    const key = option.replace(/-([a-z])/g, (_m, letter: string) => letter.toUpperCase());
+    const field = fields.find((x) => x.key === key);
+    return field ? `“${field.label}”` : whole;
+  });
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/** The box an API message is about, from its details ({ option: "largest-piece" }). */
+export function fieldOf(details: readonly unknown[]): FieldKey | null {
+  for (const detail of details) {
+    const option = (detail as { option?: unknown } | null)?.option;
+    if (typeof option === 'string')
+      return option.replace(/-([a-z])/g, (_m, letter: string) => letter.toUpperCase()) as FieldKey;
+  }
+  return null;
+}

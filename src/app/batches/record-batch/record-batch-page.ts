@@ -1,0 +1,254 @@
+import {
+  ChangeDetectionStrategy,
+  Component,
+  OnInit,
+  computed,
+  inject,
+  input,
+  signal,
+} from '@angular/core';
+import {
+  FormControl,
+  FormGroup,
+  NonNullableFormBuilder,
+  ReactiveFormsModule,
+  Validators,
+  type AbstractControl,
+} from '@angular/forms';
+import { MatButton, MatIconButton } from '@angular/material/button';
+import { ErrorStateMatcher, MatOption, provideNativeDateAdapter } from '@angular/material/core';
+import {
+  MatDatepicker,
+  MatDatepickerInput,
+  MatDatepickerToggle,
+} from '@angular/material/datepicker';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatSelect } from '@angular/material/select';
+import { Router, RouterLink } from '@angular/router';
+import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
+import { DAY_INPUT_FORMATS } from '../../ui/batch-sheet/day-input-formats';
+import { isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
+import { BatchLog } from '../batch-log/batch-log';
+import type { FormulaFacts } from '../batch-types';
+import { FormulaOptions, messageOf } from '../formula-options';
+import {
+  batchOptions,
+  fieldOf,
+  fieldsFor,
+  inFormWords,
+  unitsOf,
+  type FieldKey,
+  type Units,
+} from './batch-fields';
+import { BatchRecorder } from './batch-recorder';
+
+const FIELD_KEYS: readonly FieldKey[] = [
+  'meat',
+  'thickness',
+  'largestPiece',
+  'water',
+  'pump',
+  'pumpedWeight',
+  'pieces',
+  'piece',
+  'loss',
+  'flour',
+  'total',
+  'ddt',
+  'room',
+  'flourTemp',
+  'prefermentTemp',
+  'tap',
+  'targetFat',
+  'onHand',
+  'base',
+];
+
+const PREVIEW_DELAY_MS = 400;
+
+/** Shows a box's error as soon as it has been typed in, not only after leaving it. */
+const SHOW_WHEN_TYPED: ErrorStateMatcher = {
+  isErrorState: (control: AbstractControl | null) =>
+    !!control && control.invalid && (control.dirty || control.touched),
+};
+
+/**
+ * Records a batch: choose a formula, enter what the batch takes, watch the batch sheet as you
+ * type, then record it. A cure over its critical limit is refused with the reasons on screen and
+ * nothing is recorded; a recorded batch opens on its own page.
+ */
+@Component({
+  selector: 'app-record-batch-page',
+  imports: [
+    ReactiveFormsModule,
+    RouterLink,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatError,
+    MatSuffix,
+    MatInput,
+    MatSelect,
+    MatOption,
+    MatButton,
+    MatIconButton,
+    MatIcon,
+    MatProgressBar,
+    MatDatepicker,
+    MatDatepickerInput,
+    MatDatepickerToggle,
+    BatchSheet,
+  ],
+  providers: [
+    BatchRecorder,
+    provideNativeDateAdapter(DAY_INPUT_FORMATS),
+    { provide: ErrorStateMatcher, useValue: SHOW_WHEN_TYPED },
+  ],
+  templateUrl: './record-batch-page.html',
+  styleUrl: './record-batch-page.css',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class RecordBatchPage implements OnInit {
+  private readonly fb = inject(NonNullableFormBuilder);
+  private readonly router = inject(Router);
+  private readonly log = inject(BatchLog);
+  protected readonly recorder = inject(BatchRecorder);
+  protected readonly formulaOptions = inject(FormulaOptions);
+
+  /** A formula to start with (?formula=id, from a formula's page). */
+  readonly formula = input<string>();
+
+  protected readonly form = this.fb.group({
+    formula: this.fb.control<string | null>(null, Validators.required),
+    values: new FormGroup(
+      Object.fromEntries(
+        FIELD_KEYS.map((key) => [key, new FormControl('', { nonNullable: true })]),
+      ) as Record<FieldKey, FormControl<string>>,
+    ),
+    onHandKey: this.fb.control<string | null>(null),
+    start: this.fb.control<Date | null>(new Date()),
+    units: this.fb.control<Units>('metric'),
+    status: this.fb.control<'in-progress' | 'planned'>('in-progress'),
+    notes: this.fb.control('', Validators.maxLength(2000)),
+  });
+  protected readonly facts = signal<FormulaFacts | null>(null);
+  protected readonly factsError = signal<string | null>(null);
+  protected readonly units = signal<Units>('metric');
+  /** The unit a bare number in each kind of box is taken in. */
+  protected readonly unitOf = computed(() => unitsOf(this.units()));
+  protected readonly fields = computed(() => {
+    const facts = this.facts();
+    return facts ? fieldsFor(facts) : [];
+  });
+  /** The words of the latest input problem, with boxes named as the form names them. */
+  protected readonly problemText = computed(() => {
+    const problem = this.recorder.inputProblem();
+    return problem ? inFormWords(problem.message, this.fields()) : null;
+  });
+  /** Whether the latest input problem is shown on the box it is about. */
+  protected readonly problemOnField = signal(false);
+  private previewTimer: ReturnType<typeof setTimeout> | undefined;
+
+  ngOnInit(): void {
+    void this.formulaOptions.load();
+    const id = this.formula();
+    if (id) {
+      this.form.controls.formula.setValue(id);
+      void this.chooseFormula();
+    }
+  }
+
+  protected async chooseFormula(): Promise<void> {
+    const id = this.form.controls.formula.value;
+    this.recorder.clear();
+    this.facts.set(null);
+    this.factsError.set(null);
+    this.form.controls.values.reset();
+    if (!id) return;
+    try {
+      const detail = await this.formulaOptions.detail(id);
+      if (this.form.controls.formula.value !== id) return;
+      if (!detail.formula) {
+        this.factsError.set('This formula file has errors; fix it in Formulas before using it.');
+        return;
+      }
+      this.facts.set(detail.formula);
+      this.form.controls.onHandKey.setValue(detail.formula.components?.[0]?.key ?? null);
+      this.previewNow();
+    } catch (error) {
+      this.factsError.set(messageOf(error));
+    }
+  }
+
+  protected chooseUnits(): void {
+    this.units.set(this.form.controls.units.value);
+    this.previewNow();
+  }
+
+  /** Waits for a pause in typing, then calculates the preview. */
+  protected schedulePreview(): void {
+    clearTimeout(this.previewTimer);
+    this.previewTimer = setTimeout(() => this.previewNow(), PREVIEW_DELAY_MS);
+  }
+
+  protected async record(): Promise<void> {
+    clearTimeout(this.previewTimer);
+    const id = this.form.controls.formula.value;
+    if (this.form.invalid || !id || !this.facts()) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const raw = this.form.getRawValue();
+    const batch = await this.recorder.record({
+      formula: id,
+      batch: this.options(),
+      units: raw.units,
+      status: raw.status,
+      ...(raw.notes.trim() ? { notes: raw.notes.trim() } : {}),
+    });
+    if (batch) {
+      this.log.invalidate();
+      await this.router.navigate(['/batches', batch.lotCode]);
+    } else {
+      this.markProblemField();
+    }
+  }
+
+  private previewNow(): void {
+    clearTimeout(this.previewTimer);
+    const id = this.form.controls.formula.value;
+    if (!id || !this.facts()) return;
+    // Nothing typed yet: there is no batch to calculate, and nothing to complain about.
+    if (FIELD_KEYS.every((key) => this.form.controls.values.controls[key].value.trim() === '')) {
+      this.recorder.clear();
+      return;
+    }
+    void this.recorder
+      .calculate(id, this.options(), this.form.controls.units.value)
+      .then(() => this.markProblemField());
+  }
+
+  private options(): ReturnType<typeof batchOptions> {
+    const raw = this.form.getRawValue();
+    return batchOptions(this.fields(), raw.values, raw.units, raw.onHandKey, isoDateOf(raw.start));
+  }
+
+  /** Puts the API's complaint on the box it is about, when that box has been typed in. */
+  private markProblemField(): void {
+    const problem = this.recorder.inputProblem();
+    const key = problem ? fieldOf(problem.details) : null;
+    let onField = false;
+    for (const field of FIELD_KEYS) {
+      const control = this.form.controls.values.controls[field];
+      if (field === key && control.value.trim() !== '') {
+        control.setErrors({ server: this.problemText() });
+        control.markAsTouched();
+        onField = true;
+      } else if (control.hasError('server')) control.setErrors(null);
+    }
+    this.problemOnField.set(onField);
+  }
+}

@@ -1,0 +1,70 @@
+import { HttpClient } from '@angular/common/http';
+import { Injectable, computed, inject, signal } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
+import type { Batch, BatchPage } from '../batches/batch-types';
+import { messageOf } from '../batches/formula-options';
+import { isoDateOf } from '../ui/batch-sheet/iso-day-pipe';
+import { holdingBatches } from './days-left';
+
+/** Enough pages for any kitchen's cooler; the API gives at most 200 a page. */
+const MAX_PAGES = 10;
+
+/**
+ * What is curing or proofing now: GET /api/batches?status=curing,proofing&sort=ready&order=asc,
+ * every page, ordered overdue first with the days each has left, counted from today here.
+ */
+@Injectable({ providedIn: 'root' })
+export class CuringBoard {
+  private readonly http = inject(HttpClient);
+  private readonly batches = signal<readonly Batch[] | null>(null);
+  private readonly day = signal(isoDateOf(new Date()) ?? '');
+  private readonly busy = signal(false);
+  private readonly failure = signal<string | null>(null);
+
+  /** The holding batches, overdue first. */
+  readonly entries = computed(() => holdingBatches(this.batches() ?? [], this.day()));
+  /** How many are overdue. */
+  readonly overdueCount = computed(() => this.entries().filter((e) => e.overdue).length);
+  /** How many are ready today. */
+  readonly readyTodayCount = computed(() => this.entries().filter((e) => e.daysLeft === 0).length);
+  /** The day the days are counted from, YYYY-MM-DD. */
+  readonly today = this.day.asReadonly();
+  /** Whether the list has arrived. */
+  readonly loaded = computed(() => this.batches() !== null);
+  /** Whether it is being read. */
+  readonly loading = this.busy.asReadonly();
+  /** Why it could not be read, or null. */
+  readonly error = this.failure.asReadonly();
+
+  /** Reads the list again, and counts the days from today. */
+  async load(): Promise<void> {
+    if (this.busy()) return;
+    this.busy.set(true);
+    this.failure.set(null);
+    try {
+      const found: Batch[] = [];
+      let cursor: string | null = null;
+      for (let page = 0; page < MAX_PAGES; page++) {
+        const params: Record<string, string> = {
+          status: 'curing,proofing',
+          sort: 'ready',
+          order: 'asc',
+          limit: '200',
+          ...(cursor ? { cursor } : {}),
+        };
+        const answer: BatchPage = await firstValueFrom(
+          this.http.get<BatchPage>('/api/batches', { params }),
+        );
+        found.push(...answer.items);
+        cursor = answer.next;
+        if (!cursor) break;
+      }
+      this.day.set(isoDateOf(new Date()) ?? '');
+      this.batches.set(found);
+    } catch (error) {
+      this.failure.set(messageOf(error));
+    } finally {
+      this.busy.set(false);
+    }
+  }
+}
