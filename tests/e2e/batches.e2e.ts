@@ -1,0 +1,130 @@
+import assert from 'node:assert/strict';
+import { readFileSync } from 'node:fs';
+import { describe, it } from 'node:test';
+import type { Page } from 'playwright-core';
+import { collectConsoleErrors, startConsole } from './browser.ts';
+
+/** Chooses an option of a Material select by its visible text. */
+async function choose(page: Page, testId: string, option: RegExp): Promise<void> {
+  await page.getByTestId(testId).click();
+  await page.getByRole('option', { name: option }).click();
+}
+
+describe('the batch log in the console', () => {
+  it('should let a cook record a batch, but not reach People', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/batches/new`, { waitUntil: 'networkidle' });
+    await choose(page, 'record-formula', /Quillmoor belly/);
+    await page.getByTestId('record-field-meat').fill('4.26');
+    await page.getByTestId('record-field-thickness').fill('4');
+    // The live preview weighs the curing salt: 4260 g × 0.25 % = 10.65 → 10.7 g.
+    // source: the product brief's scale rounding; amounts from the formula file
+    await page.getByTestId('record-preview').getByText('10.7 g').first().waitFor();
+    await session.screenshot(page, 'record-batch');
+    await page.getByTestId('record-submit').click();
+    await page.waitForURL(/\/batches\/\d{6}-QB-\d{2}$/);
+    const lot = await page.getByTestId('batch-lot').innerText();
+    assert.match(lot, /\d{6}-QB-\d{2}/);
+    await page.getByTestId('timeline').waitFor();
+    await session.screenshot(page, 'batch-page');
+
+    assert.equal(await page.getByRole('link', { name: 'People' }).count(), 0);
+    await page.goto(`${session.server.url}/people`, { waitUntil: 'networkidle' });
+    assert.match(new URL(page.url()).pathname, /^\/batches/);
+    const response = await session.server.as('tobin').get('/api/people');
+    assert.equal(response.status, 403);
+    assert.deepEqual(errors, []);
+  });
+
+  it('should refuse an over-limit cure with the reason on screen and record nothing', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('tobin');
+    const before = (await session.server.as('rosa').get('/api/batches?limit=1')).json
+      .total as number;
+    await page.goto(`${session.server.url}/batches/new`, { waitUntil: 'networkidle' });
+    await choose(page, 'record-formula', /Maple belly/);
+    await page.getByTestId('record-field-meat').fill('10');
+    await page.getByTestId('record-field-pumpedWeight').fill('11.2');
+    // Pumped to 12 % instead of 10 %: 144 ppm over 120 ppm. source: 9 CFR 424.22(b); FSIS 7620.3 pumped formula
+    const refusal = page.getByTestId('refusal');
+    await refusal
+      .getByText(/144\.0 ppm/)
+      .first()
+      .waitFor();
+    await page.getByTestId('record-submit').click();
+    await refusal
+      .getByText(/not recorded/i)
+      .first()
+      .waitFor();
+    assert.match(
+      await refusal.innerText(),
+      /critical limit exceeded: 144\.0 ppm is over the 120 ppm limit for pumped bacon/i,
+    );
+    await session.screenshot(page, 'record-refused');
+    assert.equal((await session.server.as('rosa').get('/api/batches?limit=1')).json.total, before);
+  });
+
+  it('should let a reviewer sign a batch off', async (t) => {
+    const session = await startConsole(t);
+    const waiting = await session.server
+      .as('imke')
+      .get('/api/batches?status=done&signedOff=false&limit=1');
+    const lot = waiting.json.items[0]?.lotCode as string;
+    assert.ok(lot, 'the demo history has a done batch waiting for sign-off');
+    const page = await session.page('imke');
+    await page.goto(`${session.server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    await page.getByTestId('sign-off-button').click();
+    await page.getByTestId('sign-off-note').fill('Sheet and weights checked');
+    await page.getByTestId('sign-off-confirm').click();
+    await page.getByTestId('signed-off').getByText(/Imke/).waitFor();
+    const batch = (await session.server.as('imke').get(`/api/batches/${lot}`)).json.batch;
+    assert.equal(batch.signedOff.by.displayName, 'Imke Saltaire (food safety)');
+    assert.equal(
+      await page.getByTestId('sign-off-button').count(),
+      0,
+      'a batch is signed off once',
+    );
+  });
+
+  it('should export exactly the filtered rows as CSV', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('rosa');
+    await page.goto(`${session.server.url}/batches?formula=quillmoor-belly`, {
+      waitUntil: 'networkidle',
+    });
+    await page.getByTestId('batch-row').first().waitFor();
+    await session.screenshot(page, 'batch-log');
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByTestId('export-csv').click(),
+    ]);
+    const csv = readFileSync(await download.path(), 'utf8')
+      .trim()
+      .split(/\r?\n/);
+    const expected = (
+      await session.server.as('rosa').get('/api/batches?formula=quillmoor-belly&limit=1')
+    ).json.total as number;
+    assert.ok(expected > 0);
+    assert.equal(csv.length - 1, expected, 'one header row and one row per filtered batch');
+    assert.ok(csv.slice(1).every((row) => row.includes('quillmoor-belly')));
+  });
+
+  it('should list what is curing, overdue first', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('imke');
+    await page.goto(`${session.server.url}/curing`, { waitUntil: 'networkidle' });
+    const rows = page.getByTestId('curing-row');
+    await rows.first().waitFor();
+    const overdue = await rows.evaluateAll((elements) =>
+      elements.map((e) => e.getAttribute('data-overdue')),
+    );
+    const firstNotOverdue = overdue.indexOf('false');
+    assert.ok(
+      firstNotOverdue === -1 || overdue.slice(firstNotOverdue).every((v) => v === 'false'),
+      overdue.join(),
+    );
+    await session.screenshot(page, 'curing-now');
+  });
+});
