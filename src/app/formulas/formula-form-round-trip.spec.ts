@@ -1,0 +1,29 @@
+// Angular's forms are partially compiled: the JIT compiler finishes them outside an Angular build.
+import '@angular/compiler';
+import assert from 'node:assert/strict';
+import { readFileSync, readdirSync } from 'node:fs';
+import { describe, it } from 'node:test';
+import { FormBuilder } from '@angular/forms';
+import { fillFormulaForm } from './fill-formula-form.ts';
+import { createFormulaForm } from './formula-form-model.ts';
+import { formulaFromForm } from './formula-from-form.ts';
+import { parseFormulaYaml, writeFormulaYaml } from './formula-yaml.ts';
+
+const FOLDER = new URL('../../../formulas/', import.meta.url);
+const DEMO = readdirSync(FOLDER).filter((name) => name.endsWith('.yaml'));
+
+describe('the structured form', () => {
+  for (const name of DEMO) {
+    it(`should give back ${name} unchanged when nothing is edited`, () => {
+      const text = readFileSync(new URL(name, FOLDER), 'utf8');
+      const formula = parseFormulaYaml(text);
+      assert.ok(formula);
+      const fb = new FormBuilder().nonNullable;
+      const form = createFormulaForm(fb);
+      fillFormulaForm(form, formula, fb);
+      const back = formulaFromForm(form, formula);
+      assert.deepEqual(back, formula);
+      assert.equal(writeFormulaYaml(text, back), text);
+    });
+  }
+});

@@ -1,0 +1,156 @@
+import type {
+  CureIngredient,
+  Formula,
+  MixFormula,
+  Yields,
+} from '../../../shared/formula/formula-types.ts';
+import type { FormulaForm, IngredientRow } from './formula-form-model';
+
+type Loose = Record<string, unknown>;
+
+/**
+ * The formula the form describes, built over `base` (the formula it was filled from) so that keys
+ * the form does not edit are kept. Empty optional fields are left out, as a person writing the
+ * file would leave them out.
+ */
+export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
+  const v = form.getRawValue();
+  const common = {
+    ...base,
+    title: v.title.trim(),
+    steps: splitLines(v.steps),
+    cautions: splitLines(v.cautions),
+    notes: v.notes.trim() || undefined,
+  };
+  const rows = form.controls.ingredients.controls;
+  let formula: Loose;
+  switch (base.kind) {
+    case 'cure': {
+      const cure = v.cure;
+      const brine =
+        cure.method === 'brine'
+          ? { water_pct: cure.water_pct }
+          : cure.method === 'pump'
+            ? { pump_pct: cure.pump_pct, cover_pct: cure.cover_pct, extra_pct: cure.extra_pct }
+            : undefined;
+      const hold = {
+        ...(cure.holdRule === 'default' ? {} : { [cure.holdRule]: cure.holdRate }),
+        plus_days: cure.plus_days,
+        min_days: cure.min_days,
+        flip_every_days: cure.flip_every_days,
+      };
+      formula = {
+        ...common,
+        method: cure.method,
+        product: cure.product,
+        brine: brine && compact(brine),
+        ingredients: rows.map((row) =>
+          ingredientOf(row, ['nitrite', 'salt', 'accelerator']),
+        ) as unknown as CureIngredient[],
+        hold: compact(hold),
+        yields: compact(v.yields) as Yields | undefined,
+      };
+      break;
+    }
+    case 'dough': {
+      const dough = v.dough;
+      formula = {
+        ...common,
+        ingredients: rows.map((row) => ingredientOf(row, ['flour', 'food', 'water_pct', 'yeast'])),
+        preferment: dough.hasPreferment
+          ? {
+              name: dough.prefermentName.trim(),
+              flour_pct: dough.prefermentFlourPct,
+              ingredients: dough.prefermentIngredients.map((row) => ({
+                name: row.name.trim(),
+                pct: row.pct,
+              })),
+            }
+          : undefined,
+        piece: dough.piece.trim() || undefined,
+        loss_pct: dough.loss_pct ?? undefined,
+        ddt: dough.ddtTarget.trim()
+          ? compact({ target: dough.ddtTarget.trim(), friction: dough.ddtFriction.trim() || null })
+          : undefined,
+      };
+      break;
+    }
+    case 'blend': {
+      const blend = v.blend;
+      const seasoning = rows.map((row) => ingredientOf(row, []));
+      formula = {
+        ...common,
+        species: blend.species ?? undefined,
+        standard: blend.standard ?? undefined,
+        components: blend.components.map((part) => ({
+          key: part.key.trim(),
+          name: part.name.trim(),
+          [part.measure]: part.value,
+        })),
+        target: { [blend.targetMeasure]: blend.targetValue },
+        ingredients: seasoning.length > 0 ? seasoning : undefined,
+        portion: blend.portion.trim() || undefined,
+        yields: compact(v.yields),
+      };
+      break;
+    }
+    case 'mix':
+      formula = {
+        ...common,
+        ingredients: rows.map((row) =>
+          ingredientOf(row, ['base']),
+        ) as unknown as MixFormula['ingredients'],
+      };
+      break;
+  }
+  return withoutUndefined(dropEmpty(formula)) as unknown as Formula;
+}
+
+/** One ingredient: name and pct, the kind's own keys, allergens and the untouched rest. */
+function ingredientOf(row: IngredientRow, keys: readonly string[]): Loose {
+  const v = row.getRawValue();
+  const own: Loose = {};
+  for (const key of keys) {
+    const value = v[key as keyof typeof v];
+    // Booleans are written only when true, as a person would write `flour: true`.
+    if (value !== null && value !== false && value !== '') own[key] = value;
+  }
+  return {
+    name: v.name.trim(),
+    pct: v.pct,
+    ...own,
+    ...v.rest,
+    allergens: v.allergens.length > 0 ? v.allergens : undefined,
+  };
+}
+
+function compact(values: Record<string, unknown>): Loose | undefined {
+  const kept = Object.entries(values).filter(([, value]) => value !== null && value !== undefined);
+  return kept.length > 0 ? Object.fromEntries(kept) : undefined;
+}
+
+function dropEmpty(value: Loose): Loose {
+  return Object.fromEntries(
+    Object.entries(value).filter(
+      ([, item]) => item !== undefined && !(Array.isArray(item) && item.length === 0),
+    ),
+  );
+}
+
+// Optional keys left undefined above must not reach YAML as empty values.
+function withoutUndefined(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(withoutUndefined);
+  if (value === null || typeof value !== 'object') return value;
+  return Object.fromEntries(
+    Object.entries(value)
+      .filter(([, item]) => item !== undefined)
+      .map(([key, item]) => [key, withoutUndefined(item)]),
+  );
+}
+
+function splitLines(value: string): string[] {
+  return value
+    .split('\n')
+    .map((line) => line.trim())
+    .filter((line) => line.length > 0);
+}

@@ -1,0 +1,81 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import {
+  MatDialogActions,
+  MatDialogClose,
+  MatDialogContent,
+  MatDialogRef,
+  MatDialogTitle,
+} from '@angular/material/dialog';
+import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatOption, MatSelect } from '@angular/material/select';
+import type { FormulaKind, FormulaProblem } from '../formula-api-types';
+import { FormulaProblems } from '../formula-problems/formula-problems';
+import { problemsOf } from '../formula-problems/problems-of';
+import { starterYaml } from '../formula-starters';
+import { FormulaStore, messageOf } from '../formula-store';
+import { KINDS } from '../formula-vocabulary';
+
+/**
+ * Starts a new formula from a small starter of the chosen kind; closes with the new formula's id.
+ */
+@Component({
+  selector: 'app-new-formula-dialog',
+  imports: [
+    ReactiveFormsModule,
+    MatDialogTitle,
+    MatDialogContent,
+    MatDialogActions,
+    MatDialogClose,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatError,
+    MatInput,
+    MatSelect,
+    MatOption,
+    MatButton,
+    FormulaProblems,
+  ],
+  templateUrl: './new-formula-dialog.html',
+  styleUrl: './new-formula-dialog.css',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class NewFormulaDialog {
+  private readonly store = inject(FormulaStore);
+  private readonly dialog = inject<MatDialogRef<NewFormulaDialog, string>>(MatDialogRef);
+
+  protected readonly kinds = KINDS;
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    kind: ['cure' as FormulaKind, Validators.required],
+    id: ['', [Validators.required, Validators.pattern(/^[a-z0-9][a-z0-9-]{1,62}$/)]],
+    title: ['', [Validators.required, Validators.maxLength(120)]],
+    message: ['New formula', [Validators.required, Validators.pattern(/\S/)]],
+  });
+  protected readonly busy = signal(false);
+  protected readonly failure = signal<string | null>(null);
+  protected readonly problems = signal<FormulaProblem[]>([]);
+
+  protected async create(): Promise<void> {
+    if (this.busy()) return;
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const { kind, id, title, message } = this.form.getRawValue();
+    this.busy.set(true);
+    this.failure.set(null);
+    this.problems.set([]);
+    try {
+      const outcome = await this.store.create(starterYaml(kind, id, title.trim()), message.trim());
+      this.dialog.close(outcome.id);
+    } catch (error) {
+      this.failure.set(messageOf(error));
+      this.problems.set(problemsOf(error));
+    } finally {
+      this.busy.set(false);
+    }
+  }
+}
