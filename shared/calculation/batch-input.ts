@@ -63,3 +63,6 @@ export interface BatchInput {
   /** Weight of the base ingredient, grams. */
   base?: Decimal;
 }
+
+/** Batch options as typed by a person or sent to the API: every value a string with its unit. */
+export type RawBatchOptions = Partial<Record<keyof BatchInput, string>>;

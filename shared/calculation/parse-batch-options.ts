@@ -7,11 +7,10 @@ import { QuantityError } from '../units/quantity-error.ts';
 import { parseTemperature, parseTemperatureDifference } from '../units/temperature.ts';
 import { parseVolume, waterGramsFromLitres } from '../units/volume.ts';
 import { BatchError } from './batch-error.ts';
-import type { BatchInput } from './batch-input.ts';
+import type { BatchInput, RawBatchOptions } from './batch-input.ts';
 import { isIsoDate } from './dates.ts';
 
-/** Batch options as typed by a person or sent to the API: every value a string with its unit. */
-export type RawBatchOptions = Partial<Record<keyof BatchInput, string>>;
+export type { RawBatchOptions } from './batch-input.ts';
 
 type Reader = (text: string, option: string) => unknown;
 
