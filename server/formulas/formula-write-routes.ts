@@ -6,7 +6,7 @@ import { personOf } from '../auth/request-person.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { YAML_TEXT, idOf, ifMatchOf, requireIfMatch, setRevision } from './formula-http.ts';
-import { mergeFormulaIntoYaml } from './formula-merge.ts';
+import { mergeFormulaIntoYaml } from '../../shared/formula/merge-formula-yaml.ts';
 import { newFormula } from './formula-checks.ts';
 import type { FormulaWriter, WriteOutcome } from './formula-writer.ts';
 
@@ -161,7 +161,7 @@ export function formulaWriteRoutes(router: Router, writer: FormulaWriter): void 
       {
         id,
         // A JSON formula is written into the file as it is, keeping its comments and layout.
-        text: body.yaml ?? ((base: string) => mergeFormulaIntoYaml(base, formula ?? {})),
+        text: body.yaml ?? ((base: string) => mergeOrRefuse(base, formula ?? {})),
         message: body.message,
         author: personOf(req),
         source: 'save',
@@ -171,4 +171,14 @@ export function formulaWriteRoutes(router: Router, writer: FormulaWriter): void 
     );
     respond(res, outcome, 200);
   });
+}
+
+/** Writes a JSON formula into the file's YAML; a formula nested beyond reason is the request's fault. */
+function mergeOrRefuse(base: string, formula: Record<string, unknown>): string {
+  try {
+    return mergeFormulaIntoYaml(base, formula);
+  } catch (error) {
+    if (error instanceof RangeError) throw badRequest(error.message);
+    throw error;
+  }
 }

@@ -9,7 +9,6 @@ import {
   type YAMLMap,
   type YAMLSeq,
 } from 'yaml';
-import { badRequest } from '../http/app-error.ts';
 
 /** Deepest nesting a formula sent as JSON may have; real formulas go four levels deep. */
 const MAX_DEPTH = 16;
@@ -34,7 +33,7 @@ function keyOf(key: unknown): string {
  * (new keys go at the end, dropped keys go), lists are updated item by item and then grown or
  * cut, and a scalar is only touched when its value changed, so its comments stay with it.
  * A file that is not valid YAML cannot be updated in place and is written fresh.
- * @throws AppError 400 when the formula nests deeper than any formula does
+ * @throws RangeError when the formula nests deeper than any formula does
  */
 export function mergeFormulaIntoYaml(text: string, formula: Record<string, unknown>): string {
   checkDepth(formula, 0);
@@ -49,7 +48,7 @@ export function mergeFormulaIntoYaml(text: string, formula: Record<string, unkno
 }
 
 function checkDepth(value: unknown, depth: number): void {
-  if (depth > MAX_DEPTH) throw badRequest(`the formula nests deeper than ${MAX_DEPTH} levels`);
+  if (depth > MAX_DEPTH) throw new RangeError(`the formula nests deeper than ${MAX_DEPTH} levels`);
   if (Array.isArray(value)) for (const item of value) checkDepth(item, depth + 1);
   else if (isRecord(value)) for (const item of Object.values(value)) checkDepth(item, depth + 1);
 }

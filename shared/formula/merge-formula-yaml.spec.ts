@@ -4,8 +4,7 @@ import path from 'node:path';
 import { describe, it } from 'node:test';
 import { parse } from 'yaml';
 import { readFormula } from '../../shared/index.ts';
-import { AppError } from '../http/app-error.ts';
-import { mergeFormulaIntoYaml } from './formula-merge.ts';
+import { mergeFormulaIntoYaml } from './merge-formula-yaml.ts';
 
 const FORMULAS = path.join(import.meta.dirname, '..', '..', 'formulas');
 
@@ -85,7 +84,7 @@ describe('mergeFormulaIntoYaml', () => {
     for (let i = 0; i < 40; i++) deep = [deep];
     assert.throws(
       () => mergeFormulaIntoYaml(SOURCE, { ...json(SOURCE), notes: deep }),
-      (error: unknown) => error instanceof AppError && error.status === 400,
+      (error: unknown) => error instanceof RangeError,
     );
   });
 });
