@@ -1,6 +1,10 @@
-import { allowQuery } from '../http/require-json.ts';
 import { Router } from 'express';
-import { readFormula, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
+import {
+  MAX_FORMULA_BYTES,
+  readFormula,
+  type RawBatchOptions,
+  type UnitSystem,
+} from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
 import {
@@ -10,6 +14,7 @@ import {
   formulaFromText,
 } from '../calc/calc-request.ts';
 import { badRequest, notFound } from '../http/app-error.ts';
+import { allowQuery } from '../http/require-json.ts';
 import { validateBody } from '../http/validate-body.ts';
 import {
   filesById,
@@ -33,11 +38,13 @@ import { diffHunks, diffLines } from './line-diff.ts';
 
 const KINDS = ['cure', 'dough', 'blend', 'mix'];
 
+// Validation reads any text, empty or too large included, so that it answers with the same
+// problem the command line gives for that file ("the file is empty", "larger than 256 KB").
 const VALIDATE_BODY = {
   type: 'object',
   additionalProperties: false,
   required: ['yaml'],
-  properties: { yaml: YAML_TEXT },
+  properties: { yaml: { type: 'string', maxLength: 2 * MAX_FORMULA_BYTES } },
 } as const;
 
 const PREVIEW_BODY = {

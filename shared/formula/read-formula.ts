@@ -1,4 +1,4 @@
-import { LineCounter, parseDocument } from 'yaml';
+import { LineCounter, parseDocument, type YAMLError } from 'yaml';
 import { schemaErrors } from '../validation/formula-validator.ts';
 import { schemaProblems } from '../validation/schema-messages.ts';
 import { checkFormulaContent } from './check-formula.ts';
@@ -36,11 +36,26 @@ export function readFormula(text: string, file: string): FormulaReading {
   }
   if (text.trim() === '') return whole('the file is empty');
 
+  const control = controlCharacter(text);
+  if (control) {
+    return {
+      problems: [
+        {
+          file,
+          ...control,
+          path: [],
+          severity: 'error',
+          message: `the file holds an invisible control character (U+${control.code}); delete it`,
+        },
+      ],
+    };
+  }
+
   const lineCounter = new LineCounter();
   const doc = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: true });
   if (doc.errors.length > 0) {
     const problems = doc.errors.map((error): FormulaProblem => {
-      const { line, col } = lineCounter.linePos(error.pos[0]);
+      const { line, col } = lineCounter.linePos(unclosedQuoteStart(text, error) ?? error.pos[0]);
       return {
         file,
         line,
@@ -76,6 +91,37 @@ export function readFormula(text: string, file: string): FormulaReading {
   const formula = value as Formula;
   const problems = sortByPosition(checkFormulaContent(formula).map(place));
   return problems.some((p) => p.severity === 'error') ? { problems } : { formula, problems };
+}
+
+// Control characters other than tab, line feed and carriage return: never typed on purpose, and
+// they can hide text on a screen or garble a printed sheet.
+const CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f]/;
+
+function controlCharacter(
+  text: string,
+): { line: number; column: number; code: string } | undefined {
+  const match = CONTROL.exec(text);
+  if (!match) return undefined;
+  const before = text.slice(0, match.index).split('\n');
+  const code = match[0].charCodeAt(0).toString(16).toUpperCase().padStart(4, '0');
+  return { line: before.length, column: before[before.length - 1].length + 1, code };
+}
+
+/**
+ * Where a quoted value that is never closed begins. The parser only notices at the end of the
+ * file; the line the cook must fix is the one with the lone quote.
+ */
+function unclosedQuoteStart(text: string, error: YAMLError): number | undefined {
+  if (error.code !== 'MISSING_CHAR' || !/quote/i.test(error.message)) return undefined;
+  const quote = error.message.includes('"') ? '"' : "'";
+  let offset = 0;
+  let start: number | undefined;
+  for (const line of text.slice(0, error.pos[0]).split('\n')) {
+    const count = line.split(quote).length - 1;
+    if (count % 2 === 1 && start === undefined) start = offset + line.indexOf(quote);
+    offset += line.length + 1;
+  }
+  return start;
 }
 
 function sortByPosition(problems: FormulaProblem[]): FormulaProblem[] {
