@@ -95,6 +95,7 @@ export function readFormula(text: string, file: string): FormulaReading {
 
 // Control characters other than tab, line feed and carriage return: never typed on purpose, and
 // they can hide text on a screen or garble a printed sheet.
+// eslint-disable-next-line no-control-regex -- finding control characters is the point
 const CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f]/;
 
 function controlCharacter(
