@@ -14,11 +14,14 @@ export const SESSION_COOKIE = 'larder.sid';
  */
 export function sessionMiddleware(db: Database, secret: string, secure: boolean): RequestHandler {
   const SequelizeStore = connectSessionSequelize(session.Store);
+  // disableTouch is in the store's options but not its type declarations.
   const store = new SequelizeStore({
     db: db.sequelize,
     checkExpirationInterval: 15 * 60 * 1000,
     expiration: SESSION_IDLE_MS,
-  });
+    // Sessions last a fixed time from sign-in; touching them would make every read a write.
+    disableTouch: true,
+  } as ConstructorParameters<typeof SequelizeStore>[0]);
   return session({
     name: SESSION_COOKIE,
     secret,

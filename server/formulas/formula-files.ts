@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { readFile, readdir } from 'node:fs/promises';
+import { readFile, readdir, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { parseDocument } from 'yaml';
 import { readFormula, type FormulaReading } from '../../shared/index.ts';
@@ -20,21 +20,45 @@ export function revisionOf(text: string): string {
   return createHash('sha256').update(text, 'utf8').digest('hex');
 }
 
-/** Reads one formula file; undefined when it does not exist. */
+/** What identifies one state of a file on disk: when a save or a git pull changes it, this changes. */
+function stamp(info: { mtimeMs: number; ctimeMs: number; size: number; ino: number }): string {
+  return `${info.ino}:${info.size}:${info.mtimeMs}:${info.ctimeMs}`;
+}
+
+// Parsed files by path and disk stamp: a request re-reads and re-checks only files that changed
+// since they were last read, instead of every formula on every call.
+const readings = new Map<string, { stamp: string; file: FormulaFile }>();
+
+/** Reads one formula file (from the cache when it has not changed); undefined when it does not exist. */
 export async function readFormulaFileAt(
   folder: string,
   name: string,
 ): Promise<FormulaFile | undefined> {
   const file = path.join(folder, name);
   let text: string;
+  let current: string;
   try {
+    current = stamp(await stat(file));
+    const cached = readings.get(file);
+    if (cached?.stamp === current) return cached.file;
     text = await readFile(file, 'utf8');
   } catch (error) {
     // A file deleted between listing and reading is simply gone.
-    if ((error as NodeJS.ErrnoException).code === 'ENOENT') return undefined;
+    if ((error as NodeJS.ErrnoException).code === 'ENOENT') {
+      readings.delete(file);
+      return undefined;
+    }
     throw error;
   }
-  return { name, path: file, text, revision: revisionOf(text), reading: readFormula(text, name) };
+  const read: FormulaFile = {
+    name,
+    path: file,
+    text,
+    revision: revisionOf(text),
+    reading: readFormula(text, name),
+  };
+  readings.set(file, { stamp: current, file: read });
+  return read;
 }
 
 /** Every *.yaml / *.yml file directly in the folder, read and checked, sorted by name. */

@@ -1,0 +1,75 @@
+// Starts the built server as its own process for benchmarks, on a fresh data folder.
+import { spawn, type ChildProcess } from 'node:child_process';
+import { cpSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { buildBundle, BUNDLES } from '../scripts/bundles.mjs';
+
+/** A running server and how to reach and stop it. */
+export interface BenchServer {
+  readonly url: string;
+  readonly child: ChildProcess;
+  readonly dataDir: string;
+  /** Resident memory of the server process now, in MB. */
+  rssMb(): number;
+  stop(): Promise<void>;
+}
+
+/** Builds the server bundle, then starts it on a free port with demo people and formulas. */
+export async function startBenchServer(env: Record<string, string> = {}): Promise<BenchServer> {
+  await buildBundle('server');
+  const dataDir = mkdtempSync(path.join(tmpdir(), 'larder-bench-'));
+  cpSync('formulas', path.join(dataDir, 'formulas'), { recursive: true });
+  const child = spawn(process.execPath, [BUNDLES.server.outfile], {
+    env: {
+      ...process.env,
+      LARDER_DATA: dataDir,
+      LARDER_PORT: '0',
+      LARDER_SIGN_IN_LIMIT: '10000',
+      ...env,
+    },
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
+  const url = await new Promise<string>((resolve, reject) => {
+    let seen = '';
+    child.stdout?.on('data', (chunk: Buffer) => {
+      seen += chunk.toString();
+      const match = /at (http:\/\/[\d.]+:\d+)\//.exec(seen);
+      if (match) resolve(match[1]);
+    });
+    child.once('exit', (code) =>
+      reject(new Error(`the server exited (${code}) before listening:\n${seen}`)),
+    );
+  });
+  return {
+    url,
+    child,
+    dataDir,
+    rssMb: () => {
+      const status = readFileSync(`/proc/${child.pid}/status`, 'utf8');
+      return Number(/VmRSS:\s+(\d+) kB/.exec(status)?.[1] ?? 0) / 1024;
+    },
+    stop: async () => {
+      const exited = new Promise((resolve) => child.once('exit', resolve));
+      child.kill('SIGTERM');
+      await exited;
+      rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Signs in through the form and returns the cookie and CSRF token. */
+export async function signInCookie(
+  url: string,
+  username: string,
+  password: string,
+): Promise<{ cookie: string; csrf: string }> {
+  const response = await fetch(`${url}/api/session`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ username, password }),
+  });
+  if (response.status !== 201) throw new Error(`sign-in failed: ${response.status}`);
+  const body = (await response.json()) as { csrfToken: string };
+  return { cookie: (response.headers.get('set-cookie') ?? '').split(';')[0], csrf: body.csrfToken };
+}
