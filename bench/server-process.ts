@@ -15,11 +15,17 @@ export interface BenchServer {
   stop(): Promise<void>;
 }
 
-/** Builds the server bundle, then starts it on a free port with demo people and formulas. */
-export async function startBenchServer(env: Record<string, string> = {}): Promise<BenchServer> {
+/**
+ * Builds the server bundle, then starts it on a free port: on a fresh data folder with the demo
+ * people and formulas, or on LARDER_DATA when given (kept afterwards with keepData).
+ */
+export async function startBenchServer(
+  env: Record<string, string> = {},
+  options: { keepData?: boolean } = {},
+): Promise<BenchServer> {
   await buildBundle('server');
-  const dataDir = mkdtempSync(path.join(tmpdir(), 'larder-bench-'));
-  cpSync('formulas', path.join(dataDir, 'formulas'), { recursive: true });
+  const dataDir = env.LARDER_DATA ?? mkdtempSync(path.join(tmpdir(), 'larder-bench-'));
+  if (!env.LARDER_DATA) cpSync('formulas', path.join(dataDir, 'formulas'), { recursive: true });
   const child = spawn(process.execPath, [BUNDLES.server.outfile], {
     env: {
       ...process.env,
@@ -53,7 +59,7 @@ export async function startBenchServer(env: Record<string, string> = {}): Promis
       const exited = new Promise((resolve) => child.once('exit', resolve));
       child.kill('SIGTERM');
       await exited;
-      rmSync(dataDir, { recursive: true, force: true });
+      if (!options.keepData) rmSync(dataDir, { recursive: true, force: true });
     },
   };
 }

@@ -1,0 +1,168 @@
+// Fills a database with a large batch log for the benchmarks: real calculated results of the
+// demo formulas, spread over about three years, with a realistic mix of statuses and sign-offs.
+// Usage: node --import tsx bench/seed-log.ts DATA_FOLDER [ROWS]
+import { cpSync, mkdirSync, readFileSync, readdirSync } from 'node:fs';
+import path from 'node:path';
+import sqlite3 from 'sqlite3';
+import {
+  calculate,
+  parseBatchOptions,
+  presentResult,
+  readFormula,
+  type RawBatchOptions,
+} from '../shared/index.ts';
+import { loadConfig } from '../server/config.ts';
+import { openContext } from '../server/main-context.ts';
+import { formulaInitials, lotCode, lotPrefix } from '../server/batches/lot-code.ts';
+import { DEMO_PEOPLE } from '../server/demo/demo-people.ts';
+
+const SAMPLE: Record<string, RawBatchOptions> = {
+  cure: { meat: '5 kg', thickness: '4 cm', largestPiece: '2.5 kg' },
+  dough: { pieces: '48' },
+  blend: { total: '20 kg' },
+  mix: { total: '2 kg' },
+};
+const STATUSES = [
+  'done',
+  'done',
+  'done',
+  'done',
+  'done',
+  'done',
+  'discarded',
+  'curing',
+  'in-progress',
+  'planned',
+];
+
+interface Template {
+  id: string;
+  title: string;
+  kind: string;
+  revision: string;
+  prefix: string;
+  result: string;
+  nitrite: string | null;
+  readyDays: number | null;
+}
+
+function templates(): Template[] {
+  return readdirSync('formulas')
+    .filter((name) => name.endsWith('.yaml'))
+    .flatMap((name) => {
+      const text = readFileSync(path.join('formulas', name), 'utf8');
+      const formula = readFormula(text, name).formula;
+      if (!formula || !(formula.kind in SAMPLE)) return [];
+      const result = presentResult(
+        calculate(
+          formula,
+          parseBatchOptions({ ...SAMPLE[formula.kind], start: '2026-01-01' }, formula),
+        ),
+        'metric',
+      );
+      return [
+        {
+          id: formula.id,
+          title: formula.title,
+          kind: formula.kind,
+          revision: 'bench'.padEnd(64, '0'),
+          prefix: formulaInitials(formula.id),
+          result: JSON.stringify(result),
+          nitrite: result.checks.find((c) => c.id === 'nitrite-max')?.exact ?? null,
+          readyDays: result.schedule?.days ?? null,
+        },
+      ];
+    });
+}
+
+function run(db: sqlite3.Database, sql: string): Promise<void> {
+  return new Promise((resolve, reject) =>
+    db.run(sql, (error) => (error ? reject(error) : resolve())),
+  );
+}
+
+/** Seeds `rows` batches into a fresh data folder; returns the database file. */
+export async function seedLog(
+  dataDir: string,
+  rows: number,
+  log: (text: string) => void = () => {},
+): Promise<string> {
+  mkdirSync(dataDir, { recursive: true });
+  cpSync('formulas', path.join(dataDir, 'formulas'), { recursive: true });
+  const config = loadConfig({ LARDER_DATA: dataDir, LARDER_MODE: 'demo' });
+  const context = await openContext(config);
+  // The demo people only: the batches are this script's.
+  await context.db.write(async (transaction) => {
+    for (const person of DEMO_PEOPLE) await context.people.add(person, transaction);
+  });
+  await context.db.close();
+
+  const forms = templates();
+  const db = new sqlite3.Database(config.databaseFile);
+  await run(db, 'PRAGMA synchronous = OFF');
+  const insert = db.prepare(
+    `INSERT INTO batches (lot_code, formula_id, formula_revision, formula_title, kind, status, operator_id, started_on, ready_on,
+       recorded_at, updated_at, units, inputs, result, checks_passed, nitrite_ppm, signed_off_by, signed_off_at, notes)
+     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 'metric', '{}', ?, 1, ?, ?, ?, NULL)`,
+  );
+  const event = db.prepare(
+    "INSERT INTO batch_events (batch_id, at, actor_id, type, to_status) VALUES (?, ?, ?, 'recorded', ?)",
+  );
+  const start = Date.UTC(2023, 11, 1);
+  const perDay = Math.ceil(rows / 1100);
+  const sequence = new Map<string, number>();
+  await run(db, 'BEGIN');
+  for (let i = 0; i < rows; i++) {
+    const form = forms[i % forms.length];
+    const at = new Date(start + Math.floor((i / perDay) * 86_400_000) + (i % perDay) * 1000);
+    const day = at.toISOString().slice(0, 10);
+    const key = `${day}${form.prefix}`;
+    const n = (sequence.get(key) ?? 0) + 1;
+    sequence.set(key, n);
+    const lot = lotCode(lotPrefix(day, form.id), n);
+    let status = STATUSES[i % STATUSES.length];
+    if (status === 'curing' && form.kind !== 'cure')
+      status = form.kind === 'dough' ? 'proofing' : 'done';
+    const ready =
+      form.readyDays === null
+        ? null
+        : new Date(at.getTime() + form.readyDays * 86_400_000).toISOString().slice(0, 10);
+    const signed = status === 'done' && i % 3 !== 0;
+    const iso = at.toISOString();
+    insert.run(
+      lot,
+      form.id,
+      form.revision,
+      form.title,
+      form.kind,
+      status,
+      1 + (i % 3),
+      day,
+      ready,
+      iso,
+      iso,
+      form.result,
+      form.nitrite,
+      signed ? 3 : null,
+      signed ? iso : null,
+    );
+    event.run(i + 1, iso, 1 + (i % 3), status);
+    if ((i + 1) % 20_000 === 0) {
+      await run(db, 'COMMIT');
+      await run(db, 'BEGIN');
+      log(`\rseeded ${i + 1} of ${rows}`);
+    }
+  }
+  await run(db, 'COMMIT');
+  await new Promise((resolve) => insert.finalize(resolve));
+  await new Promise((resolve) => event.finalize(resolve));
+  await new Promise((resolve) => db.close(resolve));
+  log('\n');
+  return config.databaseFile;
+}
+
+if (process.argv[1]?.endsWith('seed-log.ts')) {
+  const [folder, rows] = process.argv.slice(2);
+  if (!folder) throw new Error('usage: seed-log.ts DATA_FOLDER [ROWS]');
+  await seedLog(folder, Number(rows ?? 1_000_000), (text) => process.stdout.write(text));
+}
