@@ -5,6 +5,7 @@ import { batchesCommand } from './commands/batches.ts';
 import { calcCommand } from './commands/calc.ts';
 import { checkCommand } from './commands/check.ts';
 import { newCommand } from './commands/new.ts';
+import { planCommand } from './commands/plan.ts';
 import { usersCommand } from './commands/users.ts';
 import type { Io } from './io.ts';
 
@@ -22,6 +23,7 @@ export function createProgram(io: Io): Command {
   for (const command of [
     calcCommand(io),
     checkCommand(io),
+    planCommand(io),
     newCommand(io),
     batchesCommand(io),
     usersCommand(io),

@@ -12,15 +12,24 @@ const ALWAYS = ['package.json', 'package-lock.json', 'scripts/bundles.mjs'];
 
 /**
  * The bundles. The CLI carries its packages (fast start) except the database stack, which only
- * the record-keeping verbs load, from a separate chunk; the server loads its packages from
- * node_modules.
+ * the record-keeping verbs load, from a separate chunk, and the PDF stack, which only --pdf loads
+ * (pdfkit finds its own data files beside itself, so it cannot be bundled); the server loads its
+ * packages from node_modules.
  */
 export const BUNDLES = {
   cli: {
     entry: 'cli/main.ts',
     outfile: `${root}dist/cli/larder.js`,
     packages: 'bundle',
-    external: ['sequelize', 'sqlite3', 'umzug', 'connect-session-sequelize', 'express-session'],
+    external: [
+      'sequelize',
+      'sqlite3',
+      'umzug',
+      'connect-session-sequelize',
+      'express-session',
+      'pdfkit',
+      'qrcode',
+    ],
     splitting: true,
   },
   server: { entry: 'server/main.ts', outfile: `${root}dist/server/main.js`, packages: 'external' },

@@ -3,7 +3,10 @@ import type { BatchRepository } from './batches/batch-repository.ts';
 import type { ServerConfig } from './config.ts';
 import type { Database } from './db/database.ts';
 import type { FormulaStore } from './formulas/formula-store.ts';
+import type { InvitationRepository } from './invitations/invitation-repository.ts';
+import type { MailService } from './mail/mail-service.ts';
 import type { PeopleRepository } from './people/people-repository.ts';
+import type { ReminderPrefsRepository } from './reminders/reminder-prefs-repository.ts';
 
 /** What the routers share: settings, the database and the repositories. */
 export interface AppContext {
@@ -13,4 +16,10 @@ export interface AppContext {
   readonly audit: AuditRepository;
   readonly formulas: FormulaStore;
   readonly batches: BatchRepository;
+  /** The outbox and its delivery (server/mail). */
+  readonly mail: MailService;
+  readonly invitations: InvitationRepository;
+  readonly reminderPrefs: ReminderPrefsRepository;
+  /** The clock of invitations, reminders and the outbox; tests move it. */
+  readonly now: () => Date;
 }

@@ -9,11 +9,15 @@ import { sessionMiddleware } from './auth/session.ts';
 import { sessionRouter } from './auth/session-router.ts';
 import { batchesCsv, batchesRouter } from './batches/batches-router.ts';
 import { calcRouter } from './calc/calc-router.ts';
+import { plansRouter } from './plans/plans-router.ts';
 import { formulasRouter } from './formulas/formulas-router.ts';
 import { consoleRouter, cspNonce } from './http/console-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
 import { requireJsonBody } from './http/require-json.ts';
+import { invitationsRouter } from './invitations/invitations-router.ts';
+import { outboxRouter } from './mail/outbox-router.ts';
 import { peopleRouter } from './people/people-router.ts';
+import { remindersRouter } from './reminders/reminders-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
 const JSON_LIMIT = '512kb';
@@ -58,15 +62,20 @@ export function createApp(context: AppContext): Express {
   useBasicStrategy(context.people, context.audit);
   api.get('/health', (_req, res) => void res.json({ ok: true }));
   api.use('/session', sessionRouter(context.people, context.audit, context.config.signInLimit));
+  // Anyone holding an invitation link; the token is the proof, so no sign-in and no CSRF token.
+  api.use('/invitations', invitationsRouter(context));
   // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes.
   api.use(authenticate(context.people), requireCsrfToken);
   api.use('/calc', calcRouter(context));
+  api.use('/plans', plansRouter(context));
   api.use('/formulas', formulasRouter(context));
   api.use('/batches', batchesRouter(context));
   // A mount at /batches does not match /batches.csv, so the export is a route of its own.
   api.get('/batches.csv', batchesCsv(context));
+  api.use('/people/me/reminders', remindersRouter(context));
   api.use('/people', peopleRouter(context));
   api.use('/audit', auditRouter(context));
+  api.use('/outbox', outboxRouter(context));
   api.use(apiNotFound);
 
   app.use('/api', api);

@@ -5,6 +5,7 @@ import { DEMO_PEOPLE } from './demo/demo-people.ts';
 import { ensureDemoFormulas } from './demo/demo-formulas.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
+import { ReminderScheduler } from './reminders/reminder-scheduler.ts';
 
 /* eslint-disable no-console -- the server talks to whoever started it */
 
@@ -23,11 +24,18 @@ async function main(): Promise<void> {
   const context = await openContext(config);
   if (config.mode === 'demo') await seedDemo(context);
   const server = createApp(context).listen(config.port, config.host);
+  const reminders = new ReminderScheduler(context);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     console.log(
       `Larderbook (${config.mode}) at http://${config.host}:${port}/  ·  database ${config.databaseFile}  ·  formulas ${config.formulasDir}`,
     );
+    // Links in messages need the port; reminders start once it is known.
+    context.mail.links.listeningOn(port);
+    console.log(
+      `Mail: ${context.mail.mailer.description}  ·  links to ${context.mail.links.base()}  ·  reminders every ${config.reminderMinutes} min`,
+    );
+    reminders.start();
     if (config.mode === 'demo') {
       console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
       for (const person of DEMO_PEOPLE)
@@ -45,7 +53,14 @@ async function main(): Promise<void> {
     process.exit(1);
   });
   const stop = (): void => {
-    server.close(() => void context.db.close().then(() => process.exit(0)));
+    server.close(
+      () =>
+        void reminders
+          .stop()
+          .then(() => context.mail.close())
+          .then(() => context.db.close())
+          .then(() => process.exit(0)),
+    );
   };
   process.on('SIGTERM', stop);
   process.on('SIGINT', stop);

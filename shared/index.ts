@@ -11,11 +11,13 @@ export type * from './formula/formula-types.ts';
 export type { FormulaProblem, ContentProblem, FormulaPath } from './formula/formula-problem.ts';
 export {
   readFormula,
+  placeProblems,
   formatProblem,
   pathText,
   MAX_FORMULA_BYTES,
   type FormulaReading,
 } from './formula/read-formula.ts';
+export { checkLibrary, formulaLibrary, type LibraryFile } from './formula/check-library.ts';
 export { FORMULA_SCHEMA } from './validation/formula-validator.ts';
 export type * from './calculation/calc-result.ts';
 export { failsCriticalLimit } from './calculation/calc-result.ts';
@@ -28,5 +30,17 @@ export {
 } from './calculation/parse-batch-options.ts';
 export { calculate } from './calculation/calculate.ts';
 export { isIsoDate, addDays } from './calculation/dates.ts';
+export { planAssembly, MAX_PLAN_COUNT } from './calculation/plan/plan-assembly.ts';
+export { PlanError, FORMULA_REFUSALS, type PlanRefusal } from './calculation/plan/plan-error.ts';
+export {
+  assemblyLibraryIssues,
+  checkAssemblyLibrary,
+  type FormulaLibrary,
+  type LibraryIssue,
+} from './calculation/plan/check-assembly-library.ts';
+export { DEFAULT_LEAD_DAYS, leadDaysOf } from './calculation/plan/lead-days.ts';
+export type * from './calculation/plan/plan-types.ts';
 export { presentResult, roundingNote } from './presentation/present-result.ts';
 export type * from './presentation/presented-result.ts';
+export { presentPlan } from './presentation/present-plan.ts';
+export type * from './presentation/presented-plan.ts';

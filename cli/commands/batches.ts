@@ -1,6 +1,7 @@
 import { Command } from 'commander';
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
 import type { PresentedResult } from '../../shared/index.ts';
-import { EXIT_CODES_HELP } from '../cli-error.ts';
+import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
 import { textTable } from '../output/text-table.ts';
@@ -8,14 +9,14 @@ import { textTable } from '../output/text-table.ts';
 /** The parts of a batch these verbs print. */
 interface BatchView {
   lotCode: string;
-  formula: { id: string; title: string };
+  formula: { id: string; revision: string; title: string };
   kind: string;
-  status: string;
-  operator: { displayName: string };
+  status: BatchStatus;
+  operator: { id: number; displayName: string };
   startedOn: string;
   readyOn: string | null;
   checksPassed: boolean;
-  signedOff: { by: { displayName: string }; at: string } | null;
+  signedOff: { by: { id: number; displayName: string }; at: string } | null;
   result: PresentedResult;
   events?: {
     at: string;
@@ -46,6 +47,13 @@ const FILTERS = [
   'limit',
   'cursor',
 ] as const;
+
+interface ShowOptions {
+  server?: string;
+  json?: boolean;
+  pdf?: string;
+  force?: boolean;
+}
 
 interface ListOptions extends Partial<Record<(typeof FILTERS)[number], string>> {
   server?: string;
@@ -139,7 +147,17 @@ export function batchesCommand(io: Io): Command {
     .argument('<lot>', 'lot code')
     .option('--server <url>', 'read from this server (default: $LARDER_SERVER, else this machine)')
     .option('--json', 'print the batch as JSON')
-    .action(async (lot: string, options: { server?: string; json?: boolean }) => {
+    .option('--pdf <file>', 'write the batch sheet as recorded to a PDF file, with its lot code')
+    .option('--force', 'with --pdf: replace the file if it exists')
+    .addHelpText(
+      'after',
+      `\nSigns in as $LARDER_USER with $LARDER_PASSWORD.\n\nExamples:\n  larder batches show 261202-QB-01\n  larder batches show 261202-QB-01 --pdf 261202-QB-01.pdf\n${EXIT_CODES_HELP}`,
+    )
+    .action(async (lot: string, options: ShowOptions) => {
+      if (options.force && !options.pdf) throw new CliError('--force goes with --pdf', EXIT.usage);
+      const pdf = options.pdf ? { file: options.pdf, force: !!options.force } : undefined;
+      // The PDF tools load only for --pdf; the path is checked before the batch is read.
+      if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
       const server = serverOf(options);
       let batch: BatchView;
       if (server) {
@@ -153,7 +171,10 @@ export function batchesCommand(io: Io): Command {
         const { showLocally } = await import('../local/batches-local.ts');
         batch = (await showLocally(lot)) as unknown as BatchView;
       }
+      if (pdf)
+        await (await import('../output/pdf-file.ts')).writeBatchSheet(pdf, batch.result, batch);
       if (options.json) return io.out(`${JSON.stringify(batch, null, 2)}\n`);
+      if (pdf) return io.out(`Wrote the sheet of lot ${batch.lotCode} to ${pdf.file}\n`);
       io.out(
         `Lot ${batch.lotCode} · ${batch.status} · started ${batch.startedOn}${batch.readyOn ? ` · ready ${batch.readyOn}` : ''} · by ${batch.operator.displayName}\n`,
       );

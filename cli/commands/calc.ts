@@ -1,4 +1,7 @@
+import { readFileSync } from 'node:fs';
 import { Command, InvalidArgumentError, Option } from 'commander';
+import type { Batch } from '../../shared/api/batch-record.ts';
+import type { PdfTarget } from '../output/pdf-file.ts';
 import {
   BatchError,
   calculate,
@@ -98,6 +101,8 @@ interface CalcOptions extends RawBatchOptions {
   server?: string;
   status?: 'planned' | 'in-progress';
   notes?: string;
+  pdf?: string;
+  force?: boolean;
 }
 
 /** `larder calc FORMULA`: the batch sheet for one batch. */
@@ -129,7 +134,12 @@ export function calcCommand(io: Io): Command {
         'in-progress',
       ]),
     )
-    .option('--notes <text>', 'with --record: a note kept with the batch');
+    .option('--notes <text>', 'with --record: a note kept with the batch')
+    .option(
+      '--pdf <file>',
+      'write the batch sheet to a PDF file instead of printing it (A4; Letter in US units)',
+    )
+    .option('--force', 'with --pdf: replace the file if it exists');
   for (const [, flags, help] of BATCH_OPTIONS) command.option(flags, help, onlyOnce(flags));
   return command
     .addHelpText(
@@ -144,6 +154,8 @@ Examples:
   larder calc chuck-grind --on-hand lean=12kg --json
   LARDER_USER=tobin LARDER_PASSWORD=… larder calc quillmoor-belly --meat 4.26kg --thickness 4cm --record
   larder calc quillmoor-belly --meat 4.26kg --record --server http://127.0.0.1:4310
+  larder calc quillmoor-belly --meat 4.26kg --thickness 4cm --pdf belly-sheet.pdf
+  larder calc quillmoor-belly --meat 4.26kg --thickness 4cm --record --pdf sheet.pdf --force
 ${EXIT_CODES_HELP}`,
     )
     .action((reference: string, options: CalcOptions) => runCalc(reference, options, io));
@@ -157,7 +169,14 @@ async function runCalc(reference: string, options: CalcOptions, io: Io): Promise
   if (!options.record && (options.server || options.status || options.notes)) {
     throw new CliError('--server, --status and --notes go with --record', EXIT.usage);
   }
-  if (options.record) return recordBatch(formula.id, file, raw, options, io);
+  if (options.force && !options.pdf) throw new CliError('--force goes with --pdf', EXIT.usage);
+  const pdf: PdfTarget | undefined = options.pdf
+    ? { file: options.pdf, force: !!options.force }
+    : undefined;
+  // The PDF tools load only when a PDF is asked for, so a plain calc starts as fast as before.
+  // The path is checked before anything is worked out or recorded.
+  if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
+  if (options.record) return recordBatch(formula.id, file, raw, options, pdf, io);
   let result;
   try {
     result = calculate(formula, parseBatchOptions(raw, formula));
@@ -166,8 +185,26 @@ async function runCalc(reference: string, options: CalcOptions, io: Io): Promise
     throw error;
   }
   const presented = presentResult(result, options.units);
-  io.out(options.json ? `${JSON.stringify(presented, null, 2)}\n` : renderBatchSheet(presented));
+  if (pdf) {
+    const [{ writeBatchSheet }, { revisionOf }] = await Promise.all([
+      import('../output/pdf-file.ts'),
+      import('../../server/formulas/formula-files.ts'),
+    ]);
+    const revision = revisionOf(readFileSync(file, 'utf8'));
+    await writeBatchSheet(pdf, presented, undefined, { revision });
+  }
+  if (options.json) io.out(`${JSON.stringify(presented, null, 2)}\n`);
+  else if (pdf) io.out(sheetWritten(pdf, presented));
+  else io.out(renderBatchSheet(presented));
   if (presented.critical) process.exitCode = EXIT.critical;
+}
+
+/** What --pdf prints instead of the sheet: where it went, and a refusal that must not be missed. */
+function sheetWritten(pdf: PdfTarget, result: PresentedResult): string {
+  const refused = result.critical
+    ? 'REFUSED: critical limit exceeded. Do not make this batch (the sheet says why).\n'
+    : '';
+  return `${refused}Wrote the batch sheet to ${pdf.file}\n`;
 }
 
 /** Records the batch here or on a server; a refused batch exits 4 and nothing is recorded. */
@@ -176,6 +213,7 @@ async function recordBatch(
   file: string,
   raw: RawBatchOptions,
   options: CalcOptions,
+  pdf: PdfTarget | undefined,
   io: Io,
 ): Promise<void> {
   const serverUrl = options.server ?? process.env.LARDER_SERVER;
@@ -186,10 +224,10 @@ async function recordBatch(
     ...(options.status ? { status: options.status } : {}),
     ...(options.notes ? { notes: options.notes } : {}),
   };
-  let batch: RecordedBatch;
+  let batch: Batch;
   if (serverUrl) {
     const { callServer } = await import('../remote/server-client.ts');
-    ({ batch } = await callServer<{ batch: RecordedBatch }>(
+    ({ batch } = await callServer<{ batch: Batch }>(
       { url: serverUrl },
       'POST',
       '/api/batches',
@@ -199,17 +237,19 @@ async function recordBatch(
     const { recordLocally } = await import('../local/batches-local.ts');
     batch = await recordLocally({ ...request, formulaFile: file, formulaId }, today());
   }
+  if (pdf) {
+    try {
+      await (await import('../output/pdf-file.ts')).writeBatchSheet(pdf, batch.result, batch);
+    } catch (error) {
+      if (!(error instanceof CliError)) throw error;
+      throw new CliError(
+        `lot ${batch.lotCode} is recorded, but its sheet was not written: ${error.message}; write it with larder batches show ${batch.lotCode} --pdf FILE`,
+        error.exitCode,
+      );
+    }
+  }
   if (options.json) return io.out(`${JSON.stringify(batch, null, 2)}\n`);
-  io.out(renderBatchSheet(batch.result));
-  io.out(
-    `\nRecorded: lot ${batch.lotCode} · ${batch.status} · by ${batch.operator.displayName}${serverUrl ? ` · on ${serverUrl}` : ''}\n`,
-  );
-}
-
-/** The parts of a recorded batch this command prints. */
-interface RecordedBatch {
-  lotCode: string;
-  status: string;
-  operator: { displayName: string };
-  result: PresentedResult;
+  const recorded = `Recorded: lot ${batch.lotCode} · ${batch.status} · by ${batch.operator.displayName}${serverUrl ? ` · on ${serverUrl}` : ''}\n`;
+  if (pdf) io.out(`${recorded}${sheetWritten(pdf, batch.result)}`);
+  else io.out(`${renderBatchSheet(batch.result)}\n${recorded}`);
 }

@@ -1,8 +1,9 @@
 import { execFileSync } from 'node:child_process';
-import { statSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { Command } from 'commander';
 import {
+  checkLibrary,
   formatProblem,
   readFormula,
   type FormulaProblem,
@@ -37,7 +38,9 @@ const PROGRESS_FROM = 50;
 /** `larder check [PATHS…]`: validate formula files; with --staged, the files staged in git. */
 export function checkCommand(io: Io): Command {
   return new Command('check')
-    .description('check formula files: YAML, schema, percentages and nitrite limits')
+    .description(
+      'check formula files: YAML, schema, percentages and nitrite limits; a folder also checks its assemblies against the formulas they name',
+    )
     .argument('[paths...]', 'files or folders to check (default: $LARDER_FORMULAS or ./formulas)')
     .option('--staged', 'check the formula files staged in git, as staged (for a pre-commit hook)')
     .option('--json', 'print the report as JSON')
@@ -54,9 +57,11 @@ ${EXIT_CODES_HELP}`,
 }
 
 function runCheck(paths: string[], options: CheckOptions, io: Io): void {
-  const readings = options.staged
-    ? readStaged()
-    : readPaths(paths.length ? paths : [formulasFolder()], io);
+  const targets = paths.length ? paths : [formulasFolder()];
+  let readings = options.staged ? readStaged() : readPaths(targets, io);
+  // A folder is a library: each assembly in it must name formulas that are there and fit.
+  // Single files and --staged are checked on their own.
+  if (!options.staged && targets.some(isFolder)) readings = withLibraryChecks(readings);
   const reports = readings.map(({ file, reading }): FileReport => ({
     file,
     id: reading.formula?.id,
@@ -106,6 +111,22 @@ function readPaths(paths: string[], io: Io): { file: string; reading: FormulaRea
     if (showProgress && i === unique.length - 1) io.err('\n');
     return { file, reading };
   });
+}
+
+function isFolder(target: string): boolean {
+  try {
+    return statSync(target).isDirectory();
+  } catch {
+    return false;
+  }
+}
+
+/** The readings with each assembly checked against the other formulas read with it. */
+function withLibraryChecks(
+  readings: { file: string; reading: FormulaReading }[],
+): { file: string; reading: FormulaReading }[] {
+  const checked = checkLibrary(readings, (file) => readFileSync(file, 'utf8'));
+  return readings.map(({ file }, i) => ({ file, reading: checked[i] }));
 }
 
 function git(args: string[]): string {

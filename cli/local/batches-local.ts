@@ -23,7 +23,7 @@ export interface LocalRecord {
 }
 
 /** The server's errors as the command's: a refused batch exits 4, bad input 2. */
-function asCliError(error: unknown): unknown {
+export function asCliError(error: unknown): unknown {
   if (!(error instanceof AppError)) return error;
   const details = error.details.map((d) =>
     typeof d === 'object' && d && 'sentence' in d ? String(d.sentence) : JSON.stringify(d),

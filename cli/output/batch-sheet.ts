@@ -5,14 +5,16 @@ function heading(text: string): string[] {
   return ['', text.toUpperCase()];
 }
 
-function figureRows(figures: PresentedResult['inputs']): string[] {
+/** Labelled figures as aligned rows: label, value, (note). */
+export function figureRows(figures: PresentedResult['inputs']): string[] {
   return textTable(
     figures.map((f) => [f.label, f.value, f.note ? `(${f.note})` : '']),
     ['left', 'right', 'left'],
   );
 }
 
-function groupLines(group: PresentedGroup): string[] {
+/** One group of lines to weigh, with its heading, column titles and total. */
+export function groupLines(group: PresentedGroup): string[] {
   const hasPercent = group.lines.some((line) => line.percent);
   const rows = group.lines.map((line) => [
     line.name,

@@ -16,6 +16,9 @@ export const AUDIT_ACTIONS = [
   'person-add',
   'person-change',
   'password-reset',
+  'invitation-send',
+  'reminder-choices',
+  'reminder-send',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

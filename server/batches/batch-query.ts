@@ -1,4 +1,4 @@
-import { isIsoDate, type FormulaKind } from '../../shared/index.ts';
+import { isIsoDate, type BatchKind } from '../../shared/index.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
 import { BATCH_STATUSES, type BatchStatus } from './batch.ts';
 
@@ -27,7 +27,7 @@ export const SORTS: Readonly<
 /** What a list or export is narrowed to; every field is optional and they combine with AND. */
 export interface BatchFilter {
   readonly formula?: string;
-  readonly kind?: FormulaKind;
+  readonly kind?: BatchKind;
   readonly statuses?: readonly BatchStatus[];
   readonly operatorId?: number;
   /** Recorded on or after this day (UTC), YYYY-MM-DD. */
@@ -63,7 +63,7 @@ export const MAX_LIMIT = 200;
 const FILTER_KEYS = ['formula', 'kind', 'status', 'operator', 'from', 'to', 'lot', 'signedOff'];
 const SORT_KEYS = ['sort', 'order'];
 const PAGE_KEYS = ['limit', 'cursor'];
-const KINDS: readonly FormulaKind[] = ['cure', 'dough', 'blend', 'mix'];
+const KINDS: readonly BatchKind[] = ['cure', 'dough', 'blend', 'mix'];
 
 interface CursorJson {
   s: SortKey;
@@ -146,7 +146,7 @@ function parseFilter(query: Record<string, unknown>, problems: Problem[]): Batch
   }
   const kind = single(query, 'kind', problems);
   if (kind !== undefined) {
-    if ((KINDS as readonly string[]).includes(kind)) filter.kind = kind as FormulaKind;
+    if ((KINDS as readonly string[]).includes(kind)) filter.kind = kind as BatchKind;
     else problems.push({ field: 'kind', message: `must be one of ${KINDS.join(', ')}` });
   }
   const status = single(query, 'status', problems);

@@ -89,6 +89,27 @@ export class BatchRepository {
   }
 
   /**
+   * Stores several calculated batches in one write transaction, all or nothing (a plan's
+   * batches): each under the next free lot code of its day and formula, with its 'recorded'
+   * event and audit entry. Retried whole when another process took a lot code first.
+   */
+  async recordAll(batches: readonly NewBatch[], options: ChangeOptions): Promise<Batch[]> {
+    for (let attempt = 1; ; attempt++) {
+      try {
+        return await this.write(async (t) => {
+          const recorded: Batch[] = [];
+          for (const batch of batches) {
+            recorded.push(await this.mustGet(await this.writes.insert(t, batch, options), t));
+          }
+          return recorded;
+        });
+      } catch (error) {
+        if (attempt >= LOT_ATTEMPTS || !isLotConflict(error)) throw error;
+      }
+    }
+  }
+
+  /**
    * Moves a batch to another status along the allowed moves, with an event and an audit entry.
    * @throws AppError 404 no such lot, 409 'bad-transition', 400 discarding without a reason
    */

@@ -1,5 +1,5 @@
 import type {
-  FormulaKind,
+  BatchKind,
   PresentedResult,
   RawBatchOptions,
   UnitSystem,
@@ -13,7 +13,7 @@ export interface BatchRow {
   formula_id: string;
   formula_revision: string;
   formula_title: string;
-  kind: FormulaKind;
+  kind: BatchKind;
   status: BatchStatus;
   operator_id: number;
   operator_name: string | null;

@@ -1,6 +1,6 @@
 import type { BatchStatus } from '../../shared/api/batch-record.ts';
 import type {
-  FormulaKind,
+  BatchKind,
   PresentedResult,
   RawBatchOptions,
   UnitSystem,
@@ -38,13 +38,13 @@ export const TRANSITIONS: Readonly<Record<BatchStatus, readonly BatchStatus[]>> 
 };
 
 /** The only kind each holding status applies to: cures cure, doughs proof. */
-const HOLD_KIND: Partial<Record<BatchStatus, FormulaKind>> = { curing: 'cure', proofing: 'dough' };
+const HOLD_KIND: Partial<Record<BatchStatus, BatchKind>> = { curing: 'cure', proofing: 'dough' };
 
 /** Why a move is not allowed, in words; undefined when it is allowed. */
 export function refusedMove(
   from: BatchStatus,
   to: BatchStatus,
-  kind: FormulaKind,
+  kind: BatchKind,
 ): string | undefined {
   if (TRANSITIONS[from].length === 0) return `a ${from} batch is final; its status cannot change`;
   if (!TRANSITIONS[from].includes(to))
@@ -61,7 +61,7 @@ export const UNSIGNABLE_STATUSES: readonly BatchStatus[] = ['planned', 'discarde
 /** What is stored for a new batch; the lot code and times are added when it is written. */
 export interface NewBatch {
   readonly formula: { readonly id: string; readonly revision: string; readonly title: string };
-  readonly kind: FormulaKind;
+  readonly kind: BatchKind;
   readonly status: (typeof RECORD_STATUSES)[number];
   readonly operatorId: number;
   readonly startedOn: string;

@@ -90,6 +90,19 @@ export function batchesRouter({ batches, formulas, db, audit }: AppContext): Rou
     res.json({ batch });
   });
 
+  // The batch sheet as a PDF to print or file; pdfkit loads on the first request, not at start.
+  router.get('/:lot/sheet.pdf', async (req, res) => {
+    const lot = lotParam(req);
+    const batch = await batches.get(lot);
+    if (!batch) throw notFound(`no batch with lot code ${lot}`);
+    const { renderBatchSheetPdf } = await import('../pdf/batch-sheet-pdf.ts');
+    const pdf = await renderBatchSheetPdf(batch.result, batch);
+    res.setHeader('Content-Type', 'application/pdf');
+    res.setHeader('Content-Disposition', `attachment; filename="${lot}.pdf"`);
+    res.setHeader('Cache-Control', 'no-store');
+    res.send(pdf);
+  });
+
   router.post(
     '/:lot/status',
     requireRole('admin', 'cook'),

@@ -32,6 +32,8 @@ export function prepareBatch(
   const inputs: RawBatchOptions = { start: today, ...request.batch };
   const units = request.units ?? 'metric';
   const result = calculateBatch(formula, inputs, units);
+  // calculateBatch has refused an assembly already (400): it is planned, never one batch.
+  if (formula.kind === 'assembly') throw new Error('an assembly is not a batch');
   const failed = result.checks.filter((check) => check.critical && check.status === 'fail');
   if (result.critical) {
     throw new AppError(

@@ -6,12 +6,15 @@ import * as initial from './migrations/001-initial.ts';
 import { WriteQueue, retryWhileBusy } from './write-queue.ts';
 import * as batchSortIndexes from './migrations/002-batch-sort-indexes.ts';
 import * as sessionCutoff from './migrations/003-session-cutoff.ts';
+import * as outbox from './migrations/004-outbox.ts';
+import * as invitations from './migrations/005-invitations.ts';
+import * as reminders from './migrations/006-reminders.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
 
 /** Every schema change, in order. Bundled, so listed here rather than found on disk. */
-const MIGRATIONS = [initial, batchSortIndexes, sessionCutoff];
+const MIGRATIONS = [initial, batchSortIndexes, sessionCutoff, outbox, invitations, reminders];
 
 /** An open database: the Sequelize instance the repositories share. */
 export interface Database {

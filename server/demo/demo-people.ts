@@ -2,11 +2,13 @@ import type { NewPerson } from '../people/people-repository.ts';
 
 /**
  * The sign-ins of the invented Quillmoor Smokehouse, printed when the demo starts. These names
- * and passwords exist only in demo mode; production creates no demo people.
+ * and passwords exist only in demo mode; production creates no demo people. Their addresses are
+ * under .invalid, a name reserved never to exist (RFC 2606): mail to them reaches nobody.
  */
 export const DEMO_PEOPLE: readonly NewPerson[] = [
   {
     username: 'rosa',
+    email: 'rosa@quillmoor.invalid',
     displayName: 'Rosa Emberly (head cook)',
     role: 'admin',
     password: 'quillmoor-admin',
@@ -14,6 +16,7 @@ export const DEMO_PEOPLE: readonly NewPerson[] = [
   },
   {
     username: 'tobin',
+    email: 'tobin@quillmoor.invalid',
     displayName: 'Tobin Ashgrove (cook)',
     role: 'cook',
     password: 'quillmoor-cook',
@@ -21,6 +24,7 @@ export const DEMO_PEOPLE: readonly NewPerson[] = [
   },
   {
     username: 'imke',
+    email: 'imke@quillmoor.invalid',
     displayName: 'Imke Saltaire (food safety)',
     role: 'reviewer',
     password: 'quillmoor-review',

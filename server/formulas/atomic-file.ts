@@ -3,14 +3,15 @@ import { access, link, open, rename, stat, unlink } from 'node:fs/promises';
 import path from 'node:path';
 
 /**
- * Writes text to a new temporary file beside `target` and flushes it to disk, so that a rename
- * can then swap it in whole. The temporary name starts with a dot and ends in .tmp, so nothing
- * that lists *.yaml files ever sees it. The file takes the mode of `modeFrom` when that exists.
+ * Writes text or bytes to a new temporary file beside `target` and flushes it to disk, so that a
+ * rename can then swap it in whole. The temporary name starts with a dot and ends in .tmp, so
+ * nothing that lists *.yaml files ever sees it. The file takes the mode of `modeFrom` when that
+ * exists.
  * @returns the temporary file's path
  */
 export async function writeTemporary(
   target: string,
-  text: string,
+  text: string | Uint8Array,
   modeFrom?: string,
 ): Promise<string> {
   const temporary = path.join(
@@ -67,7 +68,7 @@ export async function placeNew(temporary: string, target: string): Promise<boole
 }
 
 /** Writes a whole file atomically: a temporary file, then a rename. */
-export async function writeFileAtomic(target: string, text: string): Promise<void> {
+export async function writeFileAtomic(target: string, text: string | Uint8Array): Promise<void> {
   const temporary = await writeTemporary(target, text, target);
   try {
     await replaceWith(temporary, target);

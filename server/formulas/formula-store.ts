@@ -1,4 +1,4 @@
-import type { Formula } from '../../shared/index.ts';
+import { checkLibrary, type Formula } from '../../shared/index.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import { filesById, readFormulaFolder, type FormulaFile } from './formula-files.ts';
 
@@ -16,10 +16,14 @@ export interface CurrentFormula {
 export class FormulaStore {
   constructor(readonly folder: string) {}
 
-  /** Every formula file, valid or not. */
+  /**
+   * Every formula file, valid or not. Each assembly is also checked against the other formulas
+   * (checkLibrary): one that names a missing or unfitting formula has errors like any other.
+   */
   async files(): Promise<FormulaFile[]> {
+    let files: FormulaFile[];
     try {
-      return await readFormulaFolder(this.folder);
+      files = await readFormulaFolder(this.folder);
     } catch (error) {
       // A missing or unreadable folder is a setup problem the person asking can act on.
       const code = (error as NodeJS.ErrnoException).code;
@@ -29,6 +33,7 @@ export class FormulaStore {
         `the formulas folder cannot be read (${code ?? String(error)})`,
       );
     }
+    return withLibraryChecks(files);
   }
 
   /** The file holding a formula id, or undefined. */
@@ -65,4 +70,16 @@ export class FormulaStore {
       );
     return { formula, revision: file.revision, file };
   }
+}
+
+/** The files with each assembly's cross-file problems added to its reading. */
+function withLibraryChecks(files: FormulaFile[]): FormulaFile[] {
+  const byName = new Map(files.map((file) => [file.name, file]));
+  const checked = checkLibrary(
+    files.map((file) => ({ file: file.name, reading: file.reading })),
+    (name) => byName.get(name)?.text ?? '',
+  );
+  return files.map((file, i) =>
+    checked[i] === file.reading ? file : { ...file, reading: checked[i] },
+  );
 }

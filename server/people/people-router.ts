@@ -1,10 +1,11 @@
-import { Router, type Request } from 'express';
+import { Router, type Request, type RequestHandler } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
 import { MIN_PASSWORD_LENGTH, randomPassword } from '../auth/passwords.ts';
 import { personOf } from '../auth/request-person.ts';
 import { AppError, badRequest, conflict, notFound } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
+import { sendInvitation, type InvitationSent } from '../invitations/send-invitation.ts';
 import { ROLES, type Role } from './person.ts';
 
 const USERNAME = { type: 'string', pattern: '^[a-z][a-z0-9._-]{1,31}$' } as const;
@@ -51,6 +52,13 @@ const OWN_PASSWORD_BODY = {
   properties: { current: { type: 'string', minLength: 1, maxLength: 256 }, password: PASSWORD },
 } as const;
 
+// A resend carries nothing: no body, or an empty object.
+const EMPTY_BODY = { type: 'object', additionalProperties: false } as const;
+const noBody: RequestHandler = (req, _res, next) => {
+  req.body ??= {};
+  next();
+};
+
 function idParam(req: Request): number {
   const text = String(req.params.id);
   const id = Number(text);
@@ -65,7 +73,8 @@ function isUsernameTaken(error: unknown): boolean {
 }
 
 /** /api/people: admins manage people; anyone changes their own password. */
-export function peopleRouter({ db, people, audit }: AppContext): Router {
+export function peopleRouter(context: AppContext): Router {
+  const { db, people, audit, mail } = context;
   const router = Router();
 
   router.put('/me/password', validateBody(OWN_PASSWORD_BODY), async (req, res) => {
@@ -108,7 +117,7 @@ export function peopleRouter({ db, people, audit }: AppContext): Router {
     };
     const password = body.password ?? randomPassword();
     const taken = conflict('username-taken', `the username "${body.username}" is taken`);
-    const person = await db.write(async (transaction) => {
+    const { person, invitation } = await db.write(async (transaction) => {
       // Checked inside the write, so two adds of one name at once cannot both pass.
       if (await people.findByUsername(body.username, transaction)) throw taken;
       const added = await people.add({ ...body, password }, transaction).catch((error: unknown) => {
@@ -124,10 +133,26 @@ export function peopleRouter({ db, people, audit }: AppContext): Router {
         },
         transaction,
       );
-      return added;
+      // With an address, an invitation to set their own password goes out with the add.
+      const sent: InvitationSent | null = added.email
+        ? await sendInvitation(context, transaction, added, { actor: personOf(req), ip: req.ip })
+        : null;
+      return { person: added, invitation: sent };
     });
+    if (invitation) mail.delivery.kick();
     // A generated password is shown this once, for the admin to pass on.
-    res.status(201).json(body.password ? { person } : { person, password });
+    res.status(201).json({ person, ...(body.password ? {} : { password }), invitation });
+  });
+
+  router.post('/:id/invitation', noBody, validateBody(EMPTY_BODY), async (req, res) => {
+    const id = idParam(req);
+    const invitation = await db.write(async (transaction) => {
+      const person = await people.findById(id, transaction);
+      if (!person) throw notFound(`no person with id ${id}`);
+      return sendInvitation(context, transaction, person, { actor: personOf(req), ip: req.ip });
+    });
+    mail.delivery.kick();
+    res.status(201).json({ invitation });
   });
 
   router.patch('/:id', validateBody(CHANGE_BODY), async (req, res) => {

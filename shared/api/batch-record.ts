@@ -4,7 +4,7 @@
  * can import it without the rest of the core.
  */
 import type { RawBatchOptions } from '../calculation/batch-input.ts';
-import type { FormulaKind } from '../formula/formula-types.ts';
+import type { BatchKind } from '../formula/formula-types.ts';
 import type { PresentedResult } from '../presentation/presented-result.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 
@@ -35,7 +35,7 @@ export interface BatchSummary {
   readonly lotCode: string;
   /** The formula as it was when the batch was calculated; revision is the file's sha-256. */
   readonly formula: { readonly id: string; readonly revision: string; readonly title: string };
-  readonly kind: FormulaKind;
+  readonly kind: BatchKind;
   readonly status: BatchStatus;
   readonly operator: PersonRef;
   /** ISO date the batch starts (the calculation's start). */

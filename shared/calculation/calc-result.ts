@@ -1,5 +1,5 @@
 import type { Decimal } from '../decimal.ts';
-import type { Allergen, FormulaKind } from '../formula/formula-types.ts';
+import type { Allergen, BatchKind } from '../formula/formula-types.ts';
 
 /** What sort of number a figure is; the presenter picks unit and precision from it. */
 export type FigureKind =
@@ -103,7 +103,7 @@ export interface Portions {
 
 /** The full, exact outcome of one batch calculation. Rounding happens only when presenting it. */
 export interface CalcResult {
-  readonly formula: { readonly id: string; readonly title: string; readonly kind: FormulaKind };
+  readonly formula: { readonly id: string; readonly title: string; readonly kind: BatchKind };
   /** The batch inputs as the calculation understood them. */
   readonly inputs: readonly Figure[];
   readonly groups: readonly LineGroup[];

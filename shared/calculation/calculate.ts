@@ -1,6 +1,7 @@
 import type { Formula } from '../formula/formula-types.ts';
 import { CAUTIONS } from '../reference/cautions.ts';
 import { calculateBlend } from './blend/calculate-blend.ts';
+import { assemblyIsPlanned } from './batch-error.ts';
 import type { BatchInput } from './batch-input.ts';
 import type { CalcResult, Caution } from './calc-result.ts';
 import { calculateCure } from './cure/calculate-cure.ts';
@@ -17,13 +18,16 @@ function byKind(formula: Formula, batch: BatchInput): CalcResult {
       return calculateBlend(formula, batch);
     case 'mix':
       return calculateMix(formula, batch);
+    case 'assembly':
+      throw assemblyIsPlanned(formula.id);
   }
 }
 
 /**
  * Calculates one batch of any formula. The formula's own cautions are printed with the standard
  * ones, before the reminder that local codes come first.
- * @throws BatchError when the batch input cannot make a batch
+ * @throws BatchError when the batch input cannot make a batch, or the formula is an assembly
+ *   (planned with planAssembly, not calculated)
  */
 export function calculate(formula: Formula, batch: BatchInput): CalcResult {
   const result = byKind(formula, batch);

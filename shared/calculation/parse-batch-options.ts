@@ -1,12 +1,12 @@
 import { Decimal } from '../decimal.ts';
-import type { Formula, FormulaKind, YeastKind } from '../formula/formula-types.ts';
+import type { BatchKind, Formula, YeastKind } from '../formula/formula-types.ts';
 import { parseLength } from '../units/length.ts';
 import { parseMass } from '../units/mass.ts';
 import { parseCount, parsePercent } from '../units/percent.ts';
 import { QuantityError } from '../units/quantity-error.ts';
 import { parseTemperature, parseTemperatureDifference } from '../units/temperature.ts';
 import { parseVolume, waterGramsFromLitres } from '../units/volume.ts';
-import { BatchError } from './batch-error.ts';
+import { BatchError, assemblyIsPlanned } from './batch-error.ts';
 import type { BatchInput, RawBatchOptions } from './batch-input.ts';
 import { isIsoDate } from './dates.ts';
 
@@ -14,7 +14,7 @@ export type { RawBatchOptions } from './batch-input.ts';
 
 type Reader = (text: string, option: string) => unknown;
 
-const ALL: readonly FormulaKind[] = ['cure', 'dough', 'blend', 'mix'];
+const ALL: readonly BatchKind[] = ['cure', 'dough', 'blend', 'mix'];
 const KG = new Decimal(1000);
 
 /** A reader for a mass that must be more than zero and at most `maxKg`. */
@@ -67,7 +67,7 @@ function onHandReader(text: string, option: string): BatchInput['onHand'] {
 const YEASTS: readonly YeastKind[] = ['fresh', 'active-dry', 'instant'];
 
 /** Every batch option: which kinds take it and how to read it. */
-const OPTIONS: Record<keyof BatchInput, { kinds: readonly FormulaKind[]; read: Reader }> = {
+const OPTIONS: Record<keyof BatchInput, { kinds: readonly BatchKind[]; read: Reader }> = {
   start: {
     kinds: ALL,
     read: (text, option) => {
@@ -131,9 +131,10 @@ export function optionName(key: string): string {
 /**
  * Reads batch options for a formula into exact values, refusing options that do not apply to
  * its kind (or cure method) and values that cannot be right.
- * @throws BatchError naming the option at fault
+ * @throws BatchError naming the option at fault, or saying that an assembly is planned instead
  */
 export function parseBatchOptions(raw: RawBatchOptions, formula: Formula): BatchInput {
+  if (formula.kind === 'assembly') throw assemblyIsPlanned(formula.id);
   const input: Record<string, unknown> = {};
   for (const [key, text] of Object.entries(raw)) {
     if (text === undefined) continue;

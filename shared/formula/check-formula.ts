@@ -2,10 +2,14 @@ import { checkBlendFormula } from '../calculation/blend/check-blend-formula.ts';
 import { checkCureFormula } from '../calculation/cure/check-cure-formula.ts';
 import { checkDoughFormula } from '../calculation/dough/check-dough-formula.ts';
 import { checkMixFormula } from '../calculation/mix/check-mix-formula.ts';
+import { checkAssemblyFormula } from '../calculation/plan/check-assembly-formula.ts';
 import type { ContentProblem } from './formula-problem.ts';
 import type { Formula } from './formula-types.ts';
 
-/** The checks a schema cannot express, for a formula that already matches the schema. */
+/**
+ * The checks a schema cannot express, for a formula that already matches the schema. An
+ * assembly's references to other formulas are checked across files by checkLibrary().
+ */
 export function checkFormulaContent(formula: Formula): ContentProblem[] {
   switch (formula.kind) {
     case 'cure':
@@ -16,5 +20,7 @@ export function checkFormulaContent(formula: Formula): ContentProblem[] {
       return checkBlendFormula(formula);
     case 'mix':
       return checkMixFormula(formula);
+    case 'assembly':
+      return checkAssemblyFormula(formula);
   }
 }

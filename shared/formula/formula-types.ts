@@ -3,8 +3,14 @@
  * authority; tests/formulas check that every demo file validates and type-checks as these.
  */
 
-/** The formula kinds. */
-export type FormulaKind = 'cure' | 'dough' | 'blend' | 'mix';
+/** The kinds of formula a batch is made from: each has its own calculator. */
+export type BatchKind = 'cure' | 'dough' | 'blend' | 'mix';
+
+/**
+ * The formula kinds: the batch kinds, and `assembly` (a menu item built from other formulas),
+ * which is planned (`larder plan`), never calculated as a batch of its own.
+ */
+export type FormulaKind = BatchKind | 'assembly';
 
 /** The nine major food allergens of US law (FALCPA 2004 plus sesame, FASTER Act 2021). */
 export type Allergen =
@@ -69,6 +75,8 @@ export interface CureFormula extends FormulaBase {
   brine?: { water_pct?: number; pump_pct?: number; cover_pct?: number; extra_pct?: number };
   hold?: HoldRule;
   yields?: Yields;
+  /** Days from the end of the hold to service (smoking, resting, slicing); default 1. */
+  lead_days?: number;
 }
 
 /** Foods with a published water content (shared/reference/water-content.ts). */
@@ -124,6 +132,8 @@ export interface DoughFormula extends FormulaBase {
   piece?: string;
   loss_pct?: number;
   ddt?: { target: string; friction?: string };
+  /** Days from the start of the batch to service; default 1 with a preferment, else 0. */
+  lead_days?: number;
 }
 
 export interface BlendComponent {
@@ -143,6 +153,8 @@ export interface BlendFormula extends FormulaBase {
   /** Portion weight, e.g. "4 oz". */
   portion?: string;
   yields?: Yields;
+  /** Days from making the blend to service; default 0. */
+  lead_days?: number;
 }
 
 export interface MixIngredient {
@@ -157,7 +169,43 @@ export interface MixIngredient {
 export interface MixFormula extends FormulaBase {
   kind: 'mix';
   ingredients: MixIngredient[];
+  /** Days from making the mix to service; default 0. */
+  lead_days?: number;
 }
 
+/**
+ * One part of an assembly: another formula and how much of it goes into one unit. Exactly one
+ * quantity key is given, and it must fit the kind of the formula named (see check-assembly-*.ts).
+ */
+export interface AssemblyComponent {
+  /** Id of the formula this part is made from. */
+  formula: string;
+  /** Blend: portions of the blend's own portion weight. */
+  portions?: number;
+  /** Dough: pieces of the dough's own piece weight. */
+  pieces?: number;
+  /** Cure: finished slices, each `slice` heavy. */
+  slices?: number;
+  /** Cure, with `slices`: the weight of one finished slice, e.g. "25 g". */
+  slice?: string;
+  /** Any batch kind: finished weight per unit, e.g. "20 g". */
+  amount?: string;
+  /** Another assembly: units of it per unit of this one. */
+  units?: number;
+  /** Cure: thickness of the thickest piece, for a per-cm or per-inch hold rule. */
+  thickness?: string;
+  /** Cure: weight of the heaviest piece, for a per-kg or per-lb hold rule. */
+  largest_piece?: string;
+}
+
+/** A menu item built from other formulas; planned for a count and a service date. */
+export interface AssemblyFormula extends FormulaBase {
+  kind: 'assembly';
+  components: AssemblyComponent[];
+}
+
+/** Any formula a batch is made from. */
+export type BatchFormula = CureFormula | DoughFormula | BlendFormula | MixFormula;
+
 /** Any formula. */
-export type Formula = CureFormula | DoughFormula | BlendFormula | MixFormula;
+export type Formula = BatchFormula | AssemblyFormula;

@@ -125,6 +125,25 @@ function unclosedQuoteStart(text: string, error: YAMLError): number | undefined 
   return start;
 }
 
+/**
+ * Places problems found in a formula's content (such as the cross-file checks of an assembly)
+ * in its file: each gets the line and column its path points at. Pure: the caller has the text.
+ * @param text the file's content, as it was read
+ * @param file the name to print in problems
+ */
+export function placeProblems(
+  text: string,
+  file: string,
+  problems: readonly ContentProblem[],
+): FormulaProblem[] {
+  if (problems.length === 0) return [];
+  const lineCounter = new LineCounter();
+  const doc = parseDocument(text, { lineCounter, prettyErrors: false });
+  return sortByPosition(
+    problems.map((problem) => ({ ...problem, file, ...locate(doc, lineCounter, problem.path) })),
+  );
+}
+
 function sortByPosition(problems: FormulaProblem[]): FormulaProblem[] {
   return problems.sort((a, b) => a.line - b.line || a.column - b.column);
 }

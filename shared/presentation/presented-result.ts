@@ -1,5 +1,5 @@
 import type { CheckStatus, LineRole } from '../calculation/calc-result.ts';
-import type { Allergen, FormulaKind } from '../formula/formula-types.ts';
+import type { Allergen, BatchKind } from '../formula/formula-types.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 
 /**
@@ -7,7 +7,7 @@ import type { UnitSystem } from '../units/scale-amount.ts';
  * matters, the exact decimal as a string (grams, ppm, °C, percent).
  */
 export interface PresentedResult {
-  readonly formula: { readonly id: string; readonly title: string; readonly kind: FormulaKind };
+  readonly formula: { readonly id: string; readonly title: string; readonly kind: BatchKind };
   readonly units: UnitSystem;
   readonly inputs: readonly PresentedFigure[];
   readonly groups: readonly PresentedGroup[];

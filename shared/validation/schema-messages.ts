@@ -5,6 +5,7 @@ import { closestWord } from './closest-word.ts';
 /** Messages for pattern keywords, by the key that carries the pattern. */
 const PATTERN_MESSAGES: Readonly<Record<string, string>> = {
   id: 'may hold only lower-case letters, digits and dashes, 2 to 63 characters, e.g. "hickory-belly"',
+  formula: 'must be a formula id: lower-case letters, digits and dashes, e.g. "chuck-grind"',
   key: 'may hold only lower-case letters, digits and dashes, starting with a letter, e.g. "lean"',
 };
 

@@ -54,7 +54,7 @@ describe('larder check on the demo formulas', () => {
         path.basename(file.file),
         'each demo file is named for its id',
       );
-      assert.ok(['cure', 'dough', 'blend', 'mix'].includes(file.kind ?? ''), file.file);
+      assert.ok(['cure', 'dough', 'blend', 'mix', 'assembly'].includes(file.kind ?? ''), file.file);
     }
   });
 });

@@ -24,6 +24,11 @@ export interface TestServer {
   /** The temporary folder: data/, formulas/. */
   readonly dir: string;
   readonly formulasDir: string;
+  /**
+   * Stops the server and closes its database, then opens a new context on the same file and
+   * serves it on the same port: what a restart of the server process does.
+   */
+  restart(): Promise<void>;
   /** A client that signs every request with HTTP Basic as a demo person (or anonymously). */
   as(user: DemoUser | 'anonymous'): ApiClient;
   /** A client signed in through the form, with its session cookie and CSRF token. */
@@ -97,6 +102,8 @@ function client(base: string, headers: () => Record<string, string>): ApiClient 
 export async function startTestServer(
   t: AfterHook,
   env: Record<string, string> = {},
+  /** The clock of invitations, reminders and the outbox, for tests that move time. */
+  { now }: { now?: () => Date } = {},
 ): Promise<TestServer> {
   const dir = mkdtempSync(path.join(tmpdir(), 'larder-api-'));
   t.after(() => rmSync(dir, { recursive: true, force: true }));
@@ -110,18 +117,37 @@ export async function startTestServer(
     LARDER_SIGN_IN_LIMIT: '1000',
     ...env,
   });
-  const context = await openContext(config);
-  t.after(() => context.db.close());
-  await seedDemo(context);
-  const server = createApp(context).listen(0, '127.0.0.1');
-  await new Promise<void>((resolve) => server.once('listening', () => resolve()));
-  t.after(() => new Promise<void>((resolve) => server.close(() => resolve())));
-  server.closeIdleConnections?.();
-  const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  // Opens the database and serves it; a restart does the same again on the same file and port.
+  const open = async (port: number) => {
+    const context = await openContext(config, now ? { now } : {});
+    const server = createApp(context).listen(port, '127.0.0.1');
+    await new Promise<void>((resolve) => server.once('listening', () => resolve()));
+    context.mail.links.listeningOn((server.address() as AddressInfo).port);
+    const close = async (): Promise<void> => {
+      await new Promise<void>((resolve) => {
+        server.close(() => resolve());
+        server.closeAllConnections?.();
+      });
+      await context.mail.close();
+      await context.db.close();
+    };
+    return { context, server, close };
+  };
+  let running = await open(0);
+  t.after(() => running.close());
+  await seedDemo(running.context);
+  const port = (running.server.address() as AddressInfo).port;
+  const url = `http://127.0.0.1:${port}`;
 
   return {
     url,
-    context,
+    get context() {
+      return running.context;
+    },
+    restart: async () => {
+      await running.close();
+      running = await open(port);
+    },
     dir,
     formulasDir,
     as: (user) =>

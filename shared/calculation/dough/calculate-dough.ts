@@ -26,6 +26,12 @@ export interface DoughOptions {
 
 const OF_TOTAL_FLOUR = "total flour (baker's %)";
 
+/**
+ * Title of the group that lists the whole formula once when a preferment splits it: what to
+ * buy, where the preferment and final-dough groups would count the preferment's share twice.
+ */
+export const OVERALL_FORMULA_TITLE = 'Overall formula (reference)';
+
 function group(
   title: string,
   percentOf: string,
@@ -159,7 +165,7 @@ export function calculateDough(
         withIce(final, plan, batch.tap, warnings),
         'Final dough',
       ),
-      group('Overall formula (reference)', OF_TOTAL_FLOUR, overall, 'Overall'),
+      group(OVERALL_FORMULA_TITLE, OF_TOTAL_FLOUR, overall, 'Overall'),
     );
     figures.push({
       label: 'Preferment flour',

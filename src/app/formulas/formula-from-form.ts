@@ -94,6 +94,10 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
       };
       break;
     }
+    case 'assembly':
+      // The parts are edited in the YAML view; the form keeps them as they are.
+      formula = common;
+      break;
     case 'mix':
       formula = {
         ...common,

@@ -59,6 +59,15 @@ ingredients:
   - { name: base ingredient, pct: 100, base: true }
   - { name: second ingredient, pct: 20 }
 `,
+  assembly: `# yaml-language-server: $schema=../shared/schema/formula.schema.json
+formula: 1
+id: ID
+title: TITLE
+kind: assembly
+# One unit as served: each part names another formula and how much of it goes in.
+components:
+  - { formula: chuck-grind, portions: 1 }
+`,
 };
 
 /** The starter YAML of a kind, with its id and title filled in. */

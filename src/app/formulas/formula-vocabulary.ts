@@ -26,6 +26,7 @@ export const KIND_LABELS: Record<FormulaKind, string> = {
   dough: 'Dough',
   blend: 'Blend',
   mix: 'Mix',
+  assembly: 'Assembly (menu item)',
 };
 
 /** The formula kinds as choices. */

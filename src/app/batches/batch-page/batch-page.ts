@@ -30,6 +30,7 @@ const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
   dough: 'Dough',
   blend: 'Blend',
   mix: 'Mix',
+  assembly: 'Assembly',
 };
 
 /**
@@ -96,6 +97,11 @@ export default class BatchPage {
     () => this.batch()?.events?.findLast((e) => e.type === 'sign-off')?.reason ?? null,
   );
   protected readonly shortRevision = computed(() => this.batch()?.formula.revision.slice(0, 12));
+  /** The batch sheet as a PDF, made by the server (GET /api/batches/:lot/sheet.pdf). */
+  protected readonly pdfLink = computed(() => {
+    const lot = this.batch()?.lotCode;
+    return lot ? `/api/batches/${encodeURIComponent(lot)}/sheet.pdf` : null;
+  });
 
   constructor() {
     effect(() => {

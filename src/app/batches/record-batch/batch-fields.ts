@@ -108,6 +108,9 @@ export function fieldsFor(formula: FormulaFacts): BatchField[] {
         f('base', 'Base ingredient weight', 'mass', 'Scale to the base'),
         f('total', 'Total weight', 'mass', 'Or scale to the total'),
       ];
+    case 'assembly':
+      // An assembly is planned, not recorded as a batch of its own.
+      return [];
   }
 }
 

@@ -17,6 +17,7 @@ const PCT_HEADINGS: Record<FormulaKind, string> = {
   dough: "Baker's %",
   blend: '% of meat',
   mix: '% of the base',
+  assembly: '',
 };
 
 /**

@@ -70,6 +70,9 @@ export function batchOptions(
       return given({ total: sample.blendTotal });
     case 'mix':
       return given(sample.mixBy === 'base' ? { base: sample.base } : { total: sample.total });
+    case 'assembly':
+      // An assembly is planned for a count and a day, never calculated as one batch.
+      return {};
   }
 }
 

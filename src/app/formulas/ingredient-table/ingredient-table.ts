@@ -47,6 +47,7 @@ const OWN_COLUMNS: Record<FormulaKind, readonly Column[]> = {
   ],
   blend: [],
   mix: [],
+  assembly: [],
 };
 const NAME_MIN = 140;
 const NARROW = 48;

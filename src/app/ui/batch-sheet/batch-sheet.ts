@@ -9,6 +9,7 @@ const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
   dough: 'Dough',
   blend: 'Blend',
   mix: 'Mix',
+  assembly: 'Assembly',
 };
 
 /**

@@ -1,0 +1,227 @@
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { Command, Option } from 'commander';
+import {
+  FORMULA_REFUSALS,
+  PlanError,
+  checkLibrary,
+  formatProblem,
+  formulaLibrary,
+  isIsoDate,
+  planAssembly,
+  presentPlan,
+  type PlanResult,
+  type PresentedPlan,
+  type UnitSystem,
+} from '../../shared/index.ts';
+import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
+import { formulaFilesIn, formulasFolder, loadFormula, readFormulaFile } from '../formula-files.ts';
+import { today, type Io } from '../io.ts';
+import type { PdfTarget } from '../output/pdf-file.ts';
+import { renderPlanSheet } from '../output/plan-sheet.ts';
+
+interface PlanOptions {
+  count: string;
+  for: string;
+  today?: string;
+  units: UnitSystem;
+  json?: boolean;
+  formulas?: string;
+  record?: boolean;
+  server?: string;
+  pdf?: string;
+  force?: boolean;
+}
+
+/** What a recorded batch is printed with. */
+interface RecordedBatch {
+  lotCode: string;
+  formula: { id: string; title: string };
+  status: string;
+  startedOn: string;
+  readyOn: string | null;
+}
+
+/** `larder plan ASSEMBLY`: every batch an assembly needs for a count and a service day. */
+export function planCommand(io: Io): Command {
+  return new Command('plan')
+    .description(
+      'plan a menu item (an assembly) for a count and a service day: every batch it needs, the day each starts, one pull list, the allergens',
+    )
+    .argument('<assembly>', 'assembly file path, or its id in the formulas folder')
+    .requiredOption('--count <units>', 'how many units to serve (plates, sandwiches)')
+    .requiredOption('--for <date>', 'the day of service, YYYY-MM-DD')
+    .option('--today <date>', 'the day the plan is made, YYYY-MM-DD (default: today)')
+    .addOption(
+      new Option('--units <system>', 'print in metric or US units')
+        .choices(['metric', 'us'])
+        .default(process.env.LARDER_UNITS === 'us' ? 'us' : 'metric'),
+    )
+    .option('--json', 'print the plan as JSON (exact values as strings)')
+    .option(
+      '--formulas <folder>',
+      'folder the formulas are read from (default: the assembly file’s folder, else $LARDER_FORMULAS or ./formulas)',
+    )
+    .option(
+      '--record',
+      'record every batch as planned, starting on its day (as $LARDER_USER, password in $LARDER_PASSWORD)',
+    )
+    .option(
+      '--server <url>',
+      'with --record: record on this Larderbook server instead of this machine (default: $LARDER_SERVER)',
+    )
+    .option(
+      '--pdf <file>',
+      'write the plan to a PDF file: an overview, then one production sheet per start day',
+    )
+    .option('--force', 'with --pdf: replace the file if it exists')
+    .addHelpText(
+      'after',
+      `
+Examples:
+  larder plan smokehouse-burger --count 120 --for 2026-12-18
+  larder plan smokehouse-burger --count 120 --for 2026-12-18 --pdf burger-plan.pdf
+  larder plan smokehouse-burger --count 120 --for 2026-12-18 --units us --json
+  LARDER_USER=tobin LARDER_PASSWORD=… larder plan corned-beef-sandwich --count 60 --for 2026-12-18 --record
+${EXIT_CODES_HELP}
+  (2 also when the plan cannot be made: a batch that would start before today, or is too big)`,
+    )
+    .action((reference: string, options: PlanOptions) => runPlan(reference, options, io));
+}
+
+function readCount(text: string): number {
+  if (!/^\d+$/.test(text.trim())) {
+    throw new CliError(
+      `--count takes a whole number of units, such as 120, not "${text}"`,
+      EXIT.usage,
+    );
+  }
+  return Number(text.trim());
+}
+
+function readDate(text: string, option: string): string {
+  if (!isIsoDate(text)) {
+    throw new CliError(`--${option} takes a date written YYYY-MM-DD, not "${text}"`, EXIT.usage);
+  }
+  return text;
+}
+
+/** A refused plan as the command's failure: formula problems exit 3, a critical limit 4, else 2. */
+function planFailure(error: PlanError): CliError {
+  const code =
+    error.reason === 'critical-limit'
+      ? EXIT.critical
+      : FORMULA_REFUSALS.includes(error.reason)
+        ? EXIT.formula
+        : EXIT.usage;
+  return new CliError(error.message, code);
+}
+
+/** The formulas of a folder, each assembly checked against the others, by id. */
+function libraryIn(folder: string, io: Io) {
+  const readings = formulaFilesIn(folder).map((file) => ({ file, reading: readFormulaFile(file) }));
+  const checked = checkLibrary(readings, (file) => readFileSync(file, 'utf8'));
+  for (const reading of checked) {
+    for (const problem of reading.problems.filter((p) => p.severity === 'error')) {
+      io.err(`${formatProblem(problem)}\n`);
+    }
+  }
+  return formulaLibrary(readings.map(({ file }, i) => ({ file, reading: checked[i] })));
+}
+
+function isPath(reference: string): boolean {
+  return reference.includes('/') || reference.includes(path.sep) || /\.ya?ml$/i.test(reference);
+}
+
+async function runPlan(reference: string, options: PlanOptions, io: Io): Promise<void> {
+  const count = readCount(options.count);
+  const serviceDate = readDate(options.for, 'for');
+  const planned = options.today === undefined ? today() : readDate(options.today, 'today');
+  if (options.server && !options.record) {
+    throw new CliError('--server goes with --record', EXIT.usage);
+  }
+  if (options.force && !options.pdf) throw new CliError('--force goes with --pdf', EXIT.usage);
+  const pdf: PdfTarget | undefined = options.pdf
+    ? { file: options.pdf, force: !!options.force }
+    : undefined;
+  // The file is checked before anything is recorded, so a bad path records nothing.
+  if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
+  const serverUrl = options.record ? (options.server ?? process.env.LARDER_SERVER) : undefined;
+  if (serverUrl && options.today) {
+    throw new CliError(
+      '--today cannot be used with --server: the server plans from its own today',
+      EXIT.usage,
+    );
+  }
+  const { formula, file, warnings } = loadFormula(reference, formulasFolder(options.formulas));
+  for (const warning of warnings) io.err(`${warning}\n`);
+  if (formula.kind !== 'assembly') {
+    throw new CliError(
+      `${formula.id} is a ${formula.kind}, not an assembly: work out one batch of it with \`larder calc ${formula.id}\``,
+      EXIT.usage,
+    );
+  }
+  if (serverUrl) {
+    const { callServer } = await import('../remote/server-client.ts');
+    const request = { assembly: formula.id, count, for: serviceDate, units: options.units };
+    const answer = await callServer<{ plan: PresentedPlan; batches: RecordedBatch[] }>(
+      { url: serverUrl },
+      'POST',
+      '/api/plans/record',
+      request,
+    );
+    if (pdf) await writePlanPdf(pdf, answer.plan);
+    return printRecorded(answer.plan, answer.batches, io, options.json === true, serverUrl, pdf);
+  }
+
+  // The formulas the assembly names: --formulas, else the folder of the assembly's own file.
+  const folder = options.formulas ?? (isPath(reference) ? path.dirname(file) : formulasFolder());
+  let plan: PlanResult;
+  try {
+    plan = planAssembly(formula, libraryIn(folder, io), { count, serviceDate, today: planned });
+  } catch (error) {
+    if (error instanceof PlanError) throw planFailure(error);
+    throw error;
+  }
+  const presented = presentPlan(plan, options.units);
+  if (!options.record) {
+    if (pdf) await writePlanPdf(pdf, presented);
+    if (options.json) io.out(`${JSON.stringify(presented, null, 2)}\n`);
+    else io.out(pdf ? `Wrote the plan to ${pdf.file}\n` : renderPlanSheet(presented));
+    return;
+  }
+  const { recordPlanLocally } = await import('../local/plans-local.ts');
+  const batches = await recordPlanLocally(plan, folder, options.units);
+  if (pdf) await writePlanPdf(pdf, presented);
+  printRecorded(presented, batches, io, options.json === true, undefined, pdf);
+}
+
+/** Renders the plan's sheets and writes them whole (the PDF stack loads only here). */
+async function writePlanPdf(target: PdfTarget, plan: PresentedPlan): Promise<void> {
+  const [{ writePdf }, { renderPlanSheetPdf }] = await Promise.all([
+    import('../output/pdf-file.ts'),
+    import('../../server/pdf/plan-sheet-pdf.ts'),
+  ]);
+  await writePdf(target, await renderPlanSheetPdf(plan));
+}
+
+function printRecorded(
+  plan: PresentedPlan,
+  batches: readonly RecordedBatch[],
+  io: Io,
+  json: boolean,
+  url?: string,
+  pdf?: PdfTarget,
+): void {
+  if (json) {
+    io.out(`${JSON.stringify({ plan, batches }, null, 2)}\n`);
+    return;
+  }
+  io.out(pdf ? `Wrote the plan to ${pdf.file}\n` : renderPlanSheet(plan));
+  io.out(`\nRecorded ${batches.length} planned batch(es)${url ? ` on ${url}` : ''}:\n`);
+  for (const batch of batches) {
+    io.out(
+      `  lot ${batch.lotCode} · ${batch.formula.id} · starts ${batch.startedOn}${batch.readyOn ? ` · ready ${batch.readyOn}` : ''}\n`,
+    );
+  }
+}

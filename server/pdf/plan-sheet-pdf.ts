@@ -1,0 +1,152 @@
+import type { PresentedPlan, PresentedPlanBatch } from '../../shared/index.ts';
+import { batchBody } from './batch-sheet-pdf.ts';
+import { finishSheet, openSheet } from './sheet-document.ts';
+import { BODY, INK, TICK, type SheetLayout } from './sheet-layout.ts';
+import { bulletList, heading, signOffLines, subheading } from './sheet-sections.ts';
+import { dayInWords } from './sheet-words.ts';
+
+const SMALL = BODY - 1.5;
+
+function kindWords(kind: string): string {
+  return kind.charAt(0).toUpperCase() + kind.slice(1);
+}
+
+/** "Smokehouse burger × 120" */
+function planTitle(plan: PresentedPlan): string {
+  return `${plan.assembly.title} × ${plan.count}`;
+}
+
+/** The small rust label over a page's title, and the title. */
+function pageHead(layout: SheetLayout, label: string, title: string, line: string): void {
+  layout.draw(
+    label,
+    { size: 7.5, weight: 'semibold', color: INK.rust },
+    layout.left,
+    layout.y,
+    layout.width,
+  );
+  layout.gap(13);
+  layout.y += layout.draw(
+    title,
+    { size: 18, weight: 'semibold' },
+    layout.left,
+    layout.y,
+    layout.width,
+  );
+  layout.y +=
+    layout.draw(line, { size: SMALL, color: INK.muted }, layout.left, layout.y + 2, layout.width) +
+    10;
+  layout.rule(INK.text, 0.8);
+  layout.gap(6);
+}
+
+const header = (text: string) => ({ text, style: { size: SMALL, color: INK.muted } });
+
+/** The first page: every day and batch, the pull list, allergens, warnings and cautions. */
+function overview(layout: SheetLayout, plan: PresentedPlan): void {
+  pageHead(
+    layout,
+    'LARDERBOOK · PRODUCTION PLAN',
+    planTitle(plan),
+    `${plan.assembly.id} · service ${dayInWords(plan.serviceDate)} · planned ${dayInWords(plan.today)} · ${plan.units === 'us' ? 'US units' : 'metric units'} · one production sheet per day follows`,
+  );
+  if (plan.allergens.length) {
+    layout.paragraph(`Contains: ${plan.allergens.map((a) => a.replace('-', ' ')).join(', ')}`, {
+      weight: 'semibold',
+      size: 11,
+    });
+  }
+  heading(layout, 'Schedule');
+  layout.table(
+    [{ width: 3 }, { width: 5 }, { width: 3 }, { width: 6 }],
+    { cells: ['Start', 'Batch', 'Ready', 'For'].map(header) },
+    plan.batches.map((batch) => ({
+      cells: [
+        { text: dayInWords(batch.start), style: { weight: 'semibold' } },
+        `${batch.result.formula.title} (${batch.formula.id})`,
+        dayInWords(batch.ready),
+        batch.purposes.join('; '),
+      ],
+    })),
+  );
+  heading(layout, 'Pull list');
+  layout.table(
+    [
+      { width: TICK + 14, fixed: true, align: 'center' },
+      { width: 7 },
+      { width: 3, align: 'right' },
+      { width: 3, align: 'right' },
+      { width: 4 },
+    ],
+    { cells: ['', 'Raw material', 'Amount', 'Before trim', 'Used by'].map(header) },
+    plan.pullList.map((item) => ({
+      cells: [
+        'tick-box',
+        item.name,
+        item.amount,
+        item.beforeTrim?.amount ?? '',
+        item.usedBy.join(', '),
+      ],
+    })),
+  );
+  for (const warning of plan.warnings) {
+    layout.paragraph(`Warning: ${warning}`, { color: INK.warn, weight: 'semibold' });
+  }
+  heading(layout, 'Cautions');
+  bulletList(layout, plan.cautions);
+  layout.gap(6);
+  layout.paragraph(plan.rounding, { size: SMALL, color: INK.muted });
+}
+
+/** One day's sheet: the batches that start on it, each in full, and lines to sign. */
+function daySheet(
+  layout: SheetLayout,
+  plan: PresentedPlan,
+  date: string,
+  batches: readonly PresentedPlanBatch[],
+  index: number,
+): void {
+  layout.newPage();
+  pageHead(
+    layout,
+    `LARDERBOOK · PRODUCTION SHEET · DAY ${index + 1} OF ${plan.days.length}`,
+    `Start ${dayInWords(date)}`,
+    `${planTitle(plan)} for service ${dayInWords(plan.serviceDate)} · ${batches.length} ${batches.length === 1 ? 'batch' : 'batches'}: ${batches.map((b) => b.formula.id).join(', ')}`,
+  );
+  for (const batch of batches) {
+    subheading(layout, `${batch.result.formula.title} · ${kindWords(batch.formula.kind)}`, 80);
+    for (const purpose of batch.purposes) layout.paragraph(`For: ${purpose}`);
+    layout.paragraph(`When: ${batch.rule}`, { size: SMALL, color: INK.muted });
+    layout.paragraph(
+      `Ready ${dayInWords(batch.ready)}. Lot code (from Larderbook, once recorded): ______________`,
+      { size: SMALL, color: INK.muted },
+    );
+    batchBody(layout, batch.result);
+    layout.gap(10);
+  }
+  signOffLines(layout, ['Weighed by', 'Checked by']);
+}
+
+/**
+ * A plan on paper: an overview (schedule, pull list, allergens, cautions), then one production
+ * sheet per start day with every batch that starts on it, as its batch sheet would print it.
+ */
+export function renderPlanSheetPdf(plan: PresentedPlan): Promise<Buffer> {
+  const name = `plan ${plan.assembly.id} for ${plan.serviceDate}`;
+  const layout = openSheet({
+    title: `${planTitle(plan)}, service ${plan.serviceDate}`,
+    subject: `Production plan: ${planTitle(plan)} for ${plan.serviceDate}`,
+    units: plan.units,
+    created: plan.today,
+    lot: name,
+    running: `Service ${dayInWords(plan.serviceDate)}`,
+  });
+  overview(layout, plan);
+  plan.days.forEach((day, i) => {
+    const starting = plan.batches.filter(
+      (b) => b.start === day.date && day.formulas.includes(b.formula.id),
+    );
+    daySheet(layout, plan, day.date, starting, i);
+  });
+  return finishSheet(layout, name);
+}

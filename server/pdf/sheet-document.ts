@@ -1,0 +1,112 @@
+import PDFDocument from 'pdfkit';
+import type { UnitSystem } from '../../shared/index.ts';
+import { fontName, fontFile, sheetFonts } from './sheet-fonts.ts';
+import { BODY, INK, SheetLayout } from './sheet-layout.ts';
+
+/** Margins of the area the sheet flows in, points (about 17 mm; the foot leaves room for the footer). */
+const MARGINS = { top: 46, bottom: 58, left: 48, right: 48 };
+/** Where the footer's text sits, from the bottom edge of the page, points. */
+const FOOTER_FROM_BOTTOM = 38;
+
+/** What a sheet's document needs to know before its first page. */
+export interface SheetSetup {
+  /** The document title (PDF metadata) and the running header of later pages. */
+  readonly title: string;
+  readonly subject: string;
+  /** US units print on Letter paper, metric on A4. */
+  readonly units: UnitSystem;
+  /** The date the file says it was made: a fixed day of the batch, so the same input gives the same file. */
+  readonly created: string;
+  /** The lot code (or words for none), printed in every footer and running header. */
+  readonly lot: string;
+  /** The right-hand side of the running header; "Lot LOT" by default. */
+  readonly running?: string;
+}
+
+/** A day YYYY-MM-DD as a Date at midnight UTC. */
+function utcDay(day: string): Date {
+  const [year, month, date] = day.split('-').map(Number);
+  return new Date(Date.UTC(year, month - 1, date));
+}
+
+/**
+ * Opens a sheet: an A4 (or Letter) document with Fira Sans, the metadata, and a layout whose
+ * later pages start with a running header of the title and lot.
+ */
+export function openSheet(setup: SheetSetup): SheetLayout {
+  const doc = new PDFDocument({
+    size: setup.units === 'us' ? 'LETTER' : 'A4',
+    margins: MARGINS,
+    bufferPages: true,
+    // The sheet's own font from the start, so pdfkit never loads its built-in Helvetica.
+    font: fontFile('regular', 'latin'),
+    lang: 'en',
+    displayTitle: true,
+    info: {
+      Title: setup.title,
+      Subject: setup.subject,
+      Author: 'Larderbook',
+      Creator: 'Larderbook',
+      CreationDate: utcDay(setup.created),
+    },
+  });
+  for (const { name, file } of sheetFonts()) doc.registerFont(name, file);
+  return new SheetLayout(doc, (layout) => {
+    layout.draw(
+      setup.title,
+      { size: 8, color: INK.muted },
+      layout.left,
+      layout.y,
+      layout.width * 0.7,
+    );
+    layout.draw(
+      setup.running ?? `Lot ${setup.lot}`,
+      { size: 8, color: INK.muted, weight: 'semibold', align: 'right' },
+      layout.left,
+      layout.y,
+      layout.width,
+    );
+    layout.gap(14);
+    layout.rule();
+    layout.gap(12);
+  });
+}
+
+/**
+ * Writes the footer "Larderbook · LOT · page N of M" on every page, ends the document and
+ * returns its bytes.
+ */
+export function finishSheet(layout: SheetLayout, lot: string): Promise<Buffer> {
+  const { doc } = layout;
+  const { start, count } = doc.bufferedPageRange();
+  for (let i = start; i < start + count; i++) {
+    doc.switchToPage(i);
+    const page = doc.page;
+    const keep = page.margins.bottom;
+    // Text below the bottom margin would make pdfkit start a page of its own.
+    page.margins.bottom = 0;
+    const y = page.height - FOOTER_FROM_BOTTOM;
+    doc
+      .moveTo(layout.left, y - 8)
+      .lineTo(layout.right, y - 8)
+      .lineWidth(0.4)
+      .strokeColor(INK.rule)
+      .stroke();
+    doc
+      .font(fontName('regular', 'latin'))
+      .fontSize(BODY - 1.5)
+      .fillColor(INK.muted)
+      .text(`Larderbook · ${lot} · page ${i - start + 1} of ${count}`, layout.left, y, {
+        width: layout.width,
+        lineBreak: false,
+      });
+    page.margins.bottom = keep;
+  }
+  return new Promise((resolve, reject) => {
+    const chunks: Buffer[] = [];
+    doc.on('data', (chunk: Buffer) => chunks.push(chunk));
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+    doc.end();
+  });
+}

@@ -1,0 +1,41 @@
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
+
+const DAY = new Intl.DateTimeFormat('en-GB', {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  timeZone: 'UTC',
+});
+const MOMENT = new Intl.DateTimeFormat('en-GB', {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  hour: '2-digit',
+  minute: '2-digit',
+});
+
+/** A calendar day YYYY-MM-DD in words, "2 Dec 2026", the same in every time zone. */
+export function dayInWords(day: string): string {
+  const [year, month, date] = day.split('-').map(Number);
+  return DAY.format(new Date(Date.UTC(year, month - 1, date)));
+}
+
+/** An ISO timestamp in words in this machine's time zone (the kitchen's), "3 Dec 2026, 14:05". */
+export function momentInWords(moment: string): string {
+  const date = new Date(moment);
+  return Number.isNaN(date.getTime()) ? moment : MOMENT.format(date);
+}
+
+const STATUS_WORDS: Readonly<Record<BatchStatus, string>> = {
+  planned: 'Planned',
+  'in-progress': 'In progress',
+  curing: 'Curing',
+  proofing: 'Proofing',
+  done: 'Done',
+  discarded: 'Discarded',
+};
+
+/** A batch status in words. */
+export function statusInWords(status: BatchStatus): string {
+  return STATUS_WORDS[status];
+}

@@ -1,0 +1,72 @@
+import { Router, type Request } from 'express';
+import { presentPlan } from '../../shared/index.ts';
+import type { AppContext } from '../app-context.ts';
+import { requireRole } from '../auth/authenticate.ts';
+import { personOf } from '../auth/request-person.ts';
+import { FormulaHistory } from '../formulas/formula-history.ts';
+import { validateBody } from '../http/validate-body.ts';
+import { PLAN_BODY, planFromStore, type PlanRequest } from './plan-request.ts';
+import { recordPlan } from './record-plan.ts';
+
+/** Today on the server, YYYY-MM-DD (UTC, as the batch routes count it). */
+const serverToday = (): string => new Date().toISOString().slice(0, 10);
+
+function changeBy(req: Request) {
+  return { actor: personOf(req), ...(req.ip === undefined ? {} : { ip: req.ip }) };
+}
+
+/**
+ * /api/plans: plan N units of an assembly for a service day (every signed-in role), and record
+ * the plan's batches as planned (admins and cooks). A plan that cannot be made is 422 with the
+ * reason, naming the formula; nothing is recorded.
+ */
+export function plansRouter({ formulas, batches, db, audit }: AppContext): Router {
+  const router = Router();
+  const history = new FormulaHistory(formulas, db, audit);
+
+  router.post('/', validateBody(PLAN_BODY), async (req, res) => {
+    const request = req.body as PlanRequest;
+    const plan = await planFromStore(formulas, request, serverToday());
+    res.json(presentPlan(plan, request.units ?? 'metric'));
+  });
+
+  // The plan on paper: an overview, then one production sheet per start day.
+  router.post('/sheet.pdf', validateBody(PLAN_BODY), async (req, res) => {
+    const request = req.body as PlanRequest;
+    const plan = presentPlan(
+      await planFromStore(formulas, request, serverToday()),
+      request.units ?? 'metric',
+    );
+    // pdfkit loads on the first sheet, not at start.
+    const { renderPlanSheetPdf } = await import('../pdf/plan-sheet-pdf.ts');
+    const pdf = await renderPlanSheetPdf(plan);
+    res.setHeader('Content-Type', 'application/pdf');
+    res.setHeader(
+      'Content-Disposition',
+      `attachment; filename="plan-${plan.assembly.id}-${plan.serviceDate}.pdf"`,
+    );
+    res.setHeader('Cache-Control', 'no-store');
+    res.send(pdf);
+  });
+
+  router.post(
+    '/record',
+    requireRole('admin', 'cook'),
+    validateBody(PLAN_BODY),
+    async (req, res) => {
+      const request = req.body as PlanRequest;
+      const plan = await planFromStore(formulas, request, serverToday());
+      const units = request.units ?? 'metric';
+      const recorded = await recordPlan(
+        plan,
+        units,
+        personOf(req).id,
+        { history, batches },
+        changeBy(req),
+      );
+      res.status(201).json({ plan: presentPlan(plan, units), batches: recorded });
+    },
+  );
+
+  return router;
+}

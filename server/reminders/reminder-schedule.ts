@@ -1,0 +1,66 @@
+import { addDays } from '../../shared/calculation/dates.ts';
+
+/** The three reminders: turn the meat, it is ready, it is past ready and still held. */
+export const REMINDER_KINDS = ['flip', 'ready', 'overdue'] as const;
+
+/** One of {@link REMINDER_KINDS}. */
+export type ReminderKind = (typeof REMINDER_KINDS)[number];
+
+/** A held batch's dates, from its result's schedule (or its ready date alone). */
+export interface HoldDates {
+  /** ISO date the hold starts. */
+  readonly start: string;
+  /** ISO date it is ready. */
+  readonly ready: string;
+  /** Turn or overhaul every this many days, when the formula says so. */
+  readonly flipEveryDays?: number | null;
+}
+
+/** A reminder that has come due: which, and the day it is for. */
+export interface DueReminder {
+  readonly kind: ReminderKind;
+  /** ISO date the reminder is for. */
+  readonly dueOn: string;
+}
+
+/** The flip days of a hold: start + k × every, for k = 1, 2, …, before the ready day. */
+export function flipDays(hold: HoldDates): string[] {
+  const every = hold.flipEveryDays ?? 0;
+  if (!Number.isInteger(every) || every < 1) return [];
+  const days: string[] = [];
+  for (let k = 1; ; k++) {
+    const day = addDays(hold.start, k * every);
+    if (day >= hold.ready) return days;
+    days.push(day);
+  }
+}
+
+/**
+ * The reminders due on `today` for a batch still curing or proofing, each named by the day it
+ * is for, so that it can be sent once and only once:
+ * - flip: the latest flip day up to today, while the ready day has not come. One missed while
+ *   the server was down is sent late; an older one that a newer flip day has replaced is not
+ *   (turning the meat twice for two missed days would be wrong).
+ * - ready: the ready day, from that day on (late if need be).
+ * - overdue: the day after the ready day, from then on.
+ * The caller leaves out batches that are done or discarded, and reminders already sent.
+ */
+export function dueReminders(hold: HoldDates, today: string): DueReminder[] {
+  const due: DueReminder[] = [];
+  if (today < hold.ready) {
+    const flip = flipDays(hold)
+      .filter((day) => day <= today)
+      .at(-1);
+    if (flip) due.push({ kind: 'flip', dueOn: flip });
+  }
+  if (today >= hold.ready) due.push({ kind: 'ready', dueOn: hold.ready });
+  const overdue = addDays(hold.ready, 1);
+  if (today >= overdue) due.push({ kind: 'overdue', dueOn: overdue });
+  return due;
+}
+
+/** The local calendar date of an instant (the server's time zone, TZ), as YYYY-MM-DD. */
+export function localDate(instant: Date): string {
+  const pad = (n: number): string => String(n).padStart(2, '0');
+  return `${instant.getFullYear()}-${pad(instant.getMonth() + 1)}-${pad(instant.getDate())}`;
+}

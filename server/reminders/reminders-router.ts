@@ -1,0 +1,57 @@
+import { Router, type Response } from 'express';
+import type { AppContext } from '../app-context.ts';
+import { personOf } from '../auth/request-person.ts';
+import { allowQuery } from '../http/require-json.ts';
+import { validateBody } from '../http/validate-body.ts';
+import type { Person } from '../people/person.ts';
+import { DEFAULT_CHOICES, type ReminderChoices } from './reminder-prefs-repository.ts';
+
+const CHOICES_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['flip', 'ready', 'overdue'],
+  properties: {
+    flip: { type: 'boolean' },
+    ready: { type: 'boolean' },
+    overdue: { type: 'boolean' },
+  },
+} as const;
+
+/**
+ * /api/people/me/reminders: the signed-in person's own reminder choices, whatever their role.
+ * Nobody reads or changes anyone else's.
+ */
+export function remindersRouter({ db, reminderPrefs, audit, now }: AppContext): Router {
+  const router = Router();
+
+  const answer = async (res: Response, me: Person): Promise<void> => {
+    const { choices, chosen } = await reminderPrefs.get(me);
+    // Without an address the choices are kept, and nothing is sent until one is added.
+    res.json({ email: me.email, choices, chosen, defaults: DEFAULT_CHOICES[me.role] });
+  };
+
+  router.get('/', allowQuery(), async (req, res) => {
+    await answer(res, personOf(req));
+  });
+
+  router.put('/', validateBody(CHOICES_BODY), async (req, res) => {
+    const me = personOf(req);
+    const choices = req.body as ReminderChoices;
+    await db.write(async (transaction) => {
+      await reminderPrefs.set(transaction, me.id, choices, now().toISOString());
+      await audit.append(
+        {
+          actor: me,
+          action: 'reminder-choices',
+          subject: me.username,
+          detail: choices,
+          ...(req.ip === undefined ? {} : { ip: req.ip }),
+        },
+        transaction,
+      );
+    });
+    await answer(res, me);
+  });
+
+  return router;
+}

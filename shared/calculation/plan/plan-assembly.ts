@@ -1,0 +1,177 @@
+import { Decimal } from '../../decimal.ts';
+import type { AssemblyFormula } from '../../formula/formula-types.ts';
+import { CAUTIONS, allergenCaution } from '../../reference/cautions.ts';
+import type { Allergen } from '../../formula/formula-types.ts';
+import { collectAllergens } from '../allergens.ts';
+import { BatchError } from '../batch-error.ts';
+import { failsCriticalLimit, type CalcResult, type Caution } from '../calc-result.ts';
+import { calculate } from '../calculate.ts';
+import { addDays, isIsoDate } from '../dates.ts';
+import { parseBatchOptions } from '../parse-batch-options.ts';
+import type { FormulaLibrary } from './check-assembly-library.ts';
+import { plannedSize } from './plan-batch-size.ts';
+import { plannedDates, type PlannedDates } from './plan-dates.ts';
+import { PlanError } from './plan-error.ts';
+import { collectNeeds, type Need } from './plan-needs.ts';
+import type { PlanBatch, PlanDay, PlanOptions, PlanResult } from './plan-types.ts';
+import { pullItemsOf, sumPullList } from './pull-list.ts';
+
+/** Most units one plan makes: beyond this a count is a typo. */
+export const MAX_PLAN_COUNT = 100_000;
+
+function checkOptions({ count, serviceDate, today }: PlanOptions): void {
+  if (!Number.isInteger(count) || count < 1 || count > MAX_PLAN_COUNT) {
+    throw new PlanError(
+      `the count must be a whole number from 1 to ${MAX_PLAN_COUNT}, not ${count}`,
+      'bad-input',
+    );
+  }
+  for (const [what, date] of [
+    ['service date', serviceDate],
+    ['today', today],
+  ] as const) {
+    if (!isIsoDate(date)) {
+      throw new PlanError(
+        `the ${what} must be a date written YYYY-MM-DD, not "${date}"`,
+        'bad-input',
+      );
+    }
+  }
+}
+
+/** Refuses a plan any of whose batches would have to start before today. */
+function refusePastStarts(
+  dated: readonly { need: Need; dates: PlannedDates }[],
+  { today, serviceDate }: PlanOptions,
+): void {
+  const late = dated
+    .filter(({ dates }) => dates.start < today)
+    .sort((a, b) => a.dates.start.localeCompare(b.dates.start));
+  if (late.length === 0) return;
+  const longest = Math.max(...dated.map(({ dates }) => dates.holdDays + dates.leadDays));
+  const { need, dates } = late[0];
+  throw new PlanError(
+    `${need.formula.id} must start ${dates.start}, already past; plan for a later date ` +
+      `(for service on ${serviceDate} it needs ${dates.holdDays + dates.leadDays} days; ` +
+      `the earliest service this plan can make is ${addDays(today, longest)})`,
+    'past-start',
+    need.formula.id,
+  );
+}
+
+function calculateNeed(need: Need, batch: PlanBatch['batch']): CalcResult {
+  const { formula } = need;
+  let result: CalcResult;
+  try {
+    result = calculate(formula, parseBatchOptions(batch, formula));
+  } catch (error) {
+    if (error instanceof BatchError) {
+      throw new PlanError(`${formula.id}: ${error.message}`, 'bad-batch', formula.id);
+    }
+    throw error;
+  }
+  if (failsCriticalLimit(result)) {
+    const failed = result.checks.filter((check) => check.critical && check.status === 'fail');
+    throw new PlanError(
+      `${formula.id} is refused, and the plan with it: critical limit exceeded: ` +
+        failed
+          .map(
+            (check) =>
+              `${check.label.toLowerCase()} ${check.value.toFixed(1)} over ${check.limit.toString()} for ${check.rule} (${check.source})`,
+          )
+          .join('; '),
+      'critical-limit',
+      formula.id,
+    );
+  }
+  return result;
+}
+
+/**
+ * Every batch's cautions once each, keyed by id; a formula's own cautions (formula-1…) are kept
+ * apart per formula, the allergen caution names every allergen of the plan, and the reminder
+ * that local codes come first goes last.
+ */
+function unionCautions(batches: readonly PlanBatch[], allergens: readonly Allergen[]): Caution[] {
+  const byKey = new Map<string, Caution>();
+  const allergen = allergenCaution(allergens);
+  for (const batch of batches) {
+    for (const caution of batch.result.cautions) {
+      if (caution.id === CAUTIONS.localCodes.id) continue;
+      const own = caution.id.startsWith('formula-');
+      const key = own ? `${batch.formula.id}/${caution.id}` : caution.id;
+      if (byKey.has(key)) continue;
+      if (allergen && caution.id === allergen.id) byKey.set(key, allergen);
+      else byKey.set(key, own ? { ...caution, id: key, source: batch.formula.title } : caution);
+    }
+  }
+  return [...byKey.values(), CAUTIONS.localCodes];
+}
+
+function groupByDay(batches: readonly PlanBatch[]): PlanDay[] {
+  const days = new Map<string, PlanBatch[]>();
+  for (const batch of batches) days.set(batch.start, [...(days.get(batch.start) ?? []), batch]);
+  return [...days].map(([date, list]) => ({ date, batches: list }));
+}
+
+/**
+ * Plans `count` units of an assembly for a service day: every batch it needs (one per formula,
+ * added up over the components and the assemblies inside it), each sized by carrying yields and
+ * losses back to raw weights and calculated by its kind's own calculator, with the day it must
+ * start counted back from service; one pull list of raw materials; the allergens and cautions
+ * of everything. Pure: the caller reads the formulas.
+ * @param library every formula that reads cleanly, by id (the assembly may be among them)
+ * @throws PlanError naming the formula when the plan cannot be made: bad count or dates, an
+ *   assembly with errors, a missing or unfitting formula, assemblies that contain each other, a
+ *   cure whose hold rule needs a size not given, a batch that would start before today, a batch
+ *   its calculator cannot make, or one over a critical limit
+ */
+export function planAssembly(
+  assembly: AssemblyFormula,
+  library: FormulaLibrary,
+  options: PlanOptions,
+): PlanResult {
+  checkOptions(options);
+  const needs = [...collectNeeds(assembly, library, new Decimal(options.count)).values()];
+  const dated = needs.map((need) => ({
+    need,
+    dates: plannedDates(need.formula, need.sizes, options.serviceDate),
+  }));
+  refusePastStarts(dated, options);
+
+  const warnings: string[] = [];
+  const planned = dated.map(({ need, dates }) => {
+    const size = plannedSize(need);
+    const batch = { ...size.batch, start: dates.start };
+    const result = calculateNeed(need, batch);
+    warnings.push(...size.warnings, ...result.warnings.map((w) => `${need.formula.id}: ${w}`));
+    const planBatch: PlanBatch = {
+      formula: { id: need.formula.id, title: need.formula.title, kind: need.formula.kind },
+      purposes: need.purposes,
+      batch,
+      result,
+      ...dates,
+    };
+    return { need, green: size.green, batch: planBatch };
+  });
+  planned.sort(
+    (a, b) =>
+      a.batch.start.localeCompare(b.batch.start) ||
+      a.batch.formula.title.localeCompare(b.batch.formula.title),
+  );
+  const batches = planned.map((p) => p.batch);
+  const allergens = collectAllergens(batches.map((b) => b.result.allergens));
+  const items = planned.flatMap((p) => pullItemsOf(p.need.formula, p.batch.result, p.green));
+  return {
+    assembly: { id: assembly.id, title: assembly.title },
+    count: options.count,
+    serviceDate: options.serviceDate,
+    today: options.today,
+    batches,
+    days: groupByDay(batches),
+    pullList: sumPullList(items),
+    allergens,
+    cautions: unionCautions(batches, allergens),
+    warnings,
+  };
+}

@@ -1,0 +1,160 @@
+import { Decimal, ZERO } from '../../decimal.ts';
+import type {
+  AssemblyComponent,
+  AssemblyFormula,
+  BatchFormula,
+} from '../../formula/formula-types.ts';
+import { parseMass } from '../../units/mass.ts';
+import type { HoldMeasures } from '../cure/hold-time.ts';
+import { assemblyLibraryIssues, type FormulaLibrary } from './check-assembly-library.ts';
+import { checkAssemblyFormula } from './check-assembly-formula.ts';
+import { componentSizes, quantityKeyOf } from './component-quantity.ts';
+import { PlanError } from './plan-error.ts';
+
+/**
+ * Everything the plan needs of one formula, added up over every component (at any depth) that
+ * names it: portions (blend), pieces (dough) and finished grams (slices and amounts).
+ */
+export interface Need {
+  readonly formula: BatchFormula;
+  readonly purposes: string[];
+  /** Blend portions of the formula's portion weight. */
+  portions: Decimal;
+  /** Dough pieces of the formula's piece weight. */
+  pieces: Decimal;
+  /** Finished grams: cure slices and amounts, and amounts of any kind. */
+  grams: Decimal;
+  /** The largest sizes any component gives, for a cure's hold rule: the longest hold wins. */
+  sizes: HoldMeasures;
+}
+
+/** Plain text of an exact decimal: "240", "27215.5422". */
+const text = (value: Decimal): string => value.toString();
+
+/** "1 piece", "2 pieces": a count with its noun. */
+function counted(count: Decimal | number, one: string, many: string): string {
+  return `${count.toString()} ${new Decimal(count).equals(1) ? one : many}`;
+}
+
+/** The assembly's own problems (this file, then against the library) as a refusal. */
+function refuseIfInvalid(assembly: AssemblyFormula, library: FormulaLibrary): void {
+  const own = checkAssemblyFormula(assembly).find((p) => p.severity === 'error');
+  if (own) {
+    throw new PlanError(
+      `${assembly.id} has errors: ${own.message}`,
+      'invalid-assembly',
+      assembly.id,
+    );
+  }
+  const [issue] = assemblyLibraryIssues(assembly, library);
+  if (issue) {
+    const component = Number(issue.path[1]) + 1;
+    throw new PlanError(
+      `${assembly.id}, component ${component} (${issue.formula}): ${issue.message}`,
+      issue.reason,
+      issue.formula,
+    );
+  }
+}
+
+function larger(a: Decimal | undefined, b: Decimal | undefined): Decimal | undefined {
+  if (!a) return b;
+  if (!b) return a;
+  return Decimal.max(a, b);
+}
+
+/** What one component asks of its formula for `units` units, in words and numbers. */
+function demandOf(
+  component: AssemblyComponent,
+  formula: BatchFormula,
+  units: Decimal,
+): { words: string; portions: Decimal; pieces: Decimal; grams: Decimal } {
+  const none = { portions: ZERO, pieces: ZERO, grams: ZERO };
+  const key = quantityKeyOf(component);
+  if (key === 'portions' && formula.kind === 'blend') {
+    const portions = units.times(component.portions ?? 0);
+    return {
+      ...none,
+      portions,
+      words: `${counted(component.portions ?? 0, 'portion', 'portions')} each = ${counted(portions, 'portion', 'portions')} of ${formula.portion}`,
+    };
+  }
+  if (key === 'pieces' && formula.kind === 'dough') {
+    const pieces = units.times(component.pieces ?? 0);
+    return {
+      ...none,
+      pieces,
+      words: `${counted(component.pieces ?? 0, 'piece', 'pieces')} each = ${counted(pieces, 'piece', 'pieces')} of ${formula.piece}`,
+    };
+  }
+  if (key === 'slices') {
+    const grams = units.times(component.slices ?? 0).times(parseMass(component.slice ?? ''));
+    return {
+      ...none,
+      grams,
+      words: `${counted(component.slices ?? 0, 'slice', 'slices')} of ${component.slice} each = ${text(grams)} g sliced`,
+    };
+  }
+  const grams = units.times(parseMass(component.amount ?? ''));
+  return { ...none, grams, words: `${component.amount} each = ${text(grams)} g` };
+}
+
+/**
+ * Walks an assembly, and the assemblies inside it, into what each formula is needed for: one
+ * {@link Need} per formula, in the order first met. Nested assemblies multiply through (units ×
+ * count); the same formula named twice is added up, so the kitchen makes one batch of it.
+ * @param units how many units of this assembly are wanted
+ * @param trail the titles of the assemblies around this one, outermost first
+ * @throws PlanError when an assembly has errors, names a missing or unfitting formula, or
+ *   assemblies contain each other
+ */
+export function collectNeeds(
+  assembly: AssemblyFormula,
+  library: FormulaLibrary,
+  units: Decimal,
+  needs: Map<string, Need> = new Map(),
+  trail: readonly AssemblyFormula[] = [],
+): Map<string, Need> {
+  if (trail.some((outer) => outer.id === assembly.id)) {
+    const chain = [...trail, assembly].map((a) => a.id).join(' → ');
+    throw new PlanError(
+      `${chain} goes round in a circle: an assembly cannot contain itself`,
+      'cycle',
+      assembly.id,
+    );
+  }
+  refuseIfInvalid(assembly, library);
+  const path = [...trail, assembly];
+  const where = `${path.map((a) => a.title).join(' › ')} (${counted(units, 'unit', 'units')})`;
+  for (const component of assembly.components) {
+    // refuseIfInvalid has made sure the formula is there and fits its quantity.
+    const formula = library.get(component.formula);
+    if (!formula) continue;
+    if (formula.kind === 'assembly') {
+      collectNeeds(formula, library, units.times(component.units ?? 1), needs, path);
+      continue;
+    }
+    const demand = demandOf(component, formula, units);
+    const need = needs.get(formula.id) ?? {
+      formula,
+      purposes: [],
+      portions: ZERO,
+      pieces: ZERO,
+      grams: ZERO,
+      sizes: {},
+    };
+    need.purposes.push(`${where}: ${demand.words}`);
+    need.portions = need.portions.plus(demand.portions);
+    need.pieces = need.pieces.plus(demand.pieces);
+    need.grams = need.grams.plus(demand.grams);
+    const sizes = componentSizes(component);
+    const thicknessMm = larger(need.sizes.thicknessMm, sizes.thicknessMm);
+    const largestPieceGrams = larger(need.sizes.largestPieceGrams, sizes.largestPieceGrams);
+    need.sizes = {
+      ...(thicknessMm ? { thicknessMm } : {}),
+      ...(largestPieceGrams ? { largestPieceGrams } : {}),
+    };
+    needs.set(formula.id, need);
+  }
+  return needs;
+}

@@ -1,0 +1,36 @@
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+
+/** A PDF read back: its pages' text, each page's items joined by spaces, and its metadata. */
+export interface PdfText {
+  readonly pages: readonly string[];
+  readonly title: string;
+  /** Every page's text, joined. */
+  readonly all: string;
+}
+
+/**
+ * Reads a PDF's text back with pdf.js (a reader independent of the library that wrote it), so a
+ * test checks what a person opening the file sees, not what the writer was asked to draw.
+ */
+export async function pdfText(bytes: Uint8Array): Promise<PdfText> {
+  const document = await getDocument({
+    data: new Uint8Array(bytes),
+    useSystemFonts: false,
+    disableFontFace: true,
+    isEvalSupported: false,
+  }).promise;
+  const pages: string[] = [];
+  for (let i = 1; i <= document.numPages; i++) {
+    const content = await (await document.getPage(i)).getTextContent();
+    const words = content.items.map((item) => ('str' in item ? item.str : '')).filter(Boolean);
+    // Runs of spaces collapse, so a test matches "10.7 g" however the writer split the line.
+    pages.push(words.join(' ').replace(/\s+/g, ' '));
+  }
+  const { info } = await document.getMetadata();
+  await document.destroy();
+  return {
+    pages,
+    title: String((info as { Title?: string }).Title ?? ''),
+    all: pages.join('\n'),
+  };
+}
