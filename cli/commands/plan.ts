@@ -117,15 +117,21 @@ function planFailure(error: PlanError): CliError {
   return new CliError(error.message, code);
 }
 
-/** The formulas of a folder, each assembly checked against the others, by id. */
-function libraryIn(folder: string, io: Io) {
+/**
+ * The formulas of a folder, each assembly checked against the others, by id. The errors of the
+ * assembly's own file are printed; another file's are summed up by the plan's refusal when the
+ * plan needs that file (`larder check` lists them all).
+ */
+function libraryIn(folder: string, assemblyFile: string, io: Io) {
   const readings = formulaFilesIn(folder).map((file) => ({ file, reading: readFormulaFile(file) }));
   const checked = checkLibrary(readings, (file) => readFileSync(file, 'utf8'));
-  for (const reading of checked) {
+  const own = path.resolve(assemblyFile);
+  checked.forEach((reading, i) => {
+    if (path.resolve(readings[i].file) !== own) return;
     for (const problem of reading.problems.filter((p) => p.severity === 'error')) {
       io.err(`${formatProblem(problem)}\n`);
     }
-  }
+  });
   return formulaLibrary(readings.map(({ file }, i) => ({ file, reading: checked[i] })));
 }
 
@@ -178,7 +184,11 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
   const folder = options.formulas ?? (isPath(reference) ? path.dirname(file) : formulasFolder());
   let plan: PlanResult;
   try {
-    plan = planAssembly(formula, libraryIn(folder, io), { count, serviceDate, today: planned });
+    plan = planAssembly(formula, libraryIn(folder, file, io), {
+      count,
+      serviceDate,
+      today: planned,
+    });
   } catch (error) {
     if (error instanceof PlanError) throw planFailure(error);
     throw error;
