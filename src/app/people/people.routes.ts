@@ -15,6 +15,11 @@ export default [
         title: 'Audit log · People · Larderbook',
         loadComponent: () => import('./audit-log/audit-log'),
       },
+      {
+        path: 'outbox',
+        title: 'Outbox · People · Larderbook',
+        loadComponent: () => import('./outbox/outbox'),
+      },
     ],
   },
 ] satisfies Routes;

@@ -1,6 +1,5 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@angular/core';
-import { MatButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -19,6 +18,7 @@ import {
 } from '@angular/material/table';
 import { AUDIT_ACTIONS, AuditAction, AuditEvent, actionText, detailText } from '../audit-event';
 import { AuditStore } from '../audit-store';
+import { OlderPagesFooter } from '../older-pages-footer/older-pages-footer';
 
 /** A row of the log with its words worked out once. */
 interface AuditRow {
@@ -42,16 +42,16 @@ interface AuditRow {
     MatHeaderRow,
     MatRowDef,
     MatRow,
-    MatButton,
     MatIcon,
     MatFormField,
     MatLabel,
     MatSelect,
     MatOption,
     MatProgressBar,
+    OlderPagesFooter,
   ],
   templateUrl: './audit-log.html',
-  styleUrl: './audit-log.css',
+  styleUrls: ['../people-tab.css', './audit-log.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export default class AuditLog implements OnInit {

@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { MatTabLink, MatTabNav, MatTabNavPanel } from '@angular/material/tabs';
 import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 
-/** The People area: who can sign in with which role, and the audit log, as two tabs. */
+/** The People area: who can sign in with which role, the audit log and the outbox, as tabs. */
 @Component({
   selector: 'app-people-page',
   imports: [RouterOutlet, RouterLink, RouterLinkActive, MatTabNav, MatTabLink, MatTabNavPanel],

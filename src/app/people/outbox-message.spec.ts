@@ -1,0 +1,109 @@
+import assert from 'node:assert/strict';
+import { describe, it } from 'node:test';
+import { deliveryStatus, kindText, recipientText, transportText } from './outbox-message.ts';
+
+describe('outbox message words', () => {
+  describe('kindText', () => {
+    it('should name invitations and each reminder in words', () => {
+      assert.equal(kindText('invitation'), 'Invitation');
+      assert.equal(kindText('reminder-flip'), 'Reminder: flip');
+      assert.equal(kindText('reminder-ready'), 'Reminder: ready');
+      assert.equal(kindText('reminder-overdue'), 'Reminder: overdue');
+    });
+
+    it('should give back a kind it does not know as the server wrote it', () => {
+      assert.equal(kindText('digest'), 'digest');
+    });
+  });
+
+  describe('deliveryStatus', () => {
+    it('should call a message never tried queued, with nothing to add', () => {
+      assert.deepEqual(deliveryStatus({ state: 'pending', attempts: 0, result: null }), {
+        tone: 'queued',
+        label: 'Queued',
+        detail: '',
+      });
+    });
+
+    it('should show the last failure of a message that will be tried again', () => {
+      assert.deepEqual(
+        deliveryStatus({
+          state: 'pending',
+          attempts: 2,
+          result: 'ECONNREFUSED: connect refused (try 2)',
+        }),
+        {
+          tone: 'queued',
+          label: 'Queued, will retry',
+          detail: 'ECONNREFUSED: connect refused (try 2)',
+        },
+      );
+    });
+
+    it('should show what the transport answered for a sent message', () => {
+      const status = deliveryStatus({
+        state: 'sent',
+        attempts: 1,
+        result: 'kept in the local outbox; nothing left this machine',
+      });
+      assert.equal(status.tone, 'sent');
+      assert.equal(status.label, 'Sent');
+      assert.equal(status.detail, 'kept in the local outbox; nothing left this machine');
+    });
+
+    it('should show why a message failed, and say so when the server gave no reason', () => {
+      assert.deepEqual(
+        deliveryStatus({ state: 'failed', attempts: 1, result: '550 5.1.1 mailbox unknown' }),
+        { tone: 'failed', label: 'Failed', detail: '550 5.1.1 mailbox unknown' },
+      );
+      assert.equal(
+        deliveryStatus({ state: 'failed', attempts: 5, result: '  ' }).detail,
+        'no reason was given',
+      );
+    });
+
+    it('should call a message being handed over sending', () => {
+      assert.equal(
+        deliveryStatus({ state: 'sending', attempts: 1, result: null }).label,
+        'Sending',
+      );
+    });
+  });
+
+  describe('recipientText', () => {
+    it('should write the name before the address, as mail programs do', () => {
+      assert.equal(
+        recipientText({ to: 'wren@quillmoor.invalid', toName: 'Wren Halloway' }),
+        'Wren Halloway <wren@quillmoor.invalid>',
+      );
+    });
+
+    it('should write the bare address when there is no name', () => {
+      assert.equal(
+        recipientText({ to: 'wren@quillmoor.invalid', toName: null }),
+        'wren@quillmoor.invalid',
+      );
+      assert.equal(
+        recipientText({ to: 'wren@quillmoor.invalid', toName: ' ' }),
+        'wren@quillmoor.invalid',
+      );
+    });
+  });
+
+  describe('transportText', () => {
+    it('should say that without LARDER_SMTP_URL messages stay in the outbox', () => {
+      assert.match(
+        transportText('local'),
+        /LARDER_SMTP_URL is not set, so messages stay here and are not sent/,
+      );
+    });
+
+    it('should say that messages go to the mail server when one is set', () => {
+      assert.match(transportText('smtp'), /mail server set in LARDER_SMTP_URL/);
+    });
+
+    it('should say nothing before the server has told', () => {
+      assert.equal(transportText(null), '');
+    });
+  });
+});

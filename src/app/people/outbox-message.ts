@@ -1,0 +1,115 @@
+/** What Larderbook sends: an invitation, or one of the three reminders (the server's list). */
+export type MessageKind = 'invitation' | 'reminder-flip' | 'reminder-ready' | 'reminder-overdue';
+
+/** Where a message is in the outbox, as the server keeps it. */
+export type OutboxState = 'pending' | 'sending' | 'sent' | 'failed';
+
+/** Where messages go: kept in the local outbox only, or handed to the mail server. */
+export type MailTransport = 'local' | 'smtp';
+
+/** A message as the outbox list shows it (GET /api/outbox). */
+export interface OutboxSummary {
+  readonly id: number;
+  /** When it was put in the outbox (ISO 8601). */
+  readonly createdAt: string;
+  readonly to: string;
+  readonly toName: string | null;
+  readonly subject: string;
+  readonly kind: MessageKind;
+  /** What it is about: a lot code, a username. */
+  readonly related: string | null;
+  readonly transport: MailTransport;
+  readonly state: OutboxState;
+  readonly attempts: number;
+  readonly sentAt: string | null;
+  /** The transport's answer, or why it failed. */
+  readonly result: string | null;
+}
+
+/** One message with its bodies (GET /api/outbox/:id); the console shows only the text. */
+export interface OutboxMessage extends OutboxSummary {
+  readonly messageId: string;
+  readonly text: string;
+  readonly html: string;
+}
+
+/** One page of the outbox; `next` is the `before` of the following page, null at the end. */
+export interface OutboxPage {
+  readonly messages: readonly OutboxSummary[];
+  readonly next: number | null;
+  readonly transport: MailTransport;
+}
+
+/** The four states a reader tells apart: waiting, being handed over, sent, given up on. */
+export type DeliveryTone = 'queued' | 'sending' | 'sent' | 'failed';
+
+/** A message's delivery in words. */
+export interface DeliveryStatus {
+  readonly tone: DeliveryTone;
+  /** One or two words: "Queued", "Sent". */
+  readonly label: string;
+  /** What the transport said, or why it failed; empty when there is nothing to add. */
+  readonly detail: string;
+}
+
+const KIND_WORDS: Readonly<Record<MessageKind, string>> = {
+  invitation: 'Invitation',
+  'reminder-flip': 'Reminder: flip',
+  'reminder-ready': 'Reminder: ready',
+  'reminder-overdue': 'Reminder: overdue',
+};
+
+/**
+ * What kind of message it is, in words.
+ * @param kind The server's kind.
+ * @returns "Invitation", "Reminder: flip"…; an unknown kind comes back as the server wrote it.
+ */
+export function kindText(kind: string): string {
+  return KIND_WORDS[kind as MessageKind] ?? kind;
+}
+
+/**
+ * Where a message is, in words: queued (with the last failure when it will be tried again),
+ * sending, sent (with what the transport said) or failed (with why).
+ * @param message The state, tries and result of a message.
+ */
+export function deliveryStatus(
+  message: Pick<OutboxSummary, 'state' | 'attempts' | 'result'>,
+): DeliveryStatus {
+  const result = message.result?.trim() ?? '';
+  switch (message.state) {
+    case 'pending':
+      return message.attempts > 0
+        ? { tone: 'queued', label: 'Queued, will retry', detail: result }
+        : { tone: 'queued', label: 'Queued', detail: '' };
+    case 'sending':
+      return { tone: 'sending', label: 'Sending', detail: '' };
+    case 'sent':
+      return { tone: 'sent', label: 'Sent', detail: result };
+    case 'failed':
+      return { tone: 'failed', label: 'Failed', detail: result || 'no reason was given' };
+    default:
+      return { tone: 'queued', label: String(message.state), detail: result };
+  }
+}
+
+/**
+ * Who a message went to, as a mail program writes it: "Wren Halloway <wren@example.com>".
+ * @param message The address and name of the recipient.
+ */
+export function recipientText(message: Pick<OutboxSummary, 'to' | 'toName'>): string {
+  const name = message.toName?.trim();
+  return name ? `${name} <${message.to}>` : message.to;
+}
+
+/**
+ * One line on where messages go: without LARDER_SMTP_URL they stay in the outbox.
+ * @param transport The server's transport, or null before the first page has come back.
+ */
+export function transportText(transport: MailTransport | null): string {
+  if (transport === 'smtp')
+    return 'Messages go out through the mail server set in LARDER_SMTP_URL; once an invitation is sent, its link is removed from the copy kept here.';
+  if (transport === 'local')
+    return 'LARDER_SMTP_URL is not set, so messages stay here and are not sent: read them here and pass invitation links on yourself.';
+  return '';
+}
