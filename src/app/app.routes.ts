@@ -8,6 +8,12 @@ export const routes: Routes = [
     loadComponent: () => import('./core/auth/sign-in/sign-in'),
   },
   {
+    // An invitation's link: public, like sign-in; the token in the link is the proof.
+    path: 'set-password',
+    title: 'Set your password · Larderbook',
+    loadComponent: () => import('./people/set-password/set-password'),
+  },
+  {
     path: '',
     canMatch: [authGuard],
     loadComponent: () => import('./core/layout/shell/shell'),

@@ -1,11 +1,5 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
-import {
-  AbstractControl,
-  NonNullableFormBuilder,
-  ReactiveFormsModule,
-  ValidationErrors,
-  Validators,
-} from '@angular/forms';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import {
@@ -23,8 +17,10 @@ import { MatProgressBar } from '@angular/material/progress-bar';
 import { ApiError } from '../../core/api/api-error';
 import { SessionStore } from '../../core/auth/session-store';
 import { failureText } from '../failure-text';
+import { newPasswordControls } from '../new-password-controls';
+import { newPasswordChecks } from '../password-checks';
 import { PeopleStore } from '../people-store';
-import { PASSWORD_MAX, PASSWORD_MIN } from '../person-rules';
+import { PASSWORD_MIN } from '../person-rules';
 
 /**
  * Lets whoever is signed in, whatever their role, change their own password. Closes with `true`
@@ -58,19 +54,8 @@ export class ChangePassword {
   protected readonly username = inject(SessionStore).person()?.username ?? '';
   protected readonly rules = { PASSWORD_MIN };
   protected readonly form = inject(NonNullableFormBuilder).group(
-    {
-      current: ['', Validators.required],
-      password: [
-        '',
-        [
-          Validators.required,
-          Validators.minLength(PASSWORD_MIN),
-          Validators.maxLength(PASSWORD_MAX),
-        ],
-      ],
-      repeat: ['', Validators.required],
-    },
-    { validators: [passwordsAgree] },
+    { current: ['', Validators.required], ...newPasswordControls() },
+    { validators: [newPasswordChecks] },
   );
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
@@ -102,15 +87,6 @@ export class ChangePassword {
   protected toggleShown(shown: boolean): void {
     this.shown.set(shown);
   }
-}
-
-// The repeat must match; the new password must differ from the current one.
-function passwordsAgree(group: AbstractControl): ValidationErrors | null {
-  const { current, password, repeat } = group.value as Record<string, string>;
-  const errors: ValidationErrors = {};
-  if (repeat && password !== repeat) errors['mismatch'] = true;
-  if (password && password === current) errors['unchanged'] = true;
-  return Object.keys(errors).length ? errors : null;
 }
 
 /**

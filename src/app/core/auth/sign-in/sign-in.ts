@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, OnInit, inject, input, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatFormField, MatLabel, MatError } from '@angular/material/form-field';
@@ -24,12 +24,16 @@ import { SessionStore } from '../session-store';
   styleUrl: './sign-in.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export default class SignIn {
+export default class SignIn implements OnInit {
   private readonly session = inject(SessionStore);
   private readonly router = inject(Router);
 
   /** Where to go after signing in (from the query string). */
   readonly returnUrl = input<string>();
+  /** The username to fill in (from the query string), after setting a password from an invitation. */
+  readonly username = input<string>();
+  /** 'yes' when the person has just set their password from an invitation (query string). */
+  readonly passwordSet = input<string>();
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     username: ['', Validators.required],
@@ -37,6 +41,11 @@ export default class SignIn {
   });
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
+
+  ngOnInit(): void {
+    const username = this.username();
+    if (username) this.form.controls.username.setValue(username);
+  }
 
   protected async signIn(): Promise<void> {
     if (this.form.invalid || this.busy()) {

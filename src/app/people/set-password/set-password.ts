@@ -1,0 +1,101 @@
+import { DatePipe } from '@angular/common';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  OnInit,
+  computed,
+  inject,
+  input,
+  signal,
+} from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
+import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { Router, RouterLink } from '@angular/router';
+import { failureText } from '../failure-text';
+import { InvitationStore } from '../invitation-store';
+import { newPasswordControls } from '../new-password-controls';
+import { newPasswordChecks } from '../password-checks';
+import { PASSWORD_MIN } from '../person-rules';
+
+/**
+ * The page an invitation's link opens, outside the sign-in: it says for whom the link is, takes
+ * a new password twice, sets it, and sends the person to sign in. A link that no longer works
+ * says why and what to do.
+ */
+@Component({
+  selector: 'app-set-password',
+  imports: [
+    DatePipe,
+    ReactiveFormsModule,
+    RouterLink,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatError,
+    MatInput,
+    MatCheckbox,
+    MatButton,
+    MatIcon,
+    MatProgressBar,
+  ],
+  providers: [InvitationStore],
+  templateUrl: './set-password.html',
+  styleUrls: ['../../core/auth/sign-in/sign-in.css', './set-password.css'],
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class SetPassword implements OnInit {
+  private readonly store = inject(InvitationStore);
+  private readonly router = inject(Router);
+
+  /** The invitation's token, from the link's query string. */
+  readonly token = input<string>();
+
+  protected readonly rules = { PASSWORD_MIN };
+  protected readonly view = this.store.view;
+  protected readonly invitation = computed(() => {
+    const view = this.view();
+    return view.step === 'valid' ? view.invitation : null;
+  });
+  protected readonly refusal = computed(() => {
+    const view = this.view();
+    return view.step === 'refused' ? view.refusal : null;
+  });
+  protected readonly form = inject(NonNullableFormBuilder).group(newPasswordControls(), {
+    validators: [newPasswordChecks],
+  });
+  protected readonly busy = signal(false);
+  protected readonly failure = signal<string | null>(null);
+  protected readonly shown = signal(false);
+
+  ngOnInit(): void {
+    void this.store.check(this.token());
+  }
+
+  protected async setPassword(): Promise<void> {
+    if (this.form.invalid || this.busy()) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.busy.set(true);
+    this.failure.set(null);
+    try {
+      const accepted = await this.store.accept(this.form.getRawValue().password);
+      if (accepted) {
+        // Replaces this page in the history, so Back does not lead to a used link.
+        await this.router.navigate(['/sign-in'], {
+          queryParams: { username: accepted.username, passwordSet: 'yes' },
+          replaceUrl: true,
+        });
+      }
+    } catch (error) {
+      this.failure.set(failureText(error, 'The password could not be set; try again.'));
+    } finally {
+      this.busy.set(false);
+    }
+  }
+}
