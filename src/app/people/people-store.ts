@@ -3,6 +3,8 @@ import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { Person, Role } from '../core/api/api-types';
 import { failureText } from './failure-text';
+import { InvitationSent } from './invitation';
+import { ReminderChoices, ReminderSettings } from './reminder-choices';
 
 /** What an admin fills in to add a person; without a password the server makes one up. */
 export interface NewPerson {
@@ -16,10 +18,14 @@ export interface NewPerson {
 /** What an admin may change about a person (PATCH /api/people/:id). */
 export type PersonChanges = Partial<Pick<Person, 'displayName' | 'email' | 'role' | 'active'>>;
 
-/** A person just added, with the password the server made up for them (null when one was given). */
+/**
+ * A person just added, with the password the server made up for them (null when one was given)
+ * and the invitation sent to their address (null without one).
+ */
 export interface AddedPerson {
   readonly person: Person;
   readonly password: string | null;
+  readonly invitation: InvitationSent | null;
 }
 
 interface PeopleState {
@@ -64,17 +70,36 @@ export class PeopleStore {
 
   /**
    * Adds a person. Rejects with an ApiError (409 when the username is taken).
-   * @returns The person, and the generated password when none was given: it is shown only once.
+   * @returns The person, the generated password when none was given (it is shown only once), and
+   *   the invitation that went to their address, if they have one.
    */
   async add(draft: NewPerson): Promise<AddedPerson> {
     const answer = await firstValueFrom(
-      this.http.post<{ person: Person; password?: string }>('/api/people', draft),
+      this.http.post<{ person: Person; password?: string; invitation?: InvitationSent | null }>(
+        '/api/people',
+        draft,
+      ),
     );
     this.state.update((state) => ({
       ...state,
       people: sortPeople([...state.people, answer.person]),
     }));
-    return { person: answer.person, password: answer.password ?? null };
+    return {
+      person: answer.person,
+      password: answer.password ?? null,
+      invitation: answer.invitation ?? null,
+    };
+  }
+
+  /**
+   * Sends a person a new invitation to set their password; the link of any older one stops
+   * working. Rejects with an ApiError (409 without an address, or for a deactivated person).
+   */
+  async resendInvitation(id: number): Promise<InvitationSent> {
+    const { invitation } = await firstValueFrom(
+      this.http.post<{ invitation: InvitationSent }>(`/api/people/${id}/invitation`, {}),
+    );
+    return invitation;
   }
 
   /**
@@ -107,6 +132,16 @@ export class PeopleStore {
   /** Changes the signed-in person's own password; rejects with an ApiError (403 when `current` is wrong). */
   async changeOwnPassword(current: string, password: string): Promise<void> {
     await firstValueFrom(this.http.put<void>('/api/people/me/password', { current, password }));
+  }
+
+  /** The signed-in person's own reminder choices and the address they go to. */
+  async myReminders(): Promise<ReminderSettings> {
+    return firstValueFrom(this.http.get<ReminderSettings>('/api/people/me/reminders'));
+  }
+
+  /** Stores the signed-in person's own reminder choices; answers with them as the server keeps them. */
+  async saveMyReminders(choices: ReminderChoices): Promise<ReminderSettings> {
+    return firstValueFrom(this.http.put<ReminderSettings>('/api/people/me/reminders', choices));
   }
 }
 

@@ -1,5 +1,12 @@
 import { DOCUMENT } from '@angular/common';
-import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  OnInit,
+  computed,
+  inject,
+  signal,
+} from '@angular/core';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatDialog, MatDialogConfig } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
@@ -21,8 +28,9 @@ import { MatTooltip } from '@angular/material/tooltip';
 import { Router } from '@angular/router';
 import { Person } from '../../core/api/api-types';
 import { SessionStore } from '../../core/auth/session-store';
+import { failureText } from '../failure-text';
 import { PasswordResetDialog } from '../password-reset-dialog/password-reset-dialog';
-import { PeopleStore } from '../people-store';
+import { AddedPerson, PeopleStore } from '../people-store';
 import { PersonAddDialog } from '../person-add-dialog/person-add-dialog';
 import { PersonEditDialog } from '../person-edit-dialog/person-edit-dialog';
 import { PersonStatusDialog } from '../person-status-dialog/person-status-dialog';
@@ -52,7 +60,7 @@ const CONFIRM_DIALOG: MatDialogConfig = { width: '480px', maxWidth: '95vw', role
     MatProgressBar,
   ],
   templateUrl: './people-list.html',
-  styleUrl: './people-list.css',
+  styleUrls: ['../people-tab.css', './people-list.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export default class PeopleList implements OnInit {
@@ -70,6 +78,8 @@ export default class PeopleList implements OnInit {
   protected readonly meId = computed(() => this.session.person()?.id ?? null);
   protected readonly columns = ['name', 'username', 'role', 'email', 'status', 'actions'];
   protected readonly roleLabel = roleLabel;
+  /** The id of the person whose invitation is being sent again, or null. */
+  protected readonly resending = signal<number | null>(null);
   /** "5 people: 4 active, 1 inactive". */
   protected readonly summary = computed(() => {
     const people = this.people();
@@ -90,11 +100,17 @@ export default class PeopleList implements OnInit {
 
   protected addPerson(): void {
     this.dialog
-      .open<PersonAddDialog, void, Person>(PersonAddDialog, FORM_DIALOG)
+      .open<PersonAddDialog, void, AddedPerson>(PersonAddDialog, FORM_DIALOG)
       .afterClosed()
-      .subscribe((person) => {
-        if (person)
-          this.tell(`${person.displayName} is added as ${roleLabel(person.role).toLowerCase()}.`);
+      .subscribe((added) => {
+        if (!added) return;
+        const { person, invitation } = added;
+        const role = roleLabel(person.role).toLowerCase();
+        this.tell(
+          invitation
+            ? `${person.displayName} is added as ${role}; an invitation to set their password went to ${invitation.sentTo}.`
+            : `${person.displayName} is added as ${role}.`,
+        );
       });
   }
 
@@ -134,6 +150,22 @@ export default class PeopleList implements OnInit {
             : `${changed.displayName} is deactivated; their session has ended.`,
         );
       });
+  }
+
+  /** Sends a new invitation; the link of the one before stops working. */
+  protected async resendInvitation(person: Person): Promise<void> {
+    if (this.resending() !== null) return;
+    this.resending.set(person.id);
+    try {
+      const invitation = await this.store.resendInvitation(person.id);
+      this.tell(
+        `A new invitation went to ${invitation.sentTo}; the link of any earlier one no longer works.`,
+      );
+    } catch (error) {
+      this.tell(failureText(error, 'The invitation could not be sent; try again.'));
+    } finally {
+      this.resending.set(null);
+    }
   }
 
   protected resetPassword(person: Person): void {

@@ -1,3 +1,4 @@
+import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -22,7 +23,7 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ApiError } from '../../core/api/api-error';
-import { Person, Role } from '../../core/api/api-types';
+import { Role } from '../../core/api/api-types';
 import { failureText } from '../failure-text';
 import { GeneratedPassword } from '../generated-password/generated-password';
 import { AddedPerson, PeopleStore } from '../people-store';
@@ -37,12 +38,14 @@ import {
 import { ROLE_OPTIONS } from '../role-options';
 
 /**
- * Adds a person. Closes with the new person; when the server made up the password, the dialog
- * first shows it once and stays open until the admin is done with it.
+ * Adds a person. Closes with the new person (and the invitation sent to their address); when the
+ * server made up the password, the dialog first shows it once and stays open until the admin is
+ * done with it.
  */
 @Component({
   selector: 'app-person-add-dialog',
   imports: [
+    DatePipe,
     ReactiveFormsModule,
     MatDialogTitle,
     MatDialogContent,
@@ -68,7 +71,7 @@ import { ROLE_OPTIONS } from '../role-options';
 })
 export class PersonAddDialog {
   private readonly store = inject(PeopleStore);
-  private readonly dialogRef = inject<MatDialogRef<PersonAddDialog, Person>>(MatDialogRef);
+  private readonly dialogRef = inject<MatDialogRef<PersonAddDialog, AddedPerson>>(MatDialogRef);
   private readonly injector = inject(Injector);
   private readonly reveal = viewChild(GeneratedPassword);
 
@@ -104,7 +107,7 @@ export class PersonAddDialog {
         ...(password ? { password } : {}),
       });
       if (added.password === null) {
-        this.dialogRef.close(added.person);
+        this.dialogRef.close(added);
         return;
       }
       // The password exists nowhere else now: no closing by Escape or a stray click outside.
@@ -126,6 +129,6 @@ export class PersonAddDialog {
   }
 
   protected finish(): void {
-    this.dialogRef.close(this.added()?.person);
+    this.dialogRef.close(this.added() ?? undefined);
   }
 }
