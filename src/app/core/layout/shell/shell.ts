@@ -85,6 +85,11 @@ export default class Shell {
     openChangePassword(this.dialog);
   }
 
+  protected async myReminders(): Promise<void> {
+    const { openMyReminders } = await import('../../../people/my-reminders/my-reminders');
+    openMyReminders(this.dialog);
+  }
+
   protected async signOut(): Promise<void> {
     await this.session.signOut();
     await this.router.navigate(['/sign-in']);
