@@ -15,6 +15,13 @@ describe('audit event words', () => {
       );
       assert.equal(actionText({ action: 'password-reset', detail: null }), 'Reset a password');
     });
+
+    it('should tell a password set from an invitation link', () => {
+      assert.equal(
+        actionText({ action: 'password-reset', detail: { via: 'invitation' } }),
+        'Set their password from an invitation',
+      );
+    });
   });
 
   describe('detailText', () => {
@@ -60,6 +67,43 @@ describe('audit event words', () => {
         expected: 'e-mail removed',
       },
       { name: 'a sign-out', event: { action: 'sign-out', detail: null }, expected: '' },
+      {
+        name: 'an invitation with its address',
+        event: {
+          action: 'invitation-send',
+          detail: { to: 'wren@quillmoor.invalid', expiresAt: '2026-03-05T09:00:00.000Z' },
+        },
+        expected: 'to wren@quillmoor.invalid',
+      },
+      {
+        name: 'reminder choices as the kinds chosen',
+        event: {
+          action: 'reminder-choices',
+          detail: { flip: false, ready: true, overdue: true },
+        },
+        expected: 'ready, overdue',
+      },
+      {
+        name: 'reminder choices with every kind turned off',
+        event: {
+          action: 'reminder-choices',
+          detail: { flip: false, ready: false, overdue: false },
+        },
+        expected: 'no reminders',
+      },
+      {
+        name: 'a reminder sent to two people',
+        event: {
+          action: 'reminder-send',
+          detail: { kind: 'flip', dueOn: '2024-03-02', to: ['rosa', 'tobin'] },
+        },
+        expected: 'flip reminder, due 2024-03-02, to rosa, tobin',
+      },
+      {
+        name: 'a reminder nobody could be sent',
+        event: { action: 'reminder-send', detail: { kind: 'ready', dueOn: '2024-03-08', to: [] } },
+        expected: 'ready reminder, due 2024-03-08, to nobody',
+      },
     ];
     for (const { name, event, expected } of cases) {
       it(`should summarise ${name}`, () => {

@@ -12,7 +12,10 @@ export type AuditAction =
   | 'batch-sign-off'
   | 'person-add'
   | 'person-change'
-  | 'password-reset';
+  | 'password-reset'
+  | 'invitation-send'
+  | 'reminder-choices'
+  | 'reminder-send';
 
 /** One entry of the audit log, as GET /api/audit returns it. */
 export interface AuditEvent {
@@ -50,6 +53,9 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'person-add', label: 'Added a person' },
   { value: 'person-change', label: 'Changed a person' },
   { value: 'password-reset', label: 'Reset a password' },
+  { value: 'invitation-send', label: 'Sent an invitation' },
+  { value: 'reminder-choices', label: 'Chose their reminders' },
+  { value: 'reminder-send', label: 'Sent a reminder' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));
@@ -71,6 +77,9 @@ const STATUS_WORDS: Readonly<Record<string, string>> = {
 export function actionText(event: Pick<AuditEvent, 'action' | 'detail'>): string {
   if (event.action === 'password-reset' && fieldsOf(event.detail)['own'] === true) {
     return 'Changed their own password';
+  }
+  if (event.action === 'password-reset' && fieldsOf(event.detail)['via'] === 'invitation') {
+    return 'Set their password from an invitation';
   }
   return ACTION_LABELS.get(event.action) ?? event.action;
 }
@@ -138,6 +147,23 @@ export function detailText(event: Pick<AuditEvent, 'action' | 'detail'>): string
       return present(detail['role']) ? `role ${wordsOf(detail['role'])}` : '';
     case 'person-change':
       return personChangeText(detail);
+    case 'invitation-send':
+      return present(detail['to']) ? `to ${wordsOf(detail['to'])}` : '';
+    case 'reminder-choices':
+      return reminderChoicesText(detail);
+    case 'reminder-send':
+      return join(
+        [
+          present(detail['kind']) ? `${wordsOf(detail['kind'])} reminder` : '',
+          present(detail['dueOn']) ? `due ${wordsOf(detail['dueOn'])}` : '',
+          Array.isArray(detail['to'])
+            ? detail['to'].length === 0
+              ? 'to nobody'
+              : `to ${detail['to'].map(wordsOf).join(', ')}`
+            : '',
+        ],
+        ', ',
+      );
     case 'password-reset':
     case 'sign-out':
       return '';
@@ -157,6 +183,11 @@ function personChangeText(detail: Record<string, unknown>): string {
     else parts.push(`${key} → ${wordsOf(value)}`);
   }
   return parts.join(', ');
+}
+
+function reminderChoicesText(detail: Record<string, unknown>): string {
+  const kinds = ['flip', 'ready', 'overdue'].filter((kind) => detail[kind] === true);
+  return kinds.length === 0 ? 'no reminders' : kinds.join(', ');
 }
 
 function viaText(via: unknown): string {
