@@ -22,6 +22,7 @@ export const routes: Routes = [
       { path: 'formulas', loadChildren: () => import('./formulas/formulas.routes') },
       { path: 'batches', loadChildren: () => import('./batches/batches.routes') },
       { path: 'curing', loadChildren: () => import('./curing/curing.routes') },
+      { path: 'plans', loadChildren: () => import('./plans/plans.routes') },
       {
         path: 'people',
         canMatch: [roleGuard('admin')],

@@ -25,6 +25,7 @@ interface Area {
 
 const AREAS: readonly Area[] = [
   { path: '/formulas', label: 'Formulas', icon: 'menu_book' },
+  { path: '/plans', label: 'Plans', icon: 'event' },
   { path: '/batches', label: 'Batch log', icon: 'list_alt' },
   { path: '/curing', label: 'Curing now', icon: 'hourglass_top' },
   { path: '/people', label: 'People', icon: 'group', roles: ['admin'] },
@@ -32,7 +33,7 @@ const AREAS: readonly Area[] = [
 
 const ROLE_NAMES: Record<Role, string> = { admin: 'Admin', cook: 'Cook', reviewer: 'Reviewer' };
 
-/** The console's frame: one left navigation with the four areas, and who is signed in. */
+/** The console's frame: one left navigation with the areas, and who is signed in. */
 @Component({
   selector: 'app-shell',
   imports: [

@@ -1,0 +1,49 @@
+import { HttpClient } from '@angular/common/http';
+import { Injectable, inject } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
+import type { FormulaSummary } from '../formulas/formula-api-types';
+import type { AssemblyOption, PlanRequest, PresentedPlan, RecordedPlan } from './plan-types';
+
+/**
+ * The plans API: the assemblies that can be planned, a plan (POST /api/plans), recording its
+ * batches as planned (POST /api/plans/record) and its production sheets as a PDF
+ * (POST /api/plans/sheet.pdf). Requests go through the app's HttpClient, so every POST carries
+ * the session's CSRF token (core/api/api-error-interceptor.ts) and fails as an ApiError.
+ */
+@Injectable({ providedIn: 'root' })
+export class PlanApi {
+  private readonly http = inject(HttpClient);
+
+  /** The assemblies of the library by title (GET /api/formulas, filtered here to assemblies). */
+  async assemblies(): Promise<AssemblyOption[]> {
+    const { formulas } = await firstValueFrom(
+      this.http.get<{ formulas: readonly FormulaSummary[] }>('/api/formulas'),
+    );
+    const options: AssemblyOption[] = [];
+    for (const item of formulas) {
+      if (item.kind !== 'assembly' || item.id === null || item.duplicate) continue;
+      options.push({ id: item.id, title: item.title ?? item.id, valid: item.valid });
+    }
+    return options.sort((a, b) => a.title.localeCompare(b.title));
+  }
+
+  /** Works out a plan; records nothing. */
+  plan(request: PlanRequest): Promise<PresentedPlan> {
+    return firstValueFrom(this.http.post<PresentedPlan>('/api/plans', request));
+  }
+
+  /** Records every batch of the plan as planned (admins and cooks), all or none. */
+  record(request: PlanRequest): Promise<RecordedPlan> {
+    return firstValueFrom(this.http.post<RecordedPlan>('/api/plans/record', request));
+  }
+
+  /** The plan's production sheets, one a day, as a PDF. */
+  sheetPdf(request: PlanRequest): Promise<Blob> {
+    return firstValueFrom(
+      this.http.post('/api/plans/sheet.pdf', request, {
+        responseType: 'blob',
+        headers: { Accept: 'application/pdf' },
+      }),
+    );
+  }
+}

@@ -1,0 +1,50 @@
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { MatIcon } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
+import { ALLERGENS } from '../../formulas/formula-vocabulary';
+import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { PlanSchedule } from '../plan-schedule/plan-schedule';
+import type { PresentedPlan } from '../plan-types';
+
+/**
+ * A plan as the kitchen works from it: the allergens of the whole menu item first, the warnings,
+ * the schedule day by day, the cautions (always shown: they are about food safety), then every
+ * batch with what it is for, its quantities and its batch sheet, and the pull list added up over
+ * every batch. Presentational only.
+ */
+@Component({
+  selector: 'app-plan-view',
+  imports: [RouterLink, MatIcon, IsoDayPipe, BatchSheet, PlanSchedule],
+  templateUrl: './plan-view.html',
+  styleUrls: ['./plan-view.css', '../../formulas/visually-hidden.css'],
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class PlanView {
+  /** The plan, as the API presents it. */
+  readonly plan = input.required<PresentedPlan>();
+
+  protected readonly allergens = computed(() =>
+    this.plan().allergens.map(
+      (allergen) => ALLERGENS.find((choice) => choice.value === allergen)?.label ?? allergen,
+    ),
+  );
+  protected readonly dayCount = computed(
+    () => new Set(this.plan().batches.map((batch) => batch.start)).size,
+  );
+  protected readonly unitWords = computed(() =>
+    this.plan().units === 'us' ? 'US units' : 'metric units',
+  );
+  /** Whether any material is pulled before trimming (a trim yield): its column is shown. */
+  protected readonly beforeTrim = computed(() =>
+    this.plan().pullList.some((item) => item.beforeTrim !== undefined),
+  );
+  private readonly titles = computed(
+    () => new Map(this.plan().batches.map((batch) => [batch.formula.id, batch.formula.title])),
+  );
+
+  /** The batches that use a material, by title. */
+  protected usedBy(ids: readonly string[]): string {
+    return ids.map((id) => this.titles().get(id) ?? id).join('; ');
+  }
+}
