@@ -1,5 +1,6 @@
 import type { FormArray, FormGroup, NonNullableFormBuilder } from '@angular/forms';
 import type {
+  AssemblyComponent,
   BlendComponent,
   BlendFormula,
   CureFormula,
@@ -8,7 +9,14 @@ import type {
   Formula,
   HoldRule,
 } from '../../../shared/formula/formula-types.ts';
-import { FormulaForm, componentRow, ingredientRow, prefermentRow } from './formula-form-model';
+import { COUNT_KEYS, QUANTITY_KEYS } from './assembly-quantity';
+import {
+  FormulaForm,
+  assemblyPartRow,
+  componentRow,
+  ingredientRow,
+  prefermentRow,
+} from './formula-form-model';
 import type { HoldRateKey } from './formula-vocabulary';
 
 // Keys of an ingredient the table edits; anything else rides along in `rest`.
@@ -58,10 +66,15 @@ export function fillFormulaForm(
     preferment?.ingredients?.length ?? 0,
     () => prefermentRow(fb),
   );
-  const components = Array.isArray(b.components) ? b.components : [];
+  // An assembly's components are its parts, not a blend's two trimmings.
+  const components = f.kind === 'blend' && Array.isArray(b.components) ? b.components : [];
   rebuild(form.controls.blend.controls.components, Math.max(2, components.length), () =>
     componentRow(fb),
   );
+  const parts = (
+    f.kind === 'assembly' && Array.isArray(f['components']) ? f['components'] : []
+  ) as Partial<AssemblyComponent>[];
+  rebuild(form.controls.parts, parts.length, () => assemblyPartRow(fb));
   form.setValue({
     title: text(f.title),
     steps: lines(f.steps),
@@ -130,6 +143,19 @@ export function fillFormulaForm(
       cook: num(c.yields?.cook ?? b.yields?.cook),
       slice: num(c.yields?.slice ?? b.yields?.slice),
     },
+    parts: parts.map((part) => {
+      // The first quantity key given; a part without one is shown as portions, left empty.
+      const quantity = QUANTITY_KEYS.find((key) => part[key] !== undefined) ?? 'portions';
+      return {
+        formula: text(part.formula),
+        quantity,
+        count: COUNT_KEYS.includes(quantity) ? num(part[quantity]) : null,
+        amount: text(part.amount),
+        slice: text(part.slice),
+        thickness: text(part.thickness),
+        largest_piece: text(part.largest_piece),
+      };
+    }),
   });
 }
 

@@ -46,7 +46,7 @@ export type SaveResult =
   | { readonly kind: 'invalid'; readonly message: string; readonly problems: FormulaProblem[] }
   | { readonly kind: 'failed'; readonly message: string };
 
-const KNOWN_KINDS: readonly FormulaKind[] = ['cure', 'dough', 'blend', 'mix'];
+const KNOWN_KINDS: readonly FormulaKind[] = ['cure', 'dough', 'blend', 'mix', 'assembly'];
 const IDLE: DraftValidation = { status: 'idle', text: '', usable: false, problems: [] };
 
 /**

@@ -13,6 +13,7 @@ import type {
   FoodKey,
   YeastKind,
 } from '../../../shared/formula/formula-types.ts';
+import type { QuantityKey } from './assembly-quantity';
 import type { HoldRateKey } from './formula-vocabulary';
 
 /** fat or lean: how a blend component or target is stated. */
@@ -86,6 +87,21 @@ export type BlendGroup = FormGroup<{
   portion: FormControl<string>;
 }>;
 
+/**
+ * One part of an assembly: the formula it names and how much of it goes into one unit, by one
+ * quantity key; a count for portions, pieces, slices and units, a weight for amount. Slice goes
+ * with slices; thickness and heaviest piece size a cure's hold.
+ */
+export type AssemblyPartRow = FormGroup<{
+  formula: FormControl<string>;
+  quantity: FormControl<QuantityKey>;
+  count: Num;
+  amount: FormControl<string>;
+  slice: FormControl<string>;
+  thickness: FormControl<string>;
+  largest_piece: FormControl<string>;
+}>;
+
 /** Weight after each step, % of the weight before it (cures and blends). */
 export type YieldsGroup = FormGroup<{
   trim: Num;
@@ -108,6 +124,8 @@ export type FormulaForm = FormGroup<{
   dough: DoughGroup;
   blend: BlendGroup;
   yields: YieldsGroup;
+  /** An assembly's parts. */
+  parts: FormArray<AssemblyPartRow>;
 }>;
 
 const PCT = [Validators.required, Validators.min(0)];
@@ -145,6 +163,19 @@ export function componentRow(fb: NonNullableFormBuilder): ComponentRow {
     name: fb.control('', Validators.required),
     measure: fb.control<FatMeasure>('fat'),
     value: fb.control<number | null>(null, [Validators.required, Validators.min(0)]),
+  });
+}
+
+/** A new assembly part: a formula still to choose, one portion of it. */
+export function assemblyPartRow(fb: NonNullableFormBuilder): AssemblyPartRow {
+  return fb.group({
+    formula: fb.control('', Validators.required),
+    quantity: fb.control<QuantityKey>('portions'),
+    count: fb.control<number | null>(1, [Validators.min(1), Validators.max(1000)]),
+    amount: fb.control(''),
+    slice: fb.control(''),
+    thickness: fb.control(''),
+    largest_piece: fb.control(''),
   });
 }
 
@@ -195,5 +226,6 @@ export function createFormulaForm(fb: NonNullableFormBuilder): FormulaForm {
       cook: optional(),
       slice: optional(),
     }),
+    parts: fb.array<AssemblyPartRow>([]),
   });
 }

@@ -4,7 +4,7 @@ import type {
   MixFormula,
   Yields,
 } from '../../../shared/formula/formula-types.ts';
-import type { FormulaForm, IngredientRow } from './formula-form-model';
+import type { AssemblyPartRow, FormulaForm, IngredientRow } from './formula-form-model';
 
 type Loose = Record<string, unknown>;
 
@@ -95,8 +95,7 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
       break;
     }
     case 'assembly':
-      // The parts are edited in the YAML view; the form keeps them as they are.
-      formula = common;
+      formula = { ...common, components: v.parts.map(partOf) };
       break;
     case 'mix':
       formula = {
@@ -125,6 +124,24 @@ function ingredientOf(row: IngredientRow, keys: readonly string[]): Loose {
     ...own,
     ...v.rest,
     allergens: v.allergens.length > 0 ? v.allergens : undefined,
+  };
+}
+
+/**
+ * One part of an assembly: the formula, its one quantity key with the value, the slice weight
+ * only with slices, and a cure's sizes only with a cure's quantity (slices or amount), so that a
+ * part switched to another key leaves nothing behind that no longer fits.
+ */
+function partOf(part: ReturnType<AssemblyPartRow['getRawValue']>): Loose {
+  const key = part.quantity;
+  const sized = key === 'slices' || key === 'amount';
+  const given = (value: string): string | undefined => value.trim() || undefined;
+  return {
+    formula: part.formula.trim(),
+    [key]: key === 'amount' ? given(part.amount) : (part.count ?? undefined),
+    slice: key === 'slices' ? given(part.slice) : undefined,
+    thickness: sized ? given(part.thickness) : undefined,
+    largest_piece: sized ? given(part.largest_piece) : undefined,
   };
 }
 

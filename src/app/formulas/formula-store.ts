@@ -42,7 +42,9 @@ export class FormulaStore {
   /** The kinds that occur in the list, in the order the product names them. */
   readonly kinds = computed(() => {
     const present = new Set(this.listState()?.map((item) => item.kind));
-    return (['cure', 'dough', 'blend', 'mix'] as const).filter((kind) => present.has(kind));
+    return (['cure', 'dough', 'blend', 'mix', 'assembly'] as const).filter((kind) =>
+      present.has(kind),
+    );
   });
 
   /** Fetches the list of formulas again. */

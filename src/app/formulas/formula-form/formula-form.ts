@@ -3,6 +3,7 @@ import { ReactiveFormsModule } from '@angular/forms';
 import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
+import { AssemblyParts } from '../assembly-parts/assembly-parts';
 import { BlendFields } from '../blend-fields/blend-fields';
 import { CureFields } from '../cure-fields/cure-fields';
 import { DoughFields } from '../dough-fields/dough-fields';
@@ -17,12 +18,14 @@ const PCT_HEADINGS: Record<FormulaKind, string> = {
   dough: "Baker's %",
   blend: '% of meat',
   mix: '% of the base',
+  // An assembly has parts, not ingredients.
   assembly: '',
 };
 
 /**
  * A formula as a structured form: title, ingredients, the fields of its kind, yields, method,
- * cautions and notes. Read-only people see the same form, locked.
+ * cautions and notes; an assembly has its parts instead of ingredients and yields. Read-only
+ * people see the same form, locked.
  */
 @Component({
   selector: 'app-formula-form',
@@ -38,6 +41,7 @@ const PCT_HEADINGS: Record<FormulaKind, string> = {
     DoughFields,
     BlendFields,
     YieldsFields,
+    AssemblyParts,
   ],
   templateUrl: './formula-form.html',
   styleUrl: './formula-form.css',
@@ -52,6 +56,8 @@ export class FormulaForm {
   readonly readOnly = input(false);
   /** Whether the form shows what the YAML says; false while the YAML has errors. */
   readonly inStep = input(true);
+  /** The formula's id (an assembly cannot name itself as a part). */
+  readonly formulaId = input<string | null>(null);
 
   protected readonly cureMethod = watchControl(
     this.form,

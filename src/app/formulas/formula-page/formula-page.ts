@@ -20,6 +20,8 @@ import { MatTab, MatTabGroup } from '@angular/material/tabs';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import { SessionStore } from '../../core/auth/session-store';
+import { saveBlob } from '../../ui/save-blob';
+import { AssemblyPreview } from '../assembly-preview/assembly-preview';
 import { FormulaProblem, shortRevision } from '../formula-api-types';
 import { FormulaDraft } from '../formula-draft';
 import { FormulaForm } from '../formula-form/formula-form';
@@ -55,6 +57,7 @@ const YAML_TAB = 1;
     FormulaPreview,
     FormulaSave,
     FormulaHistory,
+    AssemblyPreview,
   ],
   providers: [
     FormulaDraft,
@@ -148,12 +151,6 @@ export default class FormulaPage implements LeavesSafely {
     const detail = this.draft.detail();
     if (!detail) return;
     const blob = new Blob([this.draft.yaml()], { type: 'application/yaml;charset=utf-8' });
-    const url = URL.createObjectURL(blob);
-    const link = document.createElement('a');
-    link.href = url;
-    link.download = `${detail.id}.yaml`;
-    link.click();
-    // Give the browser a moment to start the download before the URL goes.
-    setTimeout(() => URL.revokeObjectURL(url), 1000);
+    saveBlob(blob, `${detail.id}.yaml`);
   }
 }

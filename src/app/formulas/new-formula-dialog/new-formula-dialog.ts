@@ -69,7 +69,9 @@ export class NewFormulaDialog {
     this.failure.set(null);
     this.problems.set([]);
     try {
-      const outcome = await this.store.create(starterYaml(kind, id, title.trim()), message.trim());
+      // An assembly starts from formulas the library has (the list page has read it).
+      const yaml = starterYaml(kind, id, title.trim(), this.store.formulas() ?? []);
+      const outcome = await this.store.create(yaml, message.trim());
       this.dialog.close(outcome.id);
     } catch (error) {
       this.failure.set(messageOf(error));
