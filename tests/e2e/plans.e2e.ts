@@ -1,0 +1,227 @@
+import assert from 'node:assert/strict';
+import { readFileSync } from 'node:fs';
+import { describe, it } from 'node:test';
+import type { Page } from 'playwright-core';
+import { collectConsoleErrors, startConsole } from './browser.ts';
+
+/** A calendar day `days` after `day` (YYYY-MM-DD). */
+function addDays(day: string, days: number): string {
+  const [y, m, d] = day.split('-').map(Number);
+  return new Date(Date.UTC(y, m - 1, d + days)).toISOString().slice(0, 10);
+}
+
+/** A day as the date box shows it and reads it back ("Dec 23, 2026"), whatever the time zone. */
+function inWords(day: string): string {
+  const [y, m, d] = day.split('-').map(Number);
+  const month = [
+    'Jan',
+    'Feb',
+    'Mar',
+    'Apr',
+    'May',
+    'Jun',
+    'Jul',
+    'Aug',
+    'Sep',
+    'Oct',
+    'Nov',
+    'Dec',
+  ];
+  return `${month[m - 1]} ${d}, ${y}`;
+}
+
+/** The text of one batch's section of the plan. */
+function batchText(page: Page, formula: string): Promise<string> {
+  return page.locator(`[data-testid="plan-batch"][data-formula="${formula}"]`).innerText();
+}
+
+// The server plans from its own today (UTC); three weeks ahead leaves room for the belly's cure.
+const TODAY = new Date().toISOString().slice(0, 10);
+const SERVICE = addDays(TODAY, 21);
+
+describe('plans in the console', () => {
+  it('should let a cook plan 120 burgers, see every batch, day and allergen, and record them', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    await page.getByRole('link', { name: 'Plans' }).click();
+    await page.waitForURL(/\/plans$/);
+    // Opened from the keyboard: the select's long label lies over the middle of it.
+    await page.getByTestId('plan-assembly').focus();
+    await page.keyboard.press('Enter');
+    await page.getByRole('option', { name: /Smokehouse burger/ }).click();
+    await page.getByTestId('plan-count').fill('120');
+    await page.getByTestId('plan-for').fill(inWords(SERVICE));
+    await page.getByTestId('plan-show').click();
+    await page.waitForURL(
+      (url) =>
+        url.pathname === '/plans' &&
+        url.searchParams.get('assembly') === 'smokehouse-burger' &&
+        url.searchParams.get('count') === '120' &&
+        url.searchParams.get('for') === SERVICE,
+    );
+    await page.getByTestId('plan-title').getByText('Smokehouse burger × 120').waitFor();
+
+    // Start days, worked back from service (formulas/*.yaml; lead days are the kitchen's own
+    // rule, common practice, no source): the belly's hold is 2 days per cm × 4 cm = 8 days, plus
+    // 1 day to smoke and slice = 9 days ahead; the bun's sponge is mixed the day before; the
+    // grind and the sauce are made on the day.
+    const days = await page
+      .getByTestId('plan-day')
+      .evaluateAll((items) =>
+        items.map((item) => [
+          item.getAttribute('data-date'),
+          [...item.querySelectorAll('[data-testid="plan-day-batch"]')]
+            .map((batch) => batch.getAttribute('data-formula'))
+            .sort(),
+        ]),
+      );
+    assert.deepEqual(days, [
+      [addDays(SERVICE, -9), ['quillmoor-belly']],
+      [addDays(SERVICE, -1), ['pit-bun']],
+      [SERVICE, ['chuck-grind', 'house-sauce']],
+    ]);
+    assert.equal(await page.getByTestId('plan-batch').count(), 4);
+
+    // 120 burgers × 2 patties = 240 portions of 4 oz; 240 × 113.398 g = 27 215.5 g → 27.216 kg.
+    // source: the formula files (portions: 2, portion: 4 oz); 1 oz = 28.349523125 g (NIST SP 811)
+    const grind = await batchText(page, 'chuck-grind');
+    assert.match(grind, /240 portions of 4 oz/);
+    assert.match(grind, /27\.216 kg/);
+    // 120 × 1 bun = 120 pieces; 120 × 3 slices × 25 g = 9000 g of sliced belly; 120 × 20 g = 2400 g
+    // of sauce. source: formulas/smokehouse-burger.yaml
+    assert.match(await batchText(page, 'pit-bun'), /120 pieces of 90 g/);
+    assert.match(await batchText(page, 'quillmoor-belly'), /9000 g sliced/);
+    assert.match(await batchText(page, 'house-sauce'), /2400 g/);
+
+    // Milk, egg and wheat from the bun; egg and fish (anchovy in Worcestershire) from the sauce.
+    assert.match(
+      await page.getByTestId('plan-allergens').innerText(),
+      /Contains: Milk, Egg, Fish, Wheat/,
+    );
+    assert.match(await page.getByTestId('plan-cautions').innerText(), /Curing salt is poisonous/);
+    assert.ok((await page.getByTestId('pull-item').count()) > 10, 'the pull list is filled');
+    await session.screenshot(page, 'plan-page');
+
+    // The PDF is asked for through the app's HTTP layer, with the session's CSRF token.
+    const pdfRequest = page.waitForRequest((request) => request.url().endsWith('/sheet.pdf'));
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByTestId('plan-pdf').click(),
+    ]);
+    assert.ok((await pdfRequest).headers()['x-csrf-token'], 'the PDF request carries the token');
+    assert.equal(download.suggestedFilename(), `plan-smokehouse-burger-${SERVICE}.pdf`);
+    assert.equal(
+      readFileSync(await download.path())
+        .subarray(0, 5)
+        .toString(),
+      '%PDF-',
+    );
+
+    await page.getByTestId('plan-record').click();
+    const recorded = page.getByTestId('plan-recorded-batch');
+    await page.getByTestId('plan-recorded').waitFor();
+    assert.equal(await recorded.count(), 4);
+    const lots = await recorded.allInnerTexts();
+    assert.equal(await page.getByTestId('plan-record').count(), 0, 'a plan is recorded once');
+    await session.screenshot(page, 'plan-recorded');
+
+    await page.getByTestId('plan-batch-log').click();
+    await page.waitForURL(/\/batches\?status=planned$/);
+    // Each recorded lot appears in the log filtered to planned batches (newest first).
+    for (const lot of lots) {
+      await page.locator(`[data-testid="batch-row"][data-lot="${lot}"]`).waitFor();
+    }
+    await session.screenshot(page, 'plan-batch-log');
+
+    const planned = await session.server.as('tobin').get('/api/batches?status=planned&limit=100');
+    const mine = (planned.json.items as { lotCode: string; notes: string; startedOn: string }[])
+      .filter((batch) => lots.includes(batch.lotCode))
+      .map((batch) => [batch.notes, batch.startedOn]);
+    assert.equal(mine.length, 4);
+    for (const [notes] of mine) assert.equal(notes, `plan: smokehouse-burger ×120 for ${SERVICE}`);
+    assert.deepEqual(errors, []);
+  });
+
+  it('should show a linked plan to a reviewer, without a record button', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('imke');
+    const errors = collectConsoleErrors(page);
+    await page.goto(
+      `${session.server.url}/plans?assembly=smokehouse-burger&count=120&for=${SERVICE}`,
+      { waitUntil: 'networkidle' },
+    );
+    await page.getByTestId('plan-title').getByText('Smokehouse burger × 120').waitFor();
+    assert.equal(await page.getByTestId('plan-batch').count(), 4);
+    assert.equal(await page.getByTestId('plan-record').count(), 0);
+    assert.equal(await page.getByTestId('plan-pdf').count(), 1);
+    await session.screenshot(page, 'plan-reviewer');
+    const response = await session.server.as('imke').post('/api/plans/record', {
+      assembly: 'smokehouse-burger',
+      count: 120,
+      for: SERVICE,
+    });
+    assert.equal(response.status, 403, 'the server refuses a reviewer too');
+    assert.deepEqual(errors, []);
+  });
+
+  it('should show why a plan cannot be made, naming the formula', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('tobin');
+    // Service in 3 days: the belly would have to start 6 days ago.
+    await page.goto(
+      `${session.server.url}/plans?assembly=smokehouse-burger&count=120&for=${addDays(TODAY, 3)}`,
+      { waitUntil: 'networkidle' },
+    );
+    const refusal = page.getByTestId('plan-refusal');
+    await refusal.waitFor();
+    assert.match(await refusal.innerText(), /before today/);
+    assert.equal(await page.getByTestId('plan-refusal-formula').innerText(), 'quillmoor-belly');
+    assert.equal(await page.getByTestId('plan-record').count(), 0);
+    await session.screenshot(page, 'plan-refused');
+  });
+
+  it('should show an assembly’s parts as a table in Formulas, with a small plan as its preview', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/formulas`, { waitUntil: 'networkidle' });
+    await page
+      .getByTestId('kind-filter')
+      .getByText(/Assembly/)
+      .click();
+    await page.locator('[data-testid="formula-row"][data-formula-id="smokehouse-burger"]').click();
+    await page.waitForURL(/\/formulas\/smokehouse-burger$/);
+    const parts = page.getByTestId('assembly-part');
+    await parts.first().waitFor();
+    assert.equal(await parts.count(), 4);
+    assert.equal(await parts.nth(0).getByTestId('part-count').inputValue(), '2');
+    assert.equal(await parts.nth(2).getByTestId('part-slice').inputValue(), '25 g');
+    assert.equal(await parts.nth(2).getByTestId('part-thickness').inputValue(), '4 cm');
+
+    // A dough is counted in pieces or by finished weight, nothing else.
+    await parts.nth(1).getByTestId('part-quantity').focus();
+    await page.keyboard.press('Enter');
+    assert.deepEqual(await page.getByRole('option').allInnerTexts(), ['Pieces', 'Finished weight']);
+    await page.keyboard.press('Escape');
+
+    // The preview plans 10 burgers two weeks ahead: 10 × 2 = 20 portions of the grind.
+    const preview = page.getByTestId('assembly-preview');
+    await preview.getByText('20 portions of 4 oz').waitFor();
+    assert.match(
+      await page.getByTestId('assembly-preview-allergens').innerText(),
+      /milk, egg, fish, wheat/,
+    );
+    await session.screenshot(page, 'assembly-formula');
+
+    // Three patties instead of two: the YAML follows the form, line by line.
+    await parts.nth(0).getByTestId('part-count').fill('3');
+    await page.getByRole('tab', { name: 'YAML' }).click();
+    await page.waitForFunction(() =>
+      (
+        document.querySelector('[data-testid="yaml-textarea"]') as HTMLTextAreaElement | null
+      )?.value.includes('- { formula: chuck-grind, portions: 3 }'),
+    );
+    assert.deepEqual(errors, []);
+  });
+});
