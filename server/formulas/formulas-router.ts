@@ -36,7 +36,7 @@ import { FormulaWriter } from './formula-writer.ts';
 import { formulaWriteRoutes } from './formula-write-routes.ts';
 import { diffHunks, diffLines } from './line-diff.ts';
 
-const KINDS = ['cure', 'dough', 'blend', 'mix'];
+const KINDS = ['cure', 'dough', 'blend', 'mix', 'assembly'];
 
 // Validation reads any text, empty or too large included, so that it answers with the same
 // problem the command line gives for that file ("the file is empty", "larger than 256 KB").

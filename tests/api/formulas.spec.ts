@@ -57,6 +57,12 @@ describe('reading formulas', () => {
     assert.ok(cures.json.formulas.every((f: { kind: string }) => f.kind === 'cure'));
     assert.ok(cures.json.formulas.some((f: { id: string }) => f.id === 'ham-pump'));
     assert.equal((await server.as('tobin').get('/api/formulas?kind=soup')).status, 400);
+    const assemblies = await server.as('tobin').get('/api/formulas?kind=assembly');
+    assert.equal(assemblies.status, 200);
+    assert.deepEqual(assemblies.json.formulas.map((f: { id: string }) => f.id).sort(), [
+      'corned-beef-sandwich',
+      'smokehouse-burger',
+    ]);
   });
 
   it('should list a file with errors as not valid, with its problem count', async (t) => {
