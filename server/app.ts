@@ -65,7 +65,7 @@ export function createApp(context: AppContext): Express {
   // Anyone holding an invitation link; the token is the proof, so no sign-in and no CSRF token.
   api.use('/invitations', invitationsRouter(context));
   // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes.
-  api.use(authenticate(context.people), requireCsrfToken);
+  api.use(authenticate(context.people, context.config.signInLimit), requireCsrfToken);
   api.use('/calc', calcRouter(context));
   api.use('/plans', plansRouter(context));
   api.use('/formulas', formulasRouter(context));

@@ -17,7 +17,7 @@ export async function openContext(
   config: ServerConfig,
   { now = () => new Date() }: { now?: () => Date } = {},
 ): Promise<AppContext> {
-  const db = await openDatabase(config.databaseFile);
+  const db = await openDatabase(config.databaseFile, { busyTimeoutMs: config.busyTimeoutMs });
   const audit = new AuditRepository(db);
   return {
     config,

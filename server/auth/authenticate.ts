@@ -5,6 +5,7 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import { AppError, forbidden } from '../http/app-error.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person, Role } from '../people/person.ts';
+import { FailedSignIns } from './failed-sign-ins.ts';
 import { VerifiedCredentials } from './verified-credentials.ts';
 import './request-person.ts';
 
@@ -44,13 +45,15 @@ export function useBasicStrategy(people: PeopleRepository, audit: AuditRepositor
 
 /**
  * Who is asking: the session's person (looked up on every request, so a deactivated person's
- * session ends at once) or HTTP Basic credentials. Anonymous requests get 401.
+ * session ends at once) or HTTP Basic credentials. Anonymous requests get 401. An address with
+ * `signInLimit` failed Basic sign-ins in 15 minutes gets 429 until its window ends, as the form.
  */
-export function authenticate(people: PeopleRepository): RequestHandler {
+export function authenticate(people: PeopleRepository, signInLimit = 10): RequestHandler {
   const basic = passport.authenticate('basic', {
     session: false,
     failWithError: true,
   }) as RequestHandler;
+  const failures = new FailedSignIns(signInLimit);
   return (req: Request, res: Response, next: NextFunction) => {
     const personId = req.session?.personId;
     if (personId !== undefined) {
@@ -76,8 +79,22 @@ export function authenticate(people: PeopleRepository): RequestHandler {
       return;
     }
     if (req.headers.authorization?.startsWith('Basic ')) {
+      const address = req.ip ?? '';
+      const wait = failures.waitFor(address);
+      if (wait > 0) {
+        res.setHeader('Retry-After', String(Math.ceil(wait / 1000)));
+        next(
+          new AppError(
+            429,
+            'too-many-attempts',
+            'too many failed sign-in attempts; wait 15 minutes and try again',
+          ),
+        );
+        return;
+      }
       basic(req, res, (error?: unknown) => {
         if (error || !req.user) {
+          failures.failed(address);
           next(
             new AppError(
               401,

@@ -13,6 +13,12 @@ import * as reminders from './migrations/006-reminders.ts';
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
 
+/** How a database is opened. */
+export interface OpenOptions {
+  /** How long a write waits for another connection's write lock (LARDER_BUSY_TIMEOUT_MS). */
+  readonly busyTimeoutMs?: number;
+}
+
 /** Every schema change, in order. Bundled, so listed here rather than found on disk. */
 const MIGRATIONS = [initial, batchSortIndexes, sessionCutoff, outbox, invitations, reminders];
 
@@ -29,7 +35,7 @@ export interface Database {
  * Sequelize's SQLite dialect opens one connection per transaction and never runs the
  * afterConnect hook, so we wrap its connection manager instead.
  */
-function configureEachConnection(sequelize: Sequelize): void {
+function configureEachConnection(sequelize: Sequelize, busyTimeoutMs: number): void {
   const manager = sequelize.connectionManager as unknown as {
     getConnection(options?: object): Promise<SqliteConnection>;
   };
@@ -38,9 +44,13 @@ function configureEachConnection(sequelize: Sequelize): void {
   manager.getConnection = async (options) => {
     const connection = await getConnection(options);
     if (!configured.has(connection)) {
-      connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
+      // A statement run without a callback (Sequelize's own PRAGMA foreign_keys) reports its
+      // failure as an 'error' event, which would end the process: the next query fails anyway.
+      connection.on('error', () => undefined);
+      connection.configure('busyTimeout', busyTimeoutMs);
       // WAL with NORMAL sync keeps every committed transaction through a crash of the process.
-      connection.exec('PRAGMA synchronous = NORMAL');
+      // When it cannot be set (a read-only file) SQLite keeps FULL, which is safer still.
+      connection.exec('PRAGMA synchronous = NORMAL', () => undefined);
       configured.add(connection);
     }
     return connection;
@@ -49,18 +59,37 @@ function configureEachConnection(sequelize: Sequelize): void {
 
 interface SqliteConnection {
   configure(option: 'busyTimeout', value: number): void;
-  exec(sql: string): void;
+  exec(sql: string, callback: (error: Error | null) => void): void;
+  on(event: 'error', listener: (error: Error) => void): void;
 }
 
 /**
  * Opens (creating if needed) the SQLite file, sets WAL mode and a busy timeout on every
  * connection, and applies pending migrations. Never uses sync(): the schema is migrations only.
  */
-export async function openDatabase(file: string): Promise<Database> {
+export async function openDatabase(
+  file: string,
+  { busyTimeoutMs = BUSY_TIMEOUT_MS }: OpenOptions = {},
+): Promise<Database> {
   if (file !== ':memory:') mkdirSync(path.dirname(file), { recursive: true });
-  const sequelize = new Sequelize({ dialect: 'sqlite', storage: file, logging: false });
-  configureEachConnection(sequelize);
-  await sequelize.query('PRAGMA journal_mode = WAL');
+  const sequelize = new Sequelize({
+    dialect: 'sqlite',
+    storage: file,
+    logging: false,
+    // SQLite's busy timeout does the waiting; Sequelize's default of 5 tries on SQLITE_BUSY would
+    // make a write wait five busy timeouts for a lock another program holds.
+    retry: { max: 1 },
+  });
+  configureEachConnection(sequelize, busyTimeoutMs);
+  try {
+    await sequelize.query('PRAGMA journal_mode = WAL');
+  } catch (error) {
+    await sequelize.close();
+    // Say which file: SQLite's own message ("attempt to write a readonly database") does not.
+    throw new Error(`cannot open the database ${file}: ${(error as Error).message}`, {
+      cause: error,
+    });
+  }
   const umzug = new Umzug({
     migrations: MIGRATIONS.map((migration) => ({
       name: migration.name,
@@ -77,7 +106,10 @@ export async function openDatabase(file: string): Promise<Database> {
     // process or an autocommit statement holds the lock.
     write: (work) =>
       queue.run(() =>
-        retryWhileBusy(() => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, work)),
+        retryWhileBusy(
+          () => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, work),
+          busyTimeoutMs,
+        ),
       ),
     close: () => sequelize.close(),
   };

@@ -30,14 +30,22 @@ const BUSY_PAUSES = [20, 40, 80, 160, 320, 500, 800, 1000];
 
 /**
  * Runs a whole write transaction again while another connection (a session save, another
- * process) holds the write lock. Safe because a busy transaction wrote nothing.
+ * process) holds the write lock. Safe because a busy transaction wrote nothing. Each try already
+ * waits in SQLite's busy handler, so tries stop once `patienceMs` has gone by since the first:
+ * a lock held longer (another program's open transaction) is answered, not waited out 9 times.
  */
-export async function retryWhileBusy<T>(work: () => Promise<T>): Promise<T> {
+export async function retryWhileBusy<T>(work: () => Promise<T>, patienceMs = 10_000): Promise<T> {
+  const started = Date.now();
   for (let attempt = 0; ; attempt++) {
     try {
       return await work();
     } catch (error) {
-      if (!isBusy(error) || attempt >= BUSY_PAUSES.length) throw error;
+      if (
+        !isBusy(error) ||
+        attempt >= BUSY_PAUSES.length ||
+        Date.now() - started + BUSY_PAUSES[attempt] > patienceMs
+      )
+        throw error;
       await new Promise((resolve) => setTimeout(resolve, BUSY_PAUSES[attempt]));
     }
   }

@@ -109,13 +109,14 @@ export class FormulaHistory {
 
   /** Records a revision; returns its row id. */
   async insert(revision: NewRevision, transaction: Transaction): Promise<number> {
-    // sqlite answers an INSERT with [last row id, rows changed].
+    // sqlite answers an INSERT with [last row id, rows changed]. Bound, not replaced into the SQL:
+    // a file's text may hold any character, and a NUL would end the statement early.
     const [rowId] = (await this.db.sequelize.query(
       `INSERT INTO formula_revisions
          (formula_id, revision, yaml, title, kind, message, source, author_id, created_at)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+       VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
       {
-        replacements: [
+        bind: [
           revision.formulaId,
           revision.revision,
           revision.yaml,
@@ -194,9 +195,18 @@ export class FormulaHistory {
    * readers never record one change twice.
    */
   async note(files: readonly FormulaFile[]): Promise<void> {
-    const pending = [...filesById(files)].filter(
+    const unseen = [...filesById(files)].filter(
       ([id, file]) => this.latestSeen.get(id) !== file.revision,
     );
+    if (unseen.length === 0) return;
+    // A read first: after a restart nearly every file is its formula's latest recorded revision,
+    // and a read needs no write lock, which another program may be holding.
+    const latest = await this.latestOfEach();
+    const pending = unseen.filter(([id, file]) => {
+      if (latest.get(id)?.revision !== file.revision) return true;
+      this.remember(id, file.revision);
+      return false;
+    });
     if (pending.length === 0) return;
     const seen: [string, string][] = [];
     await this.db.write(async (transaction) => {

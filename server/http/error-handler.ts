@@ -12,6 +12,47 @@ interface BodyParserError {
   status?: number;
 }
 
+/** SQLite's result code of a failed query ("SQLITE_BUSY", "SQLITE_READONLY"…), if it is one. */
+function sqliteCode(error: unknown): string | undefined {
+  const e = error as { parent?: { code?: unknown }; original?: { code?: unknown }; code?: unknown };
+  const code = [e?.parent?.code, e?.original?.code, e?.code].find(
+    (c): c is string => typeof c === 'string' && c.startsWith('SQLITE_'),
+  );
+  return code;
+}
+
+/**
+ * A database that cannot take a write just now, as a 503 saying why; undefined for any other
+ * error. SQLite wrote nothing: a failed statement ends its transaction with a rollback.
+ */
+function storageError(error: unknown): AppError | undefined {
+  const code = sqliteCode(error);
+  if (code === undefined) return undefined;
+  if (code.startsWith('SQLITE_BUSY') || code.startsWith('SQLITE_LOCKED'))
+    return new AppError(
+      503,
+      'database-busy',
+      'the database is locked by another program; nothing was saved, try again in a moment',
+    );
+  if (code.startsWith('SQLITE_READONLY'))
+    return new AppError(
+      503,
+      'database-read-only',
+      'the database file cannot be written (it is read-only); nothing was saved',
+    );
+  if (
+    ['SQLITE_FULL', 'SQLITE_IOERR', 'SQLITE_CANTOPEN', 'SQLITE_PERM'].some((c) =>
+      code.startsWith(c),
+    )
+  )
+    return new AppError(
+      503,
+      'database-unavailable',
+      `the database cannot be written just now (${code}); nothing was saved`,
+    );
+  return undefined;
+}
+
 /**
  * The one place errors become responses: `{ error: { code, message, details } }`. Unknown errors
  * are logged and answered 500 without internals.
@@ -23,8 +64,14 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, _req, res, nex
   }
   let appError: AppError;
   const parserError = error as BodyParserError;
+  const storage = storageError(error);
   if (error instanceof AppError) {
     appError = error;
+  } else if (storage) {
+    // For whoever looks after the server; the message is SQLite's, without the SQL.
+    console.error(`database: ${(error as Error).message}`); // eslint-disable-line no-console -- the server log is the place for it
+    appError = storage;
+    if (storage.code === 'database-busy') res.setHeader('Retry-After', '5');
   } else if (error instanceof BatchError) {
     appError = new AppError(
       400,
