@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
-import { readFile, readdir, stat } from 'node:fs/promises';
+import { readdirSync, statSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { parseDocument } from 'yaml';
 import { readFormula, type FormulaReading } from '../../shared/index.ts';
@@ -38,7 +39,15 @@ export async function readFormulaFileAt(
   let text: string;
   let current: string;
   try {
-    current = stamp(await stat(file));
+    // Every request that needs a formula stats the folder's files: a synchronous stat takes
+    // microseconds, where fs/promises' round trip through the thread pool cost more than the
+    // calculation itself under load.
+    const info = statSync(file, { throwIfNoEntry: false });
+    if (!info) {
+      readings.delete(file);
+      return undefined;
+    }
+    current = stamp(info);
     const cached = readings.get(file);
     if (cached?.stamp === current) return cached.file;
     text = await readFile(file, 'utf8');
@@ -63,7 +72,9 @@ export async function readFormulaFileAt(
 
 /** Every *.yaml / *.yml file directly in the folder, read and checked, sorted by name. */
 export async function readFormulaFolder(folder: string): Promise<FormulaFile[]> {
-  const names = (await readdir(folder)).filter((name) => /\.ya?ml$/i.test(name)).sort();
+  const names = readdirSync(folder)
+    .filter((name) => /\.ya?ml$/i.test(name))
+    .sort();
   const files = await Promise.all(names.map((name) => readFormulaFileAt(folder, name)));
   return files.filter((file): file is FormulaFile => file !== undefined);
 }

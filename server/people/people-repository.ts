@@ -1,5 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
+import { readRow } from '../db/read-row.ts';
 import { hashPassword, verifyPassword } from '../auth/passwords.ts';
 import type { VerifiedCredentials } from '../auth/verified-credentials.ts';
 import type { Person, Role } from './person.ts';
@@ -97,12 +98,11 @@ export class PeopleRepository {
     password: string,
     verified?: VerifiedCredentials,
   ): Promise<Person | undefined> {
-    const [row] = await this.db.sequelize.query<PersonRow>(
+    // Every HTTP Basic request asks this: one plain read (readRow), not Sequelize's query path.
+    const row = await readRow<PersonRow>(
+      this.db.sequelize,
       'SELECT * FROM people WHERE username = ?',
-      {
-        replacements: [username],
-        type: QueryTypes.SELECT,
-      },
+      [username],
     );
     if (row && row.active === 1 && verified) {
       const ok = await verified.check(row.id, row.password_hash, password, () =>
@@ -189,10 +189,10 @@ export class PeopleRepository {
   async findForSession(
     id: number,
   ): Promise<{ person: Person; sessionsValidFrom: string | null } | undefined> {
-    const [row] = await this.db.sequelize.query<PersonRow>('SELECT * FROM people WHERE id = ?', {
-      replacements: [id],
-      type: QueryTypes.SELECT,
-    });
+    // Every signed-in request asks this: one plain read (readRow), not Sequelize's query path.
+    const row = await readRow<PersonRow>(this.db.sequelize, 'SELECT * FROM people WHERE id = ?', [
+      id,
+    ]);
     return row ? { person: toPerson(row), sessionsValidFrom: row.sessions_valid_from } : undefined;
   }
 
