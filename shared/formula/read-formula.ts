@@ -84,6 +84,10 @@ export function readFormula(text: string, file: string): FormulaReading {
     file,
     ...locate(doc, lineCounter, problem.path),
   });
+  // An escape in a quoted value ("\0", "\x07") writes a control character the text check above
+  // cannot see; it would reach sheets, files and the database all the same.
+  const escaped = escapedControl(value, []);
+  if (escaped) return { problems: [place(escaped)] };
   const errors = schemaErrors(value);
   if (errors.length > 0)
     return { problems: sortByPosition(schemaProblems(errors, value).map(place)) };
@@ -106,6 +110,28 @@ function controlCharacter(
   const before = text.slice(0, match.index).split('\n');
   const code = match[0].charCodeAt(0).toString(16).toUpperCase().padStart(4, '0');
   return { line: before.length, column: before[before.length - 1].length + 1, code };
+}
+
+/** The first key or string value (depth first) holding a control character, as a problem. */
+function escapedControl(value: unknown, path: (string | number)[]): ContentProblem | undefined {
+  const problem = (text: string, at: (string | number)[]): ContentProblem | undefined => {
+    const match = CONTROL.exec(text);
+    if (!match) return undefined;
+    const code = match[0].charCodeAt(0).toString(16).toUpperCase().padStart(4, '0');
+    return {
+      path: at,
+      severity: 'error',
+      message: `an escape in this value writes an invisible control character (U+${code}); delete it`,
+    };
+  };
+  if (typeof value === 'string') return problem(value, path);
+  if (value === null || typeof value !== 'object') return undefined;
+  for (const [key, item] of Object.entries(value)) {
+    const at = [...path, Array.isArray(value) ? Number(key) : key];
+    const found = problem(key, at) ?? escapedControl(item, at);
+    if (found) return found;
+  }
+  return undefined;
 }
 
 /**
@@ -160,5 +186,9 @@ export function formatProblem(problem: FormulaProblem): string {
 export function pathText(path: FormulaProblem['path']): string {
   return path
     .map((part, i) => (typeof part === 'number' ? `[${part + 1}]` : i === 0 ? part : `.${part}`))
-    .join('');
+    .join('')
+    .replace(
+      new RegExp(CONTROL.source, 'g'),
+      (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`,
+    );
 }
