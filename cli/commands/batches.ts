@@ -32,6 +32,8 @@ interface Page {
   items: BatchView[];
   next: string | null;
   total: number;
+  /** False when the server stopped counting at total (more match). */
+  totalExact?: boolean;
 }
 
 const FILTERS = [
@@ -137,7 +139,7 @@ export function batchesCommand(io: Io): Command {
         ).join('\n')}\n`,
       );
       io.out(
-        `${page.items.length} of ${page.total} batch(es)${page.next ? `; next page: --cursor ${page.next}` : ''}\n`,
+        `${page.items.length} of ${page.total}${page.totalExact === false ? '+' : ''} batch(es)${page.next ? `; next page: --cursor ${page.next}` : ''}\n`,
       );
     });
 

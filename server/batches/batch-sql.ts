@@ -74,10 +74,20 @@ function where(clauses: readonly string[]): string {
   return clauses.length ? `WHERE ${clauses.join(' AND ')}` : '';
 }
 
-/** How many batches a filter matches. */
-export function countSql(filter: BatchFilter): SqlPart {
+/**
+ * How many batches a filter matches; with `upTo`, counting stops after upTo + 1 matches (an
+ * answer above upTo means "more than upTo"). A count cannot use the keyset that makes a page
+ * cheap: it reads every match, and a filter on two columns (formula and status, say) reads each
+ * match's row, not an index alone. Stopping early keeps it within a page's time on any log.
+ */
+export function countSql(filter: BatchFilter, upTo?: number): SqlPart {
   const { clauses, values } = whereOf(filter);
-  return { sql: `SELECT COUNT(*) AS n FROM batches b ${where(clauses)}`, values };
+  if (upTo === undefined)
+    return { sql: `SELECT COUNT(*) AS n FROM batches b ${where(clauses)}`, values };
+  return {
+    sql: `SELECT COUNT(*) AS n FROM (SELECT 1 FROM batches b ${where(clauses)} LIMIT ?)`,
+    values: [...values, upTo + 1],
+  };
 }
 
 /**

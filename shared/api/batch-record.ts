@@ -71,6 +71,10 @@ export interface BatchPage {
   readonly next: string | null;
   /** Cursor of the page before this one; null on the first page. */
   readonly prev: string | null;
-  /** How many batches match the filters, on every page. */
+  /**
+   * How many batches match the filters, on every page: exact when totalExact; otherwise the
+   * server stopped counting there and more match (shown as "1000+").
+   */
   readonly total: number;
+  readonly totalExact: boolean;
 }

@@ -2,6 +2,7 @@ import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import { parseListQuery, type SortKey } from '../../server/batches/batch-query.ts';
+import { TOTAL_COUNTED } from '../../server/batches/batch-repository.ts';
 import { countSql, pageSql } from '../../server/batches/batch-sql.ts';
 import { startTestServer, type ApiClient, type TestServer } from '../helpers/test-server.ts';
 
@@ -55,6 +56,7 @@ async function walk(client: ApiClient, query: string, limit = 200): Promise<Walk
     const { items, next, prev } = response.json;
     if (total === -1) total = response.json.total;
     assert.equal(response.json.total, total, 'the total stays the same on every page');
+    assert.equal(response.json.totalExact, true, 'a log this small is counted exactly');
     assert.ok(items.length <= limit);
     pages.push(items);
     last = { prev };
@@ -281,6 +283,25 @@ describe('listing batches', () => {
       assert.match(await plan(pageSql(query, true).sql, pageSql(query, true).values), index);
       const count = countSql(query.filter);
       assert.match(await plan(count.sql, count.values), index);
+      const capped = countSql(query.filter, TOTAL_COUNTED);
+      assert.match(await plan(capped.sql, capped.values), index);
     }
+  });
+
+  it('should stop counting past the limit and say the total is not exact', async () => {
+    const batches = server.context.batches;
+    assert.ok(all.length > 5);
+    assert.deepEqual(await batches.countUpTo({}, 5), { total: 5, exact: false });
+    assert.deepEqual(await batches.countUpTo({}, all.length), { total: all.length, exact: true });
+    const bellies = all.filter((b) => b.formula.id === 'quillmoor-belly').length;
+    assert.deepEqual(await batches.countUpTo({ formula: 'quillmoor-belly' }, bellies - 1), {
+      total: bellies - 1,
+      exact: false,
+    });
+    assert.deepEqual(await batches.countUpTo({ formula: 'no-such-formula' }, 5), {
+      total: 0,
+      exact: true,
+    });
+    assert.ok(all.length < TOTAL_COUNTED, 'the demo log is counted exactly on every page');
   });
 });

@@ -35,8 +35,10 @@ export class BatchLog {
   readonly query = this.view.asReadonly();
   /** The batches of the page, in the view's order. */
   readonly items = computed<readonly Batch[]>(() => this.page()?.items ?? []);
-  /** How many batches match the view. */
+  /** How many batches match the view (or the most the server counted, when not exact). */
   readonly total = computed(() => this.page()?.total ?? 0);
+  /** Whether total is the whole count; if not, more batches match than it says. */
+  readonly totalExact = computed(() => this.page()?.totalExact ?? true);
   /** Whether a page is being read. */
   readonly loading = this.busy.asReadonly();
   /** Why the page could not be read, or null. */

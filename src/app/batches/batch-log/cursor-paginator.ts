@@ -28,7 +28,7 @@ import { PAGE_SIZES, type PageSize } from './log-query';
       </mat-form-field>
       <span class="range" data-testid="page-range" aria-live="polite">
         @if (range(); as r) {
-          {{ r.first }}–{{ r.last }} of {{ total() }}
+          {{ r.first }}–{{ r.last }} of {{ total() }}{{ totalExact() ? '' : '+' }}
         } @else {
           0 of {{ total() }}
         }
@@ -85,8 +85,10 @@ export class CursorPaginator {
   readonly size = input.required<PageSize>();
   /** Positions of the first and last batch shown, from 1; null when the page is empty. */
   readonly range = input.required<{ first: number; last: number } | null>();
-  /** How many batches there are in all. */
+  /** How many batches there are in all, or the most the server counted (see totalExact). */
   readonly total = input.required<number>();
+  /** False when there are more than total: the server stops counting there ("1–50 of 1000+"). */
+  readonly totalExact = input(true);
   /** Whether there is a page before this one. */
   readonly hasPrev = input.required<boolean>();
   /** Whether there is a page after this one. */
