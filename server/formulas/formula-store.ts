@@ -14,6 +14,11 @@ export interface CurrentFormula {
  * once. The YAML files stay the source of truth.
  */
 export class FormulaStore {
+  // The files of the last read and the same files after the library checks: while no file has
+  // changed on disk (each unchanged file is the same object, see readFormulaFileAt), the checks
+  // are not run again on every request.
+  private checked: { read: readonly FormulaFile[]; files: readonly FormulaFile[] } | undefined;
+
   constructor(readonly folder: string) {}
 
   /**
@@ -33,7 +38,12 @@ export class FormulaStore {
         `the formulas folder cannot be read (${code ?? String(error)})`,
       );
     }
-    return withLibraryChecks(files);
+    const last = this.checked;
+    if (last?.read.length === files.length && files.every((file, i) => file === last.read[i]))
+      return [...last.files];
+    const checked = withLibraryChecks(files);
+    this.checked = { read: files, files: checked };
+    return [...checked];
   }
 
   /** The file holding a formula id, or undefined. */
