@@ -44,8 +44,13 @@ describe('plans in the console', () => {
     const session = await startConsole(t);
     const page = await session.page('tobin');
     const errors = collectConsoleErrors(page);
+    // The list of assemblies must have arrived before the select is opened, or it opens empty.
+    const listed = page.waitForResponse(
+      (response) => new URL(response.url()).pathname === '/api/formulas' && response.ok(),
+    );
     await page.getByRole('link', { name: 'Plans' }).click();
     await page.waitForURL(/\/plans$/);
+    await listed;
     // Opened from the keyboard: the select's long label lies over the middle of it.
     await page.getByTestId('plan-assembly').focus();
     await page.keyboard.press('Enter');
