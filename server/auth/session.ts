@@ -40,7 +40,7 @@ export function sessionMiddleware(db: Database, secret: string, secure: boolean)
     // Sessions last a fixed time from sign-in; touching them would make every read a write.
     disableTouch: true,
   } as ConstructorParameters<typeof SessionStore>[0]);
-  return session({
+  const sessions = session({
     name: SESSION_COOKIE,
     secret,
     store,
@@ -50,4 +50,16 @@ export function sessionMiddleware(db: Database, secret: string, secure: boolean)
     rolling: false,
     cookie: { httpOnly: true, sameSite: 'strict', secure, maxAge: SESSION_IDLE_MS },
   });
+  // A request without a session cookie (HTTP Basic, anonymous) would get a new session object,
+  // with a random id and a hash of it, only for it to be thrown away unsaved: it gets none.
+  // Signing in (POST /session, under the API's mount) is the one such request that starts one.
+  const cookieName = `${SESSION_COOKIE}=`;
+  return (req, res, next) => {
+    if (
+      req.headers.cookie?.includes(cookieName) ||
+      (req.method === 'POST' && req.path === '/session')
+    )
+      return sessions(req, res, next);
+    next();
+  };
 }
