@@ -1,9 +1,11 @@
 // Benchmark: POST /api/calc against a bare Express route answering a JSON body of the same size,
-// both on loopback in the same run (50 connections, 10 s each). Prints requests/s, p99 and the ratio.
+// each in a process of its own on loopback, in the same run (50 connections, 10 s each). The bare
+// route is measured before and after ours and averaged, so that a change in the machine's load
+// during the run weighs on both. Prints requests/s, p99 and the ratio, for a console session
+// (cookie) and for HTTP Basic (scripts, the CLI).
 import autocannon from 'autocannon';
-import express from 'express';
-import type { AddressInfo } from 'node:net';
-import { signInCookie, startBenchServer } from './server-process.ts';
+import { spawn } from 'node:child_process';
+import { basicAuth, signInCookie, startBenchServer } from './server-process.ts';
 
 const CONNECTIONS = 50;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
@@ -12,8 +14,15 @@ const BODY = JSON.stringify({
   batch: { meat: '4.26 kg', thickness: '4 cm', start: '2026-12-02' },
 });
 
-function run(url: string, headers: Record<string, string>): Promise<autocannon.Result> {
-  return autocannon({
+interface Run {
+  perSecond: number;
+  p99: number;
+  non2xx: number;
+  errors: number;
+}
+
+async function run(url: string, headers: Record<string, string>): Promise<Run> {
+  const result = await autocannon({
     url,
     method: 'POST',
     connections: CONNECTIONS,
@@ -21,6 +30,45 @@ function run(url: string, headers: Record<string, string>): Promise<autocannon.R
     headers: { 'content-type': 'application/json', ...headers },
     body: BODY,
   });
+  return {
+    perSecond: result.requests.average,
+    p99: result.latency.p99,
+    non2xx: result.non2xx,
+    errors: result.errors + result.timeouts,
+  };
+}
+
+/** Starts bench/bare-route.ts answering `body`; returns its URL and how to stop it. */
+async function startBareRoute(body: string): Promise<{ url: string; stop: () => Promise<void> }> {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/bare-route.ts'], {
+    stdio: ['pipe', 'pipe', 'inherit'],
+  });
+  child.stdin.end(body);
+  const port = await new Promise<string>((resolve, reject) => {
+    let seen = '';
+    child.stdout.on('data', (chunk: Buffer) => {
+      seen += chunk.toString();
+      const match = /listening on (\d+)/.exec(seen);
+      if (match) resolve(match[1]);
+    });
+    child.once('exit', (code) => reject(new Error(`the bare route exited (${code})`)));
+  });
+  return {
+    url: `http://127.0.0.1:${port}/calc`,
+    stop: async () => {
+      const exited = new Promise((resolve) => child.once('exit', resolve));
+      child.kill('SIGTERM');
+      await exited;
+    },
+  };
+}
+
+function line(label: string, ours: Run, bare: number): string {
+  const ratio = ours.perSecond / bare;
+  return (
+    `  ${label}: ${ours.perSecond.toFixed(0)} req/s, p99 ${ours.p99} ms, ${ours.non2xx} non-2xx, ${ours.errors} errors; ` +
+    `ratio ${(ratio * 100).toFixed(0)} % of bare (target ≥ 50 %, p99 ≤ 25 ms)\n`
+  );
 }
 
 /** Runs the comparison and prints it. */
@@ -28,35 +76,44 @@ export async function benchCalcApi(): Promise<{ ratio: number; p99: number; rssM
   const server = await startBenchServer();
   try {
     const { cookie, csrf } = await signInCookie(server.url, 'imke', 'quillmoor-review');
-    const headers = { cookie, 'x-csrf-token': csrf };
-    const sample = await (
-      await fetch(`${server.url}/api/calc`, {
-        method: 'POST',
-        headers: { 'content-type': 'application/json', ...headers },
-        body: BODY,
-      })
-    ).text();
+    const session = { cookie, 'x-csrf-token': csrf };
+    const basic = basicAuth('imke', 'quillmoor-review');
+    const response = await fetch(`${server.url}/api/calc`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', ...session },
+      body: BODY,
+    });
+    const sample = await response.text();
+    if (response.status !== 200) throw new Error(`POST /api/calc: HTTP ${response.status}`);
 
-    // The bare route answers the same bytes without any work, in a process of its own.
-    const bare = express();
-    bare.use(express.json());
-    bare.post('/calc', (_req, res) => void res.type('json').send(sample));
-    const listener = bare.listen(0, '127.0.0.1');
-    await new Promise((resolve) => listener.once('listening', resolve));
-    const bareUrl = `http://127.0.0.1:${(listener.address() as AddressInfo).port}/calc`;
-
-    const baseline = await run(bareUrl, {});
-    let peakRss = 0;
-    const sampler = setInterval(() => (peakRss = Math.max(peakRss, server.rssMb())), 250);
-    const ours = await run(`${server.url}/api/calc`, headers);
-    clearInterval(sampler);
-    listener.close();
-    const ratio = ours.requests.average / baseline.requests.average;
+    const bareRoute = await startBareRoute(sample);
+    let before: Run;
+    let after: Run;
+    let cookieRun: Run;
+    let basicRun: Run;
+    // Requests still queued when a run stops are answered before the next run starts.
+    const settle = (): Promise<void> => new Promise((resolve) => setTimeout(resolve, 1500));
+    try {
+      before = await run(bareRoute.url, {});
+      await settle();
+      cookieRun = await run(`${server.url}/api/calc`, session);
+      await settle();
+      basicRun = await run(`${server.url}/api/calc`, basic);
+      await settle();
+      after = await run(bareRoute.url, {});
+    } finally {
+      await bareRoute.stop();
+    }
+    const bare = (before.perSecond + after.perSecond) / 2;
+    const rssMb = server.peakRssMb();
     process.stdout.write(
-      `POST /api/calc (${CONNECTIONS} connections, ${SECONDS} s, ${sample.length} B body): ${ours.requests.average.toFixed(0)} req/s, p99 ${ours.latency.p99} ms, ${ours.non2xx} non-2xx; ` +
-        `bare route ${baseline.requests.average.toFixed(0)} req/s, p99 ${baseline.latency.p99} ms; ratio ${(ratio * 100).toFixed(0)} % (target ≥ 50 %, p99 ≤ 25 ms); server RSS peak ${peakRss.toFixed(0)} MB\n`,
+      `POST /api/calc (${CONNECTIONS} connections, ${SECONDS} s per run, ${sample.length} B answer)\n` +
+        `  bare Express route: ${bare.toFixed(0)} req/s (${before.perSecond.toFixed(0)} before, ${after.perSecond.toFixed(0)} after), p99 ${Math.max(before.p99, after.p99)} ms\n` +
+        line('signed in (session cookie)', cookieRun, bare) +
+        line('HTTP Basic', basicRun, bare) +
+        `  server peak RSS ${rssMb.toFixed(0)} MB (target ≤ 250 MB)\n`,
     );
-    return { ratio, p99: ours.latency.p99, rssMb: peakRss };
+    return { ratio: cookieRun.perSecond / bare, p99: cookieRun.p99, rssMb };
   } finally {
     await server.stop();
   }

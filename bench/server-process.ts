@@ -12,6 +12,8 @@ export interface BenchServer {
   readonly dataDir: string;
   /** Resident memory of the server process now, in MB. */
   rssMb(): number;
+  /** The most resident memory the server process has held since it started (VmHWM), in MB. */
+  peakRssMb(): number;
   stop(): Promise<void>;
 }
 
@@ -47,14 +49,21 @@ export async function startBenchServer(
       reject(new Error(`the server exited (${code}) before listening:\n${seen}`)),
     );
   });
+  // Linux's account of the process; 0 where there is no /proc.
+  const statusMb = (field: 'VmRSS' | 'VmHWM'): number => {
+    try {
+      const status = readFileSync(`/proc/${child.pid}/status`, 'utf8');
+      return Number(new RegExp(`${field}:\\s+(\\d+) kB`).exec(status)?.[1] ?? 0) / 1024;
+    } catch {
+      return 0;
+    }
+  };
   return {
     url,
     child,
     dataDir,
-    rssMb: () => {
-      const status = readFileSync(`/proc/${child.pid}/status`, 'utf8');
-      return Number(/VmRSS:\s+(\d+) kB/.exec(status)?.[1] ?? 0) / 1024;
-    },
+    rssMb: () => statusMb('VmRSS'),
+    peakRssMb: () => statusMb('VmHWM'),
     stop: async () => {
       const exited = new Promise((resolve) => child.once('exit', resolve));
       child.kill('SIGTERM');
@@ -78,4 +87,9 @@ export async function signInCookie(
   if (response.status !== 201) throw new Error(`sign-in failed: ${response.status}`);
   const body = (await response.json()) as { csrfToken: string };
   return { cookie: (response.headers.get('set-cookie') ?? '').split(';')[0], csrf: body.csrfToken };
+}
+
+/** The Authorization header of HTTP Basic, as scripts and the CLI sign their requests. */
+export function basicAuth(username: string, password: string): { authorization: string } {
+  return { authorization: `Basic ${Buffer.from(`${username}:${password}`).toString('base64')}` };
 }
