@@ -1,7 +1,7 @@
 // Fills a database with a large batch log for the benchmarks: real calculated results of the
 // demo formulas, spread over about three years, with a realistic mix of statuses and sign-offs.
 // Usage: node --import tsx bench/seed-log.ts DATA_FOLDER [ROWS]
-import { cpSync, mkdirSync, readFileSync, readdirSync } from 'node:fs';
+import { cpSync, mkdirSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import sqlite3 from 'sqlite3';
 import {
@@ -22,7 +22,8 @@ const SAMPLE: Record<string, RawBatchOptions> = {
   blend: { total: '20 kg' },
   mix: { total: '2 kg' },
 };
-const STATUSES = [
+/** The statuses of the last fortnight's batches; every older batch is done, or now and then discarded. */
+const RECENT_STATUSES = [
   'done',
   'done',
   'done',
@@ -34,6 +35,11 @@ const STATUSES = [
   'in-progress',
   'planned',
 ];
+/** Days before the end of the log whose batches can still be under way. */
+const RECENT_DAYS = 14;
+
+/** What changed in how the log is seeded: a log seeded otherwise is seeded again. */
+export const SEED_VERSION = '2';
 
 interface Template {
   id: string;
@@ -75,6 +81,12 @@ function templates(): Template[] {
     });
 }
 
+function runStatement(statement: sqlite3.Statement, values: unknown[]): Promise<void> {
+  return new Promise((resolve, reject) =>
+    statement.run(values, (error: Error | null) => (error ? reject(error) : resolve())),
+  );
+}
+
 function run(db: sqlite3.Database, sql: string): Promise<void> {
   return new Promise((resolve, reject) =>
     db.run(sql, (error) => (error ? reject(error) : resolve())),
@@ -99,6 +111,8 @@ export async function seedLog(
 
   const forms = templates();
   const db = new sqlite3.Database(config.databaseFile);
+  // In order: each batch's event names it by id, and ids follow the insertion order.
+  db.serialize();
   await run(db, 'PRAGMA synchronous = OFF');
   const insert = db.prepare(
     `INSERT INTO batches (lot_code, formula_id, formula_revision, formula_title, kind, status, operator_id, started_on, ready_on,
@@ -111,6 +125,7 @@ export async function seedLog(
   const start = Date.UTC(2023, 11, 1);
   const perDay = Math.ceil(rows / 1100);
   const sequence = new Map<string, number>();
+  const pending: Promise<void>[] = [];
   await run(db, 'BEGIN');
   for (let i = 0; i < rows; i++) {
     const form = forms[i % forms.length];
@@ -120,7 +135,13 @@ export async function seedLog(
     const n = (sequence.get(key) ?? 0) + 1;
     sequence.set(key, n);
     const lot = lotCode(lotPrefix(day, form.id), n);
-    let status = STATUSES[i % STATUSES.length];
+    // Like a real log: only recent batches are still planned, under way or curing.
+    const recent = rows - 1 - i < RECENT_DAYS * perDay;
+    let status = recent
+      ? RECENT_STATUSES[i % RECENT_STATUSES.length]
+      : i % 20 === 0
+        ? 'discarded'
+        : 'done';
     if (status === 'curing' && form.kind !== 'cure')
       status = form.kind === 'dough' ? 'proofing' : 'done';
     const ready =
@@ -129,34 +150,44 @@ export async function seedLog(
         : new Date(at.getTime() + form.readyDays * 86_400_000).toISOString().slice(0, 10);
     const signed = status === 'done' && i % 3 !== 0;
     const iso = at.toISOString();
-    insert.run(
-      lot,
-      form.id,
-      form.revision,
-      form.title,
-      form.kind,
-      status,
-      1 + (i % 3),
-      day,
-      ready,
-      iso,
-      iso,
-      form.result,
-      form.nitrite,
-      signed ? 3 : null,
-      signed ? iso : null,
+    pending.push(
+      runStatement(insert, [
+        lot,
+        form.id,
+        form.revision,
+        form.title,
+        form.kind,
+        status,
+        1 + (i % 3),
+        day,
+        ready,
+        iso,
+        iso,
+        form.result,
+        form.nitrite,
+        signed ? 3 : null,
+        signed ? iso : null,
+      ]),
+      runStatement(event, [i + 1, iso, 1 + (i % 3), status]),
     );
-    event.run(i + 1, iso, 1 + (i % 3), status);
+    // Wait for the statements now and then: queued without end, a million of them would hold
+    // every result in memory at once.
+    if ((i + 1) % 1000 === 0) {
+      await Promise.all(pending);
+      pending.length = 0;
+    }
     if ((i + 1) % 20_000 === 0) {
       await run(db, 'COMMIT');
       await run(db, 'BEGIN');
       log(`\rseeded ${i + 1} of ${rows}`);
     }
   }
+  await Promise.all(pending);
   await run(db, 'COMMIT');
   await new Promise((resolve) => insert.finalize(resolve));
   await new Promise((resolve) => event.finalize(resolve));
   await new Promise((resolve) => db.close(resolve));
+  writeFileSync(path.join(dataDir, 'seed-version'), `${SEED_VERSION} ${rows}\n`);
   log('\n');
   return config.databaseFile;
 }
