@@ -1,16 +1,42 @@
 // `npm run bench [name…]`: the benchmarks in turn (all by default); each prints its own figures,
-// ratio and target. They are measurements, not tests: nothing here fails a build.
+// ratio and target. They are measurements, not tests: nothing here fails a build. The machine
+// and its load are printed too, since a shared machine's load moves every absolute figure.
+import { availableParallelism, cpus, loadavg } from 'node:os';
 import { benchBatchLog } from './batch-log.ts';
 import { benchCalcApi } from './calc-api.ts';
+import { benchCheckMany } from './check-many.ts';
 import { benchCliStart } from './cli-start.ts';
+import { benchConsoleBundle } from './console-bundle.ts';
+import { benchRecordBatches } from './record-batches.ts';
 
 const BENCHES: Record<string, () => unknown> = {
   'cli-start': benchCliStart,
+  'check-many': benchCheckMany,
   'calc-api': benchCalcApi,
   'batch-log': benchBatchLog,
+  'record-batches': benchRecordBatches,
+  'console-bundle': benchConsoleBundle,
 };
 
+const load = (): string =>
+  loadavg()
+    .map((n) => n.toFixed(2))
+    .join(' ');
+
 const chosen = process.argv.slice(2);
+const unknown = chosen.filter((name) => !(name in BENCHES));
+if (unknown.length > 0) {
+  process.stderr.write(
+    `no benchmark ${unknown.join(', ')}; there are ${Object.keys(BENCHES).join(', ')}\n`,
+  );
+  process.exit(2);
+}
+process.stdout.write(
+  `Larderbook benchmarks, ${new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC: ` +
+    `node ${process.version}, ${availableParallelism()} CPUs (${cpus()[0]?.model.trim() ?? 'unknown'})\n`,
+);
 for (const [name, bench] of Object.entries(BENCHES)) {
-  if (chosen.length === 0 || chosen.includes(name)) await bench();
+  if (chosen.length > 0 && !chosen.includes(name)) continue;
+  process.stdout.write(`\n[${name}] load average ${load()}\n`);
+  await bench();
 }

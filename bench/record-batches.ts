@@ -1,0 +1,74 @@
+// Benchmark: 20 concurrent clients recording batches for 10 s; records per second, latency, and a
+// check that the database holds exactly as many new batches as the 201s the clients received.
+// Each client sends its next request only when the last one was answered, and stops at the
+// deadline only between requests, so no request is cut off with its outcome unknown.
+import path from 'node:path';
+import sqlite3 from 'sqlite3';
+import { signInCookie, startBenchServer } from './server-process.ts';
+
+const CLIENTS = 20;
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
+const BODY = JSON.stringify({
+  formula: 'quillmoor-belly',
+  batch: { meat: '4.26 kg', thickness: '4 cm' },
+});
+
+/** Batches in the server's database, read from the file itself (not the API's total). */
+function countBatches(databaseFile: string): Promise<number> {
+  const db = new sqlite3.Database(databaseFile, sqlite3.OPEN_READONLY);
+  return new Promise<number>((resolve, reject) =>
+    db.get('SELECT COUNT(*) AS n FROM batches', (error, row: { n: number } | undefined) =>
+      error ? reject(error) : resolve(row?.n ?? 0),
+    ),
+  ).finally(() => db.close());
+}
+
+function percentile(sorted: readonly number[], p: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? 0;
+}
+
+/** Runs the recording burst and prints it. */
+export async function benchRecordBatches(): Promise<{ perSecond: number; consistent: boolean }> {
+  const server = await startBenchServer();
+  try {
+    const { cookie, csrf } = await signInCookie(server.url, 'tobin', 'quillmoor-cook');
+    const headers = { cookie, 'x-csrf-token': csrf, 'content-type': 'application/json' };
+    const databaseFile = path.join(server.dataDir, 'larderbook.sqlite');
+    const before = await countBatches(databaseFile);
+    let acknowledged = 0;
+    const refused = new Map<number, number>();
+    const times: number[] = [];
+    const started = performance.now();
+    const deadline = started + SECONDS * 1000;
+    const client = async (): Promise<void> => {
+      while (performance.now() < deadline) {
+        const sent = performance.now();
+        const response = await fetch(`${server.url}/api/batches`, {
+          method: 'POST',
+          headers,
+          body: BODY,
+        });
+        await response.arrayBuffer();
+        times.push(performance.now() - sent);
+        if (response.status === 201) acknowledged++;
+        else refused.set(response.status, (refused.get(response.status) ?? 0) + 1);
+      }
+    };
+    await Promise.all(Array.from({ length: CLIENTS }, client));
+    const elapsed = (performance.now() - started) / 1000;
+    const stored = (await countBatches(databaseFile)) - before;
+    times.sort((a, b) => a - b);
+    const perSecond = acknowledged / elapsed;
+    const others = [...refused].map(([status, n]) => `${n} × HTTP ${status}`).join(', ') || 'none';
+    const rssMb = server.peakRssMb();
+    process.stdout.write(
+      `Recording batches (${CLIENTS} clients, ${SECONDS} s, POST /api/batches)\n` +
+        `  ${perSecond.toFixed(0)} records/s, p50 ${percentile(times, 50).toFixed(0)} ms, p99 ${percentile(times, 99).toFixed(0)} ms; other answers: ${others}\n` +
+        `  acknowledged (201) ${acknowledged}, new in the database ${stored}: ${stored === acknowledged ? 'equal' : 'DIFFERENT'}\n` +
+        `  server peak RSS ${rssMb.toFixed(0)} MB (target ≤ 250 MB)\n`,
+    );
+    return { perSecond, consistent: stored === acknowledged };
+  } finally {
+    await server.stop();
+  }
+}
