@@ -23,7 +23,8 @@ export interface LeadDays {
   readonly source: string;
 }
 
-function plural(days: number): string {
+/** A number of days in words: "1 day", "8 days". */
+export function daysInWords(days: number): string {
   return days === 1 ? '1 day' : `${days} days`;
 }
 
@@ -40,7 +41,7 @@ export function leadDaysOf(formula: BatchFormula): LeadDays {
     case 'cure':
       return {
         days: DEFAULT_LEAD_DAYS.cure,
-        source: `default for a cure: ${plural(DEFAULT_LEAD_DAYS.cure)} after the hold for smoking, resting and slicing (${rule})`,
+        source: `default for a cure: ${daysInWords(DEFAULT_LEAD_DAYS.cure)} after the hold for smoking, resting and slicing (${rule})`,
       };
     case 'dough':
       return formula.preferment

@@ -1,7 +1,7 @@
 import type { BatchFormula } from '../../formula/formula-types.ts';
 import { estimateHold, type HoldMeasures } from '../cure/hold-time.ts';
 import { addDays } from '../dates.ts';
-import { leadDaysOf } from './lead-days.ts';
+import { daysInWords, leadDaysOf } from './lead-days.ts';
 import { PlanError } from './plan-error.ts';
 
 /** When a batch starts and is ready, counted back from service, with the rule in words. */
@@ -12,8 +12,6 @@ export interface PlannedDates {
   readonly leadDays: number;
   readonly rule: string;
 }
-
-const days = (n: number): string => (n === 1 ? '1 day' : `${n} days`);
 
 /**
  * Counts a batch's start back from the service day: start = service − (hold + lead days), and
@@ -40,14 +38,14 @@ export function plannedDates(
       );
     }
     holdDays = hold.days;
-    holdWords = `hold ${days(hold.days)} (${hold.rule}; ${hold.source}), then `;
+    holdWords = `hold ${daysInWords(hold.days)} (${hold.rule}; ${hold.source}), then `;
   }
   const start = addDays(serviceDate, -(holdDays + lead.days));
   const ready = addDays(start, holdDays);
   const leadWords =
     lead.days === 0
       ? `made on the day of service (lead 0 days: ${lead.source})`
-      : `${days(lead.days)} before service (lead days: ${lead.source})`;
+      : `${daysInWords(lead.days)} before service (lead days: ${lead.source})`;
   const dates =
     holdDays > 0
       ? `start ${start}, ready ${ready}, service ${serviceDate}`
