@@ -2,7 +2,7 @@ import type { BatchSummary } from '../../shared/api/batch-record.ts';
 import { addDays, type PresentedResult } from '../../shared/index.ts';
 import { drawQrCode, qrMatrix, QUIET_ZONE_MODULES } from './qr-code.ts';
 import { finishSheet, openSheet } from './sheet-document.ts';
-import { BODY, INK, TICK, type SheetLayout } from './sheet-layout.ts';
+import { BODY, INK, SMALL, TICK, type SheetLayout } from './sheet-layout.ts';
 import {
   bulletList,
   checkBlock,
@@ -12,7 +12,7 @@ import {
   subheading,
   weighTable,
 } from './sheet-sections.ts';
-import { dayInWords, momentInWords, statusInWords } from './sheet-words.ts';
+import { dayInWords, kindWords, momentInWords, statusInWords } from './sheet-words.ts';
 
 /** The parts of a recorded batch its sheet prints beside the result. */
 export type SheetRecord = Pick<
@@ -30,16 +30,11 @@ export interface SheetSource {
 export const NO_LOT = 'not recorded';
 /** Widest the QR code may be, quiet zone included, points (about 27 mm). */
 const QR_SIDE = 76;
-const SMALL = BODY - 1.5;
 const REFUSAL = 'REFUSED: critical limit exceeded. Do not make this batch.';
 
 /** The first 12 hex digits of a revision: enough to tell revisions apart on paper. */
 export function shortRevision(revision: string): string {
   return revision.slice(0, 12);
-}
-
-function kindWords(kind: string): string {
-  return kind.charAt(0).toUpperCase() + kind.slice(1);
 }
 
 /** Label over value, side by side along a row: the record's facts. */

@@ -1,15 +1,9 @@
 import type { PresentedPlan, PresentedPlanBatch } from '../../shared/index.ts';
 import { batchBody } from './batch-sheet-pdf.ts';
 import { finishSheet, openSheet } from './sheet-document.ts';
-import { BODY, INK, TICK, type SheetLayout } from './sheet-layout.ts';
+import { INK, SMALL, TICK, type SheetLayout } from './sheet-layout.ts';
 import { bulletList, heading, signOffLines, subheading } from './sheet-sections.ts';
-import { dayInWords } from './sheet-words.ts';
-
-const SMALL = BODY - 1.5;
-
-function kindWords(kind: string): string {
-  return kind.charAt(0).toUpperCase() + kind.slice(1);
-}
+import { dayInWords, kindWords } from './sheet-words.ts';
 
 /** "Smokehouse burger × 120" */
 function planTitle(plan: PresentedPlan): string {

@@ -59,6 +59,8 @@ export interface Row {
 
 /** Body text size, points. */
 export const BODY = 9.5;
+/** Small print: notes, sources, table headings, points. */
+export const SMALL = BODY - 1.5;
 const LINE_GAP = 1.6;
 const CELL_PAD_X = 5;
 const CELL_PAD_Y = 4;

@@ -5,9 +5,7 @@ import type {
   PresentedResult,
 } from '../../shared/index.ts';
 import { OVERALL_FORMULA_TITLE } from '../../shared/calculation/dough/calculate-dough.ts';
-import { BODY, INK, TICK, type Column, type Row, type SheetLayout } from './sheet-layout.ts';
-
-const SMALL = BODY - 1.5;
+import { BODY, INK, SMALL, TICK, type Column, type Row, type SheetLayout } from './sheet-layout.ts';
 
 /** A section heading, kept on a page with at least `keep` points of what follows it. */
 export function heading(layout: SheetLayout, text: string, keep = 48): void {

@@ -39,3 +39,8 @@ const STATUS_WORDS: Readonly<Record<BatchStatus, string>> = {
 export function statusInWords(status: BatchStatus): string {
   return STATUS_WORDS[status];
 }
+
+/** A formula kind as a sheet names it: "Cure". */
+export function kindWords(kind: string): string {
+  return kind.charAt(0).toUpperCase() + kind.slice(1);
+}
