@@ -1,6 +1,5 @@
 import express, { type Express } from 'express';
 import helmet from 'helmet';
-import passport from 'passport';
 import type { AppContext } from './app-context.ts';
 import { auditRouter } from './audit/audit-router.ts';
 import { authenticate, useBasicStrategy } from './auth/authenticate.ts';
@@ -29,36 +28,14 @@ const JSON_LIMIT = '512kb';
 export function createApp(context: AppContext): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.use(cspNonce);
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        directives: {
-          defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
-          styleSrc: [
-            "'self'",
-            (_req, res) => `'nonce-${String((res as express.Response).locals.cspNonce)}'`,
-          ],
-          fontSrc: ["'self'"],
-          imgSrc: ["'self'", 'data:'],
-          connectSrc: ["'self'"],
-          objectSrc: ["'none'"],
-          frameAncestors: ["'none'"],
-          baseUri: ["'self'"],
-          formAction: ["'self'"],
-          upgradeInsecureRequests: null,
-        },
-      },
-      // Plain http on 127.0.0.1 in the demo: no HSTS.
-      strictTransportSecurity: false,
-    }),
-  );
+  // API answers (JSON, CSV, PDF) need the policy but no nonce: no random bytes for them.
+  app.use('/api', securityHeaders());
 
   const api = express.Router();
   api.use(express.json({ limit: JSON_LIMIT }), requireJsonBody);
   api.use(sessionMiddleware(context.db, context.config.sessionSecret, false));
-  api.use(passport.initialize());
+  // No passport.initialize(): passport.authenticate() sets up the request itself, and Basic is
+  // the one strategy, so the rest of the API need not pay for it.
   useBasicStrategy(context.people, context.audit);
   api.get('/health', (_req, res) => void res.json({ ok: true }));
   api.use('/session', sessionRouter(context.people, context.audit, context.config.signInLimit));
@@ -79,7 +56,38 @@ export function createApp(context: AppContext): Express {
   api.use(apiNotFound);
 
   app.use('/api', api);
-  app.use(consoleRouter(context.config.consoleDir));
+  // Every /api path has been answered above (apiNotFound), so only console pages get a nonce.
+  app.use(cspNonce, securityHeaders(consoleStyleNonce), consoleRouter(context.config.consoleDir));
   app.use(errorHandler);
   return app;
+}
+
+/** A console page's own styles carry this response's nonce (see consoleRouter). */
+const consoleStyleNonce = (_req: unknown, res: unknown): string =>
+  `'nonce-${String((res as express.Response).locals.cspNonce)}'`;
+
+/**
+ * helmet's headers with one content security policy: nothing from other sites, no framing, no
+ * plugins; styles also from a nonce when one is given.
+ */
+function securityHeaders(styleNonce?: typeof consoleStyleNonce): express.RequestHandler {
+  return helmet({
+    contentSecurityPolicy: {
+      directives: {
+        defaultSrc: ["'self'"],
+        scriptSrc: ["'self'"],
+        styleSrc: styleNonce ? ["'self'", styleNonce] : ["'self'"],
+        fontSrc: ["'self'"],
+        imgSrc: ["'self'", 'data:'],
+        connectSrc: ["'self'"],
+        objectSrc: ["'none'"],
+        frameAncestors: ["'none'"],
+        baseUri: ["'self'"],
+        formAction: ["'self'"],
+        upgradeInsecureRequests: null,
+      },
+    },
+    // Plain http on 127.0.0.1 in the demo: no HSTS.
+    strictTransportSecurity: false,
+  });
 }
