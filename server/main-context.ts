@@ -24,7 +24,7 @@ export async function openContext(
     db,
     people: new PeopleRepository(db),
     audit,
-    formulas: new FormulaStore(config.formulasDir),
+    formulas: new FormulaStore(config.formulasDir, { watch: true }),
     batches: new BatchRepository(db, audit),
     mail: openMail(db, config, now),
     invitations: new InvitationRepository(db, now),

@@ -57,6 +57,7 @@ async function main(): Promise<void> {
       () =>
         void reminders
           .stop()
+          .then(() => context.formulas.close())
           .then(() => context.mail.close())
           .then(() => context.db.close())
           .then(() => process.exit(0)),

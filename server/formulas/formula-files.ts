@@ -70,13 +70,21 @@ export async function readFormulaFileAt(
   return read;
 }
 
-/** Every *.yaml / *.yml file directly in the folder, read and checked, sorted by name. */
-export async function readFormulaFolder(folder: string): Promise<FormulaFile[]> {
-  const names = readdirSync(folder)
-    .filter((name) => /\.ya?ml$/i.test(name))
-    .sort();
-  const files = await Promise.all(names.map((name) => readFormulaFileAt(folder, name)));
-  return files.filter((file): file is FormulaFile => file !== undefined);
+/**
+ * Every *.yaml / *.yml file directly in the folder, read and checked, sorted by name; `linked`
+ * when any of them is a symbolic link (its target can change with no notice in this folder).
+ */
+export async function readFormulaFolder(
+  folder: string,
+): Promise<{ files: FormulaFile[]; linked: boolean }> {
+  const entries = readdirSync(folder, { withFileTypes: true })
+    .filter((entry) => /\.ya?ml$/i.test(entry.name))
+    .sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+  const files = await Promise.all(entries.map((entry) => readFormulaFileAt(folder, entry.name)));
+  return {
+    files: files.filter((file): file is FormulaFile => file !== undefined),
+    linked: entries.some((entry) => entry.isSymbolicLink()),
+  };
 }
 
 /**

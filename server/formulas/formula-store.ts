@@ -1,5 +1,6 @@
 import { checkLibrary, type Formula } from '../../shared/index.ts';
 import { AppError, notFound } from '../http/app-error.ts';
+import { FolderWatch } from './folder-watch.ts';
 import { filesById, readFormulaFolder, type FormulaFile } from './formula-files.ts';
 
 /** A formula that can be calculated, with the revision it was read at. */
@@ -10,26 +11,56 @@ export interface CurrentFormula {
 }
 
 /**
- * The formulas folder, read fresh on each call so that edits on disk (a git pull) are seen at
- * once. The YAML files stay the source of truth.
+ * The formulas folder as it is on disk, so that edits there (a git pull) are seen at once. The
+ * YAML files stay the source of truth.
  */
 export class FormulaStore {
   // The files of the last read and the same files after the library checks: while no file has
   // changed on disk (each unchanged file is the same object, see readFormulaFileAt), the checks
   // are not run again on every request.
   private checked: { read: readonly FormulaFile[]; files: readonly FormulaFile[] } | undefined;
+  // With `watch`, the folder is listed and its files stat'ed again only after the system has told
+  // of a change; without, on every call (a CLI run reads it once anyway).
+  private readonly changes: FolderWatch | undefined;
+  private readsStarted = 0;
+  private readsRunning = 0;
+  private readKept = 0;
 
-  constructor(readonly folder: string) {}
+  constructor(
+    readonly folder: string,
+    { watch = false }: { watch?: boolean } = {},
+  ) {
+    this.changes = watch ? new FolderWatch(folder) : undefined;
+  }
+
+  /** Something in the folder was just written here: read it again on the next call. */
+  changed(): void {
+    this.changes?.markChanged();
+  }
+
+  /** Stops watching the folder. */
+  close(): void {
+    this.changes?.close();
+  }
 
   /**
    * Every formula file, valid or not. Each assembly is also checked against the other formulas
    * (checkLibrary): one that names a missing or unfitting formula has errors like any other.
    */
   async files(): Promise<FormulaFile[]> {
+    const last = this.checked;
+    // While another call is reading, this one reads too: what it would reuse may be outdated.
+    if (last && this.readsRunning === 0 && this.changes && !this.changes.needsRead())
+      return [...last.files];
+    const order = ++this.readsStarted;
     let files: FormulaFile[];
+    this.readsRunning++;
     try {
-      files = await readFormulaFolder(this.folder);
+      const read = await readFormulaFolder(this.folder);
+      files = read.files;
+      if (read.linked) this.changes?.markChanged();
     } catch (error) {
+      this.changes?.markChanged();
       // A missing or unreadable folder is a setup problem the person asking can act on.
       const code = (error as NodeJS.ErrnoException).code;
       throw new AppError(
@@ -37,12 +68,18 @@ export class FormulaStore {
         'formulas-unavailable',
         `the formulas folder cannot be read (${code ?? String(error)})`,
       );
+    } finally {
+      this.readsRunning--;
     }
-    const last = this.checked;
-    if (last?.read.length === files.length && files.every((file, i) => file === last.read[i]))
-      return [...last.files];
+    const latest = this.checked;
+    if (latest?.read.length === files.length && files.every((file, i) => file === latest.read[i]))
+      return [...latest.files];
     const checked = withLibraryChecks(files);
-    this.checked = { read: files, files: checked };
+    // Reads can end out of order; only a later read replaces what an earlier one kept.
+    if (order > this.readKept) {
+      this.readKept = order;
+      this.checked = { read: files, files: checked };
+    }
     return [...checked];
   }
 

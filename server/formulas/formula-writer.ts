@@ -124,12 +124,15 @@ export class FormulaWriter {
         if (!fresh || fresh.revision !== expected) return { stale: fresh?.revision ?? null };
         await replaceWith(temporary, base.path);
         swapped = true;
+        this.store.changed();
         return { rowId: await this.record(change, formula, revision, base.revision, transaction) };
       });
     } catch (error) {
       // The database said no after the file was swapped: put the old text back.
-      if (swapped) await writeFileAtomic(base.path, base.text);
-      else await removeQuietly(temporary);
+      if (swapped) {
+        await writeFileAtomic(base.path, base.text);
+        this.store.changed();
+      } else await removeQuietly(temporary);
       throw error;
     }
     if ('stale' in outcome) {
@@ -159,10 +162,14 @@ export class FormulaWriter {
         if (await this.fileOf(change.id)) return undefined;
         if (!(await placeNew(temporary, target))) return undefined;
         placed = true;
+        this.store.changed();
         return this.record(change, formula, revision, null, transaction);
       });
     } catch (error) {
-      if (placed) await removeQuietly(target);
+      if (placed) {
+        await removeQuietly(target);
+        this.store.changed();
+      }
       throw error;
     } finally {
       await removeQuietly(temporary);

@@ -128,6 +128,7 @@ export async function startTestServer(
         server.close(() => resolve());
         server.closeAllConnections?.();
       });
+      context.formulas.close();
       await context.mail.close();
       await context.db.close();
     };
