@@ -129,7 +129,7 @@ export async function benchBatchLog(): Promise<void> {
   );
   for (const [label, params] of cases) {
     const query = parseListQuery(params, true);
-    for (const part of [pageSql(query, true), countSql(query.filter, TOTAL_COUNTED)]) {
+    for (const part of [pageSql(query, 'list'), countSql(query.filter, TOTAL_COUNTED)]) {
       const plan = await all<{ detail: string }>(db, `EXPLAIN QUERY PLAN ${part.sql}`, part.values);
       process.stdout.write(`  ${label}: ${plan.map((row) => row.detail).join(' | ')}\n`);
     }

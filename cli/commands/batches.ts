@@ -1,12 +1,12 @@
 import { Command } from 'commander';
-import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import type { BatchPage, BatchStatus } from '../../shared/api/batch-record.ts';
 import type { PresentedResult } from '../../shared/index.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
 import { textTable } from '../output/text-table.ts';
 
-/** The parts of a batch these verbs print. */
+/** The parts of a batch `show` prints. */
 interface BatchView {
   lotCode: string;
   formula: { id: string; revision: string; title: string };
@@ -26,14 +26,6 @@ interface BatchView {
     to: string | null;
     reason: string | null;
   }[];
-}
-
-interface Page {
-  items: BatchView[];
-  next: string | null;
-  total: number;
-  /** False when the server stopped counting at total (more match). */
-  totalExact?: boolean;
 }
 
 const FILTERS = [
@@ -99,17 +91,17 @@ export function batchesCommand(io: Io): Command {
       const query: Record<string, string> = {};
       for (const key of FILTERS) if (options[key] !== undefined) query[key] = options[key];
       const server = serverOf(options);
-      let page: Page;
+      let page: BatchPage;
       if (server) {
         const { callServer } = await import('../remote/server-client.ts');
-        page = await callServer<Page>(
+        page = await callServer<BatchPage>(
           { url: server },
           'GET',
           `/api/batches?${new URLSearchParams(query)}`,
         );
       } else {
         const { listLocally } = await import('../local/batches-local.ts');
-        page = (await listLocally(query)) as unknown as Page;
+        page = await listLocally(query);
       }
       if (options.json) return io.out(`${JSON.stringify(page, null, 2)}\n`);
       const rows = page.items.map((b) => [

@@ -1,9 +1,9 @@
 import path from 'node:path';
 import type { RawBatchOptions, UnitSystem } from '../../shared/index.ts';
 import { AuditRepository } from '../../server/audit/audit-repository.ts';
-import type { Batch } from '../../server/batches/batch.ts';
+import type { Batch, BatchPage } from '../../server/batches/batch.ts';
 import { parseListQuery } from '../../server/batches/batch-query.ts';
-import { BatchRepository, type BatchPage } from '../../server/batches/batch-repository.ts';
+import { BatchRepository } from '../../server/batches/batch-repository.ts';
 import { prepareBatch } from '../../server/batches/prepare-batch.ts';
 import { FormulaHistory } from '../../server/formulas/formula-history.ts';
 import { FormulaStore } from '../../server/formulas/formula-store.ts';

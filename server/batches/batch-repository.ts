@@ -2,29 +2,27 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { notFound } from '../http/app-error.ts';
-import type { Batch, BatchStatus, BatchSummary, ChangeOptions, NewBatch } from './batch.ts';
+import type {
+  Batch,
+  BatchPage,
+  BatchStatus,
+  BatchSummary,
+  ChangeOptions,
+  NewBatch,
+} from './batch.ts';
 import { encodeCursor, type BatchFilter, type ListQuery } from './batch-query.ts';
 import {
   BATCHES_WITH_PEOPLE,
   SUMMARY_COLUMNS,
   toBatch,
   toEvent,
+  toListItem,
   toSummary,
   type BatchEventRow,
   type BatchRow,
 } from './batch-rows.ts';
 import { countSql, pageSql } from './batch-sql.ts';
 import { BatchWrites } from './batch-writes.ts';
-
-/** One page of the batch log, with opaque cursors to the pages either side and the filter's count. */
-export interface BatchPage {
-  readonly items: Batch[];
-  readonly next: string | null;
-  readonly prev: string | null;
-  /** The filter's count: exact up to TOTAL_COUNTED, else TOTAL_COUNTED (there are more). */
-  readonly total: number;
-  readonly totalExact: boolean;
-}
 
 /**
  * The most batches a page counts for its total; beyond, the total reads "1000+". Measured on a
@@ -70,11 +68,11 @@ export class BatchRepository {
 
   private select<T extends object>(
     sql: string,
-    values: readonly unknown[],
+    values: readonly (string | number)[],
     transaction?: Transaction,
   ): Promise<T[]> {
     return this.db.sequelize.query<T>(sql, {
-      replacements: values as unknown[],
+      replacements: [...values],
       type: QueryTypes.SELECT,
       transaction,
     });
@@ -184,9 +182,9 @@ export class BatchRepository {
     return row.n > upTo ? { total: upTo, exact: false } : { total: row.n, exact: true };
   }
 
-  /** One page of the log: the batches with their results, cursors either side, the total. */
+  /** One page of the log: list items (no full result), cursors either side, the total. */
   async list(query: ListQuery): Promise<BatchPage> {
-    const { sql, values } = pageSql(query, true);
+    const { sql, values } = pageSql(query, 'list');
     const rows = await this.select<SortedRow>(sql, values);
     const more = rows.length > query.limit;
     const page = rows.slice(0, query.limit);
@@ -204,7 +202,7 @@ export class BatchRepository {
         ? { total: page.length, exact: true }
         : await this.countUpTo(query.filter, TOTAL_COUNTED);
     return {
-      items: page.map((row) => toBatch(row)),
+      items: page.map(toListItem),
       // Backwards, the page we came from lies ahead; forwards, the one we came from lies behind.
       next: backwards || more ? cursorAt(last, 'next') : null,
       prev: backwards
@@ -229,7 +227,7 @@ export class BatchRepository {
   ): AsyncGenerator<BatchSummary[]> {
     let page: ListQuery = { ...query, limit: pageSize };
     for (;;) {
-      const { sql, values } = pageSql(page, false);
+      const { sql, values } = pageSql(page, 'summary');
       const rows = await this.select<SortedRow>(sql, values);
       const kept = rows.slice(0, pageSize);
       if (kept.length > 0) yield kept.map(toSummary);

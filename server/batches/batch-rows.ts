@@ -4,7 +4,7 @@ import type {
   RawBatchOptions,
   UnitSystem,
 } from '../../shared/index.ts';
-import type { Batch, BatchEvent, BatchStatus, BatchSummary } from './batch.ts';
+import type { Batch, BatchEvent, BatchListItem, BatchStatus, BatchSummary } from './batch.ts';
 
 /** A batch row joined with the names of its operator and reviewer. */
 export interface BatchRow {
@@ -32,6 +32,8 @@ export interface BatchRow {
   notes: string | null;
   /** Only when the full batch is read. */
   result?: string;
+  /** Only in a list: the 'nitrite-max' check's limit and status as JSON (LIST_COLUMNS). */
+  nitrite_max?: string | null;
 }
 
 /** A batch event row joined with the name of whoever made it. */
@@ -51,6 +53,18 @@ export const SUMMARY_COLUMNS = `b.id, b.lot_code, b.formula_id, b.formula_revisi
   b.status, b.operator_id, op.display_name AS operator_name, b.started_on, b.ready_on,
   b.recorded_at, b.updated_at, b.units, b.inputs, b.checks_passed, b.nitrite_ppm,
   b.signed_off_by, so.display_name AS signer_name, b.signed_off_at, b.discard_reason, b.notes`;
+
+/**
+ * The columns of a list item: a summary, and the limit and status of the batch's 'nitrite-max'
+ * check picked out of its stored result by SQLite, at about 15 µs a cure. Parsing every result in
+ * JavaScript and sending it whole was most of the list's time (240 kB for a page of 50, eight
+ * times the summaries). Only a batch with a nitrite figure (a cure) has the check.
+ */
+export const LIST_COLUMNS = `${SUMMARY_COLUMNS},
+  CASE WHEN b.nitrite_ppm IS NOT NULL THEN (
+    SELECT json_object('limit', c.value ->> 'limit', 'status', c.value ->> 'status')
+    FROM json_each(b.result, '$.checks') c WHERE c.value ->> 'id' = 'nitrite-max'
+  ) END AS nitrite_max`;
 
 /**
  * batches joined to the people it names. LEFT JOINs keep batches the outer loop of the query,
@@ -91,6 +105,16 @@ export function toSummary(row: BatchRow): BatchSummary {
         : null,
     discardReason: row.discard_reason,
     notes: row.notes,
+  };
+}
+
+/** A row read with LIST_COLUMNS as the API lists it. */
+export function toListItem(row: BatchRow): BatchListItem {
+  return {
+    ...toSummary(row),
+    nitriteMax: row.nitrite_max
+      ? (JSON.parse(row.nitrite_max) as BatchListItem['nitriteMax'])
+      : null,
   };
 }
 

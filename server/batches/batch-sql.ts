@@ -1,12 +1,12 @@
 import { addDays } from '../../shared/index.ts';
 import { SORTS, type BatchFilter, type ListQuery, type SortKey } from './batch-query.ts';
-import { BATCHES_WITH_PEOPLE, SUMMARY_COLUMNS } from './batch-rows.ts';
+import { BATCHES_WITH_PEOPLE, LIST_COLUMNS, SUMMARY_COLUMNS } from './batch-rows.ts';
 import { prefixRange } from './lot-code.ts';
 
 /** An SQL fragment with its replacement values in order. */
 export interface SqlPart {
   readonly sql: string;
-  readonly values: readonly unknown[];
+  readonly values: readonly (string | number)[];
 }
 
 /** Statuses a batch leaves within days: however long the log, few batches are in them. */
@@ -26,9 +26,9 @@ const ACTIVE_STATUSES: readonly string[] = ['planned', 'in-progress', 'curing', 
 export function whereOf(
   filter: BatchFilter,
   walking?: SortKey,
-): { clauses: string[]; values: unknown[] } {
+): { clauses: string[]; values: (string | number)[] } {
   const clauses: string[] = [];
-  const values: unknown[] = [];
+  const values: (string | number)[] = [];
   const broad = (column: string, sort?: SortKey): string =>
     walking && walking !== 'recorded' && walking !== sort ? `+${column}` : column;
   if (filter.formula !== undefined) {
@@ -91,11 +91,12 @@ export function countSql(filter: BatchFilter, upTo?: number): SqlPart {
 }
 
 /**
- * One page of a sorted list, read one row beyond the limit to learn whether there is more.
+ * One page of a sorted list, read one row beyond the limit to learn whether there is more: the
+ * columns of list items (LIST_COLUMNS) or of summaries alone (the CSV export).
  * A backward page (a prev cursor) is read in reverse order and must be turned round by the caller.
  * `sort_key` is the value of the sort expression, for the cursors.
  */
-export function pageSql(query: ListQuery, withResult: boolean): SqlPart {
+export function pageSql(query: ListQuery, columns: 'list' | 'summary'): SqlPart {
   const { clauses, values } = whereOf(query.filter, query.sort);
   const sort = SORTS[query.sort];
   const backwards = query.cursor?.direction === 'prev';
@@ -115,7 +116,7 @@ export function pageSql(query: ListQuery, withResult: boolean): SqlPart {
   }
   const direction = descending ? 'DESC' : 'ASC';
   return {
-    sql: `SELECT ${SUMMARY_COLUMNS}${withResult ? ', b.result' : ''}, ${sort.expr} AS sort_key
+    sql: `SELECT ${columns === 'list' ? LIST_COLUMNS : SUMMARY_COLUMNS}, ${sort.expr} AS sort_key
       FROM ${BATCHES_WITH_PEOPLE}
       ${where(clauses)}
       ORDER BY ${sort.expr} ${direction}, b.id ${direction}

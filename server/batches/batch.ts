@@ -9,6 +9,8 @@ import type {
 export type {
   Batch,
   BatchEvent,
+  BatchListItem,
+  BatchPage,
   BatchStatus,
   BatchSummary,
   PersonRef,

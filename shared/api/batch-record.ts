@@ -5,7 +5,7 @@
  */
 import type { RawBatchOptions } from '../calculation/batch-input.ts';
 import type { BatchKind } from '../formula/formula-types.ts';
-import type { PresentedResult } from '../presentation/presented-result.ts';
+import type { PresentedCheck, PresentedResult } from '../presentation/presented-result.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 
 /** Where a batch is: planned → in progress → curing/proofing → done, or discarded with a reason. */
@@ -64,9 +64,19 @@ export interface Batch extends BatchSummary {
   readonly events?: readonly BatchEvent[];
 }
 
+/**
+ * One batch as GET /api/batches lists it: the summary and, for a cure, the ceiling its own
+ * 'nitrite-max' check held it to and that check's verdict (limits are data and may differ between
+ * revisions). The full result is GET /api/batches/:lot.
+ */
+export interface BatchListItem extends BatchSummary {
+  /** The batch's 'nitrite-max' check as recorded; null when it has no ingoing nitrite figure. */
+  readonly nitriteMax: Pick<PresentedCheck, 'limit' | 'status'> | null;
+}
+
 /** GET /api/batches: one keyset page of the log, newest first unless sorted otherwise. */
 export interface BatchPage {
-  readonly items: readonly Batch[];
+  readonly items: readonly BatchListItem[];
   /** Cursor of the page after this one; null on the last page. */
   readonly next: string | null;
   /** Cursor of the page before this one; null on the first page. */

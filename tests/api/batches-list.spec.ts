@@ -106,7 +106,47 @@ describe('listing batches', () => {
     const times = all.map((b) => b.recordedAt);
     assert.deepEqual(times, [...times].sort().reverse());
     assert.equal(new Set(lots(all)).size, all.length);
-    assert.ok(response.json.items[0].result.checks, 'list items carry their result');
+  });
+
+  it('should list each batch as its summary and its own nitrite ceiling, as its full record says', async () => {
+    const firstPage = (await reader.get('/api/batches?limit=30')).json.items;
+    const cures = (await reader.get('/api/batches?kind=cure&sort=lot&limit=30')).json.items;
+    let ceilings = 0;
+    for (const item of [...firstPage, ...cures] as Record<string, unknown>[]) {
+      const lot = String(item.lotCode);
+      const one = await reader.get(`/api/batches/${lot}`);
+      assert.equal(one.status, 200, one.text);
+      const { result, events, ...summary } = one.json.batch as {
+        result: { checks: { id: string; limit: string; status: string }[] };
+        events: unknown[];
+        nitritePpm: string | null;
+      };
+      assert.ok(events.length > 0, lot);
+      const check = result.checks.find((c) => c.id === 'nitrite-max');
+      // A list item is the record without its result and events: nothing more, nothing less.
+      assert.deepEqual(
+        item,
+        {
+          ...summary,
+          nitriteMax:
+            check && summary.nitritePpm !== null
+              ? { limit: check.limit, status: check.status }
+              : null,
+        },
+        lot,
+      );
+      assert.equal(
+        item.nitriteMax !== null,
+        summary.nitritePpm !== null,
+        `${lot}: a cure's ceiling`,
+      );
+      if (item.nitriteMax !== null) ceilings++;
+    }
+    assert.ok(ceilings >= 30, 'every cure on the cure page has its ceiling');
+    assert.ok(
+      firstPage.some((b: Item) => b.kind !== 'cure'),
+      'the first page holds batches that are not cures',
+    );
   });
 
   it('should walk every sort, both ways, with no batch missed or repeated', async () => {
@@ -254,7 +294,10 @@ describe('listing batches', () => {
           const query = parseListQuery({ ...filters, sort, order }, true);
           const key = sort === 'status' ? 3 : '2026-01-01';
           for (const direction of ['next', 'prev'] as const) {
-            const { sql, values } = pageSql({ ...query, cursor: { key, id: 10, direction } }, true);
+            const { sql, values } = pageSql(
+              { ...query, cursor: { key, id: 10, direction } },
+              'list',
+            );
             const detail = await plan(sql, values);
             const label = `${JSON.stringify(filters)} ${sort} ${order} ${direction}: ${detail}`;
             assert.doesNotMatch(detail, /TEMP B-TREE/, label);
@@ -280,7 +323,7 @@ describe('listing batches', () => {
     ];
     for (const [filters, index] of narrow) {
       const query = parseListQuery(filters, true);
-      assert.match(await plan(pageSql(query, true).sql, pageSql(query, true).values), index);
+      assert.match(await plan(pageSql(query, 'list').sql, pageSql(query, 'list').values), index);
       const count = countSql(query.filter);
       assert.match(await plan(count.sql, count.values), index);
       const capped = countSql(query.filter, TOTAL_COUNTED);

@@ -21,7 +21,7 @@ interface RecordedBatch {
   lotCode: string;
   status: string;
   nitritePpm: string;
-  result: { checks: { id: string; exact: string }[] };
+  result: { checks: { id: string; exact: string; limit: string; status: string }[] };
 }
 
 describe('larder calc --record and larder batches', () => {
@@ -45,10 +45,16 @@ describe('larder calc --record and larder batches', () => {
 
     const list = await runLarder(['batches', 'list', '--json'], { env });
     assertExit(list, 0);
+    const { items } = stdoutJson<{ items: Record<string, unknown>[] }>(list);
     assert.deepEqual(
-      stdoutJson<{ items: { lotCode: string }[] }>(list).items.map((b) => b.lotCode),
+      items.map((b) => b.lotCode),
       ['261202-QB-01'],
     );
+    // A list item carries its own nitrite ceiling as recorded, not the whole result.
+    const ceiling = batch.result.checks.find((c) => c.id === 'nitrite-max');
+    assert.deepEqual(items[0].nitriteMax, { limit: ceiling?.limit, status: ceiling?.status });
+    assert.equal(items[0].nitritePpm, '156.25');
+    assert.equal('result' in items[0], false);
     const show = await runLarder(['batches', 'show', '261202-qb-01'], { env });
     assertExit(show, 0);
     assert.match(show.stdout, /Lot 261202-QB-01 · in-progress/);

@@ -9,6 +9,7 @@ export type { RawBatchOptions } from '../../../shared/calculation/batch-input.ts
 export type {
   Batch,
   BatchEvent,
+  BatchListItem,
   BatchPage,
   BatchStatus,
   BatchSummary,

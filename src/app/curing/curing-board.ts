@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { Batch, BatchPage } from '../batches/batch-types';
+import type { BatchListItem, BatchPage } from '../batches/batch-types';
 import { messageOf } from '../batches/formula-options';
 import { isoDateOf } from '../ui/batch-sheet/iso-day-pipe';
 import { holdingBatches } from './days-left';
@@ -16,7 +16,7 @@ const MAX_PAGES = 10;
 @Injectable({ providedIn: 'root' })
 export class CuringBoard {
   private readonly http = inject(HttpClient);
-  private readonly batches = signal<readonly Batch[] | null>(null);
+  private readonly batches = signal<readonly BatchListItem[] | null>(null);
   private readonly day = signal(isoDateOf(new Date()) ?? '');
   private readonly busy = signal(false);
   private readonly failure = signal<string | null>(null);
@@ -42,7 +42,7 @@ export class CuringBoard {
     this.busy.set(true);
     this.failure.set(null);
     try {
-      const found: Batch[] = [];
+      const found: BatchListItem[] = [];
       let cursor: string | null = null;
       for (let page = 0; page < MAX_PAGES; page++) {
         const params: Record<string, string> = {

@@ -22,7 +22,7 @@ import { ActivatedRoute, Router, RouterLink, type ParamMap } from '@angular/rout
 import { SessionStore } from '../../core/auth/session-store';
 import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
-import type { Batch, FormulaKind } from '../batch-types';
+import type { BatchListItem, FormulaKind } from '../batch-types';
 import { FormulaOptions } from '../formula-options';
 import { NitriteChart } from '../nitrite-chart/nitrite-chart';
 import { BatchFilters, type FilterChange } from './batch-filters';
@@ -149,7 +149,7 @@ export default class BatchLogPage {
     });
   }
 
-  protected trackBatch(_index: number, batch: Pick<Batch, 'lotCode'>): string {
+  protected trackBatch(_index: number, batch: Pick<BatchListItem, 'lotCode'>): string {
     return batch.lotCode;
   }
 

@@ -2,7 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { messageOf } from '../formula-options';
-import type { Batch, BatchPage, PersonRef } from '../batch-types';
+import type { BatchListItem, BatchPage, PersonRef } from '../batch-types';
 import { DEFAULT_QUERY, apiFilterParams, type LogQuery } from './log-query';
 
 /** Where the log is in its pages. */
@@ -34,7 +34,7 @@ export class BatchLog {
   /** The view being shown. */
   readonly query = this.view.asReadonly();
   /** The batches of the page, in the view's order. */
-  readonly items = computed<readonly Batch[]>(() => this.page()?.items ?? []);
+  readonly items = computed<readonly BatchListItem[]>(() => this.page()?.items ?? []);
   /** How many batches match the view (or the most the server counted, when not exact). */
   readonly total = computed(() => this.page()?.total ?? 0);
   /** Whether total is the whole count; if not, more batches match than it says. */
@@ -127,7 +127,7 @@ export class BatchLog {
     }
   }
 
-  private remember(items: readonly Batch[]): void {
+  private remember(items: readonly BatchListItem[]): void {
     const known = this.seen();
     if (items.every((b) => known.has(b.operator.id))) return;
     const next = new Map(known);

@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { Batch, BatchPage } from '../batch-types';
+import type { BatchListItem, BatchPage } from '../batch-types';
 import { messageOf } from '../formula-options';
 import { nitritePoints } from './nitrite-points';
 
@@ -17,7 +17,7 @@ const MAX_PAGES = 10;
 @Injectable()
 export class NitriteHistory {
   private readonly http = inject(HttpClient);
-  private readonly batches = signal<readonly Batch[] | null>(null);
+  private readonly batches = signal<readonly BatchListItem[] | null>(null);
   private readonly busy = signal(false);
   private readonly failure = signal<string | null>(null);
   private readonly cutShort = signal(false);
@@ -40,7 +40,7 @@ export class NitriteHistory {
     this.busy.set(true);
     this.failure.set(null);
     this.batches.set(null);
-    const found: Batch[] = [];
+    const found: BatchListItem[] = [];
     let cursor: string | null = null;
     try {
       for (let page = 0; page < MAX_PAGES; page++) {

@@ -1,20 +1,22 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import type { Batch } from '../batch-types';
+import type { BatchListItem } from '../batch-types';
 import { nitritePoints, nitriteSummary } from './nitrite-points.ts';
 
-/** A cure batch with just what the chart reads. */
-function cure(lot: string, recordedAt: string, ppm: string | null, limit = '200 ppm'): Batch {
+/** A cure batch as the list gives it, with just what the chart reads. */
+function cure(
+  lot: string,
+  recordedAt: string,
+  ppm: string | null,
+  limit = '200 ppm',
+): BatchListItem {
   return {
     lotCode: lot,
     recordedAt,
     nitritePpm: ppm,
-    result: {
-      checks: [
-        { id: 'nitrite-max', limit, status: Number(ppm) > parseFloat(limit) ? 'fail' : 'pass' },
-      ],
-    },
-  } as unknown as Batch;
+    nitriteMax:
+      ppm === null ? null : { limit, status: Number(ppm) > parseFloat(limit) ? 'fail' : 'pass' },
+  } as unknown as BatchListItem;
 }
 
 describe('nitritePoints', () => {

@@ -1,4 +1,4 @@
-import type { Batch } from '../batch-types';
+import type { BatchListItem } from '../batch-types';
 
 /** One recorded cure batch on the nitrite chart. */
 export interface NitritePoint {
@@ -19,13 +19,13 @@ export interface NitritePoint {
  * The points of the chart: each batch with an ingoing nitrite figure, oldest first as listed,
  * with the ceiling of its own 'nitrite-max' check (limits are data and may differ by revision).
  */
-export function nitritePoints(batches: readonly Batch[]): NitritePoint[] {
+export function nitritePoints(batches: readonly BatchListItem[]): NitritePoint[] {
   const points: NitritePoint[] = [];
   for (const batch of batches) {
     if (batch.nitritePpm === null) continue;
     const ppm = Number(batch.nitritePpm);
     if (!Number.isFinite(ppm)) continue;
-    const check = batch.result.checks.find((c) => c.id === 'nitrite-max');
+    const check = batch.nitriteMax;
     const limit = check ? Number.parseFloat(check.limit) : Number.NaN;
     const hasLimit = Number.isFinite(limit);
     points.push({
