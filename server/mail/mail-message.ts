@@ -96,15 +96,16 @@ export function standardFooter(kitchen: string, consoleUrl: string, reason: stri
   ];
 }
 
+// Made once: building a formatter costs far more than using one.
+const MESSAGE_DAY = new Intl.DateTimeFormat('en-GB', {
+  weekday: 'short',
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  timeZone: 'UTC',
+});
+
 /** A date as people read it in a message: "Thu 4 Dec 2026". */
 export function dayText(isoDate: string): string {
-  return new Intl.DateTimeFormat('en-GB', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  })
-    .format(new Date(`${isoDate}T00:00:00Z`))
-    .replace(',', '');
+  return MESSAGE_DAY.format(new Date(`${isoDate}T00:00:00Z`)).replace(',', '');
 }
