@@ -1,6 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
+import { readRows } from '../db/read-row.ts';
 import { notFound } from '../http/app-error.ts';
 import type {
   Batch,
@@ -66,11 +67,13 @@ export class BatchRepository {
     return this.db.write(work);
   }
 
+  /** Rows of a read: inside a write transaction through it, otherwise straight from SQLite. */
   private select<T extends object>(
     sql: string,
     values: readonly (string | number)[],
     transaction?: Transaction,
   ): Promise<T[]> {
+    if (!transaction) return readRows<T>(this.db.sequelize, sql, values);
     return this.db.sequelize.query<T>(sql, {
       replacements: [...values],
       type: QueryTypes.SELECT,

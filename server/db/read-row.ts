@@ -8,6 +8,7 @@ interface SqliteStatement {
 }
 
 interface SqliteConnection {
+  all(sql: string, values: unknown[], callback: Callback<unknown[]>): SqliteConnection;
   prepare(sql: string, callback: (error: Error | null) => void): SqliteStatement;
   close(callback?: (error: Error | null) => void): void;
 }
@@ -52,6 +53,14 @@ function statementFor(connection: SqliteConnection, sql: string): Promise<Sqlite
   return ready;
 }
 
+/** Sequelize's connection for queries outside a transaction. */
+function sharedConnection(sequelize: Sequelize): Promise<SqliteConnection> {
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection(options: object): Promise<SqliteConnection>;
+  };
+  return manager.getConnection({});
+}
+
 /**
  * Reads at most one row straight from SQLite, with a statement prepared once, on the connection
  * Sequelize itself uses outside transactions. For the lookups every request makes (its session,
@@ -63,15 +72,31 @@ export async function readRow<T>(
   sql: string,
   values: readonly (string | number)[],
 ): Promise<T | undefined> {
-  const manager = sequelize.connectionManager as unknown as {
-    getConnection(options: object): Promise<SqliteConnection>;
-  };
-  const statement = await statementFor(await manager.getConnection({}), sql);
+  const statement = await statementFor(await sharedConnection(sequelize), sql);
   return new Promise((resolve, reject) => {
     // all, not get: it steps the statement to its end, so no read transaction stays open on the
     // shared connection (a statement left on a row would pin an old snapshot of the database).
     statement.all([...values], (error, rows) =>
       error ? reject(error) : resolve(rows[0] as T | undefined),
+    );
+  });
+}
+
+/**
+ * Reads rows straight from SQLite on the same connection, for the batch log's pages and counts:
+ * Sequelize's query path (replacements inlined into the text, every row reshaped, a stack trace
+ * captured per query) took about 1 ms of a page's 6 ms of CPU. Not kept prepared: a page's SQL
+ * varies with its filters and sort, and preparing it is a small part of running it.
+ */
+export async function readRows<T>(
+  sequelize: Sequelize,
+  sql: string,
+  values: readonly (string | number)[],
+): Promise<T[]> {
+  const connection = await sharedConnection(sequelize);
+  return new Promise((resolve, reject) => {
+    connection.all(sql, [...values], (error, rows) =>
+      error ? reject(error) : resolve(rows as T[]),
     );
   });
 }
