@@ -14,12 +14,14 @@ const ALWAYS = ['package.json', 'package-lock.json', 'scripts/bundles.mjs'];
  * The bundles. The CLI carries its packages (fast start) except the database stack, which only
  * the record-keeping verbs load, from a separate chunk, and the PDF stack, which only --pdf loads
  * (pdfkit finds its own data files beside itself, so it cannot be bundled); the server loads its
- * packages from node_modules.
+ * packages from node_modules. `more` names further entry points written beside `outfile` and
+ * sharing its chunks: the worker threads of `larder check`.
  */
 export const BUNDLES = {
   cli: {
     entry: 'cli/main.ts',
     outfile: `${root}dist/cli/larder.js`,
+    more: { 'check-worker': 'cli/check-worker.ts' },
     packages: 'bundle',
     external: [
       'sequelize',
@@ -43,11 +45,21 @@ function modifiedMs(file) {
   }
 }
 
+/** Every file a bundle's entry points are written to, `outfile` first. */
+function outfiles(name) {
+  const { outfile, more = {} } = BUNDLES[name];
+  return [
+    outfile,
+    ...Object.keys(more).map((key) => path.join(path.dirname(outfile), `${key}.js`)),
+  ];
+}
+
 /** Whether a bundle is missing, or any source it was built from changed since. */
 export function isStale(name) {
   const { outfile } = BUNDLES[name];
-  const built = modifiedMs(outfile);
-  if (built === undefined) return true;
+  const times = outfiles(name).map(modifiedMs);
+  if (times.includes(undefined)) return true;
+  const built = Math.min(...times);
   let sources;
   try {
     sources = JSON.parse(readFileSync(`${outfile}.sources.json`, 'utf8'));
@@ -57,15 +69,15 @@ export function isStale(name) {
   return sources.some((file) => (modifiedMs(root + file) ?? Infinity) > built);
 }
 
-/** Bundles one entry point and everything of ours it imports. */
+/** Bundles the entry points of a bundle and everything of ours they import. */
 export async function buildBundle(name) {
-  const { entry, outfile, packages, external = [], splitting = false } = BUNDLES[name];
+  const { entry, outfile, more = {}, packages, external = [], splitting = false } = BUNDLES[name];
   const { build } = await import('esbuild');
   // Old chunks have hashed names that nothing would overwrite.
   rmSync(path.join(path.dirname(outfile), 'chunks'), { recursive: true, force: true });
   const result = await build({
     absWorkingDir: root,
-    entryPoints: { [path.basename(outfile, '.js')]: entry },
+    entryPoints: { [path.basename(outfile, '.js')]: entry, ...more },
     // Splitting writes chunks beside the entry; it needs an output folder rather than a file.
     outdir: path.dirname(outfile),
     chunkNames: 'chunks/[name]-[hash]',

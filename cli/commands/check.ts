@@ -9,13 +9,10 @@ import {
   type FormulaProblem,
   type FormulaReading,
 } from '../../shared/index.ts';
+import { readFormulaFilesOnThreads } from '../check-pool.ts';
+import { checkThreads, threadsSetting } from '../check-threads.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
-import {
-  formulaFilesIn,
-  formulasFolder,
-  isFormulaFile,
-  readFormulaFile,
-} from '../formula-files.ts';
+import { formulaFilesIn, formulasFolder, isFormulaFile } from '../formula-files.ts';
 import type { Io } from '../io.ts';
 
 interface CheckOptions {
@@ -51,14 +48,19 @@ Examples:
   larder check                      every formula under ./formulas
   larder check formulas/ham-pump.yaml  one file
   larder check --staged             in .git/hooks/pre-commit: refuse a commit with a bad formula
+
+Environment:
+  LARDER_CHECK_THREADS=N  threads to read files on; by default one per CPU (at most 8) from
+                          1000 files on, else 1, which reads every file on the main thread
 ${EXIT_CODES_HELP}`,
     )
     .action((paths: string[], options: CheckOptions) => runCheck(paths, options, io));
 }
 
-function runCheck(paths: string[], options: CheckOptions, io: Io): void {
+async function runCheck(paths: string[], options: CheckOptions, io: Io): Promise<void> {
+  const threads = threadsSetting();
   const targets = paths.length ? paths : [formulasFolder()];
-  let readings = options.staged ? readStaged() : readPaths(targets, io);
+  let readings = options.staged ? readStaged() : await readPaths(targets, threads, io);
   // A folder is a library: each assembly in it must name formulas that are there and fit.
   // Single files and --staged are checked on their own.
   if (!options.staged && targets.some(isFolder)) readings = withLibraryChecks(readings);
@@ -88,7 +90,11 @@ function runCheck(paths: string[], options: CheckOptions, io: Io): void {
   if (failed > 0) process.exitCode = EXIT.formula;
 }
 
-function readPaths(paths: string[], io: Io): { file: string; reading: FormulaReading }[] {
+async function readPaths(
+  paths: string[],
+  threads: number | undefined,
+  io: Io,
+): Promise<{ file: string; reading: FormulaReading }[]> {
   const files: string[] = [];
   for (const target of paths) {
     let isFolder: boolean;
@@ -104,13 +110,18 @@ function readPaths(paths: string[], io: Io): { file: string; reading: FormulaRea
   // The same file named twice (a file and its folder) is checked once.
   const unique = [...new Map(files.map((file) => [path.resolve(file), file])).values()];
   const showProgress = io.errIsTty && unique.length >= PROGRESS_FROM;
-  return unique.map((file, i) => {
-    if (showProgress && (i % 25 === 0 || i === unique.length - 1))
-      io.err(`\rchecking ${i + 1}/${unique.length}`);
-    const reading = readFormulaFile(file);
-    if (showProgress && i === unique.length - 1) io.err('\n');
-    return { file, reading };
+  if (showProgress) io.err(`checking 0/${unique.length}`);
+  const readings = await readFormulaFilesOnThreads(unique, {
+    threads: checkThreads(unique.length, threads),
+    onProgress: showProgress ? (done) => io.err(`\rchecking ${done}/${unique.length}`) : undefined,
+    // Only a bug or a lack of memory stops a worker; the report is whole all the same.
+    onWorkerFailure: (reason) =>
+      io.err(
+        `${showProgress ? '\n' : ''}larder: a checking thread stopped (${reason}); the other threads checked its files\n`,
+      ),
   });
+  if (showProgress) io.err('\n');
+  return unique.map((file, i) => ({ file, reading: readings[i] }));
 }
 
 function isFolder(target: string): boolean {
