@@ -28,7 +28,8 @@ export async function startBenchServer(
   await buildBundle('server');
   const dataDir = env.LARDER_DATA ?? mkdtempSync(path.join(tmpdir(), 'larder-bench-'));
   if (!env.LARDER_DATA) cpSync('formulas', path.join(dataDir, 'formulas'), { recursive: true });
-  const child = spawn(process.execPath, [BUNDLES.server.outfile], {
+  // As npm start runs it (scripts/start.mjs), node options included.
+  const child = spawn(process.execPath, [...BUNDLES.server.nodeOptions, BUNDLES.server.outfile], {
     env: {
       ...process.env,
       LARDER_DATA: dataDir,

@@ -3,8 +3,11 @@ export interface Bundle {
   readonly entry: string;
   readonly outfile: string;
 }
-/** The CLI and server bundles. */
-export declare const BUNDLES: { readonly cli: Bundle; readonly server: Bundle };
+/** The CLI and server bundles; the server also says how node runs it. */
+export declare const BUNDLES: {
+  readonly cli: Bundle;
+  readonly server: Bundle & { readonly nodeOptions: readonly string[] };
+};
 /** Whether a bundle is missing or older than its sources. */
 export declare function isStale(name: keyof typeof BUNDLES): boolean;
 /** Builds one bundle. */

@@ -44,7 +44,7 @@ if (consoleIsStale()) {
   });
   if (build.status !== 0) process.exit(build.status ?? 1);
 }
-const server = spawn(process.execPath, ['--enable-source-maps', BUNDLES.server.outfile], {
+const server = spawn(process.execPath, [...BUNDLES.server.nodeOptions, BUNDLES.server.outfile], {
   stdio: 'inherit',
 });
 for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal));
