@@ -2,6 +2,7 @@ import { LineCounter, parseDocument, type YAMLError } from 'yaml';
 import { schemaErrors } from '../validation/formula-validator.ts';
 import { schemaProblems } from '../validation/schema-messages.ts';
 import { checkFormulaContent } from './check-formula.ts';
+import { explicitTag } from './explicit-tag.ts';
 import type { ContentProblem, FormulaProblem } from './formula-problem.ts';
 import type { Formula } from './formula-types.ts';
 import { locate } from './locate.ts';
@@ -66,6 +67,23 @@ export function readFormula(text: string, file: string): FormulaReading {
       };
     });
     return { problems };
+  }
+
+  const tagged = explicitTag(doc);
+  if (tagged) {
+    const { line, col } = lineCounter.linePos(tagged.offset);
+    return {
+      problems: [
+        {
+          file,
+          line,
+          column: col,
+          path: [],
+          severity: 'error',
+          message: `YAML tags such as ${tagged.tag} are not part of a formula; write the value plainly, without the tag`,
+        },
+      ],
+    };
   }
 
   let value: unknown;
