@@ -8,10 +8,17 @@ import { signInCookie, startBenchServer } from './server-process.ts';
 
 const CLIENTS = 20;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
-const BODY = JSON.stringify({
-  formula: 'quillmoor-belly',
-  batch: { meat: '4.26 kg', thickness: '4 cm' },
-});
+/**
+ * Each client records its batches as starting on a day of its own (one of the last 20): a
+ * formula has at most 999 lot codes a day, which one shared day would reach within seconds.
+ */
+function body(clientIndex: number): string {
+  const day = new Date(Date.now() - clientIndex * 86_400_000).toISOString().slice(0, 10);
+  return JSON.stringify({
+    formula: 'quillmoor-belly',
+    batch: { meat: '4.26 kg', thickness: '4 cm', start: day },
+  });
+}
 
 /** Batches in the server's database, read from the file itself (not the API's total). */
 function countBatches(databaseFile: string): Promise<number> {
@@ -40,13 +47,14 @@ export async function benchRecordBatches(): Promise<{ perSecond: number; consist
     const times: number[] = [];
     const started = performance.now();
     const deadline = started + SECONDS * 1000;
-    const client = async (): Promise<void> => {
+    const client = async (clientIndex: number): Promise<void> => {
+      const requestBody = body(clientIndex);
       while (performance.now() < deadline) {
         const sent = performance.now();
         const response = await fetch(`${server.url}/api/batches`, {
           method: 'POST',
           headers,
-          body: BODY,
+          body: requestBody,
         });
         await response.arrayBuffer();
         times.push(performance.now() - sent);
@@ -54,7 +62,7 @@ export async function benchRecordBatches(): Promise<{ perSecond: number; consist
         else refused.set(response.status, (refused.get(response.status) ?? 0) + 1);
       }
     };
-    await Promise.all(Array.from({ length: CLIENTS }, client));
+    await Promise.all(Array.from({ length: CLIENTS }, (_, i) => client(i)));
     const elapsed = (performance.now() - started) / 1000;
     const stored = (await countBatches(databaseFile)) - before;
     times.sort((a, b) => a - b);
