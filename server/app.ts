@@ -3,6 +3,7 @@ import helmet from 'helmet';
 import type { AppContext } from './app-context.ts';
 import { auditRouter } from './audit/audit-router.ts';
 import { authenticate, useBasicStrategy } from './auth/authenticate.ts';
+import { requireScriptWrite } from './auth/basic-writes.ts';
 import { requireCsrfToken } from './auth/csrf.ts';
 import { sessionMiddleware } from './auth/session.ts';
 import { sessionRouter } from './auth/session-router.ts';
@@ -13,6 +14,7 @@ import { formulasRouter } from './formulas/formulas-router.ts';
 import { consoleRouter, cspNonce } from './http/console-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
 import { requireJsonBody } from './http/require-json.ts';
+import { refuseCrossSiteWrites } from './http/same-origin.ts';
 import { invitationsRouter } from './invitations/invitations-router.ts';
 import { outboxRouter } from './mail/outbox-router.ts';
 import { peopleRouter } from './people/people-router.ts';
@@ -28,12 +30,18 @@ const JSON_LIMIT = '512kb';
 export function createApp(context: AppContext): Express {
   const app = express();
   app.disable('x-powered-by');
+  // Behind a reverse proxy, the client's own address (sign-in limits, audit) and protocol
+  // (Secure cookies) come from the proxy's X-Forwarded-* headers, believed only from it.
+  app.set('trust proxy', context.config.trustProxy);
+  const { httpsOnly } = context.config;
   // API answers (JSON, CSV, PDF) need the policy but no nonce: no random bytes for them.
-  app.use('/api', securityHeaders());
+  app.use('/api', securityHeaders(httpsOnly));
 
   const api = express.Router();
+  // First of all: a change another site's page sent is refused before anything reads it.
+  api.use(refuseCrossSiteWrites(context.config.publicUrl));
   api.use(express.json({ limit: JSON_LIMIT }), requireJsonBody);
-  api.use(sessionMiddleware(context.db, context.config.sessionSecret, false));
+  api.use(sessionMiddleware(context.db, context.config.sessionSecret, httpsOnly));
   // No passport.initialize(): passport.authenticate() sets up the request itself, and Basic is
   // the one strategy, so the rest of the API need not pay for it.
   useBasicStrategy(context.people, context.audit);
@@ -41,8 +49,13 @@ export function createApp(context: AppContext): Express {
   api.use('/session', sessionRouter(context.people, context.audit, context.config.signInLimit));
   // Anyone holding an invitation link; the token is the proof, so no sign-in and no CSRF token.
   api.use('/invitations', invitationsRouter(context));
-  // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes.
-  api.use(authenticate(context.people, context.config.signInLimit), requireCsrfToken);
+  // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes or a
+  // script's own marks for password-signed ones.
+  api.use(
+    authenticate(context.people, context.config.signInLimit),
+    requireCsrfToken,
+    requireScriptWrite,
+  );
   api.use('/calc', calcRouter(context));
   api.use('/plans', plansRouter(context));
   api.use('/formulas', formulasRouter(context));
@@ -57,7 +70,11 @@ export function createApp(context: AppContext): Express {
 
   app.use('/api', api);
   // Every /api path has been answered above (apiNotFound), so only console pages get a nonce.
-  app.use(cspNonce, securityHeaders(consoleStyleNonce), consoleRouter(context.config.consoleDir));
+  app.use(
+    cspNonce,
+    securityHeaders(httpsOnly, consoleStyleNonce),
+    consoleRouter(context.config.consoleDir),
+  );
   app.use(errorHandler);
   return app;
 }
@@ -66,11 +83,18 @@ export function createApp(context: AppContext): Express {
 const consoleStyleNonce = (_req: unknown, res: unknown): string =>
   `'nonce-${String((res as express.Response).locals.cspNonce)}'`;
 
+/** How long a browser keeps to https once told (HSTS max-age): a year. common practice, no source */
+const HSTS_SECONDS = 365 * 24 * 60 * 60;
+
 /**
  * helmet's headers with one content security policy: nothing from other sites, no framing, no
- * plugins; styles also from a nonce when one is given.
+ * plugins; styles also from a nonce when one is given. HSTS only when the console is served
+ * over https in production.
  */
-function securityHeaders(styleNonce?: typeof consoleStyleNonce): express.RequestHandler {
+function securityHeaders(
+  httpsOnly: boolean,
+  styleNonce?: typeof consoleStyleNonce,
+): express.RequestHandler {
   return helmet({
     contentSecurityPolicy: {
       directives: {
@@ -87,7 +111,7 @@ function securityHeaders(styleNonce?: typeof consoleStyleNonce): express.Request
         upgradeInsecureRequests: null,
       },
     },
-    // Plain http on 127.0.0.1 in the demo: no HSTS.
-    strictTransportSecurity: false,
+    // Not on plain http (the demo on 127.0.0.1); not for sub-domains, which may be other hosts'.
+    strictTransportSecurity: httpsOnly ? { maxAge: HSTS_SECONDS, includeSubDomains: false } : false,
   });
 }

@@ -37,7 +37,20 @@ export interface ServerConfig {
   readonly kitchenName: string;
   /** Minutes between two runs of the reminder scheduler. */
   readonly reminderMinutes: number;
+  /**
+   * Which proxies in front of the server to believe about the client's address and protocol
+   * (Express's "trust proxy"): false for none, a number of hops, or addresses and subnets.
+   */
+  readonly trustProxy: TrustProxy;
+  /**
+   * Production behind https: the session cookie is Secure and answers carry HSTS, so a browser
+   * never sends the cookie, or opens the console, over plain http.
+   */
+  readonly httpsOnly: boolean;
 }
+
+/** Proxies to believe: none (false), the nearest N hops, or a list of addresses and subnets. */
+export type TrustProxy = false | number | string;
 
 /** A setting that cannot be used; the server refuses to start with the message. */
 export class ConfigError extends Error {
@@ -89,6 +102,11 @@ export const SETTINGS = [
     'how e-mails name the kitchen ("Larderbook at …")',
   ],
   ['LARDER_REMINDER_MINUTES', '15', 'minutes between two checks for due reminders'],
+  [
+    'LARDER_TRUST_PROXY',
+    '(none)',
+    'the reverse proxy in front: loopback, a number of hops, or its addresses/subnets; required when LARDER_PUBLIC_URL is https in production',
+  ],
 ] as const;
 
 // A fixed secret is fine for the demo's invented data and never accepted in production.
@@ -150,6 +168,15 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
       'LARDER_SMTP_URL needs LARDER_MAIL_FROM: the address messages are sent from, e.g. "Larderbook <larder@example.com>"',
     );
   const publicUrl = url(env, 'LARDER_PUBLIC_URL', ['http:', 'https:']);
+  const trustProxy = proxies(env.LARDER_TRUST_PROXY);
+  const httpsOnly = mode === 'production' && publicUrl?.startsWith('https:') === true;
+  // The server itself speaks plain http, so an https address means a proxy ends TLS in front of
+  // it; without believing that proxy, every request looks like plain http and the Secure session
+  // cookie would never be set: nobody could sign in.
+  if (httpsOnly && trustProxy === false)
+    throw new ConfigError(
+      'LARDER_PUBLIC_URL is https, so a proxy ends TLS in front of Larderbook: set LARDER_TRUST_PROXY to it (e.g. loopback when it runs on this machine)',
+    );
   return {
     mode,
     host: env.LARDER_HOST ?? '127.0.0.1',
@@ -169,5 +196,28 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     mailFrom: env.LARDER_MAIL_FROM || 'Larderbook <larderbook@localhost>',
     kitchenName: env.LARDER_KITCHEN || (mode === 'demo' ? 'Quillmoor Smokehouse' : 'the kitchen'),
     reminderMinutes: integer(env, 'LARDER_REMINDER_MINUTES', 15, 1, 24 * 60),
+    trustProxy,
+    httpsOnly,
   };
+}
+
+// Addresses, subnets and Express's names for them (loopback, linklocal, uniquelocal).
+const PROXY_ADDRESS = /^(loopback|linklocal|uniquelocal|[0-9a-f.:]+(\/\d{1,3})?)$/i;
+
+/**
+ * LARDER_TRUST_PROXY as Express takes it. "true" (believe any address) is refused: then anyone
+ * could name their own address in X-Forwarded-For and escape the sign-in limit.
+ */
+function proxies(text: string | undefined): TrustProxy {
+  if (text === undefined || text === '' || text === 'false' || text === 'off') return false;
+  if (/^\d+$/.test(text)) {
+    const hops = Number(text);
+    if (hops >= 1 && hops <= 10) return hops;
+  } else {
+    const parts = text.split(',').map((part) => part.trim());
+    if (parts.every((part) => PROXY_ADDRESS.test(part))) return parts.join(', ');
+  }
+  throw new ConfigError(
+    `LARDER_TRUST_PROXY must be loopback, a number of proxies from 1 to 10, or the proxy's addresses or subnets (e.g. 10.0.0.5 or 10.0.0.0/8), not "${text}"`,
+  );
 }

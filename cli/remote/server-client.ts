@@ -33,6 +33,8 @@ export async function callServer<T>(
       method,
       headers: {
         authorization: credentials(),
+        // The server takes a password-signed change only from a client that names itself.
+        'x-larder-client': 'larder',
         ...(body === undefined ? {} : { 'content-type': 'application/json' }),
       },
       ...(body === undefined ? {} : { body: JSON.stringify(body) }),

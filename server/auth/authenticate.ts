@@ -93,6 +93,9 @@ export function authenticate(people: PeopleRepository, signInLimit = 10): Reques
         return;
       }
       basic(req, res, (error?: unknown) => {
+        // passport sets a Basic challenge on failure; a browser would answer it with its own
+        // password prompt and then remember what was typed (see the anonymous case below).
+        res.removeHeader('WWW-Authenticate');
         if (error || !req.user) {
           failures.failed(address);
           next(
@@ -110,7 +113,9 @@ export function authenticate(people: PeopleRepository, signInLimit = 10): Reques
       });
       return;
     }
-    res.setHeader('WWW-Authenticate', 'Basic realm="Larderbook", charset="UTF-8"');
+    // No Basic challenge: a browser would show its own password prompt and then send what was
+    // typed with every request to this site, forms of other sites included. Scripts send their
+    // credentials without being asked; the console signs in through its own page.
     next(new AppError(401, 'unauthenticated', 'sign in first'));
   };
 }

@@ -49,6 +49,9 @@ export function sessionRouter(
     limit: signInLimit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    // A client may send X-Forwarded-For; unless LARDER_TRUST_PROXY names a proxy it is ignored
+    // on purpose (req.ip is the connection's address), so the warning about it is noise.
+    validate: { xForwardedForHeader: false },
     handler: (_req, _res, next) =>
       next(
         new AppError(

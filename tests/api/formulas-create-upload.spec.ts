@@ -42,6 +42,7 @@ async function upload(
   if (options.message !== undefined) form.append('message', options.message);
   const headers: Record<string, string> = {
     authorization: `Basic ${Buffer.from(`${user}:${PASSWORDS[user]}`).toString('base64')}`,
+    'x-larder-client': 'larder-tests',
   };
   if (options.revision !== undefined) headers['if-match'] = `"${options.revision}"`;
   const response = await fetch(`${server.url}/api/formulas/upload`, {
@@ -176,6 +177,7 @@ describe('uploading a formula file', () => {
       method: 'POST',
       headers: {
         authorization: `Basic ${Buffer.from(`rosa:${PASSWORDS.rosa}`).toString('base64')}`,
+        'x-larder-client': 'larder-tests',
       },
       body: new FormData(),
     });

@@ -311,6 +311,7 @@ describe('refusing a save', () => {
         method: 'POST',
         headers: {
           authorization: `Basic ${Buffer.from(`${user}:${PASSWORDS[user]}`).toString('base64')}`,
+          'x-larder-client': 'larder-tests',
         },
         body: form,
       });

@@ -47,14 +47,8 @@ export async function signIn(page: Page, user: DemoUser): Promise<void> {
   await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
 }
 
-/**
- * Starts the real server (temporary database, demo data, the built console from dist/console)
- * and headless Chromium; both stop when the test ends. No request leaves 127.0.0.1.
- */
-export async function startConsole(t: AfterHook): Promise<ConsoleSession> {
-  const server = await startTestServer(t, {
-    LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser'),
-  });
+/** Headless Debian Chromium, with nothing of its own going out to the network; closed at the end. */
+export async function launchChromium(t: AfterHook): Promise<Browser> {
   const browser = await chromium.launch({
     executablePath: CHROMIUM,
     headless: true,
@@ -68,6 +62,18 @@ export async function startConsole(t: AfterHook): Promise<ConsoleSession> {
     ],
   });
   t.after(() => browser.close());
+  return browser;
+}
+
+/**
+ * Starts the real server (temporary database, demo data, the built console from dist/console)
+ * and headless Chromium; both stop when the test ends. No request leaves 127.0.0.1.
+ */
+export async function startConsole(t: AfterHook): Promise<ConsoleSession> {
+  const server = await startTestServer(t, {
+    LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser'),
+  });
+  const browser = await launchChromium(t);
   mkdirSync(ARTIFACTS, { recursive: true });
   return {
     server,

@@ -168,7 +168,10 @@ export async function call(
 ): Promise<Answer> {
   const headers: Record<string, string> =
     typeof who === 'string'
-      ? { authorization: `Basic ${Buffer.from(`${who}:${PASSWORDS[who]}`).toString('base64')}` }
+      ? {
+          authorization: `Basic ${Buffer.from(`${who}:${PASSWORDS[who]}`).toString('base64')}`,
+          'x-larder-client': 'larder-tests',
+        }
       : { cookie: who.cookie, 'x-csrf-token': who.csrfToken };
   if (body !== undefined) headers['content-type'] = 'application/json';
   const response = await fetch(url + route, {

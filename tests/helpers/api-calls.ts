@@ -75,6 +75,8 @@ export async function send(
   } else if (sender !== 'anonymous') {
     const pair = `${sender}:${PASSWORDS[sender]}`;
     headers.authorization = `Basic ${Buffer.from(pair).toString('base64')}`;
+    // A password-signed change must name its script (server/auth/basic-writes.ts), as larder does.
+    headers['x-larder-client'] = 'larder-tests';
   }
   let body: string | FormData | undefined;
   if (call.body instanceof FormData || typeof call.body === 'string') body = call.body;

@@ -157,6 +157,8 @@ export async function startTestServer(
           ? {}
           : {
               authorization: `Basic ${Buffer.from(`${user}:${PASSWORDS[user]}`).toString('base64')}`,
+              // A script names itself on password-signed changes (server/auth/basic-writes.ts).
+              'x-larder-client': 'larder-tests',
             },
       ),
     signIn: async (user) => {

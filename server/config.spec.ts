@@ -1,0 +1,57 @@
+import assert from 'node:assert/strict';
+import { describe, it } from 'node:test';
+import { ConfigError, loadConfig } from './config.ts';
+
+const SECRET = 'x'.repeat(40);
+const PRODUCTION = { LARDER_MODE: 'production', LARDER_SESSION_SECRET: SECRET };
+
+describe('settings for running behind a reverse proxy', () => {
+  it('should believe no proxy unless told, and serve plain http without HSTS in the demo', () => {
+    const config = loadConfig({});
+    assert.equal(config.trustProxy, false);
+    assert.equal(config.httpsOnly, false);
+  });
+
+  it('should take loopback, a number of hops, or addresses and subnets', () => {
+    assert.equal(loadConfig({ LARDER_TRUST_PROXY: 'loopback' }).trustProxy, 'loopback');
+    assert.equal(loadConfig({ LARDER_TRUST_PROXY: '1' }).trustProxy, 1);
+    assert.equal(
+      loadConfig({ LARDER_TRUST_PROXY: '10.0.0.5, 192.168.0.0/16,::1' }).trustProxy,
+      '10.0.0.5, 192.168.0.0/16, ::1',
+    );
+  });
+
+  for (const bad of ['true', 'all', '0', '11', 'proxy.example.com', '10.0.0.5;rm']) {
+    it(`should refuse LARDER_TRUST_PROXY=${bad}, naming the setting`, () => {
+      assert.throws(
+        () => loadConfig({ LARDER_TRUST_PROXY: bad }),
+        (error: unknown) =>
+          error instanceof ConfigError && /LARDER_TRUST_PROXY/.test(error.message),
+      );
+    });
+  }
+
+  it('should serve production at an https address with Secure cookies and HSTS', () => {
+    const config = loadConfig({
+      ...PRODUCTION,
+      LARDER_PUBLIC_URL: 'https://larder.example.com',
+      LARDER_TRUST_PROXY: 'loopback',
+    });
+    assert.equal(config.httpsOnly, true);
+  });
+
+  it('should refuse to start production at an https address without knowing its proxy', () => {
+    assert.throws(
+      () => loadConfig({ ...PRODUCTION, LARDER_PUBLIC_URL: 'https://larder.example.com' }),
+      (error: unknown) => error instanceof ConfigError && /LARDER_TRUST_PROXY/.test(error.message),
+    );
+  });
+
+  it('should keep the demo on plain cookies even at an https address', () => {
+    const config = loadConfig({
+      LARDER_PUBLIC_URL: 'https://larder.example.com',
+      LARDER_TRUST_PROXY: 'loopback',
+    });
+    assert.equal(config.httpsOnly, false);
+  });
+});
