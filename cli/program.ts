@@ -1,6 +1,7 @@
 import { Command } from 'commander';
 import packageJson from '../package.json' with { type: 'json' };
 import { EXIT_CODES_HELP } from './cli-error.ts';
+import { backupCommand } from './commands/backup.ts';
 import { batchesCommand } from './commands/batches.ts';
 import { calcCommand } from './commands/calc.ts';
 import { checkCommand } from './commands/check.ts';
@@ -27,6 +28,7 @@ export function createProgram(io: Io): Command {
     newCommand(io),
     batchesCommand(io),
     usersCommand(io),
+    backupCommand(io),
   ]) {
     command
       .exitOverride()
