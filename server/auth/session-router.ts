@@ -5,7 +5,7 @@ import { AppError } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person } from '../people/person.ts';
-import { newCsrfToken } from './csrf.ts';
+import { newCsrfToken, showsCsrfToken, wrongCsrfToken } from './csrf.ts';
 import { SESSION_COOKIE } from './session.ts';
 import './request-person.ts';
 
@@ -90,9 +90,7 @@ export function sessionRouter(
   router.delete('/', async (req, res) => {
     const personId = req.session?.personId;
     // Signing out changes state too: a signed-in session must show its CSRF token.
-    if (personId !== undefined && req.get('x-csrf-token') !== req.session.csrfToken) {
-      throw new AppError(403, 'csrf', 'missing or wrong X-CSRF-Token header; reload the console');
-    }
+    if (personId !== undefined && !showsCsrfToken(req)) throw wrongCsrfToken();
     if (personId !== undefined) {
       const person = await people.findById(personId);
       if (person) await audit.append({ actor: person, action: 'sign-out', ip: req.ip });
