@@ -7,6 +7,7 @@ import { requireScriptWrite } from './auth/basic-writes.ts';
 import { requireCsrfToken } from './auth/csrf.ts';
 import { sessionMiddleware } from './auth/session.ts';
 import { sessionRouter } from './auth/session-router.ts';
+import { SignIns } from './auth/sign-ins.ts';
 import { batchesCsv, batchesRouter } from './batches/batches-router.ts';
 import { calcRouter } from './calc/calc-router.ts';
 import { plansRouter } from './plans/plans-router.ts';
@@ -44,18 +45,16 @@ export function createApp(context: AppContext): Express {
   api.use(sessionMiddleware(context.db, context.config.sessionSecret, httpsOnly));
   // No passport.initialize(): passport.authenticate() sets up the request itself, and Basic is
   // the one strategy, so the rest of the API need not pay for it.
-  useBasicStrategy(context.people, context.audit);
+  // One limit of sign-in attempts per address, whether by the form or by HTTP Basic.
+  const signIns = new SignIns(context.people, context.config.signInLimit);
+  useBasicStrategy(signIns, context.audit);
   api.get('/health', (_req, res) => void res.json({ ok: true }));
-  api.use('/session', sessionRouter(context.people, context.audit, context.config.signInLimit));
+  api.use('/session', sessionRouter(context.people, context.audit, signIns));
   // Anyone holding an invitation link; the token is the proof, so no sign-in and no CSRF token.
   api.use('/invitations', invitationsRouter(context));
   // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes or a
   // script's own marks for password-signed ones.
-  api.use(
-    authenticate(context.people, context.config.signInLimit),
-    requireCsrfToken,
-    requireScriptWrite,
-  );
+  api.use(authenticate(context.people), requireCsrfToken, requireScriptWrite);
   api.use('/calc', calcRouter(context));
   api.use('/plans', plansRouter(context));
   api.use('/formulas', formulasRouter(context));

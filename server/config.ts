@@ -17,7 +17,7 @@ export interface ServerConfig {
   readonly sessionSecret: string;
   /** Folder of the built console, served at /; absent when the console is not built. */
   readonly consoleDir: string;
-  /** Sign-in attempts allowed per address in a 15-minute window. */
+  /** Failed sign-in attempts allowed per address in a 15-minute window, form and Basic together. */
   readonly signInLimit: number;
   /**
    * Milliseconds a write waits while another program holds the database's write lock, before
@@ -75,7 +75,7 @@ export const SETTINGS = [
     'secret for signing session cookies, 32+ characters',
   ],
   ['LARDER_CONSOLE', './dist/console/browser', 'folder of the built console'],
-  ['LARDER_SIGN_IN_LIMIT', '10', 'sign-in attempts per address per 15 minutes'],
+  ['LARDER_SIGN_IN_LIMIT', '10', 'failed sign-ins per address per 15 minutes (form and Basic)'],
   [
     'LARDER_BUSY_TIMEOUT_MS',
     '10000',

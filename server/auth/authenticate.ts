@@ -5,17 +5,16 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import { AppError, forbidden } from '../http/app-error.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person, Role } from '../people/person.ts';
-import { FailedSignIns } from './failed-sign-ins.ts';
-import { VerifiedCredentials } from './verified-credentials.ts';
+import type { SignIns } from './sign-ins.ts';
 import './request-person.ts';
 
 /**
- * Registers HTTP Basic sign-in for scripts and the CLI; each failed attempt is audited. A password
- * proved right is remembered for a minute (VerifiedCredentials), so a script's requests do not
- * each pay for scrypt; the person is still read, and must be active, on every request.
+ * Registers HTTP Basic sign-in for scripts and the CLI, under the same limit of attempts per
+ * address as the form (SignIns); each failed attempt is audited. A password proved right is
+ * remembered for a minute, so a script's requests do not each pay for scrypt; the person is
+ * still read, and must be active, on every request.
  */
-export function useBasicStrategy(people: PeopleRepository, audit: AuditRepository): void {
-  const verified = new VerifiedCredentials();
+export function useBasicStrategy(signIns: SignIns, audit: AuditRepository): void {
   passport.use(
     new BasicStrategy(
       { passReqToCallback: true },
@@ -25,8 +24,8 @@ export function useBasicStrategy(people: PeopleRepository, audit: AuditRepositor
         password: string,
         done: (error: unknown, person?: Person | false) => void,
       ) => {
-        people
-          .authenticate(username, password, verified)
+        signIns
+          .check(req.ip ?? '', username, password, { remember: true })
           .then(async (person) => {
             if (!person)
               await audit.append({
@@ -45,15 +44,14 @@ export function useBasicStrategy(people: PeopleRepository, audit: AuditRepositor
 
 /**
  * Who is asking: the session's person (looked up on every request, so a deactivated person's
- * session ends at once) or HTTP Basic credentials. Anonymous requests get 401. An address with
- * `signInLimit` failed Basic sign-ins in 15 minutes gets 429 until its window ends, as the form.
+ * session ends at once) or HTTP Basic credentials (see useBasicStrategy). Anonymous requests get
+ * 401; an address at its limit of sign-in attempts gets 429, with Retry-After, as on the form.
  */
-export function authenticate(people: PeopleRepository, signInLimit = 10): RequestHandler {
+export function authenticate(people: PeopleRepository): RequestHandler {
   const basic = passport.authenticate('basic', {
     session: false,
     failWithError: true,
   }) as RequestHandler;
-  const failures = new FailedSignIns(signInLimit);
   return (req: Request, res: Response, next: NextFunction) => {
     const personId = req.session?.personId;
     if (personId !== undefined) {
@@ -79,25 +77,13 @@ export function authenticate(people: PeopleRepository, signInLimit = 10): Reques
       return;
     }
     if (req.headers.authorization?.startsWith('Basic ')) {
-      const address = req.ip ?? '';
-      const wait = failures.waitFor(address);
-      if (wait > 0) {
-        res.setHeader('Retry-After', String(Math.ceil(wait / 1000)));
-        next(
-          new AppError(
-            429,
-            'too-many-attempts',
-            'too many failed sign-in attempts; wait 15 minutes and try again',
-          ),
-        );
-        return;
-      }
       basic(req, res, (error?: unknown) => {
         // passport sets a Basic challenge on failure; a browser would answer it with its own
         // password prompt and then remember what was typed (see the anonymous case below).
         res.removeHeader('WWW-Authenticate');
+        // Too many attempts, or too many sign-ins in line for their hash: say so, and when to return.
+        if (error instanceof AppError) return next(error);
         if (error || !req.user) {
-          failures.failed(address);
           next(
             new AppError(
               401,

@@ -1,12 +1,12 @@
 import { Router, type Request } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import { AppError } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person } from '../people/person.ts';
-import { newCsrfToken } from './csrf.ts';
+import { newCsrfToken, showsCsrfToken, wrongCsrfToken } from './csrf.ts';
 import { SESSION_COOKIE } from './session.ts';
+import type { SignIns } from './sign-ins.ts';
 import './request-person.ts';
 
 const SIGN_IN_BODY = {
@@ -36,35 +36,19 @@ function startSession(req: Request, person: Person): Promise<string> {
 
 /**
  * /api/session: sign in with a form (POST), see who is signed in (GET), sign out (DELETE).
- * Sign-in attempts are limited per address.
+ * Sign-in attempts are limited per address, together with HTTP Basic's (SignIns): 429 past the
+ * limit, and only failed attempts count.
  */
 export function sessionRouter(
   people: PeopleRepository,
   audit: AuditRepository,
-  signInLimit: number,
+  signIns: SignIns,
 ): Router {
   const router = Router();
-  const limiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: signInLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    // A client may send X-Forwarded-For; unless LARDER_TRUST_PROXY names a proxy it is ignored
-    // on purpose (req.ip is the connection's address), so the warning about it is noise.
-    validate: { xForwardedForHeader: false },
-    handler: (_req, _res, next) =>
-      next(
-        new AppError(
-          429,
-          'too-many-attempts',
-          'too many sign-in attempts; wait 15 minutes and try again',
-        ),
-      ),
-  });
 
-  router.post('/', limiter, validateBody(SIGN_IN_BODY), async (req, res) => {
+  router.post('/', validateBody(SIGN_IN_BODY), async (req, res) => {
     const { username, password } = req.body as { username: string; password: string };
-    const person = await people.authenticate(username, password);
+    const person = await signIns.check(req.ip ?? '', username, password);
     if (!person) {
       await audit.append({
         actorName: username,
@@ -93,9 +77,7 @@ export function sessionRouter(
   router.delete('/', async (req, res) => {
     const personId = req.session?.personId;
     // Signing out changes state too: a signed-in session must show its CSRF token.
-    if (personId !== undefined && req.get('x-csrf-token') !== req.session.csrfToken) {
-      throw new AppError(403, 'csrf', 'missing or wrong X-CSRF-Token header; reload the console');
-    }
+    if (personId !== undefined && !showsCsrfToken(req)) throw wrongCsrfToken();
     if (personId !== undefined) {
       const person = await people.findById(personId);
       if (person) await audit.append({ actor: person, action: 'sign-out', ip: req.ip });

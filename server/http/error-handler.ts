@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { BatchError } from '../../shared/index.ts';
 import { AppError } from './app-error.ts';
+import { RetryLaterError } from './retry-later.ts';
 
 /** JSON 404 for any /api route nobody answered. */
 export const apiNotFound: RequestHandler = (req, _res, next) => {
@@ -67,6 +68,8 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, _req, res, nex
   const storage = storageError(error);
   if (error instanceof AppError) {
     appError = error;
+    if (error instanceof RetryLaterError)
+      res.setHeader('Retry-After', String(error.retryAfterSeconds));
   } else if (storage) {
     // For whoever looks after the server; the message is SQLite's, without the SQL.
     console.error(`database: ${(error as Error).message}`); // eslint-disable-line no-console -- the server log is the place for it

@@ -2,7 +2,6 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
 import { hashPassword, verifyPassword } from '../auth/passwords.ts';
-import type { VerifiedCredentials } from '../auth/verified-credentials.ts';
 import type { Person, Role } from './person.ts';
 
 interface PersonRow {
@@ -88,31 +87,31 @@ export class PeopleRepository {
   }
 
   /**
-   * The person a username and password belong to, when the password is right and the person is
-   * active; otherwise undefined (without saying which part was wrong). The person is read afresh
-   * every time; `verified` (HTTP Basic) spares the scrypt hash of a password proved right a
-   * moment ago against the same stored hash.
+   * A person and their stored password hash, for checking a password (server/auth/sign-ins.ts);
+   * undefined for an unknown username. Read afresh every time.
    */
-  async authenticate(
+  async credentials(
     username: string,
-    password: string,
-    verified?: VerifiedCredentials,
-  ): Promise<Person | undefined> {
+  ): Promise<{ person: Person; passwordHash: string } | undefined> {
     // Every HTTP Basic request asks this: one plain read (readRow), not Sequelize's query path.
     const row = await readRow<PersonRow>(
       this.db.sequelize,
       'SELECT * FROM people WHERE username = ?',
       [username],
     );
-    if (row && row.active === 1 && verified) {
-      const ok = await verified.check(row.id, row.password_hash, password, () =>
-        verifyPassword(password, row.password_hash),
-      );
-      return ok ? toPerson(row) : undefined;
-    }
-    // Hash even for an unknown name, so the answer takes as long either way.
-    const ok = await verifyPassword(password, row?.password_hash ?? DUMMY_HASH);
-    return row && ok && row.active === 1 ? toPerson(row) : undefined;
+    return row ? { person: toPerson(row), passwordHash: row.password_hash } : undefined;
+  }
+
+  /**
+   * The person a username and password belong to, when the password is right and the person is
+   * active; otherwise undefined (without saying which part was wrong). For someone signed in
+   * already confirming their password, and for the command line: people signing in go through
+   * SignIns, which limits their attempts.
+   */
+  async authenticate(username: string, password: string): Promise<Person | undefined> {
+    const account = await this.credentials(username);
+    const ok = await verifyPassword(password, account?.passwordHash, 'account');
+    return ok && account?.person.active ? account.person : undefined;
   }
 
   async add(person: NewPerson, transaction?: Transaction): Promise<Person> {
@@ -223,7 +222,3 @@ export class PeopleRepository {
     return row.n;
   }
 }
-
-// A valid hash of a random password, used to spend the same time on unknown usernames.
-const DUMMY_HASH =
-  'scrypt$32768$8$1$AAAAAAAAAAAAAAAAAAAAAA==$AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA=';
