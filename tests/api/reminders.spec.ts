@@ -3,7 +3,6 @@ import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import type { AppContext } from '../../server/app-context.ts';
 import { ReminderScheduler } from '../../server/reminders/reminder-scheduler.ts';
-import { BELLY } from '../helpers/api-calls.ts';
 import {
   giveDemoAddresses,
   handClock,
@@ -18,7 +17,11 @@ import { startTestServer, type TestServer } from '../helpers/test-server.ts';
 // The demo belly (formulas/quillmoor-belly.yaml) at 4 cm: 2 days per cm = 8 days from
 // Thu 29 Feb 2024 (a leap day), ready Fri 8 Mar; flipped every 2 days: 2, 4 and 6 Mar.
 // source: the formula's own hold rule (days_per_cm: 2, min_days: 7, flip_every_days: 2)
-const START = BELLY.batch.start;
+const START = '2024-02-29';
+const BELLY = {
+  formula: 'quillmoor-belly',
+  batch: { meat: '4.26kg', thickness: '4cm', start: START },
+} as const;
 const FLIPS = ['2024-03-02', '2024-03-04', '2024-03-06'];
 const READY = '2024-03-08';
 const OVERDUE = '2024-03-09';
