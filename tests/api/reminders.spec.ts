@@ -213,6 +213,29 @@ describe('reminders', () => {
     assert.equal((await readOutbox(server)).filter((m) => m.related === lot).length, 2 + 2 + 3);
   });
 
+  it('should not chase a batch recorded from paper for days already past when it was recorded', async (t) => {
+    const { server, clock } = await setUp(t);
+    // Made from 29 Feb, entered on 20 Mar: past its ready day (8 Mar) and overdue day (9 Mar).
+    clock.set(localNoon('2024-03-20'));
+    const finished = await belly(server, 'curing');
+    // Entered on 5 Mar: the flips of 2 and 4 Mar have passed; 6 Mar, ready and overdue have not.
+    clock.set(localNoon('2024-03-05'));
+    const midway = await belly(server, 'curing');
+
+    assert.deepEqual((await runOn(server, clock, '2024-03-05')).sent, []);
+    for (const day of [FLIPS[2], READY, OVERDUE]) await runOn(server, clock, day);
+    const later = await runOn(server, clock, '2024-03-20');
+    assert.deepEqual(later.sent, [], 'nothing for the batch recorded on 20 Mar');
+    await runOn(server, clock, '2024-04-20');
+
+    assert.deepEqual(await remindersOf(server, finished), []);
+    assert.deepEqual(await remindersOf(server, midway), [
+      `reminder-flip ${stamp(FLIPS[2])} → ${ROSA}, ${TOBIN}`,
+      `reminder-ready ${stamp(READY)} → ${ROSA}, ${TOBIN}`,
+      `reminder-overdue ${stamp(OVERDUE)} → ${IMKE}, ${ROSA}, ${TOBIN}`,
+    ]);
+  });
+
   it('should send nothing for a done, discarded or not yet curing batch', async (t) => {
     const { server, clock } = await setUp(t);
     const done = await belly(server, 'curing');
