@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { assertErrorEnvelope, snapshot } from '../helpers/api-calls.ts';
-import { clockFrom, startTestServer, type TestServer } from '../helpers/test-server.ts';
+import { assertErrorEnvelope, batchCounts } from '../helpers/api-calls.ts';
+import { clockFrom, startTestServer, type ApiResponse } from '../helpers/test-server.ts';
 
 // The server's today: a start may lie from 2025-12-03 to 2027-12-03 (365 days either way).
 // source: our start-day window (shared/calculation/start-window.ts)
@@ -14,11 +14,7 @@ const belly = (start: string) => ({
 });
 
 /** Asserts a 400 'bad-batch' naming --start, its side of the window and the days allowed. */
-function assertOutOfWindow(
-  response: Awaited<ReturnType<ReturnType<TestServer['as']>['post']>>,
-  start: string,
-  side: 'ahead' | 'back',
-): void {
+function assertOutOfWindow(response: ApiResponse, start: string, side: 'ahead' | 'back'): void {
   assertErrorEnvelope(response, start);
   assert.equal(response.status, 400, response.text);
   assert.equal(response.json.error.code, 'bad-batch');
@@ -27,12 +23,6 @@ function assertOutOfWindow(
     `--start ${start} is more than a year ${side}: ${RANGE} (a year either side of today, ${TODAY})`,
   );
   assert.deepEqual(response.json.error.details, [{ option: 'start' }]);
-}
-
-/** The batches and their events (reading a formula may note its revision; that is no batch). */
-async function batchCounts(server: TestServer): Promise<[number, number]> {
-  const { counts } = await snapshot(server);
-  return [counts.batches, counts.batch_events];
 }
 
 const FAR: readonly [string, 'ahead' | 'back'][] = [

@@ -120,6 +120,12 @@ export async function snapshot(server: TestServer): Promise<Snapshot> {
   return { counts, files };
 }
 
+/** The batches and their events: what recording writes (reading a formula may note its revision). */
+export async function batchCounts(server: TestServer): Promise<[number, number]> {
+  const { counts } = await snapshot(server);
+  return [counts.batches, counts.batch_events];
+}
+
 /** Asserts the JSON error envelope `{ error: { code, message, details } }` of a 4xx. */
 export function assertErrorEnvelope(response: ApiResponse, what: string): void {
   assert.ok(response.status >= 400 && response.status < 500, `${what}: ${response.status}`);
