@@ -11,7 +11,8 @@ const CONNECTIONS = 50;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
 const BODY = JSON.stringify({
   formula: 'quillmoor-belly',
-  batch: { meat: '4.26 kg', thickness: '4 cm', start: '2026-12-02' },
+  // Today on the server's clock: a start day must lie within a year of it.
+  batch: { meat: '4.26 kg', thickness: '4 cm', start: new Date().toISOString().slice(0, 10) },
 });
 
 interface Run {

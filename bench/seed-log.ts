@@ -62,7 +62,9 @@ function templates(): Template[] {
       const result = presentResult(
         calculate(
           formula,
-          parseBatchOptions({ ...SAMPLE[formula.kind], start: '2026-01-01' }, formula),
+          parseBatchOptions({ ...SAMPLE[formula.kind], start: '2026-01-01' }, formula, {
+            today: '2026-01-01',
+          }),
         ),
         'metric',
       );

@@ -20,6 +20,6 @@ export interface AppContext {
   readonly mail: MailService;
   readonly invitations: InvitationRepository;
   readonly reminderPrefs: ReminderPrefsRepository;
-  /** The clock of invitations, reminders and the outbox; tests move it. */
+  /** The clock of invitations, reminders, the outbox and the batch routes' today; tests move it. */
   readonly now: () => Date;
 }

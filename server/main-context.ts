@@ -1,9 +1,11 @@
+import path from 'node:path';
 import type { AppContext } from './app-context.ts';
 import { AuditRepository } from './audit/audit-repository.ts';
 import { BatchRepository } from './batches/batch-repository.ts';
 import type { ServerConfig } from './config.ts';
 import { openDatabase } from './db/database.ts';
 import { FormulaStore } from './formulas/formula-store.ts';
+import { removeStaleTemporaries } from './formulas/stale-temporaries.ts';
 import { InvitationRepository } from './invitations/invitation-repository.ts';
 import { openMail } from './mail/mail-service.ts';
 import { PeopleRepository } from './people/people-repository.ts';
@@ -11,12 +13,19 @@ import { ReminderPrefsRepository } from './reminders/reminder-prefs-repository.t
 
 /**
  * Opens the database and builds the repositories the routers share; used by main and the tests.
- * `now` is the clock of invitations, reminders and the outbox (tests pass their own).
+ * `now` is the clock of invitations, reminders, the outbox and the batch routes (tests pass their
+ * own). First removes what saves killed mid-way left in the formulas folder, and logs it.
  */
 export async function openContext(
   config: ServerConfig,
   { now = () => new Date() }: { now?: () => Date } = {},
 ): Promise<AppContext> {
+  for (const name of await removeStaleTemporaries(config.formulasDir)) {
+    // eslint-disable-next-line no-console -- the server log is where someone looks for this
+    console.log(
+      `Removed ${path.join(config.formulasDir, name)}: left over from a formula save that did not finish`,
+    );
+  }
   const db = await openDatabase(config.databaseFile, { busyTimeoutMs: config.busyTimeoutMs });
   const audit = new AuditRepository(db);
   return {

@@ -81,7 +81,11 @@ const BATCH_OPTIONS: readonly [keyof RawBatchOptions, string, string][] = [
   ],
   ['portion', '--portion <weight>', "blend: portion weight, instead of the formula's"],
   ['base', '--base <weight>', 'mix: weight of the base ingredient'],
-  ['start', '--start <date>', 'day the batch starts, YYYY-MM-DD (default: today)'],
+  [
+    'start',
+    '--start <date>',
+    'day the batch starts, YYYY-MM-DD, within a year of today (default: today)',
+  ],
 ];
 
 /** A value parser that refuses an option given twice, instead of silently keeping the last. */
@@ -163,7 +167,8 @@ ${EXIT_CODES_HELP}`,
 
 async function runCalc(reference: string, options: CalcOptions, io: Io): Promise<void> {
   const { formula, file, warnings } = loadFormula(reference, formulasFolder(options.formulas));
-  const raw: RawBatchOptions = { start: today() };
+  const day = today();
+  const raw: RawBatchOptions = { start: day };
   for (const [key] of BATCH_OPTIONS) if (options[key] !== undefined) raw[key] = options[key];
   for (const warning of warnings) io.err(`${warning}\n`);
   if (!options.record && (options.server || options.status || options.notes)) {
@@ -179,7 +184,7 @@ async function runCalc(reference: string, options: CalcOptions, io: Io): Promise
   if (options.record) return recordBatch(formula.id, file, raw, options, pdf, io);
   let result;
   try {
-    result = calculate(formula, parseBatchOptions(raw, formula));
+    result = calculate(formula, parseBatchOptions(raw, formula, { today: day }));
   } catch (error) {
     if (error instanceof BatchError) throw new CliError(error.message, EXIT.usage);
     throw error;

@@ -51,7 +51,10 @@ export function planCommand(io: Io): Command {
     .argument('<assembly>', 'assembly file path, or its id in the formulas folder')
     .requiredOption('--count <units>', 'how many units to serve (plates, sandwiches)')
     .requiredOption('--for <date>', 'the day of service, YYYY-MM-DD')
-    .option('--today <date>', 'the day the plan is made, YYYY-MM-DD (default: today)')
+    .option(
+      '--today <date>',
+      'the day the plan is made, YYYY-MM-DD, to plan as if on another day (default: today; not with --record)',
+    )
     .addOption(
       new Option('--units <system>', 'print in metric or US units')
         .choices(['metric', 'us'])
@@ -84,7 +87,8 @@ Examples:
   larder plan smokehouse-burger --count 120 --for 2026-12-18 --units us --json
   LARDER_USER=tobin LARDER_PASSWORD=… larder plan corned-beef-sandwich --count 60 --for 2026-12-18 --record
 ${EXIT_CODES_HELP}
-  (2 also when the plan cannot be made: a batch that would start before today, or is too big)`,
+  (2 also when the plan cannot be made: a batch that would start before today, a service day
+   more than a year ahead, or a batch too big)`,
     )
     .action((reference: string, options: PlanOptions) => runPlan(reference, options, io));
 }
@@ -156,6 +160,14 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
   if (serverUrl && options.today) {
     throw new CliError(
       '--today cannot be used with --server: the server plans from its own today',
+      EXIT.usage,
+    );
+  }
+  // A recorded batch's lot code carries its start day; a pretended today could put it a century
+  // off, where its two-digit year reads as this one.
+  if (options.record && options.today) {
+    throw new CliError(
+      '--today cannot be used with --record: recorded batches start from this machine’s today',
       EXIT.usage,
     );
   }

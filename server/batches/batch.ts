@@ -86,7 +86,7 @@ export interface BatchActor {
 export interface ChangeOptions {
   readonly actor: BatchActor;
   readonly ip?: string;
-  /** ISO timestamp of the change; now unless demo history is being written. */
+  /** ISO timestamp of the change: the server's clock, or the demo's history; now when not given. */
   readonly at?: string;
   /** Whether to append to the audit log; only the demo seed, writing history, turns it off. */
   readonly audit?: boolean;

@@ -6,6 +6,7 @@ import { personOf } from '../auth/request-person.ts';
 import { BATCH_OPTIONS_SCHEMA, UNITS_SCHEMA } from '../calc/calc-request.ts';
 import { notFound } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
+import { serverToday } from '../server-today.ts';
 import { BATCH_STATUSES, RECORD_STATUSES, type BatchStatus, type ChangeOptions } from './batch.ts';
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
 import { parseListQuery } from './batch-query.ts';
@@ -48,8 +49,13 @@ function lotParam(req: Request): string {
   return lot;
 }
 
-function changeBy(req: Request): ChangeOptions {
-  return { actor: personOf(req), ...(req.ip === undefined ? {} : { ip: req.ip }) };
+/** Who makes a change, from where, and when by the server's clock (reminders count from it). */
+function changeBy(req: Request, { now }: Pick<AppContext, 'now'>): ChangeOptions {
+  return {
+    actor: personOf(req),
+    at: now().toISOString(),
+    ...(req.ip === undefined ? {} : { ip: req.ip }),
+  };
 }
 
 /** A body-less POST counts as an empty object, so `{}` need not be sent. */
@@ -62,7 +68,8 @@ const emptyBody: RequestHandler = (req, _res, next) => {
  * /api/batches: the batch log. Every signed-in role reads; admins and cooks record batches and
  * move them along; admins and reviewers sign them off.
  */
-export function batchesRouter({ batches, formulas, db, audit }: AppContext): Router {
+export function batchesRouter(context: AppContext): Router {
+  const { batches, formulas, db, audit } = context;
   const router = Router();
   // Reading through the history records the revision a batch is made from, if it is new on disk.
   const history = new FormulaHistory(formulas, db, audit);
@@ -75,10 +82,9 @@ export function batchesRouter({ batches, formulas, db, audit }: AppContext): Rou
     const request = req.body as RecordRequest;
     const operator = personOf(req);
     const current = await history.current(request.formula);
-    const today = new Date().toISOString().slice(0, 10);
     const batch = await batches.record(
-      prepareBatch(current, request, operator.id, today),
-      changeBy(req),
+      prepareBatch(current, request, operator.id, serverToday(context)),
+      changeBy(req, context),
     );
     res.status(201).location(`/api/batches/${batch.lotCode}`).json({ batch });
   });
@@ -113,7 +119,7 @@ export function batchesRouter({ batches, formulas, db, audit }: AppContext): Rou
         lotParam(req),
         to,
         reason?.trim() || null,
-        changeBy(req),
+        changeBy(req, context),
       );
       res.json({ batch });
     },
@@ -126,7 +132,11 @@ export function batchesRouter({ batches, formulas, db, audit }: AppContext): Rou
     validateBody(SIGN_OFF_BODY),
     async (req, res) => {
       const { note } = req.body as { note?: string };
-      const batch = await batches.signOff(lotParam(req), note?.trim() || null, changeBy(req));
+      const batch = await batches.signOff(
+        lotParam(req),
+        note?.trim() || null,
+        changeBy(req, context),
+      );
       res.json({ batch });
     },
   );

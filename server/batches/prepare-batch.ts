@@ -19,8 +19,10 @@ export interface RecordRequest {
  * Calculates a batch on the server from the formula as it is now and turns it into what is
  * stored. A batch that fails a critical limit (a cure over its nitrite ceiling) is refused here,
  * before anything is written.
- * @param today ISO date used when the request gives no start date
- * @throws AppError 400 for batch options that cannot make a batch, 422 'critical-limit' when refused
+ * @param today the recorder's today, YYYY-MM-DD: the start day when the request gives none, and
+ *   the middle of the days a start may lie in (a year either side)
+ * @throws AppError 400 for batch options that cannot make a batch (a start day out of range among
+ *   them), 422 'critical-limit' when refused
  */
 export function prepareBatch(
   current: CurrentFormula,
@@ -31,7 +33,7 @@ export function prepareBatch(
   const { formula, revision } = current;
   const inputs: RawBatchOptions = { start: today, ...request.batch };
   const units = request.units ?? 'metric';
-  const result = calculateBatch(formula, inputs, units);
+  const result = calculateBatch(formula, inputs, units, today);
   // calculateBatch has refused an assembly already (400): it is planned, never one batch.
   if (formula.kind === 'assembly') throw new Error('an assembly is not a batch');
   const failed = result.checks.filter((check) => check.critical && check.status === 'fail');

@@ -61,14 +61,20 @@ export function formulaFromText(yaml: string, name: string): Formula {
   return reading.formula;
 }
 
-/** Calculates and presents one batch, turning batch-input mistakes into 400s that name the option. */
+/**
+ * Calculates and presents one batch, turning batch-input mistakes into 400s that name the option.
+ * @param today the server's today, YYYY-MM-DD: the start day when none is given, and the middle
+ *   of the days a start may lie in
+ */
 export function calculateBatch(
   formula: Formula,
   raw: RawBatchOptions,
   units: UnitSystem,
+  today: string,
 ): PresentedResult {
   try {
-    return presentResult(calculate(formula, parseBatchOptions(raw, formula)), units);
+    const input = parseBatchOptions({ start: today, ...raw }, formula, { today });
+    return presentResult(calculate(formula, input), units);
   } catch (error) {
     if (error instanceof BatchError)
       throw new AppError(

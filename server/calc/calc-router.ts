@@ -2,6 +2,7 @@ import { Router } from 'express';
 import type { RawBatchOptions, UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { validateBody } from '../http/validate-body.ts';
+import { serverToday } from '../server-today.ts';
 import {
   BATCH_OPTIONS_SCHEMA,
   UNITS_SCHEMA,
@@ -48,13 +49,7 @@ export function calcRouter(context: AppContext): Router {
       typeof body.formula === 'string'
         ? (await context.formulas.current(body.formula)).formula
         : formulaFromText(body.formula.yaml, 'inline formula');
-    res.json(
-      calculateBatch(
-        formula,
-        { start: new Date().toISOString().slice(0, 10), ...body.batch },
-        body.units ?? 'metric',
-      ),
-    );
+    res.json(calculateBatch(formula, body.batch, body.units ?? 'metric', serverToday(context)));
   });
   return router;
 }

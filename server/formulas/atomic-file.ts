@@ -2,11 +2,22 @@ import { randomBytes } from 'node:crypto';
 import { access, link, open, rename, stat, unlink } from 'node:fs/promises';
 import path from 'node:path';
 
+// A temporary file's name: ".NAME.<random hex>.tmp" beside the file NAME it will replace.
+const TEMPORARY_NAME = /^\.(.+)\.[0-9a-f]+\.tmp$/;
+
+/**
+ * The name of the file a temporary file from writeTemporary was written for ("x.yaml" for
+ * ".x.yaml.0a1b2c.tmp"), or undefined for a name writeTemporary never gives.
+ */
+export function temporaryTarget(name: string): string | undefined {
+  return TEMPORARY_NAME.exec(name)?.[1];
+}
+
 /**
  * Writes text or bytes to a new temporary file beside `target` and flushes it to disk, so that a
  * rename can then swap it in whole. The temporary name starts with a dot and ends in .tmp, so
- * nothing that lists *.yaml files ever sees it. The file takes the mode of `modeFrom` when that
- * exists.
+ * nothing that lists *.yaml files ever sees it (see temporaryTarget). The file takes the mode of
+ * `modeFrom` when that exists.
  * @returns the temporary file's path
  */
 export async function writeTemporary(

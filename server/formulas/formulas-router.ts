@@ -6,6 +6,7 @@ import {
   type UnitSystem,
 } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
+import { serverToday } from '../server-today.ts';
 import { requireRole } from '../auth/authenticate.ts';
 import {
   BATCH_OPTIONS_SCHEMA,
@@ -187,8 +188,9 @@ export function formulasRouter(context: AppContext): Router {
     }
     const result = calculateBatch(
       formula,
-      { start: new Date().toISOString().slice(0, 10), ...body.batch },
+      body.batch,
       body.units ?? 'metric',
+      serverToday(context),
     );
     res.json({ id, saved: body.yaml === undefined, revision, result });
   });

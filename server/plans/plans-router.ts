@@ -5,14 +5,17 @@ import { requireRole } from '../auth/authenticate.ts';
 import { personOf } from '../auth/request-person.ts';
 import { FormulaHistory } from '../formulas/formula-history.ts';
 import { validateBody } from '../http/validate-body.ts';
+import { serverToday } from '../server-today.ts';
 import { PLAN_BODY, planFromStore, type PlanRequest } from './plan-request.ts';
 import { recordPlan } from './record-plan.ts';
 
-/** Today on the server, YYYY-MM-DD (UTC, as the batch routes count it). */
-const serverToday = (): string => new Date().toISOString().slice(0, 10);
-
-function changeBy(req: Request) {
-  return { actor: personOf(req), ...(req.ip === undefined ? {} : { ip: req.ip }) };
+/** Who records the plan, from where, and when by the server's clock (reminders count from it). */
+function changeBy(req: Request, { now }: Pick<AppContext, 'now'>) {
+  return {
+    actor: personOf(req),
+    at: now().toISOString(),
+    ...(req.ip === undefined ? {} : { ip: req.ip }),
+  };
 }
 
 /**
@@ -20,13 +23,14 @@ function changeBy(req: Request) {
  * the plan's batches as planned (admins and cooks). A plan that cannot be made is 422 with the
  * reason, naming the formula; nothing is recorded.
  */
-export function plansRouter({ formulas, batches, db, audit }: AppContext): Router {
+export function plansRouter(context: AppContext): Router {
+  const { formulas, batches, db, audit } = context;
   const router = Router();
   const history = new FormulaHistory(formulas, db, audit);
 
   router.post('/', validateBody(PLAN_BODY), async (req, res) => {
     const request = req.body as PlanRequest;
-    const plan = await planFromStore(formulas, request, serverToday());
+    const plan = await planFromStore(formulas, request, serverToday(context));
     res.json(presentPlan(plan, request.units ?? 'metric'));
   });
 
@@ -34,7 +38,7 @@ export function plansRouter({ formulas, batches, db, audit }: AppContext): Route
   router.post('/sheet.pdf', validateBody(PLAN_BODY), async (req, res) => {
     const request = req.body as PlanRequest;
     const plan = presentPlan(
-      await planFromStore(formulas, request, serverToday()),
+      await planFromStore(formulas, request, serverToday(context)),
       request.units ?? 'metric',
     );
     // pdfkit loads on the first sheet, not at start.
@@ -55,14 +59,14 @@ export function plansRouter({ formulas, batches, db, audit }: AppContext): Route
     validateBody(PLAN_BODY),
     async (req, res) => {
       const request = req.body as PlanRequest;
-      const plan = await planFromStore(formulas, request, serverToday());
+      const plan = await planFromStore(formulas, request, serverToday(context));
       const units = request.units ?? 'metric';
       const recorded = await recordPlan(
         plan,
         units,
         personOf(req).id,
         { history, batches },
-        changeBy(req),
+        changeBy(req, context),
       );
       res.status(201).json({ plan: presentPlan(plan, units), batches: recorded });
     },

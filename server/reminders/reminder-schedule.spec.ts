@@ -68,6 +68,47 @@ describe('reminder schedule', () => {
     );
   });
 
+  it('should owe a batch recorded after its ready day nothing for the days already past', () => {
+    // Made on paper from 2 Dec, recorded on 20 Dec: ready (10 Dec) and overdue (11 Dec) had passed.
+    const paper = { ...BELLY, recordedOn: '2026-12-20' };
+    assert.deepEqual(dueReminders(paper, '2026-12-20'), []);
+    assert.deepEqual(dueReminders(paper, '2027-01-20'), []);
+  });
+
+  it('should owe a backdated batch only what falls due from the day it was recorded on', () => {
+    // Recorded on 7 Dec: the flips of 4 and 6 Dec are past; 8 Dec, ready and overdue are not.
+    const paper = { ...BELLY, recordedOn: '2026-12-07' };
+    assert.deepEqual(dueReminders(paper, '2026-12-07'), []);
+    assert.deepEqual(dueReminders(paper, '2026-12-08'), [{ kind: 'flip', dueOn: '2026-12-08' }]);
+    assert.deepEqual(dueReminders(paper, '2026-12-11'), [
+      { kind: 'ready', dueOn: '2026-12-10' },
+      { kind: 'overdue', dueOn: '2026-12-11' },
+    ]);
+    // Recorded on its ready day: that day's reminder still goes out.
+    assert.deepEqual(dueReminders({ ...BELLY, recordedOn: '2026-12-10' }, '2026-12-10'), [
+      { kind: 'ready', dueOn: '2026-12-10' },
+    ]);
+  });
+
+  it('should never owe a reminder for a day before the batch was recorded', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 40 }),
+        fc.integer({ min: 1, max: 10 }),
+        fc.integer({ min: 0, max: 60 }),
+        fc.integer({ min: 0, max: 60 }),
+        (days, every, recordedAfter, todayAfter) => {
+          const start = '2026-12-02';
+          const recordedOn = addDays(start, recordedAfter);
+          const hold = { start, ready: addDays(start, days), flipEveryDays: every, recordedOn };
+          for (const reminder of dueReminders(hold, addDays(recordedOn, todayAfter))) {
+            assert.ok(reminder.dueOn >= recordedOn, `${reminder.kind} ${reminder.dueOn}`);
+          }
+        },
+      ),
+    );
+  });
+
   it('should read the local calendar date of an instant', () => {
     assert.equal(localDate(new Date(2026, 11, 4, 0, 5)), '2026-12-04');
     assert.equal(localDate(new Date(2026, 11, 4, 23, 55)), '2026-12-04');

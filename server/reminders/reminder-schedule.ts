@@ -14,6 +14,11 @@ export interface HoldDates {
   readonly ready: string;
   /** Turn or overhaul every this many days, when the formula says so. */
   readonly flipEveryDays?: number | null;
+  /**
+   * ISO date the batch was recorded on (the server's time zone). A batch made on paper and
+   * recorded later starts in the past: nothing due before this day is sent.
+   */
+  readonly recordedOn?: string;
 }
 
 /** A reminder that has come due: which, and the day it is for. */
@@ -43,6 +48,9 @@ export function flipDays(hold: HoldDates): string[] {
  *   (turning the meat twice for two missed days would be wrong).
  * - ready: the ready day, from that day on (late if need be).
  * - overdue: the day after the ready day, from then on.
+ * None is owed for a day before the batch was recorded: a batch recorded after the event (from
+ * paper) is not flipped, readied or chased for days already past when it was entered; what falls
+ * due from the day it was recorded on is sent as for any batch.
  * The caller leaves out batches that are done or discarded, and reminders already sent.
  */
 export function dueReminders(hold: HoldDates, today: string): DueReminder[] {
@@ -56,7 +64,8 @@ export function dueReminders(hold: HoldDates, today: string): DueReminder[] {
   if (today >= hold.ready) due.push({ kind: 'ready', dueOn: hold.ready });
   const overdue = addDays(hold.ready, 1);
   if (today >= overdue) due.push({ kind: 'overdue', dueOn: overdue });
-  return due;
+  const { recordedOn } = hold;
+  return recordedOn ? due.filter((reminder) => reminder.dueOn >= recordedOn) : due;
 }
 
 /** The local calendar date of an instant (the server's time zone, TZ), as YYYY-MM-DD. */

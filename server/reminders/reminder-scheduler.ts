@@ -43,20 +43,26 @@ interface HeldRow {
   status: 'curing' | 'proofing';
   started_on: string;
   ready_on: string | null;
+  recorded_at: string;
   schedule_start: string | null;
   schedule_ready: string | null;
   flip_every_days: number | null;
 }
 
-/** The hold's dates: the result's schedule, or for a batch with only a ready date, that. */
+/**
+ * The hold's dates: the result's schedule, or for a batch with only a ready date, that; with the
+ * day it was recorded on, before which nothing is due.
+ */
 function holdOf(row: HeldRow): HoldDates | undefined {
+  const recordedOn = localDate(new Date(row.recorded_at));
   if (row.schedule_start && row.schedule_ready)
     return {
       start: row.schedule_start,
       ready: row.schedule_ready,
       flipEveryDays: row.flip_every_days,
+      recordedOn,
     };
-  return row.ready_on ? { start: row.started_on, ready: row.ready_on } : undefined;
+  return row.ready_on ? { start: row.started_on, ready: row.ready_on, recordedOn } : undefined;
 }
 
 const key = (batchId: number, kind: ReminderKind, dueOn: string): string =>
@@ -121,7 +127,7 @@ export class ReminderScheduler {
     const { db, mail } = this.context;
     const today = localDate(this.now());
     const held = await db.sequelize.query<HeldRow>(
-      `SELECT id, lot_code, formula_title, status, started_on, ready_on,
+      `SELECT id, lot_code, formula_title, status, started_on, ready_on, recorded_at,
          json_extract(result, '$.schedule.start') AS schedule_start,
          json_extract(result, '$.schedule.ready') AS schedule_ready,
          json_extract(result, '$.schedule.flipEveryDays') AS flip_every_days

@@ -9,16 +9,23 @@ import { parseVolume, waterGramsFromLitres } from '../units/volume.ts';
 import { BatchError, assemblyIsPlanned } from './batch-error.ts';
 import type { BatchInput, RawBatchOptions } from './batch-input.ts';
 import { isIsoDate } from './dates.ts';
+import { checkStartDate } from './start-window.ts';
 
 export type { RawBatchOptions } from './batch-input.ts';
 
-type Reader = (text: string, option: string) => unknown;
+/** What reading an option may need besides its text: the caller's today. */
+export interface ReadContext {
+  /** Today, YYYY-MM-DD, from the caller's clock: the core never reads one. */
+  readonly today: string;
+}
+
+type Reader = (text: string, option: string, context: ReadContext) => unknown;
 
 const ALL: readonly BatchKind[] = ['cure', 'dough', 'blend', 'mix'];
 const KG = new Decimal(1000);
 
 /** A reader for a mass that must be more than zero and at most `maxKg`. */
-function mass(maxKg: number): Reader {
+function mass(maxKg: number): (text: string, option: string) => Decimal {
   return (text, option) => {
     const grams = parseMass(text);
     if (grams.isZero()) throw new BatchError(`--${option} must be more than 0`, option);
@@ -48,7 +55,7 @@ function ranged(parse: (text: string) => Decimal, min: number, max: number, unit
 function waterReader(text: string, option: string): Decimal {
   // Brine water may be weighed or measured; a volume is converted at 1 kg per litre.
   try {
-    return mass(1000)(text, option) as Decimal;
+    return mass(1000)(text, option);
   } catch (error) {
     if (!(error instanceof QuantityError)) throw error;
     const litres = parseVolume(text);
@@ -61,7 +68,7 @@ function waterReader(text: string, option: string): Decimal {
 function onHandReader(text: string, option: string): BatchInput['onHand'] {
   const match = /^\s*([a-z][a-z0-9-]*)\s*=\s*(.+)$/.exec(text);
   if (!match) throw new BatchError(`--${option} takes KEY=WEIGHT, such as "lean=12kg"`, option);
-  return { key: match[1], grams: mass(1000)(match[2], option) as Decimal };
+  return { key: match[1], grams: mass(1000)(match[2], option) };
 }
 
 const YEASTS: readonly YeastKind[] = ['fresh', 'active-dry', 'instant'];
@@ -70,10 +77,10 @@ const YEASTS: readonly YeastKind[] = ['fresh', 'active-dry', 'instant'];
 const OPTIONS: Record<keyof BatchInput, { kinds: readonly BatchKind[]; read: Reader }> = {
   start: {
     kinds: ALL,
-    read: (text, option) => {
+    read: (text, option, { today }) => {
       if (!isIsoDate(text))
         throw new BatchError(`--${option} takes a date written YYYY-MM-DD, not "${text}"`, option);
-      return text;
+      return checkStartDate(text, today, option);
     },
   },
   want: { kinds: ['cure', 'blend'], read: mass(1000) },
@@ -130,10 +137,16 @@ export function optionName(key: string): string {
 
 /**
  * Reads batch options for a formula into exact values, refusing options that do not apply to
- * its kind (or cure method) and values that cannot be right.
+ * its kind (or cure method) and values that cannot be right, such as a start day more than a
+ * year from today (start-window.ts).
+ * @param context today, from the caller's clock
  * @throws BatchError naming the option at fault, or saying that an assembly is planned instead
  */
-export function parseBatchOptions(raw: RawBatchOptions, formula: Formula): BatchInput {
+export function parseBatchOptions(
+  raw: RawBatchOptions,
+  formula: Formula,
+  context: ReadContext,
+): BatchInput {
   if (formula.kind === 'assembly') throw assemblyIsPlanned(formula.id);
   const input: Record<string, unknown> = {};
   for (const [key, text] of Object.entries(raw)) {
@@ -151,7 +164,7 @@ export function parseBatchOptions(raw: RawBatchOptions, formula: Formula): Batch
       );
     }
     try {
-      input[key] = spec.read(String(text), option);
+      input[key] = spec.read(String(text), option, context);
     } catch (error) {
       if (error instanceof QuantityError)
         throw new BatchError(`--${option}: ${error.message}`, option);

@@ -3,7 +3,15 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
-import { startTestServer, type ApiClient, type TestServer } from '../helpers/test-server.ts';
+import {
+  clockFrom,
+  startTestServer,
+  type ApiClient,
+  type TestServer,
+} from '../helpers/test-server.ts';
+
+// The server's today near the fixed start days below (a start lies within a year of today).
+const SERVER_CLOCK = clockFrom('2024-03-01');
 
 /** How many batches the log holds now (the demo seed included). */
 async function batchCount(server: TestServer): Promise<number> {
@@ -26,7 +34,7 @@ const BELLY = {
 
 describe('recording a batch', () => {
   it('should record a cure calculated on the server and read it back by its lot code', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const response = await server.as('tobin').post('/api/batches', BELLY);
     assert.equal(response.status, 201, response.text);
     const batch = response.json.batch;
@@ -78,7 +86,7 @@ describe('recording a batch', () => {
   });
 
   it('should number a second batch of the same formula and day 02, and another formula 01', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const tobin = server.as('tobin');
     assert.equal((await tobin.post('/api/batches', BELLY)).json.batch.lotCode, '240229-QB-01');
     assert.equal((await tobin.post('/api/batches', BELLY)).json.batch.lotCode, '240229-QB-02');
@@ -95,7 +103,7 @@ describe('recording a batch', () => {
   });
 
   it('should record doughs, blends and mixes without a nitrite figure', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const bun = await server.as('rosa').post('/api/batches', {
       formula: 'pit-bun',
       batch: { pieces: '48', start: '2024-02-29' },
@@ -111,7 +119,7 @@ describe('recording a batch', () => {
   });
 
   it('should refuse a cure over its critical limit with 422 and record nothing', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const before = await batchCount(server);
     const auditsBefore = await auditCount(server, 'batch-record');
     // 5 kg pumped to 5.6 kg is a 12 % pump: 0.192 % × 6.25 % × 10^6 × 12/10 = 144 ppm, over the
@@ -132,7 +140,7 @@ describe('recording a batch', () => {
   });
 
   it('should give 20 concurrent records 20 distinct lot codes, all stored', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const before = await batchCount(server);
     const tobin = await server.signIn('tobin');
     const responses = await Promise.all(
@@ -159,7 +167,7 @@ describe('recording a batch', () => {
 
 describe('bad requests to record a batch', () => {
   it('should answer every bad body with a 4xx and write nothing', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const tobin = server.as('tobin');
     const before = await batchCount(server);
     const cases: [string, unknown, number, string, Record<string, string>?][] = [
@@ -218,7 +226,7 @@ describe('bad requests to record a batch', () => {
 
 describe('who may do what with batches', () => {
   it('should answer 401 to anonymous requests on every batch route', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const anonymous: ApiClient = server.as('anonymous');
     const lot = (await server.as('tobin').post('/api/batches', BELLY)).json.batch.lotCode as string;
     const attempts = [
@@ -240,7 +248,7 @@ describe('who may do what with batches', () => {
   });
 
   it('should let every role read, admins and cooks record, and refuse reviewers with 403', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     for (const user of ['rosa', 'tobin', 'imke'] as const) {
       assert.equal((await server.as(user).get('/api/batches')).status, 200, user);
       assert.equal((await server.as(user).get('/api/batches.csv')).status, 200, user);
@@ -254,7 +262,7 @@ describe('who may do what with batches', () => {
   });
 
   it('should refuse a cookie-signed record without the CSRF token', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const tobin = await server.signIn('tobin');
     const before = await batchCount(server);
     const forged = await tobin.post('/api/batches', BELLY, { 'x-csrf-token': 'forged' });

@@ -1,6 +1,14 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { startTestServer, type ApiClient, type TestServer } from '../helpers/test-server.ts';
+import {
+  clockFrom,
+  startTestServer,
+  type ApiClient,
+  type TestServer,
+} from '../helpers/test-server.ts';
+
+// The server's today near the fixed start days below (a start lies within a year of today).
+const SERVER_CLOCK = clockFrom('2024-03-01');
 
 const BELLY = {
   formula: 'quillmoor-belly',
@@ -36,7 +44,7 @@ async function read(server: TestServer, lot: string) {
 
 describe('moving a batch along', () => {
   it('should take a cure from planned to done, appending an event and an audit entry each time', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const tobin = await server.signIn('tobin');
     const lot = await record(tobin, { ...BELLY, status: 'planned' });
     let updatedAt = (await read(server, lot)).updatedAt;
@@ -68,7 +76,7 @@ describe('moving a batch along', () => {
   });
 
   it('should let doughs proof and cures cure, not the other way round', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const rosa = server.as('rosa');
     const bun = await record(rosa, BUN);
     const belly = await record(rosa, BELLY);
@@ -84,7 +92,7 @@ describe('moving a batch along', () => {
   });
 
   it('should refuse the moves the workflow does not allow and leave the batch as it was', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const tobin = await server.signIn('tobin');
     const planned = await record(tobin, { ...BELLY, status: 'planned' });
     const done = await record(tobin, BELLY);
@@ -121,7 +129,7 @@ describe('moving a batch along', () => {
   });
 
   it('should need a reason to discard a batch, and keep it', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const tobin = server.as('tobin');
     const lot = await record(tobin, BELLY);
     for (const body of [{ to: 'discarded' }, { to: 'discarded', reason: '   ' }]) {
@@ -141,7 +149,7 @@ describe('moving a batch along', () => {
 
 describe('signing a batch off', () => {
   it('should let a reviewer sign off once, and refuse a second sign-off and a cook', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const lot = await record(server.as('tobin'), BELLY);
     await server.as('tobin').post(`/api/batches/${lot}/status`, { to: 'curing' });
     const cook = await server.as('tobin').post(`/api/batches/${lot}/sign-off`, {});
@@ -182,7 +190,7 @@ describe('signing a batch off', () => {
   });
 
   it('should let an admin sign off without a body, and refuse planned and discarded batches', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const rosa = server.as('rosa');
     const done = await record(rosa, BUN);
     await rosa.post(`/api/batches/${done}/status`, { to: 'done' });

@@ -4,7 +4,15 @@ import path from 'node:path';
 import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import { cookieSession, send, snapshot, type Call, type Sender } from '../helpers/api-calls.ts';
-import { startTestServer, type ApiResponse, type TestServer } from '../helpers/test-server.ts';
+import {
+  clockFrom,
+  startTestServer,
+  type ApiResponse,
+  type TestServer,
+} from '../helpers/test-server.ts';
+
+// The server's today near the fixed start days below (a start lies within a year of today).
+const SERVER_CLOCK = clockFrom('2024-03-01');
 
 const DAY = '2024-02-29';
 const belly = (i: number): Call => ({
@@ -44,7 +52,7 @@ function assertNo5xx(responses: readonly ApiResponse[]): void {
 
 describe('concurrent requests', () => {
   it('should store all 30 concurrent records from a cook and an admin while reads and a formula save run', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const tobin = await cookieSession(server, 'tobin');
     const rosa = await cookieSession(server, 'rosa');
     // Let the history note every file first, so the save below is its only new revision.
@@ -155,7 +163,7 @@ describe('concurrent requests', () => {
   });
 
   it('should let only one of many concurrent moves or sign-offs of a batch through', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const rosa = await cookieSession(server, 'rosa');
     const lot = (await send(server, rosa, belly(0))).json.batch.lotCode as string;
     const many = (call: Call) =>
@@ -187,7 +195,7 @@ describe('concurrent requests', () => {
   });
 
   it('should create a formula id once when many creates race, answering the rest 409', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const rosa = await cookieSession(server, 'rosa');
     const yaml = (i: number) =>
       `formula: 1\nid: race-mix\ntitle: Race ${i}\nkind: mix\ningredients:\n  - { name: salt, pct: 100, base: true }\n`;
@@ -214,7 +222,7 @@ describe('concurrent requests', () => {
   });
 
   it('should add a username once when many adds race, answering the rest 409 username-taken', async (t) => {
-    const server = await startTestServer(t);
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const rosa = await cookieSession(server, 'rosa');
     const body = {
       username: 'same-name',

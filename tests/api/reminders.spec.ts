@@ -3,7 +3,6 @@ import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import type { AppContext } from '../../server/app-context.ts';
 import { ReminderScheduler } from '../../server/reminders/reminder-scheduler.ts';
-import { BELLY } from '../helpers/api-calls.ts';
 import {
   giveDemoAddresses,
   handClock,
@@ -18,7 +17,11 @@ import { startTestServer, type TestServer } from '../helpers/test-server.ts';
 // The demo belly (formulas/quillmoor-belly.yaml) at 4 cm: 2 days per cm = 8 days from
 // Thu 29 Feb 2024 (a leap day), ready Fri 8 Mar; flipped every 2 days: 2, 4 and 6 Mar.
 // source: the formula's own hold rule (days_per_cm: 2, min_days: 7, flip_every_days: 2)
-const START = BELLY.batch.start;
+const START = '2024-02-29';
+const BELLY = {
+  formula: 'quillmoor-belly',
+  batch: { meat: '4.26kg', thickness: '4cm', start: START },
+} as const;
 const FLIPS = ['2024-03-02', '2024-03-04', '2024-03-06'];
 const READY = '2024-03-08';
 const OVERDUE = '2024-03-09';
@@ -208,6 +211,29 @@ describe('reminders', () => {
     );
     // Flip to rosa and tobin, ready to rosa and tobin, overdue to all three.
     assert.equal((await readOutbox(server)).filter((m) => m.related === lot).length, 2 + 2 + 3);
+  });
+
+  it('should not chase a batch recorded from paper for days already past when it was recorded', async (t) => {
+    const { server, clock } = await setUp(t);
+    // Made from 29 Feb, entered on 20 Mar: past its ready day (8 Mar) and overdue day (9 Mar).
+    clock.set(localNoon('2024-03-20'));
+    const finished = await belly(server, 'curing');
+    // Entered on 5 Mar: the flips of 2 and 4 Mar have passed; 6 Mar, ready and overdue have not.
+    clock.set(localNoon('2024-03-05'));
+    const midway = await belly(server, 'curing');
+
+    assert.deepEqual((await runOn(server, clock, '2024-03-05')).sent, []);
+    for (const day of [FLIPS[2], READY, OVERDUE]) await runOn(server, clock, day);
+    const later = await runOn(server, clock, '2024-03-20');
+    assert.deepEqual(later.sent, [], 'nothing for the batch recorded on 20 Mar');
+    await runOn(server, clock, '2024-04-20');
+
+    assert.deepEqual(await remindersOf(server, finished), []);
+    assert.deepEqual(await remindersOf(server, midway), [
+      `reminder-flip ${stamp(FLIPS[2])} → ${ROSA}, ${TOBIN}`,
+      `reminder-ready ${stamp(READY)} → ${ROSA}, ${TOBIN}`,
+      `reminder-overdue ${stamp(OVERDUE)} → ${IMKE}, ${ROSA}, ${TOBIN}`,
+    ]);
   });
 
   it('should send nothing for a done, discarded or not yet curing batch', async (t) => {

@@ -2,6 +2,7 @@ import assert from 'node:assert/strict';
 import { copyFileSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
+import { today } from '../../cli/io.ts';
 import type { PresentedCheck, PresentedLine, PresentedResult } from '../../shared/index.ts';
 import {
   REPO_ROOT,
@@ -13,6 +14,12 @@ import {
 } from '../helpers/run-larder.ts';
 import { makeTempDir, writeText } from '../helpers/temp-files.ts';
 
+// Today on this machine's clock (a start must lie within a year of it), and 8 days on, counted on
+// the calendar here: 2 days per cm × 4 cm (the formula's own rule).
+const START = today();
+const READY = new Date(Date.parse(`${START}T00:00:00Z`) + 8 * 86_400_000)
+  .toISOString()
+  .slice(0, 10);
 const BELLY = [
   'calc',
   'formulas/quillmoor-belly.yaml',
@@ -21,7 +28,7 @@ const BELLY = [
   '--thickness',
   '4cm',
   '--start',
-  '2026-12-02',
+  START,
 ];
 const REFUSED = [
   'calc',
@@ -31,7 +38,7 @@ const REFUSED = [
   '--pumped-weight',
   '11.2kg',
   '--start',
-  '2026-12-02',
+  START,
 ];
 const REFUSED_BANNER = '*** REFUSED: critical limit exceeded. Do not make this batch. ***';
 
@@ -67,10 +74,10 @@ describe('larder calc on a dry-cured bacon (quillmoor-belly, 4.26 kg, 4 cm)', ()
       run.stdout,
       /^\s+PASS\s+Ingoing sodium nitrite: 156\.3 ppm is within the 200 ppm limit for dry-cured bacon/m,
     );
-    // own example, derived from the formula's own rule: 2 days per cm × 4 cm = 8 days;
-    // 2026-12-02 + 8 days = 2026-12-10 (over its 7-day minimum)
+    // own example, derived from the formula's own rule: 2 days per cm × 4 cm = 8 days
+    // (over its 7-day minimum), ready 8 days after the start
     assert.match(run.stdout, /^\s+8 days: /m);
-    assert.match(run.stdout, /Start 2026-12-02\s+→\s+ready 2026-12-10/);
+    assert.match(run.stdout, new RegExp(`Start ${START}\\s+→\\s+ready ${READY}`));
     assert.ok(!run.stdout.includes('REFUSED'), showRun(run));
   });
 
@@ -122,8 +129,8 @@ describe('larder calc on a dry-cured bacon (quillmoor-belly, 4.26 kg, 4 cm)', ()
 
     // own example, derived: 2 days per cm × 4 cm = 8 days (the formula's own rule)
     assert.equal(result.schedule?.days, 8);
-    assert.equal(result.schedule?.start, '2026-12-02');
-    assert.equal(result.schedule?.ready, '2026-12-10');
+    assert.equal(result.schedule?.start, START);
+    assert.equal(result.schedule?.ready, READY);
   });
 
   it('finds the formula by id in ./formulas and gives the same figures', async () => {

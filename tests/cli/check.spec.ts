@@ -120,6 +120,22 @@ describe('larder check on files with problems', () => {
     );
   });
 
+  it('never checks a save’s left-over temporary file in a folder, nor a file of the same id in it', async (t) => {
+    const dir = makeTempDir(t);
+    writeText(dir, 'a-good.yaml', DRY_BACON);
+    // What a save killed mid-way leaves: ".NAME.yaml.<hex>.tmp", half written.
+    writeText(dir, '.a-good.yaml.123.tmp', DRY_BACON.slice(0, 40));
+    writeText(dir, '.x.yaml.0a1b2c3d4e5f.tmp', DRY_BACON);
+    const run = await runLarder(['check', dir, '--json']);
+    assertExit(run, 0);
+    const report = stdoutJson<CheckReport>(run);
+    assert.deepEqual(report.summary, { files: 1, ok: 1, failed: 0, warnings: 0 });
+    assert.deepEqual(
+      report.files.map((f) => path.basename(f.file)),
+      ['a-good.yaml'],
+    );
+  });
+
   it('refuses two files with the same id', async (t) => {
     const dir = makeTempDir(t);
     const first = writeText(dir, 'a.yaml', DRY_BACON);

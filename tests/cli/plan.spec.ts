@@ -2,7 +2,8 @@ import assert from 'node:assert/strict';
 import { cpSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
-import type { PresentedPlan } from '../../shared/index.ts';
+import { today } from '../../cli/io.ts';
+import { addDays, type PresentedPlan } from '../../shared/index.ts';
 import {
   REPO_ROOT,
   assertCleanFailure,
@@ -144,17 +145,28 @@ describe('larder plan', () => {
       0,
     );
     const env = { LARDER_DATA: data, LARDER_USER: 'tobin', LARDER_PASSWORD: 'tobin-pass-1' };
-    const recorded = await runLarder([...BURGER, ...TODAY, '--record', '--json'], { env });
+    // A recorded plan starts from this machine's today: --today is refused with --record.
+    const pretend = await runLarder([...BURGER, ...TODAY, '--record'], { env });
+    assertCleanFailure(pretend, 2, /--today cannot be used with --record/);
+    // Far enough ahead for the belly's 8 hold days and its day of smoking.
+    const service = addDays(today(), 16);
+    const recorded = await runLarder(
+      ['plan', 'smokehouse-burger', '--count', '120', '--for', service, '--record', '--json'],
+      { env },
+    );
     assertExit(recorded, 0);
     const { batches } = stdoutJson<{
       batches: { lotCode: string; status: string; startedOn: string }[];
     }>(recorded);
+    // Belly 8 + 1 days before service, the bun 1 day before, grind and sauce on the day.
+    // source: the demo formulas' hold and lead days
+    const belly = addDays(service, -9);
     assert.deepEqual(
       batches.map((b) => `${b.startedOn} ${b.status}`),
-      ['2026-12-09 planned', '2026-12-17 planned', '2026-12-18 planned', '2026-12-18 planned'],
+      [belly, addDays(service, -1), service, service].map((day) => `${day} planned`),
     );
     // Lot codes carry the start day. source: our lot code format (README)
-    assert.match(batches[0].lotCode, /^261209-/);
+    assert.ok(batches[0].lotCode.startsWith(`${belly.slice(2).replaceAll('-', '')}-`));
     const list = await runLarder(['batches', 'list', '--status', 'planned', '--json'], { env });
     assertExit(list, 0);
     assert.equal(stdoutJson<{ items: unknown[] }>(list).items.length, 4);

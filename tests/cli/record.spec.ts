@@ -1,10 +1,16 @@
 import assert from 'node:assert/strict';
 import path from 'node:path';
 import { describe, it } from 'node:test';
+import { today } from '../../cli/io.ts';
+import { addDays } from '../../shared/index.ts';
 import { assertCleanFailure, assertExit, runLarder, stdoutJson } from '../helpers/run-larder.ts';
 import { makeTempDir } from '../helpers/temp-files.ts';
 import { PASSWORDS, startTestServer } from '../helpers/test-server.ts';
 
+// Yesterday on this machine's clock: a start must lie within a year of it.
+const START = addDays(today(), -1);
+// Lot code: start date YYMMDD, the formula id's initials, a sequence. source: our lot code format (README)
+const LOT = `${START.slice(2).replaceAll('-', '')}-QB-01`;
 const BELLY = [
   'calc',
   'quillmoor-belly',
@@ -13,7 +19,7 @@ const BELLY = [
   '--thickness',
   '4cm',
   '--start',
-  '2026-12-02',
+  START,
 ];
 const REFUSED = ['calc', 'maple-pump-belly', '--meat', '10kg', '--pumped-weight', '11.2kg'];
 
@@ -38,8 +44,7 @@ describe('larder calc --record and larder batches', () => {
     const recorded = await runLarder([...BELLY, '--record', '--json'], { env });
     assertExit(recorded, 0);
     const batch = stdoutJson<RecordedBatch>(recorded);
-    // Lot code: start date, the formula id's initials, a sequence. source: our lot code format (README)
-    assert.equal(batch.lotCode, '261202-QB-01');
+    assert.equal(batch.lotCode, LOT);
     // 0.25 % × 6.25 % × 10^6 = 156.25 ppm. source: USDA FSIS Directive 7620.3 ch. 3, dry-cure formula
     assert.equal(batch.nitritePpm, '156.25');
 
@@ -48,16 +53,16 @@ describe('larder calc --record and larder batches', () => {
     const { items } = stdoutJson<{ items: Record<string, unknown>[] }>(list);
     assert.deepEqual(
       items.map((b) => b.lotCode),
-      ['261202-QB-01'],
+      [LOT],
     );
     // A list item carries its own nitrite ceiling as recorded, not the whole result.
     const ceiling = batch.result.checks.find((c) => c.id === 'nitrite-max');
     assert.deepEqual(items[0].nitriteMax, { limit: ceiling?.limit, status: ceiling?.status });
     assert.equal(items[0].nitritePpm, '156.25');
     assert.equal('result' in items[0], false);
-    const show = await runLarder(['batches', 'show', '261202-qb-01'], { env });
+    const show = await runLarder(['batches', 'show', LOT.toLowerCase()], { env });
     assertExit(show, 0);
-    assert.match(show.stdout, /Lot 261202-QB-01 · in-progress/);
+    assert.match(show.stdout, new RegExp(`Lot ${LOT} · in-progress`));
     assert.match(show.stdout, /EVENTS/);
 
     // Pumped to 12 % instead of 10 %: 144 ppm over the 120 ppm of 9 CFR 424.22(b); FSIS 7620.3 pumped formula.

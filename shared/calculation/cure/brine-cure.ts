@@ -1,7 +1,7 @@
 import { Decimal, fraction, sum } from '../../decimal.ts';
 import type { CureFormula } from '../../formula/formula-types.ts';
 import { BatchError } from '../batch-error.ts';
-import { brineStrength, salinometerDegrees } from './brine-strength.ts';
+import { brineStrength, checkBrineStrength, salinometerDegrees } from './brine-strength.ts';
 import { ppmAtEquilibrium } from './ingoing.ts';
 import {
   ingredientLine,
@@ -37,6 +37,15 @@ export function brineCure(
   const pickle = water.plus(sum(weighed.map((w) => w.grams)));
   const salt = substanceGrams(weighed, 'salt');
   const strength = brineStrength(salt, water);
+  const warnings = checkBrineStrength(
+    strength,
+    waterGrams
+      ? { made: `with ${water.toString()} g of water`, fix: 'use more water', option: 'water' }
+      : {
+          made: `with water at ${waterPct} % of the meat (the formula's water_pct)`,
+          fix: 'raise water_pct, or give more water with --water',
+        },
+  );
   return {
     groups: [
       {
@@ -72,7 +81,7 @@ export function brineCure(
         note: 'of meat + brine',
       },
     ],
-    warnings: [],
+    warnings,
     ppm: (substance) => ppmAtEquilibrium(substanceGrams(weighed, substance), greenGrams, pickle),
   };
 }

@@ -163,6 +163,57 @@ describe('calculateCure', () => {
       assert.equal(line(result, 'water').toString(), '8000');
       assert.equal(line(result, 'curing salt').toString(), '45');
     });
+
+    // Saturated brine: 26.395 % salt, 100 °SAL at 60 °F. source: "The Salometer and How to Use It"
+    // (B-2). Own examples on 10 kg of meat, salt 2.5 % + 0.25 % × 93.75 % = 2.734375 % of meat +
+    // water W: salt = (10 000 + W) × 2.734375 %, strength = salt ÷ (salt + W).
+    const refusesWater = (water: string, strength: string) =>
+      assert.throws(
+        () => calculateCure(brine, { meat: d(10_000), water: d(water) }),
+        (e: unknown) =>
+          e instanceof BatchError &&
+          e.option === 'water' &&
+          e.message.startsWith(
+            `with ${water} g of water, the brine would be ${strength} % salt: more than water can dissolve (26.395 %`,
+          ),
+        water,
+      );
+
+    it('should refuse water too little to dissolve the salt', () => {
+      // W = 1 g (0.001 kg): 273.46 g salt in 1 g water → 99.636 %
+      refusesWater('1', '99.6');
+      // W = 825 g: 295.996 g ÷ 1120.996 g = 26.405 %, just over saturation
+      refusesWater('825', '26.4');
+    });
+
+    it('should warn near saturation and not below 95 °SAL', () => {
+      // W = 826 g: 26.383 % = 99.95 °SAL; W = 850 g: 25.873 % = 98.0 °SAL; W = 900 g: 24.878 % =
+      // 94.25 °SAL, under the 95 °SAL warning (common practice, no source)
+      for (const water of [826, 850]) {
+        const warnings = calculateCure(brine, { meat: d(10_000), water: d(water) }).warnings;
+        assert.ok(
+          warnings.some((w) => /close to saturated/.test(w)),
+          `${water} g: ${warnings.join(' ')}`,
+        );
+      }
+      const plain = calculateCure(brine, { meat: d(10_000), water: d(900) }).warnings;
+      assert.ok(!plain.some((w) => /saturated/.test(w)), plain.join(' '));
+    });
+
+    it('should refuse a formula whose own water_pct cannot dissolve its salt, naming water_pct', () => {
+      // water 5 % of the meat: 10 500 × 2.734375 % = 287.11 g salt in 500 g water → 36.5 %
+      const thin = cure({ ...brine, brine: { water_pct: 5 } });
+      assert.throws(
+        () => calculateCure(thin, { meat: d(10_000) }),
+        (e: unknown) =>
+          e instanceof BatchError &&
+          e.option === undefined &&
+          /^with water at 5 % of the meat \(the formula's water_pct\), the brine would be 36\.5 % salt: more than water can dissolve/.test(
+            e.message,
+          ) &&
+          /raise water_pct, or give more water with --water/.test(e.message),
+      );
+    });
   });
 
   describe('injection (pump)', () => {
@@ -226,7 +277,12 @@ describe('calculateCure', () => {
       });
       assert.throws(
         () => calculateCure(salty, { meat: d(1000) }),
-        (e: unknown) => e instanceof BatchError && /more than water can dissolve/.test(e.message),
+        (e: unknown) =>
+          e instanceof BatchError &&
+          e.option === 'pump' &&
+          e.message.startsWith(
+            'at 10 % pump, the brine would be 30.0 % salt: more than water can dissolve (26.395 %',
+          ),
       );
     });
   });

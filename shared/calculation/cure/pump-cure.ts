@@ -2,7 +2,7 @@ import { Decimal, HUNDRED, ZERO, fraction, sum } from '../../decimal.ts';
 import type { CureFormula } from '../../formula/formula-types.ts';
 import type { Figure } from '../calc-result.ts';
 import { BatchError } from '../batch-error.ts';
-import { SATURATED_BRINE_SALT_PCT, brineStrength, salinometerDegrees } from './brine-strength.ts';
+import { brineStrength, checkBrineStrength, salinometerDegrees } from './brine-strength.ts';
 import { ppmOfPumpedPickle, pumpPercentFromWeights } from './ingoing.ts';
 import {
   ingredientLine,
@@ -61,12 +61,12 @@ export function pumpCure(
   );
   const waterShare = HUNDRED.minus(solids);
   const strength = brineStrength(saltShare, waterShare);
-  if (strength.greaterThan(SATURATED_BRINE_SALT_PCT)) {
-    throw new BatchError(
-      `at ${designPump} % pump the brine would need ${strength.toFixed(1)} % salt, more than water can dissolve (${SATURATED_BRINE_SALT_PCT} %); raise --pump`,
-      'pump',
-    );
-  }
+  // The cover brine has the same make-up, so this one check holds for it too.
+  const strengthWarnings = checkBrineStrength(strength, {
+    made: `at ${designPump} % pump`,
+    fix: 'inject more brine (raise --pump)',
+    option: 'pump',
+  });
 
   const injected = greenGrams.times(fraction(designPump));
   const cover = greenGrams.times(fraction(new Decimal(formula.brine?.cover_pct ?? 0)));
@@ -84,7 +84,7 @@ export function pumpCure(
     throw new BatchError('the pumped weight must be more than the green weight', 'pumped-weight');
   }
   const pumpForChecks = actualPump ?? designPump;
-  const warnings: string[] = [];
+  const warnings: string[] = [...strengthWarnings];
   if (actualPump && !actualPump.equals(designPump)) {
     warnings.push(
       `The meat took ${actualPump.toFixed(1)} % pump, not the ${designPump} % the brine is made for: ingoing levels are checked on ${actualPump.toFixed(1)} %.`,

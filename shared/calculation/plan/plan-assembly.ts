@@ -8,6 +8,7 @@ import { failsCriticalLimit, type CalcResult, type Caution } from '../calc-resul
 import { calculate } from '../calculate.ts';
 import { addDays, isIsoDate } from '../dates.ts';
 import { parseBatchOptions } from '../parse-batch-options.ts';
+import { startWindow } from '../start-window.ts';
 import type { FormulaLibrary } from './check-assembly-library.ts';
 import { plannedSize } from './plan-batch-size.ts';
 import { plannedDates, type PlannedDates } from './plan-dates.ts';
@@ -37,6 +38,15 @@ function checkOptions({ count, serviceDate, today }: PlanOptions): void {
       );
     }
   }
+  // Every batch starts between today and the service day, so a service day inside the start
+  // window keeps every start inside it too (past starts are refused by refusePastStarts).
+  const { latest } = startWindow(today);
+  if (serviceDate > latest) {
+    throw new PlanError(
+      `the service date ${serviceDate} is more than a year ahead: plan for a day up to ${latest} (a year from today, ${today})`,
+      'bad-input',
+    );
+  }
 }
 
 /** Refuses a plan any of whose batches would have to start before today. */
@@ -59,11 +69,11 @@ function refusePastStarts(
   );
 }
 
-function calculateNeed(need: Need, batch: PlanBatch['batch']): CalcResult {
+function calculateNeed(need: Need, batch: PlanBatch['batch'], today: string): CalcResult {
   const { formula } = need;
   let result: CalcResult;
   try {
-    result = calculate(formula, parseBatchOptions(batch, formula));
+    result = calculate(formula, parseBatchOptions(batch, formula, { today }));
   } catch (error) {
     if (error instanceof BatchError) {
       throw new PlanError(`${formula.id}: ${error.message}`, 'bad-batch', formula.id);
@@ -121,7 +131,8 @@ function groupByDay(batches: readonly PlanBatch[]): PlanDay[] {
  * start counted back from service; one pull list of raw materials; the allergens and cautions
  * of everything. Pure: the caller reads the formulas.
  * @param library every formula that reads cleanly, by id (the assembly may be among them)
- * @throws PlanError naming the formula when the plan cannot be made: bad count or dates, an
+ * @throws PlanError naming the formula when the plan cannot be made: bad count or dates (a
+ *   service day more than a year ahead among them), an
  *   assembly with errors, a missing or unfitting formula, assemblies that contain each other, a
  *   cure whose hold rule needs a size not given, a batch that would start before today, a batch
  *   its calculator cannot make, or one over a critical limit
@@ -143,7 +154,7 @@ export function planAssembly(
   const planned = dated.map(({ need, dates }) => {
     const size = plannedSize(need);
     const batch = { ...size.batch, start: dates.start };
-    const result = calculateNeed(need, batch);
+    const result = calculateNeed(need, batch, options.today);
     warnings.push(...size.warnings, ...result.warnings.map((w) => `${need.formula.id}: ${w}`));
     const planBatch: PlanBatch = {
       formula: { id: need.formula.id, title: need.formula.title, kind: need.formula.kind },

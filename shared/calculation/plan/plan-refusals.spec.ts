@@ -136,6 +136,21 @@ describe('planAssembly refuses a plan that cannot be made, naming the formula', 
     );
   });
 
+  it('should refuse a service day more than a year ahead, naming the last day it can plan for', () => {
+    // A year (365 days) from 2026-11-20 is 2027-11-20. source: our start-day window (start-window.ts)
+    for (const serviceDate of ['2126-12-24', '9999-12-31', '2027-11-21']) {
+      assertRefused(
+        () => planAssembly(BURGER, KITCHEN, { ...OPTIONS, serviceDate }),
+        'bad-input',
+        new RegExp(
+          `^the service date ${serviceDate} is more than a year ahead: plan for a day up to 2027-11-20`,
+        ),
+      );
+    }
+    const lastDay = planAssembly(BURGER, KITCHEN, { ...OPTIONS, serviceDate: '2027-11-20' });
+    assert.equal(lastDay.serviceDate, '2027-11-20');
+  });
+
   it('should refuse an assembly with errors of its own', () => {
     const twoQuantities = assembly('double', [
       { formula: 'house-sauce', amount: '20 g', units: 2 },
