@@ -1,4 +1,5 @@
 import path from 'node:path';
+import { SAFE_WORKFLOW_RULES, type WorkflowRules } from '../shared/workflow/workflow-rules.ts';
 
 /** How the server runs: a demo with invented data, or production. */
 export type ServerMode = 'demo' | 'production';
@@ -37,6 +38,8 @@ export interface ServerConfig {
   readonly kitchenName: string;
   /** Minutes between two runs of the reminder scheduler. */
   readonly reminderMinutes: number;
+  /** The sign-off and curing rules (shared/workflow/workflow-rules.ts); all on by default. */
+  readonly workflow: WorkflowRules;
 }
 
 /** A setting that cannot be used; the server refuses to start with the message. */
@@ -89,7 +92,35 @@ export const SETTINGS = [
     'how e-mails name the kitchen ("Larderbook at …")',
   ],
   ['LARDER_REMINDER_MINUTES', '15', 'minutes between two checks for due reminders'],
+  // The workflow rules: on or off, each on unless a kitchen turns it off.
+  ['LARDER_SEPARATE_SIGN_OFF', 'on', 'on: the person who recorded a batch cannot sign it off'],
+  [
+    'LARDER_LOCK_SIGNED_OFF',
+    'on',
+    'on: a signed-off batch is moved or discarded only by an admin, with a reason',
+  ],
+  ['LARDER_CURE_BEFORE_DONE', 'on', 'on: a cure goes to done only after curing'],
 ] as const;
+
+/** The workflow rules' settings, by the rule each turns off. */
+const WORKFLOW_SETTINGS: Readonly<Record<keyof WorkflowRules, string>> = {
+  separateSignOff: 'LARDER_SEPARATE_SIGN_OFF',
+  lockSignedOff: 'LARDER_LOCK_SIGNED_OFF',
+  cureBeforeDone: 'LARDER_CURE_BEFORE_DONE',
+};
+
+/** The workflow rules from on/off settings; an unset one keeps its safe default (on). */
+function workflowRules(env: NodeJS.ProcessEnv): WorkflowRules {
+  const rules = { ...SAFE_WORKFLOW_RULES };
+  for (const [rule, name] of Object.entries(WORKFLOW_SETTINGS) as [keyof WorkflowRules, string][]) {
+    const text = env[name];
+    if (text === undefined || text === '') continue;
+    if (text !== 'on' && text !== 'off')
+      throw new ConfigError(`${name} must be on or off, not "${text}"`);
+    rules[rule] = text === 'on';
+  }
+  return rules;
+}
 
 // A fixed secret is fine for the demo's invented data and never accepted in production.
 const DEMO_SECRET = 'larderbook-demo-only-session-secret-not-for-production';
@@ -169,5 +200,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     mailFrom: env.LARDER_MAIL_FROM || 'Larderbook <larderbook@localhost>',
     kitchenName: env.LARDER_KITCHEN || (mode === 'demo' ? 'Quillmoor Smokehouse' : 'the kitchen'),
     reminderMinutes: integer(env, 'LARDER_REMINDER_MINUTES', 15, 1, 24 * 60),
+    workflow: workflowRules(env),
   };
 }

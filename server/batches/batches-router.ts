@@ -62,7 +62,7 @@ const emptyBody: RequestHandler = (req, _res, next) => {
  * /api/batches: the batch log. Every signed-in role reads; admins and cooks record batches and
  * move them along; admins and reviewers sign them off.
  */
-export function batchesRouter({ batches, formulas, db, audit }: AppContext): Router {
+export function batchesRouter({ batches, formulas, db, audit, config }: AppContext): Router {
   const router = Router();
   // Reading through the history records the revision a batch is made from, if it is new on disk.
   const history = new FormulaHistory(formulas, db, audit);
@@ -87,7 +87,8 @@ export function batchesRouter({ batches, formulas, db, audit }: AppContext): Rou
     const lot = lotParam(req);
     const batch = await batches.get(lot);
     if (!batch) throw notFound(`no batch with lot code ${lot}`);
-    res.json({ batch });
+    // The rules in force, so the console can say why an action is not offered.
+    res.json({ batch, rules: config.workflow });
   });
 
   // The batch sheet as a PDF to print or file; pdfkit loads on the first request, not at start.
