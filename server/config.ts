@@ -1,4 +1,5 @@
 import path from 'node:path';
+import { SAFE_WORKFLOW_RULES, type WorkflowRules } from '../shared/workflow/workflow-rules.ts';
 
 /** How the server runs: a demo with invented data, or production. */
 export type ServerMode = 'demo' | 'production';
@@ -47,6 +48,8 @@ export interface ServerConfig {
    * never sends the cookie, or opens the console, over plain http.
    */
   readonly httpsOnly: boolean;
+  /** The sign-off and curing rules (shared/workflow/workflow-rules.ts); all on by default. */
+  readonly workflow: WorkflowRules;
 }
 
 /** Proxies to believe: none (false), the nearest N hops, or a list of addresses and subnets. */
@@ -107,7 +110,35 @@ export const SETTINGS = [
     '(none)',
     'the reverse proxy in front: loopback, a number of hops, or its addresses/subnets; required when LARDER_PUBLIC_URL is https in production',
   ],
+  // The workflow rules: on or off, each on unless a kitchen turns it off.
+  ['LARDER_SEPARATE_SIGN_OFF', 'on', 'on: the person who recorded a batch cannot sign it off'],
+  [
+    'LARDER_LOCK_SIGNED_OFF',
+    'on',
+    'on: a signed-off batch is moved or discarded only by an admin, with a reason',
+  ],
+  ['LARDER_CURE_BEFORE_DONE', 'on', 'on: a cure goes to done only after curing'],
 ] as const;
+
+/** The workflow rules' settings, by the rule each turns off. */
+const WORKFLOW_SETTINGS: Readonly<Record<keyof WorkflowRules, string>> = {
+  separateSignOff: 'LARDER_SEPARATE_SIGN_OFF',
+  lockSignedOff: 'LARDER_LOCK_SIGNED_OFF',
+  cureBeforeDone: 'LARDER_CURE_BEFORE_DONE',
+};
+
+/** The workflow rules from on/off settings; an unset one keeps its safe default (on). */
+function workflowRules(env: NodeJS.ProcessEnv): WorkflowRules {
+  const rules = { ...SAFE_WORKFLOW_RULES };
+  for (const [rule, name] of Object.entries(WORKFLOW_SETTINGS) as [keyof WorkflowRules, string][]) {
+    const text = env[name];
+    if (text === undefined || text === '') continue;
+    if (text !== 'on' && text !== 'off')
+      throw new ConfigError(`${name} must be on or off, not "${text}"`);
+    rules[rule] = text === 'on';
+  }
+  return rules;
+}
 
 // A fixed secret is fine for the demo's invented data and never accepted in production.
 const DEMO_SECRET = 'larderbook-demo-only-session-secret-not-for-production';
@@ -198,6 +229,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     reminderMinutes: integer(env, 'LARDER_REMINDER_MINUTES', 15, 1, 24 * 60),
     trustProxy,
     httpsOnly,
+    workflow: workflowRules(env),
   };
 }
 

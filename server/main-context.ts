@@ -34,7 +34,7 @@ export async function openContext(
     people: new PeopleRepository(db),
     audit,
     formulas: new FormulaStore(config.formulasDir, { watch: true }),
-    batches: new BatchRepository(db, audit),
+    batches: new BatchRepository(db, audit, config.workflow),
     mail: openMail(db, config, now),
     invitations: new InvitationRepository(db, now),
     reminderPrefs: new ReminderPrefsRepository(db),

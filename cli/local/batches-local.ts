@@ -42,7 +42,7 @@ export function asCliError(error: unknown): unknown {
  * (its revision joins the formula's history), exactly as the server records one.
  */
 export function recordLocally(request: LocalRecord, today: string): Promise<Batch> {
-  return withLocalDatabase(async (db) => {
+  return withLocalDatabase(async (db, config) => {
     const operator = await operatorFromEnvironment(db, ['admin', 'cook']);
     const audit = new AuditRepository(db);
     const history = new FormulaHistory(
@@ -64,7 +64,9 @@ export function recordLocally(request: LocalRecord, today: string): Promise<Batc
         operator.id,
         today,
       );
-      return await new BatchRepository(db, audit).record(prepared, { actor: operator });
+      return await new BatchRepository(db, audit, config.workflow).record(prepared, {
+        actor: operator,
+      });
     } catch (error) {
       throw asCliError(error);
     }
@@ -73,10 +75,10 @@ export function recordLocally(request: LocalRecord, today: string): Promise<Batc
 
 /** A page of this machine's batch log, filtered as the API filters (formula, status, from, to…). */
 export function listLocally(query: Record<string, string>): Promise<BatchPage> {
-  return withLocalDatabase(async (db) => {
+  return withLocalDatabase(async (db, config) => {
     await operatorFromEnvironment(db, ['admin', 'cook', 'reviewer']);
     try {
-      return await new BatchRepository(db, new AuditRepository(db)).list(
+      return await new BatchRepository(db, new AuditRepository(db), config.workflow).list(
         parseListQuery(query, true),
       );
     } catch (error) {
@@ -87,9 +89,11 @@ export function listLocally(query: Record<string, string>): Promise<BatchPage> {
 
 /** One batch of this machine's log with its events. */
 export function showLocally(lot: string): Promise<Batch> {
-  return withLocalDatabase(async (db) => {
+  return withLocalDatabase(async (db, config) => {
     await operatorFromEnvironment(db, ['admin', 'cook', 'reviewer']);
-    const batch = await new BatchRepository(db, new AuditRepository(db)).get(lot.toUpperCase());
+    const batch = await new BatchRepository(db, new AuditRepository(db), config.workflow).get(
+      lot.toUpperCase(),
+    );
     if (!batch) throw new CliError(`no batch with lot code ${lot}`, EXIT.usage);
     return batch;
   });

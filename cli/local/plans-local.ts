@@ -20,7 +20,7 @@ export function recordPlanLocally(
   folder: string,
   units: UnitSystem,
 ): Promise<Batch[]> {
-  return withLocalDatabase(async (db) => {
+  return withLocalDatabase(async (db, config) => {
     const operator = await operatorFromEnvironment(db, ['admin', 'cook']);
     const audit = new AuditRepository(db);
     const history = new FormulaHistory(new FormulaStore(path.resolve(folder)), db, audit);
@@ -29,7 +29,7 @@ export function recordPlanLocally(
         plan,
         units,
         operator.id,
-        { history, batches: new BatchRepository(db, audit) },
+        { history, batches: new BatchRepository(db, audit, config.workflow) },
         { actor: operator },
       );
     } catch (error) {

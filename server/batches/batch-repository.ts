@@ -1,4 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import type { WorkflowRules } from '../../shared/workflow/workflow-rules.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { readRows } from '../db/read-row.ts';
@@ -55,11 +56,13 @@ export class BatchRepository {
   /** The same changes inside a transaction the caller holds, without reading the batch back. */
   readonly writes: BatchWrites;
 
+  /** @param rules the kitchen's workflow rules, which every change is held to */
   constructor(
     private readonly db: Database,
     audit: AuditRepository,
+    rules: WorkflowRules,
   ) {
-    this.writes = new BatchWrites(db, audit);
+    this.writes = new BatchWrites(db, audit, rules);
   }
 
   /** One write transaction (queued and retried while busy by the database itself). */
@@ -120,8 +123,10 @@ export class BatchRepository {
   }
 
   /**
-   * Moves a batch to another status along the allowed moves, with an event and an audit entry.
-   * @throws AppError 404 no such lot, 409 'bad-transition', 400 discarding without a reason
+   * Moves a batch to another status along the allowed moves and under the workflow rules, with
+   * an event and an audit entry.
+   * @throws AppError 404 no such lot, 409 'bad-transition', 400 discarding without a reason;
+   *   the rules' 403 'signed-off', 400 'reason-needed', 409 'not-cured'
    */
   changeStatus(
     lot: string,
@@ -137,7 +142,7 @@ export class BatchRepository {
 
   /**
    * Records the reviewer's sign-off, once, with an event and an audit entry.
-   * @throws AppError 404 no such lot, 409 'already-signed-off' or 'not-signable'
+   * @throws AppError 404 no such lot, 409 'already-signed-off' or 'not-signable', 403 'own-batch'
    */
   signOff(lot: string, note: string | null, options: ChangeOptions): Promise<Batch> {
     return this.write(async (t) => {

@@ -1,7 +1,13 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { AuditAction, AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
-import { badRequest, conflict, notFound } from '../http/app-error.ts';
+import {
+  moveRefusal,
+  signOffRefusal,
+  type WorkflowRefusal,
+  type WorkflowRules,
+} from '../../shared/workflow/workflow-rules.ts';
+import { AppError, badRequest, conflict, notFound } from '../http/app-error.ts';
 import {
   UNSIGNABLE_STATUSES,
   refusedMove,
@@ -12,14 +18,36 @@ import {
 } from './batch.ts';
 import { MAX_LOT_SEQUENCE, lotCode, lotPrefix, prefixRange } from './lot-code.ts';
 
+/** A workflow rule's refusal as the API's error; a missing reason names its field. */
+function ruleError(refusal: WorkflowRefusal): AppError {
+  return new AppError(
+    refusal.status,
+    refusal.code,
+    refusal.message,
+    refusal.code === 'reason-needed' ? [{ field: 'reason', message: refusal.message }] : [],
+  );
+}
+
+/** The columns a change looks at before it is made. */
+interface CurrentRow {
+  id: number;
+  status: BatchStatus;
+  kind: NewBatch['kind'];
+  operator_id: number;
+  signed_off_at: string | null;
+}
+
 /**
  * The changes to batches, each made inside a write transaction the caller holds: the row, a
- * batch event and (unless writing demo history) an audit entry, always together.
+ * batch event and (unless writing demo history) an audit entry, always together. Every path
+ * that changes a batch (the API, the demo seed, the command line) comes through here, so the
+ * kitchen's workflow rules are checked here.
  */
 export class BatchWrites {
   constructor(
     private readonly db: Database,
     private readonly audit: AuditRepository,
+    private readonly rules: WorkflowRules,
   ) {}
 
   private async select<T extends object>(
@@ -138,28 +166,20 @@ export class BatchWrites {
     return lot;
   }
 
-  private async current(
-    t: Transaction,
-    lot: string,
-  ): Promise<{
-    id: number;
-    status: BatchStatus;
-    kind: NewBatch['kind'];
-    signed_off_at: string | null;
-  }> {
-    const [row] = await this.select<{
-      id: number;
-      status: BatchStatus;
-      kind: NewBatch['kind'];
-      signed_off_at: string | null;
-    }>(t, 'SELECT id, status, kind, signed_off_at FROM batches WHERE lot_code = ?', [lot]);
+  private async current(t: Transaction, lot: string): Promise<CurrentRow> {
+    const [row] = await this.select<CurrentRow>(
+      t,
+      'SELECT id, status, kind, operator_id, signed_off_at FROM batches WHERE lot_code = ?',
+      [lot],
+    );
     if (!row) throw notFound(`no batch with lot code ${lot}`);
     return row;
   }
 
   /**
-   * Moves a batch along the allowed moves; discarding needs a reason.
-   * @throws AppError 400 discarding without a reason, 404 no such lot, 409 'bad-transition'
+   * Moves a batch along the allowed moves, under the workflow rules; discarding needs a reason.
+   * @throws AppError 400 discarding without a reason, 404 no such lot, 409 'bad-transition';
+   *   the rules' 403 'signed-off', 400 'reason-needed', 409 'not-cured'
    */
   async move(
     t: Transaction,
@@ -179,6 +199,14 @@ export class BatchWrites {
         ? `the batch is already ${to}`
         : refusedMove(batch.status, to, batch.kind);
     if (refused) throw conflict('bad-transition', refused, [{ from: batch.status, to }]);
+    const signedOff = batch.signed_off_at !== null;
+    const rule = moveRefusal(
+      { kind: batch.kind, status: batch.status, signedOff },
+      to,
+      { role: options.actor.role, reason },
+      this.rules,
+    );
+    if (rule) throw ruleError(rule);
     await this.run(
       t,
       `UPDATE batches SET status = ?, updated_at = ?,
@@ -191,12 +219,15 @@ export class BatchWrites {
       from: batch.status,
       to,
       ...(reason ? { reason } : {}),
+      // An admin changing a reviewed record stands out in the audit log.
+      ...(signedOff ? { afterSignOff: true } : {}),
     });
   }
 
   /**
-   * Records the reviewer's sign-off, once; planned and discarded batches cannot be signed off.
-   * @throws AppError 404 no such lot, 409 'already-signed-off' or 'not-signable'
+   * Records the reviewer's sign-off, once; planned and discarded batches cannot be signed off,
+   * nor (under the rules) a batch by the person who recorded it.
+   * @throws AppError 404 no such lot, 409 'already-signed-off' or 'not-signable', 403 'own-batch'
    */
   async signOff(
     t: Transaction,
@@ -212,6 +243,8 @@ export class BatchWrites {
       throw conflict('not-signable', `a ${batch.status} batch cannot be signed off`, [
         { status: batch.status },
       ]);
+    const rule = signOffRefusal({ operatorId: batch.operator_id }, options.actor, this.rules);
+    if (rule) throw ruleError(rule);
     await this.run(
       t,
       'UPDATE batches SET signed_off_by = ?, signed_off_at = ?, updated_at = ? WHERE id = ?',

@@ -1,4 +1,5 @@
 import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import type { Role } from '../people/person.ts';
 import type {
   BatchKind,
   PresentedResult,
@@ -76,10 +77,11 @@ export interface NewBatch {
   readonly notes: string | null;
 }
 
-/** Who makes a change, for the batch event and the audit log. */
+/** Who makes a change, for the batch event and the audit log; the role for the workflow rules. */
 export interface BatchActor {
   readonly id: number;
   readonly username: string;
+  readonly role: Role;
 }
 
 /** How a change is written: by whom, from where, and (for demo history only) when. */

@@ -69,7 +69,7 @@ const emptyBody: RequestHandler = (req, _res, next) => {
  * move them along; admins and reviewers sign them off.
  */
 export function batchesRouter(context: AppContext): Router {
-  const { batches, formulas, db, audit } = context;
+  const { batches, formulas, db, audit, config } = context;
   const router = Router();
   // Reading through the history records the revision a batch is made from, if it is new on disk.
   const history = new FormulaHistory(formulas, db, audit);
@@ -93,7 +93,8 @@ export function batchesRouter(context: AppContext): Router {
     const lot = lotParam(req);
     const batch = await batches.get(lot);
     if (!batch) throw notFound(`no batch with lot code ${lot}`);
-    res.json({ batch });
+    // The rules in force, so the console can say why an action is not offered.
+    res.json({ batch, rules: config.workflow });
   });
 
   // The batch sheet as a PDF to print or file; pdfkit loads on the first request, not at start.

@@ -256,7 +256,9 @@ async function seedOne(
       by(operator, at(day, minutes)),
     );
   }
-  // A batch that failed a check waits for the reviewer to look at it in person.
+  // A batch that failed a check waits for the reviewer to look at it in person. Imke signs off
+  // and never records, so the demo holds to separation of duties; every sign-off comes after
+  // the last move, and every cure cures before it is done, as the workflow rules ask.
   if (signOffDay !== undefined && prepared.checksPassed)
     await context.batches.writes.signOff(
       transaction,

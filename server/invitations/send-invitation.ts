@@ -9,6 +9,11 @@ import { INVITATION_HOURS } from './invitation-repository.ts';
 export interface InvitationSent {
   readonly sentTo: string;
   readonly expiresAt: string;
+  /**
+   * With no mail server, the set-password link for the admin to pass on by hand: in this answer
+   * only, never stored or shown again. Null when a mail server takes it to the person.
+   */
+  readonly link: string | null;
 }
 
 /** The invitation's words. */
@@ -62,10 +67,11 @@ export async function sendInvitation(
     throw conflict('inactive', `${person.displayName} is deactivated; reactivate them first`);
   const { mail, invitations, audit } = context;
   const { token, expiresAt } = await invitations.create(transaction, person.id, by.actor.id);
+  const link = mail.links.setPassword(token);
   const content = invitationMessage({
     person,
     invitedBy: by.actor.displayName,
-    link: mail.links.setPassword(token),
+    link,
     consoleUrl: mail.links.base(),
     kitchen: mail.kitchen,
   });
@@ -86,5 +92,6 @@ export async function sendInvitation(
     },
     transaction,
   );
-  return { sentTo: person.email, expiresAt };
+  // Without a mail server nothing takes the link to the person: the admin does, from this answer.
+  return { sentTo: person.email, expiresAt, link: mail.mailer.transport === 'local' ? link : null };
 }

@@ -84,10 +84,29 @@ export const MAX_ATTEMPTS = 5;
 /** The wait before trying a failed message again, doubled after each try: 5, 10, 20, 40 minutes. */
 const RETRY_BASE_MS = 5 * 60_000;
 
-// Invitation links carry a password-setting token; once a mail server has the message, the
-// stored copy need not keep it.
+// Invitation links carry a password-setting token. The stored copy keeps it only while a mail
+// server still has to be handed the message; with no mail server it is never stored at all (the
+// admin who sent the invitation is shown the link once instead), and no answer ever reads it.
 const TOKEN_IN_LINK = /token=[A-Za-z0-9_-]+/g;
-const TOKEN_REMOVED = 'token=(removed once the message was sent)';
+const TOKEN_WORDS = {
+  sent: 'token=(removed once the message was sent)',
+  failed: 'token=(removed: the message could not be sent)',
+  local: 'token=(shown once to the admin who sent the invitation)',
+  waiting: 'token=(kept only until the mail server has the message)',
+} as const;
+
+/** A message's bodies with every invitation token in them replaced by words. */
+function withoutToken<T extends { text: string; html: string }>(
+  message: T,
+  why: keyof typeof TOKEN_WORDS,
+): T {
+  const words = TOKEN_WORDS[why];
+  return {
+    ...message,
+    text: message.text.replace(TOKEN_IN_LINK, words),
+    html: message.html.replace(TOKEN_IN_LINK, words),
+  };
+}
 
 /**
  * The outbox: every message, written inside the transaction of whatever caused it (so a message
@@ -103,8 +122,15 @@ export class OutboxRepository {
     private readonly now: () => Date,
   ) {}
 
-  /** Puts a message in the outbox inside the caller's transaction; returns its id. */
-  async enqueue(transaction: Transaction, entry: OutboxEntry): Promise<number> {
+  /**
+   * Puts a message in the outbox inside the caller's transaction; returns its id. With no mail
+   * server an invitation is stored without its link's token: nothing will send it anywhere.
+   */
+  async enqueue(transaction: Transaction, given: OutboxEntry): Promise<number> {
+    const entry =
+      this.transport === 'local' && given.kind === 'invitation'
+        ? withoutToken(given, 'local')
+        : given;
     const messageId = `<${randomBytes(12).toString('hex')}.larderbook@${this.idDomain}>`;
     const [id] = (await this.db.sequelize.query(
       `INSERT INTO outbox (created_at, to_address, to_name, person_id, subject, text, html, kind,
@@ -145,14 +171,20 @@ export class OutboxRepository {
     return rows.map(toSummary);
   }
 
-  /** One message with its bodies, or undefined. */
+  /**
+   * One message with its bodies, or undefined. An invitation still waiting for the mail server
+   * is read without its token: the link is for the person invited, not for whoever reads here.
+   */
   async get(id: number): Promise<OutboxMessage | undefined> {
     const [row] = await this.db.sequelize.query<OutboxRow>('SELECT * FROM outbox WHERE id = ?', {
       replacements: [id],
       type: QueryTypes.SELECT,
     });
     return row
-      ? { ...toSummary(row), messageId: row.message_id, text: row.text, html: row.html }
+      ? withoutToken(
+          { ...toSummary(row), messageId: row.message_id, text: row.text, html: row.html },
+          'waiting',
+        )
       : undefined;
   }
 
@@ -201,8 +233,8 @@ export class OutboxRepository {
 
   /**
    * Records what the transport said: sent; or back to pending for another try later; or failed
-   * for good (a permanent refusal, or the last try). A sent invitation sent through a mail
-   * server loses its token from the stored copy.
+   * for good (a permanent refusal, or the last try). An invitation sent, or given up on, loses
+   * its token from the stored copy: nothing needs it any more.
    */
   async finish(id: number, delivery: Delivery): Promise<OutboxState> {
     return this.db.write(async (transaction) => {
@@ -217,7 +249,10 @@ export class OutboxRepository {
         : delivery.permanent || row.attempts >= MAX_ATTEMPTS
           ? 'failed'
           : 'pending';
-      const scrub = state === 'sent' && row.transport === 'smtp' && row.kind === 'invitation';
+      const kept =
+        state !== 'pending' && row.kind === 'invitation'
+          ? withoutToken(row, state === 'sent' ? 'sent' : 'failed')
+          : row;
       await this.db.sequelize.query(
         `UPDATE outbox SET state = ?, result = ?, sent_at = ?, text = ?, html = ? WHERE id = ?`,
         {
@@ -225,8 +260,8 @@ export class OutboxRepository {
             state,
             delivery.ok ? delivery.response : `${delivery.response} (try ${row.attempts})`,
             state === 'sent' ? this.now().toISOString() : null,
-            scrub ? row.text.replace(TOKEN_IN_LINK, TOKEN_REMOVED) : row.text,
-            scrub ? row.html.replace(TOKEN_IN_LINK, TOKEN_REMOVED) : row.html,
+            kept.text,
+            kept.html,
             id,
           ],
           transaction,

@@ -1,8 +1,9 @@
 import assert from 'node:assert/strict';
 import { createHash } from 'node:crypto';
+import { existsSync, readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
-import { handClock, invitationLink, readMessage, readOutbox, tokenOf } from '../helpers/mail.ts';
+import { handClock, readMessage, readOutbox, tokenOf } from '../helpers/mail.ts';
 import { startTestServer, type TestServer } from '../helpers/test-server.ts';
 
 const WREN = {
@@ -12,14 +13,55 @@ const WREN = {
   role: 'cook',
 };
 
-/** Adds Wren with an e-mail address and returns the token of the invitation that went out. */
+/**
+ * Adds Wren with an e-mail address and returns the token of the invitation's link, which (with
+ * no mail server) the answer shows the admin this once.
+ */
 async function inviteWren(server: TestServer): Promise<{ id: number; token: string }> {
   const added = await server.as('rosa').post('/api/people', WREN);
   assert.equal(added.status, 201, added.text);
-  const [message] = (await readOutbox(server)).filter((m) => m.kind === 'invitation');
-  assert.ok(message, 'no invitation in the outbox');
-  const { text } = await readMessage(server, message.id);
-  return { id: added.json.person.id, token: tokenOf(invitationLink(text)) };
+  return { id: added.json.person.id, token: tokenOf(added.json.invitation.link) };
+}
+
+/** Every row of every table of the database, as text. */
+async function everyRow(server: TestServer): Promise<string> {
+  const { sequelize } = server.context.db;
+  const tables = await sequelize.query<{ name: string }>(
+    "SELECT name FROM sqlite_master WHERE type = 'table'",
+    { type: QueryTypes.SELECT },
+  );
+  assert.ok(tables.some((table) => table.name === 'outbox'));
+  const rows = await Promise.all(
+    tables.map((table) =>
+      sequelize.query(`SELECT * FROM "${table.name}"`, { type: QueryTypes.SELECT }),
+    ),
+  );
+  return JSON.stringify(rows);
+}
+
+/** The database file and its write-ahead log as bytes: what a copy of the data folder holds. */
+function databaseBytes(server: TestServer): Buffer {
+  const file = server.context.config.databaseFile;
+  return Buffer.concat(
+    [file, `${file}-wal`].filter((f) => existsSync(f)).map((f) => readFileSync(f)),
+  );
+}
+
+/** Asserts a token appears in no API answer an admin can read, no row and no byte of the database. */
+async function assertNowhere(server: TestServer, token: string): Promise<void> {
+  const rosa = server.as('rosa');
+  const outbox = await readOutbox(server);
+  assert.ok(!JSON.stringify(outbox).includes(token), 'the outbox list');
+  for (const row of outbox) {
+    const message = await readMessage(server, row.id);
+    assert.ok(!JSON.stringify(message).includes(token), `outbox message ${row.id}`);
+  }
+  for (const route of ['/api/people', '/api/audit?limit=200'])
+    assert.ok(!(await rosa.get(route)).text.includes(token), route);
+  assert.ok(!(await everyRow(server)).includes(token), 'a row of the database');
+  assert.ok(!(await everyRow(server)).includes(encodeURIComponent(token)), 'an encoded link');
+  await server.context.db.sequelize.query('PRAGMA wal_checkpoint(FULL)');
+  assert.ok(!databaseBytes(server).includes(token), 'a byte of the database file');
 }
 
 const anonymous = (server: TestServer) => server.as('anonymous');
@@ -47,14 +89,18 @@ describe('invitations', () => {
     assert.equal(row.state, 'sent');
     assert.match(row.result ?? '', /local outbox; nothing left this machine/);
 
-    const message = await readMessage(server, row.id);
-    const link = invitationLink(message.text);
+    // With no mail server the answer shows the admin the link, this once, to pass on by hand.
+    const link = added.json.invitation.link as string;
     assert.ok(link.startsWith(`${server.url}/set-password?token=`), link);
+    const message = await readMessage(server, row.id);
     assert.match(message.text, /Hello Wren Halloway,/);
     assert.match(message.text, /Your username is wren\./);
     assert.match(message.text, /Larderbook at Quillmoor Smokehouse/);
     assert.match(message.text, /My reminders/);
-    assert.ok(message.html.includes(link), 'the HTML carries the same link');
+    // The outbox keeps the message, with the link's token replaced by words.
+    const kept = `${server.url}/set-password?token=(shown once to the admin who sent the invitation)`;
+    assert.ok(message.text.includes(`Set my password: ${kept}`), message.text);
+    assert.ok(message.html.includes(kept), 'the HTML carries the same words');
     assert.match(message.messageId, /^<[0-9a-f]+\.larderbook@localhost>$/);
 
     // Only the token's hash is stored with the invitation.
@@ -70,6 +116,22 @@ describe('invitations', () => {
     const audit = await server.as('rosa').get('/api/audit?action=invitation-send');
     assert.equal(audit.json.events[0].subject, 'wren');
     assert.equal(audit.json.events[0].actorName, 'rosa');
+  });
+
+  it('should show the link in the answer once, and never again through the API or in the database', async (t) => {
+    const server = await startTestServer(t);
+    const { id, token } = await inviteWren(server);
+    await assertNowhere(server, token);
+    const resend = await server.as('rosa').post(`/api/people/${id}/invitation`);
+    assert.equal(resend.status, 201, resend.text);
+    const again = tokenOf(resend.json.invitation.link);
+    assert.notEqual(again, token);
+    await assertNowhere(server, again);
+    // The link shown is the one that works.
+    const set = await anonymous(server).post(`/api/invitations/${again}`, {
+      password: 'hickory-bench-42',
+    });
+    assert.equal(set.status, 200, set.text);
   });
 
   it('should set the password with the link once, then answer 410', async (t) => {
@@ -129,8 +191,7 @@ describe('invitations', () => {
     });
     const cookie = (first.headers.get('set-cookie') ?? '').split(';')[0];
     assert.equal((await anonymous(server).get('/api/session', { cookie })).status, 200);
-    const [message] = await readOutbox(server);
-    const token = tokenOf(invitationLink((await readMessage(server, message.id)).text));
+    const token = tokenOf(added.json.invitation.link);
     await new Promise((resolve) => setTimeout(resolve, 5));
     const set = await anonymous(server).post(`/api/invitations/${token}`, {
       password: 'second-password-2',
@@ -175,7 +236,7 @@ describe('invitations', () => {
     assert.equal(resend.json.invitation.sentTo, 'wren@quillmoor.invalid');
     const invitations = (await readOutbox(server)).filter((m) => m.kind === 'invitation');
     assert.equal(invitations.length, 2);
-    const second = tokenOf(invitationLink((await readMessage(server, invitations[0].id)).text));
+    const second = tokenOf(resend.json.invitation.link);
     assert.notEqual(second, first);
     const old = await anonymous(server).get(`/api/invitations/${first}`);
     assert.equal(old.status, 410);

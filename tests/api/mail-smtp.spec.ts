@@ -1,6 +1,7 @@
 import assert from 'node:assert/strict';
 import type { AddressInfo } from 'node:net';
 import { describe, it } from 'node:test';
+import { QueryTypes } from 'sequelize';
 import { SMTPServer } from 'smtp-server';
 import { invitationLink, readMessage, readOutbox, tokenOf } from '../helpers/mail.ts';
 import { startTestServer } from '../helpers/test-server.ts';
@@ -63,6 +64,8 @@ describe('mail through an SMTP server (LARDER_SMTP_URL)', () => {
     });
     const added = await server.as('rosa').post('/api/people', WREN);
     assert.equal(added.status, 201, added.text);
+    // The mail server takes the link to the person: the admin is not shown it.
+    assert.equal(added.json.invitation.link, null);
     await server.context.mail.delivery.idle();
 
     assert.equal(smtp.received.length, 1);
@@ -85,6 +88,27 @@ describe('mail through an SMTP server (LARDER_SMTP_URL)', () => {
     assert.equal(set.status, 200, set.text);
   });
 
+  it('should keep a waiting invitation’s token for the mail server only, never in an answer', async (t) => {
+    // A mail server that has gone away: the message waits for the next try.
+    const smtp = await captureServer(t);
+    const server = await startTestServer(t, {
+      LARDER_SMTP_URL: smtp.url.replace(/:\d+$/, ':1'),
+      LARDER_MAIL_FROM: 'kitchen@quillmoor.invalid',
+    });
+    const added = await server.as('rosa').post('/api/people', WREN);
+    assert.equal(added.status, 201, added.text);
+    const [row] = await readOutbox(server);
+    assert.equal(row.state, 'pending');
+    const message = await readMessage(server, row.id);
+    assert.match(message.text, /token=\(kept only until the mail server has the message\)/);
+    assert.doesNotMatch(message.text + message.html, /token=[A-Za-z0-9_-]{43}/);
+    const [stored] = await server.context.db.sequelize.query<{ text: string }>(
+      'SELECT text FROM outbox WHERE id = ?',
+      { replacements: [row.id], type: QueryTypes.SELECT },
+    );
+    assert.match(stored.text, /token=[A-Za-z0-9_-]{43}/, 'kept for the next try');
+  });
+
   it('should keep a refused message in the outbox as failed, with the server’s answer', async (t) => {
     const smtp = await captureServer(t, { reject: true });
     const server = await startTestServer(t, {
@@ -99,5 +123,12 @@ describe('mail through an SMTP server (LARDER_SMTP_URL)', () => {
     const [row] = await readOutbox(server);
     assert.equal(row.state, 'failed');
     assert.match(row.result ?? '', /550|no such mailbox/);
+    // Given up on, the stored copy keeps no token either.
+    const [stored] = await server.context.db.sequelize.query<{ text: string; html: string }>(
+      'SELECT text, html FROM outbox WHERE id = ?',
+      { replacements: [row.id], type: QueryTypes.SELECT },
+    );
+    assert.match(stored.text, /token=\(removed: the message could not be sent\)/);
+    assert.doesNotMatch(stored.text + stored.html, /token=[A-Za-z0-9_-]{43}/);
   });
 });

@@ -88,6 +88,88 @@ describe('the batch log in the console', () => {
     );
   });
 
+  it('should say why the person who recorded a batch does not sign it off', async (t) => {
+    const session = await startConsole(t);
+    const { server } = session;
+    const recorded = await server.as('rosa').post('/api/batches', {
+      formula: 'pit-bun',
+      batch: { pieces: '24' },
+    });
+    assert.equal(recorded.status, 201, recorded.text);
+    const lot = recorded.json.batch.lotCode as string;
+    assert.equal(
+      (await server.as('rosa').post(`/api/batches/${lot}/status`, { to: 'done' })).status,
+      200,
+    );
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    const button = page.getByTestId('sign-off-button');
+    await button.waitFor();
+    assert.equal(await button.isDisabled(), true);
+    assert.match(
+      await page.getByTestId('sign-off-held').innerText(),
+      /You recorded this batch; another person signs it off\./,
+    );
+    await session.screenshot(page, 'sign-off-own-batch');
+    assert.deepEqual(errors, []);
+  });
+
+  it('should hold a cook back from a signed-off batch and let an admin move it, saying why', async (t) => {
+    const session = await startConsole(t);
+    const { server } = session;
+    const recorded = await server.as('tobin').post('/api/batches', {
+      formula: 'quillmoor-belly',
+      batch: { meat: '4.26kg', thickness: '4cm' },
+    });
+    assert.equal(recorded.status, 201, recorded.text);
+    const lot = recorded.json.batch.lotCode as string;
+
+    // In progress, a cure is not offered done: it cures first.
+    const cook = await session.page('tobin');
+    await cook.goto(`${server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    await cook.getByTestId('status-to-done').waitFor();
+    assert.equal(await cook.getByTestId('status-to-done').isDisabled(), true);
+    assert.match(
+      await cook.getByTestId('moves-held-back').innerText(),
+      /A cure is done only after curing; start curing first\./,
+    );
+    await cook.getByTestId('status-to-curing').click();
+    await cook
+      .getByTestId('batch-status')
+      .getByText(/curing/i)
+      .waitFor();
+    const signed = await server.as('imke').post(`/api/batches/${lot}/sign-off`, {});
+    assert.equal(signed.status, 200, signed.text);
+
+    // Signed off, the cook's moves are held back with the reason.
+    await cook.reload({ waitUntil: 'networkidle' });
+    await cook.getByTestId('moves-held-back').waitFor();
+    assert.equal(await cook.getByTestId('status-to-done').isDisabled(), true);
+    assert.equal(await cook.getByTestId('status-to-discarded').isDisabled(), true);
+    assert.match(
+      await cook.getByTestId('moves-held-back').innerText(),
+      /This batch is signed off; only an admin can change its status now, with a reason\./,
+    );
+    await session.screenshot(cook, 'signed-off-held-back');
+
+    // The admin moves it on, and is asked why.
+    const admin = await session.page('rosa');
+    await admin.goto(`${server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    await admin.getByTestId('status-to-done').click();
+    await admin.getByTestId('reason-dialog').waitFor();
+    await admin.getByTestId('reason-confirm').click();
+    await admin.getByText('Say why the status changes.').waitFor();
+    const reason = 'Signed off while curing; the cure finished on its ready day.';
+    await admin.getByTestId('reason-input').fill(reason);
+    await session.screenshot(admin, 'signed-off-move-reason');
+    await admin.getByTestId('reason-confirm').click();
+    await admin.getByTestId('timeline').getByText(reason).waitFor();
+    const batch = (await server.as('rosa').get(`/api/batches/${lot}`)).json.batch;
+    assert.equal(batch.status, 'done');
+    assert.equal(batch.events.at(-1).reason, reason);
+  });
+
   it('should export exactly the filtered rows as CSV', async (t) => {
     const session = await startConsole(t);
     const page = await session.page('rosa');

@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { Locator, Page } from 'playwright-core';
-import { invitationLink, readOutbox } from '../helpers/mail.ts';
+import { readOutbox } from '../helpers/mail.ts';
 import { collectConsoleErrors, signIn, startConsole } from './browser.ts';
 
 const WREN = {
@@ -32,7 +32,8 @@ describe('mail in the console', () => {
     const session = await startConsole(t);
     const { server } = session;
 
-    // An admin adds Wren with an address: the add dialog says an invitation went out.
+    // An admin adds Wren with an address: with no mail server, the add dialog shows the
+    // invitation's link this once, to copy and pass on.
     const admin = await session.page('rosa');
     const adminErrors = collectConsoleErrors(admin);
     await admin.goto(`${server.url}/people`, { waitUntil: 'networkidle' });
@@ -41,14 +42,21 @@ describe('mail in the console', () => {
     await admin.getByTestId('person-display-name').fill(WREN.displayName);
     await admin.getByTestId('person-email').fill(WREN.email);
     await admin.getByTestId('person-submit').click();
-    const invited = admin.getByTestId('invitation-sent');
-    await invited.waitFor();
-    assert.match(await invited.innerText(), /An invitation went to wren@quillmoor\.invalid/);
+    const shown = admin.getByTestId('invitation-link');
+    await shown.waitFor();
+    const dialog = admin.getByTestId('add-person-dialog');
+    assert.match(await dialog.innerText(), /Copy this link now: it is shown only once\./);
+    const link = (await shown.innerText()).trim();
+    assert.ok(link.startsWith(`${server.url}/set-password?token=`), link);
+    const token = new URL(link).searchParams.get('token') ?? '';
+    await admin.getByTestId('copy-invitation-link').waitFor();
     await session.screenshot(admin, 'person-invited');
+    assert.equal(
+      await admin.getByTestId('person-done').innerText(),
+      'Done, I have the password and the link',
+    );
     await admin.getByTestId('person-done').click();
-    await admin
-      .getByText(/an invitation to set their password went to wren@quillmoor\.invalid/)
-      .waitFor();
+    await admin.getByText(/pass them the invitation link you copied/).waitFor();
 
     // The outbox lists it, newest first, and says that nothing leaves this machine.
     await admin.getByTestId('tab-outbox').click();
@@ -65,15 +73,20 @@ describe('mail in the console', () => {
     assert.equal(await row.getByTestId('outbox-status').innerText(), 'Sent');
     await session.screenshot(admin, 'outbox');
 
-    // Opening it shows the text body only: no element of the HTML is rendered.
+    // Opening it shows the text body only (no element of the HTML is rendered), without the
+    // link's token, and says where the link went.
     await row.getByTestId('outbox-open').click();
     const body = admin.getByTestId('outbox-message-text');
     await body.waitFor();
     const text = await body.innerText();
     assert.match(text, /Hello Wren Halloway,/);
     assert.equal(await body.evaluate((element) => element.children.length), 0);
-    const link = invitationLink(text);
-    assert.ok(link.startsWith(`${server.url}/set-password?token=`), link);
+    assert.ok(!text.includes(token), 'the outbox keeps no token');
+    assert.match(text, /token=\(shown once to the admin who sent the invitation\)/);
+    assert.match(
+      await admin.getByTestId('outbox-link-note').innerText(),
+      /shown once to the admin who sent the invitation/,
+    );
     await session.screenshot(admin, 'outbox-message');
     await admin.getByRole('button', { name: 'Close' }).click();
 
@@ -164,8 +177,17 @@ describe('mail in the console', () => {
       .and(admin.locator(`[data-username="${WREN.username}"]`))
       .getByTestId('resend-invitation')
       .click();
-    await admin.getByText(/A new invitation went to wren@quillmoor\.invalid/).waitFor();
+    const resent = admin.getByTestId('invitation-link-dialog');
+    await resent.waitFor();
+    assert.match(await resent.innerText(), /Copy this link now: it is shown only once\./);
+    const again = (await resent.getByTestId('invitation-link').innerText()).trim();
+    assert.notEqual(again, link);
+    assert.ok(again.startsWith(`${server.url}/set-password?token=`), again);
     await session.screenshot(admin, 'people-resend-invitation');
+    await admin.keyboard.press('Escape');
+    assert.equal(await resent.isVisible(), true, 'only the button closes it');
+    await admin.getByTestId('invitation-done').click();
+    await resent.waitFor({ state: 'detached' });
     const invitations = (await readOutbox(server)).filter(
       (message) => message.kind === 'invitation' && message.to === WREN.email,
     );

@@ -57,6 +57,14 @@ describe('audit event words', () => {
         expected: 'in progress → discarded · reason: Dropped on the floor',
       },
       {
+        name: 'a signed-off batch moved on by an admin',
+        event: {
+          action: 'batch-status',
+          detail: { from: 'curing', to: 'done', reason: 'Probe read late', afterSignOff: true },
+        },
+        expected: 'curing → done · after sign-off · reason: Probe read late',
+      },
+      {
         name: 'a person deactivated and made a cook',
         event: { action: 'person-change', detail: { active: false, role: 'cook' } },
         expected: 'deactivated, role → cook',

@@ -131,6 +131,7 @@ export function detailText(event: Pick<AuditEvent, 'action' | 'detail'>): string
       return join(
         [
           `${statusText(detail['from'])} → ${statusText(detail['to'])}`,
+          detail['afterSignOff'] === true ? 'after sign-off' : '',
           present(detail['reason']) ? `reason: ${wordsOf(detail['reason'])}` : '',
         ],
         ' · ',

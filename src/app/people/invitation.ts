@@ -7,6 +7,11 @@ export interface InvitationSent {
   readonly sentTo: string;
   /** When its link stops working (ISO 8601). */
   readonly expiresAt: string;
+  /**
+   * With no mail server, the link for the admin to pass on by hand: this answer is the only
+   * time it is shown. Null when a mail server takes it to the person.
+   */
+  readonly link: string | null;
 }
 
 /** GET /api/invitations/:token: a link that still works, and for whom. */

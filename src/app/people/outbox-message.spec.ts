@@ -1,6 +1,12 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { deliveryStatus, kindText, recipientText, transportText } from './outbox-message.ts';
+import {
+  deliveryStatus,
+  invitationNote,
+  kindText,
+  recipientText,
+  transportText,
+} from './outbox-message.ts';
 
 describe('outbox message words', () => {
   describe('kindText', () => {
@@ -98,12 +104,36 @@ describe('outbox message words', () => {
       );
     });
 
+    it('should say that an invitation link is shown once to the admin and not kept here', () => {
+      assert.match(
+        transportText('local'),
+        /Invitation links are shown once, to the admin who sends the invitation, and are not kept here/,
+      );
+    });
+
     it('should say that messages go to the mail server when one is set', () => {
       assert.match(transportText('smtp'), /mail server set in LARDER_SMTP_URL/);
     });
 
     it('should say nothing before the server has told', () => {
       assert.equal(transportText(null), '');
+    });
+  });
+
+  describe('invitationNote', () => {
+    it('should say where an invitation’s link went, for each transport', () => {
+      assert.match(
+        invitationNote({ kind: 'invitation', transport: 'local' }),
+        /shown once to the admin who sent the invitation.*send a new invitation/,
+      );
+      assert.match(
+        invitationNote({ kind: 'invitation', transport: 'smtp' }),
+        /only to the person invited/,
+      );
+    });
+
+    it('should say nothing about a reminder', () => {
+      assert.equal(invitationNote({ kind: 'reminder-ready', transport: 'local' }), '');
     });
   });
 });

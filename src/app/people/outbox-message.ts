@@ -110,6 +110,18 @@ export function transportText(transport: MailTransport | null): string {
   if (transport === 'smtp')
     return 'Messages go out through the mail server set in LARDER_SMTP_URL; once an invitation is sent, its link is removed from the copy kept here.';
   if (transport === 'local')
-    return 'LARDER_SMTP_URL is not set, so messages stay here and are not sent: read them here and pass invitation links on yourself.';
+    return 'LARDER_SMTP_URL is not set, so messages stay here and are not sent. Invitation links are shown once, to the admin who sends the invitation, and are not kept here: that admin passes them on.';
   return '';
+}
+
+/**
+ * Where an invitation's link went, for the message's page: the copy kept here has none.
+ * @param message The kind of message and how it went out.
+ * @returns A sentence for an invitation; empty for any other message.
+ */
+export function invitationNote(message: Pick<OutboxSummary, 'kind' | 'transport'>): string {
+  if (message.kind !== 'invitation') return '';
+  if (message.transport === 'local')
+    return 'The link in this invitation was shown once to the admin who sent the invitation, to pass on by hand, and is not kept here. If it got lost, send a new invitation from People.';
+  return 'The link in this invitation goes only to the person invited, and is not kept here once the mail server has the message. If it got lost, send a new invitation from People.';
 }

@@ -18,10 +18,10 @@ import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
 import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { BatchLog } from '../batch-log/batch-log';
-import { allowedMoves, type StatusMove } from '../batch-status';
+import { offeredMoves, signOffBlocked, type OfferedMove } from '../batch-status';
 import type { FormulaKind } from '../batch-types';
 import { BatchStore } from './batch-store';
-import { DiscardDialog, type DiscardDialogData } from './discard-dialog';
+import { ReasonDialog, type ReasonDialogData } from './reason-dialog';
 import { SignOffDialog, type SignOff, type SignOffDialogData } from './sign-off-dialog';
 import { StatusTimeline } from './status-timeline';
 
@@ -67,11 +67,16 @@ export default class BatchPage {
 
   protected readonly batch = this.store.batch;
   protected readonly kindWords = KIND_WORDS;
-  protected readonly moves = computed<StatusMove[]>(() => {
+  protected readonly moves = computed<OfferedMove[]>(() => {
     const batch = this.batch();
-    if (!batch || !this.session.hasRole('admin', 'cook')) return [];
-    return allowedMoves(batch.status, batch.kind);
+    const person = this.session.person();
+    if (!batch || !person || !this.session.hasRole('admin', 'cook')) return [];
+    return offeredMoves(batch, person, this.store.rules());
   });
+  /** Why moves are held back, each reason once (a signed-off batch holds back every move). */
+  protected readonly heldBack = computed(() => [
+    ...new Set(this.moves().flatMap((move) => (move.blocked ? [move.blocked] : []))),
+  ]);
   protected readonly canSignOff = computed(() => {
     const batch = this.batch();
     return (
@@ -81,6 +86,14 @@ export default class BatchPage {
       batch.status !== 'discarded' &&
       this.session.hasRole('admin', 'reviewer')
     );
+  });
+  /** Why the rules keep this person from signing the batch off (they recorded it), or null. */
+  protected readonly signOffHeld = computed(() => {
+    const batch = this.batch();
+    const person = this.session.person();
+    return batch && person && this.canSignOff()
+      ? signOffBlocked(batch, person, this.store.rules())
+      : null;
   });
   /** Why a reviewer cannot sign off yet, when they could later. */
   protected readonly signOffWaits = computed(() => {
@@ -111,13 +124,13 @@ export default class BatchPage {
     });
   }
 
-  protected async moveTo(move: StatusMove): Promise<void> {
+  protected async moveTo(move: OfferedMove): Promise<void> {
     const batch = this.batch();
-    if (!batch) return;
+    if (!batch || move.blocked) return;
     let reason: string | undefined;
     if (move.needsReason) {
-      const dialog = this.dialog.open<DiscardDialog, DiscardDialogData, string>(DiscardDialog, {
-        data: { lotCode: batch.lotCode },
+      const dialog = this.dialog.open<ReasonDialog, ReasonDialogData, string>(ReasonDialog, {
+        data: { lotCode: batch.lotCode, to: move.to, action: move.action },
         width: '520px',
       });
       reason = await firstValueFrom(dialog.afterClosed());
@@ -128,9 +141,10 @@ export default class BatchPage {
 
   protected async signOff(): Promise<void> {
     const batch = this.batch();
-    if (!batch) return;
+    if (!batch || this.signOffHeld()) return;
+    const final = batch.status === 'done' || batch.status === 'discarded';
     const dialog = this.dialog.open<SignOffDialog, SignOffDialogData, SignOff>(SignOffDialog, {
-      data: { lotCode: batch.lotCode },
+      data: { lotCode: batch.lotCode, locks: this.store.rules().lockSignedOff && !final },
       width: '520px',
     });
     const answer = await firstValueFrom(dialog.afterClosed());

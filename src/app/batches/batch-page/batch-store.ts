@@ -1,6 +1,10 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
+import {
+  SAFE_WORKFLOW_RULES,
+  type WorkflowRules,
+} from '../../../../shared/workflow/workflow-rules.ts';
 import { ApiError } from '../../core/api/api-error';
 import type { Batch, BatchStatus } from '../batch-types';
 import { messageOf } from '../formula-options';
@@ -14,6 +18,7 @@ import { messageOf } from '../formula-options';
 export class BatchStore {
   private readonly http = inject(HttpClient);
   private readonly current = signal<Batch | null>(null);
+  private readonly workflow = signal<WorkflowRules>(SAFE_WORKFLOW_RULES);
   private readonly busy = signal(false);
   private readonly failure = signal<{ message: string; notFound: boolean } | null>(null);
   private readonly acting = signal(false);
@@ -22,6 +27,8 @@ export class BatchStore {
 
   /** The batch, with its events; null until read. */
   readonly batch = this.current.asReadonly();
+  /** The kitchen's workflow rules, as the server answered with the batch. */
+  readonly rules = this.workflow.asReadonly();
   /** Whether the batch is being read. */
   readonly loading = this.busy.asReadonly();
   /** Why the batch could not be read, and whether it does not exist. */
@@ -38,10 +45,15 @@ export class BatchStore {
     this.failure.set(null);
     if (this.current()?.lotCode !== lot.toUpperCase()) this.current.set(null);
     try {
-      const { batch } = await firstValueFrom(
-        this.http.get<{ batch: Batch }>(`/api/batches/${encodeURIComponent(lot)}`),
+      const { batch, rules } = await firstValueFrom(
+        this.http.get<{ batch: Batch; rules: WorkflowRules }>(
+          `/api/batches/${encodeURIComponent(lot)}`,
+        ),
       );
-      if (request === this.request) this.current.set(batch);
+      if (request === this.request) {
+        this.workflow.set(rules);
+        this.current.set(batch);
+      }
     } catch (error) {
       if (request !== this.request) return;
       this.failure.set({

@@ -15,6 +15,8 @@ import { MatInput } from '@angular/material/input';
 /** What the sign-off dialog is opened with. */
 export interface SignOffDialogData {
   readonly lotCode: string;
+  /** Whether signing off holds the batch where it is: only an admin, saying why, moves it on. */
+  readonly locks: boolean;
 }
 
 /** What the sign-off dialog closes with when confirmed. */
@@ -46,6 +48,12 @@ export interface SignOff {
           You confirm you have reviewed this batch's record: its amounts, limit checks and status
           history. A batch is signed off once, and the sign-off is kept with your name.
         </p>
+        @if (data.locks) {
+          <p data-testid="sign-off-locks">
+            It is not finished yet: once you sign it off, only an admin can move it on or discard
+            it, and must say why.
+          </p>
+        }
         <mat-form-field class="note">
           <mat-label>Note (optional)</mat-label>
           <textarea

@@ -23,6 +23,7 @@ import {
   OutboxMessage,
   OutboxSummary,
   deliveryStatus,
+  invitationNote,
   kindText,
   recipientText,
 } from '../outbox-message';
@@ -56,6 +57,8 @@ export class OutboxMessageDialog implements OnInit {
   protected readonly summary = inject<OutboxSummary>(MAT_DIALOG_DATA);
   protected readonly recipient = recipientText(this.summary);
   protected readonly kind = kindText(this.summary.kind);
+  /** Where an invitation's link went: the copy kept here has none. */
+  protected readonly linkNote = invitationNote(this.summary);
   protected readonly loading = signal(true);
   protected readonly failure = signal<string | null>(null);
   /** The whole message, once fetched. */

@@ -29,6 +29,10 @@ import { Router } from '@angular/router';
 import { Person } from '../../core/api/api-types';
 import { SessionStore } from '../../core/auth/session-store';
 import { failureText } from '../failure-text';
+import {
+  InvitationLinkDialog,
+  InvitationLinkDialogData,
+} from '../invitation-link-dialog/invitation-link-dialog';
 import { PasswordResetDialog } from '../password-reset-dialog/password-reset-dialog';
 import { AddedPerson, PeopleStore } from '../people-store';
 import { PersonAddDialog } from '../person-add-dialog/person-add-dialog';
@@ -107,9 +111,11 @@ export default class PeopleList implements OnInit {
         const { person, invitation } = added;
         const role = roleLabel(person.role).toLowerCase();
         this.tell(
-          invitation
-            ? `${person.displayName} is added as ${role}; an invitation to set their password went to ${invitation.sentTo}.`
-            : `${person.displayName} is added as ${role}.`,
+          invitation?.link
+            ? `${person.displayName} is added as ${role}; pass them the invitation link you copied.`
+            : invitation
+              ? `${person.displayName} is added as ${role}; an invitation to set their password went to ${invitation.sentTo}.`
+              : `${person.displayName} is added as ${role}.`,
         );
       });
   }
@@ -152,12 +158,24 @@ export default class PeopleList implements OnInit {
       });
   }
 
-  /** Sends a new invitation; the link of the one before stops working. */
+  /**
+   * Sends a new invitation; the link of the one before stops working. With no mail server its
+   * link is shown once, in a dialog only its button closes.
+   */
   protected async resendInvitation(person: Person): Promise<void> {
     if (this.resending() !== null) return;
     this.resending.set(person.id);
     try {
       const invitation = await this.store.resendInvitation(person.id);
+      const link = invitation.link;
+      if (link) {
+        this.dialog.open<InvitationLinkDialog, InvitationLinkDialogData>(InvitationLinkDialog, {
+          ...FORM_DIALOG,
+          disableClose: true,
+          data: { displayName: person.displayName, invitation: { ...invitation, link } },
+        });
+        return;
+      }
       this.tell(
         `A new invitation went to ${invitation.sentTo}; the link of any earlier one no longer works.`,
       );

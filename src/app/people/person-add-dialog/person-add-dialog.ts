@@ -4,6 +4,7 @@ import {
   Component,
   Injector,
   afterNextRender,
+  computed,
   inject,
   signal,
   viewChild,
@@ -26,6 +27,7 @@ import { ApiError } from '../../core/api/api-error';
 import { Role } from '../../core/api/api-types';
 import { failureText } from '../failure-text';
 import { GeneratedPassword } from '../generated-password/generated-password';
+import { InvitationLink } from '../invitation-link/invitation-link';
 import { AddedPerson, PeopleStore } from '../people-store';
 import {
   DISPLAY_NAME_MAX,
@@ -39,8 +41,8 @@ import { ROLE_OPTIONS } from '../role-options';
 
 /**
  * Adds a person. Closes with the new person (and the invitation sent to their address); when the
- * server made up the password, the dialog first shows it once and stays open until the admin is
- * done with it.
+ * server made up the password, or the invitation's link is the admin's to pass on (no mail
+ * server), the dialog first shows it once and stays open until the admin is done with it.
  */
 @Component({
   selector: 'app-person-add-dialog',
@@ -64,6 +66,7 @@ import { ROLE_OPTIONS } from '../role-options';
     MatIcon,
     MatProgressBar,
     GeneratedPassword,
+    InvitationLink,
   ],
   templateUrl: './person-add-dialog.html',
   styleUrl: './person-add-dialog.css',
@@ -74,6 +77,7 @@ export class PersonAddDialog {
   private readonly dialogRef = inject<MatDialogRef<PersonAddDialog, AddedPerson>>(MatDialogRef);
   private readonly injector = inject(Injector);
   private readonly reveal = viewChild(GeneratedPassword);
+  private readonly linkReveal = viewChild(InvitationLink);
 
   protected readonly roles = ROLE_OPTIONS;
   protected readonly rules = { DISPLAY_NAME_MAX, PASSWORD_MIN };
@@ -87,8 +91,16 @@ export class PersonAddDialog {
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
   protected readonly passwordShown = signal(false);
-  /** The person added with a generated password, while that password is on screen. */
+  /** The person added, while what is shown only once (password, invitation link) is on screen. */
   protected readonly added = signal<AddedPerson | null>(null);
+  /** The closing button's words: what the admin has taken down. */
+  protected readonly doneWords = computed(() => {
+    const added = this.added();
+    const password = added?.password !== null;
+    const link = !!added?.invitation?.link;
+    if (password && link) return 'Done, I have the password and the link';
+    return link ? 'Done, I have the link' : 'Done, I have the password';
+  });
 
   protected async addPerson(): Promise<void> {
     if (this.form.invalid || this.busy()) {
@@ -106,14 +118,16 @@ export class PersonAddDialog {
         role,
         ...(password ? { password } : {}),
       });
-      if (added.password === null) {
+      if (added.password === null && !added.invitation?.link) {
         this.dialogRef.close(added);
         return;
       }
-      // The password exists nowhere else now: no closing by Escape or a stray click outside.
+      // The password and the link exist nowhere else now: no closing by Escape or a stray click.
       this.dialogRef.disableClose = true;
       this.added.set(added);
-      afterNextRender(() => this.reveal()?.focus(), { injector: this.injector });
+      afterNextRender(() => (this.reveal() ?? this.linkReveal())?.focus(), {
+        injector: this.injector,
+      });
     } catch (error) {
       if (error instanceof ApiError && error.code === 'username-taken') {
         this.form.controls.username.setErrors({ taken: true });
