@@ -1,5 +1,12 @@
-import { LineCounter, isMap, isScalar, parseDocument } from 'yaml';
-import { readFormula, type Formula, type FormulaProblem } from '../../shared/index.ts';
+import { LineCounter, isMap, isScalar } from 'yaml';
+import {
+  limitFormulaProblem,
+  parseYamlWithinLimits,
+  readFormula,
+  yamlLimitProblem,
+  type Formula,
+  type FormulaProblem,
+} from '../../shared/index.ts';
 import { AppError, conflict } from '../http/app-error.ts';
 import { isFormulaId } from './formula-files.ts';
 
@@ -21,14 +28,31 @@ export function invalidFormula(problems: readonly FormulaProblem[]): AppError {
 }
 
 /**
+ * Refuses formula YAML larger or deeper than any formula before anything parses it: 413
+ * too-large past the size ceiling, 422 too-complex past the nesting or node limit. The one
+ * problem in the details carries the line and column where the limit is passed.
+ * @throws AppError when the text passes a limit
+ */
+export function requireWithinLimits(text: string, fileName: string): void {
+  const problem = yamlLimitProblem(text);
+  if (!problem) return;
+  const details = [limitFormulaProblem(problem, fileName)];
+  throw problem.limit === 'size'
+    ? new AppError(413, 'too-large', problem.message, details)
+    : new AppError(422, 'too-complex', problem.message, details);
+}
+
+/**
  * Reads a formula text that is about to be written: it must read cleanly and carry `id`.
- * @throws AppError 422 with the problems (line, column) when it does not
+ * @throws AppError 422 with the problems (line, column) when it does not; 413 or 422 from
+ *   requireWithinLimits
  */
 export function usableFormula(
   text: string,
   fileName: string,
   id?: string,
 ): { formula: Formula; problems: readonly FormulaProblem[] } {
+  requireWithinLimits(text, fileName);
   const reading = readFormula(text, fileName);
   if (!reading.formula) throw invalidFormula(reading.problems);
   if (id !== undefined && reading.formula.id !== id) {
@@ -53,12 +77,14 @@ export function usableFormula(
 /**
  * Reads the text of a new formula, whose file will be named by the id inside it.
  * @throws AppError 400 bad-id when the id is not a well-formed id (such as "../x"): nothing is
- *   ever named by it; 422 for any other problem
+ *   ever named by it; 413 or 422 from requireWithinLimits; 422 for any other problem
  */
 export function newFormula(text: string, fileName: string): Formula {
+  requireWithinLimits(text, fileName);
   const reading = readFormula(text, fileName);
-  const doc = parseDocument(text);
-  const id = isMap(doc.contents) ? doc.contents.get('id') : undefined;
+  const parsed = parseYamlWithinLimits(text);
+  const top = parsed.ok ? parsed.document.contents : undefined;
+  const id = isMap(top) ? top.get('id') : undefined;
   if (id !== undefined && !isFormulaId(id)) {
     throw new AppError(
       400,
@@ -73,8 +99,9 @@ export function newFormula(text: string, fileName: string): Formula {
 
 function idPosition(text: string): { line: number; column: number } {
   const lineCounter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter });
-  const value = isMap(doc.contents) ? doc.contents.get('id', true) : undefined;
+  const parsed = parseYamlWithinLimits(text, { lineCounter });
+  const top = parsed.ok ? parsed.document.contents : undefined;
+  const value = isMap(top) ? top.get('id', true) : undefined;
   const offset = isScalar(value) ? value.range?.[0] : undefined;
   if (offset === undefined) return { line: 0, column: 0 };
   const { line, col } = lineCounter.linePos(offset);
