@@ -22,7 +22,6 @@ export {
   MAX_YAML_DEPTH,
   MAX_YAML_NODES,
   TOO_LARGE_MESSAGE,
-  limitFormulaProblem,
   yamlLimitProblem,
   type YamlLimit,
   type YamlLimitProblem,

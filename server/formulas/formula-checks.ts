@@ -1,11 +1,10 @@
 import { LineCounter, isMap, isScalar } from 'yaml';
 import {
-  limitFormulaProblem,
   parseYamlWithinLimits,
   readFormula,
-  yamlLimitProblem,
   type Formula,
   type FormulaProblem,
+  type FormulaReading,
 } from '../../shared/index.ts';
 import { AppError, conflict } from '../http/app-error.ts';
 import { isFormulaId } from './formula-files.ts';
@@ -28,32 +27,31 @@ export function invalidFormula(problems: readonly FormulaProblem[]): AppError {
 }
 
 /**
- * Refuses formula YAML larger or deeper than any formula before anything parses it: 413
- * too-large past the size ceiling, 422 too-complex past the nesting or node limit. The one
- * problem in the details carries the line and column where the limit is passed.
- * @throws AppError when the text passes a limit
+ * Refuses a reading of formula YAML that was stopped at a limit (larger, deeper or fuller than
+ * any formula): 413 too-large past the size ceiling, 422 too-complex past the nesting or node
+ * limit, with the one problem, at the line and column where the limit is passed, as details.
+ * @throws AppError when the reading passed a limit
  */
-export function requireWithinLimits(text: string, fileName: string): void {
-  const problem = yamlLimitProblem(text);
-  if (!problem) return;
-  const details = [limitFormulaProblem(problem, fileName)];
-  throw problem.limit === 'size'
-    ? new AppError(413, 'too-large', problem.message, details)
-    : new AppError(422, 'too-complex', problem.message, details);
+export function refuseOverLimit(reading: FormulaReading): void {
+  if (reading.limit === undefined) return;
+  const [problem] = reading.problems;
+  throw reading.limit === 'size'
+    ? new AppError(413, 'too-large', problem.message, reading.problems)
+    : new AppError(422, 'too-complex', problem.message, reading.problems);
 }
 
 /**
  * Reads a formula text that is about to be written: it must read cleanly and carry `id`.
  * @throws AppError 422 with the problems (line, column) when it does not; 413 or 422 from
- *   requireWithinLimits
+ *   refuseOverLimit
  */
 export function usableFormula(
   text: string,
   fileName: string,
   id?: string,
 ): { formula: Formula; problems: readonly FormulaProblem[] } {
-  requireWithinLimits(text, fileName);
   const reading = readFormula(text, fileName);
+  refuseOverLimit(reading);
   if (!reading.formula) throw invalidFormula(reading.problems);
   if (id !== undefined && reading.formula.id !== id) {
     throw new AppError(
@@ -77,11 +75,11 @@ export function usableFormula(
 /**
  * Reads the text of a new formula, whose file will be named by the id inside it.
  * @throws AppError 400 bad-id when the id is not a well-formed id (such as "../x"): nothing is
- *   ever named by it; 413 or 422 from requireWithinLimits; 422 for any other problem
+ *   ever named by it; 413 or 422 from refuseOverLimit; 422 for any other problem
  */
 export function newFormula(text: string, fileName: string): Formula {
-  requireWithinLimits(text, fileName);
   const reading = readFormula(text, fileName);
+  refuseOverLimit(reading);
   const parsed = parseYamlWithinLimits(text);
   const top = parsed.ok ? parsed.document.contents : undefined;
   const id = isMap(top) ? top.get('id') : undefined;

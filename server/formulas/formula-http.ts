@@ -4,7 +4,7 @@ import { isFormulaId } from './formula-files.ts';
 
 /**
  * Formula YAML in a request body (schema for validateBody). Its size is not limited here: every
- * route refuses a text larger than a formula may be with 413 too-large (requireWithinLimits), in
+ * route refuses a text larger than a formula may be with 413 too-large (refuseOverLimit), in
  * bytes, as the command line does; the JSON body limit bounds what is read at all.
  */
 export const YAML_TEXT = { type: 'string', minLength: 1 } as const;

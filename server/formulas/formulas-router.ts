@@ -18,7 +18,7 @@ import {
   revisionOf,
   type FormulaFile,
 } from './formula-files.ts';
-import { requireWithinLimits } from './formula-checks.ts';
+import { refuseOverLimit } from './formula-checks.ts';
 import { FormulaHistory, type FormulaRevision } from './formula-history.ts';
 import {
   REVISION,
@@ -138,8 +138,8 @@ export function formulasRouter(context: AppContext): Router {
 
   router.post('/validate', anyone, validateBody(VALIDATE_BODY), (req, res) => {
     const { yaml } = req.body as { yaml: string };
-    requireWithinLimits(yaml, 'formula.yaml');
     const reading = readFormula(yaml, 'formula.yaml');
+    refuseOverLimit(reading);
     res.json({
       usable: reading.formula !== undefined,
       id: reading.formula?.id ?? null,

@@ -7,7 +7,7 @@ import type { ContentProblem, FormulaProblem } from './formula-problem.ts';
 import type { Formula } from './formula-types.ts';
 import { locate } from './locate.ts';
 import { parseYamlWithinLimits } from './parse-yaml.ts';
-import { MAX_ALIAS_COUNT, limitFormulaProblem } from './yaml-limits.ts';
+import { MAX_ALIAS_COUNT, limitFormulaProblem, type YamlLimit } from './yaml-limits.ts';
 import { yamlErrorMessage } from './yaml-messages.ts';
 
 /** A formula read from text: the formula when it can be used, and every problem found. */
@@ -15,6 +15,8 @@ export interface FormulaReading {
   /** Present when there are no errors (warnings allowed). */
   readonly formula?: Formula;
   readonly problems: readonly FormulaProblem[];
+  /** The limit the text passes when it was refused unread (its one problem says where). */
+  readonly limit?: YamlLimit;
 }
 
 /**
@@ -28,13 +30,12 @@ export function readFormula(text: string, file: string): FormulaReading {
     problems: [{ file, line: 0, column: 0, path: [], message, severity: 'error' }],
   });
   const lineCounter = new LineCounter();
-  // Size, nesting and node count first: a text built to exhaust the parser never reaches it.
-  const parsed = parseYamlWithinLimits(text, {
-    lineCounter,
-    prettyErrors: false,
-    uniqueKeys: true,
-  });
-  if (!parsed.ok) return { problems: [limitFormulaProblem(parsed.problem, file)] };
+  // Size first, then nesting and node count as the text is read: a text built to exhaust the
+  // parser is stopped where it passes a limit.
+  const parsed = parseYamlWithinLimits(text, { lineCounter, uniqueKeys: true });
+  if (!parsed.ok) {
+    return { problems: [limitFormulaProblem(parsed.problem, file)], limit: parsed.problem.limit };
+  }
   if (text.trim() === '') return whole('the file is empty');
 
   const control = controlCharacter(text);
@@ -181,7 +182,7 @@ export function placeProblems(
 ): FormulaProblem[] {
   if (problems.length === 0) return [];
   const lineCounter = new LineCounter();
-  const parsed = parseYamlWithinLimits(text, { lineCounter, prettyErrors: false });
+  const parsed = parseYamlWithinLimits(text, { lineCounter });
   // A text the reader refused has no places to point at: its problems stand for the whole file.
   if (!parsed.ok) return problems.map((problem) => ({ ...problem, file, line: 0, column: 0 }));
   const doc = parsed.document;

@@ -85,159 +85,208 @@ const DOCUMENT = '\x02';
 const FLOW_END = '\x18';
 
 /**
- * Measures a YAML text's nesting and node count with the yaml package's lexer, which reads
- * quotes, comments and block scalars exactly as the parser will, without building anything; it
- * stops at the first limit passed, so a hostile text costs no more than the limit's worth.
- * Flow collections ("[", "{") count one level each wherever they open; block collections are
- * counted by the column their first key or "- " stands at, as the parser nests them.
- * @param limits counting stops where the depth or the node count would pass these
+ * Measures a YAML text's nesting and node count from the yaml package's lexer tokens, fed one at
+ * a time: the lexer reads quotes, comments and block scalars exactly as the parser will. Flow
+ * collections ("[", "{") count one level each wherever they open; block collections are counted
+ * by the column their first key or "- " stands at, as the parser nests them. Once a limit is
+ * passed, feed() says so and counts nothing more.
  */
-export function yamlShape(
-  text: string,
-  limits: { depth: number; nodes: number } = { depth: MAX_YAML_DEPTH, nodes: MAX_YAML_NODES },
-): YamlShape {
-  let offset = 0;
-  let line = 1;
-  let lineStart = 0;
-  let flow = 0;
+export class YamlShapeCounter {
+  private offset = 0;
+  private line = 1;
+  private lineStart = 0;
+  private flow = 0;
   // The block collections open around the current token: the column each stands at.
-  const blocks: { column: number; kind: 'seq' | 'map' }[] = [];
-  let nodes = 0;
-  let depth = 0;
-  let atLineStart = true;
+  private readonly blocks: { column: number; kind: 'seq' | 'map' }[] = [];
+  private nodes = 0;
+  private depth = 0;
+  private atLineStart = true;
   // Where the node a ":" may turn into a key began, and whether one is about to begin.
-  let nodeColumn = 0;
-  let nodeNext = false;
+  private nodeColumn = 0;
+  private nodeNext = false;
   // The next token is a scalar's own text; the one after a block scalar header is its content.
-  let scalarNext = false;
-  let blockScalarNext = false;
-  let over: YamlShape['over'];
+  private scalarNext = false;
+  private blockScalarNext = false;
+  private over: YamlShape['over'];
 
-  const deeper = (column: number): void => {
-    const level = blocks.length + flow;
-    depth = Math.max(depth, level);
-    if (level > limits.depth && !over) over = { limit: 'depth', line, column: column + 1 };
-  };
-  const openSeq = (column: number): void => {
-    const top = blocks[blocks.length - 1];
-    if (top?.column === column && top.kind === 'seq') return;
-    blocks.push({ column, kind: 'seq' });
-    deeper(column);
-  };
-  const openMap = (column: number): void => {
-    let top = blocks[blocks.length - 1];
-    // A key at the column of a list ends that list: it was the value of the key before.
-    if (top?.column === column && top.kind === 'seq') {
-      blocks.pop();
-      top = blocks[blocks.length - 1];
-    }
-    if (top?.column === column && top.kind === 'map') return;
-    blocks.push({ column, kind: 'map' });
-    deeper(column);
-  };
+  /** @param limits counting stops where the depth or the node count would pass these */
+  constructor(
+    private readonly limits: { readonly depth: number; readonly nodes: number } = {
+      depth: MAX_YAML_DEPTH,
+      nodes: MAX_YAML_NODES,
+    },
+  ) {}
 
-  for (const token of new Lexer().lex(text)) {
-    const column = offset - lineStart;
-    const source = scalarNext;
-    scalarNext = false;
+  /** What has been counted so far, and where a limit was passed. */
+  get shape(): YamlShape {
+    return { depth: this.depth, nodes: this.nodes, ...(this.over && { over: this.over }) };
+  }
+
+  /**
+   * Counts the next lexer token.
+   * @returns false once a limit has been passed: the text must go no further
+   */
+  feed(token: string): boolean {
+    if (this.over) return false;
+    const source = this.scalarNext;
+    this.scalarNext = false;
     if (!source && (token === SCALAR || token === DOCUMENT || token === FLOW_END)) {
       if (token === SCALAR) {
-        scalarNext = true;
+        this.scalarNext = true;
         // A block scalar's content starts on the next line, but it is no key: it closes nothing.
-        if (blockScalarNext) blockScalarNext = false;
-        else if (flow === 0 && (atLineStart || nodeNext)) startNode();
-        count();
-      } else if (token === FLOW_END) flow = 0;
+        if (this.blockScalarNext) this.blockScalarNext = false;
+        else if (this.flow === 0 && (this.atLineStart || this.nodeNext)) this.startNode();
+        this.count();
+      } else if (token === FLOW_END) this.flow = 0;
     } else {
-      if (!source) structure(token, column);
-      offset += token.length;
+      if (!source) this.structure(token, this.offset - this.lineStart);
+      this.offset += token.length;
       const newline = token.lastIndexOf('\n');
       if (newline !== -1) {
-        for (let i = token.indexOf('\n'); i !== -1; i = token.indexOf('\n', i + 1)) line += 1;
-        lineStart = offset - token.length + newline + 1;
-        atLineStart = true;
+        for (let i = token.indexOf('\n'); i !== -1; i = token.indexOf('\n', i + 1)) this.line += 1;
+        this.lineStart = this.offset - token.length + newline + 1;
+        this.atLineStart = true;
       }
     }
-    if (over) break;
-  }
-  return { depth, nodes, ...(over && { over }) };
-
-  function count(): void {
-    nodes += 1;
-    if (nodes > limits.nodes && !over)
-      over = { limit: 'nodes', line, column: offset - lineStart + 1 };
+    return this.over === undefined;
   }
 
-  function startNode(): void {
-    const column = offset - lineStart;
-    if (atLineStart) {
-      atLineStart = false;
-      while (blocks.length > 0 && blocks[blocks.length - 1].column > column) blocks.pop();
+  private count(): void {
+    this.nodes += 1;
+    if (this.nodes > this.limits.nodes && !this.over)
+      this.over = { limit: 'nodes', line: this.line, column: this.offset - this.lineStart + 1 };
+  }
+
+  private deeper(column: number): void {
+    const level = this.blocks.length + this.flow;
+    this.depth = Math.max(this.depth, level);
+    if (level > this.limits.depth && !this.over)
+      this.over = { limit: 'depth', line: this.line, column: column + 1 };
+  }
+
+  private openSeq(column: number): void {
+    const top = this.blocks[this.blocks.length - 1];
+    if (top?.column === column && top.kind === 'seq') return;
+    this.blocks.push({ column, kind: 'seq' });
+    this.deeper(column);
+  }
+
+  private openMap(column: number): void {
+    let top = this.blocks[this.blocks.length - 1];
+    // A key at the column of a list ends that list: it was the value of the key before.
+    if (top?.column === column && top.kind === 'seq') {
+      this.blocks.pop();
+      top = this.blocks[this.blocks.length - 1];
     }
-    nodeColumn = column;
-    nodeNext = false;
+    if (top?.column === column && top.kind === 'map') return;
+    this.blocks.push({ column, kind: 'map' });
+    this.deeper(column);
+  }
+
+  private startNode(): void {
+    const column = this.offset - this.lineStart;
+    if (this.atLineStart) {
+      this.atLineStart = false;
+      // A line less indented than open collections closes them.
+      while (this.blocks.length > 0 && this.blocks[this.blocks.length - 1].column > column)
+        this.blocks.pop();
+    }
+    this.nodeColumn = column;
+    this.nodeNext = false;
   }
 
   /** One token that is text of the file (not a scalar's content). */
-  function structure(token: string, column: number): void {
+  private structure(token: string, column: number): void {
     const first = token[0];
     if (token === '' || first === '\n' || first === '\r' || first === ' ' || first === '\t') return;
     if (first === '#' || first === '%' || first === '\ufeff') return;
     if (token === '---' || token === '...') {
       // A new document starts from nothing; its nodes still count.
-      blocks.length = 0;
-      flow = 0;
-      atLineStart = false;
-      nodeNext = true;
+      this.blocks.length = 0;
+      this.flow = 0;
+      this.atLineStart = false;
+      this.nodeNext = true;
       return;
     }
-    if (flow > 0) {
-      atLineStart = false;
+    if (this.flow > 0) {
+      this.atLineStart = false;
       if (token === '[' || token === '{') {
-        flow += 1;
-        count();
-        deeper(column);
-      } else if (token === ']' || token === '}') flow -= 1;
+        this.flow += 1;
+        this.count();
+        this.deeper(column);
+      } else if (token === ']' || token === '}') this.flow -= 1;
       else if (first === '"' || first === "'" || first === '*' || token === ':' || token === ',')
-        count();
+        this.count();
       return;
     }
     switch (token) {
       case '-':
-        startNode();
-        count();
-        openSeq(column);
-        nodeNext = true;
+        this.startNode();
+        this.count();
+        this.openSeq(column);
+        this.nodeNext = true;
         return;
       case '?':
-        startNode();
-        count();
-        openMap(column);
-        nodeNext = true;
+        this.startNode();
+        this.count();
+        this.openMap(column);
+        this.nodeNext = true;
         return;
       case ':':
         // At the start of a line, ":" gives the value of a "?" key at its own column.
-        if (atLineStart) startNode();
-        count();
-        openMap(nodeColumn);
-        nodeNext = true;
+        if (this.atLineStart) this.startNode();
+        this.count();
+        this.openMap(this.nodeColumn);
+        this.nodeNext = true;
         return;
       case ']':
       case '}':
       case ',':
         // Stray outside a list or set of keys: the parser reports them; they nest nothing.
-        atLineStart = false;
+        this.atLineStart = false;
         return;
     }
-    if (atLineStart || nodeNext) startNode();
+    if (this.atLineStart || this.nodeNext) this.startNode();
     if (token === '[' || token === '{') {
-      flow = 1;
-      count();
-      deeper(column);
-    } else if (first === '"' || first === "'" || first === '*') count();
-    else if (first === '|' || first === '>') blockScalarNext = true;
+      this.flow = 1;
+      this.count();
+      this.deeper(column);
+    } else if (first === '"' || first === "'" || first === '*') this.count();
+    else if (first === '|' || first === '>') this.blockScalarNext = true;
     // Anchors (&a) and tags (!t) come before a node, counted when it comes.
   }
+}
+
+/**
+ * Measures a YAML text's nesting and node count (YamlShapeCounter over the yaml package's
+ * lexer), without building anything; it stops at the first limit passed, so a hostile text
+ * costs no more than the limit's worth.
+ * @param limits counting stops where the depth or the node count would pass these
+ */
+export function yamlShape(
+  text: string,
+  limits?: { readonly depth: number; readonly nodes: number },
+): YamlShape {
+  const counter = new YamlShapeCounter(limits);
+  for (const token of new Lexer().lex(text)) if (!counter.feed(token)) break;
+  return counter.shape;
+}
+
+/** The size problem of a text larger than MAX_FORMULA_BYTES; undefined when it is not. */
+export function sizeProblem(text: string): YamlLimitProblem | undefined {
+  // A UTF-16 unit is at most three bytes: a shorter text cannot be too large and is not counted.
+  if (text.length * 3 <= MAX_FORMULA_BYTES || utf8Length(text) <= MAX_FORMULA_BYTES)
+    return undefined;
+  return { limit: 'size', line: 0, column: 0, message: TOO_LARGE_MESSAGE };
+}
+
+/** The problem, in words a cook can act on, of a limit passed where the counter stopped. */
+export function shapeProblem(over: NonNullable<YamlShape['over']>): YamlLimitProblem {
+  const message =
+    over.limit === 'depth'
+      ? `the file nests lists and sets of keys more than ${MAX_YAML_DEPTH} levels deep here; a formula needs only a few`
+      : `the file holds more than ${MAX_YAML_NODES.toLocaleString('en')} keys, values and list items; this is one too many, and a formula has a few hundred`;
+  return { ...over, message };
 }
 
 /**
@@ -247,17 +296,10 @@ export function yamlShape(
  * @returns the problem, in words a cook can act on, or undefined when the text is within limits
  */
 export function yamlLimitProblem(text: string): YamlLimitProblem | undefined {
-  // A UTF-16 unit is at most three bytes: a shorter text cannot be too large and is not counted.
-  if (text.length * 3 > MAX_FORMULA_BYTES && utf8Length(text) > MAX_FORMULA_BYTES) {
-    return { limit: 'size', line: 0, column: 0, message: TOO_LARGE_MESSAGE };
-  }
+  const size = sizeProblem(text);
+  if (size) return size;
   const { over } = yamlShape(text);
-  if (!over) return undefined;
-  const message =
-    over.limit === 'depth'
-      ? `the file nests lists and sets of keys more than ${MAX_YAML_DEPTH} levels deep here; a formula needs only a few`
-      : `the file holds more than ${MAX_YAML_NODES.toLocaleString('en')} keys, values and list items; this is one too many, and a formula has a few hundred`;
-  return { ...over, message };
+  return over && shapeProblem(over);
 }
 
 /** A limit problem as a problem of the formula file `file`, as the reader and the API give it. */
