@@ -38,6 +38,34 @@ export default tseslint.config(
     rules: { '@typescript-eslint/no-require-imports': 'off' },
   },
   {
+    // Formula YAML is parsed only through parseYamlWithinLimits, which refuses a text larger or
+    // deeper than a formula before the parser builds anything; specs parse their own fixed text.
+    files: ['**/*.ts', '**/*.js', '**/*.mjs'],
+    ignores: ['shared/formula/parse-yaml.ts', '**/*.spec.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: [
+            {
+              name: 'yaml',
+              importNames: [
+                'default',
+                'parse',
+                'parseDocument',
+                'parseAllDocuments',
+                'Parser',
+                'Composer',
+              ],
+              message:
+                'parse formula YAML with parseYamlWithinLimits (shared/formula/parse-yaml.ts), which checks its size and nesting first',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     // The console: Angular's own rules; values and types are imported as Angular's tooling writes them.
     files: ['src/**/*.ts'],
     extends: [...angular.configs.tsRecommended],

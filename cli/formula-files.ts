@@ -2,6 +2,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import {
   MAX_FORMULA_BYTES,
+  TOO_LARGE_MESSAGE,
   formatProblem,
   readFormula,
   type Formula,
@@ -37,17 +38,11 @@ export function formulaFilesIn(folder: string): string[] {
 export function readFormulaFile(file: string): FormulaReading {
   let text: string;
   try {
+    // Not read at all when larger than a formula may be: the reader would refuse it anyway.
     if (statSync(file).size > MAX_FORMULA_BYTES) {
       return {
         problems: [
-          {
-            file,
-            line: 0,
-            column: 0,
-            path: [],
-            severity: 'error',
-            message: `the file is larger than ${MAX_FORMULA_BYTES / 1024} KB; a formula is a few kilobytes`,
-          },
+          { file, line: 0, column: 0, path: [], severity: 'error', message: TOO_LARGE_MESSAGE },
         ],
       };
     }

@@ -14,9 +14,19 @@ export {
   placeProblems,
   formatProblem,
   pathText,
-  MAX_FORMULA_BYTES,
   type FormulaReading,
 } from './formula/read-formula.ts';
+export {
+  MAX_ALIAS_COUNT,
+  MAX_FORMULA_BYTES,
+  MAX_YAML_DEPTH,
+  MAX_YAML_NODES,
+  TOO_LARGE_MESSAGE,
+  yamlLimitProblem,
+  type YamlLimit,
+  type YamlLimitProblem,
+} from './formula/yaml-limits.ts';
+export { parseYamlWithinLimits, type GuardedYaml } from './formula/parse-yaml.ts';
 export { checkLibrary, formulaLibrary, type LibraryFile } from './formula/check-library.ts';
 export { FORMULA_SCHEMA } from './validation/formula-validator.ts';
 export type * from './calculation/calc-result.ts';

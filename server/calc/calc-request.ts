@@ -9,6 +9,7 @@ import {
   type RawBatchOptions,
   type UnitSystem,
 } from '../../shared/index.ts';
+import { refuseOverLimit } from '../formulas/formula-checks.ts';
 import { AppError } from '../http/app-error.ts';
 
 /** The batch part of a calculation request: options as the CLI takes them, values as strings. */
@@ -47,9 +48,13 @@ export const BATCH_OPTIONS_SCHEMA = {
 
 export const UNITS_SCHEMA = { enum: ['metric', 'us'] } as const;
 
-/** Reads formula YAML sent in a request; 422 with every problem (line, column) when it cannot be used. */
+/**
+ * Reads formula YAML sent in a request; 422 with every problem (line, column) when it cannot be
+ * used, 413 or 422 from refuseOverLimit when it is larger or deeper than a formula can be.
+ */
 export function formulaFromText(yaml: string, name: string): Formula {
   const reading = readFormula(yaml, name);
+  refuseOverLimit(reading);
   if (!reading.formula) {
     throw new AppError(
       422,

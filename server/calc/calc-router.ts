@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { RawBatchOptions, UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
+import { YAML_TEXT } from '../formulas/formula-http.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { serverToday } from '../server-today.ts';
 import {
@@ -22,7 +23,7 @@ const CALC_BODY = {
           type: 'object',
           additionalProperties: false,
           required: ['yaml'],
-          properties: { yaml: { type: 'string', minLength: 1, maxLength: 262144 } },
+          properties: { yaml: YAML_TEXT },
         },
       ],
     },

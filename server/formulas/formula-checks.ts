@@ -1,5 +1,11 @@
-import { LineCounter, isMap, isScalar, parseDocument } from 'yaml';
-import { readFormula, type Formula, type FormulaProblem } from '../../shared/index.ts';
+import { LineCounter, isMap, isScalar } from 'yaml';
+import {
+  parseYamlWithinLimits,
+  readFormula,
+  type Formula,
+  type FormulaProblem,
+  type FormulaReading,
+} from '../../shared/index.ts';
 import { AppError, conflict } from '../http/app-error.ts';
 import { isFormulaId } from './formula-files.ts';
 
@@ -21,8 +27,23 @@ export function invalidFormula(problems: readonly FormulaProblem[]): AppError {
 }
 
 /**
+ * Refuses a reading of formula YAML that was stopped at a limit (larger, deeper or fuller than
+ * any formula): 413 too-large past the size ceiling, 422 too-complex past the nesting or node
+ * limit, with the one problem, at the line and column where the limit is passed, as details.
+ * @throws AppError when the reading passed a limit
+ */
+export function refuseOverLimit(reading: FormulaReading): void {
+  if (reading.limit === undefined) return;
+  const [problem] = reading.problems;
+  throw reading.limit === 'size'
+    ? new AppError(413, 'too-large', problem.message, reading.problems)
+    : new AppError(422, 'too-complex', problem.message, reading.problems);
+}
+
+/**
  * Reads a formula text that is about to be written: it must read cleanly and carry `id`.
- * @throws AppError 422 with the problems (line, column) when it does not
+ * @throws AppError 422 with the problems (line, column) when it does not; 413 or 422 from
+ *   refuseOverLimit
  */
 export function usableFormula(
   text: string,
@@ -30,6 +51,7 @@ export function usableFormula(
   id?: string,
 ): { formula: Formula; problems: readonly FormulaProblem[] } {
   const reading = readFormula(text, fileName);
+  refuseOverLimit(reading);
   if (!reading.formula) throw invalidFormula(reading.problems);
   if (id !== undefined && reading.formula.id !== id) {
     throw new AppError(
@@ -53,12 +75,14 @@ export function usableFormula(
 /**
  * Reads the text of a new formula, whose file will be named by the id inside it.
  * @throws AppError 400 bad-id when the id is not a well-formed id (such as "../x"): nothing is
- *   ever named by it; 422 for any other problem
+ *   ever named by it; 413 or 422 from refuseOverLimit; 422 for any other problem
  */
 export function newFormula(text: string, fileName: string): Formula {
   const reading = readFormula(text, fileName);
-  const doc = parseDocument(text);
-  const id = isMap(doc.contents) ? doc.contents.get('id') : undefined;
+  refuseOverLimit(reading);
+  const parsed = parseYamlWithinLimits(text);
+  const top = parsed.ok ? parsed.document.contents : undefined;
+  const id = isMap(top) ? top.get('id') : undefined;
   if (id !== undefined && !isFormulaId(id)) {
     throw new AppError(
       400,
@@ -73,8 +97,9 @@ export function newFormula(text: string, fileName: string): Formula {
 
 function idPosition(text: string): { line: number; column: number } {
   const lineCounter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter });
-  const value = isMap(doc.contents) ? doc.contents.get('id', true) : undefined;
+  const parsed = parseYamlWithinLimits(text, { lineCounter });
+  const top = parsed.ok ? parsed.document.contents : undefined;
+  const value = isMap(top) ? top.get('id', true) : undefined;
   const offset = isScalar(value) ? value.range?.[0] : undefined;
   if (offset === undefined) return { line: 0, column: 0 };
   const { line, col } = lineCounter.linePos(offset);

@@ -2,8 +2,12 @@ import { createHash } from 'node:crypto';
 import { readdirSync, statSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
-import { parseDocument } from 'yaml';
-import { readFormula, type FormulaReading } from '../../shared/index.ts';
+import {
+  MAX_ALIAS_COUNT,
+  parseYamlWithinLimits,
+  readFormula,
+  type FormulaReading,
+} from '../../shared/index.ts';
 
 /** One formula file as it is on disk now. */
 export interface FormulaFile {
@@ -138,7 +142,9 @@ export function formulaFacts(file: FormulaFile): { title: string | null; kind: s
   if (formula) return { title: formula.title, kind: formula.kind };
   let value: unknown;
   try {
-    value = parseDocument(file.text).toJS({ maxAliasCount: 50 });
+    // A file too large or too deep to read has no title or kind to show.
+    const parsed = parseYamlWithinLimits(file.text);
+    value = parsed.ok ? parsed.document.toJS({ maxAliasCount: MAX_ALIAS_COUNT }) : undefined;
   } catch {
     value = undefined;
   }

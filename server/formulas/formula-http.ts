@@ -1,10 +1,13 @@
 import type { Request, RequestParamHandler, Response } from 'express';
-import { MAX_FORMULA_BYTES } from '../../shared/index.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
 import { isFormulaId } from './formula-files.ts';
 
-/** Formula YAML in a request body (schema for validateBody): at most what the reader accepts. */
-export const YAML_TEXT = { type: 'string', minLength: 1, maxLength: MAX_FORMULA_BYTES } as const;
+/**
+ * Formula YAML in a request body (schema for validateBody). Its size is not limited here: every
+ * route refuses a text larger than a formula may be with 413 too-large (refuseOverLimit), in
+ * bytes, as the command line does; the JSON body limit bounds what is read at all.
+ */
+export const YAML_TEXT = { type: 'string', minLength: 1 } as const;
 
 /** A revision: the sha-256 of a formula text, in lower-case hex. */
 export const REVISION = /^[0-9a-f]{64}$/;

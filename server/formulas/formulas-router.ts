@@ -1,10 +1,5 @@
 import { Router } from 'express';
-import {
-  MAX_FORMULA_BYTES,
-  readFormula,
-  type RawBatchOptions,
-  type UnitSystem,
-} from '../../shared/index.ts';
+import { readFormula, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { serverToday } from '../server-today.ts';
 import { requireRole } from '../auth/authenticate.ts';
@@ -24,6 +19,7 @@ import {
   revisionOf,
   type FormulaFile,
 } from './formula-files.ts';
+import { refuseOverLimit } from './formula-checks.ts';
 import { FormulaHistory, type FormulaRevision } from './formula-history.ts';
 import {
   REVISION,
@@ -39,13 +35,14 @@ import { diffHunks, diffLines } from './line-diff.ts';
 
 const KINDS = ['cure', 'dough', 'blend', 'mix', 'assembly'];
 
-// Validation reads any text, empty or too large included, so that it answers with the same
-// problem the command line gives for that file ("the file is empty", "larger than 256 KB").
+// Validation reads any text, empty included, so that it answers with the same problem the
+// command line gives for that file ("the file is empty"); a text larger or deeper than a formula
+// can be is refused unread (413, 422), with that same problem in the details.
 const VALIDATE_BODY = {
   type: 'object',
   additionalProperties: false,
   required: ['yaml'],
-  properties: { yaml: { type: 'string', maxLength: 2 * MAX_FORMULA_BYTES } },
+  properties: { yaml: { type: 'string' } },
 } as const;
 
 const PREVIEW_BODY = {
@@ -143,6 +140,7 @@ export function formulasRouter(context: AppContext): Router {
   router.post('/validate', anyone, validateBody(VALIDATE_BODY), (req, res) => {
     const { yaml } = req.body as { yaml: string };
     const reading = readFormula(yaml, 'formula.yaml');
+    refuseOverLimit(reading);
     res.json({
       usable: reading.formula !== undefined,
       id: reading.formula?.id ?? null,

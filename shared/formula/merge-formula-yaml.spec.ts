@@ -79,6 +79,21 @@ describe('mergeFormulaIntoYaml', () => {
     assert.deepEqual(parse(mergeFormulaIntoYaml('formula: [\n', value)), value);
   });
 
+  it('should write afresh a file nested deeper than a formula may be, without parsing it', () => {
+    const value = json(SOURCE);
+    const deep = `notes: ${'['.repeat(100_000)}${']'.repeat(100_000)}\n`;
+    assert.deepEqual(parse(mergeFormulaIntoYaml(deep, value)), value);
+  });
+
+  it('should refuse a formula with more values than any formula file may hold', () => {
+    // 5,001 steps and the formula itself: past the 5,000 values a file may hold.
+    assert.throws(
+      () => mergeFormulaIntoYaml(SOURCE, { ...json(SOURCE), steps: Array(5001).fill('stir') }),
+      (error: unknown) =>
+        error instanceof RangeError && /more than 5000 values/.test(error.message),
+    );
+  });
+
   it('should refuse a formula nested deeper than any formula is', () => {
     let deep: unknown = 1;
     for (let i = 0; i < 40; i++) deep = [deep];

@@ -3,12 +3,13 @@ import {
   isMap,
   isScalar,
   isSeq,
-  parseDocument,
   visit,
   type ToStringOptions,
   type YAMLMap,
   type YAMLSeq,
 } from 'yaml';
+import { parseYamlWithinLimits } from './parse-yaml.ts';
+import { MAX_YAML_NODES } from './yaml-limits.ts';
 
 /** Deepest nesting a formula sent as JSON may have; real formulas go four levels deep. */
 const MAX_DEPTH = 16;
@@ -32,13 +33,15 @@ function keyOf(key: unknown): string {
  * quoting and number formats of the values that did not change. Maps keep their keys in place
  * (new keys go at the end, dropped keys go), lists are updated item by item and then grown or
  * cut, and a scalar is only touched when its value changed, so its comments stay with it.
- * A file that is not valid YAML cannot be updated in place and is written fresh.
- * @throws RangeError when the formula nests deeper than any formula does
+ * A file that is not valid YAML, or larger or deeper than a formula can be, cannot be updated
+ * in place and is written fresh.
+ * @throws RangeError when the formula nests deeper, or holds more values, than any formula does
  */
 export function mergeFormulaIntoYaml(text: string, formula: Record<string, unknown>): string {
-  checkDepth(formula, 0);
-  const doc = parseDocument(text, { uniqueKeys: true });
-  if (doc.errors.length > 0 || !isMap(doc.contents)) {
+  checkShape(formula);
+  const parsed = parseYamlWithinLimits(text, { uniqueKeys: true });
+  const doc = parsed.ok ? parsed.document : undefined;
+  if (!doc || doc.errors.length > 0 || !isMap(doc.contents)) {
     return new Document(formula).toString(TO_STRING);
   }
   // The top is a map and the formula an object, so the map is updated in place.
@@ -47,10 +50,19 @@ export function mergeFormulaIntoYaml(text: string, formula: Record<string, unkno
   return doc.toString(TO_STRING);
 }
 
-function checkDepth(value: unknown, depth: number): void {
-  if (depth > MAX_DEPTH) throw new RangeError(`the formula nests deeper than ${MAX_DEPTH} levels`);
-  if (Array.isArray(value)) for (const item of value) checkDepth(item, depth + 1);
-  else if (isRecord(value)) for (const item of Object.values(value)) checkDepth(item, depth + 1);
+/** Refuses a formula no file could hold before any YAML is built from it. */
+function checkShape(formula: unknown): void {
+  let values = 0;
+  const walk = (value: unknown, depth: number): void => {
+    if (depth > MAX_DEPTH)
+      throw new RangeError(`the formula nests deeper than ${MAX_DEPTH} levels`);
+    // Its file would be refused for as many keys and values (yaml-limits.ts).
+    if (++values > MAX_YAML_NODES)
+      throw new RangeError(`the formula holds more than ${MAX_YAML_NODES} values`);
+    if (Array.isArray(value)) for (const item of value) walk(item, depth + 1);
+    else if (isRecord(value)) for (const item of Object.values(value)) walk(item, depth + 1);
+  };
+  walk(formula, 0);
 }
 
 /** The node for `value`: `node` itself, updated in place, whenever its shape allows. */

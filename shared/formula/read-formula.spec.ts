@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { formatProblem, readFormula } from './read-formula.ts';
+import { formatProblem, placeProblems, readFormula } from './read-formula.ts';
 
 const GOOD = `formula: 1
 id: test-belly
@@ -143,5 +143,26 @@ describe('readFormula', () => {
 
   it('should refuse a file larger than a formula can reasonably be', () => {
     assert.match(only(`${GOOD}notes: "${'x'.repeat(300_000)}"\n`)[0].message, /larger than/);
+  });
+
+  it('should refuse a file nested beyond any formula, at the line and column of the level too many', () => {
+    const problems = only(`${GOOD}notes: ${'['.repeat(127_000)}${']'.repeat(127_000)}`);
+    // Line 10 is "notes: [[[…": the keys are level 1, so the 32nd "[" (column 8 + 31) opens level 33.
+    assert.deepEqual(
+      problems.map((p) => [p.line, p.column]),
+      [[10, 39]],
+    );
+    assert.match(problems[0].message, /more than 32 levels deep/);
+  });
+
+  it('should place problems in a file nested beyond any formula on the whole file, unparsed', () => {
+    const deep = `${GOOD}notes: ${'['.repeat(127_000)}`;
+    const placed = placeProblems(deep, 'deep.yaml', [
+      { path: ['ingredients', 0], message: 'a problem', severity: 'error' },
+    ]);
+    assert.deepEqual(
+      placed.map((p) => [p.file, p.line, p.column, p.message]),
+      [['deep.yaml', 0, 0, 'a problem']],
+    );
   });
 });

@@ -1,4 +1,4 @@
-import { LineCounter, parseDocument, type YAMLError } from 'yaml';
+import { LineCounter, type YAMLError } from 'yaml';
 import { schemaErrors } from '../validation/formula-validator.ts';
 import { schemaProblems } from '../validation/schema-messages.ts';
 import { checkFormulaContent } from './check-formula.ts';
@@ -6,18 +6,17 @@ import { explicitTag } from './explicit-tag.ts';
 import type { ContentProblem, FormulaProblem } from './formula-problem.ts';
 import type { Formula } from './formula-types.ts';
 import { locate } from './locate.ts';
+import { parseYamlWithinLimits } from './parse-yaml.ts';
+import { MAX_ALIAS_COUNT, limitFormulaProblem, type YamlLimit } from './yaml-limits.ts';
 import { yamlErrorMessage } from './yaml-messages.ts';
-
-/** Largest formula file we read; real formulas are a few kilobytes. */
-export const MAX_FORMULA_BYTES = 256 * 1024;
-/** Most aliases a formula may expand; guards against "billion laughs" files. */
-const MAX_ALIAS_COUNT = 50;
 
 /** A formula read from text: the formula when it can be used, and every problem found. */
 export interface FormulaReading {
   /** Present when there are no errors (warnings allowed). */
   readonly formula?: Formula;
   readonly problems: readonly FormulaProblem[];
+  /** The limit the text passes when it was refused unread (its one problem says where). */
+  readonly limit?: YamlLimit;
 }
 
 /**
@@ -30,10 +29,12 @@ export function readFormula(text: string, file: string): FormulaReading {
   const whole = (message: string): FormulaReading => ({
     problems: [{ file, line: 0, column: 0, path: [], message, severity: 'error' }],
   });
-  if (text.length > MAX_FORMULA_BYTES) {
-    return whole(
-      `the file is larger than ${MAX_FORMULA_BYTES / 1024} KB; a formula is a few kilobytes`,
-    );
+  const lineCounter = new LineCounter();
+  // Size first, then nesting and node count as the text is read: a text built to exhaust the
+  // parser is stopped where it passes a limit.
+  const parsed = parseYamlWithinLimits(text, { lineCounter, uniqueKeys: true });
+  if (!parsed.ok) {
+    return { problems: [limitFormulaProblem(parsed.problem, file)], limit: parsed.problem.limit };
   }
   if (text.trim() === '') return whole('the file is empty');
 
@@ -52,8 +53,7 @@ export function readFormula(text: string, file: string): FormulaReading {
     };
   }
 
-  const lineCounter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: true });
+  const doc = parsed.document;
   if (doc.errors.length > 0) {
     const problems = doc.errors.map((error): FormulaProblem => {
       const { line, col } = lineCounter.linePos(unclosedQuoteStart(text, error) ?? error.pos[0]);
@@ -182,7 +182,10 @@ export function placeProblems(
 ): FormulaProblem[] {
   if (problems.length === 0) return [];
   const lineCounter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter, prettyErrors: false });
+  const parsed = parseYamlWithinLimits(text, { lineCounter });
+  // A text the reader refused has no places to point at: its problems stand for the whole file.
+  if (!parsed.ok) return problems.map((problem) => ({ ...problem, file, line: 0, column: 0 }));
+  const doc = parsed.document;
   return sortByPosition(
     problems.map((problem) => ({ ...problem, file, ...locate(doc, lineCounter, problem.path) })),
   );

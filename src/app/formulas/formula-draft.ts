@@ -22,7 +22,7 @@ import { createFormulaForm } from './formula-form-model';
 import { fillFormulaForm } from './fill-formula-form';
 import { formulaFromForm } from './formula-from-form';
 import { FormulaStore, messageOf } from './formula-store';
-import { parseFormulaYaml, writeFormulaYaml } from './formula-yaml';
+import { formulaLimitProblem, parseFormulaYaml, writeFormulaYaml } from './formula-yaml';
 import { problemsOf } from './formula-problems/problems-of';
 
 /** Where the last edit was made: it decides what a save sends. */
@@ -233,6 +233,11 @@ export class FormulaDraft {
         problems: [],
         message: 'The YAML is empty.',
       });
+    }
+    // Refused here as the server would refuse it, without sending or parsing the text.
+    const refused = formulaLimitProblem(text);
+    if (refused) {
+      return of<DraftValidation>({ status: 'done', text, usable: false, problems: [refused] });
     }
     return this.store.validate(text).pipe(
       map((result): DraftValidation => ({ status: 'done', text, ...result })),
