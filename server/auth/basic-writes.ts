@@ -1,8 +1,7 @@
 import type { RequestHandler } from 'express';
 import { AppError } from '../http/app-error.ts';
+import { changesState } from '../http/changes-state.ts';
 import './request-person.ts';
-
-const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
 /** The header a script names itself with when its change has no JSON body (an upload, a sign-off). */
 export const CLIENT_HEADER = 'x-larder-client';
@@ -15,7 +14,7 @@ export const CLIENT_HEADER = 'x-larder-client';
  * with a session and its CSRF token instead.
  */
 export const requireScriptWrite: RequestHandler = (req, _res, next) => {
-  if (SAFE_METHODS.has(req.method) || req.authVia !== 'basic') return next();
+  if (!changesState(req) || req.authVia !== 'basic') return next();
   // The header itself, not req.is(): a body-less request (a sign-off) has no body to type.
   const json = /^application\/json\s*(;|$)/i.test(req.get('content-type') ?? '');
   if (json || req.get(CLIENT_HEADER)) return next();

@@ -1,7 +1,6 @@
 import type { Request, RequestHandler } from 'express';
 import { AppError } from './app-error.ts';
-
-const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+import { changesState } from './changes-state.ts';
 
 /**
  * Sec-Fetch-Site values a change may come with: the console's own pages (same-origin), or a
@@ -26,7 +25,7 @@ function requestOrigin(req: Request): string {
 export function refuseCrossSiteWrites(publicUrl: string | null): RequestHandler {
   const publicOrigin = publicUrl ? new URL(publicUrl).origin : null;
   return (req, _res, next) => {
-    if (SAFE_METHODS.has(req.method)) return next();
+    if (!changesState(req)) return next();
     const fetchSite = req.get('sec-fetch-site');
     // A browser that sends Sec-Fetch-Site is believed over Origin: behind a development proxy
     // the Host header names the server, not the page.
