@@ -9,7 +9,7 @@ export const DEMO_PEOPLE: readonly NewPerson[] = [
   {
     username: 'rosa',
     email: 'rosa@quillmoor.invalid',
-    displayName: 'Rosa Emberly (head cook)',
+    displayName: 'Rosa Quennick (head cook)',
     role: 'admin',
     password: 'quillmoor-admin',
     demo: true,
@@ -17,7 +17,7 @@ export const DEMO_PEOPLE: readonly NewPerson[] = [
   {
     username: 'tobin',
     email: 'tobin@quillmoor.invalid',
-    displayName: 'Tobin Ashgrove (cook)',
+    displayName: 'Tobin Marrowfeld (cook)',
     role: 'cook',
     password: 'quillmoor-cook',
     demo: true,
@@ -25,7 +25,7 @@ export const DEMO_PEOPLE: readonly NewPerson[] = [
   {
     username: 'imke',
     email: 'imke@quillmoor.invalid',
-    displayName: 'Imke Saltaire (food safety)',
+    displayName: 'Imke Tressaly (food safety)',
     role: 'reviewer',
     password: 'quillmoor-review',
     demo: true,

@@ -164,7 +164,7 @@ describe('bad uploads, unknown routes and bad query parameters', () => {
   });
 
   it('should refuse a person id that is not written as a whole number with 400', async () => {
-    const body = { displayName: 'Rosa Emberly (head cook)' };
+    const body = { displayName: 'Rosa Quennick (head cook)' };
     await refuse(
       ['1e0', '0x1', '1.0', '%201'].map((id) => ({
         method: 'PATCH',

@@ -120,7 +120,7 @@ describe('exporting batches as CSV', () => {
     assert.equal(belly.inputs, 'start=2023-05-05; meat=4.26kg; thickness=4cm');
     assert.equal(belly.checks_passed, 'yes');
     assert.equal(belly.status, 'in-progress');
-    assert.equal(belly.operator, 'Tobin Ashgrove (cook)');
+    assert.equal(belly.operator, 'Tobin Marrowfeld (cook)');
     assert.equal(belly.formula_title, 'Quillmoor belly, dry equilibrium cure');
     assert.equal(byLot.get('230505-BR-01')?.nitrite_ppm, '');
     // No cell a spreadsheet would take for a formula.

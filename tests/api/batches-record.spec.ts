@@ -55,7 +55,7 @@ describe('recording a batch', () => {
     assert.equal(batch.kind, 'cure');
     assert.equal(batch.units, 'metric');
     assert.deepEqual(batch.inputs, BELLY.batch);
-    assert.equal(batch.operator.displayName, 'Tobin Ashgrove (cook)');
+    assert.equal(batch.operator.displayName, 'Tobin Marrowfeld (cook)');
     assert.equal(batch.signedOff, null);
     const yaml = readFileSync(path.join(server.formulasDir, 'quillmoor-belly.yaml'), 'utf8');
     assert.deepEqual(batch.formula, {

@@ -20,10 +20,10 @@ describe('moving a batch along', () => {
     assert.deepEqual(
       batch.events.map((e) => [e.type, e.from, e.to, e.by.displayName]),
       [
-        ['recorded', null, 'planned', 'Tobin Ashgrove (cook)'],
-        ['status', 'planned', 'in-progress', 'Tobin Ashgrove (cook)'],
-        ['status', 'in-progress', 'curing', 'Tobin Ashgrove (cook)'],
-        ['status', 'curing', 'done', 'Tobin Ashgrove (cook)'],
+        ['recorded', null, 'planned', 'Tobin Marrowfeld (cook)'],
+        ['status', 'planned', 'in-progress', 'Tobin Marrowfeld (cook)'],
+        ['status', 'in-progress', 'curing', 'Tobin Marrowfeld (cook)'],
+        ['status', 'curing', 'done', 'Tobin Marrowfeld (cook)'],
       ],
     );
     const audit = await server.as('rosa').get('/api/audit?action=batch-status');
@@ -126,7 +126,7 @@ describe('signing a batch off', () => {
       note: 'Cure weights checked against the scale print-out.',
     });
     assert.equal(signed.status, 200, signed.text);
-    assert.equal(signed.json.batch.signedOff.by.displayName, 'Imke Saltaire (food safety)');
+    assert.equal(signed.json.batch.signedOff.by.displayName, 'Imke Tressaly (food safety)');
     const batch = await readBatch(server, lot);
     assert.deepEqual(
       { ...batch.events.at(-1), at: undefined },

@@ -53,7 +53,7 @@ describe('formula history', () => {
         ['disk', 'found on disk', sha256(first.before)],
       ],
     );
-    assert.equal(list.json.revisions[0].author.displayName, 'Rosa Emberly (head cook)');
+    assert.equal(list.json.revisions[0].author.displayName, 'Rosa Quennick (head cook)');
     assert.equal(list.json.currentRevision, sha256(second.after));
 
     const old = await server
@@ -173,7 +173,7 @@ describe('formulas in a git work tree', () => {
     assert.deepEqual(response.json.warnings, []);
     assert.deepEqual(git('log', '-1', '--format=%H%n%an <%ae>%n%cn <%ce>%n%s').trim().split('\n'), [
       response.json.commit,
-      'Rosa Emberly (head cook) <rosa@larderbook.invalid>',
+      'Rosa Quennick (head cook) <rosa@larderbook.invalid>',
       'Larderbook <larderbook@larderbook.invalid>',
       'More chili for the summer',
     ]);

@@ -8,7 +8,7 @@ import { startTestServer, type TestServer } from '../helpers/test-server.ts';
 
 const WREN = {
   username: 'wren',
-  displayName: 'Wren Halloway',
+  displayName: 'Wren Ollivane',
   email: 'wren@quillmoor.invalid',
   role: 'cook',
 };
@@ -82,7 +82,7 @@ describe('invitations', () => {
     const [row] = outbox;
     assert.equal(row.kind, 'invitation');
     assert.equal(row.to, 'wren@quillmoor.invalid');
-    assert.equal(row.toName, 'Wren Halloway');
+    assert.equal(row.toName, 'Wren Ollivane');
     assert.equal(row.related, 'wren');
     assert.equal(row.subject, 'Your Larderbook sign-in at Quillmoor Smokehouse');
     assert.equal(row.transport, 'local');
@@ -93,7 +93,7 @@ describe('invitations', () => {
     const link = added.json.invitation.link as string;
     assert.ok(link.startsWith(`${server.url}/set-password?token=`), link);
     const message = await readMessage(server, row.id);
-    assert.match(message.text, /Hello Wren Halloway,/);
+    assert.match(message.text, /Hello Wren Ollivane,/);
     assert.match(message.text, /Your username is wren\./);
     assert.match(message.text, /Larderbook at Quillmoor Smokehouse/);
     assert.match(message.text, /My reminders/);
@@ -141,7 +141,7 @@ describe('invitations', () => {
     const look = await anonymous(server).get(`/api/invitations/${token}`);
     assert.equal(look.status, 200, look.text);
     assert.deepEqual(Object.keys(look.json).sort(), ['displayName', 'expiresAt']);
-    assert.equal(look.json.displayName, 'Wren Halloway');
+    assert.equal(look.json.displayName, 'Wren Ollivane');
 
     const short = await anonymous(server).post(`/api/invitations/${token}`, { password: 'short' });
     assert.equal(short.status, 400);

@@ -50,7 +50,7 @@ async function captureServer(
 
 const WREN = {
   username: 'wren',
-  displayName: 'Wren Halloway',
+  displayName: 'Wren Ollivane',
   email: 'wren@quillmoor.invalid',
   role: 'cook',
 };

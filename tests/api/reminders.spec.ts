@@ -182,7 +182,7 @@ describe('reminders', () => {
       `Overdue: lot ${lot} (${title}) is still curing, ready Fri 8 Mar 2024`,
     ]);
     const flip = await readMessage(server, rows[rows.length - 1].id);
-    assert.match(flip.text, /Hello Tobin Ashgrove \(cook\),/);
+    assert.match(flip.text, /Hello Tobin Marrowfeld \(cook\),/);
     assert.match(flip.text, /due to be turned \(or overhauled\) on Sat 2 Mar 2024/);
     assert.match(flip.text, /every 2 days/);
     assert.match(flip.text, /started on Thu 29 Feb 2024 and is ready on Fri 8 Mar 2024/);

@@ -80,7 +80,7 @@ describe('the batch log in the console', () => {
     await page.getByTestId('sign-off-confirm').click();
     await page.getByTestId('signed-off').getByText(/Imke/).waitFor();
     const batch = (await session.server.as('imke').get(`/api/batches/${lot}`)).json.batch;
-    assert.equal(batch.signedOff.by.displayName, 'Imke Saltaire (food safety)');
+    assert.equal(batch.signedOff.by.displayName, 'Imke Tressaly (food safety)');
     assert.equal(
       await page.getByTestId('sign-off-button').count(),
       0,

@@ -6,7 +6,7 @@ import { collectConsoleErrors, signIn, startConsole } from './browser.ts';
 
 const WREN = {
   username: 'wren',
-  displayName: 'Wren Halloway',
+  displayName: 'Wren Ollivane',
   email: 'wren@quillmoor.invalid',
   password: 'hickory-bench-42',
 };
@@ -69,7 +69,7 @@ describe('mail in the console', () => {
     const rowText = await row.innerText();
     assert.match(rowText, /Your Larderbook sign-in at Quillmoor Smokehouse/);
     assert.match(rowText, /Invitation/);
-    assert.match(rowText, /Wren Halloway/);
+    assert.match(rowText, /Wren Ollivane/);
     assert.equal(await row.getByTestId('outbox-status').innerText(), 'Sent');
     await session.screenshot(admin, 'outbox');
 
@@ -79,7 +79,7 @@ describe('mail in the console', () => {
     const body = admin.getByTestId('outbox-message-text');
     await body.waitFor();
     const text = await body.innerText();
-    assert.match(text, /Hello Wren Halloway,/);
+    assert.match(text, /Hello Wren Ollivane,/);
     assert.equal(await body.evaluate((element) => element.children.length), 0);
     assert.ok(!text.includes(token), 'the outbox keeps no token');
     assert.match(text, /token=\(shown once to the admin who sent the invitation\)/);
@@ -96,7 +96,7 @@ describe('mail in the console', () => {
     await wren.goto(link, { waitUntil: 'networkidle' });
     const greeting = wren.getByTestId('set-password-for');
     await greeting.waitFor();
-    assert.match(await greeting.innerText(), /For Wren Halloway\. This link works until/);
+    assert.match(await greeting.innerText(), /For Wren Ollivane\. This link works until/);
     await wren.getByTestId('new-password').fill(WREN.password);
     await wren.getByTestId('repeat-password').fill(`${WREN.password}x`);
     await wren.getByTestId('set-password-submit').click();
@@ -111,7 +111,7 @@ describe('mail in the console', () => {
     await wren.getByRole('button', { name: 'Sign in' }).click();
     await wren.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
     const who = await wren.getByTestId('signed-in-as').innerText();
-    assert.match(who, /Wren Halloway/);
+    assert.match(who, /Wren Ollivane/);
     assert.match(who, /Cook/);
 
     // The link works once: opened again, it says so and what to do.

@@ -79,8 +79,8 @@ describe('outbox message words', () => {
   describe('recipientText', () => {
     it('should write the name before the address, as mail programs do', () => {
       assert.equal(
-        recipientText({ to: 'wren@quillmoor.invalid', toName: 'Wren Halloway' }),
-        'Wren Halloway <wren@quillmoor.invalid>',
+        recipientText({ to: 'wren@quillmoor.invalid', toName: 'Wren Ollivane' }),
+        'Wren Ollivane <wren@quillmoor.invalid>',
       );
     });
 

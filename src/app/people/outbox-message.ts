@@ -94,7 +94,7 @@ export function deliveryStatus(
 }
 
 /**
- * Who a message went to, as a mail program writes it: "Wren Halloway <wren@example.com>".
+ * Who a message went to, as a mail program writes it: "Wren Ollivane <wren@example.com>".
  * @param message The address and name of the recipient.
  */
 export function recipientText(message: Pick<OutboxSummary, 'to' | 'toName'>): string {
