@@ -3,6 +3,7 @@ export const CURE_STARTERS = {
   dry: `kind: cure
 method: dry                # rubbed on; every pct below is % of the green (raw, trimmed) weight
 product: bacon             # bacon, whole-muscle or comminuted: selects the nitrite limit
+species: pork              # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 ingredients:
   - { name: fine sea salt, pct: 2.25, salt: 100 }
   # nitrite and salt say what the curing salt holds, % by weight: read them off its label.
@@ -21,6 +22,7 @@ steps:
   brine: `kind: cure
 method: brine              # held in brine to equilibrium; every pct is % of meat + water
 product: whole-muscle      # bacon, whole-muscle or comminuted: selects the nitrite limit
+species: pork              # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 brine:
   water_pct: 60            # water as % of green weight
 ingredients:
@@ -37,6 +39,7 @@ steps:
   pump: `kind: cure
 method: pump               # injected; every pct is the level wanted in the meat, % of green weight
 product: whole-muscle      # bacon, whole-muscle or comminuted: selects the nitrite limit
+species: pork              # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 brine:
   pump_pct: 10             # brine injected, % of green weight
   cover_pct: 30            # cover brine of the same make-up, % of green weight (0 for none)

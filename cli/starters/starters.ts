@@ -21,7 +21,7 @@ steps:
 `;
 
 const BLEND = `kind: blend
-species: beef              # for the safe cooking temperature
+species: beef              # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 standard: ground-beef      # optional: check the legal fat ceiling (30 %)
 components:                # exactly two; give fat % or chemical lean (lean: 85)
   - { key: lean, name: chuck trim 85/15, fat: 15 }

@@ -16,6 +16,15 @@ export type FormulaKind = BatchKind | 'assembly';
 export type Allergen =
   'milk' | 'egg' | 'fish' | 'shellfish' | 'tree-nuts' | 'peanuts' | 'wheat' | 'soy' | 'sesame';
 
+/** The meats the FSIS cooking chart gives a temperature for. */
+export type Species = 'beef' | 'pork' | 'lamb' | 'veal' | 'poultry';
+
+/**
+ * Which meat a formula is, for its safe cooking temperature: one species, a list of the species
+ * in a mixture, or `mixed`, a mixture whose meats are not named (taken as possibly poultry).
+ */
+export type FormulaSpecies = Species | 'mixed' | Species[];
+
 /** Keys every formula has. */
 export interface FormulaBase {
   formula: 1;
@@ -71,6 +80,8 @@ export interface CureFormula extends FormulaBase {
   kind: 'cure';
   method: CureMethod;
   product: CureProduct;
+  /** Asked for by the checks: without it the sheet gives the highest cooking temperature. */
+  species?: FormulaSpecies;
   ingredients: CureIngredient[];
   brine?: { water_pct?: number; pump_pct?: number; cover_pct?: number; extra_pct?: number };
   hold?: HoldRule;
@@ -145,7 +156,8 @@ export interface BlendComponent {
 
 export interface BlendFormula extends FormulaBase {
   kind: 'blend';
-  species?: 'beef' | 'pork' | 'lamb' | 'veal' | 'poultry' | 'mixed';
+  /** Asked for by the checks: without it the sheet gives the highest cooking temperature. */
+  species?: FormulaSpecies;
   standard?: 'ground-beef' | 'fresh-pork-sausage';
   components: [BlendComponent, BlendComponent];
   target: { fat?: number; lean?: number };

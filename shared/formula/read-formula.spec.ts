@@ -21,7 +21,7 @@ function only(text: string) {
 
 describe('readFormula', () => {
   it('should accept a valid formula with no problems', () => {
-    const reading = readFormula(GOOD, 'test.yaml');
+    const reading = readFormula(`${GOOD}species: pork\n`, 'test.yaml');
     assert.equal(reading.problems.length, 0);
     assert.equal(reading.formula?.id, 'test-belly');
   });
@@ -116,7 +116,7 @@ describe('readFormula', () => {
 
   it('should locate content problems the schema cannot see', () => {
     const problems = only(
-      GOOD.replace('method: dry\nproduct: bacon', 'method: brine\nproduct: comminuted'),
+      `${GOOD.replace('method: dry\nproduct: bacon', 'method: brine\nproduct: comminuted')}species: pork\n`,
     );
     assert.deepEqual([problems[0].line, problems[0].column], [5, 1]);
     assert.match(problems[0].message, /use method "dry"/);

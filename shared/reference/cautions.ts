@@ -34,9 +34,9 @@ export const CAUTIONS = {
   curedMeatIsRaw: {
     id: 'cured-meat-is-raw',
     text:
-      'Cured meat is still raw. Cook it unless your validated process makes it ready to eat: ' +
-      'whole cuts to 63 °C (145 °F) with a 3-minute rest, ground products to 71 °C (160 °F).',
-    source: 'USDA FSIS Safe Minimum Internal Temperature Chart',
+      'Cured meat is still raw: cook it to the temperature for its meat, printed next, unless ' +
+      'your validated process makes it ready to eat.',
+    source: 'USDA FSIS Safe Minimum Internal Temperature Chart (ham, fresh or smoked, uncooked)',
   },
   brineStrengthSaltOnly: {
     id: 'brine-strength-salt-only',
@@ -52,6 +52,20 @@ export const CAUTIONS = {
       'and make fresh brine for each batch.',
     source: 'common practice, no source',
   },
+  // The cooking lines of the FSIS chart; cookingCaution() picks one for a formula's meat.
+  // Text read: the USDA FSIS Safe Minimum Internal Temperature Chart as reproduced at
+  // https://www.justapinch.com/recipes/food-safe-cooking-temperatures.html ("Official USDA
+  // Guidelines": beef, pork, veal and lamb steaks, chops, roasts 145 °F (62.8 °C) and rest at least
+  // 3 minutes; ground meats 160 °F (71.1 °C); ham, fresh or smoked (uncooked) 145 °F and 3 minutes;
+  // all poultry, whole bird, parts and ground, 165 °F (73.9 °C)) and at http://mrhalalmeat.ca/safe-cooking-temperatures/.
+  // °C is printed to the whole degree: 62.78 → 63, 71.11 → 71, 73.89 → 74.
+  wholeCutCooking: {
+    id: 'whole-cut-cooking',
+    text:
+      'Cook whole cuts of beef, pork, lamb and veal, cured ham and bacon among them, to ' +
+      '63 °C (145 °F) with a 3-minute rest before carving or eating.',
+    source: 'USDA FSIS Safe Minimum Internal Temperature Chart',
+  },
   groundMeatCooking: {
     id: 'ground-meat-cooking',
     text:
@@ -60,10 +74,24 @@ export const CAUTIONS = {
       'editions: check yours).',
     source: 'USDA FSIS Safe Minimum Internal Temperature Chart; FDA Food Code §3-401.11',
   },
-  groundPoultryCooking: {
-    id: 'ground-poultry-cooking',
-    text: 'Cook ground poultry to 74 °C (165 °F).',
+  poultryCooking: {
+    id: 'poultry-cooking',
+    text: 'Cook poultry, whole, in parts or ground, to 74 °C (165 °F).',
     source: 'USDA FSIS Safe Minimum Internal Temperature Chart',
+  },
+  unnamedMixtureCooking: {
+    id: 'unnamed-mixture-cooking',
+    text:
+      'This product mixes meats without naming them: cook it to 74 °C (165 °F), the temperature ' +
+      'for poultry and the highest for any meat.',
+    source: 'USDA FSIS Safe Minimum Internal Temperature Chart (all poultry 165 °F)',
+  },
+  unnamedMeatCooking: {
+    id: 'unnamed-meat-cooking',
+    text:
+      'The formula does not say which meat this is: cook it to 74 °C (165 °F), the temperature ' +
+      'for poultry and the highest for any meat.',
+    source: 'USDA FSIS Safe Minimum Internal Temperature Chart (all poultry 165 °F)',
   },
   keepCold: {
     id: 'keep-cold',

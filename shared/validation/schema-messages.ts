@@ -168,20 +168,44 @@ function describe(error: ErrorObject, root: unknown): ContentProblem | undefined
         severity: 'error',
       };
     }
+    case 'anyOf':
+      // Reached only when no branch had an error of the value's own shape (see schemaProblems).
+      return {
+        path,
+        message: `${what} should be one word or a list (lines starting with "- "), not ${quote(value)}`,
+        severity: 'error',
+      };
     default:
       return { path, message: error.message ?? 'is not valid', severity: 'error' };
   }
 }
 
 /**
+ * Whether an error comes from a branch of anyOf that does not fit the value's shape: our anyOf
+ * is always "one word, or a list of words", so a type error, or a word list offered for a list,
+ * only says the value took the other branch.
+ */
+function otherShapeOfAnyOf(error: ErrorObject, root: unknown): boolean {
+  if (!error.schemaPath.includes('/anyOf/')) return false;
+  if (error.keyword === 'type') return true;
+  const value = valueAt(root, pathOf(error.instancePath));
+  return error.keyword === 'enum' && value !== null && typeof value === 'object';
+}
+
+/**
  * Turns ajv's errors into plain-words problems, dropping the echoes that compound keywords
- * (if/then, the branches of oneOf) add on top of the real error.
+ * (if/then, the branches of oneOf, the branch of anyOf the value did not take) add on top of
+ * the real error.
  */
 export function schemaProblems(errors: readonly ErrorObject[], root: unknown): ContentProblem[] {
   const problems: ContentProblem[] = [];
   const seen = new Set<string>();
   for (const error of errors) {
     if (error.keyword === 'if' || error.schemaPath.includes('/oneOf/')) continue;
+    if (otherShapeOfAnyOf(error, root)) continue;
+    // anyOf's own error comes after its branches': say it only when no branch said more.
+    if (error.keyword === 'anyOf' && problems.some((p) => within(p.path, error.instancePath)))
+      continue;
     const problem = describe(error, root);
     if (!problem) continue;
     const key = `${problem.path.join('/')}|${problem.message}`;
@@ -190,4 +214,9 @@ export function schemaProblems(errors: readonly ErrorObject[], root: unknown): C
     problems.push(problem);
   }
   return problems;
+}
+
+function within(path: FormulaPath, instancePath: string): boolean {
+  const parent = pathOf(instancePath);
+  return parent.every((part, i) => path[i] === part);
 }

@@ -24,7 +24,8 @@ export function writeText(dir: string, name: string, text: string): string {
 
 /**
  * A small valid dry-cured bacon formula. Line numbers matter to the tests that break it:
- * line 7 `ingredients:`, line 8 the salt, line 9 the curing salt, line 10 the sugar.
+ * line 7 `ingredients:`, line 8 the salt, line 9 the curing salt, line 10 the sugar; the species
+ * comes last so that adding it moved none of them.
  * Curing salt 0.25 % × 6.25 % nitrite × 1 000 000 = 156.25 ppm ingoing, under the 200 ppm limit
  * for dry-cured bacon. source: 9 CFR 424.22(b); formula of USDA FSIS Directive 7620.3, ch. 3
  */
@@ -41,6 +42,7 @@ ingredients:
 hold:
   days_per_cm: 2
   min_days: 7
+species: pork
 `;
 
 /** {@link DRY_BACON} with one exact piece of text replaced; fails loudly if the piece is absent. */

@@ -98,19 +98,16 @@ describe('calculateBlend, cautions and echoes', () => {
     const ids = calculateBlend(we25({ species: 'poultry' }), { total: dec('1000') }).cautions.map(
       (c) => c.id,
     );
-    assert.deepEqual(ids, ['ground-poultry-cooking', 'keep-cold', 'local-codes']);
+    // source: USDA FSIS Safe Minimum Internal Temperature Chart, all poultry 165 °F
+    assert.deepEqual(ids, ['poultry-cooking', 'keep-cold', 'local-codes']);
   });
 
-  it('should give both temperatures for a mixed blend, which may hold poultry', () => {
+  it('should give one temperature, poultry’s, for a mixed blend whose meats are not named', () => {
     const ids = calculateBlend(we25({ species: 'mixed' }), { total: dec('1000') }).cautions.map(
       (c) => c.id,
     );
-    assert.deepEqual(ids, [
-      'ground-meat-cooking',
-      'ground-poultry-cooking',
-      'keep-cold',
-      'local-codes',
-    ]);
+    // source: USDA FSIS Safe Minimum Internal Temperature Chart, 165 °F (poultry) is its highest
+    assert.deepEqual(ids, ['unnamed-mixture-cooking', 'keep-cold', 'local-codes']);
   });
 
   it('should declare the seasoning allergens before the local-codes caution', () => {

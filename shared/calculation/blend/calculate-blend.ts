@@ -3,6 +3,7 @@ import type { BlendFormula, Yields } from '../../formula/formula-types.ts';
 import { CAUTIONS, allergenCaution } from '../../reference/cautions.ts';
 import { parseMass } from '../../units/mass.ts';
 import { collectAllergens } from '../allergens.ts';
+import { cookingCaution } from '../cooking-caution.ts';
 import { BatchError } from '../batch-error.ts';
 import type { BatchInput } from '../batch-input.ts';
 import type {
@@ -61,13 +62,7 @@ function blendYields(meat: Decimal, batch: Decimal, yields: Yields): YieldStage[
 }
 
 function blendCautions(formula: BlendFormula, allergens: readonly string[]): Caution[] {
-  const cautions: Caution[] = [];
-  // A mixed blend may hold poultry, which needs the higher temperature: print both.
-  if (formula.species !== 'poultry') cautions.push(CAUTIONS.groundMeatCooking);
-  if (formula.species === 'poultry' || formula.species === 'mixed') {
-    cautions.push(CAUTIONS.groundPoultryCooking);
-  }
-  cautions.push(CAUTIONS.keepCold);
+  const cautions: Caution[] = [cookingCaution(formula.species, 'ground'), CAUTIONS.keepCold];
   const allergen = allergenCaution(allergens);
   if (allergen) cautions.push(allergen);
   // The formula's own cautions are added by calculate(), before the local-codes reminder.

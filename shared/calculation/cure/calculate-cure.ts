@@ -3,6 +3,7 @@ import type { CureFormula } from '../../formula/formula-types.ts';
 import { CAUTIONS, allergenCaution } from '../../reference/cautions.ts';
 import { CONCENTRATED_NITRITE_PCT, nitriteRuleFor } from '../../reference/nitrite-limits.ts';
 import { collectAllergens } from '../allergens.ts';
+import { cookingCaution } from '../cooking-caution.ts';
 import { BatchError } from '../batch-error.ts';
 import type { BatchInput } from '../batch-input.ts';
 import type { CalcResult, Caution, Figure, Schedule } from '../calc-result.ts';
@@ -179,6 +180,7 @@ function cureCautions(formula: CureFormula, allergens: CalcResult['allergens']):
     ...(formula.method === 'dry' ? [] : [CAUTIONS.brineStrengthSaltOnly]),
     ...(formula.method === 'pump' ? [CAUTIONS.injectedMeat] : []),
     CAUTIONS.curedMeatIsRaw,
+    cookingCaution(formula.species, formula.product === 'comminuted' ? 'ground' : 'whole'),
     ...(allergen ? [allergen] : []),
     CAUTIONS.localCodes,
   ];

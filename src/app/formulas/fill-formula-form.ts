@@ -18,6 +18,7 @@ import {
   prefermentRow,
 } from './formula-form-model';
 import type { HoldRateKey } from './formula-vocabulary';
+import { speciesChoices } from './species-choices';
 
 // Keys of an ingredient the table edits; anything else rides along in `rest`.
 const ROW_KEYS = [
@@ -97,6 +98,7 @@ export function fillFormulaForm(
     cure: {
       method: c.method ?? 'dry',
       product: c.product ?? 'bacon',
+      species: speciesChoices(c.species),
       water_pct: num(c.brine?.water_pct),
       pump_pct: num(c.brine?.pump_pct),
       cover_pct: num(c.brine?.cover_pct),
@@ -121,7 +123,7 @@ export function fillFormulaForm(
       ddtFriction: text(d.ddt?.friction),
     },
     blend: {
-      species: b.species ?? null,
+      species: speciesChoices(b.species),
       standard: b.standard ?? null,
       components: Array.from({ length: Math.max(2, components.length) }, (_, i) => {
         const part: Partial<BlendComponent> = components[i] ?? {};

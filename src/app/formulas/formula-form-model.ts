@@ -15,6 +15,7 @@ import type {
 } from '../../../shared/formula/formula-types.ts';
 import type { QuantityKey } from './assembly-quantity';
 import type { HoldRateKey } from './formula-vocabulary';
+import type { SpeciesWord } from './species-choices';
 
 /** fat or lean: how a blend component or target is stated. */
 export type FatMeasure = 'fat' | 'lean';
@@ -54,6 +55,7 @@ export type ComponentRow = FormGroup<{
 export type CureGroup = FormGroup<{
   method: FormControl<CureMethod>;
   product: FormControl<CureProduct>;
+  species: FormControl<SpeciesWord[]>;
   water_pct: Num;
   pump_pct: Num;
   cover_pct: Num;
@@ -79,7 +81,7 @@ export type DoughGroup = FormGroup<{
 
 /** Blend-only fields. */
 export type BlendGroup = FormGroup<{
-  species: FormControl<BlendFormula['species'] | null>;
+  species: FormControl<SpeciesWord[]>;
   standard: FormControl<BlendFormula['standard'] | null>;
   components: FormArray<ComponentRow>;
   targetMeasure: FormControl<FatMeasure>;
@@ -191,6 +193,7 @@ export function createFormulaForm(fb: NonNullableFormBuilder): FormulaForm {
     cure: fb.group({
       method: fb.control<CureMethod>('dry'),
       product: fb.control<CureProduct>('bacon'),
+      species: fb.control<SpeciesWord[]>([]),
       water_pct: optional(),
       pump_pct: optional(),
       cover_pct: optional(),
@@ -212,7 +215,7 @@ export function createFormulaForm(fb: NonNullableFormBuilder): FormulaForm {
       ddtFriction: fb.control(''),
     }),
     blend: fb.group({
-      species: fb.control<BlendFormula['species'] | null>(null),
+      species: fb.control<SpeciesWord[]>([]),
       standard: fb.control<BlendFormula['standard'] | null>(null),
       components: fb.array<ComponentRow>([]),
       targetMeasure: fb.control<FatMeasure>('fat'),

@@ -5,6 +5,7 @@ import type {
   Yields,
 } from '../../../shared/formula/formula-types.ts';
 import type { AssemblyPartRow, FormulaForm, IngredientRow } from './formula-form-model';
+import { speciesFromChoices } from './species-choices';
 
 type Loose = Record<string, unknown>;
 
@@ -43,6 +44,7 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
         ...common,
         method: cure.method,
         product: cure.product,
+        species: speciesFromChoices(cure.species),
         brine: brine && compact(brine),
         ingredients: rows.map((row) =>
           ingredientOf(row, ['nitrite', 'salt', 'accelerator']),
@@ -80,7 +82,7 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
       const seasoning = rows.map((row) => ingredientOf(row, []));
       formula = {
         ...common,
-        species: blend.species ?? undefined,
+        species: speciesFromChoices(blend.species),
         standard: blend.standard ?? undefined,
         components: blend.components.map((part) => ({
           key: part.key.trim(),

@@ -10,6 +10,7 @@ title: TITLE
 kind: cure
 method: dry # dry, brine or pump
 product: bacon # bacon, whole-muscle or comminuted: selects the nitrite limit
+species: pork # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 ingredients:
   - { name: fine salt, pct: 2.2, salt: 100 }
   # Read nitrite and salt off the curing salt's own label.
@@ -42,7 +43,7 @@ formula: 1
 id: ID
 title: TITLE
 kind: blend
-species: beef
+species: beef # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 standard: ground-beef
 components:
   - { key: lean, name: lean trim 90/10, fat: 10 }

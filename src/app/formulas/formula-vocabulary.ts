@@ -8,6 +8,7 @@ import type {
   HoldRule,
   YeastKind,
 } from '../../../shared/formula/formula-types.ts';
+import type { SpeciesWord } from './species-choices';
 
 /** A value a formula may take, with the words a cook reads for it. */
 export interface Choice<T extends string> {
@@ -104,14 +105,14 @@ export const ALLERGENS = choices<Allergen>({
   sesame: 'Sesame',
 });
 
-/** Species of a blend, for the cooking caution. */
-export const SPECIES = choices<NonNullable<BlendFormula['species']>>({
+/** Species of a cure or blend, for the cooking caution. */
+export const SPECIES = choices<SpeciesWord>({
   beef: 'Beef',
   pork: 'Pork',
   lamb: 'Lamb',
   veal: 'Veal',
   poultry: 'Poultry',
-  mixed: 'Mixed',
+  mixed: 'Mixed, meats not named',
 });
 
 /** Standards of identity a blend may be held to. */

@@ -4,7 +4,8 @@ import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { BlendGroup } from '../formula-form-model';
-import { SPECIES, STANDARDS } from '../formula-vocabulary';
+import { STANDARDS } from '../formula-vocabulary';
+import { SpeciesField } from '../species-field/species-field';
 import { watchControl } from '../watch-control';
 
 let nextId = 0;
@@ -15,7 +16,16 @@ let nextId = 0;
  */
 @Component({
   selector: 'app-blend-fields',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatInput, MatSelect, MatOption],
+  imports: [
+    ReactiveFormsModule,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatInput,
+    MatSelect,
+    MatOption,
+    SpeciesField,
+  ],
   templateUrl: './blend-fields.html',
   styleUrl: '../formula-fields.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -25,7 +35,6 @@ export class BlendFields {
   readonly group = input.required<BlendGroup>();
 
   protected readonly uid = `blend-${nextId++}`;
-  protected readonly species = SPECIES;
   protected readonly standards = STANDARDS;
   protected readonly components = watchControl(this.group, (group) => [
     ...group.controls.components.controls,

@@ -5,6 +5,7 @@ import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { CureGroup } from '../formula-form-model';
 import { CURE_METHODS, CURE_PRODUCTS, HOLD_RULES } from '../formula-vocabulary';
+import { SpeciesField } from '../species-field/species-field';
 import { watchControl } from '../watch-control';
 
 const RATE_LABELS: Record<string, string> = {
@@ -16,12 +17,22 @@ const RATE_LABELS: Record<string, string> = {
 };
 
 /**
- * The fields only a cure has: method and product (which select the nitrite limit), how the brine
+ * The fields only a cure has: method and product (which select the nitrite limit), the meat (which
+ * sets the cooking temperature), how the brine
  * is made for brine and pump cures, and the kitchen's own hold rule.
  */
 @Component({
   selector: 'app-cure-fields',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatInput, MatSelect, MatOption],
+  imports: [
+    ReactiveFormsModule,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatInput,
+    MatSelect,
+    MatOption,
+    SpeciesField,
+  ],
   templateUrl: './cure-fields.html',
   styleUrl: '../formula-fields.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
