@@ -1,5 +1,6 @@
 import type { ErrorObject } from 'ajv/dist/2020.js';
 import type { ContentProblem, FormulaPath } from '../formula/formula-problem.ts';
+import { allergenItemPath, allergenMessage } from './allergen-messages.ts';
 import { closestWord } from './closest-word.ts';
 
 /** Messages for pattern keywords, by the key that carries the pattern. */
@@ -182,7 +183,11 @@ export function schemaProblems(errors: readonly ErrorObject[], root: unknown): C
   const seen = new Set<string>();
   for (const error of errors) {
     if (error.keyword === 'if' || error.schemaPath.includes('/oneOf/')) continue;
-    const problem = describe(error, root);
+    // An allergen item fails several branches of its schema at once; one message says why.
+    const item = allergenItemPath(pathOf(error.instancePath));
+    const problem: ContentProblem | undefined = item
+      ? { path: item, message: allergenMessage(valueAt(root, item)), severity: 'error' }
+      : describe(error, root);
     if (!problem) continue;
     const key = `${problem.path.join('/')}|${problem.message}`;
     if (seen.has(key)) continue;

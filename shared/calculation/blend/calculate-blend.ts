@@ -1,5 +1,5 @@
 import { Decimal, HUNDRED, fraction, sum } from '../../decimal.ts';
-import type { BlendFormula, Yields } from '../../formula/formula-types.ts';
+import type { Allergen, BlendFormula, Yields } from '../../formula/formula-types.ts';
 import { CAUTIONS, allergenCaution } from '../../reference/cautions.ts';
 import { parseMass } from '../../units/mass.ts';
 import { collectAllergens } from '../allergens.ts';
@@ -60,7 +60,7 @@ function blendYields(meat: Decimal, batch: Decimal, yields: Yields): YieldStage[
   ];
 }
 
-function blendCautions(formula: BlendFormula, allergens: readonly string[]): Caution[] {
+function blendCautions(formula: BlendFormula, allergens: readonly Allergen[]): Caution[] {
   const cautions: Caution[] = [];
   // A mixed blend may hold poultry, which needs the higher temperature: print both.
   if (formula.species !== 'poultry') cautions.push(CAUTIONS.groundMeatCooking);
