@@ -296,7 +296,7 @@ export function batchBody(layout: SheetLayout, result: PresentedResult): void {
     check(layout, result, refused ? 'Check' : numbered('Check'));
   if (result.allergens.length) {
     heading(layout, 'Allergens', 20);
-    layout.paragraph(`Contains: ${result.allergens.map((a) => a.replace('-', ' ')).join(', ')}`, {
+    layout.paragraph(`Contains: ${result.allergens.join(', ')}`, {
       weight: 'semibold',
     });
   }

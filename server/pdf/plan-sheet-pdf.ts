@@ -45,7 +45,7 @@ function overview(layout: SheetLayout, plan: PresentedPlan): void {
     `${plan.assembly.id} · service ${dayInWords(plan.serviceDate)} · planned ${dayInWords(plan.today)} · ${plan.units === 'us' ? 'US units' : 'metric units'} · one production sheet per day follows`,
   );
   if (plan.allergens.length) {
-    layout.paragraph(`Contains: ${plan.allergens.map((a) => a.replace('-', ' ')).join(', ')}`, {
+    layout.paragraph(`Contains: ${plan.allergens.join(', ')}`, {
       weight: 'semibold',
       size: 11,
     });

@@ -12,9 +12,17 @@ export type BatchKind = 'cure' | 'dough' | 'blend' | 'mix';
  */
 export type FormulaKind = BatchKind | 'assembly';
 
-/** The nine major food allergens of US law (FALCPA 2004 plus sesame, FASTER Act 2021). */
-export type Allergen =
-  'milk' | 'egg' | 'fish' | 'shellfish' | 'tree-nuts' | 'peanuts' | 'wheat' | 'soy' | 'sesame';
+/** The major food allergens declared by name alone (FALCPA 2004; sesame, FASTER Act 2021). */
+export type PlainAllergen = 'milk' | 'egg' | 'peanuts' | 'wheat' | 'soy' | 'sesame';
+
+/** The three declared with their species or type of nut (21 U.S.C. 343(w)(2)). */
+export type KindedAllergen = 'fish' | 'crustacean-shellfish' | 'tree-nuts';
+
+/** One of the nine major food allergens, without its kind. */
+export type AllergenGroup = PlainAllergen | KindedAllergen;
+
+/** An allergen as a formula declares it: `milk`, or a kind with its group, `fish: anchovy`. */
+export type Allergen = PlainAllergen | { [G in KindedAllergen]: Record<G, string> }[KindedAllergen];
 
 /** The meats the FSIS cooking chart gives a temperature for. */
 export type Species = 'beef' | 'pork' | 'lamb' | 'veal' | 'poultry';

@@ -3,25 +3,27 @@ import type { FormulaProblem } from './formula-problem.ts';
 
 /**
  * Largest formula text read, in bytes of UTF-8 (256 KiB). The largest formula the schema allows
- * (60 ingredients with every allergen, 40 steps and 20 cautions of 500 characters, 4,000
- * characters of notes) is 46 kB in Latin letters and 124 kB in a script of three-byte
- * characters (tests/formulas/formula-limits-headroom.spec.ts); the demo formulas are about 1 kB.
+ * (60 ingredients with ten allergens each named with its kind, 40 steps and 20 cautions of 500
+ * characters, 4,000 characters of notes) is 72 kB in Latin letters and 186 kB in a script of
+ * three-byte characters (tests/formulas/formula-limits-headroom.spec.ts); the demo formulas are
+ * about 1 kB.
  * common practice, no source
  */
 export const MAX_FORMULA_BYTES = 256 * 1024;
 
 /**
  * Most levels of lists and sets of keys a formula's YAML may nest, the file's own keys being
- * level 1. Real formulas go four deep (keys → ingredients → one ingredient → its allergens);
- * 32 leaves room for any hand-written file while the parser's work stays small (it grows with
- * the depth, and 127,000 levels ran the server's heap out). common practice, no source
+ * level 1. Real formulas go five deep (keys → ingredients → one ingredient → its allergens → a
+ * fish with its species); 32 leaves room for any hand-written file while the parser's work stays
+ * small (it grows with the depth, and 127,000 levels ran the server's heap out).
+ * common practice, no source
  */
 export const MAX_YAML_DEPTH = 32;
 
 /**
  * Most keys, values and list items a formula's YAML may hold, counting every scalar, alias and
  * collection, and every entry mark ("-", "?", ":", ","), so an empty item counts too. The
- * largest formula the schema allows counts 2,185 and the demo formulas 63 to 193; the parser's
+ * largest formula the schema allows counts 4,105 and the demo formulas 63 to 193; the parser's
  * time grows faster than the count (20,000 empty list items took it 1.5 s, 5,000 keys of one
  * map 1.3 s, on the 2-CPU development machine). common practice, no source
  */

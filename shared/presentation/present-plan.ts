@@ -1,3 +1,4 @@
+import { allergenName } from '../calculation/allergens.ts';
 import type { PlanResult } from '../calculation/plan/plan-types.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 import { formatMass } from './format-figure.ts';
@@ -44,7 +45,7 @@ export function presentPlan(plan: PlanResult, system: UnitSystem): PresentedPlan
         : {}),
       usedBy: item.usedBy,
     })),
-    allergens: plan.allergens,
+    allergens: plan.allergens.map(allergenName),
     cautions: plan.cautions,
     warnings: plan.warnings,
     rounding: `${roundingNote(system)} The pull list is rounded the same way; weigh from each batch's sheet.`,

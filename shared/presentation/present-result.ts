@@ -1,4 +1,5 @@
 import { Decimal, sum } from '../decimal.ts';
+import { allergenName } from '../calculation/allergens.ts';
 import {
   failsCriticalLimit,
   type AmountLine,
@@ -162,7 +163,7 @@ function presentAll(result: CalcResult, system: UnitSystem): PresentedResult {
     critical: failsCriticalLimit(result),
     warnings: result.warnings,
     cautions: result.cautions,
-    allergens: result.allergens,
+    allergens: result.allergens.map(allergenName),
     ...(result.schedule ? { schedule: result.schedule } : {}),
     ...(result.yields
       ? {

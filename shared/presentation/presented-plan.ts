@@ -1,5 +1,5 @@
 import type { RawBatchOptions } from '../calculation/batch-input.ts';
-import type { Allergen, BatchKind } from '../formula/formula-types.ts';
+import type { BatchKind } from '../formula/formula-types.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 import type { PresentedResult } from './presented-result.ts';
 
@@ -21,7 +21,8 @@ export interface PresentedPlan {
   readonly days: readonly { readonly date: string; readonly formulas: readonly string[] }[];
   /** Raw materials added up over every batch, in name order. */
   readonly pullList: readonly PresentedPullItem[];
-  readonly allergens: readonly Allergen[];
+  /** Every allergen of the plan as the law words it: "egg", "fish (anchovy)", "soybeans". */
+  readonly allergens: readonly string[];
   readonly cautions: readonly {
     readonly id: string;
     readonly text: string;

@@ -1,5 +1,5 @@
 import type { CheckStatus, LineRole } from '../calculation/calc-result.ts';
-import type { Allergen, BatchKind } from '../formula/formula-types.ts';
+import type { BatchKind } from '../formula/formula-types.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 
 /**
@@ -22,7 +22,8 @@ export interface PresentedResult {
     readonly text: string;
     readonly source?: string;
   }[];
-  readonly allergens: readonly Allergen[];
+  /** The allergens as the law words them: "egg", "fish (anchovy)", "soybeans". */
+  readonly allergens: readonly string[];
   readonly schedule?: {
     readonly start: string;
     readonly days: number;

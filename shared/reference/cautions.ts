@@ -1,4 +1,6 @@
+import { allergenName } from '../calculation/allergens.ts';
 import type { Caution } from '../calculation/calc-result.ts';
+import type { Allergen } from '../formula/formula-types.ts';
 
 /**
  * The standard cautions, each with its source. Calculations pick the ones that apply; every
@@ -112,13 +114,16 @@ export const CAUTIONS = {
   },
 } as const satisfies Record<string, Caution>;
 
-/** The allergen caution for a list of allergens, or none when the list is empty. */
-export function allergenCaution(allergens: readonly string[]): Caution | undefined {
+/**
+ * The allergen caution for a list of allergens, or none when the list is empty; each is named as
+ * the law words it, fish, crustacean shellfish and tree nuts with their kind.
+ */
+export function allergenCaution(allergens: readonly Allergen[]): Caution | undefined {
   if (allergens.length === 0) return undefined;
   return {
     id: 'allergens',
-    text: `Contains: ${allergens.join(', ')}. Keep utensils and surfaces apart and label the product.`,
+    text: `Contains: ${allergens.map(allergenName).join(', ')}. Keep utensils and surfaces apart and label the product.`,
     source:
-      'Food Allergen Labeling and Consumer Protection Act of 2004; FASTER Act of 2021 (sesame)',
+      'Food Allergen Labeling and Consumer Protection Act of 2004 (21 U.S.C. 321(qq), 343(w)); FASTER Act of 2021 (sesame)',
   };
 }

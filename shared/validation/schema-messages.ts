@@ -1,5 +1,6 @@
 import type { ErrorObject } from 'ajv/dist/2020.js';
 import type { ContentProblem, FormulaPath } from '../formula/formula-problem.ts';
+import { allergenItemPath, allergenMessage } from './allergen-messages.ts';
 import { closestWord } from './closest-word.ts';
 
 /** Messages for pattern keywords, by the key that carries the pattern. */
@@ -206,7 +207,11 @@ export function schemaProblems(errors: readonly ErrorObject[], root: unknown): C
     // anyOf's own error comes after its branches': say it only when no branch said more.
     if (error.keyword === 'anyOf' && problems.some((p) => within(p.path, error.instancePath)))
       continue;
-    const problem = describe(error, root);
+    // An allergen item fails several branches of its schema at once; one message says why.
+    const item = allergenItemPath(pathOf(error.instancePath));
+    const problem: ContentProblem | undefined = item
+      ? { path: item, message: allergenMessage(valueAt(root, item)), severity: 'error' }
+      : describe(error, root);
     if (!problem) continue;
     const key = `${problem.path.join('/')}|${problem.message}`;
     if (seen.has(key)) continue;

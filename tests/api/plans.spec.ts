@@ -37,7 +37,8 @@ describe('POST /api/plans', () => {
     // 9000 g sliced ÷ 0.90 (smoke) ÷ 0.94 (slice) = 10 638.30 g of green belly.
     const green = plan.pullList.find((i: { name: string }) => i.name.startsWith('green meat'));
     assert.equal(green.grams.slice(0, 8), '10638.29');
-    assert.deepEqual(plan.allergens, ['milk', 'egg', 'fish', 'wheat']);
+    // source: 21 U.S.C. 343(w)(2) (the species of fish); formulas/house-sauce.yaml
+    assert.deepEqual(plan.allergens, ['milk', 'egg', 'fish (anchovy)', 'wheat']);
     assert.ok(plan.cautions.some((c: { text: string }) => /Curing salt is poisonous/.test(c.text)));
   });
 

@@ -8,6 +8,7 @@ import type {
   PresentedResult,
 } from '../../shared/index.ts';
 import { assertCleanFailure, assertExit, runLarder, stdoutJson } from '../helpers/run-larder.ts';
+import { writeMix } from '../helpers/temp-files.ts';
 
 /** Runs `larder calc … --json` and returns the result, asserting exit 0 and a quiet stderr. */
 async function calcJson(...args: string[]): Promise<PresentedResult> {
@@ -211,11 +212,26 @@ describe('larder calc on a mix', () => {
     // 1999.5 g). source: README "Numbers on the sheet" (totals add up the printed lines)
     const printed = total(mix.lines.map((l) => l.amount.replace(/ g$/, '')));
     assert.equal(mix.total?.amount, `${printed.toFixed(1)} g`);
-    assert.deepEqual([...result.allergens].sort(), ['egg', 'fish']);
+    // Egg (mayonnaise) and anchovy (Worcestershire sauce), named as the law words them.
+    // source: 21 U.S.C. 343(w)(2) (the species of fish); formulas/house-sauce.yaml
+    assert.deepEqual(result.allergens, ['egg', 'fish (anchovy)']);
     assert.ok(
       result.cautions.some((c) => /anchovy/.test(c.text)),
       'the formula’s own caution is printed',
     );
+  });
+
+  it('prints soy as soybeans and a tree nut with its kind on the sheet', async (t) => {
+    const file = writeMix(t, 'glaze', [
+      '  - { name: honey, pct: 100, base: true }',
+      '  - { name: soy sauce, pct: 10, allergens: [wheat, soy] }',
+      '  - { name: chopped pecans, pct: 20, allergens: [{ tree-nuts: pecan }] }',
+    ]);
+    const run = await runLarder(['calc', file, '--base', '1kg']);
+    assertExit(run, 0);
+    // source: 21 U.S.C. 321(qq)(1) ("tree nuts", "wheat", "soybeans") and 343(w)(2) (the type
+    // of tree nut is named)
+    assert.match(run.stdout, /Contains: tree nuts \(pecan\), wheat, soybeans\./);
   });
 
   it('refuses a cure option on a mix', async () => {

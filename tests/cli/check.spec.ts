@@ -12,7 +12,13 @@ import {
   stdoutJson,
   type CheckReport,
 } from '../helpers/run-larder.ts';
-import { DRY_BACON, dryBaconWith, makeTempDir, writeText } from '../helpers/temp-files.ts';
+import {
+  DRY_BACON,
+  dryBaconWith,
+  makeTempDir,
+  writeMix,
+  writeText,
+} from '../helpers/temp-files.ts';
 
 const demoFiles = readdirSync(path.join(REPO_ROOT, 'formulas')).filter((name) =>
   /\.ya?ml$/.test(name),
@@ -95,6 +101,22 @@ describe('larder check on files with problems', () => {
     assert.match(
       run.stdout,
       /^Checked 2 formula file\(s\): 1 ok, 1 with errors, 0 warning\(s\)\.$/m,
+    );
+  });
+
+  it('refuses fish declared without its species, at its line, saying how to name it', async (t) => {
+    const file = writeMix(t, 'sauce', [
+      '  - { name: mayonnaise, pct: 100, base: true, allergens: [egg] }',
+      '  - { name: Worcestershire sauce, pct: 3, allergens: [fish] }',
+    ]);
+    const run = await runLarder(['check', file]);
+    assertExit(run, 3);
+    assertNoStackTrace(run);
+    // source: 21 U.S.C. 343(w)(2) (the label names the species of fish). The word fish is on
+    // line 7, column 55 of the file. own example, derived
+    assert.match(
+      run.stdout,
+      new RegExp(`^${escapeRegExp(file)}:7:55: error: name the fish.*fish \\(anchovy\\)`, 'm'),
     );
   });
 

@@ -99,10 +99,11 @@ describe('plans in the console', () => {
     assert.match(await batchText(page, 'quillmoor-belly'), /9000 g sliced/);
     assert.match(await batchText(page, 'house-sauce'), /2400 g/);
 
-    // Milk, egg and wheat from the bun; egg and fish (anchovy in Worcestershire) from the sauce.
+    // Milk, egg and wheat from the bun; egg and anchovy (in Worcestershire) from the sauce, the
+    // species of fish named. source: 21 U.S.C. 343(w)(2); formulas/house-sauce.yaml
     assert.match(
       await page.getByTestId('plan-allergens').innerText(),
-      /Contains: Milk, Egg, Fish, Wheat/,
+      /Contains: milk, egg, fish \(anchovy\), wheat/,
     );
     assert.match(await page.getByTestId('plan-cautions').innerText(), /Curing salt is poisonous/);
     assert.ok((await page.getByTestId('pull-item').count()) > 10, 'the pull list is filled');
@@ -215,7 +216,7 @@ describe('plans in the console', () => {
     await preview.getByText('20 portions of 4 oz').waitFor();
     assert.match(
       await page.getByTestId('assembly-preview-allergens').innerText(),
-      /milk, egg, fish, wheat/,
+      /milk, egg, fish \(anchovy\), wheat/,
     );
     await session.screenshot(page, 'assembly-formula');
 

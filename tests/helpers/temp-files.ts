@@ -52,6 +52,15 @@ export function dryBaconWith(find: string, replace: string): string {
 }
 
 /**
+ * Writes a small mix formula, ID.yaml in a fresh temporary folder, whose ingredients are the
+ * given lines, the first (the base) at line 6 of the file; returns its path.
+ */
+export function writeMix(t: AfterHook, id: string, ingredients: readonly string[]): string {
+  const lines = ['formula: 1', `id: ${id}`, `title: ${id}`, 'kind: mix', 'ingredients:'];
+  return writeText(makeTempDir(t), `${id}.yaml`, [...lines, ...ingredients, ''].join('\n'));
+}
+
+/**
  * Environment that keeps git inside a temporary repository: it does not look above the
  * folder's parent for a repository, and ignores the machine's system and global settings.
  */

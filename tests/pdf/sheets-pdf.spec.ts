@@ -124,6 +124,15 @@ describe('batch sheets as PDF from the command line', () => {
     assert.match(sheet.all, /Weighed by .*Checked by/s);
   });
 
+  it('should name the species of fish among a sheet’s allergens', async (t) => {
+    const file = path.join(makeTempDir(t), 'sauce.pdf');
+    assertExit(await runLarder(['calc', 'house-sauce', '--total', '2kg', '--pdf', file]), 0);
+    const sheet = await pdfText(readFileSync(file));
+    // Egg (mayonnaise) and anchovy (Worcestershire sauce). source: 21 U.S.C. 343(w)(2) (the
+    // species of fish is named); formulas/house-sauce.yaml
+    assert.match(sheet.all, /Contains: egg, fish \(anchovy\)/);
+  });
+
   it('should not replace a file without --force, and replace it with', async (t) => {
     const file = path.join(makeTempDir(t), 'taken.pdf');
     writeFileSync(file, 'keep me');
@@ -212,7 +221,8 @@ describe('sheets as PDF from the API', () => {
       assert.match(text, new RegExp(`DAY ${n + 1} OF 3 Start ${dayWords(days[n])}`));
     });
     assert.match(sheet.pages[0], /PRODUCTION PLAN Smokehouse burger × 120/);
-    assert.match(sheet.pages[0], /Contains: milk, egg, fish, wheat/);
+    // The species of fish is named. source: 21 U.S.C. 343(w)(2); formulas/house-sauce.yaml
+    assert.match(sheet.pages[0], /Contains: milk, egg, fish \(anchovy\), wheat/);
     // 120 burgers × 2 portions = 240 portions of the grind; × 1 bun = 120 pieces;
     // × 20 g sauce = 2400 g; × 3 slices × 25 g = 9000 g of sliced bacon.
     assert.match(sheet.all, /240 portions of 4 oz/);

@@ -1,5 +1,5 @@
 import { Decimal, HUNDRED, fraction, sum } from '../../decimal.ts';
-import type { BlendFormula, Yields } from '../../formula/formula-types.ts';
+import type { Allergen, BlendFormula, Yields } from '../../formula/formula-types.ts';
 import { CAUTIONS, allergenCaution } from '../../reference/cautions.ts';
 import { parseMass } from '../../units/mass.ts';
 import { collectAllergens } from '../allergens.ts';
@@ -61,7 +61,7 @@ function blendYields(meat: Decimal, batch: Decimal, yields: Yields): YieldStage[
   ];
 }
 
-function blendCautions(formula: BlendFormula, allergens: readonly string[]): Caution[] {
+function blendCautions(formula: BlendFormula, allergens: readonly Allergen[]): Caution[] {
   const cautions: Caution[] = [cookingCaution(formula.species, 'ground'), CAUTIONS.keepCold];
   const allergen = allergenCaution(allergens);
   if (allergen) cautions.push(allergen);

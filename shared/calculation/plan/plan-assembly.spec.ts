@@ -143,8 +143,8 @@ describe('planAssembly: 120 smokehouse burgers for 2026-12-18', () => {
     );
   });
 
-  it('should roll the allergens up: milk and egg (bun), egg and fish (sauce), wheat (bun)', () => {
-    assert.deepEqual(plan.allergens, ['milk', 'egg', 'fish', 'wheat']);
+  it('should roll the allergens up: milk and egg (bun), egg and anchovy (sauce), wheat (bun)', () => {
+    assert.deepEqual(plan.allergens, ['milk', 'egg', { fish: 'anchovy' }, 'wheat']);
   });
 
   it('should carry every batch’s cautions once, the sauce’s own by its formula, local codes last', () => {
@@ -161,7 +161,8 @@ describe('planAssembly: 120 smokehouse burgers for 2026-12-18', () => {
     // One allergen caution for the whole plan, naming what the bun and the sauce bring.
     assert.match(
       plan.cautions.find((c) => c.id === 'allergens')?.text ?? '',
-      /^Contains: milk, egg, fish, wheat\./,
+      // source: 21 U.S.C. 343(w)(2): the species of fish is named
+      /^Contains: milk, egg, fish \(anchovy\), wheat\./,
     );
   });
 });

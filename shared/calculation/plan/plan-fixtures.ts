@@ -85,7 +85,7 @@ export const SAUCE: MixFormula = {
     { name: 'mayonnaise (made with pasteurized egg)', pct: 100, base: true, allergens: ['egg'] },
     { name: 'chili sauce', pct: 25 },
     { name: 'dill pickle brine', pct: 8 },
-    { name: 'Worcestershire sauce', pct: 3, allergens: ['fish'] },
+    { name: 'Worcestershire sauce', pct: 3, allergens: [{ fish: 'anchovy' }] },
     { name: 'smoked paprika', pct: 1.5 },
     { name: 'granulated garlic', pct: 0.8 },
     { name: 'fine black pepper', pct: 0.5 },

@@ -9,6 +9,7 @@ import type {
   Formula,
   HoldRule,
 } from '../../../shared/formula/formula-types.ts';
+import { allergenText } from '../../../shared/formula/allergen-text.ts';
 import { COUNT_KEYS, QUANTITY_KEYS } from './assembly-quantity';
 import {
   FormulaForm,
@@ -92,7 +93,7 @@ export function fillFormulaForm(
       water_pct: num(item['water_pct']),
       yeast: (item['yeast'] as DoughIngredient['yeast']) ?? null,
       base: item['base'] === true,
-      allergens: Array.isArray(item['allergens']) ? [...(item['allergens'] as never[])] : [],
+      allergens: Array.isArray(item['allergens']) ? allergenText(item['allergens']) : '',
       rest: Object.fromEntries(Object.entries(item).filter(([key]) => !ROW_KEYS.includes(key))),
     })),
     cure: {

@@ -6,7 +6,6 @@ import {
   Validators,
 } from '@angular/forms';
 import type {
-  Allergen,
   BlendFormula,
   CureMethod,
   CureProduct,
@@ -35,7 +34,8 @@ export type IngredientRow = FormGroup<{
   water_pct: Num;
   yeast: FormControl<YeastKind | null>;
   base: FormControl<boolean>;
-  allergens: FormControl<Allergen[]>;
+  /** The allergens as one line, as the law words them: "milk, fish (anchovy)". */
+  allergens: FormControl<string>;
   /** Keys the form does not edit (nitrate, raw_egg…), carried through unchanged. */
   rest: FormControl<Record<string, unknown>>;
 }>;
@@ -145,7 +145,7 @@ export function ingredientRow(fb: NonNullableFormBuilder): IngredientRow {
     water_pct: fb.control<number | null>(null, [Validators.min(0), Validators.max(100)]),
     yeast: fb.control<YeastKind | null>(null),
     base: fb.control(false),
-    allergens: fb.control<Allergen[]>([]),
+    allergens: fb.control(''),
     rest: fb.control<Record<string, unknown>>({}),
   });
 }

@@ -4,6 +4,7 @@ import type {
   MixFormula,
   Yields,
 } from '../../../shared/formula/formula-types.ts';
+import { allergensFromText } from '../../../shared/formula/allergen-text.ts';
 import type { AssemblyPartRow, FormulaForm, IngredientRow } from './formula-form-model';
 import { speciesFromChoices } from './species-choices';
 
@@ -114,6 +115,7 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
 /** One ingredient: name and pct, the kind's own keys, allergens and the untouched rest. */
 function ingredientOf(row: IngredientRow, keys: readonly string[]): Loose {
   const v = row.getRawValue();
+  const allergens = allergensFromText(v.allergens);
   const own: Loose = {};
   for (const key of keys) {
     const value = v[key as keyof typeof v];
@@ -125,7 +127,7 @@ function ingredientOf(row: IngredientRow, keys: readonly string[]): Loose {
     pct: v.pct,
     ...own,
     ...v.rest,
-    allergens: v.allergens.length > 0 ? v.allergens : undefined,
+    allergens: allergens.length > 0 ? allergens : undefined,
   };
 }
 

@@ -1,5 +1,4 @@
 import type {
-  Allergen,
   BlendFormula,
   CureMethod,
   CureProduct,
@@ -90,19 +89,6 @@ export const YEASTS = choices<YeastKind>({
   fresh: 'Fresh',
   'active-dry': 'Active dry',
   instant: 'Instant',
-});
-
-/** The nine major allergens. */
-export const ALLERGENS = choices<Allergen>({
-  milk: 'Milk',
-  egg: 'Egg',
-  fish: 'Fish',
-  shellfish: 'Shellfish',
-  'tree-nuts': 'Tree nuts',
-  peanuts: 'Peanuts',
-  wheat: 'Wheat',
-  soy: 'Soy',
-  sesame: 'Sesame',
 });
 
 /** Species of a cure or blend, for the cooking caution. */

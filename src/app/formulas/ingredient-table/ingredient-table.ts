@@ -18,12 +18,12 @@ import { MatRadioButton } from '@angular/material/radio';
 import { MatOption, MatSelect } from '@angular/material/select';
 import type { FormulaKind } from '../formula-api-types';
 import { IngredientRow, ingredientRow } from '../formula-form-model';
-import { ALLERGENS, Choice, FOODS, YEASTS } from '../formula-vocabulary';
+import { Choice, FOODS, YEASTS } from '../formula-vocabulary';
 import { watchControl } from '../watch-control';
 
 let nextId = 0;
 
-/** A column after the name: a number, a single choice or the allergens. */
+/** A column after the name: a number or a single choice (the allergens come last, as text). */
 interface Column {
   readonly key: 'pct' | 'nitrite' | 'salt' | 'accelerator' | 'food' | 'water_pct' | 'yeast';
   readonly label: string;
@@ -51,7 +51,7 @@ const OWN_COLUMNS: Record<FormulaKind, readonly Column[]> = {
 };
 const NAME_MIN = 140;
 const NARROW = 48;
-const ALLERGENS_WIDTH = 144;
+const ALLERGENS_WIDTH = 220;
 
 /**
  * The ingredients of a formula as an editable table: name and percentage, plus the columns of the
@@ -95,7 +95,6 @@ export class IngredientTable {
   readonly readOnly = input(false);
 
   protected readonly uid = `ingredients-${nextId++}`;
-  protected readonly allergens = ALLERGENS;
   /** The first column: the base of a mix, or whether a dough ingredient is flour. */
   protected readonly lead = computed(() =>
     this.kind() === 'mix' ? 'base' : this.kind() === 'dough' ? 'flour' : null,

@@ -1,7 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
-import { ALLERGENS } from '../../formulas/formula-vocabulary';
 import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { PlanSchedule } from '../plan-schedule/plan-schedule';
@@ -24,11 +23,8 @@ export class PlanView {
   /** The plan, as the API presents it. */
   readonly plan = input.required<PresentedPlan>();
 
-  protected readonly allergens = computed(() =>
-    this.plan().allergens.map(
-      (allergen) => ALLERGENS.find((choice) => choice.value === allergen)?.label ?? allergen,
-    ),
-  );
+  /** The allergens as the law words them, kinds named: "milk, fish (anchovy)". */
+  protected readonly allergens = computed(() => this.plan().allergens);
   protected readonly dayCount = computed(
     () => new Set(this.plan().batches.map((batch) => batch.start)).size,
   );
