@@ -4,6 +4,7 @@ import type {
   RawBatchOptions,
   UnitSystem,
 } from '../../shared/index.ts';
+import { recordedAllergenName } from '../../shared/calculation/allergens.ts';
 import type { Batch, BatchEvent, BatchListItem, BatchStatus, BatchSummary } from './batch.ts';
 
 /** A batch row joined with the names of its operator and reviewer. */
@@ -122,9 +123,15 @@ export function toListItem(row: BatchRow): BatchListItem {
 export function toBatch(row: BatchRow, events?: readonly BatchEvent[]): Batch {
   return {
     ...toSummary(row),
-    result: JSON.parse(row.result ?? 'null') as PresentedResult,
+    result: withRecordedAllergens(JSON.parse(row.result ?? 'null') as PresentedResult | null),
     ...(events ? { events } : {}),
   };
+}
+
+/** Older batches stored allergen keys ("tree-nuts"); they read as names ("tree nuts"). */
+function withRecordedAllergens(result: PresentedResult | null): PresentedResult {
+  if (!result?.allergens) return result as PresentedResult;
+  return { ...result, allergens: result.allergens.map(recordedAllergenName) };
 }
 
 /** An event row as the API shows it. */

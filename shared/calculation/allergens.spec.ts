@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { allergenName, collectAllergens } from './allergens.ts';
+import { allergenName, collectAllergens, recordedAllergenName } from './allergens.ts';
 
 describe('allergen names', () => {
   // source: 21 U.S.C. 321(qq)(1) names "Crustacean shellfish", "tree nuts" and "soybeans";
@@ -16,6 +16,16 @@ describe('allergen names', () => {
       'crustacean shellfish (shrimp)',
     );
     assert.equal(allergenName({ 'tree-nuts': 'pecan' }), 'tree nuts (pecan)');
+  });
+});
+
+describe('recordedAllergenName', () => {
+  // source: 21 U.S.C. 321(qq)(1), as above: a batch recorded with the old keys prints the law's words.
+  it('should read an old key as the law words it and leave a name as it is', () => {
+    assert.equal(recordedAllergenName('tree-nuts'), 'tree nuts');
+    assert.equal(recordedAllergenName('soy'), 'soybeans');
+    assert.equal(recordedAllergenName('fish (anchovy)'), 'fish (anchovy)');
+    assert.equal(recordedAllergenName('shellfish'), 'shellfish');
   });
 });
 

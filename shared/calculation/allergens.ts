@@ -46,3 +46,13 @@ export function collectAllergens(lists: Iterable<readonly Allergen[] | undefined
       .map((entry) => entry.allergen),
   );
 }
+
+/**
+ * An allergen as a batch recorded it. Batches recorded before kinds were named stored the group's
+ * key ("tree-nuts", "soy"); those read as the law words them. Anything else is already a name.
+ */
+export function recordedAllergenName(recorded: string): string {
+  return Object.hasOwn(MAJOR_ALLERGEN_NAMES, recorded)
+    ? MAJOR_ALLERGEN_NAMES[recorded as AllergenGroup]
+    : recorded;
+}
