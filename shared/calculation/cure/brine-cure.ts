@@ -1,7 +1,7 @@
 import { Decimal, fraction, sum } from '../../decimal.ts';
 import type { CureFormula } from '../../formula/formula-types.ts';
 import { BatchError } from '../batch-error.ts';
-import { brineStrength, checkBrineStrength, salinometerDegrees } from './brine-strength.ts';
+import { brineStrength, brineStrengthFigures, checkBrineStrength } from './brine-strength.ts';
 import { ppmAtEquilibrium } from './ingoing.ts';
 import {
   ingredientLine,
@@ -67,13 +67,7 @@ export function brineCure(
       },
     ],
     figures: [
-      { label: 'Brine strength', kind: 'percent', value: strength, note: 'salt ÷ (salt + water)' },
-      {
-        label: 'Salinometer',
-        kind: 'salinometer',
-        value: salinometerDegrees(strength),
-        note: '60 °F scale',
-      },
+      ...brineStrengthFigures(strength),
       {
         label: 'Salt in the meat at equilibrium',
         kind: 'percent',
