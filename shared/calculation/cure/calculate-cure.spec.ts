@@ -318,17 +318,34 @@ describe('calculateCure', () => {
       assert.match(result.schedule?.rule ?? '', /rule of thumb/);
     });
 
-    it('should fall back to 4 days per pound for a brine cure: a 6 lb shoulder 24 days, a 15 lb ham 60', () => {
-      // source: USDA Farmers' Bulletin, "Sweet Pickle Cure", 3½–4 days per pound (C-13, WE-10)
-      const brine = cure({ method: 'brine', product: 'whole-muscle', brine: { water_pct: 50 } });
-      const days = (pounds: string): number | undefined =>
+    it('should fall back to 4 days per pound for a sweet pickle: a 6 lb shoulder 24 days, a 15 lb ham 60', () => {
+      // source: USDA Farmers' Bulletin, "Sweet Pickle Cure", 3½–4 days per pound (C-13, WE-10).
+      // Own example of a strong pickle: water 37.5 % of the meat, salt 5.82 % of meat + water →
+      // 1.375 × (5.82 + 0.18) = 8.25 % of green weight in 37.5 % water = 18.03 % salt, 68 °SAL.
+      const brine = cure({
+        method: 'brine',
+        product: 'whole-muscle',
+        brine: { water_pct: 37.5 },
+        ingredients: [
+          { name: 'salt', pct: 5.82, salt: 100 },
+          { ...CURING_SALT, pct: 0.192 },
+        ],
+      });
+      const batch = (pounds: string, water?: string) =>
         calculateCure(brine, {
           meat: d(10_000),
           largestPiece: d(pounds).times('453.59237'),
           start: '2026-01-01',
-        }).schedule?.days;
-      assert.equal(days('6'), 24);
-      assert.equal(days('15'), 60);
+          ...(water ? { water: d(water) } : {}),
+        });
+      assert.equal(batch('6').schedule?.days, 24);
+      assert.equal(batch('15').schedule?.days, 60);
+      // The same make-up with 15 kg of water for 10 kg of meat: 2.5 × 6 % = 15 % of green weight
+      // in 150 % water = 9.09 % salt, 34 °SAL, an equilibrium brine: no days per pound for it
+      // (sweet-pickle threshold: common practice, no source).
+      const weak = batch('6', '15000');
+      assert.equal(weak.schedule, undefined);
+      assert.ok(weak.warnings.some((w) => /weaker than a sweet pickle/.test(w)));
     });
 
     it('should say which size is missing instead of guessing a ready date', () => {

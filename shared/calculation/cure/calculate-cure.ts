@@ -41,9 +41,10 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
   };
   const { checks, warnings: checkWarnings } = checkIngoingLevels(rule, levels);
 
-  const hold = estimateHold(formula.hold, formula.method, {
+  const hold = estimateHold(formula, {
     thicknessMm: batch.thickness,
     largestPieceGrams: batch.largestPiece,
+    brineStrength: outcome.heldInBrineStrength,
   });
   const warnings = [
     ...outcome.warnings,

@@ -24,6 +24,8 @@ export interface MethodOutcome {
   readonly inputs: Figure[];
   readonly figures: Figure[];
   readonly warnings: string[];
+  /** Strength of the brine the meat is held in to equilibrium, % salt: decides the default hold. */
+  readonly heldInBrineStrength?: Decimal;
   /** Ingoing ppm of a substance, by the method's FSIS formula, on green weight. */
   readonly ppm: (substance: CureSubstance) => Decimal;
   /** Which FSIS formula gave that figure, in words, where the method has more than one. */
