@@ -162,6 +162,15 @@ describe('a pump cure held under a cover brine', () => {
     assert.equal(nitrate.status, 'fail');
   });
 
+  it('declares the allergens of the cover brine’s own ingredients', () => {
+    // What the meat rests in reaches the food: FALCPA 2004 names soy a major food allergen.
+    const cover = [...PLAIN_COVER, { name: 'soy sauce', pct: 5, salt: 15, allergens: ['soy'] }];
+    const result = calculateCure(ham(0.25, { cover_brine: cover as CureIngredient[] }), {
+      meat: d(1000),
+    });
+    assert.deepEqual(result.allergens, ['soy']);
+  });
+
   it('refuses a cover brine saltier than saturated', () => {
     // source: saturated brine is 26.395 % salt, 100 °SAL at 60 °F (B-2); 27 % salt is over it
     const formula = ham(0.25, { cover_brine: [{ ...SALT, pct: 27 }] });
