@@ -42,8 +42,14 @@ product: whole-muscle      # bacon, whole-muscle or comminuted: selects the nitr
 species: pork              # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 brine:
   pump_pct: 10             # brine injected, % of green weight
-  cover_pct: 30            # cover brine of the same make-up, % of green weight (0 for none)
-  extra_pct: 10            # brine made beyond that, for injector losses
+  cover_pct: 30            # cover brine the meat rests in, % of green weight (0 for none)
+  extra_pct: 10            # injection brine made beyond that, for injector losses
+  # cover_pickup_pct: 2    # pick-up from the cover as you measured it, % of green weight
+# The cover brine's own make-up, each pct % of the cover brine (water is the rest). Without it the
+# cover is the injected brine, and its nitrite counts with the meat: meat and all pickle as one
+# system (FSIS immersion method two), or the measured pick-up (method one).
+cover_brine:
+  - { name: kosher salt, pct: 3, salt: 100 }
 ingredients:
   - { name: kosher salt, pct: 1.8, salt: 100 }
   - { name: curing salt (6.25 % nitrite), pct: 0.25, nitrite: 6.25, salt: 93.75 }
@@ -52,6 +58,7 @@ hold:
   days: 3
 steps:
   - Dissolve everything in cold water; keep the brine at 2–4 °C.
+  - Make the cover brine apart, from salt and water only, and chill it.
   - Inject evenly to the target weight, then hold under the cover brine.
 `,
 } as const;

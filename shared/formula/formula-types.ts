@@ -91,7 +91,16 @@ export interface CureFormula extends FormulaBase {
   /** Asked for by the checks: without it the sheet gives the highest cooking temperature. */
   species?: FormulaSpecies;
   ingredients: CureIngredient[];
-  brine?: { water_pct?: number; pump_pct?: number; cover_pct?: number; extra_pct?: number };
+  brine?: {
+    water_pct?: number;
+    pump_pct?: number;
+    cover_pct?: number;
+    /** Measured pick-up from the cover brine, % of green weight (FSIS immersion method one). */
+    cover_pickup_pct?: number;
+    extra_pct?: number;
+  };
+  /** Pump method: the cover brine's own make-up, each pct % of the cover brine; water is the rest. */
+  cover_brine?: CureIngredient[];
   hold?: HoldRule;
   yields?: Yields;
   /** Days from the end of the hold to service (smoking, resting, slicing); default 1. */

@@ -1,7 +1,7 @@
-import { Decimal, fraction, sum } from '../../decimal.ts';
+import { Decimal, ONE, fraction, sum } from '../../decimal.ts';
 import type { CureFormula } from '../../formula/formula-types.ts';
 import { BatchError } from '../batch-error.ts';
-import { brineStrength, checkBrineStrength, salinometerDegrees } from './brine-strength.ts';
+import { brineStrength, brineStrengthFigures, checkBrineStrength } from './brine-strength.ts';
 import { ppmAtEquilibrium } from './ingoing.ts';
 import {
   ingredientLine,
@@ -29,11 +29,7 @@ export function brineCure(
     );
   }
   const water = waterGrams ?? greenGrams.times(fraction(new Decimal(waterPct ?? 0)));
-  const system = greenGrams.plus(water);
-  const weighed: WeighedIngredient[] = formula.ingredients.map((ingredient) => ({
-    ingredient,
-    grams: system.times(fraction(new Decimal(ingredient.pct))),
-  }));
+  const weighed = weighOnMeatAndWater(formula, greenGrams, water);
   const pickle = water.plus(sum(weighed.map((w) => w.grams)));
   const salt = substanceGrams(weighed, 'salt');
   const strength = brineStrength(salt, water);
@@ -67,13 +63,7 @@ export function brineCure(
       },
     ],
     figures: [
-      { label: 'Brine strength', kind: 'percent', value: strength, note: 'salt ÷ (salt + water)' },
-      {
-        label: 'Salinometer',
-        kind: 'salinometer',
-        value: salinometerDegrees(strength),
-        note: '60 °F scale',
-      },
+      ...brineStrengthFigures(strength),
       {
         label: 'Salt in the meat at equilibrium',
         kind: 'percent',
@@ -82,6 +72,31 @@ export function brineCure(
       },
     ],
     warnings,
+    heldInBrineStrength: strength,
     ppm: (substance) => ppmAtEquilibrium(substanceGrams(weighed, substance), greenGrams, pickle),
   };
+}
+
+/** Each ingredient weighed as its percentage of meat plus water. */
+function weighOnMeatAndWater(
+  formula: CureFormula,
+  greenGrams: Decimal,
+  waterGrams: Decimal,
+): WeighedIngredient[] {
+  const system = greenGrams.plus(waterGrams);
+  return formula.ingredients.map((ingredient) => ({
+    ingredient,
+    grams: system.times(fraction(new Decimal(ingredient.pct))),
+  }));
+}
+
+/**
+ * Strength of the brine a brine-method formula makes with its own water_pct, salt ÷ (salt +
+ * water) × 100; undefined when the formula gives no water_pct.
+ */
+export function formulaBrineStrength(formula: CureFormula): Decimal | undefined {
+  const waterPct = formula.brine?.water_pct;
+  if (waterPct === undefined) return undefined;
+  const water = fraction(new Decimal(waterPct));
+  return brineStrength(substanceGrams(weighOnMeatAndWater(formula, ONE, water), 'salt'), water);
 }

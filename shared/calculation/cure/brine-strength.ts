@@ -1,5 +1,6 @@
 import { Decimal, HUNDRED } from '../../decimal.ts';
 import { BatchError } from '../batch-error.ts';
+import type { Figure } from '../calc-result.ts';
 
 /**
  * Salt in a saturated sodium chloride brine at 60 °F, % by weight: 100 degrees salinometer.
@@ -19,6 +20,25 @@ export function brineStrength(saltGrams: Decimal, waterGrams: Decimal): Decimal 
  */
 export function salinometerDegrees(strengthPercent: Decimal): Decimal {
   return strengthPercent.div(SATURATED_BRINE_SALT_PCT).times(HUNDRED);
+}
+
+/**
+ * A brine's strength and its salinometer reading, as figures for the sheet.
+ * @param labels the two labels, for a sheet with more than one brine
+ */
+export function brineStrengthFigures(
+  strength: Decimal,
+  labels = { strength: 'Brine strength', salinometer: 'Salinometer' },
+): Figure[] {
+  return [
+    { label: labels.strength, kind: 'percent', value: strength, note: 'salt ÷ (salt + water)' },
+    {
+      label: labels.salinometer,
+      kind: 'salinometer',
+      value: salinometerDegrees(strength),
+      note: '60 °F scale',
+    },
+  ];
 }
 
 /**

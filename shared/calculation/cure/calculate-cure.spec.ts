@@ -254,8 +254,11 @@ describe('calculateCure', () => {
       assert.equal(accelerator.critical, false);
     });
 
-    it('should make cover brine of the same strength without changing ingoing nitrite', () => {
+    it('should make cover brine of the same make-up and count it with the meat (method two)', () => {
       // Own example: 10 kg at 10 % pump with 30 % cover and 10 % extra → (1 + 3) × 1.1 = 4.4 kg of brine.
+      // The brine holds 0.192 % × 6.25 % ÷ 10 % = 1200 ppm nitrite; 0.4 of green weight in pickle
+      // → 1200 × 0.4 ÷ 1.4 = 342.857 ppm, over the 120 ppm for pumped bacon.
+      // source: FSIS 7620.3 ch. 3 immersion method two; 9 CFR 424.22(b)
       const covered = cure({
         ...pumpedBacon,
         brine: { pump_pct: 10, cover_pct: 30, extra_pct: 10 },
@@ -263,7 +266,8 @@ describe('calculateCure', () => {
       const result = calculateCure(covered, { meat: d(10_000) });
       const total = result.groups[0].lines.reduce((sum, l) => sum.plus(l.grams), d(0));
       assert.equal(total.toString(), '4400');
-      assert.equal(check(result, 'nitrite-max').value.toString(), '120');
+      assert.equal(check(result, 'nitrite-max').value.toFixed(3), '342.857');
+      assert.equal(check(result, 'nitrite-max').status, 'fail');
     });
 
     it('should refuse a pump % too low to dissolve the salt', () => {
@@ -314,17 +318,34 @@ describe('calculateCure', () => {
       assert.match(result.schedule?.rule ?? '', /rule of thumb/);
     });
 
-    it('should fall back to 4 days per pound for a brine cure: a 6 lb shoulder 24 days, a 15 lb ham 60', () => {
-      // source: USDA Farmers' Bulletin, "Sweet Pickle Cure", 3½–4 days per pound (C-13, WE-10)
-      const brine = cure({ method: 'brine', product: 'whole-muscle', brine: { water_pct: 50 } });
-      const days = (pounds: string): number | undefined =>
+    it('should fall back to 4 days per pound for a sweet pickle: a 6 lb shoulder 24 days, a 15 lb ham 60', () => {
+      // source: USDA Farmers' Bulletin, "Sweet Pickle Cure", 3½–4 days per pound (C-13, WE-10).
+      // Own example of a strong pickle: water 37.5 % of the meat, salt 5.82 % of meat + water →
+      // 1.375 × (5.82 + 0.18) = 8.25 % of green weight in 37.5 % water = 18.03 % salt, 68 °SAL.
+      const brine = cure({
+        method: 'brine',
+        product: 'whole-muscle',
+        brine: { water_pct: 37.5 },
+        ingredients: [
+          { name: 'salt', pct: 5.82, salt: 100 },
+          { ...CURING_SALT, pct: 0.192 },
+        ],
+      });
+      const batch = (pounds: string, water?: string) =>
         calculateCure(brine, {
           meat: d(10_000),
           largestPiece: d(pounds).times('453.59237'),
           start: '2026-01-01',
-        }).schedule?.days;
-      assert.equal(days('6'), 24);
-      assert.equal(days('15'), 60);
+          ...(water ? { water: d(water) } : {}),
+        });
+      assert.equal(batch('6').schedule?.days, 24);
+      assert.equal(batch('15').schedule?.days, 60);
+      // The same make-up with 15 kg of water for 10 kg of meat: 2.5 × 6 % = 15 % of green weight
+      // in 150 % water = 9.09 % salt, 34 °SAL, an equilibrium brine: no days per pound for it
+      // (sweet-pickle threshold: common practice, no source).
+      const weak = batch('6', '15000');
+      assert.equal(weak.schedule, undefined);
+      assert.ok(weak.warnings.some((w) => /weaker than a sweet pickle/.test(w)));
     });
 
     it('should say which size is missing instead of guessing a ready date', () => {

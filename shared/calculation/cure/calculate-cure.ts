@@ -1,5 +1,5 @@
 import type { Decimal } from '../../decimal.ts';
-import type { CureFormula } from '../../formula/formula-types.ts';
+import type { CureFormula, CureIngredient } from '../../formula/formula-types.ts';
 import { CAUTIONS, allergenCaution } from '../../reference/cautions.ts';
 import { CONCENTRATED_NITRITE_PCT, nitriteRuleFor } from '../../reference/nitrite-limits.ts';
 import { collectAllergens } from '../allergens.ts';
@@ -34,12 +34,18 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
     nitrite: outcome.ppm('nitrite'),
     nitrate: outcome.ppm('nitrate'),
     accelerator: outcome.ppm('accelerator'),
+    basis: {
+      nitrite: outcome.basis?.('nitrite'),
+      nitrate: outcome.basis?.('nitrate'),
+      accelerator: outcome.basis?.('accelerator'),
+    },
   };
   const { checks, warnings: checkWarnings } = checkIngoingLevels(rule, levels);
 
-  const hold = estimateHold(formula.hold, formula.method, {
+  const hold = estimateHold(formula, {
     thicknessMm: batch.thickness,
     largestPieceGrams: batch.largestPiece,
+    brineStrength: outcome.heldInBrineStrength,
   });
   const warnings = [
     ...outcome.warnings,
@@ -63,7 +69,7 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
   if (batch.largestPiece)
     inputs.push({ label: 'Heaviest piece', kind: 'mass', value: batch.largestPiece });
 
-  const allergens = collectAllergens(formula.ingredients.map((i) => i.allergens));
+  const allergens = collectAllergens(everyIngredient(formula).map((i) => i.allergens));
   const stages = yieldStages(green, formula.yields);
   return {
     formula: { id: formula.id, title: formula.title, kind: formula.kind },
@@ -75,7 +81,7 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
         label: 'Ingoing sodium nitrite',
         kind: 'ppm',
         value: levels.nitrite,
-        note: 'on green weight, unrounded for the check',
+        note: `on green weight, unrounded for the check${levels.basis.nitrite ? `; ${levels.basis.nitrite}` : ''}`,
       },
       ...(levels.accelerator.isZero()
         ? []
@@ -84,6 +90,7 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
               label: 'Ingoing ascorbate/erythorbate',
               kind: 'ppm' as const,
               value: levels.accelerator,
+              ...(levels.basis.accelerator ? { note: levels.basis.accelerator } : {}),
             },
           ]),
       ...outcome.figures,
@@ -146,8 +153,13 @@ function cureByMethod(formula: CureFormula, green: Decimal, batch: BatchInput): 
   }
 }
 
+/** The formula's ingredients and its cover brine's, when it has one of its own make-up. */
+function everyIngredient(formula: CureFormula): CureIngredient[] {
+  return [...formula.ingredients, ...(formula.cover_brine ?? [])];
+}
+
 function concentrationWarnings(formula: CureFormula): string[] {
-  return formula.ingredients
+  return everyIngredient(formula)
     .filter((i) => CONCENTRATED_NITRITE_PCT.lessThan(i.nitrite ?? 0))
     .map(
       (i) =>
@@ -171,7 +183,9 @@ function smallCuringSaltWarnings(outcome: MethodOutcome): string[] {
 }
 
 function cureCautions(formula: CureFormula, allergens: CalcResult['allergens']): Caution[] {
-  const carriesCure = formula.ingredients.some((i) => (i.nitrite ?? 0) > 0 || (i.nitrate ?? 0) > 0);
+  const carriesCure = everyIngredient(formula).some(
+    (i) => (i.nitrite ?? 0) > 0 || (i.nitrate ?? 0) > 0,
+  );
   const allergen = allergenCaution(allergens);
   return [
     ...(carriesCure ? [CAUTIONS.curingSaltHandling] : []),

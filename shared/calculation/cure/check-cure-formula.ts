@@ -3,8 +3,9 @@ import {
   contentError,
   contentWarning,
   type ContentProblem,
+  type FormulaPath,
 } from '../../formula/formula-problem.ts';
-import type { CureFormula, HoldRule } from '../../formula/formula-types.ts';
+import type { CureFormula, CureIngredient, HoldRule } from '../../formula/formula-types.ts';
 import { nitriteRuleFor } from '../../reference/nitrite-limits.ts';
 import { BatchError } from '../batch-error.ts';
 import { calculateCure } from './calculate-cure.ts';
@@ -20,7 +21,7 @@ const HOLD_RATES: readonly (keyof HoldRule)[] = [
 const BRINE_KEYS_BY_METHOD = {
   dry: [],
   brine: ['water_pct'],
-  pump: ['pump_pct', 'cover_pct', 'extra_pct'],
+  pump: ['pump_pct', 'cover_pct', 'cover_pickup_pct', 'extra_pct'],
 } as const;
 /** A notional batch for checking the formula's own levels: 1 kg, the levels do not depend on size. */
 const SAMPLE_GREEN_GRAMS = new Decimal(1000);
@@ -43,7 +44,9 @@ export function checkCureFormula(formula: CureFormula): ContentProblem[] {
   }
   problems.push(
     ...checkBrineKeys(formula),
-    ...checkIngredients(formula),
+    ...checkCover(formula),
+    ...checkIngredients(formula.ingredients, ['ingredients']),
+    ...checkIngredients(formula.cover_brine ?? [], ['cover_brine']),
     ...checkHold(formula.hold),
   );
   if (problems.some((p) => p.severity === 'error')) return problems;
@@ -79,21 +82,62 @@ function checkBrineKeys(formula: CureFormula): ContentProblem[] {
   return problems;
 }
 
-function checkIngredients(formula: CureFormula): ContentProblem[] {
+/**
+ * A cover brine's keys: its own make-up and a measured pick-up belong to a pump cure with a
+ * cover; a pick-up cannot be more than the cover brine itself, and the make-up must leave water.
+ */
+function checkCover(formula: CureFormula): ContentProblem[] {
+  const problems: ContentProblem[] = [];
+  const cover = formula.brine?.cover_pct ?? 0;
+  const pickup = formula.brine?.cover_pickup_pct;
+  if (formula.cover_brine && formula.method !== 'pump') {
+    problems.push(
+      contentError(['cover_brine'], `"cover_brine" does not apply to the ${formula.method} method`),
+    );
+  } else if (formula.cover_brine && cover === 0) {
+    problems.push(
+      contentError(
+        ['cover_brine'],
+        'a cover brine make-up needs a cover: give brine: { cover_pct: … }, % of green weight',
+      ),
+    );
+  }
+  if (pickup !== undefined && formula.method === 'pump' && pickup > cover) {
+    problems.push(
+      contentError(
+        ['brine', 'cover_pickup_pct'],
+        `a pick-up of ${pickup} % cannot be more than the cover brine (cover_pct ${cover} %)`,
+      ),
+    );
+  }
+  const coverShare = (formula.cover_brine ?? []).reduce((total, i) => total + i.pct, 0);
+  if (coverShare >= 100) {
+    problems.push(
+      contentError(
+        ['cover_brine'],
+        `the cover brine's ingredients come to ${coverShare} % of it, leaving no water`,
+      ),
+    );
+  }
+  return problems;
+}
+
+function checkIngredients(
+  ingredients: readonly CureIngredient[],
+  at: FormulaPath,
+): ContentProblem[] {
   const problems: ContentProblem[] = [];
   const names = new Set<string>();
-  formula.ingredients.forEach((ingredient, i) => {
+  ingredients.forEach((ingredient, i) => {
     const name = ingredient.name.trim().toLowerCase();
     if (names.has(name))
-      problems.push(
-        contentError(['ingredients', i, 'name'], `"${ingredient.name}" is listed twice`),
-      );
+      problems.push(contentError([...at, i, 'name'], `"${ingredient.name}" is listed twice`));
     names.add(name);
     const declared = SUBSTANCES.reduce((total, key) => total + (ingredient[key] ?? 0), 0);
     if (declared > 100) {
       problems.push(
         contentError(
-          ['ingredients', i],
+          [...at, i],
           `"${ingredient.name}" declares ${declared} % of nitrite, nitrate, salt and accelerator together; that is more than 100 %`,
         ),
       );
@@ -131,7 +175,7 @@ function checkLevels(formula: CureFormula): ContentProblem[] {
       problems.push(
         contentError(
           ['ingredients'],
-          `critical limit exceeded: ${check.label.toLowerCase()} ${figure} is over ${limit} for ${check.rule} (${check.source})`,
+          `critical limit exceeded: ${lowerFirst(check.label)} ${figure} is over ${limit} for ${check.rule} (${check.source})`,
         ),
       );
     } else if (check.status === 'fail') {
@@ -145,10 +189,15 @@ function checkLevels(formula: CureFormula): ContentProblem[] {
       problems.push(
         contentWarning(
           ['ingredients'],
-          `${check.label.toLowerCase()} ${figure} is below ${limit} (${check.source})`,
+          `${lowerFirst(check.label)} ${figure} is below ${limit} (${check.source})`,
         ),
       );
     }
   }
   return problems;
+}
+
+/** A label to follow other words: its first letter in lower case, the rest (FSIS…) as written. */
+function lowerFirst(label: string): string {
+  return label.charAt(0).toLowerCase() + label.slice(1);
 }

@@ -2,6 +2,13 @@ import { Decimal, fraction, sum } from '../../decimal.ts';
 import type { CureIngredient } from '../../formula/formula-types.ts';
 import type { AmountLine, Figure, LineGroup } from '../calc-result.ts';
 
+/** How a brine's make-up is headed on the sheet. */
+export interface MakeUpTitles {
+  readonly title: string;
+  readonly percentOf: string;
+  readonly totalLabel: string;
+}
+
 /** A substance a cure ingredient may carry, as declared in the formula (% by weight). */
 export type CureSubstance = 'nitrite' | 'nitrate' | 'salt' | 'accelerator';
 
@@ -17,8 +24,12 @@ export interface MethodOutcome {
   readonly inputs: Figure[];
   readonly figures: Figure[];
   readonly warnings: string[];
+  /** Strength of the brine the meat is held in to equilibrium, % salt: decides the default hold. */
+  readonly heldInBrineStrength?: Decimal;
   /** Ingoing ppm of a substance, by the method's FSIS formula, on green weight. */
   readonly ppm: (substance: CureSubstance) => Decimal;
+  /** Which FSIS formula gave that figure, in words, where the method has more than one. */
+  readonly basis?: (substance: CureSubstance) => string | undefined;
 }
 
 /** Grams of a substance carried by the weighed ingredients. */
@@ -46,5 +57,31 @@ export function ingredientLine(weighed: WeighedIngredient, percent: Decimal): Am
     grams,
     percent,
     role: isCuringSalt(ingredient) ? 'curing-salt' : 'ingredient',
+  };
+}
+
+/**
+ * A brine's make-up to weigh: the water, then each ingredient, every line a percentage of the
+ * brine made.
+ * @param shares each ingredient's % of the brine, in the order of `weighed`
+ */
+export function makeUpGroup(
+  titles: MakeUpTitles,
+  brineGrams: Decimal,
+  waterShare: Decimal,
+  weighed: readonly WeighedIngredient[],
+  shares: readonly Decimal[],
+): LineGroup {
+  return {
+    ...titles,
+    lines: [
+      {
+        name: 'water',
+        grams: brineGrams.times(fraction(waterShare)),
+        percent: waterShare,
+        role: 'water',
+      },
+      ...weighed.map((w, i) => ingredientLine(w, shares[i])),
+    ],
   };
 }

@@ -11,6 +11,13 @@ export interface IngoingLevels {
   readonly nitrite: Decimal;
   readonly nitrate: Decimal;
   readonly accelerator: Decimal;
+  /** Which FSIS formula gave each level, in words, where the method has more than one. */
+  readonly basis?: { readonly [K in 'nitrite' | 'nitrate' | 'accelerator']?: string };
+}
+
+/** A check's label with the formula its figure came by, when the method has more than one. */
+function byFormula(label: string, basis: string | undefined): string {
+  return basis ? `${label} (${basis})` : label;
 }
 
 /** What the checks found: the checks themselves and warnings that have no limit to compare with. */
@@ -28,7 +35,7 @@ export function checkIngoingLevels(rule: NitriteRule, levels: IngoingLevels): Ni
   const checks: LimitCheck[] = [
     {
       id: 'nitrite-max',
-      label: 'Ingoing sodium nitrite',
+      label: byFormula('Ingoing sodium nitrite', levels.basis?.nitrite),
       value: levels.nitrite,
       unit: 'ppm',
       limit: rule.maxPpm,
@@ -40,7 +47,7 @@ export function checkIngoingLevels(rule: NitriteRule, levels: IngoingLevels): Ni
     },
     {
       id: 'nitrite-min',
-      label: 'Ingoing sodium nitrite, usual minimum',
+      label: byFormula('Ingoing sodium nitrite, usual minimum', levels.basis?.nitrite),
       value: levels.nitrite,
       unit: 'ppm',
       limit: USUAL_MINIMUM_PPM,
@@ -54,7 +61,7 @@ export function checkIngoingLevels(rule: NitriteRule, levels: IngoingLevels): Ni
   if (rule.acceleratorPpm) {
     checks.push({
       id: 'accelerator-required',
-      label: 'Sodium ascorbate or erythorbate',
+      label: byFormula('Sodium ascorbate or erythorbate', levels.basis?.accelerator),
       value: levels.accelerator,
       unit: 'ppm',
       limit: rule.acceleratorPpm,
@@ -70,7 +77,7 @@ export function checkIngoingLevels(rule: NitriteRule, levels: IngoingLevels): Ni
     if (rule.maxNitratePpm) {
       checks.push({
         id: 'nitrate-max',
-        label: 'Ingoing sodium nitrate',
+        label: byFormula('Ingoing sodium nitrate', levels.basis?.nitrate),
         value: levels.nitrate,
         unit: 'ppm',
         limit: rule.maxNitratePpm,

@@ -2,11 +2,14 @@ import { Decimal, HUNDRED, ZERO, fraction, sum } from '../../decimal.ts';
 import type { CureFormula } from '../../formula/formula-types.ts';
 import type { Figure } from '../calc-result.ts';
 import { BatchError } from '../batch-error.ts';
-import { brineStrength, checkBrineStrength, salinometerDegrees } from './brine-strength.ts';
-import { ppmOfPumpedPickle, pumpPercentFromWeights } from './ingoing.ts';
+import { brineStrength, brineStrengthFigures, checkBrineStrength } from './brine-strength.ts';
+import { ownCoverBrine } from './cover-brine.ts';
+import { pumpPercentFromWeights } from './ingoing.ts';
+import { pumpIngoing, type PumpIngoing } from './pump-ingoing.ts';
 import {
-  ingredientLine,
+  makeUpGroup,
   substanceGrams,
+  type CureSubstance,
   type MethodOutcome,
   type WeighedIngredient,
 } from './cure-lines.ts';
@@ -22,9 +25,11 @@ export interface PumpOptions {
 /**
  * Injection (pump) cure. Each ingredient's percentage is the level wanted in the meat, on green
  * weight; injecting brine at pump % p puts pct/p × 100 % of it into the brine. The brine made
- * covers what is injected, a cover brine of the same make-up, and the formula's extra for losses.
+ * covers what is injected, the cover brine when it is of the same make-up, and the formula's
+ * extra for losses; a cover brine of its own make-up (cover_brine) is weighed on its own lines.
  * Ingoing ppm = substance in pickle × pump fraction × 1 000 000 / pickle weight (FSIS 7620.3 ch. 3),
- * on the pump % actually reached when the pumped weight is known.
+ * on the pump % actually reached when the pumped weight is known; with a cover brine, the larger
+ * of that and the figure counting the cover (pumpIngoing) is checked.
  */
 export function pumpCure(
   formula: CureFormula,
@@ -61,7 +66,7 @@ export function pumpCure(
   );
   const waterShare = HUNDRED.minus(solids);
   const strength = brineStrength(saltShare, waterShare);
-  // The cover brine has the same make-up, so this one check holds for it too.
+  // A cover brine of the same make-up passes with this check; one of its own has its own.
   const strengthWarnings = checkBrineStrength(strength, {
     made: `at ${designPump} % pump`,
     fix: 'inject more brine (raise --pump)',
@@ -70,8 +75,10 @@ export function pumpCure(
 
   const injected = greenGrams.times(fraction(designPump));
   const cover = greenGrams.times(fraction(new Decimal(formula.brine?.cover_pct ?? 0)));
+  const ownCover =
+    formula.cover_brine && !cover.isZero() ? ownCoverBrine(formula.cover_brine, cover) : undefined;
   const extra = fraction(new Decimal(formula.brine?.extra_pct ?? 0));
-  const made = injected.plus(cover).times(extra.plus(1));
+  const made = (ownCover ? injected : injected.plus(cover)).times(extra.plus(1));
   const weighed: WeighedIngredient[] = formula.ingredients.map((ingredient, i) => ({
     ingredient,
     grams: made.times(fraction(shares[i])),
@@ -84,7 +91,21 @@ export function pumpCure(
     throw new BatchError('the pumped weight must be more than the green weight', 'pumped-weight');
   }
   const pumpForChecks = actualPump ?? designPump;
-  const warnings: string[] = [...strengthWarnings];
+  const pickup = formula.brine?.cover_pickup_pct;
+  const ingoing = (substance: CureSubstance): PumpIngoing => {
+    const inPump = substanceGrams(weighed, substance);
+    return pumpIngoing({
+      greenGrams,
+      pumpPercent: pumpForChecks,
+      pumpSubstanceGrams: inPump,
+      pumpPickleGrams: made,
+      coverGrams: cover,
+      coverSubstanceGrams: ownCover ? ownCover.substance(substance) : inPump.times(cover).div(made),
+      ...(pickup === undefined ? {} : { pickupPercent: new Decimal(pickup) }),
+    });
+  };
+  const nitrite = ingoing('nitrite');
+  const warnings: string[] = [...strengthWarnings, ...(ownCover?.warnings ?? [])];
   if (actualPump && !actualPump.equals(designPump)) {
     warnings.push(
       `The meat took ${actualPump.toFixed(1)} % pump, not the ${designPump} % the brine is made for: ingoing levels are checked on ${actualPump.toFixed(1)} %.`,
@@ -111,37 +132,50 @@ export function pumpCure(
 
   return {
     groups: [
-      {
-        title: 'Brine make-up',
-        percentOf: 'brine',
-        lines: [
-          {
-            name: 'water',
-            grams: made.times(fraction(waterShare)),
-            percent: waterShare,
-            role: 'water',
-          },
-          ...weighed.map((w, i) => ingredientLine(w, shares[i])),
-        ],
-        totalLabel: 'Brine made',
-      },
+      makeUpGroup(
+        { title: 'Brine make-up', percentOf: 'brine', totalLabel: 'Brine made' },
+        made,
+        waterShare,
+        weighed,
+        shares,
+      ),
+      ...(ownCover ? [ownCover.group] : []),
     ],
     inputs,
     figures: [
+      ...(nitrite.withCover
+        ? [
+            {
+              label: 'Ingoing sodium nitrite, injected brine only',
+              kind: 'ppm' as const,
+              value: nitrite.injected,
+              note: 'FSIS pumped-product formula',
+            },
+            {
+              label: 'Ingoing sodium nitrite, counting the cover brine',
+              kind: 'ppm' as const,
+              value: nitrite.withCover.value,
+              note: nitrite.withCover.basis,
+            },
+          ]
+        : []),
       { label: 'Brine to inject', kind: 'mass', value: injected },
       { label: 'Target weight after injecting', kind: 'mass', value: greenGrams.plus(injected) },
       ...(cover.greaterThan(ZERO)
-        ? [{ label: 'Cover brine', kind: 'mass' as const, value: cover }]
+        ? [
+            {
+              label: 'Cover brine',
+              kind: 'mass' as const,
+              value: cover,
+              note: ownCover ? 'its own make-up' : 'the same brine as injected',
+            },
+          ]
         : []),
-      { label: 'Brine strength', kind: 'percent', value: strength, note: 'salt ÷ (salt + water)' },
-      {
-        label: 'Salinometer',
-        kind: 'salinometer',
-        value: salinometerDegrees(strength),
-        note: '60 °F scale',
-      },
+      ...brineStrengthFigures(strength),
+      ...(ownCover?.figures ?? []),
     ],
     warnings,
-    ppm: (substance) => ppmOfPumpedPickle(substanceGrams(weighed, substance), pumpForChecks, made),
+    ppm: (substance) => ingoing(substance).checked,
+    ...(cover.isZero() ? {} : { basis: (substance) => ingoing(substance).basis }),
   };
 }

@@ -10,7 +10,7 @@ import type {
   Formula,
 } from '../../formula/formula-types.ts';
 import { closestWord } from '../../validation/closest-word.ts';
-import { DEFAULT_HOLD, estimateHold } from '../cure/hold-time.ts';
+import { estimateHold, holdRuleOf } from '../cure/hold-time.ts';
 import {
   KINDS_FOR,
   SIZE_KEYS,
@@ -47,11 +47,11 @@ function kindsInWords(kinds: readonly string[]): string {
 
 /** What a cure's hold rule needs that the component does not give, in words; undefined if nothing. */
 function missingSize(cure: CureFormula, component: AssemblyComponent): string | undefined {
-  const rule = cure.hold ?? DEFAULT_HOLD[cure.method]?.rule;
+  const rule = holdRuleOf(cure)?.rule;
   if (!rule) {
     return `${cure.id} has no hold rule, so its start day cannot be planned: add hold: to it`;
   }
-  const estimate = estimateHold(cure.hold, cure.method, componentSizes(component));
+  const estimate = estimateHold(cure, componentSizes(component));
   if (!('missing' in estimate)) return undefined;
   const { days_per_cm, days_per_inch } = rule;
   return days_per_cm !== undefined || days_per_inch !== undefined

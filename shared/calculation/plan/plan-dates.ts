@@ -29,7 +29,7 @@ export function plannedDates(
   let holdDays = 0;
   let holdWords = '';
   if (formula.kind === 'cure') {
-    const hold = estimateHold(formula.hold, formula.method, sizes);
+    const hold = estimateHold(formula, sizes);
     if ('missing' in hold) {
       throw new PlanError(
         `${formula.id} cannot be dated: ${hold.missing.replace(/give --(\S+)/, 'give $1 in the assembly')}`,

@@ -103,6 +103,7 @@ export function fillFormulaForm(
       water_pct: num(c.brine?.water_pct),
       pump_pct: num(c.brine?.pump_pct),
       cover_pct: num(c.brine?.cover_pct),
+      cover_pickup_pct: num(c.brine?.cover_pickup_pct),
       extra_pct: num(c.brine?.extra_pct),
       holdRule: rate ?? 'default',
       holdRate: rate ? num(hold[rate]) : null,

@@ -59,6 +59,7 @@ export type CureGroup = FormGroup<{
   water_pct: Num;
   pump_pct: Num;
   cover_pct: Num;
+  cover_pickup_pct: Num;
   extra_pct: Num;
   holdRule: FormControl<HoldRateKey | 'default'>;
   holdRate: Num;
@@ -197,6 +198,7 @@ export function createFormulaForm(fb: NonNullableFormBuilder): FormulaForm {
       water_pct: optional(),
       pump_pct: optional(),
       cover_pct: optional(),
+      cover_pickup_pct: optional(),
       extra_pct: optional(),
       holdRule: fb.control<HoldRateKey | 'default'>('default'),
       holdRate: optional(),

@@ -27,3 +27,35 @@ describe('the structured form', () => {
     });
   }
 });
+
+describe('the structured form on a pump cure with a cover brine', () => {
+  const text = readFileSync(new URL('ham-pump.yaml', FOLDER), 'utf8');
+  // A measured pick-up decides which FSIS formula counts the cover (immersion method one), so
+  // losing it on save would change the checked nitrite. source: FSIS 7620.3 ch. 3
+  const measured = text.replace('  cover_pct: 25\n', '  cover_pct: 25\n  cover_pickup_pct: 2\n');
+
+  function filled(yaml: string) {
+    const formula = parseFormulaYaml(yaml);
+    assert.ok(formula);
+    const fb = new FormBuilder().nonNullable;
+    const form = createFormulaForm(fb);
+    fillFormulaForm(form, formula, fb);
+    return { form, formula };
+  }
+
+  it('should keep the measured pick-up from the cover', () => {
+    const { form, formula } = filled(measured);
+    assert.equal(form.controls.cure.controls.cover_pickup_pct.value, 2);
+    assert.deepEqual(formulaFromForm(form, formula), formula);
+  });
+
+  it('should drop the cover brine and its pick-up when the method is no longer pump', () => {
+    const { form, formula } = filled(measured);
+    form.controls.cure.controls.method.setValue('brine');
+    form.controls.cure.controls.water_pct.setValue(60);
+    const back = formulaFromForm(form, formula);
+    assert.ok(back.kind === 'cure');
+    assert.equal(back.cover_brine, undefined);
+    assert.deepEqual(back.brine, { water_pct: 60 });
+  });
+});

@@ -1,4 +1,5 @@
 import type {
+  CureFormula,
   CureIngredient,
   Formula,
   MixFormula,
@@ -33,7 +34,12 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
         cure.method === 'brine'
           ? { water_pct: cure.water_pct }
           : cure.method === 'pump'
-            ? { pump_pct: cure.pump_pct, cover_pct: cure.cover_pct, extra_pct: cure.extra_pct }
+            ? {
+                pump_pct: cure.pump_pct,
+                cover_pct: cure.cover_pct,
+                cover_pickup_pct: cure.cover_pickup_pct,
+                extra_pct: cure.extra_pct,
+              }
             : undefined;
       const hold = {
         ...(cure.holdRule === 'default' ? {} : { [cure.holdRule]: cure.holdRate }),
@@ -47,6 +53,8 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
         product: cure.product,
         species: speciesFromChoices(cure.species),
         brine: brine && compact(brine),
+        // The cover brine's own make-up is edited as YAML; it belongs to a pump cure only.
+        cover_brine: cure.method === 'pump' ? (base as CureFormula).cover_brine : undefined,
         ingredients: rows.map((row) =>
           ingredientOf(row, ['nitrite', 'salt', 'accelerator']),
         ) as unknown as CureIngredient[],
