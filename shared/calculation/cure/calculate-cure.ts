@@ -34,7 +34,7 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
     nitrate: outcome.ppm('nitrate'),
     accelerator: outcome.ppm('accelerator'),
   };
-  const { checks, warnings: checkWarnings } = checkIngoingLevels(rule, levels);
+  const checks = checkIngoingLevels(rule, levels);
 
   const hold = estimateHold(formula.hold, formula.method, {
     thicknessMm: batch.thickness,
@@ -42,7 +42,6 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
   });
   const warnings = [
     ...outcome.warnings,
-    ...checkWarnings,
     ...concentrationWarnings(formula),
     ...smallCuringSaltWarnings(outcome),
   ];
