@@ -30,7 +30,11 @@ export { parseYamlWithinLimits, type GuardedYaml } from './formula/parse-yaml.ts
 export { checkLibrary, formulaLibrary, type LibraryFile } from './formula/check-library.ts';
 export { FORMULA_SCHEMA } from './validation/formula-validator.ts';
 export type * from './calculation/calc-result.ts';
-export { failsCriticalLimit } from './calculation/calc-result.ts';
+export {
+  criticalFailures,
+  failsCriticalLimit,
+  isCriticalFailure,
+} from './calculation/calc-result.ts';
 export type { BatchInput } from './calculation/batch-input.ts';
 export { BatchError } from './calculation/batch-error.ts';
 export {

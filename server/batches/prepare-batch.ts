@@ -1,4 +1,4 @@
-import type { RawBatchOptions, UnitSystem } from '../../shared/index.ts';
+import { criticalFailures, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import { calculateBatch } from '../calc/calc-request.ts';
 import type { CurrentFormula } from '../formulas/formula-store.ts';
 import { AppError } from '../http/app-error.ts';
@@ -17,7 +17,8 @@ export interface RecordRequest {
 
 /**
  * Calculates a batch on the server from the formula as it is now and turns it into what is
- * stored. A batch that fails a critical limit (a cure over its nitrite ceiling) is refused here,
+ * stored. A batch that fails any critical check (a cure over its nitrite ceiling, or pumped bacon
+ * short of its required erythorbate) is refused here,
  * before anything is written.
  * @param today the recorder's today, YYYY-MM-DD: the start day when the request gives none, and
  *   the middle of the days a start may lie in (a year either side)
@@ -36,8 +37,8 @@ export function prepareBatch(
   const result = calculateBatch(formula, inputs, units, today);
   // calculateBatch has refused an assembly already (400): it is planned, never one batch.
   if (formula.kind === 'assembly') throw new Error('an assembly is not a batch');
-  const failed = result.checks.filter((check) => check.critical && check.status === 'fail');
   if (result.critical) {
+    const failed = criticalFailures(result.checks);
     throw new AppError(
       422,
       'critical-limit',

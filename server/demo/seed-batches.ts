@@ -77,9 +77,10 @@ function demoBatches(): DemoBatch[] {
   batches.push({
     formula: 'maple-pump-belly',
     day: -8,
-    // Under-pumped (9.4 %): legal, but short of the erythorbate pumped bacon must carry.
-    batch: { meat: '5 kg', pumpedWeight: '5.47 kg' },
-    notes: 'Injector needle clogged halfway; left under-pumped rather than re-injected.',
+    // Re-injected to the full 10 % pump: at 9.4 % it would carry 517 ppm erythorbate, short of the
+    // 550 ppm pumped bacon must carry (9 CFR 424.22(b)), and be refused.
+    batch: { meat: '5 kg', pumpedWeight: '5.5 kg' },
+    notes: 'Injector needle clogged halfway; cleared it and re-injected to the target weight.',
   });
   const discarded = batches.find((b) => b.formula === 'brisket-brine' && b.day === -18);
   if (discarded)

@@ -1,5 +1,5 @@
 import type { BatchSummary } from '../../shared/api/batch-record.ts';
-import { addDays, type PresentedResult } from '../../shared/index.ts';
+import { addDays, criticalFailures, type PresentedResult } from '../../shared/index.ts';
 import { drawQrCode, qrMatrix, QUIET_ZONE_MODULES } from './qr-code.ts';
 import { finishSheet, openSheet } from './sheet-document.ts';
 import { BODY, INK, SMALL, TICK, type SheetLayout } from './sheet-layout.ts';
@@ -144,7 +144,7 @@ function header(
 
 /** The refusal, in a red box that cannot be missed, with the checks that failed. */
 function refusal(layout: SheetLayout, result: PresentedResult): void {
-  const failed = result.checks.filter((check) => check.critical && check.verdict === 'FAIL');
+  const failed = criticalFailures(result.checks);
   const lines = [
     'No amounts are printed, so nothing is weighed from this sheet.',
     ...failed.map((check) => `${check.label}: ${check.sentence}`),

@@ -57,6 +57,8 @@ export interface LimitCheck {
   readonly value: Decimal;
   readonly unit: 'ppm' | 'percent';
   readonly limit: Decimal;
+  /** The limit in the rule's own words where it states a ratio: "¼ oz per 100 lb chopped meat". */
+  readonly limitBasis?: string;
   /** at-most: a ceiling; at-least: a floor. */
   readonly comparison: 'at-most' | 'at-least';
   readonly status: CheckStatus;
@@ -119,7 +121,25 @@ export interface CalcResult {
   readonly notes?: string;
 }
 
+/**
+ * The one rule for refusing a batch: a critical check that failed, whatever it compares (a ceiling
+ * exceeded or a required level not met). Works on calculated and presented checks alike.
+ */
+export function isCriticalFailure(check: {
+  readonly critical: boolean;
+  readonly status: CheckStatus;
+}): boolean {
+  return check.critical && check.status === 'fail';
+}
+
+/** The checks that refuse the batch, in their order. */
+export function criticalFailures<
+  T extends { readonly critical: boolean; readonly status: CheckStatus },
+>(checks: readonly T[]): T[] {
+  return checks.filter(isCriticalFailure);
+}
+
 /** Whether a result failed a critical limit and must be refused. */
 export function failsCriticalLimit(result: CalcResult): boolean {
-  return result.checks.some((check) => check.critical && check.status === 'fail');
+  return result.checks.some(isCriticalFailure);
 }

@@ -100,4 +100,51 @@ describe('presentResult', () => {
     assert.match(check.sentence, /200\.0 ppm \(200\.0006 unrounded\) is over the 200 ppm limit/);
     assert.equal(presentResult(over, 'metric').critical, true);
   });
+
+  it('should print the comminuted ceiling as the ratio it is, and say 156.25 meets it', () => {
+    // source: 9 CFR 424.21(c) "¼ oz to 100 lb chopped meat" = 0.25 / 1600 × 10⁶ = 156.25 ppm;
+    // 0.25 % of a 6.25 % mix is the same 156.25 ppm, which prints as 156.3 to 0.1 ppm
+    const sausage = calculateCure(
+      {
+        ...BELLY,
+        product: 'comminuted',
+        ingredients: [{ name: 'curing salt', pct: 0.25, nitrite: 6.25, salt: 93.75 }],
+      },
+      { meat: new Decimal(10_000) },
+    );
+    const presented = presentResult(sausage, 'metric');
+    const check = presented.checks[0];
+    assert.equal(check.verdict, 'PASS');
+    assert.equal(check.limit, '156.25 ppm');
+    assert.match(
+      check.sentence,
+      /^156\.3 ppm \(156\.25 unrounded\) is within the 156\.25 ppm limit \(¼ oz per 100 lb chopped meat\) for comminuted/,
+    );
+    assert.equal(presented.critical, false);
+  });
+
+  it('should refuse pumped bacon without its erythorbate and say the required level is not met', () => {
+    // source: 9 CFR 424.22(b): pumped bacon 120 ppm nitrite with 550 ppm ascorbate or erythorbate
+    const bacon = calculateCure(
+      {
+        ...BELLY,
+        method: 'pump',
+        brine: { pump_pct: 10 },
+        ingredients: [
+          { name: 'salt', pct: 1.5, salt: 100 },
+          { name: 'curing salt', pct: 0.192, nitrite: 6.25, salt: 93.75 },
+        ],
+      },
+      { meat: new Decimal(5000) },
+    );
+    const presented = presentResult(bacon, 'metric');
+    const accelerator = presented.checks.find((c) => c.id === 'accelerator-required');
+    assert.equal(accelerator?.verdict, 'FAIL');
+    assert.match(
+      accelerator?.sentence ?? '',
+      /^critical limit not met: 0\.0 ppm is below the 550 ppm required for pumped bacon/,
+    );
+    assert.equal(presented.critical, true);
+    assert.deepEqual(presented.groups, []);
+  });
 });

@@ -17,7 +17,8 @@ import {
   type ScaleAmount,
   type UnitSystem,
 } from '../units/scale-amount.ts';
-import { formatFigure, formatMass, formatPercent, formatPpm } from './format-figure.ts';
+import { limitFigure, shownValue, valueBesideLimit } from './check-figures.ts';
+import { formatFigure, formatMass, formatPercent } from './format-figure.ts';
 import type {
   PresentedCheck,
   PresentedFigure,
@@ -99,28 +100,26 @@ function presentFigure(figure: Figure, system: UnitSystem): PresentedFigure {
 }
 
 function presentCheck(check: LimitCheck): PresentedCheck {
-  const shown = check.unit === 'ppm' ? formatPpm(check.value) : formatPercent(check.value);
-  const limit =
-    check.unit === 'ppm' ? `${check.limit.toString()} ppm` : `${check.limit.toString()} %`;
-  // When rounding makes the value look equal to the limit, show the exact figure that decided.
-  const looksEqual =
-    new Decimal(shown.split(' ')[0]).equals(check.limit) && check.status !== 'pass';
-  const value = looksEqual
-    ? `${shown} (${check.value.toDecimalPlaces(4).toString()} unrounded)`
-    : shown;
+  const shown = shownValue(check);
+  const limit = limitFigure(check);
+  // The rule's own ratio, where it states one: "(¼ oz per 100 lb chopped meat)".
+  const basis = check.limitBasis ? ` (${check.limitBasis})` : '';
+  const value = valueBesideLimit(check);
   const verdict = check.status === 'pass' ? 'PASS' : check.status === 'fail' ? 'FAIL' : 'WARN';
   let sentence: string;
   if (check.comparison === 'at-most') {
-    sentence =
-      check.status === 'pass'
-        ? `${value} is within the ${limit} limit for ${check.rule}`
-        : `${check.critical ? 'critical limit exceeded: ' : ''}${value} is over the ${limit} limit for ${check.rule}`;
+    if (check.status === 'pass')
+      sentence = `${value} is within the ${limit} limit${basis} for ${check.rule}`;
+    else if (check.status === 'warn')
+      sentence = `${value} is over ${limit}${basis} for ${check.rule}`;
+    else
+      sentence = `${check.critical ? 'critical limit exceeded: ' : ''}${value} is over the ${limit} limit${basis} for ${check.rule}`;
   } else if (check.status === 'pass') {
-    sentence = `${value} meets the ${limit} minimum for ${check.rule}`;
+    sentence = `${value} meets the ${limit} minimum${basis} for ${check.rule}`;
   } else if (check.status === 'warn') {
-    sentence = `${value} is below the usual minimum of ${limit} for ${check.rule}`;
+    sentence = `${value} is below the usual minimum of ${limit}${basis} for ${check.rule}`;
   } else {
-    sentence = `${value} is below the ${limit} required for ${check.rule}`;
+    sentence = `${check.critical ? 'critical limit not met: ' : ''}${value} is below the ${limit}${basis} required for ${check.rule}`;
   }
   return {
     id: check.id,

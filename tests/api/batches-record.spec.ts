@@ -139,6 +139,25 @@ describe('recording a batch', () => {
     assert.equal(await auditCount(server, 'batch-record'), auditsBefore);
   });
 
+  it('should refuse pumped bacon short of its erythorbate with 422, though no ceiling is exceeded', async (t) => {
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
+    const before = await batchCount(server);
+    // 5 kg pumped to 5.47 kg is a 9.4 % pump: the brine's 0.055 % erythorbate (550 ppm at 10 %)
+    // gives 550 × 9.4/10 = 517 ppm, short of the 550 ppm pumped bacon must carry.
+    // source: 9 CFR 424.22(b); FSIS 7620.3 ch. 3 (pumped formula)
+    const response = await server.as('tobin').post('/api/batches', {
+      formula: 'maple-pump-belly',
+      batch: { meat: '5kg', pumpedWeight: '5.47kg' },
+    });
+    assert.equal(response.status, 422, response.text);
+    assert.equal(response.json.error.code, 'critical-limit');
+    assert.equal(response.json.error.details.length, 1);
+    assert.equal(response.json.error.details[0].check, 'accelerator-required');
+    assert.equal(response.json.error.details[0].value, '517');
+    assert.match(response.json.error.details[0].sentence, /critical limit not met/);
+    assert.equal(await batchCount(server), before);
+  });
+
   it('should give 20 concurrent records 20 distinct lot codes, all stored', async (t) => {
     const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const before = await batchCount(server);

@@ -333,3 +333,49 @@ describe('larder calc refuses a batch over a critical limit (maple-pump-belly pu
     );
   });
 });
+
+describe('larder calc refuses a batch that fails a critical check that is not a ceiling', () => {
+  it('exits 4 for pumped bacon under-pumped below its 550 ppm erythorbate', async () => {
+    const run = await runLarder([
+      'calc',
+      'maple-pump-belly',
+      '--meat',
+      '5kg',
+      '--pumped-weight',
+      '5.47kg',
+      '--start',
+      START,
+    ]);
+    assertExit(run, 4);
+    assert.equal(run.stdout.trimEnd().split('\n').at(-1), REFUSED_BANNER);
+    // own example, derived: (5.47 − 5) / 5 = 9.4 % pump; the brine is made for 10 %, where its
+    // 0.055 % erythorbate is 550 ppm, so at 9.4 %: 550 × 9.4/10 = 517 ppm, short of the 550 ppm
+    // pumped bacon must carry. source: 9 CFR 424.22(b); FSIS 7620.3 ch. 3 (pumped formula)
+    assert.match(
+      run.stdout,
+      /FAIL\s+Sodium ascorbate or erythorbate: critical limit not met: 517\.0 ppm is below the 550 ppm required for pumped bacon/,
+    );
+    assert.ok(!run.stdout.includes('← curing salt'), 'no curing-salt line');
+  });
+});
+
+describe('larder calc on the hot links at the label rate (0.25 % of a 6.25 % curing salt)', () => {
+  it('passes: 156.25 ppm is exactly ¼ oz per 100 lb of chopped meat', async () => {
+    const run = await runLarder(['calc', 'hot-link-cure', '--meat', '10kg', '--json']);
+    assertExit(run, 0);
+    const result = stdoutJson<PresentedResult>(run);
+    const nitrite = checkById(result, 'nitrite-max');
+    // source: 9 CFR 424.21(c) "¼ oz to 100 lb chopped meat": 0.25 / 1600 × 10^6 = 156.25 ppm; the
+    // batch: 0.25 % × 6.25 % × 10^6 = 156.25 ppm (USDA FSIS Directive 7620.3, ch. 3)
+    assert.equal(nitrite.exact, '156.25');
+    assert.equal(nitrite.limit, '156.25 ppm');
+    assert.equal(nitrite.status, 'pass');
+    assert.match(
+      nitrite.sentence,
+      /^156\.3 ppm \(156\.25 unrounded\) is within the 156\.25 ppm limit \(¼ oz per 100 lb chopped meat\)/,
+    );
+    // 10 000 g × 0.25 % = 25 g of curing salt, to 0.1 g
+    assert.equal(curingSaltLine(result).amount, '25.0 g');
+    assert.equal(result.critical, false);
+  });
+});

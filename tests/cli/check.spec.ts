@@ -1,5 +1,5 @@
 import assert from 'node:assert/strict';
-import { readdirSync } from 'node:fs';
+import { readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
 import {
@@ -76,6 +76,24 @@ describe('larder check on files with problems', () => {
     assert.match(run.stdout, /250\.0 ppm is over 200 ppm for dry-cured bacon/);
     // The problem points at the ingredients, line 7 of the file. own example, derived
     assert.match(run.stdout, new RegExp(`^${escapeRegExp(file)}:7:1: error: `, 'm'));
+    assert.match(
+      run.stdout,
+      /^Checked 1 formula file\(s\): 0 ok, 1 with errors, 0 warning\(s\)\.$/m,
+    );
+  });
+
+  it('fails pumped bacon without its required erythorbate with exit 3, as an error', async (t) => {
+    const maple = readFileSync(path.join(REPO_ROOT, 'formulas', 'maple-pump-belly.yaml'), 'utf8');
+    const without = maple.replace(/^ {2}- \{ name: sodium erythorbate.*\n/m, '');
+    assert.notEqual(without, maple);
+    const file = writeText(makeTempDir(t), 'maple.yaml', without);
+    const run = await runLarder(['check', file]);
+    assertExit(run, 3);
+    // source: 9 CFR 424.22(b), 550 ppm ascorbate or erythorbate required in pumped bacon
+    assert.match(
+      run.stdout,
+      /error: critical limit not met: sodium ascorbate or erythorbate 0\.0 ppm is under the 550 ppm required for pumped bacon/,
+    );
     assert.match(
       run.stdout,
       /^Checked 1 formula file\(s\): 0 ok, 1 with errors, 0 warning\(s\)\.$/m,

@@ -64,14 +64,14 @@ describe('calculateCure', () => {
       assert.equal(max.critical, true);
     });
 
-    it('should hold comminuted products to 156 ppm, the figure printed in the handbook', () => {
-      // source: FSIS 7620.3 ch. 3 prints 156 ppm for ¼ oz per 100 lb (9 CFR 424.21(c)), which is 156.25 by arithmetic;
-      // check-values caveat 5: compare with the printed integer
+    it('should hold comminuted products to ¼ oz per 100 lb exactly, passing the 0.25 % label rate', () => {
+      // source: 9 CFR 424.21(c) "¼ oz to 100 lb chopped meat" = 0.25 / 1600 × 10⁶ = 156.25 ppm (the
+      // handbook, FSIS 7620.3 ch. 3, prints the rounded 156)
       const sausage = cure({ product: 'comminuted', ingredients: [{ ...CURING_SALT, pct: 0.25 }] });
       const result = calculateCure(sausage, { meat: d(10_000) });
       assert.equal(check(result, 'nitrite-max').value.toString(), '156.25');
-      assert.equal(check(result, 'nitrite-max').limit.toString(), '156');
-      assert.equal(check(result, 'nitrite-max').status, 'fail');
+      assert.equal(check(result, 'nitrite-max').limit.toString(), '156.25');
+      assert.equal(check(result, 'nitrite-max').status, 'pass');
     });
 
     it('should allow 625 ppm for dry-cured products other than bacon', () => {
@@ -246,12 +246,12 @@ describe('calculateCure', () => {
       assert.ok(result.warnings.some((w) => w.includes('12.0 % pump')));
     });
 
-    it('should fail the rule, without refusing, when pumped bacon lacks erythorbate', () => {
+    it('should refuse pumped bacon that lacks erythorbate, as a critical limit', () => {
       // source: 9 CFR 424.22(b) requires 550 ppm sodium ascorbate or erythorbate in pumped bacon (C-4)
       const without = cure({ ...pumpedBacon, ingredients: pumpedBacon.ingredients.slice(0, 2) });
       const accelerator = check(calculateCure(without, { meat: d(1000) }), 'accelerator-required');
       assert.equal(accelerator.status, 'fail');
-      assert.equal(accelerator.critical, false);
+      assert.equal(accelerator.critical, true);
     });
 
     it('should make cover brine of the same make-up and count it with the meat (method two)', () => {

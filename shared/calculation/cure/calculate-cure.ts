@@ -40,7 +40,7 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
       accelerator: outcome.basis?.('accelerator'),
     },
   };
-  const { checks, warnings: checkWarnings } = checkIngoingLevels(rule, levels);
+  const checks = checkIngoingLevels(rule, levels);
 
   const hold = estimateHold(formula, {
     thicknessMm: batch.thickness,
@@ -49,7 +49,6 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
   });
   const warnings = [
     ...outcome.warnings,
-    ...checkWarnings,
     ...concentrationWarnings(formula),
     ...smallCuringSaltWarnings(outcome),
   ];

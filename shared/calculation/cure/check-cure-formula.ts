@@ -7,7 +7,9 @@ import {
 } from '../../formula/formula-problem.ts';
 import type { CureFormula, CureIngredient, HoldRule } from '../../formula/formula-types.ts';
 import { nitriteRuleFor } from '../../reference/nitrite-limits.ts';
+import { checkProblem } from '../../presentation/check-figures.ts';
 import { BatchError } from '../batch-error.ts';
+import { isCriticalFailure } from '../calc-result.ts';
 import { calculateCure } from './calculate-cure.ts';
 
 const SUBSTANCES = ['nitrite', 'nitrate', 'salt', 'accelerator'] as const;
@@ -29,7 +31,7 @@ const SAMPLE_GREEN_GRAMS = new Decimal(1000);
 /**
  * Checks a cure formula beyond its schema: a product and method the rules know, brine keys that
  * fit the method, ingredient make-ups that add up, one hold rate, and — on a notional batch —
- * ingoing nitrite inside its critical limit.
+ * every critical limit met (an error) and the usual ranges (warnings).
  */
 export function checkCureFormula(formula: CureFormula): ContentProblem[] {
   const problems: ContentProblem[] = [];
@@ -169,30 +171,13 @@ function checkLevels(formula: CureFormula): ContentProblem[] {
   }
   const problems: ContentProblem[] = [];
   for (const check of result.checks) {
-    const figure = `${check.value.toFixed(1)} ppm`;
-    const limit = `${check.limit.toString()} ppm`;
-    if (check.status === 'fail' && check.critical) {
-      problems.push(
-        contentError(
-          ['ingredients'],
-          `critical limit exceeded: ${lowerFirst(check.label)} ${figure} is over ${limit} for ${check.rule} (${check.source})`,
-        ),
-      );
-    } else if (check.status === 'fail') {
-      problems.push(
-        contentWarning(
-          ['ingredients'],
-          `${check.label} ${figure} is under the ${limit} required for ${check.rule} (${check.source})`,
-        ),
-      );
-    } else if (check.status === 'warn') {
-      problems.push(
-        contentWarning(
-          ['ingredients'],
-          `${lowerFirst(check.label)} ${figure} is below ${limit} (${check.source})`,
-        ),
-      );
-    }
+    if (check.status === 'pass') continue;
+    // The same rule that refuses a batch refuses the formula: any failed critical check.
+    problems.push(
+      isCriticalFailure(check)
+        ? contentError(['ingredients'], checkProblem(check))
+        : contentWarning(['ingredients'], checkProblem(check)),
+    );
   }
   return problems;
 }

@@ -4,7 +4,13 @@ import { CAUTIONS, allergenCaution } from '../../reference/cautions.ts';
 import type { Allergen } from '../../formula/formula-types.ts';
 import { collectAllergens } from '../allergens.ts';
 import { BatchError } from '../batch-error.ts';
-import { failsCriticalLimit, type CalcResult, type Caution } from '../calc-result.ts';
+import { checkProblem } from '../../presentation/check-figures.ts';
+import {
+  criticalFailures,
+  failsCriticalLimit,
+  type CalcResult,
+  type Caution,
+} from '../calc-result.ts';
 import { calculate } from '../calculate.ts';
 import { addDays, isIsoDate } from '../dates.ts';
 import { parseBatchOptions } from '../parse-batch-options.ts';
@@ -81,15 +87,9 @@ function calculateNeed(need: Need, batch: PlanBatch['batch'], today: string): Ca
     throw error;
   }
   if (failsCriticalLimit(result)) {
-    const failed = result.checks.filter((check) => check.critical && check.status === 'fail');
     throw new PlanError(
-      `${formula.id} is refused, and the plan with it: critical limit exceeded: ` +
-        failed
-          .map(
-            (check) =>
-              `${check.label.toLowerCase()} ${check.value.toFixed(1)} over ${check.limit.toString()} for ${check.rule} (${check.source})`,
-          )
-          .join('; '),
+      `${formula.id} is refused, and the plan with it: ` +
+        criticalFailures(result.checks).map(checkProblem).join('; '),
       'critical-limit',
       formula.id,
     );

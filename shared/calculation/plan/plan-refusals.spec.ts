@@ -104,7 +104,7 @@ describe('planAssembly refuses a plan that cannot be made, naming the formula', 
     assertRefused(
       () => planAssembly(BURGER, libraryOf(hot, GRIND, BUN, SAUCE), OPTIONS),
       'critical-limit',
-      /^quillmoor-belly is refused, and the plan with it: critical limit exceeded: ingoing sodium nitrite 312\.5 over 200 for dry-cured bacon/,
+      /^quillmoor-belly is refused, and the plan with it: critical limit exceeded: ingoing sodium nitrite 312\.5 ppm is over 200 ppm for dry-cured bacon/,
       'quillmoor-belly',
     );
   });

@@ -1,6 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
+import { criticalFailures } from '../../../../shared/calculation/calc-result.ts';
 import { ApiError } from '../../core/api/api-error';
 import type { Batch, PresentedResult, RawBatchOptions, RefusedCheck } from '../batch-types';
 import { messageOf } from '../formula-options';
@@ -67,9 +68,9 @@ export class BatchRecorder {
     if (refused) return refused;
     const preview = this.previewed();
     if (!preview?.critical) return null;
-    const failed = preview.checks.filter((c) => c.critical && c.status === 'fail');
+    const failed = criticalFailures(preview.checks);
     return {
-      message: 'This batch would be refused: a critical limit is exceeded.',
+      message: 'This batch would be refused: it fails a critical limit.',
       sentences: failed.map((c) => sentenceCase(c.sentence)),
       refusedByServer: false,
     };

@@ -120,14 +120,15 @@ export class FormulaPreview {
     const problems = problemsOf(error).filter((problem) => problem.severity === 'error');
     if (problems.length > 0) {
       const errors = problems.map((problem) => problem.message);
-      const refused = errors.some((message) => message.startsWith('critical limit exceeded'));
+      // "critical limit exceeded: …" or "critical limit not met: …", as the formula check words them.
+      const refused = errors.some((message) => message.startsWith('critical limit '));
       return {
         ...START,
         formulaError: true,
         errors,
         refused,
         error: refused
-          ? 'Refused: the formula itself exceeds a critical limit, so no batch of it may be made.'
+          ? 'Refused: the formula itself fails a critical limit, so no batch of it may be made.'
           : 'Nothing to calculate until the formula is fixed:',
       };
     }

@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { NgTemplateOutlet } from '@angular/common';
 import { MatIcon } from '@angular/material/icon';
+import { criticalFailures } from '../../../../shared/calculation/calc-result.ts';
 import type {
   PresentedCheck,
   PresentedFigure,
@@ -61,7 +62,5 @@ export class ResultSheet {
     return /total/i.test(label) ? label : `${label} (total)`;
   }
 
-  protected readonly failedCritical = computed(() =>
-    this.result().checks.filter((check) => check.critical && check.verdict === 'FAIL'),
-  );
+  protected readonly failedCritical = computed(() => criticalFailures(this.result().checks));
 }
