@@ -69,8 +69,8 @@ describe('plans in the console', () => {
 
     // Start days, worked back from service (formulas/*.yaml; lead days are the kitchen's own
     // rule, common practice, no source): the belly's hold is 2 days per cm × 4 cm = 8 days, plus
-    // 1 day to smoke and slice = 9 days ahead; the bun's sponge is mixed the day before; the
-    // grind and the sauce are made on the day.
+    // 2 days to rinse and dry, smoke and chill = 10 days ahead; the bun's sponge is mixed the day
+    // before; the grind and the sauce are made on the day.
     const days = await page
       .getByTestId('plan-day')
       .evaluateAll((items) =>
@@ -82,7 +82,7 @@ describe('plans in the console', () => {
         ]),
       );
     assert.deepEqual(days, [
-      [addDays(SERVICE, -9), ['quillmoor-belly']],
+      [addDays(SERVICE, -10), ['quillmoor-belly']],
       [addDays(SERVICE, -1), ['pit-bun']],
       [SERVICE, ['chuck-grind', 'house-sauce']],
     ]);
