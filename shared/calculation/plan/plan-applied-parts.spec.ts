@@ -88,6 +88,37 @@ describe('planAssembly: a part applied to another part (the rub on the brisket)'
     assert.equal(rub.start, '2026-12-16');
   });
 
+  it('should count an applied part’s own lead days back from the day it goes on', () => {
+    // A rub left a day to bloom (lead_days 1) is made the day before the brisket comes out of
+    // the brine: 2026-12-16 − 1 = 2026-12-15.
+    const rested = planAssembly(
+      SANDWICH,
+      libraryOf(BRISKET, { ...RUB, lead_days: 1 }, SANDWICH),
+      OPTIONS,
+    );
+    assert.equal(batchOf(rested, 'brisket-rub').start, '2026-12-15');
+    assert.match(batchOf(rested, 'brisket-rub').rule, /1 day before it goes on/);
+  });
+
+  it('should count the days a plan needs from the earliest start to service', () => {
+    // Service 2026-12-10: the brisket would start 2026-11-29 (11 days before); from 2026-12-02
+    // the earliest service is 2026-12-02 + 11 = 2026-12-13.
+    assert.throws(
+      () =>
+        planAssembly(SANDWICH, KITCHEN, {
+          ...OPTIONS,
+          serviceDate: '2026-12-10',
+          today: '2026-12-02',
+        }),
+      (error: unknown) =>
+        error instanceof PlanError &&
+        error.reason === 'past-start' &&
+        /^brisket-brine must start 2026-11-29, .*it needs 11 days; the earliest service this plan can make is 2026-12-13\)$/.test(
+          error.message,
+        ),
+    );
+  });
+
   it('should refuse parts applied to each other across nested assemblies', () => {
     const belly: CureFormula = { ...BELLY, lead_days: 1 };
     const one = assembly('one', [
