@@ -6,6 +6,11 @@ function heading(text: string): string[] {
   return ['', text.toUpperCase()];
 }
 
+/** A part applied to another, and the day it goes on, in words. */
+function appliedWords(part: { formula: { title: string }; date: string }): string {
+  return `${part.formula.title} on ${part.date}, when it comes out of its hold`;
+}
+
 /** One batch of the plan, compactly: what it is for, when, the batch, what to weigh, checks. */
 function batchLines(batch: PresentedPlanBatch): string[] {
   const { result } = batch;
@@ -14,6 +19,8 @@ function batchLines(batch: PresentedPlanBatch): string[] {
     `${batch.formula.title} (${batch.formula.id} · ${batch.formula.kind})`,
     ...batch.purposes.map((purpose) => `  For: ${purpose}`),
     `  When: ${batch.rule}`,
+    ...(batch.goesOn ?? []).map((on) => `  Goes on: ${appliedWords(on)}`),
+    ...(batch.gets ?? []).map((part) => `  Gets: ${appliedWords(part)}`),
     ...figureRows(result.inputs),
   ];
   for (const group of result.groups) out.push(...groupLines(group).slice(1));
@@ -29,7 +36,9 @@ function batchLines(batch: PresentedPlanBatch): string[] {
 
 function titleOf(plan: PresentedPlan, id: string): string {
   const batch = plan.batches.find((b) => b.formula.id === id);
-  return batch ? `${batch.formula.title} (${batch.formula.kind})` : id;
+  if (!batch) return id;
+  const on = (batch.goesOn ?? []).map((part) => part.formula.title);
+  return `${batch.formula.title} (${batch.formula.kind})${on.length ? `, goes on ${on.join(' and ')}` : ''}`;
 }
 
 /**

@@ -36,6 +36,19 @@ function pageHead(layout: SheetLayout, label: string, title: string, line: strin
 
 const header = (text: string) => ({ text, style: { size: SMALL, color: INK.muted } });
 
+/** A part applied to another, and its day: "Beef rub, 16 Dec 2026". */
+function appliedWords(part: { formula: { title: string }; date: string }): string {
+  return `${part.formula.title}, ${dayInWords(part.date)}, when it comes out of its hold`;
+}
+
+/** What goes on a batch and what it goes on, one line each: "Goes on: …", "Gets: …". */
+function appliedLines(batch: PresentedPlanBatch): string[] {
+  return [
+    ...(batch.goesOn ?? []).map((on) => `Goes on: ${appliedWords(on)}`),
+    ...(batch.gets ?? []).map((part) => `Gets: ${appliedWords(part)}`),
+  ];
+}
+
 /** The first page: every day and batch, the pull list, allergens, warnings and cautions. */
 function overview(layout: SheetLayout, plan: PresentedPlan): void {
   pageHead(
@@ -59,7 +72,7 @@ function overview(layout: SheetLayout, plan: PresentedPlan): void {
         { text: dayInWords(batch.start), style: { weight: 'semibold' } },
         `${batch.result.formula.title} (${batch.formula.id})`,
         dayInWords(batch.ready),
-        batch.purposes.join('; '),
+        [...batch.purposes, ...appliedLines(batch)].join('; '),
       ],
     })),
   );
@@ -110,6 +123,7 @@ function daySheet(
   for (const batch of batches) {
     subheading(layout, `${batch.result.formula.title} · ${kindWords(batch.formula.kind)}`, 80);
     for (const purpose of batch.purposes) layout.paragraph(`For: ${purpose}`);
+    for (const line of appliedLines(batch)) layout.paragraph(line, { weight: 'semibold' });
     layout.paragraph(`When: ${batch.rule}`, { size: SMALL, color: INK.muted });
     layout.paragraph(
       `Ready ${dayInWords(batch.ready)}. Lot code (from Larderbook, once recorded): ______________`,

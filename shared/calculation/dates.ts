@@ -11,3 +11,9 @@ export function addDays(isoDate: string, days: number): string {
   date.setUTCDate(date.getUTCDate() + days);
   return date.toISOString().slice(0, 10);
 }
+
+/** Whole calendar days from one ISO date to another: negative when `to` comes first. */
+export function daysBetween(from: string, to: string): number {
+  const DAY_MS = 86_400_000;
+  return Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / DAY_MS);
+}

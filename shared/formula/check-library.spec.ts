@@ -75,7 +75,7 @@ describe('the assembly schema', () => {
     );
     assert.deepEqual(reading.problems.map(formatProblem), [
       'plate.yaml:6:7: error: "formula" must be a formula id: lower-case letters, digits and dashes, e.g. "chuck-grind", not "House_Sauce" (at components[1].formula)',
-      'plate.yaml:6:43: error: unknown key "spoons" (allowed here: formula, portions, pieces, slices, slice, amount, units, thickness, largest_piece) (at components[1].spoons)',
+      'plate.yaml:6:43: error: unknown key "spoons" (allowed here: formula, portions, pieces, slices, slice, amount, units, on, pct, thickness, largest_piece) (at components[1].spoons)',
     ]);
     const late = readFormula(`${SAUCE}lead_days: 61\n`, 'house-sauce.yaml');
     assert.deepEqual(late.problems.map(formatProblem), [

@@ -221,6 +221,10 @@ export interface AssemblyComponent {
   amount?: string;
   /** Another assembly: units of it per unit of this one. */
   units?: number;
+  /** A part applied to another part of this assembly: the id of the cure it goes on. */
+  on?: string;
+  /** With `on`: this part's weight as a percent of the green weight of the part it goes on. */
+  pct?: number;
   /** Cure: thickness of the thickest piece, for a per-cm or per-inch hold rule. */
   thickness?: string;
   /** Cure: weight of the heaviest piece, for a per-kg or per-lb hold rule. */

@@ -41,7 +41,9 @@ export function limitInWords(check: LimitCheck): string {
  * A check that is not critical reads the same without the headline.
  */
 export function checkProblem(check: LimitCheck): string {
-  const figure = `${check.label.toLowerCase()} ${valueBesideLimit(check)}`;
+  // The label follows other words: its first letter in lower case, the rest (FSIS…) as written.
+  const label = check.label.charAt(0).toLowerCase() + check.label.slice(1);
+  const figure = `${label} ${valueBesideLimit(check)}`;
   const limit = limitInWords(check);
   const because = `for ${check.rule} (${check.source})`;
   let sentence: string;

@@ -1,4 +1,5 @@
-import { Decimal, sum } from '../decimal.ts';
+import type { Decimal} from '../decimal.ts';
+import { sum } from '../decimal.ts';
 import { allergenName } from '../calculation/allergens.ts';
 import {
   failsCriticalLimit,

@@ -1,4 +1,5 @@
 import type { RawBatchOptions } from '../calculation/batch-input.ts';
+import type { AppliedPart } from '../calculation/plan/plan-types.ts';
 import type { BatchKind } from '../formula/formula-types.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 import type { PresentedResult } from './presented-result.ts';
@@ -46,6 +47,10 @@ export interface PresentedPlanBatch {
   readonly leadDays: number;
   /** How the start day was worked out, in words. */
   readonly rule: string;
+  /** A part applied to others (a rub): the parts it goes on, each with the day it goes on. */
+  readonly goesOn?: readonly AppliedPart[];
+  /** The parts applied to this one (the rub on a brisket), each with the day it goes on. */
+  readonly gets?: readonly AppliedPart[];
   readonly result: PresentedResult;
 }
 

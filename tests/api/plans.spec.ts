@@ -17,12 +17,13 @@ describe('POST /api/plans', () => {
     const answer = await server().as('imke').post('/api/plans', BURGERS);
     assert.equal(answer.status, 200, answer.text);
     const plan = answer.json;
-    // Belly: 8-day hold + 1 lead day; bun: sponge the evening before; grind and sauce on the
-    // day. source: the demo formulas' hold rule (2 days per cm × 4 cm) and lead days
+    // Belly: 8-day hold + 2 lead days (rinse and dry, smoke and chill); bun: sponge the evening
+    // before; grind and sauce on the day. source: the demo formulas' hold rule (2 days per cm ×
+    // 4 cm) and lead days (common practice, no source)
     assert.deepEqual(
       plan.batches.map((b: { start: string; formula: { id: string } }) => [b.start, b.formula.id]),
       [
-        [addDays(SERVICE, -9), 'quillmoor-belly'],
+        [addDays(SERVICE, -10), 'quillmoor-belly'],
         [addDays(SERVICE, -1), 'pit-bun'],
         [SERVICE, 'house-sauce'],
         [SERVICE, 'chuck-grind'],
@@ -111,7 +112,7 @@ describe('POST /api/plans', () => {
     assert.deepEqual(
       batches.map((b) => [b.startedOn, b.status]),
       [
-        [addDays(SERVICE, -9), 'planned'],
+        [addDays(SERVICE, -10), 'planned'],
         [addDays(SERVICE, -1), 'planned'],
         [SERVICE, 'planned'],
         [SERVICE, 'planned'],

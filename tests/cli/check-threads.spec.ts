@@ -50,13 +50,13 @@ const BAD: Readonly<Record<string, { text: string; problem: Expected }>> = {
     text: dryBaconWith('pct: 0.25', 'pct: 0.4').replace('test-bacon', 'bad-c'),
     problem: { line: 7, column: 1, message: /250\.0 ppm is over 200 ppm for dry-cured bacon/ },
   },
-  // An assembly whose second component (line 9; its `formula:` key at column 7) names no formula
-  // of the folder: found by the library check, after the readings are gathered.
+  // An assembly whose second component (line 11, under its comment; its `formula:` key at column
+  // 7) names no formula of the folder: found by the library check, after the readings are gathered.
   'f00301.yaml': {
     text: demoText('corned-beef-sandwich.yaml')
       .replace('id: corned-beef-sandwich', 'id: bad-sandwich')
       .replace('formula: brisket-rub', 'formula: no-such-rub'),
-    problem: { line: 9, column: 7, message: /^no formula "no-such-rub" among the formulas/ },
+    problem: { line: 11, column: 7, message: /^no formula "no-such-rub" among the formulas/ },
   },
 };
 

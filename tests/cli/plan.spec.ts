@@ -31,10 +31,11 @@ describe('larder plan', () => {
   it('should print each start day, the pull list and the allergens of 120 burgers', async () => {
     const run = await runLarder([...BURGER, ...TODAY]);
     assertExit(run, 0);
-    // The belly holds 2 days per cm × 4 cm = 8 days, then 1 lead day for smoking and slicing:
-    // 18 Dec − 9 = 9 Dec. The bun's sponge is mixed the evening before: 17 Dec. Grind and sauce
-    // are made on the day. source: the demo formulas' hold rule and lead days
-    assert.match(run.stdout, /2026-12-09 {2}Quillmoor belly/);
+    // The belly holds 2 days per cm × 4 cm = 8 days, then 2 lead days (rinse and dry overnight,
+    // smoke and chill overnight): 18 Dec − 10 = 8 Dec. The bun's sponge is mixed the evening
+    // before: 17 Dec. Grind and sauce are made on the day. source: the demo formulas' hold rule
+    // and lead days (common practice, no source)
+    assert.match(run.stdout, /2026-12-08 {2}Quillmoor belly/);
     assert.match(run.stdout, /2026-12-17 {2}Milk and honey bun/);
     assert.match(
       run.stdout,
@@ -58,7 +59,7 @@ describe('larder plan', () => {
     assertExit(run, 0);
     const plan = stdoutJson<PresentedPlan>(run);
     assert.deepEqual(plan.days, [
-      { date: '2026-12-09', formulas: ['quillmoor-belly'] },
+      { date: '2026-12-08', formulas: ['quillmoor-belly'] },
       { date: '2026-12-17', formulas: ['pit-bun'] },
       { date: '2026-12-18', formulas: ['house-sauce', 'chuck-grind'] },
     ]);
@@ -79,9 +80,9 @@ describe('larder plan', () => {
       '2026-12-05',
       ...TODAY,
     ]);
-    assertCleanFailure(run, 2, /quillmoor-belly must start 2026-11-26, already past/);
-    // 2 Dec + 9 days = 11 Dec.
-    assert.match(run.stderr, /earliest service this plan can make is 2026-12-11/);
+    // 5 Dec − (8 hold + 2 lead) days = 25 Nov; 2 Dec + 10 days = 12 Dec.
+    assertCleanFailure(run, 2, /quillmoor-belly must start 2026-11-25, already past/);
+    assert.match(run.stderr, /earliest service this plan can make is 2026-12-12/);
   });
 
   it('should refuse a batch formula, a missing part and a circle of assemblies', async (t) => {
@@ -149,7 +150,7 @@ describe('larder plan', () => {
     // A recorded plan starts from this machine's today: --today is refused with --record.
     const pretend = await runLarder([...BURGER, ...TODAY, '--record'], { env });
     assertCleanFailure(pretend, 2, /--today cannot be used with --record/);
-    // Far enough ahead for the belly's 8 hold days and its day of smoking.
+    // Far enough ahead for the belly's 8 hold days and its 2 days of smoking and chilling.
     const service = addDays(today(), 16);
     const recorded = await runLarder(
       ['plan', 'smokehouse-burger', '--count', '120', '--for', service, '--record', '--json'],
@@ -159,9 +160,9 @@ describe('larder plan', () => {
     const { batches } = stdoutJson<{
       batches: { lotCode: string; status: string; startedOn: string }[];
     }>(recorded);
-    // Belly 8 + 1 days before service, the bun 1 day before, grind and sauce on the day.
+    // Belly 8 + 2 days before service, the bun 1 day before, grind and sauce on the day.
     // source: the demo formulas' hold and lead days
-    const belly = addDays(service, -9);
+    const belly = addDays(service, -10);
     assert.deepEqual(
       batches.map((b) => `${b.startedOn} ${b.status}`),
       [belly, addDays(service, -1), service, service].map((day) => `${day} planned`),

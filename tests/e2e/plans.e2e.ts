@@ -69,8 +69,8 @@ describe('plans in the console', () => {
 
     // Start days, worked back from service (formulas/*.yaml; lead days are the kitchen's own
     // rule, common practice, no source): the belly's hold is 2 days per cm × 4 cm = 8 days, plus
-    // 1 day to smoke and slice = 9 days ahead; the bun's sponge is mixed the day before; the
-    // grind and the sauce are made on the day.
+    // 2 days to rinse and dry, smoke and chill = 10 days ahead; the bun's sponge is mixed the day
+    // before; the grind and the sauce are made on the day.
     const days = await page
       .getByTestId('plan-day')
       .evaluateAll((items) =>
@@ -82,7 +82,7 @@ describe('plans in the console', () => {
         ]),
       );
     assert.deepEqual(days, [
-      [addDays(SERVICE, -9), ['quillmoor-belly']],
+      [addDays(SERVICE, -10), ['quillmoor-belly']],
       [addDays(SERVICE, -1), ['pit-bun']],
       [SERVICE, ['chuck-grind', 'house-sauce']],
     ]);
@@ -174,7 +174,7 @@ describe('plans in the console', () => {
   it('should show why a plan cannot be made, naming the formula', async (t) => {
     const session = await startConsole(t);
     const page = await session.page('tobin');
-    // Service in 3 days: the belly would have to start 6 days ago.
+    // Service in 3 days: the belly (8 days' hold + 2 lead days) would have to start 7 days ago.
     await page.goto(
       `${session.server.url}/plans?assembly=smokehouse-burger&count=120&for=${addDays(TODAY, 3)}`,
       { waitUntil: 'networkidle' },
@@ -205,10 +205,14 @@ describe('plans in the console', () => {
     assert.equal(await parts.nth(2).getByTestId('part-slice').inputValue(), '25 g');
     assert.equal(await parts.nth(2).getByTestId('part-thickness').inputValue(), '4 cm');
 
-    // A dough is counted in pieces or by finished weight, nothing else.
+    // A dough is counted in pieces or by finished weight, or applied to another part by percent.
     await parts.nth(1).getByTestId('part-quantity').focus();
     await page.keyboard.press('Enter');
-    assert.deepEqual(await page.getByRole('option').allInnerTexts(), ['Pieces', 'Finished weight']);
+    assert.deepEqual(await page.getByRole('option').allInnerTexts(), [
+      'Pieces',
+      'Finished weight',
+      '% of the part it goes on',
+    ]);
     await page.keyboard.press('Escape');
 
     // The preview plans 10 burgers two weeks ahead: 10 × 2 = 20 portions of the grind.

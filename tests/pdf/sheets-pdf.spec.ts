@@ -32,6 +32,22 @@ const BELLY_FIGURES = [
   /8 days/,
 ];
 
+/** `larder plan ASSEMBLY --pdf` for service on 2026-12-18, planned 2026-12-02: the PDF's text. */
+async function planPdf(
+  t: { after(fn: () => unknown): void },
+  assembly: string,
+  count: number,
+): Promise<Awaited<ReturnType<typeof pdfText>>> {
+  const file = path.join(makeTempDir(t), `${assembly}.pdf`);
+  const run = await runLarder([
+    ...['plan', assembly, '--count', String(count), '--for', '2026-12-18'],
+    ...['--today', '2026-12-02', '--pdf', file],
+  ]);
+  assertExit(run, 0);
+  assert.ok(existsSync(file));
+  return pdfText(readFileSync(file));
+}
+
 /** GET or POST a PDF from the API with Basic auth; the raw bytes. */
 async function fetchPdf(
   server: TestServer,
@@ -199,16 +215,17 @@ describe('sheets as PDF from the API', () => {
 
   it('should print a plan as an overview and one production sheet per start day', async (t) => {
     const server = await startTestServer(t);
-    // Far enough ahead that the belly's 8-day hold and its day of smoking fit before service.
+    // Far enough ahead that the belly's 8-day hold and its 2 days of smoking fit before service.
     const service = addDays(new Date().toISOString().slice(0, 10), 30);
     const request = { assembly: 'smokehouse-burger', count: 120, for: service };
     const pdf = await fetchPdf(server, '/api/plans/sheet.pdf', request);
     assert.equal(pdf.status, 200);
     assert.equal(pdf.type, 'application/pdf');
     const sheet = await pdfText(pdf.bytes);
-    // Belly starts 8 + 1 days before service, the bun (sponge) 1 day before, the grind and
-    // sauce on the day: three start days. source: the demo formulas' hold and lead days
-    const days = [addDays(service, -9), addDays(service, -1), service];
+    // Belly starts 8 + 2 days before service (hold, then rinse and dry, smoke and chill), the
+    // bun (sponge) 1 day before, the grind and sauce on the day: three start days.
+    // source: the demo formulas' hold and lead days (common practice, no source)
+    const days = [addDays(service, -10), addDays(service, -1), service];
     // Each day's sheet starts a page of its own, headed "DAY n OF 3"; it may run onto more.
     const starts = sheet.pages.flatMap((page, i) =>
       /PRODUCTION SHEET · DAY/.test(page) ? [i] : [],
@@ -240,25 +257,20 @@ describe('sheets as PDF from the API', () => {
   });
 
   it('should write a plan’s PDF from larder plan --pdf', async (t) => {
-    const file = path.join(makeTempDir(t), 'plan.pdf');
-    const run = await runLarder([
-      'plan',
-      'smokehouse-burger',
-      '--count',
-      '120',
-      '--for',
-      '2026-12-18',
-      '--today',
-      '2026-12-02',
-      '--pdf',
-      file,
-    ]);
-    assertExit(run, 0);
-    assert.ok(existsSync(file));
-    const sheet = await pdfText(readFileSync(file));
-    // 18 Dec − 9 days = 9 Dec for the belly; 17 Dec for the bun; 18 Dec for grind and sauce.
-    assert.match(sheet.all, /DAY 1 OF 3 Start 9 Dec 2026/);
+    const sheet = await planPdf(t, 'smokehouse-burger', 120);
+    // 18 Dec − (8 hold + 2 lead) days = 8 Dec for the belly; 17 Dec for the bun; 18 Dec for
+    // grind and sauce. source: the demo formulas' hold and lead days
+    assert.match(sheet.all, /DAY 1 OF 3 Start 8 Dec 2026/);
     assert.match(sheet.all, /DAY 2 OF 3 Start 17 Dec 2026/);
     assert.match(sheet.all, /DAY 3 OF 3 Start 18 Dec 2026/);
+  });
+
+  it('should print the rub of the sandwich next to the brisket it goes on, with its day', async (t) => {
+    const sheet = await planPdf(t, 'corned-beef-sandwich', 60);
+    // Brisket: 9 days' hold + 2 lead days before 18 Dec = 7 Dec, out of the brine 16 Dec; the
+    // rub goes on then, so it starts 16 Dec. source: the demo formulas' hold rule and lead days
+    assert.match(sheet.pages[0], /Gets: Beef rub, salt and pepper forward, 16 Dec 2026/);
+    assert.match(sheet.pages[0], /Goes on: Brisket flat, equilibrium brine, 16 Dec 2026/);
+    assert.match(sheet.all, /DAY 2 OF 4 Start 16 Dec 2026/);
   });
 });

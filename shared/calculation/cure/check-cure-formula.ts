@@ -181,8 +181,3 @@ function checkLevels(formula: CureFormula): ContentProblem[] {
   }
   return problems;
 }
-
-/** A label to follow other words: its first letter in lower case, the rest (FSIS…) as written. */
-function lowerFirst(label: string): string {
-  return label.charAt(0).toLowerCase() + label.slice(1);
-}

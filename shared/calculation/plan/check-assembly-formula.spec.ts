@@ -69,3 +69,50 @@ describe('checkAssemblyFormula: what the schema cannot say about one assembly fi
     );
   });
 });
+
+describe('checkAssemblyFormula: a part applied to another part (on, pct)', () => {
+  const brisket = { formula: 'brisket-brine', amount: '140 g', thickness: '5 cm' };
+  const errors = (...components: AssemblyComponent[]): string[] =>
+    checkAssemblyFormula(assembly('sandwich', components))
+      .filter((p) => p.severity === 'error')
+      .map((p) => `${p.path.join('.')}: ${p.message}`);
+
+  it('should take a rub applied to a brisket of the same assembly', () => {
+    assert.deepEqual(
+      errors(brisket, { formula: 'brisket-rub', on: 'brisket-brine', pct: 1.5 }),
+      [],
+    );
+  });
+
+  it('should keep on and pct together', () => {
+    assert.deepEqual(errors(brisket, { formula: 'brisket-rub', on: 'brisket-brine' }), [
+      'components.1: say how much of brisket-rub goes into one unit: one of portions (a blend), pieces (a dough), slices with slice (a cure), amount (any kind), units (another assembly) or pct with on (a part applied to another, such as a rub)',
+      "components.1.on: on names the part brisket-rub goes on: it goes with pct, its weight as a percent of that part's green weight (pct: 1.5)",
+    ]);
+    assert.deepEqual(errors(brisket, { formula: 'brisket-rub', pct: 1.5 }), [
+      'components.1.pct: pct is a share of the part brisket-rub goes on: name that part with on (on: brisket-brine)',
+    ]);
+  });
+
+  it('should refuse, at its line, a part applied to a part not in the assembly, or to itself', () => {
+    assert.deepEqual(errors(brisket, { formula: 'brisket-rub', on: 'quillmoor-belly', pct: 1 }), [
+      'components.1.on: brisket-rub goes on quillmoor-belly, which is not a part of this assembly: add quillmoor-belly as a part, or name one of its parts (brisket-brine)',
+    ]);
+    assert.deepEqual(errors(brisket, { formula: 'brisket-rub', on: 'brisket-rub', pct: 1 }), [
+      'components.1.on: brisket-rub cannot go on itself: name another part of this assembly',
+    ]);
+  });
+
+  it('should refuse parts applied to each other in a circle, at each of their lines', () => {
+    assert.deepEqual(
+      errors(
+        { formula: 'brisket-brine', on: 'quillmoor-belly', pct: 10, thickness: '5 cm' },
+        { formula: 'quillmoor-belly', on: 'brisket-brine', pct: 10, thickness: '4 cm' },
+      ),
+      [
+        'components.0.on: brisket-brine → quillmoor-belly → brisket-brine goes round in a circle: a part cannot go on a part that goes on it',
+        'components.1.on: quillmoor-belly → brisket-brine → quillmoor-belly goes round in a circle: a part cannot go on a part that goes on it',
+      ],
+    );
+  });
+});

@@ -82,3 +82,31 @@ describe('checkAssemblyLibrary: an assembly against the other formulas', () => {
     assert.deepEqual(checkAssemblyLibrary(top, library), []);
   });
 });
+
+describe('checkAssemblyLibrary: a part applied to another part', () => {
+  it('should want the part it goes on to be a cure, whose green weight pct is a share of', () => {
+    const plate = assembly('test-plate', [
+      { formula: 'house-sauce', amount: '20 g' },
+      { formula: 'chuck-grind', on: 'house-sauce', pct: 2 },
+    ]);
+    assert.deepEqual(
+      assemblyLibraryIssues(plate, KITCHEN).map(
+        (i) => `${i.reason} ${i.path.join('.')}: ${i.message}`,
+      ),
+      [
+        "wrong-kind components.1.on: chuck-grind goes on house-sauce, a mix: pct is a share of a cure's green weight, so only a cure can take a part applied to it",
+      ],
+    );
+  });
+
+  it('should not let an assembly be applied to a part', () => {
+    const plate = assembly('test-plate', [
+      { formula: 'quillmoor-belly', amount: '20 g', thickness: '4 cm' },
+      { formula: 'smokehouse-burger', on: 'quillmoor-belly', pct: 2 },
+    ]);
+    assert.deepEqual(
+      assemblyLibraryIssues(plate, KITCHEN).map((i) => `${i.reason} ${i.path.join('.')}`),
+      ['wrong-kind components.1.pct'],
+    );
+  });
+});

@@ -145,6 +145,16 @@ function componentIssues(
       );
     }
   }
+  const base = component.on === undefined ? undefined : library.get(component.on);
+  if (base && base.kind !== 'cure') {
+    issues.push(
+      issue(
+        ['on'],
+        'wrong-kind',
+        `${id} goes on ${base.id}, ${article(base.kind)}: pct is a share of a cure's green weight, so only a cure can take a part applied to it`,
+      ),
+    );
+  }
   if (target.kind === 'cure') {
     const missing = missingSize(target, component);
     if (missing) issues.push(issue([], 'needs-size', missing));
@@ -167,7 +177,8 @@ function componentIssues(
 /**
  * Checks an assembly against the other formulas: every formula a component names exists and has
  * a kind its quantity fits (portions a blend, pieces a dough, slices a cure, units another
- * assembly, amount any kind but an assembly), a blend taken by portions has a portion weight, a
+ * assembly, amount or pct any kind but an assembly), a part applied to another goes on a cure
+ * (pct is a share of its green weight), a blend taken by portions has a portion weight, a
  * dough taken by pieces a piece weight, a cure's hold rule gets the size it goes by, and no
  * assembly leads back to this one. Pure: the caller reads the files.
  * @param library every formula that reads cleanly, by id

@@ -5,8 +5,11 @@ import { parseMass } from '../../units/mass.ts';
 import { QuantityError } from '../../units/quantity-error.ts';
 import type { HoldMeasures } from '../cure/hold-time.ts';
 
-/** The keys that say how much of a formula goes into one unit of an assembly. */
-export const QUANTITY_KEYS = ['portions', 'pieces', 'slices', 'amount', 'units'] as const;
+/**
+ * The keys that say how much of a formula goes into one unit of an assembly; `pct` (with `on`)
+ * is a share of the green weight of the part it goes on.
+ */
+export const QUANTITY_KEYS = ['portions', 'pieces', 'slices', 'amount', 'units', 'pct'] as const;
 
 /** One of {@link QUANTITY_KEYS}. */
 export type QuantityKey = (typeof QUANTITY_KEYS)[number];
@@ -18,6 +21,7 @@ export const KINDS_FOR: Readonly<Record<QuantityKey, readonly FormulaKind[]>> = 
   slices: ['cure'],
   amount: ['cure', 'dough', 'blend', 'mix'],
   units: ['assembly'],
+  pct: ['cure', 'dough', 'blend', 'mix'],
 };
 
 /** The size keys a cure's hold rule may need; they apply only to a cure. */
@@ -37,10 +41,13 @@ export function quantityKeyOf(component: AssemblyComponent): QuantityKey {
   return key;
 }
 
-/** The quantity keys that fit a kind, in words: "portions or amount". */
+/**
+ * The quantity keys that fit a kind, in words: "portions or amount". A share of another part
+ * (pct) is left out: it is a way of applying a part, not of serving it.
+ */
 export function keysForKind(kind: FormulaKind): string {
-  const keys = QUANTITY_KEYS.filter((key) => KINDS_FOR[key].includes(kind)).map((key) =>
-    key === 'slices' ? 'slices (with slice)' : key,
+  const keys = QUANTITY_KEYS.filter((key) => key !== 'pct' && KINDS_FOR[key].includes(kind)).map(
+    (key) => (key === 'slices' ? 'slices (with slice)' : key),
   );
   return keys.length > 1 ? `${keys.slice(0, -1).join(', ')} or ${keys.at(-1)}` : keys[0];
 }

@@ -12,12 +12,13 @@ import {
   type Caution,
 } from '../calc-result.ts';
 import { calculate } from '../calculate.ts';
-import { addDays, isIsoDate } from '../dates.ts';
+import { addDays, daysBetween, isIsoDate } from '../dates.ts';
 import { parseBatchOptions } from '../parse-batch-options.ts';
 import { startWindow } from '../start-window.ts';
 import type { FormulaLibrary } from './check-assembly-library.ts';
 import { plannedSize } from './plan-batch-size.ts';
-import { plannedDates, type PlannedDates } from './plan-dates.ts';
+import { datesOfNeeds, type NeedDates } from './need-dates.ts';
+import type { PlannedDates } from './plan-dates.ts';
 import { PlanError } from './plan-error.ts';
 import { collectNeeds, type Need } from './plan-needs.ts';
 import type { PlanBatch, PlanDay, PlanOptions, PlanResult } from './plan-types.ts';
@@ -64,11 +65,14 @@ function refusePastStarts(
     .filter(({ dates }) => dates.start < today)
     .sort((a, b) => a.dates.start.localeCompare(b.dates.start));
   if (late.length === 0) return;
-  const longest = Math.max(...dated.map(({ dates }) => dates.holdDays + dates.leadDays));
+  // A part applied to another counts back from the day it goes on, so days are counted start to
+  // service rather than as its own hold and lead days.
+  const needed = ({ start }: PlannedDates) => daysBetween(start, serviceDate);
+  const longest = Math.max(...dated.map(({ dates }) => needed(dates)));
   const { need, dates } = late[0];
   throw new PlanError(
     `${need.formula.id} must start ${dates.start}, already past; plan for a later date ` +
-      `(for service on ${serviceDate} it needs ${dates.holdDays + dates.leadDays} days; ` +
+      `(for service on ${serviceDate} it needs ${needed(dates)} days; ` +
       `the earliest service this plan can make is ${addDays(today, longest)})`,
     'past-start',
     need.formula.id,
@@ -128,8 +132,9 @@ function groupByDay(batches: readonly PlanBatch[]): PlanDay[] {
  * Plans `count` units of an assembly for a service day: every batch it needs (one per formula,
  * added up over the components and the assemblies inside it), each sized by carrying yields and
  * losses back to raw weights and calculated by its kind's own calculator, with the day it must
- * start counted back from service; one pull list of raw materials; the allergens and cautions
- * of everything. Pure: the caller reads the formulas.
+ * start counted back from service (a part applied to another, such as a rub, from the day that
+ * part comes out of its hold); one pull list of raw materials; the allergens and cautions of
+ * everything. Pure: the caller reads the formulas.
  * @param library every formula that reads cleanly, by id (the assembly may be among them)
  * @throws PlanError naming the formula when the plan cannot be made: bad count or dates (a
  *   service day more than a year ahead among them), an
@@ -144,14 +149,12 @@ export function planAssembly(
 ): PlanResult {
   checkOptions(options);
   const needs = [...collectNeeds(assembly, library, new Decimal(options.count)).values()];
-  const dated = needs.map((need) => ({
-    need,
-    dates: plannedDates(need.formula, need.sizes, options.serviceDate),
-  }));
+  const byId = datesOfNeeds(needs, options.serviceDate);
+  const dated = needs.map((need) => ({ need, dates: byId.get(need.formula.id) as NeedDates }));
   refusePastStarts(dated, options);
 
   const warnings: string[] = [];
-  const planned = dated.map(({ need, dates }) => {
+  const planned = dated.map(({ need, dates: { goesOn, ...dates } }) => {
     const size = plannedSize(need);
     const batch = { ...size.batch, start: dates.start };
     const result = calculateNeed(need, batch, options.today);
@@ -162,6 +165,7 @@ export function planAssembly(
       batch,
       result,
       ...dates,
+      ...(goesOn.length ? { goesOn } : {}),
     };
     return { need, green: size.green, batch: planBatch };
   });

@@ -13,17 +13,25 @@ export interface PlannedDates {
   readonly rule: string;
 }
 
+/** The part a batch is applied to, and the day it goes on: when that part comes out of its hold. */
+export interface AppliedTo {
+  readonly title: string;
+  readonly date: string;
+}
+
 /**
  * Counts a batch's start back from the service day: start = service − (hold + lead days), and
  * ready = start + hold. The hold is a cure's own rule (estimateHold, with the sizes the
  * components give); the other kinds have none. Lead days are the formula's, else the kitchen's
- * default (lead-days.ts).
+ * default (lead-days.ts). A part applied to another counts back from the day it goes on instead.
+ * @param appliedTo for a part applied to another: that part, and the day it goes on
  * @throws PlanError 'needs-size' when a cure's hold rule needs a size nobody gave
  */
 export function plannedDates(
   formula: BatchFormula,
   sizes: HoldMeasures,
   serviceDate: string,
+  appliedTo?: AppliedTo,
 ): PlannedDates {
   const lead = leadDaysOf(formula);
   let holdDays = 0;
@@ -40,16 +48,18 @@ export function plannedDates(
     holdDays = hold.days;
     holdWords = `hold ${daysInWords(hold.days)} (${hold.rule}; ${hold.source}), then `;
   }
-  const start = addDays(serviceDate, -(holdDays + lead.days));
+  const until = appliedTo?.date ?? serviceDate;
+  const start = addDays(until, -(holdDays + lead.days));
   const ready = addDays(start, holdDays);
+  const use = appliedTo ? 'it goes on' : 'service';
   const leadWords =
     lead.days === 0
-      ? `made on the day of service (lead 0 days: ${lead.source})`
-      : `${daysInWords(lead.days)} before service (lead days: ${lead.source})`;
-  const dates =
-    holdDays > 0
-      ? `start ${start}, ready ${ready}, service ${serviceDate}`
-      : `start ${start}, service ${serviceDate}`;
+      ? `made on the day ${appliedTo ? 'it goes on' : 'of service'} (lead 0 days: ${lead.source})`
+      : `${daysInWords(lead.days)} before ${use} (lead days: ${lead.source})`;
+  const applied = appliedTo
+    ? `; it goes on ${appliedTo.title} when it comes out of its hold, ${appliedTo.date}, for service ${serviceDate}`
+    : `, service ${serviceDate}`;
+  const dates = `start ${start}${holdDays > 0 ? `, ready ${ready}` : ''}${applied}`;
   return {
     start,
     ready,

@@ -93,6 +93,41 @@ export const SAUCE: MixFormula = {
   cautions: ['Worcestershire sauce contains anchovy; tell guests who ask about fish.'],
 };
 
+/** Brisket flats in an equilibrium brine: 9-day hold at 5 cm, 2 lead days, yields 82 and 92 %. */
+export const BRISKET: CureFormula = {
+  formula: 1,
+  id: 'brisket-brine',
+  title: 'Brisket flat, equilibrium brine',
+  kind: 'cure',
+  method: 'brine',
+  product: 'whole-muscle',
+  brine: { water_pct: 60 },
+  ingredients: [
+    { name: 'kosher salt', pct: 2.6, salt: 100 },
+    { name: 'curing salt no. 1 (6.25 % nitrite)', pct: 0.21, nitrite: 6.25, salt: 93.75 },
+    { name: 'white sugar', pct: 1.2 },
+    { name: 'pickling spice', pct: 0.3 },
+  ],
+  hold: { days_per_cm: 1.5, plus_days: 1, min_days: 5, flip_every_days: 2 },
+  yields: { smoke: 82, slice: 92 },
+  lead_days: 2,
+};
+
+/** The beef rub: salt 100, pepper 90, garlic 25, paprika 12, cayenne 3 (230 % in all). */
+export const RUB: MixFormula = {
+  formula: 1,
+  id: 'brisket-rub',
+  title: 'Beef rub, salt and pepper forward',
+  kind: 'mix',
+  ingredients: [
+    { name: 'kosher salt', pct: 100, base: true },
+    { name: '16-mesh black pepper', pct: 90 },
+    { name: 'granulated garlic', pct: 25 },
+    { name: 'sweet paprika', pct: 12 },
+    { name: 'cayenne', pct: 3 },
+  ],
+};
+
 /** An assembly from its components. */
 export function assembly(
   id: string,
@@ -121,3 +156,13 @@ export function libraryOf(...formulas: Formula[]): Map<string, Formula> {
 
 /** The four demo formulas the burger is built from, and the burger. */
 export const KITCHEN = libraryOf(BELLY, GRIND, BUN, SAUCE, BURGER);
+
+/** The corned-beef sandwich: 140 g of brisket at 5 cm, rubbed at 1.5 % of its green weight. */
+export const SANDWICH = assembly(
+  'corned-beef-sandwich',
+  [
+    { formula: 'brisket-brine', amount: '140 g', thickness: '5 cm' },
+    { formula: 'brisket-rub', on: 'brisket-brine', pct: 1.5 },
+  ],
+  'Smoked corned-beef sandwich',
+);

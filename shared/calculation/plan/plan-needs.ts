@@ -1,4 +1,4 @@
-import { Decimal, ZERO } from '../../decimal.ts';
+import { Decimal, ZERO, fraction, sum } from '../../decimal.ts';
 import type {
   AssemblyComponent,
   AssemblyFormula,
@@ -6,6 +6,7 @@ import type {
 } from '../../formula/formula-types.ts';
 import { parseMass } from '../../units/mass.ts';
 import type { HoldMeasures } from '../cure/hold-time.ts';
+import { referenceFromFinished } from '../yields.ts';
 import { assemblyLibraryIssues, type FormulaLibrary } from './check-assembly-library.ts';
 import { checkAssemblyFormula } from './check-assembly-formula.ts';
 import { componentSizes, quantityKeyOf } from './component-quantity.ts';
@@ -26,6 +27,10 @@ export interface Need {
   grams: Decimal;
   /** The largest sizes any component gives, for a cure's hold rule: the longest hold wins. */
   sizes: HoldMeasures;
+  /** Whether some component serves it as it is (not applied to another part). */
+  served: boolean;
+  /** The formula ids of the parts it is applied to (on:), each once. */
+  goesOn: string[];
 }
 
 /** Plain text of an exact decimal: "240", "27215.5422". */
@@ -63,14 +68,66 @@ function larger(a: Decimal | undefined, b: Decimal | undefined): Decimal | undef
   return Decimal.max(a, b);
 }
 
+/** What a component asks of its formula: words for the batch sheet and numbers to add up. */
+interface Demand {
+  readonly words: string;
+  readonly portions: Decimal;
+  readonly pieces: Decimal;
+  readonly grams: Decimal;
+}
+
+/**
+ * The green weight, grams, of one cure at one level of an assembly for `units` units: its
+ * finished grams there (parts applied to it by pct counted too) carried back through its yields.
+ * Only this level counts, so a rub goes on the brisket of the part it is applied to, not on
+ * brisket served plain elsewhere in the plan.
+ * @param trail the ids already being worked out, to refuse parts that go on each other
+ */
+function greenAtLevel(
+  id: string,
+  components: readonly AssemblyComponent[],
+  library: FormulaLibrary,
+  units: Decimal,
+  trail: readonly string[],
+): Decimal {
+  const formula = library.get(id);
+  if (formula?.kind !== 'cure') return ZERO;
+  const finished = sum(
+    components
+      .filter((component) => component.formula === id)
+      .map((component) => demandOf(component, formula, library, units, components, trail).grams),
+  );
+  return referenceFromFinished(finished, formula.yields);
+}
+
 /** What one component asks of its formula for `units` units, in words and numbers. */
 function demandOf(
   component: AssemblyComponent,
   formula: BatchFormula,
+  library: FormulaLibrary,
   units: Decimal,
-): { words: string; portions: Decimal; pieces: Decimal; grams: Decimal } {
+  level: readonly AssemblyComponent[],
+  trail: readonly string[] = [],
+): Demand {
   const none = { portions: ZERO, pieces: ZERO, grams: ZERO };
   const key = quantityKeyOf(component);
+  if (key === 'pct') {
+    const on = component.on ?? '';
+    if (trail.includes(formula.id)) {
+      throw new PlanError(
+        `${[...trail, formula.id].join(' goes on ')} goes round in a circle: a part cannot go on a part that goes on it`,
+        'cycle',
+        formula.id,
+      );
+    }
+    const green = greenAtLevel(on, level, library, units, [...trail, formula.id]);
+    const base = library.get(on);
+    return {
+      ...none,
+      grams: fraction(new Decimal(component.pct ?? 0)).times(green),
+      words: `${component.pct} % of the green weight of ${base?.title ?? on} (${on})`,
+    };
+  }
   if (key === 'portions' && formula.kind === 'blend') {
     const portions = units.times(component.portions ?? 0);
     return {
@@ -102,11 +159,12 @@ function demandOf(
 /**
  * Walks an assembly, and the assemblies inside it, into what each formula is needed for: one
  * {@link Need} per formula, in the order first met. Nested assemblies multiply through (units ×
- * count); the same formula named twice is added up, so the kitchen makes one batch of it.
+ * count); the same formula named twice is added up, so the kitchen makes one batch of it. A part
+ * applied to another (on:, pct:) weighs pct of the green weight of that part at the same level.
  * @param units how many units of this assembly are wanted
  * @param trail the titles of the assemblies around this one, outermost first
  * @throws PlanError when an assembly has errors, names a missing or unfitting formula, or
- *   assemblies contain each other
+ *   assemblies contain each other (or parts go on each other)
  */
 export function collectNeeds(
   assembly: AssemblyFormula,
@@ -134,7 +192,7 @@ export function collectNeeds(
       collectNeeds(formula, library, units.times(component.units ?? 1), needs, path);
       continue;
     }
-    const demand = demandOf(component, formula, units);
+    const demand = demandOf(component, formula, library, units, assembly.components);
     const need = needs.get(formula.id) ?? {
       formula,
       purposes: [],
@@ -142,7 +200,11 @@ export function collectNeeds(
       pieces: ZERO,
       grams: ZERO,
       sizes: {},
+      served: false,
+      goesOn: [],
     };
+    if (component.on === undefined) need.served = true;
+    else if (!need.goesOn.includes(component.on)) need.goesOn.push(component.on);
     need.purposes.push(`${where}: ${demand.words}`);
     need.portions = need.portions.plus(demand.portions);
     need.pieces = need.pieces.plus(demand.pieces);

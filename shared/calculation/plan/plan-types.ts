@@ -13,6 +13,13 @@ export interface PlanOptions {
   readonly today: string;
 }
 
+/** A part a batch is applied to (a rub on a brisket), and the day it goes on. */
+export interface AppliedPart {
+  readonly formula: { readonly id: string; readonly title: string };
+  /** The day it goes on, YYYY-MM-DD: when that part comes out of its hold. */
+  readonly date: string;
+}
+
 /** One batch the plan needs: one per formula, however many components name it. */
 export interface PlanBatch {
   readonly formula: { readonly id: string; readonly title: string; readonly kind: BatchKind };
@@ -28,10 +35,12 @@ export interface PlanBatch {
   readonly ready: string;
   /** Days of hold (cures), 0 for the others. */
   readonly holdDays: number;
-  /** Days from ready to service. */
+  /** Days from ready to service, or for a part applied to another, to the day it goes on. */
   readonly leadDays: number;
   /** How the start day was worked out, in words. */
   readonly rule: string;
+  /** For a part applied to others (a rub): what it goes on, and when; absent otherwise. */
+  readonly goesOn?: readonly AppliedPart[];
 }
 
 /** One day's production: the batches that start on it. */

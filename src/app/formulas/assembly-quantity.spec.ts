@@ -23,12 +23,12 @@ describe('the quantity keys of an assembly part', () => {
   it('should offer only the keys that fit the formula’s kind', () => {
     const keys = (kind: Parameters<typeof quantityChoices>[0]) =>
       quantityChoices(kind).map((choice) => choice.value);
-    assert.deepEqual(keys('blend'), ['portions', 'amount']);
-    assert.deepEqual(keys('dough'), ['pieces', 'amount']);
-    assert.deepEqual(keys('cure'), ['slices', 'amount']);
-    assert.deepEqual(keys('mix'), ['amount']);
+    assert.deepEqual(keys('blend'), ['portions', 'amount', 'pct']);
+    assert.deepEqual(keys('dough'), ['pieces', 'amount', 'pct']);
+    assert.deepEqual(keys('cure'), ['slices', 'amount', 'pct']);
+    assert.deepEqual(keys('mix'), ['amount', 'pct']);
     assert.deepEqual(keys('assembly'), ['units']);
-    assert.deepEqual(keys(null), ['portions', 'pieces', 'slices', 'amount', 'units']);
+    assert.deepEqual(keys(null), ['portions', 'pieces', 'slices', 'amount', 'units', 'pct']);
   });
 });
 

@@ -15,6 +15,7 @@ const KEYS: readonly { key: QuantityKey; label: string; kinds: readonly FormulaK
   { key: 'slices', label: 'Slices', kinds: ['cure'] },
   { key: 'amount', label: 'Finished weight', kinds: ['cure', 'dough', 'blend', 'mix'] },
   { key: 'units', label: 'Units', kinds: ['assembly'] },
+  { key: 'pct', label: '% of the part it goes on', kinds: ['cure', 'dough', 'blend', 'mix'] },
 ];
 
 /** Every quantity key, in the form's order. */
@@ -37,6 +38,7 @@ export const KEY_HINTS: Readonly<Record<QuantityKey, string>> = {
   slices: 'Finished slices, each of the slice weight',
   amount: 'Finished weight per unit, e.g. 20 g',
   units: 'Units of that assembly per unit of this one',
+  pct: 'Percent of the green weight of the cure it goes on, e.g. a rub at 1.5',
 };
 
 /**
@@ -61,5 +63,7 @@ export function quantityKeyFor(kind: FormulaKind | null, current: QuantityKey): 
 
 /** Whether a part with this key takes a cure's sizes (thickness, heaviest piece) for its hold. */
 export function takesSizes(kind: FormulaKind | null, key: QuantityKey): boolean {
-  return (kind === null || kind === 'cure') && (key === 'slices' || key === 'amount');
+  return (
+    (kind === null || kind === 'cure') && (key === 'slices' || key === 'amount' || key === 'pct')
+  );
 }

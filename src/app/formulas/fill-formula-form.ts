@@ -158,6 +158,8 @@ export function fillFormulaForm(
         slice: text(part.slice),
         thickness: text(part.thickness),
         largest_piece: text(part.largest_piece),
+        on: text(part.on),
+        pct: num(part.pct),
       };
     }),
   });

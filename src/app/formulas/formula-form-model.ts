@@ -92,8 +92,9 @@ export type BlendGroup = FormGroup<{
 
 /**
  * One part of an assembly: the formula it names and how much of it goes into one unit, by one
- * quantity key; a count for portions, pieces, slices and units, a weight for amount. Slice goes
- * with slices; thickness and heaviest piece size a cure's hold.
+ * quantity key; a count for portions, pieces, slices and units, a weight for amount, a percent
+ * with the part it goes on for pct. Slice goes with slices; thickness and heaviest piece size a
+ * cure's hold.
  */
 export type AssemblyPartRow = FormGroup<{
   formula: FormControl<string>;
@@ -103,6 +104,10 @@ export type AssemblyPartRow = FormGroup<{
   slice: FormControl<string>;
   thickness: FormControl<string>;
   largest_piece: FormControl<string>;
+  /** With pct: the formula id of the part this one goes on. */
+  on: FormControl<string>;
+  /** With on: percent of that part's green weight. */
+  pct: Num;
 }>;
 
 /** Weight after each step, % of the weight before it (cures and blends). */
@@ -179,6 +184,8 @@ export function assemblyPartRow(fb: NonNullableFormBuilder): AssemblyPartRow {
     slice: fb.control(''),
     thickness: fb.control(''),
     largest_piece: fb.control(''),
+    on: fb.control(''),
+    pct: fb.control<number | null>(null, [Validators.min(0), Validators.max(100)]),
   });
 }
 

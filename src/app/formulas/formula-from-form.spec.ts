@@ -44,6 +44,8 @@ describe('an assembly in the structured form', () => {
       slice: '25 g',
       thickness: '4 cm',
       largest_piece: '',
+      on: '',
+      pct: null,
     });
     assert.ok(form.controls.blend.controls.components.getRawValue().every((c) => c.key === ''));
   });
@@ -73,6 +75,27 @@ describe('an assembly in the structured form', () => {
     belly.count.setValue(1);
     const parts = (formulaFromForm(form, formula) as AssemblyFormula).components;
     assert.deepEqual(parts[2], { formula: 'corned-beef-sandwich', units: 1 });
+  });
+
+  it('should show a part applied to another by its percent and the part it goes on, and write both back', () => {
+    const { form, formula, fb } = burgerForm();
+    const rub = assemblyPartRow(fb);
+    rub.controls.formula.setValue('brisket-rub');
+    rub.controls.quantity.setValue('pct');
+    rub.controls.pct.setValue(1.5);
+    rub.controls.on.setValue('quillmoor-belly');
+    rub.controls.amount.setValue('3 g');
+    form.controls.parts.push(rub);
+    const written = formulaFromForm(form, formula) as AssemblyFormula;
+    assert.deepEqual(written.components.at(-1), {
+      formula: 'brisket-rub',
+      on: 'quillmoor-belly',
+      pct: 1.5,
+    });
+    const again = createFormulaForm(fb);
+    fillFormulaForm(again, written, fb);
+    const { quantity, pct, on } = again.controls.parts.at(-1).getRawValue();
+    assert.deepEqual({ quantity, pct, on }, { quantity: 'pct', pct: 1.5, on: 'quillmoor-belly' });
   });
 
   it('should add a part and remove one', () => {

@@ -140,17 +140,24 @@ function ingredientOf(row: IngredientRow, keys: readonly string[]): Loose {
 }
 
 /**
- * One part of an assembly: the formula, its one quantity key with the value, the slice weight
- * only with slices, and a cure's sizes only with a cure's quantity (slices or amount), so that a
- * part switched to another key leaves nothing behind that no longer fits.
+ * One part of an assembly: the formula, its one quantity key with the value (pct with the part
+ * it goes on), the slice weight only with slices, and a cure's sizes only with a cure's quantity
+ * (slices, amount or pct), so that a part switched to another key leaves nothing behind that no
+ * longer fits.
  */
 function partOf(part: ReturnType<AssemblyPartRow['getRawValue']>): Loose {
   const key = part.quantity;
-  const sized = key === 'slices' || key === 'amount';
+  const sized = key === 'slices' || key === 'amount' || key === 'pct';
   const given = (value: string): string | undefined => value.trim() || undefined;
   return {
     formula: part.formula.trim(),
-    [key]: key === 'amount' ? given(part.amount) : (part.count ?? undefined),
+    on: key === 'pct' ? given(part.on) : undefined,
+    [key]:
+      key === 'amount'
+        ? given(part.amount)
+        : key === 'pct'
+          ? (part.pct ?? undefined)
+          : (part.count ?? undefined),
     slice: key === 'slices' ? given(part.slice) : undefined,
     thickness: sized ? given(part.thickness) : undefined,
     largest_piece: sized ? given(part.largest_piece) : undefined,

@@ -66,8 +66,9 @@ id: ID
 title: TITLE
 kind: assembly
 # One unit as served. Each part names another formula and how much of it goes into one unit:
-# portions (a blend), pieces (a dough), slices with slice (a cure), amount (any batch formula)
-# or units (another assembly). A cure also needs thickness or largest_piece for its hold.
+# portions (a blend), pieces (a dough), slices with slice (a cure), amount (any batch formula),
+# units (another assembly), or pct of the green weight of the cure it goes on, with on (a rub).
+# A cure also needs thickness or largest_piece for its hold.
 components:
 PARTS`,
 };

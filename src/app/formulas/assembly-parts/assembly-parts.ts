@@ -11,7 +11,7 @@ import {
 import { FormArray, NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatOptgroup, MatOption } from '@angular/material/core';
-import { MatFormField, MatHint } from '@angular/material/form-field';
+import { MatFormField, MatHint, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatSelect } from '@angular/material/select';
@@ -76,8 +76,8 @@ interface Named {
  * An assembly's parts as an editable table: each row names a formula of the library (grouped by
  * kind) and how much of it goes into one unit, with the quantity keys that fit the formula's kind
  * (portions of a blend, pieces of a dough, slices of a cure with the slice weight, a finished
- * weight of any batch kind, units of another assembly), and for a cure the sizes its hold rule
- * goes by. Rows can be added and removed unless the table is read-only.
+ * weight of any batch kind, units of another assembly, a percent of the green weight of another
+ * part it goes on, such as a rub on a brisket), and for a cure the sizes its hold rule goes by. Rows can be added and removed unless the table is read-only.
  */
 @Component({
   selector: 'app-assembly-parts',
@@ -85,6 +85,7 @@ interface Named {
     ReactiveFormsModule,
     MatFormField,
     MatHint,
+    MatSuffix,
     MatInput,
     MatSelect,
     MatOption,
@@ -143,8 +144,16 @@ export class AssemblyParts {
   /** Each row with what its cells depend on: the named formula's kind and the quantity key. */
   protected readonly parts = watchControl(this.rows, (rows) =>
     rows.controls.map((row, i) => {
-      const { formula, quantity } = row.getRawValue();
+      const { formula, quantity, on } = row.getRawValue();
       const named = this.library().get(formula) ?? null;
+      // What a part applied to another (pct) can go on: the other parts of this assembly.
+      const others = rows.controls
+        .map((other) => other.controls.formula.value)
+        .filter((id, j, all) => id !== '' && id !== formula && all.indexOf(id) === j);
+      const bases = [...others, ...(on !== '' && !others.includes(on) ? [on] : [])].map((id) => ({
+        id,
+        title: this.library().get(id)?.title ?? `${id} (not a part of this assembly)`,
+      }));
       const kind = named?.kind ?? null;
       const choices = quantityChoices(kind);
       return {
@@ -154,6 +163,8 @@ export class AssemblyParts {
         missing: formula !== '' && this.store.formulas() !== null && !named,
         invalid: named !== null && !named.valid,
         byCount: COUNT_KEYS.includes(quantity),
+        applied: quantity === 'pct',
+        bases,
         sliced: quantity === 'slices',
         sized: takesSizes(kind, quantity),
         choices: choices.some((choice) => choice.value === quantity)
