@@ -88,7 +88,7 @@ export function renderBatchSheet(result: PresentedResult): string {
   }
   if (!result.critical && result.portions) {
     const p = result.portions;
-    out.push(...heading('Portions'), `  ${p.count} × ${p.piece}, ${p.remainder} left over`);
+    out.push(...heading('Portions'), `  ${p.sentence}`);
   }
   if (result.warnings.length)
     out.push(...heading('Warnings'), ...result.warnings.map((w) => `  ! ${w}`));

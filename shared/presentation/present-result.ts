@@ -6,6 +6,7 @@ import {
   type Figure,
   type LimitCheck,
   type LineGroup,
+  type Portions,
 } from '../calculation/calc-result.ts';
 import {
   formatGramsFine,
@@ -22,6 +23,7 @@ import type {
   PresentedFigure,
   PresentedGroup,
   PresentedLine,
+  PresentedPortions,
   PresentedResult,
 } from './presented-result.ts';
 
@@ -85,6 +87,27 @@ function presentGroup(group: LineGroup, system: UnitSystem): PresentedGroup {
       grams: exactTotal.toString(),
       ...(percentTotal ? { percent: percentTotal } : {}),
     },
+  };
+}
+
+function presentPortions(portions: Portions, system: UnitSystem): PresentedPortions {
+  const piece = formatMass(portions.pieceGrams, system);
+  const remainder = formatMass(portions.remainderGrams, system);
+  const cut = `${portions.count} × ${piece}`;
+  let sentence = `${cut}, ${remainder} left over`;
+  if (portions.lossPct?.isZero()) {
+    sentence = `${cut}; no loss allowance, so nothing is over for dough lost in mixing and dividing`;
+  } else if (portions.lossPct) {
+    sentence =
+      `${cut}; the other ${remainder} is the loss allowance (${portions.lossPct.toString()} %), ` +
+      'for dough lost in mixing, dividing and on the bench: not spare dough';
+  }
+  return {
+    piece,
+    count: portions.count,
+    remainder,
+    remainderGrams: portions.remainderGrams.toString(),
+    sentence,
   };
 }
 
@@ -174,16 +197,7 @@ function presentAll(result: CalcResult, system: UnitSystem): PresentedResult {
           })),
         }
       : {}),
-    ...(result.portions
-      ? {
-          portions: {
-            piece: formatMass(result.portions.pieceGrams, system),
-            count: result.portions.count,
-            remainder: formatMass(result.portions.remainderGrams, system),
-            remainderGrams: result.portions.remainderGrams.toString(),
-          },
-        }
-      : {}),
+    ...(result.portions ? { portions: presentPortions(result.portions, system) } : {}),
     rounding: roundingNote(system),
     ...(result.notes ? { notes: result.notes } : {}),
   };

@@ -36,15 +36,20 @@ export interface PresentedResult {
     readonly amount: string;
     readonly grams: string;
   }[];
-  readonly portions?: {
-    readonly piece: string;
-    readonly count: number;
-    readonly remainder: string;
-    readonly remainderGrams: string;
-  };
+  readonly portions?: PresentedPortions;
   /** How amounts were rounded, in words. */
   readonly rounding: string;
   readonly notes?: string;
+}
+
+/** Pieces or portions cut from a batch, and what is over. */
+export interface PresentedPortions {
+  readonly piece: string;
+  readonly count: number;
+  readonly remainder: string;
+  readonly remainderGrams: string;
+  /** The portions in words, saying what the remainder is: "48 × 90.0 g; the other …". */
+  readonly sentence: string;
 }
 
 export interface PresentedFigure {

@@ -104,6 +104,18 @@ describe('larder calc on a dough (pit-bun, 48 pieces of 90 g, 3 % loss)', () => 
     assert.equal(places(result.portions?.remainderGrams, 3), '133.608');
   });
 
+  it('says on the sheet that what is over is the loss allowance, in its own words', async () => {
+    const run = await runLarder(['calc', ...args]);
+    assertExit(run, 0);
+    // 4453.608 − 4320 = 133.608 g = 3 % of 4453.608 g: the allowance, not spare dough.
+    // source: The Bakery Network, "Bread Formula Construction" (2011) (D-4): the sheet names
+    // the convention in its own words, not by the handbook's title
+    assert.match(run.stdout, /48 × 90\.0 g; the other \d+(\.\d)? g is the loss allowance \(3 %\)/);
+    assert.doesNotMatch(run.stdout, /left over/);
+    assert.match(run.stdout, /loss taken out of the mixed dough/);
+    assert.doesNotMatch(run.stdout, /Bread Formula Construction/);
+  });
+
   it('brings the milk and egg to the liquid temperature, not only the water', async () => {
     const result = await calcJson(
       ...args,
