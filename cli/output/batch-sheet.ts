@@ -33,7 +33,12 @@ export function groupLines(group: PresentedGroup): string[] {
     ...rows,
   ];
   if (group.total)
-    table.push([group.total.label, group.total.percent ?? '', group.total.amount, '(total)']);
+    table.push([
+      group.total.label,
+      group.total.percent ?? '',
+      group.total.amount,
+      `(${group.total.note ?? 'total'})`,
+    ]);
   const lines = textTable(table, ['left', 'right', 'right', 'left']);
   if (group.total) {
     const width = Math.max(...lines.map((line) => line.length));

@@ -80,8 +80,17 @@ export interface PresentedGroup {
   /** The printed lines added up, and the exact total. */
   readonly total?: {
     readonly label: string;
+    /** The printed lines added up. */
     readonly amount: string;
+    /** The exact total, grams. */
     readonly grams: string;
+    /**
+     * The exact total rounded as the total row is: the table's weight, printed the same wherever
+     * it appears; differs from {@link amount} when the rounded lines add up to another figure.
+     */
+    readonly weight: string;
+    /** Said beside the total when {@link weight} differs from {@link amount}, in words. */
+    readonly note?: string;
     readonly percent?: string;
   };
 }
