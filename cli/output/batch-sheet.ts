@@ -33,7 +33,12 @@ export function groupLines(group: PresentedGroup): string[] {
     ...rows,
   ];
   if (group.total)
-    table.push([group.total.label, group.total.percent ?? '', group.total.amount, '(total)']);
+    table.push([
+      group.total.label,
+      group.total.percent ?? '',
+      group.total.amount,
+      `(${group.total.note ?? 'total'})`,
+    ]);
   const lines = textTable(table, ['left', 'right', 'right', 'left']);
   if (group.total) {
     const width = Math.max(...lines.map((line) => line.length));
@@ -88,7 +93,7 @@ export function renderBatchSheet(result: PresentedResult): string {
   }
   if (!result.critical && result.portions) {
     const p = result.portions;
-    out.push(...heading('Portions'), `  ${p.count} × ${p.piece}, ${p.remainder} left over`);
+    out.push(...heading('Portions'), `  ${p.sentence}`);
   }
   if (result.warnings.length)
     out.push(...heading('Warnings'), ...result.warnings.map((w) => `  ! ${w}`));

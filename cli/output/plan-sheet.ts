@@ -26,7 +26,7 @@ function batchLines(batch: PresentedPlanBatch): string[] {
   for (const group of result.groups) out.push(...groupLines(group).slice(1));
   if (result.portions) {
     const p = result.portions;
-    out.push(`  Portions: ${p.count} × ${p.piece}, ${p.remainder} left over`);
+    out.push(`  Portions: ${p.sentence}`);
   }
   for (const check of result.checks) {
     out.push(`  ${check.verdict.padEnd(4)}  ${check.label}: ${check.sentence}`);

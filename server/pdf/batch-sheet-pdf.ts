@@ -244,7 +244,7 @@ function check(layout: SheetLayout, result: PresentedResult, title: string): voi
   }
   if (result.portions) {
     const p = result.portions;
-    layout.paragraph(`Portions: ${p.count} × ${p.piece}, ${p.remainder} left over`, {
+    layout.paragraph(`Portions: ${p.sentence}`, {
       weight: 'semibold',
     });
   }

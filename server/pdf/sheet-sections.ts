@@ -110,7 +110,15 @@ export function weighTable(layout: SheetLayout, group: PresentedGroup): void {
       keepWithPrevious: true,
       cells: [
         '',
-        `${group.total.label} (total)`,
+        {
+          text: `${group.total.label} (total)`,
+          sub: group.total.note
+            ? {
+                text: group.total.note,
+                style: { size: SMALL, weight: 'regular', color: INK.muted },
+              }
+            : undefined,
+        },
         ...(hasPercent ? [group.total.percent ?? ''] : []),
         group.total.amount,
         ...(hasGrams ? [''] : []),

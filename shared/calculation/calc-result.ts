@@ -101,6 +101,11 @@ export interface Portions {
   readonly pieceGrams: Decimal;
   readonly count: number;
   readonly remainderGrams: Decimal;
+  /**
+   * The loss allowance, % of the batch, when the batch was scaled up by it: the remainder is
+   * then that allowance (dough lost in mixing and dividing), not spare.
+   */
+  readonly lossPct?: Decimal;
 }
 
 /** The full, exact outcome of one batch calculation. Rounding happens only when presenting it. */

@@ -4,6 +4,8 @@ import fc from 'fast-check';
 import { Decimal } from '../decimal.ts';
 import type { CalcResult } from '../calculation/calc-result.ts';
 import { calculateCure } from '../calculation/cure/calculate-cure.ts';
+import { calculateDough } from '../calculation/dough/calculate-dough.ts';
+import { bunDough } from '../calculation/dough/dough-fixtures.ts';
 import type { CureFormula } from '../formula/formula-types.ts';
 import { formatMass, formatTemperature } from './format-figure.ts';
 import { presentResult } from './present-result.ts';
@@ -146,5 +148,24 @@ describe('presentResult', () => {
     );
     assert.equal(presented.critical, true);
     assert.deepEqual(presented.groups, []);
+  });
+
+  it("should call a dough's remainder its loss allowance, not dough left over", () => {
+    // WE-16: 48 buns × 80 g with 2 % loss divided out = 3918.367 g; 3918.367 − 3840 = 78.367 g,
+    // which is the loss allowance itself (2 % of 3918.367 g), not spare dough.
+    // source: "Bread Formula Construction", baking-science education series part 3 (2011) (D-4)
+    const dough = calculateDough(bunDough(), {
+      pieces: 48,
+      piece: new Decimal(80),
+      loss: new Decimal(2),
+    });
+    const portions = presentResult(dough, 'metric').portions;
+    assert.ok(portions);
+    assert.match(
+      portions.sentence,
+      /^48 × 80\.0 g; the other 78\.4 g is the loss allowance \(2 %\)/,
+    );
+    assert.match(portions.sentence, /not spare dough/);
+    assert.doesNotMatch(portions.sentence, /left over/);
   });
 });

@@ -1,4 +1,4 @@
-import type { Decimal} from '../decimal.ts';
+import type { Decimal } from '../decimal.ts';
 import { sum } from '../decimal.ts';
 import { allergenName } from '../calculation/allergens.ts';
 import {
@@ -8,11 +8,11 @@ import {
   type Figure,
   type LimitCheck,
   type LineGroup,
+  type Portions,
 } from '../calculation/calc-result.ts';
 import {
   formatGramsFine,
   formatScaleAmount,
-  isMinorAmount,
   KILOGRAM_DISPLAY_FROM,
   roundForScale,
   type ScaleAmount,
@@ -20,11 +20,19 @@ import {
 } from '../units/scale-amount.ts';
 import { limitFigure, shownValue, valueBesideLimit } from './check-figures.ts';
 import { formatFigure, formatMass, formatPercent } from './format-figure.ts';
+import {
+  formatWeight,
+  roundLine,
+  tableWeights,
+  weightOf,
+  type PrintedWeight,
+} from './printed-weights.ts';
 import type {
   PresentedCheck,
   PresentedFigure,
   PresentedGroup,
   PresentedLine,
+  PresentedPortions,
   PresentedResult,
 } from './presented-result.ts';
 
@@ -34,11 +42,11 @@ export function roundingNote(system: UnitSystem): string {
     system === 'us'
       ? 'Amounts are rounded half-up to 0.1 oz, with the gram figure beside every curing-salt line.'
       : 'Amounts are rounded half-up to what a scale weighs: curing salt and lines under 100 g to 0.1 g, the rest to 1 g (shown in kg from 10 kg).';
-  return `${scale} Totals add up the printed lines. Limits are checked on the unrounded values.`;
-}
-
-function weighsFine(line: AmountLine): boolean {
-  return line.role === 'curing-salt' || isMinorAmount(line.grams);
+  return (
+    `${scale} Totals add up the printed lines; where the exact weight rounds to another figure, it is ` +
+    'given beside the total, and printed the same wherever else it appears. Limits are checked on ' +
+    'the unrounded values.'
+  );
 }
 
 function presentLine(
@@ -60,8 +68,12 @@ function presentLine(
   };
 }
 
-function presentGroup(group: LineGroup, system: UnitSystem): PresentedGroup {
-  const rounded = group.lines.map((line) => roundForScale(line.grams, system, weighsFine(line)));
+function presentGroup(
+  group: LineGroup,
+  system: UnitSystem,
+  weights: readonly PrintedWeight[],
+): PresentedGroup {
+  const rounded = group.lines.map((line) => roundLine(line, system, weights));
   const exactTotal = sum(group.lines.map((line) => line.grams));
   const inKilograms = exactTotal.greaterThanOrEqualTo(KILOGRAM_DISPLAY_FROM);
   const lines = group.lines.map((line, i) => presentLine(line, system, rounded[i], inKilograms));
@@ -74,6 +86,11 @@ function presentGroup(group: LineGroup, system: UnitSystem): PresentedGroup {
     unit: rounded[0].unit,
     places,
   };
+  const amount = formatScaleAmount(total, inKilograms);
+  const weight = formatWeight(
+    weightOf(weights, exactTotal) ?? { exact: exactTotal, places },
+    system,
+  );
   const percents = group.lines.map((line) => line.percent);
   const percentTotal = percents.every((p): p is Decimal => p !== undefined)
     ? formatPercent(sum(percents))
@@ -84,17 +101,61 @@ function presentGroup(group: LineGroup, system: UnitSystem): PresentedGroup {
     lines,
     total: {
       label: group.totalLabel,
-      amount: formatScaleAmount(total, inKilograms),
+      amount,
       grams: exactTotal.toString(),
+      weight,
+      ...(weight === amount
+        ? {}
+        : { note: `adds up the lines as printed; the exact weight is ${weight}` }),
       ...(percentTotal ? { percent: percentTotal } : {}),
     },
   };
 }
 
-function presentFigure(figure: Figure, system: UnitSystem): PresentedFigure {
+function presentPortions(
+  portions: Portions,
+  system: UnitSystem,
+  weights: readonly PrintedWeight[],
+): PresentedPortions {
+  const piece = formatMass(portions.pieceGrams, system);
+  // What is over is printed as finely as the batch it is cut from, so that the two subtract.
+  const batch = weightOf(
+    weights,
+    portions.remainderGrams.plus(portions.pieceGrams.times(portions.count)),
+  );
+  const remainder = batch
+    ? formatScaleAmount(roundForScale(portions.remainderGrams, system, batch.places > 0))
+    : formatMass(portions.remainderGrams, system);
+  const cut = `${portions.count} × ${piece}`;
+  let sentence = `${cut}, ${remainder} left over`;
+  if (portions.lossPct?.isZero()) {
+    sentence = `${cut}; no loss allowance, so nothing is over for dough lost in mixing and dividing`;
+  } else if (portions.lossPct) {
+    sentence =
+      `${cut}; the other ${remainder} is the loss allowance (${portions.lossPct.toString()} %), ` +
+      'for dough lost in mixing, dividing and on the bench: not spare dough';
+  }
+  return {
+    piece,
+    count: portions.count,
+    remainder,
+    remainderGrams: portions.remainderGrams.toString(),
+    sentence,
+  };
+}
+
+function presentFigure(
+  figure: Figure,
+  system: UnitSystem,
+  weights: readonly PrintedWeight[],
+): PresentedFigure {
+  const weight =
+    figure.kind === 'mass' && typeof figure.value !== 'string'
+      ? weightOf(weights, figure.value)
+      : undefined;
   return {
     label: figure.label,
-    value: formatFigure(figure.kind, figure.value, system),
+    value: weight ? formatWeight(weight, system) : formatFigure(figure.kind, figure.value, system),
     ...(typeof figure.value === 'string' ? {} : { exact: figure.value.toString() }),
     ...(figure.note ? { note: figure.note } : {}),
   };
@@ -152,13 +213,14 @@ export function presentResult(result: CalcResult, system: UnitSystem): Presented
 }
 
 function presentAll(result: CalcResult, system: UnitSystem): PresentedResult {
+  const weights = tableWeights(result.groups, system);
   return {
     formula: result.formula,
     units: system,
-    inputs: result.inputs.map((f) => presentFigure(f, system)),
-    groups: result.groups.map((g) => presentGroup(g, system)),
+    inputs: result.inputs.map((f) => presentFigure(f, system, weights)),
+    groups: result.groups.map((g) => presentGroup(g, system, weights)),
     steps: result.steps,
-    figures: result.figures.map((f) => presentFigure(f, system)),
+    figures: result.figures.map((f) => presentFigure(f, system, weights)),
     checks: result.checks.map(presentCheck),
     critical: failsCriticalLimit(result),
     warnings: result.warnings,
@@ -175,16 +237,7 @@ function presentAll(result: CalcResult, system: UnitSystem): PresentedResult {
           })),
         }
       : {}),
-    ...(result.portions
-      ? {
-          portions: {
-            piece: formatMass(result.portions.pieceGrams, system),
-            count: result.portions.count,
-            remainder: formatMass(result.portions.remainderGrams, system),
-            remainderGrams: result.portions.remainderGrams.toString(),
-          },
-        }
-      : {}),
+    ...(result.portions ? { portions: presentPortions(result.portions, system, weights) } : {}),
     rounding: roundingNote(system),
     ...(result.notes ? { notes: result.notes } : {}),
   };

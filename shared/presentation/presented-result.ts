@@ -37,15 +37,20 @@ export interface PresentedResult {
     readonly amount: string;
     readonly grams: string;
   }[];
-  readonly portions?: {
-    readonly piece: string;
-    readonly count: number;
-    readonly remainder: string;
-    readonly remainderGrams: string;
-  };
+  readonly portions?: PresentedPortions;
   /** How amounts were rounded, in words. */
   readonly rounding: string;
   readonly notes?: string;
+}
+
+/** Pieces or portions cut from a batch, and what is over. */
+export interface PresentedPortions {
+  readonly piece: string;
+  readonly count: number;
+  readonly remainder: string;
+  readonly remainderGrams: string;
+  /** The portions in words, saying what the remainder is: "48 × 90.0 g; the other …". */
+  readonly sentence: string;
 }
 
 export interface PresentedFigure {
@@ -76,8 +81,17 @@ export interface PresentedGroup {
   /** The printed lines added up, and the exact total. */
   readonly total?: {
     readonly label: string;
+    /** The printed lines added up. */
     readonly amount: string;
+    /** The exact total, grams. */
     readonly grams: string;
+    /**
+     * The exact total rounded as the total row is: the table's weight, printed the same wherever
+     * it appears; differs from {@link amount} when the rounded lines add up to another figure.
+     */
+    readonly weight: string;
+    /** Said beside the total when {@link weight} differs from {@link amount}, in words. */
+    readonly note?: string;
     readonly percent?: string;
   };
 }

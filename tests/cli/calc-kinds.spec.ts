@@ -105,6 +105,33 @@ describe('larder calc on a dough (pit-bun, 48 pieces of 90 g, 3 % loss)', () => 
     assert.equal(places(result.portions?.remainderGrams, 3), '133.608');
   });
 
+  it('says on the sheet that what is over is the loss allowance, in its own words', async () => {
+    const run = await runLarder(['calc', ...args]);
+    assertExit(run, 0);
+    // 4453.608 − 4320 = 133.608 g = 3 % of 4453.608 g: the allowance, not spare dough.
+    // source: The Bakery Network, "Bread Formula Construction" (2011) (D-4): the sheet names
+    // the convention in its own words, not by the handbook's title
+    assert.match(run.stdout, /48 × 90\.0 g; the other \d+(\.\d)? g is the loss allowance \(3 %\)/);
+    assert.doesNotMatch(run.stdout, /left over/);
+    assert.match(run.stdout, /loss taken out of the mixed dough/);
+    assert.doesNotMatch(run.stdout, /Bread Formula Construction/);
+  });
+
+  it('brings the milk and egg to the liquid temperature, not only the water', async () => {
+    const result = await calcJson(
+      ...args,
+      ...['--room', '24C', '--flour-temp', '22C', '--preferment-temp', '18C', '--tap', '15C'],
+    );
+    // 4 × 26 − (24 + 22 + 18) − 22 °F × 5/9 = 104 − 64 − 12.222 = 27.778 °C, printed to 0.5 °C.
+    // source: D-6 (San Francisco Baking Institute, Artisan I workshop reference material, 2009),
+    // D-8 for the friction factor in °C; own example, derived
+    assert.equal(places(figure(result.figures, /^liquid temperature$/i).exact, 3), '27.778');
+    assert.equal(figure(result.figures, /^bring whole milk and whole egg to$/i).value, '28.0 °C');
+    assert.equal(figure(result.figures, /^water temperature$/i).value, '28.0 °C');
+    // The tap (15 °C) is colder than 27.8 °C: no ice.
+    assert.ok(!result.groups.some((g) => g.lines.some((l) => l.role === 'ice')));
+  });
+
   it('refuses a blend option on a dough', async () => {
     const run = await runLarder(['calc', ...args, '--target-fat', '20']);
     assertCleanFailure(run, 2, /^larder: --target-fat does not apply to a dough formula$/m, {

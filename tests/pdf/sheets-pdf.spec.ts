@@ -149,6 +149,19 @@ describe('batch sheets as PDF from the command line', () => {
     assert.match(sheet.all, /Contains: egg, fish \(anchovy\)/);
   });
 
+  it('should print the bun dough and its sponge with one weight each', async (t) => {
+    const file = path.join(makeTempDir(t), 'bun.pdf');
+    assertExit(await runLarder(['calc', 'pit-bun', '--pieces', '48', '--pdf', file]), 0);
+    const sheet = await pdfText(readFileSync(file));
+    // 48 × 90 g ÷ 0.97 = 4453.608 g of dough; sponge 30 % × 2381.609 g × 1.803 = 1288.212 g.
+    // source: "Bread Formula Construction" (2011) (D-4); BBGA 2009 (D-1, D-2); own example, derived
+    assert.match(sheet.all, /sponge .*1288\.2 g/);
+    assert.match(sheet.all, /the exact weight is 4453\.6 g/);
+    assert.match(sheet.all, /Mixed dough 4453\.6 g/);
+    assert.doesNotMatch(sheet.all, /4454 g|1288 g/);
+    assert.match(sheet.all, /the other 133\.6 g is the loss allowance/);
+  });
+
   it('should not replace a file without --force, and replace it with', async (t) => {
     const file = path.join(makeTempDir(t), 'taken.pdf');
     writeFileSync(file, 'keep me');

@@ -76,7 +76,7 @@ describe('calculating a dough batch', () => {
     assert.equal(result.portions?.remainderGrams.toFixed(3), '78.367');
     const loss = result.inputs.find((f) => f.label === 'Loss allowance');
     assert.equal(loss?.kind, 'percent');
-    assert.match(loss?.note ?? '', /divide convention/);
+    assert.match(loss?.note ?? '', /÷ \(1 − loss\/100\)/);
   });
 
   it('should report effective hydration with USDA water contents and plain-water hydration', () => {

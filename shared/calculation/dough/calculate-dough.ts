@@ -11,11 +11,8 @@ import { lineAtPercent, toAmountLine, type DoughLine } from './dough-line.ts';
 import { effectiveHydration, plainWaterHydration } from './hydration.ts';
 import { prefermentLine, splitPreferment } from './preferment.ts';
 import { portionsOf, scaleDough } from './scale-dough.ts';
-import {
-  planWaterTemperature,
-  splitWaterWithIce,
-  type TemperaturePlan,
-} from './temperature-plan.ts';
+import { planLiquids, type LiquidPlan } from './liquid-plan.ts';
+import { planWaterTemperature, splitWaterWithIce } from './temperature-plan.ts';
 import { convertYeastLine, yeastLabel } from './yeast.ts';
 
 /** Options of a dough calculation that are not batch inputs. */
@@ -41,21 +38,21 @@ function group(
   return { title, percentOf, lines: lines.map(toAmountLine), totalLabel };
 }
 
-/** Ices the plain water of the lines weighed at the mixer, when the plan calls for it. */
-function withIce(
+/**
+ * Tempers the liquids of the lines weighed at the mixer: adds the liquid figures and warnings
+ * and ices the plain water when the plan calls for it.
+ */
+function tempered(
   lines: DoughLine[],
-  plan: TemperaturePlan,
+  liquid: { celsius?: Decimal; rule?: string },
   tap: Decimal | undefined,
-  warnings: string[],
+  out: { figures: Figure[]; warnings: string[] },
 ): DoughLine[] {
+  if (liquid.celsius === undefined || liquid.rule === undefined) return lines;
+  const plan: LiquidPlan = planLiquids(lines, liquid.celsius, liquid.rule, tap);
+  out.figures.push(...plan.figures);
+  out.warnings.push(...plan.warnings);
   if (!plan.iceFraction || tap === undefined) return lines;
-  if (!lines.some((line) => line.role === 'water')) {
-    warnings.push(
-      'The water must be colder than the tap, but there is no plain water (food: water) in the dough ' +
-        'mixed now to replace with ice: chill the liquids or the flour instead.',
-    );
-    return lines;
-  }
   return splitWaterWithIce(lines, plan.iceFraction, tap);
 }
 
@@ -145,13 +142,15 @@ export function calculateDough(
   const plan = planWaterTemperature(formula, batch, formula.preferment !== undefined);
   inputs.push(...plan.inputs);
   warnings.push(...plan.warnings);
+  const liquid = { celsius: plan.liquidC, rule: plan.rule };
+  const temperatureOut = { figures: [] as Figure[], warnings };
 
   const groups: LineGroup[] = [];
   const figures: Figure[] = [{ label: 'Total flour', kind: 'mass', value: flour }];
   const preferment = formula.preferment;
   if (!preferment) {
     groups.push(
-      group('Dough', OF_TOTAL_FLOUR, withIce(overall, plan, batch.tap, warnings), 'Dough'),
+      group('Dough', OF_TOTAL_FLOUR, tempered(overall, liquid, batch.tap, temperatureOut), 'Dough'),
     );
   } else {
     const split = splitPreferment(formula.ingredients, preferment, flour);
@@ -162,7 +161,7 @@ export function calculateDough(
       group(
         'Final dough',
         OF_TOTAL_FLOUR,
-        withIce(final, plan, batch.tap, warnings),
+        tempered(final, liquid, batch.tap, temperatureOut),
         'Final dough',
       ),
       group(OVERALL_FORMULA_TITLE, OF_TOTAL_FLOUR, overall, 'Overall'),
@@ -191,7 +190,7 @@ export function calculateDough(
       note: "sum of the baker's percentages",
     },
     ...hydrationFigures(overall),
-    ...plan.figures,
+    ...temperatureOut.figures,
   );
 
   const portions = portionsOf(scale, mixed);

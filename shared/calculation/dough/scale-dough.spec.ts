@@ -40,6 +40,15 @@ describe('scaling a dough batch', () => {
     assert.equal(piece?.note, 'from the formula');
   });
 
+  it('should say in its own words that the loss is taken out of the mixed dough', () => {
+    // The convention is the one in "Bread Formula Construction", baking-science education series
+    // part 3 (2011) (check-values D-4, WE-15): the sheet explains it without the handbook's title.
+    const scale = scaleDough(bunDough(), { pieces: 48, piece: dec(80), loss: dec(2) });
+    const note = scale.inputs[2].note ?? '';
+    assert.match(note, /loss taken out of the mixed dough/);
+    assert.doesNotMatch(note, /Bread Formula Construction/);
+  });
+
   it('should echo pieces, piece weight and loss with the divide convention named', () => {
     const scale = scaleDough(bunDough(), { pieces: 48, piece: dec(80), loss: dec(2) });
     assert.deepEqual(
@@ -50,7 +59,7 @@ describe('scaling a dough batch', () => {
         ['Loss allowance', 'percent', '2'],
       ],
     );
-    assert.match(scale.inputs[2].note ?? '', /divide convention/);
+    assert.match(scale.inputs[2].note ?? '', /÷ \(1 − loss\/100\)/);
   });
 
   it('should scale by mixed dough weight and by flour weight', () => {

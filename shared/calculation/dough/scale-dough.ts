@@ -17,17 +17,24 @@ export interface DoughScale {
   readonly doughGrams: Decimal;
   /** Total flour, grams: the 100 % of the baker's percentages. */
   readonly flourGrams: Decimal;
-  /** Pieces to divide, when scaled by pieces. */
-  readonly pieces?: { readonly count: number; readonly pieceGrams: Decimal };
+  /** Pieces to divide, with the loss allowance they were scaled by, when scaled by pieces. */
+  readonly pieces?: {
+    readonly count: number;
+    readonly pieceGrams: Decimal;
+    readonly lossPct: Decimal;
+  };
   /** The batch inputs used, echoed. */
   readonly inputs: Figure[];
   readonly warnings: string[];
 }
 
-/** How the loss allowance is applied, in words, for the note on the loss figure. */
+/**
+ * How the loss allowance is applied, in words, for the note on the loss figure: the convention
+ * of doughForPieces(), said in our own words (its source is named there and in the README).
+ */
 export const LOSS_CONVENTION =
-  'divide convention: dough = pieces × piece ÷ (1 − loss/100), as in "Bread Formula Construction" ' +
-  '(2011); multiplying by (1 + loss/100) instead gives slightly less dough';
+  'loss taken out of the mixed dough: dough = pieces × piece ÷ (1 − loss/100), so the pieces ' +
+  'are what is left after the loss; adding the loss on top instead makes slightly less dough';
 
 /**
  * Mixed dough needed for a number of pieces with a loss allowance, by the divide convention:
@@ -84,7 +91,7 @@ function scaleByPieces(formula: DoughFormula, batch: BatchInput, totalPct: Decim
     mode: 'pieces',
     doughGrams,
     flourGrams: flourForDough(doughGrams, totalPct),
-    pieces: { count, pieceGrams: piece.grams },
+    pieces: { count, pieceGrams: piece.grams, lossPct: loss },
     inputs: [
       { label: 'Pieces', kind: 'count', value: dec(count) },
       {
@@ -163,6 +170,11 @@ export function scaleDough(formula: DoughFormula, batch: BatchInput): DoughScale
  */
 export function portionsOf(scale: DoughScale, mixedGrams: Decimal): Portions | undefined {
   if (!scale.pieces) return undefined;
-  const { count, pieceGrams } = scale.pieces;
-  return { pieceGrams, count, remainderGrams: mixedGrams.minus(dec(count).times(pieceGrams)) };
+  const { count, pieceGrams, lossPct } = scale.pieces;
+  return {
+    pieceGrams,
+    count,
+    remainderGrams: mixedGrams.minus(dec(count).times(pieceGrams)),
+    lossPct,
+  };
 }

@@ -6,7 +6,9 @@ import { calculateDough } from './calculate-dough.ts';
 import {
   figure,
   figureValue as value,
+  bunDough,
   groupTotal,
+  doughFormula,
   leanDough,
   poolishDough,
 } from './dough-fixtures.ts';
@@ -138,5 +140,65 @@ describe('dough temperature in a batch', () => {
     assert.equal(figure(result, 'Water temperature')?.value.toString(), '-90');
     assert.ok(result.warnings.some((w) => /Chill the flour/.test(w)));
     assert.ok(!result.groups[0].lines.some((line) => line.role === 'ice'));
+  });
+});
+
+describe('every liquid tempered, ice only from the water', () => {
+  // The rule's "water" is the liquid that goes in: milk and egg count as it does.
+  // source: D-6 (San Francisco Baking Institute, Artisan I workshop reference material, 2009);
+  // text read: "Dough Temperature", starreveld.com/Baking/Dough_Temperature.html ("water/liquids
+  // used … (milk, or other liquids)"). Bun: check-values WE-16, 1000 g flour → water 50 g,
+  // milk 500 g, egg 100 g.
+  const warmKitchen = { flour: dec(1000), ddt: dec(24), flourTemp: dec(26), friction: dec(14) };
+
+  it('should bring the milk and egg to the liquid temperature and ice only the water', () => {
+    // own example, derived (D-6, D-12): 3 × 24 − (26 + 26) − 14 = 6 °C; ice = 50 × 14 / 99.7 g
+    const result = calculateDough(bunDough(), { ...warmKitchen, room: dec(26), tap: dec(20) });
+    assert.equal(value(result, 'Liquid temperature').toString(), '6');
+    assert.equal(value(result, 'Bring Whole milk and Whole egg to').toString(), '6');
+    assert.equal(value(result, 'Water temperature').toString(), '6');
+    const lines = result.groups[0].lines;
+    const ice = lines.find((line) => line.role === 'ice');
+    assert.equal(ice?.grams.toFixed(6), dec(50).times(14).div('99.7').toFixed(6));
+    assert.equal(lines.find((line) => line.name === 'Whole milk')?.grams.toString(), '500');
+    assert.deepEqual(result.warnings, []);
+  });
+
+  it('should temper a dough with milk and no water without asking for ice', () => {
+    // own example, derived: the milk goes in at 6 °C; there is no water to ice and none needed
+    const milkOnly = doughFormula([
+      { name: 'Flour', pct: 100, flour: true },
+      { name: 'Milk', pct: 65, food: 'milk-whole' },
+      { name: 'Salt', pct: 2 },
+    ]);
+    const result = calculateDough(milkOnly, { ...warmKitchen, room: dec(26), tap: dec(20) });
+    assert.equal(value(result, 'Bring Milk to').toString(), '6');
+    assert.equal(figure(result, 'Water temperature'), undefined);
+    assert.deepEqual(result.warnings, []);
+  });
+
+  it('should make the water colder to make up for milk and egg that cannot go below freezing', () => {
+    // own example, derived from the D-12 heat balance: 3 × 24 − (34 + 26) − 14 = −2 °C;
+    // milk and egg at 0 °C; ice = (water × tap + others × 0 − all liquid × liquid T) ÷ (tap + 79.7)
+    // = (50 × 20 + 650 × 2) ÷ 99.7 = 23.069 g of the 50 g of water
+    const result = calculateDough(bunDough(), { ...warmKitchen, room: dec(34), tap: dec(20) });
+    assert.equal(value(result, 'Liquid temperature').toString(), '-2');
+    assert.equal(value(result, 'Bring Whole milk and Whole egg to').toString(), '0');
+    // (650 × −2 − 600 × 0) ÷ 50 = −26 °C
+    assert.equal(value(result, 'Water temperature').toString(), '-26');
+    const ice = result.groups[0].lines.find((line) => line.role === 'ice');
+    assert.equal(ice?.grams.toFixed(3), '23.069');
+  });
+
+  it('should say plainly when the water alone cannot bring the dough to its temperature', () => {
+    // own example, derived: 3 × 24 − (42 + 26) − 14 = −10 °C; milk and egg at 0 °C; ice needed
+    // (50 × 20 + 650 × 10) ÷ 99.7 = 75.226 g for 50 g of water: not possible
+    const result = calculateDough(bunDough(), { ...warmKitchen, room: dec(42), tap: dec(20) });
+    assert.ok(!result.groups[0].lines.some((line) => line.role === 'ice'));
+    const warning = result.warnings.find((w) => /water alone cannot/.test(w));
+    assert.ok(warning, result.warnings.join('\n'));
+    assert.match(warning, /75\.2 g of ice/);
+    assert.match(warning, /50\.0 g of water/);
+    assert.match(warning, /[Cc]hill/);
   });
 });

@@ -5,25 +5,23 @@ import { parseTemperature, parseTemperatureDifference } from '../../units/temper
 import type { BatchInput } from '../batch-input.ts';
 import type { Figure } from '../calc-result.ts';
 import type { DoughLine } from './dough-line.ts';
-import {
-  ICE_MELT_DEGREES_C,
-  iceFraction,
-  temperatureCount,
-  waterTemperature,
-} from './water-temperature.ts';
+import { temperatureCount, waterTemperature } from './water-temperature.ts';
 
-/** What the dough temperature inputs give: the water temperature and, when needed, ice. */
+/**
+ * What the dough temperature inputs give: the temperature the liquids must go in at, which
+ * {@link planLiquids} shares out among the liquids of the dough mixed now.
+ */
 export interface TemperaturePlan {
   readonly inputs: Figure[];
-  readonly figures: Figure[];
   readonly warnings: string[];
-  /** The water temperature, °C, when every temperature it needs was given. */
-  readonly waterC?: Decimal;
-  /** Share of the plain water to weigh as ice, when the tap water is too warm. */
-  readonly iceFraction?: Decimal;
+  /** The liquid temperature the rule gives, °C, when every temperature it needs was given. */
+  readonly liquidC?: Decimal;
+  /** The rule in words, for the note beside the liquid temperature. */
+  readonly rule?: string;
 }
 
-function celsius(value: Decimal): string {
+/** A temperature in words for a note or warning, °C to 0.1. */
+export function celsius(value: Decimal): string {
   return `${value.toFixed(1)} °C`;
 }
 
@@ -70,9 +68,8 @@ function frictionOf(
 }
 
 /**
- * Works out the water temperature for the desired dough temperature (n = 3, or 4 with a
- * preferment) and whether part of the water must be ice. Missing temperatures skip the water
- * temperature with a warning that names the options to give.
+ * Works out the liquid temperature for the desired dough temperature (n = 3, or 4 with a
+ * preferment). Missing temperatures skip it with a warning that names the options to give.
  */
 export function planWaterTemperature(
   formula: DoughFormula,
@@ -87,7 +84,7 @@ export function planWaterTemperature(
           `${given.join(', ')} ${given.length > 1 ? 'were' : 'was'} given, but there is no desired dough temperature: give --ddt or set ddt.target in the formula.`,
         ]
       : [];
-    return { inputs: [], figures: [], warnings };
+    return { inputs: [], warnings };
   }
   const inputs: Figure[] = [
     temperatureInput(
@@ -117,7 +114,7 @@ export function planWaterTemperature(
     warnings.push(
       `The water temperature was not worked out: give ${missing.join(' and ')} (°C or °F).`,
     );
-    return { inputs, figures: [], warnings };
+    return { inputs, warnings };
   }
 
   const friction = frictionOf(formula, batch);
@@ -130,70 +127,15 @@ export function planWaterTemperature(
   if (friction.warning) warnings.push(friction.warning);
 
   const n = temperatureCount(withPreferment);
-  const waterC = waterTemperature({
+  const liquidC = waterTemperature({
     ddt: ddt.value,
     room: batch.room as Decimal,
     flour: batch.flourTemp as Decimal,
     ...(withPreferment ? { preferment: batch.prefermentTemp as Decimal } : {}),
     friction: friction.value,
   });
-  const figures: Figure[] = [
-    {
-      label: 'Water temperature',
-      kind: 'temperature',
-      value: waterC,
-      note: `${n} × DDT − (room + flour${withPreferment ? ' + preferment' : ''}) − friction`,
-    },
-  ];
-  const ice = planIce(waterC, batch.tap);
-  warnings.push(...ice.warnings);
-  if (ice.fraction) {
-    figures.push({
-      label: 'Ice share of the water',
-      kind: 'percent',
-      value: ice.fraction.times(HUNDRED),
-      note: `(tap − water) ÷ (tap + ${ICE_MELT_DEGREES_C.toString()}), ice at 0 °C`,
-    });
-  }
-  return {
-    inputs,
-    figures,
-    warnings,
-    waterC,
-    ...(ice.fraction ? { iceFraction: ice.fraction } : {}),
-  };
-}
-
-function planIce(
-  waterC: Decimal,
-  tap: Decimal | undefined,
-): { fraction?: Decimal; warnings: string[] } {
-  const belowFreezing = waterC.lessThan(ZERO);
-  if (tap === undefined) {
-    if (!belowFreezing) return { warnings: [] };
-    return {
-      warnings: [
-        `The water would have to be ${celsius(waterC)}, below freezing: give --tap to work out ice, or chill the flour.`,
-      ],
-    };
-  }
-  if (!waterC.lessThan(tap)) return { warnings: [] };
-  const fraction = iceFraction(tap, waterC);
-  if (fraction.greaterThanOrEqualTo(ONE)) {
-    return {
-      warnings: [
-        `The water would have to be ${celsius(waterC)}: even all ice would not cool the dough enough. ` +
-          'Chill the flour (or the preferment) instead; the water lines were left as they are.',
-      ],
-    };
-  }
-  const warnings = belowFreezing
-    ? [
-        `The water would have to be ${celsius(waterC)}, below freezing: part of the ice must melt in the mixer. ` +
-          'Check the dough temperature at the end of mixing, or chill the flour.',
-      ]
-    : [];
-  return { fraction, warnings };
+  const rule = `${n} × DDT − (room + flour${withPreferment ? ' + preferment' : ''}) − friction`;
+  return { inputs, warnings, liquidC, rule };
 }
 
 /**

@@ -93,3 +93,30 @@ export function iceFraction(tapC: Decimal, targetC: Decimal): Decimal {
   if (!denominator.greaterThan(0)) return ONE;
   return tapC.minus(targetC).div(denominator);
 }
+
+/** A liquid other than plain water going into the dough: its weight and temperature, °C. */
+export interface OtherLiquid {
+  readonly grams: Decimal;
+  readonly celsius: Decimal;
+}
+
+/**
+ * The plain water's own temperature when other liquids (milk, egg…) go in at theirs: the rule's
+ * "water" is every liquid together, so the liquids must add up, weight for weight, to the liquid
+ * temperature: water = (all liquid × liquid T − Σ other × its T) ÷ water. With the others at
+ * the liquid temperature this is the liquid temperature itself. Counts every liquid's heat like
+ * water's (milk's specific heat is about 3.9 J/(g·K), egg's lower: from memory), as the
+ * rule counts the flour's.
+ * Derived from the same heat balance as the ice share (check-values D-12).
+ * @param liquidC the liquid temperature the rule gives, °C
+ * @param waterGrams the plain water, more than 0 g
+ */
+export function waterTemperatureWith(
+  liquidC: Decimal,
+  waterGrams: Decimal,
+  others: readonly OtherLiquid[],
+): Decimal {
+  const otherGrams = sum(others.map((other) => other.grams));
+  const otherHeat = sum(others.map((other) => other.grams.times(other.celsius)));
+  return waterGrams.plus(otherGrams).times(liquidC).minus(otherHeat).div(waterGrams);
+}
