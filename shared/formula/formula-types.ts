@@ -141,12 +141,14 @@ export interface BlendComponent {
   name: string;
   fat?: number;
   lean?: number;
+  /** Beef fat added as such (loose fat, suet), not trimmings: not allowed in ground beef. */
+  fat_as_such?: boolean;
 }
 
 export interface BlendFormula extends FormulaBase {
   kind: 'blend';
   species?: 'beef' | 'pork' | 'lamb' | 'veal' | 'poultry' | 'mixed';
-  standard?: 'ground-beef' | 'fresh-pork-sausage';
+  standard?: 'ground-beef' | 'hamburger' | 'fresh-pork-sausage';
   components: [BlendComponent, BlendComponent];
   target: { fat?: number; lean?: number };
   ingredients?: { name: string; pct: number; allergens?: Allergen[] }[];

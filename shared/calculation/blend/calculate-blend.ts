@@ -17,7 +17,7 @@ import type {
 import { yieldStages } from '../yields.ts';
 import { componentFat, componentLabel, formulaTargetFat } from './blend-fat.ts';
 import { blendMeat } from './blend-size.ts';
-import { fatStandardCheck } from './fat-standard-check.ts';
+import { standardOutcome } from './blend-standard.ts';
 import { blendFatPercent } from './pearson-square.ts';
 import { portionsOf } from './portion.ts';
 
@@ -139,6 +139,15 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
     { label: 'Chemical lean', kind: 'percent', value: HUNDRED.minus(fat) },
     { label: 'Total batch weight', kind: 'mass', value: batchGrams },
   ];
+  const standard = standardOutcome(
+    formula,
+    [
+      { component: first, grams: size.amounts.first },
+      { component: second, grams: size.amounts.second },
+    ],
+    fat,
+  );
+  figures.push(...standard.figures);
 
   const portion = portionGrams(formula, batch);
   let portions: Portions | undefined;
@@ -168,8 +177,8 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
     groups,
     steps: formula.steps ?? [],
     figures,
-    checks: formula.standard ? [fatStandardCheck(formula.standard, fat)] : [],
-    warnings: [],
+    checks: standard.checks,
+    warnings: standard.warnings,
     cautions: blendCautions(formula, allergens),
     allergens,
     ...(formula.yields ? { yields: blendYields(meat, batchGrams, formula.yields) } : {}),

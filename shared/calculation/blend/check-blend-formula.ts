@@ -5,7 +5,7 @@ import {
   contentError,
   contentWarning,
 } from '../../formula/formula-problem.ts';
-import { FAT_STANDARDS } from '../../reference/fat-standards.ts';
+import { FAT_AS_SUCH_ALTERNATIVE, FAT_STANDARDS } from '../../reference/fat-standards.ts';
 import { parseMass } from '../../units/mass.ts';
 import { QuantityError } from '../../units/quantity-error.ts';
 import { fatFrom, formatPercent, unreachableMessage } from './blend-fat.ts';
@@ -46,7 +46,8 @@ function checkPortion(portion: string, problems: ContentProblem[]): void {
  * Checks what the schema cannot about a blend formula: the component keys are unique, the
  * target lies between the two components' fats (check-values P-2), the portion is a mass over
  * 0 g, and the seasoning names are unique (ignoring case). Warns when the target is over the
- * fat standard the formula names.
+ * fat standard the formula names, or a component is fat added as such where the standard forbids
+ * it (ground beef, 9 CFR 319.15(a)).
  * @returns the problems found; none when the formula can be used
  */
 export function checkBlendFormula(formula: BlendFormula): ContentProblem[] {
@@ -80,6 +81,22 @@ export function checkBlendFormula(formula: BlendFormula): ContentProblem[] {
         ),
       );
     }
+  }
+
+  if (formula.standard && FAT_STANDARDS[formula.standard].forbidsFatAsSuch) {
+    const rule = FAT_STANDARDS[formula.standard];
+    const other = FAT_STANDARDS[FAT_AS_SUCH_ALTERNATIVE];
+    formula.components.forEach((component, i) => {
+      if (!component.fat_as_such) return;
+      problems.push(
+        contentWarning(
+          ['components', i, 'fat_as_such'],
+          `${rule.name} may not have fat added as such (${rule.section}): a batch that takes ` +
+            `"${component.name}" is refused; name the standard ${other.name} (${other.section}) ` +
+            'if the product is sold as that',
+        ),
+      );
+    });
   }
 
   if (formula.portion !== undefined) checkPortion(formula.portion, problems);
