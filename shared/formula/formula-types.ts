@@ -154,6 +154,8 @@ export interface BlendFormula extends FormulaBase {
   ingredients?: { name: string; pct: number; allergens?: Allergen[] }[];
   /** Portion weight, e.g. "4 oz". */
   portion?: string;
+  /** Blend lost in grinding and forming, % of the batch; portions come from the rest. */
+  loss_pct?: number;
   yields?: Yields;
   /** Days from making the blend to service; default 0. */
   lead_days?: number;

@@ -6,6 +6,7 @@ import type { BatchInput } from '../batch-input.ts';
 import type { Figure } from '../calc-result.ts';
 import { referenceFromFinished } from '../yields.ts';
 import { formatPercent, unreachableMessage } from './blend-fat.ts';
+import { keptAfterLoss } from './blend-loss.ts';
 import { isReachable, partnerForFixed, pearsonSquare, type TwoAmounts } from './pearson-square.ts';
 
 /** The fats a blend is worked out from, all in %. */
@@ -47,7 +48,8 @@ function requirePositive(grams: Decimal, option: SizeOption): void {
  * - `total`: the raw meat weight, split by the Pearson square;
  * - `onHand`: one component fixed by what is on hand, the other added to reach the target;
  * - `want`: the finished weight, worked back through the yields after the reference (cure,
- *   smoke, cook, slice) to the raw batch weight, seasoning included, then to the meat in it.
+ *   smoke, cook, slice) and the grinding and forming loss to the raw batch weight, seasoning
+ *   included, then to the meat in it.
  * @param seasoning the seasoning as a fraction of the meat weight (Σ pct ÷ 100)
  * @throws BatchError when no size or several are given, a size is not more than 0, the on-hand
  *   key is unknown, or the target cannot be made from the two components
@@ -88,7 +90,9 @@ export function blendMeat(
     requirePositive(want, 'want');
     // Yields apply to everything that is cooked, seasoning included; the meat is the raw batch
     // less its seasoning.
-    meat = referenceFromFinished(want, formula.yields).div(ONE.plus(seasoning));
+    meat = referenceFromFinished(want, formula.yields)
+      .div(keptAfterLoss(formula))
+      .div(ONE.plus(seasoning));
     const note = formula.yields ? 'worked back through the yields' : 'no yields: raw weight';
     input = { label: 'Finished weight wanted', kind: 'mass', value: want, note };
   }

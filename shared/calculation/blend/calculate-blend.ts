@@ -16,6 +16,7 @@ import type {
 } from '../calc-result.ts';
 import { yieldStages } from '../yields.ts';
 import { componentFat, componentLabel, formulaTargetFat } from './blend-fat.ts';
+import { keptAfterLoss, lossInput } from './blend-loss.ts';
 import { blendMeat } from './blend-size.ts';
 import { standardOutcome } from './blend-standard.ts';
 import { blendFatPercent } from './pearson-square.ts';
@@ -49,14 +50,15 @@ function portionGrams(formula: BlendFormula, batch: BatchInput): Figure | undefi
 
 /**
  * Yield stages of a blend. Trimming happens to the meat alone, so the weight to buy comes from
- * the meat; every later step (cook…) happens to the seasoned batch, so those stages start from
- * the whole raw batch. Without seasoning both are the raw blend weight.
+ * the meat; every later step (cook…) happens to the seasoned batch after its grinding and
+ * forming loss, so those stages start from that. Without seasoning or loss both are the raw
+ * blend weight.
  */
-function blendYields(meat: Decimal, batch: Decimal, yields: Yields): YieldStage[] {
+function blendYields(meat: Decimal, formed: Decimal, yields: Yields): YieldStage[] {
   const { trim, ...afterTrim } = yields;
   return [
     ...yieldStages(meat, trim === undefined ? undefined : { trim }),
-    ...yieldStages(batch, afterTrim),
+    ...yieldStages(formed, afterTrim),
   ];
 }
 
@@ -149,10 +151,22 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
   );
   figures.push(...standard.figures);
 
+  // Grinding and forming lose part of the batch before it is portioned and cooked.
+  const formed = batchGrams.times(keptAfterLoss(formula));
+  const loss = lossInput(formula);
+  if (loss) {
+    figures.push({
+      label: 'After grinding and forming loss',
+      kind: 'mass',
+      value: formed,
+      note: `${(loss.value as Decimal).toString()} % loss allowance`,
+    });
+  }
+
   const portion = portionGrams(formula, batch);
   let portions: Portions | undefined;
   if (portion) {
-    portions = portionsOf(batchGrams, portion.value as Decimal);
+    portions = portionsOf(formed, portion.value as Decimal);
     const cook = formula.yields?.cook;
     if (cook !== undefined) {
       figures.push({
@@ -169,6 +183,7 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
     { label: 'Target fat', kind: 'percent', value: target.value, note: target.note },
     ...size.inputs,
   ];
+  if (loss) inputs.push(loss);
   if (portion) inputs.push(portion);
 
   return {
@@ -181,7 +196,7 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
     warnings: standard.warnings,
     cautions: blendCautions(formula, allergens),
     allergens,
-    ...(formula.yields ? { yields: blendYields(meat, batchGrams, formula.yields) } : {}),
+    ...(formula.yields ? { yields: blendYields(meat, formed, formula.yields) } : {}),
     ...(portions ? { portions } : {}),
     ...(formula.notes === undefined ? {} : { notes: formula.notes }),
   };
