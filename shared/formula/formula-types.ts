@@ -149,7 +149,8 @@ export interface BlendFormula extends FormulaBase {
   kind: 'blend';
   species?: 'beef' | 'pork' | 'lamb' | 'veal' | 'poultry' | 'mixed';
   standard?: 'ground-beef' | 'hamburger' | 'fresh-pork-sausage';
-  components: [BlendComponent, BlendComponent];
+  /** Two to five components. */
+  components: BlendComponent[];
   target: { fat?: number; lean?: number };
   ingredients?: { name: string; pct: number; allergens?: Allergen[] }[];
   /** Portion weight, e.g. "4 oz". */
