@@ -77,7 +77,12 @@ const BATCH_OPTIONS: readonly [keyof RawBatchOptions, string, string][] = [
   [
     'onHand',
     '--on-hand <key=weight>',
-    'blend: one trimming fixed by what is on hand, e.g. lean=12kg',
+    'blend: a trimming fixed by what is on hand, e.g. lean=12kg; give it for each such trimming',
+  ],
+  [
+    'fatTest',
+    '--fat-test <key=percent>',
+    "blend: fat % measured today for a trimming, e.g. lean=18.5, instead of the formula's; repeatable",
   ],
   ['portion', '--portion <weight>', "blend: portion weight, instead of the formula's"],
   ['base', '--base <weight>', 'mix: weight of the base ingredient'],
@@ -87,6 +92,14 @@ const BATCH_OPTIONS: readonly [keyof RawBatchOptions, string, string][] = [
     'day the batch starts, YYYY-MM-DD, within a year of today (default: today)',
   ],
 ];
+
+/** Options that may be given several times; their KEY=VALUE entries are joined with commas. */
+const REPEATABLE: ReadonlySet<keyof RawBatchOptions> = new Set(['onHand', 'fatTest']);
+
+/** A value parser that gathers every KEY=VALUE given, as one comma-separated list. */
+function gathered(value: string, previous: string | undefined): string {
+  return previous === undefined ? value : `${previous}, ${value}`;
+}
 
 /** A value parser that refuses an option given twice, instead of silently keeping the last. */
 function onlyOnce(flags: string): (value: string, previous: string | undefined) => string {
@@ -144,7 +157,8 @@ export function calcCommand(io: Io): Command {
       'write the batch sheet to a PDF file instead of printing it (A4; Letter in US units)',
     )
     .option('--force', 'with --pdf: replace the file if it exists');
-  for (const [, flags, help] of BATCH_OPTIONS) command.option(flags, help, onlyOnce(flags));
+  for (const [key, flags, help] of BATCH_OPTIONS)
+    command.option(flags, help, REPEATABLE.has(key) ? gathered : onlyOnce(flags));
   return command
     .addHelpText(
       'after',
@@ -156,6 +170,7 @@ Examples:
   larder calc pit-bun --pieces 48 --piece 90g --loss 3 --room 22C --flour-temp 20C --preferment-temp 19C --tap 16C
   larder calc chuck-grind --total 20kg --target-fat 20
   larder calc chuck-grind --on-hand lean=12kg --json
+  larder calc chuck-grind --total 20kg --fat-test lean=17.5
   LARDER_USER=tobin LARDER_PASSWORD=… larder calc quillmoor-belly --meat 4.26kg --thickness 4cm --record
   larder calc quillmoor-belly --meat 4.26kg --record --server http://127.0.0.1:4310
   larder calc quillmoor-belly --meat 4.26kg --thickness 4cm --pdf belly-sheet.pdf

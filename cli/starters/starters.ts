@@ -23,7 +23,7 @@ steps:
 const BLEND = `kind: blend
 species: beef              # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 standard: ground-beef      # optional: check the legal fat ceiling (30 %)
-components:                # exactly two; give fat % or chemical lean (lean: 85)
+components:                # two to five; give fat % or chemical lean (lean: 85)
   - { key: lean, name: chuck trim 85/15, fat: 15 }
   - { key: fat, name: fat trim 50/50, fat: 50 }
 target: { fat: 20 }        # or { lean: 80 }

@@ -40,9 +40,14 @@ export const BATCH_OPTIONS_SCHEMA = {
       'total',
       'targetFat',
       'onHand',
+      'fatTest',
       'portion',
       'base',
-    ].map((key) => [key, { type: 'string', minLength: 1, maxLength: 60 }]),
+    ].map((key) => [
+      key,
+      // Up to five KEY=VALUE entries for on hand and fat tests (a blend has up to five trimmings).
+      { type: 'string', minLength: 1, maxLength: key === 'onHand' || key === 'fatTest' ? 300 : 60 },
+    ]),
   ),
 } as const;
 

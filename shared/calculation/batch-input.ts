@@ -54,8 +54,10 @@ export interface BatchInput {
   total?: Decimal;
   /** Blend: target fat %, instead of the formula's. */
   targetFat?: Decimal;
-  /** Blend: one component fixed by what is on hand. */
-  onHand?: { key: string; grams: Decimal };
+  /** Blend: components fixed by what is on hand, grams each. */
+  onHand?: readonly { key: string; grams: Decimal }[];
+  /** Blend: fat % measured today for components, replacing the formula's figure for the batch. */
+  fatTest?: readonly { key: string; fat: Decimal }[];
   /** Blend: portion weight, grams. */
   portion?: Decimal;
 

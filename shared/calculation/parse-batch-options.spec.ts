@@ -2,7 +2,7 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import { BatchError } from './batch-error.ts';
 import { parseBatchOptions } from './parse-batch-options.ts';
-import { BELLY } from './plan/plan-fixtures.ts';
+import { BELLY, GRIND } from './plan/plan-fixtures.ts';
 
 const TODAY = { today: '2026-12-03' };
 
@@ -33,6 +33,50 @@ describe('batch options: the start day', () => {
     assert.throws(
       () => parseBatchOptions({ meat: '4kg', start: '2026-02-30' }, BELLY, TODAY),
       /--start takes a date written YYYY-MM-DD, not "2026-02-30"/,
+    );
+  });
+});
+
+describe('batch options: several trimmings on hand, fat tests', () => {
+  it('should read several KEY=WEIGHT entries, keeping a decimal comma inside its own', () => {
+    const input = parseBatchOptions({ onHand: 'lean=12kg, fat = 3 kg' }, GRIND, TODAY);
+    assert.deepEqual(
+      input.onHand?.map((e) => [e.key, e.grams.toString()]),
+      [
+        ['lean', '12000'],
+        ['fat', '3000'],
+      ],
+    );
+    // A decimal comma is not taken for a second entry (lean=1 and "5kg"): the mass refuses it.
+    assert.throws(
+      () => parseBatchOptions({ onHand: 'lean=1,5kg' }, GRIND, TODAY),
+      /got "1,5kg": write decimals with a point/,
+    );
+  });
+
+  it('should read fat tests as percentages and refuse one over 100 %', () => {
+    const input = parseBatchOptions({ fatTest: 'lean=18.5,fat=48' }, GRIND, TODAY);
+    assert.deepEqual(
+      input.fatTest?.map((e) => [e.key, e.fat.toString()]),
+      [
+        ['lean', '18.5'],
+        ['fat', '48'],
+      ],
+    );
+    assert.throws(
+      () => parseBatchOptions({ fatTest: 'lean=101' }, GRIND, TODAY),
+      (error: unknown) => error instanceof BatchError && error.option === 'fat-test',
+    );
+    assert.throws(
+      () => parseBatchOptions({ fatTest: '18.5' }, GRIND, TODAY),
+      /--fat-test takes KEY=VALUE, such as "lean=18.5"/,
+    );
+  });
+
+  it('should refuse a fat test for a formula that is not a blend', () => {
+    assert.throws(
+      () => parseBatchOptions({ meat: '4kg', fatTest: 'lean=18' }, BELLY, TODAY),
+      /--fat-test does not apply to a cure formula/,
     );
   });
 });

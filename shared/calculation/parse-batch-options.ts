@@ -65,10 +65,31 @@ function waterReader(text: string, option: string): Decimal {
   }
 }
 
+/**
+ * Reads "KEY=VALUE" entries, several separated by commas ("lean=12kg, fat=3kg"); a comma followed
+ * by anything but another KEY= stays in the value, so "lean=1,5kg" is one entry.
+ */
+function keyedEntries(text: string, option: string, example: string): [string, string][] {
+  return text.split(/,(?=\s*[a-z][a-z0-9-]*\s*=)/).map((entry) => {
+    const match = /^\s*([a-z][a-z0-9-]*)\s*=\s*(.+?)\s*$/.exec(entry);
+    if (!match) throw new BatchError(`--${option} takes KEY=VALUE, such as "${example}"`, option);
+    return [match[1], match[2]];
+  });
+}
+
 function onHandReader(text: string, option: string): BatchInput['onHand'] {
-  const match = /^\s*([a-z][a-z0-9-]*)\s*=\s*(.+)$/.exec(text);
-  if (!match) throw new BatchError(`--${option} takes KEY=WEIGHT, such as "lean=12kg"`, option);
-  return { key: match[1], grams: mass(1000)(match[2], option) };
+  return keyedEntries(text, option, 'lean=12kg').map(([key, value]) => ({
+    key,
+    grams: mass(1000)(value, option),
+  }));
+}
+
+function fatTestReader(text: string, option: string, context: ReadContext): BatchInput['fatTest'] {
+  const percent = ranged(parsePercent, 0, 100, '%');
+  return keyedEntries(text, option, 'lean=18.5').map(([key, value]) => ({
+    key,
+    fat: percent(value, option, context) as Decimal,
+  }));
 }
 
 const YEASTS: readonly YeastKind[] = ['fresh', 'active-dry', 'instant'];
@@ -119,6 +140,7 @@ const OPTIONS: Record<keyof BatchInput, { kinds: readonly BatchKind[]; read: Rea
   total: { kinds: ['dough', 'blend', 'mix'], read: mass(1000) },
   targetFat: { kinds: ['blend'], read: ranged(parsePercent, 0, 100, '%') },
   onHand: { kinds: ['blend'], read: onHandReader },
+  fatTest: { kinds: ['blend'], read: fatTestReader },
   portion: { kinds: ['blend'], read: mass(10) },
   base: { kinds: ['mix'], read: mass(1000) },
 };

@@ -169,18 +169,23 @@ export interface BlendComponent {
   name: string;
   fat?: number;
   lean?: number;
+  /** Beef fat added as such (loose fat, suet), not trimmings: not allowed in ground beef. */
+  fat_as_such?: boolean;
 }
 
 export interface BlendFormula extends FormulaBase {
   kind: 'blend';
   /** Asked for by the checks: without it the sheet gives the highest cooking temperature. */
   species?: FormulaSpecies;
-  standard?: 'ground-beef' | 'fresh-pork-sausage';
-  components: [BlendComponent, BlendComponent];
+  standard?: 'ground-beef' | 'hamburger' | 'fresh-pork-sausage';
+  /** Two to five components. */
+  components: BlendComponent[];
   target: { fat?: number; lean?: number };
   ingredients?: { name: string; pct: number; allergens?: Allergen[] }[];
   /** Portion weight, e.g. "4 oz". */
   portion?: string;
+  /** Blend lost in grinding and forming, % of the batch; portions come from the rest. */
+  loss_pct?: number;
   yields?: Yields;
   /** Days from making the blend to service; default 0. */
   lead_days?: number;

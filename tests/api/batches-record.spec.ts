@@ -118,6 +118,27 @@ describe('recording a batch', () => {
     assert.equal(bun.json.batch.result.units, 'us');
   });
 
+  it('should record a blend with trimmings on hand and a fat test, as the CLI takes them', async (t) => {
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
+    const grind = await server.as('rosa').post('/api/batches', {
+      formula: 'chuck-grind',
+      batch: { total: '20 kg', fatTest: 'lean=18, fat=50', start: '2024-02-29' },
+      units: 'metric',
+    });
+    assert.equal(grind.status, 201, grind.text);
+    // source: check-values P-1 with the lean measured at 18 %: 20 kg × 30/32 = 18.75 kg of lean
+    const lines = grind.json.batch.result.groups[0].lines;
+    assert.equal(lines[0].grams, '18750');
+    assert.match(lines[0].name, /18 % fat, measured/);
+    const both = await server.as('rosa').post('/api/calc', {
+      formula: 'chuck-grind',
+      batch: { onHand: 'lean=12 kg, fat=2 kg' },
+    });
+    // source: check-values P-3 (DERIVED): with every trimming fixed, none is left to balance
+    assert.equal(both.status, 400, both.text);
+    assert.match(both.json.error.message, /every trimming is fixed/);
+  });
+
   it('should refuse a cure over its critical limit with 422 and record nothing', async (t) => {
     const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const before = await batchCount(server);

@@ -182,6 +182,29 @@ describe('larder calc on a blend (chuck-grind: 15 % and 50 % fat trims to 20 % f
     assert.equal(figure(result.figures, /^blend fat$/i).exact, '20');
   });
 
+  it('takes --on-hand for each trimming, refusing all of them fixed with the reason', async () => {
+    const run = await runLarder([
+      'calc',
+      'chuck-grind',
+      '--on-hand',
+      'lean=12kg',
+      '--on-hand',
+      'fat=2kg',
+    ]);
+    // source: check-values P-3 (DERIVED): the fat balance needs one free trimming to size
+    assertCleanFailure(run, 2, /every trimming is fixed by what is on hand/, { oneLine: true });
+  });
+
+  it('uses a fat test measured today instead of the formula’s figure, and says so', async () => {
+    const result = await calcJson('chuck-grind', '--total', '20kg', '--fat-test', 'lean=18');
+    const meat = group(result, /^meat$/i);
+    // source: check-values P-1 with the lean trim measured at 18 %: parts 50 − 20 = 30 and
+    // 20 − 18 = 2 of 32; 20 kg × 30/32 = 18.75 kg, the fat trim 1.25 kg.
+    assert.equal(line(meat.lines, /^chuck trim 85\/15 \(18 % fat, measured\)$/).grams, '18750');
+    assert.equal(line(meat.lines, /^brisket fat trim/).grams, '1250');
+    assert.match(figure(result.inputs, /^fat test: chuck trim/i).note ?? '', /formula's 15 %/);
+  });
+
   it('refuses a target outside the two trims with exit 2', async () => {
     const run = await runLarder(['calc', 'chuck-grind', '--total', '20kg', '--target-fat', '10']);
     // source: Pearson square: a blend of two trims lies between their fat contents (15 % and 50 %)

@@ -63,16 +63,16 @@ describe('calculateBlend, refusals', () => {
     );
   });
 
-  it('should refuse several sizes at once', () => {
+  it('should refuse a meat weight and a finished weight at once', () => {
     assert.throws(
       () => calculateBlend(we25(), { total: dec('1000'), want: dec('800') }),
-      batchError('want', /only one of --total, --on-hand or --want, not --total and --want/),
+      batchError('want', /only one of --total or --want/),
     );
   });
 
   it('should list the formula keys for an unknown on-hand key', () => {
     assert.throws(
-      () => calculateBlend(we25(), { onHand: { key: 'belly', grams: dec('1000') } }),
+      () => calculateBlend(we25(), { onHand: [{ key: 'belly', grams: dec('1000') }] }),
       batchError('on-hand', /"belly".*lean and fat/),
     );
   });
@@ -81,7 +81,7 @@ describe('calculateBlend, refusals', () => {
     assert.throws(
       () =>
         calculateBlend(we25(), {
-          onHand: { key: 'lean', grams: dec('1000') },
+          onHand: [{ key: 'lean', grams: dec('1000') }],
           targetFat: dec('50'),
         }),
       batchError('on-hand', /unlimited/),

@@ -29,7 +29,7 @@ describe('calculateBlend, sizes', () => {
   it('should add 4 kg of 50 % trim to 12 kg of 10 % trim on hand', () => {
     // own example, derived: 12 × (10 − 20) ÷ (20 − 50) = 4 kg of 50/50; total 16 kg;
     // 1.2 + 2.0 = 3.2 kg fat = 20 % of 16 kg.
-    const result = calculateBlend(we25(), { onHand: { key: 'lean', grams: dec('12000') } });
+    const result = calculateBlend(we25(), { onHand: [{ key: 'lean', grams: dec('12000') }] });
     assert.deepEqual(grams(result, 'Meat'), ['12000.000', '4000.000']);
     assert.ok(figure(result, 'Blend fat').equals(dec('20')));
     assert.ok(figure(result, 'Total batch weight').equals(dec('16000')));
@@ -38,7 +38,7 @@ describe('calculateBlend, sizes', () => {
 
   it('should keep the formula order when the second component is on hand', () => {
     // own example, derived: 5 × (50 − 20) ÷ (20 − 10) = 15 kg of 10 % trim; total 20 kg.
-    const result = calculateBlend(we25(), { onHand: { key: 'fat', grams: dec('5000') } });
+    const result = calculateBlend(we25(), { onHand: [{ key: 'fat', grams: dec('5000') }] });
     assert.deepEqual(grams(result, 'Meat'), ['15000.000', '5000.000']);
   });
 

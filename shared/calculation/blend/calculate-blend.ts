@@ -16,9 +16,10 @@ import type {
   YieldStage,
 } from '../calc-result.ts';
 import { yieldStages } from '../yields.ts';
-import { componentFat, componentLabel, formulaTargetFat } from './blend-fat.ts';
+import { batchFats, componentLabel, formulaTargetFat } from './blend-fat.ts';
+import { keptAfterLoss, lossInput } from './blend-loss.ts';
 import { blendMeat } from './blend-size.ts';
-import { fatStandardCheck } from './fat-standard-check.ts';
+import { standardOutcome } from './blend-standard.ts';
 import { blendFatPercent } from './pearson-square.ts';
 import { portionsOf } from './portion.ts';
 
@@ -50,14 +51,15 @@ function portionGrams(formula: BlendFormula, batch: BatchInput): Figure | undefi
 
 /**
  * Yield stages of a blend. Trimming happens to the meat alone, so the weight to buy comes from
- * the meat; every later step (cook…) happens to the seasoned batch, so those stages start from
- * the whole raw batch. Without seasoning both are the raw blend weight.
+ * the meat; every later step (cook…) happens to the seasoned batch after its grinding and
+ * forming loss, so those stages start from that. Without seasoning or loss both are the raw
+ * blend weight.
  */
-function blendYields(meat: Decimal, batch: Decimal, yields: Yields): YieldStage[] {
+function blendYields(meat: Decimal, formed: Decimal, yields: Yields): YieldStage[] {
   const { trim, ...afterTrim } = yields;
   return [
     ...yieldStages(meat, trim === undefined ? undefined : { trim }),
-    ...yieldStages(batch, afterTrim),
+    ...yieldStages(formed, afterTrim),
   ];
 }
 
@@ -71,31 +73,35 @@ function blendCautions(formula: BlendFormula, allergens: readonly Allergen[]): C
 }
 
 /**
- * Works out a batch of a two-component meat blend at a target fat (Pearson square, check-values
- * P-1, P-2), with its seasoning, portions, yields, fat-standard check and cautions.
+ * Works out a batch of a meat blend of two to five components at a target fat (two balances,
+ * check-values P-3; the Pearson square P-1 for two; P-2), with its seasoning, loss, portions,
+ * yields, fat-standard checks and cautions.
  *
- * The batch is sized by exactly one of `total` (raw meat weight), `onHand` (one component fixed)
- * or `want` (finished weight, worked back through the yields; the yields apply to the seasoned
- * batch). Figures are computed back from the amounts, not copied from the target.
+ * The batch is sized by `total` (raw meat weight) or `want` (finished weight, worked back through
+ * the yields and loss), by `onHand` (components fixed by what is on hand), or by both
+ * (blend-solve.ts). A fat test for a component replaces its formula fat for this batch. Figures
+ * are computed back from the amounts, not copied from the target.
  * @param formula a blend formula that passed checkBlendFormula
  * @param batch the batch inputs, already parsed
- * @throws BatchError when the batch cannot be made: no size or several, a size not more than 0,
- *   an unknown on-hand key, a target fat outside 0–100 % or not between the two components
+ * @throws BatchError when the batch cannot be made: no size, a size not more than 0, an unknown
+ *   key, a target fat outside 0–100 % or out of reach of the components, amounts on hand that
+ *   leave it out of reach, or too few amounts on hand to make the blend determinate
  */
 export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcResult {
-  const [first, second] = formula.components;
   const target = targetFat(formula, batch);
   const seasoning = formula.ingredients ?? [];
   const seasoningFraction = fraction(sum(seasoning.map((i) => new Decimal(i.pct))));
-  const fats = { first: componentFat(first), second: componentFat(second), target: target.value };
-  const size = blendMeat(formula, batch, fats, seasoningFraction);
+  const fats = batchFats(formula, batch);
+  const size = blendMeat(formula, batch, fats.fats, target.value, seasoningFraction);
+  const parts = formula.components.map((component, i) => ({
+    component,
+    grams: size.amounts[i],
+    fat: fats.fats[i],
+  }));
 
-  const meat = size.amounts.first.plus(size.amounts.second);
-  const meatLines: AmountLine[] = [
-    { component: first, grams: size.amounts.first },
-    { component: second, grams: size.amounts.second },
-  ].map(({ component, grams }) => ({
-    name: componentLabel(component),
+  const meat = sum(size.amounts);
+  const meatLines: AmountLine[] = parts.map(({ component, grams }, i) => ({
+    name: componentLabel(component, fats.measured.get(i)),
     grams,
     percent: grams.div(meat).times(HUNDRED),
     role: 'component',
@@ -125,20 +131,31 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
   // Dividing at 40 digits leaves noise in the last digit (30 % can come back as 30.000…001 %),
   // which would fail a ceiling the blend meets exactly; 20 places is still far finer than any
   // lab measures fat.
-  const fat = blendFatPercent([
-    { grams: size.amounts.first, fat: fats.first },
-    { grams: size.amounts.second, fat: fats.second },
-  ]).toDecimalPlaces(20);
+  const fat = blendFatPercent(parts).toDecimalPlaces(20);
   const figures: Figure[] = [
     { label: 'Blend fat', kind: 'percent', value: fat },
     { label: 'Chemical lean', kind: 'percent', value: HUNDRED.minus(fat) },
     { label: 'Total batch weight', kind: 'mass', value: batchGrams },
   ];
+  const standard = standardOutcome(formula, parts, fat);
+  figures.push(...standard.figures);
+
+  // Grinding and forming lose part of the batch before it is portioned and cooked.
+  const formed = batchGrams.times(keptAfterLoss(formula));
+  const loss = lossInput(formula);
+  if (loss) {
+    figures.push({
+      label: 'After grinding and forming loss',
+      kind: 'mass',
+      value: formed,
+      note: `${(loss.value as Decimal).toString()} % loss allowance`,
+    });
+  }
 
   const portion = portionGrams(formula, batch);
   let portions: Portions | undefined;
   if (portion) {
-    portions = portionsOf(batchGrams, portion.value as Decimal);
+    portions = portionsOf(formed, portion.value as Decimal);
     const cook = formula.yields?.cook;
     if (cook !== undefined) {
       figures.push({
@@ -153,8 +170,10 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
   const allergens = collectAllergens(seasoning.map((i) => i.allergens));
   const inputs: Figure[] = [
     { label: 'Target fat', kind: 'percent', value: target.value, note: target.note },
+    ...fats.inputs,
     ...size.inputs,
   ];
+  if (loss) inputs.push(loss);
   if (portion) inputs.push(portion);
 
   return {
@@ -163,11 +182,11 @@ export function calculateBlend(formula: BlendFormula, batch: BatchInput): CalcRe
     groups,
     steps: formula.steps ?? [],
     figures,
-    checks: formula.standard ? [fatStandardCheck(formula.standard, fat)] : [],
-    warnings: [],
+    checks: standard.checks,
+    warnings: standard.warnings,
     cautions: blendCautions(formula, allergens),
     allergens,
-    ...(formula.yields ? { yields: blendYields(meat, batchGrams, formula.yields) } : {}),
+    ...(formula.yields ? { yields: blendYields(meat, formed, formula.yields) } : {}),
     ...(portions ? { portions } : {}),
     ...(formula.notes === undefined ? {} : { notes: formula.notes }),
   };

@@ -111,4 +111,35 @@ describe('checkBlendFormula', () => {
     assert.equal(problem.severity, 'warning');
     assert.match(problem.message, /30 %/);
   });
+
+  it('should accept three trimmings whose fats reach the target between them', () => {
+    // source: check-values P-2, P-3 (DERIVED): the target must lie between the lowest and highest
+    // component fat; 20 % lies between 10 % and 50 %.
+    const formula = blend({
+      components: [
+        { key: 'lean', name: 'lean trim', fat: 10 },
+        { key: 'plate', name: 'plate', fat: 30 },
+        { key: 'fat', name: 'fat trim', fat: 50 },
+      ],
+    });
+    assert.deepEqual(checkBlendFormula(formula), []);
+  });
+
+  it('should report a target outside every trimming of three, and a third key used twice', () => {
+    // source: check-values P-2 (DERIVED): 60 % is above the fattest of 10, 30 and 50 %
+    const formula = blend({
+      target: { fat: 60 },
+      components: [
+        { key: 'lean', name: 'lean trim', fat: 10 },
+        { key: 'fat', name: 'plate', fat: 30 },
+        { key: 'fat', name: 'fat trim', fat: 50 },
+      ],
+    });
+    const problems = checkBlendFormula(formula);
+    assert.deepEqual(
+      problems.map((p) => p.path),
+      [['components', 2, 'key'], ['target']],
+    );
+    assert.match(problems[1].message, /60 % fat cannot be made from trimmings at 10 % to 50 % fat/);
+  });
 });

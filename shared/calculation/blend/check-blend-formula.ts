@@ -1,11 +1,11 @@
-import type { Decimal } from '../../decimal.ts';
+import { Decimal } from '../../decimal.ts';
 import type { BlendFormula } from '../../formula/formula-types.ts';
 import {
   type ContentProblem,
   contentError,
   contentWarning,
 } from '../../formula/formula-problem.ts';
-import { FAT_STANDARDS } from '../../reference/fat-standards.ts';
+import { FAT_AS_SUCH_ALTERNATIVE, FAT_STANDARDS } from '../../reference/fat-standards.ts';
 import { parseMass } from '../../units/mass.ts';
 import { QuantityError } from '../../units/quantity-error.ts';
 import { fatFrom, formatPercent, unreachableMessage } from './blend-fat.ts';
@@ -44,29 +44,42 @@ function checkPortion(portion: string, problems: ContentProblem[]): void {
 
 /**
  * Checks what the schema cannot about a blend formula: the component keys are unique, the
- * target lies between the two components' fats (check-values P-2), the portion is a mass over
+ * target lies between the leanest and fattest components (check-values P-2), the portion is a mass over
  * 0 g, and the seasoning names are unique (ignoring case). Warns when the target is over the
- * fat standard the formula names.
+ * fat standard the formula names, or a component is fat added as such where the standard forbids
+ * it (ground beef, 9 CFR 319.15(a)).
  * @returns the problems found; none when the formula can be used
  */
 export function checkBlendFormula(formula: BlendFormula): ContentProblem[] {
   const problems: ContentProblem[] = [];
-  const [first, second] = formula.components;
-
-  if (first.key === second.key) {
-    problems.push(
-      contentError(
-        ['components', 1, 'key'],
-        `the key "${second.key}" is used by both trimmings; give each its own key`,
-      ),
-    );
-  }
-
-  const fatA = fatOrProblem(first, ['components', 0], problems);
-  const fatB = fatOrProblem(second, ['components', 1], problems);
+  const seenKeys = new Set<string>();
+  const fats: Decimal[] = [];
+  formula.components.forEach((component, i) => {
+    if (seenKeys.has(component.key)) {
+      problems.push(
+        contentError(
+          ['components', i, 'key'],
+          `the key "${component.key}" is used by two trimmings; give each its own key`,
+        ),
+      );
+    }
+    seenKeys.add(component.key);
+    const fat = fatOrProblem(component, ['components', i], problems);
+    if (fat) fats.push(fat);
+  });
   const target = fatOrProblem(formula.target, ['target'], problems);
-  if (fatA && fatB && target && !isReachable(fatA, fatB, target)) {
-    problems.push(contentError(['target'], unreachableMessage(fatA, fatB, target)));
+  // The blend's fat lies between its leanest and fattest component, whatever the amounts (P-2).
+  if (target && fats.length === formula.components.length) {
+    const low = Decimal.min(...fats);
+    const high = Decimal.max(...fats);
+    if (!isReachable(low, high, target)) {
+      const message =
+        fats.length === 2
+          ? unreachableMessage(fats[0], fats[1], target)
+          : `${formatPercent(target)} fat cannot be made from trimmings at ${formatPercent(low)} ` +
+            `to ${formatPercent(high)} fat: the target must lie between them`;
+      problems.push(contentError(['target'], message));
+    }
   }
 
   if (target && formula.standard) {
@@ -80,6 +93,22 @@ export function checkBlendFormula(formula: BlendFormula): ContentProblem[] {
         ),
       );
     }
+  }
+
+  if (formula.standard && FAT_STANDARDS[formula.standard].forbidsFatAsSuch) {
+    const rule = FAT_STANDARDS[formula.standard];
+    const other = FAT_STANDARDS[FAT_AS_SUCH_ALTERNATIVE];
+    formula.components.forEach((component, i) => {
+      if (!component.fat_as_such) return;
+      problems.push(
+        contentWarning(
+          ['components', i, 'fat_as_such'],
+          `${rule.name} may not have fat added as such (${rule.section}): a batch that takes ` +
+            `"${component.name}" is refused; name the standard ${other.name} (${other.section}) ` +
+            'if the product is sold as that',
+        ),
+      );
+    });
   }
 
   if (formula.portion !== undefined) checkPortion(formula.portion, problems);

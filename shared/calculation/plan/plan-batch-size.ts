@@ -1,6 +1,7 @@
 import { Decimal, HUNDRED, ONE, fraction, sum } from '../../decimal.ts';
 import { parseMass } from '../../units/mass.ts';
 import type { RawBatchOptions } from '../batch-input.ts';
+import { keptAfterLoss } from '../blend/blend-loss.ts';
 import { doughForPieces } from '../dough/scale-dough.ts';
 import { referenceFromFinished } from '../yields.ts';
 import type { Need } from './plan-needs.ts';
@@ -32,8 +33,8 @@ export function blendMeatFor(seasonedGrams: Decimal, seasoningPcts: readonly num
 /**
  * Sizes the batch of one formula from what the plan needs of it, carrying yields and losses
  * back to what is weighed:
- * - blend: seasoned weight = portions × portion weight + amounts; meat = that ÷ (1 + Σ seasoning
- *   pct / 100), calculated as `total`;
+ * - blend: seasoned weight = (portions × portion weight + amounts) ÷ (1 − loss_pct / 100); meat
+ *   = that ÷ (1 + Σ seasoning pct / 100), calculated as `total`;
  * - dough: `pieces` of the formula's piece weight (its loss_pct applies), or, when amounts are
  *   needed too, `total` = pieces × piece ÷ (1 − loss / 100) + amounts;
  * - cure: `want` = slices × slice + amounts, worked back through the yields to the green weight;
@@ -45,7 +46,8 @@ export function plannedSize(need: Need): PlannedSize {
   switch (formula.kind) {
     case 'blend': {
       const portion = formula.portion === undefined ? new Decimal(0) : parseMass(formula.portion);
-      const seasoned = need.portions.times(portion).plus(need.grams);
+      // What is portioned is what is left after the grinding and forming loss.
+      const seasoned = need.portions.times(portion).plus(need.grams).div(keptAfterLoss(formula));
       const meat = blendMeatFor(
         seasoned,
         (formula.ingredients ?? []).map((i) => i.pct),

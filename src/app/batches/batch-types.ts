@@ -44,7 +44,7 @@ export interface FormulaFacts {
   readonly method?: 'dry' | 'brine' | 'pump';
   /** Doughs: a preferment takes its own temperature. */
   readonly preferment?: unknown;
-  /** Blends: the two trimmings, by key. */
+  /** Blends: the trimmings (two to five), by key. */
   readonly components?: readonly { readonly key: string; readonly name: string }[];
 }
 

@@ -59,3 +59,29 @@ describe('the structured form on a pump cure with a cover brine', () => {
     assert.deepEqual(back.brine, { water_pct: 60 });
   });
 });
+
+describe('the structured form, blend keys it has no box for', () => {
+  it('should keep a component marked as fat as such, and the loss allowance', () => {
+    // Dropping fat_as_such would let a ground-beef blend with loose fat pass (9 CFR 319.15(a)).
+    const text = [
+      'formula: 1',
+      'id: loose-fat-grind',
+      'title: Grind with loose fat',
+      'kind: blend',
+      'standard: hamburger',
+      'components:',
+      '  - { key: lean, name: lean 90/10 trim, fat: 10 }',
+      '  - { key: suet, name: beef fat, fat: 90, fat_as_such: true }',
+      '  - { key: chuck, name: chuck 80/20, lean: 80 }',
+      'target: { fat: 20 }',
+      'loss_pct: 2',
+      '',
+    ].join('\n');
+    const formula = parseFormulaYaml(text);
+    assert.ok(formula);
+    const fb = new FormBuilder().nonNullable;
+    const form = createFormulaForm(fb);
+    fillFormulaForm(form, formula, fb);
+    assert.deepEqual(formulaFromForm(form, formula), formula);
+  });
+});

@@ -1,4 +1,5 @@
 import type {
+  BlendComponent,
   CureFormula,
   CureIngredient,
   Formula,
@@ -93,7 +94,9 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
         ...common,
         species: speciesFromChoices(blend.species),
         standard: blend.standard ?? undefined,
-        components: blend.components.map((part) => ({
+        components: blend.components.map((part, i) => ({
+          // Keys the form has no box for (fat_as_such) are kept from the row's component.
+          ...keptComponentKeys(base.components[i]),
           key: part.key.trim(),
           name: part.name.trim(),
           [part.measure]: part.value,
@@ -193,4 +196,11 @@ function splitLines(value: string): string[] {
     .split('\n')
     .map((line) => line.trim())
     .filter((line) => line.length > 0);
+}
+
+/** A blend component without what the form edits (key, name, fat or lean): the keys to keep. */
+function keptComponentKeys(component: BlendComponent | undefined): Partial<BlendComponent> {
+  if (!component) return {};
+  const { key: _key, name: _name, fat: _fat, lean: _lean, ...kept } = component;
+  return kept;
 }

@@ -103,7 +103,8 @@ export const SPECIES = choices<SpeciesWord>({
 
 /** Standards of identity a blend may be held to. */
 export const STANDARDS = choices<NonNullable<BlendFormula['standard']>>({
-  'ground-beef': 'Ground beef (at most 30 % fat)',
+  'ground-beef': 'Ground beef (at most 30 % fat, no fat added as such)',
+  hamburger: 'Hamburger (at most 30 % fat, fat as such allowed)',
   'fresh-pork-sausage': 'Fresh pork sausage (at most 50 % fat)',
 });
 

@@ -51,17 +51,28 @@ describe('withUnit', () => {
 });
 
 describe('batchOptions', () => {
-  it('should leave out empty boxes and join on-hand as KEY=WEIGHT', () => {
+  it('should leave out empty boxes and join each trimming’s on hand and fat test as KEY=VALUE', () => {
     const fields = fieldsFor({ id: 'g', title: 'G', kind: 'blend' });
     assert.deepEqual(
       batchOptions(
         fields,
-        { total: '', targetFat: '20', onHand: '12' },
+        { total: '100', targetFat: '20' },
         'metric',
-        'lean',
+        [
+          { key: 'lean', onHand: '', fatTest: '18.5' },
+          { key: 'fat', onHand: '', fatTest: '' },
+          { key: 'plate', onHand: '20', fatTest: '' },
+          { key: 'chuck', onHand: '9 lb 6 oz', fatTest: '' },
+        ],
         '2026-12-02',
       ),
-      { targetFat: '20', onHand: 'lean=12 kg', start: '2026-12-02' },
+      {
+        total: '100 kg',
+        targetFat: '20',
+        onHand: 'plate=20 kg, chuck=9 lb 6 oz',
+        fatTest: 'lean=18.5',
+        start: '2026-12-02',
+      },
     );
   });
 });
@@ -74,6 +85,10 @@ describe('inFormWords and fieldOf', () => {
       '“Weight of the heaviest piece” 0.5 g is less than 1 g; check the unit',
     );
     assert.equal(fieldOf([{ option: 'largest-piece' }]), 'largestPiece');
+    assert.equal(
+      inFormWords('--fat-test names "belly", but --on-hand…', []),
+      '“Fat test” names "belly", but “On hand”…',
+    );
     assert.equal(fieldOf([]), null);
   });
 });

@@ -22,7 +22,6 @@ export type FieldKey =
   | 'prefermentTemp'
   | 'tap'
   | 'targetFat'
-  | 'onHand'
   | 'base';
 
 /** One box of the record form. */
@@ -101,7 +100,6 @@ export function fieldsFor(formula: FormulaFacts): BatchField[] {
       return [
         f('total', 'Meat weight', 'mass', 'The blend’s total'),
         f('targetFat', 'Target fat', 'percent', 'Empty: the formula’s'),
-        f('onHand', 'On hand', 'mass', 'One trimming fixed by what you have'),
       ];
     case 'mix':
       return [
@@ -151,26 +149,45 @@ export function withUnit(text: string, measure: Measure, units: Units): string {
   return measure === 'temperature' ? `${number}${unit === '°C' ? 'C' : 'F'}` : `${number} ${unit}`;
 }
 
+/** What was typed for one trimming of a blend: the weight on hand and a fat test, if any. */
+export interface TrimmingValues {
+  readonly key: string;
+  readonly onHand: string;
+  readonly fatTest: string;
+}
+
+/** The labels of a blend's per-trimming boxes, for messages that name their options. */
+const TRIMMING_LABELS: Readonly<Record<string, string>> = {
+  'on-hand': 'On hand',
+  'fat-test': 'Fat test',
+};
+
 /**
  * The batch options for the API from what was typed: empty boxes are left out, bare numbers get
- * their unit, and "on hand" becomes KEY=WEIGHT.
+ * their unit, and a blend's trimmings become KEY=VALUE lists ("lean=12 kg, plate=3 kg").
  */
 export function batchOptions(
   fields: readonly BatchField[],
   values: Readonly<Partial<Record<FieldKey, string>>>,
   units: Units,
-  onHandKey: string | null,
+  trimmings: readonly TrimmingValues[],
   start: string | null,
 ): RawBatchOptions {
   const options: Record<string, string> = {};
   for (const field of fields) {
     const text = values[field.key]?.trim() ?? '';
     if (text === '') continue;
-    const value = withUnit(text, field.measure, units);
-    if (field.key === 'onHand') {
-      if (onHandKey) options['onHand'] = `${onHandKey}=${value}`;
-    } else options[field.key] = value;
+    options[field.key] = withUnit(text, field.measure, units);
   }
+  const keyed = (pick: 'onHand' | 'fatTest', measure: Measure): string =>
+    trimmings
+      .filter((t) => t[pick].trim() !== '')
+      .map((t) => `${t.key}=${withUnit(t[pick], measure, units)}`)
+      .join(', ');
+  const onHand = keyed('onHand', 'mass');
+  const fatTest = keyed('fatTest', 'percent');
+  if (onHand) options['onHand'] = onHand;
+  if (fatTest) options['fatTest'] = fatTest;
   if (start) options['start'] = start;
   return options;
 }
@@ -183,7 +200,8 @@ export function inFormWords(message: string, fields: readonly BatchField[]): str
   const text = message.replace(/--([a-z]+(?:-[a-z]+)*)/g, (whole, option: string) => {
     const key = option.replace(/-([a-z])/g, (_m, letter: string) => letter.toUpperCase());
     const field = fields.find((x) => x.key === key);
-    return field ? `“${field.label}”` : whole;
+    const label = field?.label ?? TRIMMING_LABELS[option];
+    return label ? `“${label}”` : whole;
   });
   return text.charAt(0).toUpperCase() + text.slice(1);
 }

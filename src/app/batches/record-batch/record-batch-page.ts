@@ -8,6 +8,7 @@ import {
   signal,
 } from '@angular/core';
 import {
+  FormArray,
   FormControl,
   FormGroup,
   NonNullableFormBuilder,
@@ -63,9 +64,14 @@ const FIELD_KEYS: readonly FieldKey[] = [
   'prefermentTemp',
   'tap',
   'targetFat',
-  'onHand',
   'base',
 ];
+
+/** The boxes of each blend trimming: the weight on hand and a fat test measured today. */
+const TRIMMING_BOXES = [
+  { control: 'onHand', label: 'On hand', measure: 'mass', testId: 'record-on-hand-' },
+  { control: 'fatTest', label: 'Fat test', measure: 'percent', testId: 'record-fat-test-' },
+] as const;
 
 const PREVIEW_DELAY_MS = 400;
 
@@ -128,12 +134,16 @@ export default class RecordBatchPage implements OnInit {
         FIELD_KEYS.map((key) => [key, new FormControl('', { nonNullable: true })]),
       ) as Record<FieldKey, FormControl<string>>,
     ),
-    onHandKey: this.fb.control<string | null>(null),
+    // A blend's trimmings, in the formula's order: what is on hand, and a fat test measured today.
+    trimmings: new FormArray<
+      FormGroup<{ onHand: FormControl<string>; fatTest: FormControl<string> }>
+    >([]),
     start: this.fb.control<Date | null>(new Date()),
     units: this.fb.control<Units>('metric'),
     status: this.fb.control<'in-progress' | 'planned'>('in-progress'),
     notes: this.fb.control('', Validators.maxLength(2000)),
   });
+  protected readonly trimmingBoxes = TRIMMING_BOXES;
   protected readonly facts = signal<FormulaFacts | null>(null);
   protected readonly factsError = signal<string | null>(null);
   protected readonly units = signal<Units>('metric');
@@ -176,7 +186,11 @@ export default class RecordBatchPage implements OnInit {
         return;
       }
       this.facts.set(detail.formula);
-      this.form.controls.onHandKey.setValue(detail.formula.components?.[0]?.key ?? null);
+      const trimmings = this.form.controls.trimmings;
+      trimmings.clear();
+      for (const _ of detail.formula.components ?? []) {
+        trimmings.push(this.fb.group({ onHand: '', fatTest: '' }));
+      }
       this.previewNow();
     } catch (error) {
       this.factsError.set(messageOf(error));
@@ -222,7 +236,13 @@ export default class RecordBatchPage implements OnInit {
     const id = this.form.controls.formula.value;
     if (!id || !this.facts()) return;
     // Nothing typed yet: there is no batch to calculate, and nothing to complain about.
-    if (FIELD_KEYS.every((key) => this.form.controls.values.controls[key].value.trim() === '')) {
+    const trimmingsTyped = this.form.controls.trimmings.controls.some(
+      (t) => t.controls.onHand.value.trim() !== '' || t.controls.fatTest.value.trim() !== '',
+    );
+    if (
+      !trimmingsTyped &&
+      FIELD_KEYS.every((key) => this.form.controls.values.controls[key].value.trim() === '')
+    ) {
       this.recorder.clear();
       return;
     }
@@ -233,7 +253,12 @@ export default class RecordBatchPage implements OnInit {
 
   private options(): ReturnType<typeof batchOptions> {
     const raw = this.form.getRawValue();
-    return batchOptions(this.fields(), raw.values, raw.units, raw.onHandKey, isoDateOf(raw.start));
+    const components = this.facts()?.components ?? [];
+    const trimmings = raw.trimmings.map((values, i) => ({
+      key: components[i]?.key ?? '',
+      ...values,
+    }));
+    return batchOptions(this.fields(), raw.values, raw.units, trimmings, isoDateOf(raw.start));
   }
 
   /** Puts the API's complaint on the box it is about, when that box has been typed in. */
