@@ -48,7 +48,7 @@ export const FAT_STANDARDS: Readonly<Record<FatStandardKey, FatStandard>> = {
     forbidsFatAsSuch: true,
     source:
       '9 CFR 319.15(a), USDA FSIS standard of identity for chopped beef/ground beef: at most 30 % ' +
-      'fat, without beef fat added as such (as quoted in secondary texts; check against eCFR)',
+      'fat, without beef fat added as such (wording as quoted in secondary texts)',
   },
   hamburger: {
     key: 'hamburger',
@@ -61,7 +61,7 @@ export const FAT_STANDARDS: Readonly<Record<FatStandardKey, FatStandard>> = {
     forbidsFatAsSuch: false,
     source:
       '9 CFR 319.15(b), USDA FSIS standard of identity for hamburger: at most 30 % fat, with or ' +
-      'without beef fat added as such (as quoted in secondary texts; check against eCFR)',
+      'without beef fat added as such (wording as quoted in California Health & Safety Code § 111200)',
   },
   'fresh-pork-sausage': {
     key: 'fresh-pork-sausage',
@@ -75,7 +75,7 @@ export const FAT_STANDARDS: Readonly<Record<FatStandardKey, FatStandard>> = {
     forbidsFatAsSuch: false,
     source:
       '9 CFR 319.141, USDA FSIS standard of identity for fresh pork sausage ' +
-      '(as stated in The National Provisioner; check against eCFR)',
+      '(as stated in The National Provisioner)',
   },
 };
 
