@@ -78,7 +78,7 @@ describe('saving a formula', () => {
     assert.equal(saved.json.commit, null);
     assert.deepEqual(saved.json.warnings, []);
     const comments = original.split('\n').filter((line) => line.startsWith('#'));
-    assert.equal(comments.length, 2);
+    assert.ok(comments.length >= 2, 'the demo belly has comments to keep');
     for (const comment of comments) assert.ok(text.includes(comment), comment);
     // Exactly one line differs: the one whose percentage changed.
     const before = original.split('\n');
