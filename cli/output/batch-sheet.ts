@@ -54,7 +54,7 @@ export function renderBatchSheet(result: PresentedResult): string {
     `${result.formula.id} · ${result.formula.kind} · ${result.units === 'us' ? 'US' : 'metric'} units`,
   ];
   if (result.critical) {
-    out.push('', '*** REFUSED: critical limit exceeded. Do not make this batch. ***');
+    out.push('', '*** REFUSED: a critical limit is failed. Do not make this batch. ***');
   }
   out.push(...heading('Batch'), ...figureRows(result.inputs));
   // A refused batch gets no amounts to weigh, so nobody works from it by mistake.
@@ -69,7 +69,10 @@ export function renderBatchSheet(result: PresentedResult): string {
         `  ${s.days} days: ${s.rule}`,
         `  Start ${s.start}  →  ready ${s.ready}`,
       );
-      if (s.flipEveryDays) out.push(`  Turn or overhaul every ${s.flipEveryDays} days.`);
+      if (s.flipEveryDays)
+        out.push(
+          `  Turn or overhaul every ${s.flipEveryDays === 1 ? 'day' : `${s.flipEveryDays} days`}.`,
+        );
     }
   }
   if (result.checks.length) {
@@ -111,6 +114,6 @@ export function renderBatchSheet(result: PresentedResult): string {
     );
   out.push('', result.rounding);
   if (result.critical)
-    out.push('', '*** REFUSED: critical limit exceeded. Do not make this batch. ***');
+    out.push('', '*** REFUSED: a critical limit is failed. Do not make this batch. ***');
   return out.join('\n') + '\n';
 }

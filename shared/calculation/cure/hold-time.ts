@@ -151,9 +151,14 @@ export function estimateHold(formula: CureFormula, measures: HoldMeasures): Hold
   const raw = rate.perDay.times(rate.measure).plus(plus);
   const days = Math.max(raw.ceil().toNumber(), atLeast);
   const text =
-    `${rate.perDay} days per ${rate.unit} × ${rate.measure.toDecimalPlaces(2)} ${rate.unit}` +
-    (plus ? ` + ${plus} days` : '') +
+    `${dayCount(rate.perDay.toString())} per ${rate.unit} × ${rate.measure.toDecimalPlaces(2)} ${rate.unit}` +
+    (plus ? ` + ${dayCount(String(plus))}` : '') +
     ` = ${raw.toDecimalPlaces(2)}, rounded up to ${raw.ceil()}` +
     (days > raw.ceil().toNumber() ? `, at least ${atLeast}` : '');
   return { days, rule: text, source };
+}
+
+/** "1 day", "1.5 days", "2 days". */
+function dayCount(figure: string): string {
+  return `${figure} ${figure === '1' ? 'day' : 'days'}`;
 }
