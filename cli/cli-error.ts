@@ -7,7 +7,7 @@ export const EXIT = {
   usage: 2,
   /** A formula file is missing, unreadable or invalid. */
   formula: 3,
-  /** A critical limit is exceeded: the batch must not be made. */
+  /** A critical limit is failed (a ceiling exceeded or a required level not met): refused. */
   critical: 4,
 } as const;
 
@@ -18,7 +18,7 @@ Exit codes:
   1  unexpected internal error
   2  bad command line or batch input (unknown option, bad unit, impossible size)
   3  formula file missing, unreadable or invalid
-  4  critical limit exceeded: the batch is refused`;
+  4  critical limit failed (over a ceiling, or short of a required level): the batch is refused`;
 
 /** A failure that ends the command with a message and a given exit code. */
 export class CliError extends Error {

@@ -66,7 +66,8 @@ export function readFormulaFile(file: string): FormulaReading {
 /**
  * Finds a formula by path ("formulas/belly.yaml") or by id ("hickory-belly", looked up in the
  * formulas folder), reads and checks it.
- * @throws CliError (exit 3) when it cannot be found or has errors
+ * @throws CliError (exit 3) when it cannot be found or has errors; exit 4 when its only errors
+ *   are its own levels failing a critical limit
  */
 export function loadFormula(
   reference: string,
@@ -76,6 +77,15 @@ export function loadFormula(
   const reading = readFormulaFile(file);
   if (!reading.formula) {
     const errors = reading.problems.filter((p) => p.severity === 'error');
+    // A formula whose own levels fail a critical limit is sound as a file, but no batch of it may
+    // be made: that is a refusal (exit 4), as for a batch over its limit.
+    if (errors.every((p) => p.criticalLimit)) {
+      throw new CliError(
+        `${file}: REFUSED: the formula itself fails a critical limit; no batch of it may be made`,
+        EXIT.critical,
+        reading.problems.map(formatProblem),
+      );
+    }
     throw new CliError(
       `${file}: the formula has ${errors.length} error(s)`,
       EXIT.formula,

@@ -222,7 +222,7 @@ async function runCalc(reference: string, options: CalcOptions, io: Io): Promise
 /** What --pdf prints instead of the sheet: where it went, and a refusal that must not be missed. */
 function sheetWritten(pdf: PdfTarget, result: PresentedResult): string {
   const refused = result.critical
-    ? 'REFUSED: critical limit exceeded. Do not make this batch (the sheet says why).\n'
+    ? 'REFUSED: a critical limit is failed. Do not make this batch (the sheet says why).\n'
     : '';
   return `${refused}Wrote the batch sheet to ${pdf.file}\n`;
 }

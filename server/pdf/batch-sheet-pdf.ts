@@ -30,7 +30,7 @@ export interface SheetSource {
 export const NO_LOT = 'not recorded';
 /** Widest the QR code may be, quiet zone included, points (about 27 mm). */
 const QR_SIDE = 76;
-const REFUSAL = 'REFUSED: critical limit exceeded. Do not make this batch.';
+const REFUSAL = 'REFUSED: a critical limit is failed. Do not make this batch.';
 
 /** The first 12 hex digits of a revision: enough to tell revisions apart on paper. */
 export function shortRevision(revision: string): string {

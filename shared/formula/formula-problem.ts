@@ -7,6 +7,8 @@ export interface ContentProblem {
   readonly message: string;
   /** error: the formula cannot be used; warning: it can, but someone should look. */
   readonly severity: 'error' | 'warning';
+  /** Set when the formula's own levels fail a critical limit: every batch of it is refused. */
+  readonly criticalLimit?: true;
 }
 
 /** A problem located in a file: what callers print as "file:line:column: message". */

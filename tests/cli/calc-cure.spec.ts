@@ -40,7 +40,7 @@ const REFUSED = [
   '--start',
   START,
 ];
-const REFUSED_BANNER = '*** REFUSED: critical limit exceeded. Do not make this batch. ***';
+const REFUSED_BANNER = '*** REFUSED: a critical limit is failed. Do not make this batch. ***';
 
 function curingSaltLine(result: PresentedResult): PresentedLine {
   const lines = result.groups
@@ -356,6 +356,34 @@ describe('larder calc refuses a batch that fails a critical check that is not a 
       /FAIL\s+Sodium ascorbate or erythorbate: critical limit not met: 517\.0 ppm is below the 550 ppm required for pumped bacon/,
     );
     assert.ok(!run.stdout.includes('← curing salt'), 'no curing-salt line');
+  });
+
+  it('exits 4 for a pumped bacon formula that carries no erythorbate at all', async (t) => {
+    const dir = makeTempDir(t);
+    const file = writeText(
+      dir,
+      'bare-pump-bacon.yaml',
+      [
+        'formula: 1',
+        'id: bare-pump-bacon',
+        'title: Pumped bacon without erythorbate',
+        'kind: cure',
+        'method: pump',
+        'product: bacon',
+        'species: pork',
+        'brine: { pump_pct: 10 }',
+        'ingredients:',
+        '  - { name: salt, pct: 1.5, salt: 100 }',
+        '  - { name: curing salt, pct: 0.192, nitrite: 6.25, salt: 93.75 }',
+        '',
+      ].join('\n'),
+    );
+    const run = await runLarder(['calc', file, '--meat', '5kg']);
+    // Every batch of it is refused, so the refusal's exit, not a broken file's.
+    // source: 9 CFR 424.22(b): pumped bacon must carry 550 ppm ascorbate or erythorbate
+    assertExit(run, 4);
+    assert.match(run.stderr, /REFUSED/);
+    assert.match(run.stderr, /critical limit not met: sodium ascorbate or erythorbate 0\.0 ppm/);
   });
 });
 

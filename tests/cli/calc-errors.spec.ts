@@ -100,10 +100,12 @@ describe('larder calc with a formula that cannot be used', () => {
     );
   });
 
-  it('exits 3 for a formula over its own critical limit, before any batch is worked out', async (t) => {
+  it('exits 4, refused, for a formula over its own critical limit, before any batch is worked out', async (t) => {
     const file = writeText(makeTempDir(t), 'over.yaml', dryBaconWith('pct: 0.25', 'pct: 0.4'));
     const run = await runLarder(['calc', file, '--meat', '1kg', '--thickness', '2cm']);
-    assertCleanFailure(run, 3, /critical limit exceeded/);
+    // 0.4 % × 6.25 % = 250 ppm, over the 200 ppm of dry-cured bacon. source: 9 CFR 424.22(b)
+    assertCleanFailure(run, 4, /critical limit exceeded/);
+    assert.match(run.stderr, /REFUSED/);
   });
 
   it('prints a formula file error as JSON with --json, details included', async (t) => {

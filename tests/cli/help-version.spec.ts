@@ -21,7 +21,7 @@ const EXIT_CODE_LINES = [
   /^\s+1\s+unexpected internal error$/m,
   /^\s+2\s+bad command line or batch input/m,
   /^\s+3\s+formula file missing, unreadable or invalid$/m,
-  /^\s+4\s+critical limit exceeded: the batch is refused$/m,
+  /^\s+4\s+critical limit failed \(over a ceiling, or short of a required level\): the batch is refused$/m,
 ];
 
 function assertExitCodeTable(text: string): void {

@@ -175,7 +175,7 @@ function checkLevels(formula: CureFormula): ContentProblem[] {
     // The same rule that refuses a batch refuses the formula: any failed critical check.
     problems.push(
       isCriticalFailure(check)
-        ? contentError(['ingredients'], checkProblem(check))
+        ? { ...contentError(['ingredients'], checkProblem(check)), criticalLimit: true }
         : contentWarning(['ingredients'], checkProblem(check)),
     );
   }
