@@ -38,6 +38,19 @@ describe('signing in to the console', () => {
     });
   }
 
+  it('should fit the top bar of every role on a 390 px phone, with no sideways scrolling', async (t) => {
+    const session = await startConsole(t);
+    for (const user of ['rosa', 'tobin', 'imke'] as const) {
+      const page = await session.page(user);
+      // A common phone width (390 × 844 CSS px). common practice, no source
+      await page.setViewportSize({ width: 390, height: 844 });
+      await page.goto(`${session.server.url}/plans`, { waitUntil: 'networkidle' });
+      await page.getByRole('button', { name: 'Your account' }).waitFor();
+      const width = await page.evaluate(() => document.documentElement.scrollWidth);
+      assert.ok(width <= 390, `${user}: the page is ${width} px wide on a 390 px screen`);
+    }
+  });
+
   it('should refuse a wrong password with a message on screen', async (t) => {
     const session = await startConsole(t);
     const page = await session.page();
