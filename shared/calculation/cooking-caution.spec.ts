@@ -19,7 +19,7 @@ function celsiusOf(fahrenheit: string): string {
 
 // source: USDA FSIS Safe Minimum Internal Temperature Chart — whole cuts of beef, pork, veal and
 // lamb (fresh pork and fresh or uncooked smoked ham included) 145 °F with a 3-minute rest;
-// ground meats 160 °F; all poultry, whole, parts or ground, 165 °F (check-values T-1..T-3).
+// ground meats 160 °F; all poultry, whole, parts or ground, 165 °F.
 const WHOLE_CUT = `${celsiusOf('145')} °C (145 °F)`;
 const GROUND_MEAT = `${celsiusOf('160')} °C (160 °F)`;
 const POULTRY = `${celsiusOf('165')} °C (165 °F)`;
@@ -64,7 +64,7 @@ const blendedWith = (species: BlendFormula['species']): string =>
 describe('the cooking temperature printed for a formula’s meat', () => {
   it('should be 74 °C (165 °F) and never 63 °C for a cured turkey breast', () => {
     const text = curedWith({ species: 'poultry', title: 'Cured turkey breast' });
-    // source: FSIS chart, all poultry 165 °F (73.9 °C); 165 °F = 73.89 °C (check-values WE-23)
+    // source: FSIS chart, all poultry 165 °F (73.9 °C); 165 °F = 73.89 °C (NIST SP 811)
     assert.ok(text.includes(POULTRY), text);
     assert.equal(POULTRY, '74 °C (165 °F)');
     // source: FSIS chart, 145 °F is for beef, pork, veal and lamb only
@@ -75,7 +75,7 @@ describe('the cooking temperature printed for a formula’s meat', () => {
   it('should be 63 °C (145 °F) with a 3-minute rest for a pork whole-muscle cure', () => {
     const text = curedWith({ species: 'pork', title: 'Dry-cured pork loin' });
     // source: FSIS chart, fresh pork and ham, fresh or smoked (uncooked), 145 °F (62.8 °C)
-    // and rest 3 minutes; 145 °F = 62.78 °C (check-values WE-23)
+    // and rest 3 minutes; 145 °F = 62.78 °C (NIST SP 811)
     assert.ok(text.includes(WHOLE_CUT), text);
     assert.equal(WHOLE_CUT, '63 °C (145 °F)');
     assert.ok(text.includes(`${WHOLE_CUT} with a 3-minute rest`), text);
@@ -86,7 +86,7 @@ describe('the cooking temperature printed for a formula’s meat', () => {
   it('should be 71 °C (160 °F) for a ground pork cure, without the whole-cut figure', () => {
     const text = curedWith({ species: 'pork', product: 'comminuted' });
     // source: FSIS chart, ground meats (beef, pork, veal, lamb) 160 °F (71.1 °C);
-    // 160 °F = 71.11 °C (check-values WE-23)
+    // 160 °F = 71.11 °C (NIST SP 811)
     assert.ok(text.includes(GROUND_MEAT), text);
     assert.equal(GROUND_MEAT, '71 °C (160 °F)');
     assert.ok(!text.includes('63 °C'), text);

@@ -51,7 +51,7 @@ describe('presentResult', () => {
     const lines = presentResult(result('4535.9237'), 'us').groups[0].lines;
     assert.equal(lines[1].amount, '0.4 oz');
     assert.equal(lines[1].gramsShown, '11.3 g');
-    assert.equal(formatMass(new Decimal('1133.980925'), 'us'), '2 lb 8.0 oz'); // WE-1
+    assert.equal(formatMass(new Decimal('1133.980925'), 'us'), '2 lb 8.0 oz'); // 40 oz
     assert.equal(formatMass(new Decimal('453.5'), 'us'), '1 lb 0.0 oz'); // 15.997 oz rounds up to a whole pound
   });
 
@@ -82,7 +82,8 @@ describe('presentResult', () => {
   });
 
   it('should round temperatures to 0.5 °C or 1 °F', () => {
-    // source: the product brief; 30.556 °C (WE-19 Celsius form) prints 30.5 °C and 87 °F
+    // source: the product brief; 30.556 °C (87 °F, the water of the San Francisco Baking
+    // Institute's Artisan I example, in °C) prints 30.5 °C and 87 °F
     assert.equal(formatTemperature(new Decimal('30.556'), 'metric'), '30.5 °C');
     assert.equal(formatTemperature(new Decimal('30.556'), 'us'), '87 °F');
     assert.equal(formatTemperature(new Decimal('30.76'), 'metric'), '31.0 °C');
@@ -151,9 +152,11 @@ describe('presentResult', () => {
   });
 
   it("should call a dough's remainder its loss allowance, not dough left over", () => {
-    // WE-16: 48 buns × 80 g with 2 % loss divided out = 3918.367 g; 3918.367 − 3840 = 78.367 g,
-    // which is the loss allowance itself (2 % of 3918.367 g), not spare dough.
-    // source: "Bread Formula Construction", baking-science education series part 3 (2011) (D-4)
+    // Own example (the bun): 48 buns × 80 g with 2 % loss divided out = 3918.367 g;
+    // 3918.367 − 3840 = 78.367 g, which is the loss allowance itself (2 % of 3918.367 g), not
+    // spare dough.
+    // source: "Bread Formula Construction", baking-science education series part 3 (2011),
+    // which divides the loss out
     const dough = calculateDough(bunDough(), {
       pieces: 48,
       piece: new Decimal(80),

@@ -13,33 +13,33 @@ import { QuantityError } from './quantity-error.ts';
 
 describe('parseMass', () => {
   it('should define the pound as exactly 453.59237 g', () => {
-    // source: NIST SP 811 (2008), Appendix B.8 (U-1)
+    // source: NIST SP 811 (2008), Appendix B.8 (the avoirdupois pound, exact)
     assert.equal(GRAMS_PER_POUND.toString(), '453.59237');
     assert.equal(parseMass('1 lb').toString(), '453.59237');
   });
 
   it('should define the ounce as exactly 28.349523125 g', () => {
-    // source: NIST SP 811 (2008), Appendix B.8 (U-2: 1 lb / 16)
+    // source: NIST SP 811 (2008), Appendix B.8 (1 oz = 1 lb / 16, exact)
     assert.equal(GRAMS_PER_OUNCE.toString(), '28.349523125');
   });
 
   it('should read 2 lb 8 oz as 1133.980925 g', () => {
-    // source: worked example WE-1, 40 oz × 28.349523125 g (NIST SP 811 factors)
+    // own worked example: 40 oz × 28.349523125 g (ounce from NIST SP 811 (2008), App. B.8)
     assert.equal(parseMass('2 lb 8 oz').toString(), '1133.980925');
   });
 
   it('should turn 500 g into 17.636981 oz', () => {
-    // source: worked example WE-1, 500 ÷ 28.349523125 (NIST SP 811 factors)
+    // own worked example: 500 ÷ 28.349523125 (ounce from NIST SP 811 (2008), App. B.8)
     assert.equal(gramsToOunces(new Decimal(500)).toDecimalPlaces(6).toString(), '17.636981');
   });
 
   it('should turn 1 kg into 2.20462262185 lb', () => {
-    // source: U-6, 1 / 0.45359237 (NIST SP 811 factor)
+    // derived: 1 / 0.45359237 (pound from NIST SP 811 (2008), App. B.8)
     assert.equal(gramsToPounds(new Decimal(1000)).toDecimalPlaces(11).toString(), '2.20462262185');
   });
 
   it('should read a quarter pound as 113.3980925 g', () => {
-    // source: U-7, 453.59237 / 4 (NIST SP 811 factor)
+    // derived: 453.59237 / 4 (pound from NIST SP 811 (2008), App. B.8)
     assert.equal(parseMass('0.25lb').toString(), '113.3980925');
     assert.equal(parseMass('4 oz').toString(), '113.3980925');
   });

@@ -12,7 +12,8 @@ import {
 
 describe('temperatures', () => {
   it('should convert the safe cooking temperatures of the USDA chart to Celsius', () => {
-    // source: WE-23, conversions by NIST SP 811 t/°C = (t/°F − 32) × 5/9 (U-5)
+    // source: NIST SP 811 (2008), temperature conversion t/°C = (t/°F − 32) × 5/9; own
+    // arithmetic
     const table: [string, string][] = [
       ['145', '62.78'],
       ['155', '68.33'],
@@ -28,7 +29,7 @@ describe('temperatures', () => {
   });
 
   it('should read temperatures with either scale and with or without the degree sign', () => {
-    // source: U-5 (NIST SP 811); 78 °F = 25.555… °C
+    // source: NIST SP 811 (2008), temperature conversion; 78 °F = 25.555… °C
     assert.equal(parseTemperature('26 °C').toString(), '26');
     assert.equal(parseTemperature('26C').toString(), '26');
     assert.equal(parseTemperature('78°F').toFixed(3), '25.556');
@@ -36,7 +37,8 @@ describe('temperatures', () => {
   });
 
   it('should convert a temperature difference without the 32 degree offset', () => {
-    // source: D-8 (friction factor is a difference: only the 5/9 factor); 8 °F → 4.444 °C
+    // derived from NIST SP 811 (2008), t/°C = (t/°F − 32) × 5/9: a difference such as a
+    // friction factor takes only the 5/9 factor; 8 °F → 4.444 °C
     assert.equal(fahrenheitDifferenceToCelsius(new Decimal(8)).toFixed(3), '4.444');
     assert.equal(parseTemperatureDifference('14 °F').toFixed(3), '7.778');
     assert.notEqual(

@@ -6,7 +6,7 @@ import { LITRES_PER_US_GALLON, parseVolume, waterGramsFromLitres } from './volum
 
 describe('volumes, lengths and percentages', () => {
   it('should define the US gallon as exactly 3.785411784 L', () => {
-    // source: NIST SP 811 (2008), Appendix B.8 (U-3)
+    // source: NIST SP 811 (2008), Appendix B.8 (the US gallon, 231 in³, exact)
     assert.equal(LITRES_PER_US_GALLON.toString(), '3.785411784');
     assert.equal(parseVolume('100 gal').toString(), '378.5411784');
   });

@@ -8,7 +8,7 @@ import { startTestServer, type ApiResponse } from '../helpers/test-server.ts';
 
 // The demo brisket brine (formulas/brisket-brine.yaml) on 10 kg with 1 g of water: about 280 g
 // of salt in 1 g of water, far past what water can dissolve: 26.395 % salt, 100 °SAL at 60 °F.
-// source: "The Salometer and How to Use It" (check-values B-2)
+// source: "The Salometer and How to Use It", meat-processing equipment manual, section 14
 const THIN = { formula: 'brisket-brine', batch: { meat: '10kg', water: '0.001kg' } };
 const REFUSAL =
   /^with 1 g of water, the brine would be \d+\.\d % salt: more than water can dissolve \(26\.395 %, 100 °SAL at 60 °F\); use more water$/;

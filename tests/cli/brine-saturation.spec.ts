@@ -12,8 +12,8 @@ import {
 import { makeTempDir } from '../helpers/temp-files.ts';
 
 // Saturated brine: 26.395 % salt, 100 °SAL at 60 °F. source: "The Salometer and How to Use It"
-// (check-values B-2). The demo brisket brine's salt on 10 kg of meat needs about 1.1 kg of water
-// at least; 1 g leaves a brine of about 99.6 % salt.
+// (meat-processing equipment manual, section 14). The demo brisket brine's salt on 10 kg of meat
+// needs about 1.1 kg of water at least; 1 g leaves a brine of about 99.6 % salt.
 const THIN = ['calc', 'brisket-brine', '--meat', '10kg', '--water', '0.001kg'];
 const REFUSAL =
   /^larder: with 1 g of water, the brine would be \d+\.\d % salt: more than water can dissolve \(26\.395 %, 100 °SAL at 60 °F\); use more water$/m;

@@ -14,13 +14,15 @@ const SOURCE = { made: 'with 1 g of water', fix: 'use more water', option: 'wate
 
 describe('brine strength', () => {
   it('should put 100 °SAL at 26.395 % salt', () => {
-    // source: "The Salometer and How to Use It" (B-2, B-3)
+    // source: "The Salometer and How to Use It", meat-processing equipment manual, section 14:
+    // saturated brine 26.395 % NaCl; °SAL = % salt ÷ 26.395 × 100
     assert.equal(SATURATED_BRINE_SALT_PCT.toString(), '26.395');
     assert.equal(salinometerDegrees(new Decimal('26.395')).toString(), '100');
   });
 
   it('should match the salinometer table on the 60 °F scale', () => {
-    // source: B-3 formula, table derived in check-values section 3
+    // source: °SAL = % salt ÷ 26.395 × 100 ("The Salometer and How to Use It"); the table is
+    // derived from it
     const table: [number, string][] = [
       [10, '2.640'],
       [20, '5.279'],
@@ -38,14 +40,15 @@ describe('brine strength', () => {
   });
 
   it('should count strength as salt over salt plus water', () => {
-    // source: B-5 definition (from memory, standard); WE-12: 2.5 salt, 65 water → 3.704 %
+    // from memory (the standard water-phase salt definition, salt ÷ (salt + water) × 100); own
+    // worked example: 2.5 salt, 65 water → 3.704 %
     assert.equal(brineStrength(new Decimal('2.5'), new Decimal(65)).toFixed(3), '3.704');
   });
 
   describe('the one saturation rule for every brine', () => {
     it('should refuse a brine stronger than saturated, naming what made it and the fix', () => {
       // source: saturated brine is 26.395 % NaCl, 100 °SAL at 60 °F ("The Salometer and How to Use
-      // It", B-2); NaCl dissolves to about 36 g per 100 g water at 20–25 °C, 36 / 136 = 26.5 %
+      // It"); NaCl dissolves to about 36 g per 100 g water at 20–25 °C, 36 / 136 = 26.5 %
       // (from memory)
       for (const strength of ['26.396', '30', '99.29']) {
         assert.throws(
@@ -68,7 +71,8 @@ describe('brine strength', () => {
     });
 
     it('should warn from 95 °SAL up, and not below', () => {
-      // 95 °SAL = 0.95 × 26.395 = 25.07525 % (B-3); the 95 °SAL threshold: common practice, no source
+      // 95 °SAL = 0.95 × 26.395 = 25.07525 % ("The Salometer and How to Use It"); the 95 °SAL
+      // threshold: common practice, no source
       assert.equal(NEAR_SATURATION_DEGREES.toString(), '95');
       assert.equal(checkBrineStrength(new Decimal('25.07525'), SOURCE).length, 1);
       assert.match(

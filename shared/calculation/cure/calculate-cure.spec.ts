@@ -41,7 +41,9 @@ function check(result: CalcResult, id: string) {
 describe('calculateCure', () => {
   describe('dry equilibrium cure', () => {
     it('should reproduce the 5000 g belly at 2.5 % salt and 120 ppm', () => {
-      // source: WE-8 — curing salt 5000 × 1.92 / 1000 = 9.60 g carrying 9.00 g NaCl; plain salt 116.00 g;
+      // own worked example: 120 ppm by the FSIS 7620.3 ch. 3 comminuted formula needs 1.92 g of a
+      // 6.25 % mix per kg (the 6.25 % mix: common practice, no source), so curing salt
+      // 5000 × 1.92 / 1000 = 9.60 g carrying 9.00 g NaCl; plain salt 125 − 9 = 116.00 g;
       // the 200 ppm cap for dry-cured bacon is 9 CFR 424.22(b)
       const result = calculateCure(cure({}), { meat: d(5000) });
       assert.equal(line(result, 'curing salt').toFixed(2), '9.60');
@@ -54,7 +56,8 @@ describe('calculateCure', () => {
     });
 
     it('should refuse a dry-cured bacon over 200 ppm as a critical limit', () => {
-      // source: 9 CFR 424.22(b) dry-cured bacon 200 ppm; 0.4 % of a 6.25 % mix = 250 ppm (WE-3 arithmetic)
+      // source: 9 CFR 424.22(b) dry-cured bacon 200 ppm; 0.4 % of a 6.25 % mix = 250 ppm (FSIS
+      // 7620.3 ch. 3 comminuted formula)
       const result = calculateCure(cure({ ingredients: [{ ...CURING_SALT, pct: 0.4 }] }), {
         meat: d(1000),
       });
@@ -75,7 +78,8 @@ describe('calculateCure', () => {
     });
 
     it('should allow 625 ppm for dry-cured products other than bacon', () => {
-      // source: 9 CFR 424.21(c) "1 oz per 100 lb (dry cure)"; FSIS 7620.3 ch. 3 (C-2); 1.0 % of a 6.25 % mix = 625 ppm
+      // source: 9 CFR 424.21(c) "1 oz per 100 lb (dry cure)"; FSIS 7620.3 ch. 3, "Nitrite used in
+      // cured, dry products"; 1.0 % of a 6.25 % mix = 625 ppm
       const ham = cure({ product: 'whole-muscle', ingredients: [{ ...CURING_SALT, pct: 1.0 }] });
       const max = check(calculateCure(ham, { meat: d(1000) }), 'nitrite-max');
       assert.equal(max.value.toString(), '625');
@@ -84,7 +88,8 @@ describe('calculateCure', () => {
     });
 
     it('should warn below the usual 120 ppm minimum without refusing', () => {
-      // source: FSIS 7620.3 ch. 3 introduction (C-9), 120 ppm for Keep Refrigerated cured products
+      // source: FSIS 7620.3 ch. 3 introduction, 120 ppm for Keep Refrigerated cured products (FSIS
+      // policy, read in secondary pages quoting it)
       const result = calculateCure(cure({ ingredients: [{ ...CURING_SALT, pct: 0.16 }] }), {
         meat: d(1000),
       });
@@ -94,7 +99,7 @@ describe('calculateCure', () => {
     });
 
     it('should refuse any nitrate in bacon', () => {
-      // source: 9 CFR 424.21(c) lists nitrate only for products other than bacon (C-7)
+      // source: 9 CFR 424.21(c) lists nitrate only for products other than bacon
       const withNitrate = cure({
         ingredients: [
           { name: 'curing salt no. 2', pct: 0.25, nitrite: 6.25, nitrate: 4, salt: 89.75 },
@@ -138,7 +143,7 @@ describe('calculateCure', () => {
     });
 
     it('should weigh ingredients on meat plus water and divide nitrite by meat plus pickle', () => {
-      // source: FSIS 7620.3 ch. 3 immersion "Method Two" (F-4). Own example: 10 kg meat, 6 kg water;
+      // source: FSIS 7620.3 ch. 3 immersion "Method Two". Own example: 10 kg meat, 6 kg water;
       // curing salt 16 kg × 0.25 % = 40 g → 2.5 g nitrite; salt 400 g; pickle 6440 g;
       // ppm = 2.5 × 1e6 / 16 440 = 152.068…
       const result = calculateCure(brine, { meat: d(10_000) });
@@ -149,8 +154,9 @@ describe('calculateCure', () => {
     });
 
     it('should print brine strength and degrees salinometer', () => {
-      // source: B-3, "The Salometer and How to Use It"; own example: NaCl 400 + 37.5 = 437.5 g in 6000 g water
-      // → 437.5 / 6437.5 = 6.796 %, ÷ 26.395 × 100 = 25.75 °SAL
+      // source: °SAL = % salt ÷ 26.395 × 100, "The Salometer and How to Use It"; own example:
+      // NaCl 400 + 37.5 = 437.5 g in 6000 g water → 437.5 / 6437.5 = 6.796 %,
+      // ÷ 26.395 × 100 = 25.75 °SAL
       const figures = calculateCure(brine, { meat: d(10_000) }).figures;
       const strength = figures.find((f) => f.label === 'Brine strength')?.value as Decimal;
       const sal = figures.find((f) => f.label === 'Salinometer')?.value as Decimal;
@@ -165,7 +171,7 @@ describe('calculateCure', () => {
     });
 
     // Saturated brine: 26.395 % salt, 100 °SAL at 60 °F. source: "The Salometer and How to Use It"
-    // (B-2). Own examples on 10 kg of meat, salt 2.5 % + 0.25 % × 93.75 % = 2.734375 % of meat +
+    // Own examples on 10 kg of meat, salt 2.5 % + 0.25 % × 93.75 % = 2.734375 % of meat +
     // water W: salt = (10 000 + W) × 2.734375 %, strength = salt ÷ (salt + W).
     const refusesWater = (water: string, strength: string) =>
       assert.throws(
@@ -228,7 +234,8 @@ describe('calculateCure', () => {
     });
 
     it('should make 100 kg of pickle holding 1.920 kg curing salt and 0.550 kg erythorbate for 1000 kg of belly', () => {
-      // source: WE-5 (FSIS 7620.3 ch. 3 pumped formula; 120 ppm + 550 ppm from 9 CFR 424.22(b))
+      // own worked example by the FSIS 7620.3 ch. 3 pumped formula: 120 × 100 / (0.10 × 1e6) =
+      // 0.120 kg nitrite = 1.920 kg of a 6.25 % mix; 120 ppm + 550 ppm from 9 CFR 424.22(b)
       const result = calculateCure(pumpedBacon, { meat: d(1_000_000) });
       assert.equal(line(result, 'curing salt').toString(), '1920');
       assert.equal(line(result, 'sodium erythorbate').toString(), '550');
@@ -238,7 +245,8 @@ describe('calculateCure', () => {
     });
 
     it('should refuse the same pickle when the meat took 12 % instead of 10 %', () => {
-      // source: WE-5 sensitivity — 0.120 × 0.12 × 1e6 / 100 = 144 ppm, over 120 ppm (9 CFR 424.22(b))
+      // own worked example, FSIS 7620.3 ch. 3 pumped formula: 0.120 × 0.12 × 1e6 / 100 = 144 ppm,
+      // over 120 ppm (9 CFR 424.22(b))
       const result = calculateCure(pumpedBacon, { meat: d(1_000_000), pumpedWeight: d(1_120_000) });
       const max = check(result, 'nitrite-max');
       assert.equal(max.value.toString(), '144');
@@ -247,7 +255,7 @@ describe('calculateCure', () => {
     });
 
     it('should refuse pumped bacon that lacks erythorbate, as a critical limit', () => {
-      // source: 9 CFR 424.22(b) requires 550 ppm sodium ascorbate or erythorbate in pumped bacon (C-4)
+      // source: 9 CFR 424.22(b) requires 550 ppm sodium ascorbate or erythorbate in pumped bacon
       const without = cure({ ...pumpedBacon, ingredients: pumpedBacon.ingredients.slice(0, 2) });
       const accelerator = check(calculateCure(without, { meat: d(1000) }), 'accelerator-required');
       assert.equal(accelerator.status, 'fail');
@@ -271,8 +279,8 @@ describe('calculateCure', () => {
     });
 
     it('should refuse a pump % too low to dissolve the salt', () => {
-      // source: saturated brine holds 26.395 % salt ("The Salometer and How to Use It", B-2); 3 % salt in
-      // the meat at 10 % pump would need a brine of 30 % salt
+      // source: saturated brine holds 26.395 % salt ("The Salometer and How to Use It"); 3 % salt
+      // in the meat at 10 % pump would need a brine of 30 % salt
       const salty = cure({
         method: 'pump',
         product: 'whole-muscle',
@@ -308,7 +316,7 @@ describe('calculateCure', () => {
     });
 
     it('should fall back to about 7 days per inch for a dry cure and say it is a rule of thumb', () => {
-      // common practice, no source (C-16): 40 mm = 1.5748 in × 7 = 11.02 → 12 days
+      // common practice, no source: 40 mm = 1.5748 in × 7 = 11.02 → 12 days
       const result = calculateCure(cure({}), {
         meat: d(4260),
         thickness: d(40),
@@ -319,7 +327,8 @@ describe('calculateCure', () => {
     });
 
     it('should fall back to 4 days per pound for a sweet pickle: a 6 lb shoulder 24 days, a 15 lb ham 60', () => {
-      // source: USDA Farmers' Bulletin, "Sweet Pickle Cure", 3½–4 days per pound (C-13, WE-10).
+      // source: USDA, Pork: Slaughtering, Cutting, Preserving, and Cooking on the Farm, Farmers'
+      // Bulletin (1978 revision), "Sweet Pickle Cure", 3½–4 days per pound.
       // Own example of a strong pickle: water 37.5 % of the meat, salt 5.82 % of meat + water →
       // 1.375 × (5.82 + 0.18) = 8.25 % of green weight in 37.5 % water = 18.03 % salt, 68 °SAL.
       const brine = cure({
@@ -360,7 +369,8 @@ describe('calculateCure', () => {
 
   describe('yields', () => {
     it('should work back from 6 kg of sliced bacon to the green weight', () => {
-      // Own example, derived (P-4, P-5 definitions): 6000 ÷ (0.90 × 0.94) = 7092.198… g green
+      // Own example, derived from yield = weight after ÷ weight before:
+      // 6000 ÷ (0.90 × 0.94) = 7092.198… g green
       const result = calculateCure(cure({ yields: { smoke: 90, slice: 94 } }), { want: d(6000) });
       const green = result.inputs.find((f) => f.label === 'Green weight')?.value as Decimal;
       assert.equal(green.toFixed(3), '7092.199');

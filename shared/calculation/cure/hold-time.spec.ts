@@ -26,7 +26,7 @@ function brine(waterPct: number, saltPct: number): CureFormula {
 
 // A strong pickle, own example: 8 lb of salt to 37.5 lb of water for 100 lb of meat → salt 5.82 %
 // of meat + water (8 ÷ 137.5); 1.375 × (5.82 + 0.09375) = 8.1314 lb of salt in 37.5 lb of water
-// = 17.82 % = 67.5 °SAL (B-3, "The Salometer and How to Use It").
+// = 17.82 % = 67.5 °SAL (°SAL = % salt ÷ 26.395 × 100, "The Salometer and How to Use It").
 const SWEET_PICKLE = brine(37.5, 5.82);
 // An equilibrium brine: water 50 % of the meat, salt 2.3 % of meat + water → 1.5 × (2.3 +
 // 0.09375) = 3.5906 % of green weight in 50 % water = 6.701 % = 25.4 °SAL.
@@ -35,8 +35,8 @@ const EQUILIBRIUM = brine(50, 2.3);
 describe('the hold of a brine cure with no rule of its own', () => {
   it('takes 4 days per pound only for a pickle as strong as a sweet pickle', () => {
     // source: USDA, Pork: Slaughtering, Cutting, Preserving, and Cooking on the Farm (Farmers'
-    // Bulletin), "Sweet Pickle Cure": 3½–4 days per pound; a 6 lb shoulder 24 days, a 15 lb ham
-    // 60 (C-13, WE-10)
+    // Bulletin, 1978 revision), "Sweet Pickle Cure": 3½–4 days per pound; a 6 lb shoulder
+    // 24 days, a 15 lb ham 60
     const days = (lb: string) => {
       const hold = estimateHold(SWEET_PICKLE, { largestPieceGrams: pounds(lb) });
       assert.ok('days' in hold, JSON.stringify(hold));

@@ -99,7 +99,8 @@ describe('a pump cure held under a cover brine', () => {
     assert.equal(grams(result, 'Cover brine make-up', 'water'), '2350');
     const pump = group(result, 'Brine make-up').lines.reduce((s, l) => s.plus(l.grams), d(0));
     assert.equal(pump.toString(), '1320');
-    // source: B-3 ("The Salometer and How to Use It"): 100 ÷ (100 + 2350) = 4.0816 % → 15.46 °SAL
+    // source: "The Salometer and How to Use It" (°SAL = % salt ÷ 26.395 × 100):
+    // 100 ÷ (100 + 2350) = 4.0816 % → 15.46 °SAL
     assert.equal(figure(result, 'Cover brine strength').toFixed(4), '4.0816');
     assert.equal(figure(result, 'Cover brine salinometer').toFixed(2), '15.46');
   });
@@ -172,7 +173,8 @@ describe('a pump cure held under a cover brine', () => {
   });
 
   it('refuses a cover brine saltier than saturated', () => {
-    // source: saturated brine is 26.395 % salt, 100 °SAL at 60 °F (B-2); 27 % salt is over it
+    // source: saturated brine is 26.395 % salt, 100 °SAL at 60 °F ("The Salometer and How to
+    // Use It"); 27 % salt is over it
     const formula = ham(0.25, { cover_brine: [{ ...SALT, pct: 27 }] });
     assert.throws(
       () => calculateCure(formula, { meat: d(1000) }),
