@@ -18,13 +18,13 @@ describe('YIELD_STEPS', () => {
 
 describe('yieldPercent', () => {
   it('should give 82.0 % for 8.2 kg usable from a 10.0 kg primal', () => {
-    // source: check-values WE-29 (P-4, trim yield = usable ÷ starting weight × 100, DERIVED)
+    // own worked example; trim yield = usable ÷ starting weight × 100 (a definition, derived)
     assert.equal(yieldPercent(dec('8200'), dec('10000')).toFixed(1), '82.0');
   });
 
   it('should give 72 % for 72 kg cooked from 100 kg raw', () => {
-    // source: check-values WE-29 (P-5, cooking yield = cooked ÷ raw × 100; USDA ARS, USDA Table
-    // of Cooking Yields for Meat and Poultry, 2012, Release 2 2014)
+    // own worked example; cooking yield = cooked ÷ raw × 100 as in USDA ARS, USDA Table of
+    // Cooking Yields for Meat and Poultry, 2012, Release 2 2014
     assert.ok(yieldPercent(dec('72000'), dec('100000')).equals(dec('72')));
   });
 });
@@ -36,7 +36,7 @@ describe('yieldStages', () => {
   });
 
   it('should say to buy 12.195 kg to get 10 kg usable at an 82 % trim yield', () => {
-    // source: check-values WE-29 (P-4): 10 / 0.82 = 12.195 kg
+    // own worked example (trim yield = usable ÷ starting weight): 10 / 0.82 = 12.195 kg
     const stages = yieldStages(dec('10000'), { trim: 82 });
     assert.equal(stages.length, 1);
     assert.equal(stages[0].step, BEFORE_TRIM);
@@ -45,7 +45,8 @@ describe('yieldStages', () => {
   });
 
   it('should give 72 kg cooked from 100 kg raw at a 72 % cook yield', () => {
-    // source: check-values WE-29 (P-5; USDA ARS, USDA Table of Cooking Yields for Meat and Poultry)
+    // own worked example; cooking yield as in USDA ARS, USDA Table of Cooking Yields for Meat
+    // and Poultry
     const stages = yieldStages(dec('100000'), { cook: 72 });
     assert.deepEqual(
       stages.map((s) => s.step),
@@ -76,7 +77,7 @@ describe('yieldStages', () => {
 
 describe('referenceFromFinished', () => {
   it('should start from 69.444 kg raw for 50 kg cooked at a 72 % cook yield', () => {
-    // source: check-values WE-29 (P-5): 50 / 0.72 = 69.444 kg
+    // own worked example (cooking yield, USDA Table of Cooking Yields): 50 / 0.72 = 69.444 kg
     assert.equal(referenceFromFinished(dec('50000'), { cook: 72 }).div(1000).toFixed(3), '69.444');
   });
 

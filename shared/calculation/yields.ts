@@ -5,8 +5,8 @@ import type { YieldStage } from './calc-result.ts';
 /**
  * The process steps that can carry a yield, in process order. Each yield is the weight after the
  * step as a percent of the weight before it.
- * source: check-values P-4 (trim yield, DERIVED) and P-5 (cooking yield = cooked ÷ raw × 100,
- * USDA ARS Nutrient Data Laboratory, USDA Table of Cooking Yields for Meat and Poultry, 2012/2014)
+ * source: cooking yield = cooked ÷ raw × 100, USDA ARS Nutrient Data Laboratory, USDA Table of
+ * Cooking Yields for Meat and Poultry, 2012/2014; the trim yield is the same ratio (derived)
  */
 export const YIELD_STEPS = ['trim', 'cure', 'smoke', 'cook', 'slice'] as const;
 
@@ -23,8 +23,9 @@ export const STEPS_AFTER_REFERENCE: readonly YieldStep[] = YIELD_STEPS.filter((s
 export const BEFORE_TRIM = 'before trim';
 
 /**
- * A yield in percent (weight after ÷ weight before × 100), as P-4 and P-5 define it.
- * source: check-values P-4, P-5 (USDA ARS, USDA Table of Cooking Yields for Meat and Poultry)
+ * A yield in percent (weight after ÷ weight before × 100), as trim and cooking yields are
+ * defined.
+ * source: USDA ARS, USDA Table of Cooking Yields for Meat and Poultry (the trim yield: derived)
  * @param afterGrams weight after the step (usable, cooked, sliced…)
  * @param beforeGrams weight before the step; must not be zero
  */

@@ -43,7 +43,8 @@ export const FAT_STANDARDS: Readonly<Record<FatStandardKey, FatStandard>> = {
     name: 'ground beef',
     section: '9 CFR 319.15(a)',
     // source: 9 CFR 319.15(a), USDA FSIS standard of identity for chopped beef/ground beef:
-    // at most 30 % fat, no beef fat added as such. check-values S-5, REG (secondary).
+    // at most 30 % fat, no beef fat added as such. Read in training material quoting the rule;
+    // re-check against eCFR.
     maxFatPercent: new Decimal(30),
     forbidsFatAsSuch: true,
     source:
@@ -56,7 +57,8 @@ export const FAT_STANDARDS: Readonly<Record<FatStandardKey, FatStandard>> = {
     name: 'hamburger',
     section: '9 CFR 319.15(b)',
     // source: 9 CFR 319.15(b), USDA FSIS standard of identity for hamburger: at most 30 % fat,
-    // with or without beef fat added as such. check-values S-5 (30 %), REG (secondary).
+    // with or without beef fat added as such. The 30 % read in training material quoting 319.15;
+    // re-check against eCFR.
     maxFatPercent: new Decimal(30),
     forbidsFatAsSuch: false,
     source:
@@ -69,7 +71,7 @@ export const FAT_STANDARDS: Readonly<Record<FatStandardKey, FatStandard>> = {
     name: 'fresh pork sausage',
     section: '9 CFR 319.141',
     // source: 9 CFR 319.141, USDA FSIS standard of identity for fresh pork sausage, as stated in
-    // The National Provisioner; check-values S-6, REG (secondary); re-check against eCFR.
+    // The National Provisioner trade magazine, not the rule itself; re-check against eCFR.
     maxFatPercent: new Decimal(50),
     // Not read for added fat: only 319.15(a) is known to forbid it, so nothing is checked here.
     forbidsFatAsSuch: false,

@@ -126,7 +126,8 @@ describe('recording a batch', () => {
       units: 'metric',
     });
     assert.equal(grind.status, 201, grind.text);
-    // source: check-values P-1 with the lean measured at 18 %: 20 kg × 30/32 = 18.75 kg of lean
+    // source: Pearson square (meat-evaluation training material, issuer not identified) with
+    // the lean measured at 18 %: 20 kg × 30/32 = 18.75 kg of lean
     const lines = grind.json.batch.result.groups[0].lines;
     assert.equal(lines[0].grams, '18750');
     assert.match(lines[0].name, /18 % fat, measured/);
@@ -134,7 +135,7 @@ describe('recording a batch', () => {
       formula: 'chuck-grind',
       batch: { onHand: 'lean=12 kg, fat=2 kg' },
     });
-    // source: check-values P-3 (DERIVED): with every trimming fixed, none is left to balance
+    // derived from the mass and fat balances: with every trimming fixed, none is left to balance
     assert.equal(both.status, 400, both.text);
     assert.match(both.json.error.message, /every trimming is fixed/);
   });

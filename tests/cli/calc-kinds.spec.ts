@@ -109,7 +109,7 @@ describe('larder calc on a dough (pit-bun, 48 pieces of 90 g, 3 % loss)', () => 
     const run = await runLarder(['calc', ...args]);
     assertExit(run, 0);
     // 4453.608 − 4320 = 133.608 g = 3 % of 4453.608 g: the allowance, not spare dough.
-    // source: The Bakery Network, "Bread Formula Construction" (2011) (D-4): the sheet names
+    // source: The Bakery Network, "Bread Formula Construction" (2011): the sheet names
     // the convention in its own words, not by the handbook's title
     assert.match(run.stdout, /48 × 90\.0 g; the other \d+(\.\d)? g is the loss allowance \(3 %\)/);
     assert.doesNotMatch(run.stdout, /left over/);
@@ -123,8 +123,8 @@ describe('larder calc on a dough (pit-bun, 48 pieces of 90 g, 3 % loss)', () => 
       ...['--room', '24C', '--flour-temp', '22C', '--preferment-temp', '18C', '--tap', '15C'],
     );
     // 4 × 26 − (24 + 22 + 18) − 22 °F × 5/9 = 104 − 64 − 12.222 = 27.778 °C, printed to 0.5 °C.
-    // source: D-6 (San Francisco Baking Institute, Artisan I workshop reference material, 2009),
-    // D-8 for the friction factor in °C; own example, derived
+    // source: San Francisco Baking Institute, Artisan I workshop reference material (2009); the
+    // friction factor, a difference, takes only the 5/9 factor in °C; own example, derived
     assert.equal(places(figure(result.figures, /^liquid temperature$/i).exact, 3), '27.778');
     assert.equal(figure(result.figures, /^bring whole milk and whole egg to$/i).value, '28.0 °C');
     assert.equal(figure(result.figures, /^water temperature$/i).value, '28.0 °C');
@@ -147,8 +147,8 @@ describe('larder calc on a blend (chuck-grind: 15 % and 50 % fat trims to 20 % f
     const lean = line(meat.lines, /^chuck trim/);
     const fat = line(meat.lines, /^brisket fat trim/);
     // Parts: lean 50 − 20 = 30, fat 20 − 15 = 5, of 35; 20 kg × 30/35 = 17.143 kg and
-    // 20 kg × 5/35 = 2.857 kg. source: Pearson square as in meat-evaluation training material,
-    // check-values P-1
+    // 20 kg × 5/35 = 2.857 kg. source: Pearson square as in meat-evaluation training material
+    // ("Meat Calculations" presentation, issuer not identified)
     assert.equal(places(lean.grams, 3), '17142.857');
     assert.equal(places(fat.grams, 3), '2857.143');
     assert.equal(lean.amount, '17.143 kg');
@@ -175,7 +175,7 @@ describe('larder calc on a blend (chuck-grind: 15 % and 50 % fat trims to 20 % f
     const result = await calcJson('chuck-grind', '--on-hand', 'lean=12kg');
     const meat = group(result, /^meat$/i);
     // fat trim = 12 kg × (20 − 15)/(50 − 20) = 2 kg; batch 14 kg.
-    // source: Pearson square as in meat-evaluation training material, check-values P-1
+    // source: Pearson square as in meat-evaluation training material (issuer not identified)
     assert.equal(line(meat.lines, /^chuck trim/).grams, '12000');
     assert.equal(line(meat.lines, /^brisket fat trim/).grams, '2000');
     assert.equal(figure(result.figures, /^total batch weight$/i).exact, '14000');
@@ -191,15 +191,16 @@ describe('larder calc on a blend (chuck-grind: 15 % and 50 % fat trims to 20 % f
       '--on-hand',
       'fat=2kg',
     ]);
-    // source: check-values P-3 (DERIVED): the fat balance needs one free trimming to size
+    // derived from the mass and fat balances: one free trimming is needed to size the batch
     assertCleanFailure(run, 2, /every trimming is fixed by what is on hand/, { oneLine: true });
   });
 
   it('uses a fat test measured today instead of the formula’s figure, and says so', async () => {
     const result = await calcJson('chuck-grind', '--total', '20kg', '--fat-test', 'lean=18');
     const meat = group(result, /^meat$/i);
-    // source: check-values P-1 with the lean trim measured at 18 %: parts 50 − 20 = 30 and
-    // 20 − 18 = 2 of 32; 20 kg × 30/32 = 18.75 kg, the fat trim 1.25 kg.
+    // source: Pearson square (meat-evaluation training material) with the lean trim measured
+    // at 18 %: parts 50 − 20 = 30 and 20 − 18 = 2 of 32; 20 kg × 30/32 = 18.75 kg, the fat
+    // trim 1.25 kg.
     assert.equal(line(meat.lines, /^chuck trim 85\/15 \(18 % fat, measured\)$/).grams, '18750');
     assert.equal(line(meat.lines, /^brisket fat trim/).grams, '1250');
     assert.match(figure(result.inputs, /^fat test: chuck trim/i).note ?? '', /formula's 15 %/);

@@ -136,7 +136,8 @@ describe('printed totals on every demo formula', () => {
     );
     // 48 × 90 g ÷ (1 − 0.03) = 4453.608 g of dough; flour 4453.608 ÷ 1.87 = 2381.609 g; the
     // sponge is 30 % of it, 714.483 g, × 180.3 % = 1288.212 g.
-    // source: "Bread Formula Construction" (2011) (D-4) for the loss; D-1, D-2 (BBGA 2009)
+    // source: "Bread Formula Construction" (2011) for the loss; Bread Bakers Guild of America
+    // formula layout standards (2009) for baker's percent and the prefermented flour
     const [sponge, final, overall] = result.groups;
     assert.equal(sponge.total?.weight, '1288.2 g');
     assert.equal(final.lines.find((line) => line.role === 'preferment')?.amount, '1288.2 g');

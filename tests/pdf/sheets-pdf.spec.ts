@@ -154,7 +154,8 @@ describe('batch sheets as PDF from the command line', () => {
     assertExit(await runLarder(['calc', 'pit-bun', '--pieces', '48', '--pdf', file]), 0);
     const sheet = await pdfText(readFileSync(file));
     // 48 × 90 g ÷ 0.97 = 4453.608 g of dough; sponge 30 % × 2381.609 g × 1.803 = 1288.212 g.
-    // source: "Bread Formula Construction" (2011) (D-4); BBGA 2009 (D-1, D-2); own example, derived
+    // source: "Bread Formula Construction" (2011) for the loss; Bread Bakers Guild of America
+    // formula layout standards (2009); own example, derived
     assert.match(sheet.all, /sponge .*1288\.2 g/);
     assert.match(sheet.all, /the exact weight is 4453\.6 g/);
     assert.match(sheet.all, /Mixed dough 4453\.6 g/);

@@ -7,7 +7,7 @@ import { calculateBlend } from './calculate-blend.ts';
 import { figure, we25 } from './blend-spec-helpers.ts';
 
 // source (the loss itself): grinder and forming loss, typically 1–3 % of a blend, common
-// practice, no source. The pound: check-values U-1 (NIST SP 811, 453.59237 g).
+// practice, no source. The pound: NIST SP 811 (2008), Appendix B.8, 453.59237 g.
 
 describe('calculateBlend, loss allowance', () => {
   it('should cut 98 quarter-pound portions from 25 lb at 2 % loss', () => {
@@ -38,7 +38,8 @@ describe('calculateBlend, loss allowance', () => {
 
   it('should cook what is left after the loss, and work a wanted weight back through both', () => {
     // own arithmetic: 980 g cooked wanted at 80 % cook yield and 2 % loss: 980 ÷ 0.8 = 1225 g
-    // formed, ÷ 0.98 = 1250 g of meat (no seasoning); WE-25's split: 937.5 g and 312.5 g.
+    // formed, ÷ 0.98 = 1250 g of meat (no seasoning); split 30 : 10 as the own Pearson example
+    // (lean 90/10 and 50/50 trim at 20 % fat): 937.5 g and 312.5 g.
     const result = calculateBlend(we25({ loss_pct: 2, yields: { cook: 80 } }), {
       want: dec('980'),
     });
@@ -52,7 +53,7 @@ describe('calculateBlend, loss allowance', () => {
 describe('plannedSize, blend loss allowance', () => {
   it('should plan 25 lb of meat for 98 quarter-pound portions at 2 % loss', () => {
     // own arithmetic: 98 × 113.3980925 g ÷ (1 − 0.02) = 11113.013065 ÷ 0.98 = 11339.80925 g
-    // = 25 lb (U-1).
+    // = 25 lb (453.59237 g to the pound, NIST SP 811).
     const size = plannedSize({
       formula: we25({ portion: '4 oz', loss_pct: 2 }),
       purposes: [],

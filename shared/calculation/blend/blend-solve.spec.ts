@@ -6,7 +6,7 @@ import type { BatchInput } from '../batch-input.ts';
 import { calculateBlend } from './calculate-blend.ts';
 import { batchError, figure, grams, we25 } from './blend-spec-helpers.ts';
 
-/** WE-25's trims with a third of 30 % fat between them. */
+/** The own example trims, lean 90/10 and 50/50, with a third of 30 % fat between them. */
 function threeTrims(extra: Partial<BlendFormula> = {}): BlendFormula {
   return we25({
     components: [
@@ -32,9 +32,10 @@ function refuses(
 
 describe('calculateBlend, more than two components', () => {
   it('should balance 10 % and 50 % trims around 20 kg of 30 % on hand for 100 kg at 20 %', () => {
-    // source: check-values P-3 (general linear blend with fixed amounts, DERIVED); own arithmetic:
-    // fat needed 100 × 20 = 2000 kg·%; on hand 20 × 30 = 600; the other 80 kg carry 1400, i.e.
-    // 17.5 %; Pearson (P-1) on 10 % and 50 %: parts 32.5 and 7.5 of 40 → 65 kg and 15 kg.
+    // derived from the mass and fat balances of a linear blend, with fixed amounts; own
+    // arithmetic: fat needed 100 × 20 = 2000 kg·%; on hand 20 × 30 = 600; the other 80 kg carry
+    // 1400, i.e. 17.5 %; Pearson square (meat-evaluation training material) on 10 % and 50 %:
+    // parts 32.5 and 7.5 of 40 → 65 kg and 15 kg.
     // Check: 6.5 + 7.5 + 6.0 = 20 kg fat in 100 kg.
     const result = calculateBlend(threeTrims(), {
       total: kg('100'),
@@ -45,7 +46,8 @@ describe('calculateBlend, more than two components', () => {
   });
 
   it('should add the one free trim to two on hand when no meat weight is given', () => {
-    // source: check-values P-3 (DERIVED); own arithmetic: on hand 20 kg at 30 % and 5 kg at 50 %
+    // derived from the mass and fat balances; own arithmetic: on hand 20 kg at 30 % and 5 kg
+    // at 50 %
     // carry 600 + 250 = 850 kg·% in 25 kg; fat balance 850 + 10·m = 20·(25 + m) → m = 350 ÷ 10
     // = 35 kg of 10 % trim; 60 kg at 1200 kg·% = 20 %.
     const result = calculateBlend(threeTrims(), {
@@ -59,7 +61,7 @@ describe('calculateBlend, more than two components', () => {
   });
 
   it('should solve five components with three on hand', () => {
-    // source: check-values P-3 (DERIVED); own arithmetic: on hand chuck 30 kg at 15 %, brisket
+    // derived from the mass and fat balances; own arithmetic: on hand chuck 30 kg at 15 %, brisket
     // 20 kg at 30 %, plate 10 kg at 35 %: 450 + 600 + 350 = 1400 kg·%; the other 40 kg carry
     // 2000 − 1400 = 600 (15 %); from 10 % and 50 %: (600 − 50 × 40) ÷ (10 − 50) = 35 kg of lean,
     // 5 kg of fat trim. Check: 350 + 450 + 600 + 350 + 250 = 2000 = 20 % of 100 kg.
@@ -177,7 +179,8 @@ describe('calculateBlend, more than two components', () => {
 
 describe('calculateBlend, fat tests', () => {
   it('should use the fat measured today instead of the formula’s, and say so', () => {
-    // own arithmetic after P-1: lean measured at 18 %: parts 50 − 20 = 30 and 20 − 18 = 2 of 32;
+    // own arithmetic by the Pearson square: lean measured at 18 %: parts 50 − 20 = 30 and
+    // 20 − 18 = 2 of 32;
     // 100 kg → 93.75 kg and 6.25 kg. Check: 16.875 + 3.125 = 20 kg fat.
     const result = calculateBlend(we25(), {
       total: kg('100'),

@@ -34,10 +34,10 @@ function listed(names: readonly string[]): string {
 
 /**
  * The grams of every component of a blend, in the formula's order, solved exactly from two
- * balances (check-values P-3, DERIVED): Σ m = total and Σ m × fat = target × total, with the
+ * balances (derived; a linear blend): Σ m = total and Σ m × fat = target × total, with the
  * amounts on hand fixed. Two equations fix two unknowns, so the blend is determinate only when:
  * - the meat weight is given and exactly two components are not on hand: those two balance the
- *   rest (the Pearson square on what is left to make, P-1; with nothing on hand, P-1 itself);
+ *   rest (the Pearson square on what is left to make; with nothing on hand, the square itself);
  * - the meat weight is not given and exactly one component is not on hand: it is added to what
  *   is on hand until the fat is right, and the batch is whatever that weighs.
  * Anything else is refused, naming what to give. No mass is ever negative: a target that the free
@@ -102,7 +102,7 @@ function addedToOnHand(problem: BlendProblem, index: number): Decimal {
   const added = problem.components[index];
   const onHand = onHandTotals(problem);
   if (problem.fixed.size === 1) {
-    // Two components, one on hand: the fixed-amount rule of P-3 as it always was.
+    // Two components, one on hand: the fixed-amount rule of the fat balance as it always was.
     const [[fixedIndex, fixedGrams]] = [...problem.fixed.entries()];
     const fixedFat = problem.components[fixedIndex].fat;
     if (!isReachable(fixedFat, added.fat, target)) {

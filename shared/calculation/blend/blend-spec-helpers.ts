@@ -4,7 +4,10 @@ import type { BlendFormula } from '../../formula/formula-types.ts';
 import { BatchError } from '../batch-error.ts';
 import type { CalcResult } from '../calc-result.ts';
 
-/** WE-25's trims: lean 90/10 (10 % fat) and 50/50 (50 % fat), 20 % fat wanted. */
+/**
+ * The own Pearson-square example: lean 90/10 (10 % fat) and 50/50 (50 % fat) trims, 20 % fat
+ * wanted.
+ */
 export function we25(extra: Partial<BlendFormula> = {}): BlendFormula {
   return {
     formula: 1,

@@ -6,7 +6,8 @@ import { figure, we25 } from './blend-spec-helpers.ts';
 
 describe('calculateBlend, fat standards', () => {
   it('should fail the ground-beef standard at 32 % fat without refusing the batch', () => {
-    // source: check-values S-5 (9 CFR 319.15(a), ≤ 30 % fat). Own blend, derived: 20 % and
+    // source: 9 CFR 319.15(a), ≤ 30 % fat (read in training material quoting it). Own blend,
+    // derived: 20 % and
     // 50 % trims at 32 %: parts 18 and 12, 60 % and 40 %; fat 0.6 × 20 + 0.4 × 50 = 32 %.
     const formula = we25({
       standard: 'ground-beef',
@@ -26,7 +27,7 @@ describe('calculateBlend, fat standards', () => {
   });
 
   it('should pass the ground-beef standard at exactly 30 % fat', () => {
-    // source: check-values S-5: "≤ 30 %" includes 30
+    // source: 9 CFR 319.15(a): "≤ 30 %" includes 30
     const result = calculateBlend(we25({ standard: 'ground-beef' }), {
       total: dec('1000'),
       targetFat: dec('30'),
@@ -35,7 +36,7 @@ describe('calculateBlend, fat standards', () => {
   });
 
   it('should check fresh pork sausage against 50 % fat', () => {
-    // source: check-values S-6 (9 CFR 319.141, ≤ 50 % fat)
+    // source: 9 CFR 319.141, ≤ 50 % fat (as stated in The National Provisioner)
     const formula = we25({
       species: 'pork',
       standard: 'fresh-pork-sausage',
@@ -58,7 +59,7 @@ describe('calculateBlend, fat standards', () => {
 
 describe('calculateBlend, portions', () => {
   it('should cut 176 quarter-pound portions from 20 kg with 41.93572 g over', () => {
-    // source: check-values U-7 (453.59237 / 4 = 113.3980925 g, from NIST SP 811); own
+    // source: NIST SP 811 (2008), App. B.8, derived: 453.59237 / 4 = 113.3980925 g; own
     // arithmetic: 176 × 113.3980925 = 19958.06428 g; 20000 − 19958.06428 = 41.93572 g.
     const result = calculateBlend(we25({ portion: '4 oz' }), { total: dec('20000') });
     assert.ok(result.portions?.pieceGrams.equals(dec('113.3980925')));
@@ -76,7 +77,8 @@ describe('calculateBlend, portions', () => {
   });
 
   it('should give the cooked portion at the cook yield', () => {
-    // source: U-7 portion and WE-29's 72 % cook yield; 113.3980925 × 0.72 = 81.6466266 g
+    // derived: the quarter pound (NIST SP 811) at an own 72 % cook yield (cooked ÷ raw, USDA Table
+    // of Cooking Yields); 113.3980925 × 0.72 = 81.6466266 g
     const result = calculateBlend(we25({ portion: '0.25 lb', yields: { cook: 72 } }), {
       total: dec('20000'),
     });

@@ -6,7 +6,7 @@ import { batchError, grams, we25 } from './blend-spec-helpers.ts';
 
 describe('calculateBlend, refusals', () => {
   it('should refuse 20 % fat from trimmings at 15 % and 18 % fat', () => {
-    // source: check-values P-2 (DERIVED): the target must lie between the component fats
+    // derived (a blend is a weighted mean): the target must lie between the component fats
     const formula = we25({
       components: [
         { key: 'a', name: 'chuck trim', fat: 18 },

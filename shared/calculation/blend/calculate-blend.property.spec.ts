@@ -106,8 +106,8 @@ describe('calculateBlend, properties', () => {
   });
 
   it('should balance mass exactly and fat to the target for three to five components', () => {
-    // source: check-values P-3 (DERIVED): Σ m = total and Σ m·fat = target × total. The blend is
-    // built from known amounts, all but two are given as on hand, and the solver must find the
+    // derived, the mass and fat balances: Σ m = total and Σ m·fat = target × total. The blend
+    // is built from known amounts, all but two are given as on hand, and the solver must find the
     // other two again, none negative.
     fc.assert(
       fc.property(blendOfMany, ({ fats, amounts, free }) => {

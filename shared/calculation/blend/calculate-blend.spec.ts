@@ -7,7 +7,9 @@ import { figure, grams, we25 } from './blend-spec-helpers.ts';
 
 describe('calculateBlend, sizes', () => {
   it('should blend 100 kg at 20 % fat from 75 kg of 10 % and 25 kg of 50 % trim', () => {
-    // source: check-values WE-25 (P-1): lean = 100 × 30/40 = 75.000 kg, 50/50 = 25.000 kg;
+    // own worked example of the Pearson square ("Meat Calculations" training presentation for
+    // meat-evaluation contests, issuer not identified): lean = 100 × 30/40 = 75.000 kg, 50/50 =
+    // 25.000 kg;
     // check 7.5 + 12.5 = 20.0 kg fat = 20 %.
     const result = calculateBlend(we25(), { total: dec('100000') });
     const meat = result.groups[0];
@@ -43,7 +45,7 @@ describe('calculateBlend, sizes', () => {
   });
 
   it('should read chemical lean as 100 minus fat (CL 90 is 10 % fat)', () => {
-    // source: WE-25 again, with the lean trim given as CL 90 and the target as CL 80
+    // the same own Pearson example, with the lean trim given as CL 90 and the target as CL 80
     const formula = we25({
       components: [
         { key: 'lean', name: 'lean trim', lean: 90 },
@@ -65,8 +67,9 @@ describe('calculateBlend, sizes', () => {
   });
 
   it('should work back from 50 kg cooked at a 72 % cook yield to 69.444 kg raw', () => {
-    // source: check-values WE-29 (P-5; USDA ARS Table of Cooking Yields): 50 / 0.72 = 69.444 kg,
-    // split by WE-25: 75 % = 52.083 kg, 25 % = 17.361 kg.
+    // own worked example, cooking yield = cooked ÷ raw (USDA ARS Table of Cooking Yields):
+    // 50 / 0.72 = 69.444 kg, split as the own Pearson example: 75 % = 52.083 kg, 25 % =
+    // 17.361 kg.
     const result = calculateBlend(we25({ yields: { cook: 72 } }), { want: dec('50000') });
     assert.equal(figure(result, 'Total batch weight').toFixed(3), '69444.444');
     assert.deepEqual(grams(result, 'Meat'), ['52083.333', '17361.111']);
@@ -81,7 +84,7 @@ describe('calculateBlend, sizes', () => {
   });
 
   it('should count seasoning into the cooked weight but not into the trim', () => {
-    // own example, derived: 50 kg cooked at 72 % → 69.444444 kg raw batch (WE-29); seasoning
+    // own example, derived: 50 kg cooked at 72 % → 69.444444 kg raw batch; seasoning
     // 2 % of the meat → meat = 69.444444 / 1.02 = 68.082789 kg; buy 68.082789 / 0.80 =
     // 85.103486 kg before trim; seasoning 1.361656 kg; cooked (meat + seasoning) × 0.72 = 50 kg.
     const formula = we25({

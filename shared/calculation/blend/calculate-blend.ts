@@ -74,8 +74,8 @@ function blendCautions(formula: BlendFormula, allergens: readonly Allergen[]): C
 
 /**
  * Works out a batch of a meat blend of two to five components at a target fat (two balances,
- * check-values P-3; the Pearson square P-1 for two; P-2), with its seasoning, loss, portions,
- * yields, fat-standard checks and cautions.
+ * derived; the Pearson square for two; reachable only between the fats), with its seasoning,
+ * loss, portions, yields, fat-standard checks and cautions.
  *
  * The batch is sized by `total` (raw meat weight) or `want` (finished weight, worked back through
  * the yields and loss), by `onHand` (components fixed by what is on hand), or by both

@@ -43,7 +43,7 @@ describe('checkBlendFormula', () => {
   });
 
   it('should report a target outside the two components at the target', () => {
-    // source: check-values P-2 (DERIVED)
+    // derived (a blend is a weighted mean): the target must lie between the component fats
     const formula = blend({
       components: [
         { key: 'a', name: 'chuck trim', fat: 15 },
@@ -105,7 +105,7 @@ describe('checkBlendFormula', () => {
   });
 
   it('should warn when the target is over the standard the formula names', () => {
-    // source: check-values S-5 (9 CFR 319.15(a), ≤ 30 % fat)
+    // source: 9 CFR 319.15(a), ≤ 30 % fat (read in training material quoting it)
     const [problem] = checkBlendFormula(blend({ standard: 'ground-beef', target: { fat: 32 } }));
     assert.deepEqual(problem.path, ['target']);
     assert.equal(problem.severity, 'warning');
@@ -113,7 +113,7 @@ describe('checkBlendFormula', () => {
   });
 
   it('should accept three trimmings whose fats reach the target between them', () => {
-    // source: check-values P-2, P-3 (DERIVED): the target must lie between the lowest and highest
+    // derived from the fat balance: the target must lie between the lowest and highest
     // component fat; 20 % lies between 10 % and 50 %.
     const formula = blend({
       components: [
@@ -126,7 +126,7 @@ describe('checkBlendFormula', () => {
   });
 
   it('should report a target outside every trimming of three, and a third key used twice', () => {
-    // source: check-values P-2 (DERIVED): 60 % is above the fattest of 10, 30 and 50 %
+    // derived (a blend is a weighted mean): 60 % is above the fattest of 10, 30 and 50 %
     const formula = blend({
       target: { fat: 60 },
       components: [

@@ -44,10 +44,10 @@ function checkPortion(portion: string, problems: ContentProblem[]): void {
 
 /**
  * Checks what the schema cannot about a blend formula: the component keys are unique, the
- * target lies between the leanest and fattest components (check-values P-2), the portion is a mass over
- * 0 g, and the seasoning names are unique (ignoring case). Warns when the target is over the
- * fat standard the formula names, or a component is fat added as such where the standard forbids
- * it (ground beef, 9 CFR 319.15(a)).
+ * target lies between the leanest and fattest components (derived: a blend is a weighted mean),
+ * the portion is a mass over 0 g, and the seasoning names are unique (ignoring case). Warns when
+ * the target is over the fat standard the formula names, or a component is fat added as such
+ * where the standard forbids it (ground beef, 9 CFR 319.15(a)).
  * @returns the problems found; none when the formula can be used
  */
 export function checkBlendFormula(formula: BlendFormula): ContentProblem[] {
@@ -68,7 +68,7 @@ export function checkBlendFormula(formula: BlendFormula): ContentProblem[] {
     if (fat) fats.push(fat);
   });
   const target = fatOrProblem(formula.target, ['target'], problems);
-  // The blend's fat lies between its leanest and fattest component, whatever the amounts (P-2).
+  // The blend's fat lies between its leanest and fattest component, whatever the amounts.
   if (target && fats.length === formula.components.length) {
     const low = Decimal.min(...fats);
     const high = Decimal.max(...fats);

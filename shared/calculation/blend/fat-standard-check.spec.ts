@@ -6,19 +6,19 @@ import { fatStandardCheck } from './fat-standard-check.ts';
 
 describe('FAT_STANDARDS', () => {
   it('should cap ground beef at 30 % fat', () => {
-    // source: check-values S-5, 9 CFR 319.15(a) (USDA FSIS), REG (secondary)
+    // source: 9 CFR 319.15(a) (USDA FSIS), read in training material quoting it
     assert.ok(FAT_STANDARDS['ground-beef'].maxFatPercent.equals(dec('30')));
   });
 
   it('should cap fresh pork sausage at 50 % fat', () => {
-    // source: check-values S-6, 9 CFR 319.141 (USDA FSIS), REG (secondary)
+    // source: 9 CFR 319.141 (USDA FSIS), as stated in The National Provisioner trade magazine
     assert.ok(FAT_STANDARDS['fresh-pork-sausage'].maxFatPercent.equals(dec('50')));
   });
 });
 
 describe('fatStandardCheck', () => {
   it('should fail 32 % fat as ground beef, as a labelling check that is not critical', () => {
-    // source: check-values S-5
+    // source: 9 CFR 319.15(a), at most 30 % fat
     const check = fatStandardCheck('ground-beef', dec('32'));
     assert.equal(check.id, 'fat-standard-ground-beef');
     assert.equal(check.status, 'fail');
@@ -28,7 +28,7 @@ describe('fatStandardCheck', () => {
   });
 
   it('should pass fat at the limit and under it', () => {
-    // source: check-values S-5 and S-6 ("≤")
+    // source: 9 CFR 319.15(a) and 319.141 ("at most")
     assert.equal(fatStandardCheck('ground-beef', dec('30')).status, 'pass');
     assert.equal(fatStandardCheck('ground-beef', dec('29.999')).status, 'pass');
     assert.equal(fatStandardCheck('fresh-pork-sausage', dec('50')).status, 'pass');

@@ -10,7 +10,8 @@ import { we25 } from './blend-spec-helpers.ts';
 
 // source (every test here): 9 CFR 319.15(a) "Chopped beef, ground beef": beef "without the
 // addition of beef fat as such", at most 30 % fat; 319.15(b) "Hamburger": beef "with or without
-// the addition of beef fat as such", at most 30 % fat. check-values S-5 for the 30 %.
+// the addition of beef fat as such", at most 30 % fat (read in training material quoting the
+// rule; re-check against eCFR).
 
 /** Lean 90/10 trim and loose beef fat (90 % fat, added as such), 20 % fat wanted. */
 function withLooseFat(extra: Partial<BlendFormula> = {}): BlendFormula {

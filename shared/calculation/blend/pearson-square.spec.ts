@@ -5,15 +5,16 @@ import { blendFatPercent, isReachable, partnerForFixed, pearsonSquare } from './
 
 describe('pearsonSquare', () => {
   it('should split 100 kg at 20 % fat into 75 kg of 10 % trim and 25 kg of 50 % trim', () => {
-    // source: check-values WE-25 (P-1, own example): parts lean = 50 − 20 = 30, parts fat trim =
-    // 20 − 10 = 10; lean = 100 × 30/40 = 75.000 kg, 50/50 = 25.000 kg.
+    // own worked example of the Pearson square as in meat-evaluation training material (issuer
+    // not identified): parts lean = 50 − 20 = 30, parts fat trim = 20 − 10 = 10;
+    // lean = 100 × 30/40 = 75.000 kg, 50/50 = 25.000 kg.
     const { first, second } = pearsonSquare(dec('10'), dec('50'), dec('20'), dec('100000'));
     assert.ok(first.equals(dec('75000')));
     assert.ok(second.equals(dec('25000')));
   });
 
   it('should give a blend whose fat, computed back, is 20 kg in 100 kg', () => {
-    // source: check-values WE-25: 7.5 + 12.5 = 20.0 kg fat = 20 %
+    // own worked example, checked back: 7.5 + 12.5 = 20.0 kg fat = 20 %
     const { first, second } = pearsonSquare(dec('10'), dec('50'), dec('20'), dec('100000'));
     assert.ok(first.times('0.10').plus(second.times('0.50')).equals(dec('20000')));
     const fat = blendFatPercent([
@@ -24,7 +25,7 @@ describe('pearsonSquare', () => {
   });
 
   it('should not depend on which component is the leaner one', () => {
-    // source: check-values WE-25, components swapped
+    // the same own example, components swapped
     const { first, second } = pearsonSquare(dec('50'), dec('10'), dec('20'), dec('100000'));
     assert.ok(first.equals(dec('25000')));
     assert.ok(second.equals(dec('75000')));
@@ -51,7 +52,7 @@ describe('pearsonSquare', () => {
   });
 
   it('should refuse a target outside the two fats', () => {
-    // source: check-values P-2 (DERIVED)
+    // derived: a blend's fat is a weighted mean, so it lies between the two
     assert.throws(() => pearsonSquare(dec('15'), dec('18'), dec('20'), dec('1000')), RangeError);
     assert.throws(() => pearsonSquare(dec('15'), dec('15'), dec('20'), dec('1000')), RangeError);
   });
@@ -59,7 +60,7 @@ describe('pearsonSquare', () => {
 
 describe('isReachable', () => {
   it('should accept a target between the fats, both ends included', () => {
-    // source: check-values P-2 (DERIVED)
+    // derived: a blend's fat is a weighted mean, so it lies between the two
     assert.equal(isReachable(dec('10'), dec('50'), dec('20')), true);
     assert.equal(isReachable(dec('50'), dec('10'), dec('10')), true);
     assert.equal(isReachable(dec('10'), dec('50'), dec('50')), true);
@@ -67,7 +68,7 @@ describe('isReachable', () => {
   });
 
   it('should refuse a target outside the fats', () => {
-    // source: check-values P-2 (DERIVED)
+    // derived: a blend's fat is a weighted mean, so it lies between the two
     assert.equal(isReachable(dec('15'), dec('18'), dec('20')), false);
     assert.equal(isReachable(dec('15'), dec('18'), dec('14.9')), false);
     assert.equal(isReachable(dec('15'), dec('15'), dec('20')), false);
@@ -76,7 +77,7 @@ describe('isReachable', () => {
 
 describe('partnerForFixed', () => {
   it('should add 4 kg of 50 % trim to 12 kg of 10 % trim on hand for 20 % fat', () => {
-    // own example, derived from WE-25's trims (check-values P-3): fat balance
+    // own example, derived from the fat balance on the own Pearson example's trims:
     // 12 × 0.10 + X × 0.50 = (12 + X) × 0.20 → X = 12 × (10 − 20) ÷ (20 − 50) = 12 × 10/30 = 4 kg;
     // total 16 kg; check 1.2 + 2.0 = 3.2 kg fat = 20 % of 16 kg.
     const added = partnerForFixed(dec('10'), dec('50'), dec('20'), dec('12000'));

@@ -9,7 +9,7 @@ export interface TwoAmounts {
 /**
  * Whether a target fat lies between the two component fats, both ends included: only then can
  * the two make it.
- * source: check-values P-2 (DERIVED)
+ * derived: a blend's fat is the mass-weighted mean of its components' fats
  */
 export function isReachable(fatA: Decimal, fatB: Decimal, target: Decimal): boolean {
   const low = Decimal.min(fatA, fatB);
@@ -23,8 +23,8 @@ export function isReachable(fatA: Decimal, fatB: Decimal, target: Decimal): bool
  * (parts_A + parts_B). B is the rest of the batch, so the two always add up to it exactly.
  * When both fats equal the target the batch is all of the first component. The first mass is
  * kept to the decimal places the batch weight can carry (1e-39 of it), so both add up exactly.
- * source: check-values P-1 ("Meat Calculations" training presentation for meat-evaluation
- * contests, https://slideplayer.com./slide/7660647, TRADE / EXT)
+ * source: "Meat Calculations" training presentation for meat-evaluation contests (issuer not
+ * identified), https://slideplayer.com./slide/7660647
  * @param fatA fat % of the first component
  * @param fatB fat % of the second component
  * @param target fat % the blend must have
@@ -58,7 +58,7 @@ export function pearsonSquare(
  * target fat. From fat balance W·f_fixed + X·f_other = (W + X)·t:
  * X = W × (f_fixed − t) ÷ (t − f_other).
  * When the fixed component is already at the target, none of the other is needed.
- * source: check-values P-3 (general linear blend with a fixed amount, DERIVED)
+ * derived: the mass and fat balances of a linear blend, with a fixed amount
  * @param fixedFat fat % of the component on hand
  * @param otherFat fat % of the component to add
  * @param target fat % the blend must have

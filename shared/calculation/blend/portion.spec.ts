@@ -6,13 +6,13 @@ import { portionsOf } from './portion.ts';
 
 describe('portionsOf', () => {
   it('should weigh a quarter-pound portion at exactly 113.3980925 g', () => {
-    // source: check-values U-7 (DERIVED from U-1, NIST SP 811 (2008) App. B.8): 453.59237 / 4
+    // derived from the pound of NIST SP 811 (2008), App. B.8: 453.59237 / 4
     assert.ok(GRAMS_PER_POUND.div(4).equals(dec('113.3980925')));
     assert.ok(parseMass('4 oz').equals(dec('113.3980925')));
   });
 
   it('should cut 176 quarter-pound portions from 20 kg with 41.93572 g left over', () => {
-    // source: check-values U-7 for the portion; own arithmetic, derived:
+    // the portion: 453.59237 / 4 (NIST SP 811); own arithmetic, derived:
     // 20000 ÷ 113.3980925 = 176.37…; 176 × 113.3980925 = 19958.06428 g; 20000 − 19958.06428 =
     // 41.93572 g.
     const portions = portionsOf(dec('20000'), dec('113.3980925'));

@@ -13,23 +13,25 @@ import { leanDough } from './dough-fixtures.ts';
 
 describe("baker's percentages", () => {
   it('should add up the total formula percentage', () => {
-    // source: course worksheet, pieces × piece weight (issuing school not identified; WE-14)
+    // source: course worksheet, pieces × piece weight (issuing school not identified)
     assert.equal(totalFormulaPercent(leanDough().ingredients).toString(), '170');
   });
 
   it('should find 794.70 g of flour in 3000 g of a 377.5 % formula', () => {
-    // source: Professional Cooking, converting a formula to a new yield (WE-13)
+    // source: Professional Cooking (culinary textbook), "Procedure for converting a formula to a
+    // new yield"
     assert.equal(flourForDough(dec(3000), dec('377.5')).toFixed(2), '794.70');
   });
 
   it('should find 25.43 oz of flour in 96 oz of a 377.5 % formula', () => {
-    // source: Professional Cooking, converting a formula to a new yield (WE-13)
+    // source: Professional Cooking (culinary textbook), "Procedure for converting a formula to a
+    // new yield"
     const flour = flourForDough(parseMass('96 oz'), dec('377.5'));
     assert.equal(gramsToOunces(flour).toFixed(2), '25.43');
   });
 
   it('should work out flour and every ingredient for 73 pieces of 390 g before rounding', () => {
-    // source: course worksheet, pieces × piece weight (issuing school not identified; WE-14)
+    // source: course worksheet, pieces × piece weight (issuing school not identified)
     const dough = dec(73).times(390);
     assert.equal(dough.toString(), '28470');
     const flour = flourForDough(dough, dec(170));

@@ -19,7 +19,7 @@ import {
 
 describe('calculating a dough batch', () => {
   it('should weigh 73 pieces of 390 g of a 170 % dough to the worksheet figures', () => {
-    // source: course worksheet, pieces × piece weight (issuing school not identified; WE-14)
+    // source: course worksheet, pieces × piece weight (issuing school not identified)
     const result = calculateDough(leanDough(), { pieces: 73, piece: dec(390) });
     assert.equal(result.groups.length, 1);
     const [dough] = result.groups;
@@ -41,7 +41,7 @@ describe('calculating a dough batch', () => {
   });
 
   it('should weigh 48 buns of 80 g with no loss to the worked example', () => {
-    // own example, derived (WE-16, no loss)
+    // own example, derived: the bun formula (182.8 %) by baker's percent, no loss
     const [dough] = calculateDough(bunDough(), { pieces: 48, piece: dec(80) }).groups;
     assert.deepEqual(grams(dough, 3), {
       'Bread flour': '2100.656',
@@ -57,7 +57,8 @@ describe('calculating a dough batch', () => {
   });
 
   it('should weigh 48 buns of 80 g with 2 % loss, divide convention, to the worked example', () => {
-    // own example, derived (WE-16, 2 % loss, divide by 0.98)
+    // own example, derived: the bun formula, 2 % loss divided out as in "Bread Formula
+    // Construction" (2011): ÷ 0.98
     const result = calculateDough(bunDough(), { pieces: 48, piece: dec(80), loss: dec(2) });
     const [dough] = result.groups;
     assert.deepEqual(grams(dough, 3), {
@@ -163,7 +164,8 @@ describe('calculating a dough with a preferment', () => {
   });
 
   it('should convert the yeast in every group when asked', () => {
-    // source: professional bread-baking text, "Yeast conversions: fresh to dry" (D-9): instant = 0.33 × fresh
+    // source: professional bread-baking text, "Yeast conversions: fresh to dry" (title and
+    // edition not confirmed): instant = 0.33 × fresh
     const result = calculateDough(poolishDough(), { flour: dec(1000), yeast: 'instant' });
     const [preferment, final, overall] = result.groups;
     const yeast = (group: LineGroup) => group.lines.find((line) => line.name === 'Instant yeast');
@@ -187,7 +189,7 @@ describe('calculating a dough with a preferment', () => {
   });
 
   it('should convert with the common set when asked to', () => {
-    // common practice, no source (D-10): active dry = 0.5 × fresh
+    // common practice, no source: active dry = 0.5 × fresh
     const result = calculateDough(
       leanDough(),
       { flour: dec(1000), yeast: 'active-dry' },

@@ -17,7 +17,7 @@ import { convertYeastLine, yeastLabel } from './yeast.ts';
 
 /** Options of a dough calculation that are not batch inputs. */
 export interface DoughOptions {
-  /** Yeast conversion factors; the published set (check-values D-9) unless given. */
+  /** Yeast conversion factors; the published set (`PUBLISHED_YEAST_FACTORS`) unless given. */
   readonly yeastFactors?: YeastFactors;
 }
 

@@ -21,7 +21,7 @@ export function doughFormula(
 
 /**
  * Lean bread, flour 100, water 67, salt 2, yeast 1 = 170 %.
- * source: course worksheet, pieces × piece weight (issuing school not identified; check-values WE-14)
+ * source: course worksheet, pieces × piece weight (issuing school not identified)
  */
 export function leanDough(
   extra: Partial<Omit<DoughFormula, 'ingredients' | 'kind'>> = {},
@@ -39,7 +39,8 @@ export function leanDough(
 
 /**
  * Enriched buns, 182.8 %: bread flour 100, whole milk 50, whole egg 10, butter 10, honey 5,
- * water 5, instant yeast 1, salt 1.8. own example, derived (check-values WE-16)
+ * water 5, instant yeast 1, salt 1.8. own example, derived (baker's percent as in the Bread
+ * Bakers Guild of America formula layout standards, 2009)
  */
 export function bunDough(
   extra: Partial<Omit<DoughFormula, 'ingredients' | 'kind'>> = {},

@@ -59,8 +59,8 @@ function temperature(label: string, value: Decimal, note: string): Figure {
 /**
  * Shares the liquid temperature out among the liquids of the dough mixed now: milk, egg and the
  * other liquids are brought to it (no colder than 0 °C); the plain water takes what is left, as
- * tap water and ice (check-values D-12) when the tap is too warm. When even all the water as ice
- * cannot do it, says so and leaves the water lines as they are.
+ * tap water and ice (a heat balance, see `iceFraction`) when the tap is too warm. When even all
+ * the water as ice cannot do it, says so and leaves the water lines as they are.
  * @param lines the lines weighed at the mixer (the final dough with a preferment)
  * @param liquidC the liquid temperature the rule gives, °C
  * @param rule the rule in words, for the note

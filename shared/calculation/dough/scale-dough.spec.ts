@@ -7,19 +7,21 @@ import { doughForPieces, portionsOf, scaleDough } from './scale-dough.ts';
 
 describe('scaling a dough batch', () => {
   it('should divide by (1 − loss) for 500 lb of bread at 13 % loss', () => {
-    // source: "Bread Formula Construction", baking-science education series part 3 (2011) (WE-15)
+    // source: "Bread Formula Construction", baking-science education series part 3 (2011)
     assert.equal(doughForPieces(1, dec(500), dec(13)).toFixed(2), '574.71');
   });
 
   it('should not use the multiply convention', () => {
-    // source: BBGA formula guide's "waste factor", as described in secondary discussion (WE-15, D-5)
+    // source: BBGA formula guide's "waste factor", as described in secondary discussion of the
+    // guide (multiply by 1 + waste; the guide fixes no number)
     assert.notEqual(doughForPieces(1, dec(500), dec(13)).toFixed(2), '565.00');
-    // own example, derived (WE-16): 48 × 80 g × 1.02 = 3916.800 would be the multiply convention
+    // own example, derived (the bun): 48 × 80 g × 1.02 = 3916.800 would be the multiply
+    // convention
     assert.notEqual(doughForPieces(48, dec(80), dec(2)).toFixed(3), '3916.800');
   });
 
   it('should make 3918.367 g of dough and 2143.527 g of flour for 48 buns of 80 g with 2 % loss', () => {
-    // own example, derived (WE-16)
+    // own example, derived: the bun formula (182.8 %), 2 % loss divided out
     const scale = scaleDough(bunDough(), { pieces: 48, piece: dec(80), loss: dec(2) });
     assert.equal(scale.mode, 'pieces');
     assert.equal(scale.doughGrams.toFixed(3), '3918.367');
@@ -27,7 +29,7 @@ describe('scaling a dough batch', () => {
   });
 
   it('should make 3840 g of dough and 2100.656 g of flour for 48 buns of 80 g without loss', () => {
-    // own example, derived (WE-16)
+    // own example, derived: the bun formula (182.8 %), flour = dough ÷ 1.828
     const scale = scaleDough(bunDough(), { pieces: 48, piece: dec(80) });
     assert.equal(scale.doughGrams.toString(), '3840');
     assert.equal(scale.flourGrams.toFixed(3), '2100.656');
@@ -42,7 +44,8 @@ describe('scaling a dough batch', () => {
 
   it('should say in its own words that the loss is taken out of the mixed dough', () => {
     // The convention is the one in "Bread Formula Construction", baking-science education series
-    // part 3 (2011) (check-values D-4, WE-15): the sheet explains it without the handbook's title.
+    // part 3 (2011), ingredients = bread ÷ (1 − loss): the sheet explains it without the
+    // handbook's title.
     const scale = scaleDough(bunDough(), { pieces: 48, piece: dec(80), loss: dec(2) });
     const note = scale.inputs[2].note ?? '';
     assert.match(note, /loss taken out of the mixed dough/);
@@ -70,7 +73,7 @@ describe('scaling a dough batch', () => {
   });
 
   it('should give the loss allowance as the remainder after dividing', () => {
-    // own example, derived (WE-16)
+    // own example, derived: the bun formula, 2 % loss divided out
     const scale = scaleDough(bunDough(), { pieces: 48, piece: dec(80), loss: dec(2) });
     const portions = portionsOf(scale, scale.doughGrams);
     assert.equal(portions?.count, 48);

@@ -21,7 +21,8 @@ describe('dough temperature in a batch', () => {
   };
 
   it('should work out 30.556 °C water from a formula DDT of 75 °F and friction of 8 °F', () => {
-    // source: San Francisco Baking Institute, Artisan I workshop reference material (2009) (WE-19, D-8)
+    // source: San Francisco Baking Institute, Artisan I workshop reference material (2009); in °C
+    // the friction factor, a difference, takes only the 5/9 factor (derived)
     const result = calculateDough(
       leanDough({ ddt: { target: '75 °F', friction: '8 °F' } }),
       fahrenheitBatch,
@@ -39,7 +40,8 @@ describe('dough temperature in a batch', () => {
   });
 
   it('should count the preferment temperature with a preferment and need 70 °F water', () => {
-    // own example, derived (WE-19): 4 × 76 − (72 + 70 + 68 + 24) = 70 °F
+    // own example, derived (the San Francisco Baking Institute rule with a preferment):
+    // 4 × 76 − (72 + 70 + 68 + 24) = 70 °F
     const formula = { ...poolishDough(), ddt: { target: '76 °F', friction: '24 °F' } };
     const result = calculateDough(formula, {
       flour: dec(1000),
@@ -75,8 +77,9 @@ describe('dough temperature in a batch', () => {
   });
 
   it('should replace part of the water with ice when the tap is too warm', () => {
-    // own example, derived from check-values D-12: water 3 × 24 − (26 + 26) − 14 = 6 °C,
-    // tap 20 °C → ice = (20 − 6) / (20 + 79.7) of the water
+    // own example, derived from the ice heat balance (see `iceFraction`): water
+    // 3 × 24 − (26 + 26) − 14 = 6 °C, tap 20 °C → ice = (20 − 6) / (20 + 79.7) of the
+    // water
     const result = calculateDough(leanDough(), {
       flour: dec(1000),
       ddt: dec(24),
@@ -145,14 +148,15 @@ describe('dough temperature in a batch', () => {
 
 describe('every liquid tempered, ice only from the water', () => {
   // The rule's "water" is the liquid that goes in: milk and egg count as it does.
-  // source: D-6 (San Francisco Baking Institute, Artisan I workshop reference material, 2009);
+  // source: San Francisco Baking Institute, Artisan I workshop reference material (2009);
   // text read: "Dough Temperature", starreveld.com/Baking/Dough_Temperature.html ("water/liquids
-  // used … (milk, or other liquids)"). Bun: check-values WE-16, 1000 g flour → water 50 g,
+  // used … (milk, or other liquids)"). Bun: own example formula, 1000 g flour → water 50 g,
   // milk 500 g, egg 100 g.
   const warmKitchen = { flour: dec(1000), ddt: dec(24), flourTemp: dec(26), friction: dec(14) };
 
   it('should bring the milk and egg to the liquid temperature and ice only the water', () => {
-    // own example, derived (D-6, D-12): 3 × 24 − (26 + 26) − 14 = 6 °C; ice = 50 × 14 / 99.7 g
+    // own example, derived (the San Francisco Baking Institute rule and the ice heat balance):
+    // 3 × 24 − (26 + 26) − 14 = 6 °C; ice = 50 × 14 / 99.7 g
     const result = calculateDough(bunDough(), { ...warmKitchen, room: dec(26), tap: dec(20) });
     assert.equal(value(result, 'Liquid temperature').toString(), '6');
     assert.equal(value(result, 'Bring Whole milk and Whole egg to').toString(), '6');
@@ -178,7 +182,7 @@ describe('every liquid tempered, ice only from the water', () => {
   });
 
   it('should make the water colder to make up for milk and egg that cannot go below freezing', () => {
-    // own example, derived from the D-12 heat balance: 3 × 24 − (34 + 26) − 14 = −2 °C;
+    // own example, derived from the ice heat balance: 3 × 24 − (34 + 26) − 14 = −2 °C;
     // milk and egg at 0 °C; ice = (water × tap + others × 0 − all liquid × liquid T) ÷ (tap + 79.7)
     // = (50 × 20 + 650 × 2) ÷ 99.7 = 23.069 g of the 50 g of water
     const result = calculateDough(bunDough(), { ...warmKitchen, room: dec(34), tap: dec(20) });

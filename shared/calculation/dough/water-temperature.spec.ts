@@ -15,7 +15,7 @@ import {
 
 describe('water temperature for a desired dough temperature', () => {
   it('should need 87 °F water for DDT 75 °F, room and flour 65 °F, friction 8', () => {
-    // source: San Francisco Baking Institute, Artisan I workshop reference material (2009) (WE-19)
+    // source: San Francisco Baking Institute, Artisan I workshop reference material (2009)
     const water = waterTemperature({
       ddt: dec(75),
       room: dec(65),
@@ -26,7 +26,7 @@ describe('water temperature for a desired dough temperature', () => {
   });
 
   it('should need 65 °F water for DDT 80 °F, flour 65 °F, room 75 °F, friction 35', () => {
-    // source: Pizza Today trade magazine, June 2018 (WE-19)
+    // source: Pizza Today trade magazine, June 2018
     const water = waterTemperature({
       ddt: dec(80),
       room: dec(75),
@@ -37,7 +37,8 @@ describe('water temperature for a desired dough temperature', () => {
   });
 
   it('should count four temperatures with a preferment and need 70 °F water', () => {
-    // own example, derived (WE-19)
+    // own example, derived (the San Francisco Baking Institute rule with a preferment):
+    // 4 × 76 − (72 + 70 + 68 + 24)
     const water = waterTemperature({
       ddt: dec(76),
       room: dec(72),
@@ -50,7 +51,7 @@ describe('water temperature for a desired dough temperature', () => {
 
   it('should need 30.556 °C water in Celsius when the friction factor is scaled by 5/9', () => {
     // source: San Francisco Baking Institute, Artisan I workshop reference material (2009),
-    // converted to °C as in check-values D-8 (WE-19)
+    // converted to °C (NIST SP 811), the friction factor, a difference, by 5/9 only (derived)
     const water = waterTemperature({
       ddt: parseTemperature('75 °F'),
       room: parseTemperature('65 °F'),
@@ -62,7 +63,7 @@ describe('water temperature for a desired dough temperature', () => {
   });
 
   it('should not give the wrong 27.0 °C that an unscaled friction factor gives', () => {
-    // source: check-values WE-19 (D-8), the wrong answer when FF = 8 is used unscaled in °C
+    // derived from the same SFBI example: the wrong answer when FF = 8 is used unscaled in °C
     const right = waterTemperature({
       ddt: parseTemperature('75 °F'),
       room: parseTemperature('65 °F'),
@@ -80,7 +81,8 @@ describe('water temperature for a desired dough temperature', () => {
   });
 
   it('should find a friction factor of 38 from a trial mix', () => {
-    // own example, derived (WE-20, D-7)
+    // own example, derived: friction from a trial mix as in PMQ trade magazine, Spring 2003
+    // dough Q&A column: 3 × 80 − (72 + 70 + 60)
     assert.equal(
       frictionFromTrial({
         mixed: dec(80),
@@ -93,7 +95,7 @@ describe('water temperature for a desired dough temperature', () => {
   });
 
   it('should find the same friction factor from the trial mix in °C, as a difference', () => {
-    // own example, derived (WE-20): 38 °F of rise = 21.111 °C of rise
+    // own example, derived (the PMQ trial mix in °C): 38 °F of rise = 21.111 °C of rise
     const friction = frictionFromTrial({
       mixed: parseTemperature('80 °F'),
       room: parseTemperature('72 °F'),
@@ -107,12 +109,13 @@ describe('water temperature for a desired dough temperature', () => {
 
 describe('ice for cold dough water', () => {
   it('should use 79.7 for latent heat over specific heat', () => {
-    // from memory: 333.55 J/g ÷ 4.186 J/(g·K) (check-values D-12)
+    // from memory, unverified: latent heat of fusion of ice 333.55 J/g ÷ specific heat of water
+    // 4.186 J/(g·K)
     assert.equal(ICE_MELT_DEGREES_C.toString(), '79.7');
   });
 
   it('should replace 15.045 % of the water with ice for 5 °C water from a 20 °C tap', () => {
-    // own example, derived from check-values D-12: (20 − 5) / (20 + 79.7)
+    // own example, derived from the heat balance of melting ice: (20 − 5) / (20 + 79.7)
     const fraction = iceFraction(dec(20), dec(5));
     assert.equal(fraction.toFixed(5), '0.15045');
     assert.equal(fraction.toString(), dec(15).div('99.7').toString());

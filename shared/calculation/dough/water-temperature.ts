@@ -71,9 +71,10 @@ const SPECIFIC_HEAT_OF_WATER = new Decimal('4.186');
 
 /**
  * L/c rounded to 0.1 °C: how many degrees of water one gram of melting ice cools a gram of water
- * by, about 79.7 (often rounded to 80). Rounded as check-values D-12 states it, so that ice
- * figures match the published form.
- * from memory: 333.55 J/g ÷ 4.186 J/(g·K) = 79.68…
+ * by, about 79.7 (often rounded to 80). Rounded to 79.7 so that ice figures match the
+ * published form.
+ * from memory, unverified: latent heat of fusion of ice 333.55 J/g ÷ specific heat of water
+ * 4.186 J/(g·K) = 79.68…
  */
 export const ICE_MELT_DEGREES_C: Decimal =
   LATENT_HEAT_OF_FUSION.div(SPECIFIC_HEAT_OF_WATER).toDecimalPlaces(1);
@@ -107,7 +108,7 @@ export interface OtherLiquid {
  * the liquid temperature this is the liquid temperature itself. Counts every liquid's heat like
  * water's (milk's specific heat is about 3.9 J/(g·K), egg's lower: from memory), as the
  * rule counts the flour's.
- * Derived from the same heat balance as the ice share (check-values D-12).
+ * Derived from the same heat balance as the ice share (latent and specific heat, from memory).
  * @param liquidC the liquid temperature the rule gives, °C
  * @param waterGrams the plain water, more than 0 g
  */

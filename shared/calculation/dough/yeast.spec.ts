@@ -11,14 +11,15 @@ import { convertYeast, convertYeastLine } from './yeast.ts';
 
 describe('converting yeast', () => {
   it('should turn 30 g fresh yeast into 12.0 g active dry and 9.9 g instant by the published set', () => {
-    // source: professional bread-baking text, "Yeast conversions: fresh to dry" (WE-22, D-9)
+    // source: professional bread-baking text, "Yeast conversions: fresh to dry" (title and
+    // edition not confirmed)
     assert.equal(convertYeast(dec(30), 'fresh', 'active-dry').toFixed(1), '12.0');
     assert.equal(convertYeast(dec(30), 'fresh', 'instant').toFixed(1), '9.9');
     assert.equal(convertYeast(dec(30), 'fresh', 'instant').toString(), '9.9');
   });
 
   it('should turn 30 g fresh yeast into 15.0 g active dry and 10.0 g instant by the common set', () => {
-    // common practice, no source (WE-22, D-10)
+    // common practice, no source (quoted among pizza and bread bakers)
     assert.equal(
       convertYeast(dec(30), 'fresh', 'active-dry', COMMON_YEAST_FACTORS).toFixed(1),
       '15.0',

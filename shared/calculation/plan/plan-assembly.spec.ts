@@ -53,7 +53,8 @@ describe('planAssembly: 120 smokehouse burgers for 2026-12-18', () => {
     assert.deepEqual(grind.batch, { total: '27215.5422 g', start: '2026-12-18' });
     // Pearson square, 15 % and 50 % to 20 %: lean 30 parts, fat 5 parts of 35.
     // lean = 27 215.5422 × 30 ÷ 35 = 23 327.6076 g; fat = 27 215.5422 × 5 ÷ 35 = 3 887.9346 g.
-    // source: check-values P-1 (Pearson square)
+    // source: Pearson square, "Meat Calculations" training presentation for meat-evaluation
+    // contests (issuer not identified)
     assert.equal(line(grind.result, 'chuck trim 85/15 (15 % fat)').toString(), '23327.6076');
     assert.equal(line(grind.result, 'brisket fat trim 50/50 (50 % fat)').toString(), '3887.9346');
     assert.equal(grind.result.portions?.count, 240);
