@@ -11,15 +11,19 @@ import {
 import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
+import {
+  LIBRARY_SCHEMA_PATH,
+  starterFormula,
+} from '../../../../shared/formula/starters/starter-formula.ts';
 import type { FormulaKind, FormulaProblem } from '../formula-api-types';
 import { FormulaProblems } from '../formula-problems/formula-problems';
 import { problemsOf } from '../formula-problems/problems-of';
-import { starterYaml } from '../formula-starters';
 import { FormulaStore, messageOf } from '../formula-store';
 import { KINDS } from '../formula-vocabulary';
 
 /**
- * Starts a new formula from a small starter of the chosen kind; closes with the new formula's id.
+ * Starts a new formula from the starter of the chosen kind, the same text `larder new` writes;
+ * closes with the new formula's id.
  */
 @Component({
   selector: 'app-new-formula-dialog',
@@ -70,7 +74,12 @@ export class NewFormulaDialog {
     this.problems.set([]);
     try {
       // An assembly starts from formulas the library has (the list page has read it).
-      const yaml = starterYaml(kind, id, title.trim(), this.store.formulas() ?? []);
+      const yaml = starterFormula(kind, {
+        id,
+        title: title.trim(),
+        schemaPath: LIBRARY_SCHEMA_PATH,
+        library: this.store.formulas() ?? [],
+      });
       const outcome = await this.store.create(yaml, message.trim());
       this.dialog.close(outcome.id);
     } catch (error) {
