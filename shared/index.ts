@@ -28,6 +28,11 @@ export {
 } from './formula/yaml-limits.ts';
 export { parseYamlWithinLimits, type GuardedYaml } from './formula/parse-yaml.ts';
 export { checkLibrary, formulaLibrary, type LibraryFile } from './formula/check-library.ts';
+export {
+  starterFormula,
+  LIBRARY_SCHEMA_PATH,
+  type StarterOptions,
+} from './formula/starters/starter-formula.ts';
 export { FORMULA_SCHEMA } from './validation/formula-validator.ts';
 export type * from './calculation/calc-result.ts';
 export {

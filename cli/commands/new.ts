@@ -5,12 +5,12 @@ import { Command, Option } from 'commander';
 import {
   formatProblem,
   readFormula,
+  starterFormula,
   type CureMethod,
   type FormulaKind,
 } from '../../shared/index.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
-import { starterFormula } from '../starters/starters.ts';
 
 interface NewOptions {
   id?: string;

@@ -32,7 +32,7 @@ describe('larder new', () => {
     assertExit(calc, 0);
     const result = stdoutJson<PresentedResult>(calc);
     // The dry starter has 0.25 % curing salt at 6.25 % nitrite on bacon: 156.25 ppm ≤ 200 ppm.
-    // source: cli/starters/cure-starters.ts; limit 9 CFR 424.22(b); formula FSIS Directive 7620.3, ch. 3
+    // source: shared/formula/starters/cure-starters.ts; limit 9 CFR 424.22(b); formula FSIS Directive 7620.3, ch. 3
     assert.equal(result.checks.find((c) => c.id === 'nitrite-max')?.exact, '156.25');
     assert.equal(result.critical, false);
   });
@@ -80,41 +80,6 @@ describe('larder new', () => {
       kind: 'mix',
     });
     assert.ok(existsSync(path.join(dir, 'new-mix.yaml')));
-  });
-
-  it('writes a starter for every kind and every cure method that check accepts', async (t) => {
-    const dir = makeTempDir(t);
-    const starters: [string, string[]][] = [
-      ['cure-dry', ['cure', '--method', 'dry']],
-      ['cure-brine', ['cure', '--method', 'brine']],
-      ['cure-pump', ['cure', '--method', 'pump']],
-      ['a-dough', ['dough']],
-      ['a-blend', ['blend']],
-      ['a-mix', ['mix']],
-    ];
-    for (const [id, args] of starters) {
-      const run = await runLarder([
-        'new',
-        ...args,
-        '--id',
-        id,
-        '--out',
-        path.join(dir, `${id}.yaml`),
-      ]);
-      assertExit(run, 0);
-    }
-    const check = await runLarder(['check', dir, '--json']);
-    assertExit(check, 0);
-    const report = stdoutJson<CheckReport>(check);
-    assert.deepEqual(report.summary, { files: 6, ok: 6, failed: 0, warnings: 0 });
-    assert.deepEqual(report.files.map((f) => [f.id, f.kind]).sort(), [
-      ['a-blend', 'blend'],
-      ['a-dough', 'dough'],
-      ['a-mix', 'mix'],
-      ['cure-brine', 'cure'],
-      ['cure-dry', 'cure'],
-      ['cure-pump', 'cure'],
-    ]);
   });
 
   it('refuses an id that is not lower-case letters, digits and dashes', async (t) => {

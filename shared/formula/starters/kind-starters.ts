@@ -1,7 +1,8 @@
-import type { CureMethod, FormulaKind } from '../../shared/index.ts';
-import { CURE_STARTERS } from './cure-starters.ts';
+import type { BatchKind } from '../formula-types.ts';
 
-const DOUGH = `kind: dough
+/** Starter dough, blend and mix formulas (the body after id and title), every key explained. */
+export const KIND_STARTERS: Record<Exclude<BatchKind, 'cure'>, string> = {
+  dough: `kind: dough
 # Baker's percentages: every pct is % of the total flour; the flours add up to 100.
 ingredients:
   - { name: bread flour, pct: 100, flour: true, allergens: [wheat] }
@@ -18,9 +19,8 @@ ddt:
 steps:
   - Mix to full development; bulk 60 minutes.
   - Divide, round, proof and bake.
-`;
-
-const BLEND = `kind: blend
+`,
+  blend: `kind: blend
 species: beef              # beef, pork, lamb, veal or poultry, or a list: the cooking temperature
 standard: ground-beef      # optional: check the legal fat ceiling (30 %)
 components:                # two to five; give fat % or chemical lean (lean: 85)
@@ -30,9 +30,8 @@ target: { fat: 20 }        # or { lean: 80 }
 portion: 4 oz
 steps:
   - Keep everything below 4 °C; grind through the coarse plate, then the fine.
-`;
-
-const MIX = `kind: mix
+`,
+  mix: `kind: mix
 # Every pct is % of the base ingredient's weight; exactly one base at 100.
 ingredients:
   - { name: mayonnaise, pct: 100, base: true, allergens: [egg] }
@@ -40,24 +39,5 @@ ingredients:
   - { name: smoked paprika, pct: 1.5 }
 steps:
   - Whisk together; label and date; hold at 5 °C or below.
-`;
-
-/** A commented starter formula of a kind, ready to edit and pass `larder check`. */
-export function starterFormula(
-  kind: FormulaKind,
-  options: { id: string; title: string; method: CureMethod; schemaPath: string },
-): string {
-  const body =
-    kind === 'cure'
-      ? CURE_STARTERS[options.method]
-      : kind === 'dough'
-        ? DOUGH
-        : kind === 'blend'
-          ? BLEND
-          : MIX;
-  return `# yaml-language-server: $schema=${options.schemaPath}
-formula: 1                 # file format version
-id: ${options.id}
-title: ${JSON.stringify(options.title)}
-${body}`;
-}
+`,
+};
