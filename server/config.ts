@@ -60,7 +60,7 @@ export class ConfigError extends Error {
   override readonly name = 'ConfigError';
 }
 
-/** The settings, their environment variables and defaults, as documented in the README. */
+/** The settings, their environment variables and defaults, as documented in server/README.md. */
 export const SETTINGS = [
   ['LARDER_MODE', 'demo', 'demo (invented data, demo sign-ins) or production'],
   ['LARDER_HOST', '127.0.0.1', 'address to listen on'],

@@ -11,7 +11,8 @@ import {
   yamlShape,
 } from './yaml-limits.ts';
 
-// Limits as the product states them (README, "Formula files"): 32 levels, 5,000 values, 256 KiB.
+// Limits as the product states them (formulas/README.md, "Formula syntax"): 32 levels, 5,000
+// values, 256 KiB.
 // source: shared/formula/yaml-limits.ts, restated here so that a changed limit fails a test
 const DEPTH = 32;
 const NODES = 5000;

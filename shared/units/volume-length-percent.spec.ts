@@ -12,7 +12,8 @@ describe('volumes, lengths and percentages', () => {
   });
 
   it('should weigh measured water at 1 kg per litre, the stated convention', () => {
-    // common practice, no source: 1 L of water counted as 1 kg (stated in README; error under 0.3 %)
+    // common practice, no source: 1 L of water counted as 1 kg (stated in formulas/README.md;
+    // error under 0.3 %)
     assert.equal(waterGramsFromLitres(parseVolume('12 L')).toString(), '12000');
     assert.equal(waterGramsFromLitres(parseVolume('1500 ml')).toString(), '1500');
   });

@@ -8,7 +8,8 @@ export const LITRES_PER_US_GALLON = new Decimal('3.785411784');
  * Grams of water per litre when a brine's water is measured by volume. We take 1 kg per litre,
  * the density of water at about 4 °C; at kitchen temperatures (15–25 °C) water is 0.997–0.999 kg/L,
  * so a measured litre of tap water weighs at most 0.3 % less than we count. Weigh the water when it
- * matters. (Convention stated in README; density figures from memory.)
+ * matters. (Convention stated in formulas/README.md, "Numbers on the sheet"; density figures from
+ * memory.)
  */
 export const WATER_GRAMS_PER_LITRE = new Decimal(1000);
 

@@ -6,7 +6,7 @@
 import type { BatchStatus } from '../api/batch-record.ts';
 import type { BatchKind } from '../formula/formula-types.ts';
 
-/** Which rules hold; each is on unless the kitchen turns it off (see the README's settings). */
+/** Which rules hold; each is on unless the kitchen turns it off (server/README.md, "Settings"). */
 export interface WorkflowRules {
   /** The person who recorded a batch cannot sign it off (separation of duties). */
   readonly separateSignOff: boolean;

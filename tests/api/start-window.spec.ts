@@ -59,7 +59,8 @@ describe('start days outside a year of today', () => {
     const server = await startTestServer(t, {}, { now: clockFrom(TODAY) });
     const back = await server.as('tobin').post('/api/batches', belly('2025-12-03'));
     assert.equal(back.status, 201, back.text);
-    // source: our lot code format (README): start day YYMMDD, formula initials, sequence
+    // source: our lot code format (server/README.md "Batches"): start day YYMMDD, formula
+    // initials, sequence
     assert.equal(back.json.batch.lotCode, '251203-QB-01');
     const ahead = await server
       .as('tobin')

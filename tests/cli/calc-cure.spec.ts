@@ -325,8 +325,8 @@ describe('larder calc refuses a batch over a critical limit (maple-pump-belly pu
     ]);
     assertExit(run, 4);
     // own example, derived: 1000.4 g / 10 000 g = 10.004 % pump; 120 × 10.004/10 = 120.048 ppm,
-    // which prints as 120.0 ppm. source: README "Numbers on the sheet" (unrounded figure shown);
-    // limit: 9 CFR 424.22(b)
+    // which prints as 120.0 ppm. source: formulas/README.md "Numbers on the sheet" (unrounded
+    // figure shown); limit: 9 CFR 424.22(b)
     assert.match(
       run.stdout,
       /120\.0 ppm \(120\.048 unrounded\) is over the 120 ppm limit for pumped bacon/,

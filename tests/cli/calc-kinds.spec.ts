@@ -260,7 +260,8 @@ describe('larder calc on a mix', () => {
     assert.equal(places(total(mix.lines.map((l) => l.grams)).toString(), 9), '2000.000000000');
     assert.equal(mix.total?.grams, '2000');
     // The printed total adds up the printed lines (1441 + 360 + 115 + 43.2 + 21.6 + 11.5 + 7.2 =
-    // 1999.5 g). source: README "Numbers on the sheet" (totals add up the printed lines)
+    // 1999.5 g). source: formulas/README.md "Numbers on the sheet" (totals add up the printed
+    // lines)
     const printed = total(mix.lines.map((l) => l.amount.replace(/ g$/, '')));
     assert.equal(mix.total?.amount, `${printed.toFixed(1)} g`);
     // Egg (mayonnaise) and anchovy (Worcestershire sauce), named as the law words them.

@@ -15,7 +15,9 @@ const packageVersion = (
   JSON.parse(readFileSync(path.join(REPO_ROOT, 'package.json'), 'utf8')) as { version: string }
 ).version;
 
-/** The exit-code table every --help ends with. source: cli/cli-error.ts, README "Exit codes" */
+/**
+ * The exit-code table every --help ends with. source: cli/cli-error.ts, cli/README.md "Exit codes"
+ */
 const EXIT_CODE_LINES = [
   /^\s+0\s+done$/m,
   /^\s+1\s+unexpected internal error$/m,

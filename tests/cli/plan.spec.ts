@@ -167,7 +167,7 @@ describe('larder plan', () => {
       batches.map((b) => `${b.startedOn} ${b.status}`),
       [belly, addDays(service, -1), service, service].map((day) => `${day} planned`),
     );
-    // Lot codes carry the start day. source: our lot code format (README)
+    // Lot codes carry the start day. source: our lot code format (server/README.md "Batches")
     assert.ok(batches[0].lotCode.startsWith(`${belly.slice(2).replaceAll('-', '')}-`));
     const list = await runLarder(['batches', 'list', '--status', 'planned', '--json'], { env });
     assertExit(list, 0);

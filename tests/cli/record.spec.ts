@@ -9,7 +9,8 @@ import { PASSWORDS, startTestServer } from '../helpers/test-server.ts';
 
 // Yesterday on this machine's clock: a start must lie within a year of it.
 const START = addDays(today(), -1);
-// Lot code: start date YYMMDD, the formula id's initials, a sequence. source: our lot code format (README)
+// Lot code: start date YYMMDD, the formula id's initials, a sequence. source: our lot code format
+// (server/README.md "Batches")
 const LOT = `${START.slice(2).replaceAll('-', '')}-QB-01`;
 const BELLY = [
   'calc',

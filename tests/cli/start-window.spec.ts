@@ -65,7 +65,8 @@ describe('larder calc --start outside a year of today', () => {
     const paper = addDays(today(), -5);
     const recorded = await runLarder([...BELLY, '--start', paper, '--record', '--json'], { env });
     assertExit(recorded, 0);
-    // source: our lot code format (README): start day YYMMDD, formula initials, sequence
+    // source: our lot code format (server/README.md "Batches"): start day YYMMDD, formula
+    // initials, sequence
     assert.equal(
       stdoutJson<{ lotCode: string }>(recorded).lotCode,
       `${paper.slice(2).replaceAll('-', '')}-QB-01`,

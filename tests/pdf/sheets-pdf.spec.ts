@@ -190,7 +190,8 @@ describe('batch sheets as PDF from the command line', () => {
       { env },
     );
     assertExit(recorded, 0);
-    // source: our lot code format (README): start day, formula initials, sequence
+    // source: our lot code format (server/README.md "Batches"): start day, formula initials,
+    // sequence
     const lot = stdoutJson<{ lotCode: string }>(recorded).lotCode;
     assert.equal(lot, `${start.slice(2).replaceAll('-', '')}-QB-01`);
     const first = await pdfText(readFileSync(recordedFile));

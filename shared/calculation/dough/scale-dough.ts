@@ -30,7 +30,7 @@ export interface DoughScale {
 
 /**
  * How the loss allowance is applied, in words, for the note on the loss figure: the convention
- * of doughForPieces(), said in our own words (its source is named there and in the README).
+ * of doughForPieces(), said in our own words (its source is named there and in formulas/README.md).
  */
 export const LOSS_CONVENTION =
   'loss taken out of the mixed dough: dough = pieces × piece ÷ (1 − loss/100), so the pieces ' +

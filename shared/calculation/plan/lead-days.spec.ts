@@ -5,7 +5,8 @@ import { BELLY, BUN, GRIND, SAUCE } from './plan-fixtures.ts';
 
 describe('leadDaysOf: days between ready and service', () => {
   it('should default to the kitchen’s own rule: cure 1, dough with a preferment 1, others 0', () => {
-    // The kitchen's own rule (common practice, no source), stated in lead-days.ts and the README.
+    // The kitchen's own rule (common practice, no source), stated in lead-days.ts and
+    // formulas/README.md.
     assert.deepEqual(DEFAULT_LEAD_DAYS, { cure: 1, doughWithPreferment: 1, other: 0 });
     assert.equal(leadDaysOf(BELLY).days, 1);
     assert.equal(leadDaysOf(BUN).days, 1);
