@@ -1,5 +1,5 @@
 import { ApiError } from '../core/api/api-error';
-import { failureText } from './failure-text';
+import { messageOf } from '../core/api/message-of';
 
 /** An invitation that went out (POST /api/people, POST /api/people/:id/invitation). */
 export interface InvitationSent {
@@ -84,7 +84,7 @@ export function invitationRefusal(error: unknown): InvitationRefusal {
   return {
     code,
     title: 'The invitation link could not be checked',
-    advice: `${failureText(error, 'Something went wrong.')} Try again in a moment; if it keeps failing, ask an admin of your kitchen.`,
+    advice: `${messageOf(error, 'Something went wrong.', 'sentence')} Try again in a moment; if it keeps failing, ask an admin of your kitchen.`,
   };
 }
 

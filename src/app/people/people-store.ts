@@ -2,7 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { Person, Role } from '../core/api/api-types';
-import { failureText } from './failure-text';
+import { messageOf } from '../core/api/message-of';
 import { InvitationSent } from './invitation';
 import { ReminderChoices, ReminderSettings } from './reminder-choices';
 
@@ -63,7 +63,7 @@ export class PeopleStore {
       const { people } = await firstValueFrom(this.http.get<{ people: Person[] }>('/api/people'));
       this.state.set({ people, loading: false, failure: null, loaded: true });
     } catch (error) {
-      const failure = failureText(error, 'The list of people could not be loaded.');
+      const failure = messageOf(error, 'The list of people could not be loaded.', 'sentence');
       this.state.update((state) => ({ ...state, loading: false, failure }));
     }
   }

@@ -11,8 +11,9 @@ import {
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatProgressBar } from '@angular/material/progress-bar';
+import { messageOf } from '../../core/api/message-of';
 import { FormulaDiff, FormulaRevision, shortRevision } from '../formula-api-types';
-import { FormulaStore, messageOf } from '../formula-store';
+import { FormulaStore } from '../formula-store';
 import { SOURCE_LABELS } from '../formula-vocabulary';
 import { RevisionDiff } from '../revision-diff/revision-diff';
 

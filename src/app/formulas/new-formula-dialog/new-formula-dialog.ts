@@ -11,11 +11,12 @@ import {
 import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
+import { messageOf } from '../../core/api/message-of';
 import type { FormulaKind, FormulaProblem } from '../formula-api-types';
 import { FormulaProblems } from '../formula-problems/formula-problems';
 import { problemsOf } from '../formula-problems/problems-of';
 import { starterYaml } from '../formula-starters';
-import { FormulaStore, messageOf } from '../formula-store';
+import { FormulaStore } from '../formula-store';
 import { KINDS } from '../formula-vocabulary';
 
 /**

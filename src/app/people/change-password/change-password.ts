@@ -15,8 +15,8 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { ApiError } from '../../core/api/api-error';
+import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
-import { failureText } from '../failure-text';
 import { newPasswordControls } from '../new-password-controls';
 import { newPasswordChecks } from '../password-checks';
 import { PeopleStore } from '../people-store';
@@ -78,7 +78,9 @@ export class ChangePassword {
       if (error instanceof ApiError && error.code === 'wrong-password') {
         this.form.controls.current.setErrors({ wrong: true });
       }
-      this.failure.set(failureText(error, 'The password could not be changed; try again.'));
+      this.failure.set(
+        messageOf(error, 'The password could not be changed; try again.', 'sentence'),
+      );
     } finally {
       this.busy.set(false);
     }

@@ -16,7 +16,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
-import { failureText } from '../failure-text';
+import { messageOf } from '../../core/api/message-of';
 import { InvitationStore } from '../invitation-store';
 import { newPasswordControls } from '../new-password-controls';
 import { newPasswordChecks } from '../password-checks';
@@ -93,7 +93,7 @@ export default class SetPassword implements OnInit {
         });
       }
     } catch (error) {
-      this.failure.set(failureText(error, 'The password could not be set; try again.'));
+      this.failure.set(messageOf(error, 'The password could not be set; try again.', 'sentence'));
     } finally {
       this.busy.set(false);
     }
