@@ -25,7 +25,7 @@ import { RevisionDiff } from '../revision-diff/revision-diff';
   selector: 'app-formula-history',
   imports: [DatePipe, MatCheckbox, MatButton, MatProgressBar, RevisionDiff],
   templateUrl: './formula-history.html',
-  styleUrls: ['./formula-history.css', '../visually-hidden.css'],
+  styleUrl: './formula-history.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class FormulaHistory {
