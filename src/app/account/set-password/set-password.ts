@@ -17,10 +17,10 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 import { messageOf } from '../../core/api/message-of';
+import { PASSWORD_MIN } from '../../people/person-rules';
 import { InvitationStore } from '../invitation-store';
-import { newPasswordControls } from '../new-password-controls';
-import { newPasswordChecks } from '../password-checks';
-import { PASSWORD_MIN } from '../person-rules';
+import { newPasswordControls } from '../new-password-fields/new-password-controls';
+import { newPasswordChecks } from '../new-password-fields/password-checks';
 
 /**
  * The page an invitation's link opens, outside the sign-in: it says for whom the link is, takes

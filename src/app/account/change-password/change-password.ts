@@ -17,10 +17,10 @@ import { MatProgressBar } from '@angular/material/progress-bar';
 import { ApiError } from '../../core/api/api-error';
 import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
-import { newPasswordControls } from '../new-password-controls';
-import { newPasswordChecks } from '../password-checks';
-import { PeopleStore } from '../people-store';
-import { PASSWORD_MIN } from '../person-rules';
+import { PASSWORD_MIN } from '../../people/person-rules';
+import { AccountStore } from '../account-store';
+import { newPasswordControls } from '../new-password-fields/new-password-controls';
+import { newPasswordChecks } from '../new-password-fields/password-checks';
 
 /**
  * Lets whoever is signed in, whatever their role, change their own password. Closes with `true`
@@ -49,7 +49,7 @@ import { PASSWORD_MIN } from '../person-rules';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ChangePassword {
-  private readonly store = inject(PeopleStore);
+  private readonly store = inject(AccountStore);
 
   protected readonly username = inject(SessionStore).person()?.username ?? '';
   protected readonly rules = { PASSWORD_MIN };

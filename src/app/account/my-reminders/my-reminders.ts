@@ -22,7 +22,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { map } from 'rxjs';
 import { messageOf } from '../../core/api/message-of';
-import { PeopleStore } from '../people-store';
+import { AccountStore } from '../account-store';
 import {
   REMINDER_OPTIONS,
   ReminderChoices,
@@ -54,7 +54,7 @@ import {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class MyReminders implements OnInit {
-  private readonly store = inject(PeopleStore);
+  private readonly store = inject(AccountStore);
 
   protected readonly options = REMINDER_OPTIONS;
   protected readonly summary = choicesText;

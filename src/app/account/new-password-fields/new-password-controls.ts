@@ -1,5 +1,5 @@
 import { FormControl, Validators } from '@angular/forms';
-import { PASSWORD_MAX, PASSWORD_MIN } from './person-rules';
+import { PASSWORD_MAX, PASSWORD_MIN } from '../../people/person-rules';
 
 /**
  * The controls of a new password typed twice, with the server's length rules; the form group
