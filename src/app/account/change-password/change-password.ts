@@ -10,16 +10,16 @@ import {
   MatDialogRef,
   MatDialogTitle,
 } from '@angular/material/dialog';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { ApiError } from '../../core/api/api-error';
 import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
-import { PASSWORD_MIN } from '../../people/person-rules';
 import { AccountStore } from '../account-store';
 import { newPasswordControls } from '../new-password-fields/new-password-controls';
+import { NewPasswordFields } from '../new-password-fields/new-password-fields';
 import { newPasswordChecks } from '../new-password-fields/password-checks';
 
 /**
@@ -36,13 +36,13 @@ import { newPasswordChecks } from '../new-password-fields/password-checks';
     MatDialogClose,
     MatFormField,
     MatLabel,
-    MatHint,
     MatError,
     MatInput,
     MatCheckbox,
     MatButton,
     MatIcon,
     MatProgressBar,
+    NewPasswordFields,
   ],
   templateUrl: './change-password.html',
   styleUrl: './change-password.css',
@@ -52,7 +52,6 @@ export class ChangePassword {
   private readonly store = inject(AccountStore);
 
   protected readonly username = inject(SessionStore).person()?.username ?? '';
-  protected readonly rules = { PASSWORD_MIN };
   protected readonly form = inject(NonNullableFormBuilder).group(
     { current: ['', Validators.required], ...newPasswordControls() },
     { validators: [newPasswordChecks] },

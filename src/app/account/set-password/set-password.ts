@@ -11,15 +11,13 @@ import {
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
-import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 import { messageOf } from '../../core/api/message-of';
-import { PASSWORD_MIN } from '../../people/person-rules';
 import { InvitationStore } from '../invitation-store';
 import { newPasswordControls } from '../new-password-fields/new-password-controls';
+import { NewPasswordFields } from '../new-password-fields/new-password-fields';
 import { newPasswordChecks } from '../new-password-fields/password-checks';
 
 /**
@@ -33,15 +31,11 @@ import { newPasswordChecks } from '../new-password-fields/password-checks';
     DatePipe,
     ReactiveFormsModule,
     RouterLink,
-    MatFormField,
-    MatLabel,
-    MatHint,
-    MatError,
-    MatInput,
     MatCheckbox,
     MatButton,
     MatIcon,
     MatProgressBar,
+    NewPasswordFields,
   ],
   providers: [InvitationStore],
   templateUrl: './set-password.html',
@@ -55,7 +49,6 @@ export default class SetPassword implements OnInit {
   /** The invitation's token, from the link's query string. */
   readonly token = input<string>();
 
-  protected readonly rules = { PASSWORD_MIN };
   protected readonly view = this.store.view;
   protected readonly invitation = computed(() => {
     const view = this.view();
