@@ -1,9 +1,4 @@
-import type {
-  PresentedCheck,
-  PresentedFigure,
-  PresentedGroup,
-  PresentedResult,
-} from '../../shared/index.ts';
+import type { PresentedCheck, PresentedFigure, PresentedGroup } from '../../shared/index.ts';
 import { OVERALL_FORMULA_TITLE } from '../../shared/calculation/dough/calculate-dough.ts';
 import { BODY, INK, SMALL, TICK, type Column, type Row, type SheetLayout } from './sheet-layout.ts';
 
@@ -186,11 +181,6 @@ export function bulletList(
     if (source) layout.y += layout.draw(source, sourceStyle, layout.left + indent, layout.y, width);
     layout.gap(4);
   }
-}
-
-/** Cautions with their sources. */
-export function cautionList(layout: SheetLayout, cautions: PresentedResult['cautions']): void {
-  bulletList(layout, cautions);
 }
 
 /** A line to write on after a label: "Weighed by ________". */

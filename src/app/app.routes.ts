@@ -11,7 +11,7 @@ export const routes: Routes = [
     // An invitation's link: public, like sign-in; the token in the link is the proof.
     path: 'set-password',
     title: 'Set your password · Larderbook',
-    loadComponent: () => import('./people/set-password/set-password'),
+    loadComponent: () => import('./account/set-password/set-password'),
   },
   {
     path: '',

@@ -1,4 +1,4 @@
-import { Decimal, HUNDRED, ONE, fraction, sum } from '../../decimal.ts';
+import { Decimal, ONE, fraction, sum } from '../../decimal.ts';
 import { parseMass } from '../../units/mass.ts';
 import type { RawBatchOptions } from '../batch-input.ts';
 import { keptAfterLoss } from '../blend/blend-loss.ts';
@@ -94,9 +94,4 @@ export function plannedSize(need: Need): PlannedSize {
     case 'mix':
       return { batch: { total: grams(need.grams) }, warnings: [] };
   }
-}
-
-/** A percent as a fraction of a hundred, exact: used by the pull list for trim yields. */
-export function trimFraction(trim: number | undefined): Decimal | undefined {
-  return trim === undefined ? undefined : new Decimal(trim).div(HUNDRED);
 }

@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import { ApiError } from '../core/api/api-error';
+import { messageOf } from '../core/api/message-of';
 import type { FormulaDetail, FormulaKind, FormulaListItem } from './batch-types';
 
 /** A formula that batches can be made from, for a select. */
@@ -66,9 +66,4 @@ function usable(items: readonly FormulaListItem[]): FormulaOption[] {
     options.push({ id: item.id, title: item.title ?? item.id, kind: item.kind });
   }
   return options.sort((a, b) => a.title.localeCompare(b.title));
-}
-
-/** A failure in words: the API's message, or a plain fallback. */
-export function messageOf(error: unknown): string {
-  return error instanceof ApiError ? error.message : 'Something went wrong; try again.';
 }

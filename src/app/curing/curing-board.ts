@@ -2,7 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import type { BatchListItem, BatchPage } from '../batches/batch-types';
-import { messageOf } from '../batches/formula-options';
+import { messageOf } from '../core/api/message-of';
 import { isoDateOf } from '../ui/batch-sheet/iso-day-pipe';
 import { holdingBatches } from './days-left';
 

@@ -11,6 +11,7 @@ import {
   switchMap,
 } from 'rxjs';
 import { ApiError } from '../core/api/api-error';
+import { messageOf } from '../core/api/message-of';
 import {
   Formula,
   FormulaDetail,
@@ -21,7 +22,7 @@ import {
 import { createFormulaForm } from './formula-form-model';
 import { fillFormulaForm } from './fill-formula-form';
 import { formulaFromForm } from './formula-from-form';
-import { FormulaStore, messageOf } from './formula-store';
+import { FormulaStore } from './formula-store';
 import { formulaLimitProblem, parseFormulaYaml, writeFormulaYaml } from './formula-yaml';
 import { problemsOf } from './formula-problems/problems-of';
 

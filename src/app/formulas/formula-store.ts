@@ -1,7 +1,7 @@
 import { HttpClient, HttpHeaders } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { Observable, firstValueFrom } from 'rxjs';
-import { ApiError } from '../core/api/api-error';
+import { messageOf } from '../core/api/message-of';
 import {
   BatchOptions,
   Formula,
@@ -134,10 +134,4 @@ export class FormulaStore {
       this.http.get<FormulaDiff>(`${API}/${encodeURIComponent(id)}/diff`, { params }),
     );
   }
-}
-
-/** An error in words for the screen. */
-export function messageOf(error: unknown): string {
-  if (error instanceof ApiError) return error.message;
-  return 'Something went wrong. Try again, and tell an admin if it keeps happening.';
 }

@@ -1,5 +1,5 @@
 import { computed, signal } from '@angular/core';
-import { failureText } from './failure-text';
+import { messageOf } from '../core/api/message-of';
 
 /** One page of a newest-first list; `next` is the `before` of the following page, null at the end. */
 export interface KeysetPage<T> {
@@ -78,7 +78,7 @@ export class OlderPages<T> {
       }));
     } catch (error) {
       if (request !== this.request) return;
-      const failure = failureText(error, this.fallback);
+      const failure = messageOf(error, this.fallback, 'sentence');
       this.state.update((state) => ({ ...state, loading: false, failure }));
     }
   }

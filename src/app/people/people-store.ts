@@ -2,9 +2,8 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { Person, Role } from '../core/api/api-types';
-import { failureText } from './failure-text';
-import { InvitationSent } from './invitation';
-import { ReminderChoices, ReminderSettings } from './reminder-choices';
+import { messageOf } from '../core/api/message-of';
+import { InvitationSent } from './invitation-sent';
 
 /** What an admin fills in to add a person; without a password the server makes one up. */
 export interface NewPerson {
@@ -63,7 +62,7 @@ export class PeopleStore {
       const { people } = await firstValueFrom(this.http.get<{ people: Person[] }>('/api/people'));
       this.state.set({ people, loading: false, failure: null, loaded: true });
     } catch (error) {
-      const failure = failureText(error, 'The list of people could not be loaded.');
+      const failure = messageOf(error, 'The list of people could not be loaded.', 'sentence');
       this.state.update((state) => ({ ...state, loading: false, failure }));
     }
   }
@@ -127,21 +126,6 @@ export class PeopleStore {
       this.http.post<{ password: string }>(`/api/people/${id}/password`, {}),
     );
     return password;
-  }
-
-  /** Changes the signed-in person's own password; rejects with an ApiError (403 when `current` is wrong). */
-  async changeOwnPassword(current: string, password: string): Promise<void> {
-    await firstValueFrom(this.http.put<void>('/api/people/me/password', { current, password }));
-  }
-
-  /** The signed-in person's own reminder choices and the address they go to. */
-  async myReminders(): Promise<ReminderSettings> {
-    return firstValueFrom(this.http.get<ReminderSettings>('/api/people/me/reminders'));
-  }
-
-  /** Stores the signed-in person's own reminder choices; answers with them as the server keeps them. */
-  async saveMyReminders(choices: ReminderChoices): Promise<ReminderSettings> {
-    return firstValueFrom(this.http.put<ReminderSettings>('/api/people/me/reminders', choices));
   }
 }
 

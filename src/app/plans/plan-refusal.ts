@@ -1,4 +1,5 @@
 import { ApiError } from '../core/api/api-error';
+import { SOMETHING_WENT_WRONG } from '../core/api/message-of';
 import type { PlanRefusal } from './plan-types';
 
 /** Why a plan was refused, ready for the screen. */
@@ -47,7 +48,7 @@ export function refusalOf(error: unknown): PlanRefusalView {
   if (!(error instanceof ApiError)) {
     return {
       title: 'The plan could not be worked out.',
-      message: 'Something went wrong; try again.',
+      message: SOMETHING_WENT_WRONG,
       reason: null,
       formula: null,
       formulaProblem: false,

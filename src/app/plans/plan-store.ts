@@ -1,7 +1,7 @@
 import { Injectable, inject, signal } from '@angular/core';
 import { BatchLog } from '../batches/batch-log/batch-log';
 import type { Batch } from '../batches/batch-types';
-import { messageOf } from '../batches/formula-options';
+import { messageOf } from '../core/api/message-of';
 import { PlanApi } from './plan-api';
 import { pdfFileName } from './plan-query';
 import { refusalOf, type PlanRefusalView } from './plan-refusal';

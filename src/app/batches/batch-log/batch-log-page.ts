@@ -17,7 +17,18 @@ import {
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSort, MatSortHeader, type Sort } from '@angular/material/sort';
-import { MatTableModule } from '@angular/material/table';
+import {
+  MatCell,
+  MatCellDef,
+  MatColumnDef,
+  MatHeaderCell,
+  MatHeaderCellDef,
+  MatHeaderRow,
+  MatHeaderRowDef,
+  MatRow,
+  MatRowDef,
+  MatTable,
+} from '@angular/material/table';
 import { ActivatedRoute, Router, RouterLink, type ParamMap } from '@angular/router';
 import { SessionStore } from '../../core/auth/session-store';
 import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
@@ -55,7 +66,16 @@ const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
   selector: 'app-batch-log-page',
   imports: [
     RouterLink,
-    MatTableModule,
+    MatCell,
+    MatCellDef,
+    MatColumnDef,
+    MatHeaderCell,
+    MatHeaderCellDef,
+    MatHeaderRow,
+    MatHeaderRowDef,
+    MatRow,
+    MatRowDef,
+    MatTable,
     MatSort,
     MatSortHeader,
     MatButton,

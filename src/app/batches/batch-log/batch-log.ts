@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import { messageOf } from '../formula-options';
+import { messageOf } from '../../core/api/message-of';
 import type { BatchListItem, BatchPage, PersonRef } from '../batch-types';
 import { DEFAULT_QUERY, apiFilterParams, type LogQuery } from './log-query';
 

@@ -6,8 +6,8 @@ import {
   type WorkflowRules,
 } from '../../../../shared/workflow/workflow-rules.ts';
 import { ApiError } from '../../core/api/api-error';
+import { messageOf } from '../../core/api/message-of';
 import type { Batch, BatchStatus } from '../batch-types';
-import { messageOf } from '../formula-options';
 
 /**
  * One batch on its page: read with its events (GET /api/batches/:lot), moved along

@@ -1,8 +1,8 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
+import { messageOf } from '../../core/api/message-of';
 import type { BatchListItem, BatchPage } from '../batch-types';
-import { messageOf } from '../formula-options';
 import { nitritePoints } from './nitrite-points';
 
 /** The most batches one request asks for (the API's ceiling). */

@@ -3,8 +3,8 @@ import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { criticalFailures } from '../../../../shared/calculation/calc-result.ts';
 import { ApiError } from '../../core/api/api-error';
+import { messageOf } from '../../core/api/message-of';
 import type { Batch, PresentedResult, RawBatchOptions, RefusedCheck } from '../batch-types';
-import { messageOf } from '../formula-options';
 import type { Units } from './batch-fields';
 
 /** What the cook asks to record. */

@@ -29,12 +29,13 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSelect } from '@angular/material/select';
 import { Router, RouterLink } from '@angular/router';
+import { messageOf } from '../../core/api/message-of';
 import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
 import { DAY_INPUT_FORMATS } from '../../ui/batch-sheet/day-input-formats';
 import { isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { BatchLog } from '../batch-log/batch-log';
 import type { FormulaFacts } from '../batch-types';
-import { FormulaOptions, messageOf } from '../formula-options';
+import { FormulaOptions } from '../formula-options';
 import {
   batchOptions,
   fieldOf,

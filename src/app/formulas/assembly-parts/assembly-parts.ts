@@ -95,11 +95,7 @@ interface Named {
     MatIcon,
   ],
   templateUrl: './assembly-parts.html',
-  styleUrls: [
-    '../ingredient-table/ingredient-table.css',
-    '../visually-hidden.css',
-    './assembly-parts.css',
-  ],
+  styleUrls: ['../ingredient-table/ingredient-table.css', './assembly-parts.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class AssemblyParts {

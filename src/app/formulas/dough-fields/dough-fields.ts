@@ -26,7 +26,7 @@ import { watchControl } from '../watch-control';
     MatIcon,
   ],
   templateUrl: './dough-fields.html',
-  styleUrls: ['../formula-fields.css', './dough-fields.css', '../visually-hidden.css'],
+  styleUrls: ['../formula-fields.css', './dough-fields.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class DoughFields {

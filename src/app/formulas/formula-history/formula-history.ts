@@ -11,8 +11,9 @@ import {
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatProgressBar } from '@angular/material/progress-bar';
+import { messageOf } from '../../core/api/message-of';
 import { FormulaDiff, FormulaRevision, shortRevision } from '../formula-api-types';
-import { FormulaStore, messageOf } from '../formula-store';
+import { FormulaStore } from '../formula-store';
 import { SOURCE_LABELS } from '../formula-vocabulary';
 import { RevisionDiff } from '../revision-diff/revision-diff';
 
@@ -24,7 +25,7 @@ import { RevisionDiff } from '../revision-diff/revision-diff';
   selector: 'app-formula-history',
   imports: [DatePipe, MatCheckbox, MatButton, MatProgressBar, RevisionDiff],
   templateUrl: './formula-history.html',
-  styleUrls: ['./formula-history.css', '../visually-hidden.css'],
+  styleUrl: './formula-history.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class FormulaHistory {

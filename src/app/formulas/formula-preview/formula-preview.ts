@@ -17,9 +17,10 @@ import {
   switchMap,
 } from 'rxjs';
 import { ApiError } from '../../core/api/api-error';
+import { messageOf } from '../../core/api/message-of';
 import { ResultSheet } from '../../ui/result-sheet/result-sheet';
 import type { FormulaKind, PresentedResult, UnitSystem } from '../formula-api-types';
-import { FormulaStore, messageOf } from '../formula-store';
+import { FormulaStore } from '../formula-store';
 import { problemsOf } from '../formula-problems/problems-of';
 import { DEFAULT_SAMPLE, SampleBatch, batchMessage, batchOptions } from './sample-batch';
 

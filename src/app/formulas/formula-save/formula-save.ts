@@ -18,10 +18,11 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
+import { messageOf } from '../../core/api/message-of';
 import { FormulaDiff, FormulaProblem, WriteOutcome, shortRevision } from '../formula-api-types';
 import { FormulaDraft } from '../formula-draft';
 import { FormulaProblems } from '../formula-problems/formula-problems';
-import { FormulaStore, messageOf } from '../formula-store';
+import { FormulaStore } from '../formula-store';
 import { RevisionDiff } from '../revision-diff/revision-diff';
 
 /** Where the last save attempt left things. */

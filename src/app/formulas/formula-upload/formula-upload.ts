@@ -2,10 +2,11 @@ import { ChangeDetectionStrategy, Component, inject, output, signal } from '@ang
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
+import { messageOf } from '../../core/api/message-of';
 import type { FormulaProblem } from '../formula-api-types';
 import { FormulaProblems } from '../formula-problems/formula-problems';
 import { problemsOf } from '../formula-problems/problems-of';
-import { FormulaStore, messageOf } from '../formula-store';
+import { FormulaStore } from '../formula-store';
 
 /**
  * Uploads a formula file (.yaml or .yml) as a new formula. A refused file is explained with its

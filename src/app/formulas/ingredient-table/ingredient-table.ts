@@ -73,7 +73,7 @@ const ALLERGENS_WIDTH = 220;
     MatIcon,
   ],
   templateUrl: './ingredient-table.html',
-  styleUrls: ['./ingredient-table.css', '../visually-hidden.css'],
+  styleUrl: './ingredient-table.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class IngredientTable {

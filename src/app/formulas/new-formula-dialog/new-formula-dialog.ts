@@ -17,10 +17,11 @@ import {
   LIBRARY_SCHEMA_PATH,
   starterFormula,
 } from '../../../../shared/formula/starters/starter-formula.ts';
+import { messageOf } from '../../core/api/message-of';
 import type { FormulaKind, FormulaProblem } from '../formula-api-types';
 import { FormulaProblems } from '../formula-problems/formula-problems';
 import { problemsOf } from '../formula-problems/problems-of';
-import { FormulaStore, messageOf } from '../formula-store';
+import { FormulaStore } from '../formula-store';
 import { CURE_METHODS, KINDS } from '../formula-vocabulary';
 
 /**

@@ -18,7 +18,7 @@ interface DiffBlock {
   selector: 'app-revision-diff',
   imports: [MatButton],
   templateUrl: './revision-diff.html',
-  styleUrls: ['./revision-diff.css', '../visually-hidden.css'],
+  styleUrl: './revision-diff.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class RevisionDiff {

@@ -8,7 +8,7 @@ import {
   MatDialogTitle,
 } from '@angular/material/dialog';
 import { InvitationLink } from '../invitation-link/invitation-link';
-import { InvitationSent } from '../invitation';
+import { InvitationSent } from '../invitation-sent';
 
 /** What the dialog shows: a new invitation's link and whom it is for. */
 export interface InvitationLinkDialogData {

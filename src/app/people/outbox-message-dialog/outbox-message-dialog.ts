@@ -18,7 +18,7 @@ import {
 } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
-import { failureText } from '../failure-text';
+import { messageOf } from '../../core/api/message-of';
 import {
   OutboxMessage,
   OutboxSummary,
@@ -73,7 +73,7 @@ export class OutboxMessageDialog implements OnInit {
     try {
       this.message.set(await this.store.message(this.summary.id));
     } catch (error) {
-      this.failure.set(failureText(error, 'The message could not be loaded; try again.'));
+      this.failure.set(messageOf(error, 'The message could not be loaded; try again.', 'sentence'));
     } finally {
       this.loading.set(false);
     }

@@ -18,7 +18,7 @@ import {
 } from '@angular/material/dialog';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Person } from '../../core/api/api-types';
-import { failureText } from '../failure-text';
+import { messageOf } from '../../core/api/message-of';
 import { GeneratedPassword } from '../generated-password/generated-password';
 import { PeopleStore } from '../people-store';
 
@@ -61,7 +61,7 @@ export class PasswordResetDialog {
       this.dialogRef.disableClose = true;
       afterNextRender(() => this.reveal()?.focus(), { injector: this.injector });
     } catch (error) {
-      this.failure.set(failureText(error, 'The password could not be reset; try again.'));
+      this.failure.set(messageOf(error, 'The password could not be reset; try again.', 'sentence'));
     } finally {
       this.busy.set(false);
     }

@@ -27,8 +27,8 @@ import {
 import { MatTooltip } from '@angular/material/tooltip';
 import { Router } from '@angular/router';
 import { Person } from '../../core/api/api-types';
+import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
-import { failureText } from '../failure-text';
 import {
   InvitationLinkDialog,
   InvitationLinkDialogData,
@@ -180,7 +180,7 @@ export default class PeopleList implements OnInit {
         `A new invitation went to ${invitation.sentTo}; the link of any earlier one no longer works.`,
       );
     } catch (error) {
-      this.tell(failureText(error, 'The invitation could not be sent; try again.'));
+      this.tell(messageOf(error, 'The invitation could not be sent; try again.', 'sentence'));
     } finally {
       this.resending.set(null);
     }

@@ -25,7 +25,7 @@ import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ApiError } from '../../core/api/api-error';
 import { Role } from '../../core/api/api-types';
-import { failureText } from '../failure-text';
+import { messageOf } from '../../core/api/message-of';
 import { GeneratedPassword } from '../generated-password/generated-password';
 import { InvitationLink } from '../invitation-link/invitation-link';
 import { AddedPerson, PeopleStore } from '../people-store';
@@ -132,7 +132,7 @@ export class PersonAddDialog {
       if (error instanceof ApiError && error.code === 'username-taken') {
         this.form.controls.username.setErrors({ taken: true });
       }
-      this.failure.set(failureText(error, 'The person could not be added; try again.'));
+      this.failure.set(messageOf(error, 'The person could not be added; try again.', 'sentence'));
     } finally {
       this.busy.set(false);
     }

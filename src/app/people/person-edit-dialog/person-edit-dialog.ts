@@ -15,8 +15,8 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { Person } from '../../core/api/api-types';
+import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
-import { failureText } from '../failure-text';
 import { PeopleStore, PersonChanges } from '../people-store';
 import { DISPLAY_NAME_MAX, EMAIL_MAX, EMAIL_PATTERN } from '../person-rules';
 import { ROLE_OPTIONS } from '../role-options';
@@ -89,7 +89,7 @@ export class PersonEditDialog {
     try {
       this.dialogRef.close(await this.store.change(this.person.id, changes));
     } catch (error) {
-      this.failure.set(failureText(error, 'The changes could not be saved; try again.'));
+      this.failure.set(messageOf(error, 'The changes could not be saved; try again.', 'sentence'));
     } finally {
       this.busy.set(false);
     }

@@ -10,8 +10,8 @@ import {
 } from '@angular/material/dialog';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Person } from '../../core/api/api-types';
+import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
-import { failureText } from '../failure-text';
 import { PeopleStore } from '../people-store';
 
 /** Asks before deactivating or reactivating a person, then does it. Closes with the changed person. */
@@ -48,7 +48,7 @@ export class PersonStatusDialog {
         await this.store.change(this.person.id, { active: !this.person.active }),
       );
     } catch (error) {
-      this.failure.set(failureText(error, 'That did not work; try again.'));
+      this.failure.set(messageOf(error, 'That did not work; try again.', 'sentence'));
     } finally {
       this.busy.set(false);
     }

@@ -16,7 +16,7 @@ import type { PresentedPlan } from '../plan-types';
   selector: 'app-plan-view',
   imports: [RouterLink, MatIcon, IsoDayPipe, BatchSheet, PlanSchedule],
   templateUrl: './plan-view.html',
-  styleUrls: ['./plan-view.css', '../../formulas/visually-hidden.css'],
+  styleUrl: './plan-view.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PlanView {

@@ -5,7 +5,7 @@ import { MatFormField, MatLabel, MatError } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router } from '@angular/router';
-import { ApiError } from '../../api/api-error';
+import { messageOf } from '../../api/message-of';
 import { SessionStore } from '../session-store';
 
 /** The sign-in page. */
@@ -62,7 +62,7 @@ export default class SignIn implements OnInit {
         target?.startsWith('/') && !target.startsWith('//') ? target : '/batches',
       );
     } catch (error) {
-      this.failure.set(error instanceof ApiError ? error.message : 'Signing in failed; try again.');
+      this.failure.set(messageOf(error, 'Signing in failed; try again.'));
     } finally {
       this.busy.set(false);
     }

@@ -82,12 +82,12 @@ export default class Shell {
   });
 
   protected async changePassword(): Promise<void> {
-    const { openChangePassword } = await import('../../../people/change-password/change-password');
+    const { openChangePassword } = await import('../../../account/change-password/change-password');
     openChangePassword(this.dialog);
   }
 
   protected async myReminders(): Promise<void> {
-    const { openMyReminders } = await import('../../../people/my-reminders/my-reminders');
+    const { openMyReminders } = await import('../../../account/my-reminders/my-reminders');
     openMyReminders(this.dialog);
   }
 

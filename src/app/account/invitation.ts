@@ -1,18 +1,5 @@
 import { ApiError } from '../core/api/api-error';
-import { failureText } from './failure-text';
-
-/** An invitation that went out (POST /api/people, POST /api/people/:id/invitation). */
-export interface InvitationSent {
-  /** The address it went to. */
-  readonly sentTo: string;
-  /** When its link stops working (ISO 8601). */
-  readonly expiresAt: string;
-  /**
-   * With no mail server, the link for the admin to pass on by hand: this answer is the only
-   * time it is shown. Null when a mail server takes it to the person.
-   */
-  readonly link: string | null;
-}
+import { messageOf } from '../core/api/message-of';
 
 /** GET /api/invitations/:token: a link that still works, and for whom. */
 export interface InvitationInfo {
@@ -84,7 +71,7 @@ export function invitationRefusal(error: unknown): InvitationRefusal {
   return {
     code,
     title: 'The invitation link could not be checked',
-    advice: `${failureText(error, 'Something went wrong.')} Try again in a moment; if it keeps failing, ask an admin of your kitchen.`,
+    advice: `${messageOf(error, 'Something went wrong.', 'sentence')} Try again in a moment; if it keeps failing, ask an admin of your kitchen.`,
   };
 }
 

@@ -10,17 +10,17 @@ import {
   MatDialogRef,
   MatDialogTitle,
 } from '@angular/material/dialog';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { ApiError } from '../../core/api/api-error';
+import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
-import { failureText } from '../failure-text';
-import { newPasswordControls } from '../new-password-controls';
-import { newPasswordChecks } from '../password-checks';
-import { PeopleStore } from '../people-store';
-import { PASSWORD_MIN } from '../person-rules';
+import { AccountStore } from '../account-store';
+import { newPasswordControls } from '../new-password-fields/new-password-controls';
+import { NewPasswordFields } from '../new-password-fields/new-password-fields';
+import { newPasswordChecks } from '../new-password-fields/password-checks';
 
 /**
  * Lets whoever is signed in, whatever their role, change their own password. Closes with `true`
@@ -36,23 +36,22 @@ import { PASSWORD_MIN } from '../person-rules';
     MatDialogClose,
     MatFormField,
     MatLabel,
-    MatHint,
     MatError,
     MatInput,
     MatCheckbox,
     MatButton,
     MatIcon,
     MatProgressBar,
+    NewPasswordFields,
   ],
   templateUrl: './change-password.html',
   styleUrl: './change-password.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ChangePassword {
-  private readonly store = inject(PeopleStore);
+  private readonly store = inject(AccountStore);
 
   protected readonly username = inject(SessionStore).person()?.username ?? '';
-  protected readonly rules = { PASSWORD_MIN };
   protected readonly form = inject(NonNullableFormBuilder).group(
     { current: ['', Validators.required], ...newPasswordControls() },
     { validators: [newPasswordChecks] },
@@ -78,7 +77,9 @@ export class ChangePassword {
       if (error instanceof ApiError && error.code === 'wrong-password') {
         this.form.controls.current.setErrors({ wrong: true });
       }
-      this.failure.set(failureText(error, 'The password could not be changed; try again.'));
+      this.failure.set(
+        messageOf(error, 'The password could not be changed; try again.', 'sentence'),
+      );
     } finally {
       this.busy.set(false);
     }

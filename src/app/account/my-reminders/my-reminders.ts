@@ -21,8 +21,8 @@ import {
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { map } from 'rxjs';
-import { failureText } from '../failure-text';
-import { PeopleStore } from '../people-store';
+import { messageOf } from '../../core/api/message-of';
+import { AccountStore } from '../account-store';
 import {
   REMINDER_OPTIONS,
   ReminderChoices,
@@ -54,7 +54,7 @@ import {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class MyReminders implements OnInit {
-  private readonly store = inject(PeopleStore);
+  private readonly store = inject(AccountStore);
 
   protected readonly options = REMINDER_OPTIONS;
   protected readonly summary = choicesText;
@@ -96,7 +96,7 @@ export class MyReminders implements OnInit {
       this.form.setValue({ ...mine.choices });
       this.mine.set(mine);
     } catch (error) {
-      this.failure.set(failureText(error, 'Your reminder choices could not be loaded.'));
+      this.failure.set(messageOf(error, 'Your reminder choices could not be loaded.', 'sentence'));
     } finally {
       this.activity.set(null);
     }
@@ -114,7 +114,7 @@ export class MyReminders implements OnInit {
     try {
       this.saved.set(await this.store.saveMyReminders(this.form.getRawValue()));
     } catch (error) {
-      this.failure.set(failureText(error, 'Your choices could not be saved; try again.'));
+      this.failure.set(messageOf(error, 'Your choices could not be saved; try again.', 'sentence'));
     } finally {
       this.activity.set(null);
     }

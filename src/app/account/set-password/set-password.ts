@@ -11,16 +11,14 @@ import {
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
-import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
-import { failureText } from '../failure-text';
+import { messageOf } from '../../core/api/message-of';
 import { InvitationStore } from '../invitation-store';
-import { newPasswordControls } from '../new-password-controls';
-import { newPasswordChecks } from '../password-checks';
-import { PASSWORD_MIN } from '../person-rules';
+import { newPasswordControls } from '../new-password-fields/new-password-controls';
+import { NewPasswordFields } from '../new-password-fields/new-password-fields';
+import { newPasswordChecks } from '../new-password-fields/password-checks';
 
 /**
  * The page an invitation's link opens, outside the sign-in: it says for whom the link is, takes
@@ -33,15 +31,11 @@ import { PASSWORD_MIN } from '../person-rules';
     DatePipe,
     ReactiveFormsModule,
     RouterLink,
-    MatFormField,
-    MatLabel,
-    MatHint,
-    MatError,
-    MatInput,
     MatCheckbox,
     MatButton,
     MatIcon,
     MatProgressBar,
+    NewPasswordFields,
   ],
   providers: [InvitationStore],
   templateUrl: './set-password.html',
@@ -55,7 +49,6 @@ export default class SetPassword implements OnInit {
   /** The invitation's token, from the link's query string. */
   readonly token = input<string>();
 
-  protected readonly rules = { PASSWORD_MIN };
   protected readonly view = this.store.view;
   protected readonly invitation = computed(() => {
     const view = this.view();
@@ -93,7 +86,7 @@ export default class SetPassword implements OnInit {
         });
       }
     } catch (error) {
-      this.failure.set(failureText(error, 'The password could not be set; try again.'));
+      this.failure.set(messageOf(error, 'The password could not be set; try again.', 'sentence'));
     } finally {
       this.busy.set(false);
     }
