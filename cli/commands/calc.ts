@@ -208,7 +208,7 @@ async function runCalc(reference: string, options: CalcOptions, io: Io): Promise
   if (pdf) {
     const [{ writeBatchSheet }, { revisionOf }] = await Promise.all([
       import('../output/pdf-file.ts'),
-      import('../../server/formulas/formula-files.ts'),
+      import('../../files/revision.ts'),
     ]);
     const revision = revisionOf(readFileSync(file, 'utf8'));
     await writeBatchSheet(pdf, presented, undefined, { revision });

@@ -5,7 +5,7 @@ import {
   removeQuietly,
   writeFileAtomic,
   writeTemporary,
-} from '../../server/formulas/atomic-file.ts';
+} from '../../files/atomic-file.ts';
 import type { PresentedResult } from '../../shared/index.ts';
 import {
   renderBatchSheetPdf,
