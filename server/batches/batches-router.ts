@@ -1,12 +1,12 @@
 import { Router, type Request, type RequestHandler, type Response } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { personOf } from '../auth/request-person.ts';
+import { changeBy } from '../auth/request-person.ts';
 import { BATCH_OPTIONS_SCHEMA, UNITS_SCHEMA } from '../calc/calc-request.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { RECORDING_ROLES, batchSheetPdf, type RecordRequest } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
-import { BATCH_STATUSES, RECORD_STATUSES, type BatchStatus, type ChangeOptions } from './batch.ts';
+import { BATCH_STATUSES, RECORD_STATUSES, type BatchStatus } from './batch.ts';
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
 import { parseListQuery } from './batch-query.ts';
 
@@ -38,15 +38,6 @@ const SIGN_OFF_BODY = {
   additionalProperties: false,
   properties: { note: { type: 'string', minLength: 1, maxLength: 500 } },
 } as const;
-
-/** Who makes a change, from where, and when by the server's clock (reminders count from it). */
-function changeBy(req: Request, { now }: Pick<AppContext, 'now'>): ChangeOptions {
-  return {
-    actor: personOf(req),
-    at: now().toISOString(),
-    ...(req.ip === undefined ? {} : { ip: req.ip }),
-  };
-}
 
 /** A body-less POST counts as an empty object, so `{}` need not be sent. */
 const emptyBody: RequestHandler = (req, _res, next) => {

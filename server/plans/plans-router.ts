@@ -1,21 +1,12 @@
-import { Router, type Request } from 'express';
+import { Router } from 'express';
 import { presentPlan } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { personOf } from '../auth/request-person.ts';
+import { changeBy } from '../auth/request-person.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { RECORDING_ROLES, planSheetPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
 import { PLAN_BODY, planFromStore, type PlanRequest } from './plan-request.ts';
-
-/** Who records the plan, from where, and when by the server's clock (reminders count from it). */
-function changeBy(req: Request, { now }: Pick<AppContext, 'now'>) {
-  return {
-    actor: personOf(req),
-    at: now().toISOString(),
-    ...(req.ip === undefined ? {} : { ip: req.ip }),
-  };
-}
 
 /**
  * /api/plans: plan N units of an assembly for a service day (every signed-in role), and record
