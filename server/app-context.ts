@@ -7,6 +7,7 @@ import type { InvitationRepository } from './invitations/invitation-repository.t
 import type { MailService } from './mail/mail-service.ts';
 import type { PeopleRepository } from './people/people-repository.ts';
 import type { ReminderPrefsRepository } from './reminders/reminder-prefs-repository.ts';
+import type { Records } from './records/records.ts';
 
 /** What the routers share: settings, the database and the repositories. */
 export interface AppContext {
@@ -16,6 +17,8 @@ export interface AppContext {
   readonly audit: AuditRepository;
   readonly formulas: FormulaStore;
   readonly batches: BatchRepository;
+  /** Record keeping: the one way the routers record and read batches, plans and people. */
+  readonly records: Records;
   /** The outbox and its delivery (server/mail). */
   readonly mail: MailService;
   readonly invitations: InvitationRepository;

@@ -4,12 +4,14 @@ import { AuditRepository } from './audit/audit-repository.ts';
 import { BatchRepository } from './batches/batch-repository.ts';
 import type { ServerConfig } from './config.ts';
 import { openDatabase } from './db/database.ts';
+import { FormulaHistory } from './formulas/formula-history.ts';
 import { FormulaStore } from './formulas/formula-store.ts';
 import { removeStaleTemporaries } from './formulas/stale-temporaries.ts';
 import { InvitationRepository } from './invitations/invitation-repository.ts';
 import { openMail } from './mail/mail-service.ts';
 import { PeopleRepository } from './people/people-repository.ts';
 import { ReminderPrefsRepository } from './reminders/reminder-prefs-repository.ts';
+import { Records } from './records/records.ts';
 
 /**
  * Opens the database and builds the repositories the routers share; used by main and the tests.
@@ -28,13 +30,19 @@ export async function openContext(
   }
   const db = await openDatabase(config.databaseFile, { busyTimeoutMs: config.busyTimeoutMs });
   const audit = new AuditRepository(db);
+  const people = new PeopleRepository(db);
+  const formulas = new FormulaStore(config.formulasDir, { watch: true });
+  const batches = new BatchRepository(db, audit, config.workflow);
+  // Reading through the history records the revision a batch is made from, if it is new on disk.
+  const history = new FormulaHistory(formulas, db, audit);
   return {
     config,
     db,
-    people: new PeopleRepository(db),
+    people,
     audit,
-    formulas: new FormulaStore(config.formulasDir, { watch: true }),
-    batches: new BatchRepository(db, audit, config.workflow),
+    formulas,
+    batches,
+    records: new Records({ db, audit, people, batches, history }),
     mail: openMail(db, config, now),
     invitations: new InvitationRepository(db, now),
     reminderPrefs: new ReminderPrefsRepository(db),

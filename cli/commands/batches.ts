@@ -1,32 +1,9 @@
 import { Command } from 'commander';
-import type { BatchPage, BatchStatus } from '../../shared/api/batch-record.ts';
-import type { PresentedResult } from '../../shared/index.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
 import { textTable } from '../output/text-table.ts';
-
-/** The parts of a batch `show` prints. */
-interface BatchView {
-  lotCode: string;
-  formula: { id: string; revision: string; title: string };
-  kind: string;
-  status: BatchStatus;
-  operator: { id: number; displayName: string };
-  startedOn: string;
-  readyOn: string | null;
-  checksPassed: boolean;
-  signedOff: { by: { id: number; displayName: string }; at: string } | null;
-  result: PresentedResult;
-  events?: {
-    at: string;
-    type: string;
-    actor: { displayName: string } | null;
-    from: string | null;
-    to: string | null;
-    reason: string | null;
-  }[];
-}
+import { recordKeeper, serverOf } from '../records/record-keeper.ts';
 
 const FILTERS = [
   'formula',
@@ -52,10 +29,6 @@ interface ShowOptions {
 interface ListOptions extends Partial<Record<(typeof FILTERS)[number], string>> {
   server?: string;
   json?: boolean;
-}
-
-function serverOf(options: { server?: string }): string | undefined {
-  return options.server ?? process.env.LARDER_SERVER;
 }
 
 /** `larder batches list|show`: read the batch log, on this machine or on a server. */
@@ -85,24 +58,12 @@ export function batchesCommand(io: Io): Command {
     .option('--json', 'print the page as JSON')
     .addHelpText(
       'after',
-      `\nSigns in as $LARDER_USER with $LARDER_PASSWORD.\n\nExamples:\n  larder batches list --status curing,proofing\n  larder batches list --formula quillmoor-belly --from 2026-11-01 --json\n${EXIT_CODES_HELP}`,
+      `\nOn a server, signs in as $LARDER_USER with $LARDER_PASSWORD.\n\nExamples:\n  larder batches list --status curing,proofing\n  larder batches list --formula quillmoor-belly --from 2026-11-01 --json\n${EXIT_CODES_HELP}`,
     )
     .action(async (options: ListOptions) => {
       const query: Record<string, string> = {};
       for (const key of FILTERS) if (options[key] !== undefined) query[key] = options[key];
-      const server = serverOf(options);
-      let page: BatchPage;
-      if (server) {
-        const { callServer } = await import('../remote/server-client.ts');
-        page = await callServer<BatchPage>(
-          { url: server },
-          'GET',
-          `/api/batches?${new URLSearchParams(query)}`,
-        );
-      } else {
-        const { listLocally } = await import('../local/batches-local.ts');
-        page = await listLocally(query);
-      }
+      const page = await (await recordKeeper(serverOf(options.server))).listBatches(query);
       if (options.json) return io.out(`${JSON.stringify(page, null, 2)}\n`);
       const rows = page.items.map((b) => [
         b.lotCode,
@@ -145,26 +106,14 @@ export function batchesCommand(io: Io): Command {
     .option('--force', 'with --pdf: replace the file if it exists')
     .addHelpText(
       'after',
-      `\nSigns in as $LARDER_USER with $LARDER_PASSWORD.\n\nExamples:\n  larder batches show 261202-QB-01\n  larder batches show 261202-QB-01 --pdf 261202-QB-01.pdf\n${EXIT_CODES_HELP}`,
+      `\nOn a server, signs in as $LARDER_USER with $LARDER_PASSWORD.\n\nExamples:\n  larder batches show 261202-QB-01\n  larder batches show 261202-QB-01 --pdf 261202-QB-01.pdf\n${EXIT_CODES_HELP}`,
     )
     .action(async (lot: string, options: ShowOptions) => {
       if (options.force && !options.pdf) throw new CliError('--force goes with --pdf', EXIT.usage);
       const pdf = options.pdf ? { file: options.pdf, force: !!options.force } : undefined;
       // The PDF tools load only for --pdf; the path is checked before the batch is read.
       if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
-      const server = serverOf(options);
-      let batch: BatchView;
-      if (server) {
-        const { callServer } = await import('../remote/server-client.ts');
-        ({ batch } = await callServer<{ batch: BatchView }>(
-          { url: server },
-          'GET',
-          `/api/batches/${encodeURIComponent(lot)}`,
-        ));
-      } else {
-        const { showLocally } = await import('../local/batches-local.ts');
-        batch = (await showLocally(lot)) as unknown as BatchView;
-      }
+      const batch = await (await recordKeeper(serverOf(options.server))).showBatch(lot);
       if (pdf)
         await (await import('../output/pdf-file.ts')).writeBatchSheet(pdf, batch.result, batch);
       if (options.json) return io.out(`${JSON.stringify(batch, null, 2)}\n`);
@@ -184,7 +133,7 @@ export function batchesCommand(io: Io): Command {
           e.at,
           e.type,
           e.from && e.to ? `${e.from} → ${e.to}` : (e.to ?? ''),
-          e.actor?.displayName ?? '',
+          e.by?.displayName ?? '',
           e.reason ?? '',
         ]);
         io.out(`${textTable(rows, ['left', 'left', 'left', 'left', 'left']).join('\n')}\n`);

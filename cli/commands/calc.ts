@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import { Command, InvalidArgumentError, Option } from 'commander';
-import type { Batch } from '../../shared/api/batch-record.ts';
 import type { PdfTarget } from '../output/pdf-file.ts';
 import {
   BatchError,
@@ -15,6 +15,7 @@ import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import { formulasFolder, loadFormula } from '../formula-files.ts';
 import { today, type Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
+import { recordKeeper, serverOf } from '../records/record-keeper.ts';
 
 /** Batch options: flag, value name, help. Commander turns --largest-piece into largestPiece. */
 const BATCH_OPTIONS: readonly [keyof RawBatchOptions, string, string][] = [
@@ -208,7 +209,7 @@ async function runCalc(reference: string, options: CalcOptions, io: Io): Promise
   if (pdf) {
     const [{ writeBatchSheet }, { revisionOf }] = await Promise.all([
       import('../output/pdf-file.ts'),
-      import('../../server/formulas/formula-files.ts'),
+      import('../../files/revision.ts'),
     ]);
     const revision = revisionOf(readFileSync(file, 'utf8'));
     await writeBatchSheet(pdf, presented, undefined, { revision });
@@ -236,27 +237,15 @@ async function recordBatch(
   pdf: PdfTarget | undefined,
   io: Io,
 ): Promise<void> {
-  const serverUrl = options.server ?? process.env.LARDER_SERVER;
-  const request = {
+  const keeper = await recordKeeper(serverOf(options.server));
+  const batch = await keeper.recordBatch({
     formula: formulaId,
+    folder: path.dirname(path.resolve(file)),
     batch: raw,
     units: options.units,
     ...(options.status ? { status: options.status } : {}),
     ...(options.notes ? { notes: options.notes } : {}),
-  };
-  let batch: Batch;
-  if (serverUrl) {
-    const { callServer } = await import('../remote/server-client.ts');
-    ({ batch } = await callServer<{ batch: Batch }>(
-      { url: serverUrl },
-      'POST',
-      '/api/batches',
-      request,
-    ));
-  } else {
-    const { recordLocally } = await import('../local/batches-local.ts');
-    batch = await recordLocally({ ...request, formulaFile: file, formulaId }, today());
-  }
+  });
   if (pdf) {
     try {
       await (await import('../output/pdf-file.ts')).writeBatchSheet(pdf, batch.result, batch);
@@ -269,7 +258,7 @@ async function recordBatch(
     }
   }
   if (options.json) return io.out(`${JSON.stringify(batch, null, 2)}\n`);
-  const recorded = `Recorded: lot ${batch.lotCode} · ${batch.status} · by ${batch.operator.displayName}${serverUrl ? ` · on ${serverUrl}` : ''}\n`;
+  const recorded = `Recorded: lot ${batch.lotCode} · ${batch.status} · by ${batch.operator.displayName}${keeper.server ? ` · on ${keeper.server}` : ''}\n`;
   if (pdf) io.out(`${recorded}${sheetWritten(pdf, batch.result)}`);
   else io.out(`${renderBatchSheet(batch.result)}\n${recorded}`);
 }

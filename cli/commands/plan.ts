@@ -19,6 +19,7 @@ import { formulaFilesIn, formulasFolder, loadFormula, readFormulaFile } from '..
 import { today, type Io } from '../io.ts';
 import type { PdfTarget } from '../output/pdf-file.ts';
 import { renderPlanSheet } from '../output/plan-sheet.ts';
+import { recordKeeper, serverOf } from '../records/record-keeper.ts';
 
 interface PlanOptions {
   count: string;
@@ -156,18 +157,11 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
     : undefined;
   // The file is checked before anything is recorded, so a bad path records nothing.
   if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
-  const serverUrl = options.record ? (options.server ?? process.env.LARDER_SERVER) : undefined;
-  if (serverUrl && options.today) {
-    throw new CliError(
-      '--today cannot be used with --server: the server plans from its own today',
-      EXIT.usage,
-    );
-  }
   // A recorded batch's lot code carries its start day; a pretended today could put it a century
   // off, where its two-digit year reads as this one.
   if (options.record && options.today) {
     throw new CliError(
-      '--today cannot be used with --record: recorded batches start from this machine’s today',
+      '--today cannot be used with --record: recorded batches start from today (the server’s, with --server)',
       EXIT.usage,
     );
   }
@@ -179,52 +173,49 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
       EXIT.usage,
     );
   }
-  if (serverUrl) {
-    const { callServer } = await import('../remote/server-client.ts');
-    const request = { assembly: formula.id, count, for: serviceDate, units: options.units };
-    const answer = await callServer<{ plan: PresentedPlan; batches: RecordedBatch[] }>(
-      { url: serverUrl },
-      'POST',
-      '/api/plans/record',
-      request,
-    );
-    if (pdf) await writePlanPdf(pdf, answer.plan);
-    return printRecorded(answer.plan, answer.batches, io, options.json === true, serverUrl, pdf);
-  }
-
   // The formulas the assembly names: --formulas, else the folder of the assembly's own file.
   const folder = options.formulas ?? (isPath(reference) ? path.dirname(file) : formulasFolder());
-  let plan: PlanResult;
-  try {
-    plan = planAssembly(formula, libraryIn(folder, file, io), {
+  const plan = (): PlanResult => {
+    try {
+      return planAssembly(formula, libraryIn(folder, file, io), {
+        count,
+        serviceDate,
+        today: planned,
+      });
+    } catch (error) {
+      if (error instanceof PlanError) throw planFailure(error);
+      throw error;
+    }
+  };
+  if (options.record) {
+    const keeper = await recordKeeper(serverOf(options.server));
+    const recorded = await keeper.recordPlan({
+      assembly: formula.id,
       count,
       serviceDate,
-      today: planned,
+      units: options.units,
+      folder,
+      plan,
     });
-  } catch (error) {
-    if (error instanceof PlanError) throw planFailure(error);
-    throw error;
+    if (pdf) await writePlanPdf(pdf, recorded.plan);
+    return printRecorded(
+      recorded.plan,
+      recorded.batches,
+      io,
+      options.json === true,
+      keeper.server,
+      pdf,
+    );
   }
-  const presented = presentPlan(plan, options.units);
-  if (!options.record) {
-    if (pdf) await writePlanPdf(pdf, presented);
-    if (options.json) io.out(`${JSON.stringify(presented, null, 2)}\n`);
-    else io.out(pdf ? `Wrote the plan to ${pdf.file}\n` : renderPlanSheet(presented));
-    return;
-  }
-  const { recordPlanLocally } = await import('../local/plans-local.ts');
-  const batches = await recordPlanLocally(plan, folder, options.units);
+  const presented = presentPlan(plan(), options.units);
   if (pdf) await writePlanPdf(pdf, presented);
-  printRecorded(presented, batches, io, options.json === true, undefined, pdf);
+  if (options.json) io.out(`${JSON.stringify(presented, null, 2)}\n`);
+  else io.out(pdf ? `Wrote the plan to ${pdf.file}\n` : renderPlanSheet(presented));
 }
 
 /** Renders the plan's sheets and writes them whole (the PDF stack loads only here). */
 async function writePlanPdf(target: PdfTarget, plan: PresentedPlan): Promise<void> {
-  const [{ writePdf }, { renderPlanSheetPdf }] = await Promise.all([
-    import('../output/pdf-file.ts'),
-    import('../../server/pdf/plan-sheet-pdf.ts'),
-  ]);
-  await writePdf(target, await renderPlanSheetPdf(plan));
+  await (await import('../output/pdf-file.ts')).writePlanSheet(target, plan);
 }
 
 function printRecorded(

@@ -1,8 +1,8 @@
 import { existsSync, renameSync, rmSync, statSync } from 'node:fs';
 import path from 'node:path';
-import { openDatabase } from '../../server/db/database.ts';
-import { loadConfig } from '../../server/config.ts';
+import { RecordsError, openRecords, recordsFile } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
+import { cliErrorOf } from '../records/records-failure.ts';
 
 /** What a finished backup holds, read back from the copy itself. */
 export interface BackupSummary {
@@ -14,17 +14,16 @@ export interface BackupSummary {
 }
 
 /**
- * Copies this machine's database to `target` while the server may be running: SQLite's
- * VACUUM INTO writes a consistent copy from one read transaction, without stopping writers.
- * The copy is written beside the target under a temporary name, checked (integrity_check) and
+ * Copies this machine's database to `target` while the server may be running, consistent
+ * without stopping writers. The copy is written beside the target under a temporary name, checked (integrity_check) and
  * only then renamed, so a backup file is never half-written. An existing file is never replaced.
  */
 export async function backupDatabase(target: string): Promise<BackupSummary> {
   let source: string;
   try {
-    source = loadConfig().databaseFile;
+    source = recordsFile();
   } catch (error) {
-    throw new CliError((error as Error).message, EXIT.usage);
+    throw error instanceof RecordsError ? cliErrorOf(error, 'backup') : error;
   }
   const file = path.resolve(target);
   if (!existsSync(source))
@@ -38,11 +37,11 @@ export async function backupDatabase(target: string): Promise<BackupSummary> {
     throw new CliError(`the folder ${path.dirname(file)} does not exist`, EXIT.usage);
   const partial = path.join(path.dirname(file), `.${path.basename(file)}.${process.pid}.partial`);
   try {
-    const db = await openDatabase(source);
+    const records = await openRecords();
     try {
-      await db.sequelize.query('VACUUM INTO ?', { replacements: [partial] });
+      await records.copyTo(partial);
     } finally {
-      await db.close();
+      await records.close();
     }
     const summary = await readBack(partial);
     renameSync(partial, file);

@@ -1,9 +1,5 @@
-import { MIN_PASSWORD_LENGTH } from '../../server/auth/passwords.ts';
-import { AuditRepository } from '../../server/audit/audit-repository.ts';
-import { PeopleRepository } from '../../server/people/people-repository.ts';
-import type { Person, Role } from '../../server/people/person.ts';
-import { CliError, EXIT } from '../cli-error.ts';
-import { withLocalDatabase } from './local-database.ts';
+import { MIN_PASSWORD_LENGTH, type Person, type Role } from '../../server/records/records.ts';
+import { withLocalRecords } from '../records/local-records.ts';
 import { readNewPassword } from './read-password.ts';
 
 /** Adds a person to the local database; the way the first admin of a production install is made. */
@@ -13,52 +9,31 @@ export function addUser(options: {
   role: Role;
   email?: string;
 }): Promise<Person> {
-  return withLocalDatabase(async (db) => {
-    const people = new PeopleRepository(db);
-    if (await people.findByUsername(options.username))
-      throw new CliError(`the username "${options.username}" is taken`, EXIT.usage);
+  return withLocalRecords('users', async (records) => {
+    // A taken name is refused before a password is asked for.
+    await records.usernameFree(options.username);
     const password = await readNewPassword(MIN_PASSWORD_LENGTH);
-    return db.write(async (transaction) => {
-      const person = await people.add(
-        { ...options, email: options.email ?? null, password },
-        transaction,
-      );
-      await new AuditRepository(db).append(
-        {
-          actorName: 'larder users add (command line)',
-          action: 'person-add',
-          subject: person.username,
-          detail: { role: person.role },
-        },
-        transaction,
-      );
-      return person;
-    });
+    const { person } = await records.addPerson(
+      { ...options, email: options.email ?? null, password },
+      { actorName: 'larder users add (command line)' },
+    );
+    return person;
   });
 }
 
 /** Everyone in the local database. */
 export function listUsers(): Promise<Person[]> {
-  return withLocalDatabase((db) => new PeopleRepository(db).list());
+  return withLocalRecords('users', (records) => records.listPeople());
 }
 
 /** Sets a person's password in the local database (a locked-out admin). */
 export function setUserPassword(username: string): Promise<void> {
-  return withLocalDatabase(async (db) => {
-    const people = new PeopleRepository(db);
-    const person = await people.findByUsername(username);
-    if (!person) throw new CliError(`no person "${username}"`, EXIT.usage);
+  return withLocalRecords('users', async (records) => {
+    // An unknown name is refused before a password is asked for.
+    await records.person({ username });
     const password = await readNewPassword(MIN_PASSWORD_LENGTH);
-    await db.write(async (transaction) => {
-      await people.setPassword(person.id, password, transaction);
-      await new AuditRepository(db).append(
-        {
-          actorName: 'larder users set-password (command line)',
-          action: 'password-reset',
-          subject: username,
-        },
-        transaction,
-      );
+    await records.resetPassword({ username }, password, {
+      actorName: 'larder users set-password (command line)',
     });
   });
 }

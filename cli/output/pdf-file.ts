@@ -5,13 +5,14 @@ import {
   removeQuietly,
   writeFileAtomic,
   writeTemporary,
-} from '../../server/formulas/atomic-file.ts';
-import type { PresentedResult } from '../../shared/index.ts';
+} from '../../files/atomic-file.ts';
+import type { PresentedPlan, PresentedResult } from '../../shared/index.ts';
 import {
-  renderBatchSheetPdf,
+  batchSheetPdf,
+  planSheetPdf,
   type SheetRecord,
   type SheetSource,
-} from '../../server/pdf/batch-sheet-pdf.ts';
+} from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 
 /** What `--pdf FILE` was given with. */
@@ -95,5 +96,10 @@ export async function writeBatchSheet(
   record?: SheetRecord,
   source?: SheetSource,
 ): Promise<void> {
-  await writePdf(target, await renderBatchSheetPdf(result, record, source));
+  await writePdf(target, await batchSheetPdf(result, record, source));
+}
+
+/** Renders a plan's sheets (an overview, then one production sheet per start day) and writes them. */
+export async function writePlanSheet(target: PdfTarget, plan: PresentedPlan): Promise<void> {
+  await writePdf(target, await planSheetPdf(plan));
 }

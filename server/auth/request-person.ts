@@ -1,4 +1,5 @@
 import type { Request } from 'express';
+import type { ChangeOptions } from '../batches/batch.ts';
 import type { Person } from '../people/person.ts';
 import { AppError } from '../http/app-error.ts';
 
@@ -26,4 +27,13 @@ declare module 'express-serve-static-core' {
 export function personOf(req: Request): Person {
   if (!req.person) throw new AppError(401, 'unauthenticated', 'sign in first');
   return req.person;
+}
+
+/** Who makes a change, from where, and when by the server's clock (reminders count from it). */
+export function changeBy(req: Request, { now }: { now: () => Date }): ChangeOptions {
+  return {
+    actor: personOf(req),
+    at: now().toISOString(),
+    ...(req.ip === undefined ? {} : { ip: req.ip }),
+  };
 }

@@ -1,17 +1,14 @@
 import { Router, type Request, type RequestHandler, type Response } from 'express';
 import type { AppContext } from '../app-context.ts';
-import { FormulaHistory } from '../formulas/formula-history.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { personOf } from '../auth/request-person.ts';
+import { changeBy } from '../auth/request-person.ts';
 import { BATCH_OPTIONS_SCHEMA, UNITS_SCHEMA } from '../calc/calc-request.ts';
-import { notFound } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
+import { RECORDING_ROLES, batchSheetPdf, type RecordRequest } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
-import { BATCH_STATUSES, RECORD_STATUSES, type BatchStatus, type ChangeOptions } from './batch.ts';
+import { BATCH_STATUSES, RECORD_STATUSES, type BatchStatus } from './batch.ts';
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
 import { parseListQuery } from './batch-query.ts';
-import { LOT_CODE_PATTERN } from './lot-code.ts';
-import { prepareBatch, type RecordRequest } from './prepare-batch.ts';
 
 const RECORD_BODY = {
   type: 'object',
@@ -42,22 +39,6 @@ const SIGN_OFF_BODY = {
   properties: { note: { type: 'string', minLength: 1, maxLength: 500 } },
 } as const;
 
-/** The lot code of a route, upper-cased; 404 for anything that cannot be one. */
-function lotParam(req: Request): string {
-  const lot = String(req.params.lot).toUpperCase();
-  if (!LOT_CODE_PATTERN.test(lot)) throw notFound(`no batch with lot code ${req.params.lot}`);
-  return lot;
-}
-
-/** Who makes a change, from where, and when by the server's clock (reminders count from it). */
-function changeBy(req: Request, { now }: Pick<AppContext, 'now'>): ChangeOptions {
-  return {
-    actor: personOf(req),
-    at: now().toISOString(),
-    ...(req.ip === undefined ? {} : { ip: req.ip }),
-  };
-}
-
 /** A body-less POST counts as an empty object, so `{}` need not be sent. */
 const emptyBody: RequestHandler = (req, _res, next) => {
   req.body ??= {};
@@ -69,55 +50,47 @@ const emptyBody: RequestHandler = (req, _res, next) => {
  * move them along; admins and reviewers sign them off.
  */
 export function batchesRouter(context: AppContext): Router {
-  const { batches, formulas, db, audit, config } = context;
+  const { records, config } = context;
   const router = Router();
-  // Reading through the history records the revision a batch is made from, if it is new on disk.
-  const history = new FormulaHistory(formulas, db, audit);
+  const lotOf = (req: Request): string => String(req.params.lot);
 
   router.get('/', async (req, res) => {
-    res.json(await batches.list(parseListQuery(req.query, true)));
+    res.json(await records.listBatches(req.query));
   });
 
-  router.post('/', requireRole('admin', 'cook'), validateBody(RECORD_BODY), async (req, res) => {
-    const request = req.body as RecordRequest;
-    const operator = personOf(req);
-    const current = await history.current(request.formula);
-    const batch = await batches.record(
-      prepareBatch(current, request, operator.id, serverToday(context)),
+  router.post('/', requireRole(...RECORDING_ROLES), validateBody(RECORD_BODY), async (req, res) => {
+    const batch = await records.recordBatch(
+      req.body as RecordRequest,
+      serverToday(context),
       changeBy(req, context),
     );
     res.status(201).location(`/api/batches/${batch.lotCode}`).json({ batch });
   });
 
   router.get('/:lot', async (req, res) => {
-    const lot = lotParam(req);
-    const batch = await batches.get(lot);
-    if (!batch) throw notFound(`no batch with lot code ${lot}`);
+    const batch = await records.showBatch(lotOf(req));
     // The rules in force, so the console can say why an action is not offered.
     res.json({ batch, rules: config.workflow });
   });
 
   // The batch sheet as a PDF to print or file; pdfkit loads on the first request, not at start.
   router.get('/:lot/sheet.pdf', async (req, res) => {
-    const lot = lotParam(req);
-    const batch = await batches.get(lot);
-    if (!batch) throw notFound(`no batch with lot code ${lot}`);
-    const { renderBatchSheetPdf } = await import('../pdf/batch-sheet-pdf.ts');
-    const pdf = await renderBatchSheetPdf(batch.result, batch);
+    const batch = await records.showBatch(lotOf(req));
+    const pdf = await batchSheetPdf(batch.result, batch);
     res.setHeader('Content-Type', 'application/pdf');
-    res.setHeader('Content-Disposition', `attachment; filename="${lot}.pdf"`);
+    res.setHeader('Content-Disposition', `attachment; filename="${batch.lotCode}.pdf"`);
     res.setHeader('Cache-Control', 'no-store');
     res.send(pdf);
   });
 
   router.post(
     '/:lot/status',
-    requireRole('admin', 'cook'),
+    requireRole(...RECORDING_ROLES),
     validateBody(STATUS_BODY),
     async (req, res) => {
       const { to, reason } = req.body as { to: BatchStatus; reason?: string };
-      const batch = await batches.changeStatus(
-        lotParam(req),
+      const batch = await records.changeStatus(
+        lotOf(req),
         to,
         reason?.trim() || null,
         changeBy(req, context),
@@ -133,11 +106,7 @@ export function batchesRouter(context: AppContext): Router {
     validateBody(SIGN_OFF_BODY),
     async (req, res) => {
       const { note } = req.body as { note?: string };
-      const batch = await batches.signOff(
-        lotParam(req),
-        note?.trim() || null,
-        changeBy(req, context),
-      );
+      const batch = await records.signOff(lotOf(req), note?.trim() || null, changeBy(req, context));
       res.json({ batch });
     },
   );

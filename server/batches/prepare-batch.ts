@@ -1,7 +1,7 @@
 import { criticalFailures, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import { calculateBatch } from '../calc/calc-request.ts';
 import type { CurrentFormula } from '../formulas/formula-store.ts';
-import { AppError } from '../http/app-error.ts';
+import { RecordsError } from '../records/records-error.ts';
 import type { NewBatch, RECORD_STATUSES } from './batch.ts';
 
 /** What a cook sends to record a batch: the same options as a calculation, and the status. */
@@ -23,7 +23,7 @@ export interface RecordRequest {
  * @param today the recorder's today, YYYY-MM-DD: the start day when the request gives none, and
  *   the middle of the days a start may lie in (a year either side)
  * @throws AppError 400 for batch options that cannot make a batch (a start day out of range among
- *   them), 422 'critical-limit' when refused
+ *   them); RecordsError 'critical-limit' when refused
  */
 export function prepareBatch(
   current: CurrentFormula,
@@ -39,8 +39,8 @@ export function prepareBatch(
   if (formula.kind === 'assembly') throw new Error('an assembly is not a batch');
   if (result.critical) {
     const failed = criticalFailures(result.checks);
-    throw new AppError(
-      422,
+    throw new RecordsError(
+      'refused',
       'critical-limit',
       `the batch is refused and was not recorded: ${failed.map((check) => check.sentence).join('; ')}`,
       failed.map((check) => ({

@@ -1,4 +1,3 @@
-import { createHash } from 'node:crypto';
 import { readdirSync, statSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
@@ -8,6 +7,7 @@ import {
   readFormula,
   type FormulaReading,
 } from '../../shared/index.ts';
+import { revisionOf } from '../../files/revision.ts';
 
 /** One formula file as it is on disk now. */
 export interface FormulaFile {
@@ -18,11 +18,6 @@ export interface FormulaFile {
   /** sha-256 of the text: the revision, and the ETag clients send back in If-Match. */
   readonly revision: string;
   readonly reading: FormulaReading;
-}
-
-/** The revision of a formula text: its sha-256 in hex. */
-export function revisionOf(text: string): string {
-  return createHash('sha256').update(text, 'utf8').digest('hex');
 }
 
 /** What identifies one state of a file on disk: when a save or a git pull changes it, this changes. */

@@ -11,15 +11,10 @@ import {
   replaceWith,
   writeFileAtomic,
   writeTemporary,
-} from './atomic-file.ts';
+} from '../../files/atomic-file.ts';
 import { staleRevision, usableFormula } from './formula-checks.ts';
-import {
-  formulaIdOf,
-  isFormulaId,
-  readFormulaFileAt,
-  revisionOf,
-  type FormulaFile,
-} from './formula-files.ts';
+import { formulaIdOf, isFormulaId, readFormulaFileAt, type FormulaFile } from './formula-files.ts';
+import { revisionOf } from '../../files/revision.ts';
 import { commitFormulaFile } from './formula-git.ts';
 import type { FormulaHistory } from './formula-history.ts';
 import type { FormulaStore } from './formula-store.ts';

@@ -12,13 +12,8 @@ import {
 import { badRequest, notFound } from '../http/app-error.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { validateBody } from '../http/validate-body.ts';
-import {
-  filesById,
-  formulaFacts,
-  formulaIdOf,
-  revisionOf,
-  type FormulaFile,
-} from './formula-files.ts';
+import { filesById, formulaFacts, formulaIdOf, type FormulaFile } from './formula-files.ts';
+import { revisionOf } from '../../files/revision.ts';
 import { refuseOverLimit } from './formula-checks.ts';
 import { FormulaHistory, type FormulaRevision } from './formula-history.ts';
 import {

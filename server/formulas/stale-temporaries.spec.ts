@@ -3,7 +3,7 @@ import { existsSync, mkdirSync, readdirSync, utimesSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
 import { makeTempDir, writeText } from '../../tests/helpers/temp-files.ts';
-import { writeTemporary } from './atomic-file.ts';
+import { writeTemporary } from '../../files/atomic-file.ts';
 import {
   STALE_TEMPORARY_MS,
   isFormulaTemporary,

@@ -1,6 +1,6 @@
 import { readdir, stat, unlink } from 'node:fs/promises';
 import path from 'node:path';
-import { temporaryTarget } from './atomic-file.ts';
+import { temporaryTarget } from '../../files/atomic-file.ts';
 
 /**
  * How old a save's temporary file must be before it counts as left over. A save writes, flushes

@@ -1,6 +1,8 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { BatchError } from '../../shared/index.ts';
+import { RecordsError } from '../records/records-error.ts';
 import { AppError } from './app-error.ts';
+import { appErrorOf } from './failure-status.ts';
 import { RetryLaterError } from './retry-later.ts';
 
 /** JSON 404 for any /api route nobody answered. */
@@ -70,6 +72,8 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, _req, res, nex
     appError = error;
     if (error instanceof RetryLaterError)
       res.setHeader('Retry-After', String(error.retryAfterSeconds));
+  } else if (error instanceof RecordsError) {
+    appError = appErrorOf(error);
   } else if (storage) {
     // For whoever looks after the server; the message is SQLite's, without the SQL.
     console.error(`database: ${(error as Error).message}`); // eslint-disable-line no-console -- the server log is the place for it

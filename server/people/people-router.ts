@@ -67,14 +67,9 @@ function idParam(req: Request): number {
   return id;
 }
 
-/** Whether an error is SQLite refusing a second person with the same username. */
-function isUsernameTaken(error: unknown): boolean {
-  return (error as { name?: string }).name === 'SequelizeUniqueConstraintError';
-}
-
 /** /api/people: admins manage people; anyone changes their own password. */
 export function peopleRouter(context: AppContext): Router {
-  const { db, people, audit, mail } = context;
+  const { db, people, audit, mail, records } = context;
   const router = Router();
 
   router.put('/me/password', validateBody(OWN_PASSWORD_BODY), async (req, res) => {
@@ -116,29 +111,14 @@ export function peopleRouter(context: AppContext): Router {
       password?: string;
     };
     const password = body.password ?? randomPassword();
-    const taken = conflict('username-taken', `the username "${body.username}" is taken`);
-    const { person, invitation } = await db.write(async (transaction) => {
-      // Checked inside the write, so two adds of one name at once cannot both pass.
-      if (await people.findByUsername(body.username, transaction)) throw taken;
-      const added = await people.add({ ...body, password }, transaction).catch((error: unknown) => {
-        throw isUsernameTaken(error) ? taken : error;
-      });
-      await audit.append(
-        {
-          actor: personOf(req),
-          action: 'person-add',
-          subject: added.username,
-          detail: { role: added.role },
-          ip: req.ip,
-        },
-        transaction,
-      );
+    const by = { actor: personOf(req), ip: req.ip };
+    const { person, alongside: invitation } = await records.addPerson(
+      { ...body, email: body.email ?? null, password },
+      by,
       // With an address, an invitation to set their own password goes out with the add.
-      const sent: InvitationSent | null = added.email
-        ? await sendInvitation(context, transaction, added, { actor: personOf(req), ip: req.ip })
-        : null;
-      return { person: added, invitation: sent };
-    });
+      async (transaction, added): Promise<InvitationSent | null> =>
+        added.email ? sendInvitation(context, transaction, added, by) : null,
+    );
     if (invitation) mail.delivery.kick();
     // A generated password is shown this once, for the admin to pass on.
     res.status(201).json({ person, ...(body.password ? {} : { password }), invitation });
@@ -196,15 +176,7 @@ export function peopleRouter(context: AppContext): Router {
     const id = idParam(req);
     const given = (req.body as { password?: string }).password;
     const password = given ?? randomPassword();
-    await db.write(async (transaction) => {
-      const person = await people.findById(id, transaction);
-      if (!person) throw notFound(`no person with id ${id}`);
-      await people.setPassword(id, password, transaction);
-      await audit.append(
-        { actor: personOf(req), action: 'password-reset', subject: person.username, ip: req.ip },
-        transaction,
-      );
-    });
+    await records.resetPassword({ id }, password, { actor: personOf(req), ip: req.ip });
     res.json(given ? {} : { password });
   });
 

@@ -1,22 +1,12 @@
-import { Router, type Request } from 'express';
+import { Router } from 'express';
 import { presentPlan } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { personOf } from '../auth/request-person.ts';
-import { FormulaHistory } from '../formulas/formula-history.ts';
+import { changeBy } from '../auth/request-person.ts';
 import { validateBody } from '../http/validate-body.ts';
+import { RECORDING_ROLES, planSheetPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
 import { PLAN_BODY, planFromStore, type PlanRequest } from './plan-request.ts';
-import { recordPlan } from './record-plan.ts';
-
-/** Who records the plan, from where, and when by the server's clock (reminders count from it). */
-function changeBy(req: Request, { now }: Pick<AppContext, 'now'>) {
-  return {
-    actor: personOf(req),
-    at: now().toISOString(),
-    ...(req.ip === undefined ? {} : { ip: req.ip }),
-  };
-}
 
 /**
  * /api/plans: plan N units of an assembly for a service day (every signed-in role), and record
@@ -24,9 +14,8 @@ function changeBy(req: Request, { now }: Pick<AppContext, 'now'>) {
  * reason, naming the formula; nothing is recorded.
  */
 export function plansRouter(context: AppContext): Router {
-  const { formulas, batches, db, audit } = context;
+  const { formulas, records } = context;
   const router = Router();
-  const history = new FormulaHistory(formulas, db, audit);
 
   router.post('/', validateBody(PLAN_BODY), async (req, res) => {
     const request = req.body as PlanRequest;
@@ -42,8 +31,7 @@ export function plansRouter(context: AppContext): Router {
       request.units ?? 'metric',
     );
     // pdfkit loads on the first sheet, not at start.
-    const { renderPlanSheetPdf } = await import('../pdf/plan-sheet-pdf.ts');
-    const pdf = await renderPlanSheetPdf(plan);
+    const pdf = await planSheetPdf(plan);
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader(
       'Content-Disposition',
@@ -55,19 +43,13 @@ export function plansRouter(context: AppContext): Router {
 
   router.post(
     '/record',
-    requireRole('admin', 'cook'),
+    requireRole(...RECORDING_ROLES),
     validateBody(PLAN_BODY),
     async (req, res) => {
       const request = req.body as PlanRequest;
       const plan = await planFromStore(formulas, request, serverToday(context));
       const units = request.units ?? 'metric';
-      const recorded = await recordPlan(
-        plan,
-        units,
-        personOf(req).id,
-        { history, batches },
-        changeBy(req, context),
-      );
+      const recorded = await records.recordPlan(plan, units, changeBy(req, context));
       res.status(201).json({ plan: presentPlan(plan, units), batches: recorded });
     },
   );

@@ -1,0 +1,52 @@
+import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
+import type { PlanResult, PresentedPlan, RawBatchOptions, UnitSystem } from '../../shared/index.ts';
+
+/** A batch to record, as `larder calc --record` gives it. */
+export interface BatchToRecord {
+  readonly formula: string;
+  /** The folder of the formula's file, where this machine's records read it again. */
+  readonly folder: string;
+  readonly batch: RawBatchOptions;
+  readonly units: UnitSystem;
+  readonly status?: 'planned' | 'in-progress';
+  readonly notes?: string;
+}
+
+/** A plan to record, as `larder plan --record` gives it. */
+export interface PlanToRecord {
+  readonly assembly: string;
+  readonly count: number;
+  readonly serviceDate: string;
+  readonly units: UnitSystem;
+  /** The formulas folder the plan is made from on this machine. */
+  readonly folder: string;
+  /** Makes the plan on this machine, from today; a server makes its own. */
+  readonly plan: () => PlanResult;
+}
+
+/**
+ * The batch log, kept on this machine or on a Larderbook server: the verbs use it without
+ * knowing which. Failures come as the command's errors, with its exit codes.
+ */
+export interface RecordKeeper {
+  /** The server's URL, or undefined for this machine. */
+  readonly server: string | undefined;
+  recordBatch(request: BatchToRecord): Promise<Batch>;
+  recordPlan(request: PlanToRecord): Promise<{ plan: PresentedPlan; batches: Batch[] }>;
+  listBatches(query: Record<string, string>): Promise<BatchPage>;
+  showBatch(lot: string): Promise<Batch>;
+}
+
+/** The server a verb works with: --server, else $LARDER_SERVER, else none (this machine). */
+export function serverOf(option: string | undefined): string | undefined {
+  return option ?? process.env.LARDER_SERVER;
+}
+
+/**
+ * The records on `server`, or on this machine when there is none. Each side loads when first
+ * asked for: this machine's with the database stack.
+ */
+export async function recordKeeper(server: string | undefined): Promise<RecordKeeper> {
+  if (server) return new (await import('./server-records.ts')).ServerRecords(server);
+  return new (await import('./local-records.ts')).LocalRecords();
+}

@@ -1,0 +1,75 @@
+import { FORMULA_REFUSALS, type PlanRefusal } from '../../shared/index.ts';
+import type { RecordsFailure } from '../../server/records/records.ts';
+import { CliError, EXIT } from '../cli-error.ts';
+
+/** What a larder verb does with the records; each says its failures in its own words. */
+export type RecordsVerb = 'record' | 'list' | 'show' | 'users' | 'backup';
+
+/** A failure of record keeping, from this machine's records or a server's answer. */
+export interface RecordsFailureFacts {
+  readonly kind: RecordsFailure;
+  readonly code: string;
+  readonly message: string;
+  readonly details: readonly unknown[];
+}
+
+/** What is not there: the formula of a batch being recorded (exit 3), else what was asked for (2). */
+const NOT_FOUND_EXIT: Readonly<Record<RecordsVerb, number>> = {
+  record: EXIT.formula,
+  list: EXIT.usage,
+  show: EXIT.usage,
+  users: EXIT.usage,
+  backup: EXIT.usage,
+};
+
+/** Whether a refusal is a formula file's fault: its errors, or a plan refused over one. */
+function formulaAtFault({ code, details }: RecordsFailureFacts): boolean {
+  if (code === 'invalid-formula') return true;
+  const reason = (details[0] as { reason?: unknown } | undefined)?.reason;
+  return code === 'plan-refused' && FORMULA_REFUSALS.includes(reason as PlanRefusal);
+}
+
+/** The exit code of a failure: a refused batch 4, a formula at fault 3, else as the verb says. */
+function exitCodeOf(failure: RecordsFailureFacts, verb: RecordsVerb): number {
+  if (failure.code === 'critical-limit') return EXIT.critical;
+  if (formulaAtFault(failure)) return EXIT.formula;
+  if (failure.kind === 'not-found') return NOT_FOUND_EXIT[verb];
+  return EXIT.usage;
+}
+
+/** A detail as a line under the message: a check's or problem's sentence, else its JSON. */
+function lineOf(detail: unknown): string {
+  return typeof detail === 'object' && detail && 'sentence' in detail
+    ? String(detail.sentence)
+    : JSON.stringify(detail);
+}
+
+/**
+ * The one place record keeping's failures become the command's: the exit code and the lines
+ * under the message. A refused batch's message already names every failed check.
+ */
+export function cliErrorOf(failure: RecordsFailureFacts, verb: RecordsVerb): CliError {
+  const details = failure.code === 'critical-limit' ? [] : failure.details.map(lineOf);
+  return new CliError(failure.message, exitCodeOf(failure, verb), details);
+}
+
+/** The verbs that act as a person, and how each asks for them. */
+const WHO = {
+  record: 'say who is recording',
+  list: 'say who is reading',
+  show: 'say who is reading',
+} as const;
+
+/** A verb that acts as a person: recording, or reading a server's log. */
+export type PersonVerb = keyof typeof WHO;
+
+/**
+ * The person a verb needs is not given: set LARDER_USER and LARDER_PASSWORD (to sign in to the
+ * server at `url`, when it is one).
+ */
+export function personNeeded(verb: PersonVerb, url?: string): CliError {
+  return new CliError(
+    `${WHO[verb]}: set LARDER_USER and LARDER_PASSWORD${url ? ` to sign in to the server at ${url}` : ''}`,
+    EXIT.usage,
+  );
+}

@@ -1,0 +1,194 @@
+// The back end's one door to the records: the API's routers and the larder command both keep
+// records through it. It loads light; the database stack and the PDF stack load when first used.
+import type { Transaction } from 'sequelize';
+import type { PlanResult, PresentedPlan, PresentedResult, UnitSystem } from '../../shared/index.ts';
+import type { AuditRepository } from '../audit/audit-repository.ts';
+import { MIN_PASSWORD_LENGTH } from '../auth/passwords.ts';
+import type { Batch, BatchPage, BatchStatus, ChangeOptions } from '../batches/batch.ts';
+import type { BatchRepository } from '../batches/batch-repository.ts';
+import type { RecordRequest } from '../batches/prepare-batch.ts';
+import { lotCodeOf, listBatches, showBatch } from '../batches/read-batches.ts';
+import { recordBatch } from '../batches/record-batch.ts';
+import { loadConfig } from '../config.ts';
+import type { Database } from '../db/database.ts';
+import type { FormulaHistory } from '../formulas/formula-history.ts';
+import type { SheetRecord, SheetSource } from '../pdf/batch-sheet-pdf.ts';
+import {
+  addPerson,
+  usernameTaken,
+  type AuditedBy,
+  type NewPersonRequest,
+} from '../people/add-person.ts';
+import type { PeopleRepository } from '../people/people-repository.ts';
+import type { Person, Role } from '../people/person.ts';
+import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-password.ts';
+import { recordPlan } from '../plans/record-plan.ts';
+import { RecordsError, recordsErrorOf } from './records-error.ts';
+
+export { RecordsError, type RecordsFailure } from './records-error.ts';
+export { failureOfStatus } from '../http/failure-status.ts';
+export type {
+  AuditedBy,
+  Batch,
+  BatchPage,
+  NewPersonRequest,
+  Person,
+  PersonKey,
+  RecordRequest,
+  Role,
+};
+export type { SheetRecord, SheetSource };
+
+/** The fewest characters a password may have. */
+export { MIN_PASSWORD_LENGTH };
+
+/** The roles that record batches and plans; every role reads the log. */
+export const RECORDING_ROLES: readonly Role[] = ['admin', 'cook'];
+
+/** What record keeping works with: the database, its repositories and the formulas' history. */
+export interface RecordsDeps {
+  readonly db: Database;
+  readonly audit: AuditRepository;
+  readonly people: PeopleRepository;
+  readonly batches: BatchRepository;
+  /** The formulas batches are calculated from, each revision noted as it is first used. */
+  readonly history: FormulaHistory;
+}
+
+/**
+ * Record keeping: batches and plans recorded, the batch log read, people and their passwords.
+ * Every failure is a {@link RecordsError}, which the API answers with an HTTP status and the
+ * command with an exit code; anything else is a fault (a database that cannot be written).
+ */
+export class Records {
+  constructor(private readonly deps: RecordsDeps) {}
+
+  /** Records one batch calculated from its formula's current revision; refused over a critical limit. */
+  recordBatch(request: RecordRequest, today: string, by: ChangeOptions): Promise<Batch> {
+    return this.guard(() => recordBatch(request, today, this.deps, by));
+  }
+
+  /** Records every batch of a plan as planned, all or nothing; earliest start first. */
+  recordPlan(plan: PlanResult, units: UnitSystem, by: ChangeOptions): Promise<Batch[]> {
+    return this.guard(() => recordPlan(plan, units, by.actor.id, this.deps, by));
+  }
+
+  /** A page of the batch log, filtered and sorted as the query says (formula, status, from…). */
+  listBatches(query: Record<string, unknown>): Promise<BatchPage> {
+    return this.guard(() => listBatches(query, this.deps.batches));
+  }
+
+  /** One batch with its events, by lot code in either case. */
+  showBatch(lot: string): Promise<Batch> {
+    return this.guard(() => showBatch(lot, this.deps.batches));
+  }
+
+  /** Moves a batch along its status machine under the workflow rules. */
+  changeStatus(
+    lot: string,
+    to: BatchStatus,
+    reason: string | null,
+    by: ChangeOptions,
+  ): Promise<Batch> {
+    return this.guard(() => this.deps.batches.changeStatus(lotCodeOf(lot), to, reason, by));
+  }
+
+  /** Signs a batch off, with an optional note. */
+  signOff(lot: string, note: string | null, by: ChangeOptions): Promise<Batch> {
+    return this.guard(() => this.deps.batches.signOff(lotCodeOf(lot), note, by));
+  }
+
+  /** The active person with this username and password, if there is one. */
+  signIn(username: string, password: string): Promise<Person | undefined> {
+    return this.guard(() => this.deps.people.authenticate(username, password));
+  }
+
+  /** Everyone, active or not. */
+  listPeople(): Promise<Person[]> {
+    return this.guard(() => this.deps.people.list());
+  }
+
+  /** The person a key names; not found when there is none. */
+  person(key: PersonKey): Promise<Person> {
+    return this.guard(() => mustFindPerson(key, this.deps.people));
+  }
+
+  /** Refuses a username someone has already, before a password is asked for. */
+  async usernameFree(username: string): Promise<void> {
+    if (await this.guard(() => this.deps.people.findByUsername(username)))
+      throw usernameTaken(username);
+  }
+
+  /** Adds a person with their audit entry; `alongside` runs in the same write. */
+  addPerson<T = undefined>(
+    request: NewPersonRequest,
+    by: AuditedBy,
+    alongside?: (transaction: Transaction, added: Person) => Promise<T>,
+  ): Promise<{ person: Person; alongside: T | undefined }> {
+    return this.guard(() => addPerson(request, by, this.deps, alongside));
+  }
+
+  /** Sets another person's password, with its audit entry. */
+  resetPassword(key: PersonKey, password: string, by: AuditedBy): Promise<void> {
+    return this.guard(() => resetPassword(key, password, by, this.deps));
+  }
+
+  /**
+   * Writes a consistent copy of the whole database to `file` while others may write: SQLite's
+   * VACUUM INTO copies from one read transaction without stopping writers.
+   */
+  async copyTo(file: string): Promise<void> {
+    await this.deps.db.sequelize.query('VACUUM INTO ?', { replacements: [file] });
+  }
+
+  /** Closes the database. */
+  close(): Promise<void> {
+    return this.deps.db.close();
+  }
+
+  /** Runs a use case with its failures in record keeping's terms. */
+  private async guard<T>(work: () => Promise<T>): Promise<T> {
+    try {
+      return await work();
+    } catch (error) {
+      throw recordsErrorOf(error);
+    }
+  }
+}
+
+/**
+ * The database file this machine's records are kept in, found as the server finds it
+ * (LARDER_DATA, LARDER_DB).
+ */
+export function recordsFile(): string {
+  try {
+    return loadConfig().databaseFile;
+  } catch (error) {
+    throw new RecordsError('bad-input', 'bad-settings', (error as Error).message);
+  }
+}
+
+/**
+ * Opens this machine's records — the database the server uses, found through the same settings —
+ * for the command line; close them when done.
+ * @param formulasFolder where the formulas of recorded batches are read (default: the server's)
+ */
+export async function openRecords(formulasFolder?: string): Promise<Records> {
+  recordsFile();
+  const { openLocalRecords } = await import('./open-records.ts');
+  return openLocalRecords(loadConfig(), formulasFolder);
+}
+
+/** A batch sheet as PDF bytes: a recorded batch's with its lot code, or a plain calculation's. */
+export async function batchSheetPdf(
+  result: PresentedResult,
+  record?: SheetRecord,
+  source?: SheetSource,
+): Promise<Buffer> {
+  return (await import('../pdf/batch-sheet-pdf.ts')).renderBatchSheetPdf(result, record, source);
+}
+
+/** A plan on paper as PDF bytes: an overview, then one production sheet per start day. */
+export async function planSheetPdf(plan: PresentedPlan): Promise<Buffer> {
+  return (await import('../pdf/plan-sheet-pdf.ts')).renderPlanSheetPdf(plan);
+}
