@@ -1,7 +1,7 @@
 import path from 'node:path';
 import type { RawBatchOptions, UnitSystem } from '../../shared/index.ts';
 import { AuditRepository } from '../../server/audit/audit-repository.ts';
-import type { Batch, BatchPage } from '../../server/batches/batch.ts';
+import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import { parseListQuery } from '../../server/batches/batch-query.ts';
 import { BatchRepository } from '../../server/batches/batch-repository.ts';
 import { prepareBatch } from '../../server/batches/prepare-batch.ts';

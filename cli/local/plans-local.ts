@@ -1,7 +1,7 @@
 import path from 'node:path';
 import type { PlanResult, UnitSystem } from '../../shared/index.ts';
 import { AuditRepository } from '../../server/audit/audit-repository.ts';
-import type { Batch } from '../../server/batches/batch.ts';
+import type { Batch } from '../../shared/api/batch-record.ts';
 import { BatchRepository } from '../../server/batches/batch-repository.ts';
 import { FormulaHistory } from '../../server/formulas/formula-history.ts';
 import { FormulaStore } from '../../server/formulas/formula-store.ts';

@@ -1,6 +1,7 @@
 import { isIsoDate, type BatchKind } from '../../shared/index.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
-import { BATCH_STATUSES, type BatchStatus } from './batch.ts';
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import { BATCH_STATUSES } from '../../shared/workflow/batch-status.ts';
 
 /** What a list of batches can be sorted by. */
 export type SortKey = 'recorded' | 'lot' | 'started' | 'ready' | 'status' | 'formula';
