@@ -27,6 +27,7 @@ export {
   type YamlLimitProblem,
 } from './formula/yaml-limits.ts';
 export { parseYamlWithinLimits, type GuardedYaml } from './formula/parse-yaml.ts';
+export { FORMULA_ID, FORMULA_ID_PATTERN, isFormulaId } from './formula/formula-id.ts';
 export { checkLibrary, formulaLibrary, type LibraryFile } from './formula/check-library.ts';
 export { FORMULA_SCHEMA } from './validation/formula-validator.ts';
 export type * from './calculation/calc-result.ts';

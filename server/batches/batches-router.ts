@@ -8,6 +8,7 @@ import { notFound } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { serverToday } from '../server-today.ts';
 import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import { FORMULA_ID_PATTERN } from '../../shared/formula/formula-id.ts';
 import { BATCH_STATUSES, RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
 import type { ChangeOptions } from './batch.ts';
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
@@ -20,7 +21,7 @@ const RECORD_BODY = {
   additionalProperties: false,
   required: ['formula', 'batch'],
   properties: {
-    formula: { type: 'string', pattern: '^[a-z0-9][a-z0-9-]{1,62}$' },
+    formula: { type: 'string', pattern: FORMULA_ID_PATTERN },
     batch: BATCH_OPTIONS_SCHEMA,
     units: UNITS_SCHEMA,
     status: { enum: RECORD_STATUSES },

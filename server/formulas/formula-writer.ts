@@ -1,6 +1,6 @@
 import path from 'node:path';
 import type { Transaction } from 'sequelize';
-import type { Formula, FormulaProblem } from '../../shared/index.ts';
+import { isFormulaId, type Formula, type FormulaProblem } from '../../shared/index.ts';
 import type { AuditAction, AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { badRequest, conflict, notFound, type AppError } from '../http/app-error.ts';
@@ -13,13 +13,7 @@ import {
   writeTemporary,
 } from './atomic-file.ts';
 import { staleRevision, usableFormula } from './formula-checks.ts';
-import {
-  formulaIdOf,
-  isFormulaId,
-  readFormulaFileAt,
-  revisionOf,
-  type FormulaFile,
-} from './formula-files.ts';
+import { formulaIdOf, readFormulaFileAt, revisionOf, type FormulaFile } from './formula-files.ts';
 import { commitFormulaFile } from './formula-git.ts';
 import type { FormulaHistory } from './formula-history.ts';
 import type { FormulaStore } from './formula-store.ts';
@@ -29,7 +23,7 @@ export type WriteSource = 'save' | 'create' | 'upload';
 
 /** A new text for a formula, and who sends it why. */
 export interface FormulaChange {
-  /** The formula id; checked against FORMULA_ID before any path is built from it. */
+  /** The formula id; checked with isFormulaId before any path is built from it. */
   readonly id: string;
   readonly text: string;
   readonly message: string;

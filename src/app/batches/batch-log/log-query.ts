@@ -1,3 +1,4 @@
+import { isFormulaId } from '../../../../shared/formula/formula-id.ts';
 import { BATCH_STATUSES } from '../../../../shared/workflow/batch-status.ts';
 import type { BatchStatus, FormulaKind } from '../batch-types';
 
@@ -71,7 +72,7 @@ export function queryFromParams(params: QueryParams): LogQuery {
   const formula = params['formula'];
   const lot = params['lot']?.trim().toUpperCase();
   return {
-    formula: formula && /^[a-z0-9][a-z0-9-]{1,62}$/.test(formula) ? formula : null,
+    formula: formula && isFormulaId(formula) ? formula : null,
     kind: kind && (KINDS as readonly string[]).includes(kind) ? (kind as FormulaKind) : null,
     statuses: [
       ...new Set(

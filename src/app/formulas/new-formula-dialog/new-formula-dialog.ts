@@ -11,6 +11,7 @@ import {
 import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
+import { FORMULA_ID } from '../../../../shared/formula/formula-id.ts';
 import type { FormulaKind, FormulaProblem } from '../formula-api-types';
 import { FormulaProblems } from '../formula-problems/formula-problems';
 import { problemsOf } from '../formula-problems/problems-of';
@@ -50,7 +51,7 @@ export class NewFormulaDialog {
   protected readonly kinds = KINDS;
   protected readonly form = inject(NonNullableFormBuilder).group({
     kind: ['cure' as FormulaKind, Validators.required],
-    id: ['', [Validators.required, Validators.pattern(/^[a-z0-9][a-z0-9-]{1,62}$/)]],
+    id: ['', [Validators.required, Validators.pattern(FORMULA_ID)]],
     title: ['', [Validators.required, Validators.maxLength(120)]],
     message: ['New formula', [Validators.required, Validators.pattern(/\S/)]],
   });
