@@ -1,6 +1,6 @@
 import type { Database } from '../../server/db/database.ts';
 import { PeopleRepository } from '../../server/people/people-repository.ts';
-import type { Person } from '../../server/people/person.ts';
+import type { Person } from '../../shared/api/person.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 
 /**

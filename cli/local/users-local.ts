@@ -1,7 +1,7 @@
 import { MIN_PASSWORD_LENGTH } from '../../server/auth/passwords.ts';
 import { AuditRepository } from '../../server/audit/audit-repository.ts';
 import { PeopleRepository } from '../../server/people/people-repository.ts';
-import type { Person, Role } from '../../server/people/person.ts';
+import type { Person, Role } from '../../shared/api/person.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 import { withLocalDatabase } from './local-database.ts';
 import { readNewPassword } from './read-password.ts';

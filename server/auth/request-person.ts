@@ -1,5 +1,5 @@
 import type { Request } from 'express';
-import type { Person } from '../people/person.ts';
+import type { Person } from '../../shared/api/person.ts';
 import { AppError } from '../http/app-error.ts';
 
 declare module 'express-session' {

@@ -1,5 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import type { AuditAction, AuditRepository } from '../audit/audit-repository.ts';
+import type { AuditAction } from '../../shared/api/audit-event.ts';
+import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import {
   moveRefusal,

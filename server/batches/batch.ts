@@ -1,5 +1,5 @@
 import type { RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
-import type { Role } from '../people/person.ts';
+import type { Role } from '../../shared/api/person.ts';
 import type {
   BatchKind,
   PresentedResult,
