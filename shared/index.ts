@@ -43,6 +43,7 @@ export {
   optionName,
   type RawBatchOptions,
 } from './calculation/parse-batch-options.ts';
+export { BATCH_OPTION_NAMES, type BatchOptionName } from './calculation/batch-option-names.ts';
 export { calculate } from './calculation/calculate.ts';
 export { isIsoDate, addDays } from './calculation/dates.ts';
 export { planAssembly, MAX_PLAN_COUNT } from './calculation/plan/plan-assembly.ts';
