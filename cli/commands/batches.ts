@@ -1,32 +1,9 @@
 import { Command } from 'commander';
-import type { BatchPage, BatchStatus } from '../../shared/api/batch-record.ts';
-import type { PresentedResult } from '../../shared/index.ts';
+import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
 import { textTable } from '../output/text-table.ts';
-
-/** The parts of a batch `show` prints. */
-interface BatchView {
-  lotCode: string;
-  formula: { id: string; revision: string; title: string };
-  kind: string;
-  status: BatchStatus;
-  operator: { id: number; displayName: string };
-  startedOn: string;
-  readyOn: string | null;
-  checksPassed: boolean;
-  signedOff: { by: { id: number; displayName: string }; at: string } | null;
-  result: PresentedResult;
-  events?: {
-    at: string;
-    type: string;
-    actor: { displayName: string } | null;
-    from: string | null;
-    to: string | null;
-    reason: string | null;
-  }[];
-}
 
 const FILTERS = [
   'formula',
@@ -153,17 +130,17 @@ export function batchesCommand(io: Io): Command {
       // The PDF tools load only for --pdf; the path is checked before the batch is read.
       if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
       const server = serverOf(options);
-      let batch: BatchView;
+      let batch: Batch;
       if (server) {
         const { callServer } = await import('../remote/server-client.ts');
-        ({ batch } = await callServer<{ batch: BatchView }>(
+        ({ batch } = await callServer<{ batch: Batch }>(
           { url: server },
           'GET',
           `/api/batches/${encodeURIComponent(lot)}`,
         ));
       } else {
         const { showLocally } = await import('../local/batches-local.ts');
-        batch = (await showLocally(lot)) as unknown as BatchView;
+        batch = await showLocally(lot);
       }
       if (pdf)
         await (await import('../output/pdf-file.ts')).writeBatchSheet(pdf, batch.result, batch);
@@ -184,7 +161,7 @@ export function batchesCommand(io: Io): Command {
           e.at,
           e.type,
           e.from && e.to ? `${e.from} → ${e.to}` : (e.to ?? ''),
-          e.actor?.displayName ?? '',
+          e.by?.displayName ?? '',
           e.reason ?? '',
         ]);
         io.out(`${textTable(rows, ['left', 'left', 'left', 'left', 'left']).join('\n')}\n`);
