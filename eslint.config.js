@@ -65,6 +65,84 @@ export default tseslint.config(
       ],
     },
   },
+  // Boundaries between the parts. The import-boundary rule is typescript-eslint's, so that it
+  // stands beside the core rule's YAML restriction above instead of replacing it (flat config
+  // keeps one set of options per rule and file). Only static imports are checked, not import().
+  {
+    // The core is pure and stands alone: the server, the command and the console build on it,
+    // never the other way round. Specs may check it against the build scripts.
+    files: ['shared/**/*.ts', 'shared/**/*.js'],
+    ignores: ['**/*.spec.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(\\.\\./)+(server|cli|src|tests|scripts|bench|bin)/',
+              message:
+                'shared/ imports nothing outside itself; move what both sides need into shared/',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // The console talks to the back end over HTTP only; the contract's shapes come from shared/api
+    // as types, so no server code lands in the browser bundle.
+    files: ['src/**/*.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(\\.\\./)+(server|cli|tests|scripts)/',
+              message:
+                'the console imports shared/ and nothing of server/ or cli/; it reaches the server through the API',
+            },
+            {
+              regex: '^(\\.\\./)+shared/api/',
+              allowTypeImports: true,
+              message:
+                'the console imports the API shapes of shared/api/ as types only (import type)',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // The command reaches the back end only through its door. Until then the files below still
+    // import server/ directly: an allow-list to shorten, never to lengthen.
+    files: ['cli/**/*.ts'],
+    ignores: [
+      '**/*.spec.ts',
+      'cli/commands/calc.ts',
+      'cli/commands/plan.ts',
+      'cli/local/backup-local.ts',
+      'cli/local/batch-operator.ts',
+      'cli/local/batches-local.ts',
+      'cli/local/local-database.ts',
+      'cli/local/plans-local.ts',
+      'cli/local/users-local.ts',
+      'cli/output/pdf-file.ts',
+    ],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(\\.\\./)+(server|src)/',
+              message: 'cli/ reaches the back end only through its door, not server/ directly',
+            },
+          ],
+        },
+      ],
+    },
+  },
   {
     // The console: Angular's own rules; values and types are imported as Angular's tooling writes them.
     files: ['src/**/*.ts'],
