@@ -65,6 +65,73 @@ export default tseslint.config(
       ],
     },
   },
+  // Boundaries between the parts. The import-boundary rule is typescript-eslint's, so that it
+  // stands beside the core rule's YAML restriction above instead of replacing it (flat config
+  // keeps one set of options per rule and file). Only static imports are checked, not import().
+  {
+    // The core is pure and stands alone: the server, the command and the console build on it,
+    // never the other way round. Specs may check it against the build scripts.
+    files: ['shared/**/*.ts', 'shared/**/*.js'],
+    ignores: ['**/*.spec.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(\\.\\./)+(server|cli|src|tests|scripts|bench|bin)/',
+              message:
+                'shared/ imports nothing outside itself; move what both sides need into shared/',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // The console talks to the back end over HTTP only; the contract's shapes come from shared/api
+    // as types, so no server code lands in the browser bundle.
+    files: ['src/**/*.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(\\.\\./)+(server|cli|tests|scripts)/',
+              message:
+                'the console imports shared/ and nothing of server/ or cli/; it reaches the server through the API',
+            },
+            {
+              regex: '^(\\.\\./)+shared/api/',
+              allowTypeImports: true,
+              message:
+                'the console imports the API shapes of shared/api/ as types only (import type)',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // The command reaches the back end only through its door, server/records/records.ts: the same
+    // record keeping as the API, with nothing of Express, the routers or HTTP.
+    files: ['cli/**/*.ts'],
+    ignores: ['**/*.spec.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(\\.\\./)+(server/(?!records/records\\.ts$)|src/)',
+              message: 'cli/ reaches the back end only through its door, server/records/records.ts',
+            },
+          ],
+        },
+      ],
+    },
+  },
   {
     // The console: Angular's own rules; values and types are imported as Angular's tooling writes them.
     files: ['src/**/*.ts'],

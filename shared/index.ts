@@ -27,6 +27,7 @@ export {
   type YamlLimitProblem,
 } from './formula/yaml-limits.ts';
 export { parseYamlWithinLimits, type GuardedYaml } from './formula/parse-yaml.ts';
+export { FORMULA_ID, FORMULA_ID_PATTERN, isFormulaId } from './formula/formula-id.ts';
 export { checkLibrary, formulaLibrary, type LibraryFile } from './formula/check-library.ts';
 export {
   starterFormula,
@@ -47,6 +48,7 @@ export {
   optionName,
   type RawBatchOptions,
 } from './calculation/parse-batch-options.ts';
+export { BATCH_OPTION_NAMES, type BatchOptionName } from './calculation/batch-option-names.ts';
 export { calculate } from './calculation/calculate.ts';
 export { isIsoDate, addDays } from './calculation/dates.ts';
 export { planAssembly, MAX_PLAN_COUNT } from './calculation/plan/plan-assembly.ts';

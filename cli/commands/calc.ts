@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { Command, InvalidArgumentError, Option } from 'commander';
+import type { BatchOptionName } from '../../shared/calculation/batch-option-names.ts';
 import type { PdfTarget } from '../output/pdf-file.ts';
 import {
   BatchError,
@@ -17,82 +18,75 @@ import { today, type Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
 import { recordKeeper, serverOf } from '../records/record-keeper.ts';
 
-/** Batch options: flag, value name, help. Commander turns --largest-piece into largestPiece. */
-const BATCH_OPTIONS: readonly [keyof RawBatchOptions, string, string][] = [
-  [
-    'meat',
+/**
+ * Every batch option's flag, value name and help, in the order --help lists them. Commander turns
+ * --largest-piece into largestPiece, the option's name.
+ */
+const BATCH_OPTIONS: Readonly<Record<BatchOptionName, readonly [flags: string, help: string]>> = {
+  meat: [
     '--meat <weight>',
     'cure: green (trimmed, uncured) meat weight, e.g. 4.26kg or "9 lb 6 oz"',
   ],
-  [
-    'want',
-    '--want <weight>',
-    'cure, blend: finished weight wanted; worked back through the yields',
-  ],
-  ['thickness', '--thickness <length>', 'cure: thickness of the thickest piece, e.g. 4cm or 1.5in'],
-  [
-    'largestPiece',
+  want: ['--want <weight>', 'cure, blend: finished weight wanted; worked back through the yields'],
+  thickness: ['--thickness <length>', 'cure: thickness of the thickest piece, e.g. 4cm or 1.5in'],
+  largestPiece: [
     '--largest-piece <weight>',
     'cure: weight of the heaviest piece, for per-kg or per-lb hold rules',
   ],
-  [
-    'water',
+  water: [
     '--water <amount>',
     "brine cure: water by weight or volume (1 L = 1 kg), instead of the formula's",
   ],
-  [
-    'pump',
+  pump: [
     '--pump <percent>',
     "pump cure: brine injected, % of green weight, instead of the formula's",
   ],
-  [
-    'pumpedWeight',
+  pumpedWeight: [
     '--pumped-weight <weight>',
     'pump cure: weight after injecting; checks the pump % reached',
   ],
-  ['pieces', '--pieces <count>', 'dough: number of pieces'],
-  ['piece', '--piece <weight>', "dough: piece weight, instead of the formula's"],
-  ['loss', '--loss <percent>', 'dough: dough lost in mixing and dividing, % of the mixed dough'],
-  ['flour', '--flour <weight>', 'dough: scale to this total flour weight'],
-  ['total', '--total <weight>', 'dough: mixed dough weight; blend: meat weight; mix: total weight'],
-  ['ddt', '--ddt <temperature>', "dough: desired dough temperature, instead of the formula's"],
-  ['room', '--room <temperature>', 'dough: room temperature'],
-  ['flourTemp', '--flour-temp <temperature>', 'dough: flour temperature'],
-  ['prefermentTemp', '--preferment-temp <temperature>', 'dough: preferment temperature'],
-  [
-    'tap',
+  pieces: ['--pieces <count>', 'dough: number of pieces'],
+  piece: ['--piece <weight>', "dough: piece weight, instead of the formula's"],
+  loss: ['--loss <percent>', 'dough: dough lost in mixing and dividing, % of the mixed dough'],
+  flour: ['--flour <weight>', 'dough: scale to this total flour weight'],
+  total: ['--total <weight>', 'dough: mixed dough weight; blend: meat weight; mix: total weight'],
+  ddt: ['--ddt <temperature>', "dough: desired dough temperature, instead of the formula's"],
+  room: ['--room <temperature>', 'dough: room temperature'],
+  flourTemp: ['--flour-temp <temperature>', 'dough: flour temperature'],
+  prefermentTemp: ['--preferment-temp <temperature>', 'dough: preferment temperature'],
+  tap: [
     '--tap <temperature>',
     'dough: tap water temperature; ice is added when colder water is needed',
   ],
-  [
-    'friction',
+  friction: [
     '--friction <rise>',
     "dough: mixer friction factor as a temperature rise, e.g. 14F, instead of the formula's",
   ],
-  [
-    'yeast',
+  yeast: [
     '--yeast <kind>',
     "dough: use fresh, active-dry or instant yeast instead of the formula's",
   ],
-  ['targetFat', '--target-fat <percent>', "blend: fat % wanted, instead of the formula's"],
-  [
-    'onHand',
+  targetFat: ['--target-fat <percent>', "blend: fat % wanted, instead of the formula's"],
+  onHand: [
     '--on-hand <key=weight>',
     'blend: a trimming fixed by what is on hand, e.g. lean=12kg; give it for each such trimming',
   ],
-  [
-    'fatTest',
+  fatTest: [
     '--fat-test <key=percent>',
     "blend: fat % measured today for a trimming, e.g. lean=18.5, instead of the formula's; repeatable",
   ],
-  ['portion', '--portion <weight>', "blend: portion weight, instead of the formula's"],
-  ['base', '--base <weight>', 'mix: weight of the base ingredient'],
-  [
-    'start',
+  portion: ['--portion <weight>', "blend: portion weight, instead of the formula's"],
+  base: ['--base <weight>', 'mix: weight of the base ingredient'],
+  start: [
     '--start <date>',
     'day the batch starts, YYYY-MM-DD, within a year of today (default: today)',
   ],
-];
+};
+
+/** The batch options' names with their flag and help, in the order of BATCH_OPTIONS. */
+function batchOptionEntries(): [BatchOptionName, readonly [string, string]][] {
+  return Object.entries(BATCH_OPTIONS) as [BatchOptionName, readonly [string, string]][];
+}
 
 /** Options that may be given several times; their KEY=VALUE entries are joined with commas. */
 const REPEATABLE: ReadonlySet<keyof RawBatchOptions> = new Set(['onHand', 'fatTest']);
@@ -158,7 +152,7 @@ export function calcCommand(io: Io): Command {
       'write the batch sheet to a PDF file instead of printing it (A4; Letter in US units)',
     )
     .option('--force', 'with --pdf: replace the file if it exists');
-  for (const [key, flags, help] of BATCH_OPTIONS)
+  for (const [key, [flags, help]] of batchOptionEntries())
     command.option(flags, help, REPEATABLE.has(key) ? gathered : onlyOnce(flags));
   return command
     .addHelpText(
@@ -185,7 +179,7 @@ async function runCalc(reference: string, options: CalcOptions, io: Io): Promise
   const { formula, file, warnings } = loadFormula(reference, formulasFolder(options.formulas));
   const day = today();
   const raw: RawBatchOptions = { start: day };
-  for (const [key] of BATCH_OPTIONS) if (options[key] !== undefined) raw[key] = options[key];
+  for (const [key] of batchOptionEntries()) if (options[key] !== undefined) raw[key] = options[key];
   for (const warning of warnings) io.err(`${warning}\n`);
   if (!options.record && (options.server || options.status || options.notes)) {
     throw new CliError('--server, --status and --notes go with --record', EXIT.usage);

@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url';
 import { Command, Option } from 'commander';
 import {
   formatProblem,
+  isFormulaId,
   readFormula,
   starterFormula,
   type CureMethod,
@@ -63,7 +64,7 @@ ${EXIT_CODES_HELP}`,
 
 function runNew(kind: FormulaKind, options: NewOptions, io: Io): void {
   const id = options.id ?? `new-${kind}`;
-  if (!/^[a-z0-9][a-z0-9-]{1,62}$/.test(id)) {
+  if (!isFormulaId(id)) {
     throw new CliError(
       `--id "${id}" may hold only lower-case letters, digits and dashes, 2 to 63 characters`,
       EXIT.usage,

@@ -1,40 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import type { AuditAction, AuditEvent } from '../../shared/api/audit-event.ts';
 import type { Database } from '../db/database.ts';
-
-/** The things the audit log records. */
-export const AUDIT_ACTIONS = [
-  'sign-in',
-  'sign-in-failed',
-  'sign-out',
-  'formula-save',
-  'formula-create',
-  'formula-upload',
-  'formula-disk-change',
-  'batch-record',
-  'batch-status',
-  'batch-sign-off',
-  'person-add',
-  'person-change',
-  'password-reset',
-  'invitation-send',
-  'reminder-choices',
-  'reminder-send',
-] as const;
-
-/** One of {@link AUDIT_ACTIONS}. */
-export type AuditAction = (typeof AUDIT_ACTIONS)[number];
-
-/** One entry of the audit log. */
-export interface AuditEvent {
-  readonly id: number;
-  readonly at: string;
-  readonly actorId: number | null;
-  readonly actorName: string | null;
-  readonly action: AuditAction;
-  readonly subject: string | null;
-  readonly detail: unknown;
-  readonly ip: string | null;
-}
 
 /** What to append: who did what to what. */
 export interface AuditEntry {

@@ -3,7 +3,7 @@ import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
 import { badRequest } from '../http/app-error.ts';
 import { allowQuery } from '../http/require-json.ts';
-import { AUDIT_ACTIONS, type AuditAction } from './audit-repository.ts';
+import { AUDIT_ACTIONS, type AuditAction, type AuditPage } from '../../shared/api/audit-event.ts';
 
 /** A whole number from a query parameter, or undefined when it is absent or not one. */
 function wholeNumber(text: unknown): number | undefined {
@@ -29,7 +29,10 @@ export function auditRouter({ audit }: AppContext): Router {
         throw badRequest(`action must be one of ${AUDIT_ACTIONS.join(', ')}`);
       }
       const events = await audit.list({ limit, before, action: action as AuditAction | undefined });
-      res.json({ events, next: events.length === limit ? events[events.length - 1].id : null });
+      res.json({
+        events,
+        next: events.length === limit ? events[events.length - 1].id : null,
+      } satisfies AuditPage);
     },
   );
   return router;

@@ -4,7 +4,7 @@ import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import { AppError, forbidden } from '../http/app-error.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
-import type { Person, Role } from '../people/person.ts';
+import type { Person, Role } from '../../shared/api/person.ts';
 import type { SignIns } from './sign-ins.ts';
 import './request-person.ts';
 

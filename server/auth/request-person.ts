@@ -1,6 +1,6 @@
 import type { Request } from 'express';
 import type { ChangeOptions } from '../batches/batch.ts';
-import type { Person } from '../people/person.ts';
+import type { Person } from '../../shared/api/person.ts';
 import { AppError } from '../http/app-error.ts';
 
 declare module 'express-session' {

@@ -3,7 +3,7 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import { AppError } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
-import type { Person } from '../people/person.ts';
+import type { Person, SessionInfo } from '../../shared/api/person.ts';
 import { newCsrfToken, showsCsrfToken, wrongCsrfToken } from './csrf.ts';
 import { SESSION_COOKIE } from './session.ts';
 import type { SignIns } from './sign-ins.ts';
@@ -64,7 +64,7 @@ export function sessionRouter(
     }
     const csrfToken = await startSession(req, person);
     await audit.append({ actor: person, action: 'sign-in', detail: { via: 'form' }, ip: req.ip });
-    res.status(201).json({ person, csrfToken });
+    res.status(201).json({ person, csrfToken } satisfies SessionInfo);
   });
 
   router.get('/', async (req, res) => {

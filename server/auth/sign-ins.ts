@@ -1,5 +1,5 @@
 import type { PeopleRepository } from '../people/people-repository.ts';
-import type { Person } from '../people/person.ts';
+import type { Person } from '../../shared/api/person.ts';
 import { verifyPassword } from './passwords.ts';
 import { SignInAttempts } from './sign-in-attempts.ts';
 import { VerifiedCredentials } from './verified-credentials.ts';

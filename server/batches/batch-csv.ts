@@ -1,5 +1,5 @@
 import { optionName } from '../../shared/index.ts';
-import type { BatchSummary } from './batch.ts';
+import type { BatchSummary } from '../../shared/api/batch-record.ts';
 
 /**
  * Characters that make a spreadsheet read a cell as a formula (or, for tab and carriage return,

@@ -1,6 +1,8 @@
 import { isIsoDate, type BatchKind } from '../../shared/index.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
-import { BATCH_STATUSES, type BatchStatus } from './batch.ts';
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import { isFormulaId } from '../../shared/formula/formula-id.ts';
+import { BATCH_STATUSES } from '../../shared/workflow/batch-status.ts';
 
 /** What a list of batches can be sorted by. */
 export type SortKey = 'recorded' | 'lot' | 'started' | 'ready' | 'status' | 'formula';
@@ -141,7 +143,7 @@ function parseFilter(query: Record<string, unknown>, problems: Problem[]): Batch
   } = {};
   const formula = single(query, 'formula', problems);
   if (formula !== undefined) {
-    if (/^[a-z0-9][a-z0-9-]{1,62}$/.test(formula)) filter.formula = formula;
+    if (isFormulaId(formula)) filter.formula = formula;
     else problems.push({ field: 'formula', message: 'must be a formula id' });
   }
   const kind = single(query, 'kind', problems);

@@ -4,14 +4,8 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { readRows } from '../db/read-row.ts';
 import { notFound } from '../http/app-error.ts';
-import type {
-  Batch,
-  BatchPage,
-  BatchStatus,
-  BatchSummary,
-  ChangeOptions,
-  NewBatch,
-} from './batch.ts';
+import type { Batch, BatchPage, BatchStatus, BatchSummary } from '../../shared/api/batch-record.ts';
+import type { ChangeOptions, NewBatch } from './batch.ts';
 import { encodeCursor, type BatchFilter, type ListQuery } from './batch-query.ts';
 import {
   BATCHES_WITH_PEOPLE,

@@ -5,7 +5,13 @@ import type {
   UnitSystem,
 } from '../../shared/index.ts';
 import { recordedAllergenName } from '../../shared/calculation/allergens.ts';
-import type { Batch, BatchEvent, BatchListItem, BatchStatus, BatchSummary } from './batch.ts';
+import type {
+  Batch,
+  BatchEvent,
+  BatchListItem,
+  BatchStatus,
+  BatchSummary,
+} from '../../shared/api/batch-record.ts';
 
 /** A batch row joined with the names of its operator and reviewer. */
 export interface BatchRow {

@@ -1,5 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import type { AuditAction, AuditRepository } from '../audit/audit-repository.ts';
+import type { AuditAction } from '../../shared/api/audit-event.ts';
+import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import {
   moveRefusal,
@@ -8,14 +9,9 @@ import {
   type WorkflowRules,
 } from '../../shared/workflow/workflow-rules.ts';
 import { AppError, badRequest, conflict, notFound } from '../http/app-error.ts';
-import {
-  UNSIGNABLE_STATUSES,
-  refusedMove,
-  type BatchEvent,
-  type BatchStatus,
-  type ChangeOptions,
-  type NewBatch,
-} from './batch.ts';
+import type { BatchEvent, BatchStatus } from '../../shared/api/batch-record.ts';
+import { UNSIGNABLE_STATUSES, refusedMove } from '../../shared/workflow/batch-status.ts';
+import type { ChangeOptions, NewBatch } from './batch.ts';
 import { MAX_LOT_SEQUENCE, lotCode, lotPrefix, prefixRange } from './lot-code.ts';
 
 /** A workflow rule's refusal as the API's error; a missing reason names its field. */

@@ -1,65 +1,11 @@
-import type { BatchStatus } from '../../shared/api/batch-record.ts';
-import type { Role } from '../people/person.ts';
+import type { RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
+import type { Role } from '../../shared/api/person.ts';
 import type {
   BatchKind,
   PresentedResult,
   RawBatchOptions,
   UnitSystem,
 } from '../../shared/index.ts';
-
-export type {
-  Batch,
-  BatchEvent,
-  BatchListItem,
-  BatchPage,
-  BatchStatus,
-  BatchSummary,
-  PersonRef,
-} from '../../shared/api/batch-record.ts';
-
-/** Every status, in the order of the work. */
-export const BATCH_STATUSES: readonly BatchStatus[] = [
-  'planned',
-  'in-progress',
-  'curing',
-  'proofing',
-  'done',
-  'discarded',
-];
-
-/** The statuses a batch may be recorded with. */
-export const RECORD_STATUSES = ['planned', 'in-progress'] as const;
-
-/** The moves each status allows; done and discarded are final. */
-export const TRANSITIONS: Readonly<Record<BatchStatus, readonly BatchStatus[]>> = {
-  planned: ['in-progress', 'discarded'],
-  'in-progress': ['curing', 'proofing', 'done', 'discarded'],
-  curing: ['done', 'discarded'],
-  proofing: ['done', 'discarded'],
-  done: [],
-  discarded: [],
-};
-
-/** The only kind each holding status applies to: cures cure, doughs proof. */
-const HOLD_KIND: Partial<Record<BatchStatus, BatchKind>> = { curing: 'cure', proofing: 'dough' };
-
-/** Why a move is not allowed, in words; undefined when it is allowed. */
-export function refusedMove(
-  from: BatchStatus,
-  to: BatchStatus,
-  kind: BatchKind,
-): string | undefined {
-  if (TRANSITIONS[from].length === 0) return `a ${from} batch is final; its status cannot change`;
-  if (!TRANSITIONS[from].includes(to))
-    return `a batch cannot go from ${from} to ${to}; from ${from} it can go to ${TRANSITIONS[from].join(' or ')}`;
-  const kindNeeded = HOLD_KIND[to];
-  if (kindNeeded && kind !== kindNeeded)
-    return `only a ${kindNeeded} batch can be ${to}; this is a ${kind}`;
-  return undefined;
-}
-
-/** The statuses in which a batch cannot be signed off: nothing has been made, or it was thrown away. */
-export const UNSIGNABLE_STATUSES: readonly BatchStatus[] = ['planned', 'discarded'];
 
 /** What is stored for a new batch; the lot code and times are added when it is written. */
 export interface NewBatch {

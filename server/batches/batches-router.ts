@@ -6,7 +6,9 @@ import { BATCH_OPTIONS_SCHEMA, UNITS_SCHEMA } from '../calc/calc-request.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { RECORDING_ROLES, batchSheetPdf, type RecordRequest } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
-import { BATCH_STATUSES, RECORD_STATUSES, type BatchStatus } from './batch.ts';
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import { FORMULA_ID_PATTERN } from '../../shared/formula/formula-id.ts';
+import { BATCH_STATUSES, RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
 import { parseListQuery } from './batch-query.ts';
 
@@ -15,7 +17,7 @@ const RECORD_BODY = {
   additionalProperties: false,
   required: ['formula', 'batch'],
   properties: {
-    formula: { type: 'string', pattern: '^[a-z0-9][a-z0-9-]{1,62}$' },
+    formula: { type: 'string', pattern: FORMULA_ID_PATTERN },
     batch: BATCH_OPTIONS_SCHEMA,
     units: UNITS_SCHEMA,
     status: { enum: RECORD_STATUSES },

@@ -2,7 +2,8 @@ import { criticalFailures, type RawBatchOptions, type UnitSystem } from '../../s
 import { calculateBatch } from '../calc/calc-request.ts';
 import type { CurrentFormula } from '../formulas/formula-store.ts';
 import { RecordsError } from '../records/records-error.ts';
-import type { NewBatch, RECORD_STATUSES } from './batch.ts';
+import type { RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
+import type { NewBatch } from './batch.ts';
 
 /** What a cook sends to record a batch: the same options as a calculation, and the status. */
 export interface RecordRequest {

@@ -1,4 +1,4 @@
-import type { Batch, BatchPage } from './batch.ts';
+import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import { parseListQuery } from './batch-query.ts';
 import type { BatchRepository } from './batch-repository.ts';
 import { LOT_CODE_PATTERN } from './lot-code.ts';

@@ -1,5 +1,6 @@
 import type { FormulaHistory } from '../formulas/formula-history.ts';
-import type { Batch, ChangeOptions } from './batch.ts';
+import type { Batch } from '../../shared/api/batch-record.ts';
+import type { ChangeOptions } from './batch.ts';
 import type { BatchRepository } from './batch-repository.ts';
 import { prepareBatch, type RecordRequest } from './prepare-batch.ts';
 

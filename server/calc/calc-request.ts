@@ -1,4 +1,5 @@
 import {
+  BATCH_OPTION_NAMES,
   BatchError,
   calculate,
   parseBatchOptions,
@@ -17,33 +18,7 @@ export const BATCH_OPTIONS_SCHEMA = {
   type: 'object',
   additionalProperties: false,
   properties: Object.fromEntries(
-    [
-      'start',
-      'want',
-      'meat',
-      'thickness',
-      'largestPiece',
-      'water',
-      'pump',
-      'pumpedWeight',
-      'pieces',
-      'piece',
-      'loss',
-      'flour',
-      'ddt',
-      'room',
-      'flourTemp',
-      'prefermentTemp',
-      'tap',
-      'friction',
-      'yeast',
-      'total',
-      'targetFat',
-      'onHand',
-      'fatTest',
-      'portion',
-      'base',
-    ].map((key) => [
+    BATCH_OPTION_NAMES.map((key) => [
       key,
       // Up to five KEY=VALUE entries for on hand and fat tests (a blend has up to five trimmings).
       { type: 'string', minLength: 1, maxLength: key === 'onHand' || key === 'fatTest' ? 300 : 60 },

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import type { RawBatchOptions, UnitSystem } from '../../shared/index.ts';
+import { FORMULA_ID_PATTERN, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { YAML_TEXT } from '../formulas/formula-http.ts';
 import { validateBody } from '../http/validate-body.ts';
@@ -18,7 +18,7 @@ const CALC_BODY = {
   properties: {
     formula: {
       oneOf: [
-        { type: 'string', pattern: '^[a-z0-9][a-z0-9-]{1,62}$' },
+        { type: 'string', pattern: FORMULA_ID_PATTERN },
         {
           type: 'object',
           additionalProperties: false,

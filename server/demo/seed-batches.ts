@@ -1,7 +1,8 @@
 import type { Transaction } from 'sequelize';
 import { addDays, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
-import type { BatchActor, BatchStatus, ChangeOptions } from '../batches/batch.ts';
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import type { BatchActor, ChangeOptions } from '../batches/batch.ts';
 import { prepareBatch } from '../batches/prepare-batch.ts';
 import type { CurrentFormula } from '../formulas/formula-store.ts';
 import { AppError } from '../http/app-error.ts';

@@ -1,5 +1,6 @@
 import { LineCounter, isMap, isScalar } from 'yaml';
 import {
+  isFormulaId,
   parseYamlWithinLimits,
   readFormula,
   type Formula,
@@ -7,7 +8,6 @@ import {
   type FormulaReading,
 } from '../../shared/index.ts';
 import { AppError, conflict } from '../http/app-error.ts';
-import { isFormulaId } from './formula-files.ts';
 
 /** 409 for a write based on a revision that is no longer the one on disk. */
 export function staleRevision(current: string | null): AppError {

@@ -3,6 +3,7 @@ import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import {
   MAX_ALIAS_COUNT,
+  isFormulaId,
   parseYamlWithinLimits,
   readFormula,
   type FormulaReading,
@@ -84,17 +85,6 @@ export async function readFormulaFolder(
     files: files.filter((file): file is FormulaFile => file !== undefined),
     linked: entries.some((entry) => entry.isSymbolicLink()),
   };
-}
-
-/**
- * What a formula id looks like (the schema's pattern). Ids are the only thing a formula file's
- * path is ever built from, so every id from a request is checked against this first.
- */
-export const FORMULA_ID = /^[a-z0-9][a-z0-9-]{1,62}$/;
-
-/** Whether a value is a well-formed formula id. */
-export function isFormulaId(value: unknown): value is string {
-  return typeof value === 'string' && FORMULA_ID.test(value);
 }
 
 /** A file name without its .yaml / .yml ending. */

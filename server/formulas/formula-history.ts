@@ -1,6 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
+import type { FormulaRevision, RevisionSource } from '../../shared/api/formula-api.ts';
 import {
   filesById,
   formulaFacts,
@@ -10,32 +11,11 @@ import {
 } from './formula-files.ts';
 import type { CurrentFormula, FormulaStore } from './formula-store.ts';
 
-/** How a revision came to be: through the API, or found on disk (a git pull, an editor). */
-export type RevisionSource = 'save' | 'upload' | 'disk' | 'create' | 'delete';
-
-/** Who made a revision through the API. */
-export interface RevisionAuthor {
-  readonly id: number;
-  readonly username: string;
-  readonly displayName: string;
-}
-
-/** One row of a formula's history, as the API shows it (without the YAML). */
-export interface FormulaRevision {
+/** One row of a formula's history: the API's entry without `current`, with its row and formula. */
+export interface RevisionRecord extends Omit<FormulaRevision, 'current'> {
   /** Row id: orders revisions, newest highest. */
   readonly rowId: number;
   readonly formulaId: string;
-  /** sha-256 of the YAML text. */
-  readonly revision: string;
-  readonly source: RevisionSource;
-  readonly message: string;
-  readonly title: string | null;
-  readonly kind: string | null;
-  /** null for revisions found on disk. */
-  readonly author: RevisionAuthor | null;
-  /** The git commit that recorded it, when the formulas folder is a git work tree. */
-  readonly commit: string | null;
-  readonly at: string;
 }
 
 /** What it takes to record a revision. */
@@ -70,7 +50,7 @@ const SELECT_ROWS = `SELECT r.id, r.formula_id, r.revision, r.title, r.kind, r.m
   r.author_id, r.commit_sha, r.created_at, p.username, p.display_name
   FROM formula_revisions r LEFT JOIN people p ON p.id = r.author_id`;
 
-function toRevision(row: RevisionRow): FormulaRevision {
+function toRevision(row: RevisionRow): RevisionRecord {
   return {
     rowId: row.id,
     formulaId: row.formula_id,
@@ -142,7 +122,7 @@ export class FormulaHistory {
   }
 
   /** The newest revision row of a formula. */
-  async latest(formulaId: string, transaction?: Transaction): Promise<FormulaRevision | undefined> {
+  async latest(formulaId: string, transaction?: Transaction): Promise<RevisionRecord | undefined> {
     const [row] = await this.db.sequelize.query<RevisionRow>(
       `${SELECT_ROWS} WHERE r.formula_id = ? ORDER BY r.id DESC LIMIT 1`,
       { replacements: [formulaId], type: QueryTypes.SELECT, transaction },
@@ -151,7 +131,7 @@ export class FormulaHistory {
   }
 
   /** The newest revision row of every formula, by formula id. */
-  async latestOfEach(): Promise<Map<string, FormulaRevision>> {
+  async latestOfEach(): Promise<Map<string, RevisionRecord>> {
     const rows = await this.db.sequelize.query<RevisionRow>(
       `${SELECT_ROWS} WHERE r.id IN (SELECT MAX(id) FROM formula_revisions GROUP BY formula_id)`,
       { type: QueryTypes.SELECT },
@@ -160,7 +140,7 @@ export class FormulaHistory {
   }
 
   /** A formula's revisions, newest first. */
-  async list(formulaId: string): Promise<FormulaRevision[]> {
+  async list(formulaId: string): Promise<RevisionRecord[]> {
     const rows = await this.db.sequelize.query<RevisionRow>(
       `${SELECT_ROWS} WHERE r.formula_id = ? ORDER BY r.id DESC`,
       { replacements: [formulaId], type: QueryTypes.SELECT },
@@ -172,7 +152,7 @@ export class FormulaHistory {
   async find(
     formulaId: string,
     revision: string,
-  ): Promise<(FormulaRevision & { yaml: string }) | undefined> {
+  ): Promise<(RevisionRecord & { yaml: string }) | undefined> {
     const [row] = await this.db.sequelize.query<RevisionRow & { yaml: string }>(
       `SELECT r.id, r.formula_id, r.revision, r.yaml, r.title, r.kind, r.message, r.source,
          r.author_id, r.commit_sha, r.created_at, p.username, p.display_name

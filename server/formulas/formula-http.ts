@@ -1,6 +1,6 @@
 import type { Request, RequestParamHandler, Response } from 'express';
 import { AppError, badRequest } from '../http/app-error.ts';
-import { isFormulaId } from './formula-files.ts';
+import { isFormulaId } from '../../shared/index.ts';
 
 /**
  * Formula YAML in a request body (schema for validateBody). Its size is not limited here: every

@@ -8,7 +8,8 @@ import { validateBody } from '../http/validate-body.ts';
 import { YAML_TEXT, idOf, ifMatchOf, requireIfMatch, setRevision } from './formula-http.ts';
 import { mergeFormulaIntoYaml } from '../../shared/formula/merge-formula-yaml.ts';
 import { newFormula } from './formula-checks.ts';
-import type { FormulaWriter, WriteOutcome } from './formula-writer.ts';
+import type { WriteOutcome } from '../../shared/api/formula-api.ts';
+import type { FormulaWriter } from './formula-writer.ts';
 
 // The commit message of the change: required, so the history says why.
 const MESSAGE = { type: 'string', minLength: 1, maxLength: 1000, pattern: '\\S' } as const;

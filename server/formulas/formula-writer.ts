@@ -1,10 +1,12 @@
 import path from 'node:path';
 import type { Transaction } from 'sequelize';
-import type { Formula, FormulaProblem } from '../../shared/index.ts';
-import type { AuditAction, AuditRepository } from '../audit/audit-repository.ts';
+import type { WriteOutcome } from '../../shared/api/formula-api.ts';
+import { isFormulaId, type Formula } from '../../shared/index.ts';
+import type { AuditAction } from '../../shared/api/audit-event.ts';
+import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { badRequest, conflict, notFound, type AppError } from '../http/app-error.ts';
-import type { Person } from '../people/person.ts';
+import type { Person } from '../../shared/api/person.ts';
 import {
   placeNew,
   removeQuietly,
@@ -13,7 +15,7 @@ import {
   writeTemporary,
 } from '../../files/atomic-file.ts';
 import { staleRevision, usableFormula } from './formula-checks.ts';
-import { formulaIdOf, isFormulaId, readFormulaFileAt, type FormulaFile } from './formula-files.ts';
+import { formulaIdOf, readFormulaFileAt, type FormulaFile } from './formula-files.ts';
 import { revisionOf } from '../../files/revision.ts';
 import { commitFormulaFile } from './formula-git.ts';
 import type { FormulaHistory } from './formula-history.ts';
@@ -24,7 +26,7 @@ export type WriteSource = 'save' | 'create' | 'upload';
 
 /** A new text for a formula, and who sends it why. */
 export interface FormulaChange {
-  /** The formula id; checked against FORMULA_ID before any path is built from it. */
+  /** The formula id; checked with isFormulaId before any path is built from it. */
   readonly id: string;
   readonly text: string;
   readonly message: string;
@@ -33,24 +35,6 @@ export interface FormulaChange {
   readonly ip?: string;
   /** Extra facts for the audit log, e.g. the name of an uploaded file. */
   readonly detail?: Record<string, unknown>;
-}
-
-/** What came of a write. */
-export interface WriteOutcome {
-  readonly id: string;
-  readonly file: string;
-  readonly revision: string;
-  /** The revision replaced; null for a new formula. */
-  readonly previousRevision: string | null;
-  readonly created: boolean;
-  /** False when the text sent was the text already on disk: nothing was written. */
-  readonly changed: boolean;
-  /** The git commit, when the formulas folder is a git work tree and the commit worked. */
-  readonly commit: string | null;
-  /** Things that went wrong without undoing the save, e.g. a failed git commit. */
-  readonly warnings: readonly string[];
-  /** Warnings about the formula itself (it has no errors, or it would not be saved). */
-  readonly problems: readonly FormulaProblem[];
 }
 
 const AUDIT_ACTION: Record<WriteSource, AuditAction> = {

@@ -1,4 +1,13 @@
 import { Router } from 'express';
+import type {
+  FormulaDetail,
+  FormulaPreview,
+  FormulaRevision,
+  FormulaRevisions,
+  FormulaValidation,
+  LastChange,
+} from '../../shared/api/formula-api.ts';
+import type { FormulaDiff } from '../../shared/api/revision-diff.ts';
 import { readFormula, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { serverToday } from '../server-today.ts';
@@ -15,7 +24,7 @@ import { validateBody } from '../http/validate-body.ts';
 import { filesById, formulaFacts, formulaIdOf, type FormulaFile } from './formula-files.ts';
 import { revisionOf } from '../../files/revision.ts';
 import { refuseOverLimit } from './formula-checks.ts';
-import { FormulaHistory, type FormulaRevision } from './formula-history.ts';
+import { FormulaHistory, type RevisionRecord } from './formula-history.ts';
 import {
   REVISION,
   YAML_TEXT,
@@ -47,11 +56,7 @@ const PREVIEW_BODY = {
   properties: { yaml: YAML_TEXT, batch: BATCH_OPTIONS_SCHEMA, units: UNITS_SCHEMA },
 } as const;
 
-function lastChange(row: FormulaRevision | undefined): {
-  lastChangedBy: string | null;
-  lastChangedAt: string | null;
-  lastChangeSource: string | null;
-} {
+function lastChange(row: RevisionRecord | undefined): LastChange {
   return {
     lastChangedBy: row?.author?.displayName ?? null,
     lastChangedAt: row?.at ?? null,
@@ -59,7 +64,7 @@ function lastChange(row: FormulaRevision | undefined): {
   };
 }
 
-function revisionView(row: FormulaRevision, current: string | undefined): Record<string, unknown> {
+function revisionView(row: RevisionRecord, current: string | undefined): FormulaRevision {
   return {
     revision: row.revision,
     source: row.source,
@@ -143,7 +148,7 @@ export function formulasRouter(context: AppContext): Router {
       kind: reading.formula?.kind ?? null,
       revision: revisionOf(yaml),
       problems: reading.problems,
-    });
+    } satisfies FormulaValidation);
   });
 
   formulaWriteRoutes(router, writer);
@@ -163,7 +168,7 @@ export function formulasRouter(context: AppContext): Router {
       valid: file.reading.formula !== undefined,
       problems: file.reading.problems,
       ...lastChange(latest),
-    });
+    } satisfies FormulaDetail);
   });
 
   router.post('/:id/preview', anyone, validateBody(PREVIEW_BODY), async (req, res) => {
@@ -185,7 +190,7 @@ export function formulasRouter(context: AppContext): Router {
       body.units ?? 'metric',
       serverToday(context),
     );
-    res.json({ id, saved: body.yaml === undefined, revision, result });
+    res.json({ id, saved: body.yaml === undefined, revision, result } satisfies FormulaPreview);
   });
 
   router.get('/:id/revisions', anyone, async (req, res) => {
@@ -197,7 +202,7 @@ export function formulasRouter(context: AppContext): Router {
       id,
       currentRevision: file?.revision ?? null,
       revisions: rows.map((row) => revisionView(row, file?.revision)),
-    });
+    } satisfies FormulaRevisions);
   });
 
   router.get('/:id/revisions/:revision', anyone, async (req, res) => {
@@ -239,7 +244,7 @@ export function formulasRouter(context: AppContext): Router {
       removed: lines.filter((line) => line.kind === 'removed').length,
       lines,
       hunks: diffHunks(lines),
-    });
+    } satisfies FormulaDiff);
   });
 
   return router;

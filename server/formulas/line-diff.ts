@@ -1,22 +1,4 @@
-/** One line of a diff: the same on both sides, only in the old text, or only in the new. */
-export interface DiffLine {
-  readonly kind: 'same' | 'added' | 'removed';
-  readonly text: string;
-  /** 1-based line in the old text; null for an added line. */
-  readonly oldLine: number | null;
-  /** 1-based line in the new text; null for a removed line. */
-  readonly newLine: number | null;
-}
-
-/** A run of changes with the unchanged lines around them, as in a unified diff. */
-export interface DiffHunk {
-  /** First old line shown (1-based; 0 when the old side shows no line). */
-  readonly oldStart: number;
-  readonly oldLines: number;
-  readonly newStart: number;
-  readonly newLines: number;
-  readonly lines: readonly DiffLine[];
-}
+import type { DiffHunk, DiffLine } from '../../shared/api/revision-diff.ts';
 
 /**
  * Most cells of the longest-common-subsequence table we fill (about 16 MB); beyond that the

@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { ApiErrorBody } from '../../shared/api/api-error.ts';
 import { BatchError } from '../../shared/index.ts';
 import { RecordsError } from '../records/records-error.ts';
 import { AppError } from './app-error.ts';
@@ -110,7 +111,7 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, _req, res, nex
       'something went wrong on the server; it has been logged',
     );
   }
-  res
-    .status(appError.status)
-    .json({ error: { code: appError.code, message: appError.message, details: appError.details } });
+  res.status(appError.status).json({
+    error: { code: appError.code, message: appError.message, details: appError.details },
+  } satisfies ApiErrorBody);
 };

@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { AppContext } from '../app-context.ts';
 import { conflict } from '../http/app-error.ts';
 import { composeMessage, standardFooter, type MessageContent } from '../mail/mail-message.ts';
-import type { Person } from '../people/person.ts';
+import type { Person } from '../../shared/api/person.ts';
 import { INVITATION_HOURS } from './invitation-repository.ts';
 
 /** What an admin is told about an invitation: where it went and until when it works. */

@@ -1,14 +1,3 @@
-/** What Larderbook sends: an invitation, or one of the three reminders. */
-export const MESSAGE_KINDS = [
-  'invitation',
-  'reminder-flip',
-  'reminder-ready',
-  'reminder-overdue',
-] as const;
-
-/** One of {@link MESSAGE_KINDS}. */
-export type MessageKind = (typeof MESSAGE_KINDS)[number];
-
 /** A message's words, as plain text and as simple HTML built from the same parts. */
 export interface MessageContent {
   readonly subject: string;

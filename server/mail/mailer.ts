@@ -1,4 +1,5 @@
 import nodemailer, { type NodemailerError, type Transporter } from 'nodemailer';
+import type { TransportName } from '../../shared/api/outbox-message.ts';
 import type { OutgoingMessage } from './mail-message.ts';
 
 /** What became of handing one message to the transport. */
@@ -9,9 +10,6 @@ export interface Delivery {
   /** What the transport said, in its words (never a password). */
   readonly response: string;
 }
-
-/** Where messages go: the local outbox only, or a mail server. */
-export type TransportName = 'local' | 'smtp';
 
 /** Hands messages to a transport; the outbox keeps the record. */
 export interface Mailer {

@@ -1,11 +1,15 @@
 import { randomBytes } from 'node:crypto';
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
-import type { Delivery, TransportName } from './mailer.ts';
-import type { MessageContent, MessageKind, OutgoingMessage } from './mail-message.ts';
-
-/** Where a message is: waiting, being handed over, handed over, or given up on. */
-export type OutboxState = 'pending' | 'sending' | 'sent' | 'failed';
+import type {
+  MessageKind,
+  OutboxMessage,
+  OutboxState,
+  OutboxSummary,
+  TransportName,
+} from '../../shared/api/outbox-message.ts';
+import type { Delivery } from './mailer.ts';
+import type { MessageContent, OutgoingMessage } from './mail-message.ts';
 
 /** A message to put in the outbox. */
 export interface OutboxEntry extends MessageContent {
@@ -14,30 +18,6 @@ export interface OutboxEntry extends MessageContent {
   readonly kind: MessageKind;
   /** What it is about: a lot code, a username. */
   readonly related: string | null;
-}
-
-/** A message as the outbox list shows it (GET /api/outbox). */
-export interface OutboxSummary {
-  readonly id: number;
-  readonly createdAt: string;
-  readonly to: string;
-  readonly toName: string | null;
-  readonly subject: string;
-  readonly kind: MessageKind;
-  readonly related: string | null;
-  readonly transport: TransportName;
-  readonly state: OutboxState;
-  readonly attempts: number;
-  readonly sentAt: string | null;
-  /** The transport's answer, or why it failed. */
-  readonly result: string | null;
-}
-
-/** One message with its bodies (GET /api/outbox/:id). */
-export interface OutboxMessage extends OutboxSummary {
-  readonly messageId: string;
-  readonly text: string;
-  readonly html: string;
 }
 
 interface OutboxRow {

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { OutboxPage } from '../../shared/api/outbox-message.ts';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
 import { badRequest, notFound } from '../http/app-error.ts';
@@ -30,7 +31,7 @@ export function outboxRouter({ mail }: AppContext): Router {
       messages,
       next: messages.length === limit ? messages[messages.length - 1].id : null,
       transport: mail.mailer.transport,
-    });
+    } satisfies OutboxPage);
   });
 
   router.get('/:id', allowQuery(), async (req, res) => {

@@ -12,7 +12,8 @@ import {
   subheading,
   weighTable,
 } from './sheet-sections.ts';
-import { dayInWords, kindWords, momentInWords, statusInWords } from './sheet-words.ts';
+import { statusInWords } from '../../shared/workflow/batch-status.ts';
+import { dayInWords, kindWords, momentInWords } from './sheet-words.ts';
 
 /** The parts of a recorded batch its sheet prints beside the result. */
 export type SheetRecord = Pick<

@@ -1,5 +1,3 @@
-import type { BatchStatus } from '../../shared/api/batch-record.ts';
-
 const DAY = new Intl.DateTimeFormat('en-GB', {
   day: 'numeric',
   month: 'short',
@@ -24,20 +22,6 @@ export function dayInWords(day: string): string {
 export function momentInWords(moment: string): string {
   const date = new Date(moment);
   return Number.isNaN(date.getTime()) ? moment : MOMENT.format(date);
-}
-
-const STATUS_WORDS: Readonly<Record<BatchStatus, string>> = {
-  planned: 'Planned',
-  'in-progress': 'In progress',
-  curing: 'Curing',
-  proofing: 'Proofing',
-  done: 'Done',
-  discarded: 'Discarded',
-};
-
-/** A batch status in words. */
-export function statusInWords(status: BatchStatus): string {
-  return STATUS_WORDS[status];
 }
 
 /** A formula kind as a sheet names it: "Cure". */

@@ -3,7 +3,7 @@ import type { AuditEntry, AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { RecordsError } from '../records/records-error.ts';
 import type { PeopleRepository } from './people-repository.ts';
-import type { Person, Role } from './person.ts';
+import type { Person, Role } from '../../shared/api/person.ts';
 
 /** A person to add, with the password they sign in with. */
 export interface NewPersonRequest {

@@ -2,7 +2,7 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
 import { hashPassword, verifyPassword } from '../auth/passwords.ts';
-import type { Person, Role } from './person.ts';
+import type { Person, Role } from '../../shared/api/person.ts';
 
 interface PersonRow {
   id: number;

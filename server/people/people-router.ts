@@ -6,7 +6,7 @@ import { personOf } from '../auth/request-person.ts';
 import { AppError, badRequest, conflict, notFound } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { sendInvitation, type InvitationSent } from '../invitations/send-invitation.ts';
-import { ROLES, type Role } from './person.ts';
+import { ROLES, type Role } from '../../shared/api/person.ts';
 
 const USERNAME = { type: 'string', pattern: '^[a-z][a-z0-9._-]{1,31}$' } as const;
 const DISPLAY_NAME = { type: 'string', minLength: 1, maxLength: 80 } as const;

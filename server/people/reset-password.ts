@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import { RecordsError } from '../records/records-error.ts';
 import type { AuditedBy, PeopleDeps } from './add-person.ts';
 import type { PeopleRepository } from './people-repository.ts';
-import type { Person } from './person.ts';
+import type { Person } from '../../shared/api/person.ts';
 
 /** A person asked for by id (the API) or by username (the command line). */
 export type PersonKey = { readonly id: number } | { readonly username: string };

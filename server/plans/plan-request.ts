@@ -1,4 +1,5 @@
 import {
+  FORMULA_ID_PATTERN,
   FORMULA_REFUSALS,
   PlanError,
   formulaLibrary,
@@ -26,7 +27,7 @@ export const PLAN_BODY = {
   additionalProperties: false,
   required: ['assembly', 'count', 'for'],
   properties: {
-    assembly: { type: 'string', pattern: '^[a-z0-9][a-z0-9-]{1,62}$' },
+    assembly: { type: 'string', pattern: FORMULA_ID_PATTERN },
     count: { type: 'integer', minimum: 1, maximum: 100000 },
     for: { type: 'string', pattern: '^\\d{4}-\\d{2}-\\d{2}$' },
     units: { enum: ['metric', 'us'] },

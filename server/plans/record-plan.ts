@@ -1,5 +1,6 @@
 import type { PlanResult, UnitSystem } from '../../shared/index.ts';
-import type { Batch, ChangeOptions } from '../batches/batch.ts';
+import type { Batch } from '../../shared/api/batch-record.ts';
+import type { ChangeOptions } from '../batches/batch.ts';
 import type { BatchRepository } from '../batches/batch-repository.ts';
 import { prepareBatch } from '../batches/prepare-batch.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';

@@ -4,7 +4,8 @@ import type { Transaction } from 'sequelize';
 import type { PlanResult, PresentedPlan, PresentedResult, UnitSystem } from '../../shared/index.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import { MIN_PASSWORD_LENGTH } from '../auth/passwords.ts';
-import type { Batch, BatchPage, BatchStatus, ChangeOptions } from '../batches/batch.ts';
+import type { Batch, BatchPage, BatchStatus } from '../../shared/api/batch-record.ts';
+import type { ChangeOptions } from '../batches/batch.ts';
 import type { BatchRepository } from '../batches/batch-repository.ts';
 import type { RecordRequest } from '../batches/prepare-batch.ts';
 import { lotCodeOf, listBatches, showBatch } from '../batches/read-batches.ts';
@@ -20,7 +21,7 @@ import {
   type NewPersonRequest,
 } from '../people/add-person.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
-import type { Person, Role } from '../people/person.ts';
+import type { Person, Role } from '../../shared/api/person.ts';
 import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-password.ts';
 import { recordPlan } from '../plans/record-plan.ts';
 import { RecordsError, recordsErrorOf } from './records-error.ts';

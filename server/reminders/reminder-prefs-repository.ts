@@ -1,6 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
-import type { Role } from '../people/person.ts';
+import type { Role } from '../../shared/api/person.ts';
 import { REMINDER_KINDS, type ReminderKind } from './reminder-schedule.ts';
 
 /** Which reminders a person gets. */

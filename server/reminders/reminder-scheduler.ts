@@ -1,6 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { AppContext } from '../app-context.ts';
-import type { BatchStatus } from '../batches/batch.ts';
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
 import { reminderMessage, type RemindedBatch } from './reminder-message.ts';
 import {
   dueReminders,

@@ -3,7 +3,7 @@ import type { AppContext } from '../app-context.ts';
 import { personOf } from '../auth/request-person.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { validateBody } from '../http/validate-body.ts';
-import type { Person } from '../people/person.ts';
+import type { Person } from '../../shared/api/person.ts';
 import { DEFAULT_CHOICES, type ReminderChoices } from './reminder-prefs-repository.ts';
 
 const CHOICES_BODY = {

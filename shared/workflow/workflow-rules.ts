@@ -66,7 +66,7 @@ export function signOffRefusal(
 
 /**
  * Why this person may not move this batch to `to` under the rules; undefined when they may.
- * Only moves the status machine allows are asked about (see TRANSITIONS on the server).
+ * Only moves the status machine allows are asked about (TRANSITIONS in batch-status.ts).
  * @param mover who moves it, and the reason they give (null for none)
  */
 export function moveRefusal(

@@ -65,6 +65,8 @@ describe('larder calc --record and larder batches', () => {
     assertExit(show, 0);
     assert.match(show.stdout, new RegExp(`Lot ${LOT} · in-progress`));
     assert.match(show.stdout, /EVENTS/);
+    // Each event names who made it: the recording cook.
+    assert.match(show.stdout, /recorded\s+in-progress\s+tobin/);
 
     // Pumped to 12 % instead of 10 %: 144 ppm over the 120 ppm of 9 CFR 424.22(b); FSIS 7620.3 pumped formula.
     const refused = await runLarder([...REFUSED, '--record'], { env });

@@ -5,17 +5,8 @@ import {
   type WorkflowRefusal,
   type WorkflowRules,
 } from '../../../shared/workflow/workflow-rules.ts';
-import type { Batch, BatchStatus, FormulaKind } from './batch-types';
-
-/** Every status, in the order of the work. */
-export const BATCH_STATUSES: readonly BatchStatus[] = [
-  'planned',
-  'in-progress',
-  'curing',
-  'proofing',
-  'done',
-  'discarded',
-];
+import { movesFrom } from '../../../shared/workflow/batch-status.ts';
+import type { Batch, BatchStatus } from './batch-types';
 
 /** One move a cook can make from where a batch is now. */
 export interface StatusMove {
@@ -25,16 +16,6 @@ export interface StatusMove {
   /** Whether the move needs a reason (discarding does). */
   readonly needsReason: boolean;
 }
-
-// Mirrors TRANSITIONS in server/batches/batch.ts; the server refuses anything else with 409.
-const MOVES: Readonly<Record<BatchStatus, readonly BatchStatus[]>> = {
-  planned: ['in-progress', 'discarded'],
-  'in-progress': ['curing', 'proofing', 'done', 'discarded'],
-  curing: ['done', 'discarded'],
-  proofing: ['done', 'discarded'],
-  done: [],
-  discarded: [],
-};
 
 const ACTIONS: Readonly<Record<BatchStatus, string>> = {
   planned: 'Back to planned',
@@ -49,12 +30,12 @@ const ACTIONS: Readonly<Record<BatchStatus, string>> = {
  * The moves a batch of this kind may make from its status: curing is for cures only, proofing
  * for doughs only; done and discarded are final.
  */
-export function allowedMoves(from: BatchStatus, kind: FormulaKind): StatusMove[] {
-  return MOVES[from]
-    .filter((to) =>
-      to === 'curing' ? kind === 'cure' : to === 'proofing' ? kind === 'dough' : true,
-    )
-    .map((to) => ({ to, action: ACTIONS[to], needsReason: to === 'discarded' }));
+export function allowedMoves(from: BatchStatus, kind: Batch['kind']): StatusMove[] {
+  return movesFrom(from, kind).map((to) => ({
+    to,
+    action: ACTIONS[to],
+    needsReason: to === 'discarded',
+  }));
 }
 
 /** A move as the batch page offers it to the signed-in person. */

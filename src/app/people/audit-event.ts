@@ -1,42 +1,6 @@
-/** The things the audit log records (the server's list). */
-export type AuditAction =
-  | 'sign-in'
-  | 'sign-in-failed'
-  | 'sign-out'
-  | 'formula-save'
-  | 'formula-create'
-  | 'formula-upload'
-  | 'formula-disk-change'
-  | 'batch-record'
-  | 'batch-status'
-  | 'batch-sign-off'
-  | 'person-add'
-  | 'person-change'
-  | 'password-reset'
-  | 'invitation-send'
-  | 'reminder-choices'
-  | 'reminder-send';
+import type { AuditAction, AuditEvent } from '../../../shared/api/audit-event.ts';
 
-/** One entry of the audit log, as GET /api/audit returns it. */
-export interface AuditEvent {
-  readonly id: number;
-  /** When it happened (ISO 8601). */
-  readonly at: string;
-  readonly actorId: number | null;
-  /** Who did it; for a failed sign-in, the username that was tried. */
-  readonly actorName: string | null;
-  readonly action: AuditAction;
-  /** What it was done to: a username, a formula id or a lot code. */
-  readonly subject: string | null;
-  readonly detail: unknown;
-  readonly ip: string | null;
-}
-
-/** One page of the audit log; `next` is the `before` of the following page, null at the end. */
-export interface AuditPage {
-  readonly events: readonly AuditEvent[];
-  readonly next: number | null;
-}
+export type { AuditAction, AuditEvent, AuditPage } from '../../../shared/api/audit-event.ts';
 
 /** Every action in words, in the order the filter lists them. */
 export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly label: string }[] = [

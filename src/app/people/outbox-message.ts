@@ -1,44 +1,17 @@
-/** What Larderbook sends: an invitation, or one of the three reminders (the server's list). */
-export type MessageKind = 'invitation' | 'reminder-flip' | 'reminder-ready' | 'reminder-overdue';
+import type {
+  MessageKind,
+  OutboxSummary,
+  TransportName,
+} from '../../../shared/api/outbox-message.ts';
 
-/** Where a message is in the outbox, as the server keeps it. */
-export type OutboxState = 'pending' | 'sending' | 'sent' | 'failed';
-
-/** Where messages go: kept in the local outbox only, or handed to the mail server. */
-export type MailTransport = 'local' | 'smtp';
-
-/** A message as the outbox list shows it (GET /api/outbox). */
-export interface OutboxSummary {
-  readonly id: number;
-  /** When it was put in the outbox (ISO 8601). */
-  readonly createdAt: string;
-  readonly to: string;
-  readonly toName: string | null;
-  readonly subject: string;
-  readonly kind: MessageKind;
-  /** What it is about: a lot code, a username. */
-  readonly related: string | null;
-  readonly transport: MailTransport;
-  readonly state: OutboxState;
-  readonly attempts: number;
-  readonly sentAt: string | null;
-  /** The transport's answer, or why it failed. */
-  readonly result: string | null;
-}
-
-/** One message with its bodies (GET /api/outbox/:id); the console shows only the text. */
-export interface OutboxMessage extends OutboxSummary {
-  readonly messageId: string;
-  readonly text: string;
-  readonly html: string;
-}
-
-/** One page of the outbox; `next` is the `before` of the following page, null at the end. */
-export interface OutboxPage {
-  readonly messages: readonly OutboxSummary[];
-  readonly next: number | null;
-  readonly transport: MailTransport;
-}
+export type {
+  MessageKind,
+  OutboxMessage,
+  OutboxPage,
+  OutboxState,
+  OutboxSummary,
+  TransportName,
+} from '../../../shared/api/outbox-message.ts';
 
 /** The four states a reader tells apart: waiting, being handed over, sent, given up on. */
 export type DeliveryTone = 'queued' | 'sending' | 'sent' | 'failed';
@@ -106,7 +79,7 @@ export function recipientText(message: Pick<OutboxSummary, 'to' | 'toName'>): st
  * One line on where messages go: without LARDER_SMTP_URL they stay in the outbox.
  * @param transport The server's transport, or null before the first page has come back.
  */
-export function transportText(transport: MailTransport | null): string {
+export function transportText(transport: TransportName | null): string {
   if (transport === 'smtp')
     return 'Messages go out through the mail server set in LARDER_SMTP_URL; once an invitation is sent, its link is removed from the copy kept here.';
   if (transport === 'local')

@@ -2,7 +2,7 @@ import { HttpClient, HttpParams } from '@angular/common/http';
 import { Injectable, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { OlderPages } from './older-pages';
-import { MailTransport, OutboxMessage, OutboxPage, OutboxSummary } from './outbox-message';
+import { OutboxMessage, OutboxPage, OutboxSummary, TransportName } from './outbox-message';
 
 /** How many messages one page of the outbox holds. */
 const PAGE_SIZE = 50;
@@ -11,7 +11,7 @@ const PAGE_SIZE = 50;
 @Injectable({ providedIn: 'root' })
 export class OutboxStore {
   private readonly http = inject(HttpClient);
-  private readonly transportState = signal<MailTransport | null>(null);
+  private readonly transportState = signal<TransportName | null>(null);
   private readonly pages = new OlderPages<OutboxSummary>(
     (before) => this.fetchPage(before),
     'The outbox could not be loaded.',

@@ -1,3 +1,4 @@
+import { isFormulaId } from '../../../shared/formula/formula-id.ts';
 import type { PlanRequest, PlanUnits } from './plan-types';
 
 /** The most units one plan may serve (the API's limit). */
@@ -12,7 +13,6 @@ export interface PlanQuery {
   readonly units: PlanUnits;
 }
 
-const ID = /^[a-z0-9][a-z0-9-]{1,62}$/;
 const DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
 
 /** Whether text is a real calendar day written YYYY-MM-DD (not 2026-02-30). */
@@ -36,7 +36,7 @@ export function planQueryFrom(params: Readonly<Record<string, string | undefined
   const day = params['for'];
   const number = count !== undefined && /^\d+$/.test(count) ? Number(count) : NaN;
   return {
-    assembly: assembly !== undefined && ID.test(assembly) ? assembly : null,
+    assembly: assembly !== undefined && isFormulaId(assembly) ? assembly : null,
     count: number >= 1 && number <= MAX_COUNT ? number : null,
     for: day !== undefined && isIsoDay(day) ? day : null,
     units: params['units'] === 'us' ? 'us' : 'metric',

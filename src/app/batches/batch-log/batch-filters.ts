@@ -21,10 +21,9 @@ import { MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field'
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
-import { statusWords } from '../../ui/batch-sheet/batch-status-chip';
+import { BATCH_STATUSES, statusInWords } from '../../../../shared/workflow/batch-status.ts';
 import { DAY_INPUT_FORMATS } from '../../ui/batch-sheet/day-input-formats';
 import { isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
-import { BATCH_STATUSES } from '../batch-status';
 import type { BatchStatus, FormulaKind, PersonRef } from '../batch-types';
 import type { FormulaOption } from '../formula-options';
 import { isFiltered, type LogQuery } from './log-query';
@@ -80,7 +79,7 @@ export class BatchFilters {
 
   protected readonly statuses = BATCH_STATUSES.map((status) => ({
     value: status,
-    words: statusWords(status),
+    words: statusInWords(status),
   }));
   protected readonly kinds: readonly { value: FormulaKind; words: string }[] = [
     { value: 'cure', words: 'Cure' },

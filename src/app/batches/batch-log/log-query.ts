@@ -1,3 +1,5 @@
+import { isFormulaId } from '../../../../shared/formula/formula-id.ts';
+import { BATCH_STATUSES } from '../../../../shared/workflow/batch-status.ts';
 import type { BatchStatus, FormulaKind } from '../batch-types';
 
 /** What the batch log can be sorted by (the API's sort keys). */
@@ -51,14 +53,6 @@ export const DEFAULT_QUERY: LogQuery = {
 };
 
 const KINDS: readonly FormulaKind[] = ['cure', 'dough', 'blend', 'mix'];
-const STATUSES: readonly BatchStatus[] = [
-  'planned',
-  'in-progress',
-  'curing',
-  'proofing',
-  'done',
-  'discarded',
-];
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 
 /** The query parameters of the address bar, as the router gives them. */
@@ -78,13 +72,13 @@ export function queryFromParams(params: QueryParams): LogQuery {
   const formula = params['formula'];
   const lot = params['lot']?.trim().toUpperCase();
   return {
-    formula: formula && /^[a-z0-9][a-z0-9-]{1,62}$/.test(formula) ? formula : null,
+    formula: formula && isFormulaId(formula) ? formula : null,
     kind: kind && (KINDS as readonly string[]).includes(kind) ? (kind as FormulaKind) : null,
     statuses: [
       ...new Set(
         (params['status'] ?? '')
           .split(',')
-          .filter((s): s is BatchStatus => (STATUSES as readonly string[]).includes(s)),
+          .filter((s): s is BatchStatus => (BATCH_STATUSES as readonly string[]).includes(s)),
       ),
     ],
     operator: Number.isSafeInteger(operator) && operator >= 1 ? operator : null,

@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
-import { statusWords } from '../../ui/batch-sheet/batch-status-chip';
+import { statusInWords } from '../../../../shared/workflow/batch-status.ts';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import type { BatchEvent } from '../batch-types';
 
@@ -41,7 +41,7 @@ export class StatusTimeline {
 }
 
 function entryOf(event: BatchEvent): TimelineEntry {
-  const words = (status: BatchEvent['to']): string => (status ? statusWords(status) : '—');
+  const words = (status: BatchEvent['to']): string => (status ? statusInWords(status) : '—');
   const what =
     event.type === 'recorded'
       ? `Recorded as ${words(event.to)}`

@@ -1,28 +1,23 @@
+import {
+  BATCH_OPTION_NAMES,
+  type BatchOptionName,
+} from '../../../../shared/calculation/batch-option-names.ts';
 import type { FormulaFacts, RawBatchOptions } from '../batch-types';
 
 /** What a batch option measures, which decides the unit a bare number is taken in. */
 export type Measure = 'mass' | 'small-mass' | 'length' | 'percent' | 'count' | 'temperature';
 
-/** The batch options the record form offers (keys of the API's batch options). */
-export type FieldKey =
-  | 'meat'
-  | 'thickness'
-  | 'largestPiece'
-  | 'water'
-  | 'pump'
-  | 'pumpedWeight'
-  | 'pieces'
-  | 'piece'
-  | 'loss'
-  | 'flour'
-  | 'total'
-  | 'ddt'
-  | 'room'
-  | 'flourTemp'
-  | 'prefermentTemp'
-  | 'tap'
-  | 'targetFat'
-  | 'base';
+// The batch options with no box of their own: the start has its date picker and a blend's
+// trimmings their own rows; the rest are left to the formula.
+const NOT_BOXES = ['start', 'want', 'friction', 'yeast', 'onHand', 'fatTest', 'portion'] as const;
+
+/** The batch options the record form offers a box for (keys of the API's batch options). */
+export type FieldKey = Exclude<BatchOptionName, (typeof NOT_BOXES)[number]>;
+
+/** Every {@link FieldKey}. */
+export const FIELD_KEYS: readonly FieldKey[] = BATCH_OPTION_NAMES.filter(
+  (name): name is FieldKey => !(NOT_BOXES as readonly string[]).includes(name),
+);
 
 /** One box of the record form. */
 export interface BatchField {

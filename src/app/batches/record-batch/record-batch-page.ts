@@ -37,6 +37,7 @@ import { BatchLog } from '../batch-log/batch-log';
 import type { FormulaFacts } from '../batch-types';
 import { FormulaOptions } from '../formula-options';
 import {
+  FIELD_KEYS,
   batchOptions,
   fieldOf,
   fieldsFor,
@@ -46,27 +47,6 @@ import {
   type Units,
 } from './batch-fields';
 import { BatchRecorder } from './batch-recorder';
-
-const FIELD_KEYS: readonly FieldKey[] = [
-  'meat',
-  'thickness',
-  'largestPiece',
-  'water',
-  'pump',
-  'pumpedWeight',
-  'pieces',
-  'piece',
-  'loss',
-  'flour',
-  'total',
-  'ddt',
-  'room',
-  'flourTemp',
-  'prefermentTemp',
-  'tap',
-  'targetFat',
-  'base',
-];
 
 /** The boxes of each blend trimming: the weight on hand and a fat test measured today. */
 const TRIMMING_BOXES = [

@@ -18,6 +18,7 @@ import {
   starterFormula,
 } from '../../../../shared/formula/starters/starter-formula.ts';
 import { messageOf } from '../../core/api/message-of';
+import { FORMULA_ID } from '../../../../shared/formula/formula-id.ts';
 import type { FormulaKind, FormulaProblem } from '../formula-api-types';
 import { FormulaProblems } from '../formula-problems/formula-problems';
 import { problemsOf } from '../formula-problems/problems-of';
@@ -59,7 +60,7 @@ export class NewFormulaDialog {
   protected readonly form = inject(NonNullableFormBuilder).group({
     kind: ['cure' as FormulaKind, Validators.required],
     method: ['dry' as CureMethod, Validators.required],
-    id: ['', [Validators.required, Validators.pattern(/^[a-z0-9][a-z0-9-]{1,62}$/)]],
+    id: ['', [Validators.required, Validators.pattern(FORMULA_ID)]],
     title: ['', [Validators.required, Validators.maxLength(120)]],
     message: ['New formula', [Validators.required, Validators.pattern(/\S/)]],
   });

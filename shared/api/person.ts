@@ -1,6 +1,12 @@
+/**
+ * People as the API shows them (/api/people, /api/session): one definition for the server, the
+ * command line and the console. The console imports these as types only.
+ */
+
 /** The roles: admin (everything), cook (run and record batches), reviewer (read all, sign off). */
 export type Role = 'admin' | 'cook' | 'reviewer';
 
+/** Every role, most powerful first. */
 export const ROLES: readonly Role[] = ['admin', 'cook', 'reviewer'];
 
 /** A person as the API shows them; never carries the password hash. */
@@ -15,4 +21,10 @@ export interface Person {
   readonly demo: boolean;
   readonly createdAt: string;
   readonly updatedAt: string;
+}
+
+/** GET/POST /api/session: who is signed in, and the token that unsafe requests send back. */
+export interface SessionInfo {
+  readonly person: Person;
+  readonly csrfToken: string;
 }
