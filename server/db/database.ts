@@ -9,6 +9,7 @@ import * as sessionCutoff from './migrations/003-session-cutoff.ts';
 import * as outbox from './migrations/004-outbox.ts';
 import * as invitations from './migrations/005-invitations.ts';
 import * as reminders from './migrations/006-reminders.ts';
+import * as processRecords from './migrations/007-process-records.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -20,7 +21,15 @@ export interface OpenOptions {
 }
 
 /** Every schema change, in order. Bundled, so listed here rather than found on disk. */
-const MIGRATIONS = [initial, batchSortIndexes, sessionCutoff, outbox, invitations, reminders];
+const MIGRATIONS = [
+  initial,
+  batchSortIndexes,
+  sessionCutoff,
+  outbox,
+  invitations,
+  reminders,
+  processRecords,
+];
 
 /** An open database: the Sequelize instance the repositories share. */
 export interface Database {

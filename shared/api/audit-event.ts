@@ -21,6 +21,20 @@ export const AUDIT_ACTIONS = [
   'invitation-send',
   'reminder-choices',
   'reminder-send',
+  'reading-add',
+  'reading-correct',
+  'readings-upload',
+  'weighing-add',
+  'batch-start',
+  'deviation-open',
+  'corrective-action',
+  'batch-verify',
+  'calculation-refused',
+  'equipment-add',
+  'equipment-change',
+  'calibration-add',
+  'process-alert-send',
+  'report-produce',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

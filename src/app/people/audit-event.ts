@@ -20,6 +20,20 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'invitation-send', label: 'Sent an invitation' },
   { value: 'reminder-choices', label: 'Chose their reminders' },
   { value: 'reminder-send', label: 'Sent a reminder' },
+  { value: 'reading-add', label: 'Took a reading' },
+  { value: 'reading-correct', label: 'Corrected a reading' },
+  { value: 'readings-upload', label: 'Uploaded a thermometer log' },
+  { value: 'weighing-add', label: 'Weighed' },
+  { value: 'batch-start', label: 'Started a planned batch' },
+  { value: 'deviation-open', label: 'A limit was missed' },
+  { value: 'corrective-action', label: 'Recorded a corrective action' },
+  { value: 'batch-verify', label: 'Verified and released a batch' },
+  { value: 'calculation-refused', label: 'A calculation was refused' },
+  { value: 'equipment-add', label: 'Added equipment' },
+  { value: 'equipment-change', label: 'Changed equipment' },
+  { value: 'calibration-add', label: 'Checked a thermometer' },
+  { value: 'process-alert-send', label: 'Sent an alert' },
+  { value: 'report-produce', label: 'Produced a HACCP report' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));
