@@ -139,3 +139,22 @@ export interface ReadingAnswer {
 
 /** A measure in words for labels. */
 export type MeasureWords = Readonly<Record<Measure, string>>;
+
+/** One thing needing attention now, as GET /api/process/now lists it (most urgent first). */
+export interface NowItem {
+  readonly kind: 'reading-due' | 'stage-deadline' | 'deviation';
+  readonly lotCode: string;
+  readonly formulaTitle: string;
+  /** The control's id and title; null for a deviation not tied to a control. */
+  readonly control: string | null;
+  readonly controlTitle: string | null;
+  /** ISO time it is due (a reading, a stage's deadline) or was opened (a deviation). */
+  readonly at: string;
+  /** Words for a cook: "Chilling: must reach 21 °C by 14:32". */
+  readonly what: string;
+}
+
+/** GET /api/process/now. */
+export interface ProcessNow {
+  readonly items: readonly NowItem[];
+}
