@@ -53,8 +53,8 @@ export interface Correction {
     <form [formGroup]="form" (ngSubmit)="confirm()" data-testid="correction-dialog">
       <mat-dialog-content>
         <p>
-          It stands at <strong>{{ data.old }}</strong
-          >. The old value stays on the record, struck through, with your reason.
+          It stands at <strong>{{ data.old }}</strong>. The old value stays on the record, struck
+          through, with your reason.
         </p>
         <mat-form-field class="wide">
           <mat-label>Correct value</mat-label>

@@ -54,8 +54,14 @@ describe('limitBands', () => {
     const span = { from: T0, to: T0 + 60 * MIN };
     const [range] = limitBands({ type: 'between', min: '60', max: '80' }, [], span, words);
     assert.equal(range.kind, 'range');
-    assert.deepEqual(range.points.map((p) => p.y), [80, 80]);
-    assert.deepEqual(range.other?.map((p) => p.y), [60, 60]);
+    assert.deepEqual(
+      range.points.map((p) => p.y),
+      [80, 80],
+    );
+    assert.deepEqual(
+      range.other?.map((p) => p.y),
+      [60, 60],
+    );
     const [stage] = limitBands(OPTION_1, [at(0, 56), at(30, 50)], span, words);
     assert.equal(stage.kind, 'stage');
     assert.equal(stage.label, 'Stage 1: 26.7 °C by 14:00');

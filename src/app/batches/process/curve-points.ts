@@ -97,7 +97,9 @@ export function limitBands(
   ];
   switch (limit.type) {
     case 'at-most':
-      return [{ label: `At most ${words.temp(limit.max)}`, kind: 'line', points: across(+limit.max) }];
+      return [
+        { label: `At most ${words.temp(limit.max)}`, kind: 'line', points: across(+limit.max) },
+      ];
     case 'at-least':
       return [
         { label: `At least ${words.temp(limit.min)}`, kind: 'line', points: across(+limit.min) },
@@ -114,7 +116,13 @@ export function limitBands(
     case 'hold': {
       const row = limit.rows[0];
       return row
-        ? [{ label: `Must reach ${words.temp(row.tempC)}`, kind: 'line', points: across(+row.tempC) }]
+        ? [
+            {
+              label: `Must reach ${words.temp(row.tempC)}`,
+              kind: 'line',
+              points: across(+row.tempC),
+            },
+          ]
         : [];
     }
     case 'cooling': {

@@ -11,7 +11,7 @@ import type {
   ReadingAnswer,
   StageName,
   Verification,
-  Weighing,
+  WeighingAnswer,
 } from './process-types';
 
 /** How a write ended: its answer, or the server's words for why not. */
@@ -29,13 +29,6 @@ export interface ActionRequest {
   readonly grams?: string;
   /** Why an earlier action is replaced. */
   readonly reason?: string;
-}
-
-/** What a weighing answers: the weighings written, the actual nitrite, a deviation it opened. */
-export interface WeighAnswer {
-  readonly weighings: readonly Weighing[];
-  readonly actualNitritePpm: string | null;
-  readonly deviation: Deviation | null;
 }
 
 /**
@@ -110,14 +103,16 @@ export class ProcessStore {
   weigh(body: {
     readonly lines?: readonly { readonly name: string; readonly weight: string }[];
     readonly stage?: { readonly name: StageName; readonly weight: string };
-  }): Promise<Outcome<WeighAnswer>> {
-    return this.write((lot) => this.http.post<WeighAnswer>(`/api/batches/${lot}/weighings`, body));
+  }): Promise<Outcome<WeighingAnswer>> {
+    return this.write((lot) =>
+      this.http.post<WeighingAnswer>(`/api/batches/${lot}/weighings`, body),
+    );
   }
 
   /** Corrects a weighing, with the reason. */
-  correctWeighing(id: number, weight: string, reason: string): Promise<Outcome<unknown>> {
+  correctWeighing(id: number, weight: string, reason: string): Promise<Outcome<WeighingAnswer>> {
     return this.write(() =>
-      this.http.post<unknown>(`/api/weighings/${id}/correction`, { weight, reason }),
+      this.http.post<WeighingAnswer>(`/api/weighings/${id}/correction`, { weight, reason }),
     );
   }
 

@@ -3,6 +3,7 @@
  * (types only) for the server and the console alike.
  */
 export type {
+  ActualYield,
   BatchControl,
   CorrectiveAction,
   Deviation,
@@ -13,6 +14,7 @@ export type {
   Reading,
   ReadingAnswer,
   StageName,
+  WeighingAnswer,
   Verification,
   Weighing,
 } from '../../../../shared/api/process-record.ts';

@@ -18,8 +18,18 @@ describe('limitWords', () => {
     const limit: ControlLimit = {
       type: 'cooling',
       stages: [
-        { fromC: '54.4444444444', toC: '26.6666666667', withinS: '5400', countedFrom: 'stage-start' },
-        { fromC: '26.6666666667', toC: '4.4444444444', withinS: '18000', countedFrom: 'stage-start' },
+        {
+          fromC: '54.4444444444',
+          toC: '26.6666666667',
+          withinS: '5400',
+          countedFrom: 'stage-start',
+        },
+        {
+          fromC: '26.6666666667',
+          toC: '4.4444444444',
+          withinS: '18000',
+          countedFrom: 'stage-start',
+        },
       ],
     };
     assert.equal(
@@ -34,7 +44,12 @@ describe('limitWords', () => {
     const limit: ControlLimit = {
       type: 'cooling',
       stages: [
-        { fromC: '57.2222222222', toC: '21.1111111111', withinS: '7200', countedFrom: 'stage-start' },
+        {
+          fromC: '57.2222222222',
+          toC: '21.1111111111',
+          withinS: '7200',
+          countedFrom: 'stage-start',
+        },
         { fromC: '21.1111111111', toC: '5', withinS: '21600', countedFrom: 'cooling-start' },
       ],
     };

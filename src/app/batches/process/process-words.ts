@@ -82,8 +82,7 @@ export function limitWords(limit: ControlLimit, unit: CanonicalUnit): string {
         .map((stage, index) => {
           const from =
             index === 0 ? `from ${v(stage.fromC)} ` : index === 1 ? 'then ' : 'and then ';
-          const counted =
-            stage.countedFrom === 'cooling-start' && index > 0 ? ' of the start' : '';
+          const counted = stage.countedFrom === 'cooling-start' && index > 0 ? ' of the start' : '';
           return `${from}to ${v(stage.toC)} within ${durationWords(stage.withinS)}${counted}`;
         })
         .join(', ');
