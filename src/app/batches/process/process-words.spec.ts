@@ -34,7 +34,7 @@ describe('limitWords', () => {
     };
     assert.equal(
       limitWords(limit, '°C'),
-      'from 54.4 °C to 26.7 °C within 1 h 30 min, then to 4.4 °C within 5 h',
+      'from 54.4 °C (130 °F) to 26.7 °C (80 °F) within 1 h 30 min, then to 4.4 °C (40 °F) within 5 h',
     );
   });
 
@@ -53,7 +53,7 @@ describe('limitWords', () => {
         { fromC: '21.1111111111', toC: '5', withinS: '21600', countedFrom: 'cooling-start' },
       ],
     };
-    assert.match(limitWords(limit, '°C'), /then to 5 °C within 6 h of the start$/);
+    assert.match(limitWords(limit, '°C'), /then to 5 °C \(41 °F\) within 6 h of the start$/);
   });
 
   it('should say a time-at-temperature table row by row', () => {
@@ -65,23 +65,27 @@ describe('limitWords', () => {
         { tempC: '65.5555555556', holdS: '60' },
       ],
     };
-    assert.equal(limitWords(limit, '°C'), 'at least 68.3 °C for 17 s, or 65.6 °C for 1 min');
+    assert.equal(
+      limitWords(limit, '°C'),
+      'at least 68.3 °C (155 °F) for 17 s, or 65.6 °C (150 °F) for 1 min',
+    );
   });
 
   it('should say a range and a maximum', () => {
     // 41 °F = 5 °C. source: FDA Food Code 2022, §3-501.16(A)(2)
-    assert.equal(limitWords({ type: 'at-most', max: '5' }, '°C'), 'at most 5 °C');
+    assert.equal(limitWords({ type: 'at-most', max: '5' }, '°C'), 'at most 5 °C (41 °F)');
     assert.equal(
       limitWords({ type: 'between', min: '60', max: '80' }, '°C'),
-      'between 60 °C and 80 °C',
+      'between 60 °C (140 °F) and 80 °C (176 °F)',
     );
   });
 });
 
 describe('valueWords and durationWords', () => {
   it('should round half up and drop a trailing zero', () => {
-    assert.equal(valueWords('21.25', '°C'), '21.3 °C');
-    assert.equal(valueWords('70.0', '°C'), '70 °C');
+    // 21.25 °C = 70.25 °F. source: the Celsius–Fahrenheit relation, °F = °C × 9/5 + 32
+    assert.equal(valueWords('21.25', '°C'), '21.3 °C (70 °F)');
+    assert.equal(valueWords('70.0', '°C'), '70 °C (158 °F)');
     assert.equal(valueWords('12450', 'g'), '12.45 kg');
     assert.equal(durationWords('5400'), '1 h 30 min');
     assert.equal(durationWords('17'), '17 s');

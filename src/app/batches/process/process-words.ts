@@ -1,4 +1,9 @@
 import { Decimal } from '../../../../shared/decimal.ts';
+import {
+  clockWords as coreClockWords,
+  durationWords,
+  valueWords as coreValueWords,
+} from '../../../../shared/process/control-words.ts';
 import type {
   BatchControl,
   CanonicalUnit,
@@ -10,29 +15,15 @@ import type {
   StageName,
 } from './process-types';
 
-const CLOCK = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit' });
-const DAY_AND_CLOCK = new Intl.DateTimeFormat('en-GB', {
-  day: 'numeric',
-  month: 'short',
-  hour: '2-digit',
-  minute: '2-digit',
-});
+/** The kitchen's time zone: the clocks on the tablet's wall. */
+const KITCHEN_ZONE = Intl.DateTimeFormat().resolvedOptions().timeZone;
+
+export { durationWords };
 
 /** A decimal rounded half-up to `places`, without a trailing ".0". */
 function rounded(value: string, places: number): string {
   const text = new Decimal(value).toFixed(places);
   return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
-}
-
-/** A number of seconds in a cook's words: "17 s", "3 min", "1 h 30 min". */
-export function durationWords(seconds: string): string {
-  const total = new Decimal(seconds);
-  if (total.lessThan(60)) return `${rounded(seconds, 0)} s`;
-  const minutes = total.div(60).toDecimalPlaces(0).toNumber();
-  const hours = Math.floor(minutes / 60);
-  const rest = minutes % 60;
-  if (hours === 0) return `${minutes} min`;
-  return rest === 0 ? `${hours} h` : `${hours} h ${rest} min`;
 }
 
 /** A grams figure as a scale shows it: "950 g", "12.45 kg". */
@@ -43,20 +34,9 @@ export function weightWords(grams: string): string {
     : `${rounded(grams, 1)} g`;
 }
 
-/** A value in its canonical unit, as a cook reads it: "21.1 °C", "17 s", "6.2 pH". */
+/** A value in its canonical unit, as a cook reads it: "21.1 °C (70 °F)", "17 s", "12.45 kg". */
 export function valueWords(value: string, unit: CanonicalUnit): string {
-  switch (unit) {
-    case '°C':
-      return `${rounded(value, 1)} °C`;
-    case 's':
-      return durationWords(value);
-    case 'g':
-      return weightWords(value);
-    case 'pH':
-      return `pH ${rounded(value, 2)}`;
-    case 'aw':
-      return `water activity ${rounded(value, 3)}`;
-  }
+  return unit === 'g' ? weightWords(value) : coreValueWords(value, unit);
 }
 
 /** The critical limit in words: "at most 5 °C", "from 54.4 °C to 26.7 °C within 1 h 30 min, …". */
@@ -147,13 +127,10 @@ export const STAGE_WORDS: Readonly<Record<StageName, string>> = {
   sliced: 'After slicing',
 };
 
-/** A time of day on the kitchen's clock, with the day when it is not today: "14:32", "3 Mar, 09:10". */
+/** A time of day on the kitchen's clock, with the day when it is not today: "14:32", "3 Mar 09:10". */
 export function clockWords(iso: string, now: Date = new Date()): string {
-  const moment = new Date(iso);
-  if (Number.isNaN(moment.getTime())) return iso;
-  return moment.toDateString() === now.toDateString()
-    ? CLOCK.format(moment)
-    : DAY_AND_CLOCK.format(moment);
+  if (Number.isNaN(new Date(iso).getTime())) return iso;
+  return coreClockWords(iso, KITCHEN_ZONE, now.toISOString());
 }
 
 /** When the next reading is due, in words: "due by 14:32, in 12 min", "overdue since 14:02". */
