@@ -83,7 +83,12 @@ export class DeadlineScan {
     for (const batch of await process.beingMade()) {
       const controls = await process.controlsOf(batch);
       if (controls.length === 0) continue;
-      const judged = judgeBatch(controls, await process.readings(batch.id), batch.status, kitchenClock(at));
+      const judged = judgeBatch(
+        controls,
+        await process.readings(batch.id),
+        batch.status,
+        kitchenClock(at),
+      );
       const known = new Set((await process.deviations(batch.id)).map((d) => d.key));
       if (deviationsToOpen(batch, judged).every((d) => known.has(d.key))) continue;
       const found = await db.write(async (t) => {

@@ -41,13 +41,7 @@ export async function judgeAndOpen(
   const judged = judgeBatch(controls, readings, batch.status, kitchenClock(at));
   const opened: Judgement['opened'] = [];
   for (const deviation of deviationsToOpen(batch, judged)) {
-    const id = await openDeviation(
-      deps.db,
-      deps.audit,
-      t,
-      { ...deviation, openedAt: at },
-      by,
-    );
+    const id = await openDeviation(deps.db, deps.audit, t, { ...deviation, openedAt: at }, by);
     if (id !== null) opened.push({ id, control: deviation.control });
   }
   return { controls: judged, readings, opened };

@@ -37,8 +37,7 @@ export function judgeBatch(
       .filter((r) => r.correctedBy === null)
       .sort((a, b) => (a.at === b.at ? a.id - b.id : a.at < b.at ? -1 : 1))
       .map((r) => ({ at: r.at, value: r.value }));
-    const stepOver =
-      over || controls.slice(index + 1).some((later) => byControl.has(later.id));
+    const stepOver = over || controls.slice(index + 1).some((later) => byControl.has(later.id));
     return {
       control,
       state: evaluateControl(control, standing, clock, { stepOver }),

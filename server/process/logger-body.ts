@@ -50,12 +50,18 @@ export const readLoggerFile: RequestHandler = (req, res, next) => {
               { field: error.field ?? 'file' },
             ]),
       );
-    if (error) return next(badRequest(`the upload is not valid multipart/form-data: ${(error as Error).message}`));
-    if (!req.file) return next(badRequest('send the logger file in the field "file"', [{ field: 'file' }]));
+    if (error)
+      return next(
+        badRequest(`the upload is not valid multipart/form-data: ${(error as Error).message}`),
+      );
+    if (!req.file)
+      return next(badRequest('send the logger file in the field "file"', [{ field: 'file' }]));
     try {
       res.locals.loggerText = new TextDecoder('utf-8', { fatal: true }).decode(req.file.buffer);
     } catch {
-      return next(badRequest('the logger file is not UTF-8 text; export it as CSV', [{ field: 'file' }]));
+      return next(
+        badRequest('the logger file is not UTF-8 text; export it as CSV', [{ field: 'file' }]),
+      );
     }
     next();
   });

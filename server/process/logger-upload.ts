@@ -1,5 +1,9 @@
 import type { Deviation } from '../../shared/api/process-record.ts';
-import { LoggerCsvError, parseLoggerCsv, type LoggedPoint } from '../../shared/process/logger-csv.ts';
+import {
+  LoggerCsvError,
+  parseLoggerCsv,
+  type LoggedPoint,
+} from '../../shared/process/logger-csv.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import { AppError } from '../http/app-error.ts';
 import { judgeAndOpen, type ProcessDeps } from './judge-and-open.ts';
@@ -33,9 +37,12 @@ function pointsOf(text: string): LoggedPoint[] {
     return parseLoggerCsv(text, kitchenTimeZone());
   } catch (error) {
     if (!(error instanceof LoggerCsvError)) throw error;
-    throw new AppError(422, 'bad-log', `the logger file cannot be read: ${error.message}; nothing was stored`, [
-      { line: error.line, message: error.message },
-    ]);
+    throw new AppError(
+      422,
+      'bad-log',
+      `the logger file cannot be read: ${error.message}; nothing was stored`,
+      [{ line: error.line, message: error.message }],
+    );
   }
 }
 

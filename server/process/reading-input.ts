@@ -49,11 +49,7 @@ function withoutUnit(text: string, unit: string): string {
  * unit already ("71.5", "71.5 °C").
  * @throws AppError 422 bad-reading with the field at fault
  */
-export function readingValue(
-  text: string,
-  control: ResolvedControl,
-  field = 'value',
-): ParsedValue {
+export function readingValue(text: string, control: ResolvedControl, field = 'value'): ParsedValue {
   let value: Decimal;
   try {
     value = parseReadingValue(text, control.measure);
@@ -102,7 +98,10 @@ export function refuseReadingsOn(lot: string, status: BatchStatus): void {
 }
 
 /** Where a request's reading comes from: the console's session, the larder command, a script. */
-export function readingSource(authVia: 'session' | 'basic' | undefined, client?: string): ReadingSource {
+export function readingSource(
+  authVia: 'session' | 'basic' | undefined,
+  client?: string,
+): ReadingSource {
   if (authVia !== 'basic') return 'console';
   return client?.trim().toLowerCase() === 'larder' ? 'command' : 'api';
 }

@@ -84,8 +84,7 @@ async function answerOf(
 ): Promise<ReadingAnswer> {
   const reading = judgement.readings.find((r) => r.id === readingId)!;
   const state = judgement.controls.find((c) => c.control.id === reading.control)!.state;
-  const opened =
-    judgement.opened.find((o) => o.control === reading.control) ?? judgement.opened[0];
+  const opened = judgement.opened.find((o) => o.control === reading.control) ?? judgement.opened[0];
   const deviation = opened
     ? ((await deps.process.deviations(batch.id, t)).find((d) => d.id === opened.id) ?? null)
     : null;
@@ -131,7 +130,14 @@ export async function addReading(
         actor: by.actor,
         action: 'reading-add',
         subject: lot,
-        detail: { reading: id, control: control.id, at, value: parsed.value, enteredAs: parsed.enteredAs, source },
+        detail: {
+          reading: id,
+          control: control.id,
+          at,
+          value: parsed.value,
+          enteredAs: parsed.enteredAs,
+          source,
+        },
         ...(by.ip === undefined ? {} : { ip: by.ip }),
       },
       t,

@@ -32,7 +32,8 @@ export async function verifyBatch(
       'SELECT id FROM verifications WHERE batch_id = ? LIMIT 1',
       { replacements: [batch.id], type: QueryTypes.SELECT, transaction: t },
     );
-    if (already) throw conflict('already-verified', `batch ${lot} was verified and released already`);
+    if (already)
+      throw conflict('already-verified', `batch ${lot} was verified and released already`);
     // Misses found now are opened (and committed) even when the verification is refused.
     const judgement = await judgeAndOpen(deps, t, batch, controls, at, by);
     const deviations = await deps.process.deviations(batch.id, t);
@@ -59,7 +60,12 @@ export async function verifyBatch(
       `INSERT INTO batch_events (batch_id, at, actor_id, type, from_status, to_status, reason)
        VALUES (?, ?, ?, 'note', NULL, NULL, ?)`,
       {
-        replacements: [batch.id, at, by.actor.id, `Records verified; released${note ? `: ${note}` : ''}`],
+        replacements: [
+          batch.id,
+          at,
+          by.actor.id,
+          `Records verified; released${note ? `: ${note}` : ''}`,
+        ],
         transaction: t,
       },
     );

@@ -3,7 +3,7 @@
  * without a header line, comma or semicolon, °C or °F from the header or the value, an index
  * column tolerated. Any line it cannot read refuses the whole file, naming the line.
  */
-import { Decimal } from '../decimal.ts';
+import type { Decimal } from '../decimal.ts';
 import { QuantityError } from '../units/quantity-error.ts';
 import { parseTemperature } from '../units/temperature.ts';
 import { DateTimeError, readLoggerDateTime } from './local-time.ts';
