@@ -27,6 +27,9 @@ import { invitationsRouter } from './invitations/invitations-router.ts';
 import { outboxRouter } from './mail/outbox-router.ts';
 import { peopleRouter } from './people/people-router.ts';
 import { remindersRouter } from './reminders/reminders-router.ts';
+import { startRouter } from './batches/start-router.ts';
+import { refusalsRouter } from './process/refusals-router.ts';
+import { batchWeighingsRouter, weighingsRouter } from './process/weighings-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
 const JSON_LIMIT = '512kb';
@@ -68,9 +71,12 @@ export function createApp(context: AppContext): Express {
   api.use('/plans', plansRouter(context));
   api.use('/formulas', formulasRouter(context));
   api.use('/batches', batchProcessRouter(context), batchesRouter(context));
+  api.use('/batches', batchWeighingsRouter(context), startRouter(context));
   api.use('/readings', readingsRouter(context));
   api.use('/deviations', deviationsRouter(context));
   api.use('/process', processNowRouter(context));
+  api.use('/weighings', weighingsRouter(context));
+  api.use('/refusals', refusalsRouter(context));
   // A mount at /batches does not match /batches.csv, so the export is a route of its own.
   api.get('/batches.csv', batchesCsv(context));
   api.use('/people/me/reminders', remindersRouter(context));

@@ -216,6 +216,9 @@ export class ProcessRepository {
       weighings: weighingRows.map((w) => toWeighing(w, weighingCorrections)),
       // Worked out from the weighed lines by the weights records; none from readings alone.
       actualNitritePpm: null,
+      // Merge stand-in: the weights records fill the yields and the kept plan.
+      actualYields: [],
+      planned: null,
       deviations: deviations.map(({ key: _key, ...deviation }) => deviation),
       onHold: deviations.some((d) => d.action === null),
       nonconforming: deviations.length > 0,

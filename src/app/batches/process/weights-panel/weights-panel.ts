@@ -75,7 +75,7 @@ export class WeightsPanel {
     });
   });
   protected readonly actualPpm = computed(() => {
-    const ppm = this.store.record()?.actualNitritePpm;
+    const ppm = this.store.record()?.actualNitritePpm ?? this.answer()?.actualNitritePpm;
     return ppm ? new Decimal(ppm).toFixed(1) : null;
   });
   protected readonly calculatedPpm = computed(() => {
