@@ -35,9 +35,11 @@ export async function openDeviation(
   by: ChangeOptions | null,
 ): Promise<number | null> {
   const at = by?.at ?? new Date().toISOString();
-  const [inserted] = await db.sequelize.query<{ id: number }>(
+  // sqlite answers an INSERT with [last row id, rows changed]; none changed: already open. (A
+  // RETURNING clause is lost: Sequelize runs an INSERT without reading rows back.)
+  const [insertedId, changed] = (await db.sequelize.query(
     `INSERT INTO deviations (batch_id, equipment_id, control, kind, what, opened_at, opened_by, reading_id, dedupe_key)
-     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING RETURNING id`,
+     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING`,
     {
       replacements: [
         deviation.batchId,
@@ -50,11 +52,12 @@ export async function openDeviation(
         deviation.readingId ?? null,
         deviation.key,
       ],
-      type: QueryTypes.SELECT,
+      type: QueryTypes.INSERT,
       transaction: t,
     },
-  );
-  if (!inserted) return null;
+  )) as unknown as [number, number];
+  if (changed === 0) return null;
+  const inserted = { id: insertedId };
   if (by?.audit !== false)
     await audit.append(
       {
