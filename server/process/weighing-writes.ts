@@ -16,7 +16,7 @@ import type { Database } from '../db/database.ts';
 import { formulaAtRevision } from '../formulas/formula-at-revision.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
 import { AppError, conflict, notFound } from '../http/app-error.ts';
-import { processBatch, type ProcessBatch } from './process-batch.ts';
+import { recordedBatch, type RecordedBatch } from './recorded-batch.ts';
 import { batchWeighings, standingWeighings, weighingById } from './weighing-rows.ts';
 import { judgeAndOpen } from './weights-verdict.ts';
 
@@ -55,7 +55,7 @@ function gramsOf(text: string, field: string): Decimal {
 }
 
 /** The formula a batch was calculated from, at its revision. */
-async function formulaOf(history: FormulaHistory, batch: ProcessBatch): Promise<Formula> {
+async function formulaOf(history: FormulaHistory, batch: RecordedBatch): Promise<Formula> {
   const at = await formulaAtRevision(history, batch.formulaId, batch.formulaRevision);
   if (!at)
     throw conflict(
@@ -66,7 +66,7 @@ async function formulaOf(history: FormulaHistory, batch: ProcessBatch): Promise<
 }
 
 /** Weighing needs a batch that is under way: started, not thrown away. */
-function mustBeUnderWay(batch: ProcessBatch): void {
+function mustBeUnderWay(batch: RecordedBatch): void {
   if (batch.status === 'planned')
     throw conflict(
       'not-started',
@@ -122,7 +122,7 @@ async function insertRow(
 /** The rows a request asks for, checked against the sheet and the formula's stages. */
 function rowsOf(
   request: WeighingRequest,
-  batch: ProcessBatch,
+  batch: RecordedBatch,
   formula: Formula,
   now: string,
 ): NewRow[] {
@@ -194,10 +194,10 @@ export async function addWeighings(
   by: ChangeOptions,
 ): Promise<WeighingAnswer> {
   const at = by.at ?? new Date().toISOString();
-  const seen = await processBatch(deps.db, lot);
+  const seen = await recordedBatch(deps.db, lot);
   const formula = await formulaOf(deps.history, seen);
   return deps.db.write(async (t) => {
-    const batch = await processBatch(deps.db, lot, t);
+    const batch = await recordedBatch(deps.db, lot, t);
     if (batch.formulaRevision !== seen.formulaRevision)
       throw conflict('batch-changed', `batch ${batch.lotCode} changed meanwhile; weigh again`);
     mustBeUnderWay(batch);
@@ -239,7 +239,7 @@ export async function correctWeighing(
     { replacements: [id], type: QueryTypes.SELECT },
   );
   if (!lotOf[0]) throw notFound(`no weighing ${id}`);
-  const seen = await processBatch(deps.db, lotOf[0].lot_code);
+  const seen = await recordedBatch(deps.db, lotOf[0].lot_code);
   const formula = await formulaOf(deps.history, seen);
   return deps.db.write(async (t) => {
     const old = await weighingById(deps.db, id, t);
@@ -250,7 +250,7 @@ export async function correctWeighing(
         `weighing ${id} was corrected already by weighing ${old.correctedBy}: correct that one`,
         [{ weighing: old.correctedBy }],
       );
-    const batch = await processBatch(deps.db, seen.lotCode, t);
+    const batch = await recordedBatch(deps.db, seen.lotCode, t);
     mustBeUnderWay(batch);
     const row: NewRow = {
       kind: old.kind,
@@ -276,7 +276,7 @@ export async function correctWeighing(
 async function answer(
   deps: WeighingDeps,
   t: Transaction,
-  batch: ProcessBatch,
+  batch: RecordedBatch,
   formula: Formula,
   ids: readonly number[],
   by: ChangeOptions,

@@ -1,7 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import { Decimal } from '../../shared/decimal.ts';
 import type { Formula } from '../../shared/index.ts';
-import type { Deviation, StageName, Weighing } from '../../shared/api/process-record.ts';
+import type { Deviation, Weighing } from '../../shared/api/process-record.ts';
 import { checkProblem } from '../../shared/presentation/check-figures.ts';
 import { formatPpm } from '../../shared/presentation/format-figure.ts';
 import type { PumpReached } from '../../shared/process/weighing-stages.ts';
@@ -10,8 +9,8 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { Database } from '../db/database.ts';
 import { openDeviation, type DeviationToOpen } from './deviation-writes.ts';
-import type { ProcessBatch } from './process-batch.ts';
-import { standingWeighings } from './weighing-rows.ts';
+import type { RecordedBatch } from './recorded-batch.ts';
+import { standingWeighings, standingWeights } from './weighing-rows.ts';
 
 /** What the standing weights of a batch say, and the deviations they opened just now. */
 export interface WeightsOutcome {
@@ -19,17 +18,6 @@ export interface WeightsOutcome {
   readonly deviations: Deviation[];
   /** In a cook's words, deviations first: the figure, the limit, what to do. */
   readonly messages: string[];
-}
-
-/** The standing weighings as the judging takes them, grams by line name and by stage. */
-function weightsOf(weighings: readonly Weighing[]): Parameters<typeof judgeWeights>[2] {
-  const standing = standingWeighings(weighings);
-  const of = (kind: Weighing['kind']) =>
-    standing.filter((w) => w.kind === kind).map((w) => [w.name, new Decimal(w.grams)] as const);
-  return {
-    lines: new Map(of('line')),
-    stages: new Map(of('stage') as (readonly [StageName, Decimal])[]),
-  };
 }
 
 /** A percent as a cook reads it beside its target: one decimal, more when one would not tell. */
@@ -53,12 +41,12 @@ export function pumpWords(pump: PumpReached): string {
 export async function judgeAndOpen(
   deps: { db: Database; audit: AuditRepository },
   t: Transaction,
-  batch: ProcessBatch,
+  batch: RecordedBatch,
   formula: Formula,
   weighings: readonly Weighing[],
   by: ChangeOptions,
 ): Promise<WeightsOutcome> {
-  const verdict = judgeWeights(formula, batch.result, weightsOf(weighings));
+  const verdict = judgeWeights(formula, batch.result, standingWeights(weighings));
   const opened: Deviation[] = [];
   const messages: string[] = [];
   const [person] = await deps.db.sequelize.query<{ display_name: string }>(
