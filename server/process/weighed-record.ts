@@ -1,5 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import type { PresentedResult } from '../../shared/index.ts';
+import { BatchError, type PresentedResult } from '../../shared/index.ts';
 import type {
   PlannedCalculation,
   ProcessRecord,
@@ -46,11 +46,18 @@ export async function weighedPart(
       ? await keptFormula(history, row.formula_id, row.formula_revision)
       : undefined;
   if (!row || !formula) return { actualNitritePpm: null, actualYields: [], planned };
-  const verdict = judgeWeights(
-    formula,
-    JSON.parse(row.result) as PresentedResult,
-    standingWeights(weighings),
-  );
+  let verdict;
+  try {
+    verdict = judgeWeights(
+      formula,
+      JSON.parse(row.result) as PresentedResult,
+      standingWeights(weighings),
+    );
+  } catch (error) {
+    // Weights the core cannot judge were refused when weighed; none stand to be judged here.
+    if (error instanceof BatchError) return { actualNitritePpm: null, actualYields: [], planned };
+    throw error;
+  }
   return {
     actualNitritePpm: verdict.actualNitritePpm?.toString() ?? null,
     actualYields: [...verdict.yields],

@@ -1,5 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import type { Formula } from '../../shared/index.ts';
+import { BatchError, type Formula } from '../../shared/index.ts';
+import { AppError } from '../http/app-error.ts';
 import type { Deviation, Weighing } from '../../shared/api/process-record.ts';
 import { checkProblem } from '../../shared/presentation/check-figures.ts';
 import { formatPpm } from '../../shared/presentation/format-figure.ts';
@@ -18,6 +19,25 @@ export interface WeightsOutcome {
   readonly deviations: Deviation[];
   /** In a cook's words, deviations first: the figure, the limit, what to do. */
   readonly messages: string[];
+}
+
+/**
+ * The weights judged; weights that cannot be so (a pumped weight not above the green weight) are
+ * refused with the core's words, naming the stage weight.
+ */
+function judged(
+  formula: Formula,
+  batch: RecordedBatch,
+  weighings: readonly Weighing[],
+): WeightsVerdict {
+  try {
+    return judgeWeights(formula, batch.result, standingWeights(weighings));
+  } catch (error) {
+    if (!(error instanceof BatchError)) throw error;
+    throw new AppError(422, 'bad-weighing', error.message, [
+      { field: 'stage.weight', message: error.message },
+    ]);
+  }
 }
 
 /** A percent as a cook reads it beside its target: one decimal, more when one would not tell. */
@@ -46,7 +66,7 @@ export async function judgeAndOpen(
   weighings: readonly Weighing[],
   by: ChangeOptions,
 ): Promise<WeightsOutcome> {
-  const verdict = judgeWeights(formula, batch.result, standingWeights(weighings));
+  const verdict = judged(formula, batch, weighings);
   const opened: Deviation[] = [];
   const messages: string[] = [];
   const [person] = await deps.db.sequelize.query<{ display_name: string }>(

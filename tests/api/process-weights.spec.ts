@@ -73,6 +73,11 @@ describe('weights as weighed', () => {
     );
     const audit = await server.as('rosa').get('/api/audit?action=weighing-add');
     assert.equal(audit.json.events[0].subject, lot);
+    const record = await server.as('imke').get(`/api/batches/${lot}/process`);
+    assert.equal(record.status, 200, record.text);
+    assert.equal(record.json.actualNitritePpm, response.json.actualNitritePpm);
+    assert.equal(record.json.weighings.length, 2);
+    assert.equal(record.json.onHold, true);
   });
 
   it('should record a pumped weight over its target as a pump deviation, keeping the batch', async (t) => {
@@ -92,6 +97,14 @@ describe('weights as weighed', () => {
     const pump = pumped.json.deviations.find((d: { kind: string }) => d.kind === 'pump');
     assert.equal(pump.what, 'Pumped to 11.2 %, target 10 %: drain and re-weigh, or divert.');
     assert.equal(pumped.json.weighings[0].grams, '5560');
+    // The pick-up carries the brine's nitrite in: 0.192 % × 6.25 % × 10^6 = 120 ppm at the 10 %
+    // pump, × 11.2/10 = 134.4 ppm, over the 120 ppm for pumped bacon. source: FSIS Directive
+    // 7620.3 ch. 3 (pumped formula); 9 CFR 424.22(b)
+    assert.equal(pumped.json.actualNitritePpm, '134.4');
+    assert.deepEqual(
+      pumped.json.deviations.map((d: { kind: string }) => d.kind),
+      ['nitrite', 'pump'],
+    );
     const batch = await server.as('tobin').get(`/api/batches/${lot}`);
     assert.equal(batch.json.batch.status, 'in-progress');
     // Weighing on after it judges the batch again; the pump's deviation stays one.
@@ -100,10 +113,28 @@ describe('weights as weighed', () => {
       .post(`/api/batches/${lot}/weighings`, { stage: { name: 'cured', weight: '5.4 kg' } });
     assert.equal(cured.status, 201, cured.text);
     assert.deepEqual(cured.json.deviations, []);
-    assert.match(cured.json.messages[0], /already open/);
+    assert.match(cured.json.messages[1], /^Pumped to 11\.2 %.*already open/);
+    const record = await server.as('imke').get(`/api/batches/${lot}/process`);
+    assert.deepEqual(
+      record.json.actualYields.map(
+        (y: { stage: string; from: string; percent: string; planned: string }) => [
+          y.stage,
+          y.from,
+          y.percent,
+          y.planned,
+        ],
+      ),
+      [
+        // source: yield = weight after ÷ weight before × 100, USDA ARS, USDA Table of Cooking
+        // Yields for Meat and Poultry (2012/2014): 5560 ÷ 5000 = 111.2 % against 100 % + the 10 %
+        // pump; 5400 ÷ 5000 = 108 % against the formula's cure yield of 108 %
+        ['pumped', 'green', '111.2', '110'],
+        ['cured', 'green', '108', '108'],
+      ],
+    );
     assert.deepEqual(
       (await deviationsOf(server, lot)).map((d) => d.kind),
-      ['pump'],
+      ['nitrite', 'pump'],
     );
   });
 
@@ -145,6 +176,17 @@ describe('weights as weighed', () => {
       .post(`/api/weighings/${id}/correction`, { weight: '5.1 kg', reason: 'Again.' });
     assert.equal(twice.status, 409, twice.text);
     assert.equal(twice.json.error.code, 'already-corrected');
+    const record = await server.as('imke').get(`/api/batches/${lot}/process`);
+    assert.deepEqual(
+      record.json.weighings.map((w: { id: number; correctedBy: number | null }) => [
+        w.id,
+        w.correctedBy,
+      ]),
+      [
+        [id, correction.id],
+        [correction.id, null],
+      ],
+    );
   });
 
   it('should refuse a line not on the sheet and a stage the formula has not, naming the field', async (t) => {
