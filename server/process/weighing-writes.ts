@@ -13,6 +13,7 @@ import { sheetLines } from '../../shared/process/weights-as-weighed.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { Database } from '../db/database.ts';
+import { insertRow } from '../db/insert-row.ts';
 import { formulaAtRevision } from '../formulas/formula-at-revision.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
 import { AppError, conflict, notFound } from '../http/app-error.ts';
@@ -86,7 +87,7 @@ interface NewRow {
   readonly reason: string | null;
 }
 
-async function insertRow(
+async function insertWeighing(
   db: Database,
   t: Transaction,
   batchId: number,
@@ -94,29 +95,26 @@ async function insertRow(
   by: ChangeOptions,
   at: string,
 ): Promise<number> {
-  // sqlite answers an INSERT with [last row id, rows changed].
-  const [id] = (await db.sequelize.query(
+  const { lastId } = await insertRow(
+    db,
+    t,
     `INSERT INTO weighings (batch_id, kind, name, planned_grams, grams, weighed_at, recorded_by,
        recorded_at, corrects_id, reason)
      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
-    {
-      replacements: [
-        batchId,
-        row.kind,
-        row.name,
-        row.plannedGrams,
-        row.grams.toString(),
-        row.weighedAt,
-        by.actor.id,
-        at,
-        row.correctsId,
-        row.reason,
-      ],
-      type: QueryTypes.INSERT,
-      transaction: t,
-    },
-  )) as unknown as [number, number];
-  return id;
+    [
+      batchId,
+      row.kind,
+      row.name,
+      row.plannedGrams,
+      row.grams.toString(),
+      row.weighedAt,
+      by.actor.id,
+      at,
+      row.correctsId,
+      row.reason,
+    ],
+  );
+  return lastId;
 }
 
 /** The rows a request asks for, checked against the sheet and the formula's stages. */
@@ -213,7 +211,7 @@ export async function addWeighings(
         );
     }
     const ids: number[] = [];
-    for (const row of rows) ids.push(await insertRow(deps.db, t, batch.id, row, by, at));
+    for (const row of rows) ids.push(await insertWeighing(deps.db, t, batch.id, row, by, at));
     return answer(deps, t, batch, formula, ids, by, {
       lines: rows.filter((r) => r.kind === 'line').map((r) => ({ name: r.name, grams: r.grams })),
       ...(request.stage ? { stage: { name: request.stage.name as StageName } } : {}),
@@ -261,7 +259,7 @@ export async function correctWeighing(
       correctsId: old.id,
       reason: correction.reason.trim(),
     };
-    const newId = await insertRow(deps.db, t, batch.id, row, by, at);
+    const newId = await insertWeighing(deps.db, t, batch.id, row, by, at);
     return answer(deps, t, batch, formula, [newId], by, {
       corrects: old.id,
       name: old.name,
