@@ -72,11 +72,11 @@ export function createApp(context: AppContext): Express {
   api.use('/formulas', formulasRouter(context));
   api.use('/batches', batchProcessRouter(context), batchesRouter(context));
   api.use('/batches', batchWeighingsRouter(context), startRouter(context));
+  api.use('/weighings', weighingsRouter(context));
+  api.use('/refusals', refusalsRouter(context));
   api.use('/readings', readingsRouter(context));
   api.use('/deviations', deviationsRouter(context));
   api.use('/process', processNowRouter(context));
-  api.use('/weighings', weighingsRouter(context));
-  api.use('/refusals', refusalsRouter(context));
   // A mount at /batches does not match /batches.csv, so the export is a route of its own.
   api.get('/batches.csv', batchesCsv(context));
   api.use('/people/me/reminders', remindersRouter(context));

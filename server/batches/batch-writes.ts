@@ -201,17 +201,6 @@ export class BatchWrites {
       this.rules,
     );
     if (rule) throw ruleError(rule);
-    // A batch with a missed critical limit not yet corrected is on hold: it cannot be finished.
-    if (to === 'done') {
-      const [open] = await this.select<{ n: number }>(
-        t,
-        `SELECT COUNT(*) AS n FROM deviations d WHERE d.batch_id = ? AND NOT EXISTS
-           (SELECT 1 FROM corrective_actions a WHERE a.deviation_id = d.id)`,
-        [batch.id],
-      );
-      const onHold = doneRefusal(open?.n ?? 0);
-      if (onHold) throw new AppError(onHold.status, onHold.code, onHold.message);
-    }
     return batch;
   }
 
@@ -235,6 +224,17 @@ export class BatchWrites {
     const at = options.at ?? new Date().toISOString();
     const batch = await this.mayMove(t, lot, to, reason, options);
     const signedOff = batch.signed_off_at !== null;
+    // A batch with a missed critical limit not yet corrected is on hold: it cannot be finished.
+    if (to === 'done') {
+      const [open] = await this.select<{ n: number }>(
+        t,
+        `SELECT COUNT(*) AS n FROM deviations d WHERE d.batch_id = ? AND NOT EXISTS
+           (SELECT 1 FROM corrective_actions a WHERE a.deviation_id = d.id)`,
+        [batch.id],
+      );
+      const onHold = doneRefusal(open?.n ?? 0);
+      if (onHold) throw new AppError(onHold.status, onHold.code, onHold.message);
+    }
     await this.run(
       t,
       `UPDATE batches SET status = ?, updated_at = ?,

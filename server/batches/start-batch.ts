@@ -7,7 +7,7 @@ import type { Database } from '../db/database.ts';
 import { formulaAtRevision } from '../formulas/formula-at-revision.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
 import { conflict, notFound } from '../http/app-error.ts';
-import { processBatch, type ProcessBatch } from '../process/process-batch.ts';
+import { recordedBatch, type RecordedBatch } from '../process/recorded-batch.ts';
 import { keepingRefusals } from '../process/refusals.ts';
 import type { ChangeOptions, NewBatch } from './batch.ts';
 import type { BatchRepository } from './batch-repository.ts';
@@ -35,7 +35,7 @@ export interface StartAnswer {
  */
 async function startFormula(
   history: FormulaHistory,
-  batch: ProcessBatch,
+  batch: RecordedBatch,
 ): Promise<{ formula: Formula; revision: string; warnings: string[] }> {
   const planned = await formulaAtRevision(history, batch.formulaId, batch.formulaRevision);
   if (planned && planned.current) return { ...planned, warnings: [] };
@@ -88,7 +88,7 @@ export async function startBatch(
   deps: StartDeps,
   by: ChangeOptions,
 ): Promise<StartAnswer> {
-  const seen = await processBatch(deps.db, lot);
+  const seen = await recordedBatch(deps.db, lot);
   if (seen.status !== 'planned')
     throw conflict(
       'not-planned',
@@ -110,7 +110,7 @@ export async function startBatch(
   );
   warnings.push(...startDayWarning(seen.startedOn, started.startedOn, started.readyOn));
   const batch = await deps.db.write(async (t) => {
-    const current = await processBatch(deps.db, seen.lotCode, t);
+    const current = await recordedBatch(deps.db, seen.lotCode, t);
     if (current.status !== 'planned' || current.formulaRevision !== seen.formulaRevision)
       throw conflict('batch-changed', `batch ${seen.lotCode} changed meanwhile; start it again`);
     await deps.batches.writes.mayMove(t, seen.lotCode, 'in-progress', null, by);
@@ -139,7 +139,7 @@ export async function startBatch(
 }
 
 /** The batch event's words: what the start changed. */
-function startReason(planned: ProcessBatch, started: NewBatch): string {
+function startReason(planned: RecordedBatch, started: NewBatch): string {
   const keys = Object.keys({ ...planned.inputs, ...started.inputs }) as (keyof RawBatchOptions)[];
   const changed = keys
     .filter((key) => planned.inputs[key] !== started.inputs[key])
@@ -152,7 +152,7 @@ function startReason(planned: ProcessBatch, started: NewBatch): string {
 async function writeStart(
   db: Database,
   t: Transaction,
-  planned: ProcessBatch,
+  planned: RecordedBatch,
   started: NewBatch,
   by: ChangeOptions,
 ): Promise<void> {

@@ -4,6 +4,7 @@ import type { Refusal } from '../../shared/api/process-record.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { Database } from '../db/database.ts';
+import { insertRow } from '../db/insert-row.ts';
 import { badRequest } from '../http/app-error.ts';
 import { RecordsError } from '../records/records-error.ts';
 
@@ -51,24 +52,21 @@ async function writeRefusal(
 ): Promise<void> {
   const at = by.at ?? new Date().toISOString();
   await db.write(async (t) => {
-    // sqlite answers an INSERT with [last row id, rows changed].
-    const [id] = (await db.sequelize.query(
+    const { lastId: id } = await insertRow(
+      db,
+      t,
       `INSERT INTO refusals (at, person_id, formula_id, formula_revision, inputs, failed, lot_code)
        VALUES (?, ?, ?, ?, ?, ?, ?)`,
-      {
-        replacements: [
-          at,
-          by.actor.id,
-          tried.formula,
-          tried.revision,
-          JSON.stringify(tried.inputs),
-          JSON.stringify(failed),
-          tried.lotCode ?? null,
-        ],
-        type: QueryTypes.INSERT,
-        transaction: t,
-      },
-    )) as unknown as [number, number];
+      [
+        at,
+        by.actor.id,
+        tried.formula,
+        tried.revision,
+        JSON.stringify(tried.inputs),
+        JSON.stringify(failed),
+        tried.lotCode ?? null,
+      ],
+    );
     await audit.append(
       {
         actor: by.actor,

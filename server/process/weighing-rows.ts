@@ -1,5 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import { Decimal } from '../../shared/decimal.ts';
 import type { StageName, Weighing } from '../../shared/api/process-record.ts';
+import type { StandingWeights } from '../../shared/process/weights-as-weighed.ts';
 import type { Database } from '../db/database.ts';
 
 interface WeighingRow {
@@ -76,11 +78,13 @@ export function standingWeighings(weighings: readonly Weighing[]): Weighing[] {
   return weighings.filter((weighing) => weighing.correctedBy === null);
 }
 
-/** The standing weight of each stage weighed, by stage. */
-export function standingStages(weighings: readonly Weighing[]): Map<StageName, string> {
-  return new Map(
-    standingWeighings(weighings)
-      .filter((weighing) => weighing.kind === 'stage')
-      .map((weighing) => [weighing.name as StageName, weighing.grams]),
-  );
+/** The standing weighings as the judging takes them: grams by line name and by stage. */
+export function standingWeights(weighings: readonly Weighing[]): StandingWeights {
+  const standing = standingWeighings(weighings);
+  const of = (kind: Weighing['kind']) =>
+    standing.filter((w) => w.kind === kind).map((w) => [w.name, new Decimal(w.grams)] as const);
+  return {
+    lines: new Map(of('line')),
+    stages: new Map(of('stage') as (readonly [StageName, Decimal])[]),
+  };
 }

@@ -13,10 +13,11 @@ import { sheetLines } from '../../shared/process/weights-as-weighed.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { Database } from '../db/database.ts';
+import { insertRow } from '../db/insert-row.ts';
 import { formulaAtRevision } from '../formulas/formula-at-revision.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
 import { AppError, conflict, notFound } from '../http/app-error.ts';
-import { processBatch, type ProcessBatch } from './process-batch.ts';
+import { recordedBatch, type RecordedBatch } from './recorded-batch.ts';
 import { batchWeighings, standingWeighings, weighingById } from './weighing-rows.ts';
 import { judgeAndOpen } from './weights-verdict.ts';
 
@@ -55,7 +56,7 @@ function gramsOf(text: string, field: string): Decimal {
 }
 
 /** The formula a batch was calculated from, at its revision. */
-async function formulaOf(history: FormulaHistory, batch: ProcessBatch): Promise<Formula> {
+async function formulaOf(history: FormulaHistory, batch: RecordedBatch): Promise<Formula> {
   const at = await formulaAtRevision(history, batch.formulaId, batch.formulaRevision);
   if (!at)
     throw conflict(
@@ -66,7 +67,7 @@ async function formulaOf(history: FormulaHistory, batch: ProcessBatch): Promise<
 }
 
 /** Weighing needs a batch that is under way: started, not thrown away. */
-function mustBeUnderWay(batch: ProcessBatch): void {
+function mustBeUnderWay(batch: RecordedBatch): void {
   if (batch.status === 'planned')
     throw conflict(
       'not-started',
@@ -86,7 +87,7 @@ interface NewRow {
   readonly reason: string | null;
 }
 
-async function insertRow(
+async function insertWeighing(
   db: Database,
   t: Transaction,
   batchId: number,
@@ -94,35 +95,32 @@ async function insertRow(
   by: ChangeOptions,
   at: string,
 ): Promise<number> {
-  // sqlite answers an INSERT with [last row id, rows changed].
-  const [id] = (await db.sequelize.query(
+  const { lastId } = await insertRow(
+    db,
+    t,
     `INSERT INTO weighings (batch_id, kind, name, planned_grams, grams, weighed_at, recorded_by,
        recorded_at, corrects_id, reason)
      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
-    {
-      replacements: [
-        batchId,
-        row.kind,
-        row.name,
-        row.plannedGrams,
-        row.grams.toString(),
-        row.weighedAt,
-        by.actor.id,
-        at,
-        row.correctsId,
-        row.reason,
-      ],
-      type: QueryTypes.INSERT,
-      transaction: t,
-    },
-  )) as unknown as [number, number];
-  return id;
+    [
+      batchId,
+      row.kind,
+      row.name,
+      row.plannedGrams,
+      row.grams.toString(),
+      row.weighedAt,
+      by.actor.id,
+      at,
+      row.correctsId,
+      row.reason,
+    ],
+  );
+  return lastId;
 }
 
 /** The rows a request asks for, checked against the sheet and the formula's stages. */
 function rowsOf(
   request: WeighingRequest,
-  batch: ProcessBatch,
+  batch: RecordedBatch,
   formula: Formula,
   now: string,
 ): NewRow[] {
@@ -194,10 +192,10 @@ export async function addWeighings(
   by: ChangeOptions,
 ): Promise<WeighingAnswer> {
   const at = by.at ?? new Date().toISOString();
-  const seen = await processBatch(deps.db, lot);
+  const seen = await recordedBatch(deps.db, lot);
   const formula = await formulaOf(deps.history, seen);
   return deps.db.write(async (t) => {
-    const batch = await processBatch(deps.db, lot, t);
+    const batch = await recordedBatch(deps.db, lot, t);
     if (batch.formulaRevision !== seen.formulaRevision)
       throw conflict('batch-changed', `batch ${batch.lotCode} changed meanwhile; weigh again`);
     mustBeUnderWay(batch);
@@ -213,7 +211,7 @@ export async function addWeighings(
         );
     }
     const ids: number[] = [];
-    for (const row of rows) ids.push(await insertRow(deps.db, t, batch.id, row, by, at));
+    for (const row of rows) ids.push(await insertWeighing(deps.db, t, batch.id, row, by, at));
     return answer(deps, t, batch, formula, ids, by, {
       lines: rows.filter((r) => r.kind === 'line').map((r) => ({ name: r.name, grams: r.grams })),
       ...(request.stage ? { stage: { name: request.stage.name as StageName } } : {}),
@@ -239,7 +237,7 @@ export async function correctWeighing(
     { replacements: [id], type: QueryTypes.SELECT },
   );
   if (!lotOf[0]) throw notFound(`no weighing ${id}`);
-  const seen = await processBatch(deps.db, lotOf[0].lot_code);
+  const seen = await recordedBatch(deps.db, lotOf[0].lot_code);
   const formula = await formulaOf(deps.history, seen);
   return deps.db.write(async (t) => {
     const old = await weighingById(deps.db, id, t);
@@ -250,7 +248,7 @@ export async function correctWeighing(
         `weighing ${id} was corrected already by weighing ${old.correctedBy}: correct that one`,
         [{ weighing: old.correctedBy }],
       );
-    const batch = await processBatch(deps.db, seen.lotCode, t);
+    const batch = await recordedBatch(deps.db, seen.lotCode, t);
     mustBeUnderWay(batch);
     const row: NewRow = {
       kind: old.kind,
@@ -261,7 +259,7 @@ export async function correctWeighing(
       correctsId: old.id,
       reason: correction.reason.trim(),
     };
-    const newId = await insertRow(deps.db, t, batch.id, row, by, at);
+    const newId = await insertWeighing(deps.db, t, batch.id, row, by, at);
     return answer(deps, t, batch, formula, [newId], by, {
       corrects: old.id,
       name: old.name,
@@ -276,7 +274,7 @@ export async function correctWeighing(
 async function answer(
   deps: WeighingDeps,
   t: Transaction,
-  batch: ProcessBatch,
+  batch: RecordedBatch,
   formula: Formula,
   ids: readonly number[],
   by: ChangeOptions,

@@ -1,7 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import { Decimal } from '../../shared/decimal.ts';
-import type { Formula } from '../../shared/index.ts';
-import type { Deviation, StageName, Weighing } from '../../shared/api/process-record.ts';
+import { BatchError, type Formula } from '../../shared/index.ts';
+import { AppError } from '../http/app-error.ts';
+import type { Deviation, Weighing } from '../../shared/api/process-record.ts';
 import { checkProblem } from '../../shared/presentation/check-figures.ts';
 import { formatPpm } from '../../shared/presentation/format-figure.ts';
 import type { PumpReached } from '../../shared/process/weighing-stages.ts';
@@ -10,8 +10,8 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { Database } from '../db/database.ts';
 import { openDeviation, type DeviationToOpen } from './deviation-writes.ts';
-import type { ProcessBatch } from './process-batch.ts';
-import { standingWeighings } from './weighing-rows.ts';
+import type { RecordedBatch } from './recorded-batch.ts';
+import { standingWeighings, standingWeights } from './weighing-rows.ts';
 
 /** What the standing weights of a batch say, and the deviations they opened just now. */
 export interface WeightsOutcome {
@@ -21,15 +21,23 @@ export interface WeightsOutcome {
   readonly messages: string[];
 }
 
-/** The standing weighings as the judging takes them, grams by line name and by stage. */
-function weightsOf(weighings: readonly Weighing[]): Parameters<typeof judgeWeights>[2] {
-  const standing = standingWeighings(weighings);
-  const of = (kind: Weighing['kind']) =>
-    standing.filter((w) => w.kind === kind).map((w) => [w.name, new Decimal(w.grams)] as const);
-  return {
-    lines: new Map(of('line')),
-    stages: new Map(of('stage') as (readonly [StageName, Decimal])[]),
-  };
+/**
+ * The weights judged; weights that cannot be so (a pumped weight not above the green weight) are
+ * refused with the core's words, naming the stage weight.
+ */
+function judged(
+  formula: Formula,
+  batch: RecordedBatch,
+  weighings: readonly Weighing[],
+): WeightsVerdict {
+  try {
+    return judgeWeights(formula, batch.result, standingWeights(weighings));
+  } catch (error) {
+    if (!(error instanceof BatchError)) throw error;
+    throw new AppError(422, 'bad-weighing', error.message, [
+      { field: 'stage.weight', message: error.message },
+    ]);
+  }
 }
 
 /** A percent as a cook reads it beside its target: one decimal, more when one would not tell. */
@@ -53,12 +61,12 @@ export function pumpWords(pump: PumpReached): string {
 export async function judgeAndOpen(
   deps: { db: Database; audit: AuditRepository },
   t: Transaction,
-  batch: ProcessBatch,
+  batch: RecordedBatch,
   formula: Formula,
   weighings: readonly Weighing[],
   by: ChangeOptions,
 ): Promise<WeightsOutcome> {
-  const verdict = judgeWeights(formula, batch.result, weightsOf(weighings));
+  const verdict = judged(formula, batch, weighings);
   const opened: Deviation[] = [];
   const messages: string[] = [];
   const [person] = await deps.db.sequelize.query<{ display_name: string }>(

@@ -139,6 +139,37 @@ export class Records {
     return this.guard(() => this.deps.batches.signOff(lotCodeOf(lot), note, by));
   }
 
+  // Weights as weighed, starting a planned batch, refused calculations (the process record).
+
+  /** Records lines and a stage weight as weighed; deviations open where the weights miss a limit. */
+  addWeighings(lot: string, request: WeighingRequest, by: ChangeOptions): Promise<WeighingAnswer> {
+    return this.guard(() => addWeighings(this.deps, lot, request, by));
+  }
+
+  /** Corrects one weighing with a new entry that says why; the old one is kept. */
+  correctWeighing(
+    id: number,
+    correction: WeighingCorrection,
+    by: ChangeOptions,
+  ): Promise<WeighingAnswer> {
+    return this.guard(() => correctWeighing(this.deps, id, correction, by));
+  }
+
+  /** Starts a planned batch on what is really there; refused (and recorded) over a critical limit. */
+  startBatch(
+    lot: string,
+    request: StartRequest,
+    today: string,
+    by: ChangeOptions,
+  ): Promise<StartAnswer> {
+    return this.guard(() => startBatch(lot, request, today, this.deps, by));
+  }
+
+  /** The calculations refused over a critical limit from one day to another (both included). */
+  listRefusals(range: { from?: string; to?: string }): Promise<Refusal[]> {
+    return this.guard(() => listRefusals(this.deps.db, range));
+  }
+
   // Process records (HACCP): the readings at each control, their corrections, logger files,
   // corrective actions and the verification that releases a batch, judged at `by.at` (the
   // server's clock) or now. The process stack loads on first use, with the database's.
@@ -210,37 +241,6 @@ export class Records {
   /** What needs attention now across the batches being made. */
   processNow(now: string = new Date().toISOString()): Promise<ProcessNow> {
     return this.withProcess((p) => p.use.processNow(p.process, now));
-  }
-
-  // Weights as weighed, starting a planned batch, refused calculations (the process record).
-
-  /** Records lines and a stage weight as weighed; deviations open where the weights miss a limit. */
-  addWeighings(lot: string, request: WeighingRequest, by: ChangeOptions): Promise<WeighingAnswer> {
-    return this.guard(() => addWeighings(this.deps, lot, request, by));
-  }
-
-  /** Corrects one weighing with a new entry that says why; the old one is kept. */
-  correctWeighing(
-    id: number,
-    correction: WeighingCorrection,
-    by: ChangeOptions,
-  ): Promise<WeighingAnswer> {
-    return this.guard(() => correctWeighing(this.deps, id, correction, by));
-  }
-
-  /** Starts a planned batch on what is really there; refused (and recorded) over a critical limit. */
-  startBatch(
-    lot: string,
-    request: StartRequest,
-    today: string,
-    by: ChangeOptions,
-  ): Promise<StartAnswer> {
-    return this.guard(() => startBatch(lot, request, today, this.deps, by));
-  }
-
-  /** The calculations refused over a critical limit from one day to another (both included). */
-  listRefusals(range: { from?: string; to?: string }): Promise<Refusal[]> {
-    return this.guard(() => listRefusals(this.deps.db, range));
   }
 
   /** The active person with this username and password, if there is one. */

@@ -3,7 +3,7 @@
  * actual weights, a pump against its target, and the actual yields. Pure: the records pass in the
  * recorded calculation, the formula it came from and the standing weights.
  */
-import { Decimal } from '../decimal.ts';
+import { Decimal, HUNDRED } from '../decimal.ts';
 import type { ActualYield, StageName } from '../api/process-record.ts';
 import { actualCureChecks } from '../calculation/cure/actual-nitrite.ts';
 import { criticalFailures, type LimitCheck } from '../calculation/calc-result.ts';
@@ -16,6 +16,9 @@ const OWN_WEIGHT_LABELS = ['Green weight', 'Total batch weight'];
 
 /** The pump a pump cure's brine was made for, as the calculation shows it. */
 const PUMP_LABEL = 'Pump (brine made for)';
+
+/** A pump cure's weight after injecting, when the batch was recorded with it. */
+const PUMPED_LABEL = 'Weight after injecting';
 
 function figureOf(result: PresentedResult, labels: readonly string[]): Decimal | undefined {
   const figure = [...result.inputs, ...result.figures].find(
@@ -43,7 +46,7 @@ export interface StandingWeights {
 
 /** What the weights say. */
 export interface WeightsVerdict {
-  /** The ingoing nitrite on the actual weights; null before any line is weighed, or not a cure. */
+  /** The ingoing nitrite on the actual weights; null before a line or the pumped weight is weighed. */
   readonly actualNitritePpm: Decimal | null;
   /** The critical checks the actual weights fail, in the calculation's order. */
   readonly failed: readonly LimitCheck[];
@@ -57,8 +60,8 @@ export interface WeightsVerdict {
 /**
  * Judges the standing weights of a batch against the calculation it was recorded with. The actual
  * green weight is the 'green' stage weight when weighed, else the batch's own; the cure's checks
- * are worked out again (actualCureChecks) once any line is weighed, a line not weighed counting at
- * its calculated grams.
+ * are worked out again (actualCureChecks) once any line or the pumped weight is weighed, a line not
+ * weighed counting at its calculated grams.
  */
 export function judgeWeights(
   formula: Formula,
@@ -68,7 +71,7 @@ export function judgeWeights(
   const calculatedGrams = figureOf(result, OWN_WEIGHT_LABELS) ?? new Decimal(0);
   const pumpTargetPct = formula.kind === 'cure' ? figureOf(result, [PUMP_LABEL]) : undefined;
   const green = weights.stages.get('green') ?? calculatedGrams;
-  const pumped = weights.stages.get('pumped');
+  const weighedPumped = weights.stages.get('pumped');
   const yields = calculatedGrams.isZero()
     ? []
     : actualYields(formula, {
@@ -77,10 +80,17 @@ export function judgeWeights(
         ...(pumpTargetPct ? { pumpTargetPct } : {}),
       });
   const pump =
-    pumped !== undefined && pumpTargetPct !== undefined
-      ? pumpReached(green, pumped, pumpTargetPct)
+    weighedPumped !== undefined && pumpTargetPct !== undefined
+      ? pumpReached(green, weighedPumped, pumpTargetPct)
       : null;
-  if (formula.kind !== 'cure' || weights.lines.size === 0)
+  // Not weighed: the batch's own pumped weight, else its design pump on the actual green weight
+  // (the batch may have been made for another pump than the formula's).
+  const pumped =
+    weighedPumped ??
+    figureOf(result, [PUMPED_LABEL]) ??
+    (pumpTargetPct ? green.times(HUNDRED.plus(pumpTargetPct)).div(HUNDRED) : undefined);
+  // A pumped weight is weighed cure too: the pick-up carries the brine's nitrite into the meat.
+  if (formula.kind !== 'cure' || (weights.lines.size === 0 && weighedPumped === undefined))
     return { actualNitritePpm: null, failed: [], checks: [], pump, yields };
   const checks = actualCureChecks(formula, sheetLines(result), {
     greenGrams: green,

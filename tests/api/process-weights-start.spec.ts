@@ -107,6 +107,11 @@ describe('starting a planned batch on what is really there', () => {
       ],
     );
     assert.match(events[1].reason, /meat 4\.26 kg → 5\.112 kg/);
+    const record = (await server.as('imke').get(`/api/batches/${lot}/process`)).json;
+    assert.equal(record.plannedBy.displayName, 'Tobin Marrowfeld (cook)');
+    assert.equal(record.startedBy.id, rosa.id);
+    assert.equal(record.planned.inputs.meat, '4.26 kg');
+    assert.equal(record.planned.nitritePpm, '156.25');
     const audit = await server.as('rosa').get('/api/audit?action=batch-start');
     assert.equal(audit.json.events.length, 1);
     assert.equal(audit.json.events[0].subject, lot);

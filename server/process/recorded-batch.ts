@@ -7,7 +7,7 @@ import type { Database } from '../db/database.ts';
 import { RecordsError } from '../records/records-error.ts';
 
 /** What weighing and starting a batch read of it. */
-export interface ProcessBatch {
+export interface RecordedBatch {
   readonly id: number;
   readonly lotCode: string;
   readonly status: BatchStatus;
@@ -45,11 +45,11 @@ interface Row {
  * The batch with this lot code (either case), read inside the caller's transaction when given.
  * @throws RecordsError 'not-found'
  */
-export async function processBatch(
+export async function recordedBatch(
   db: Database,
   lot: string,
   transaction?: Transaction,
-): Promise<ProcessBatch> {
+): Promise<RecordedBatch> {
   const code = lotCodeOf(lot);
   const [row] = await db.sequelize.query<Row>(
     `SELECT id, lot_code, status, kind, formula_id, formula_revision, operator_id, started_on,
