@@ -47,10 +47,13 @@ const CONTROLS = `controls:
     every: 4 h
 `;
 
-/** The demo belly's text as a formula of its own, with the controls. */
+/** The demo belly's text as a formula of its own, with the fixture's controls in place of its own. */
 export function controlledFormulaYaml(): string {
   const belly = readFileSync(path.join(REPO_ROOT, 'formulas', 'quillmoor-belly.yaml'), 'utf8');
-  return `${belly
+  // The belly's own controls block (a top-level key and its indented lines) gives way to the fixture's.
+  const withoutControls = belly.replace(/^controls:\n(?:[ #].*\n|\n)*/m, '');
+  assert.doesNotMatch(withoutControls, /^controls:/m, 'the belly keeps one controls block');
+  return `${withoutControls
     .replace('id: quillmoor-belly', `id: ${CONTROLLED}`)
     .replace(/^title: .*$/m, 'title: Test belly, smoked, cooked and chilled')}${CONTROLS}`;
 }
