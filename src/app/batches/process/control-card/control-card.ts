@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
@@ -81,6 +81,8 @@ export class ControlCard {
     validators: [Validators.required, Validators.pattern(/\S/)],
   });
   protected readonly time = new FormControl('', { nonNullable: true });
+  /** The entry form's group: it makes the form Angular's, so a submit never reloads the page. */
+  protected readonly entry = new FormGroup({ value: this.value, time: this.time });
   protected readonly earlier = signal(false);
   protected readonly showAll = signal(false);
   protected readonly problem = signal<string | null>(null);

@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
@@ -30,7 +30,7 @@ import { clockWords } from '../process-words';
         </span>
       </p>
     } @else if (canVerify()) {
-      <form class="verify" (ngSubmit)="verify()" data-testid="verify-form">
+      <form class="verify" [formGroup]="form" (ngSubmit)="verify()" data-testid="verify-form">
         <p class="lead">
           Verifying releases the batch. You confirm you have reviewed its process record: every
           control’s readings against its critical limit, the weights as weighed, and the corrective
@@ -116,6 +116,8 @@ export class ReleasePanel {
     nonNullable: true,
     validators: Validators.maxLength(500),
   });
+  /** The form's group: it makes the form Angular's, so a submit never reloads the page. */
+  protected readonly form = new FormGroup({ note: this.note });
   protected readonly refused = signal<string | null>(null);
 
   protected when(iso: string): string {

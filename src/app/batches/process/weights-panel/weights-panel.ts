@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
@@ -55,6 +55,8 @@ export class WeightsPanel {
     nonNullable: true,
     validators: [Validators.required, Validators.pattern(/\S/)],
   });
+  /** The stage form's group: it makes the form Angular's, so a submit never reloads the page. */
+  protected readonly stageForm = new FormGroup({ stage: this.stage, weight: this.stageWeight });
   protected readonly answer = signal<WeighingAnswer | null>(null);
   protected readonly problem = signal<string | null>(null);
 
