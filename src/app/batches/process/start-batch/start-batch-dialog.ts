@@ -25,7 +25,13 @@ import { BatchSheet } from '../../../ui/batch-sheet/batch-sheet';
 import { IsoDayPipe, isoDateOf } from '../../../ui/batch-sheet/iso-day-pipe';
 import type { Batch, RawBatchOptions } from '../../batch-types';
 import { FormulaOptions } from '../../formula-options';
-import { fieldsFor, unitsOf, withUnit, type BatchField } from '../../record-batch/batch-fields';
+import {
+  fieldsFor,
+  inBox,
+  unitsOf,
+  withUnit,
+  type BatchField,
+} from '../../record-batch/batch-fields';
 import { BatchRecorder } from '../../record-batch/batch-recorder';
 import type { ProcessStore } from '../process-store';
 
@@ -98,12 +104,11 @@ export class StartBatchDialog implements OnInit {
         return;
       }
       const fields = fieldsFor(detail.formula);
+      const units = this.data.batch.units === 'us' ? 'us' : 'metric';
       for (const field of fields) {
         const planned = this.data.batch.inputs[field.key as keyof RawBatchOptions];
-        this.form.addControl(
-          field.key,
-          new FormControl(typeof planned === 'string' ? planned : '', { nonNullable: true }),
-        );
+        const text = typeof planned === 'string' ? inBox(planned, field.measure, units) : '';
+        this.form.addControl(field.key, new FormControl(text, { nonNullable: true }));
       }
       this.fields.set(fields);
       this.preview();
