@@ -2,24 +2,29 @@ import assert from 'node:assert/strict';
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 import { handClock } from '../helpers/mail.ts';
 import { CONTROLLED, controlledFormulaYaml } from '../helpers/process-calls.ts';
-import type { TestServer } from '../helpers/test-server.ts';
+import type { DemoUser, TestServer } from '../helpers/test-server.ts';
 import { collectConsoleErrors, startConsole, type ConsoleSession } from './browser.ts';
 
 const MINUTE = 60_000;
 /** The tablet at the smoker. */
 const TABLET = { width: 820, height: 1180 };
 
-/** The controlled formula in the server's folder, and a batch of it in progress today. */
-async function controlledBatch(server: TestServer, today: string): Promise<string> {
+/** The controlled formula in the server's folder, and a batch of it starting today. */
+async function controlledBatch(
+  server: TestServer,
+  status: 'planned' | 'in-progress' = 'in-progress',
+  by: DemoUser = 'tobin',
+): Promise<string> {
   writeFileSync(path.join(server.formulasDir, `${CONTROLLED}.yaml`), controlledFormulaYaml());
   server.context.formulas.changed();
-  const recorded = await server.as('tobin').post('/api/batches', {
+  const today = new Date().toLocaleDateString('en-CA');
+  const recorded = await server.as(by).post('/api/batches', {
     formula: CONTROLLED,
     batch: { meat: '4.26kg', thickness: '4cm', start: today },
-    status: 'in-progress',
+    status,
   });
   assert.equal(recorded.status, 201, recorded.text);
   return recorded.json.batch.lotCode as string;
@@ -45,6 +50,23 @@ async function sideways(page: Page): Promise<number> {
   );
 }
 
+/** Asserts that no form field's label runs under its own suffix (a unit such as kg). */
+async function overlapFree(scope: Locator): Promise<void> {
+  const clashes = await scope.locator('mat-form-field').evaluateAll((fields) =>
+    fields.flatMap((field) => {
+      const label = field.querySelector('.mdc-floating-label');
+      const suffix = field.querySelector('.mat-mdc-form-field-text-suffix');
+      if (!label || !suffix || !suffix.textContent?.trim()) return [];
+      const a = label.getBoundingClientRect();
+      const b = suffix.getBoundingClientRect();
+      const apart =
+        a.right <= b.left || b.right <= a.left || a.bottom <= b.top || b.bottom <= a.top;
+      return apart ? [] : [`${label.textContent?.trim()} / ${suffix.textContent?.trim()}`];
+    }),
+  );
+  assert.deepEqual(clashes, [], 'a label runs under its unit');
+}
+
 async function shoot(session: ConsoleSession, page: Page, name: string): Promise<void> {
   await session.screenshot(page, name);
 }
@@ -54,8 +76,7 @@ describe('the process record in the console', () => {
     const clock = handClock(new Date());
     const session = await startConsole(t, { now: clock.now });
     const { server } = session;
-    const today = new Date().toLocaleDateString('en-CA');
-    const lot = await controlledBatch(server, today);
+    const lot = await controlledBatch(server);
 
     const cook = await session.page('tobin');
     const errors = collectConsoleErrors(cook);
@@ -77,7 +98,12 @@ describe('the process record in the console', () => {
       .locator('[data-testid="weigh-line"] [data-testid="weighed"]')
       .nth(count - 1)
       .waitFor();
-    await cook.getByTestId('actual-nitrite').getByText(/ppm/).waitFor();
+    const nitrite = cook.getByTestId('actual-nitrite');
+    await nitrite.waitFor();
+    assert.match(
+      await nitrite.innerText(),
+      /on the weights as weighed: \d+(\.\d)? ppm\s+\(calculated \d+(\.\d)? ppm\)/,
+    );
     const weighed = (await server.as('rosa').get(`/api/batches/${lot}/process`)).json;
     const changed = weighed.weighings.find((w: { name: string }) => w.name === firstName);
     assert.ok(changed, 'the changed line is on the record');
@@ -155,11 +181,57 @@ describe('the process record in the console', () => {
     assert.deepEqual(errors, []);
   });
 
+  it('should start a planned batch on what is really there, and say who planned and who started it', async (t) => {
+    const session = await startConsole(t);
+    const { server } = session;
+    const lot = await controlledBatch(server, 'planned', 'rosa');
+
+    const cook = await session.page('tobin');
+    const errors = collectConsoleErrors(cook);
+    await cook.setViewportSize(TABLET);
+    await cook.goto(`${server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    const people = cook.getByTestId('planned-started');
+    await people.getByText('Planned by Rosa Quennick').waitFor();
+    assert.equal(await cook.getByTestId('batch-status').innerText(), 'Planned');
+    // A marker on the window: a form that reloads the page instead of sending would lose it.
+    await cook.evaluate(() => Object.assign(window, { samePage: true }));
+
+    await cook.getByTestId('start-batch').click();
+    const dialog = cook.getByTestId('start-dialog');
+    await dialog.waitFor();
+    const meat = dialog.getByTestId('start-field-meat');
+    assert.equal(await meat.inputValue(), '4.26', 'the planned weight is filled in, beside its kg');
+    await meat.fill('4.4');
+    await cook.getByRole('heading', { name: 'The sheet on these figures' }).waitFor();
+    for (const width of [820, 390]) {
+      await cook.setViewportSize({ width, height: width === 390 ? 844 : 1180 });
+      await overlapFree(dialog);
+      await shoot(session, cook, `process-start-${width}`);
+    }
+    await cook.setViewportSize(TABLET);
+    await dialog.getByTestId('start-confirm').click();
+    await dialog.waitFor({ state: 'detached' });
+
+    await people.getByText(/Started by Tobin Marrowfeld/).waitFor();
+    assert.match(await people.innerText(), /Planned by Rosa Quennick/);
+    assert.equal(await cook.getByTestId('batch-status').innerText(), 'In progress');
+    assert.equal(await cook.getByTestId('start-batch').count(), 0, 'no second start');
+    assert.equal(
+      await cook.evaluate(() => (window as unknown as { samePage?: boolean }).samePage),
+      true,
+      'the page was not reloaded',
+    );
+    const batch = (await server.as('rosa').get(`/api/batches/${lot}`)).json.batch;
+    assert.equal(batch.status, 'in-progress');
+    assert.equal(batch.inputs.meat, '4.4 kg', 'started on the weight really there');
+    assert.deepEqual(errors, []);
+  });
+
   it('should say why a batch still being made is not released, and list what is due now', async (t) => {
     const clock = handClock(new Date());
     const session = await startConsole(t, { now: clock.now });
     const { server } = session;
-    const lot = await controlledBatch(server, new Date().toLocaleDateString('en-CA'));
+    const lot = await controlledBatch(server);
     const answer = await server.as('tobin').post(`/api/batches/${lot}/readings`, {
       control: 'smoker',
       value: '70 °C',
@@ -173,12 +245,37 @@ describe('the process record in the console', () => {
     await refused.waitFor();
     assert.match(await refused.innerText(), /only a batch marked done can be verified/i);
 
+    // A second batch chilling, whose smoker ran hot: a hold and a cooling deadline.
+    const other = await controlledBatch(server);
+    const ago = (minutes: number) => new Date(clock.now().getTime() - minutes * MINUTE);
+    for (const [control, value, at] of [
+      ['smoker', '85 °C', ago(40)],
+      ['cook', '72 °C', ago(20)],
+      ['chill', '60 °C', ago(10)],
+      ['chill', '50 °C', ago(0)],
+    ] as const) {
+      const taken = await server
+        .as('tobin')
+        .post(`/api/batches/${other}/readings`, { control, value, at: at.toISOString() });
+      assert.equal(taken.status, 201, taken.text);
+    }
+    // 20 minutes on, the first batch's smoker reading (every 30 min) is due within 15 minutes.
+    clock.advance(20 * MINUTE);
+
     await reviewer.goto(`${server.url}/curing`, { waitUntil: 'networkidle' });
     const item = reviewer.locator(`[data-testid="attention-item"] a[data-lot="${lot}"]`).first();
     await item.waitFor();
-    await reviewer.setViewportSize({ width: 390, height: 844 });
-    await shoot(session, reviewer, 'curing-attention-390');
-    assert.equal(await sideways(reviewer), 0, 'nothing sticks out sideways at 390 px');
+    const kinds = await reviewer
+      .getByTestId('attention-item')
+      .evaluateAll((items) => items.map((li) => li.getAttribute('data-kind')));
+    assert.equal(kinds[0], 'deviation', 'a hold comes first');
+    assert.ok(kinds.includes('stage-deadline') && kinds.includes('reading-due'), kinds.join());
+    for (const width of [1280, 820, 390]) {
+      await reviewer.setViewportSize({ width, height: width === 390 ? 844 : 1000 });
+      await reviewer.waitForTimeout(200);
+      await shoot(session, reviewer, `curing-attention-${width}`);
+      assert.equal(await sideways(reviewer), 0, `nothing sticks out sideways at ${width} px`);
+    }
     await item.click();
     await reviewer.waitForURL(new RegExp(`/batches/${lot}$`));
   });
@@ -187,7 +284,7 @@ describe('the process record in the console', () => {
     const clock = handClock(new Date());
     const session = await startConsole(t, { now: clock.now });
     const { server } = session;
-    const lot = await controlledBatch(server, new Date().toLocaleDateString('en-CA'));
+    const lot = await controlledBatch(server);
     // 1,440 chamber readings, one a minute for 24 h, all within 60–80 °C.
     const start = clock.now().getTime() - 24 * 60 * MINUTE;
     const rows = Array.from({ length: 1440 }, (_, i) => {
