@@ -14,6 +14,7 @@ import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/m
 import { MatInput } from '@angular/material/input';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
 import { firstValueFrom } from 'rxjs';
+import { UnitsTogetherPipe } from '../../ui/units-together';
 import type { ActionRequest, ProcessStore } from './process-store';
 import type { Deviation, Disposition, ProcessRecord } from './process-types';
 import { DISPOSITION_WORDS } from './process-words';
@@ -38,6 +39,7 @@ const REQUIRED = [Validators.required, Validators.maxLength(1000), Validators.pa
 @Component({
   selector: 'app-corrective-action-dialog',
   imports: [
+    UnitsTogetherPipe,
     ReactiveFormsModule,
     MatDialogTitle,
     MatDialogContent,

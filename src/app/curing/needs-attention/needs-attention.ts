@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, inject } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
+import { UnitsTogetherPipe } from '../../ui/units-together';
 import { RouterLink } from '@angular/router';
 import { clockWords } from '../../batches/process/process-words';
 import { AttentionNow } from '../attention-now';
@@ -19,7 +20,7 @@ const KIND = {
  */
 @Component({
   selector: 'app-needs-attention',
-  imports: [RouterLink, MatIcon],
+  imports: [RouterLink, MatIcon, UnitsTogetherPipe],
   templateUrl: './needs-attention.html',
   styleUrl: './needs-attention.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

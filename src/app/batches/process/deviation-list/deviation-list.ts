@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, signal } f
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
+import { UnitsTogetherPipe } from '../../../ui/units-together';
 import { recordCorrectiveAction } from '../corrective-action-dialog';
 import { ProcessStore } from '../process-store';
 import type { Deviation } from '../process-types';
@@ -14,7 +15,7 @@ import { DISPOSITION_WORDS, clockWords, weightWords } from '../process-words';
  */
 @Component({
   selector: 'app-deviation-list',
-  imports: [MatButton, MatIcon],
+  imports: [MatButton, MatIcon, UnitsTogetherPipe],
   templateUrl: './deviation-list.html',
   styleUrl: './deviation-list.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

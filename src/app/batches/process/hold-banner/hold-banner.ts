@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, signal } f
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
+import { UnitsTogetherPipe } from '../../../ui/units-together';
 import { recordCorrectiveAction } from '../corrective-action-dialog';
 import { ProcessStore } from '../process-store';
 import type { Deviation } from '../process-types';
@@ -13,7 +14,7 @@ import { clockWords } from '../process-words';
  */
 @Component({
   selector: 'app-hold-banner',
-  imports: [MatButton, MatIcon],
+  imports: [MatButton, MatIcon, UnitsTogetherPipe],
   template: `
     @if (open().length) {
       <section class="hold" role="alert" aria-labelledby="hold-title" data-testid="hold-banner">
@@ -30,7 +31,7 @@ import { clockWords } from '../process-words';
           @for (deviation of open(); track deviation.id) {
             <li data-testid="hold-deviation">
               <div>
-                <strong>{{ deviation.what }}</strong>
+                <strong>{{ deviation.what | unitsTogether }}</strong>
                 <span class="when">Opened {{ when(deviation.openedAt) }}</span>
               </div>
               @if (canAct()) {
