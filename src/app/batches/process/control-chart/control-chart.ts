@@ -17,6 +17,7 @@ import { BaseChartDirective, provideCharts } from 'ng2-charts';
 import { curvePoints, limitBands, type CurvePoint, type LimitBand } from '../curve-points';
 import type { BatchControl } from '../process-types';
 import { clockWords, limitWords, valueWords } from '../process-words';
+import { clockTicks } from './clock-ticks';
 
 Chart.defaults.font.family = 'Fira Sans';
 
@@ -130,6 +131,8 @@ export class ControlChart {
           backgroundColor: INK,
           borderWidth: 2,
           pointRadius: points.length > 60 ? 0 : 3,
+          // A reading on the axis's first or last moment is drawn whole, not cut in half.
+          clip: 6,
           pointHoverRadius: 5,
           tension: 0,
           order: 0,
@@ -155,8 +158,12 @@ export class ControlChart {
           min: from,
           max: to,
           grid: { color: GRID },
+          // Round clock times; the browser's zone is the kitchen's (clockWords says them there).
+          afterBuildTicks: (axis) => {
+            const offset = -new Date(from).getTimezoneOffset() * 60_000;
+            axis.ticks = clockTicks(from, to, offset).map((value) => ({ value }));
+          },
           ticks: {
-            maxTicksLimit: 8,
             callback: (value) => clockWords(new Date(Number(value)).toISOString()),
           },
         },
