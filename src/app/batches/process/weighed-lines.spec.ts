@@ -2,7 +2,7 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { PresentedResult } from '../batch-types.ts';
 import type { Weighing } from './process-types.ts';
-import { weighedLines, weightText } from './weighed-lines.ts';
+import { weighedLines, weighingNews, weightText } from './weighed-lines.ts';
 
 const result = {
   groups: [
@@ -40,5 +40,15 @@ describe('weightText', () => {
     assert.equal(weightText('10,6', '10.7 g'), '10.6 g');
     assert.equal(weightText('4.3', '4.26 kg'), '4.3 kg');
     assert.equal(weightText('2 lb 4 oz', '2 lb 3.4 oz'), '2 lb 4 oz');
+  });
+});
+
+describe('weighingNews', () => {
+  it('should leave out only the all-clear the actual-nitrite line repeats', () => {
+    const allClear = 'Ingoing sodium nitrite on the weights as weighed: 157.0 ppm, within 200 ppm.';
+    const over =
+      'On the weights as weighed, ingoing nitrite 212.0 ppm is over 200 ppm. A deviation is open: the batch is held until a corrective action is recorded.';
+    assert.deepEqual(weighingNews([allClear]), []);
+    assert.deepEqual(weighingNews([over]), [over]);
   });
 });

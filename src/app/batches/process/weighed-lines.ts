@@ -52,3 +52,15 @@ export function weightText(typed: string, amount: string): string {
   const unit = /([a-z]+)\s*$/i.exec(amount)?.[1] ?? 'g';
   return `${bare[1].replace(',', '.')} ${unit}`;
 }
+
+/** The server's all-clear on the actual nitrite: the panel's own line already shows that figure. */
+const NITRITE_ALL_CLEAR = /^Ingoing sodium nitrite on the weights as weighed: [\d.]+ ppm, within /;
+
+/**
+ * What a weighing's answer says beyond the panel's standing lines: every message but the
+ * all-clear on the nitrite, which would repeat the actual-nitrite line. Anything else (a
+ * deviation, one already open) is kept, so a changed wording can only repeat, never hide.
+ */
+export function weighingNews(messages: readonly string[]): string[] {
+  return messages.filter((message) => !NITRITE_ALL_CLEAR.test(message));
+}

@@ -1,5 +1,19 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  inject,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
+import {
+  FormControl,
+  FormGroup,
+  FormGroupDirective,
+  ReactiveFormsModule,
+  Validators,
+} from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
@@ -13,7 +27,7 @@ import { CorrectionDialog, type Correction, type CorrectionDialogData } from '..
 import { ProcessStore } from '../process-store';
 import type { StageName, Weighing, WeighingAnswer } from '../process-types';
 import { STAGE_WORDS, clockWords, weightWords } from '../process-words';
-import { weighedLines, weightText, type WeighedLine } from '../weighed-lines';
+import { weighedLines, weighingNews, weightText, type WeighedLine } from '../weighed-lines';
 
 /**
  * Weights as weighed: each line of the sheet with its calculated amount filled in, accepted with
@@ -57,6 +71,8 @@ export class WeightsPanel {
   });
   /** The stage form's group: it makes the form Angular's, so a submit never reloads the page. */
   protected readonly stageForm = new FormGroup({ stage: this.stage, weight: this.stageWeight });
+  /** Its directive: resetting it also forgets the submit, so the empty box is not shown in error. */
+  private readonly stageFormDirective = viewChild(FormGroupDirective);
   protected readonly answer = signal<WeighingAnswer | null>(null);
   protected readonly problem = signal<string | null>(null);
 
@@ -95,6 +111,10 @@ export class WeightsPanel {
     return field;
   }
 
+  protected news(messages: readonly string[]): string[] {
+    return weighingNews(messages);
+  }
+
   protected weight(grams: string): string {
     return weightWords(grams);
   }
@@ -123,7 +143,7 @@ export class WeightsPanel {
     }
     const weight = weightText(this.stageWeight.value, 'kg');
     const outcome = await this.store.weigh({ stage: { name: this.stage.value, weight } });
-    if (outcome.ok) this.stageWeight.reset();
+    if (outcome.ok) this.stageFormDirective()?.resetForm({ stage: this.stage.value, weight: '' });
     this.settle(outcome);
   }
 
