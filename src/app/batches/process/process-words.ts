@@ -138,10 +138,10 @@ export function dueWords(nextDue: string | null, now: Date): string | null {
   if (!nextDue) return null;
   const due = new Date(nextDue);
   const minutes = Math.round((due.getTime() - now.getTime()) / 60_000);
-  if (minutes < 0) return `Overdue since ${clockWords(nextDue, now)}`;
-  if (minutes === 0) return `Due now (${clockWords(nextDue, now)})`;
+  if (minutes < 0) return `overdue since ${clockWords(nextDue, now)}`;
+  if (minutes === 0) return `due now (${clockWords(nextDue, now)})`;
   const left = minutes >= 60 ? durationWords(String(minutes * 60)) : `${minutes} min`;
-  return `Due by ${clockWords(nextDue, now)}, in ${left}`;
+  return `due by ${clockWords(nextDue, now)}, in ${left}`;
 }
 
 /**

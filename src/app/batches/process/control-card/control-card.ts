@@ -1,11 +1,26 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  inject,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
+import {
+  FormControl,
+  FormGroup,
+  FormGroupDirective,
+  ReactiveFormsModule,
+  Validators,
+} from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { firstValueFrom } from 'rxjs';
+import { UnitsTogetherPipe } from '../../../ui/units-together';
 import { ControlChart } from '../control-chart/control-chart';
 import { CorrectionDialog, type Correction, type CorrectionDialogData } from '../correction-dialog';
 import { ProcessStore } from '../process-store';
@@ -58,6 +73,7 @@ interface ListedReading {
     MatButton,
     MatIcon,
     ControlChart,
+    UnitsTogetherPipe,
   ],
   templateUrl: './control-card.html',
   styleUrl: './control-card.css',
@@ -73,6 +89,8 @@ export class ControlCard {
   readonly now = input.required<Date>();
   /** Whether the signed-in person records readings. */
   readonly canWrite = input(false);
+  /** Whether the batch's record is closed (released): no reading is due any more. */
+  readonly closed = input(false);
 
   protected readonly statusWords = STATUS_WORDS;
   protected readonly statusIcons = STATUS_ICONS;
@@ -83,6 +101,8 @@ export class ControlCard {
   protected readonly time = new FormControl('', { nonNullable: true });
   /** The entry form's group: it makes the form Angular's, so a submit never reloads the page. */
   protected readonly entry = new FormGroup({ value: this.value, time: this.time });
+  /** Its directive: resetting it also forgets the submit, so the empty box is not shown in error. */
+  private readonly entryForm = viewChild(FormGroupDirective);
   protected readonly earlier = signal(false);
   protected readonly showAll = signal(false);
   protected readonly problem = signal<string | null>(null);
@@ -92,7 +112,9 @@ export class ControlCard {
   protected readonly state = computed(() => this.control().state);
   protected readonly unit = computed(() => entryUnit(this.c().measure));
   protected readonly limit = computed(() => limitWords(this.c().limit, this.c().unit));
-  protected readonly due = computed(() => dueWords(this.state().nextDue, this.now()));
+  protected readonly due = computed(() =>
+    this.closed() ? null : dueWords(this.state().nextDue, this.now()),
+  );
   protected readonly overdue = computed(() => {
     const due = this.state().nextDue;
     return !!due && new Date(due).getTime() < this.now().getTime();
@@ -138,8 +160,7 @@ export class ControlCard {
       return;
     }
     this.problem.set(null);
-    this.value.reset();
-    this.time.reset();
+    this.entryForm()?.resetForm();
     this.earlier.set(false);
     const answer = outcome.value;
     this.saved.set(

@@ -57,6 +57,9 @@ export class ProcessSection {
   protected readonly canWrite = computed(() => this.session.hasRole('admin', 'cook', 'reviewer'));
   protected readonly canVerify = computed(() => this.session.hasRole('admin', 'reviewer'));
   protected readonly planned = computed(() => this.batch().status === 'planned');
+  /** A released batch's record is verified and closed: nothing more is entered on it. */
+  protected readonly released = computed(() => !!this.store.record()?.verification);
+  protected readonly writable = computed(() => this.canWrite() && !this.released());
   protected readonly controls = computed(() => controlsByDue(this.store.record()?.controls ?? []));
   protected readonly startWarnings = signal<readonly string[]>([]);
 

@@ -70,6 +70,9 @@ import { clockWords } from '../process-words';
       color: var(--mat-sys-on-tertiary-container);
       font: var(--mat-sys-body-large);
     }
+    mat-icon {
+      flex: none;
+    }
     .note {
       display: block;
       font: var(--mat-sys-body-small);
