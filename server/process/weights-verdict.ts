@@ -58,7 +58,7 @@ export function pumpWords(pump: PumpReached): string {
  * and figure) and for a pumped weight over its target ('pump', once per pumped weighing). Never
  * refuses: what was weighed is recorded, and a deviation holds the batch.
  */
-export async function judgeAndOpen(
+export async function judgeWeighings(
   deps: { db: Database; audit: AuditRepository },
   t: Transaction,
   batch: RecordedBatch,
