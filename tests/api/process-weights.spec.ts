@@ -163,7 +163,11 @@ describe('weights as weighed', () => {
       id: number;
       grams: string;
       corrects_id: number | null;
-    }>('SELECT id, grams, corrects_id FROM weighings ORDER BY id', { type: QueryTypes.SELECT });
+    }>(
+      `SELECT w.id, w.grams, w.corrects_id FROM weighings w JOIN batches b ON b.id = w.batch_id
+       WHERE b.lot_code = ? ORDER BY w.id`,
+      { replacements: [lot], type: QueryTypes.SELECT },
+    );
     assert.deepEqual(
       stored.map((w) => [w.grams, w.corrects_id]),
       [
@@ -213,8 +217,8 @@ describe('weights as weighed', () => {
     assert.equal(weight.status, 422, weight.text);
     assert.equal(weight.json.error.details[0].field, 'stage.weight');
     const count = await server.context.db.sequelize.query<{ n: number }>(
-      'SELECT COUNT(*) AS n FROM weighings',
-      { type: QueryTypes.SELECT },
+      'SELECT COUNT(*) AS n FROM weighings w JOIN batches b ON b.id = w.batch_id WHERE b.lot_code = ?',
+      { replacements: [lot], type: QueryTypes.SELECT },
     );
     assert.equal(count[0].n, 0);
   });
