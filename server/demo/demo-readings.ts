@@ -40,7 +40,9 @@ export function demoReadings(
   if (control.unit !== '°C') return [];
   const limit = control.limit;
   const step = everyMinutes(control);
-  const times = Array.from({ length: Math.floor(minutes / step) + 1 }, (_, i) => i * step);
+  // A single check (no frequency) is one reading.
+  const count = control.everyS === null ? 1 : Math.floor(minutes / step) + 1;
+  const times = Array.from({ length: count }, (_, i) => i * step);
   switch (limit.type) {
     case 'at-most':
     case 'between': {
@@ -58,8 +60,8 @@ export function demoReadings(
         value: celsius(new Decimal(limit.min).plus(2 + (i % 2) * 0.5)),
       }));
     case 'hold': {
-      // The first row: reached, and held past its time.
-      const row = limit.rows[0];
+      // The row held for the shortest time (an instant one where the table has it), held past it.
+      const row = [...limit.rows].sort((a, b) => Number(a.holdS) - Number(b.holdS))[0];
       const held = Math.ceil(Number(row.holdS) / 60) + 2;
       const hot = new Decimal(row.tempC).plus('1.5');
       return [

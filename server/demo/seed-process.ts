@@ -1,3 +1,4 @@
+import { Decimal } from '../../shared/decimal.ts';
 import { addDays, type RawBatchOptions } from '../../shared/index.ts';
 import type { ResolvedControl } from '../../shared/process/control-types.ts';
 import { parseReadingValue } from '../../shared/process/reading-value.ts';
@@ -12,6 +13,9 @@ import { insertReadings } from '../process/reading-writes.ts';
 import { verifyBatch } from '../process/verification.ts';
 import { addWeighings } from '../process/weighing-writes.ts';
 import { after, demoReadings, type DemoPoint } from './demo-readings.ts';
+
+/** Which chamber reading of the smoke is the demo's one over the limit: the fourth, 90 minutes in. */
+const OVER_INDEX = 3;
 
 /** The demo people of the stories. */
 interface Crew {
@@ -77,8 +81,15 @@ async function weighLines(seeding: Seeding, lot: string, at: string): Promise<vo
     {
       lines: lines.map((line, i) => ({
         name: line.name,
-        // To the scale's 0.1 g, one tenth over on every other line.
-        weight: `${(Math.round(Number(line.grams) * 10) / 10 + (i % 2) * 0.1).toFixed(1)} g`,
+        // To the scale's 0.1 g, a tenth over on every other line; curing salt never over (a
+        // comminuted cure may be figured at its very limit).
+        weight:
+          line.role === 'curing-salt'
+            ? `${new Decimal(line.grams).toDecimalPlaces(1, Decimal.ROUND_DOWN).toFixed(1)} g`
+            : `${new Decimal(line.grams)
+                .toDecimalPlaces(1)
+                .plus((i % 2) / 10)
+                .toFixed(1)} g`,
       })),
     },
     by(seeding.crew.tobin, at),
@@ -140,26 +151,44 @@ async function readings(
   });
 }
 
-/** Where each control's readings fall on the day the product is smoked, cooked and chilled. */
+/** When a batch's product is worked: its cure (days) and the day it is smoked, cooked, chilled. */
+interface Windows {
+  /** The cure room's hold: from, and how many minutes. */
+  readonly cure?: { readonly from: string; readonly minutes: number };
+  /** The smoke's start on the process day. */
+  readonly smoke: string;
+}
+
+/**
+ * Where each control's readings fall: the curing cooler through the cure; a chamber through the
+ * smoke (its fourth reading the demo's deviation when `over`); the product's own checks one after
+ * another from late in the smoke (a cook, a cool), a cold holding the morning after.
+ */
 function dayOfProcess(
   controls: readonly ResolvedControl[],
-  start: string,
-  until?: string,
+  windows: Windows,
+  { over = false }: { over?: boolean } = {},
 ): { control: ResolvedControl; point: DemoPoint }[] {
   const points: { control: ResolvedControl; point: DemoPoint }[] = [];
-  let product = after(start, 200);
-  let overDone = false;
+  let product = after(windows.smoke, 200);
+  let overDue = over;
   for (const control of controls) {
     const { type } = control.limit;
-    const chamber = type === 'at-most' || type === 'between' || type === 'at-least';
-    const begins = chamber ? start : product;
-    // The chamber runs the whole smoke; the product's own checks follow one another.
-    const minutes = chamber ? 240 : type === 'hold' ? 40 : 24 * 60;
-    const over = chamber && type !== 'at-least' && !overDone ? 3 : undefined;
-    if (over !== undefined) overDone = true;
-    const made = demoReadings(control, begins, minutes, over === undefined ? {} : { over });
-    for (const point of made) if (!until || point.at <= until) points.push({ control, point });
-    if (!chamber) product = after(made[made.length - 1]?.at ?? product, 20);
+    let made: DemoPoint[];
+    if (control.rule === 'curing-room') {
+      if (!windows.cure) continue;
+      made = demoReadings(control, windows.cure.from, windows.cure.minutes);
+    } else if (control.measure === 'chamber-temperature') {
+      const bad = overDue && type !== 'at-least' ? OVER_INDEX : undefined;
+      if (bad !== undefined) overDue = false;
+      made = demoReadings(control, windows.smoke, 240, bad === undefined ? {} : { over: bad });
+    } else {
+      // Held cold: the morning after it went into the walk-in.
+      const begins = type === 'at-most' ? after(product, 16 * 60) : product;
+      made = demoReadings(control, begins, type === 'hold' ? 40 : 24 * 60);
+      product = after(made[made.length - 1]?.at ?? product, 20);
+    }
+    for (const point of made) points.push({ control, point });
   }
   return points.sort((a, b) => a.point.at.localeCompare(b.point.at));
 }
@@ -186,10 +215,14 @@ async function smokedBelly(seeding: Seeding): Promise<void> {
   const batch = await seeding.deps.process.batch(lot);
   const controls = await seeding.deps.process.controlsOf(batch);
   const smoke = stamp(today, -3, 9 * 60);
-  const points = dayOfProcess(controls, smoke);
-  // The reading over the limit, and the rest of the day after it.
+  const cure = { from: stamp(today, -12, 9 * 60), minutes: 8 * 24 * 60 };
+  const points = dayOfProcess(controls, { cure, smoke }, { over: true });
+  // The chamber reading over its limit, and the rest of the record after it.
   const overAt = points.find(
-    ({ control, point }) => control.limit.type !== 'cooling' && point.at === after(smoke, 90),
+    ({ control, point }) =>
+      control.measure === 'chamber-temperature' &&
+      control.rule !== 'curing-room' &&
+      point.at === after(smoke, OVER_INDEX * 30),
   );
   const first = points.filter((p) => !overAt || p.point.at <= overAt.point.at);
   const opened = overAt ? await readings(seeding, lot, first, after(overAt.point.at, 2)) : [];
@@ -244,20 +277,19 @@ async function coolingNow(seeding: Seeding): Promise<void> {
     const controls = await seeding.deps.process.controlsOf(await seeding.deps.process.batch(lot));
     if (!controls.some((c) => c.limit.type === 'cooling')) continue;
     await weighLines(seeding, lot, after(now.toISOString(), -6 * 60 - 50));
-    // The cool began 50 minutes ago; everything before it keeps to its limits.
+    // The cool began half an hour ago; everything before it kept to its limits.
     const cooling = controls.findIndex((c) => c.limit.type === 'cooling');
-    const before = controls.slice(0, cooling).filter((c) => c.limit.type !== 'cooling');
-    const nowIso = after(now.toISOString(), -5);
+    const began = after(now.toISOString(), -30);
     const points = [
-      ...dayOfProcess(before, after(now.toISOString(), -300)).filter(
-        (p) => p.point.at < after(now.toISOString(), -50),
+      ...dayOfProcess(controls.slice(0, cooling), { smoke: after(began, -250) }).filter(
+        (p) => p.point.at < began,
       ),
-      ...demoReadings(controls[cooling], after(now.toISOString(), -50), 45).map((point) => ({
+      ...demoReadings(controls[cooling], began, 25).map((point) => ({
         control: controls[cooling],
         point,
       })),
     ];
-    await readings(seeding, lot, points, nowIso);
+    await readings(seeding, lot, points, after(now.toISOString(), -5));
     return;
   }
 }
