@@ -5,6 +5,7 @@ import type {
   Deviation,
   ProcessRecord,
   Reading,
+  Verification,
 } from '../../shared/api/process-record.ts';
 import type { ResolvedControl } from '../../shared/process/control-types.ts';
 import type { Database } from '../db/database.ts';
@@ -195,6 +196,12 @@ export class ProcessRepository {
     }));
   }
 
+  /** The verification that released a batch, if any. */
+  async verification(batchId: number, t?: Transaction): Promise<Verification | null> {
+    const [row] = await this.select<VerificationRow>(VERIFICATION_SQL, [batchId], t);
+    return row ? toVerification(row) : null;
+  }
+
   /** The batches being made (in progress, curing, proofing), oldest first. */
   async beingMade(): Promise<ProcessBatch[]> {
     return (await this.select<BatchRow>(BEING_MADE_SQL, [])).map(toBatch);
@@ -225,11 +232,11 @@ export class ProcessRepository {
   async record(lot: string, now: string, t?: Transaction): Promise<ProcessRecord> {
     const row = await this.batchRow(lot, t);
     const batch = toBatch(row);
-    const [{ controls }, deviations, weighingRows, [verification]] = await Promise.all([
+    const [{ controls }, deviations, weighingRows, verification] = await Promise.all([
       this.judged(batch, now, t),
       this.deviations(batch.id, t),
       this.select<WeighingRow>(WEIGHINGS_SQL, [batch.id], t),
-      this.select<VerificationRow>(VERIFICATION_SQL, [batch.id], t),
+      this.verification(batch.id, t),
     ]);
     const weighingCorrections = correctedByOf(weighingRows);
     return {
@@ -241,7 +248,7 @@ export class ProcessRepository {
       deviations: deviations.map(({ key: _key, ...deviation }) => deviation),
       onHold: deviations.some((d) => d.action === null),
       nonconforming: deviations.length > 0,
-      verification: verification ? toVerification(verification) : null,
+      verification,
       plannedBy: personRef(row.planned_by, row.planner_name),
       startedBy: personRef(row.started_by, row.starter_name),
       startedAt: row.started_at,
