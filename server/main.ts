@@ -24,10 +24,11 @@ async function main(): Promise<void> {
   if (config.mode === 'demo') ensureDemoFormulas(config.formulasDir);
   const context = await openContext(config);
   if (config.mode === 'demo') await seedDemo(context);
+  // Cooling deadlines that pass with no reading open their deviations once a minute. Built
+  // before listening: nothing may be awaited between listen() and its 'listening' handler.
+  const deadlines = new DeadlineScan(await context.records.processRecords(), context);
   const server = createApp(context).listen(config.port, config.host);
   const reminders = new ReminderScheduler(context);
-  // Cooling deadlines that pass with no reading open their deviations once a minute.
-  const deadlines = new DeadlineScan(await context.records.processRecords(), context);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     console.log(

@@ -16,7 +16,7 @@ export interface DeadlineScanOptions {
   readonly report?: (error: unknown) => void;
 }
 
-/** What one run opened: the lot and the dedupe key of each deviation. */
+/** What one run opened: each deviation's id and the lot it holds. */
 export interface ScanRun {
   readonly at: string;
   readonly opened: readonly { readonly lotCode: string; readonly deviation: number }[];
