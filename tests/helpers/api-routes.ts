@@ -191,6 +191,11 @@ export const ROUTES: readonly RouteCase[] = [
     path: `/api/batches/${await cooksLot(fx)}/sign-off`,
     body: { note: 'Checked the sheet.' },
   })),
+  // Process records (HACCP): readings, corrections, logger files, corrective actions, release.
+  // Before the password routes: a password changed ends the setup's session, which these use.
+  ...PROCESS_ROUTES,
+  // Weights as weighed, starting a planned batch, refused calculations.
+  ...WEIGHTS_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',
@@ -215,10 +220,6 @@ export const ROUTES: readonly RouteCase[] = [
     body: { current: ownPassword(role), password: ownPassword(role) },
   })),
   route('GET', '/api/audit', ADMIN, '/api/audit?limit=5'),
-  // Process records (HACCP): readings, corrections, logger files, corrective actions, release.
-  ...PROCESS_ROUTES,
-  // Weights as weighed, starting a planned batch, refused calculations.
-  ...WEIGHTS_ROUTES,
 ];
 
 /** What a cell expects, in words for its test name. */
