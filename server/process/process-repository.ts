@@ -15,6 +15,7 @@ import type { FormulaControls } from './formula-controls.ts';
 import { judgeBatch } from './judge-batch.ts';
 import { kitchenClock } from './kitchen-clock.ts';
 import { weighedPart } from './weighed-record.ts';
+import { WEIGHINGS_SQL } from './weighing-rows.ts';
 import {
   STAMP_COLUMNS,
   correctedByOf,
@@ -79,9 +80,6 @@ const ACTIONS_SQL = `SELECT ${STAMP_COLUMNS}, x.deviation_id, x.cause, x.restore
   x.disposition, x.disposition_grams
   FROM deviations d JOIN corrective_actions x ON x.deviation_id = d.id
   LEFT JOIN people rp ON rp.id = x.recorded_by WHERE d.batch_id = ? ORDER BY x.id`;
-
-const WEIGHINGS_SQL = `SELECT ${STAMP_COLUMNS}, x.kind, x.name, x.planned_grams, x.grams, x.weighed_at
-  FROM weighings x LEFT JOIN people rp ON rp.id = x.recorded_by WHERE x.batch_id = ? ORDER BY x.id`;
 
 const VERIFICATION_SQL = `SELECT ${STAMP_COLUMNS}, x.note
   FROM verifications x LEFT JOIN people rp ON rp.id = x.recorded_by
