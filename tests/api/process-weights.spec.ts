@@ -80,6 +80,31 @@ describe('weights as weighed', () => {
     assert.equal(record.json.onHold, true);
   });
 
+  it("should open a deviation when an under-pumped belly falls below the cured cooling option's nitrite", async (t) => {
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
+    const lot = await recorded(server, 'maple-pump-belly', { meat: '5 kg', start: '2024-02-29' });
+    await server
+      .as('tobin')
+      .post(`/api/batches/${lot}/weighings`, { stage: { name: 'green', weight: '5 kg' } });
+    const pumped = await server
+      .as('tobin')
+      .post(`/api/batches/${lot}/weighings`, { stage: { name: 'pumped', weight: '5.4 kg' } });
+    assert.equal(pumped.status, 201, pumped.text);
+    // 120 ppm at the formula's 10 % pump, × 8/10 at an 8 % pump = 96 ppm (FSIS Directive 7620.3
+    // ch. 3, pumped formula), under the 100 ppm ingoing sodium nitrite the cured-product cooling
+    // option of FSIS Appendix B relies on (1999 Appendix B, cured products)
+    assert.equal(pumped.json.actualNitritePpm, '96');
+    const words = pumped.json.deviations.map((d: { what: string }) => d.what) as string[];
+    // The erythorbate falls short with it: 550 ppm at 10 % × 8/10 = 440 ppm, under the 550 ppm
+    // pumped bacon requires (9 CFR 424.22(b))
+    assert.equal(words.length, 2);
+    assert.match(words[0], /erythorbate 440\.0 ppm is under the 550 ppm/);
+    assert.match(
+      words[1],
+      /at least 100 ppm ingoing sodium nitrite; the weights as weighed give 96\.0 ppm/,
+    );
+  });
+
   it('should record a pumped weight over its target as a pump deviation, keeping the batch', async (t) => {
     const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const lot = await recorded(server, 'maple-pump-belly', { meat: '5 kg', start: '2024-02-29' });
