@@ -3,6 +3,7 @@ import { createApp } from './app.ts';
 import { ConfigError, loadConfig } from './config.ts';
 import { DEMO_PEOPLE } from './demo/demo-people.ts';
 import { ensureDemoFormulas } from './demo/demo-formulas.ts';
+import { EquipmentDueScheduler } from './equipment/equipment-due-scheduler.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
 import { ReminderScheduler } from './reminders/reminder-scheduler.ts';
@@ -25,6 +26,7 @@ async function main(): Promise<void> {
   if (config.mode === 'demo') await seedDemo(context);
   const server = createApp(context).listen(config.port, config.host);
   const reminders = new ReminderScheduler(context);
+  const equipmentDue = new EquipmentDueScheduler(context);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     console.log(
@@ -36,6 +38,7 @@ async function main(): Promise<void> {
       `Mail: ${context.mail.mailer.description}  ·  links to ${context.mail.links.base()}  ·  reminders every ${config.reminderMinutes} min`,
     );
     reminders.start();
+    equipmentDue.start();
     if (config.mode === 'demo') {
       console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
       for (const person of DEMO_PEOPLE)
@@ -55,8 +58,7 @@ async function main(): Promise<void> {
   const stop = (): void => {
     server.close(
       () =>
-        void reminders
-          .stop()
+        void Promise.all([reminders.stop(), equipmentDue.stop()])
           .then(() => context.formulas.close())
           .then(() => context.mail.close())
           .then(() => context.db.close())

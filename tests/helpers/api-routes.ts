@@ -8,6 +8,7 @@ import {
   type Sender,
   type Snapshot,
 } from './api-calls.ts';
+import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
 
 /** The callers of the role matrix. */
@@ -213,6 +214,7 @@ export const ROUTES: readonly RouteCase[] = [
     body: { current: ownPassword(role), password: ownPassword(role) },
   })),
   route('GET', '/api/audit', ADMIN, '/api/audit?limit=5'),
+  ...EQUIPMENT_ROUTES,
 ];
 
 /** What a cell expects, in words for its test name. */
