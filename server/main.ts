@@ -6,6 +6,7 @@ import { ensureDemoFormulas } from './demo/demo-formulas.ts';
 import { EquipmentDueScheduler } from './equipment/equipment-due-scheduler.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
+import { DeadlineScan } from './process/deadline-scan.ts';
 import { ReminderScheduler } from './reminders/reminder-scheduler.ts';
 
 /* eslint-disable no-console -- the server talks to whoever started it */
@@ -24,6 +25,9 @@ async function main(): Promise<void> {
   if (config.mode === 'demo') ensureDemoFormulas(config.formulasDir);
   const context = await openContext(config);
   if (config.mode === 'demo') await seedDemo(context);
+  // Cooling deadlines that pass with no reading open their deviations once a minute. Built
+  // before listening: nothing may be awaited between listen() and its 'listening' handler.
+  const deadlines = new DeadlineScan(await context.records.processRecords(), context);
   const server = createApp(context).listen(config.port, config.host);
   const reminders = new ReminderScheduler(context);
   const equipmentDue = new EquipmentDueScheduler(context);
@@ -38,6 +42,7 @@ async function main(): Promise<void> {
       `Mail: ${context.mail.mailer.description}  ·  links to ${context.mail.links.base()}  ·  reminders every ${config.reminderMinutes} min`,
     );
     reminders.start();
+    deadlines.start();
     equipmentDue.start();
     if (config.mode === 'demo') {
       console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
@@ -58,7 +63,7 @@ async function main(): Promise<void> {
   const stop = (): void => {
     server.close(
       () =>
-        void Promise.all([reminders.stop(), equipmentDue.stop()])
+        void Promise.all([reminders.stop(), deadlines.stop(), equipmentDue.stop()])
           .then(() => context.formulas.close())
           .then(() => context.mail.close())
           .then(() => context.db.close())

@@ -21,6 +21,8 @@ export interface DeviationToOpen {
    * already opened, by this process or another, is not opened again.
    */
   readonly key: string;
+  /** When it was found, if not `by.at` or now: the deadline scan's own clock. */
+  readonly openedAt?: string;
 }
 
 /**
@@ -35,9 +37,10 @@ export async function openDeviation(
   deviation: DeviationToOpen,
   by: ChangeOptions | null,
 ): Promise<number | null> {
-  const at = by?.at ?? new Date().toISOString();
-  const id = await insertRow(
+  const at = deviation.openedAt ?? by?.at ?? new Date().toISOString();
+  const inserted = await insertRow(
     db,
+    t,
     `INSERT INTO deviations (batch_id, equipment_id, control, kind, what, opened_at, opened_by, reading_id, dedupe_key)
      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING`,
     [
@@ -51,9 +54,8 @@ export async function openDeviation(
       deviation.readingId ?? null,
       deviation.key,
     ],
-    t,
   );
-  if (id === null) return null;
+  if (inserted.changes === 0) return null;
   if (by?.audit !== false)
     await audit.append(
       {
@@ -61,7 +63,7 @@ export async function openDeviation(
         action: 'deviation-open',
         subject: deviation.subject,
         detail: {
-          deviation: id,
+          deviation: inserted.lastId,
           control: deviation.control,
           kind: deviation.kind,
           what: deviation.what,
@@ -70,5 +72,5 @@ export async function openDeviation(
       },
       t,
     );
-  return id;
+  return inserted.lastId;
 }
