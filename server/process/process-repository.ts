@@ -14,6 +14,7 @@ import { notFound } from '../http/app-error.ts';
 import type { FormulaControls } from './formula-controls.ts';
 import { judgeBatch } from './judge-batch.ts';
 import { kitchenClock } from './kitchen-clock.ts';
+import { weighedPart } from './weighed-record.ts';
 import {
   STAMP_COLUMNS,
   correctedByOf,
@@ -258,12 +259,13 @@ export class ProcessRepository {
       this.verification(batch.id, t),
     ]);
     const weighingCorrections = correctedByOf(weighingRows);
+    const weighings = weighingRows.map((w) => toWeighing(w, weighingCorrections));
     return {
       lotCode: batch.lotCode,
       controls,
-      weighings: weighingRows.map((w) => toWeighing(w, weighingCorrections)),
-      // Worked out from the weighed lines by the weights records; none from readings alone.
-      actualNitritePpm: null,
+      weighings,
+      // The ingoing nitrite and yields on the weights as weighed, the plan a start replaced.
+      ...(await weighedPart(this.db, this.controls.history, batch.id, weighings, t)),
       deviations: deviations.map(({ key: _key, ...deviation }) => deviation),
       onHold: deviations.some((d) => d.action === null),
       nonconforming: deviations.length > 0,

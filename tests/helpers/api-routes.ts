@@ -10,6 +10,7 @@ import {
 } from './api-calls.ts';
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
+import { WEIGHTS_ROUTES } from './weights-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
 
 /** The callers of the role matrix. */
@@ -217,6 +218,8 @@ export const ROUTES: readonly RouteCase[] = [
   route('GET', '/api/audit', ADMIN, '/api/audit?limit=5'),
   // Process records (HACCP): readings, corrections, logger files, corrective actions, release.
   ...PROCESS_ROUTES,
+  // Weights as weighed, starting a planned batch, refused calculations.
+  ...WEIGHTS_ROUTES,
   ...EQUIPMENT_ROUTES,
 ];
 
