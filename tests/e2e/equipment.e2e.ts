@@ -60,6 +60,16 @@ describe('equipment in the console', () => {
     assert.match(await deviation.innerText(), /deviation is open/);
     assert.match(await deviation.innerText(), /Walk-in cooler: 7\.2 °C/);
     await session.screenshot(page, 'equipment-deviation-820');
+
+    // The corrective action, the four things a HACCP record asks, in the batch page's dialog.
+    await dialog.getByTestId('reading-act').click();
+    const action = page.getByTestId('action-dialog');
+    await action.getByTestId('action-cause').fill('The door was left ajar during a delivery.');
+    await action.getByTestId('action-restored').fill('Door shut; read 3.5 °C half an hour later.');
+    await action.getByTestId('action-prevention').fill('A door alarm after two minutes open.');
+    await action.getByTestId('disposition-rechilled').click();
+    await action.getByTestId('action-confirm').click();
+    await dialog.getByTestId('reading-acted').waitFor();
     await dialog.getByTestId('reading-done').click();
     await dialog.waitFor({ state: 'detached' });
     await cooler.getByTestId('equipment-standing').getByText('Out of limit').waitFor();
@@ -82,11 +92,11 @@ describe('equipment in the console', () => {
     await check.waitFor({ state: 'detached' });
     await card(page, 'Probe thermometer 1').getByText('Last check: 0.5 °C').waitFor();
 
-    // The cooler's log shows the deviation, open.
+    // The cooler's log shows the deviation, closed by its corrective action.
     await card(page, 'Walk-in cooler').getByTestId('equipment-log').click();
     const log = page.getByRole('dialog');
     await log.getByTestId('log-deviations').waitFor();
-    assert.match(await log.getByTestId('log-deviations').innerText(), /open: needs a corrective/);
+    assert.match(await log.getByTestId('log-deviations').innerText(), /corrective action taken/);
     await session.screenshot(page, 'equipment-log-390');
     assert.deepEqual(errors, []);
   });

@@ -1,6 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
+import type { ActionRequest } from '../batches/process/process-store';
 import { messageOf } from '../core/api/message-of';
 import type {
   CalibrationAnswer,
@@ -66,6 +67,12 @@ export class EquipmentStore {
     );
     void this.load();
     return answer;
+  }
+
+  /** Records the corrective action that closes a deviation; throws the API's error. */
+  async act(deviationId: number, action: ActionRequest): Promise<void> {
+    await firstValueFrom(this.http.post(`/api/deviations/${deviationId}/action`, action));
+    void this.load();
   }
 
   /** Adds a piece of equipment (admins). */

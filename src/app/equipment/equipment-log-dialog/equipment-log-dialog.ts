@@ -4,6 +4,7 @@ import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angula
 import { MatButton } from '@angular/material/button';
 import {
   MAT_DIALOG_DATA,
+  MatDialog,
   MatDialogActions,
   MatDialogClose,
   MatDialogContent,
@@ -15,6 +16,7 @@ import { MatProgressBar } from '@angular/material/progress-bar';
 import { temperatureWords } from '../../../../shared/process/control-words.ts';
 import { messageOf } from '../../core/api/message-of';
 import { isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
+import { recordEquipmentAction } from '../equipment-action';
 import { EquipmentStore } from '../equipment-store';
 import type { Equipment, EquipmentLog } from '../equipment-types';
 
@@ -51,6 +53,13 @@ export class EquipmentLogDialog implements OnInit {
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
   protected readonly degrees = temperatureWords;
+  private readonly dialog = inject(MatDialog);
+
+  protected async act(deviation: { id: number; what: string }): Promise<void> {
+    const outcome = await recordEquipmentAction(this.dialog, this.store, deviation);
+    this.failure.set(outcome.failure);
+    if (outcome.recorded) await this.show();
+  }
 
   ngOnInit(): void {
     void this.show();

@@ -3,6 +3,7 @@ import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import {
   MAT_DIALOG_DATA,
+  MatDialog,
   MatDialogActions,
   MatDialogClose,
   MatDialogContent,
@@ -12,6 +13,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { temperatureWords } from '../../../../shared/process/control-words.ts';
 import { messageOf } from '../../core/api/message-of';
+import { recordEquipmentAction } from '../equipment-action';
 import { EquipmentStore } from '../equipment-store';
 import type { Equipment, EquipmentReadingAnswer } from '../equipment-types';
 import {
@@ -49,6 +51,15 @@ export class ReadingDialog {
   protected readonly failure = signal<string | null>(null);
   protected readonly saved = signal<EquipmentReadingAnswer | null>(null);
   protected readonly degrees = temperatureWords;
+  private readonly dialog = inject(MatDialog);
+  /** Whether the deviation's corrective action has been recorded. */
+  protected readonly acted = signal(false);
+
+  protected async act(deviation: { id: number; what: string }): Promise<void> {
+    const outcome = await recordEquipmentAction(this.dialog, this.store, deviation);
+    this.acted.set(outcome.recorded);
+    this.failure.set(outcome.failure);
+  }
 
   protected async save(): Promise<void> {
     const { value, unit } = this.form.getRawValue();
