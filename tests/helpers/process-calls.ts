@@ -47,9 +47,11 @@ const CONTROLS = `controls:
     every: 4 h
 `;
 
-/** The demo belly's text as a formula of its own, with the controls. */
+/** The demo belly's text as a formula of its own, with these controls instead of its own. */
 export function controlledFormulaYaml(): string {
-  const belly = readFileSync(path.join(REPO_ROOT, 'formulas', 'quillmoor-belly.yaml'), 'utf8');
+  const demo = readFileSync(path.join(REPO_ROOT, 'formulas', 'quillmoor-belly.yaml'), 'utf8');
+  // Its own controls, with the comment above them: to the next top-level key or the end.
+  const belly = demo.replace(/(?:^#.*\n)*^controls:\n(?:[ #].*\n|\n)*/m, '');
   return `${belly
     .replace('id: quillmoor-belly', `id: ${CONTROLLED}`)
     .replace(/^title: .*$/m, 'title: Test belly, smoked, cooked and chilled')}${CONTROLS}`;
