@@ -113,11 +113,15 @@ export async function processOf(server: TestServer, lot: string): Promise<Proces
   return response.json as ProcessRecord;
 }
 
-/** Rows in a table, straight from the server's database. */
+/**
+ * Rows of a table (readings, deviations: those with a batch_id) that belong to batches of the
+ * tests' controlled formula, straight from the server's database: the demo kitchen's own records
+ * (its equipment logs, its batches) are not the tests'.
+ */
 export async function rowCount(server: TestServer, table: string): Promise<number> {
   const [row] = await server.context.db.sequelize.query<{ n: number }>(
-    `SELECT COUNT(*) AS n FROM ${table}`,
-    { type: QueryTypes.SELECT },
+    `SELECT COUNT(*) AS n FROM ${table} x JOIN batches b ON b.id = x.batch_id WHERE b.formula_id = ?`,
+    { replacements: [CONTROLLED], type: QueryTypes.SELECT },
   );
   return row!.n;
 }
