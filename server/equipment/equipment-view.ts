@@ -8,7 +8,7 @@ import {
 } from '../../shared/process/equipment-control.ts';
 import { evaluateControl } from '../../shared/process/evaluate-control.ts';
 import { resolveControl } from '../../shared/process/resolve-control.ts';
-import { kitchenTimeZone } from '../process/kitchen-clock.ts';
+import { kitchenClock } from '../process/kitchen-clock.ts';
 import type { EquipmentRow, EquipmentRows } from './equipment-rows.ts';
 
 /** The control a piece of equipment is judged by, resolved (its limit canonical, every in s). */
@@ -59,7 +59,7 @@ export async function viewOf(
     : evaluateControl(
         control,
         lastReading ? [{ at: lastReading.at, value: lastReading.value }] : [],
-        { now: now.toISOString(), timeZone: kitchenTimeZone() },
+        kitchenClock(now),
       );
   const last = lastReading?.at ?? lastCalibration?.at;
   const nextDue = !row.active
