@@ -3,6 +3,7 @@ import { createApp } from './app.ts';
 import { ConfigError, loadConfig } from './config.ts';
 import { DEMO_PEOPLE } from './demo/demo-people.ts';
 import { ensureDemoFormulas } from './demo/demo-formulas.ts';
+import { EquipmentDueScheduler } from './equipment/equipment-due-scheduler.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
 import { DeadlineScan } from './process/deadline-scan.ts';
@@ -29,6 +30,7 @@ async function main(): Promise<void> {
   const deadlines = new DeadlineScan(await context.records.processRecords(), context);
   const server = createApp(context).listen(config.port, config.host);
   const reminders = new ReminderScheduler(context);
+  const equipmentDue = new EquipmentDueScheduler(context);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     console.log(
@@ -41,6 +43,7 @@ async function main(): Promise<void> {
     );
     reminders.start();
     deadlines.start();
+    equipmentDue.start();
     if (config.mode === 'demo') {
       console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
       for (const person of DEMO_PEOPLE)
@@ -60,7 +63,7 @@ async function main(): Promise<void> {
   const stop = (): void => {
     server.close(
       () =>
-        void Promise.all([reminders.stop(), deadlines.stop()])
+        void Promise.all([reminders.stop(), deadlines.stop(), equipmentDue.stop()])
           .then(() => context.formulas.close())
           .then(() => context.mail.close())
           .then(() => context.db.close())

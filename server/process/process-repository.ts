@@ -81,6 +81,10 @@ const ACTIONS_SQL = `SELECT ${STAMP_COLUMNS}, x.deviation_id, x.cause, x.restore
   FROM deviations d JOIN corrective_actions x ON x.deviation_id = d.id
   LEFT JOIN people rp ON rp.id = x.recorded_by WHERE d.batch_id = ? ORDER BY x.id`;
 
+/** One deviation (of a batch or a piece of equipment) by id, and its actions. */
+const DEVIATION_SQL = DEVIATIONS_SQL.replace('WHERE d.batch_id = ?', 'WHERE d.id = ?');
+const DEVIATION_ACTIONS_SQL = ACTIONS_SQL.replace('WHERE d.batch_id = ?', 'WHERE d.id = ?');
+
 const VERIFICATION_SQL = `SELECT ${STAMP_COLUMNS}, x.note
   FROM verifications x LEFT JOIN people rp ON rp.id = x.recorded_by
   WHERE x.batch_id = ? ORDER BY x.id DESC LIMIT 1`;
@@ -193,6 +197,21 @@ export class ProcessRepository {
       ),
       key: row.dedupe_key,
     }));
+  }
+
+  /** One deviation by id, of a batch or of a piece of equipment, with its actions. */
+  async deviation(id: number, t?: Transaction): Promise<KeyedDeviation | null> {
+    const [row] = await this.select<DeviationRow>(DEVIATION_SQL, [id], t);
+    if (!row) return null;
+    const actionRows = await this.select<ActionRow>(DEVIATION_ACTIONS_SQL, [id], t);
+    const correctedBy = correctedByOf(actionRows);
+    return {
+      ...toDeviation(
+        row,
+        actionRows.map((a) => toAction(a, correctedBy)),
+      ),
+      key: row.dedupe_key,
+    };
   }
 
   /** The verification that released a batch, if any. */

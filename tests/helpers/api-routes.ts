@@ -8,6 +8,7 @@ import {
   type Sender,
   type Snapshot,
 } from './api-calls.ts';
+import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
 import { WEIGHTS_ROUTES } from './weights-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
@@ -196,6 +197,7 @@ export const ROUTES: readonly RouteCase[] = [
   ...PROCESS_ROUTES,
   // Weights as weighed, starting a planned batch, refused calculations.
   ...WEIGHTS_ROUTES,
+  ...EQUIPMENT_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',
