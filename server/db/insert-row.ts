@@ -20,3 +20,15 @@ export async function insertRow(
   })) as unknown as [number, number];
   return { lastId, changes };
 }
+
+/** Runs one INSERT that always inserts (no ON CONFLICT) and gives the new row's id. */
+export async function insertNew(
+  db: Database,
+  sql: string,
+  values: readonly unknown[],
+  t: Transaction,
+): Promise<number> {
+  const { lastId, changes } = await insertRow(db, t, sql, values);
+  if (changes === 0) throw new Error('the row was not inserted');
+  return lastId;
+}

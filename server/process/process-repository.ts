@@ -5,6 +5,7 @@ import type {
   Deviation,
   ProcessRecord,
   Reading,
+  Verification,
 } from '../../shared/api/process-record.ts';
 import type { ResolvedControl } from '../../shared/process/control-types.ts';
 import type { Database } from '../db/database.ts';
@@ -14,6 +15,7 @@ import type { FormulaControls } from './formula-controls.ts';
 import { judgeBatch } from './judge-batch.ts';
 import { kitchenClock } from './kitchen-clock.ts';
 import { weighedPart } from './weighed-record.ts';
+import { WEIGHINGS_SQL } from './weighing-rows.ts';
 import {
   STAMP_COLUMNS,
   correctedByOf,
@@ -63,10 +65,12 @@ const BATCH_SQL = `SELECT b.id, b.lot_code, b.status, b.formula_id, b.formula_re
   WHERE b.lot_code = ?`;
 
 // One query for every reading of a batch, walked along readings_batch (batch_id, control,
-// taken_at, id): oldest first within each control, corrected readings included.
-const READINGS_SQL = `SELECT ${STAMP_COLUMNS}, x.control, x.taken_at, x.value, x.entered_as, x.source
-  FROM readings x LEFT JOIN people rp ON rp.id = x.recorded_by
-  WHERE x.batch_id = ? ORDER BY x.control, x.taken_at, x.id`;
+// taken_at, id): oldest first within each control, corrected readings included. The recorders'
+// names come after, once per person: joining people on each of a day's logger points doubled
+// the time of the read.
+const READINGS_SQL = `SELECT x.id, x.recorded_by, x.recorded_at, x.corrects_id, x.reason, x.control,
+  x.taken_at, x.value, x.entered_as, x.source
+  FROM readings x WHERE x.batch_id = ? ORDER BY x.control, x.taken_at, x.id`;
 
 const DEVIATIONS_SQL = `SELECT d.id, d.control, d.kind, d.what, d.opened_at, d.opened_by,
   op.display_name AS opener_name, d.dedupe_key
@@ -77,8 +81,9 @@ const ACTIONS_SQL = `SELECT ${STAMP_COLUMNS}, x.deviation_id, x.cause, x.restore
   FROM deviations d JOIN corrective_actions x ON x.deviation_id = d.id
   LEFT JOIN people rp ON rp.id = x.recorded_by WHERE d.batch_id = ? ORDER BY x.id`;
 
-const WEIGHINGS_SQL = `SELECT ${STAMP_COLUMNS}, x.kind, x.name, x.planned_grams, x.grams, x.weighed_at
-  FROM weighings x LEFT JOIN people rp ON rp.id = x.recorded_by WHERE x.batch_id = ? ORDER BY x.id`;
+/** One deviation (of a batch or a piece of equipment) by id, and its actions. */
+const DEVIATION_SQL = DEVIATIONS_SQL.replace('WHERE d.batch_id = ?', 'WHERE d.id = ?');
+const DEVIATION_ACTIONS_SQL = ACTIONS_SQL.replace('WHERE d.batch_id = ?', 'WHERE d.id = ?');
 
 const VERIFICATION_SQL = `SELECT ${STAMP_COLUMNS}, x.note
   FROM verifications x LEFT JOIN people rp ON rp.id = x.recorded_by
@@ -154,9 +159,29 @@ export class ProcessRepository {
 
   /** Every reading of a batch, corrected ones included (marked correctedBy). */
   async readings(batchId: number, t?: Transaction): Promise<Reading[]> {
-    const rows = await this.select<ReadingRow>(READINGS_SQL, [batchId], t);
+    const rows = await this.select<Omit<ReadingRow, 'recorder_name'>>(READINGS_SQL, [batchId], t);
+    const ids = [
+      ...new Set(rows.flatMap((row) => (row.recorded_by === null ? [] : [row.recorded_by]))),
+    ];
+    const names = new Map(
+      ids.length === 0
+        ? []
+        : (
+            await this.select<{ id: number; display_name: string }>(
+              `SELECT id, display_name FROM people WHERE id IN (${ids.map(() => '?').join(', ')})`,
+              ids,
+              t,
+            )
+          ).map((person) => [person.id, person.display_name]),
+    );
     const correctedBy = correctedByOf(rows);
-    return rows.map((row) => toReading(row, correctedBy));
+    return rows.map((row) =>
+      toReading(
+        row,
+        row.recorded_by === null ? null : (names.get(row.recorded_by) ?? null),
+        correctedBy,
+      ),
+    );
   }
 
   /** Every deviation of a batch, oldest first, with its actions and dedupe key. */
@@ -172,6 +197,27 @@ export class ProcessRepository {
       ),
       key: row.dedupe_key,
     }));
+  }
+
+  /** One deviation by id, of a batch or of a piece of equipment, with its actions. */
+  async deviation(id: number, t?: Transaction): Promise<KeyedDeviation | null> {
+    const [row] = await this.select<DeviationRow>(DEVIATION_SQL, [id], t);
+    if (!row) return null;
+    const actionRows = await this.select<ActionRow>(DEVIATION_ACTIONS_SQL, [id], t);
+    const correctedBy = correctedByOf(actionRows);
+    return {
+      ...toDeviation(
+        row,
+        actionRows.map((a) => toAction(a, correctedBy)),
+      ),
+      key: row.dedupe_key,
+    };
+  }
+
+  /** The verification that released a batch, if any. */
+  async verification(batchId: number, t?: Transaction): Promise<Verification | null> {
+    const [row] = await this.select<VerificationRow>(VERIFICATION_SQL, [batchId], t);
+    return row ? toVerification(row) : null;
   }
 
   /** The batches being made (in progress, curing, proofing), oldest first. */
@@ -204,11 +250,11 @@ export class ProcessRepository {
   async record(lot: string, now: string, t?: Transaction): Promise<ProcessRecord> {
     const row = await this.batchRow(lot, t);
     const batch = toBatch(row);
-    const [{ controls }, deviations, weighingRows, [verification]] = await Promise.all([
+    const [{ controls }, deviations, weighingRows, verification] = await Promise.all([
       this.judged(batch, now, t),
       this.deviations(batch.id, t),
       this.select<WeighingRow>(WEIGHINGS_SQL, [batch.id], t),
-      this.select<VerificationRow>(VERIFICATION_SQL, [batch.id], t),
+      this.verification(batch.id, t),
     ]);
     const weighingCorrections = correctedByOf(weighingRows);
     const weighings = weighingRows.map((w) => toWeighing(w, weighingCorrections));
@@ -221,7 +267,7 @@ export class ProcessRepository {
       deviations: deviations.map(({ key: _key, ...deviation }) => deviation),
       onHold: deviations.some((d) => d.action === null),
       nonconforming: deviations.length > 0,
-      verification: verification ? toVerification(verification) : null,
+      verification,
       plannedBy: personRef(row.planned_by, row.planner_name),
       startedBy: personRef(row.started_by, row.starter_name),
       startedAt: row.started_at,

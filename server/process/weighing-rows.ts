@@ -3,45 +3,12 @@ import { Decimal } from '../../shared/decimal.ts';
 import type { StageName, Weighing } from '../../shared/api/process-record.ts';
 import type { StandingWeights } from '../../shared/process/weights-as-weighed.ts';
 import type { Database } from '../db/database.ts';
+import { STAMP_COLUMNS, correctedByOf, toWeighing, type WeighingRow } from './process-rows.ts';
 
-interface WeighingRow {
-  id: number;
-  kind: 'line' | 'stage';
-  name: string;
-  planned_grams: string | null;
-  grams: string;
-  weighed_at: string;
-  recorded_by: number | null;
-  by_name: string | null;
-  recorded_at: string;
-  corrects_id: number | null;
-  reason: string | null;
-  corrected_by: number | null;
-}
-
-function toWeighing(row: WeighingRow): Weighing {
-  return {
-    id: row.id,
-    kind: row.kind,
-    name: row.name,
-    plannedGrams: row.planned_grams,
-    grams: row.grams,
-    weighedAt: row.weighed_at,
-    by:
-      row.recorded_by === null
-        ? null
-        : { id: row.recorded_by, displayName: row.by_name ?? `person ${row.recorded_by}` },
-    recordedAt: row.recorded_at,
-    corrects: row.corrects_id,
-    reason: row.reason,
-    correctedBy: row.corrected_by,
-  };
-}
-
-const SELECT = `SELECT w.id, w.kind, w.name, w.planned_grams, w.grams, w.weighed_at, w.recorded_by,
-    p.display_name AS by_name, w.recorded_at, w.corrects_id, w.reason,
-    (SELECT MIN(c.id) FROM weighings c WHERE c.corrects_id = w.id) AS corrected_by
-  FROM weighings w LEFT JOIN people p ON p.id = w.recorded_by`;
+/** Every weighing of a batch with its recorder, oldest first (the table aliased `x`). */
+export const WEIGHINGS_SQL = `SELECT ${STAMP_COLUMNS}, x.kind, x.name, x.planned_grams, x.grams,
+  x.weighed_at FROM weighings x LEFT JOIN people rp ON rp.id = x.recorded_by
+  WHERE x.batch_id = ? ORDER BY x.id`;
 
 /** Every weighing of a batch, oldest first, corrected ones included (marked correctedBy). */
 export async function batchWeighings(
@@ -49,15 +16,13 @@ export async function batchWeighings(
   batchId: number,
   transaction?: Transaction,
 ): Promise<Weighing[]> {
-  const rows = await db.sequelize.query<WeighingRow>(
-    `${SELECT} WHERE w.batch_id = ? ORDER BY w.id`,
-    {
-      replacements: [batchId],
-      type: QueryTypes.SELECT,
-      ...(transaction ? { transaction } : {}),
-    },
-  );
-  return rows.map(toWeighing);
+  const rows = await db.sequelize.query<WeighingRow>(WEIGHINGS_SQL, {
+    replacements: [batchId],
+    type: QueryTypes.SELECT,
+    ...(transaction ? { transaction } : {}),
+  });
+  const correctedBy = correctedByOf(rows);
+  return rows.map((row) => toWeighing(row, correctedBy));
 }
 
 /** One weighing with the batch it belongs to; undefined when there is none. */
@@ -66,11 +31,17 @@ export async function weighingById(
   id: number,
   transaction: Transaction,
 ): Promise<(Weighing & { batchId: number }) | undefined> {
-  const [row] = await db.sequelize.query<WeighingRow & { batch_id: number }>(
-    `${SELECT.replace('SELECT w.id,', 'SELECT w.batch_id, w.id,')} WHERE w.id = ?`,
+  const [row] = await db.sequelize.query<
+    WeighingRow & { batch_id: number; corrected_by: number | null }
+  >(
+    `SELECT ${STAMP_COLUMNS}, x.kind, x.name, x.planned_grams, x.grams, x.weighed_at, x.batch_id,
+       (SELECT MIN(c.id) FROM weighings c WHERE c.corrects_id = x.id) AS corrected_by
+     FROM weighings x LEFT JOIN people rp ON rp.id = x.recorded_by WHERE x.id = ?`,
     { replacements: [id], type: QueryTypes.SELECT, transaction },
   );
-  return row ? { ...toWeighing(row), batchId: row.batch_id } : undefined;
+  if (!row) return undefined;
+  const correctedBy = new Map(row.corrected_by === null ? [] : [[row.id, row.corrected_by]]);
+  return { ...toWeighing(row, correctedBy), batchId: row.batch_id };
 }
 
 /** The weighings that stand: none has corrected them. */

@@ -19,7 +19,7 @@ import type { FormulaHistory } from '../formulas/formula-history.ts';
 import { AppError, conflict, notFound } from '../http/app-error.ts';
 import { recordedBatch, type RecordedBatch } from './recorded-batch.ts';
 import { batchWeighings, standingWeighings, weighingById } from './weighing-rows.ts';
-import { judgeAndOpen } from './weights-verdict.ts';
+import { judgeWeighings } from './weights-verdict.ts';
 
 /** What weighing works with. */
 export interface WeighingDeps {
@@ -180,7 +180,7 @@ function stageTime(at: string | undefined, now: string): string {
 
 /**
  * Records lines and a stage weight as weighed, in one write with its audit entry, then judges the
- * batch's standing weights (see judgeAndOpen): a line or stage already weighed is corrected, not
+ * batch's standing weights (see judgeWeighings): a line or stage already weighed is corrected, not
  * weighed again.
  * @throws AppError 404 no such lot, 409 'not-started'/'discarded'/'already-weighed', 422
  *   'bad-weighing' naming the field (a name not on the sheet, a stage the formula has not)
@@ -281,7 +281,7 @@ async function answer(
   detail: object,
 ): Promise<WeighingAnswer> {
   const all = await batchWeighings(deps.db, batch.id, t);
-  const outcome = await judgeAndOpen(deps, t, batch, formula, all, by);
+  const outcome = await judgeWeighings(deps, t, batch, formula, all, by);
   const nitrite = outcome.verdict.actualNitritePpm?.toString() ?? null;
   if (by.audit !== false)
     await deps.audit.append(

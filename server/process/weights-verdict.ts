@@ -5,6 +5,8 @@ import type { Deviation, Weighing } from '../../shared/api/process-record.ts';
 import { checkProblem } from '../../shared/presentation/check-figures.ts';
 import { formatPpm } from '../../shared/presentation/format-figure.ts';
 import type { PumpReached } from '../../shared/process/weighing-stages.ts';
+import type { ResolvedControl } from '../../shared/process/control-types.ts';
+import { resolveControl } from '../../shared/process/resolve-control.ts';
 import { judgeWeights, type WeightsVerdict } from '../../shared/process/weights-as-weighed.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
@@ -40,6 +42,21 @@ function judged(
   }
 }
 
+/**
+ * The formula's controls whose rule relies on a least ingoing nitrite (the cured cooling option
+ * of FSIS Appendix B) that the weights as weighed fall short of: the formula's own figure is
+ * checked by `larder check`, but only the weights say what this batch really took.
+ */
+function coolingNeedingNitrite(formula: Formula, verdict: WeightsVerdict): ResolvedControl[] {
+  const ppm = verdict.actualNitritePpm;
+  if (!ppm) return [];
+  return (formula.controls ?? [])
+    .map(resolveControl)
+    .filter(
+      (control) => control.minNitritePpm !== undefined && ppm.lessThan(control.minNitritePpm),
+    );
+}
+
 /** A percent as a cook reads it beside its target: one decimal, more when one would not tell. */
 function pumpFigure(pump: PumpReached): string {
   const shown = pump.percent.toDecimalPlaces(1);
@@ -58,7 +75,7 @@ export function pumpWords(pump: PumpReached): string {
  * and figure) and for a pumped weight over its target ('pump', once per pumped weighing). Never
  * refuses: what was weighed is recorded, and a deviation holds the batch.
  */
-export async function judgeAndOpen(
+export async function judgeWeighings(
   deps: { db: Database; audit: AuditRepository },
   t: Transaction,
   batch: RecordedBatch,
@@ -99,6 +116,15 @@ export async function judgeAndOpen(
       kind: 'nitrite',
       what: `On the weights as weighed, ${checkProblem(check)}.`,
       key: `batch ${batch.id}/nitrite/${check.id} ${check.value.toString()}`,
+    });
+  for (const control of coolingNeedingNitrite(formula, verdict))
+    await open({
+      kind: 'nitrite',
+      what:
+        `${control.title} relies on at least ${control.minNitritePpm} ppm ingoing sodium nitrite; ` +
+        `the weights as weighed give ${formatPpm(verdict.actualNitritePpm!)}. Cool this batch by a ` +
+        `rule made for uncured product, or hold it for review.`,
+      key: `batch ${batch.id}/min-nitrite/${control.id} ${verdict.actualNitritePpm!.toString()}`,
     });
   const pumped = standingWeighings(weighings).find(
     (w) => w.kind === 'stage' && w.name === 'pumped',

@@ -1,4 +1,6 @@
 import assert from 'node:assert/strict';
+import { readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
 import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import { Decimal } from '../../shared/decimal.ts';
@@ -134,6 +136,26 @@ describe('starting a planned batch on what is really there', () => {
     assert.deepEqual(response.json.warnings, [
       'Started on 2024-03-04, 2 days later than planned (2024-03-02). It is now ready on 2024-03-12.',
     ]);
+  });
+
+  it('should start on the revision it was planned with, telling the cook when the formula has changed since', async (t) => {
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
+    const lot = await planned(server, 'quillmoor-belly', { meat: '4.26 kg', thickness: '4 cm' });
+    const plannedRevision = (await server.as('tobin').get(`/api/batches/${lot}`)).json.batch.formula
+      .revision;
+    // The curing salt raised from 0.25 % to 0.3 % in the file after the plan.
+    const file = path.join(server.formulasDir, 'quillmoor-belly.yaml');
+    writeFileSync(file, readFileSync(file, 'utf8').replace('pct: 0.25,', 'pct: 0.3,'));
+    server.context.formulas.changed();
+    const response = await server.as('tobin').post(`/api/batches/${lot}/start`, {
+      batch: { meat: '4.26 kg', thickness: '4 cm' },
+    });
+    assert.equal(response.status, 200, response.text);
+    assert.equal(response.json.batch.formula.revision, plannedRevision);
+    // source: 9 CFR 424.21(c), ¼ oz per 100 lb: 0.25 % of a 6.25 % curing salt is 156.25 ppm
+    // (the planned revision), where 0.3 % would be 187.5 ppm
+    assert.equal(response.json.batch.nitritePpm, '156.25');
+    assert.match(response.json.warnings[0], /formula has changed since this batch was planned/);
   });
 
   it('should start only a planned batch', async (t) => {

@@ -80,6 +80,31 @@ describe('weights as weighed', () => {
     assert.equal(record.json.onHold, true);
   });
 
+  it("should open a deviation when an under-pumped belly falls below the cured cooling option's nitrite", async (t) => {
+    const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
+    const lot = await recorded(server, 'maple-pump-belly', { meat: '5 kg', start: '2024-02-29' });
+    await server
+      .as('tobin')
+      .post(`/api/batches/${lot}/weighings`, { stage: { name: 'green', weight: '5 kg' } });
+    const pumped = await server
+      .as('tobin')
+      .post(`/api/batches/${lot}/weighings`, { stage: { name: 'pumped', weight: '5.4 kg' } });
+    assert.equal(pumped.status, 201, pumped.text);
+    // 120 ppm at the formula's 10 % pump, × 8/10 at an 8 % pump = 96 ppm (FSIS Directive 7620.3
+    // ch. 3, pumped formula), under the 100 ppm ingoing sodium nitrite the cured-product cooling
+    // option of FSIS Appendix B relies on (1999 Appendix B, cured products)
+    assert.equal(pumped.json.actualNitritePpm, '96');
+    const words = pumped.json.deviations.map((d: { what: string }) => d.what) as string[];
+    // The erythorbate falls short with it: 550 ppm at 10 % × 8/10 = 440 ppm, under the 550 ppm
+    // pumped bacon requires (9 CFR 424.22(b))
+    assert.equal(words.length, 2);
+    assert.match(words[0], /erythorbate 440\.0 ppm is under the 550 ppm/);
+    assert.match(
+      words[1],
+      /at least 100 ppm ingoing sodium nitrite; the weights as weighed give 96\.0 ppm/,
+    );
+  });
+
   it('should record a pumped weight over its target as a pump deviation, keeping the batch', async (t) => {
     const server = await startTestServer(t, {}, { now: SERVER_CLOCK });
     const lot = await recorded(server, 'maple-pump-belly', { meat: '5 kg', start: '2024-02-29' });
@@ -163,7 +188,11 @@ describe('weights as weighed', () => {
       id: number;
       grams: string;
       corrects_id: number | null;
-    }>('SELECT id, grams, corrects_id FROM weighings ORDER BY id', { type: QueryTypes.SELECT });
+    }>(
+      `SELECT w.id, w.grams, w.corrects_id FROM weighings w JOIN batches b ON b.id = w.batch_id
+       WHERE b.lot_code = ? ORDER BY w.id`,
+      { replacements: [lot], type: QueryTypes.SELECT },
+    );
     assert.deepEqual(
       stored.map((w) => [w.grams, w.corrects_id]),
       [
@@ -213,8 +242,8 @@ describe('weights as weighed', () => {
     assert.equal(weight.status, 422, weight.text);
     assert.equal(weight.json.error.details[0].field, 'stage.weight');
     const count = await server.context.db.sequelize.query<{ n: number }>(
-      'SELECT COUNT(*) AS n FROM weighings',
-      { type: QueryTypes.SELECT },
+      'SELECT COUNT(*) AS n FROM weighings w JOIN batches b ON b.id = w.batch_id WHERE b.lot_code = ?',
+      { replacements: [lot], type: QueryTypes.SELECT },
     );
     assert.equal(count[0].n, 0);
   });

@@ -8,6 +8,7 @@ import {
   type Sender,
   type Snapshot,
 } from './api-calls.ts';
+import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
 import { WEIGHTS_ROUTES } from './weights-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
@@ -191,6 +192,12 @@ export const ROUTES: readonly RouteCase[] = [
     path: `/api/batches/${await cooksLot(fx)}/sign-off`,
     body: { note: 'Checked the sheet.' },
   })),
+  // Process records (HACCP): readings, corrections, logger files, corrective actions, release.
+  // Before the password routes: a password changed ends the setup's session, which these use.
+  ...PROCESS_ROUTES,
+  // Weights as weighed, starting a planned batch, refused calculations.
+  ...WEIGHTS_ROUTES,
+  ...EQUIPMENT_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',
@@ -215,10 +222,6 @@ export const ROUTES: readonly RouteCase[] = [
     body: { current: ownPassword(role), password: ownPassword(role) },
   })),
   route('GET', '/api/audit', ADMIN, '/api/audit?limit=5'),
-  // Process records (HACCP): readings, corrections, logger files, corrective actions, release.
-  ...PROCESS_ROUTES,
-  // Weights as weighed, starting a planned batch, refused calculations.
-  ...WEIGHTS_ROUTES,
 ];
 
 /** What a cell expects, in words for its test name. */
