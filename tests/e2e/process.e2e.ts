@@ -239,7 +239,8 @@ describe('the process record in the console', () => {
     const meat = dialog.getByTestId('start-field-meat');
     assert.equal(await meat.inputValue(), '4.26', 'the planned weight is filled in, beside its kg');
     await meat.fill('4.4');
-    await cook.getByRole('heading', { name: 'The sheet on these figures' }).waitFor();
+    // The sheet is calculated again on what was typed: 4.4 kg is 4400 g of green meat.
+    await dialog.getByText('4400 g', { exact: true }).waitFor();
     for (const width of [820, 390]) {
       await cook.setViewportSize({ width, height: width === 390 ? 844 : 1180 });
       await overlapFree(dialog);
