@@ -20,6 +20,7 @@ import { invitationsRouter } from './invitations/invitations-router.ts';
 import { outboxRouter } from './mail/outbox-router.ts';
 import { peopleRouter } from './people/people-router.ts';
 import { remindersRouter } from './reminders/reminders-router.ts';
+import { reportsRouter } from './reports/reports-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
 const JSON_LIMIT = '512kb';
@@ -64,6 +65,7 @@ export function createApp(context: AppContext): Express {
   api.use('/people/me/reminders', remindersRouter(context));
   api.use('/people', peopleRouter(context));
   api.use('/audit', auditRouter(context));
+  api.use('/reports', reportsRouter(context));
   api.use('/outbox', outboxRouter(context));
   api.use(apiNotFound);
 

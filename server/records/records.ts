@@ -24,6 +24,7 @@ import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
 import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-password.ts';
 import { recordPlan } from '../plans/record-plan.ts';
+import type { ProducedReport, ReportFormat, ReportRequest } from '../reports/produce-report.ts';
 import { RecordsError, recordsErrorOf } from './records-error.ts';
 
 export { RecordsError, type RecordsFailure } from './records-error.ts';
@@ -39,6 +40,7 @@ export type {
   Role,
 };
 export type { SheetRecord, SheetSource };
+export type { ProducedReport, ReportFormat, ReportRequest };
 
 /** The fewest characters a password may have. */
 export { MIN_PASSWORD_LENGTH };
@@ -132,6 +134,22 @@ export class Records {
   /** Sets another person's password, with its audit entry. */
   resetPassword(key: PersonKey, password: string, by: AuditedBy): Promise<void> {
     return this.guard(() => resetPassword(key, password, by, this.deps));
+  }
+
+  // Reports (process-reports).
+
+  /**
+   * The HACCP records report of a period (default the last 30 days) as PDF bytes, CSV chunks or
+   * JSON, audited as produced; admins and reviewers only. The report's code loads when first asked for.
+   */
+  async produceReport(format: ReportFormat, request: ReportRequest): Promise<ProducedReport> {
+    const { produceReport } = await import('../reports/produce-report.ts');
+    return this.guard(() => produceReport(this.deps, format, request));
+  }
+
+  /** The kitchen's name on reports: LARDER_KITCHEN, as the server's messages name it. */
+  static kitchenName(): string {
+    return loadConfig().kitchenName;
   }
 
   /**
