@@ -144,14 +144,19 @@ export interface ControlState {
   readonly status: ControlStatus;
   /** One line in a cook's words: "Stage 1: must reach 21 °C by 14:32". */
   readonly summary: string;
-  /** A staged cool in progress: the stage, its target and deadline. */
+  /** A staged cool in progress (also after a miss, while it goes on): the stage, its target and deadline. */
   readonly stage: {
+    /** 1 for the first stage, as in the miss key "stage-1". */
     readonly index: number;
     readonly toC: string;
     /** ISO time. */
     readonly deadline: string;
   } | null;
-  /** ISO time the next reading is due; null when none is (met, missed, or a single check done). */
+  /**
+   * ISO time the next reading is due (last reading + every); null when none is: met, a single
+   * check, a step that is over, a finished cool. Holding and an unfinished cool stay due after a
+   * miss, since monitoring goes on.
+   */
   readonly nextDue: string | null;
   /** Every miss, oldest first. */
   readonly misses: readonly ControlMiss[];

@@ -1,8 +1,19 @@
 /**
- * Judging a control's readings against its critical limit at a moment. CONTRACT STUB: the core
- * engineer replaces the body.
+ * Judging a control's readings against its critical limit at a moment: each reading on its own
+ * (holding, receiving, chamber), a hold at temperature (cooking), or a staged cool.
  */
-import type { ControlState, ReadingPoint, ResolvedControl } from './control-types.ts';
+import { Decimal } from '../decimal.ts';
+import type {
+  ControlLimit,
+  ControlMiss,
+  ControlState,
+  ReadingPoint,
+  ResolvedControl,
+} from './control-types.ts';
+import { clockWords, valueWords } from './control-words.ts';
+import { judgeCooling } from './judge-cooling.ts';
+import { judgeHold } from './judge-hold.ts';
+import { addSeconds, normalIso } from './judge-time.ts';
 
 /** How times are put in words ("by 14:32"): the kitchen's time zone. */
 export interface Clock {
@@ -12,17 +23,88 @@ export interface Clock {
   readonly timeZone: string;
 }
 
+/** What the batch says about the control's step. */
+export interface EvaluateOptions {
+  /**
+   * The batch has moved past this control's step (a later control has readings, or the batch is
+   * done): a cook not yet held long enough is then missed, not in progress.
+   */
+  readonly stepOver?: boolean;
+}
+
+type EachReadingLimit = Extract<ControlLimit, { type: 'at-most' | 'at-least' | 'between' }>;
+
+function outside(limit: EachReadingLimit, value: Decimal): boolean {
+  if (limit.type === 'at-most') return value.greaterThan(limit.max);
+  if (limit.type === 'at-least') return value.lessThan(limit.min);
+  return value.lessThan(limit.min) || value.greaterThan(limit.max);
+}
+
+function limitWords(limit: EachReadingLimit, unit: string): string {
+  if (limit.type === 'at-most') return `at most ${valueWords(limit.max, unit)}`;
+  if (limit.type === 'at-least') return `at least ${valueWords(limit.min, unit)}`;
+  return `between ${valueWords(limit.min, unit)} and ${valueWords(limit.max, unit)}`;
+}
+
+/** Holding, receiving, a chamber: every reading judged on its own. */
+function judgeEachReading(
+  control: ResolvedControl,
+  limit: EachReadingLimit,
+  readings: readonly ReadingPoint[],
+  clock: Clock,
+  stepOver: boolean,
+): ControlState {
+  const must = limitWords(limit, control.unit);
+  const when = (iso: string): string => clockWords(iso, clock.timeZone, clock.now);
+  const misses: ControlMiss[] = readings
+    .filter((reading) => outside(limit, new Decimal(reading.value)))
+    .map((reading) => ({
+      kind: 'reading',
+      at: reading.at,
+      key: normalIso(reading.at),
+      what: `${valueWords(reading.value, control.unit)} at ${when(reading.at)}; must be ${must}`,
+    }));
+  const last = readings.at(-1);
+  if (!last) {
+    return {
+      status: 'waiting',
+      summary: `No reading yet; must be ${must}`,
+      stage: null,
+      nextDue: null,
+      misses,
+    };
+  }
+  const nextDue = control.everyS !== null && !stepOver ? addSeconds(last.at, control.everyS) : null;
+  const due = nextDue === null ? '' : `; next reading by ${when(nextDue)}`;
+  if (misses.length > 0) {
+    const latest = misses[misses.length - 1];
+    const count = misses.length === 1 ? '' : ` (${misses.length} readings out of limit)`;
+    return {
+      status: 'missed',
+      summary: `Out of limit: ${latest.what}${count}${due}`,
+      stage: null,
+      nextDue,
+      misses,
+    };
+  }
+  const status = control.everyS === null || stepOver ? 'met' : 'in-progress';
+  const summary = `${valueWords(last.value, control.unit)} at ${when(last.at)}, within its limit (${must})${due}`;
+  return { status, summary, stage: null, nextDue, misses };
+}
+
 /**
  * Where a control stands given its standing readings (oldest first, corrections applied), at
- * `clock.now`. Pure: the same readings and clock always give the same state.
+ * `clock.now`. Pure: the same readings, clock and options always give the same state.
  */
 export function evaluateControl(
   control: ResolvedControl,
   readings: readonly ReadingPoint[],
   clock: Clock,
+  options: EvaluateOptions = {},
 ): ControlState {
-  void control;
-  void readings;
-  void clock;
-  throw new Error('evaluateControl is not built yet');
+  const stepOver = options.stepOver ?? false;
+  const limit = control.limit;
+  if (limit.type === 'cooling') return judgeCooling(control, limit, readings, clock);
+  if (limit.type === 'hold') return judgeHold(control, limit, readings, clock, stepOver);
+  return judgeEachReading(control, limit, readings, clock, stepOver);
 }
