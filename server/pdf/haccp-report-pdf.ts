@@ -7,8 +7,8 @@ import type {
   ReportRefusal,
 } from '../../shared/api/haccp-report.ts';
 import type { Deviation, Reading } from '../../shared/api/process-record.ts';
-import { recordedValue } from '../../shared/presentation/control-words.ts';
-import type { CanonicalUnit } from '../../shared/process/control-types.ts';
+import { valueWords as inWords } from '../../shared/process/control-words.ts';
+import { shortRevision } from './batch-sheet-pdf.ts';
 import { finishSheet, openSheet } from './sheet-document.ts';
 import { INK, SMALL, type Column, type Row, type SheetLayout } from './sheet-layout.ts';
 import { heading, subheading } from './sheet-sections.ts';
@@ -32,7 +32,7 @@ const periodWords = (head: ReportHead): string =>
 
 /** A value in its control's unit; as kept when the control's unit is not known. */
 function valueWords(value: string, unit: string): string {
-  return unit ? recordedValue(value, unit as CanonicalUnit) : value;
+  return unit ? inWords(value, unit) : value;
 }
 
 /** Who and when: "Tobin Ashgrove, 2 Dec 2026, 14:32". */
@@ -162,7 +162,7 @@ function batchBlock(layout: SheetLayout, batch: ReportBatch): void {
       : '',
   ].filter(Boolean);
   layout.paragraph(
-    `${batch.formula.id}, revision ${batch.formula.revision} · starts ${dayInWords(batch.startedOn)} · ${batch.status}${people.length ? ` · ${people.join(' · ')}` : ''}`,
+    `${batch.formula.id}, revision ${shortRevision(batch.formula.revision)} · starts ${dayInWords(batch.startedOn)} · ${batch.status}${people.length ? ` · ${people.join(' · ')}` : ''}`,
     { size: SMALL, color: INK.muted },
   );
   if (batch.controls.length) controlsTable(layout, batch.controls);
@@ -204,7 +204,7 @@ function refusalsBlock(layout: SheetLayout, refusals: readonly ReportRefusal[]):
     refusals.map((r) => ({
       cells: [
         byWords(r.by, r.at),
-        `${r.formula}${r.revision ? `, revision ${r.revision}` : ''}${r.lotCode ? ` (lot ${r.lotCode})` : ''}`,
+        `${r.formula}${r.revision ? `, revision ${shortRevision(r.revision)}` : ''}${r.lotCode ? ` (lot ${r.lotCode})` : ''}`,
         muted(r.inputs),
         r.failed,
       ],

@@ -10,7 +10,7 @@ import type {
 import type { Reading } from '../../shared/api/process-record.ts';
 import type { ControlState, ResolvedControl } from '../../shared/process/control-types.ts';
 import { evaluateControl, type Clock } from '../../shared/process/evaluate-control.ts';
-import { limitWords } from '../../shared/presentation/control-words.ts';
+import { limitWords } from '../../shared/process/limit-words.ts';
 import type { BatchControls } from './batch-controls.ts';
 import { readingsShown } from './control-summary.ts';
 import {
@@ -73,9 +73,7 @@ function judge(
     .map((r) => ({ at: r.at, value: r.value }))
     .sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
   try {
-    return (evaluateControl as (...args: unknown[]) => ControlState)(control, standing, clock, {
-      stepOver,
-    });
+    return evaluateControl(control, standing, clock, { stepOver });
   } catch {
     return null;
   }
