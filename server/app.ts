@@ -11,6 +11,13 @@ import { SignIns } from './auth/sign-ins.ts';
 import { batchesCsv, batchesRouter } from './batches/batches-router.ts';
 import { calcRouter } from './calc/calc-router.ts';
 import { plansRouter } from './plans/plans-router.ts';
+import { loggerText } from './process/logger-body.ts';
+import {
+  batchProcessRouter,
+  deviationsRouter,
+  processNowRouter,
+  readingsRouter,
+} from './process/process-router.ts';
 import { formulasRouter } from './formulas/formulas-router.ts';
 import { consoleRouter, cspNonce } from './http/console-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
@@ -42,6 +49,8 @@ export function createApp(context: AppContext): Express {
   const api = express.Router();
   // First of all: a change another site's page sent is refused before anything reads it.
   api.use(refuseCrossSiteWrites(context.config.publicUrl));
+  // A data logger's CSV is read as text on its one route, before the JSON parser.
+  api.post('/batches/:lot/readings/upload', loggerText);
   api.use(express.json({ limit: JSON_LIMIT }), requireJsonBody);
   api.use(sessionMiddleware(context.db, context.config.sessionSecret, httpsOnly));
   // No passport.initialize(): passport.authenticate() sets up the request itself, and Basic is
@@ -59,7 +68,10 @@ export function createApp(context: AppContext): Express {
   api.use('/calc', calcRouter(context));
   api.use('/plans', plansRouter(context));
   api.use('/formulas', formulasRouter(context));
-  api.use('/batches', batchesRouter(context));
+  api.use('/batches', batchProcessRouter(context), batchesRouter(context));
+  api.use('/readings', readingsRouter(context));
+  api.use('/deviations', deviationsRouter(context));
+  api.use('/process', processNowRouter(context));
   // A mount at /batches does not match /batches.csv, so the export is a route of its own.
   api.get('/batches.csv', batchesCsv(context));
   api.use('/people/me/reminders', remindersRouter(context));

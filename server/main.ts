@@ -5,6 +5,7 @@ import { DEMO_PEOPLE } from './demo/demo-people.ts';
 import { ensureDemoFormulas } from './demo/demo-formulas.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
+import { DeadlineScan } from './process/deadline-scan.ts';
 import { ReminderScheduler } from './reminders/reminder-scheduler.ts';
 
 /* eslint-disable no-console -- the server talks to whoever started it */
@@ -25,6 +26,8 @@ async function main(): Promise<void> {
   if (config.mode === 'demo') await seedDemo(context);
   const server = createApp(context).listen(config.port, config.host);
   const reminders = new ReminderScheduler(context);
+  // Cooling deadlines that pass with no reading open their deviations once a minute.
+  const deadlines = new DeadlineScan(await context.records.processRecords(), context);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     console.log(
@@ -36,6 +39,7 @@ async function main(): Promise<void> {
       `Mail: ${context.mail.mailer.description}  ·  links to ${context.mail.links.base()}  ·  reminders every ${config.reminderMinutes} min`,
     );
     reminders.start();
+    deadlines.start();
     if (config.mode === 'demo') {
       console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
       for (const person of DEMO_PEOPLE)
@@ -55,8 +59,7 @@ async function main(): Promise<void> {
   const stop = (): void => {
     server.close(
       () =>
-        void reminders
-          .stop()
+        void Promise.all([reminders.stop(), deadlines.stop()])
           .then(() => context.formulas.close())
           .then(() => context.mail.close())
           .then(() => context.db.close())

@@ -54,7 +54,8 @@ export class BatchRepository {
   constructor(
     private readonly db: Database,
     audit: AuditRepository,
-    rules: WorkflowRules,
+    /** The kitchen's workflow rules, which release is held to as well. */
+    readonly rules: WorkflowRules,
   ) {
     this.writes = new BatchWrites(db, audit, rules);
   }
@@ -119,17 +120,20 @@ export class BatchRepository {
   /**
    * Moves a batch to another status along the allowed moves and under the workflow rules, with
    * an event and an audit entry.
+   * `alongside` runs in the same write after the move (the process record judged as finished).
    * @throws AppError 404 no such lot, 409 'bad-transition', 400 discarding without a reason;
-   *   the rules' 403 'signed-off', 400 'reason-needed', 409 'not-cured'
+   *   the rules' 403 'signed-off', 400 'reason-needed', 409 'not-cured', 409 'on-hold'
    */
   changeStatus(
     lot: string,
     to: BatchStatus,
     reason: string | null,
     options: ChangeOptions,
+    alongside?: (transaction: Transaction) => Promise<void>,
   ): Promise<Batch> {
     return this.write(async (t) => {
       await this.writes.move(t, lot, to, reason, options);
+      await alongside?.(t);
       return this.mustGet(lot, t);
     });
   }

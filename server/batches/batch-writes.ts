@@ -11,6 +11,7 @@ import {
 import { AppError, badRequest, conflict, notFound } from '../http/app-error.ts';
 import type { BatchEvent, BatchStatus } from '../../shared/api/batch-record.ts';
 import { UNSIGNABLE_STATUSES, refusedMove } from '../../shared/workflow/batch-status.ts';
+import { doneRefusal } from '../../shared/workflow/release-rules.ts';
 import type { ChangeOptions, NewBatch } from './batch.ts';
 import { MAX_LOT_SEQUENCE, lotCode, lotPrefix, prefixRange } from './lot-code.ts';
 
@@ -175,7 +176,8 @@ export class BatchWrites {
   /**
    * Moves a batch along the allowed moves, under the workflow rules; discarding needs a reason.
    * @throws AppError 400 discarding without a reason, 404 no such lot, 409 'bad-transition';
-   *   the rules' 403 'signed-off', 400 'reason-needed', 409 'not-cured'
+   *   the rules' 403 'signed-off', 400 'reason-needed', 409 'not-cured'; 409 'on-hold' (done
+   *   while a deviation is open)
    */
   async move(
     t: Transaction,
@@ -203,6 +205,17 @@ export class BatchWrites {
       this.rules,
     );
     if (rule) throw ruleError(rule);
+    // A batch with a missed critical limit not yet corrected is on hold: it cannot be finished.
+    if (to === 'done') {
+      const [open] = await this.select<{ n: number }>(
+        t,
+        `SELECT COUNT(*) AS n FROM deviations d WHERE d.batch_id = ? AND NOT EXISTS
+           (SELECT 1 FROM corrective_actions a WHERE a.deviation_id = d.id)`,
+        [batch.id],
+      );
+      const onHold = doneRefusal(open?.n ?? 0);
+      if (onHold) throw new AppError(onHold.status, onHold.code, onHold.message);
+    }
     await this.run(
       t,
       `UPDATE batches SET status = ?, updated_at = ?,

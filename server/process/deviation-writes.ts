@@ -20,6 +20,8 @@ export interface DeviationToOpen {
    * already opened, by this process or another, is not opened again.
    */
   readonly key: string;
+  /** When it was found, if not `by.at` or now: the deadline scan's own clock. */
+  readonly openedAt?: string;
 }
 
 /**
@@ -34,7 +36,7 @@ export async function openDeviation(
   deviation: DeviationToOpen,
   by: ChangeOptions | null,
 ): Promise<number | null> {
-  const at = by?.at ?? new Date().toISOString();
+  const at = deviation.openedAt ?? by?.at ?? new Date().toISOString();
   const [inserted] = await db.sequelize.query<{ id: number }>(
     `INSERT INTO deviations (batch_id, equipment_id, control, kind, what, opened_at, opened_by, reading_id, dedupe_key)
      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING RETURNING id`,

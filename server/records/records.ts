@@ -26,6 +26,20 @@ import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-p
 import { recordPlan } from '../plans/record-plan.ts';
 import type { ProducedReport, ReportFormat, ReportRequest } from '../reports/produce-report.ts';
 import { RecordsError, recordsErrorOf } from './records-error.ts';
+import type {
+  Deviation,
+  ProcessNow,
+  ProcessRecord,
+  ReadingAnswer,
+  ReadingRequest,
+  ReadingSource,
+  Verification,
+} from '../../shared/api/process-record.ts';
+import type { ActionRequest } from '../process/corrective-actions.ts';
+import type { ProcessDeps } from '../process/judge-and-open.ts';
+import type { UploadAnswer } from '../process/logger-upload.ts';
+import type { ProcessUseCases } from '../process/process-writes.ts';
+import type { CorrectionRequest } from '../process/reading-writes.ts';
 
 export { RecordsError, type RecordsFailure } from './records-error.ts';
 export { failureOfStatus } from '../http/failure-status.ts';
@@ -41,6 +55,7 @@ export type {
 };
 export type { SheetRecord, SheetSource };
 export type { ProducedReport, ReportFormat, ReportRequest };
+export type { ActionRequest, CorrectionRequest, UploadAnswer };
 
 /** The fewest characters a password may have. */
 export { MIN_PASSWORD_LENGTH };
@@ -93,12 +108,91 @@ export class Records {
     reason: string | null,
     by: ChangeOptions,
   ): Promise<Batch> {
-    return this.guard(() => this.deps.batches.changeStatus(lotCodeOf(lot), to, reason, by));
+    return this.guard(async () => {
+      const code = lotCodeOf(lot);
+      // Done is past every step: a control not met by then is missed, in the same write.
+      const p = to === 'done' ? await this.processRecords() : undefined;
+      const finish = p && (await p.use.finishing(p, code, by));
+      return this.deps.batches.changeStatus(code, to, reason, by, finish);
+    });
   }
 
   /** Signs a batch off, with an optional note. */
   signOff(lot: string, note: string | null, by: ChangeOptions): Promise<Batch> {
     return this.guard(() => this.deps.batches.signOff(lotCodeOf(lot), note, by));
+  }
+
+  // Process records (HACCP): the readings at each control, their corrections, logger files,
+  // corrective actions and the verification that releases a batch, judged at `by.at` (the
+  // server's clock) or now. The process stack loads on first use, with the database's.
+  private process?: Promise<ProcessDeps & { readonly use: ProcessUseCases }>;
+
+  /** The process records' repository and use cases, built on first use. */
+  processRecords(): Promise<ProcessDeps & { readonly use: ProcessUseCases }> {
+    this.process ??= import('../process/process-writes.ts').then((m) => ({
+      ...m.processDeps(this.deps),
+      use: m.processWrites,
+    }));
+    return this.process;
+  }
+
+  /** Runs a process use case with the process records, its failures in record keeping's terms. */
+  private withProcess<T>(
+    work: (p: ProcessDeps & { readonly use: ProcessUseCases }) => Promise<T>,
+  ): Promise<T> {
+    return this.guard(async () => work(await this.processRecords()));
+  }
+
+  /** A batch's process record judged at `now` (ISO). */
+  processRecord(lot: string, now: string = new Date().toISOString()): Promise<ProcessRecord> {
+    return this.withProcess((p) => p.process.record(lotCodeOf(lot), now));
+  }
+
+  /** Records a reading at a control; deviations open for new misses in the same write. */
+  addReading(
+    lot: string,
+    request: ReadingRequest,
+    source: ReadingSource,
+    by: ChangeOptions,
+  ): Promise<ReadingAnswer> {
+    return this.withProcess((p) => p.use.addReading(p, lotCodeOf(lot), request, source, by));
+  }
+
+  /** Corrects a reading with a new one and a reason; the old one stays, marked corrected. */
+  correctReading(
+    id: number,
+    request: CorrectionRequest,
+    source: ReadingSource,
+    by: ChangeOptions,
+  ): Promise<ReadingAnswer> {
+    return this.withProcess((p) => p.use.correctReading(p, id, request, source, by));
+  }
+
+  /** Stores a data logger's CSV as readings of one control, all or nothing. */
+  uploadReadings(
+    lot: string,
+    control: string,
+    text: string,
+    by: ChangeOptions,
+  ): Promise<UploadAnswer> {
+    return this.withProcess((p) => p.use.uploadReadings(p, lotCodeOf(lot), control, text, by));
+  }
+
+  /** Records the corrective action that closes a deviation (or replaces its action, with a reason). */
+  recordAction(deviation: number, request: ActionRequest, by: ChangeOptions): Promise<Deviation> {
+    return this.withProcess((p) => p.use.recordAction(p, deviation, request, by));
+  }
+
+  /** Verifies a finished batch's records and releases it. */
+  verify(lot: string, note: string | null, by: ChangeOptions): Promise<Verification> {
+    return this.withProcess((p) =>
+      p.use.verifyBatch(p, lotCodeOf(lot), note, this.deps.batches.rules, by),
+    );
+  }
+
+  /** What needs attention now across the batches being made. */
+  processNow(now: string = new Date().toISOString()): Promise<ProcessNow> {
+    return this.withProcess((p) => p.use.processNow(p.process, now));
   }
 
   /** The active person with this username and password, if there is one. */

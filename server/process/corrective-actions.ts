@@ -1,0 +1,148 @@
+import { QueryTypes } from 'sequelize';
+import type { Deviation, Disposition } from '../../shared/api/process-record.ts';
+import { parseMass } from '../../shared/units/mass.ts';
+import { QuantityError } from '../../shared/units/quantity-error.ts';
+import type { ChangeOptions } from '../batches/batch.ts';
+import { AppError, notFound } from '../http/app-error.ts';
+import type { ProcessDeps } from './judge-and-open.ts';
+
+/** What happened to the product after a deviation. source: 9 CFR 417.3(a)(4) (product disposition) */
+export const DISPOSITIONS: readonly Disposition[] = [
+  'recooked',
+  'rechilled',
+  'reworked',
+  'diverted',
+  'discarded',
+];
+
+/** Dispositions that take product out of the batch: how much must be said. */
+const AMOUNT_NEEDED: readonly Disposition[] = ['diverted', 'discarded'];
+
+/**
+ * A corrective action as POST /api/deviations/:id/action takes it: the four things of
+ * 9 CFR 417.3(a) — the cause found and eliminated, the CCP under control again, measures against
+ * a recurrence, and what happened to the product.
+ */
+export interface ActionRequest {
+  readonly cause: string;
+  readonly restored: string;
+  readonly prevention: string;
+  readonly disposition: Disposition;
+  /** How much product, e.g. "4.2 kg"; needed when diverted or discarded. */
+  readonly grams?: string;
+  /** Why an earlier action is replaced; needed for a second action. */
+  readonly reason?: string;
+}
+
+const FIELD_WORDS = {
+  cause: 'the cause of the deviation',
+  restored: 'how the critical control point is under control again',
+  prevention: 'what keeps it from happening again',
+} as const;
+
+function refused(field: string, message: string): AppError {
+  return new AppError(422, 'bad-action', message, [{ field, message }]);
+}
+
+/** The amount in grams as a decimal string, or null. @throws AppError 422 */
+function gramsOf(request: ActionRequest): string | null {
+  const text = request.grams?.trim();
+  if (!text) {
+    if (AMOUNT_NEEDED.includes(request.disposition))
+      throw refused('grams', `say how much product was ${request.disposition}`);
+    return null;
+  }
+  try {
+    const grams = /^\d+(\.\d+)?$/.test(text) ? parseMass(`${text} g`) : parseMass(text);
+    if (grams.lte(0)) throw refused('grams', 'the amount of product must be more than nothing');
+    return grams.toFixed();
+  } catch (error) {
+    if (error instanceof QuantityError) throw refused('grams', error.message);
+    throw error;
+  }
+}
+
+interface DeviationAt {
+  id: number;
+  lot_code: string | null;
+  standing: number | null;
+}
+
+/**
+ * Records the corrective action that closes a deviation. A second action replaces the standing
+ * one (which stays, as an earlier action) and needs a reason.
+ * @throws AppError 404 no such deviation; 422 bad-action (a blank text, no amount), reason-needed
+ */
+export async function recordAction(
+  deps: ProcessDeps,
+  deviationId: number,
+  request: ActionRequest,
+  by: ChangeOptions,
+): Promise<Deviation> {
+  for (const field of ['cause', 'restored', 'prevention'] as const)
+    if (!request[field]?.trim()) throw refused(field, `say ${FIELD_WORDS[field]}`);
+  if (!DISPOSITIONS.includes(request.disposition))
+    throw refused('disposition', `say what happened to the product: ${DISPOSITIONS.join(', ')}`);
+  const grams = gramsOf(request);
+  const at = by.at ?? new Date().toISOString();
+  return deps.db.write(async (t) => {
+    const [deviation] = await deps.db.sequelize.query<DeviationAt>(
+      `SELECT d.id, b.lot_code,
+         (SELECT a.id FROM corrective_actions a WHERE a.deviation_id = d.id AND NOT EXISTS
+           (SELECT 1 FROM corrective_actions c WHERE c.corrects_id = a.id)) AS standing
+       FROM deviations d LEFT JOIN batches b ON b.id = d.batch_id WHERE d.id = ?`,
+      { replacements: [deviationId], type: QueryTypes.SELECT, transaction: t },
+    );
+    if (!deviation?.lot_code) throw notFound(`no deviation ${deviationId} of a batch`);
+    const reason = request.reason?.trim() || null;
+    if (deviation.standing !== null && !reason)
+      throw new AppError(
+        422,
+        'reason-needed',
+        'this deviation has a corrective action already; say why it is replaced',
+        [{ field: 'reason', message: 'is needed to replace a corrective action' }],
+      );
+    const [row] = await deps.db.sequelize.query<{ id: number }>(
+      `INSERT INTO corrective_actions (deviation_id, cause, restored, prevention, disposition,
+         disposition_grams, recorded_by, recorded_at, corrects_id, reason)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id`,
+      {
+        replacements: [
+          deviationId,
+          request.cause.trim(),
+          request.restored.trim(),
+          request.prevention.trim(),
+          request.disposition,
+          grams,
+          by.actor.id,
+          at,
+          deviation.standing,
+          deviation.standing === null ? null : reason,
+        ],
+        type: QueryTypes.SELECT,
+        transaction: t,
+      },
+    );
+    await deps.audit.append(
+      {
+        actor: by.actor,
+        action: 'corrective-action',
+        subject: deviation.lot_code,
+        detail: {
+          deviation: deviationId,
+          action: row!.id,
+          disposition: request.disposition,
+          ...(grams === null ? {} : { grams }),
+          ...(deviation.standing === null ? {} : { replaces: deviation.standing, reason }),
+        },
+        ...(by.ip === undefined ? {} : { ip: by.ip }),
+      },
+      t,
+    );
+    const batch = await deps.process.batch(deviation.lot_code, t);
+    const { key: _key, ...closed } = (await deps.process.deviations(batch.id, t)).find(
+      (d) => d.id === deviationId,
+    )!;
+    return closed;
+  });
+}

@@ -1,0 +1,108 @@
+import type { AppContext } from '../app-context.ts';
+import { deviationsToOpen, judgeBatch } from './judge-batch.ts';
+import { judgeAndOpen, type ProcessDeps } from './judge-and-open.ts';
+import { kitchenClock } from './kitchen-clock.ts';
+import { BEING_MADE } from './process-repository.ts';
+
+/** How often the controls of batches being made are judged: a cooling deadline is to the minute. common practice, no source */
+export const SCAN_EVERY_MS = 60_000;
+
+/** How the scan runs; tests move its clock and run it by hand. */
+export interface DeadlineScanOptions {
+  /** The clock; the context's by default. */
+  readonly now?: () => Date;
+  readonly intervalMs?: number;
+  /** Where a failed run is reported; the server log by default. */
+  readonly report?: (error: unknown) => void;
+}
+
+/** What one run opened: the lot and the dedupe key of each deviation. */
+export interface ScanRun {
+  readonly at: string;
+  readonly opened: readonly { readonly lotCode: string; readonly deviation: number }[];
+}
+
+/**
+ * Finds deadlines that passed with no reading (a cool that did not reach its stage in time) and
+ * opens their deviations, once: at start, then every minute. A miss is opened in one write with
+ * the dedupe key that names it, so no run — in this process, after a restart, or on a second
+ * server on the same database — opens it twice. A batch is read first and written only when it
+ * has a miss not yet opened.
+ */
+export class DeadlineScan {
+  private readonly now: () => Date;
+  private readonly intervalMs: number;
+  private readonly report: (error: unknown) => void;
+  private timer: NodeJS.Timeout | null = null;
+  private last: Promise<unknown> = Promise.resolve();
+
+  constructor(
+    private readonly deps: ProcessDeps,
+    context: Pick<AppContext, 'now'>,
+    options: DeadlineScanOptions = {},
+  ) {
+    this.now = options.now ?? context.now;
+    this.intervalMs = options.intervalMs ?? SCAN_EVERY_MS;
+    this.report = options.report ?? logError;
+  }
+
+  /** Runs now, then every interval, until stop(). */
+  start(): void {
+    if (this.timer) return;
+    void this.tick();
+    this.timer = setInterval(() => void this.tick(), this.intervalMs);
+    this.timer.unref();
+  }
+
+  /** Stops the timer and waits for a run going on. */
+  async stop(): Promise<void> {
+    if (this.timer) clearInterval(this.timer);
+    this.timer = null;
+    await this.last.catch(() => undefined);
+  }
+
+  /** One run, after any run going on has finished (runs never overlap in this process). */
+  runOnce(): Promise<ScanRun> {
+    const run = this.last.catch(() => undefined).then(() => this.run());
+    this.last = run;
+    return run;
+  }
+
+  private async tick(): Promise<void> {
+    try {
+      await this.runOnce();
+    } catch (error) {
+      this.report(error);
+    }
+  }
+
+  private async run(): Promise<ScanRun> {
+    const { process, db } = this.deps;
+    const at = this.now().toISOString();
+    const opened: { lotCode: string; deviation: number }[] = [];
+    for (const batch of await process.beingMade()) {
+      const controls = await process.controlsOf(batch);
+      if (controls.length === 0) continue;
+      const judged = judgeBatch(
+        controls,
+        await process.readings(batch.id),
+        batch.status,
+        kitchenClock(at),
+      );
+      const known = new Set((await process.deviations(batch.id)).map((d) => d.key));
+      if (deviationsToOpen(batch, judged).every((d) => known.has(d.key))) continue;
+      const found = await db.write(async (t) => {
+        // Judged again under the write lock: a reading or a move may have come in meanwhile.
+        const current = await process.batch(batch.lotCode, t);
+        if (!BEING_MADE.includes(current.status)) return [];
+        return (await judgeAndOpen(this.deps, t, current, controls, at, null)).opened;
+      });
+      for (const { id } of found) opened.push({ lotCode: batch.lotCode, deviation: id });
+    }
+    return { at, opened };
+  }
+}
+
+function logError(error: unknown): void {
+  console.error(error instanceof Error ? (error.stack ?? error.message) : error); // eslint-disable-line no-console -- the server log is the place for a failed run
+}

@@ -1,0 +1,98 @@
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import type { BatchControl, Reading } from '../../shared/api/process-record.ts';
+import type {
+  ControlMiss,
+  ReadingPoint,
+  ResolvedControl,
+} from '../../shared/process/control-types.ts';
+import { evaluateControl, type Clock } from '../../shared/process/evaluate-control.ts';
+import type { DeviationToOpen } from './deviation-writes.ts';
+
+/** Statuses past every step: the product is finished or gone. */
+const PAST_EVERY_STEP: readonly BatchStatus[] = ['done', 'discarded'];
+
+/**
+ * Every control of a batch judged on its standing readings (a corrected reading replaced by its
+ * correction), at the clock's moment. A control's step is over once a later control in the
+ * formula's list has a reading, or the batch is done or discarded: a cook lethality not reached
+ * by then is missed, not still in progress.
+ * @param readings every reading of the batch, corrected ones included, oldest first per control
+ */
+export function judgeBatch(
+  controls: readonly ResolvedControl[],
+  readings: readonly Reading[],
+  status: BatchStatus,
+  clock: Clock,
+): BatchControl[] {
+  const byControl = new Map<string, Reading[]>();
+  for (const reading of readings) {
+    const list = byControl.get(reading.control);
+    if (list) list.push(reading);
+    else byControl.set(reading.control, [reading]);
+  }
+  const over = PAST_EVERY_STEP.includes(status);
+  return controls.map((control, index) => {
+    const all = byControl.get(control.id) ?? [];
+    const standing: ReadingPoint[] = all
+      .filter((r) => r.correctedBy === null)
+      .sort((a, b) => (a.at === b.at ? a.id - b.id : a.at < b.at ? -1 : 1))
+      .map((r) => ({ at: r.at, value: r.value }));
+    const stepOver = over || controls.slice(index + 1).some((later) => byControl.has(later.id));
+    return {
+      control,
+      state: evaluateControl(control, standing, clock, { stepOver }),
+      readings: all,
+    };
+  });
+}
+
+/** The dedupe key of one miss: `batch <id>/<control>/<miss key>`, opened once across servers. */
+export function missKey(batchId: number, control: string, miss: ControlMiss): string {
+  return `batch ${batchId}/${control}/${miss.key}`;
+}
+
+/**
+ * A deviation to open for every miss of every control (the dedupe key skips the ones already
+ * open). A reading's miss names the standing reading it was.
+ */
+export function deviationsToOpen(
+  batch: { readonly id: number; readonly lotCode: string },
+  judged: readonly BatchControl[],
+): DeviationToOpen[] {
+  return judged.flatMap(({ control, state, readings }) =>
+    state.misses.map((miss) => ({
+      batchId: batch.id,
+      subject: batch.lotCode,
+      control: control.id,
+      kind: miss.kind,
+      what: `${control.title}: ${miss.what}`,
+      readingId:
+        miss.kind === 'reading'
+          ? (readings.find((r) => r.correctedBy === null && r.at === miss.at)?.id ?? null)
+          : null,
+      key: missKey(batch.id, control.id, miss),
+    })),
+  );
+}
+
+/** The limit types judged reading by reading: in limit so far is all they can ever be. */
+const EACH_READING = new Set(['at-most', 'at-least', 'between']);
+
+/**
+ * Whether a control lets a finished batch be released: met; or judged reading by reading with
+ * readings all in limit; or missed with a closed deviation for every miss.
+ * @param closedKeys the dedupe keys of the batch's deviations that have a corrective action
+ */
+export function controlClosed(
+  batchId: number,
+  { control, state }: BatchControl,
+  closedKeys: ReadonlySet<string>,
+): boolean {
+  const missesClosed = state.misses.every((miss) =>
+    closedKeys.has(missKey(batchId, control.id, miss)),
+  );
+  if (state.status === 'met') return missesClosed;
+  if (state.status === 'missed') return state.misses.length > 0 && missesClosed;
+  if (state.status === 'in-progress') return EACH_READING.has(control.limit.type) && missesClosed;
+  return false;
+}

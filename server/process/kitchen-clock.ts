@@ -1,0 +1,30 @@
+import type { Clock } from '../../shared/process/evaluate-control.ts';
+
+/**
+ * The kitchen's IANA time zone: the one the server runs in (TZ), so that "by 14:32" and a data
+ * logger's local times mean the clock on the kitchen's wall.
+ */
+export function kitchenTimeZone(): string {
+  return Intl.DateTimeFormat().resolvedOptions().timeZone;
+}
+
+/** The judging clock at a moment (the context's clock, which tests move) in the kitchen's zone. */
+export function kitchenClock(now: Date | string): Clock {
+  return {
+    now: typeof now === 'string' ? now : now.toISOString(),
+    timeZone: kitchenTimeZone(),
+  };
+}
+
+/** A moment as the kitchen's clock shows it, "14:32", or "3 Dec 14:32" on another day. */
+export function kitchenTime(iso: string, today: string = new Date().toISOString()): string {
+  const timeZone = kitchenTimeZone();
+  const day = (at: string): string =>
+    new Intl.DateTimeFormat('en-GB', { timeZone, dateStyle: 'medium' }).format(new Date(at));
+  const time = new Intl.DateTimeFormat('en-GB', {
+    timeZone,
+    hour: '2-digit',
+    minute: '2-digit',
+  }).format(new Date(iso));
+  return day(iso) === day(today) ? time : `${day(iso).replace(/ \d{4}$/, '')} ${time}`;
+}

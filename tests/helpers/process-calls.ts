@@ -1,0 +1,129 @@
+import assert from 'node:assert/strict';
+import { readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { QueryTypes } from 'sequelize';
+import type { ProcessRecord } from '../../shared/api/process-record.ts';
+import { handClock, type HandClock } from './mail.ts';
+import { REPO_ROOT } from './run-larder.ts';
+import { startTestServer, type ApiClient, type TestServer } from './test-server.ts';
+
+/** The fixture formula's id: the demo belly, smoked, cooked and chilled under three controls. */
+export const CONTROLLED = 'test-cooked-belly';
+
+/**
+ * The controls of the fixture, in the order of the work:
+ * - smoker: the kitchen's own chamber limit, 60–80 °C (invented for the tests);
+ * - cook: 70 °C (158 °F) reached once. source: USDA FSIS, Appendix A, Compliance Guidelines for
+ *   Meeting Lethality Performance Standards (1999), instant lethality for meat other than poultry
+ * - chill: 130 → 80 °F within 1.5 h, then → 40 °F within 5 h, each stage timed on its own.
+ *   source: USDA FSIS, Appendix B, Compliance Guidelines for Cooling Heat-Treated Meat and
+ *   Poultry Products (Stabilization) (1999), option 1
+ * - hold: at most 41 °F (5 °C). source: FDA Food Code 2022, §3-501.16(A)(2) Cold holding
+ */
+const CONTROLS = `controls:
+  - id: smoker
+    title: Smoker chamber
+    step: smoke
+    measure: chamber-temperature
+    limit: { min: 60 °C, max: 80 °C }
+    source: Quillmoor smoker validation, 2026
+    every: 30 min
+  - id: cook
+    title: Cooking
+    step: smoke
+    measure: internal-temperature
+    rule: fsis-lethality-instant
+  - id: chill
+    title: Chilling after the smoke
+    step: chill
+    measure: internal-temperature
+    rule: fsis-cooling-option-1
+    every: 30 min
+  - id: hold
+    title: Cold holding
+    step: hold
+    measure: internal-temperature
+    rule: cold-holding
+    every: 4 h
+`;
+
+/** The demo belly's text as a formula of its own, with the controls. */
+export function controlledFormulaYaml(): string {
+  const belly = readFileSync(path.join(REPO_ROOT, 'formulas', 'quillmoor-belly.yaml'), 'utf8');
+  return `${belly
+    .replace('id: quillmoor-belly', `id: ${CONTROLLED}`)
+    .replace(/^title: .*$/m, 'title: Test belly, smoked, cooked and chilled')}${CONTROLS}`;
+}
+
+/** The moment the tests' batches start: the server's clock begins here. */
+export const T0 = '2026-03-02T12:00:00.000Z';
+
+/** `minutes` after T0, as ISO. */
+export const at = (minutes: number): string =>
+  new Date(Date.parse(T0) + minutes * 60_000).toISOString();
+
+/** A test server on a hand clock at T0, with the controlled formula in its folder. */
+export async function startProcessServer(t: {
+  after(fn: () => unknown): void;
+}): Promise<{ server: TestServer; clock: HandClock }> {
+  const clock = handClock(new Date(T0));
+  const server = await startTestServer(t, {}, { now: clock.now });
+  writeFileSync(path.join(server.formulasDir, `${CONTROLLED}.yaml`), controlledFormulaYaml());
+  server.context.formulas.changed();
+  return { server, clock };
+}
+
+/** Records a batch of the controlled formula (as planned or in progress) and returns its lot. */
+export async function recordControlled(
+  client: ApiClient,
+  status: 'planned' | 'in-progress' = 'in-progress',
+): Promise<string> {
+  const response = await client.post('/api/batches', {
+    formula: CONTROLLED,
+    batch: { meat: '4.26kg', thickness: '4cm', start: T0.slice(0, 10) },
+    status,
+  });
+  assert.equal(response.status, 201, response.text);
+  return response.json.batch.lotCode as string;
+}
+
+/** Posts a reading and asserts it was taken (201); returns the answer. */
+export async function reading(
+  client: ApiClient,
+  lot: string,
+  control: string,
+  value: string,
+  when?: string,
+) {
+  const response = await client.post(`/api/batches/${lot}/readings`, {
+    control,
+    value,
+    ...(when ? { at: when } : {}),
+  });
+  assert.equal(response.status, 201, response.text);
+  return response.json;
+}
+
+/** The batch's process record as an admin reads it. */
+export async function processOf(server: TestServer, lot: string): Promise<ProcessRecord> {
+  const response = await server.as('rosa').get(`/api/batches/${lot}/process`);
+  assert.equal(response.status, 200, response.text);
+  return response.json as ProcessRecord;
+}
+
+/** Rows in a table, straight from the server's database. */
+export async function rowCount(server: TestServer, table: string): Promise<number> {
+  const [row] = await server.context.db.sequelize.query<{ n: number }>(
+    `SELECT COUNT(*) AS n FROM ${table}`,
+    { type: QueryTypes.SELECT },
+  );
+  return row!.n;
+}
+
+/** A corrective action with the four things 9 CFR 417.3(a) asks, for a rechilled product. */
+export const RECHILLED = {
+  cause: 'The blast chiller door was left ajar.',
+  restored: 'Door closed and gasket checked; chiller back to -2 °C.',
+  prevention: 'Door alarm set to sound after 2 minutes open.',
+  disposition: 'rechilled',
+} as const;
