@@ -3,12 +3,12 @@ import { readRows } from '../db/read-row.ts';
 import type { ReportPeriod } from './report-period.ts';
 import {
   STAMP_COLUMNS,
-  type ActionRow,
   type CalibrationRow,
-  type DeviationRow,
-  type ReadingRow,
-  type VerificationRow,
-  type WeighingRow,
+  type ReportActionRow as ActionRow,
+  type ReportDeviationRow as DeviationRow,
+  type ReportReadingRow as ReadingRow,
+  type ReportVerificationRow as VerificationRow,
+  type ReportWeighingRow as WeighingRow,
 } from './report-rows.ts';
 
 /** A batch row as the report reads it, with the names of the people it names. */
@@ -75,7 +75,7 @@ export async function periodBatchIds(
 export const BATCH_READINGS_SQL = (ids: readonly number[]): string =>
   `SELECT ${STAMP_COLUMNS}, x.batch_id, x.equipment_id, x.control, x.taken_at, x.value,
      x.entered_as, x.source
-   FROM readings x LEFT JOIN people p ON p.id = x.recorded_by
+   FROM readings x LEFT JOIN people rp ON rp.id = x.recorded_by
    WHERE x.batch_id IN (${marks(ids)}) ORDER BY x.batch_id, x.control, x.taken_at, x.id`;
 
 /** Reads the whole record of a few batches (a page of the report), a query per kind of entry. */
@@ -96,7 +96,7 @@ export async function batchRecords(
   const readings = await read<ReadingRow>(BATCH_READINGS_SQL(ids));
   const weighings = await read<WeighingRow>(
     `SELECT ${STAMP_COLUMNS}, x.batch_id, x.kind, x.name, x.planned_grams, x.grams, x.weighed_at
-     FROM weighings x LEFT JOIN people p ON p.id = x.recorded_by
+     FROM weighings x LEFT JOIN people rp ON rp.id = x.recorded_by
      WHERE x.batch_id IN (${marks(ids)}) ORDER BY x.batch_id, x.id`,
   );
   const deviations = await read<DeviationRow>(
@@ -108,19 +108,19 @@ export async function batchRecords(
   );
   const verifications = await read<VerificationRow>(
     `SELECT ${STAMP_COLUMNS}, x.batch_id, x.note
-     FROM verifications x LEFT JOIN people p ON p.id = x.recorded_by
+     FROM verifications x LEFT JOIN people rp ON rp.id = x.recorded_by
      WHERE x.batch_id IN (${marks(ids)}) ORDER BY x.batch_id, x.id`,
   );
   return { batches, readings, weighings, deviations, actions, verifications };
 }
 
 const DEVIATION_SELECT = `SELECT d.id, d.batch_id, d.equipment_id, d.control, d.kind, d.what,
-    d.opened_at, d.opened_by, p.display_name AS opener_name, d.reading_id
+    d.opened_at, d.opened_by, p.display_name AS opener_name, d.dedupe_key, d.reading_id
   FROM deviations d LEFT JOIN people p ON p.id = d.opened_by`;
 
 const ACTION_SELECT = `SELECT ${STAMP_COLUMNS}, x.deviation_id, x.cause, x.restored, x.prevention,
     x.disposition, x.disposition_grams
-  FROM corrective_actions x LEFT JOIN people p ON p.id = x.recorded_by`;
+  FROM corrective_actions x LEFT JOIN people rp ON rp.id = x.recorded_by`;
 
 /** A refusals row with the name of who was refused. */
 export interface RefusalRow {
@@ -174,13 +174,13 @@ export async function periodEquipment(
     `SELECT ${STAMP_COLUMNS}, x.batch_id, x.equipment_id, x.control, x.taken_at, x.value,
        x.entered_as, x.source
      FROM equipment e JOIN readings x ON x.equipment_id = e.id AND x.taken_at >= ? AND x.taken_at < ?
-       LEFT JOIN people p ON p.id = x.recorded_by
+       LEFT JOIN people rp ON rp.id = x.recorded_by
      ORDER BY x.equipment_id, x.taken_at, x.id`,
   );
   const calibrations = await read<CalibrationRow>(
     `SELECT ${STAMP_COLUMNS}, x.equipment_id, x.checked_at, x.reading, x.outcome, x.note
      FROM equipment e JOIN calibrations x ON x.equipment_id = e.id AND x.checked_at >= ? AND x.checked_at < ?
-       LEFT JOIN people p ON p.id = x.recorded_by
+       LEFT JOIN people rp ON rp.id = x.recorded_by
      ORDER BY x.equipment_id, x.checked_at, x.id`,
   );
   const deviations = await read<DeviationRow>(

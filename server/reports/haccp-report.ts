@@ -7,11 +7,20 @@ import type {
   ReportHead,
   ReportRefusal,
 } from '../../shared/api/haccp-report.ts';
-import type { Reading } from '../../shared/api/process-record.ts';
+import type { BatchStatus } from '../../shared/api/batch-record.ts';
 import type { ControlState, ResolvedControl } from '../../shared/process/control-types.ts';
-import { evaluateControl, type Clock } from '../../shared/process/evaluate-control.ts';
+import type { Clock } from '../../shared/process/evaluate-control.ts';
 import { limitWords } from '../../shared/process/limit-words.ts';
-import type { BatchControls } from './batch-controls.ts';
+import { judgeBatch } from '../process/judge-batch.ts';
+import {
+  correctedByOf,
+  personRef,
+  toAction,
+  toDeviation,
+  toReading,
+  toVerification,
+  toWeighing,
+} from '../process/process-rows.ts';
 import { readingsShown } from './control-summary.ts';
 import {
   batchRecords,
@@ -24,13 +33,10 @@ import {
 import type { ReportPeriod } from './report-period.ts';
 import {
   calibrationOf,
-  correctionsOf,
-  deviationOf,
   groupBy,
-  readingOf,
-  verificationOf,
-  weighingOf,
-  type ReadingRow,
+  type ReportActionRow,
+  type ReportDeviationRow,
+  type ReportReadingRow,
 } from './report-rows.ts';
 
 /** Batches read at a time: their readings (up to 1,440 a control from a logger) stay in memory. */
@@ -39,76 +45,67 @@ export const BATCHES_A_PAGE = 50;
 /** What producing a report reads from. */
 export interface ReportSource {
   readonly sequelize: Sequelize;
-  /** The controls of a batch's formula revision. */
-  readonly controls: BatchControls;
+  /** The controls of a batch's formula revision (server/process/formula-controls.ts). */
+  readonly controls: (formulaId: string, revision: string) => Promise<readonly ResolvedControl[]>;
   /** Whose report, in which time zone, and the moment controls are judged at. */
   readonly clock: Clock;
 }
 
-const person = (id: number | null, name: string | null) =>
-  id === null ? null : { id, displayName: name ?? `person ${id}` };
-
-/** The statuses after which a batch's steps are all behind it. */
-const FINISHED = new Set(['done', 'discarded']);
-
 /** A control's state in words: "met", "missed: 26.7 °C at 15:02 …". */
 function stateWords(state: ControlState | null): string {
-  if (!state) return 'not judged';
+  if (!state) return 'not judged: not in the formula';
   return state.summary ? `${state.status}: ${state.summary}` : state.status;
 }
 
 /**
- * Judges a control on its standing readings; null when it cannot be (a control no longer in
- * the formula, or judging that fails): the report still lists every reading.
+ * The controls of one batch judged as its process record judges them, in the formula's order;
+ * then any control read against that the formula revision does not have, its readings listed.
  */
-function judge(
-  control: ResolvedControl | undefined,
-  readings: readonly Reading[],
-  clock: Clock,
-  stepOver: boolean,
-): ControlState | null {
-  if (!control) return null;
-  const standing = readings
-    .filter((r) => r.correctedBy === null)
-    .map((r) => ({ at: r.at, value: r.value }))
-    .sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
-  try {
-    return evaluateControl(control, standing, clock, { stepOver });
-  } catch {
-    return null;
-  }
-}
-
-/** The controls of one batch: the formula's, in its order, then any read against since removed. */
 function reportControls(
   row: ReportBatchRow,
   controls: readonly ResolvedControl[],
-  readingRows: readonly ReadingRow[],
+  readingRows: readonly ReportReadingRow[],
   clock: Clock,
 ): ReportControl[] {
-  const corrected = correctionsOf(readingRows);
-  const byControl = groupBy(
-    readingRows.map((r) => readingOf(r, corrected)),
+  const corrected = correctedByOf(readingRows);
+  const readings = readingRows.map((r) => toReading(r, corrected));
+  const judged = judgeBatch(controls, readings, row.status as BatchStatus, clock).map(
+    ({ control, state, readings: read }): ReportControl => ({
+      id: control.id,
+      title: control.title,
+      limit: limitWords(control.limit, control.unit),
+      source: control.source,
+      unit: control.unit,
+      state: stateWords(state),
+      ...readingsShown(read, state),
+    }),
+  );
+  const known = new Set(controls.map((c) => c.id));
+  const unknown = groupBy(
+    readings.filter((r) => !known.has(r.control)),
     (r) => r.control,
   );
-  const ids = [...new Set([...controls.map((c) => c.id), ...byControl.keys()])];
-  return ids.map((id, index) => {
-    const control = controls.find((c) => c.id === id);
-    const readings = byControl.get(id) ?? [];
-    // A step is behind the batch once it is finished or a later control has readings.
-    const stepOver =
-      FINISHED.has(row.status) || ids.slice(index + 1).some((later) => byControl.has(later));
-    const state = judge(control, readings, clock, stepOver);
-    return {
+  return [
+    ...judged,
+    ...[...unknown].map(([id, read]) => ({
       id,
-      title: control?.title ?? id,
-      limit: control ? limitWords(control.limit, control.unit) : 'not in the formula',
-      source: control?.source ?? '',
-      unit: control?.unit ?? '',
-      state: stateWords(state),
-      ...readingsShown(readings, state),
-    };
-  });
+      title: id,
+      limit: 'not in the formula',
+      source: '',
+      unit: '',
+      state: stateWords(null),
+      ...readingsShown(read, null),
+    })),
+  ];
+}
+
+/** A deviation with its corrective actions, earlier ones first. */
+function deviationOf(row: ReportDeviationRow, actions: readonly ReportActionRow[]) {
+  const corrected = correctedByOf(actions);
+  return toDeviation(
+    row,
+    actions.map((a) => toAction(a, corrected)),
+  );
 }
 
 /**
@@ -129,28 +126,27 @@ export async function* reportBatches(
     for (const row of page.batches) {
       const weighed = weighings.get(row.id) ?? [];
       const verified = verifications.get(row.id) ?? [];
-      const weighingCorrections = correctionsOf(weighed);
-      const verificationCorrections = correctionsOf(verified);
+      const weighingCorrections = correctedByOf(weighed);
       yield {
         lotCode: row.lot_code,
         formula: { id: row.formula_id, revision: row.formula_revision, title: row.formula_title },
         status: row.status,
         startedOn: row.started_on,
         startedAt: row.started_at,
-        operator: person(row.operator_id, row.operator_name),
-        plannedBy: person(row.planned_by, row.planner_name),
-        startedBy: person(row.started_by, row.starter_name),
+        operator: personRef(row.operator_id, row.operator_name),
+        plannedBy: personRef(row.planned_by, row.planner_name),
+        startedBy: personRef(row.started_by, row.starter_name),
         controls: reportControls(
           row,
           await source.controls(row.formula_id, row.formula_revision),
           readings.get(row.id) ?? [],
           source.clock,
         ),
-        weighings: weighed.map((w) => weighingOf(w, weighingCorrections)),
+        weighings: weighed.map((w) => toWeighing(w, weighingCorrections)),
         deviations: (deviations.get(row.id) ?? []).map((d) =>
           deviationOf(d, actions.get(d.id) ?? []),
         ),
-        verifications: verified.map((v) => verificationOf(v, verificationCorrections)),
+        verifications: verified.map(toVerification),
       };
     }
   }
@@ -192,7 +188,7 @@ function failedText(json: string): string {
 function refusalOf(row: RefusalRow): ReportRefusal {
   return {
     at: row.at,
-    by: person(row.person_id, row.person_name),
+    by: personRef(row.person_id, row.person_name),
     formula: row.formula_id,
     revision: row.formula_revision,
     inputs: inputsText(row.inputs),
@@ -215,7 +211,7 @@ export async function reportEquipment(
   period: ReportPeriod,
 ): Promise<ReportEquipment[]> {
   const records = await periodEquipment(source.sequelize, period);
-  const corrected = correctionsOf(records.readings);
+  const corrected = correctedByOf(records.readings);
   const readings = groupBy(records.readings, (r) => r.equipment_id);
   const calibrations = groupBy(records.calibrations, (r) => r.equipment_id);
   const deviations = groupBy(records.deviations, (r) => r.equipment_id);
@@ -225,7 +221,7 @@ export async function reportEquipment(
       deviationOf(d, actions.get(d.id) ?? []),
     );
     // An equipment log's misses are its deviations, each naming the reading that opened it.
-    const logged = (readings.get(item.id) ?? []).map((r) => readingOf(r, corrected));
+    const logged = (readings.get(item.id) ?? []).map((r) => toReading(r, corrected));
     const missedAt = (deviations.get(item.id) ?? []).map((d) => ({
       kind: 'reading' as const,
       at: logged.find((r) => r.id === d.reading_id)?.at ?? '',

@@ -1,9 +1,11 @@
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
+import type { FormulaHistory } from '../formulas/formula-history.ts';
+import { FormulaControls } from '../process/formula-controls.ts';
+import { kitchenTimeZone } from '../process/kitchen-clock.ts';
 import type { HaccpReport, ReportHead } from '../../shared/api/haccp-report.ts';
 import type { Person } from '../../shared/api/person.ts';
 import { RecordsError } from '../records/records-error.ts';
-import { revisionControls } from './batch-controls.ts';
 import { HACCP_CSV_HEADER, batchCsv, equipmentCsv, headCsv, refusalsCsv } from './haccp-csv.ts';
 import { periodBatchIds } from './haccp-queries.ts';
 import {
@@ -37,9 +39,6 @@ export type ProducedReport =
   | { readonly format: 'csv'; readonly file: string; readonly body: AsyncIterable<string> }
   | { readonly format: 'json'; readonly file: string; readonly body: HaccpReport };
 
-/** The kitchen's time zone: the one this machine's clocks show (TZ). */
-const timeZone = (): string => Intl.DateTimeFormat().resolvedOptions().timeZone;
-
 async function* csvChunks(source: ReportSource, period: ReportPeriod, head: ReportHead) {
   yield HACCP_CSV_HEADER + headCsv(head);
   const ids = await periodBatchIds(source.sequelize, period);
@@ -54,7 +53,7 @@ async function* csvChunks(source: ReportSource, period: ReportPeriod, head: Repo
  * and reviewers produce it.
  */
 export async function produceReport(
-  { db, audit }: { db: Database; audit: AuditRepository },
+  { db, audit, history }: { db: Database; audit: AuditRepository; history: FormulaHistory },
   format: ReportFormat,
   request: ReportRequest,
 ): Promise<ProducedReport> {
@@ -69,13 +68,14 @@ export async function produceReport(
     kitchen: request.kitchen,
     from: period.from,
     to: period.to,
-    timeZone: timeZone(),
+    timeZone: kitchenTimeZone(),
     producedBy: request.by.displayName,
     producedAt: request.now.toISOString(),
   };
+  const controls = new FormulaControls(history);
   const source: ReportSource = {
     sequelize: db.sequelize,
-    controls: revisionControls(db.sequelize),
+    controls: (formulaId, revision) => controls.of(formulaId, revision),
     clock: { now: head.producedAt, timeZone: head.timeZone },
   };
   const ids = format === 'csv' ? null : await periodBatchIds(db.sequelize, period);
