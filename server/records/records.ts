@@ -25,6 +25,7 @@ import type { Person, Role } from '../../shared/api/person.ts';
 import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-password.ts';
 import { recordPlan } from '../plans/record-plan.ts';
 import type { ProducedReport, ReportFormat, ReportRequest } from '../reports/produce-report.ts';
+import { REPORT_ROLES } from '../reports/report-roles.ts';
 import { RecordsError, recordsErrorOf } from './records-error.ts';
 import type {
   Deviation,
@@ -59,6 +60,12 @@ export type { ActionRequest, CorrectionRequest, UploadAnswer };
 
 /** The fewest characters a password may have. */
 export { MIN_PASSWORD_LENGTH };
+
+/** The roles that produce the HACCP records report. */
+export { REPORT_ROLES };
+
+/** The roles that record readings at a batch's controls (and correct them, and act on deviations). */
+export const PROCESS_ROLES: readonly Role[] = ['admin', 'cook', 'reviewer'];
 
 /** The roles that record batches and plans; every role reads the log. */
 export const RECORDING_ROLES: readonly Role[] = ['admin', 'cook'];

@@ -16,9 +16,7 @@ import {
   type ReportSource,
 } from './haccp-report.ts';
 import { reportPeriod, type ReportPeriod } from './report-period.ts';
-
-/** The roles that produce the HACCP records report. */
-export const REPORT_ROLES = ['admin', 'reviewer'] as const;
+import { REPORT_ROLES } from './report-roles.ts';
 
 /** The formats a report is produced in. */
 export type ReportFormat = 'pdf' | 'csv' | 'json';
@@ -57,7 +55,7 @@ export async function produceReport(
   format: ReportFormat,
   request: ReportRequest,
 ): Promise<ProducedReport> {
-  if (!(REPORT_ROLES as readonly string[]).includes(request.by.role))
+  if (!REPORT_ROLES.includes(request.by.role))
     throw new RecordsError(
       'forbidden',
       'forbidden',

@@ -3,7 +3,7 @@ import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
 import { personOf } from '../auth/request-person.ts';
 import { allowQuery } from '../http/require-json.ts';
-import type { ReportFormat } from '../records/records.ts';
+import { REPORT_ROLES, type ReportFormat } from '../records/records.ts';
 import { drained } from '../batches/batches-router.ts';
 
 const CONTENT_TYPE: Readonly<Record<ReportFormat, string>> = {
@@ -37,7 +37,7 @@ export function reportsRouter(context: AppContext): Router {
     }
     res.end();
   };
-  const guard = [requireRole('admin', 'reviewer'), allowQuery('from', 'to')];
+  const guard = [requireRole(...REPORT_ROLES), allowQuery('from', 'to')];
   router.get('/haccp.pdf', ...guard, produce('pdf'));
   router.get('/haccp.csv', ...guard, produce('csv'));
   router.get('/haccp', ...guard, produce('json'));
