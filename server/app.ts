@@ -10,6 +10,7 @@ import { sessionRouter } from './auth/session-router.ts';
 import { SignIns } from './auth/sign-ins.ts';
 import { batchesCsv, batchesRouter } from './batches/batches-router.ts';
 import { calcRouter } from './calc/calc-router.ts';
+import { equipmentRouter } from './equipment/equipment-router.ts';
 import { plansRouter } from './plans/plans-router.ts';
 import { loggerText } from './process/logger-body.ts';
 import {
@@ -74,6 +75,7 @@ export function createApp(context: AppContext): Express {
   api.use('/process', processNowRouter(context));
   // A mount at /batches does not match /batches.csv, so the export is a route of its own.
   api.get('/batches.csv', batchesCsv(context));
+  api.use('/equipment', equipmentRouter(context));
   api.use('/people/me/reminders', remindersRouter(context));
   api.use('/people', peopleRouter(context));
   api.use('/audit', auditRouter(context));

@@ -3,6 +3,7 @@ import { createApp } from './app.ts';
 import { ConfigError, loadConfig } from './config.ts';
 import { DEMO_PEOPLE } from './demo/demo-people.ts';
 import { ensureDemoFormulas } from './demo/demo-formulas.ts';
+import { EquipmentDueScheduler } from './equipment/equipment-due-scheduler.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
 import { DeadlineScan } from './process/deadline-scan.ts';
@@ -28,6 +29,7 @@ async function main(): Promise<void> {
   const reminders = new ReminderScheduler(context);
   // Cooling deadlines that pass with no reading open their deviations once a minute.
   const deadlines = new DeadlineScan(await context.records.processRecords(), context);
+  const equipmentDue = new EquipmentDueScheduler(context);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     console.log(
@@ -40,6 +42,7 @@ async function main(): Promise<void> {
     );
     reminders.start();
     deadlines.start();
+    equipmentDue.start();
     if (config.mode === 'demo') {
       console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
       for (const person of DEMO_PEOPLE)
@@ -59,7 +62,7 @@ async function main(): Promise<void> {
   const stop = (): void => {
     server.close(
       () =>
-        void Promise.all([reminders.stop(), deadlines.stop()])
+        void Promise.all([reminders.stop(), deadlines.stop(), equipmentDue.stop()])
           .then(() => context.formulas.close())
           .then(() => context.mail.close())
           .then(() => context.db.close())

@@ -1,8 +1,9 @@
-import { QueryTypes, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import type { DeviationKind } from '../../shared/api/process-record.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { Database } from '../db/database.ts';
+import { insertRow } from '../db/insert-row.ts';
 
 /** A missed limit to record against a batch or a piece of equipment. */
 export interface DeviationToOpen {
@@ -37,26 +38,24 @@ export async function openDeviation(
   by: ChangeOptions | null,
 ): Promise<number | null> {
   const at = deviation.openedAt ?? by?.at ?? new Date().toISOString();
-  const [inserted] = await db.sequelize.query<{ id: number }>(
+  const id = await insertRow(
+    db,
     `INSERT INTO deviations (batch_id, equipment_id, control, kind, what, opened_at, opened_by, reading_id, dedupe_key)
-     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING RETURNING id`,
-    {
-      replacements: [
-        deviation.batchId,
-        deviation.equipmentId ?? null,
-        deviation.control,
-        deviation.kind,
-        deviation.what,
-        at,
-        by?.actor.id ?? null,
-        deviation.readingId ?? null,
-        deviation.key,
-      ],
-      type: QueryTypes.SELECT,
-      transaction: t,
-    },
+     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING`,
+    [
+      deviation.batchId,
+      deviation.equipmentId ?? null,
+      deviation.control,
+      deviation.kind,
+      deviation.what,
+      at,
+      by?.actor.id ?? null,
+      deviation.readingId ?? null,
+      deviation.key,
+    ],
+    t,
   );
-  if (!inserted) return null;
+  if (id === null) return null;
   if (by?.audit !== false)
     await audit.append(
       {
@@ -64,7 +63,7 @@ export async function openDeviation(
         action: 'deviation-open',
         subject: deviation.subject,
         detail: {
-          deviation: inserted.id,
+          deviation: id,
           control: deviation.control,
           kind: deviation.kind,
           what: deviation.what,
@@ -73,5 +72,5 @@ export async function openDeviation(
       },
       t,
     );
-  return inserted.id;
+  return id;
 }

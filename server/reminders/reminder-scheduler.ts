@@ -1,6 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { AppContext } from '../app-context.ts';
 import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import { PeriodicRun } from './periodic-run.ts';
 import { reminderMessage, type RemindedBatch } from './reminder-message.ts';
 import {
   dueReminders,
@@ -76,54 +77,18 @@ const key = (batchId: number, kind: ReminderKind, dueOn: string): string =>
  * leaves nothing, so the next run sends it; after the commit the row is there, so no run, in
  * this process or after a restart, sends it again. The outbox then delivers the messages.
  */
-export class ReminderScheduler {
+export class ReminderScheduler extends PeriodicRun<ReminderRun> {
   private readonly now: () => Date;
-  private readonly intervalMs: number;
-  private readonly report: (error: unknown) => void;
-  private timer: NodeJS.Timeout | null = null;
-  private last: Promise<unknown> = Promise.resolve();
 
   constructor(
     private readonly context: AppContext,
     options: ReminderSchedulerOptions = {},
   ) {
+    super((options.intervalMinutes ?? context.config.reminderMinutes) * 60_000, options.report);
     this.now = options.now ?? context.now;
-    this.intervalMs = (options.intervalMinutes ?? context.config.reminderMinutes) * 60_000;
-    this.report = options.report ?? logError;
   }
 
-  /** Runs now, then every interval, until stop(). */
-  start(): void {
-    if (this.timer) return;
-    void this.tick();
-    this.timer = setInterval(() => void this.tick(), this.intervalMs);
-    // The HTTP server keeps the process alive; the timer alone should not.
-    this.timer.unref();
-  }
-
-  /** Stops the timer and waits for a run going on. */
-  async stop(): Promise<void> {
-    if (this.timer) clearInterval(this.timer);
-    this.timer = null;
-    await this.last.catch(() => undefined);
-  }
-
-  /** One run, after any run going on has finished (runs never overlap in this process). */
-  runOnce(): Promise<ReminderRun> {
-    const run = this.last.catch(() => undefined).then(() => this.run());
-    this.last = run;
-    return run;
-  }
-
-  private async tick(): Promise<void> {
-    try {
-      await this.runOnce();
-    } catch (error) {
-      this.report(error);
-    }
-  }
-
-  private async run(): Promise<ReminderRun> {
+  protected async run(): Promise<ReminderRun> {
     const { db, mail } = this.context;
     const today = localDate(this.now());
     const held = await db.sequelize.query<HeldRow>(
@@ -224,9 +189,4 @@ export class ReminderScheduler {
     );
     return recipients.map((p) => p.username);
   }
-}
-
-function logError(error: unknown): void {
-  // Only the stack: a database error's own fields carry the SQL with its values.
-  console.error(error instanceof Error ? (error.stack ?? error.message) : error); // eslint-disable-line no-console -- the server log is the place for a failed run
 }

@@ -56,12 +56,25 @@ function readOne(text: string, expected: string): { value: Decimal; scale: Tempe
  * @throws QuantityError when the text is not a temperature
  */
 export function parseTemperature(text: string): Decimal {
+  return readTemperature(text).celsius;
+}
+
+/**
+ * Reads a temperature such as "26 °C", "78F": in °C, and the number and scale as written (a
+ * tolerance stated per scale, like the ice-point check's ±1 °C or ±2 °F, is judged in it).
+ * @throws QuantityError when the text is not a temperature
+ */
+export function readTemperature(text: string): {
+  celsius: Decimal;
+  value: Decimal;
+  scale: TemperatureScale;
+} {
   const { value, scale } = readOne(text, 'a temperature such as "26 °C" or "78 °F"');
   const celsius = scale === 'C' ? value : fahrenheitToCelsius(value);
   if (celsius.lessThan('-273.15')) {
     throw new QuantityError(text, 'a temperature', 'it is below absolute zero');
   }
-  return celsius;
+  return { celsius, value, scale };
 }
 
 /**

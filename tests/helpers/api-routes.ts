@@ -8,6 +8,8 @@ import {
   type Sender,
   type Snapshot,
 } from './api-calls.ts';
+import { PROCESS_ROUTES } from './process-routes.ts';
+import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
 
 /** The callers of the role matrix. */
@@ -213,6 +215,9 @@ export const ROUTES: readonly RouteCase[] = [
     body: { current: ownPassword(role), password: ownPassword(role) },
   })),
   route('GET', '/api/audit', ADMIN, '/api/audit?limit=5'),
+  // Process records (HACCP): readings, corrections, logger files, corrective actions, release.
+  ...PROCESS_ROUTES,
+  ...EQUIPMENT_ROUTES,
 ];
 
 /** What a cell expects, in words for its test name. */
