@@ -7,6 +7,7 @@ import { EquipmentDueScheduler } from './equipment/equipment-due-scheduler.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
 import { DeadlineScan } from './process/deadline-scan.ts';
+import { ProcessAlertScheduler } from './process/process-alert-scheduler.ts';
 import { ReminderScheduler } from './reminders/reminder-scheduler.ts';
 
 /* eslint-disable no-console -- the server talks to whoever started it */
@@ -29,6 +30,8 @@ async function main(): Promise<void> {
   const reminders = new ReminderScheduler(context);
   // Cooling deadlines that pass with no reading open their deviations once a minute.
   const deadlines = new DeadlineScan(await context.records.processRecords(), context);
+  // Readings overdue, cooling deadlines near, deviations opened: mailed once each.
+  const alerts = new ProcessAlertScheduler(context, await context.records.processRecords());
   const equipmentDue = new EquipmentDueScheduler(context);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
@@ -42,6 +45,7 @@ async function main(): Promise<void> {
     );
     reminders.start();
     deadlines.start();
+    alerts.start();
     equipmentDue.start();
     if (config.mode === 'demo') {
       console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
@@ -62,7 +66,7 @@ async function main(): Promise<void> {
   const stop = (): void => {
     server.close(
       () =>
-        void Promise.all([reminders.stop(), deadlines.stop(), equipmentDue.stop()])
+        void Promise.all([reminders.stop(), deadlines.stop(), alerts.stop(), equipmentDue.stop()])
           .then(() => context.formulas.close())
           .then(() => context.mail.close())
           .then(() => context.db.close())

@@ -10,6 +10,7 @@ import * as outbox from './migrations/004-outbox.ts';
 import * as invitations from './migrations/005-invitations.ts';
 import * as reminders from './migrations/006-reminders.ts';
 import * as processRecords from './migrations/007-process-records.ts';
+import * as processAlertPrefs from './migrations/009-process-alert-prefs.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -29,6 +30,7 @@ const MIGRATIONS = [
   invitations,
   reminders,
   processRecords,
+  processAlertPrefs,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */
