@@ -85,12 +85,12 @@ export class EquipmentDueScheduler extends PeriodicRun<SentEquipmentDue[]> {
     const recipients = await reminderPrefs.recipients(t, CHOICE);
     const inserted = await insertRow(
       db,
+      t,
       `INSERT INTO process_alerts_sent (dedupe_key, kind, equipment_id, sent_at, recipients)
        VALUES (?, 'equipment-due', ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING`,
       [dueKey(equipment, dueAt), id, now.toISOString(), recipients.length],
-      t,
     );
-    if (inserted === null) return undefined;
+    if (inserted.changes === 0) return undefined;
     for (const person of recipients) {
       const content = equipmentDueMessage({
         equipment,

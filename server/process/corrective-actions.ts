@@ -3,6 +3,7 @@ import type { Deviation, Disposition } from '../../shared/api/process-record.ts'
 import { parseMass } from '../../shared/units/mass.ts';
 import { QuantityError } from '../../shared/units/quantity-error.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
+import { insertRow } from '../db/insert-row.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import type { ProcessDeps } from './judge-and-open.ts';
 
@@ -102,26 +103,24 @@ export async function recordAction(
         'this deviation has a corrective action already; say why it is replaced',
         [{ field: 'reason', message: 'is needed to replace a corrective action' }],
       );
-    const [row] = await deps.db.sequelize.query<{ id: number }>(
+    const { lastId: actionId } = await insertRow(
+      deps.db,
+      t,
       `INSERT INTO corrective_actions (deviation_id, cause, restored, prevention, disposition,
          disposition_grams, recorded_by, recorded_at, corrects_id, reason)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id`,
-      {
-        replacements: [
-          deviationId,
-          request.cause.trim(),
-          request.restored.trim(),
-          request.prevention.trim(),
-          request.disposition,
-          grams,
-          by.actor.id,
-          at,
-          deviation.standing,
-          deviation.standing === null ? null : reason,
-        ],
-        type: QueryTypes.SELECT,
-        transaction: t,
-      },
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+      [
+        deviationId,
+        request.cause.trim(),
+        request.restored.trim(),
+        request.prevention.trim(),
+        request.disposition,
+        grams,
+        by.actor.id,
+        at,
+        deviation.standing,
+        deviation.standing === null ? null : reason,
+      ],
     );
     await deps.audit.append(
       {
@@ -130,7 +129,7 @@ export async function recordAction(
         subject: deviation.lot_code,
         detail: {
           deviation: deviationId,
-          action: row!.id,
+          action: actionId,
           disposition: request.disposition,
           ...(grams === null ? {} : { grams }),
           ...(deviation.standing === null ? {} : { replaces: deviation.standing, reason }),

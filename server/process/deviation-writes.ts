@@ -38,8 +38,9 @@ export async function openDeviation(
   by: ChangeOptions | null,
 ): Promise<number | null> {
   const at = deviation.openedAt ?? by?.at ?? new Date().toISOString();
-  const id = await insertRow(
+  const inserted = await insertRow(
     db,
+    t,
     `INSERT INTO deviations (batch_id, equipment_id, control, kind, what, opened_at, opened_by, reading_id, dedupe_key)
      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING`,
     [
@@ -53,9 +54,8 @@ export async function openDeviation(
       deviation.readingId ?? null,
       deviation.key,
     ],
-    t,
   );
-  if (id === null) return null;
+  if (inserted.changes === 0) return null;
   if (by?.audit !== false)
     await audit.append(
       {
@@ -63,7 +63,7 @@ export async function openDeviation(
         action: 'deviation-open',
         subject: deviation.subject,
         detail: {
-          deviation: id,
+          deviation: inserted.lastId,
           control: deviation.control,
           kind: deviation.kind,
           what: deviation.what,
@@ -72,5 +72,5 @@ export async function openDeviation(
       },
       t,
     );
-  return id;
+  return inserted.lastId;
 }

@@ -1,5 +1,5 @@
 import { readFormula } from '../../shared/formula/read-formula.ts';
-import type { FormulaControl, ResolvedControl } from '../../shared/process/control-types.ts';
+import type { ResolvedControl } from '../../shared/process/control-types.ts';
 import { resolveControl } from '../../shared/process/resolve-control.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
 
@@ -24,8 +24,7 @@ export class FormulaControls {
     const stored = await this.history.find(formulaId, revision);
     // A batch is recorded only from a revision the history holds; none means no controls known.
     const formula = stored ? readFormula(stored.yaml, `${formulaId}.yaml`).formula : undefined;
-    const written = (formula as { controls?: readonly FormulaControl[] } | undefined)?.controls;
-    const controls = (written ?? []).map(resolveControl);
+    const controls = (formula?.controls ?? []).map(resolveControl);
     if (this.cache.size >= CACHED) this.cache.delete(this.cache.keys().next().value as string);
     this.cache.set(key, controls);
     return controls;

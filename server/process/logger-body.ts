@@ -1,10 +1,9 @@
 import express, { type RequestHandler } from 'express';
 import multer from 'multer';
 import { AppError, badRequest } from '../http/app-error.ts';
-import { MAX_LOG_BYTES } from './logger-upload.ts';
+import { MAX_LOG_BYTES, TOO_LARGE_WORDS, overLogLimits } from './logger-upload.ts';
 
-const TOO_LARGE = (): AppError =>
-  new AppError(413, 'too-large', 'a logger file is at most 2 MB; split it by day');
+const TOO_LARGE = (): AppError => new AppError(413, 'too-large', TOO_LARGE_WORDS);
 
 /**
  * A logger's CSV sent as the raw body (Content-Type text/csv), read as text before the API's
@@ -26,10 +25,11 @@ const upload = multer({
 /**
  * The logger file of an upload: the raw text/csv body, or the multipart field `file`, as UTF-8
  * text in `res.locals.loggerText`.
- * @throws AppError 413 too-large, 415 not-csv, 400 for a broken form or a file that is not UTF-8
+ * @throws AppError 413 too-large (2 MB, 20,000 lines), 415 not-csv, 400 for a broken form or a file that is not UTF-8
  */
 export const readLoggerFile: RequestHandler = (req, res, next) => {
   if (typeof req.body === 'string') {
+    if (overLogLimits(req.body)) return next(TOO_LARGE());
     res.locals.loggerText = req.body;
     return next();
   }
@@ -58,6 +58,7 @@ export const readLoggerFile: RequestHandler = (req, res, next) => {
       return next(badRequest('send the logger file in the field "file"', [{ field: 'file' }]));
     try {
       res.locals.loggerText = new TextDecoder('utf-8', { fatal: true }).decode(req.file.buffer);
+      if (overLogLimits(String(res.locals.loggerText))) return next(TOO_LARGE());
     } catch {
       return next(
         badRequest('the logger file is not UTF-8 text; export it as CSV', [{ field: 'file' }]),

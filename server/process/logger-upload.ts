@@ -6,6 +6,7 @@ import {
 } from '../../shared/process/logger-csv.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import { AppError } from '../http/app-error.ts';
+import { RecordsError } from '../records/records-error.ts';
 import { judgeAndOpen, type ProcessDeps } from './judge-and-open.ts';
 import { kitchenTimeZone } from './kitchen-clock.ts';
 import { controlNamed, readingTime, refuseReadingsOn } from './reading-input.ts';
@@ -24,15 +25,17 @@ export interface UploadAnswer {
 
 const MEASURED_BY_LOGGERS = new Set(['internal-temperature', 'chamber-temperature']);
 
+/** Words for a file over the limits. */
+export const TOO_LARGE_WORDS = `a logger file is at most 2 MB and ${MAX_LOG_LINES.toLocaleString('en')} lines; split it by day`;
+
+/** Whether a logger file is over the limits (the API answers 413 before reading it). */
+export function overLogLimits(text: string): boolean {
+  return Buffer.byteLength(text) > MAX_LOG_BYTES || text.split('\n').length > MAX_LOG_LINES;
+}
+
 /** Every point of the file, or the first line that cannot be read as a 422 bad-log. */
 function pointsOf(text: string): LoggedPoint[] {
-  const lines = text.split('\n').length;
-  if (Buffer.byteLength(text) > MAX_LOG_BYTES || lines > MAX_LOG_LINES)
-    throw new AppError(
-      413,
-      'too-large',
-      `a logger file is at most 2 MB and ${MAX_LOG_LINES.toLocaleString('en')} lines; split it by day`,
-    );
+  if (overLogLimits(text)) throw new RecordsError('bad-input', 'too-large', TOO_LARGE_WORDS);
   try {
     return parseLoggerCsv(text, kitchenTimeZone());
   } catch (error) {

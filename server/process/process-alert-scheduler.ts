@@ -158,12 +158,12 @@ export class ProcessAlertScheduler extends PeriodicRun<SentAlert[]> {
     const recipients = await reminderPrefs.processAlertRecipients(t);
     const row = await insertRow(
       db,
+      t,
       `INSERT INTO process_alerts_sent (dedupe_key, kind, batch_id, equipment_id, sent_at, recipients)
        VALUES (?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING`,
       [alert.key, alert.kind, alert.batchId, alert.equipmentId, at, recipients.length],
-      t,
     );
-    if (row === null) return undefined;
+    if (row.changes === 0) return undefined;
     const url = alert.batchId === null ? mail.links.base() : mail.links.batch(alert.subject);
     for (const person of recipients)
       await mail.outbox.enqueue(t, {

@@ -5,6 +5,7 @@ import type {
   ReadingSource,
 } from '../../shared/api/process-record.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
+import { insertRow } from '../db/insert-row.ts';
 import { AppError, conflict, notFound } from '../http/app-error.ts';
 import { judgeAndOpen, type Judgement, type ProcessDeps } from './judge-and-open.ts';
 import type { ProcessBatch } from './process-repository.ts';
@@ -48,28 +49,26 @@ export async function insertReadings(
   let last = 0;
   for (let from = 0; from < readings.length; from += ROWS_PER_INSERT) {
     const chunk = readings.slice(from, from + ROWS_PER_INSERT);
-    const rows = await deps.db.sequelize.query<{ id: number }>(
+    const { lastId } = await insertRow(
+      deps.db,
+      t,
       `INSERT INTO readings (batch_id, control, taken_at, value, entered_as, source, recorded_by,
          recorded_at, corrects_id, reason)
-       VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')} RETURNING id`,
-      {
-        replacements: chunk.flatMap((r) => [
-          batchId,
-          r.control,
-          r.at,
-          r.value,
-          r.enteredAs,
-          r.source,
-          by.actor.id,
-          recordedAt,
-          r.correctsId ?? null,
-          r.reason ?? null,
-        ]),
-        type: QueryTypes.SELECT,
-        transaction: t,
-      },
+       VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}`,
+      chunk.flatMap((r) => [
+        batchId,
+        r.control,
+        r.at,
+        r.value,
+        r.enteredAs,
+        r.source,
+        by.actor.id,
+        recordedAt,
+        r.correctsId ?? null,
+        r.reason ?? null,
+      ]),
     );
-    last = Math.max(last, ...rows.map((row) => row.id));
+    last = lastId;
   }
   return last;
 }

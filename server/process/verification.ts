@@ -2,6 +2,7 @@ import type { Verification } from '../../shared/api/process-record.ts';
 import type { WorkflowRules } from '../../shared/workflow/workflow-rules.ts';
 import { verifyRefusal } from '../../shared/workflow/release-rules.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
+import { insertRow } from '../db/insert-row.ts';
 import { AppError, conflict } from '../http/app-error.ts';
 import { controlClosed } from './judge-batch.ts';
 import { judgeAndOpen, type ProcessDeps } from './judge-and-open.ts';
@@ -51,9 +52,11 @@ export async function verifyBatch(
       rules,
     );
     if (refused) return refused;
-    const [row] = await deps.db.sequelize.query<{ id: number }>(
-      `INSERT INTO verifications (batch_id, note, recorded_by, recorded_at) VALUES (?, ?, ?, ?) RETURNING id`,
-      { replacements: [batch.id, note, by.actor.id, at], type: QueryTypes.SELECT, transaction: t },
+    const { lastId: verificationId } = await insertRow(
+      deps.db,
+      t,
+      'INSERT INTO verifications (batch_id, note, recorded_by, recorded_at) VALUES (?, ?, ?, ?)',
+      [batch.id, note, by.actor.id, at],
     );
     // The batch's own history shows the release beside its sign-off.
     await deps.db.sequelize.query(
@@ -74,7 +77,7 @@ export async function verifyBatch(
         actor: by.actor,
         action: 'batch-verify',
         subject: lot,
-        detail: { verification: row!.id, ...(note ? { note } : {}) },
+        detail: { verification: verificationId, ...(note ? { note } : {}) },
         ...(by.ip === undefined ? {} : { ip: by.ip }),
       },
       t,

@@ -68,7 +68,7 @@ function reportControls(
   clock: Clock,
 ): ReportControl[] {
   const corrected = correctedByOf(readingRows);
-  const readings = readingRows.map((r) => toReading(r, corrected));
+  const readings = readingRows.map((r) => toReading(r, r.recorder_name, corrected));
   const judged = judgeBatch(controls, readings, row.status as BatchStatus, clock).map(
     ({ control, state, readings: read }): ReportControl => ({
       id: control.id,
@@ -221,7 +221,7 @@ export async function reportEquipment(
       deviationOf(d, actions.get(d.id) ?? []),
     );
     // An equipment log's misses are its deviations, each naming the reading that opened it.
-    const logged = (readings.get(item.id) ?? []).map((r) => toReading(r, corrected));
+    const logged = (readings.get(item.id) ?? []).map((r) => toReading(r, r.recorder_name, corrected));
     const missedAt = (deviations.get(item.id) ?? []).map((d) => ({
       kind: 'reading' as const,
       at: logged.find((r) => r.id === d.reading_id)?.at ?? '',

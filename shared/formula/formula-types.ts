@@ -2,6 +2,7 @@
  * TypeScript shapes of a formula file. They mirror shared/schema/formula.schema.json, which is the
  * authority; tests/formulas check that every demo file validates and type-checks as these.
  */
+import type { FormulaControl } from '../process/control-types.ts';
 
 /** The kinds of formula a batch is made from: each has its own calculator. */
 export type BatchKind = 'cure' | 'dough' | 'blend' | 'mix';
@@ -42,6 +43,11 @@ export interface FormulaBase {
   steps?: string[];
   cautions?: string[];
   notes?: string;
+  /**
+   * Process controls at the critical control points of a batch of it (shared/process). Any kind
+   * may write the key; an assembly, never made as a batch, may only leave it empty.
+   */
+  controls?: FormulaControl[];
 }
 
 /** Weight after each process step as a percent of the weight before it. */

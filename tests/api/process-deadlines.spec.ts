@@ -30,12 +30,15 @@ describe('deadlines that pass with no reading', () => {
     const tobin = await server.signIn('tobin');
     const lot = await recordControlled(tobin);
     await reading(tobin, lot, 'cook', '160 °F', at(0));
-    const started = await reading(tobin, lot, 'chill', '130 °F', at(1));
-    assert.equal(started.state.status, 'in-progress');
-    assert.equal(started.state.stage.index, 1);
-    assert.equal(started.state.stage.deadline, at(1 + STAGE_1_MINUTES));
-    const warm = await reading(tobin, lot, 'chill', '100 °F', at(60));
+    // The clock starts at the last reading at or above 130 °F before the first one below it.
+    const hot = await reading(tobin, lot, 'chill', '130 °F', at(1));
+    assert.equal(hot.state.stage, null);
+    clock.set(new Date(at(60)));
+    const warm = await reading(tobin, lot, 'chill', '100 °F');
     assert.equal(warm.deviation, null);
+    assert.equal(warm.state.status, 'in-progress');
+    assert.equal(warm.state.stage.index, 1);
+    assert.equal(warm.state.stage.deadline, at(1 + STAGE_1_MINUTES));
 
     // Just before the deadline: nothing to open, and "now" lists the stage's deadline.
     clock.set(new Date(at(STAGE_1_MINUTES)));
@@ -72,7 +75,7 @@ describe('deadlines that pass with no reading', () => {
     assert.equal(after.json.items[0].lotCode, lot);
 
     // The late reading that finally reaches 80 °F is a miss of the same stage: nothing new opens.
-    const late = await reading(tobin, lot, 'chill', '79 °F', at(STAGE_1_MINUTES + 40));
+    const late = await reading(tobin, lot, 'chill', '79 °F', at(STAGE_1_MINUTES + 30));
     assert.equal(late.deviation, null);
     assert.equal(await rowCount(server, 'deviations'), 1);
   });

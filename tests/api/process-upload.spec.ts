@@ -1,5 +1,6 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
+import { cookieSession, send } from '../helpers/api-calls.ts';
 import {
   at,
   processOf,
@@ -93,7 +94,12 @@ describe('uploading a data logger’s file', () => {
     );
     const form = new FormData();
     form.append('file', new Blob([text], { type: 'text/csv' }), 'chiller-log.csv');
-    const response = await tobin.post(`/api/batches/${lot}/readings/upload?control=chill`, form);
+    const session = await cookieSession(server, 'tobin');
+    const response = await send(server, session, {
+      method: 'POST',
+      path: `/api/batches/${lot}/readings/upload?control=chill`,
+      body: form,
+    });
     assert.equal(response.status, 201, response.text);
     assert.equal(response.json.added, 4);
     assert.deepEqual(

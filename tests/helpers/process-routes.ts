@@ -48,13 +48,14 @@ async function finishedLot(fx: Fixture): Promise<string> {
   const lot = await controlledLot(fx, 'cook');
   // source: FSIS Appendix A (1999), 158 °F instant lethality; Appendix B (1999) option 1, 130 →
   // 80 °F within 1.5 h and → 40 °F within 5 h; FDA Food Code 2022 §3-501.16(A)(2), 41 °F or below
+  // Entered in order, each before any deadline it starts has passed, as a cook enters them.
   const log: [string, string, number][] = [
-    ['smoker', '72 °C', 400],
-    ['cook', '159 °F', 399],
-    ['chill', '130 °F', 398],
-    ['chill', '80 °F', 320],
-    ['chill', '40 °F', 40],
-    ['hold', '38 °F', 30],
+    ['smoker', '72 °C', 210],
+    ['cook', '159 °F', 205],
+    ['chill', '130 °F', 200],
+    ['chill', '80 °F', 150],
+    ['chill', '40 °F', 10],
+    ['hold', '38 °F', 5],
   ];
   for (const [control, value, minutes] of log)
     await addReading(fx, lot, control, value, ago(minutes));

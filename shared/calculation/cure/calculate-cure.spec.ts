@@ -1,30 +1,11 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import fc from 'fast-check';
-import { Decimal } from '../../decimal.ts';
-import type { CureFormula } from '../../formula/formula-types.ts';
+import type { Decimal } from '../../decimal.ts';
 import { BatchError } from '../batch-error.ts';
 import type { CalcResult } from '../calc-result.ts';
 import { calculateCure } from './calculate-cure.ts';
-
-const d = (value: string | number): Decimal => new Decimal(value);
-const CURING_SALT = { name: 'curing salt', nitrite: 6.25, salt: 93.75 };
-
-function cure(overrides: Partial<CureFormula>): CureFormula {
-  return {
-    formula: 1,
-    id: 'test-cure',
-    title: 'Test cure',
-    kind: 'cure',
-    method: 'dry',
-    product: 'bacon',
-    ingredients: [
-      { name: 'salt', pct: 2.32, salt: 100 },
-      { ...CURING_SALT, pct: 0.192 },
-    ],
-    ...overrides,
-  };
-}
+import { CURING_SALT, cure, d } from './cure-spec-helpers.ts';
 
 function line(result: CalcResult, name: string): Decimal {
   const found = result.groups.flatMap((g) => g.lines).find((l) => l.name === name);
