@@ -26,13 +26,16 @@ async function main(): Promise<void> {
   if (config.mode === 'demo') ensureDemoFormulas(config.formulasDir);
   const context = await openContext(config);
   if (config.mode === 'demo') await seedDemo(context);
-  const server = createApp(context).listen(config.port, config.host);
+  // Everything awaited before listen(): 'listening' fires during any await after it, before its
+  // handler below is attached, and the server would never say where it is or start its jobs.
+  const processRecords = await context.records.processRecords();
   const reminders = new ReminderScheduler(context);
   // Cooling deadlines that pass with no reading open their deviations once a minute.
-  const deadlines = new DeadlineScan(await context.records.processRecords(), context);
+  const deadlines = new DeadlineScan(processRecords, context);
   // Readings overdue, cooling deadlines near, deviations opened: mailed once each.
-  const alerts = new ProcessAlertScheduler(context, await context.records.processRecords());
+  const alerts = new ProcessAlertScheduler(context, processRecords);
   const equipmentDue = new EquipmentDueScheduler(context);
+  const server = createApp(context).listen(config.port, config.host);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     console.log(
