@@ -32,7 +32,10 @@ export interface ReportBatchRow {
 /** Everything recorded against a few batches, each list in the order the report shows it. */
 export interface BatchRecords {
   readonly batches: ReportBatchRow[];
+  /** Readings entered by hand, logger readings corrected, and logger readings that missed. */
   readonly readings: ReadingRow[];
+  /** Each control's standing logger readings, summed up by SQLite. */
+  readonly logged: LoggerRow[];
   readonly weighings: WeighingRow[];
   readonly deviations: DeviationRow[];
   readonly actions: ActionRow[];
@@ -71,12 +74,56 @@ export async function periodBatchIds(
   return rows.map((row) => row.id);
 }
 
-/** The readings of some batches, by batch, control and time: the readings_batch index's order. */
+/** A control's standing logger readings summed up: how many, first and last, lowest and highest. */
+export interface LoggerRow {
+  owner: number;
+  control: string;
+  count: number;
+  first: string;
+  last: string;
+  /** The stored text of the lowest and highest reading. */
+  min: string;
+  max: string;
+}
+
+/** A logger reading that stands: no correction names it. */
+const STANDING_LOGGER = `x.source = 'logger'
+  AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = x.id)`;
+
+/**
+ * The logger readings of some batches (or equipment) summed up per control by SQLite, along the
+ * readings_batch index: a month's million readings never become objects. The lowest and highest
+ * are found on the value as a number (SQLite keeps the text of the row it picked): a summary to
+ * read, not a judgement against a limit — the misses are the deviations the judging opened.
+ */
+export const LOGGER_SUMMARY_SQL = (owner: 'batch_id' | 'equipment_id', n: number, period = false) =>
+  `SELECT x.${owner} AS owner, x.control, COUNT(*) AS count, MIN(x.taken_at) AS first,
+     MAX(x.taken_at) AS last,
+     (SELECT m.value FROM readings m WHERE m.${owner} = x.${owner} AND m.control = x.control
+        AND m.source = 'logger' ${period ? 'AND m.taken_at >= ? AND m.taken_at < ?' : ''}
+        AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = m.id)
+        ORDER BY CAST(m.value AS REAL) LIMIT 1) AS min,
+     (SELECT m.value FROM readings m WHERE m.${owner} = x.${owner} AND m.control = x.control
+        AND m.source = 'logger' ${period ? 'AND m.taken_at >= ? AND m.taken_at < ?' : ''}
+        AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = m.id)
+        ORDER BY CAST(m.value AS REAL) DESC LIMIT 1) AS max
+   FROM readings x WHERE x.${owner} IN (${Array.from({ length: n }, () => '?').join(', ')})
+     ${period ? 'AND x.taken_at >= ? AND x.taken_at < ?' : ''} AND ${STANDING_LOGGER}
+   GROUP BY x.${owner}, x.control`;
+
+/**
+ * The readings of some batches the report lists one by one: every reading entered by hand, every
+ * logger reading corrected, and every logger reading a deviation names (the judging's misses);
+ * by batch, control and time.
+ */
 export const BATCH_READINGS_SQL = (ids: readonly number[]): string =>
   `SELECT ${STAMP_COLUMNS}, x.batch_id, x.equipment_id, x.control, x.taken_at, x.value,
      x.entered_as, x.source
    FROM readings x LEFT JOIN people rp ON rp.id = x.recorded_by
-   WHERE x.batch_id IN (${marks(ids)}) ORDER BY x.batch_id, x.control, x.taken_at, x.id`;
+   WHERE x.batch_id IN (${marks(ids)}) AND (x.source <> 'logger'
+     OR EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = x.id)
+     OR x.id IN (SELECT reading_id FROM deviations WHERE batch_id IN (${marks(ids)})))
+   ORDER BY x.batch_id, x.control, x.taken_at, x.id`;
 
 /** Reads the whole record of a few batches (a page of the report), a query per kind of entry. */
 export async function batchRecords(
@@ -93,7 +140,8 @@ export async function batchRecords(
        LEFT JOIN people pl ON pl.id = b.planned_by LEFT JOIN people st ON st.id = b.started_by
      WHERE b.id IN (${marks(ids)}) ORDER BY b.started_on, b.id`,
   );
-  const readings = await read<ReadingRow>(BATCH_READINGS_SQL(ids));
+  const readings = await read<ReadingRow>(BATCH_READINGS_SQL(ids), [...ids, ...ids]);
+  const logged = await read<LoggerRow>(LOGGER_SUMMARY_SQL('batch_id', ids.length), ids);
   const weighings = await read<WeighingRow>(
     `SELECT ${STAMP_COLUMNS}, x.batch_id, x.kind, x.name, x.planned_grams, x.grams, x.weighed_at
      FROM weighings x LEFT JOIN people rp ON rp.id = x.recorded_by
@@ -111,7 +159,7 @@ export async function batchRecords(
      FROM verifications x LEFT JOIN people rp ON rp.id = x.recorded_by
      WHERE x.batch_id IN (${marks(ids)}) ORDER BY x.batch_id, x.id`,
   );
-  return { batches, readings, weighings, deviations, actions, verifications };
+  return { batches, readings, logged, weighings, deviations, actions, verifications };
 }
 
 const DEVIATION_SELECT = `SELECT d.id, d.batch_id, d.equipment_id, d.control, d.kind, d.what,
@@ -156,7 +204,10 @@ export interface EquipmentRow {
 /** The equipment's records of the period: its readings, checks and deviations. */
 export interface EquipmentRecords {
   readonly equipment: EquipmentRow[];
+  /** Readings entered by hand, logger readings corrected or named by a deviation. */
   readonly readings: ReadingRow[];
+  /** Each piece's standing logger readings of the period, summed up. */
+  readonly logged: LoggerRow[];
   readonly calibrations: CalibrationRow[];
   readonly deviations: DeviationRow[];
   readonly actions: ActionRow[];
@@ -170,32 +221,45 @@ export async function periodEquipment(
   const span = [period.start, period.end];
   const read = <T>(sql: string, values: readonly (string | number)[] = span): Promise<T[]> =>
     readRows<T>(sequelize, sql, values);
+  const equipment = await read<EquipmentRow>(
+    `SELECT e.id, e.name, e.kind FROM equipment e WHERE
+       EXISTS (SELECT 1 FROM readings r WHERE r.equipment_id = e.id AND r.taken_at >= ? AND r.taken_at < ?)
+       OR EXISTS (SELECT 1 FROM calibrations c WHERE c.equipment_id = e.id AND c.checked_at >= ? AND c.checked_at < ?)
+       OR EXISTS (SELECT 1 FROM deviations d WHERE d.equipment_id = e.id AND d.opened_at >= ? AND d.opened_at < ?)
+     ORDER BY e.name`,
+    [...span, ...span, ...span],
+  );
+  const ids = equipment.map((e) => e.id);
+  if (!ids.length)
+    return { equipment, readings: [], logged: [], calibrations: [], deviations: [], actions: [] };
+  const deviations = await read<DeviationRow>(
+    `${DEVIATION_SELECT} WHERE d.equipment_id IN (${marks(ids)}) AND d.opened_at >= ? AND d.opened_at < ?
+     ORDER BY d.equipment_id, d.id`,
+    [...ids, ...span],
+  );
   const readings = await read<ReadingRow>(
     `SELECT ${STAMP_COLUMNS}, x.batch_id, x.equipment_id, x.control, x.taken_at, x.value,
        x.entered_as, x.source
-     FROM equipment e JOIN readings x ON x.equipment_id = e.id AND x.taken_at >= ? AND x.taken_at < ?
-       LEFT JOIN people rp ON rp.id = x.recorded_by
+     FROM readings x LEFT JOIN people rp ON rp.id = x.recorded_by
+     WHERE x.equipment_id IN (${marks(ids)}) AND x.taken_at >= ? AND x.taken_at < ?
+       AND (x.source <> 'logger' OR EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = x.id)
+         OR x.id IN (SELECT reading_id FROM deviations WHERE equipment_id IN (${marks(ids)})))
      ORDER BY x.equipment_id, x.taken_at, x.id`,
+    [...ids, ...span, ...ids],
   );
+  const logged = await read<LoggerRow>(LOGGER_SUMMARY_SQL('equipment_id', ids.length, true), [
+    ...span,
+    ...span,
+    ...ids,
+    ...span,
+  ]);
   const calibrations = await read<CalibrationRow>(
     `SELECT ${STAMP_COLUMNS}, x.equipment_id, x.checked_at, x.reading, x.outcome, x.note
-     FROM equipment e JOIN calibrations x ON x.equipment_id = e.id AND x.checked_at >= ? AND x.checked_at < ?
-       LEFT JOIN people rp ON rp.id = x.recorded_by
+     FROM calibrations x LEFT JOIN people rp ON rp.id = x.recorded_by
+     WHERE x.equipment_id IN (${marks(ids)}) AND x.checked_at >= ? AND x.checked_at < ?
      ORDER BY x.equipment_id, x.checked_at, x.id`,
+    [...ids, ...span],
   );
-  const deviations = await read<DeviationRow>(
-    `${DEVIATION_SELECT} WHERE d.opened_at >= ? AND d.opened_at < ? AND d.equipment_id IS NOT NULL
-     ORDER BY d.equipment_id, d.id`,
-  );
-  const ids = [
-    ...new Set([...readings, ...calibrations, ...deviations].map((row) => row.equipment_id)),
-  ].filter((id): id is number => id !== null);
-  const equipment = ids.length
-    ? await read<EquipmentRow>(
-        `SELECT id, name, kind FROM equipment WHERE id IN (${marks(ids)}) ORDER BY name`,
-        ids,
-      )
-    : [];
   const deviationIds = deviations.map((d) => d.id);
   const actions = deviationIds.length
     ? await read<ActionRow>(
@@ -203,5 +267,5 @@ export async function periodEquipment(
         deviationIds,
       )
     : [];
-  return { equipment, readings, calibrations, deviations, actions };
+  return { equipment, readings, logged, calibrations, deviations, actions };
 }

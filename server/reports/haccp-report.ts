@@ -7,11 +7,9 @@ import type {
   ReportHead,
   ReportRefusal,
 } from '../../shared/api/haccp-report.ts';
-import type { BatchStatus } from '../../shared/api/batch-record.ts';
-import type { ControlState, ResolvedControl } from '../../shared/process/control-types.ts';
+import type { ResolvedControl } from '../../shared/process/control-types.ts';
 import type { Clock } from '../../shared/process/evaluate-control.ts';
 import { limitWords } from '../../shared/process/limit-words.ts';
-import { judgeBatch } from '../process/judge-batch.ts';
 import {
   correctedByOf,
   personRef,
@@ -27,8 +25,8 @@ import {
   periodBatchIds,
   periodEquipment,
   periodRefusals,
+  type LoggerRow,
   type RefusalRow,
-  type ReportBatchRow,
 } from './haccp-queries.ts';
 import type { ReportPeriod } from './report-period.ts';
 import {
@@ -51,52 +49,48 @@ export interface ReportSource {
   readonly clock: Clock;
 }
 
-/** A control's state in words: "met", "missed: 26.7 °C at 15:02 …". */
-function stateWords(state: ControlState | null): string {
-  if (!state) return 'not judged: not in the formula';
-  return state.summary ? `${state.status}: ${state.summary}` : state.status;
+/** What the deviations of a control say of it: "no deviation", "2 deviations, 1 OPEN". */
+function deviationWords(deviations: readonly ReportDeviationRow[], closed: ReadonlySet<number>) {
+  if (!deviations.length) return 'no deviation';
+  const open = deviations.filter((d) => !closed.has(d.id)).length;
+  const count = `${deviations.length} deviation${deviations.length === 1 ? '' : 's'}`;
+  return open ? `${count}, ${open} OPEN` : `${count}, closed`;
 }
 
 /**
- * The controls of one batch judged as its process record judges them, in the formula's order;
- * then any control read against that the formula revision does not have, its readings listed.
+ * The controls of one batch from its records, in the formula's order, then any control read
+ * against that the formula revision does not have. A control's misses are the deviations the
+ * judging opened as readings came in (and the deadline scan as deadlines passed): the report
+ * lists what was recorded, and does not judge a month of readings again.
  */
 function reportControls(
-  row: ReportBatchRow,
   controls: readonly ResolvedControl[],
   readingRows: readonly ReportReadingRow[],
-  clock: Clock,
+  logged: readonly LoggerRow[],
+  deviations: readonly ReportDeviationRow[],
+  closed: ReadonlySet<number>,
 ): ReportControl[] {
   const corrected = correctedByOf(readingRows);
-  const readings = readingRows.map((r) => toReading(r, r.recorder_name, corrected));
-  const judged = judgeBatch(controls, readings, row.status as BatchStatus, clock).map(
-    ({ control, state, readings: read }): ReportControl => ({
-      id: control.id,
-      title: control.title,
-      limit: limitWords(control.limit, control.unit),
-      source: control.source,
-      unit: control.unit,
-      state: stateWords(state),
-      ...readingsShown(read, state),
-    }),
-  );
-  const known = new Set(controls.map((c) => c.id));
-  const unknown = groupBy(
-    readings.filter((r) => !known.has(r.control)),
+  const listed = groupBy(
+    readingRows.map((r) => toReading(r, r.recorder_name, corrected)),
     (r) => r.control,
   );
-  return [
-    ...judged,
-    ...[...unknown].map(([id, read]) => ({
+  const figures = new Map(logged.map((row) => [row.control, row]));
+  const missed = new Set(deviations.map((d) => d.reading_id).filter((id) => id !== null));
+  const byControl = groupBy(deviations, (d) => d.control);
+  const ids = [...new Set([...controls.map((c) => c.id), ...listed.keys(), ...figures.keys()])];
+  return ids.map((id) => {
+    const control = controls.find((c) => c.id === id);
+    return {
       id,
-      title: id,
-      limit: 'not in the formula',
-      source: '',
-      unit: '',
-      state: stateWords(null),
-      ...readingsShown(read, null),
-    })),
-  ];
+      title: control?.title ?? id,
+      limit: control ? limitWords(control.limit, control.unit) : 'not in the formula',
+      source: control?.source ?? '',
+      unit: control?.unit ?? '',
+      state: deviationWords(byControl.get(id) ?? [], closed),
+      ...readingsShown(listed.get(id) ?? [], figures.get(id), missed),
+    };
+  });
 }
 
 /** A deviation with its corrective actions, earlier ones first. */
@@ -119,6 +113,8 @@ export async function* reportBatches(
   for (let at = 0; at < ids.length; at += BATCHES_A_PAGE) {
     const page = await batchRecords(source.sequelize, ids.slice(at, at + BATCHES_A_PAGE));
     const readings = groupBy(page.readings, (r) => r.batch_id);
+    const logged = groupBy(page.logged, (r) => r.owner);
+    const closed = new Set(page.actions.map((a) => a.deviation_id));
     const weighings = groupBy(page.weighings, (r) => r.batch_id);
     const deviations = groupBy(page.deviations, (r) => r.batch_id);
     const actions = groupBy(page.actions, (r) => r.deviation_id);
@@ -137,10 +133,11 @@ export async function* reportBatches(
         plannedBy: personRef(row.planned_by, row.planner_name),
         startedBy: personRef(row.started_by, row.starter_name),
         controls: reportControls(
-          row,
           await source.controls(row.formula_id, row.formula_revision),
           readings.get(row.id) ?? [],
-          source.clock,
+          logged.get(row.id) ?? [],
+          deviations.get(row.id) ?? [],
+          closed,
         ),
         weighings: weighed.map((w) => toWeighing(w, weighingCorrections)),
         deviations: (deviations.get(row.id) ?? []).map((d) =>
@@ -211,6 +208,7 @@ export async function reportEquipment(
   period: ReportPeriod,
 ): Promise<ReportEquipment[]> {
   const records = await periodEquipment(source.sequelize, period);
+  const logged = new Map(records.logged.map((row) => [row.owner, row]));
   const corrected = correctedByOf(records.readings);
   const readings = groupBy(records.readings, (r) => r.equipment_id);
   const calibrations = groupBy(records.calibrations, (r) => r.equipment_id);
@@ -221,23 +219,16 @@ export async function reportEquipment(
       deviationOf(d, actions.get(d.id) ?? []),
     );
     // An equipment log's misses are its deviations, each naming the reading that opened it.
-    const logged = (readings.get(item.id) ?? []).map((r) => toReading(r, r.recorder_name, corrected));
-    const missedAt = (deviations.get(item.id) ?? []).map((d) => ({
-      kind: 'reading' as const,
-      at: logged.find((r) => r.id === d.reading_id)?.at ?? '',
-      what: d.what,
-      key: String(d.id),
-    }));
+    const listed = (readings.get(item.id) ?? []).map((r) =>
+      toReading(r, r.recorder_name, corrected),
+    );
+    const missed = new Set(
+      (deviations.get(item.id) ?? []).map((d) => d.reading_id).filter((id) => id !== null),
+    );
     return {
       name: item.name,
       kind: item.kind,
-      ...readingsShown(logged, {
-        status: 'in-progress',
-        summary: '',
-        stage: null,
-        nextDue: null,
-        misses: missedAt,
-      }),
+      ...readingsShown(listed, logged.get(item.id), missed),
       calibrations: (calibrations.get(item.id) ?? []).map(calibrationOf),
       deviations: opened,
     };
