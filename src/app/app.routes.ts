@@ -24,6 +24,11 @@ export const routes: Routes = [
       { path: 'curing', loadChildren: () => import('./curing/curing.routes') },
       { path: 'plans', loadChildren: () => import('./plans/plans.routes') },
       {
+        path: 'reports',
+        canMatch: [roleGuard('admin', 'reviewer')],
+        loadChildren: () => import('./reports/reports.routes'),
+      },
+      {
         path: 'people',
         canMatch: [roleGuard('admin')],
         loadChildren: () => import('./people/people.routes'),
