@@ -18,6 +18,14 @@ import {
 import { reportPeriod, type ReportPeriod } from './report-period.ts';
 import { REPORT_ROLES } from './report-roles.ts';
 
+/**
+ * The most batches one PDF holds. pdfkit keeps every page until the last to number them "page N
+ * of M", and a month of a busy kitchen (1,000 batches) ran the server out of its heap
+ * (bench/README.md): until the PDF is laid out twice and streamed, a longer period is refused
+ * with words, never a crash. The CSV and JSON stream and have no such limit.
+ */
+export const MAX_PDF_BATCHES = 200;
+
 /** The formats a report is produced in. */
 export type ReportFormat = 'pdf' | 'csv' | 'json';
 
@@ -77,6 +85,13 @@ export async function produceReport(
     clock: { now: head.producedAt, timeZone: head.timeZone },
   };
   const ids = format === 'csv' ? null : await periodBatchIds(db.sequelize, period);
+  if (format === 'pdf' && ids && ids.length > MAX_PDF_BATCHES)
+    throw new RecordsError(
+      'refused',
+      'report-too-large',
+      `the PDF holds at most ${MAX_PDF_BATCHES} batches and ${period.from} to ${period.to} has ${ids.length}: ask for a shorter period, or take the CSV`,
+      [{ option: 'from', batches: ids.length, most: MAX_PDF_BATCHES }],
+    );
   await audit.append({
     actor: request.by,
     action: 'report-produce',
