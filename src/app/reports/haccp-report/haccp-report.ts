@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, computed } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatAnchor } from '@angular/material/button';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { lastThirtyDays, periodProblem, reportUrl, type ReportPeriod } from '../report-period';
@@ -13,16 +13,7 @@ import { lastThirtyDays, periodProblem, reportUrl, type ReportPeriod } from '../
  */
 @Component({
   selector: 'app-haccp-report',
-  imports: [
-    ReactiveFormsModule,
-    MatFormField,
-    MatLabel,
-    MatHint,
-    MatError,
-    MatInput,
-    MatAnchor,
-    MatIcon,
-  ],
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatInput, MatAnchor, MatIcon],
   templateUrl: './haccp-report.html',
   styleUrl: './haccp-report.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
