@@ -29,6 +29,9 @@ import { outboxRouter } from './mail/outbox-router.ts';
 import { peopleRouter } from './people/people-router.ts';
 import { remindersRouter } from './reminders/reminders-router.ts';
 import { reportsRouter } from './reports/reports-router.ts';
+import { startRouter } from './batches/start-router.ts';
+import { refusalsRouter } from './process/refusals-router.ts';
+import { batchWeighingsRouter, weighingsRouter } from './process/weighings-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
 const JSON_LIMIT = '512kb';
@@ -70,6 +73,9 @@ export function createApp(context: AppContext): Express {
   api.use('/plans', plansRouter(context));
   api.use('/formulas', formulasRouter(context));
   api.use('/batches', batchProcessRouter(context), batchesRouter(context));
+  api.use('/batches', batchWeighingsRouter(context), startRouter(context));
+  api.use('/weighings', weighingsRouter(context));
+  api.use('/refusals', refusalsRouter(context));
   api.use('/readings', readingsRouter(context));
   api.use('/deviations', deviationsRouter(context));
   api.use('/process', processNowRouter(context));

@@ -26,7 +26,7 @@ function ruleError(refusal: WorkflowRefusal): AppError {
 }
 
 /** The columns a change looks at before it is made. */
-interface CurrentRow {
+export interface CurrentRow {
   id: number;
   status: BatchStatus;
   kind: NewBatch['kind'];
@@ -63,7 +63,8 @@ export class BatchWrites {
     await this.db.sequelize.query(sql, { replacements: values, transaction: t });
   }
 
-  private async event(
+  /** Appends a batch event: nothing changes a batch without one. */
+  async event(
     t: Transaction,
     batchId: number,
     at: string,
@@ -77,7 +78,8 @@ export class BatchWrites {
     );
   }
 
-  private async audited(
+  /** Appends an audit entry, unless the change is demo history (options.audit false). */
+  async audited(
     t: Transaction,
     options: ChangeOptions,
     action: AuditAction,
@@ -121,8 +123,8 @@ export class BatchWrites {
     const [id] = (await this.db.sequelize.query(
       `INSERT INTO batches (lot_code, formula_id, formula_revision, formula_title, kind, status,
          operator_id, started_on, ready_on, recorded_at, updated_at, units, inputs, result,
-         checks_passed, nitrite_ppm, notes)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+         checks_passed, nitrite_ppm, notes, planned_by)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
       {
         type: QueryTypes.INSERT,
         transaction: t,
@@ -144,6 +146,8 @@ export class BatchWrites {
           batch.checksPassed ? 1 : 0,
           batch.nitritePpm,
           batch.notes,
+          // Who recorded it as planned: kept when it is started, by them or someone else.
+          batch.status === 'planned' ? batch.operatorId : null,
         ],
       },
     )) as unknown as [number, number];
@@ -174,6 +178,33 @@ export class BatchWrites {
   }
 
   /**
+   * The batch, once the move to `to` is found allowed (the status machine, the workflow rules).
+   * @throws AppError 404 no such lot, 409 'bad-transition'; the rules' refusals
+   */
+  async mayMove(
+    t: Transaction,
+    lot: string,
+    to: BatchStatus,
+    reason: string | null,
+    options: ChangeOptions,
+  ): Promise<CurrentRow> {
+    const batch = await this.current(t, lot);
+    const refused =
+      batch.status === to
+        ? `the batch is already ${to}`
+        : refusedMove(batch.status, to, batch.kind);
+    if (refused) throw conflict('bad-transition', refused, [{ from: batch.status, to }]);
+    const rule = moveRefusal(
+      { kind: batch.kind, status: batch.status, signedOff: batch.signed_off_at !== null },
+      to,
+      { role: options.actor.role, reason },
+      this.rules,
+    );
+    if (rule) throw ruleError(rule);
+    return batch;
+  }
+
+  /**
    * Moves a batch along the allowed moves, under the workflow rules; discarding needs a reason.
    * @throws AppError 400 discarding without a reason, 404 no such lot, 409 'bad-transition';
    *   the rules' 403 'signed-off', 400 'reason-needed', 409 'not-cured'; 409 'on-hold' (done
@@ -191,20 +222,8 @@ export class BatchWrites {
         { field: 'reason', message: 'is needed to discard a batch' },
       ]);
     const at = options.at ?? new Date().toISOString();
-    const batch = await this.current(t, lot);
-    const refused =
-      batch.status === to
-        ? `the batch is already ${to}`
-        : refusedMove(batch.status, to, batch.kind);
-    if (refused) throw conflict('bad-transition', refused, [{ from: batch.status, to }]);
+    const batch = await this.mayMove(t, lot, to, reason, options);
     const signedOff = batch.signed_off_at !== null;
-    const rule = moveRefusal(
-      { kind: batch.kind, status: batch.status, signedOff },
-      to,
-      { role: options.actor.role, reason },
-      this.rules,
-    );
-    if (rule) throw ruleError(rule);
     // A batch with a missed critical limit not yet corrected is on hold: it cannot be finished.
     if (to === 'done') {
       const [open] = await this.select<{ n: number }>(

@@ -27,7 +27,7 @@ export interface RecordRequest {
  *   them); RecordsError 'critical-limit' when refused
  */
 export function prepareBatch(
-  current: CurrentFormula,
+  current: Pick<CurrentFormula, 'formula' | 'revision'>,
   request: RecordRequest,
   operatorId: number,
   today: string,

@@ -10,6 +10,7 @@ import * as outbox from './migrations/004-outbox.ts';
 import * as invitations from './migrations/005-invitations.ts';
 import * as reminders from './migrations/006-reminders.ts';
 import * as processRecords from './migrations/007-process-records.ts';
+import * as startedCalculation from './migrations/008-started-calculation.ts';
 import * as processAlertPrefs from './migrations/009-process-alert-prefs.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
@@ -30,6 +31,7 @@ const MIGRATIONS = [
   invitations,
   reminders,
   processRecords,
+  startedCalculation,
   processAlertPrefs,
 ];
 

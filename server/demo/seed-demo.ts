@@ -2,11 +2,12 @@ import type { AppContext } from '../app-context.ts';
 import { DEMO_PEOPLE } from './demo-people.ts';
 import { seedBatches } from './seed-batches.ts';
 import { seedEquipment } from './seed-equipment.ts';
+import { seedProcess } from './seed-process.ts';
 
 /**
- * Fills an empty demo database with the invented kitchen's people, a few weeks of their batches
- * and a few days of their equipment logs. Runs only in demo mode and only when there is nobody
- * yet, so restarting the demo keeps what was done in it.
+ * Fills an empty demo database with the invented kitchen's people, a few weeks of their batches,
+ * the process records of a few of them and a few days of their equipment logs. Runs only in demo
+ * mode and only when there is nobody yet, so restarting the demo keeps what was done in it.
  */
 export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }> {
   if ((await context.people.count()) > 0) return { seeded: false };
@@ -14,6 +15,7 @@ export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }
     for (const person of DEMO_PEOPLE) await context.people.add(person, transaction);
   });
   await seedBatches(context);
+  await seedProcess(context);
   await seedEquipment(context);
   return { seeded: true };
 }

@@ -8,7 +8,7 @@ interface DemoEquipment {
   readonly name: string;
   readonly kind: EquipmentKind;
   readonly control: EquipmentControl;
-  /** Hours between the demo's readings (or days between ice-point checks). */
+  /** Hours between the demo's readings (a thermometer's: how long ago it was checked). */
   readonly everyHours: number;
   readonly values: readonly string[];
 }
@@ -89,7 +89,10 @@ export async function seedEquipment(context: AppContext): Promise<void> {
     );
     const by = cook?.id ?? null;
     for (const item of DEMO_EQUIPMENT) {
-      const first = latest - (item.values.length - 1) * item.everyHours * HOUR_MS;
+      const first =
+        item.kind === 'thermometer'
+          ? latest - item.everyHours * HOUR_MS
+          : latest - (item.values.length - 1) * item.everyHours * HOUR_MS;
       const created = new Date(first - item.everyHours * HOUR_MS).toISOString();
       const id = await insertEquipment(context, t, item, created);
       const at = (index: number) =>

@@ -7,7 +7,7 @@ import { readTemperature } from '../../shared/units/temperature.ts';
 import { QuantityError } from '../../shared/units/quantity-error.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import { AppError, conflict } from '../http/app-error.ts';
-import { kitchenTimeZone } from '../process/kitchen-clock.ts';
+import { kitchenClock } from '../process/kitchen-clock.ts';
 import { openDeviation } from '../process/deviation-writes.ts';
 import { equipmentIn, type EquipmentDeps } from './equipment-writes.ts';
 import { resolvedOf } from './equipment-view.ts';
@@ -90,10 +90,7 @@ export async function recordEquipmentReading(
         },
         t,
       );
-    const state = evaluateControl(control, [{ at, value }], {
-      now: by.at,
-      timeZone: kitchenTimeZone(),
-    });
+    const state = evaluateControl(control, [{ at, value }], kitchenClock(by.at));
     const [miss] = state.misses;
     if (!miss) return { readingId: readingId, deviationId: null };
     const what = `${row.name}: ${miss.what}`;

@@ -1,5 +1,6 @@
 import type { Transaction } from 'sequelize';
 import type { Equipment } from '../../shared/api/equipment.ts';
+import { Decimal } from '../../shared/decimal.ts';
 import type { ResolvedControl } from '../../shared/process/control-types.ts';
 import {
   equipmentFormulaControl,
@@ -7,7 +8,7 @@ import {
 } from '../../shared/process/equipment-control.ts';
 import { evaluateControl } from '../../shared/process/evaluate-control.ts';
 import { resolveControl } from '../../shared/process/resolve-control.ts';
-import { kitchenTimeZone } from '../process/kitchen-clock.ts';
+import { kitchenClock } from '../process/kitchen-clock.ts';
 import type { EquipmentRow, EquipmentRows } from './equipment-rows.ts';
 
 /** The control a piece of equipment is judged by, resolved (its limit canonical, every in s). */
@@ -18,14 +19,21 @@ export function resolvedOf(row: Pick<EquipmentRow, 'name' | 'kind' | 'control'>)
 /** ISO time `seconds` after an ISO time. */
 export function after(iso: string, seconds: string | null): string | null {
   if (seconds === null) return null;
-  return new Date(Date.parse(iso) + Math.round(Number(seconds) * 1000)).toISOString();
+  return new Date(
+    Date.parse(iso) + new Decimal(seconds).times(1000).round().toNumber(),
+  ).toISOString();
 }
+
+const DAY_S = 86_400;
 
 /** The limit and how often, in words, with the source. */
 function limitWordsOf(row: EquipmentRow, control: ResolvedControl): string {
   const every = row.control.every;
-  if (row.kind === 'thermometer')
-    return `Ice-point check every ${every}: within 1 °C (2 °F) of 0 °C (32 °F) in ice water`;
+  if (row.kind === 'thermometer') {
+    const days = control.everyS === null ? null : new Decimal(control.everyS).div(DAY_S);
+    const often = days?.isInteger() ? `${days.toString()} ${days.eq(1) ? 'day' : 'days'}` : every;
+    return `Ice-point check every ${often}: within 1 °C (2 °F) of 0 °C (32 °F) in ice water`;
+  }
   const limit = readingLimitWords(control) ?? control.rule ?? 'its limit';
   return `${limit}, every ${every} · ${control.source}`;
 }
@@ -51,7 +59,7 @@ export async function viewOf(
     : evaluateControl(
         control,
         lastReading ? [{ at: lastReading.at, value: lastReading.value }] : [],
-        { now: now.toISOString(), timeZone: kitchenTimeZone() },
+        kitchenClock(now),
       );
   const last = lastReading?.at ?? lastCalibration?.at;
   const nextDue = !row.active

@@ -65,7 +65,8 @@ function gramsOf(request: ActionRequest): string | null {
 
 interface DeviationAt {
   id: number;
-  lot_code: string | null;
+  /** What it concerns: the batch's lot code, or the piece of equipment's name. */
+  subject: string | null;
   standing: number | null;
 }
 
@@ -88,13 +89,14 @@ export async function recordAction(
   const at = by.at ?? new Date().toISOString();
   return deps.db.write(async (t) => {
     const [deviation] = await deps.db.sequelize.query<DeviationAt>(
-      `SELECT d.id, b.lot_code,
+      `SELECT d.id, COALESCE(b.lot_code, e.name) AS subject,
          (SELECT a.id FROM corrective_actions a WHERE a.deviation_id = d.id AND NOT EXISTS
            (SELECT 1 FROM corrective_actions c WHERE c.corrects_id = a.id)) AS standing
-       FROM deviations d LEFT JOIN batches b ON b.id = d.batch_id WHERE d.id = ?`,
+       FROM deviations d LEFT JOIN batches b ON b.id = d.batch_id
+         LEFT JOIN equipment e ON e.id = d.equipment_id WHERE d.id = ?`,
       { replacements: [deviationId], type: QueryTypes.SELECT, transaction: t },
     );
-    if (!deviation?.lot_code) throw notFound(`no deviation ${deviationId} of a batch`);
+    if (!deviation?.subject) throw notFound(`no deviation ${deviationId}`);
     const reason = request.reason?.trim() || null;
     if (deviation.standing !== null && !reason)
       throw new AppError(
@@ -126,7 +128,7 @@ export async function recordAction(
       {
         actor: by.actor,
         action: 'corrective-action',
-        subject: deviation.lot_code,
+        subject: deviation.subject,
         detail: {
           deviation: deviationId,
           action: actionId,
@@ -138,10 +140,7 @@ export async function recordAction(
       },
       t,
     );
-    const batch = await deps.process.batch(deviation.lot_code, t);
-    const { key: _key, ...closed } = (await deps.process.deviations(batch.id, t)).find(
-      (d) => d.id === deviationId,
-    )!;
+    const { key: _key, ...closed } = (await deps.process.deviation(deviationId, t))!;
     return closed;
   });
 }

@@ -1,4 +1,5 @@
 import type { AppContext } from '../app-context.ts';
+import { PeriodicRun } from '../reminders/periodic-run.ts';
 import { deviationsToOpen, judgeBatch } from './judge-batch.ts';
 import { judgeAndOpen, type ProcessDeps } from './judge-and-open.ts';
 import { kitchenClock } from './kitchen-clock.ts';
@@ -16,7 +17,7 @@ export interface DeadlineScanOptions {
   readonly report?: (error: unknown) => void;
 }
 
-/** What one run opened: the lot and the dedupe key of each deviation. */
+/** What one run opened: each deviation's id and the lot it holds. */
 export interface ScanRun {
   readonly at: string;
   readonly opened: readonly { readonly lotCode: string; readonly deviation: number }[];
@@ -29,54 +30,19 @@ export interface ScanRun {
  * server on the same database — opens it twice. A batch is read first and written only when it
  * has a miss not yet opened.
  */
-export class DeadlineScan {
+export class DeadlineScan extends PeriodicRun<ScanRun> {
   private readonly now: () => Date;
-  private readonly intervalMs: number;
-  private readonly report: (error: unknown) => void;
-  private timer: NodeJS.Timeout | null = null;
-  private last: Promise<unknown> = Promise.resolve();
 
   constructor(
     private readonly deps: ProcessDeps,
     context: Pick<AppContext, 'now'>,
     options: DeadlineScanOptions = {},
   ) {
+    super(options.intervalMs ?? SCAN_EVERY_MS, options.report);
     this.now = options.now ?? context.now;
-    this.intervalMs = options.intervalMs ?? SCAN_EVERY_MS;
-    this.report = options.report ?? logError;
   }
 
-  /** Runs now, then every interval, until stop(). */
-  start(): void {
-    if (this.timer) return;
-    void this.tick();
-    this.timer = setInterval(() => void this.tick(), this.intervalMs);
-    this.timer.unref();
-  }
-
-  /** Stops the timer and waits for a run going on. */
-  async stop(): Promise<void> {
-    if (this.timer) clearInterval(this.timer);
-    this.timer = null;
-    await this.last.catch(() => undefined);
-  }
-
-  /** One run, after any run going on has finished (runs never overlap in this process). */
-  runOnce(): Promise<ScanRun> {
-    const run = this.last.catch(() => undefined).then(() => this.run());
-    this.last = run;
-    return run;
-  }
-
-  private async tick(): Promise<void> {
-    try {
-      await this.runOnce();
-    } catch (error) {
-      this.report(error);
-    }
-  }
-
-  private async run(): Promise<ScanRun> {
+  protected async run(): Promise<ScanRun> {
     const { process, db } = this.deps;
     const at = this.now().toISOString();
     const opened: { lotCode: string; deviation: number }[] = [];
@@ -101,8 +67,4 @@ export class DeadlineScan {
     }
     return { at, opened };
   }
-}
-
-function logError(error: unknown): void {
-  console.error(error instanceof Error ? (error.stack ?? error.message) : error); // eslint-disable-line no-console -- the server log is the place for a failed run
 }

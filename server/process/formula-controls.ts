@@ -14,7 +14,8 @@ const CACHED = 500;
 export class FormulaControls {
   private readonly cache = new Map<string, readonly ResolvedControl[]>();
 
-  constructor(private readonly history: FormulaHistory) {}
+  /** @param history the formulas' history, which the weights' records read revisions from too */
+  constructor(readonly history: FormulaHistory) {}
 
   /** The resolved controls of one revision, in the formula's order; none when it has none. */
   async of(formulaId: string, revision: string): Promise<readonly ResolvedControl[]> {

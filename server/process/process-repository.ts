@@ -5,6 +5,7 @@ import type {
   Deviation,
   ProcessRecord,
   Reading,
+  Verification,
 } from '../../shared/api/process-record.ts';
 import type { ResolvedControl } from '../../shared/process/control-types.ts';
 import type { Database } from '../db/database.ts';
@@ -13,6 +14,8 @@ import { notFound } from '../http/app-error.ts';
 import type { FormulaControls } from './formula-controls.ts';
 import { judgeBatch } from './judge-batch.ts';
 import { kitchenClock } from './kitchen-clock.ts';
+import { weighedPart } from './weighed-record.ts';
+import { WEIGHINGS_SQL } from './weighing-rows.ts';
 import {
   STAMP_COLUMNS,
   correctedByOf,
@@ -78,8 +81,9 @@ const ACTIONS_SQL = `SELECT ${STAMP_COLUMNS}, x.deviation_id, x.cause, x.restore
   FROM deviations d JOIN corrective_actions x ON x.deviation_id = d.id
   LEFT JOIN people rp ON rp.id = x.recorded_by WHERE d.batch_id = ? ORDER BY x.id`;
 
-const WEIGHINGS_SQL = `SELECT ${STAMP_COLUMNS}, x.kind, x.name, x.planned_grams, x.grams, x.weighed_at
-  FROM weighings x LEFT JOIN people rp ON rp.id = x.recorded_by WHERE x.batch_id = ? ORDER BY x.id`;
+/** One deviation (of a batch or a piece of equipment) by id, and its actions. */
+const DEVIATION_SQL = DEVIATIONS_SQL.replace('WHERE d.batch_id = ?', 'WHERE d.id = ?');
+const DEVIATION_ACTIONS_SQL = ACTIONS_SQL.replace('WHERE d.batch_id = ?', 'WHERE d.id = ?');
 
 const VERIFICATION_SQL = `SELECT ${STAMP_COLUMNS}, x.note
   FROM verifications x LEFT JOIN people rp ON rp.id = x.recorded_by
@@ -195,6 +199,27 @@ export class ProcessRepository {
     }));
   }
 
+  /** One deviation by id, of a batch or of a piece of equipment, with its actions. */
+  async deviation(id: number, t?: Transaction): Promise<KeyedDeviation | null> {
+    const [row] = await this.select<DeviationRow>(DEVIATION_SQL, [id], t);
+    if (!row) return null;
+    const actionRows = await this.select<ActionRow>(DEVIATION_ACTIONS_SQL, [id], t);
+    const correctedBy = correctedByOf(actionRows);
+    return {
+      ...toDeviation(
+        row,
+        actionRows.map((a) => toAction(a, correctedBy)),
+      ),
+      key: row.dedupe_key,
+    };
+  }
+
+  /** The verification that released a batch, if any. */
+  async verification(batchId: number, t?: Transaction): Promise<Verification | null> {
+    const [row] = await this.select<VerificationRow>(VERIFICATION_SQL, [batchId], t);
+    return row ? toVerification(row) : null;
+  }
+
   /** The batches being made (in progress, curing, proofing), oldest first. */
   async beingMade(): Promise<ProcessBatch[]> {
     return (await this.select<BatchRow>(BEING_MADE_SQL, [])).map(toBatch);
@@ -225,23 +250,24 @@ export class ProcessRepository {
   async record(lot: string, now: string, t?: Transaction): Promise<ProcessRecord> {
     const row = await this.batchRow(lot, t);
     const batch = toBatch(row);
-    const [{ controls }, deviations, weighingRows, [verification]] = await Promise.all([
+    const [{ controls }, deviations, weighingRows, verification] = await Promise.all([
       this.judged(batch, now, t),
       this.deviations(batch.id, t),
       this.select<WeighingRow>(WEIGHINGS_SQL, [batch.id], t),
-      this.select<VerificationRow>(VERIFICATION_SQL, [batch.id], t),
+      this.verification(batch.id, t),
     ]);
     const weighingCorrections = correctedByOf(weighingRows);
+    const weighings = weighingRows.map((w) => toWeighing(w, weighingCorrections));
     return {
       lotCode: batch.lotCode,
       controls,
-      weighings: weighingRows.map((w) => toWeighing(w, weighingCorrections)),
-      // Worked out from the weighed lines by the weights records; none from readings alone.
-      actualNitritePpm: null,
+      weighings,
+      // The ingoing nitrite and yields on the weights as weighed, the plan a start replaced.
+      ...(await weighedPart(this.db, this.controls.history, batch.id, weighings, t)),
       deviations: deviations.map(({ key: _key, ...deviation }) => deviation),
       onHold: deviations.some((d) => d.action === null),
       nonconforming: deviations.length > 0,
-      verification: verification ? toVerification(verification) : null,
+      verification,
       plannedBy: personRef(row.planned_by, row.planner_name),
       startedBy: personRef(row.started_by, row.starter_name),
       startedAt: row.started_at,

@@ -1,3 +1,4 @@
+import { QueryTypes } from 'sequelize';
 import type { Verification } from '../../shared/api/process-record.ts';
 import type { WorkflowRules } from '../../shared/workflow/workflow-rules.ts';
 import { verifyRefusal } from '../../shared/workflow/release-rules.ts';
@@ -6,9 +7,6 @@ import { insertRow } from '../db/insert-row.ts';
 import { AppError, conflict } from '../http/app-error.ts';
 import { controlClosed } from './judge-batch.ts';
 import { judgeAndOpen, type ProcessDeps } from './judge-and-open.ts';
-import { toVerification, type VerificationRow } from './process-rows.ts';
-import { STAMP_COLUMNS } from './process-rows.ts';
-import { QueryTypes } from 'sequelize';
 
 /**
  * Records the pre-shipment review of a batch's records (9 CFR 417.5(c)), which releases it: only
@@ -85,10 +83,5 @@ export async function verifyBatch(
     return undefined;
   });
   if (refusal) throw new AppError(refusal.status, refusal.code, refusal.message);
-  const [row] = await deps.db.sequelize.query<VerificationRow>(
-    `SELECT ${STAMP_COLUMNS}, x.note FROM verifications x LEFT JOIN people rp ON rp.id = x.recorded_by
-     WHERE x.batch_id = ? ORDER BY x.id DESC LIMIT 1`,
-    { replacements: [found.id], type: QueryTypes.SELECT },
-  );
-  return toVerification(row!);
+  return (await deps.process.verification(found.id))!;
 }

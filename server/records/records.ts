@@ -26,6 +26,19 @@ import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-p
 import { recordPlan } from '../plans/record-plan.ts';
 import type { ProducedReport, ReportFormat, ReportRequest } from '../reports/produce-report.ts';
 import { REPORT_ROLES } from '../reports/report-roles.ts';
+import type {
+  Refusal,
+  StartRequest,
+  WeighingAnswer,
+  WeighingRequest,
+} from '../../shared/api/process-record.ts';
+import { startBatch, type StartAnswer } from '../batches/start-batch.ts';
+import { listRefusals } from '../process/refusals.ts';
+import {
+  addWeighings,
+  correctWeighing,
+  type WeighingCorrection,
+} from '../process/weighing-writes.ts';
 import { RecordsError, recordsErrorOf } from './records-error.ts';
 import type {
   Deviation,
@@ -52,7 +65,13 @@ export type {
   Person,
   PersonKey,
   RecordRequest,
+  Refusal,
   Role,
+  StartAnswer,
+  StartRequest,
+  WeighingAnswer,
+  WeighingCorrection,
+  WeighingRequest,
 };
 export type { SheetRecord, SheetSource };
 export type { ProducedReport, ReportFormat, ReportRequest };
@@ -127,6 +146,37 @@ export class Records {
   /** Signs a batch off, with an optional note. */
   signOff(lot: string, note: string | null, by: ChangeOptions): Promise<Batch> {
     return this.guard(() => this.deps.batches.signOff(lotCodeOf(lot), note, by));
+  }
+
+  // Weights as weighed, starting a planned batch, refused calculations (the process record).
+
+  /** Records lines and a stage weight as weighed; deviations open where the weights miss a limit. */
+  addWeighings(lot: string, request: WeighingRequest, by: ChangeOptions): Promise<WeighingAnswer> {
+    return this.guard(() => addWeighings(this.deps, lot, request, by));
+  }
+
+  /** Corrects one weighing with a new entry that says why; the old one is kept. */
+  correctWeighing(
+    id: number,
+    correction: WeighingCorrection,
+    by: ChangeOptions,
+  ): Promise<WeighingAnswer> {
+    return this.guard(() => correctWeighing(this.deps, id, correction, by));
+  }
+
+  /** Starts a planned batch on what is really there; refused (and recorded) over a critical limit. */
+  startBatch(
+    lot: string,
+    request: StartRequest,
+    today: string,
+    by: ChangeOptions,
+  ): Promise<StartAnswer> {
+    return this.guard(() => startBatch(lot, request, today, this.deps, by));
+  }
+
+  /** The calculations refused over a critical limit from one day to another (both included). */
+  listRefusals(range: { from?: string; to?: string }): Promise<Refusal[]> {
+    return this.guard(() => listRefusals(this.deps.db, range));
   }
 
   // Process records (HACCP): the readings at each control, their corrections, logger files,

@@ -7,6 +7,8 @@
  * entry it replaces; the replaced one stays, marked `correctedBy`.
  */
 import type { ControlState, Measure, ResolvedControl } from '../process/control-types.ts';
+import type { RawBatchOptions } from '../calculation/batch-input.ts';
+import type { PresentedResult } from '../presentation/presented-result.ts';
 import type { PersonRef } from './batch-record.ts';
 
 /** Who wrote an entry and when; the reason is given only for a correction. */
@@ -60,6 +62,70 @@ export interface Weighing extends EntryStamp {
 /** The stage weights a batch can record, in the order of the work. */
 export type StageName = 'green' | 'pumped' | 'cured' | 'smoked' | 'cooked' | 'sliced';
 
+/** A stage weight over the weight before it, as a percent, beside what the formula expects. */
+export interface ActualYield {
+  readonly stage: StageName;
+  /** The stage it is compared with; null for the batch's own weight as calculated (green, total). */
+  readonly from: StageName | null;
+  /** The standing weight of the stage, grams. */
+  readonly grams: string;
+  /** stage ÷ from × 100, exact. */
+  readonly percent: string;
+  /** The formula's yields over the same steps (pumped: 100 + the pump target); null when none. */
+  readonly planned: string | null;
+}
+
+/** POST /api/batches/:lot/weighings: lines by their name on the sheet, and/or one stage. */
+export interface WeighingRequest {
+  /** Weights with their unit: "1.25 kg", "2 lb 3 oz". */
+  readonly lines?: readonly { readonly name: string; readonly weight: string }[];
+  readonly stage?: { readonly name: StageName; readonly weight: string; readonly at?: string };
+}
+
+/** The answer to weighings or a correction: what was written and what it means for the batch. */
+export interface WeighingAnswer {
+  readonly weighings: readonly Weighing[];
+  /** Ingoing nitrite on the actual weights (cures, once a line is weighed); null otherwise. */
+  readonly actualNitritePpm: string | null;
+  /** The first deviation this opened (see `deviations`); null when none. */
+  readonly deviation: Deviation | null;
+  /** Every deviation this opened: an actual nitrite over its limit, a pump over its target. */
+  readonly deviations: readonly Deviation[];
+  /** What the weights say, in a cook's words, a deviation first: figure, limit, what to do. */
+  readonly messages: readonly string[];
+}
+
+/** The planned calculation of a batch that has since been started on what was really there. */
+export interface PlannedCalculation {
+  readonly revision: string;
+  readonly startedOn: string;
+  readonly readyOn: string | null;
+  readonly inputs: RawBatchOptions;
+  readonly nitritePpm: string | null;
+  readonly checksPassed: boolean;
+  readonly result: PresentedResult;
+}
+
+/** POST /api/batches/:lot/start: the batch options as really there (green weight, start…). */
+export interface StartRequest {
+  readonly batch: RawBatchOptions;
+}
+
+/** A calculation refused over a critical limit, as GET /api/refusals lists it. */
+export interface Refusal {
+  readonly id: number;
+  /** ISO time it was refused. */
+  readonly at: string;
+  readonly by: PersonRef | null;
+  readonly formula: string;
+  readonly revision: string | null;
+  readonly inputs: RawBatchOptions;
+  /** The failed checks in words: "critical limit exceeded: ingoing sodium nitrite …". */
+  readonly failed: readonly string[];
+  /** The planned batch a refused start was for; null for a new record. */
+  readonly lotCode: string | null;
+}
+
 /** What happened to the product after a deviation (9 CFR 417.3(a)(4)). */
 export type Disposition = 'recooked' | 'rechilled' | 'reworked' | 'diverted' | 'discarded';
 
@@ -109,6 +175,10 @@ export interface ProcessRecord {
   readonly weighings: readonly Weighing[];
   /** Ingoing nitrite, ppm, worked out again from the actual line weights; null until weighed. */
   readonly actualNitritePpm: string | null;
+  /** Each stage weighed over the stage before it, beside the formula's yield; oldest stage first. */
+  readonly actualYields: readonly ActualYield[];
+  /** The calculation the batch was planned with, kept when it was started; null if never planned. */
+  readonly planned: PlannedCalculation | null;
   readonly deviations: readonly Deviation[];
   /** Open deviations hold the batch: it cannot be marked done or released. */
   readonly onHold: boolean;

@@ -55,26 +55,18 @@ export function equipmentFormulaControl(
 }
 
 /**
- * What is wrong with a piece of equipment's control beyond what the formula checks see, in
- * words: a thermometer's control says only how often it is checked, any other equipment needs a
- * template or an own limit, checked on a schedule.
+ * What is wrong with a thermometer's control, in words: it says only how often the thermometer is
+ * checked, since its limit is the ice-point check. Other equipment's controls get the formula
+ * checks (check-equipment-control.ts).
  */
 export function equipmentControlProblems(kind: EquipmentKind, control: EquipmentControl): string[] {
-  if (kind === 'thermometer') {
-    const extra = Object.keys(control).filter((key) => key !== 'every');
-    return extra.length === 0
-      ? []
-      : [
-          `a thermometer is held to the ice-point check; its control says only how often it is checked (every), not ${extra.join(', ')}`,
-        ];
-  }
-  if ((control.rule === undefined) === (control.limit === undefined))
-    return ['give either a template (rule) or a limit of your own with its source'];
-  if (control.limit !== undefined && !control.source?.trim())
-    return [
-      'a limit of your own needs its source: the validation or the published work it comes from',
-    ];
-  return [];
+  if (kind !== 'thermometer') return [];
+  const extra = Object.keys(control).filter((key) => key !== 'every');
+  return extra.length === 0
+    ? []
+    : [
+        `a thermometer is held to the ice-point check; its control says only how often it is checked (every), not ${extra.join(', ')}`,
+      ];
 }
 
 /**

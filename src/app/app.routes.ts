@@ -23,6 +23,7 @@ export const routes: Routes = [
       { path: 'batches', loadChildren: () => import('./batches/batches.routes') },
       { path: 'curing', loadChildren: () => import('./curing/curing.routes') },
       { path: 'plans', loadChildren: () => import('./plans/plans.routes') },
+      { path: 'equipment', loadChildren: () => import('./equipment/equipment.routes') },
       {
         path: 'reports',
         canMatch: [roleGuard('admin', 'reviewer')],

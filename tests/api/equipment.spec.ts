@@ -80,6 +80,25 @@ describe('equipment readings', () => {
     assert.equal(audit.json.events[0].subject, 'Walk-in cooler');
   });
 
+  it('should close an equipment deviation with a corrective action, as any other', async (t) => {
+    const server = await startTestServer(t);
+    const { id } = await cooler(server);
+    const warm = await server.as('tobin').post(`/api/equipment/${id}/readings`, { value: '9 °C' });
+    const deviationId = warm.json.deviation.id;
+    const action = await server.as('tobin').post(`/api/deviations/${deviationId}/action`, {
+      cause: 'The door was left ajar during a delivery.',
+      restored: 'Door shut; read 3.5 °C half an hour later.',
+      prevention: 'A door alarm after two minutes open.',
+      disposition: 'rechilled',
+    });
+    assert.equal(action.status, 201, action.text);
+    assert.equal(action.json.deviation.action.disposition, 'rechilled');
+    const [closed] = await deviationsOf(server, id);
+    assert.equal(closed.closed, true);
+    const audit = await server.as('rosa').get('/api/audit?action=corrective-action');
+    assert.equal(audit.json.events[0].subject, 'Walk-in cooler');
+  });
+
   it('should say the next reading is due every 4 h after the last', async (t) => {
     const server = await startTestServer(t);
     const { id } = await cooler(server);

@@ -19,8 +19,15 @@ import type { ApiResponse } from '../helpers/test-server.ts';
 /** Every route the API serves. */
 const ALL_ROUTES: readonly RouteCase[] = [...ROUTES, ...EXTRA_ROUTES];
 
-/** Tables written by the routes beyond api-calls.ts's TABLES: mail, invitations, reminders. */
-const MORE_TABLES = ['outbox', 'invitations', 'reminder_prefs', 'reminders_sent'];
+/** Tables written by the routes beyond api-calls.ts's TABLES: mail, invitations, reminders, weights. */
+const MORE_TABLES = [
+  'outbox',
+  'invitations',
+  'reminder_prefs',
+  'reminders_sent',
+  'weighings',
+  'refusals',
+];
 
 /** Tries per route: bodies (routes that take one) and query strings. */
 const BODY_RUNS = 8;
@@ -218,28 +225,45 @@ async function stored(server: Fixture['server']): Promise<Stored> {
   return { snapshot: await snapshot(server), more };
 }
 
+/** A 4xx that writes one audit entry on purpose, and nothing else but `table`, if given. */
+function auditedOnly(before: Stored, after: Stored, what: string, table?: string): void {
+  const strip = (counts: Readonly<Record<string, number>>) => {
+    const { audit_events: _audit, ...rest } = counts;
+    return rest;
+  };
+  const without = (more: Readonly<Record<string, number>>) =>
+    Object.fromEntries(Object.entries(more).filter(([name]) => name !== table));
+  assert.deepEqual(
+    {
+      ...after,
+      more: without(after.more),
+      snapshot: { ...after.snapshot, counts: strip(after.snapshot.counts) },
+    },
+    {
+      ...before,
+      more: without(before.more),
+      snapshot: { ...before.snapshot, counts: strip(before.snapshot.counts) },
+    },
+    what,
+  );
+  const written = after.snapshot.counts.audit_events - before.snapshot.counts.audit_events;
+  assert.ok(written <= 1, `${what}: one audit entry at most`);
+}
+
 /**
  * The two properties: never a 5xx, and a 4xx (with its JSON error) leaves every table and every
- * formula file as it was. A refused sign-in is the one 4xx that writes: it is audited on purpose.
+ * formula file as it was. Two 4xx write on purpose: a refused sign-in is audited, and a
+ * calculation refused over a critical limit is kept as a refusal with its audit entry.
  */
 function check(route: RouteCase, response: ApiResponse, before: Stored, after: Stored): void {
   const what = `${route.method} ${route.route}: ${response.status} ${response.text.slice(0, 300)}`;
   assert.ok(response.status < 500, what);
   if (response.status < 400) return;
   assertErrorEnvelope(response, what);
-  if (route.route === '/api/session' && response.status === 401) {
-    const { audit_events: auditBefore, ...countsBefore } = before.snapshot.counts;
-    const { audit_events: auditAfter, ...countsAfter } = after.snapshot.counts;
-    assert.deepEqual(
-      { ...after, snapshot: { ...after.snapshot, counts: countsAfter } },
-      {
-        ...before,
-        snapshot: { ...before.snapshot, counts: countsBefore },
-      },
-    );
-    assert.ok(auditAfter - auditBefore <= 1, `${what}: one audit entry at most`);
-    return;
-  }
+  if (route.route === '/api/session' && response.status === 401)
+    return auditedOnly(before, after, what);
+  if (response.status === 422 && response.json?.error?.code === 'critical-limit')
+    return auditedOnly(before, after, what, 'refusals');
   assert.deepEqual(after, before, `${what}: a refused request wrote something`);
 }
 

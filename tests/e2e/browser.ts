@@ -68,11 +68,17 @@ export async function launchChromium(t: AfterHook): Promise<Browser> {
 /**
  * Starts the real server (temporary database, demo data, the built console from dist/console)
  * and headless Chromium; both stop when the test ends. No request leaves 127.0.0.1.
+ * @param options.now the server's clock, for tests that move time on (a cooling deadline)
  */
-export async function startConsole(t: AfterHook): Promise<ConsoleSession> {
-  const server = await startTestServer(t, {
-    LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser'),
-  });
+export async function startConsole(
+  t: AfterHook,
+  options: { now?: () => Date } = {},
+): Promise<ConsoleSession> {
+  const server = await startTestServer(
+    t,
+    { LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser') },
+    options,
+  );
   const browser = await launchChromium(t);
   mkdirSync(ARTIFACTS, { recursive: true });
   return {

@@ -8,8 +8,9 @@ import {
   type Sender,
   type Snapshot,
 } from './api-calls.ts';
-import { PROCESS_ROUTES } from './process-routes.ts';
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
+import { PROCESS_ROUTES } from './process-routes.ts';
+import { WEIGHTS_ROUTES } from './weights-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
 
 /** The callers of the role matrix. */
@@ -191,6 +192,12 @@ export const ROUTES: readonly RouteCase[] = [
     path: `/api/batches/${await cooksLot(fx)}/sign-off`,
     body: { note: 'Checked the sheet.' },
   })),
+  // Process records (HACCP): readings, corrections, logger files, corrective actions, release.
+  // Before the password routes: a password changed ends the setup's session, which these use.
+  ...PROCESS_ROUTES,
+  // Weights as weighed, starting a planned batch, refused calculations.
+  ...WEIGHTS_ROUTES,
+  ...EQUIPMENT_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',
@@ -224,9 +231,6 @@ export const ROUTES: readonly RouteCase[] = [
       `/api/reports/${name}?from=2026-01-05&to=2026-01-05`,
     ),
   ),
-  // Process records (HACCP): readings, corrections, logger files, corrective actions, release.
-  ...PROCESS_ROUTES,
-  ...EQUIPMENT_ROUTES,
 ];
 
 /** What a cell expects, in words for its test name. */

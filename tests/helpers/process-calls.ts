@@ -47,9 +47,11 @@ const CONTROLS = `controls:
     every: 4 h
 `;
 
-/** The demo belly's text as a formula of its own, with the controls. */
+/** The demo belly's text as a formula of its own, with these controls instead of its own. */
 export function controlledFormulaYaml(): string {
-  const belly = readFileSync(path.join(REPO_ROOT, 'formulas', 'quillmoor-belly.yaml'), 'utf8');
+  const demo = readFileSync(path.join(REPO_ROOT, 'formulas', 'quillmoor-belly.yaml'), 'utf8');
+  // Its own controls, with the comment above them: to the next top-level key or the end.
+  const belly = demo.replace(/(?:^#.*\n)*^controls:\n(?:[ #].*\n|\n)*/m, '');
   return `${belly
     .replace('id: quillmoor-belly', `id: ${CONTROLLED}`)
     .replace(/^title: .*$/m, 'title: Test belly, smoked, cooked and chilled')}${CONTROLS}`;
@@ -68,6 +70,9 @@ export async function startProcessServer(t: {
 }): Promise<{ server: TestServer; clock: HandClock }> {
   const clock = handClock(new Date(T0));
   const server = await startTestServer(t, {}, { now: clock.now });
+  const seeded = new Map<string, number>();
+  for (const table of COUNTED_TABLES) seeded.set(table, await maxId(server, table));
+  DEMO_ROWS.set(server, seeded);
   writeFileSync(path.join(server.formulasDir, `${CONTROLLED}.yaml`), controlledFormulaYaml());
   server.context.formulas.changed();
   return { server, clock };
@@ -111,11 +116,34 @@ export async function processOf(server: TestServer, lot: string): Promise<Proces
   return response.json as ProcessRecord;
 }
 
-/** Rows in a table, straight from the server's database. */
+/** The tables whose rows the tests count. */
+const COUNTED_TABLES = [
+  'readings',
+  'deviations',
+  'corrective_actions',
+  'verifications',
+  'weighings',
+];
+
+/** Per server, the highest row id of each counted table once the demo kitchen was seeded. */
+const DEMO_ROWS = new WeakMap<TestServer, ReadonlyMap<string, number>>();
+
+async function maxId(server: TestServer, table: string): Promise<number> {
+  const [row] = await server.context.db.sequelize.query<{ n: number | null }>(
+    `SELECT MAX(id) AS n FROM ${table}`,
+    { type: QueryTypes.SELECT },
+  );
+  return row?.n ?? 0;
+}
+
+/**
+ * Rows in a table written since the server started, straight from its database: the demo
+ * kitchen's own process records (seeded at the start) are not counted.
+ */
 export async function rowCount(server: TestServer, table: string): Promise<number> {
   const [row] = await server.context.db.sequelize.query<{ n: number }>(
-    `SELECT COUNT(*) AS n FROM ${table}`,
-    { type: QueryTypes.SELECT },
+    `SELECT COUNT(*) AS n FROM ${table} WHERE id > ?`,
+    { replacements: [DEMO_ROWS.get(server)?.get(table) ?? 0], type: QueryTypes.SELECT },
   );
   return row!.n;
 }

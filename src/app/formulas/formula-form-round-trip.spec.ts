@@ -85,3 +85,20 @@ describe('the structured form, blend keys it has no box for', () => {
     assert.deepEqual(formulaFromForm(form, formula), formula);
   });
 });
+
+describe('the structured form and process controls', () => {
+  it('should keep the controls when a cure is edited and saved from the form', () => {
+    const text = readFileSync(new URL('maple-pump-belly.yaml', FOLDER), 'utf8');
+    const formula = parseFormulaYaml(text);
+    assert.ok(formula?.controls && formula.controls.length > 0);
+    const fb = new FormBuilder().nonNullable;
+    const form = createFormulaForm(fb);
+    fillFormulaForm(form, formula, fb);
+    form.controls.title.setValue('Maple belly, injected, for brunch');
+    const back = formulaFromForm(form, formula);
+    assert.deepEqual(back.controls, formula.controls);
+    const saved = parseFormulaYaml(writeFormulaYaml(text, back));
+    assert.equal(saved?.title, 'Maple belly, injected, for brunch');
+    assert.deepEqual(saved?.controls, formula.controls);
+  });
+});

@@ -120,7 +120,9 @@ export function formulaFromForm(form: FormulaForm, base: Formula): Formula {
       };
       break;
   }
-  return withoutUndefined(dropEmpty(formula)) as unknown as Formula;
+  // Process controls are edited as YAML; an empty list the file wrote ("none here") stays.
+  const controls = base.controls === undefined ? {} : { controls: base.controls };
+  return withoutUndefined({ ...dropEmpty(formula), ...controls }) as unknown as Formula;
 }
 
 /** One ingredient: name and pct, the kind's own keys, allergens and the untouched rest. */

@@ -20,6 +20,9 @@ import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { BatchLog } from '../batch-log/batch-log';
 import { offeredMoves, signOffBlocked, type OfferedMove } from '../batch-status';
 import type { FormulaKind } from '../batch-types';
+import { HoldBanner } from '../process/hold-banner/hold-banner';
+import { ProcessSection } from '../process/process-section/process-section';
+import { ProcessStore } from '../process/process-store';
 import { BatchStore } from './batch-store';
 import { ReasonDialog, type ReasonDialogData } from './reason-dialog';
 import { SignOffDialog, type SignOff, type SignOffDialogData } from './sign-off-dialog';
@@ -50,8 +53,10 @@ const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
     BatchStatusChip,
     IsoDayPipe,
     StatusTimeline,
+    HoldBanner,
+    ProcessSection,
   ],
-  providers: [BatchStore],
+  providers: [BatchStore, ProcessStore],
   templateUrl: './batch-page.html',
   styleUrl: './batch-page.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -61,6 +66,7 @@ export default class BatchPage {
   private readonly dialog = inject(MatDialog);
   private readonly log = inject(BatchLog);
   protected readonly store = inject(BatchStore);
+  protected readonly process = inject(ProcessStore);
 
   /** The lot code from the address. */
   readonly lot = input.required<string>();
@@ -71,12 +77,17 @@ export default class BatchPage {
     const batch = this.batch();
     const person = this.session.person();
     if (!batch || !person || !this.session.hasRole('admin', 'cook')) return [];
-    return offeredMoves(batch, person, this.store.rules());
+    // A planned batch starts through "Start this batch", on what is really there.
+    return offeredMoves(batch, person, this.store.rules()).filter(
+      (move) => !(batch.status === 'planned' && move.to === 'in-progress'),
+    );
   });
   /** Why moves are held back, each reason once (a signed-off batch holds back every move). */
   protected readonly heldBack = computed(() => [
     ...new Set(this.moves().flatMap((move) => (move.blocked ? [move.blocked] : []))),
   ]);
+  /** Whether the signed-in person records corrective actions. */
+  protected readonly canAct = computed(() => this.session.hasRole('admin', 'cook', 'reviewer'));
   protected readonly canSignOff = computed(() => {
     const batch = this.batch();
     return (
@@ -120,7 +131,10 @@ export default class BatchPage {
     effect(() => {
       const lot = this.lot();
       // Only the lot code starts a read; what the read itself touches must not start another.
-      untracked(() => void this.store.load(lot));
+      untracked(() => {
+        void this.store.load(lot);
+        void this.process.load(lot);
+      });
     });
   }
 
@@ -137,6 +151,8 @@ export default class BatchPage {
       if (!reason) return;
     }
     if (await this.store.move(move.to, reason)) this.log.invalidate();
+    // A move the server refuses while on hold says so; the record shows the hold itself.
+    void this.process.load(batch.lotCode);
   }
 
   protected async signOff(): Promise<void> {
@@ -150,6 +166,12 @@ export default class BatchPage {
     const answer = await firstValueFrom(dialog.afterClosed());
     if (!answer) return;
     if (await this.store.signOff(answer.note || undefined)) this.log.invalidate();
+  }
+
+  /** The batch was started or released: read it again, and the log with it. */
+  protected async batchChanged(): Promise<void> {
+    this.log.invalidate();
+    await this.store.load(this.lot());
   }
 
   protected print(): void {

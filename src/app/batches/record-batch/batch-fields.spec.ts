@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { FormulaFacts } from '../batch-types';
-import { batchOptions, fieldOf, fieldsFor, inFormWords, withUnit } from './batch-fields.ts';
+import { batchOptions, fieldOf, fieldsFor, inBox, inFormWords, withUnit } from './batch-fields.ts';
 
 const cure = (method: 'dry' | 'brine' | 'pump'): FormulaFacts => ({
   id: 'x',
@@ -47,6 +47,30 @@ describe('withUnit', () => {
   it('should send a value with its own unit as typed', () => {
     assert.equal(withUnit(' 9 lb 6 oz ', 'mass', 'metric'), '9 lb 6 oz');
     assert.equal(withUnit('12 L', 'mass', 'metric'), '12 L');
+  });
+});
+
+describe('inBox', () => {
+  it('should take off the unit the box shows beside it', () => {
+    assert.equal(inBox('4.26kg', 'mass', 'metric'), '4.26');
+    assert.equal(inBox('4 cm', 'length', 'metric'), '4');
+    assert.equal(inBox('26C', 'temperature', 'metric'), '26');
+    assert.equal(inBox('12', 'percent', 'metric'), '12');
+  });
+
+  it('should keep a value in another unit, or in several, as it is', () => {
+    assert.equal(inBox('9.4 lb', 'mass', 'metric'), '9.4 lb');
+    assert.equal(inBox('9 lb 6 oz', 'mass', 'us'), '9 lb 6 oz');
+    assert.equal(inBox('78F', 'temperature', 'metric'), '78F');
+  });
+
+  it('should give back what withUnit sent', () => {
+    for (const [text, measure] of [
+      ['4.26', 'mass'],
+      ['90', 'small-mass'],
+      ['26', 'temperature'],
+    ] as const)
+      assert.equal(inBox(withUnit(text, measure, 'metric'), measure, 'metric'), text);
   });
 });
 

@@ -144,6 +144,17 @@ export function withUnit(text: string, measure: Measure, units: Units): string {
   return measure === 'temperature' ? `${number}${unit === '°C' ? 'C' : 'F'}` : `${number} ${unit}`;
 }
 
+/**
+ * A recorded option as it goes back into its box: the bare number when its unit is the box's
+ * own ("4.26kg" → "4.26" beside kg), so the box never reads "4.26kg kg"; any other text as it is.
+ */
+export function inBox(text: string, measure: Measure, units: Units): string {
+  const said = /^\s*(\d+(?:[.,]\d+)?)\s*(\S*)\s*$/.exec(text);
+  if (!said) return text;
+  const plain = (unit: string): string => unit.replace('°', '').toLowerCase();
+  return plain(said[2]) === plain(unitOf(measure, units)) ? said[1] : text;
+}
+
 /** What was typed for one trimming of a blend: the weight on hand and a fat test, if any. */
 export interface TrimmingValues {
   readonly key: string;
