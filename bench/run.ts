@@ -7,6 +7,7 @@ import { benchCalcApi } from './calc-api.ts';
 import { benchCheckMany } from './check-many.ts';
 import { benchCliStart } from './cli-start.ts';
 import { benchConsoleBundle } from './console-bundle.ts';
+import { benchProcessRecords } from './process-records.ts';
 import { benchRecordBatches } from './record-batches.ts';
 
 const BENCHES: Record<string, () => unknown> = {
@@ -15,6 +16,7 @@ const BENCHES: Record<string, () => unknown> = {
   'calc-api': benchCalcApi,
   'batch-log': benchBatchLog,
   'record-batches': benchRecordBatches,
+  'process-records': benchProcessRecords,
   'console-bundle': benchConsoleBundle,
 };
 

@@ -9,6 +9,8 @@ export const EXIT = {
   formula: 3,
   /** A critical limit is failed (a ceiling exceeded or a required level not met): refused. */
   critical: 4,
+  /** A reading was recorded and missed a critical limit: a deviation is open, the batch on hold. */
+  deviation: 5,
 } as const;
 
 /** The exit-code table as printed at the end of --help. */
@@ -18,7 +20,8 @@ Exit codes:
   1  unexpected internal error
   2  bad command line or batch input (unknown option, bad unit, impossible size)
   3  formula file missing, unreadable or invalid
-  4  critical limit failed (over a ceiling, or short of a required level): the batch is refused`;
+  4  critical limit failed (over a ceiling, or short of a required level): the batch is refused
+  5  a reading was recorded and missed a critical limit: a deviation is open, the batch on hold`;
 
 /** A failure that ends the command with a message and a given exit code. */
 export class CliError extends Error {

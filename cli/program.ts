@@ -7,6 +7,9 @@ import { calcCommand } from './commands/calc.ts';
 import { checkCommand } from './commands/check.ts';
 import { newCommand } from './commands/new.ts';
 import { planCommand } from './commands/plan.ts';
+import { readingCommand } from './commands/reading.ts';
+import { readingsCommand } from './commands/readings.ts';
+import { reportCommand } from './commands/report.ts';
 import { usersCommand } from './commands/users.ts';
 import type { Io } from './io.ts';
 
@@ -27,6 +30,9 @@ export function createProgram(io: Io): Command {
     planCommand(io),
     newCommand(io),
     batchesCommand(io),
+    readingCommand(io),
+    readingsCommand(io),
+    reportCommand(io),
     usersCommand(io),
     backupCommand(io),
   ]) {

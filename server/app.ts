@@ -28,6 +28,7 @@ import { invitationsRouter } from './invitations/invitations-router.ts';
 import { outboxRouter } from './mail/outbox-router.ts';
 import { peopleRouter } from './people/people-router.ts';
 import { remindersRouter } from './reminders/reminders-router.ts';
+import { reportsRouter } from './reports/reports-router.ts';
 import { startRouter } from './batches/start-router.ts';
 import { refusalsRouter } from './process/refusals-router.ts';
 import { batchWeighingsRouter, weighingsRouter } from './process/weighings-router.ts';
@@ -84,6 +85,7 @@ export function createApp(context: AppContext): Express {
   api.use('/people/me/reminders', remindersRouter(context));
   api.use('/people', peopleRouter(context));
   api.use('/audit', auditRouter(context));
+  api.use('/reports', reportsRouter(context));
   api.use('/outbox', outboxRouter(context));
   api.use(apiNotFound);
 

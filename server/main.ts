@@ -7,6 +7,7 @@ import { EquipmentDueScheduler } from './equipment/equipment-due-scheduler.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
 import { DeadlineScan } from './process/deadline-scan.ts';
+import { ProcessAlertScheduler } from './process/process-alert-scheduler.ts';
 import { ReminderScheduler } from './reminders/reminder-scheduler.ts';
 
 /* eslint-disable no-console -- the server talks to whoever started it */
@@ -25,12 +26,16 @@ async function main(): Promise<void> {
   if (config.mode === 'demo') ensureDemoFormulas(config.formulasDir);
   const context = await openContext(config);
   if (config.mode === 'demo') await seedDemo(context);
-  // Cooling deadlines that pass with no reading open their deviations once a minute. Built
-  // before listening: nothing may be awaited between listen() and its 'listening' handler.
-  const deadlines = new DeadlineScan(await context.records.processRecords(), context);
-  const server = createApp(context).listen(config.port, config.host);
+  // Everything awaited before listen(): 'listening' fires during any await after it, before its
+  // handler below is attached, and the server would never say where it is or start its jobs.
+  const processRecords = await context.records.processRecords();
   const reminders = new ReminderScheduler(context);
+  // Cooling deadlines that pass with no reading open their deviations once a minute.
+  const deadlines = new DeadlineScan(processRecords, context);
+  // Readings overdue, cooling deadlines near, deviations opened: mailed once each.
+  const alerts = new ProcessAlertScheduler(context, processRecords);
   const equipmentDue = new EquipmentDueScheduler(context);
+  const server = createApp(context).listen(config.port, config.host);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     console.log(
@@ -43,6 +48,7 @@ async function main(): Promise<void> {
     );
     reminders.start();
     deadlines.start();
+    alerts.start();
     equipmentDue.start();
     if (config.mode === 'demo') {
       console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
@@ -63,7 +69,7 @@ async function main(): Promise<void> {
   const stop = (): void => {
     server.close(
       () =>
-        void Promise.all([reminders.stop(), deadlines.stop(), equipmentDue.stop()])
+        void Promise.all([reminders.stop(), deadlines.stop(), alerts.stop(), equipmentDue.stop()])
           .then(() => context.formulas.close())
           .then(() => context.mail.close())
           .then(() => context.db.close())

@@ -1,17 +1,28 @@
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
+import type { ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
 import { presentPlan, type PresentedPlan } from '../../shared/index.ts';
 import {
+  PROCESS_ROLES,
   RECORDING_ROLES,
+  REPORT_ROLES,
+  Records,
   RecordsError,
   openRecords,
   type Person,
-  type Records,
+  type Role,
 } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 import { today } from '../io.ts';
 import { credentialsFor } from './credentials.ts';
-import type { BatchToRecord, PlanToRecord, RecordKeeper } from './record-keeper.ts';
-import { cliErrorOf, type RecordsVerb } from './records-failure.ts';
+import type {
+  BatchToRecord,
+  PlanToRecord,
+  RecordKeeper,
+  ReportOutput,
+  ReportPeriodOptions,
+  UploadedReadings,
+} from './record-keeper.ts';
+import { cliErrorOf, type PersonVerb, type RecordsVerb } from './records-failure.ts';
 
 /**
  * Opens this machine's records (the database the server uses, found through the same settings),
@@ -39,17 +50,21 @@ export async function withLocalRecords<T>(
  * The person recording, from $LARDER_USER and $LARDER_PASSWORD, checked as the server checks a
  * sign-in: the command line is held to the same accounts and roles.
  */
-async function recorder(records: Records): Promise<Person> {
-  const { username, password } = credentialsFor('record');
+async function recorder(
+  records: Records,
+  verb: PersonVerb = 'record',
+  roles: readonly Role[] = RECORDING_ROLES,
+): Promise<Person> {
+  const { username, password } = credentialsFor(verb);
   const person = await records.signIn(username, password);
   if (!person)
     throw new CliError(
       'wrong LARDER_USER or LARDER_PASSWORD, or the account is not active',
       EXIT.usage,
     );
-  if (!RECORDING_ROLES.includes(person.role))
+  if (!roles.includes(person.role))
     throw new CliError(
-      `${person.username} is a ${person.role}; this needs ${RECORDING_ROLES.join(' or ')}`,
+      `${person.username} is a ${person.role}; this needs ${roles.join(' or ')}`,
       EXIT.usage,
     );
   return person;
@@ -93,5 +108,38 @@ export class LocalRecords implements RecordKeeper {
 
   showBatch(lot: string): Promise<Batch> {
     return withLocalRecords('show', (records) => records.showBatch(lot));
+  }
+
+  addReading(lot: string, request: ReadingRequest): Promise<ReadingAnswer> {
+    return withLocalRecords('reading', async (records) =>
+      records.addReading(lot, request, 'command', {
+        actor: await recorder(records, 'reading', PROCESS_ROLES),
+      }),
+    );
+  }
+
+  uploadReadings(lot: string, control: string, text: string): Promise<UploadedReadings> {
+    return withLocalRecords('reading', async (records) =>
+      records.uploadReadings(lot, control, text, {
+        actor: await recorder(records, 'reading', PROCESS_ROLES),
+      }),
+    );
+  }
+
+  /** The report from this machine's records, as whoever $LARDER_USER is (admin or reviewer). */
+  report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput> {
+    return withLocalRecords('report', async (records) => {
+      const produced = await records.produceReport(format, {
+        query: period,
+        by: await recorder(records, 'report', REPORT_ROLES),
+        kitchen: Records.kitchenName(),
+        now: new Date(),
+      });
+      if (produced.format !== 'csv') return produced;
+      // Read whole before the records close.
+      let text = '';
+      for await (const chunk of produced.body) text += chunk;
+      return { format: 'csv', body: text };
+    });
   }
 }

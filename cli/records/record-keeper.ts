@@ -1,4 +1,6 @@
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
+import type { HaccpReport } from '../../shared/api/haccp-report.ts';
+import type { Deviation, ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
 import type { PlanResult, PresentedPlan, RawBatchOptions, UnitSystem } from '../../shared/index.ts';
 
 /** A batch to record, as `larder calc --record` gives it. */
@@ -24,6 +26,24 @@ export interface PlanToRecord {
   readonly plan: () => PlanResult;
 }
 
+/** What a logger file's upload stored: how many readings, and the deviations they opened. */
+export interface UploadedReadings {
+  readonly added: number;
+  readonly deviations: readonly Deviation[];
+}
+
+/** The period of a report: days YYYY-MM-DD, both optional (the last 30 days by default). */
+export interface ReportPeriodOptions {
+  readonly from?: string;
+  readonly to?: string;
+}
+
+/** A report as produced: PDF bytes, CSV text, or the JSON. */
+export type ReportOutput =
+  | { readonly format: 'pdf'; readonly body: Uint8Array }
+  | { readonly format: 'csv'; readonly body: string }
+  | { readonly format: 'json'; readonly body: HaccpReport };
+
 /**
  * The batch log, kept on this machine or on a Larderbook server: the verbs use it without
  * knowing which. Failures come as the command's errors, with its exit codes.
@@ -35,6 +55,12 @@ export interface RecordKeeper {
   recordPlan(request: PlanToRecord): Promise<{ plan: PresentedPlan; batches: Batch[] }>;
   listBatches(query: Record<string, string>): Promise<BatchPage>;
   showBatch(lot: string): Promise<Batch>;
+  /** Records a reading at a batch's control (source: the command); misses open deviations. */
+  addReading(lot: string, request: ReadingRequest): Promise<ReadingAnswer>;
+  /** Stores a data logger's CSV as readings of one control, all or nothing. */
+  uploadReadings(lot: string, control: string, text: string): Promise<UploadedReadings>;
+  /** The HACCP records report of a period, in a format. */
+  report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput>;
 }
 
 /** The server a verb works with: --server, else $LARDER_SERVER, else none (this machine). */

@@ -3,7 +3,7 @@ import type { RecordsFailure } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 
 /** What a larder verb does with the records; each says its failures in its own words. */
-export type RecordsVerb = 'record' | 'list' | 'show' | 'users' | 'backup';
+export type RecordsVerb = 'record' | 'list' | 'show' | 'users' | 'backup' | 'reading' | 'report';
 
 /** A failure of record keeping, from this machine's records or a server's answer. */
 export interface RecordsFailureFacts {
@@ -20,6 +20,8 @@ const NOT_FOUND_EXIT: Readonly<Record<RecordsVerb, number>> = {
   show: EXIT.usage,
   users: EXIT.usage,
   backup: EXIT.usage,
+  reading: EXIT.usage,
+  report: EXIT.usage,
 };
 
 /** Whether a refusal is a formula file's fault: its errors, or a plan refused over one. */
@@ -44,12 +46,16 @@ function lineOf(detail: unknown): string {
     : JSON.stringify(detail);
 }
 
+/** Failures whose message already says all its details do: a refused batch, a bad logger file. */
+const SAID_IN_FULL = new Set(['critical-limit', 'bad-log']);
+
 /**
  * The one place record keeping's failures become the command's: the exit code and the lines
- * under the message. A refused batch's message already names every failed check.
+ * under the message. A refused batch's message already names every failed check, a refused
+ * logger file's the line at fault.
  */
 export function cliErrorOf(failure: RecordsFailureFacts, verb: RecordsVerb): CliError {
-  const details = failure.code === 'critical-limit' ? [] : failure.details.map(lineOf);
+  const details = SAID_IN_FULL.has(failure.code) ? [] : failure.details.map(lineOf);
   return new CliError(failure.message, exitCodeOf(failure, verb), details);
 }
 
@@ -58,6 +64,8 @@ const WHO = {
   record: 'say who is recording',
   list: 'say who is reading',
   show: 'say who is reading',
+  reading: 'say who took the reading',
+  report: 'say who is producing the report',
 } as const;
 
 /** A verb that acts as a person: recording, or reading a server's log. */

@@ -1,10 +1,27 @@
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
+import type { HaccpReport } from '../../shared/api/haccp-report.ts';
+import type { ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
 import type { PresentedPlan } from '../../shared/index.ts';
 import { failureOfStatus } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 import { credentialsFor } from './credentials.ts';
-import type { BatchToRecord, PlanToRecord, RecordKeeper } from './record-keeper.ts';
+import type {
+  BatchToRecord,
+  PlanToRecord,
+  RecordKeeper,
+  ReportOutput,
+  ReportPeriodOptions,
+  UploadedReadings,
+} from './record-keeper.ts';
 import { cliErrorOf, type PersonVerb } from './records-failure.ts';
+
+/** A body sent as it is, with its content type (a logger's CSV), not as JSON. */
+class TextBody {
+  constructor(
+    readonly type: string,
+    readonly text: string,
+  ) {}
+}
 
 interface ErrorBody {
   error?: { code?: string; message?: string; details?: unknown[] };
@@ -47,28 +64,50 @@ export class ServerRecords implements RecordKeeper {
     return (await this.call<{ batch: Batch }>('show', 'GET', route)).batch;
   }
 
-  /**
-   * Calls the API and returns the JSON body; a refusal becomes the verb's error with the
-   * server's own words, as the same failure on this machine would.
-   */
-  private async call<T>(
+  addReading(lot: string, request: ReadingRequest): Promise<ReadingAnswer> {
+    const route = `/api/batches/${encodeURIComponent(lot)}/readings`;
+    return this.call('reading', 'POST', route, request);
+  }
+
+  uploadReadings(lot: string, control: string, text: string): Promise<UploadedReadings> {
+    const route = `/api/batches/${encodeURIComponent(lot)}/readings/upload?${new URLSearchParams({ control })}`;
+    return this.call('reading', 'POST', route, new TextBody('text/csv', text));
+  }
+
+  async report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput> {
+    const query = new URLSearchParams(
+      Object.entries(period).filter((entry): entry is [string, string] => entry[1] !== undefined),
+    );
+    const route = `/api/reports/${format === 'json' ? 'haccp' : `haccp.${format}`}?${query}`;
+    const response = await this.send('report', 'GET', route);
+    if (!response.ok) return this.refused(response, 'report');
+    if (format === 'json') return { format, body: (await response.json()) as HaccpReport };
+    if (format === 'csv') return { format, body: await response.text() };
+    return { format, body: new Uint8Array(await response.arrayBuffer()) };
+  }
+
+  /** Sends a request signed in as $LARDER_USER, with a JSON body or a {@link TextBody}. */
+  private async send(
     verb: PersonVerb,
     method: string,
     route: string,
     body?: unknown,
-  ): Promise<T> {
+  ): Promise<Response> {
     const { username, password } = credentialsFor(verb, this.server);
-    let response: Response;
     try {
-      response = await fetch(new URL(route, this.server), {
+      return await fetch(new URL(route, this.server), {
         method,
         headers: {
           authorization: `Basic ${Buffer.from(`${username}:${password}`, 'utf8').toString('base64')}`,
           // The server takes a password-signed change only from a client that names itself.
           'x-larder-client': 'larder',
-          ...(body === undefined ? {} : { 'content-type': 'application/json' }),
+          ...(body === undefined
+            ? {}
+            : { 'content-type': body instanceof TextBody ? body.type : 'application/json' }),
         },
-        ...(body === undefined ? {} : { body: JSON.stringify(body) }),
+        ...(body === undefined
+          ? {}
+          : { body: body instanceof TextBody ? body.text : JSON.stringify(body) }),
       });
     } catch (error) {
       throw new CliError(
@@ -76,17 +115,43 @@ export class ServerRecords implements RecordKeeper {
         EXIT.internal,
       );
     }
+  }
+
+  /** Calls the API and returns the JSON body; a refusal becomes the verb's error. */
+  private async call<T>(
+    verb: PersonVerb,
+    method: string,
+    route: string,
+    body?: unknown,
+  ): Promise<T> {
+    const response = await this.send(verb, method, route, body);
+    if (!response.ok) return this.refused(response, verb);
     const text = await response.text();
+    try {
+      return (text ? JSON.parse(text) : undefined) as T;
+    } catch {
+      throw this.notJson(response);
+    }
+  }
+
+  private notJson(response: Response): CliError {
+    return new CliError(
+      `the server at ${this.server} did not answer with JSON (HTTP ${response.status})`,
+      EXIT.internal,
+    );
+  }
+
+  /**
+   * A refusal as the verb's error with the server's own words, as the same failure on this
+   * machine would be.
+   */
+  private async refused(response: Response, verb: PersonVerb): Promise<never> {
     let json: unknown;
     try {
-      json = text ? JSON.parse(text) : undefined;
+      json = JSON.parse(await response.text());
     } catch {
-      throw new CliError(
-        `the server at ${this.server} did not answer with JSON (HTTP ${response.status})`,
-        EXIT.internal,
-      );
+      if (response.status < 500) throw this.notJson(response);
     }
-    if (response.ok) return json as T;
     const error = (json as ErrorBody | undefined)?.error;
     const message = error?.message ?? `HTTP ${response.status}`;
     if (response.status >= 500) throw new CliError(`the server failed: ${message}`, EXIT.internal);

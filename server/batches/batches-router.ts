@@ -117,7 +117,7 @@ export function batchesRouter(context: AppContext): Router {
 }
 
 /** Resolves when the response can take more, or has closed. */
-function drained(res: Response): Promise<void> {
+export function drained(res: Response): Promise<void> {
   return new Promise((resolve) => {
     const done = (): void => {
       res.off('drain', done);

@@ -11,6 +11,7 @@ import * as invitations from './migrations/005-invitations.ts';
 import * as reminders from './migrations/006-reminders.ts';
 import * as processRecords from './migrations/007-process-records.ts';
 import * as startedCalculation from './migrations/008-started-calculation.ts';
+import * as processAlertPrefs from './migrations/009-process-alert-prefs.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -31,6 +32,7 @@ const MIGRATIONS = [
   reminders,
   processRecords,
   startedCalculation,
+  processAlertPrefs,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

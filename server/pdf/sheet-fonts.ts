@@ -28,15 +28,28 @@ const SPELLED: Readonly<Record<string, string>> = {
 
 const require = createRequire(import.meta.url);
 
-/** The font file of one weight and subset, found through the package's own exports. */
+const files = new Map<string, string>();
+
+/** The font file of one weight and subset, found through the package's own exports (once). */
 export function fontFile(weight: FontWeight, subset: Subset): string {
-  return require.resolve(
-    `@fontsource/fira-sans/files/fira-sans-${subset}-${WEIGHT_FILE[weight]}-normal.woff`,
-  );
+  const key = `${subset}-${WEIGHT_FILE[weight]}`;
+  let file = files.get(key);
+  if (!file) {
+    file = require.resolve(`@fontsource/fira-sans/files/fira-sans-${key}-normal.woff`);
+    files.set(key, file);
+  }
+  return file;
 }
 
-/** The name a font is registered under in a document. */
+/**
+ * The name a font is registered under in a document. The regular Latin font, which the document
+ * opens first as its default, goes by its file: pdfkit keeps a font under the name it is first
+ * asked for, and asked for under a second name it decodes the whole font again on every call
+ * (it finds it equal to the open one and returns before keeping the name) — most of the time of
+ * a long report went there.
+ */
 export function fontName(weight: FontWeight, subset: Subset): string {
+  if (weight === 'regular' && subset === 'latin') return fontFile(weight, subset);
   return `fira-${WEIGHT_FILE[weight]}-${subset}`;
 }
 

@@ -68,7 +68,7 @@ const BATCH_SQL = `SELECT b.id, b.lot_code, b.status, b.formula_id, b.formula_re
 // taken_at, id): oldest first within each control, corrected readings included. The recorders'
 // names come after, once per person: joining people on each of a day's logger points doubled
 // the time of the read.
-const READINGS_SQL = `SELECT x.id, x.recorded_by, x.recorded_at, x.corrects_id, x.reason, x.control,
+export const READINGS_SQL = `SELECT x.id, x.recorded_by, x.recorded_at, x.corrects_id, x.reason, x.control,
   x.taken_at, x.value, x.entered_as, x.source
   FROM readings x WHERE x.batch_id = ? ORDER BY x.control, x.taken_at, x.id`;
 

@@ -24,6 +24,8 @@ import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
 import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-password.ts';
 import { recordPlan } from '../plans/record-plan.ts';
+import type { ProducedReport, ReportFormat, ReportRequest } from '../reports/produce-report.ts';
+import { REPORT_ROLES } from '../reports/report-roles.ts';
 import type {
   Refusal,
   StartRequest,
@@ -72,10 +74,17 @@ export type {
   WeighingRequest,
 };
 export type { SheetRecord, SheetSource };
+export type { ProducedReport, ReportFormat, ReportRequest };
 export type { ActionRequest, CorrectionRequest, UploadAnswer };
 
 /** The fewest characters a password may have. */
 export { MIN_PASSWORD_LENGTH };
+
+/** The roles that produce the HACCP records report. */
+export { REPORT_ROLES };
+
+/** The roles that record readings at a batch's controls (and correct them, and act on deviations). */
+export const PROCESS_ROLES: readonly Role[] = ['admin', 'cook', 'reviewer'];
 
 /** The roles that record batches and plans; every role reads the log. */
 export const RECORDING_ROLES: readonly Role[] = ['admin', 'cook'];
@@ -276,6 +285,22 @@ export class Records {
   /** Sets another person's password, with its audit entry. */
   resetPassword(key: PersonKey, password: string, by: AuditedBy): Promise<void> {
     return this.guard(() => resetPassword(key, password, by, this.deps));
+  }
+
+  // Reports (process-reports).
+
+  /**
+   * The HACCP records report of a period (default the last 30 days) as PDF bytes, CSV chunks or
+   * JSON, audited as produced; admins and reviewers only. The report's code loads when first asked for.
+   */
+  async produceReport(format: ReportFormat, request: ReportRequest): Promise<ProducedReport> {
+    const { produceReport } = await import('../reports/produce-report.ts');
+    return this.guard(() => produceReport(this.deps, format, request));
+  }
+
+  /** The kitchen's name on reports: LARDER_KITCHEN, as the server's messages name it. */
+  static kitchenName(): string {
+    return loadConfig().kitchenName;
   }
 
   /**

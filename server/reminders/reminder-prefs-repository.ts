@@ -28,6 +28,25 @@ interface PrefsRow {
   flip: number;
   ready: number;
   overdue: number;
+  process: number | null;
+}
+
+/**
+ * Who gets process alerts (a reading overdue, a cooling stage near its deadline, a deviation
+ * opened) until they choose: admins and cooks, who are at the smoker and the chiller. Reviewers
+ * see deviations on the records they review.
+ */
+export const PROCESS_ALERT_DEFAULTS: Readonly<Record<Role, boolean>> = {
+  admin: true,
+  cook: true,
+  reviewer: false,
+};
+
+/** The SQL of a role's default for a choice, as a CASE over p.role. */
+function byRole(defaults: Readonly<Record<Role, boolean>>): string {
+  return (Object.keys(defaults) as Role[])
+    .map((role) => `WHEN '${role}' THEN ${defaults[role] ? 1 : 0}`)
+    .join(' ');
 }
 
 /** The column of a kind; only ever one of these three names reaches the SQL. */
@@ -44,16 +63,65 @@ export class ReminderPrefsRepository {
   async get(person: {
     id: number;
     role: Role;
-  }): Promise<{ choices: ReminderChoices; chosen: boolean }> {
+  }): Promise<{ choices: ReminderChoices; chosen: boolean; processAlerts: boolean }> {
     const [row] = await this.db.sequelize.query<PrefsRow>(
-      'SELECT flip, ready, overdue FROM reminder_prefs WHERE person_id = ?',
+      'SELECT flip, ready, overdue, process FROM reminder_prefs WHERE person_id = ?',
       { replacements: [person.id], type: QueryTypes.SELECT },
     );
-    if (!row) return { choices: DEFAULT_CHOICES[person.role], chosen: false };
+    const processDefault = PROCESS_ALERT_DEFAULTS[person.role];
+    if (!row)
+      return {
+        choices: DEFAULT_CHOICES[person.role],
+        chosen: false,
+        processAlerts: processDefault,
+      };
     return {
       choices: { flip: row.flip === 1, ready: row.ready === 1, overdue: row.overdue === 1 },
       chosen: true,
+      processAlerts: row.process === null ? processDefault : row.process === 1,
     };
+  }
+
+  /** Stores whether a person gets process alerts, inside the caller's transaction. */
+  async setProcessAlerts(
+    transaction: Transaction,
+    person: { id: number; role: Role },
+    wanted: boolean,
+    at: string,
+  ): Promise<void> {
+    const defaults = DEFAULT_CHOICES[person.role];
+    // A person who never chose keeps their role's reminder defaults beside this choice.
+    await this.db.sequelize.query(
+      `INSERT INTO reminder_prefs (person_id, flip, ready, overdue, process, updated_at)
+       VALUES (?, ?, ?, ?, ?, ?)
+       ON CONFLICT (person_id) DO UPDATE SET process = excluded.process, updated_at = excluded.updated_at`,
+      {
+        replacements: [
+          person.id,
+          defaults.flip ? 1 : 0,
+          defaults.ready ? 1 : 0,
+          defaults.overdue ? 1 : 0,
+          wanted ? 1 : 0,
+          at,
+        ],
+        transaction,
+      },
+    );
+  }
+
+  /**
+   * Everyone who gets process alerts: active, with an e-mail address, and wanting them (by their
+   * own choice, or their role's default).
+   */
+  async processAlertRecipients(transaction: Transaction): Promise<Recipient[]> {
+    return this.db.sequelize.query<Recipient>(
+      `SELECT p.id, p.username, p.display_name AS displayName, p.email
+       FROM people p LEFT JOIN reminder_prefs r ON r.person_id = p.id
+       WHERE p.active = 1 AND p.email IS NOT NULL AND p.email <> ''
+         AND COALESCE(r.process, CASE p.role ${byRole(PROCESS_ALERT_DEFAULTS)} ELSE 0 END) = 1
+       ORDER BY p.id`,
+      { type: QueryTypes.SELECT, transaction },
+    );
   }
 
   /** Stores a person's choices inside the caller's transaction. */
@@ -86,14 +154,14 @@ export class ReminderPrefsRepository {
    */
   async recipients(transaction: Transaction, kind: ReminderKind): Promise<Recipient[]> {
     const name = column(kind);
-    const byRole = (Object.keys(DEFAULT_CHOICES) as Role[])
-      .map((role) => `WHEN '${role}' THEN ${DEFAULT_CHOICES[role][kind] ? 1 : 0}`)
-      .join(' ');
+    const defaults = Object.fromEntries(
+      (Object.keys(DEFAULT_CHOICES) as Role[]).map((role) => [role, DEFAULT_CHOICES[role][kind]]),
+    ) as Record<Role, boolean>;
     return this.db.sequelize.query<Recipient>(
       `SELECT p.id, p.username, p.display_name AS displayName, p.email
        FROM people p LEFT JOIN reminder_prefs r ON r.person_id = p.id
        WHERE p.active = 1 AND p.email IS NOT NULL AND p.email <> ''
-         AND COALESCE(r.${name}, CASE p.role ${byRole} ELSE 0 END) = 1
+         AND COALESCE(r.${name}, CASE p.role ${byRole(defaults)} ELSE 0 END) = 1
        ORDER BY p.id`,
       { type: QueryTypes.SELECT, transaction },
     );

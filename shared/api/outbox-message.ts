@@ -3,12 +3,13 @@
  * the console that shows it (as types only).
  */
 
-/** What Larderbook sends: an invitation, or one of the three reminders. */
+/** What Larderbook sends: an invitation, one of the three reminders, or a process alert. */
 export const MESSAGE_KINDS = [
   'invitation',
   'reminder-flip',
   'reminder-ready',
   'reminder-overdue',
+  'process-alert',
 ] as const;
 
 /** One of {@link MESSAGE_KINDS}. */

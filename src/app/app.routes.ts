@@ -25,6 +25,11 @@ export const routes: Routes = [
       { path: 'plans', loadChildren: () => import('./plans/plans.routes') },
       { path: 'equipment', loadChildren: () => import('./equipment/equipment.routes') },
       {
+        path: 'reports',
+        canMatch: [roleGuard('admin', 'reviewer')],
+        loadChildren: () => import('./reports/reports.routes'),
+      },
+      {
         path: 'people',
         canMatch: [roleGuard('admin')],
         loadChildren: () => import('./people/people.routes'),

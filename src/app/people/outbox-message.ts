@@ -30,6 +30,7 @@ const KIND_WORDS: Readonly<Record<MessageKind, string>> = {
   'reminder-flip': 'Reminder: flip',
   'reminder-ready': 'Reminder: ready',
   'reminder-overdue': 'Reminder: overdue',
+  'process-alert': 'Process alert',
 };
 
 /**

@@ -29,6 +29,7 @@ const AREAS: readonly Area[] = [
   { path: '/batches', label: 'Batch log', icon: 'list_alt' },
   { path: '/curing', label: 'Curing now', icon: 'hourglass_top' },
   { path: '/equipment', label: 'Equipment', icon: 'kitchen' },
+  { path: '/reports', label: 'HACCP report', icon: 'fact_check', roles: ['admin', 'reviewer'] },
   { path: '/people', label: 'People', icon: 'group', roles: ['admin'] },
 ];
 

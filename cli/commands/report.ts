@@ -1,0 +1,88 @@
+import { Command } from 'commander';
+import type { HaccpReport, ReportBatch } from '../../shared/api/haccp-report.ts';
+import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
+import type { Io } from '../io.ts';
+import { textTable } from '../output/text-table.ts';
+import { recordKeeper, serverOf, type ReportOutput } from '../records/record-keeper.ts';
+
+interface ReportOptions {
+  from?: string;
+  to?: string;
+  pdf?: string;
+  csv?: string;
+  json?: boolean;
+  force?: boolean;
+  server?: string;
+}
+
+/** One batch as a line of the summary: its controls, deviations and release. */
+function batchRow(batch: ReportBatch): string[] {
+  const missed = batch.controls.filter((c) => c.state.startsWith('missed')).length;
+  const open = batch.deviations.filter((d) => !d.action).length;
+  const released = batch.verifications.some((v) => v.correctedBy === null);
+  return [
+    batch.lotCode,
+    batch.formula.id,
+    batch.status,
+    `${batch.controls.length}${missed ? ` (${missed} missed)` : ''}`,
+    `${batch.deviations.length}${open ? ` (${open} OPEN)` : ''}`,
+    released ? 'released' : '',
+  ];
+}
+
+/** The report in short, for a terminal: the head, a line per batch, then the period's other records. */
+function summary(report: HaccpReport): string {
+  const header = ['lot', 'formula', 'status', 'controls', 'deviations', 'verified'];
+  const table = textTable(
+    [header, ...report.batches.map(batchRow)],
+    header.map(() => 'left'),
+  ).join('\n');
+  return (
+    `HACCP records, ${report.kitchen}: ${report.from} to ${report.to} (${report.timeZone}), produced by ${report.producedBy}\n\n` +
+    `${report.batches.length ? table : 'No batches in the period.'}\n\n` +
+    `${report.batches.length} batch(es); ${report.refusals.length} refused calculation(s); ` +
+    `${report.equipment.length} piece(s) of equipment with logs.\n` +
+    'Write it whole with --pdf FILE or --csv FILE.\n'
+  );
+}
+
+/** `larder report`: the HACCP records report of a period, as PDF, CSV, JSON or a summary. */
+export function reportCommand(io: Io): Command {
+  return new Command('report')
+    .description('the HACCP records report of a period: every batch with its process records')
+    .option('--from <date>', 'first day, YYYY-MM-DD (default: 29 days before --to)')
+    .option('--to <date>', 'last day, YYYY-MM-DD (default: today)')
+    .option('--pdf <file>', 'write the report as a PDF file')
+    .option('--csv <file>', 'write the report as CSV, one line per record entry')
+    .option('--force', 'with --pdf or --csv: replace the file if it exists')
+    .option('--server <url>', 'from this server (default: $LARDER_SERVER, else this machine)')
+    .option('--json', 'print the report as JSON')
+    .addHelpText(
+      'after',
+      `\nSigns in as $LARDER_USER with $LARDER_PASSWORD (admin or reviewer); producing it is written\nin the audit log.\n\nExamples:\n  larder report --from 2026-11-01 --to 2026-11-30 --pdf haccp-november.pdf\n  larder report --csv haccp.csv                          # the last 30 days\n${EXIT_CODES_HELP}`,
+    )
+    .action(async (options: ReportOptions) => {
+      const chosen = [options.pdf, options.csv, options.json].filter(Boolean).length;
+      if (chosen > 1) throw new CliError('give one of --pdf, --csv or --json', EXIT.usage);
+      if (options.force && !options.pdf && !options.csv)
+        throw new CliError('--force goes with --pdf or --csv', EXIT.usage);
+      const file = options.pdf ?? options.csv;
+      const target = file ? { file, force: !!options.force } : undefined;
+      const files = target ? await import('../output/pdf-file.ts') : undefined;
+      // The path is checked before the report is produced.
+      if (target) await files?.checkPdfTarget(target);
+      const format: ReportOutput['format'] = options.pdf ? 'pdf' : options.csv ? 'csv' : 'json';
+      const period = {
+        ...(options.from ? { from: options.from } : {}),
+        ...(options.to ? { to: options.to } : {}),
+      };
+      const report = await (await recordKeeper(serverOf(options.server))).report(format, period);
+      if (report.format === 'json')
+        return io.out(
+          options.json ? `${JSON.stringify(report.body, null, 2)}\n` : summary(report.body),
+        );
+      const bytes = report.format === 'pdf' ? report.body : Buffer.from(report.body, 'utf8');
+      if (target) await files?.writePdf(target, bytes);
+      io.out(`Wrote the HACCP records report to ${file}\n`);
+    });
+}

@@ -1,0 +1,66 @@
+import { composeMessage, standardFooter, type MessageContent } from '../mail/mail-message.ts';
+import { kitchenTime } from './kitchen-clock.ts';
+import type { ProcessAlert } from './process-alerts.ts';
+
+/** Everything an alert's words depend on. */
+export interface ProcessAlertFacts {
+  readonly alert: ProcessAlert;
+  /** ISO time it is sent. */
+  readonly now: string;
+  readonly recipientName: string;
+  /** The batch's page, or the console's for equipment. */
+  readonly url: string;
+  readonly consoleUrl: string;
+  readonly kitchen: string;
+}
+
+function subjectOf({ alert }: ProcessAlertFacts): string {
+  const what = alert.batchId === null ? alert.subject : `lot ${alert.subject} (${alert.title})`;
+  switch (alert.kind) {
+    case 'reading-due':
+      return `Reading overdue: ${what}`;
+    case 'stage-deadline':
+      return `Cooling deadline soon: ${what}`;
+    case 'deviation':
+      return `Deviation: ${what} is on hold`;
+  }
+}
+
+function paragraphsOf({ alert, now }: ProcessAlertFacts): string[] {
+  const lot = alert.batchId === null ? alert.subject : `Lot ${alert.subject}, ${alert.title}`;
+  switch (alert.kind) {
+    case 'reading-due':
+      return [
+        `${lot}: ${alert.what}.`,
+        'Take the reading now and record it. A control not monitored as the plan says is itself a gap in the HACCP record.',
+      ];
+    case 'stage-deadline':
+      return [
+        `${lot}: ${alert.what}. The deadline is ${kitchenTime(alert.at, now)}.`,
+        'Check the product temperature now; if it will not make it, move it to a colder place (blast chiller, ice bath) before the deadline passes.',
+      ];
+    case 'deviation':
+      return [
+        `${lot}: a critical limit was missed at ${kitchenTime(alert.at, now)}. ${alert.what}`,
+        'The product is on hold. Record the corrective action: the cause, how control was restored, what prevents it happening again, and what happened to the product.',
+      ];
+  }
+}
+
+/** A process alert's words, plain text and HTML. */
+export function processAlertMessage(facts: ProcessAlertFacts): MessageContent {
+  return composeMessage({
+    subject: subjectOf(facts),
+    greeting: `Hello ${facts.recipientName},`,
+    paragraphs: paragraphsOf(facts),
+    action: {
+      label: facts.alert.batchId === null ? 'Open Larderbook' : 'Open the batch',
+      url: facts.url,
+    },
+    footer: standardFooter(
+      facts.kitchen,
+      facts.consoleUrl,
+      'You get it because your choices include process alerts (readings due, cooling deadlines, deviations).',
+    ),
+  });
+}
