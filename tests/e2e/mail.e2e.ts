@@ -135,21 +135,32 @@ describe('mail in the console', () => {
       await wren.getByTestId('my-reminders-basis').innerText(),
       /defaults for your role/,
     );
+    // Process alerts (a reading overdue, a cooling deadline near, a limit missed): on for cooks.
+    const alerts = wren.getByRole('checkbox', { name: 'Process alerts' });
+    assert.equal(await alerts.isChecked(), true, 'cooks get process alerts by default');
     await flip.uncheck();
+    await alerts.uncheck();
     await wren.getByTestId('my-reminders-defaults').waitFor();
     await session.screenshot(wren, 'my-reminders');
     await wren.getByTestId('my-reminders-save').click();
     const done = wren.getByTestId('my-reminders-done');
     await done.waitFor();
     assert.match(await done.innerText(), /You get ready-day and overdue reminders\./);
+    assert.match(await done.innerText(), /You get no process alerts\./);
     await wren.getByRole('button', { name: 'Close' }).click();
     const audit = await server.as('rosa').get('/api/audit?action=reminder-choices');
     assert.equal(audit.json.events[0].subject, WREN.username);
-    assert.deepEqual(audit.json.events[0].detail, { flip: false, ready: true, overdue: true });
+    assert.deepEqual(audit.json.events[0].detail, {
+      flip: false,
+      ready: true,
+      overdue: true,
+      processAlerts: false,
+    });
     await wren.getByRole('button', { name: 'Your account' }).click();
     await wren.getByRole('menuitem', { name: 'My reminders' }).click();
     await wren.getByTestId('my-reminders-basis').getByText('These are your own choices.').waitFor();
     assert.equal(await wren.getByRole('checkbox', { name: 'Flip days' }).isChecked(), false);
+    assert.equal(await wren.getByRole('checkbox', { name: 'Process alerts' }).isChecked(), false);
     await wren.getByRole('button', { name: 'Cancel' }).click();
 
     // A batch page's Download PDF answers a PDF with the session's cookie, and nothing without.

@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import { ReminderChoices, ReminderSettings } from './reminder-choices';
+import { MyChoices, ReminderSettings } from './reminder-choices';
 
 /** The signed-in person's own account, whatever their role: their password and reminders. */
 @Injectable({ providedIn: 'root' })
@@ -19,7 +19,7 @@ export class AccountStore {
   }
 
   /** Stores the signed-in person's own reminder choices; answers with them as the server keeps them. */
-  async saveMyReminders(choices: ReminderChoices): Promise<ReminderSettings> {
+  async saveMyReminders(choices: MyChoices): Promise<ReminderSettings> {
     return firstValueFrom(this.http.put<ReminderSettings>('/api/people/me/reminders', choices));
   }
 }

@@ -13,7 +13,14 @@ export interface ReminderSettings {
   readonly chosen: boolean;
   /** What their role gets until they choose. */
   readonly defaults: ReminderChoices;
+  /** Whether they get process alerts: a reading overdue, a cooling deadline near, a limit missed. */
+  readonly processAlerts: boolean;
+  /** Whether their role gets process alerts until they choose. */
+  readonly processAlertsDefault: boolean;
 }
+
+/** The choices a person saves: the reminders and whether they get process alerts. */
+export type MyChoices = ReminderChoices & { readonly processAlerts: boolean };
 
 /** A reminder as the dialog offers it: its name and when it comes, in our words. */
 export interface ReminderOption {

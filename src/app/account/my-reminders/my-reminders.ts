@@ -24,8 +24,8 @@ import { map } from 'rxjs';
 import { messageOf } from '../../core/api/message-of';
 import { AccountStore } from '../account-store';
 import {
+  MyChoices,
   REMINDER_OPTIONS,
-  ReminderChoices,
   ReminderSettings,
   choicesText,
   sameChoices,
@@ -62,9 +62,10 @@ export class MyReminders implements OnInit {
     flip: false,
     ready: false,
     overdue: false,
+    processAlerts: false,
   });
   private readonly choices = toSignal(
-    this.form.valueChanges.pipe(map((): ReminderChoices => this.form.getRawValue())),
+    this.form.valueChanges.pipe(map((): MyChoices => this.form.getRawValue())),
     { initialValue: this.form.getRawValue() },
   );
   /** The choices and address as the server last answered. */
@@ -81,7 +82,12 @@ export class MyReminders implements OnInit {
   /** Whether the form shows the role's defaults. */
   protected readonly isDefault = computed(() => {
     const defaults = this.mine()?.defaults;
-    return defaults !== undefined && sameChoices(this.choices(), defaults);
+    const mine = this.mine();
+    return (
+      defaults !== undefined &&
+      sameChoices(this.choices(), defaults) &&
+      this.choices().processAlerts === mine?.processAlertsDefault
+    );
   });
 
   ngOnInit(): void {
@@ -93,7 +99,7 @@ export class MyReminders implements OnInit {
     this.failure.set(null);
     try {
       const mine = await this.store.myReminders();
-      this.form.setValue({ ...mine.choices });
+      this.form.setValue({ ...mine.choices, processAlerts: mine.processAlerts });
       this.mine.set(mine);
     } catch (error) {
       this.failure.set(messageOf(error, 'Your reminder choices could not be loaded.', 'sentence'));
@@ -103,8 +109,8 @@ export class MyReminders implements OnInit {
   }
 
   protected useDefaults(): void {
-    const defaults = this.mine()?.defaults;
-    if (defaults) this.form.setValue({ ...defaults });
+    const mine = this.mine();
+    if (mine) this.form.setValue({ ...mine.defaults, processAlerts: mine.processAlertsDefault });
   }
 
   protected async save(): Promise<void> {
