@@ -17,12 +17,17 @@ export interface JudgedPoint extends ReadingPoint {
 
 /** The readings, in their order, each parsed once. */
 export function judgedPoints(readings: readonly ReadingPoint[]): JudgedPoint[] {
-  return readings.map((reading) => ({
-    at: reading.at,
-    value: reading.value,
-    ms: Date.parse(reading.at),
-    decimal: new Decimal(reading.value),
-  }));
+  // A logger repeats a few hundred values over a day's points: each text is parsed once (a
+  // decimal never changes, so the points may share it).
+  const decimals = new Map<string, Decimal>();
+  return readings.map((reading) => {
+    let decimal = decimals.get(reading.value);
+    if (!decimal) {
+      decimal = new Decimal(reading.value);
+      decimals.set(reading.value, decimal);
+    }
+    return { at: reading.at, value: reading.value, ms: Date.parse(reading.at), decimal };
+  });
 }
 
 /** Milliseconds since the epoch of a point. @throws RangeError when its time is not ISO */
