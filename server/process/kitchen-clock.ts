@@ -1,11 +1,18 @@
 import type { Clock } from '../../shared/process/evaluate-control.ts';
 
+/** The zone last asked for, with the TZ it was asked under. */
+let zone: { tz: string | undefined; name: string } | null = null;
+
 /**
  * The kitchen's IANA time zone: the one the server runs in (TZ), so that "by 14:32" and a data
  * logger's local times mean the clock on the kitchen's wall.
  */
 export function kitchenTimeZone(): string {
-  return Intl.DateTimeFormat().resolvedOptions().timeZone;
+  // Asking Intl builds a formatter; the zone changes only when TZ is set again (tests do).
+  if (zone === null || zone.tz !== process.env.TZ) {
+    zone = { tz: process.env.TZ, name: Intl.DateTimeFormat().resolvedOptions().timeZone };
+  }
+  return zone.name;
 }
 
 /** The judging clock at a moment (the context's clock, which tests move) in the kitchen's zone. */

@@ -67,10 +67,15 @@ const BATCH_SQL = `SELECT b.id, b.lot_code, b.status, b.formula_id, b.formula_re
 // One query for every reading of a batch, walked along readings_batch (batch_id, control,
 // taken_at, id): oldest first within each control, corrected readings included. The recorders'
 // names come after, once per person: joining people on each of a day's logger points doubled
-// the time of the read.
-export const READINGS_SQL = `SELECT x.id, x.recorded_by, x.recorded_at, x.corrects_id, x.reason, x.control,
-  x.taken_at, x.value, x.entered_as, x.source
-  FROM readings x WHERE x.batch_id = ? ORDER BY x.control, x.taken_at, x.id`;
+// the time of the read. SQLite hands the rows over as one JSON array, parsed in one go: the
+// driver building each of a day's thousands of rows as an object, column by column, took about
+// a third longer. The keys are the columns' names and SQLite's types are kept (integers as
+// numbers, text as strings, NULL as null), so each element is the row the driver would give.
+export const READINGS_SQL = `SELECT json_group_array(json_object('id', x.id,
+  'recorded_by', x.recorded_by, 'recorded_at', x.recorded_at, 'corrects_id', x.corrects_id,
+  'reason', x.reason, 'control', x.control, 'taken_at', x.taken_at, 'value', x.value,
+  'entered_as', x.entered_as, 'source', x.source) ORDER BY x.control, x.taken_at, x.id) AS rows
+  FROM readings x WHERE x.batch_id = ?`;
 
 const DEVIATIONS_SQL = `SELECT d.id, d.control, d.kind, d.what, d.opened_at, d.opened_by,
   op.display_name AS opener_name, d.dedupe_key
@@ -159,7 +164,8 @@ export class ProcessRepository {
 
   /** Every reading of a batch, corrected ones included (marked correctedBy). */
   async readings(batchId: number, t?: Transaction): Promise<Reading[]> {
-    const rows = await this.select<Omit<ReadingRow, 'recorder_name'>>(READINGS_SQL, [batchId], t);
+    const [array] = await this.select<{ rows: string }>(READINGS_SQL, [batchId], t);
+    const rows = JSON.parse(array.rows) as Omit<ReadingRow, 'recorder_name'>[];
     const ids = [
       ...new Set(rows.flatMap((row) => (row.recorded_by === null ? [] : [row.recorded_by]))),
     ];

@@ -25,9 +25,32 @@ export function durationWords(seconds: Decimal | string): string {
   return rest === 0 ? `${hours} h` : `${hours} h ${rest} min`;
 }
 
+// Building an Intl.DateTimeFormat costs far more than formatting with one (a zone's rules are
+// looked up each time), and a process record puts thousands of times in words: one formatter per
+// zone and option set, kept.
+const formatters = new Map<string, Intl.DateTimeFormat>();
+
+function formatter(
+  locale: string,
+  timeZone: string,
+  options: Intl.DateTimeFormatOptions,
+): Intl.DateTimeFormat {
+  const key = `${locale}|${timeZone}|${JSON.stringify(options)}`;
+  let format = formatters.get(key);
+  if (!format) {
+    format = new Intl.DateTimeFormat(locale, { ...options, timeZone });
+    formatters.set(key, format);
+  }
+  return format;
+}
+
+const DAY: Intl.DateTimeFormatOptions = { dateStyle: 'short' };
+const TIME: Intl.DateTimeFormatOptions = { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' };
+const DAY_MONTH: Intl.DateTimeFormatOptions = { day: 'numeric', month: 'short' };
+
 /** The calendar day of an instant in a zone, to see whether two instants share it. */
-function dayIn(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-CA', { timeZone, dateStyle: 'short' }).format(new Date(iso));
+function dayIn(date: Date, timeZone: string): string {
+  return formatter('en-CA', timeZone, DAY).format(date);
 }
 
 /**
@@ -35,16 +58,9 @@ function dayIn(iso: string, timeZone: string): string {
  */
 export function clockWords(iso: string, timeZone: string, todayIso: string): string {
   const date = new Date(iso);
-  const time = new Intl.DateTimeFormat('en-GB', {
-    timeZone,
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-  }).format(date);
-  if (dayIn(iso, timeZone) === dayIn(todayIso, timeZone)) return time;
-  const day = new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short' }).format(
-    date,
-  );
+  const time = formatter('en-GB', timeZone, TIME).format(date);
+  if (dayIn(date, timeZone) === dayIn(new Date(todayIso), timeZone)) return time;
+  const day = formatter('en-GB', timeZone, DAY_MONTH).format(date);
   return `${day} ${time}`;
 }
 

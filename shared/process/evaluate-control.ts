@@ -13,6 +13,7 @@ import type {
 import { clockWords, valueWords } from './control-words.ts';
 import { judgeCooling } from './judge-cooling.ts';
 import { judgeHold } from './judge-hold.ts';
+import { judgedPoints, type JudgedPoint } from './judged-point.ts';
 import { addSeconds, normalIso } from './judge-time.ts';
 
 /** How times are put in words ("by 14:32"): the kitchen's time zone. */
@@ -34,10 +35,19 @@ export interface EvaluateOptions {
 
 type EachReadingLimit = Extract<ControlLimit, { type: 'at-most' | 'at-least' | 'between' }>;
 
-function outside(limit: EachReadingLimit, value: Decimal): boolean {
-  if (limit.type === 'at-most') return value.greaterThan(limit.max);
-  if (limit.type === 'at-least') return value.lessThan(limit.min);
-  return value.lessThan(limit.min) || value.greaterThan(limit.max);
+/** Whether a value is outside the limit; the limit's decimals are built once, not per reading. */
+function outsideOf(limit: EachReadingLimit): (value: Decimal) => boolean {
+  if (limit.type === 'at-most') {
+    const max = new Decimal(limit.max);
+    return (value) => value.greaterThan(max);
+  }
+  if (limit.type === 'at-least') {
+    const min = new Decimal(limit.min);
+    return (value) => value.lessThan(min);
+  }
+  const min = new Decimal(limit.min);
+  const max = new Decimal(limit.max);
+  return (value) => value.lessThan(min) || value.greaterThan(max);
 }
 
 function limitWords(limit: EachReadingLimit, unit: string): string {
@@ -50,14 +60,15 @@ function limitWords(limit: EachReadingLimit, unit: string): string {
 function judgeEachReading(
   control: ResolvedControl,
   limit: EachReadingLimit,
-  readings: readonly ReadingPoint[],
+  readings: readonly JudgedPoint[],
   clock: Clock,
   stepOver: boolean,
 ): ControlState {
+  const outside = outsideOf(limit);
   const must = limitWords(limit, control.unit);
   const when = (iso: string): string => clockWords(iso, clock.timeZone, clock.now);
   const misses: ControlMiss[] = readings
-    .filter((reading) => outside(limit, new Decimal(reading.value)))
+    .filter((reading) => outside(reading.decimal))
     .map((reading) => ({
       kind: 'reading',
       at: reading.at,
@@ -104,7 +115,8 @@ export function evaluateControl(
 ): ControlState {
   const stepOver = options.stepOver ?? false;
   const limit = control.limit;
-  if (limit.type === 'cooling') return judgeCooling(control, limit, readings, clock);
-  if (limit.type === 'hold') return judgeHold(control, limit, readings, clock, stepOver);
-  return judgeEachReading(control, limit, readings, clock, stepOver);
+  const points = judgedPoints(readings);
+  if (limit.type === 'cooling') return judgeCooling(control, limit, points, clock);
+  if (limit.type === 'hold') return judgeHold(control, limit, points, clock, stepOver);
+  return judgeEachReading(control, limit, points, clock, stepOver);
 }

@@ -4,24 +4,27 @@
  * and must do so by its deadline.
  */
 import { Decimal } from '../decimal.ts';
-import type {
-  ControlLimit,
-  ControlMiss,
-  ControlState,
-  ReadingPoint,
-  ResolvedControl,
-} from './control-types.ts';
+import type { ControlLimit, ControlMiss, ControlState, ResolvedControl } from './control-types.ts';
 import { clockWords, durationWords, temperatureWords } from './control-words.ts';
 import type { Clock } from './evaluate-control.ts';
+import { pointMs, type JudgedPoint } from './judged-point.ts';
 import { addSeconds, instantMs, secondsBetween } from './judge-time.ts';
 
 type CoolingLimit = Extract<ControlLimit, { type: 'cooling' }>;
+
+/** The index of the first reading from `from` on at or below `toC`, or -1. */
+function firstAtOrBelow(readings: readonly JudgedPoint[], from: number, toC: Decimal): number {
+  for (let i = from; i < readings.length; i++) {
+    if (readings[i].decimal.lessThanOrEqualTo(toC)) return i;
+  }
+  return -1;
+}
 
 /** The judgement of a cooling limit; stage numbers and miss keys ("stage-1") count from 1. */
 export function judgeCooling(
   control: ResolvedControl,
   limit: CoolingLimit,
-  readings: readonly ReadingPoint[],
+  readings: readonly JudgedPoint[],
   clock: Clock,
 ): ControlState {
   const when = (iso: string): string => clockWords(iso, clock.timeZone, clock.now);
@@ -37,7 +40,8 @@ export function judgeCooling(
       misses: [],
     };
   }
-  const below = readings.findIndex((reading) => new Decimal(reading.value).lessThan(first.fromC));
+  const fromC = new Decimal(first.fromC);
+  const below = readings.findIndex((reading) => reading.decimal.lessThan(fromC));
   if (below === -1) {
     return {
       status: 'in-progress',
@@ -50,7 +54,7 @@ export function judgeCooling(
     };
   }
   const startIndex = below === 0 ? 0 : below - 1;
-  const coolingStartMs = instantMs(readings[startIndex].at);
+  const coolingStartMs = pointMs(readings[startIndex]);
   const unseen =
     below === 0
       ? `; the start above ${temperatureWords(first.fromC)} was not seen, so it is timed from the first reading at ${when(readings[0].at)}`
@@ -64,9 +68,7 @@ export function judgeCooling(
     const originMs = stage.countedFrom === 'stage-start' ? stageStartMs : coolingStartMs;
     const deadline = addSeconds(originMs, stage.withinS);
     const target = temperatureWords(stage.toC);
-    const found = readings.findIndex(
-      (reading, at) => at >= index && new Decimal(reading.value).lessThanOrEqualTo(stage.toC),
-    );
+    const found = firstAtOrBelow(readings, index, new Decimal(stage.toC));
     if (found === -1) {
       if (instantMs(clock.now) > instantMs(deadline)) {
         misses.push({
@@ -89,7 +91,7 @@ export function judgeCooling(
       };
     }
     const reading = readings[found];
-    const reachedMs = instantMs(reading.at);
+    const reachedMs = pointMs(reading);
     const took = durationWords(secondsBetween(originMs, reachedMs));
     if (reachedMs > instantMs(deadline)) {
       misses.push({

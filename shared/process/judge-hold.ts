@@ -3,33 +3,39 @@
  * temperature, spans at least that row's time ("0": one reading at or above suffices).
  */
 import { Decimal } from '../decimal.ts';
-import type {
-  ControlLimit,
-  ControlState,
-  HoldRow,
-  ReadingPoint,
-  ResolvedControl,
-} from './control-types.ts';
+import type { ControlLimit, ControlState, HoldRow, ResolvedControl } from './control-types.ts';
 import { clockWords, durationWords, temperatureWords } from './control-words.ts';
 import type { Clock } from './evaluate-control.ts';
-import { addSeconds, instantMs, secondsBetween } from './judge-time.ts';
+import { pointMs, type JudgedPoint } from './judged-point.ts';
+import { addSeconds, secondsBetween } from './judge-time.ts';
 
 type HoldLimit = Extract<ControlLimit, { type: 'hold' }>;
+
+/**
+ * The least whole number of milliseconds a run must span to meet the row: times are whole
+ * milliseconds, so "needs ≤ span" holds exactly when the need rounded up is ≤ span. Beyond the
+ * integers a number holds exactly, no span of real times reaches it.
+ */
+function needWholeMs(row: HoldRow): number {
+  const need = new Decimal(row.holdS).times(1000).ceil();
+  return need.lessThanOrEqualTo(Number.MAX_SAFE_INTEGER) ? need.toNumber() : Infinity;
+}
 
 /** The first reading at which the row is met, with the run's first reading, or null. */
 function rowMet(
   row: HoldRow,
-  readings: readonly ReadingPoint[],
-): { runStart: ReadingPoint; metAt: ReadingPoint } | null {
-  const needMs = new Decimal(row.holdS).times(1000);
-  let runStart: ReadingPoint | null = null;
+  readings: readonly JudgedPoint[],
+): { runStart: JudgedPoint; metAt: JudgedPoint } | null {
+  const needMs = needWholeMs(row);
+  const tempC = new Decimal(row.tempC);
+  let runStart: JudgedPoint | null = null;
   for (const reading of readings) {
-    if (new Decimal(reading.value).lessThan(row.tempC)) {
+    if (reading.decimal.lessThan(tempC)) {
       runStart = null;
       continue;
     }
     runStart ??= reading;
-    if (needMs.lessThanOrEqualTo(instantMs(reading.at) - instantMs(runStart.at))) {
+    if (needMs <= pointMs(reading) - pointMs(runStart)) {
       return { runStart, metAt: reading };
     }
   }
@@ -37,14 +43,15 @@ function rowMet(
 }
 
 /** Seconds the readings have stayed at or above the row's temperature up to the last one. */
-function trailingRunS(row: HoldRow, readings: readonly ReadingPoint[]): string | null {
-  let start: ReadingPoint | null = null;
+function trailingRunS(row: HoldRow, readings: readonly JudgedPoint[]): string | null {
+  const tempC = new Decimal(row.tempC);
+  let start: JudgedPoint | null = null;
   for (let i = readings.length - 1; i >= 0; i--) {
-    if (new Decimal(readings[i].value).lessThan(row.tempC)) break;
+    if (readings[i].decimal.lessThan(tempC)) break;
     start = readings[i];
   }
   const last = readings.at(-1);
-  return start && last ? secondsBetween(instantMs(start.at), instantMs(last.at)) : null;
+  return start && last ? secondsBetween(pointMs(start), pointMs(last)) : null;
 }
 
 function rowWords(row: HoldRow): string {
@@ -58,7 +65,7 @@ function needWords(rows: readonly HoldRow[]): string {
 }
 
 /** How close the run that ends at the last reading is to meeting a row. */
-function progressWords(rows: readonly HoldRow[], readings: readonly ReadingPoint[]): string | null {
+function progressWords(rows: readonly HoldRow[], readings: readonly JudgedPoint[]): string | null {
   let best: { row: HoldRow; soFar: string; left: Decimal } | null = null;
   for (const row of rows) {
     const soFar = trailingRunS(row, readings);
@@ -77,22 +84,22 @@ function progressWords(rows: readonly HoldRow[], readings: readonly ReadingPoint
 export function judgeHold(
   control: ResolvedControl,
   limit: HoldLimit,
-  readings: readonly ReadingPoint[],
+  readings: readonly JudgedPoint[],
   clock: Clock,
   stepOver: boolean,
 ): ControlState {
   const rows = [...limit.rows].sort((a, b) => new Decimal(a.tempC).comparedTo(b.tempC));
   const when = (iso: string): string => clockWords(iso, clock.timeZone, clock.now);
-  let earliest: { row: HoldRow; runStart: ReadingPoint; metAt: ReadingPoint } | null = null;
+  let earliest: { row: HoldRow; runStart: JudgedPoint; metAt: JudgedPoint } | null = null;
   for (const row of rows) {
     const met = rowMet(row, readings);
-    if (met && (!earliest || instantMs(met.metAt.at) < instantMs(earliest.metAt.at))) {
+    if (met && (!earliest || pointMs(met.metAt) < pointMs(earliest.metAt))) {
       earliest = { row, ...met };
     }
   }
   if (earliest) {
     const { row, runStart, metAt } = earliest;
-    const held = secondsBetween(instantMs(runStart.at), instantMs(metAt.at));
+    const held = secondsBetween(pointMs(runStart), pointMs(metAt));
     const summary =
       row.holdS === '0'
         ? `Met: ${temperatureWords(metAt.value)} at ${when(metAt.at)} (needs ${rowWords(row)})`
@@ -102,8 +109,7 @@ export function judgeHold(
   const need = needWords(rows);
   const last = readings.at(-1);
   const highest = readings.reduce<Decimal | null>(
-    (top, reading) =>
-      top === null || top.lessThan(reading.value) ? new Decimal(reading.value) : top,
+    (top, reading) => (top === null || top.lessThan(reading.decimal) ? reading.decimal : top),
     null,
   );
   const highestWords =
