@@ -1,3 +1,4 @@
+import type { Readable } from 'node:stream';
 import type {
   LoggerSummary,
   ReportBatch,
@@ -9,7 +10,13 @@ import type {
 import type { Deviation, Reading } from '../../shared/api/process-record.ts';
 import { valueWords as inWords } from '../../shared/process/control-words.ts';
 import { shortRevision } from './batch-sheet-pdf.ts';
-import { finishSheet, openSheet } from './sheet-document.ts';
+import {
+  countedPages,
+  countingSheet,
+  endStreamedSheet,
+  openStreamedSheet,
+  type SheetSetup,
+} from './sheet-document.ts';
 import { INK, SMALL, type Column, type Row, type SheetLayout } from './sheet-layout.ts';
 import { heading, subheading } from './sheet-sections.ts';
 import { dayInWords, momentInWords } from './sheet-words.ts';
@@ -17,7 +24,6 @@ import { dayInWords, momentInWords } from './sheet-words.ts';
 /** What the PDF is made from: the head, the batches as they are read, and the period's other records. */
 export interface HaccpReportParts {
   readonly head: ReportHead;
-  readonly batchCount: number;
   readonly batches: AsyncIterable<ReportBatch>;
   readonly refusals: () => Promise<readonly ReportRefusal[]>;
   readonly equipment: () => Promise<readonly ReportEquipment[]>;
@@ -246,22 +252,32 @@ function equipmentBlock(layout: SheetLayout, equipment: readonly ReportEquipment
   }
 }
 
-/**
- * The HACCP records of a period as PDF bytes: a head naming the kitchen, the period and who
- * produced it when; every batch whole; the refused calculations; the equipment logs. Every page
- * carries "page N of M", so the pages are kept until the last is laid out.
- */
-export async function renderHaccpReportPdf(parts: HaccpReportParts): Promise<Buffer> {
-  const { head } = parts;
-  const title = `HACCP records, ${head.kitchen}`;
-  const layout = openSheet({
-    title,
+/** The report's records, all read before the first page is laid out. */
+interface ReportContent {
+  readonly head: ReportHead;
+  readonly batches: readonly ReportBatch[];
+  readonly refusals: readonly ReportRefusal[];
+  readonly equipment: readonly ReportEquipment[];
+}
+
+/** The report's sheet: its title, and the period in every running header and footer. */
+function reportSetup(head: ReportHead): SheetSetup {
+  return {
+    title: `HACCP records, ${head.kitchen}`,
     subject: `HACCP records from ${head.from} to ${head.to}`,
     units: 'metric',
     created: head.producedAt.slice(0, 10),
     lot: `HACCP records ${head.from} to ${head.to}`,
     running: periodWords(head),
-  });
+  };
+}
+
+/** Lays the report out; `pause` is awaited after each batch, to let the pages written go out. */
+async function layReport(
+  layout: SheetLayout,
+  { head, batches, refusals, equipment }: ReportContent,
+  pause: () => Promise<void> = async () => undefined,
+): Promise<void> {
   layout.draw(
     'LARDERBOOK · HACCP RECORDS',
     { size: 7.5, weight: 'semibold', color: INK.rust },
@@ -278,7 +294,7 @@ export async function renderHaccpReportPdf(parts: HaccpReportParts): Promise<Buf
     layout.width,
   );
   layout.paragraph(
-    `${periodWords(head)} (times in ${head.timeZone}) · produced by ${head.producedBy}, ${momentInWords(head.producedAt)} · ${parts.batchCount} batch(es)`,
+    `${periodWords(head)} (times in ${head.timeZone}) · produced by ${head.producedBy}, ${momentInWords(head.producedAt)} · ${batches.length} batch(es)`,
     { size: SMALL, color: INK.muted },
     { after: 8 },
   );
@@ -288,13 +304,55 @@ export async function renderHaccpReportPdf(parts: HaccpReportParts): Promise<Buf
   );
   layout.rule(INK.text, 0.8);
   layout.gap(6);
-  let any = false;
-  for await (const batch of parts.batches) {
-    any = true;
+  for (const batch of batches) {
     batchBlock(layout, batch);
+    await pause();
   }
-  if (!any) layout.paragraph('No batches in the period.');
-  refusalsBlock(layout, await parts.refusals());
-  equipmentBlock(layout, await parts.equipment());
-  return finishSheet(layout, `HACCP records ${head.from} to ${head.to}`);
+  if (!batches.length) layout.paragraph('No batches in the period.');
+  refusalsBlock(layout, refusals);
+  equipmentBlock(layout, equipment);
+}
+
+/** Bytes laid out but not yet taken by the reader, above which laying out waits. */
+const UNREAD_MOST = 4 * 1024 * 1024;
+
+/** The report as a PDF: its page count, and its bytes as they are written. */
+export interface HaccpReportPdf {
+  readonly pages: number;
+  readonly body: Readable;
+}
+
+/**
+ * The HACCP records of a period as a PDF: a head naming the kitchen, the period and who
+ * produced it when; every batch whole; the refused calculations; the equipment logs. Every page
+ * carries the period in its running header and "page N of M" in its footer. The report is laid
+ * out twice: first only measured, to count the pages, then drawn and streamed page by page, so
+ * a month of a busy kitchen (about 4,000 pages) never sits in memory as pages. The records are
+ * read once, before the first pass.
+ */
+export async function renderHaccpReportPdf(parts: HaccpReportParts): Promise<HaccpReportPdf> {
+  const batches: ReportBatch[] = [];
+  for await (const batch of parts.batches) batches.push(batch);
+  const content: ReportContent = {
+    head: parts.head,
+    batches,
+    refusals: await parts.refusals(),
+    equipment: await parts.equipment(),
+  };
+  const counting = countingSheet(reportSetup(parts.head));
+  await layReport(counting, content);
+  const pages = countedPages(counting);
+  const layout = openStreamedSheet(reportSetup(parts.head), pages);
+  const { doc } = layout;
+  const pause = async (): Promise<void> => {
+    await new Promise(setImmediate);
+    while (doc.readableLength > UNREAD_MOST && !doc.destroyed)
+      await new Promise((resolve) => setTimeout(resolve, 10));
+    if (doc.destroyed) throw new Error('the reader went away');
+  };
+  layReport(layout, content, pause).then(
+    () => endStreamedSheet(layout, pages),
+    (error: Error) => doc.destroy(error),
+  );
+  return { pages, body: doc };
 }

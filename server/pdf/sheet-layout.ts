@@ -62,6 +62,10 @@ export const BODY = 9.5;
 /** Small print: notes, sources, table headings, points. */
 export const SMALL = BODY - 1.5;
 const LINE_GAP = 1.6;
+/** Heights of texts already measured, by font, size, width and text: a report repeats its words. */
+const measured = new Map<string, number>();
+/** Kept short of growing without end over a long-running server's many sheets. */
+const MEASURED_MOST = 20_000;
 const CELL_PAD_X = 5;
 const CELL_PAD_Y = 4;
 /** The side of a tick box, points. */
@@ -83,10 +87,12 @@ export class SheetLayout {
   /**
    * @param doc the document, with its margins set to the area the sheet flows in
    * @param running draws the running header of every page after the first
+   * @param counting lays out without drawing: a first pass that only counts the pages
    */
   constructor(
     readonly doc: PDFKit.PDFDocument,
     running: (layout: SheetLayout) => void,
+    readonly counting = false,
   ) {
     const { margins, width, height } = doc.page;
     this.left = margins.left;
@@ -130,16 +136,25 @@ export class SheetLayout {
 
   /** The height a text takes in a width. */
   measure(text: string, style: TextStyle, width: number): number {
+    const weight = style.weight ?? 'regular';
+    const size = style.size ?? BODY;
+    const key = `${weight}|${size}|${width}|${text}`;
+    let height = measured.get(key);
+    if (height !== undefined) return height;
     // Measured in the run's first font: the other subset differs only in a few letters.
-    const runs = fontRuns(text || ' ', style.weight ?? 'regular');
-    return this.doc
+    const runs = fontRuns(text || ' ', weight);
+    height = this.doc
       .font(runs[0].font)
-      .fontSize(style.size ?? BODY)
+      .fontSize(size)
       .heightOfString(runs.map((run) => run.text).join(''), { width, lineGap: LINE_GAP });
+    if (measured.size >= MEASURED_MOST) measured.clear();
+    measured.set(key, height);
+    return height;
   }
 
   /** Draws text at a place without moving the flow; returns its height. */
   draw(text: string, style: TextStyle, x: number, y: number, width: number): number {
+    if (this.counting) return text ? this.measure(text, style, width) : 0;
     const runs = fontRuns(text, style.weight ?? 'regular');
     if (!runs.length) return 0;
     const doc = this.doc.fillColor(style.color ?? INK.text).fontSize(style.size ?? BODY);
@@ -162,11 +177,13 @@ export class SheetLayout {
 
   /** A thin line across the text area (or from `from` to `to`). */
   rule(color: string = INK.rule, weight = 0.6, from = this.left, to = this.right): void {
+    if (this.counting) return;
     this.doc.moveTo(from, this.y).lineTo(to, this.y).lineWidth(weight).strokeColor(color).stroke();
   }
 
   /** A box to tick, drawn (not a character), with its top-left corner at x, y. */
   tickBox(x: number, y: number): void {
+    if (this.counting) return;
     this.doc.lineWidth(0.8).strokeColor(INK.text).rect(x, y, TICK, TICK).stroke();
   }
 
@@ -234,7 +251,7 @@ export class SheetLayout {
   ): void {
     const doc = this.doc;
     const [from, to] = [edges[0], edges[edges.length - 1]];
-    if (row.fill)
+    if (row.fill && !this.counting)
       doc
         .rect(from, this.y, to - from, height)
         .fillColor(row.fill)
