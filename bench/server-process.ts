@@ -1,6 +1,6 @@
 // Starts the built server as its own process for benchmarks, on a fresh data folder.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { cpSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { buildBundle, BUNDLES } from '../scripts/bundles.mjs';
@@ -14,6 +14,8 @@ export interface BenchServer {
   rssMb(): number;
   /** The most resident memory the server process has held since it started (VmHWM), in MB. */
   peakRssMb(): number;
+  /** Starts the peak RSS over from now (Linux: /proc/PID/clear_refs); false where it cannot. */
+  resetPeakRss(): boolean;
   stop(): Promise<void>;
 }
 
@@ -65,6 +67,14 @@ export async function startBenchServer(
     dataDir,
     rssMb: () => statusMb('VmRSS'),
     peakRssMb: () => statusMb('VmHWM'),
+    resetPeakRss: () => {
+      try {
+        writeFileSync(`/proc/${child.pid}/clear_refs`, '5');
+        return true;
+      } catch {
+        return false;
+      }
+    },
     stop: async () => {
       const exited = new Promise((resolve) => child.once('exit', resolve));
       child.kill('SIGTERM');
