@@ -14,6 +14,8 @@ export interface BenchServer {
   rssMb(): number;
   /** The most resident memory the server process has held since it started (VmHWM), in MB. */
   peakRssMb(): number;
+  /** CPU time the server has used so far, seconds (Linux: /proc/PID/stat); 0 where there is no /proc. */
+  cpuSeconds(): number;
   /** Starts the peak RSS over from now (Linux: /proc/PID/clear_refs); false where it cannot. */
   resetPeakRss(): boolean;
   stop(): Promise<void>;
@@ -67,6 +69,15 @@ export async function startBenchServer(
     dataDir,
     rssMb: () => statusMb('VmRSS'),
     peakRssMb: () => statusMb('VmHWM'),
+    cpuSeconds: () => {
+      try {
+        // utime and stime, the 14th and 15th fields, in clock ticks of 1/100 s.
+        const fields = readFileSync(`/proc/${child.pid}/stat`, 'utf8').split(') ')[1].split(' ');
+        return (Number(fields[11]) + Number(fields[12])) / 100;
+      } catch {
+        return 0;
+      }
+    },
     resetPeakRss: () => {
       try {
         writeFileSync(`/proc/${child.pid}/clear_refs`, '5');
