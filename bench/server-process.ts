@@ -1,6 +1,6 @@
 // Starts the built server as its own process for benchmarks, on a fresh data folder.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { cpSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { buildBundle, BUNDLES } from '../scripts/bundles.mjs';
@@ -14,6 +14,10 @@ export interface BenchServer {
   rssMb(): number;
   /** The most resident memory the server process has held since it started (VmHWM), in MB. */
   peakRssMb(): number;
+  /** CPU time the server has used so far, seconds (Linux: /proc/PID/stat); 0 where there is no /proc. */
+  cpuSeconds(): number;
+  /** Starts the peak RSS over from now (Linux: /proc/PID/clear_refs); false where it cannot. */
+  resetPeakRss(): boolean;
   stop(): Promise<void>;
 }
 
@@ -65,6 +69,23 @@ export async function startBenchServer(
     dataDir,
     rssMb: () => statusMb('VmRSS'),
     peakRssMb: () => statusMb('VmHWM'),
+    cpuSeconds: () => {
+      try {
+        // utime and stime, the 14th and 15th fields, in clock ticks of 1/100 s.
+        const fields = readFileSync(`/proc/${child.pid}/stat`, 'utf8').split(') ')[1].split(' ');
+        return (Number(fields[11]) + Number(fields[12])) / 100;
+      } catch {
+        return 0;
+      }
+    },
+    resetPeakRss: () => {
+      try {
+        writeFileSync(`/proc/${child.pid}/clear_refs`, '5');
+        return true;
+      } catch {
+        return false;
+      }
+    },
     stop: async () => {
       const exited = new Promise((resolve) => child.once('exit', resolve));
       child.kill('SIGTERM');

@@ -135,8 +135,13 @@ export class LocalRecords implements RecordKeeper {
         kitchen: Records.kitchenName(),
         now: new Date(),
       });
-      if (produced.format !== 'csv') return produced;
+      if (produced.format === 'json') return produced;
       // Read whole before the records close.
+      if (produced.format === 'pdf') {
+        const chunks: Buffer[] = [];
+        for await (const chunk of produced.body) chunks.push(chunk);
+        return { format: 'pdf', body: Buffer.concat(chunks) };
+      }
       let text = '';
       for await (const chunk of produced.body) text += chunk;
       return { format: 'csv', body: text };

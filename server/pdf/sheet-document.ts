@@ -34,10 +34,14 @@ function utcDay(day: string): Date {
  * later pages start with a running header of the title and lot.
  */
 export function openSheet(setup: SheetSetup): SheetLayout {
+  return sheetLayout(setup, true, false);
+}
+
+function sheetLayout(setup: SheetSetup, bufferPages: boolean, counting: boolean): SheetLayout {
   const doc = new PDFDocument({
     size: setup.units === 'us' ? 'LETTER' : 'A4',
     margins: MARGINS,
-    bufferPages: true,
+    bufferPages,
     // The sheet's own font from the start, so pdfkit never loads its built-in Helvetica.
     font: fontFile('regular', 'latin'),
     lang: 'en',
@@ -51,25 +55,107 @@ export function openSheet(setup: SheetSetup): SheetLayout {
     },
   });
   for (const { name, file } of sheetFonts()) doc.registerFont(name, file);
-  return new SheetLayout(doc, (layout) => {
-    layout.draw(
-      setup.title,
-      { size: 8, color: INK.muted },
-      layout.left,
-      layout.y,
-      layout.width * 0.7,
-    );
-    layout.draw(
-      setup.running ?? `Lot ${setup.lot}`,
-      { size: 8, color: INK.muted, weight: 'semibold', align: 'right' },
-      layout.left,
-      layout.y,
-      layout.width,
-    );
-    layout.gap(14);
-    layout.rule();
-    layout.gap(12);
-  });
+  return new SheetLayout(
+    doc,
+    (layout) => {
+      layout.draw(
+        setup.title,
+        { size: 8, color: INK.muted },
+        layout.left,
+        layout.y,
+        layout.width * 0.7,
+      );
+      layout.draw(
+        setup.running ?? `Lot ${setup.lot}`,
+        { size: 8, color: INK.muted, weight: 'semibold', align: 'right' },
+        layout.left,
+        layout.y,
+        layout.width,
+      );
+      layout.gap(14);
+      layout.rule();
+      layout.gap(12);
+    },
+    counting,
+  );
+}
+
+/** Draws the footer "Larderbook · LOT · page N of M" at the foot of the current page. */
+function footer(layout: SheetLayout, text: string): void {
+  const { doc } = layout;
+  const page = doc.page;
+  const keep = page.margins.bottom;
+  // Text below the bottom margin would make pdfkit start a page of its own.
+  page.margins.bottom = 0;
+  const y = page.height - FOOTER_FROM_BOTTOM;
+  doc
+    .moveTo(layout.left, y - 8)
+    .lineTo(layout.right, y - 8)
+    .lineWidth(0.4)
+    .strokeColor(INK.rule)
+    .stroke();
+  doc
+    .font(fontName('regular', 'latin'))
+    .fontSize(BODY - 1.5)
+    .fillColor(INK.muted)
+    .text(text, layout.left, y, { width: layout.width, lineBreak: false });
+  page.margins.bottom = keep;
+}
+
+/**
+ * Opens a sheet written page by page: each page goes out as soon as the next one starts, with
+ * its footer "Larderbook · LOT · page N of M" drawn first, so a long report never sits in memory
+ * whole. The page count M comes from a first pass ({@link countingSheet}) over the same layout.
+ * Read the bytes from `layout.doc` (a readable stream) and end it with {@link endStreamedSheet}.
+ */
+export function openStreamedSheet(setup: SheetSetup, pages: number): SheetLayout {
+  const layout = sheetLayout(setup, false, false);
+  const { doc } = layout;
+  const addPage = doc.addPage.bind(doc);
+  let page = 1;
+  doc.addPage = (options) => {
+    // pdfkit may start a page in the middle of a text: it goes on in its own font and size.
+    const { _font: font, _fontSize: size, x, y } = doc as unknown as Record<string, never>;
+    footer(layout, footerWords(setup.lot, page++, pages));
+    Object.assign(doc, { _font: font, _fontSize: size, x, y });
+    return addPage(options);
+  };
+  streamedPages.set(layout, { lot: setup.lot, page: () => page });
+  return layout;
+}
+
+/** A streamed or counting sheet's lot words and the page it is on. */
+const streamedPages = new WeakMap<SheetLayout, { lot: string; page: () => number }>();
+
+function footerWords(lot: string, page: number, pages: number): string {
+  return `Larderbook · ${lot} · page ${page} of ${pages}`;
+}
+
+/** Draws the last page's footer of a streamed sheet and ends its document. */
+export function endStreamedSheet(layout: SheetLayout, pages: number): void {
+  const streamed = streamedPages.get(layout);
+  footer(layout, footerWords(streamed?.lot ?? '', streamed?.page() ?? pages, pages));
+  layout.doc.end();
+}
+
+/**
+ * Opens a sheet that only counts its pages: the same layout, measured and never drawn, its
+ * document's bytes thrown away. Lay the sheet out on it, then read {@link countedPages}.
+ */
+export function countingSheet(setup: SheetSetup): SheetLayout {
+  const layout = sheetLayout(setup, false, true);
+  let pages = 1;
+  layout.doc.on('pageAdded', () => pages++);
+  layout.doc.on('data', () => undefined);
+  streamedPages.set(layout, { lot: setup.lot, page: () => pages });
+  return layout;
+}
+
+/** The pages a counting sheet has laid out, and ends it. */
+export function countedPages(layout: SheetLayout): number {
+  const pages = streamedPages.get(layout)?.page() ?? 1;
+  layout.doc.end();
+  return pages;
 }
 
 /**
@@ -81,26 +167,7 @@ export function finishSheet(layout: SheetLayout, lot: string): Promise<Buffer> {
   const { start, count } = doc.bufferedPageRange();
   for (let i = start; i < start + count; i++) {
     doc.switchToPage(i);
-    const page = doc.page;
-    const keep = page.margins.bottom;
-    // Text below the bottom margin would make pdfkit start a page of its own.
-    page.margins.bottom = 0;
-    const y = page.height - FOOTER_FROM_BOTTOM;
-    doc
-      .moveTo(layout.left, y - 8)
-      .lineTo(layout.right, y - 8)
-      .lineWidth(0.4)
-      .strokeColor(INK.rule)
-      .stroke();
-    doc
-      .font(fontName('regular', 'latin'))
-      .fontSize(BODY - 1.5)
-      .fillColor(INK.muted)
-      .text(`Larderbook · ${lot} · page ${i - start + 1} of ${count}`, layout.left, y, {
-        width: layout.width,
-        lineBreak: false,
-      });
-    page.margins.bottom = keep;
+    footer(layout, footerWords(lot, i - start + 1, count));
   }
   return new Promise((resolve, reject) => {
     const chunks: Buffer[] = [];

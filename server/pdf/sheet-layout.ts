@@ -1,4 +1,4 @@
-import { fontRuns, type FontWeight } from './sheet-fonts.ts';
+import { fontRuns, type FontRun, type FontWeight } from './sheet-fonts.ts';
 
 /** The sheet's palette: the console's warm rust, olive and paper tones, in print strength. */
 export const INK = {
@@ -62,6 +62,30 @@ export const BODY = 9.5;
 /** Small print: notes, sources, table headings, points. */
 export const SMALL = BODY - 1.5;
 const LINE_GAP = 1.6;
+/** A text's height in a width, and whether it is one line. */
+interface Measured {
+  readonly height: number;
+  /** The width of a text of one line in one font, trailing spaces left out; else undefined. */
+  readonly lineWidth: number | undefined;
+}
+/** Texts already measured, by weight, size, width and text: a report repeats its words. */
+const measured = new Map<string, Measured>();
+/** Texts already split into font runs, by weight and text. */
+const split = new Map<string, FontRun[]>();
+/** Kept short of growing without end over a long-running server's many sheets. */
+const REMEMBERED_MOST = 20_000;
+
+function remember<T>(map: Map<string, T>, key: string, value: T): T {
+  if (map.size >= REMEMBERED_MOST) map.clear();
+  map.set(key, value);
+  return value;
+}
+
+/** {@link fontRuns}, remembered: a report draws the same words on every batch. */
+function runsOf(text: string, weight: FontWeight): FontRun[] {
+  const key = `${weight}|${text}`;
+  return split.get(key) ?? remember(split, key, fontRuns(text, weight));
+}
 const CELL_PAD_X = 5;
 const CELL_PAD_Y = 4;
 /** The side of a tick box, points. */
@@ -83,10 +107,12 @@ export class SheetLayout {
   /**
    * @param doc the document, with its margins set to the area the sheet flows in
    * @param running draws the running header of every page after the first
+   * @param counting lays out without drawing: a first pass that only counts the pages
    */
   constructor(
     readonly doc: PDFKit.PDFDocument,
     running: (layout: SheetLayout) => void,
+    readonly counting = false,
   ) {
     const { margins, width, height } = doc.page;
     this.left = margins.left;
@@ -130,19 +156,47 @@ export class SheetLayout {
 
   /** The height a text takes in a width. */
   measure(text: string, style: TextStyle, width: number): number {
+    return this.measured(text, style, width).height;
+  }
+
+  private measured(text: string, style: TextStyle, width: number): Measured {
+    const weight = style.weight ?? 'regular';
+    const size = style.size ?? BODY;
+    const key = `${weight}|${size}|${width}|${text}`;
+    const known = measured.get(key);
+    if (known) return known;
     // Measured in the run's first font: the other subset differs only in a few letters.
-    const runs = fontRuns(text || ' ', style.weight ?? 'regular');
-    return this.doc
-      .font(runs[0].font)
-      .fontSize(style.size ?? BODY)
-      .heightOfString(runs.map((run) => run.text).join(''), { width, lineGap: LINE_GAP });
+    const runs = runsOf(text || ' ', weight);
+    const doc = this.doc.font(runs[0].font).fontSize(size);
+    const height = doc.heightOfString(runs.map((run) => run.text).join(''), {
+      width,
+      lineGap: LINE_GAP,
+    });
+    const oneLine =
+      runs.length === 1 &&
+      !text.includes('\n') &&
+      height <= doc.currentLineHeight(true) + LINE_GAP + 0.01;
+    const lineWidth = oneLine ? doc.widthOfString(runs[0].text.trimEnd()) : undefined;
+    return remember(measured, key, { height, lineWidth });
   }
 
   /** Draws text at a place without moving the flow; returns its height. */
   draw(text: string, style: TextStyle, x: number, y: number, width: number): number {
-    const runs = fontRuns(text, style.weight ?? 'regular');
+    if (this.counting) return text ? this.measure(text, style, width) : 0;
+    const runs = runsOf(text, style.weight ?? 'regular');
     if (!runs.length) return 0;
     const doc = this.doc.fillColor(style.color ?? INK.text).fontSize(style.size ?? BODY);
+    const { height, lineWidth } = this.measured(text, style, width);
+    if (lineWidth !== undefined) {
+      // One line in one font: placed here, without pdfkit wrapping it again word by word.
+      const room = width - lineWidth;
+      const shift = style.align === 'right' ? room : style.align === 'center' ? room / 2 : 0;
+      doc.font(runs[0].font).text(runs[0].text, x + shift, y, {
+        lineBreak: false,
+        lineGap: LINE_GAP,
+      });
+      return height;
+    }
     const options = { width, align: style.align ?? 'left', lineGap: LINE_GAP } as const;
     runs.forEach((run, i) => {
       const continued = i < runs.length - 1;
@@ -150,7 +204,7 @@ export class SheetLayout {
       if (i === 0) doc.text(run.text, x, y, { ...options, continued });
       else doc.text(run.text, { ...options, continued });
     });
-    return this.measure(text, style, width);
+    return height;
   }
 
   /** A paragraph in the flow, indented by `indent`; moves past it. */
@@ -162,11 +216,13 @@ export class SheetLayout {
 
   /** A thin line across the text area (or from `from` to `to`). */
   rule(color: string = INK.rule, weight = 0.6, from = this.left, to = this.right): void {
+    if (this.counting) return;
     this.doc.moveTo(from, this.y).lineTo(to, this.y).lineWidth(weight).strokeColor(color).stroke();
   }
 
   /** A box to tick, drawn (not a character), with its top-left corner at x, y. */
   tickBox(x: number, y: number): void {
+    if (this.counting) return;
     this.doc.lineWidth(0.8).strokeColor(INK.text).rect(x, y, TICK, TICK).stroke();
   }
 
@@ -234,7 +290,7 @@ export class SheetLayout {
   ): void {
     const doc = this.doc;
     const [from, to] = [edges[0], edges[edges.length - 1]];
-    if (row.fill)
+    if (row.fill && !this.counting)
       doc
         .rect(from, this.y, to - from, height)
         .fillColor(row.fill)

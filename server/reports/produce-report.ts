@@ -18,14 +18,6 @@ import {
 import { reportPeriod, type ReportPeriod } from './report-period.ts';
 import { REPORT_ROLES } from './report-roles.ts';
 
-/**
- * The most batches one PDF holds. pdfkit keeps every page until the last to number them "page N
- * of M", and a month of a busy kitchen (1,000 batches) ran the server out of its heap
- * (bench/README.md): until the PDF is laid out twice and streamed, a longer period is refused
- * with words, never a crash. The CSV and JSON stream and have no such limit.
- */
-export const MAX_PDF_BATCHES = 200;
-
 /** The formats a report is produced in. */
 export type ReportFormat = 'pdf' | 'csv' | 'json';
 
@@ -39,9 +31,9 @@ export interface ReportRequest {
   readonly ip?: string;
 }
 
-/** A report ready to write: its name, and its body as bytes, chunks or JSON. */
+/** A report ready to write: its name, and its body as chunks (PDF bytes, CSV text) or JSON. */
 export type ProducedReport =
-  | { readonly format: 'pdf'; readonly file: string; readonly body: Buffer }
+  | { readonly format: 'pdf'; readonly file: string; readonly body: AsyncIterable<Buffer> }
   | { readonly format: 'csv'; readonly file: string; readonly body: AsyncIterable<string> }
   | { readonly format: 'json'; readonly file: string; readonly body: HaccpReport };
 
@@ -85,13 +77,6 @@ export async function produceReport(
     clock: { now: head.producedAt, timeZone: head.timeZone },
   };
   const ids = format === 'csv' ? null : await periodBatchIds(db.sequelize, period);
-  if (format === 'pdf' && ids && ids.length > MAX_PDF_BATCHES)
-    throw new RecordsError(
-      'refused',
-      'report-too-large',
-      `the PDF holds at most ${MAX_PDF_BATCHES} batches and ${period.from} to ${period.to} has ${ids.length}: ask for a shorter period, or take the CSV`,
-      [{ option: 'from', batches: ids.length, most: MAX_PDF_BATCHES }],
-    );
   await audit.append({
     actor: request.by,
     action: 'report-produce',
@@ -103,9 +88,8 @@ export async function produceReport(
   if (format === 'csv') return { format, file, body: csvChunks(source, period, head) };
   if (format === 'json') return { format, file, body: await haccpReport(source, period, head) };
   const { renderHaccpReportPdf } = await import('../pdf/haccp-report-pdf.ts');
-  const body = await renderHaccpReportPdf({
+  const { body } = await renderHaccpReportPdf({
     head,
-    batchCount: ids?.length ?? 0,
     batches: reportBatches(source, ids ?? []),
     refusals: () => reportRefusals(source, period),
     equipment: () => reportEquipment(source, period),

@@ -30,7 +30,7 @@ export function reportsRouter(context: AppContext): Router {
     if (report.format === 'json') return res.json(report.body);
     res.setHeader('Content-Type', CONTENT_TYPE[report.format]);
     res.setHeader('Content-Disposition', `attachment; filename="${report.file}"`);
-    if (report.format === 'pdf') return res.send(report.body);
+    // Both stream: a month's PDF is written page by page, the CSV a page of batches at a time.
     for await (const chunk of report.body) {
       if (res.destroyed) break;
       if (!res.write(chunk)) await drained(res);

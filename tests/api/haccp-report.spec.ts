@@ -184,6 +184,51 @@ describe('the HACCP records report', () => {
     assert.equal(rows[0][column('type')], 'report');
   });
 
+  it('should give the PDF of more than 200 batches, every page numbered "of" the whole', async (t) => {
+    const server = await startTestServer(t);
+    const first = await recordBatch(server.as('tobin'), BELLY);
+    const firstId = await idOf(server, 'batches', first);
+    // 249 more copies of it written straight into the table, as a busy month has them, each
+    // with a hand reading: through the API, 250 batches would take most of a minute.
+    const columns = `formula_id, formula_revision, formula_title, kind, status, operator_id, started_on,
+      ready_on, recorded_at, updated_at, units, inputs, result, checks_passed, nitrite_ppm, notes, planned_by`;
+    const lots = [first];
+    for (let i = 2; i <= 250; i++) {
+      const lot = `${first}-${String(i).padStart(3, '0')}`;
+      await server.context.db.sequelize.query(
+        `INSERT INTO batches (lot_code, ${columns}) SELECT ?, ${columns} FROM batches WHERE id = ?`,
+        { replacements: [lot, firstId], type: QueryTypes.INSERT },
+      );
+      lots.push(lot);
+    }
+    const ids = await server.context.db.sequelize.query<{ id: number }>(
+      'SELECT id FROM batches ORDER BY id',
+      { type: QueryTypes.SELECT },
+    );
+    await addReadings(
+      server,
+      ids.map(({ id }, i) => ({
+        batchId: id,
+        control: 'smoker',
+        at: localAt(600 + i),
+        value: '71',
+        source: 'console' as const,
+      })),
+    );
+    const pdf = await fetchRaw(server, 'imke', `/api/reports/haccp.pdf?from=${TODAY}&to=${TODAY}`);
+    assert.equal(pdf.status, 200);
+    const { all, pages } = await pdfText(pdf.bytes);
+    assert.ok(pages.length > 1, `${pages.length} pages`);
+    // The demo kitchen's own batches come with the test server: ours are 250 of them.
+    const count = Number(/(\d+) batch\(es\)/.exec(pages[0])?.[1]);
+    assert.ok(count >= 250, `${count} batches`);
+    // Headings are set in capitals.
+    assert.ok(all.includes(`LOT ${first} `), all.slice(0, 2000));
+    assert.ok(all.includes(`LOT ${lots[249]}`), all.slice(-3000));
+    pages.forEach((page, i) => assert.match(page, new RegExp(`page ${i + 1} of ${pages.length}`)));
+    pages.forEach((page) => assert.match(page, /Quillmoor Smokehouse/));
+  });
+
   it('should leave out a batch outside the period and refuse a period that is not one', async (t) => {
     const server = await startTestServer(t);
     const lot = await withRecords(server);
