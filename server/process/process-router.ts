@@ -6,6 +6,7 @@ import { changeBy } from '../auth/request-person.ts';
 import { notFound } from '../http/app-error.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { validateBody } from '../http/validate-body.ts';
+import { PROCESS_ROLES } from '../records/records.ts';
 import type { ReadingRequest } from '../../shared/api/process-record.ts';
 import type { Role } from '../../shared/api/person.ts';
 import { DISPOSITIONS, type ActionRequest } from './corrective-actions.ts';
@@ -13,8 +14,6 @@ import { readLoggerFile } from './logger-body.ts';
 import { readingSource } from './reading-input.ts';
 import type { CorrectionRequest } from './reading-writes.ts';
 
-/** Who records what happened at the bench: readings, corrections, corrective actions. */
-const PROCESS_ROLES: readonly Role[] = ['admin', 'cook', 'reviewer'];
 /** Who verifies records and releases batches. */
 const VERIFY_ROLES: readonly Role[] = ['admin', 'reviewer'];
 
