@@ -100,15 +100,26 @@ export class BatchRepository {
    * Stores several calculated batches in one write transaction, all or nothing (a plan's
    * batches): each under the next free lot code of its day and formula, with its 'recorded'
    * event and audit entry. Retried whole when another process took a lot code first.
+   * `around` runs in the same write: `before` may refuse (throw) before anything is written,
+   * `after` is given the batches recorded (a plan noted as recorded).
    */
-  async recordAll(batches: readonly NewBatch[], options: ChangeOptions): Promise<Batch[]> {
+  async recordAll(
+    batches: readonly NewBatch[],
+    options: ChangeOptions,
+    around: {
+      before?: (t: Transaction) => Promise<void>;
+      after?: (t: Transaction, recorded: readonly Batch[]) => Promise<void>;
+    } = {},
+  ): Promise<Batch[]> {
     for (let attempt = 1; ; attempt++) {
       try {
         return await this.write(async (t) => {
+          await around.before?.(t);
           const recorded: Batch[] = [];
           for (const batch of batches) {
             recorded.push(await this.mustGet(await this.writes.insert(t, batch, options), t));
           }
+          await around.after?.(t, recorded);
           return recorded;
         });
       } catch (error) {

@@ -34,6 +34,12 @@ export const PLAN_BODY = {
   },
 } as const;
 
+/** The body of POST /api/plans/record: a plan, and `again` to record it although it was before. */
+export const RECORD_BODY = {
+  ...PLAN_BODY,
+  properties: { ...PLAN_BODY.properties, again: { type: 'boolean' } },
+} as const;
+
 /**
  * A refused plan as the API answers it: 400 for a count or date that cannot be used, 422
  * 'critical-limit' for a batch over its limit (as POST /api/batches), 422 'plan-refused' for any

@@ -6,20 +6,30 @@ import { changeBy } from '../auth/request-person.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { RECORDING_ROLES, planSheetPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
-import { PLAN_BODY, planFromStore, type PlanRequest } from './plan-request.ts';
+import type { PlanList } from '../../shared/api/plan-record.ts';
+import { PLAN_BODY, RECORD_BODY, planFromStore, type PlanRequest } from './plan-request.ts';
 
 /**
- * /api/plans: plan N units of an assembly for a service day (every signed-in role), and record
- * the plan's batches as planned (admins and cooks). A plan that cannot be made is 422 with the
- * reason, naming the formula; nothing is recorded.
+ * /api/plans: the plans made (every signed-in role), plan N units of an assembly for a service
+ * day (every signed-in role), and record the plan's batches as planned (admins and cooks). A plan
+ * that cannot be made is 422 with the reason, naming the formula; nothing is recorded. A plan
+ * whose menu item and day already have batches recorded is 409 with those batches, unless the
+ * body says `again: true`.
  */
 export function plansRouter(context: AppContext): Router {
   const { formulas, records } = context;
   const router = Router();
 
+  // The plans made, newest first, recorded or not.
+  router.get('/', async (_req, res) => {
+    res.json({ plans: await records.listPlans() } satisfies PlanList);
+  });
+
+  // A plan worked out is noted as made (once per menu item, count and day), for the list.
   router.post('/', validateBody(PLAN_BODY), async (req, res) => {
     const request = req.body as PlanRequest;
     const plan = await planFromStore(formulas, request, serverToday(context));
+    await records.planMade(plan, changeBy(req, context));
     res.json(presentPlan(plan, request.units ?? 'metric'));
   });
 
@@ -44,12 +54,15 @@ export function plansRouter(context: AppContext): Router {
   router.post(
     '/record',
     requireRole(...RECORDING_ROLES),
-    validateBody(PLAN_BODY),
+    validateBody(RECORD_BODY),
     async (req, res) => {
-      const request = req.body as PlanRequest;
+      const { again, ...request } = req.body as PlanRequest & { again?: boolean };
       const plan = await planFromStore(formulas, request, serverToday(context));
       const units = request.units ?? 'metric';
-      const recorded = await records.recordPlan(plan, units, changeBy(req, context));
+      const recorded = await records.recordPlan(plan, units, {
+        ...changeBy(req, context),
+        again: again === true,
+      });
       res.status(201).json({ plan: presentPlan(plan, units), batches: recorded });
     },
   );

@@ -1,9 +1,12 @@
 import type { PlanResult, UnitSystem } from '../../shared/index.ts';
 import type { Batch } from '../../shared/api/batch-record.ts';
+import type { PlanAlreadyRecorded } from '../../shared/api/plan-record.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { BatchRepository } from '../batches/batch-repository.ts';
 import { prepareBatch } from '../batches/prepare-batch.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
+import { AppError } from '../http/app-error.ts';
+import type { PlanRepository } from './plan-repository.ts';
 
 /** The note every batch of a plan is recorded with: "plan: smokehouse-burger ×120 for 2026-12-18". */
 export function planNote(plan: PlanResult): string {
@@ -15,15 +18,19 @@ export function planNote(plan: PlanResult): string {
  * path as POST /api/batches: each formula's current revision (noted in its history first), then
  * prepareBatch, which calculates the batch again and refuses it over a critical limit; then all
  * of them in one write transaction, so either every batch is recorded or none is.
+ * Batches already recorded from a plan for the same menu item and day of service (any count, not
+ * discarded) refuse it, in that same write, unless `again` says the cook means to record more.
  * @returns the recorded batches, earliest start first
+ * @throws AppError 409 'plan-already-recorded' with {@link PlanAlreadyRecorded} as its detail
  */
 export async function recordPlan(
   plan: PlanResult,
   units: UnitSystem,
   operatorId: number,
-  { history, batches }: { history: FormulaHistory; batches: BatchRepository },
-  options: ChangeOptions,
+  deps: { history: FormulaHistory; batches: BatchRepository; plans: PlanRepository },
+  options: ChangeOptions & { readonly again?: boolean },
 ): Promise<Batch[]> {
+  const { history, batches, plans } = deps;
   const notes = planNote(plan);
   const prepared = [];
   for (const batch of plan.batches) {
@@ -37,5 +44,35 @@ export async function recordPlan(
       ),
     );
   }
-  return batches.recordAll(prepared, options);
+  const again = options.again === true;
+  return batches.recordAll(prepared, options, {
+    before: async (t) => {
+      if (again) return;
+      const already = await plans.batchesOf(plan.assembly.id, plan.serviceDate, t);
+      if (already.length > 0) throw alreadyRecorded(plan, already);
+    },
+    after: (t, recorded) =>
+      plans.recorded(
+        t,
+        plan,
+        recorded.map((b) => b.lotCode),
+        again,
+        options,
+      ),
+  });
+}
+
+function alreadyRecorded(plan: PlanResult, batches: PlanAlreadyRecorded['batches']): AppError {
+  const detail: PlanAlreadyRecorded = {
+    assembly: plan.assembly.id,
+    serviceDate: plan.serviceDate,
+    batches,
+  };
+  const n = batches.length;
+  return new AppError(
+    409,
+    'plan-already-recorded',
+    `${n} ${n === 1 ? 'batch is' : 'batches are'} already recorded for ${plan.assembly.title} on ${plan.serviceDate}: record again only to make more`,
+    [detail],
+  );
 }

@@ -35,6 +35,8 @@ export const AUDIT_ACTIONS = [
   'calibration-add',
   'process-alert-send',
   'report-produce',
+  'plan-make',
+  'plan-record',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

@@ -126,4 +126,76 @@ describe('POST /api/plans', () => {
     const one = await server().as('imke').get(`/api/batches/${batches[0].lotCode}`);
     assert.match(one.json.batch.notes, new RegExp(`plan: smokehouse-burger ×120 for ${SERVICE}`));
   });
+
+  it('should answer 409 with the batches already recorded, and record again only when asked', async () => {
+    // Another day, so the test stands alone; a different count is still the same service.
+    const day = addDays(SERVICE, 7);
+    const first = await server()
+      .as('tobin')
+      .post('/api/plans/record', { ...BURGERS, for: day });
+    assert.equal(first.status, 201, first.text);
+    const lots = first.json.batches.map((b: { lotCode: string }) => b.lotCode);
+    assert.equal(lots.length, 4);
+
+    const before = await snapshot(server());
+    const twice = await server()
+      .as('tobin')
+      .post('/api/plans/record', { ...BURGERS, count: 150, for: day });
+    assertErrorEnvelope(twice, 'recorded twice');
+    assert.equal(twice.status, 409);
+    assert.equal(twice.json.error.code, 'plan-already-recorded');
+    const detail = twice.json.error.details[0];
+    assert.equal(detail.serviceDate, day);
+    assert.deepEqual(
+      detail.batches.map((b: { lotCode: string }) => b.lotCode).sort(),
+      [...lots].sort(),
+    );
+    assert.deepEqual(await snapshot(server()), before, 'nothing recorded the second time');
+
+    const again = await server()
+      .as('tobin')
+      .post('/api/plans/record', { ...BURGERS, count: 150, for: day, again: true });
+    assert.equal(again.status, 201, again.text);
+    assert.equal(again.json.batches.length, 4);
+    const bad = await server()
+      .as('tobin')
+      .post('/api/plans/record', { ...BURGERS, for: day, again: 'yes' });
+    assert.equal(bad.status, 400);
+  });
+
+  it('should list the plans made, who made them and whether they were recorded', async () => {
+    const day = addDays(SERVICE, 14);
+    const shown = await server()
+      .as('imke')
+      .post('/api/plans', { ...BURGERS, count: 40, for: day });
+    assert.equal(shown.status, 200, shown.text);
+    // Shown twice: one plan made, by the first to work it out.
+    await server()
+      .as('tobin')
+      .post('/api/plans', { ...BURGERS, count: 40, for: day });
+    const recorded = await server()
+      .as('tobin')
+      .post('/api/plans/record', { ...BURGERS, count: 60, for: day });
+    assert.equal(recorded.status, 201, recorded.text);
+
+    const listed = await server().as('imke').get('/api/plans');
+    assert.equal(listed.status, 200, listed.text);
+    const mine = listed.json.plans.filter((p: { serviceDate: string }) => p.serviceDate === day);
+    assert.deepEqual(
+      mine.map((p: { count: number; madeBy: { displayName: string }; recorded: unknown }) => [
+        p.count,
+        p.recorded === null ? 'not recorded' : 'recorded',
+      ]),
+      [
+        [60, 'recorded'],
+        [40, 'not recorded'],
+      ],
+    );
+    const forty = mine.find((p: { count: number }) => p.count === 40);
+    const sixty = mine.find((p: { count: number }) => p.count === 60);
+    // source: server/demo/demo-people.ts, the demo crew's names
+    assert.equal(forty.madeBy.displayName, 'Imke Tressaly (food safety)');
+    assert.equal(sixty.recorded.batches, 4);
+    assert.equal(sixty.assembly.id, 'smokehouse-burger');
+  });
 });

@@ -34,6 +34,8 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'calibration-add', label: 'Checked a thermometer' },
   { value: 'process-alert-send', label: 'Sent an alert' },
   { value: 'report-produce', label: 'Produced a HACCP report' },
+  { value: 'plan-make', label: 'Made a plan' },
+  { value: 'plan-record', label: 'Recorded a plan as planned' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));
