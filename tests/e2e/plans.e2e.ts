@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
 import { collectConsoleErrors, startConsole } from './browser.ts';
+import { shootAtWidths } from './widths.ts';
 
 /** A calendar day `days` after `day` (YYYY-MM-DD). */
 function addDays(day: string, days: number): string {
@@ -146,6 +147,102 @@ describe('plans in the console', () => {
       .map((batch) => [batch.notes, batch.startedOn]);
     assert.equal(mine.length, 4);
     for (const [notes] of mine) assert.equal(notes, `plan: smokehouse-burger ×120 for ${SERVICE}`);
+    assert.deepEqual(errors, []);
+  });
+
+  it('should warn before recording a service twice, show what is recorded, and record again only when asked', async (t) => {
+    const session = await startConsole(t);
+    const day = addDays(SERVICE, 7);
+    // Rosa already recorded 100 burgers for that day.
+    const first = await session.server.as('rosa').post('/api/plans/record', {
+      assembly: 'smokehouse-burger',
+      count: 100,
+      for: day,
+    });
+    assert.equal(first.status, 201, first.text);
+    const already = (first.json.batches as { lotCode: string }[]).map((b) => b.lotCode);
+
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/plans?assembly=smokehouse-burger&count=120&for=${day}`, {
+      waitUntil: 'networkidle',
+    });
+    await page.getByTestId('plan-title').getByText('Smokehouse burger × 120').waitFor();
+    await page.getByTestId('plan-record').click();
+    const warning = page.getByTestId('plan-already-recorded');
+    await warning.waitFor();
+    assert.match(await warning.innerText(), /already recorded/);
+    assert.match(await warning.innerText(), /Nothing was recorded this time/);
+    assert.deepEqual(
+      (await page.getByTestId('plan-already-batch').allInnerTexts()).sort(),
+      [...already].sort(),
+    );
+    assert.equal(await page.getByTestId('plan-record').count(), 0, 'no second record button');
+    // The plans made: Rosa's recorded 100, and Tobin's 120 not recorded.
+    const items = page.getByTestId('plan-list-item');
+    await items.filter({ hasText: '120 × Smokehouse burger' }).waitFor();
+    assert.match(
+      await items.filter({ hasText: '100 × Smokehouse burger' }).first().innerText(),
+      /Recorded: 4 batches, by Rosa/,
+    );
+    assert.match(
+      await items.filter({ hasText: '120 × Smokehouse burger' }).first().innerText(),
+      /Not recorded/,
+    );
+    await shootAtWidths(session, page, 'plan-already-recorded');
+
+    const again = page.waitForRequest((r) => r.url().endsWith('/api/plans/record'));
+    await page.getByTestId('plan-record-again').click();
+    assert.equal((await again).postDataJSON().again, true);
+    await page.getByTestId('plan-recorded').waitFor();
+    const lots = await page.getByTestId('plan-recorded-batch').allInnerTexts();
+    assert.equal(lots.length, 4);
+    for (const lot of lots) assert.ok(!already.includes(lot), `${lot} is a new batch`);
+    await page.getByTestId('plan-already-recorded').waitFor({ state: 'detached' });
+    assert.match(
+      await items.filter({ hasText: '120 × Smokehouse burger' }).first().innerText(),
+      /Recorded: 4 batches, by Tobin/,
+    );
+    // The browser logs the refusal it was given; nothing else went wrong.
+    assert.deepEqual(
+      errors.filter((e) => !/status of 409/.test(e)),
+      [],
+    );
+  });
+
+  it('should offer the room and flour temperatures right in the dough warning, in plain words', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    await page.goto(
+      `${session.server.url}/plans?assembly=smokehouse-burger&count=120&for=${SERVICE}`,
+      { waitUntil: 'networkidle' },
+    );
+    const warning = page.getByTestId('plan-dough-warning');
+    await warning.waitFor();
+    const words = await page.getByTestId('plan-warnings').innerText();
+    assert.doesNotMatch(words, /--/, 'no command-line options on a cook’s screen');
+    assert.match(
+      words,
+      /Milk and honey bun, with sponge: the water temperature is not worked out yet/,
+    );
+    // In plain words: no formula keys, no textbook convention.
+    const bun = await batchText(page, 'pit-bun');
+    assert.match(bun, /Made 1 day before service\./);
+    assert.doesNotMatch(bun, /lead_days|loss\/100/);
+    assert.match(await batchText(page, 'quillmoor-belly'), /Cures 8 days, then 2 days to finish/);
+
+    await warning.getByTestId('dough-room').fill('22');
+    await warning.getByTestId('dough-flour').fill('20');
+    await warning.getByTestId('dough-preferment').fill('24');
+    await warning.getByTestId('dough-work-out').click();
+    const result = warning.getByTestId('dough-water-result');
+    await result.waitFor();
+    // 4 × 26 − (22 + 20 + 24) − 12.2 (the formula's 22 °F friction) = 25.8 °C, shown to 0.5 °C.
+    // source: San Francisco Baking Institute, Artisan I workshop reference material (2009), the
+    // desired dough temperature method; formulas/pit-bun.yaml (DDT 26 °C, friction 22 °F)
+    assert.match(await result.innerText(), /Water temperature\s+26\.0 °C/);
+    await shootAtWidths(session, page, 'plan-dough-warning');
     assert.deepEqual(errors, []);
   });
 

@@ -2,10 +2,21 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import type { FormulaSummary } from '../formulas/formula-api-types';
-import type { AssemblyOption, PlanRequest, PresentedPlan, RecordedPlan } from './plan-types';
+import type {
+  AssemblyOption,
+  PlanList,
+  PlanListItem,
+  PlanRequest,
+  PlanUnits,
+  PresentedPlan,
+  PresentedResult,
+  RawBatchOptions,
+  RecordedPlan,
+} from './plan-types';
 
 /**
- * The plans API: the assemblies that can be planned, a plan (POST /api/plans), recording its
+ * The plans API: the assemblies that can be planned, the plans made (GET /api/plans), a plan
+ * (POST /api/plans), recording its
  * batches as planned (POST /api/plans/record) and its production sheets as a PDF
  * (POST /api/plans/sheet.pdf). Requests go through the app's HttpClient, so every POST carries
  * the session's CSRF token (core/api/api-error-interceptor.ts) and fails as an ApiError.
@@ -32,9 +43,27 @@ export class PlanApi {
     return firstValueFrom(this.http.post<PresentedPlan>('/api/plans', request));
   }
 
-  /** Records every batch of the plan as planned (admins and cooks), all or none. */
-  record(request: PlanRequest): Promise<RecordedPlan> {
-    return firstValueFrom(this.http.post<RecordedPlan>('/api/plans/record', request));
+  /**
+   * Records every batch of the plan as planned (admins and cooks), all or none. Refused with 409
+   * 'plan-already-recorded' when its menu item and day already have batches, unless `again`.
+   */
+  record(request: PlanRequest, again = false): Promise<RecordedPlan> {
+    const body = again ? { ...request, again } : request;
+    return firstValueFrom(this.http.post<RecordedPlan>('/api/plans/record', body));
+  }
+
+  /** The plans made, newest first, recorded or not (GET /api/plans). */
+  async list(): Promise<readonly PlanListItem[]> {
+    const { plans } = await firstValueFrom(this.http.get<PlanList>('/api/plans'));
+    return plans;
+  }
+
+  /**
+   * One batch of a plan worked out again with more options (a dough's room and flour
+   * temperatures): POST /api/calc, which records nothing.
+   */
+  calc(formula: string, batch: RawBatchOptions, units: PlanUnits): Promise<PresentedResult> {
+    return firstValueFrom(this.http.post<PresentedResult>('/api/calc', { formula, batch, units }));
   }
 
   /** The plan's production sheets, one a day, as a PDF. */

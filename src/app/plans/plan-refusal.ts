@@ -1,6 +1,7 @@
 import { ApiError } from '../core/api/api-error';
 import { SOMETHING_WENT_WRONG } from '../core/api/message-of';
-import type { PlanRefusal } from './plan-types';
+import type { BatchSummary } from '../batches/batch-types';
+import type { PlanAlreadyRecorded, PlanRefusal } from './plan-types';
 
 /** Why a plan was refused, ready for the screen. */
 export interface PlanRefusalView {
@@ -84,4 +85,14 @@ export function refusalOf(error: unknown): PlanRefusalView {
 function sentence(text: string): string {
   const trimmed = text.trim();
   return /[.!?]$/.test(trimmed) ? trimmed : `${trimmed}.`;
+}
+
+/**
+ * The batches already recorded for a plan's menu item and day, when recording was refused for
+ * them (the API's 409 'plan-already-recorded'); null for any other failure.
+ */
+export function alreadyRecordedOf(error: unknown): readonly BatchSummary[] | null {
+  if (!(error instanceof ApiError) || error.code !== 'plan-already-recorded') return null;
+  const detail = error.details[0] as Partial<PlanAlreadyRecorded> | undefined;
+  return Array.isArray(detail?.batches) ? detail.batches : [];
 }

@@ -1,16 +1,17 @@
 import { Injectable, inject, signal } from '@angular/core';
 import { BatchLog } from '../batches/batch-log/batch-log';
-import type { Batch } from '../batches/batch-types';
+import type { Batch, BatchSummary } from '../batches/batch-types';
 import { messageOf } from '../core/api/message-of';
 import { PlanApi } from './plan-api';
 import { pdfFileName } from './plan-query';
-import { refusalOf, type PlanRefusalView } from './plan-refusal';
-import type { AssemblyOption, PlanRequest, PresentedPlan } from './plan-types';
+import { alreadyRecordedOf, refusalOf, type PlanRefusalView } from './plan-refusal';
+import type { AssemblyOption, PlanListItem, PlanRequest, PresentedPlan } from './plan-types';
 import { saveBlob } from '../ui/save-blob';
 
 /**
- * The Plans page's state: the assemblies to choose from, the plan shown (or why it was refused),
- * recording its batches and downloading its PDF. Provided by the page, so every visit starts
+ * The Plans page's state: the assemblies to choose from, the plans made, the plan shown (or why
+ * it was refused), recording its batches (or the batches already recorded for its service) and
+ * downloading its PDF. Provided by the page, so every visit starts
  * fresh; a slow answer to an older request never replaces a newer one.
  */
 @Injectable()
@@ -25,6 +26,9 @@ export class PlanStore {
   private readonly recordedBatches = signal<readonly Batch[] | null>(null);
   private readonly recordBusy = signal(false);
   private readonly recordFailure = signal<PlanRefusalView | null>(null);
+  private readonly alreadyRecordedBatches = signal<readonly BatchSummary[] | null>(null);
+  private readonly planList = signal<readonly PlanListItem[] | null>(null);
+  private readonly planListFailure = signal<string | null>(null);
   private readonly pdfBusy = signal(false);
   private readonly pdfFailure = signal<string | null>(null);
   private request = 0;
@@ -45,6 +49,15 @@ export class PlanStore {
   readonly recording = this.recordBusy.asReadonly();
   /** Why recording failed (a refusal, or a failure), or null. */
   readonly recordError = this.recordFailure.asReadonly();
+  /**
+   * The batches already recorded for the plan's menu item and day of service, when recording
+   * was stopped to ask whether to record again; null otherwise.
+   */
+  readonly alreadyRecorded = this.alreadyRecordedBatches.asReadonly();
+  /** The plans made, newest first, recorded or not; null until they arrive. */
+  readonly plans = this.planList.asReadonly();
+  /** Why the plans made could not be read, or null. */
+  readonly plansError = this.planListFailure.asReadonly();
   /** Whether the PDF is being made. */
   readonly downloading = this.pdfBusy.asReadonly();
   /** Why the PDF could not be downloaded, or null. */
@@ -61,6 +74,16 @@ export class PlanStore {
     }
   }
 
+  /** Reads the plans made (again: showing or recording one changes the list). */
+  async loadPlans(): Promise<void> {
+    try {
+      this.planList.set(await this.api.list());
+      this.planListFailure.set(null);
+    } catch (error) {
+      this.planListFailure.set(messageOf(error));
+    }
+  }
+
   /** Works out the plan for a request and shows it, or the reason it was refused. */
   async show(request: PlanRequest): Promise<void> {
     const mine = ++this.request;
@@ -68,11 +91,13 @@ export class PlanStore {
     this.refused.set(null);
     this.recordedBatches.set(null);
     this.recordFailure.set(null);
+    this.alreadyRecordedBatches.set(null);
     this.pdfFailure.set(null);
     try {
       const plan = await this.api.plan(request);
       if (mine !== this.request) return;
       this.shown.set({ request, plan });
+      void this.loadPlans();
     } catch (error) {
       if (mine !== this.request) return;
       this.shown.set(null);
@@ -90,27 +115,40 @@ export class PlanStore {
     this.refused.set(null);
     this.recordedBatches.set(null);
     this.recordFailure.set(null);
+    this.alreadyRecordedBatches.set(null);
   }
 
   /**
    * Records every batch of the plan on screen as planned. The server works the plan out again
-   * and is the authority: a refusal there records nothing, and is shown.
+   * and is the authority: a refusal there records nothing, and is shown. When batches are
+   * already recorded for the same menu item and day, nothing is recorded and they are shown
+   * instead, until the cook records again (`again`) or keeps what is recorded.
    */
-  async record(): Promise<void> {
+  async record(again = false): Promise<void> {
     const current = this.shown();
     if (!current || this.recordBusy() || this.recordedBatches()) return;
     this.recordBusy.set(true);
     this.recordFailure.set(null);
     try {
-      const { batches } = await this.api.record(current.request);
+      const { batches } = await this.api.record(current.request, again);
       if (this.shown() !== current) return;
+      this.alreadyRecordedBatches.set(null);
       this.recordedBatches.set(batches);
       this.log.invalidate();
+      void this.loadPlans();
     } catch (error) {
-      this.recordFailure.set(refusalOf(error));
+      if (this.shown() !== current) return;
+      const already = alreadyRecordedOf(error);
+      if (already) this.alreadyRecordedBatches.set(already);
+      else this.recordFailure.set(refusalOf(error));
     } finally {
       this.recordBusy.set(false);
     }
+  }
+
+  /** Keeps the batches already recorded: the warning goes, nothing is recorded. */
+  keepRecorded(): void {
+    this.alreadyRecordedBatches.set(null);
   }
 
   /** Downloads the plan on screen as a PDF of production sheets, one a day. */

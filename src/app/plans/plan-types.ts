@@ -5,7 +5,14 @@
 import type { Batch } from '../../../shared/api/batch-record.ts';
 import type { PresentedPlan } from '../../../shared/presentation/presented-plan.ts';
 
+export type { RawBatchOptions } from '../../../shared/calculation/batch-input.ts';
+export type { PresentedResult } from '../../../shared/presentation/presented-result.ts';
 export type { PlanRefusal } from '../../../shared/calculation/plan/plan-error.ts';
+export type {
+  PlanAlreadyRecorded,
+  PlanList,
+  PlanListItem,
+} from '../../../shared/api/plan-record.ts';
 export type {
   PresentedPlan,
   PresentedPlanBatch,

@@ -35,6 +35,8 @@ import {
 } from '../plan-query';
 import { PlanStore } from '../plan-store';
 import type { PlanUnits } from '../plan-types';
+import { PlanList } from '../plan-list/plan-list';
+import { PlannedBatches } from '../planned-batches/planned-batches';
 import { PlanView } from '../plan-view/plan-view';
 
 /** Days from today the service day is set to when the address does not give one. */
@@ -70,6 +72,8 @@ const todayIso = (): string => isoDateOf(new Date()) as string;
     MatDatepickerToggle,
     IsoDayPipe,
     PlanView,
+    PlanList,
+    PlannedBatches,
   ],
   providers: [PlanStore, provideNativeDateAdapter(DAY_INPUT_FORMATS)],
   templateUrl: './plan-page.html',
@@ -118,6 +122,7 @@ export default class PlanPage {
 
   constructor() {
     void this.store.loadAssemblies();
+    void this.store.loadPlans();
     effect(() => {
       const query = this.query();
       untracked(() => this.follow(query));

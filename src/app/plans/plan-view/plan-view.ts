@@ -3,7 +3,14 @@ import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { DoughWater } from '../dough-water/dough-water';
+import {
+  hasPreferment,
+  isWaterWarning,
+  needsDoughTemperatures,
+} from '../dough-water/dough-water-need';
 import { PlanSchedule } from '../plan-schedule/plan-schedule';
+import { plainNote, whenInWords } from '../plan-words';
 import type { PresentedPlan } from '../plan-types';
 
 /**
@@ -14,7 +21,7 @@ import type { PresentedPlan } from '../plan-types';
  */
 @Component({
   selector: 'app-plan-view',
-  imports: [RouterLink, MatIcon, IsoDayPipe, BatchSheet, PlanSchedule],
+  imports: [RouterLink, MatIcon, IsoDayPipe, BatchSheet, PlanSchedule, DoughWater],
   templateUrl: './plan-view.html',
   styleUrl: './plan-view.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -37,6 +44,18 @@ export class PlanView {
   );
   private readonly titles = computed(
     () => new Map(this.plan().batches.map((batch) => [batch.formula.id, batch.formula.title])),
+  );
+
+  protected readonly whenInWords = whenInWords;
+  protected readonly plainNote = plainNote;
+  protected readonly hasPreferment = hasPreferment;
+  /** The doughs whose water temperature waits for the day's temperatures: their warning has boxes. */
+  protected readonly doughs = computed(() => this.plan().batches.filter(needsDoughTemperatures));
+  /** The plan's warnings but those the doughs' boxes answer. */
+  protected readonly otherWarnings = computed(() =>
+    this.plan().warnings.filter(
+      (warning) => !this.doughs().some((dough) => isWaterWarning(warning, dough.formula.id)),
+    ),
   );
 
   /** The batches that use a material, by title. */
