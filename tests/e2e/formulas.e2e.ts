@@ -2,6 +2,7 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
 import { collectConsoleErrors, startConsole } from './browser.ts';
+import { shootAtWidths } from './widths.ts';
 
 /** Replaces text in the YAML editor, as someone typing into it would. */
 async function editYaml(page: Page, from: string, to: string): Promise<void> {
@@ -37,10 +38,12 @@ describe('formulas in the console', () => {
       (n) => document.querySelectorAll('[data-testid="history-row"]').length > n,
       revisionsBefore,
     );
-    assert.match(
-      await page.getByTestId('history-list').innerText(),
-      /Less curing salt for the thin bellies/,
-    );
+    const history = await page.getByTestId('history-list').innerText();
+    assert.match(history, /Less curing salt for the thin bellies/);
+    // The revision in words, not a hash: who edited it and where. source: the demo crew's names
+    // (server/demo/demo-people.ts)
+    assert.match(history, /Edited in the console by Rosa Quennick/);
+    assert.doesNotMatch(history, /\b[0-9a-f]{8}\b/, 'no hashes in the history');
     const saved = await session.server.as('rosa').get('/api/formulas/quillmoor-belly');
     assert.match(saved.json.yaml, /pct: 0\.24, nitrite: 6\.25/);
     assert.match(saved.json.yaml, /# Quillmoor Smokehouse/, 'the file keeps its comments');
@@ -87,5 +90,105 @@ describe('formulas in the console', () => {
     await page.goto(`${session.server.url}/formulas/pit-bun`, { waitUntil: 'networkidle' });
     await page.getByTestId('result-sheet').waitFor();
     assert.equal(await page.getByTestId('save-formula').count(), 0);
+  });
+
+  it('should keep Save in reach at the foot of the screen, with the problem count beside it', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/formulas/quillmoor-belly`, { waitUntil: 'networkidle' });
+    await page.getByTestId('result-sheet').waitFor();
+    const bar = page.getByTestId('save-bar');
+    const count = page.getByTestId('save-problem-count');
+    assert.match(await count.innerText(), /No problems/);
+    // At the top of a long form the bar is held at the foot of the window, not below the fold.
+    const inView = async (): Promise<boolean> => {
+      const box = await bar.boundingBox();
+      const height = page.viewportSize()?.height ?? 0;
+      return box !== null && box.y >= 0 && box.y + box.height <= height + 1;
+    };
+    await page.getByRole('heading', { name: 'Formula', exact: true }).scrollIntoViewIfNeeded();
+    assert.ok(await inView(), 'the save bar is on screen at the top of the form');
+    // A name column wide enough to read the curing salt's whole name.
+    const name = page.getByRole('textbox', { name: 'Name, row 2' });
+    const fits = await name.evaluate(
+      (input: HTMLInputElement) => input.scrollWidth <= input.clientWidth,
+    );
+    assert.ok(fits, 'the ingredient name is not cut off');
+
+    await editYaml(page, 'pct: 0.25, nitrite: 6.25', 'pct: lots, nitrite: 6.25');
+    await page.waitForFunction(() =>
+      /error/.test(document.querySelector('[data-testid="save-problem-count"]')?.textContent ?? ''),
+    );
+    assert.match(await count.innerText(), /^\S*\s*\d+ errors?/);
+    assert.ok(await inView(), 'the count is beside Save while the YAML is edited');
+    await shootAtWidths(session, page, 'formula-save-bar');
+    // The count leads to the problem.
+    await count.click();
+    await page.getByRole('tab', { name: 'YAML', selected: true }).waitFor();
+    await editYaml(page, 'pct: lots, nitrite: 6.25', 'pct: 0.25, nitrite: 6.25');
+    await page.waitForFunction(() =>
+      /No problems/.test(
+        document.querySelector('[data-testid="save-problem-count"]')?.textContent ?? '',
+      ),
+    );
+    // The preview of the broken file was refused (422), as it should be; nothing else went wrong.
+    assert.deepEqual(
+      errors.filter((e) => !/status of 422/.test(e)),
+      [],
+    );
+  });
+
+  it('should show a cook the formula as a recipe to read, not a greyed-out form', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/formulas/quillmoor-belly`, { waitUntil: 'networkidle' });
+    const recipe = page.getByTestId('formula-recipe');
+    await recipe.waitFor();
+    const text = await recipe.innerText();
+    // source: formulas/quillmoor-belly.yaml (the cure, the hold rule, the controls)
+    assert.match(text, /fine sea salt\s+2\.25 %/);
+    assert.match(text, /curing salt no\. 1 \(6\.25 % nitrite\)\s+0\.25 %/);
+    assert.match(text, /Cure 2 days per cm of thickness, at least 7 days in all/);
+    assert.match(text, /Curing cooler/);
+    // The smoker's own limit, 30 °C = 86 °F. source: °F = °C × 9/5 + 32 (NIST SP 811)
+    assert.match(text, /at most 30 °C \(86 °F\)/);
+    assert.match(text, /Skin the bellies and square them off/);
+    // No form to look at: no boxes, no Save.
+    assert.equal(await page.getByRole('textbox', { name: 'Name, row 1' }).count(), 0);
+    assert.equal(await page.getByTestId('save-formula').count(), 0);
+    // The last change in words, never a hash.
+    const facts = await page.locator('.facts').innerText();
+    assert.doesNotMatch(facts, /revision|\b[0-9a-f]{8}\b/);
+    await page.getByTestId('result-sheet').waitFor();
+    await shootAtWidths(session, page, 'formula-recipe');
+    assert.deepEqual(errors, []);
+  });
+
+  it('should list the formulas by title and find them by a word of the title', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('tobin');
+    await page.goto(`${session.server.url}/formulas`, { waitUntil: 'networkidle' });
+    const rows = page.getByTestId('formula-row');
+    await rows.first().waitFor();
+    const titles = await page.locator('[data-testid="formula-row"] .title').allInnerTexts();
+    const sorted = [...titles].sort((a, b) =>
+      a.localeCompare(b, 'en', { sensitivity: 'base', numeric: true }),
+    );
+    assert.deepEqual(titles, sorted, 'by title');
+    assert.ok(titles.length >= 10, 'every demo formula is listed');
+    await page.getByTestId('formula-search').fill('burger');
+    await page.waitForFunction(
+      () => document.querySelectorAll('[data-testid="formula-row"]').length === 2,
+    );
+    // source: formulas/smokehouse-burger.yaml and chuck-grind.yaml, the two titles with "burger"
+    assert.deepEqual(await page.locator('[data-testid="formula-row"] .title').allInnerTexts(), [
+      'Smokehouse burger',
+      'Smokehouse burger grind 80/20',
+    ]);
+    await shootAtWidths(session, page, 'formula-list-search');
+    await page.getByTestId('formula-search').fill('no such thing');
+    await page.getByTestId('formula-none-found').waitFor();
   });
 });

@@ -2,6 +2,7 @@ import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
+  computed,
   effect,
   inject,
   input,
@@ -12,15 +13,20 @@ import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { messageOf } from '../../core/api/message-of';
-import { FormulaDiff, FormulaRevision, shortRevision } from '../formula-api-types';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { FormulaDiff, FormulaRevision } from '../formula-api-types';
 import { FormulaStore } from '../formula-store';
-import { SOURCE_LABELS } from '../formula-vocabulary';
+import { revisionInWords } from '../revision-words';
 import { RevisionDiff } from '../revision-diff/revision-diff';
 
 /**
- * A formula's history, newest first: who changed it, when, why and how, with the revision and
- * its git commit. Choosing two revisions shows what changed between them, side by side.
+ * A formula's history, newest first: when it changed, how and by whom in words ("edited in the
+ * console by Rosa Quennick", "changed in the files"), and the note left with it; no hashes.
+ * Choosing two revisions shows what changed between them, side by side.
  */
+/** Days and times in words, as everywhere in the console. */
+const MOMENT = new IsoDayPipe();
+
 @Component({
   selector: 'app-formula-history',
   imports: [DatePipe, MatCheckbox, MatButton, MatProgressBar, RevisionDiff],
@@ -43,8 +49,15 @@ export class FormulaHistory {
   protected readonly diff = signal<FormulaDiff | null>(null);
   protected readonly diffLoading = signal(false);
   protected readonly diffError = signal<string | null>(null);
-  protected readonly short = shortRevision;
-  protected readonly sources = SOURCE_LABELS;
+  /** The two versions compared, in words: "3 Dec 2026, 14:02, edited in the console by …". */
+  protected readonly diffWords = computed(() => {
+    const d = this.diff();
+    const row = (revision: string | undefined) =>
+      this.revisions().find((item) => item.revision === revision);
+    const from = row(d?.from.revision);
+    const to = row(d?.to.revision);
+    return { from: from ? this.labelOf(from) : null, to: to ? this.labelOf(to) : null };
+  });
 
   constructor() {
     effect(() => {
@@ -52,6 +65,17 @@ export class FormulaHistory {
       this.currentRevision();
       untracked(() => void this.load(id));
     });
+  }
+
+  /** How a revision came to be, in words. */
+  protected words(row: FormulaRevision): string {
+    const text = revisionInWords(row);
+    return text[0].toUpperCase() + text.slice(1);
+  }
+
+  /** A revision as people tell it apart: when, and how it came to be. */
+  protected labelOf(row: FormulaRevision): string {
+    return `${MOMENT.transform(row.at, true)}, ${revisionInWords(row)}`;
   }
 
   protected isChosen(revision: string): boolean {

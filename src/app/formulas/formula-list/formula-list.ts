@@ -10,7 +10,9 @@ import {
 import { MatButton } from '@angular/material/button';
 import { MatChipListbox, MatChipListboxChange, MatChipOption } from '@angular/material/chips';
 import { MatDialog } from '@angular/material/dialog';
+import { MatFormField, MatHint, MatLabel, MatPrefix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import {
   MatCell,
@@ -26,15 +28,17 @@ import {
 } from '@angular/material/table';
 import { Router, RouterLink } from '@angular/router';
 import { SessionStore } from '../../core/auth/session-store';
-import { FormulaKind, FormulaSummary, shortRevision } from '../formula-api-types';
+import { FormulaKind, FormulaSummary } from '../formula-api-types';
 import { FormulaStore } from '../formula-store';
 import { FormulaUpload } from '../formula-upload/formula-upload';
 import { KIND_LABELS } from '../formula-vocabulary';
 import { NewFormulaDialog } from '../new-formula-dialog/new-formula-dialog';
+import { revisionInWords } from '../revision-words';
+import { matchesSearch, sortedByTitle } from './formula-search';
 
 /**
- * Every formula file: title, id, kind, revision, whether it is valid and who changed it last,
- * filtered by kind. A row opens its formula. Admins start new formulas and upload files here.
+ * Every formula file by title: kind, whether it is valid and how it last changed in words,
+ * filtered by kind and by what is typed in the search (title, id or file name). A row opens its formula. Admins start new formulas and upload files here.
  */
 @Component({
   selector: 'app-formula-list',
@@ -43,6 +47,11 @@ import { NewFormulaDialog } from '../new-formula-dialog/new-formula-dialog';
     RouterLink,
     MatButton,
     MatIcon,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatPrefix,
+    MatInput,
     MatProgressBar,
     MatChipListbox,
     MatChipOption,
@@ -68,9 +77,10 @@ export default class FormulaList implements OnInit {
   private readonly session = inject(SessionStore);
   protected readonly store = inject(FormulaStore);
 
-  protected readonly columns = ['title', 'id', 'kind', 'revision', 'status', 'changed'];
+  protected readonly columns = ['title', 'kind', 'status', 'changed'];
   protected readonly kindLabels: Partial<Record<string, string>> = KIND_LABELS;
-  protected readonly short = shortRevision;
+  protected readonly changeWords = (row: FormulaSummary): string =>
+    revisionInWords({ source: row.lastChangeSource, author: row.lastChangedBy });
   protected readonly isAdmin = computed(() => this.session.person()?.role === 'admin');
   protected readonly kind = signal<FormulaKind | 'all'>('all');
   protected readonly filters = computed(() => {
@@ -84,14 +94,21 @@ export default class FormulaList implements OnInit {
       })),
     ];
   });
+  /** What is typed in the search box. */
+  protected readonly search = signal('');
   protected readonly rows = computed(() => {
     const kind = this.kind();
     const all = this.store.formulas() ?? [];
-    return kind === 'all' ? all : all.filter((item) => item.kind === kind);
+    const ofKind = kind === 'all' ? all : all.filter((item) => item.kind === kind);
+    return sortedByTitle(ofKind.filter((item) => matchesSearch(item, this.search())));
   });
 
   ngOnInit(): void {
     void this.store.loadList();
+  }
+
+  protected typeSearch(event: Event): void {
+    this.search.set((event.target as HTMLInputElement).value);
   }
 
   protected chooseKind(change: MatChipListboxChange): void {

@@ -22,7 +22,9 @@ import { RouterLink } from '@angular/router';
 import { SessionStore } from '../../core/auth/session-store';
 import { saveBlob } from '../../ui/save-blob';
 import { AssemblyPreview } from '../assembly-preview/assembly-preview';
-import { FormulaProblem, shortRevision } from '../formula-api-types';
+import { FormulaProblem } from '../formula-api-types';
+import { FormulaRecipe } from '../formula-recipe/formula-recipe';
+import { revisionInWords } from '../revision-words';
 import { FormulaDraft } from '../formula-draft';
 import { FormulaForm } from '../formula-form/formula-form';
 import { FormulaHistory } from '../formula-history/formula-history';
@@ -37,9 +39,11 @@ import { YamlEditor } from '../yaml-editor/yaml-editor';
 const YAML_TAB = 1;
 
 /**
- * One formula: the structured form and the YAML side by side in tabs, kept in step and checked as
- * they are typed; a live preview of a sample batch; saving with a message (admins); the history
- * with side-by-side differences; and the YAML to download.
+ * One formula. Admins: the structured form and the YAML side by side in tabs, kept in step and
+ * checked as they are typed, and a save bar that stays in reach at the foot of the screen with
+ * the problem count beside it. Cooks and reviewers: the formula as a recipe to read. Everyone: a
+ * live preview of a sample batch, the history in words with side-by-side differences, and the
+ * YAML to download.
  */
 @Component({
   selector: 'app-formula-page',
@@ -58,6 +62,7 @@ const YAML_TAB = 1;
     FormulaSave,
     FormulaHistory,
     AssemblyPreview,
+    FormulaRecipe,
   ],
   providers: [
     FormulaDraft,
@@ -88,7 +93,27 @@ export default class FormulaPage implements LeavesSafely {
     const kind = this.draft.kind();
     return kind ? KIND_LABELS[kind] : 'Unknown kind';
   });
-  protected readonly short = shortRevision;
+  /** How the formula last changed, in words: "Edited in the console by Rosa Quennick". */
+  protected readonly lastChange = computed(() => {
+    const detail = this.draft.detail();
+    if (!detail) return '';
+    const words = revisionInWords({
+      source: detail.lastChangeSource,
+      author: detail.lastChangedBy,
+    });
+    return words[0].toUpperCase() + words.slice(1);
+  });
+  /** The problems counted for the save bar: "2 errors, 1 warning", "No problems". */
+  protected readonly problemWords = computed(() => {
+    const problems = this.problems();
+    const errors = problems.filter((p) => p.severity === 'error').length;
+    const warnings = problems.length - errors;
+    const parts = [
+      errors ? `${errors} ${errors === 1 ? 'error' : 'errors'}` : '',
+      warnings ? `${warnings} ${warnings === 1 ? 'warning' : 'warnings'}` : '',
+    ].filter(Boolean);
+    return { errors, text: parts.length ? parts.join(', ') : 'No problems' };
+  });
   protected readonly cureMethod = watchControl(
     signal(this.draft.form),
     (form) => form.controls.cure.controls.method.value,

@@ -19,7 +19,7 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { messageOf } from '../../core/api/message-of';
-import { FormulaDiff, FormulaProblem, WriteOutcome, shortRevision } from '../formula-api-types';
+import { FormulaDiff, FormulaProblem, WriteOutcome } from '../formula-api-types';
 import { FormulaDraft } from '../formula-draft';
 import { FormulaProblems } from '../formula-problems/formula-problems';
 import { FormulaStore } from '../formula-store';
@@ -73,7 +73,6 @@ export class FormulaSave {
   protected readonly state = signal<SaveState>({ kind: 'none' });
   protected readonly conflictDiff = signal<FormulaDiff | null>(null);
   protected readonly diffError = signal<string | null>(null);
-  protected readonly short = shortRevision;
 
   protected async save(): Promise<void> {
     if (this.busy()) return;
@@ -93,7 +92,7 @@ export class FormulaSave {
         const { outcome } = result;
         this.snackBar.open(
           outcome.changed
-            ? `Saved as revision ${shortRevision(outcome.revision)}`
+            ? 'Saved: new batches are worked out from this version'
             : 'Nothing to save: the file already says this',
           'Close',
           { duration: 6000 },

@@ -49,7 +49,8 @@ const OWN_COLUMNS: Record<FormulaKind, readonly Column[]> = {
   mix: [],
   assembly: [],
 };
-const NAME_MIN = 140;
+// Wide enough to read "curing salt no. 1 (6.25 % nitrite)" whole.
+const NAME_MIN = 260;
 const NARROW = 48;
 const ALLERGENS_WIDTH = 220;
 

@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
 import { MatButton } from '@angular/material/button';
-import { FormulaDiff, shortRevision } from '../formula-api-types';
+import { FormulaDiff } from '../formula-api-types';
 import { DiffRow, sideBySide } from './side-by-side';
 
 /** A block of rows: one hunk, or the whole file. */
@@ -12,7 +12,8 @@ interface DiffBlock {
 /**
  * Two revisions of a formula side by side: removed lines on the left marked "−", added lines on
  * the right marked "+", in colour and in words for screen readers. Shows the changed parts with
- * a few lines around them, or the whole file.
+ * a few lines around them, or the whole file. Each side is named in words (when, and how it came
+ * to be), not by its hash.
  */
 @Component({
   selector: 'app-revision-diff',
@@ -28,9 +29,12 @@ export class RevisionDiff {
   readonly fromLabel = input('Older');
   /** What to call the new side. */
   readonly toLabel = input('Newer');
+  /** The old side in words, beside its label: when and how it came to be; never a hash. */
+  readonly fromWords = input<string | null>(null);
+  /** The new side in words, beside its label. */
+  readonly toWords = input<string | null>(null);
 
   protected readonly wholeFile = signal(false);
-  protected readonly short = shortRevision;
   protected readonly summary = computed(() => {
     const diff = this.diff();
     if (!diff.changed) return 'The two revisions say exactly the same.';
