@@ -23,7 +23,9 @@ import {
 import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
 import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-password.ts';
+import { PlanRepository } from '../plans/plan-repository.ts';
 import { recordPlan } from '../plans/record-plan.ts';
+import type { PlanListItem } from '../../shared/api/plan-record.ts';
 import type { ProducedReport, ReportFormat, ReportRequest } from '../reports/produce-report.ts';
 import { REPORT_ROLES } from '../reports/report-roles.ts';
 import type {
@@ -112,9 +114,36 @@ export class Records {
     return this.guard(() => recordBatch(request, today, this.deps, by));
   }
 
-  /** Records every batch of a plan as planned, all or nothing; earliest start first. */
-  recordPlan(plan: PlanResult, units: UnitSystem, by: ChangeOptions): Promise<Batch[]> {
-    return this.guard(() => recordPlan(plan, units, by.actor.id, this.deps, by));
+  /**
+   * Records every batch of a plan as planned, all or nothing; earliest start first. Refused
+   * (conflict 'plan-already-recorded', with the batches) when batches are already recorded for the
+   * same menu item and day of service, unless `again`.
+   */
+  recordPlan(
+    plan: PlanResult,
+    units: UnitSystem,
+    by: ChangeOptions & { readonly again?: boolean },
+  ): Promise<Batch[]> {
+    return this.guard(() =>
+      recordPlan(plan, units, by.actor.id, { ...this.deps, plans: this.plans() }, by),
+    );
+  }
+
+  /** Notes a plan as made (the first time it is worked out), for the list of plans. */
+  planMade(plan: PlanResult, by: ChangeOptions): Promise<void> {
+    return this.guard(() => this.plans().made(plan, by));
+  }
+
+  /** The latest plans made, newest first, recorded or not. */
+  listPlans(): Promise<PlanListItem[]> {
+    return this.guard(() => this.plans().list());
+  }
+
+  private planRepository: PlanRepository | undefined;
+
+  private plans(): PlanRepository {
+    this.planRepository ??= new PlanRepository(this.deps.db, this.deps.audit);
+    return this.planRepository;
   }
 
   /** A page of the batch log, filtered and sorted as the query says (formula, status, from…). */
