@@ -71,6 +71,7 @@ function extra(
  * ROUTES (api-routes.ts) does not list yet, each with a minimal valid request.
  */
 export const EXTRA_ROUTES: readonly RouteCase[] = [
+  extra('GET', '/api/plans', ALL, async () => ({ path: '/api/plans' })),
   extra('POST', '/api/plans', ALL, async () => ({ path: '/api/plans', body: plan() })),
   extra('POST', '/api/plans/sheet.pdf', ALL, async () => ({
     path: '/api/plans/sheet.pdf',
