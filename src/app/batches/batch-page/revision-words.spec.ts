@@ -13,7 +13,7 @@ describe('revisionWords', () => {
     );
     assert.equal(
       words,
-      'the formula as edited in the console by Rosa on 3 Dec 2026 (the formula as it is now)',
+      'the formula as edited in the console by Rosa on 3 Dec 2026 (still its current version)',
     );
   });
 
@@ -24,7 +24,7 @@ describe('revisionWords', () => {
     );
     assert.equal(
       words,
-      'the formula as changed in the files, found on 3 Dec 2026 (the formula has changed since)',
+      'the formula as changed in the files, found on 3 Dec 2026 (it has changed since)',
     );
   });
 

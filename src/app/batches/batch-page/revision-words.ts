@@ -20,7 +20,7 @@ const MADE: Readonly<Record<string, string>> = {
  */
 export function revisionWords(facts: RevisionFacts | null, day: (iso: string) => string): string {
   if (!facts) return 'an earlier version of the formula, no longer kept';
-  const since = facts.current ? 'the formula as it is now' : 'the formula has changed since';
+  const since = facts.current ? 'still its current version' : 'it has changed since';
   const made = facts.source ? MADE[facts.source] : undefined;
   if (made) {
     const by = facts.author ? ` by ${facts.author.displayName}` : '';
