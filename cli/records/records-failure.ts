@@ -46,8 +46,11 @@ function lineOf(detail: unknown): string {
     : JSON.stringify(detail);
 }
 
-/** Failures whose message already says all its details do: a refused batch, a bad logger file. */
-const SAID_IN_FULL = new Set(['critical-limit', 'bad-log']);
+/**
+ * Failures whose message already says all its details do: a refused batch, a bad logger file, a
+ * cure without the size its hold goes by.
+ */
+const SAID_IN_FULL = new Set(['critical-limit', 'bad-log', 'hold-size-needed']);
 
 /**
  * The one place record keeping's failures become the command's: the exit code and the lines

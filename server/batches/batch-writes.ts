@@ -4,12 +4,14 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import {
   moveRefusal,
+  signOffNoteRefusal,
   signOffRefusal,
   type WorkflowRefusal,
   type WorkflowRules,
 } from '../../shared/workflow/workflow-rules.ts';
 import { AppError, badRequest, conflict, notFound } from '../http/app-error.ts';
 import type { BatchEvent, BatchStatus } from '../../shared/api/batch-record.ts';
+import type { PresentedResult } from '../../shared/presentation/presented-result.ts';
 import { UNSIGNABLE_STATUSES, refusedMove } from '../../shared/workflow/batch-status.ts';
 import { doneRefusal } from '../../shared/workflow/release-rules.ts';
 import type { ChangeOptions, NewBatch } from './batch.ts';
@@ -21,7 +23,9 @@ function ruleError(refusal: WorkflowRefusal): AppError {
     refusal.status,
     refusal.code,
     refusal.message,
-    refusal.code === 'reason-needed' ? [{ field: 'reason', message: refusal.message }] : [],
+    refusal.code === 'reason-needed' || refusal.code === 'note-needed'
+      ? [{ field: refusal.code === 'reason-needed' ? 'reason' : 'note', message: refusal.message }]
+      : [],
   );
 }
 
@@ -254,8 +258,10 @@ export class BatchWrites {
 
   /**
    * Records the reviewer's sign-off, once; planned and discarded batches cannot be signed off,
-   * nor (under the rules) a batch by the person who recorded it.
-   * @throws AppError 404 no such lot, 409 'already-signed-off' or 'not-signable', 403 'own-batch'
+   * nor (under the rules) a batch by the person who recorded it; a batch with a failed check, or
+   * still curing, only with a note.
+   * @throws AppError 404 no such lot, 409 'already-signed-off' or 'not-signable', 403 'own-batch',
+   *   400 'note-needed'
    */
   async signOff(
     t: Transaction,
@@ -273,6 +279,11 @@ export class BatchWrites {
       ]);
     const rule = signOffRefusal({ operatorId: batch.operator_id }, options.actor, this.rules);
     if (rule) throw ruleError(rule);
+    const noteNeeded = signOffNoteRefusal(
+      { status: batch.status, failedChecks: await this.failedChecks(t, batch.id) },
+      note,
+    );
+    if (noteNeeded) throw ruleError(noteNeeded);
     await this.run(
       t,
       'UPDATE batches SET signed_off_by = ?, signed_off_at = ?, updated_at = ? WHERE id = ?',
@@ -288,5 +299,17 @@ export class BatchWrites {
       status: batch.status,
       ...(note ? { note } : {}),
     });
+  }
+
+  /** The labels of a batch's failed checks, as its recorded result has them. */
+  private async failedChecks(t: Transaction, batchId: number): Promise<string[]> {
+    const [row] = await this.select<{ checks_passed: number; result: string }>(
+      t,
+      'SELECT checks_passed, result FROM batches WHERE id = ?',
+      [batchId],
+    );
+    if (!row || row.checks_passed === 1) return [];
+    const { checks } = JSON.parse(row.result) as Pick<PresentedResult, 'checks'>;
+    return checks.filter((check) => check.status === 'fail').map((check) => check.label);
   }
 }

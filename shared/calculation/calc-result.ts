@@ -121,6 +121,8 @@ export interface CalcResult {
   readonly cautions: readonly Caution[];
   readonly allergens: readonly Allergen[];
   readonly schedule?: Schedule;
+  /** Cures: the size the hold is reckoned on, when it was not given (so there is no ready date). */
+  readonly holdNeeds?: 'thickness' | 'largestPiece';
   readonly yields?: readonly YieldStage[];
   readonly portions?: Portions;
   readonly notes?: string;

@@ -227,6 +227,7 @@ function presentAll(result: CalcResult, system: UnitSystem): PresentedResult {
     cautions: result.cautions,
     allergens: result.allergens.map(allergenName),
     ...(result.schedule ? { schedule: result.schedule } : {}),
+    ...(result.holdNeeds ? { holdNeeds: result.holdNeeds } : {}),
     ...(result.yields
       ? {
           yields: result.yields.map((stage) => ({

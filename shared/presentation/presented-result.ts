@@ -31,6 +31,8 @@ export interface PresentedResult {
     readonly rule: string;
     readonly flipEveryDays?: number;
   };
+  /** Cures: the size the hold is reckoned on, when it was not given (so there is no schedule). */
+  readonly holdNeeds?: 'thickness' | 'largestPiece';
   readonly yields?: readonly {
     readonly step: string;
     readonly percent: string;

@@ -3,6 +3,8 @@ import { describe, it } from 'node:test';
 import {
   SAFE_WORKFLOW_RULES,
   moveRefusal,
+  signOffConcern,
+  signOffNoteRefusal,
   signOffRefusal,
   type WorkflowRules,
 } from './workflow-rules.ts';
@@ -35,6 +37,38 @@ describe('signOffRefusal', () => {
   it('should let anyone else sign off, and the recorder too when the rule is off', () => {
     assert.equal(signOffRefusal(belly, { id: 8 }, ON), undefined);
     assert.equal(signOffRefusal(belly, { id: 7 }, OFF), undefined);
+  });
+});
+
+describe('signOffNoteRefusal', () => {
+  const failed = { status: 'done', failedChecks: ['Ingoing sodium nitrite'] } as const;
+
+  it('should ask a note naming the failed check, with 400', () => {
+    const refusal = signOffNoteRefusal(failed, null);
+    assert.equal(refusal?.status, 400);
+    assert.equal(refusal?.code, 'note-needed');
+    assert.equal(
+      refusal?.message,
+      'the check “Ingoing sodium nitrite” failed; say in the note what you checked before signing it off',
+    );
+  });
+
+  it('should ask a note for a batch still curing, and name both concerns together', () => {
+    assert.equal(signOffConcern({ status: 'curing', failedChecks: [] }), 'it is still curing');
+    assert.equal(
+      signOffConcern({ status: 'curing', failedChecks: ['Salt', 'Sugar', 'Ascorbate'] }),
+      'the checks “Salt”, “Sugar” and “Ascorbate” failed, and it is still curing',
+    );
+    assert.equal(
+      signOffNoteRefusal({ status: 'curing', failedChecks: [] }, '  ')?.code,
+      'note-needed',
+    );
+  });
+
+  it('should take a note, and ask none of a batch that passed and is done', () => {
+    assert.equal(signOffNoteRefusal(failed, 'Re-weighed the cure: 118 ppm stands'), undefined);
+    assert.equal(signOffNoteRefusal({ status: 'done', failedChecks: [] }, null), undefined);
+    assert.equal(signOffNoteRefusal({ status: 'in-progress', failedChecks: [] }, null), undefined);
   });
 });
 

@@ -26,7 +26,7 @@ export const SAFE_WORKFLOW_RULES: WorkflowRules = {
 /** Why a rule refuses a change: the API's status and stable code, and words for a cook. */
 export interface WorkflowRefusal {
   readonly status: 400 | 403 | 409;
-  readonly code: 'own-batch' | 'signed-off' | 'reason-needed' | 'not-cured';
+  readonly code: 'own-batch' | 'signed-off' | 'reason-needed' | 'not-cured' | 'note-needed';
   /** In a cook's words, as the API's message and the console's explanation alike. */
   readonly message: string;
 }
@@ -62,6 +62,49 @@ export function signOffRefusal(
       message: 'you recorded this batch; another person signs it off',
     };
   return undefined;
+}
+
+/** What a sign-off looks at of a batch beyond who recorded it: its status and failed checks. */
+export interface SignedBatch {
+  readonly status: BatchStatus;
+  /** The labels of the checks that failed, as recorded ("Ingoing sodium nitrite"); empty if none. */
+  readonly failedChecks: readonly string[];
+}
+
+/**
+ * What the reviewer signs for on a batch that is not plainly good, in a cook's words: its failed
+ * checks named, or that it is still curing; null for a batch that passed and has finished curing.
+ * Such a sign-off always needs a note, whatever the kitchen's rules: the record must say what
+ * the reviewer looked at.
+ */
+export function signOffConcern(batch: SignedBatch): string | null {
+  const named = batch.failedChecks.map((label) => `“${label}”`);
+  const failed =
+    named.length === 0
+      ? null
+      : named.length === 1
+        ? `the check ${named[0]} failed`
+        : `the checks ${named.slice(0, -1).join(', ')} and ${named.at(-1)} failed`;
+  const curing = batch.status === 'curing' ? 'it is still curing' : null;
+  const both = [failed, curing].filter((part): part is string => part !== null);
+  return both.length ? both.join(', and ') : null;
+}
+
+/**
+ * Why this sign-off may not be made without a note: a failed check or a batch still curing needs
+ * the reviewer to say what they checked; undefined when the note is there or not needed.
+ */
+export function signOffNoteRefusal(
+  batch: SignedBatch,
+  note: string | null,
+): WorkflowRefusal | undefined {
+  const concern = signOffConcern(batch);
+  if (!concern || note?.trim()) return undefined;
+  return {
+    status: 400,
+    code: 'note-needed',
+    message: `${concern}; say in the note what you checked before signing it off`,
+  };
 }
 
 /**

@@ -11,7 +11,10 @@ async function signedOffCure(server: TestServer): Promise<string> {
     (await server.as('tobin').post(`/api/batches/${lot}/status`, { to: 'curing' })).status,
     200,
   );
-  const signed = await server.as('imke').post(`/api/batches/${lot}/sign-off`, {});
+  // Still curing, so the sign-off says what was checked (tests/api/batches-sign-off-note.spec.ts).
+  const signed = await server
+    .as('imke')
+    .post(`/api/batches/${lot}/sign-off`, { note: 'Cure weights checked; curing in the walk-in.' });
   assert.equal(signed.status, 200, signed.text);
   return lot;
 }

@@ -182,7 +182,12 @@ describe('concurrent requests', () => {
     // Signed off by the reviewer: the admin recorded it, and nobody signs off their own batch.
     const imke = await cookieSession(server, 'imke');
     const signs = await many(
-      { method: 'POST', path: `/api/batches/${lot}/sign-off`, body: {} },
+      // Still curing: a sign-off then says what was checked.
+      {
+        method: 'POST',
+        path: `/api/batches/${lot}/sign-off`,
+        body: { note: 'Cure weights checked.' },
+      },
       imke,
     );
     assertNo5xx(signs);

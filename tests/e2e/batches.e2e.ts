@@ -139,7 +139,10 @@ describe('the batch log in the console', () => {
       .getByTestId('batch-status')
       .getByText(/curing/i)
       .waitFor();
-    const signed = await server.as('imke').post(`/api/batches/${lot}/sign-off`, {});
+    // Still curing, so the sign-off says what was checked.
+    const signed = await server
+      .as('imke')
+      .post(`/api/batches/${lot}/sign-off`, { note: 'Cure weights checked.' });
     assert.equal(signed.status, 200, signed.text);
 
     // Signed off, the cook's moves are held back with the reason.

@@ -11,6 +11,7 @@ import { addDays } from '../dates.ts';
 import { referenceFromFinished, yieldStages } from '../yields.ts';
 import { brineCure } from './brine-cure.ts';
 import { dryCure } from './dry-cure.ts';
+import { holdSizeOf } from './hold-size.ts';
 import { estimateHold } from './hold-time.ts';
 import { checkIngoingLevels } from './nitrite-checks.ts';
 import { pumpCure } from './pump-cure.ts';
@@ -53,8 +54,10 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
     ...smallCuringSaltWarnings(outcome),
   ];
   let schedule: Schedule | undefined;
+  let holdNeeds: CalcResult['holdNeeds'];
   if ('missing' in hold) {
     warnings.push(`No ready date: ${hold.missing}.`);
+    holdNeeds = holdSizeOf(formula, outcome.heldInBrineStrength) ?? undefined;
   } else if (batch.start) {
     schedule = {
       start: batch.start,
@@ -99,6 +102,7 @@ export function calculateCure(formula: CureFormula, batch: BatchInput): CalcResu
     cautions: cureCautions(formula, allergens),
     allergens,
     ...(schedule ? { schedule } : {}),
+    ...(holdNeeds ? { holdNeeds } : {}),
     ...(stages.length ? { yields: stages } : {}),
     ...(formula.notes ? { notes: formula.notes } : {}),
   };

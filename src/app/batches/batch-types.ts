@@ -2,7 +2,7 @@
  * The shapes the batches API answers with. The batch record itself is declared once, in
  * shared/api/batch-record.ts (types only), for the server and the console alike.
  */
-import type { FormulaKind } from '../../../shared/formula/formula-types.ts';
+import type { FormulaKind, HoldRule } from '../../../shared/formula/formula-types.ts';
 import type { PresentedResult } from '../../../shared/presentation/presented-result.ts';
 
 export type { RawBatchOptions } from '../../../shared/calculation/batch-input.ts';
@@ -42,6 +42,8 @@ export interface FormulaFacts {
   readonly kind: FormulaKind;
   /** Cures: dry, brine or pump. */
   readonly method?: 'dry' | 'brine' | 'pump';
+  /** Cures: the formula's own hold rule, when it has one. */
+  readonly hold?: HoldRule;
   /** Doughs: a preferment takes its own temperature. */
   readonly preferment?: unknown;
   /** Blends: the trimmings (two to five), by key. */

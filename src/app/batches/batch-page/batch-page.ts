@@ -16,7 +16,8 @@ import { firstValueFrom } from 'rxjs';
 import { SessionStore } from '../../core/auth/session-store';
 import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
 import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
-import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
+import { signOffConcern } from '../../../../shared/workflow/workflow-rules.ts';
 import { BatchLog } from '../batch-log/batch-log';
 import { offeredMoves, signOffBlocked, type OfferedMove } from '../batch-status';
 import type { FormulaKind } from '../batch-types';
@@ -24,6 +25,8 @@ import { HoldBanner } from '../process/hold-banner/hold-banner';
 import { ProcessSection } from '../process/process-section/process-section';
 import { ProcessStore } from '../process/process-store';
 import { BatchStore } from './batch-store';
+import { ConfirmDialog, type ConfirmDialogData } from './confirm-dialog';
+import { revisionWords } from './revision-words';
 import { ReasonDialog, type ReasonDialogData } from './reason-dialog';
 import { SignOffDialog, type SignOff, type SignOffDialogData } from './sign-off-dialog';
 import { StatusTimeline } from './status-timeline';
@@ -120,7 +123,28 @@ export default class BatchPage {
   protected readonly signOffNote = computed(
     () => this.batch()?.events?.findLast((e) => e.type === 'sign-off')?.reason ?? null,
   );
-  protected readonly shortRevision = computed(() => this.batch()?.formula.revision.slice(0, 12));
+  /** The checks that failed, named in the summary. */
+  protected readonly failedChecks = computed(
+    () => this.batch()?.result.checks.filter((check) => check.status === 'fail') ?? [],
+  );
+  /** What a sign-off would be signing beyond a plain good batch, in words; null for nothing. */
+  protected readonly signOffConcern = computed(() => {
+    const batch = this.batch();
+    return batch
+      ? signOffConcern({
+          status: batch.status,
+          failedChecks: this.failedChecks().map((check) => check.label),
+        })
+      : null;
+  });
+  /** The formula revision in words; its hash only in an admin's tooltip. */
+  protected readonly revisionText = computed(() => {
+    const facts = this.store.revision();
+    if (facts === undefined) return 'the formula as it was when the batch was recorded';
+    const days = new IsoDayPipe();
+    return revisionWords(facts, (iso) => days.transform(iso));
+  });
+  protected readonly isAdmin = computed(() => this.session.hasRole('admin'));
   /** The batch sheet as a PDF, made by the server (GET /api/batches/:lot/sheet.pdf). */
   protected readonly pdfLink = computed(() => {
     const lot = this.batch()?.lotCode;
@@ -142,6 +166,7 @@ export default class BatchPage {
     const batch = this.batch();
     if (!batch || move.blocked) return;
     let reason: string | undefined;
+    if (!move.needsReason && move.to === 'done' && !(await this.confirmEarlyDone())) return;
     if (move.needsReason) {
       const dialog = this.dialog.open<ReasonDialog, ReasonDialogData, string>(ReasonDialog, {
         data: { lotCode: batch.lotCode, to: move.to, action: move.action },
@@ -155,12 +180,42 @@ export default class BatchPage {
     void this.process.load(batch.lotCode);
   }
 
+  /** Asks before marking a batch done ahead of its ready date; true when there is no need. */
+  private async confirmEarlyDone(): Promise<boolean> {
+    const batch = this.batch();
+    const today = isoDateOf(new Date());
+    if (!batch?.readyOn || !today || batch.readyOn <= today) return true;
+    const ready = new IsoDayPipe().transform(batch.readyOn);
+    const cure = batch.kind === 'cure';
+    const dialog = this.dialog.open<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, {
+      data: {
+        title: `Mark batch ${batch.lotCode} done before it is ready?`,
+        lines: [
+          `It is not ready until ${ready}. ${
+            cure
+              ? 'A cure taken out early may not have cured through: the cure needs its full time to be safe.'
+              : 'Marking it done ends its time in this step.'
+          }`,
+          'Once it is done it cannot go back to an earlier step.',
+        ],
+        confirm: 'Mark done now',
+        keep: cure ? 'Keep it curing' : 'Not yet',
+      },
+      width: '520px',
+    });
+    return (await firstValueFrom(dialog.afterClosed())) === true;
+  }
+
   protected async signOff(): Promise<void> {
     const batch = this.batch();
     if (!batch || this.signOffHeld()) return;
     const final = batch.status === 'done' || batch.status === 'discarded';
     const dialog = this.dialog.open<SignOffDialog, SignOffDialogData, SignOff>(SignOffDialog, {
-      data: { lotCode: batch.lotCode, locks: this.store.rules().lockSignedOff && !final },
+      data: {
+        lotCode: batch.lotCode,
+        locks: this.store.rules().lockSignedOff && !final,
+        concern: this.signOffConcern(),
+      },
       width: '520px',
     });
     const answer = await firstValueFrom(dialog.afterClosed());

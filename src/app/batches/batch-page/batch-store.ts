@@ -8,6 +8,7 @@ import {
 import { ApiError } from '../../core/api/api-error';
 import { messageOf } from '../../core/api/message-of';
 import type { Batch, BatchStatus } from '../batch-types';
+import type { RevisionFacts } from './revision-words';
 
 /**
  * One batch on its page: read with its events (GET /api/batches/:lot), moved along
@@ -23,6 +24,7 @@ export class BatchStore {
   private readonly failure = signal<{ message: string; notFound: boolean } | null>(null);
   private readonly acting = signal(false);
   private readonly actionFailure = signal<string | null>(null);
+  private readonly revisionFacts = signal<RevisionFacts | null | undefined>(undefined);
   private request = 0;
 
   /** The batch, with its events; null until read. */
@@ -37,6 +39,11 @@ export class BatchStore {
   readonly changing = this.acting.asReadonly();
   /** Why the last change was not made, or null. */
   readonly changeError = this.actionFailure.asReadonly();
+  /**
+   * What the formula's history knows of the revision the batch was made from: undefined while
+   * read (or when it could not be), null when the history no longer has it.
+   */
+  readonly revision = this.revisionFacts.asReadonly();
 
   /** Reads a batch by lot code. */
   async load(lot: string): Promise<void> {
@@ -53,6 +60,7 @@ export class BatchStore {
       if (request === this.request) {
         this.workflow.set(rules);
         this.current.set(batch);
+        void this.loadRevision(batch, request);
       }
     } catch (error) {
       if (request !== this.request) return;
@@ -62,6 +70,22 @@ export class BatchStore {
       });
     } finally {
       if (request === this.request) this.busy.set(false);
+    }
+  }
+
+  /** Reads the formula revision's record (GET /api/formulas/:id/revisions/:revision). */
+  private async loadRevision(batch: Batch, request: number): Promise<void> {
+    const { id, revision } = batch.formula;
+    try {
+      const facts = await firstValueFrom(
+        this.http.get<RevisionFacts>(
+          `/api/formulas/${encodeURIComponent(id)}/revisions/${encodeURIComponent(revision)}`,
+        ),
+      );
+      if (request === this.request) this.revisionFacts.set(facts);
+    } catch (error) {
+      if (request !== this.request) return;
+      this.revisionFacts.set(error instanceof ApiError && error.status === 404 ? null : undefined);
     }
   }
 

@@ -19,6 +19,24 @@ describe('fieldsFor', () => {
     assert.deepEqual(keys('pump'), ['meat', 'thickness', 'largestPiece', 'pump', 'pumpedWeight']);
   });
 
+  it('should offer only the size a cure’s own hold goes by, and require it', () => {
+    const sized = (hold: FormulaFacts['hold']) =>
+      fieldsFor({ ...cure('dry'), hold })
+        .filter((x) => x.key === 'thickness' || x.key === 'largestPiece')
+        .map((x) => [x.key, x.required ?? false]);
+    // formulas/quillmoor-belly.yaml: 2 days per cm, at least 7; formulas/ham-pump.yaml: 1 day per kg
+    assert.deepEqual(sized({ days_per_cm: 2, min_days: 7 }), [['thickness', true]]);
+    assert.deepEqual(sized({ days_per_kg: 1, plus_days: 1 }), [['largestPiece', true]]);
+    // formulas/maple-pump-belly.yaml: 2 days, whatever the size
+    assert.deepEqual(sized({ days: 2 }), []);
+  });
+
+  it('should require the size the preview says a default hold needs', () => {
+    const fields = fieldsFor(cure('brine'), 'largestPiece');
+    assert.equal(fields.find((x) => x.key === 'largestPiece')?.required, true);
+    assert.equal(fields.find((x) => x.key === 'thickness')?.required, undefined);
+  });
+
   it('should ask a preferment temperature only of a dough with a preferment', () => {
     const plain = fieldsFor({ id: 'b', title: 'B', kind: 'dough' }).map((x) => x.key);
     const sponge = fieldsFor({ id: 'b', title: 'B', kind: 'dough', preferment: {} }).map(

@@ -2,6 +2,7 @@ import {
   BATCH_OPTION_NAMES,
   type BatchOptionName,
 } from '../../../../shared/calculation/batch-option-names.ts';
+import { holdSizeOfRule, type HoldSize } from '../../../../shared/calculation/cure/hold-size.ts';
 import type { FormulaFacts, RawBatchOptions } from '../batch-types';
 
 /** What a batch option measures, which decides the unit a bare number is taken in. */
@@ -26,6 +27,8 @@ export interface BatchField {
   readonly measure: Measure;
   /** A line under the box: what to enter, or that the formula's own value is used when empty. */
   readonly hint: string;
+  /** Whether a batch made now cannot be recorded without it (the size the hold goes by). */
+  readonly required?: boolean;
 }
 
 /** Unit systems a batch sheet can be printed in. */
@@ -38,17 +41,39 @@ const f = (key: FieldKey, label: string, measure: Measure, hint: string): BatchF
   hint,
 });
 
+/** The two sizes a cure's hold may go by, as boxes. */
+const SIZE_FIELDS: Readonly<Record<HoldSize, BatchField>> = {
+  thickness: f('thickness', 'Thickness of the thickest piece', 'length', 'For the hold time'),
+  largestPiece: f('largestPiece', 'Weight of the heaviest piece', 'mass', 'For the hold time'),
+};
+
+/**
+ * The size boxes of a cure: only the size its own hold rule goes by (none for fixed days); both
+ * when it has no rule of its own, since the default rule depends on the brine the batch makes.
+ * The size the hold goes by (its own rule's, or the one the preview says is missing) is required.
+ */
+function sizeFields(formula: FormulaFacts, missing: HoldSize | null): BatchField[] {
+  const own = formula.hold ? holdSizeOfRule(formula.hold) : null;
+  const offered: HoldSize[] = formula.hold ? (own ? [own] : []) : ['thickness', 'largestPiece'];
+  if (missing && !offered.includes(missing)) offered.push(missing);
+  return offered.map((size) =>
+    size === own || size === missing
+      ? { ...SIZE_FIELDS[size], hint: 'Needed: the hold time goes by it', required: true }
+      : SIZE_FIELDS[size],
+  );
+}
+
 /**
  * The boxes a formula's batch takes, in the order a cook thinks of them; options that apply only
- * to another cure method (water for brine, pump for injected) are left out.
+ * to another cure method (water for brine, pump for injected) or another hold rule are left out.
+ * @param missing the size the latest preview says the hold needs and was not given
  */
-export function fieldsFor(formula: FormulaFacts): BatchField[] {
+export function fieldsFor(formula: FormulaFacts, missing: HoldSize | null = null): BatchField[] {
   switch (formula.kind) {
     case 'cure':
       return [
         f('meat', 'Green meat weight', 'mass', 'Trimmed, raw, uncured'),
-        f('thickness', 'Thickness of the thickest piece', 'length', 'For the hold time'),
-        f('largestPiece', 'Weight of the heaviest piece', 'mass', 'For per-weight hold rules'),
+        ...sizeFields(formula, missing),
         ...(formula.method === 'brine'
           ? [f('water', 'Water', 'mass', 'By weight, or in litres (12 L); empty: the formula’s')]
           : []),

@@ -30,6 +30,8 @@ export interface Refusal {
 export interface InputProblem {
   readonly message: string;
   readonly details: readonly unknown[];
+  /** The API's code: 'hold-size-needed' names a box that must be filled in. */
+  readonly code?: string;
 }
 
 /**
@@ -137,8 +139,11 @@ export class BatchRecorder {
           sentences: checks.map((c) => sentenceCase(c.sentence)),
           refusedByServer: true,
         });
-      } else if (error instanceof ApiError && error.code === 'bad-batch') {
-        this.problem.set({ message: error.message, details: error.details });
+      } else if (
+        error instanceof ApiError &&
+        (error.code === 'bad-batch' || error.code === 'hold-size-needed')
+      ) {
+        this.problem.set({ message: error.message, details: error.details, code: error.code });
         this.saveFailure.set('Not recorded: check the batch options.');
       } else {
         this.saveFailure.set(`Not recorded: ${messageOf(error)}`);

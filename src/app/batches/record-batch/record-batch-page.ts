@@ -1,6 +1,7 @@
 import {
   ChangeDetectionStrategy,
   Component,
+  ElementRef,
   OnInit,
   computed,
   inject,
@@ -29,6 +30,7 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSelect } from '@angular/material/select';
 import { Router, RouterLink } from '@angular/router';
+import type { HoldSize } from '../../../../shared/calculation/cure/hold-size.ts';
 import { messageOf } from '../../core/api/message-of';
 import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
 import { DAY_INPUT_FORMATS } from '../../ui/batch-sheet/day-input-formats';
@@ -102,6 +104,7 @@ export default class RecordBatchPage implements OnInit {
   private readonly fb = inject(NonNullableFormBuilder);
   private readonly router = inject(Router);
   private readonly log = inject(BatchLog);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   protected readonly recorder = inject(BatchRecorder);
   protected readonly formulaOptions = inject(FormulaOptions);
 
@@ -130,9 +133,18 @@ export default class RecordBatchPage implements OnInit {
   protected readonly units = signal<Units>('metric');
   /** The unit a bare number in each kind of box is taken in. */
   protected readonly unitOf = computed(() => unitsOf(this.units()));
+  /** The size this cure's hold goes by, once a preview or the server has said it is missing. */
+  private readonly neededSize = signal<HoldSize | null>(null);
   protected readonly fields = computed(() => {
     const facts = this.facts();
-    return facts ? fieldsFor(facts) : [];
+    return facts ? fieldsFor(facts, this.neededSize()) : [];
+  });
+  /** The preview with its warnings in the form's words: a box's label, never an option's name. */
+  protected readonly previewShown = computed(() => {
+    const result = this.recorder.preview();
+    if (!result) return null;
+    const fields = this.fields();
+    return { ...result, warnings: result.warnings.map((w) => inFormWords(w, fields)) };
   });
   /** The words of the latest input problem, with boxes named as the form names them. */
   protected readonly problemText = computed(() => {
@@ -156,6 +168,7 @@ export default class RecordBatchPage implements OnInit {
     const id = this.form.controls.formula.value;
     this.recorder.clear();
     this.facts.set(null);
+    this.neededSize.set(null);
     this.factsError.set(null);
     this.form.controls.values.reset();
     if (!id) return;
@@ -194,6 +207,7 @@ export default class RecordBatchPage implements OnInit {
     const id = this.form.controls.formula.value;
     if (this.form.invalid || !id || !this.facts()) {
       this.form.markAllAsTouched();
+      this.focusFirstMissing();
       return;
     }
     const raw = this.form.getRawValue();
@@ -227,9 +241,26 @@ export default class RecordBatchPage implements OnInit {
       this.recorder.clear();
       return;
     }
-    void this.recorder
-      .calculate(id, this.options(), this.form.controls.units.value)
-      .then(() => this.markProblemField());
+    void this.recorder.calculate(id, this.options(), this.form.controls.units.value).then(() => {
+      const needs = this.recorder.preview()?.holdNeeds;
+      if (needs) this.neededSize.set(needs);
+      this.markProblemField();
+    });
+  }
+
+  /** Whether a box must be filled in before recording: a size the hold goes by, for a batch made now. */
+  protected isRequired(field: { readonly required?: boolean }): boolean {
+    return !!field.required && this.form.controls.status.value !== 'planned';
+  }
+
+  /** Puts the cursor in the first box that stops the record: the formula, or a missing size. */
+  private focusFirstMissing(): void {
+    const missing = this.form.controls.formula.invalid
+      ? 'record-formula'
+      : this.fields().find((field) => this.form.controls.values.controls[field.key].invalid)?.key;
+    if (!missing) return;
+    const testId = missing === 'record-formula' ? missing : `record-field-${missing}`;
+    this.host.nativeElement.querySelector<HTMLElement>(`[data-testid="${testId}"]`)?.focus();
   }
 
   private options(): ReturnType<typeof batchOptions> {
@@ -246,15 +277,19 @@ export default class RecordBatchPage implements OnInit {
   private markProblemField(): void {
     const problem = this.recorder.inputProblem();
     const key = problem ? fieldOf(problem.details) : null;
+    // The server asks for a size the form did not know the hold goes by: offer it, and ask.
+    const sizeNeeded = problem?.code === 'hold-size-needed';
+    if (sizeNeeded && (key === 'thickness' || key === 'largestPiece')) this.neededSize.set(key);
     let onField = false;
     for (const field of FIELD_KEYS) {
       const control = this.form.controls.values.controls[field];
-      if (field === key && control.value.trim() !== '') {
+      if (field === key && (sizeNeeded || control.value.trim() !== '')) {
         control.setErrors({ server: this.problemText() });
         control.markAsTouched();
         onField = true;
       } else if (control.hasError('server')) control.setErrors(null);
     }
     this.problemOnField.set(onField);
+    if (sizeNeeded) setTimeout(() => this.focusFirstMissing());
   }
 }
