@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -16,6 +15,7 @@ import { FormulaDiff, FormulaRevision, shortRevision } from '../formula-api-type
 import { FormulaStore } from '../formula-store';
 import { SOURCE_LABELS } from '../formula-vocabulary';
 import { RevisionDiff } from '../revision-diff/revision-diff';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /**
  * A formula's history, newest first: who changed it, when, why and how, with the revision and
@@ -23,7 +23,7 @@ import { RevisionDiff } from '../revision-diff/revision-diff';
  */
 @Component({
   selector: 'app-formula-history',
-  imports: [DatePipe, MatCheckbox, MatButton, MatProgressBar, RevisionDiff],
+  imports: [IsoDayPipe, MatCheckbox, MatButton, MatProgressBar, RevisionDiff],
   templateUrl: './formula-history.html',
   styleUrl: './formula-history.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

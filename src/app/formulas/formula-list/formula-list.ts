@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -31,6 +30,7 @@ import { FormulaStore } from '../formula-store';
 import { FormulaUpload } from '../formula-upload/formula-upload';
 import { KIND_LABELS } from '../formula-vocabulary';
 import { NewFormulaDialog } from '../new-formula-dialog/new-formula-dialog';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /**
  * Every formula file: title, id, kind, revision, whether it is valid and who changed it last,
@@ -39,7 +39,7 @@ import { NewFormulaDialog } from '../new-formula-dialog/new-formula-dialog';
 @Component({
   selector: 'app-formula-list',
   imports: [
-    DatePipe,
+    IsoDayPipe,
     RouterLink,
     MatButton,
     MatIcon,
