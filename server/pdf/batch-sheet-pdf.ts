@@ -195,9 +195,7 @@ function hold(layout: SheetLayout, schedule: NonNullable<PresentedResult['schedu
   layout.paragraph(schedule.rule, { color: INK.muted, size: SMALL });
   const every = schedule.flipEveryDays;
   if (!every) return;
-  layout.paragraph(
-    `Turn or overhaul every ${every} ${every === 1 ? 'day' : 'days'}; tick each turn:`,
-  );
+  layout.paragraph(`Turn every ${every} ${every === 1 ? 'day' : 'days'}; tick each turn:`);
   const turns: number[] = [];
   for (let day = every; day < schedule.days; day += every) turns.push(day);
   const step = 92;
