@@ -14,6 +14,7 @@ import {
 } from './sheet-sections.ts';
 import { statusInWords } from '../../shared/workflow/batch-status.ts';
 import { dayInWords, kindWords, momentInWords } from './sheet-words.ts';
+import { optionsInWords } from '../../shared/presentation/option-words.ts';
 
 /** The parts of a recorded batch its sheet prints beside the result. */
 export type SheetRecord = Pick<
@@ -223,7 +224,10 @@ function check(layout: SheetLayout, result: PresentedResult, title: string): voi
   heading(layout, title, 60);
   for (const limit of result.checks) checkBlock(layout, limit);
   for (const warning of result.warnings) {
-    layout.paragraph(`Warning: ${warning}`, { color: INK.warn, weight: 'semibold' });
+    layout.paragraph(`Warning: ${optionsInWords(warning)}`, {
+      color: INK.warn,
+      weight: 'semibold',
+    });
   }
   if (result.critical) return;
   if (result.yields?.length) {
