@@ -7,6 +7,7 @@ import { requireScriptWrite } from './auth/basic-writes.ts';
 import { requireCsrfToken } from './auth/csrf.ts';
 import { sessionMiddleware } from './auth/session.ts';
 import { sessionRouter } from './auth/session-router.ts';
+import { demoInfo } from './demo/demo-people.ts';
 import { SignIns } from './auth/sign-ins.ts';
 import { batchesCsv, batchesRouter } from './batches/batches-router.ts';
 import { calcRouter } from './calc/calc-router.ts';
@@ -63,7 +64,10 @@ export function createApp(context: AppContext): Express {
   const signIns = new SignIns(context.people, context.config.signInLimit);
   useBasicStrategy(signIns, context.audit);
   api.get('/health', (_req, res) => void res.json({ ok: true }));
-  api.use('/session', sessionRouter(context.people, context.audit, signIns));
+  api.use(
+    '/session',
+    sessionRouter(context.people, context.audit, signIns, demoInfo(context.config)),
+  );
   // Anyone holding an invitation link; the token is the proof, so no sign-in and no CSRF token.
   api.use('/invitations', invitationsRouter(context));
   // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes or a

@@ -2,13 +2,14 @@ import type { AddressInfo } from 'node:net';
 import { createApp } from './app.ts';
 import { ConfigError, loadConfig } from './config.ts';
 import { DEMO_PEOPLE } from './demo/demo-people.ts';
-import { ensureDemoFormulas } from './demo/demo-formulas.ts';
+import { SHIPPED_FORMULAS, ensureDemoFormulas } from './demo/demo-formulas.ts';
 import { EquipmentDueScheduler } from './equipment/equipment-due-scheduler.ts';
 import { seedDemo } from './demo/seed-demo.ts';
 import { openContext } from './main-context.ts';
 import { DeadlineScan } from './process/deadline-scan.ts';
 import { ProcessAlertScheduler } from './process/process-alert-scheduler.ts';
 import { ReminderScheduler } from './reminders/reminder-scheduler.ts';
+import { startBanner } from './start-banner.ts';
 
 /* eslint-disable no-console -- the server talks to whoever started it */
 
@@ -38,29 +39,21 @@ async function main(): Promise<void> {
   const server = createApp(context).listen(config.port, config.host);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
-    console.log(
-      `Larderbook (${config.mode}) at http://${config.host}:${port}/  ·  database ${config.databaseFile}  ·  formulas ${config.formulasDir}`,
-    );
     // Links in messages need the port; reminders start once it is known.
     context.mail.links.listeningOn(port);
-    console.log(
-      `Mail: ${context.mail.mailer.description}  ·  links to ${context.mail.links.base()}  ·  reminders every ${config.reminderMinutes} min`,
-    );
     reminders.start();
     deadlines.start();
     alerts.start();
     equipmentDue.start();
-    if (config.mode === 'demo') {
-      console.log('Demo sign-ins (invented people of the Quillmoor Smokehouse):');
-      for (const person of DEMO_PEOPLE)
-        console.log(
-          `  ${person.role.padEnd(8)}  ${person.username.padEnd(6)}  password: ${person.password}`,
-        );
-    } else if ((await context.people.count()) === 0) {
-      console.log(
-        'No people yet: create the first admin with  larder users add USERNAME --role admin',
-      );
-    }
+    const banner = startBanner({
+      config,
+      url: `http://${config.host}:${port}/`,
+      shippedFormulas: SHIPPED_FORMULAS,
+      demoPeople: config.mode === 'demo' ? DEMO_PEOPLE : [],
+      nobodyYet: config.mode !== 'demo' && (await context.people.count()) === 0,
+      mail: `${context.mail.mailer.description}; links to ${context.mail.links.base()}; reminders every ${config.reminderMinutes} min`,
+    });
+    for (const line of banner) console.log(line);
   });
   server.on('error', (error) => {
     console.error(`larderbook: cannot listen on ${config.host}:${config.port}: ${error.message}`);

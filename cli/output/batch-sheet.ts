@@ -70,9 +70,7 @@ export function renderBatchSheet(result: PresentedResult): string {
         `  Start ${s.start}  →  ready ${s.ready}`,
       );
       if (s.flipEveryDays)
-        out.push(
-          `  Turn or overhaul every ${s.flipEveryDays === 1 ? 'day' : `${s.flipEveryDays} days`}.`,
-        );
+        out.push(`  Turn every ${s.flipEveryDays === 1 ? 'day' : `${s.flipEveryDays} days`}.`);
     }
   }
   if (result.checks.length) {

@@ -3,7 +3,7 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import { AppError } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
-import type { Person, SessionInfo } from '../../shared/api/person.ts';
+import type { DemoInfo, Person, SessionInfo, SessionState } from '../../shared/api/person.ts';
 import { newCsrfToken, showsCsrfToken, wrongCsrfToken } from './csrf.ts';
 import { SESSION_COOKIE } from './session.ts';
 import type { SignIns } from './sign-ins.ts';
@@ -35,7 +35,8 @@ function startSession(req: Request, person: Person): Promise<string> {
 }
 
 /**
- * /api/session: sign in with a form (POST), see who is signed in (GET), sign out (DELETE).
+ * /api/session: sign in with a form (POST), see who is signed in (GET: 200 signed out too), sign
+ * out (DELETE); /api/session/demo: the demo's sign-ins, given only on a demo server.
  * Sign-in attempts are limited per address, together with HTTP Basic's (SignIns): 429 past the
  * limit, and only failed attempts count.
  */
@@ -43,6 +44,7 @@ export function sessionRouter(
   people: PeopleRepository,
   audit: AuditRepository,
   signIns: SignIns,
+  demo: DemoInfo = { demo: false, kitchen: null, signIns: [] },
 ): Router {
   const router = Router();
 
@@ -70,8 +72,15 @@ export function sessionRouter(
   router.get('/', async (req, res) => {
     const personId = req.session?.personId;
     const person = personId === undefined ? undefined : await people.findById(personId);
-    if (!person?.active) throw new AppError(401, 'unauthenticated', 'not signed in');
-    res.json({ person, csrfToken: req.session.csrfToken });
+    // Signed out is an answer, not a failure: the console asks on every load.
+    if (!person?.active)
+      return void res.json({ person: null, csrfToken: null } satisfies SessionState);
+    res.json({ person, csrfToken: req.session.csrfToken ?? '' } satisfies SessionState);
+  });
+
+  // Only a demo server tells its sign-ins, for its sign-in page; any other says it is not one.
+  router.get('/demo', (_req, res) => {
+    res.json(demo);
   });
 
   router.delete('/', async (req, res) => {

@@ -1,3 +1,5 @@
+import type { DemoInfo } from '../../shared/api/person.ts';
+import type { ServerConfig } from '../config.ts';
 import type { NewPerson } from '../people/people-repository.ts';
 
 /**
@@ -31,3 +33,22 @@ export const DEMO_PEOPLE: readonly NewPerson[] = [
     demo: true,
   },
 ];
+
+/**
+ * What the demo's sign-in page shows: its kitchen and its sign-ins, only when the server runs
+ * as the demo (LARDER_MODE unset or demo); any other install tells nothing, whoever is in its
+ * database.
+ */
+export function demoInfo(config: Pick<ServerConfig, 'mode' | 'kitchenName'>): DemoInfo {
+  if (config.mode !== 'demo') return { demo: false, kitchen: null, signIns: [] };
+  return {
+    demo: true,
+    kitchen: config.kitchenName,
+    signIns: DEMO_PEOPLE.map(({ username, displayName, role, password }) => ({
+      username,
+      displayName,
+      role,
+      password,
+    })),
+  };
+}

@@ -1,6 +1,7 @@
 import type { Equipment } from '../../shared/api/equipment.ts';
 import { composeMessage, standardFooter, type MessageContent } from '../mail/mail-message.ts';
 import { kitchenTimeZone } from '../process/kitchen-clock.ts';
+import { shortMomentWords } from '../../shared/presentation/date-words.ts';
 
 /** Everything an equipment-due reminder's words depend on. */
 export interface EquipmentDueFacts {
@@ -13,19 +14,9 @@ export interface EquipmentDueFacts {
   readonly kitchen: string;
 }
 
-/** A time as the kitchen reads it: "Thu 3 Dec 14:00". */
+/** A time as the kitchen reads it, the short form of the console's boards: "Thu 3 Dec, 14:00". */
 function timeText(iso: string): string {
-  return new Intl.DateTimeFormat('en-GB', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-    timeZone: kitchenTimeZone(),
-  })
-    .format(new Date(iso))
-    .replace(',', '');
+  return shortMomentWords(iso, kitchenTimeZone());
 }
 
 /** A reading or ice-point check that is overdue, in words, plain text and HTML. */

@@ -1,3 +1,5 @@
+import { dayWords } from '../../shared/presentation/date-words.ts';
+
 /** A message's words, as plain text and as simple HTML built from the same parts. */
 export interface MessageContent {
   readonly subject: string;
@@ -81,20 +83,11 @@ export function composeMessage(parts: MessageParts): MessageContent {
 export function standardFooter(kitchen: string, consoleUrl: string, reason: string): string[] {
   return [
     `This message comes from Larderbook at ${kitchen}: the kitchen's formulas, batch records and cure reminders. ${reason}`,
-    `To choose which reminders you get (flip days, ready days, overdue batches), sign in at ${consoleUrl} and open “My reminders” in the account menu, top right.`,
+    `To choose which reminders you get (turn days, ready days, overdue batches), sign in at ${consoleUrl} and open “My reminders” in the account menu, top right.`,
   ];
 }
 
-// Made once: building a formatter costs far more than using one.
-const MESSAGE_DAY = new Intl.DateTimeFormat('en-GB', {
-  weekday: 'short',
-  day: 'numeric',
-  month: 'short',
-  year: 'numeric',
-  timeZone: 'UTC',
-});
-
-/** A date as people read it in a message: "Thu 4 Dec 2026". */
+/** A date as people read it in a message, the console's form: "4 Dec 2026". */
 export function dayText(isoDate: string): string {
-  return MESSAGE_DAY.format(new Date(`${isoDate}T00:00:00Z`)).replace(',', '');
+  return dayWords(isoDate);
 }

@@ -14,6 +14,7 @@ import {
 } from './sheet-sections.ts';
 import { statusInWords } from '../../shared/workflow/batch-status.ts';
 import { dayInWords, kindWords, momentInWords } from './sheet-words.ts';
+import { optionsInWords } from '../../shared/presentation/option-words.ts';
 
 /** The parts of a recorded batch its sheet prints beside the result. */
 export type SheetRecord = Pick<
@@ -195,9 +196,7 @@ function hold(layout: SheetLayout, schedule: NonNullable<PresentedResult['schedu
   layout.paragraph(schedule.rule, { color: INK.muted, size: SMALL });
   const every = schedule.flipEveryDays;
   if (!every) return;
-  layout.paragraph(
-    `Turn or overhaul every ${every} ${every === 1 ? 'day' : 'days'}; tick each turn:`,
-  );
+  layout.paragraph(`Turn every ${every} ${every === 1 ? 'day' : 'days'}; tick each turn:`);
   const turns: number[] = [];
   for (let day = every; day < schedule.days; day += every) turns.push(day);
   const step = 92;
@@ -225,7 +224,10 @@ function check(layout: SheetLayout, result: PresentedResult, title: string): voi
   heading(layout, title, 60);
   for (const limit of result.checks) checkBlock(layout, limit);
   for (const warning of result.warnings) {
-    layout.paragraph(`Warning: ${warning}`, { color: INK.warn, weight: 'semibold' });
+    layout.paragraph(`Warning: ${optionsInWords(warning)}`, {
+      color: INK.warn,
+      weight: 'semibold',
+    });
   }
   if (result.critical) return;
   if (result.yields?.length) {

@@ -3,11 +3,18 @@ import { batchBody } from './batch-sheet-pdf.ts';
 import { finishSheet, openSheet } from './sheet-document.ts';
 import { INK, SMALL, TICK, type SheetLayout } from './sheet-layout.ts';
 import { bulletList, heading, signOffLines, subheading } from './sheet-sections.ts';
+import { optionsInWords } from '../../shared/presentation/option-words.ts';
 import { dayInWords, kindWords } from './sheet-words.ts';
 
 /** "Smokehouse burger × 120" */
 function planTitle(plan: PresentedPlan): string {
   return `${plan.assembly.title} × ${plan.count}`;
+}
+
+/** Each formula of the plan by its title, from its id: the pull list names formulas by id. */
+function titleOf(plan: PresentedPlan): (id: string) => string {
+  const titles = new Map(plan.batches.map((b) => [b.formula.id, b.formula.title]));
+  return (id) => titles.get(id) ?? id;
 }
 
 /** The small rust label over a page's title, and the title. */
@@ -55,7 +62,7 @@ function overview(layout: SheetLayout, plan: PresentedPlan): void {
     layout,
     'LARDERBOOK · PRODUCTION PLAN',
     planTitle(plan),
-    `${plan.assembly.id} · service ${dayInWords(plan.serviceDate)} · planned ${dayInWords(plan.today)} · ${plan.units === 'us' ? 'US units' : 'metric units'} · one production sheet per day follows`,
+    `Service ${dayInWords(plan.serviceDate)} · planned ${dayInWords(plan.today)} · ${plan.units === 'us' ? 'US units' : 'metric units'} · one production sheet per day follows`,
   );
   if (plan.allergens.length) {
     layout.paragraph(`Contains: ${plan.allergens.join(', ')}`, {
@@ -70,34 +77,47 @@ function overview(layout: SheetLayout, plan: PresentedPlan): void {
     plan.batches.map((batch) => ({
       cells: [
         { text: dayInWords(batch.start), style: { weight: 'semibold' } },
-        `${batch.result.formula.title} (${batch.formula.id})`,
+        batch.result.formula.title,
         dayInWords(batch.ready),
         [...batch.purposes, ...appliedLines(batch)].join('; '),
       ],
     })),
   );
   heading(layout, 'Pull list');
+  // "Before trim" only when some raw material is trimmed: no empty column.
+  const trimmed = plan.pullList.some((item) => item.beforeTrim);
+  const title = titleOf(plan);
   layout.table(
     [
       { width: TICK + 14, fixed: true, align: 'center' },
       { width: 7 },
       { width: 3, align: 'right' },
-      { width: 3, align: 'right' },
-      { width: 4 },
+      ...(trimmed ? [{ width: 3, align: 'right' as const }] : []),
+      { width: 6 },
     ],
-    { cells: ['', 'Raw material', 'Amount', 'Before trim', 'Used by'].map(header) },
+    {
+      cells: ['', 'Raw material', 'Amount', ...(trimmed ? ['Before trim'] : []), 'Used by'].map(
+        header,
+      ),
+    },
     plan.pullList.map((item) => ({
       cells: [
         'tick-box',
         item.name,
         item.amount,
-        item.beforeTrim?.amount ?? '',
-        item.usedBy.join(', '),
+        ...(trimmed ? [item.beforeTrim?.amount ?? ''] : []),
+        // Titles hold commas of their own: a semicolon between them.
+        item.usedBy.map(title).join('; '),
       ],
     })),
   );
   for (const warning of plan.warnings) {
-    layout.paragraph(`Warning: ${warning}`, { color: INK.warn, weight: 'semibold' });
+    // A batch's warning starts with its formula's id: "pit-bun: …".
+    const named = warning.replace(/^([a-z0-9-]+): /, (whole, id: string) => `${title(id)}: `);
+    layout.paragraph(`Warning: ${optionsInWords(named)}`, {
+      color: INK.warn,
+      weight: 'semibold',
+    });
   }
   heading(layout, 'Cautions');
   bulletList(layout, plan.cautions);
@@ -118,7 +138,7 @@ function daySheet(
     layout,
     `LARDERBOOK · PRODUCTION SHEET · DAY ${index + 1} OF ${plan.days.length}`,
     `Start ${dayInWords(date)}`,
-    `${planTitle(plan)} for service ${dayInWords(plan.serviceDate)} · ${batches.length} ${batches.length === 1 ? 'batch' : 'batches'}: ${batches.map((b) => b.formula.id).join(', ')}`,
+    `${planTitle(plan)} for service ${dayInWords(plan.serviceDate)} · ${batches.length} ${batches.length === 1 ? 'batch' : 'batches'}: ${batches.map((b) => b.result.formula.title).join(', ')}`,
   );
   for (const batch of batches) {
     subheading(layout, `${batch.result.formula.title} · ${kindWords(batch.formula.kind)}`, 80);
@@ -140,10 +160,10 @@ function daySheet(
  * sheet per start day with every batch that starts on it, as its batch sheet would print it.
  */
 export function renderPlanSheetPdf(plan: PresentedPlan): Promise<Buffer> {
-  const name = `plan ${plan.assembly.id} for ${plan.serviceDate}`;
+  const name = `plan for ${dayInWords(plan.serviceDate)}`;
   const layout = openSheet({
-    title: `${planTitle(plan)}, service ${plan.serviceDate}`,
-    subject: `Production plan: ${planTitle(plan)} for ${plan.serviceDate}`,
+    title: `${planTitle(plan)}, service ${dayInWords(plan.serviceDate)}`,
+    subject: `Production plan: ${planTitle(plan)} for ${dayInWords(plan.serviceDate)}`,
     units: plan.units,
     created: plan.today,
     lot: name,

@@ -1,27 +1,13 @@
-const DAY = new Intl.DateTimeFormat('en-GB', {
-  day: 'numeric',
-  month: 'short',
-  year: 'numeric',
-  timeZone: 'UTC',
-});
-const MOMENT = new Intl.DateTimeFormat('en-GB', {
-  day: 'numeric',
-  month: 'short',
-  year: 'numeric',
-  hour: '2-digit',
-  minute: '2-digit',
-});
+import { dayWords, momentWords } from '../../shared/presentation/date-words.ts';
 
 /** A calendar day YYYY-MM-DD in words, "2 Dec 2026", the same in every time zone. */
 export function dayInWords(day: string): string {
-  const [year, month, date] = day.split('-').map(Number);
-  return DAY.format(new Date(Date.UTC(year, month - 1, date)));
+  return dayWords(day);
 }
 
 /** An ISO timestamp in words in this machine's time zone (the kitchen's), "3 Dec 2026, 14:05". */
 export function momentInWords(moment: string): string {
-  const date = new Date(moment);
-  return Number.isNaN(date.getTime()) ? moment : MOMENT.format(date);
+  return momentWords(moment);
 }
 
 /** A formula kind as a sheet names it: "Cure". */

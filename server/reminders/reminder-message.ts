@@ -28,7 +28,7 @@ export interface ReminderFacts {
 }
 
 const KIND_WORDS: Readonly<Record<ReminderKind, string>> = {
-  flip: 'flip-day',
+  flip: 'turn-day',
   ready: 'ready-day',
   overdue: 'overdue',
 };
@@ -38,7 +38,7 @@ function subjectOf(facts: ReminderFacts, late: boolean): string {
   const what = `lot ${batch.lotCode} (${batch.title})`;
   switch (facts.kind) {
     case 'flip':
-      return late ? `Flip was due ${dayText(dueOn)}: ${what}` : `Flip today: ${what}`;
+      return late ? `Turn was due ${dayText(dueOn)}: ${what}` : `Turn today: ${what}`;
     case 'ready':
       return late ? `Ready since ${dayText(dueOn)}: ${what}` : `Ready today: ${what}`;
     case 'overdue':
@@ -57,7 +57,7 @@ function paragraphsOf(facts: ReminderFacts, late: boolean): string[] {
   switch (facts.kind) {
     case 'flip':
       return [
-        `${lot} is due to be turned (or overhauled) on ${dayText(dueOn)}: the formula says every ${batch.flipEveryDays ?? '?'} days.`,
+        `${lot} is due to be turned on ${dayText(dueOn)}: the formula says every ${batch.flipEveryDays ?? '?'} days.`,
         ...lateness,
         `It started on ${dayText(batch.start)} and is ready on ${dayText(batch.ready)}.`,
       ];
@@ -75,7 +75,7 @@ function paragraphsOf(facts: ReminderFacts, late: boolean): string[] {
   }
 }
 
-/** A flip, ready or overdue reminder's words, plain text and HTML. */
+/** A turn, ready or overdue reminder's words, plain text and HTML. */
 export function reminderMessage(facts: ReminderFacts): MessageContent {
   const late = facts.kind !== 'overdue' && facts.dueOn < facts.today;
   return composeMessage({

@@ -12,7 +12,7 @@ export interface HoldDates {
   readonly start: string;
   /** ISO date it is ready. */
   readonly ready: string;
-  /** Turn or overhaul every this many days, when the formula says so. */
+  /** Turn every this many days, when the formula says so. */
   readonly flipEveryDays?: number | null;
   /**
    * ISO date the batch was recorded on (the server's time zone). A batch made on paper and

@@ -28,3 +28,30 @@ export interface SessionInfo {
   readonly person: Person;
   readonly csrfToken: string;
 }
+
+/** GET /api/session when nobody is signed in: an answer, not an error. */
+export interface SignedOut {
+  readonly person: null;
+  readonly csrfToken: null;
+}
+
+/** GET /api/session: the signed-in person with their token, or signed out. */
+export type SessionState = SessionInfo | SignedOut;
+
+/** One of the demo's sign-ins, as the demo sets it up; only a demo server tells these. */
+export interface DemoSignIn {
+  readonly username: string;
+  readonly displayName: string;
+  readonly role: Role;
+  /** The password the demo gives this person; they may have changed it since. */
+  readonly password: string;
+}
+
+/** GET /api/session/demo: whether this server is the demo, and if so its sign-ins. */
+export interface DemoInfo {
+  readonly demo: boolean;
+  /** The invented kitchen's name; null unless `demo`. */
+  readonly kitchen: string | null;
+  /** Empty unless `demo`. */
+  readonly signIns: readonly DemoSignIn[];
+}

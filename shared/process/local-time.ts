@@ -24,27 +24,48 @@ export class DateTimeError extends Error {
   override readonly name = 'DateTimeError';
 }
 
-function offsetMs(utcMs: number, timeZone: string): number {
-  const parts = new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: 'numeric',
-    day: 'numeric',
-    hour: 'numeric',
-    minute: 'numeric',
-    second: 'numeric',
-  }).formatToParts(new Date(utcMs));
-  const field = (type: string): number =>
+// Building a formatter costs far more than using one: one per time zone, kept.
+const clocks = new Map<string, Intl.DateTimeFormat>();
+
+/**
+ * The wall clock of an instant in a time zone (undefined: the zone this program runs in), to
+ * the second.
+ */
+export function wallClockOf(
+  instant: Date | number,
+  timeZone: string | undefined,
+): Omit<WallClock, 'millisecond'> {
+  const key = timeZone ?? '';
+  let clock = clocks.get(key);
+  if (!clock) {
+    clock = new Intl.DateTimeFormat('en-US', {
+      timeZone,
+      hourCycle: 'h23',
+      year: 'numeric',
+      month: 'numeric',
+      day: 'numeric',
+      hour: 'numeric',
+      minute: 'numeric',
+      second: 'numeric',
+    });
+    clocks.set(key, clock);
+  }
+  const parts = clock.formatToParts(instant);
+  const field = (type: Intl.DateTimeFormatPartTypes): number =>
     Number(parts.find((part) => part.type === type)?.value ?? '0');
-  const wall = Date.UTC(
-    field('year'),
-    field('month') - 1,
-    field('day'),
-    field('hour'),
-    field('minute'),
-    field('second'),
-  );
+  return {
+    year: field('year'),
+    month: field('month'),
+    day: field('day'),
+    hour: field('hour') % 24,
+    minute: field('minute'),
+    second: field('second'),
+  };
+}
+
+function offsetMs(utcMs: number, timeZone: string): number {
+  const { year, month, day, hour, minute, second } = wallClockOf(utcMs, timeZone);
+  const wall = Date.UTC(year, month - 1, day, hour, minute, second);
   return wall - Math.floor(utcMs / 1000) * 1000;
 }
 

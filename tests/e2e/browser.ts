@@ -28,7 +28,10 @@ export interface ConsoleSession {
   screenshot(page: Page, name: string): Promise<void>;
 }
 
-/** Console errors a page logged, except the expected 401 of asking "who am I" before sign-in. */
+/**
+ * Console errors a page logged, except a 401 (a refused sign-in, a session that ended); asking
+ * who is signed in answers 200 even when nobody is (the sign-in tests check that strictly).
+ */
 export function collectConsoleErrors(page: Page): string[] {
   const errors: string[] = [];
   page.on('console', (message) => {
@@ -69,14 +72,15 @@ export async function launchChromium(t: AfterHook): Promise<Browser> {
  * Starts the real server (temporary database, demo data, the built console from dist/console)
  * and headless Chromium; both stop when the test ends. No request leaves 127.0.0.1.
  * @param options.now the server's clock, for tests that move time on (a cooling deadline)
+ * @param options.env further settings, e.g. LARDER_MODE=production for an install that is no demo
  */
 export async function startConsole(
   t: AfterHook,
-  options: { now?: () => Date } = {},
+  { env = {}, ...options }: { now?: () => Date; env?: Record<string, string> } = {},
 ): Promise<ConsoleSession> {
   const server = await startTestServer(
     t,
-    { LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser') },
+    { LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser'), ...env },
     options,
   );
   const browser = await launchChromium(t);

@@ -63,7 +63,7 @@ describe('mail in the console', () => {
     await admin.waitForURL(/\/people\/outbox$/);
     assert.match(
       await admin.getByTestId('outbox-transport').innerText(),
-      /LARDER_SMTP_URL is not set, so messages stay here and are not sent/,
+      /No mail server is set up for Larderbook, so messages stay here and are not sent/,
     );
     const row = await sentInvitation(admin);
     const rowText = await row.innerText();
@@ -122,12 +122,12 @@ describe('mail in the console', () => {
     assert.match(await refused.innerText(), /re-send the invitation/);
     await session.screenshot(wren, 'set-password-used');
 
-    // Wren turns flip-day reminders off; the choice is kept and audited.
+    // Wren turns turn-day reminders off; the choice is kept and audited.
     await wren.goto(`${server.url}/batches`, { waitUntil: 'networkidle' });
     await wren.getByRole('button', { name: 'Your account' }).click();
     await wren.getByRole('menuitem', { name: 'My reminders' }).click();
     await wren.getByTestId('my-reminders-address').getByText(WREN.email).waitFor();
-    const flip = wren.getByRole('checkbox', { name: 'Flip days' });
+    const flip = wren.getByRole('checkbox', { name: 'Turn days' });
     assert.equal(await flip.isChecked(), true, 'cooks get flip reminders by default');
     assert.equal(await wren.getByRole('checkbox', { name: 'Ready days' }).isChecked(), true);
     assert.equal(await wren.getByRole('checkbox', { name: 'Overdue batches' }).isChecked(), true);
@@ -159,7 +159,7 @@ describe('mail in the console', () => {
     await wren.getByRole('button', { name: 'Your account' }).click();
     await wren.getByRole('menuitem', { name: 'My reminders' }).click();
     await wren.getByTestId('my-reminders-basis').getByText('These are your own choices.').waitFor();
-    assert.equal(await wren.getByRole('checkbox', { name: 'Flip days' }).isChecked(), false);
+    assert.equal(await wren.getByRole('checkbox', { name: 'Turn days' }).isChecked(), false);
     assert.equal(await wren.getByRole('checkbox', { name: 'Process alerts' }).isChecked(), false);
     await wren.getByRole('button', { name: 'Cancel' }).click();
 

@@ -11,7 +11,7 @@ function addDays(day: string, days: number): string {
   return new Date(Date.UTC(y, m - 1, d + days)).toISOString().slice(0, 10);
 }
 
-/** A day as the date box shows it and reads it back ("Dec 23, 2026"), whatever the time zone. */
+/** A day as the date box shows it and reads it back ("23 Dec 2026"), whatever the time zone. */
 function inWords(day: string): string {
   const [y, m, d] = day.split('-').map(Number);
   const month = [
@@ -28,7 +28,7 @@ function inWords(day: string): string {
     'Nov',
     'Dec',
   ];
-  return `${month[m - 1]} ${d}, ${y}`;
+  return `${d} ${month[m - 1]} ${y}`;
 }
 
 /** The text of one batch's section of the plan. */

@@ -127,7 +127,7 @@ export const ROUTES: readonly RouteCase[] = [
     },
     { anonymous: 201, sessionRoute: true },
   ),
-  // Who is signed in: read from the session cookie; anonymous is answered "not signed in".
+  // Who is signed in: read from the session cookie; anonymous is answered 200, signed out.
   route(
     'GET',
     '/api/session',
@@ -136,8 +136,13 @@ export const ROUTES: readonly RouteCase[] = [
       role === 'anonymous'
         ? { path: '/api/session' }
         : { path: '/api/session', as: await cookieSession(fx.server, USER_OF[role]) },
-    { anonymous: 401, sessionRoute: true },
+    { anonymous: 200, sessionRoute: true },
   ),
+  // The demo's sign-ins for its sign-in page: anyone may ask, as the page is before sign-in.
+  route('GET', '/api/session/demo', ALL, '/api/session/demo', {
+    anonymous: 200,
+    sessionRoute: true,
+  }),
   route('DELETE', '/api/session', ALL, '/api/session', { anonymous: 204, sessionRoute: true }),
   route('POST', '/api/calc', ALL, {
     path: '/api/calc',

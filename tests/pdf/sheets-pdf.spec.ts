@@ -288,4 +288,15 @@ describe('sheets as PDF from the API', () => {
     assert.match(sheet.pages[0], /Goes on: Brisket flat, equilibrium brine, 16 Dec 2026/);
     assert.match(sheet.all, /DAY 2 OF 4 Start 16 Dec 2026/);
   });
+
+  it('should name the formulas of a plan by title, with no column left empty and no raw dates', async (t) => {
+    const sheet = await planPdf(t, 'corned-beef-sandwich', 60);
+    // No raw material of the sandwich is trimmed (formulas/*.yaml): no "Before trim" column.
+    assert.doesNotMatch(sheet.pages[0], /Before trim/);
+    assert.match(sheet.pages[0], /PULL LIST Raw material Amount Used by/);
+    assert.match(sheet.pages[0], /bread flour \S+ g Milk and honey bun, with sponge/);
+    assert.doesNotMatch(sheet.all, /Used by[^]*\b(brisket-rub|house-sauce|pit-bun)\b(?!\))/);
+    assert.doesNotMatch(sheet.all, /\b20\d\d-\d\d-\d\d\b/);
+    assert.doesNotMatch(sheet.all, / --[a-z]/);
+  });
 });

@@ -3,6 +3,7 @@ import { estimateHold, type HoldMeasures } from '../cure/hold-time.ts';
 import { addDays } from '../dates.ts';
 import { daysInWords, leadDaysOf } from './lead-days.ts';
 import { PlanError } from './plan-error.ts';
+import { dayWords } from '../../presentation/date-words.ts';
 
 /** When a batch starts and is ready, counted back from service, with the rule in words. */
 export interface PlannedDates {
@@ -57,9 +58,9 @@ export function plannedDates(
       ? `made on the day ${appliedTo ? 'it goes on' : 'of service'} (lead 0 days: ${lead.source})`
       : `${daysInWords(lead.days)} before ${use} (lead days: ${lead.source})`;
   const applied = appliedTo
-    ? `; it goes on ${appliedTo.title} when it comes out of its hold, ${appliedTo.date}, for service ${serviceDate}`
-    : `, service ${serviceDate}`;
-  const dates = `start ${start}${holdDays > 0 ? `, ready ${ready}` : ''}${applied}`;
+    ? `; it goes on ${appliedTo.title} when it comes out of its hold, ${dayWords(appliedTo.date)}, for service ${dayWords(serviceDate)}`
+    : `, service ${dayWords(serviceDate)}`;
+  const dates = `start ${dayWords(start)}${holdDays > 0 ? `, ready ${dayWords(ready)}` : ''}${applied}`;
   return {
     start,
     ready,

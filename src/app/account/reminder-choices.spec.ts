@@ -23,7 +23,7 @@ describe('reminder choices', () => {
 
   describe('choicesText', () => {
     it('should list every reminder that is on, joined as a sentence', () => {
-      assert.equal(choicesText(ALL), 'You get flip-day, ready-day and overdue reminders.');
+      assert.equal(choicesText(ALL), 'You get turn-day, ready-day and overdue reminders.');
       assert.equal(
         choicesText({ flip: false, ready: true, overdue: true }),
         'You get ready-day and overdue reminders.',

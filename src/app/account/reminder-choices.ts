@@ -33,8 +33,8 @@ export interface ReminderOption {
 export const REMINDER_OPTIONS: readonly ReminderOption[] = [
   {
     kind: 'flip',
-    label: 'Flip days',
-    description: 'A batch in cure is due to be turned (or overhauled) today.',
+    label: 'Turn days',
+    description: 'A batch in cure is due to be turned today.',
   },
   {
     kind: 'ready',
@@ -58,12 +58,12 @@ export function sameChoices(a: ReminderChoices, b: ReminderChoices): boolean {
 }
 
 /**
- * The choices in one sentence: "You get flip-day and ready-day reminders.", "You get no reminders."
+ * The choices in one sentence: "You get turn-day and ready-day reminders.", "You get no reminders."
  * @param choices Which reminders are on.
  */
 export function choicesText(choices: ReminderChoices): string {
   const words: Readonly<Record<ReminderKind, string>> = {
-    flip: 'flip-day',
+    flip: 'turn-day',
     ready: 'ready-day',
     overdue: 'overdue',
   };

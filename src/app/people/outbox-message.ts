@@ -77,14 +77,15 @@ export function recipientText(message: Pick<OutboxSummary, 'to' | 'toName'>): st
 }
 
 /**
- * One line on where messages go: without LARDER_SMTP_URL they stay in the outbox.
+ * One line on where messages go: without a mail server they stay in the outbox. In an admin's
+ * words: the setting's name is for whoever installs the server (server/README.md).
  * @param transport The server's transport, or null before the first page has come back.
  */
 export function transportText(transport: TransportName | null): string {
   if (transport === 'smtp')
-    return 'Messages go out through the mail server set in LARDER_SMTP_URL; once an invitation is sent, its link is removed from the copy kept here.';
+    return 'Messages go out through the kitchen’s mail server; once an invitation is sent, its link is removed from the copy kept here.';
   if (transport === 'local')
-    return 'LARDER_SMTP_URL is not set, so messages stay here and are not sent. Invitation links are shown once, to the admin who sends the invitation, and are not kept here: that admin passes them on.';
+    return 'No mail server is set up for Larderbook, so messages stay here and are not sent. Invitation links are shown once, to the admin who sends the invitation, and are not kept here: that admin passes them on.';
   return '';
 }
 

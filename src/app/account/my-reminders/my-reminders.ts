@@ -33,7 +33,7 @@ import {
 
 /**
  * Lets whoever is signed in, whatever their role, choose which reminders they get by e-mail
- * (flip days, ready days, overdue batches), and shows the address they go to. Closes with `true`
+ * (turn days, ready days, overdue batches), and shows the address they go to. Closes with `true`
  * once the choices are saved.
  */
 @Component({

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -19,6 +18,7 @@ import { InvitationStore } from '../invitation-store';
 import { newPasswordControls } from '../new-password-fields/new-password-controls';
 import { NewPasswordFields } from '../new-password-fields/new-password-fields';
 import { newPasswordChecks } from '../new-password-fields/password-checks';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /**
  * The page an invitation's link opens, outside the sign-in: it says for whom the link is, takes
@@ -28,7 +28,7 @@ import { newPasswordChecks } from '../new-password-fields/password-checks';
 @Component({
   selector: 'app-set-password',
   imports: [
-    DatePipe,
+    IsoDayPipe,
     ReactiveFormsModule,
     RouterLink,
     MatCheckbox,

@@ -9,7 +9,7 @@ import {
 } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { provideNativeDateAdapter } from '@angular/material/core';
+
 import {
   MatDatepickerToggle,
   MatDateRangeInput,
@@ -22,7 +22,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { BATCH_STATUSES, statusInWords } from '../../../../shared/workflow/batch-status.ts';
-import { DAY_INPUT_FORMATS } from '../../ui/batch-sheet/day-input-formats';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import type { BatchStatus, FormulaKind, PersonRef } from '../batch-types';
 import type { FormulaOption } from '../formula-options';
@@ -60,7 +60,7 @@ const LOT_DELAY_MS = 350;
     MatDateRangePicker,
     MatDatepickerToggle,
   ],
-  providers: [provideNativeDateAdapter(DAY_INPUT_FORMATS)],
+  providers: [provideDayInputs()],
   templateUrl: './batch-filters.html',
   styleUrl: './batch-filters.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -18,7 +18,7 @@ import {
   type AbstractControl,
 } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
-import { ErrorStateMatcher, MatOption, provideNativeDateAdapter } from '@angular/material/core';
+import { ErrorStateMatcher, MatOption } from '@angular/material/core';
 import {
   MatDatepicker,
   MatDatepickerInput,
@@ -33,7 +33,7 @@ import { Router, RouterLink } from '@angular/router';
 import type { HoldSize } from '../../../../shared/calculation/cure/hold-size.ts';
 import { messageOf } from '../../core/api/message-of';
 import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
-import { DAY_INPUT_FORMATS } from '../../ui/batch-sheet/day-input-formats';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { BatchLog } from '../batch-log/batch-log';
 import type { FormulaFacts } from '../batch-types';
@@ -93,7 +93,7 @@ const SHOW_WHEN_TYPED: ErrorStateMatcher = {
   ],
   providers: [
     BatchRecorder,
-    provideNativeDateAdapter(DAY_INPUT_FORMATS),
+    provideDayInputs(),
     { provide: ErrorStateMatcher, useValue: SHOW_WHEN_TYPED },
   ],
   templateUrl: './record-batch-page.html',

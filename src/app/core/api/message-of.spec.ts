@@ -33,4 +33,17 @@ describe('messageOf', () => {
     assert.equal(messageOf(blank, 'Not saved.'), 'Not saved.');
     assert.equal(messageOf(blank, 'Not saved.', 'sentence'), 'Not saved.');
   });
+
+  it('should name a batch input by its field, never by the command-line option', () => {
+    // The core's words: shared/calculation/cure/calculate-cure.ts (meat and want together).
+    const both = new ApiError(400, 'bad-batch', 'give either --meat or --want, not both');
+    assert.equal(
+      messageOf(both),
+      'give either the green meat weight or the finished weight wanted, not both',
+    );
+    assert.equal(
+      messageOf(both, 'Not worked out.', 'sentence'),
+      'Give either the green meat weight or the finished weight wanted, not both.',
+    );
+  });
 });

@@ -1,8 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import { ApiError } from '../api/api-error';
-import { Person, Role, SessionInfo } from '../api/api-types';
+import { DemoInfo, Person, Role, SessionInfo, SessionState } from '../api/api-types';
 
 /** Who is signed in, and the CSRF token their changes must carry. */
 @Injectable({ providedIn: 'root' })
@@ -25,13 +24,15 @@ export class SessionStore {
   /** Asks the server once who is signed in (a cookie from an earlier visit may still be valid). */
   async ensureLoaded(): Promise<Person | null> {
     if (this.session() !== undefined) return this.person();
-    try {
-      this.session.set(await firstValueFrom(this.http.get<SessionInfo>('/api/session')));
-    } catch (error) {
-      if (!(error instanceof ApiError) || error.status !== 401) throw error;
-      this.session.set(null);
-    }
+    // Signed out is answered 200 with no person, so a first visit logs no error.
+    const state = await firstValueFrom(this.http.get<SessionState>('/api/session'));
+    this.session.set(state.person ? state : null);
     return this.person();
+  }
+
+  /** Whether this server is the demo, and its sign-ins if so (for the sign-in page). */
+  demo(): Promise<DemoInfo> {
+    return firstValueFrom(this.http.get<DemoInfo>('/api/session/demo'));
   }
 
   /** Signs in with the form; rejects with an ApiError (wrong password, throttled). */

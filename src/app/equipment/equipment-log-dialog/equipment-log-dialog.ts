@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, OnInit, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -15,7 +14,7 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { temperatureWords } from '../../../../shared/process/control-words.ts';
 import { messageOf } from '../../core/api/message-of';
-import { isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
+import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { recordEquipmentAction } from '../equipment-action';
 import { EquipmentStore } from '../equipment-store';
 import type { Equipment, EquipmentLog } from '../equipment-types';
@@ -26,7 +25,7 @@ const WEEK_MS = 7 * 86_400_000;
 @Component({
   selector: 'app-equipment-log-dialog',
   imports: [
-    DatePipe,
+    IsoDayPipe,
     ReactiveFormsModule,
     MatDialogTitle,
     MatDialogContent,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -9,6 +8,7 @@ import { SessionStore } from '../../core/auth/session-store';
 import { EquipmentStore } from '../equipment-store';
 import type { Equipment } from '../equipment-types';
 import { KIND_WORDS, standingOf } from '../equipment-words';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /** The width every dialog of this page opens at, narrowed to the screen on a phone. */
 const DIALOG = { width: '560px', maxWidth: '96vw', autoFocus: 'first-tabbable' } as const;
@@ -20,7 +20,7 @@ const DIALOG = { width: '560px', maxWidth: '96vw', autoFocus: 'first-tabbable' }
  */
 @Component({
   selector: 'app-equipment-page',
-  imports: [DatePipe, MatButton, MatIcon, MatProgressBar],
+  imports: [IsoDayPipe, MatButton, MatIcon, MatProgressBar],
   templateUrl: './equipment-page.html',
   styleUrl: './equipment-page.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

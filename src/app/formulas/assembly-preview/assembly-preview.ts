@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
-import { provideNativeDateAdapter } from '@angular/material/core';
+
 import {
   MatDatepicker,
   MatDatepickerInput,
@@ -23,7 +23,7 @@ import {
   startWith,
   switchMap,
 } from 'rxjs';
-import { DAY_INPUT_FORMATS } from '../../ui/batch-sheet/day-input-formats';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { PlanApi } from '../../plans/plan-api';
 import { MAX_COUNT, addDays, paramsOfPlan } from '../../plans/plan-query';
@@ -66,7 +66,7 @@ const START: PreviewState = { loading: false, plan: null, refusal: null };
     MatProgressBar,
     PlanSchedule,
   ],
-  providers: [provideNativeDateAdapter(DAY_INPUT_FORMATS)],
+  providers: [provideDayInputs()],
   templateUrl: './assembly-preview.html',
   styleUrl: './assembly-preview.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

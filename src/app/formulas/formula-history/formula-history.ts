@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -29,7 +28,7 @@ const MOMENT = new IsoDayPipe();
 
 @Component({
   selector: 'app-formula-history',
-  imports: [DatePipe, MatCheckbox, MatButton, MatProgressBar, RevisionDiff],
+  imports: [IsoDayPipe, MatCheckbox, MatButton, MatProgressBar, RevisionDiff],
   templateUrl: './formula-history.html',
   styleUrl: './formula-history.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -35,6 +34,7 @@ import { KIND_LABELS } from '../formula-vocabulary';
 import { NewFormulaDialog } from '../new-formula-dialog/new-formula-dialog';
 import { revisionInWords } from '../revision-words';
 import { matchesSearch, sortedByTitle } from './formula-search';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /**
  * Every formula file by title: kind, whether it is valid and how it last changed in words,
@@ -43,7 +43,7 @@ import { matchesSearch, sortedByTitle } from './formula-search';
 @Component({
   selector: 'app-formula-list',
   imports: [
-    DatePipe,
+    IsoDayPipe,
     RouterLink,
     MatButton,
     MatIcon,

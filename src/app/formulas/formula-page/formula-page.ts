@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -35,6 +34,7 @@ import { KIND_LABELS } from '../formula-vocabulary';
 import { LeavesSafely } from '../unsaved-changes-guard';
 import { watchControl } from '../watch-control';
 import { YamlEditor } from '../yaml-editor/yaml-editor';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 const YAML_TAB = 1;
 
@@ -48,7 +48,7 @@ const YAML_TAB = 1;
 @Component({
   selector: 'app-formula-page',
   imports: [
-    DatePipe,
+    IsoDayPipe,
     RouterLink,
     MatButton,
     MatIcon,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@angular/core';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
@@ -19,6 +18,7 @@ import {
 import { AUDIT_ACTIONS, AuditAction, AuditEvent, actionText, detailText } from '../audit-event';
 import { AuditStore } from '../audit-store';
 import { OlderPagesFooter } from '../older-pages-footer/older-pages-footer';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /** A row of the log with its words worked out once. */
 interface AuditRow {
@@ -31,7 +31,7 @@ interface AuditRow {
 @Component({
   selector: 'app-audit-log',
   imports: [
-    DatePipe,
+    IsoDayPipe,
     MatTable,
     MatColumnDef,
     MatHeaderCellDef,

@@ -1,6 +1,6 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input, viewChild } from '@angular/core';
 import { ShownOnce } from '../shown-once/shown-once';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /**
  * An invitation's set-password link, shown this once to the admin who sent it because no mail
@@ -8,7 +8,7 @@ import { ShownOnce } from '../shown-once/shown-once';
  */
 @Component({
   selector: 'app-invitation-link',
-  imports: [DatePipe, ShownOnce],
+  imports: [IsoDayPipe, ShownOnce],
   template: `
     <app-shown-once
       [value]="link()"
@@ -20,8 +20,8 @@ import { ShownOnce } from '../shown-once/shown-once';
       <strong>Copy this link now: it is shown only once.</strong> No mail server is set up, so the
       invitation did not leave this machine. Give the link to {{ owner() }} yourself, in person or
       in a private message: it lets them choose their own password, once, until
-      {{ expiresAt() | date: 'd MMM y, HH:mm' }}. The outbox keeps the message without the link; if
-      it gets lost, send a new invitation.
+      {{ expiresAt() | isoDay: 'moment' }}. The outbox keeps the message without the link; if it
+      gets lost, send a new invitation.
     </app-shown-once>
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,5 +1,4 @@
 import { CdkCopyToClipboard } from '@angular/cdk/clipboard';
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -28,6 +27,7 @@ import {
   recipientText,
 } from '../outbox-message';
 import { OutboxStore } from '../outbox-store';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /**
  * One message of the outbox: who it went to, where it is, and its plain-text body. The HTML body
@@ -37,7 +37,7 @@ import { OutboxStore } from '../outbox-store';
   selector: 'app-outbox-message-dialog',
   imports: [
     CdkCopyToClipboard,
-    DatePipe,
+    IsoDayPipe,
     MatDialogTitle,
     MatDialogContent,
     MatDialogActions,

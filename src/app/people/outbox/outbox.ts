@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -26,6 +25,7 @@ import {
   transportText,
 } from '../outbox-message';
 import { OutboxStore } from '../outbox-store';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /** A row of the outbox with its words worked out once. */
 interface OutboxRow {
@@ -38,7 +38,7 @@ interface OutboxRow {
 @Component({
   selector: 'app-outbox',
   imports: [
-    DatePipe,
+    IsoDayPipe,
     MatTable,
     MatColumnDef,
     MatHeaderCellDef,

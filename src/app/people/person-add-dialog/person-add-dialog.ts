@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -38,6 +37,7 @@ import {
   USERNAME_PATTERN,
 } from '../person-rules';
 import { ROLE_OPTIONS } from '../role-options';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /**
  * Adds a person. Closes with the new person (and the invitation sent to their address); when the
@@ -47,7 +47,7 @@ import { ROLE_OPTIONS } from '../role-options';
 @Component({
   selector: 'app-person-add-dialog',
   imports: [
-    DatePipe,
+    IsoDayPipe,
     ReactiveFormsModule,
     MatDialogTitle,
     MatDialogContent,

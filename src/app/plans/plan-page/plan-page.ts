@@ -9,7 +9,7 @@ import {
 import { toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatOption, provideNativeDateAdapter } from '@angular/material/core';
+import { MatOption } from '@angular/material/core';
 import {
   MatDatepicker,
   MatDatepickerInput,
@@ -23,7 +23,7 @@ import { MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { map } from 'rxjs';
 import { SessionStore } from '../../core/auth/session-store';
-import { DAY_INPUT_FORMATS } from '../../ui/batch-sheet/day-input-formats';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { IsoDayPipe, isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import {
   MAX_COUNT,
@@ -75,7 +75,7 @@ const todayIso = (): string => isoDateOf(new Date()) as string;
     PlanList,
     PlannedBatches,
   ],
-  providers: [PlanStore, provideNativeDateAdapter(DAY_INPUT_FORMATS)],
+  providers: [PlanStore, provideDayInputs()],
   templateUrl: './plan-page.html',
   styleUrl: './plan-page.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

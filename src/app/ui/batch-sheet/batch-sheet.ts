@@ -3,6 +3,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { IsoDayPipe } from './iso-day-pipe';
 import type { FormulaKind } from '../../../../shared/formula/formula-types.ts';
 import type { PresentedResult } from '../../../../shared/presentation/presented-result.ts';
+import { OptionWordsPipe } from '../option-words-pipe';
 
 const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
   cure: 'Cure',
@@ -20,7 +21,7 @@ const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
  */
 @Component({
   selector: 'app-batch-sheet',
-  imports: [NgTemplateOutlet, IsoDayPipe],
+  imports: [NgTemplateOutlet, IsoDayPipe, OptionWordsPipe],
   templateUrl: './batch-sheet.html',
   styleUrl: './batch-sheet.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,8 +1,18 @@
-import { MAT_NATIVE_DATE_FORMATS, type MatDateFormats } from '@angular/material/core';
+import { Injectable, type Provider } from '@angular/core';
+import {
+  DateAdapter,
+  MAT_DATE_FORMATS,
+  MAT_NATIVE_DATE_FORMATS,
+  NativeDateAdapter,
+  type MatDateFormats,
+} from '@angular/material/core';
+import { dayWords } from '../../../../shared/presentation/date-words.ts';
+import { isoDateOf } from './iso-day-pipe';
 
 /**
- * Date boxes show the day with the month in words ("Dec 2, 2026"), so a day and a month are never
- * read the wrong way round; typing a date the same way, or as YYYY-MM-DD, is read back.
+ * Date boxes show the day as every other date on the console, with the month in words
+ * ("3 Dec 2026"), so a day and a month are never read the wrong way round; typing a date the
+ * same way, or as YYYY-MM-DD, is read back.
  */
 export const DAY_INPUT_FORMATS: MatDateFormats = {
   ...MAT_NATIVE_DATE_FORMATS,
@@ -11,3 +21,28 @@ export const DAY_INPUT_FORMATS: MatDateFormats = {
     dateInput: { year: 'numeric', month: 'short', day: 'numeric' },
   },
 };
+
+/** The native adapter, writing the date box in the console's one form and reading YYYY-MM-DD as a local day. */
+@Injectable()
+export class DayInputAdapter extends NativeDateAdapter {
+  override format(date: Date, displayFormat: object): string {
+    const day = isoDateOf(date);
+    return displayFormat === DAY_INPUT_FORMATS.display.dateInput && day
+      ? dayWords(day)
+      : super.format(date, displayFormat);
+  }
+
+  override parse(value: unknown, parseFormat?: unknown): Date | null {
+    const match = typeof value === 'string' ? /^\s*(\d{4})-(\d{2})-(\d{2})\s*$/.exec(value) : null;
+    if (match) return new Date(Number(match[1]), Number(match[2]) - 1, Number(match[3]));
+    return super.parse(value, parseFormat);
+  }
+}
+
+/** The date boxes' adapter and formats, for a component's providers. */
+export function provideDayInputs(): Provider[] {
+  return [
+    { provide: DateAdapter, useClass: DayInputAdapter },
+    { provide: MAT_DATE_FORMATS, useValue: DAY_INPUT_FORMATS },
+  ];
+}

@@ -1,32 +1,36 @@
 import { Pipe, PipeTransform } from '@angular/core';
+import {
+  dayWords,
+  momentWords,
+  shortMomentWords,
+} from '../../../../shared/presentation/date-words.ts';
 
-const DAY = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
-const MOMENT = new Intl.DateTimeFormat('en-GB', {
-  day: 'numeric',
-  month: 'short',
-  year: 'numeric',
-  hour: '2-digit',
-  minute: '2-digit',
-});
+/** How much of a date to write: the day, the day and time, or the short form of a board. */
+export type DateForm = 'day' | 'moment' | 'short';
+
+const FORMS: Readonly<Record<DateForm, (value: string) => string>> = {
+  day: (value) => dayWords(value),
+  moment: (value) => momentWords(value),
+  short: (value) => shortMomentWords(value),
+};
 
 /**
- * A calendar day (YYYY-MM-DD) or an ISO timestamp in words: "1 Dec 2026", "1 Dec 2026, 07:46".
- * Calendar days are read as local days, so they never shift a day with the time zone.
+ * A calendar day (YYYY-MM-DD) or an ISO timestamp in the console's one form
+ * (shared/presentation/date-words.ts): "3 Dec 2026", "3 Dec 2026, 14:32" (`'moment'`, or
+ * `true`), "Thu 3 Dec, 14:32" (`'short'`). Calendar days never shift with the time zone.
  */
 @Pipe({ name: 'isoDay' })
 export class IsoDayPipe implements PipeTransform {
   /**
    * @param value YYYY-MM-DD, an ISO timestamp, or nothing
-   * @param withTime whether to add the time of a timestamp
-   * @returns the day in words, or "—" for nothing
+   * @param form which form; `true` is `'moment'`, for the pipe's earlier callers
+   * @returns the date in words, or "—" for nothing
    */
-  transform(value: string | null | undefined, withTime = false): string {
+  transform(value: string | null | undefined, form: DateForm | boolean = 'day'): string {
     if (!value) return '—';
-    const day = /^(\d{4})-(\d{2})-(\d{2})$/.exec(value);
-    if (day) return DAY.format(localDateOf(value));
-    const moment = new Date(value);
-    if (Number.isNaN(moment.getTime())) return value;
-    return (withTime ? MOMENT : DAY).format(moment);
+    const chosen: DateForm = form === true ? 'moment' : form === false ? 'day' : form;
+    // A calendar day has no time to show.
+    return /^\d{4}-\d{2}-\d{2}$/.test(value) ? dayWords(value) : FORMS[chosen](value);
   }
 }
 

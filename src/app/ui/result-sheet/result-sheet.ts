@@ -7,6 +7,7 @@ import type {
   PresentedFigure,
   PresentedResult,
 } from '../../../../shared/presentation/presented-result.ts';
+import { OptionWordsPipe } from '../option-words-pipe';
 
 let nextId = 0;
 
@@ -24,7 +25,7 @@ const VERDICT_ICONS: Record<PresentedCheck['verdict'], string> = {
  */
 @Component({
   selector: 'app-result-sheet',
-  imports: [NgTemplateOutlet, MatIcon],
+  imports: [NgTemplateOutlet, MatIcon, OptionWordsPipe],
   templateUrl: './result-sheet.html',
   styleUrl: './result-sheet.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

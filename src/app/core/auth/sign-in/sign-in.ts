@@ -5,10 +5,17 @@ import { MatFormField, MatLabel, MatError } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router } from '@angular/router';
+import { DemoInfo, DemoSignIn, Role } from '../../api/api-types';
 import { messageOf } from '../../api/message-of';
 import { SessionStore } from '../session-store';
 
-/** The sign-in page. */
+const ROLE_WORDS: Readonly<Record<Role, string>> = {
+  admin: 'admin: everything, people too',
+  cook: 'cook: records batches',
+  reviewer: 'reviewer: checks and signs off',
+};
+
+/** The sign-in page; on the demo it says so and offers the demo's sign-ins. */
 @Component({
   selector: 'app-sign-in',
   imports: [
@@ -40,11 +47,29 @@ export default class SignIn implements OnInit {
     password: ['', Validators.required],
   });
   protected readonly busy = signal(false);
+  /** The demo's kitchen and sign-ins; null until known, and on any install but the demo. */
+  protected readonly demo = signal<DemoInfo | null>(null);
   protected readonly failure = signal<string | null>(null);
 
   ngOnInit(): void {
     const username = this.username();
     if (username) this.form.controls.username.setValue(username);
+    // Only a demo server answers with sign-ins; without the answer the page is the plain one.
+    this.session.demo().then(
+      (info) => this.demo.set(info.demo ? info : null),
+      () => this.demo.set(null),
+    );
+  }
+
+  /** Fills the form with one of the demo's sign-ins. */
+  protected useDemo(person: DemoSignIn): void {
+    this.form.setValue({ username: person.username, password: person.password });
+    this.failure.set(null);
+  }
+
+  /** A role as the page says it. */
+  protected roleWords(role: Role): string {
+    return ROLE_WORDS[role];
   }
 
   protected async signIn(): Promise<void> {
