@@ -69,15 +69,16 @@ export async function launchChromium(t: AfterHook): Promise<Browser> {
  * Starts the real server (temporary database, demo data, the built console from dist/console)
  * and headless Chromium; both stop when the test ends. No request leaves 127.0.0.1.
  * @param options.now the server's clock, for tests that move time on (a cooling deadline)
+ * @param options.env settings of the server beside the test server's own
  */
 export async function startConsole(
   t: AfterHook,
-  options: { now?: () => Date } = {},
+  options: { now?: () => Date; env?: Record<string, string> } = {},
 ): Promise<ConsoleSession> {
   const server = await startTestServer(
     t,
-    { LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser') },
-    options,
+    { ...options.env, LARDER_CONSOLE: path.join(REPO_ROOT, 'dist/console/browser') },
+    options.now ? { now: options.now } : {},
   );
   const browser = await launchChromium(t);
   mkdirSync(ARTIFACTS, { recursive: true });
