@@ -1,6 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
+import { assertAccessible } from './accessibility.ts';
 import { collectConsoleErrors, startConsole, type ConsoleSession } from './browser.ts';
 import { SIZES } from './screen-walk.ts';
 
@@ -32,6 +33,10 @@ describe('people, the audit log and the outbox in the console', () => {
     await row.getByRole('button', { name: `Reset the password of ${TOBIN}` }).hover();
     await page.getByRole('tooltip').or(page.locator('.mat-mdc-tooltip')).first().waitFor();
     await atEveryWidth(session, page, 'list');
+    await page.getByTestId('add-person').click();
+    await page.getByTestId('person-username').waitFor();
+    await page.waitForTimeout(300);
+    await assertAccessible(page, 'the add-person dialog');
     assert.deepEqual(errors, []);
   });
 
@@ -157,6 +162,8 @@ describe('people, the audit log and the outbox in the console', () => {
     await status.waitFor();
     assert.match(await status.innerText(), /^Kept here/);
     assert.doesNotMatch(await status.innerText(), /\bSent\b|\bon \d/);
+    await page.getByTestId('outbox-message-text').waitFor();
+    await assertAccessible(page, 'a message of the outbox');
     assert.deepEqual(errors, []);
   });
 
