@@ -25,7 +25,7 @@ export function useBasicStrategy(signIns: SignIns, audit: AuditRepository): void
         done: (error: unknown, person?: Person | false) => void,
       ) => {
         signIns
-          .check(req.ip ?? '', username, password, { remember: true })
+          .check(req.ip ?? '', username, password, { remember: true, via: 'basic' })
           .then(async (person) => {
             if (!person)
               await audit.append({

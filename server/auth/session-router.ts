@@ -50,7 +50,7 @@ export function sessionRouter(
 
   router.post('/', validateBody(SIGN_IN_BODY), async (req, res) => {
     const { username, password } = req.body as { username: string; password: string };
-    const person = await signIns.check(req.ip ?? '', username, password);
+    const person = await signIns.check(req.ip ?? '', username, password, { via: 'form' });
     if (!person) {
       await audit.append({
         actorName: username,

@@ -18,6 +18,22 @@ interface Counts {
   /** Attempts whose password is being checked now. */
   checking: number;
   resetAt: number;
+  /** Whether a refusal in this window has been reported (the audit log notes the first only). */
+  refused: boolean;
+}
+
+/**
+ * The refusal of an address past its limit of failed attempts; `first` on the first refusal of
+ * the window, which the audit log notes (each later one would only fill the log for the guesser).
+ */
+export class TooManySignIns extends RetryLaterError {
+  constructor(
+    message: string,
+    retryAfterSeconds: number,
+    readonly first: boolean,
+  ) {
+    super(429, 'too-many-attempts', message, retryAfterSeconds);
+  }
 }
 
 /**
@@ -52,11 +68,12 @@ export class SignInAttempts {
       );
     const seconds = Math.ceil((counts.resetAt - this.now()) / 1000);
     const minutes = Math.ceil(seconds / 60);
-    throw new RetryLaterError(
-      429,
-      'too-many-attempts',
+    const first = !counts.refused;
+    counts.refused = true;
+    throw new TooManySignIns(
       `too many failed sign-in attempts; wait ${minutes === 1 ? 'a minute' : `${minutes} minutes`} and try again`,
       seconds,
+      first,
     );
   }
 
@@ -95,6 +112,7 @@ export class SignInAttempts {
       return undefined;
     }
     counts.failed = 0;
+    counts.refused = false;
     counts.resetAt = this.now() + WINDOW_MS;
     return counts;
   }
@@ -104,7 +122,7 @@ export class SignInAttempts {
     // Forget ended windows, so the map holds only addresses trying now.
     for (const [key, counts] of this.byAddress)
       if (counts.resetAt <= now && counts.checking === 0) this.byAddress.delete(key);
-    const counts = { failed: 0, checking: 0, resetAt: now + WINDOW_MS };
+    const counts = { failed: 0, checking: 0, resetAt: now + WINDOW_MS, refused: false };
     this.byAddress.set(address, counts);
     return counts;
   }

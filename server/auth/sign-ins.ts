@@ -1,7 +1,8 @@
+import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person } from '../../shared/api/person.ts';
 import { verifyPassword } from './passwords.ts';
-import { SignInAttempts } from './sign-in-attempts.ts';
+import { SignInAttempts, TooManySignIns } from './sign-in-attempts.ts';
 import { VerifiedCredentials } from './verified-credentials.ts';
 
 /**
@@ -18,6 +19,7 @@ export class SignIns {
   constructor(
     private readonly people: PeopleRepository,
     limit: number,
+    private readonly audit: AuditRepository,
   ) {
     this.attempts = new SignInAttempts(limit);
   }
@@ -26,7 +28,8 @@ export class SignIns {
    * The person a username and password sign in: undefined when either is wrong or the person is
    * not active (without saying which). With `remember` (HTTP Basic), a password proved right in
    * the last minute is not hashed again, and identical attempts arriving together share a hash
-   * and count as one.
+   * and count as one. The first refusal of an address in its window goes in the audit log.
+   * @param via how the attempt came: the sign-in form or HTTP Basic (the command, a script)
    * @throws RetryLaterError 429 too-many-attempts when the address is at its limit; 503
    *   sign-in-busy when too many sign-ins wait for their hash
    */
@@ -34,7 +37,27 @@ export class SignIns {
     address: string,
     username: string,
     password: string,
-    { remember = false }: { remember?: boolean } = {},
+    { remember = false, via }: { remember?: boolean; via: 'form' | 'basic' },
+  ): Promise<Person | undefined> {
+    try {
+      return await this.checkPassword(address, username, password, remember);
+    } catch (error) {
+      if (error instanceof TooManySignIns && error.first)
+        await this.audit.append({
+          actorName: username,
+          action: 'sign-in-throttled',
+          detail: { via, retryAfterSeconds: error.retryAfterSeconds },
+          ip: address,
+        });
+      throw error;
+    }
+  }
+
+  private async checkPassword(
+    address: string,
+    username: string,
+    password: string,
+    remember: boolean,
   ): Promise<Person | undefined> {
     this.attempts.admit(address);
     const account = await this.people.credentials(username);

@@ -43,6 +43,9 @@ const SUMMARY_COLUMNS = `id, created_at, to_address, to_name, subject, kind, rel
   attempts, sent_at, result`;
 
 function toSummary(row: OutboxRow): OutboxSummary {
+  // The local transport finishes a message as 'sent' (the table's states are the queue's), but
+  // nothing left this machine: readers are told it is kept here, never that it was sent.
+  const kept = row.transport === 'local' && row.state === 'sent';
   return {
     id: row.id,
     createdAt: row.created_at,
@@ -52,9 +55,9 @@ function toSummary(row: OutboxRow): OutboxSummary {
     kind: row.kind,
     related: row.related,
     transport: row.transport,
-    state: row.state,
+    state: kept ? 'kept' : row.state,
     attempts: row.attempts,
-    sentAt: row.sent_at,
+    sentAt: kept ? null : row.sent_at,
     result: row.result,
   };
 }

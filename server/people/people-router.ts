@@ -67,7 +67,10 @@ function idParam(req: Request): number {
   return id;
 }
 
-/** /api/people: admins manage people; anyone changes their own password. */
+/**
+ * /api/people: admins manage people; anyone changes their own password and may read the names
+ * of the active admins (GET /api/people/admins), to know whom to ask.
+ */
 export function peopleRouter(context: AppContext): Router {
   const { db, people, audit, mail, records } = context;
   const router = Router();
@@ -94,6 +97,14 @@ export function peopleRouter(context: AppContext): Router {
     // Other sessions with the old password end; the one making the change carries on.
     if (req.authVia === 'session') req.session.signedInAt = cutoff;
     res.status(204).end();
+  });
+
+  // Whom to ask: a page for admins tells anyone else the names of the active admins, no more.
+  router.get('/admins', async (_req, res) => {
+    const admins = (await people.list())
+      .filter((person) => person.active && person.role === 'admin')
+      .map((person) => ({ displayName: person.displayName }));
+    res.json({ admins });
   });
 
   router.use(requireRole('admin'));

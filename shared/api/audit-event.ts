@@ -7,6 +7,7 @@
 export const AUDIT_ACTIONS = [
   'sign-in',
   'sign-in-failed',
+  'sign-in-throttled',
   'sign-out',
   'formula-save',
   'formula-create',
@@ -42,6 +43,15 @@ export const AUDIT_ACTIONS = [
 /** One of {@link AUDIT_ACTIONS}. */
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 
+/** The actions whose subject is a person's username. */
+export const PERSON_SUBJECTS: readonly AuditAction[] = [
+  'person-add',
+  'person-change',
+  'password-reset',
+  'invitation-send',
+  'reminder-choices',
+];
+
 /** One entry of the audit log. */
 export interface AuditEvent {
   readonly id: number;
@@ -50,9 +60,13 @@ export interface AuditEvent {
   readonly actorId: number | null;
   /** Who did it; for a failed sign-in, the username that was tried. */
   readonly actorName: string | null;
+  /** The actor's display name as it is now; null for the system or a name nobody has. */
+  readonly actorDisplayName: string | null;
   readonly action: AuditAction;
   /** What it was done to: a username, a formula id or a lot code. */
   readonly subject: string | null;
+  /** When the subject is a person (see {@link PERSON_SUBJECTS}), their display name now. */
+  readonly subjectDisplayName: string | null;
   readonly detail: unknown;
   readonly ip: string | null;
 }

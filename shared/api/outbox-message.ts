@@ -15,8 +15,11 @@ export const MESSAGE_KINDS = [
 /** One of {@link MESSAGE_KINDS}. */
 export type MessageKind = (typeof MESSAGE_KINDS)[number];
 
-/** Where a message is: waiting, being handed over, handed over, or given up on. */
-export type OutboxState = 'pending' | 'sending' | 'sent' | 'failed';
+/**
+ * Where a message is: waiting, being handed over, handed over to the mail server, given up on,
+ * or kept (with no mail server set up it was written and stays in the outbox: it did not leave).
+ */
+export type OutboxState = 'pending' | 'sending' | 'sent' | 'failed' | 'kept';
 
 /** Where messages go: kept in the local outbox only, or handed to a mail server. */
 export type TransportName = 'local' | 'smtp';
@@ -35,6 +38,7 @@ export interface OutboxSummary {
   readonly transport: TransportName;
   readonly state: OutboxState;
   readonly attempts: number;
+  /** When the mail server took it; null until then, and always for a message kept here. */
   readonly sentAt: string | null;
   /** The transport's answer, or why it failed. */
   readonly result: string | null;

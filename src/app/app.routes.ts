@@ -1,5 +1,6 @@
 import { Routes } from '@angular/router';
 import { authGuard, roleGuard } from './core/auth/auth-guard';
+import { forRolesRoute } from './core/auth/role-routes';
 
 export const routes: Routes = [
   {
@@ -29,11 +30,13 @@ export const routes: Routes = [
         canMatch: [roleGuard('admin', 'reviewer')],
         loadChildren: () => import('./reports/reports.routes'),
       },
+      forRolesRoute('reports', 'admin', 'reviewer'),
       {
         path: 'people',
         canMatch: [roleGuard('admin')],
         loadChildren: () => import('./people/people.routes'),
       },
+      forRolesRoute('people', 'admin'),
       {
         path: '**',
         title: 'Not found · Larderbook',

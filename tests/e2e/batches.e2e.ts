@@ -32,7 +32,9 @@ describe('the batch log in the console', () => {
 
     assert.equal(await page.getByRole('link', { name: 'People' }).count(), 0);
     await page.goto(`${session.server.url}/people`, { waitUntil: 'networkidle' });
-    assert.match(new URL(page.url()).pathname, /^\/batches/);
+    // The address stays, and the page says whom it is for instead of showing another one.
+    assert.match(new URL(page.url()).pathname, /^\/people$/);
+    await page.getByRole('heading', { name: 'This page is for admins' }).waitFor();
     const response = await session.server.as('tobin').get('/api/people');
     assert.equal(response.status, 403);
     assert.deepEqual(errors, []);

@@ -38,7 +38,7 @@ export interface OutboxRow {
   kind: string;
   related: string | null;
   transport: 'local' | 'smtp';
-  state: 'pending' | 'sending' | 'sent' | 'failed';
+  state: 'pending' | 'sending' | 'sent' | 'failed' | 'kept';
   attempts: number;
   sentAt: string | null;
   result: string | null;

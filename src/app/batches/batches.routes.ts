@@ -1,5 +1,6 @@
 import type { ResolveFn, Routes } from '@angular/router';
 import { roleGuard } from '../core/auth/auth-guard';
+import { forRolesRoute } from '../core/auth/role-routes';
 
 /** A batch page's title names its lot. */
 const lotTitle: ResolveFn<string> = (route) =>
@@ -17,6 +18,7 @@ export default [
     canMatch: [roleGuard('admin', 'cook')],
     loadComponent: () => import('./record-batch/record-batch-page'),
   },
+  forRolesRoute('new', 'admin', 'cook'),
   {
     path: ':lot',
     title: lotTitle,

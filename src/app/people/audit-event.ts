@@ -1,4 +1,6 @@
 import type { AuditAction, AuditEvent } from '../../../shared/api/audit-event.ts';
+import { processDetailText } from './audit-process-detail';
+import { fieldsOf, join, present, recipientsText, wordsOf } from './audit-words';
 
 export type { AuditAction, AuditEvent, AuditPage } from '../../../shared/api/audit-event.ts';
 
@@ -6,6 +8,7 @@ export type { AuditAction, AuditEvent, AuditPage } from '../../../shared/api/aud
 export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly label: string }[] = [
   { value: 'sign-in', label: 'Signed in' },
   { value: 'sign-in-failed', label: 'Sign-in failed' },
+  { value: 'sign-in-throttled', label: 'Sign-ins paused after failures' },
   { value: 'sign-out', label: 'Signed out' },
   { value: 'formula-save', label: 'Saved a formula' },
   { value: 'formula-create', label: 'Created a formula' },
@@ -137,19 +140,25 @@ export function detailText(event: Pick<AuditEvent, 'action' | 'detail'>): string
         [
           present(detail['kind']) ? `${wordsOf(detail['kind'])} reminder` : '',
           present(detail['dueOn']) ? `due ${wordsOf(detail['dueOn'])}` : '',
-          Array.isArray(detail['to'])
-            ? detail['to'].length === 0
-              ? 'to nobody'
-              : `to ${detail['to'].map(wordsOf).join(', ')}`
-            : '',
+          recipientsText(detail['to']),
         ],
         ', ',
+      );
+    case 'sign-in-throttled':
+      return join(
+        [
+          viaText(detail['via']),
+          typeof detail['retryAfterSeconds'] === 'number'
+            ? `this address may try again in ${Math.ceil(detail['retryAfterSeconds'] / 60)} min`
+            : '',
+        ],
+        '; ',
       );
     case 'password-reset':
     case 'sign-out':
       return '';
     default:
-      return genericText(detail);
+      return processDetailText(event.action, detail) ?? genericText(detail);
   }
 }
 
@@ -183,35 +192,35 @@ function statusText(status: unknown): string {
   return STATUS_WORDS[text] ?? text;
 }
 
-function genericText(detail: Record<string, unknown>): string {
+const RECORD_NUMBERS: ReadonlySet<string> = new Set([
+  'reading',
+  'readings',
+  'correction',
+  'deviation',
+  'deviations',
+  'action',
+  'verification',
+  'refusal',
+  'equipment',
+  'calibration',
+  'weighing',
+  'weighings',
+  'key',
+]);
+
+/**
+ * The fields of a detail as "key: value", without the record numbers the server keeps to tie
+ * entries together (a reading's, a deviation's): they mean nothing to a reader.
+ */
+export function genericText(detail: Record<string, unknown>): string {
   return Object.entries(detail)
+    .filter(([key, value]) => !RECORD_NUMBERS.has(key) && present(value))
     .map(([key, value]) => `${key}: ${wordsOf(value)}`)
     .join(', ');
-}
-
-function fieldsOf(detail: unknown): Record<string, unknown> {
-  return detail !== null && typeof detail === 'object' && !Array.isArray(detail)
-    ? (detail as Record<string, unknown>)
-    : {};
-}
-
-function present(value: unknown): boolean {
-  return value !== undefined && value !== null && value !== '';
-}
-
-function wordsOf(value: unknown): string {
-  if (typeof value === 'string') return value;
-  if (typeof value === 'number' || typeof value === 'boolean') return String(value);
-  if (value === null || value === undefined) return '';
-  return JSON.stringify(value);
 }
 
 // Revisions are SHA-256 hex digests; eight characters tell them apart in a log, as git does.
 function shortRevision(revision: unknown): string {
   const text = wordsOf(revision);
   return /^[0-9a-f]{9,}$/.test(text) ? text.slice(0, 8) : text || '?';
-}
-
-function join(parts: readonly string[], separator: string): string {
-  return parts.filter((part) => part !== '').join(separator);
 }

@@ -46,15 +46,27 @@ describe('outbox message words', () => {
       );
     });
 
-    it('should show what the transport answered for a sent message', () => {
+    it('should show what the mail server answered for a sent message', () => {
       const status = deliveryStatus({
         state: 'sent',
         attempts: 1,
-        result: 'kept in the local outbox; nothing left this machine',
+        result: '250 2.0.0 Ok: queued as 4F2A1',
       });
       assert.equal(status.tone, 'sent');
       assert.equal(status.label, 'Sent');
-      assert.equal(status.detail, 'kept in the local outbox; nothing left this machine');
+      assert.equal(status.detail, '250 2.0.0 Ok: queued as 4F2A1');
+    });
+
+    it('should never call a message kept here for want of a mail server sent', () => {
+      const status = deliveryStatus({
+        state: 'kept',
+        attempts: 1,
+        result: 'kept in the local outbox; nothing left this machine',
+      });
+      assert.equal(status.tone, 'kept');
+      assert.equal(status.label, 'Kept here');
+      assert.match(status.detail, /no mail server is set up/);
+      assert.doesNotMatch(`${status.label} ${status.detail}`, /\bSent\b/);
     });
 
     it('should show why a message failed, and say so when the server gave no reason', () => {
@@ -97,11 +109,16 @@ describe('outbox message words', () => {
   });
 
   describe('transportText', () => {
-    it('should say that without a mail server messages stay in the outbox', () => {
+    it('should say in an admin’s words that with no mail server messages are kept here', () => {
       assert.match(
         transportText('local'),
-        /No mail server is set up for Larderbook, so messages stay here and are not sent/,
+        /^Kept here — no mail server is set up, so nothing is sent and nobody receives these messages\./,
       );
+    });
+
+    it('should name no setting of the server, only what it means', () => {
+      for (const transport of ['local', 'smtp'] as const)
+        assert.doesNotMatch(transportText(transport), /LARDER_|SMTP_URL|[A-Z]{3,}_[A-Z]{3,}/);
     });
 
     it('should say that an invitation link is shown once to the admin and not kept here', () => {
@@ -112,7 +129,7 @@ describe('outbox message words', () => {
     });
 
     it('should say that messages go to the mail server when one is set', () => {
-      assert.match(transportText('smtp'), /through the kitchen’s mail server/);
+      assert.match(transportText('smtp'), /^Messages go out through the kitchen’s mail server;/);
       for (const transport of ['smtp', 'local'] as const)
         assert.doesNotMatch(transportText(transport), /LARDER_|SMTP/);
     });

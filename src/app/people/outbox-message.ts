@@ -13,8 +13,8 @@ export type {
   TransportName,
 } from '../../../shared/api/outbox-message.ts';
 
-/** The four states a reader tells apart: waiting, being handed over, sent, given up on. */
-export type DeliveryTone = 'queued' | 'sending' | 'sent' | 'failed';
+/** The states a reader tells apart: waiting, being handed over, sent, given up on, kept here. */
+export type DeliveryTone = 'queued' | 'sending' | 'sent' | 'failed' | 'kept';
 
 /** A message's delivery in words. */
 export interface DeliveryStatus {
@@ -44,7 +44,8 @@ export function kindText(kind: string): string {
 
 /**
  * Where a message is, in words: queued (with the last failure when it will be tried again),
- * sending, sent (with what the transport said) or failed (with why).
+ * sending, sent (with what the mail server said), failed (with why) or kept here (no mail server
+ * is set up: it never left, and is never called sent).
  * @param message The state, tries and result of a message.
  */
 export function deliveryStatus(
@@ -62,6 +63,8 @@ export function deliveryStatus(
       return { tone: 'sent', label: 'Sent', detail: result };
     case 'failed':
       return { tone: 'failed', label: 'Failed', detail: result || 'no reason was given' };
+    case 'kept':
+      return { tone: 'kept', label: 'Kept here', detail: 'not sent: no mail server is set up' };
     default:
       return { tone: 'queued', label: String(message.state), detail: result };
   }
@@ -77,15 +80,15 @@ export function recipientText(message: Pick<OutboxSummary, 'to' | 'toName'>): st
 }
 
 /**
- * One line on where messages go: without a mail server they stay in the outbox. In an admin's
- * words: the setting's name is for whoever installs the server (server/README.md).
+ * One line on where messages go, in an admin's words: with no mail server set up they are kept
+ * here and nobody receives them.
  * @param transport The server's transport, or null before the first page has come back.
  */
 export function transportText(transport: TransportName | null): string {
   if (transport === 'smtp')
     return 'Messages go out through the kitchen’s mail server; once an invitation is sent, its link is removed from the copy kept here.';
   if (transport === 'local')
-    return 'No mail server is set up for Larderbook, so messages stay here and are not sent. Invitation links are shown once, to the admin who sends the invitation, and are not kept here: that admin passes them on.';
+    return 'Kept here — no mail server is set up, so nothing is sent and nobody receives these messages. Invitation links are shown once, to the admin who sends the invitation, and are not kept here: that admin passes them on.';
   return '';
 }
 

@@ -14,13 +14,14 @@ export const authGuard: CanMatchFn = async (_route, segments) => {
   });
 };
 
-/** Lets only the given roles through (the server enforces the same); others see the batch log. */
+/**
+ * Lets only the given roles through (the server enforces the same). For others the route does not
+ * match, and the next one does: a forRolesRoute with the same path, which tells them why.
+ */
 export function roleGuard(...roles: Role[]): CanMatchFn {
   return async () => {
-    // Everything injected before the first await: injection is not allowed after it.
     const session = inject(SessionStore);
-    const router = inject(Router);
     await session.ensureLoaded();
-    return session.hasRole(...roles) ? true : router.createUrlTree(['/batches']);
+    return session.hasRole(...roles);
   };
 }

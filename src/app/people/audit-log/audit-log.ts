@@ -1,5 +1,9 @@
 import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@angular/core';
-import { MatFormField, MatLabel } from '@angular/material/form-field';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
@@ -15,23 +19,46 @@ import {
   MatRowDef,
   MatTable,
 } from '@angular/material/table';
+import { RouterLink } from '@angular/router';
+import { debounceTime } from 'rxjs';
 import { AUDIT_ACTIONS, AuditAction, AuditEvent, actionText, detailText } from '../audit-event';
-import { AuditStore } from '../audit-store';
+import { AuditFilter, AuditStore } from '../audit-store';
+import { AuditSubject, actorText, subjectOf } from '../audit-subject';
+import { PeopleStore } from '../people-store';
 import { OlderPagesFooter } from '../older-pages-footer/older-pages-footer';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 
 /** A row of the log with its words worked out once. */
 interface AuditRow {
   readonly event: AuditEvent;
+  readonly who: string;
   readonly action: string;
+  readonly subject: AuditSubject | null;
   readonly detail: string;
 }
 
-/** The audit log: sign-ins, formula saves, batch events and people changes, newest first. */
+/** The filter as the form holds it: '' for "any". */
+type FilterForm = FormGroup<{
+  action: FormControl<AuditAction | ''>;
+  actor: FormControl<string>;
+  subject: FormControl<string>;
+  fromDay: FormControl<string>;
+  toDay: FormControl<string>;
+}>;
+
+/**
+ * The audit log: sign-ins, formula saves, batch events and people changes, newest first, by name,
+ * with lots and formulas linked to their pages; narrowed by what, who, to what and when.
+ */
 @Component({
   selector: 'app-audit-log',
   imports: [
     IsoDayPipe,
+    ReactiveFormsModule,
+    RouterLink,
+    MatButton,
+    MatInput,
+    MatHint,
     MatTable,
     MatColumnDef,
     MatHeaderCellDef,
@@ -56,28 +83,60 @@ interface AuditRow {
 })
 export default class AuditLog implements OnInit {
   private readonly store = inject(AuditStore);
+  private readonly peopleStore = inject(PeopleStore);
 
   protected readonly actions = AUDIT_ACTIONS;
-  protected readonly action = this.store.action;
+  protected readonly people = this.peopleStore.people;
   protected readonly loading = this.store.loading;
   protected readonly loaded = this.store.loaded;
   protected readonly failure = this.store.failure;
   protected readonly hasMore = this.store.hasMore;
+  protected readonly filtered = computed(() =>
+    Object.values(this.store.filter()).some((value) => value !== undefined),
+  );
   protected readonly rows = computed<readonly AuditRow[]>(() =>
     this.store.events().map((event) => ({
       event,
+      who: actorText(event),
       action: actionText(event),
+      subject: subjectOf(event),
       detail: detailText(event),
     })),
   );
   protected readonly columns = ['at', 'who', 'action', 'subject', 'detail'];
+  protected readonly filterForm: FilterForm = new FormGroup({
+    action: new FormControl<AuditAction | ''>('', { nonNullable: true }),
+    actor: new FormControl('', { nonNullable: true }),
+    subject: new FormControl('', { nonNullable: true }),
+    fromDay: new FormControl('', { nonNullable: true }),
+    toDay: new FormControl('', { nonNullable: true }),
+  });
 
-  ngOnInit(): void {
-    void this.store.load();
+  constructor() {
+    // Typing in the object field waits for a pause; the lists and dates apply at once too.
+    this.filterForm.valueChanges
+      .pipe(debounceTime(300), takeUntilDestroyed())
+      .subscribe(() => void this.store.load(this.filterOf()));
   }
 
-  protected showAction(choice: AuditAction | 'all'): void {
-    void this.store.load(choice === 'all' ? null : choice);
+  ngOnInit(): void {
+    const filter = this.store.filter();
+    this.filterForm.setValue(
+      {
+        action: filter.action ?? '',
+        actor: filter.actor ?? '',
+        subject: filter.subject ?? '',
+        fromDay: filter.fromDay ?? '',
+        toDay: filter.toDay ?? '',
+      },
+      { emitEvent: false },
+    );
+    void this.store.load();
+    if (!this.peopleStore.loaded()) void this.peopleStore.load();
+  }
+
+  protected clearFilters(): void {
+    this.filterForm.reset();
   }
 
   protected reload(): void {
@@ -86,5 +145,16 @@ export default class AuditLog implements OnInit {
 
   protected loadMore(): void {
     void this.store.loadMore();
+  }
+
+  private filterOf(): AuditFilter {
+    const { action, actor, subject, fromDay, toDay } = this.filterForm.getRawValue();
+    return {
+      action: action || undefined,
+      actor: actor || undefined,
+      subject: subject.trim() || undefined,
+      fromDay: fromDay || undefined,
+      toDay: toDay || undefined,
+    };
   }
 }

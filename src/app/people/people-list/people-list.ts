@@ -1,3 +1,4 @@
+import { BreakpointObserver } from '@angular/cdk/layout';
 import { DOCUMENT } from '@angular/common';
 import {
   ChangeDetectionStrategy,
@@ -25,7 +26,9 @@ import {
   MatTable,
 } from '@angular/material/table';
 import { MatTooltip } from '@angular/material/tooltip';
+import { toSignal } from '@angular/core/rxjs-interop';
 import { Router } from '@angular/router';
+import { map } from 'rxjs';
 import { Person } from '../../core/api/api-types';
 import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
@@ -80,7 +83,18 @@ export default class PeopleList implements OnInit {
   protected readonly loaded = this.store.loaded;
   protected readonly failure = this.store.failure;
   protected readonly meId = computed(() => this.session.person()?.id ?? null);
-  protected readonly columns = ['name', 'username', 'role', 'email', 'status', 'actions'];
+  /** A phone: the name column carries username, role and status, and the actions come next. */
+  protected readonly narrow = toSignal(
+    inject(BreakpointObserver)
+      .observe('(max-width: 599.98px)')
+      .pipe(map((state) => state.matches)),
+    { initialValue: false },
+  );
+  protected readonly columns = computed(() =>
+    this.narrow()
+      ? ['name', 'actions']
+      : ['name', 'username', 'role', 'email', 'status', 'actions'],
+  );
   protected readonly roleLabel = roleLabel;
   /** The id of the person whose invitation is being sent again, or null. */
   protected readonly resending = signal<number | null>(null);
