@@ -13,6 +13,8 @@ import { signInCookie, startBenchServer } from './server-process.ts';
 
 const ROWS = Number(process.env.BENCH_LOG_ROWS ?? 1_000_000);
 const REQUESTS = Number(process.env.BENCH_LOG_REQUESTS ?? 100);
+/** The day the overdue filter counts from, as the console sends it. */
+const TODAY = new Date().toLocaleDateString('en-CA');
 
 function all<T>(db: sqlite3.Database, sql: string, values: readonly unknown[] = []): Promise<T[]> {
   return new Promise((resolve, reject) =>
@@ -122,6 +124,11 @@ export async function benchBatchLog(): Promise<void> {
       },
     ],
     [`lot-code search (${lotSearch})`, { lot: lotSearch, limit: '50' }],
+    // The console's log: newest started first, and its quick filters (a reviewer's queue).
+    ['console first page (started, desc)', { sort: 'started', order: 'desc', limit: '25' }],
+    ['needs sign-off (started, desc)', { needsSignOff: 'true', sort: 'started', limit: '25' }],
+    ['failed checks (started, desc)', { checks: 'failed', sort: 'started', limit: '25' }],
+    ['overdue (started, desc)', { overdueOn: TODAY, sort: 'started', limit: '25' }],
   ];
 
   process.stdout.write(

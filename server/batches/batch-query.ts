@@ -39,6 +39,12 @@ export interface BatchFilter {
   /** Lot codes starting with this, upper-case. */
   readonly lot?: string;
   readonly signedOff?: boolean;
+  /** Not signed off yet and in a status a reviewer can sign off (made, not thrown away). */
+  readonly needsSignOff?: boolean;
+  /** Whether every limit check passed (true) or one failed (false). */
+  readonly checksPassed?: boolean;
+  /** Still curing or proofing with a ready day before this day, YYYY-MM-DD: overdue then. */
+  readonly overdueOn?: string;
 }
 
 /** Where a page starts: just after (next) or just before (prev) the row with this key and id. */
@@ -62,7 +68,19 @@ export const DEFAULT_LIMIT = 50;
 /** The most batches one page may hold. */
 export const MAX_LIMIT = 200;
 
-const FILTER_KEYS = ['formula', 'kind', 'status', 'operator', 'from', 'to', 'lot', 'signedOff'];
+const FILTER_KEYS = [
+  'formula',
+  'kind',
+  'status',
+  'operator',
+  'from',
+  'to',
+  'lot',
+  'signedOff',
+  'needsSignOff',
+  'checks',
+  'overdueOn',
+];
 const SORT_KEYS = ['sort', 'order'];
 const PAGE_KEYS = ['limit', 'cursor'];
 const KINDS: readonly BatchKind[] = ['cure', 'dough', 'blend', 'mix'];
@@ -190,6 +208,22 @@ function parseFilter(query: Record<string, unknown>, problems: Problem[]): Batch
   if (signedOff !== undefined) {
     if (signedOff === 'true' || signedOff === 'false') filter.signedOff = signedOff === 'true';
     else problems.push({ field: 'signedOff', message: 'must be true or false' });
+  }
+  const needsSignOff = single(query, 'needsSignOff', problems);
+  if (needsSignOff !== undefined) {
+    // Only true narrows: "does not need sign-off" is no list a reviewer asks for.
+    if (needsSignOff === 'true') filter.needsSignOff = true;
+    else problems.push({ field: 'needsSignOff', message: 'takes only true' });
+  }
+  const checks = single(query, 'checks', problems);
+  if (checks !== undefined) {
+    if (checks === 'passed' || checks === 'failed') filter.checksPassed = checks === 'passed';
+    else problems.push({ field: 'checks', message: 'must be passed or failed' });
+  }
+  const overdueOn = single(query, 'overdueOn', problems);
+  if (overdueOn !== undefined) {
+    if (isIsoDate(overdueOn)) filter.overdueOn = overdueOn;
+    else problems.push({ field: 'overdueOn', message: 'must be a date written YYYY-MM-DD' });
   }
   return filter;
 }

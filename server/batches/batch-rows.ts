@@ -41,6 +41,8 @@ export interface BatchRow {
   result?: string;
   /** Only in a list: the 'nitrite-max' check's limit and status as JSON (LIST_COLUMNS). */
   nitrite_max?: string | null;
+  /** Only in a list: a curing batch's turning rule, days (LIST_COLUMNS). */
+  flip_every_days?: number | null;
 }
 
 /** A batch event row joined with the name of whoever made it. */
@@ -71,7 +73,8 @@ export const LIST_COLUMNS = `${SUMMARY_COLUMNS},
   CASE WHEN b.nitrite_ppm IS NOT NULL THEN (
     SELECT json_object('limit', c.value ->> 'limit', 'status', c.value ->> 'status')
     FROM json_each(b.result, '$.checks') c WHERE c.value ->> 'id' = 'nitrite-max'
-  ) END AS nitrite_max`;
+  ) END AS nitrite_max,
+  CASE WHEN b.status = 'curing' THEN b.result ->> '$.schedule.flipEveryDays' END AS flip_every_days`;
 
 /**
  * batches joined to the people it names. LEFT JOINs keep batches the outer loop of the query,
@@ -122,6 +125,7 @@ export function toListItem(row: BatchRow): BatchListItem {
     nitriteMax: row.nitrite_max
       ? (JSON.parse(row.nitrite_max) as BatchListItem['nitriteMax'])
       : null,
+    flipEveryDays: row.flip_every_days ?? null,
   };
 }
 

@@ -1,4 +1,5 @@
 import { addDays } from '../../shared/index.ts';
+import { UNSIGNABLE_STATUSES } from '../../shared/workflow/batch-status.ts';
 import { SORTS, type BatchFilter, type ListQuery, type SortKey } from './batch-query.ts';
 import { BATCHES_WITH_PEOPLE, LIST_COLUMNS, SUMMARY_COLUMNS } from './batch-rows.ts';
 import { prefixRange } from './lot-code.ts';
@@ -11,6 +12,9 @@ export interface SqlPart {
 
 /** Statuses a batch leaves within days: however long the log, few batches are in them. */
 const ACTIVE_STATUSES: readonly string[] = ['planned', 'in-progress', 'curing', 'proofing'];
+
+/** Not signed off, in a status that can be (not planned, not discarded): the reviewer's queue. */
+const NEEDS_SIGN_OFF = `b.signed_off_at IS NULL AND b.status NOT IN (${UNSIGNABLE_STATUSES.map((s) => `'${s}'`).join(', ')})`;
 
 /**
  * The WHERE clauses of a filter (on batches as `b`).
@@ -67,6 +71,16 @@ export function whereOf(
   }
   if (filter.signedOff !== undefined)
     clauses.push(filter.signedOff ? 'b.signed_off_at IS NOT NULL' : 'b.signed_off_at IS NULL');
+  // These two are written with literals, as the partial indexes of 010 are, so that SQLite sees
+  // the query implies an index's WHERE and walks that index: it holds only the matching rows.
+  if (filter.needsSignOff) clauses.push(NEEDS_SIGN_OFF);
+  if (filter.checksPassed !== undefined)
+    clauses.push(filter.checksPassed ? `${broad('b.checks_passed')} = 1` : 'b.checks_passed = 0');
+  if (filter.overdueOn !== undefined) {
+    // Held batches are few at any size of log: the (status, ready_on) index finds them.
+    clauses.push("b.status IN ('curing', 'proofing') AND b.ready_on < ?");
+    values.push(filter.overdueOn);
+  }
   return { clauses, values };
 }
 

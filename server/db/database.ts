@@ -13,6 +13,7 @@ import * as processRecords from './migrations/007-process-records.ts';
 import * as startedCalculation from './migrations/008-started-calculation.ts';
 import * as processAlertPrefs from './migrations/009-process-alert-prefs.ts';
 import * as plans from './migrations/010-plans.ts';
+import * as reviewQueueIndexes from './migrations/011-review-queue-indexes.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -35,6 +36,7 @@ const MIGRATIONS = [
   startedCalculation,
   processAlertPrefs,
   plans,
+  reviewQueueIndexes,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

@@ -2,7 +2,8 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import fc from 'fast-check';
 import { addDays } from '../../shared/calculation/dates.ts';
-import { dueReminders, flipDays, localDate } from './reminder-schedule.ts';
+import { flipDays } from '../../shared/calculation/turn-days.ts';
+import { dueReminders, localDate } from './reminder-schedule.ts';
 
 // The demo belly at 4 cm: 2 days per cm = 8 days, flipped every 2 days (formulas/quillmoor-belly.yaml).
 const BELLY = { start: '2026-12-02', ready: '2026-12-10', flipEveryDays: 2 };

@@ -1,4 +1,5 @@
 import { addDays } from '../../shared/calculation/dates.ts';
+import { flipDays, type HoldDates as TurnHold } from '../../shared/calculation/turn-days.ts';
 
 /** The three reminders: turn the meat, it is ready, it is past ready and still held. */
 export const REMINDER_KINDS = ['flip', 'ready', 'overdue'] as const;
@@ -6,14 +7,8 @@ export const REMINDER_KINDS = ['flip', 'ready', 'overdue'] as const;
 /** One of {@link REMINDER_KINDS}. */
 export type ReminderKind = (typeof REMINDER_KINDS)[number];
 
-/** A held batch's dates, from its result's schedule (or its ready date alone). */
-export interface HoldDates {
-  /** ISO date the hold starts. */
-  readonly start: string;
-  /** ISO date it is ready. */
-  readonly ready: string;
-  /** Turn every this many days, when the formula says so. */
-  readonly flipEveryDays?: number | null;
+/** A held batch's dates, and the day it was recorded on. */
+export interface HoldDates extends TurnHold {
   /**
    * ISO date the batch was recorded on (the server's time zone). A batch made on paper and
    * recorded later starts in the past: nothing due before this day is sent.
@@ -26,18 +21,6 @@ export interface DueReminder {
   readonly kind: ReminderKind;
   /** ISO date the reminder is for. */
   readonly dueOn: string;
-}
-
-/** The flip days of a hold: start + k × every, for k = 1, 2, …, before the ready day. */
-export function flipDays(hold: HoldDates): string[] {
-  const every = hold.flipEveryDays ?? 0;
-  if (!Number.isInteger(every) || every < 1) return [];
-  const days: string[] = [];
-  for (let k = 1; ; k++) {
-    const day = addDays(hold.start, k * every);
-    if (day >= hold.ready) return days;
-    days.push(day);
-  }
 }
 
 /**

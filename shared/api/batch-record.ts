@@ -72,6 +72,11 @@ export interface Batch extends BatchSummary {
 export interface BatchListItem extends BatchSummary {
   /** The batch's 'nitrite-max' check as recorded; null when it has no ingoing nitrite figure. */
   readonly nitriteMax: Pick<PresentedCheck, 'limit' | 'status'> | null;
+  /**
+   * A batch still curing: turn (or overhaul) it every this many days from its start, as its
+   * formula said when it was calculated; null when it is not curing or has no such rule.
+   */
+  readonly flipEveryDays: number | null;
 }
 
 /** GET /api/batches: one keyset page of the log, newest first unless sorted otherwise. */

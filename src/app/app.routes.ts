@@ -19,10 +19,13 @@ export const routes: Routes = [
     canMatch: [authGuard],
     loadComponent: () => import('./core/layout/shell/shell'),
     children: [
-      { path: '', pathMatch: 'full', redirectTo: 'batches' },
+      // The daily board is where a cook starts.
+      { path: '', pathMatch: 'full', redirectTo: 'today' },
+      { path: 'today', loadChildren: () => import('./curing/curing.routes') },
+      // The board's old address, kept for bookmarks and links.
+      { path: 'curing', pathMatch: 'full', redirectTo: 'today' },
       { path: 'formulas', loadChildren: () => import('./formulas/formulas.routes') },
       { path: 'batches', loadChildren: () => import('./batches/batches.routes') },
-      { path: 'curing', loadChildren: () => import('./curing/curing.routes') },
       { path: 'plans', loadChildren: () => import('./plans/plans.routes') },
       { path: 'equipment', loadChildren: () => import('./equipment/equipment.routes') },
       {

@@ -21,6 +21,7 @@ interface Item {
   readyOn: string | null;
   recordedAt: string;
   signedOff: unknown;
+  checksPassed: boolean;
 }
 
 const RANK: Record<string, number> = {
@@ -100,6 +101,21 @@ describe('listing batches', () => {
     await record('tobin', { ...belly, batch: { ...belly.batch, start: '2024-02-29' } });
     await record('rosa', { formula: 'brisket-rub', batch: { base: '1kg', start: '2024-03-01' } });
     await record('tobin', { ...belly, status: 'planned' });
+    // A belly still curing three weeks after its ready day.
+    const late = await server.as('tobin').post('/api/batches', {
+      ...belly,
+      batch: { ...belly.batch, start: '2024-02-01' },
+    });
+    assert.equal(late.status, 201, late.text);
+    const moved = await server
+      .as('tobin')
+      .post(`/api/batches/${late.json.batch.lotCode}/status`, { to: 'curing' });
+    assert.equal(moved.status, 200, moved.text);
+    // A batch that failed a check that does not refuse it (a fat standard is labelling, not
+    // safety): the column the filter reads, set as such a recording sets it.
+    await server.context.db.sequelize.query(
+      "UPDATE batches SET checks_passed = 0 WHERE formula_id = 'brisket-rub' AND started_on = '2024-03-01'",
+    );
     all = (await walk(reader, '')).items;
   });
   after(async () => {
@@ -128,9 +144,13 @@ describe('listing batches', () => {
       const one = await reader.get(`/api/batches/${lot}`);
       assert.equal(one.status, 200, one.text);
       const { result, events, ...summary } = one.json.batch as {
-        result: { checks: { id: string; limit: string; status: string }[] };
+        result: {
+          checks: { id: string; limit: string; status: string }[];
+          schedule?: { flipEveryDays?: number };
+        };
         events: unknown[];
         nitritePpm: string | null;
+        status: string;
       };
       assert.ok(events.length > 0, lot);
       const check = result.checks.find((c) => c.id === 'nitrite-max');
@@ -143,6 +163,8 @@ describe('listing batches', () => {
             check && summary.nitritePpm !== null
               ? { limit: check.limit, status: check.status }
               : null,
+          flipEveryDays:
+            summary.status === 'curing' ? (result.schedule?.flipEveryDays ?? null) : null,
         },
         lot,
       );
@@ -228,6 +250,21 @@ describe('listing batches', () => {
       ['status=done&sort=status', (b) => b.status === 'done'],
       ['status=curing&sort=ready', (b) => b.status === 'curing'],
       ['formula=no-such-formula', () => false],
+      // The quick filters: a reviewer's queue, failed checks, held past the ready day.
+      [
+        'needsSignOff=true',
+        (b) => b.signedOff === null && !['planned', 'discarded'].includes(b.status),
+      ],
+      [
+        'needsSignOff=true&sort=started',
+        (b) => b.signedOff === null && !['planned', 'discarded'].includes(b.status),
+      ],
+      ['checks=failed', (b) => !b.checksPassed],
+      ['checks=passed&sort=lot', (b) => b.checksPassed],
+      [
+        'overdueOn=2024-03-01',
+        (b) => ['curing', 'proofing'].includes(b.status) && (b.readyOn ?? '9') < '2024-03-01',
+      ],
     ];
     for (const [query, keep] of cases) {
       const expected = all.filter(keep);
@@ -236,6 +273,18 @@ describe('listing batches', () => {
       assert.deepEqual([...lots(got.items)].sort(), [...lots(expected)].sort(), query);
     }
     assert.ok(all.some((b) => b.signedOff !== null) && all.some((b) => b.status === 'curing'));
+    assert.ok(
+      all.some((b) => !b.checksPassed),
+      'the demo log holds a batch with a failed check',
+    );
+    assert.ok(
+      all.some((b) => b.status === 'curing' && (b.readyOn ?? '9') < '2024-03-01'),
+      'the demo log holds a batch held past its ready day',
+    );
+    assert.ok(
+      all.some((b) => b.signedOff === null && b.status === 'discarded'),
+      'the queue leaves out a discarded batch that was never signed off',
+    );
   });
 
   it('should refuse unknown, repeated or malformed parameters and cursors of another list', async () => {
@@ -251,6 +300,9 @@ describe('listing batches', () => {
       ['from=2026-03-02&to=2026-03-01', 'bad-request'],
       ['lot=26%25', 'bad-request'],
       ['signedOff=yes', 'bad-request'],
+      ['needsSignOff=false', 'bad-request'],
+      ['checks=ok', 'bad-request'],
+      ['overdueOn=today', 'bad-request'],
       ['sort=weight', 'bad-request'],
       ['order=up', 'bad-request'],
       ['limit=0', 'bad-request'],
@@ -331,14 +383,34 @@ describe('listing batches', () => {
       [{ lot: '2612' }, /sqlite_autoindex_batches_1 \(lot_code>\? AND lot_code<\?\)/],
       [{ status: 'curing', sort: 'ready' }, /batches_status_ready_order \(status=\?\)/],
       [{ status: 'done', signedOff: 'false' }, /batches_unsigned \(status=\?\)/],
+      // The quick filters walk their partial indexes, in the log's own order or by start day.
+      [{ overdueOn: '2026-12-01' }, /batches_ready \(status=\? AND ready_on<\?\)/],
     ];
-    for (const [filters, index] of narrow) {
+    // The quick filters walk their partial indexes in the page's order (either serves a count).
+    const partial: [Record<string, string>, RegExp, RegExp][] = [
+      [{ needsSignOff: 'true' }, /^SCAN b USING INDEX batches_queue_recorded/, /batches_queue_/],
+      [
+        { needsSignOff: 'true', sort: 'started' },
+        /^SCAN b USING INDEX batches_queue_started/,
+        /batches_queue_/,
+      ],
+      [{ checks: 'failed' }, /^SCAN b USING INDEX batches_failed_recorded/, /batches_failed_/],
+      [
+        { checks: 'failed', sort: 'started' },
+        /^SCAN b USING INDEX batches_failed_started/,
+        /batches_failed_/,
+      ],
+    ];
+    for (const [filters, index, counted = index] of [...narrow, ...partial]) {
       const query = parseListQuery(filters, true);
-      assert.match(await plan(pageSql(query, 'list').sql, pageSql(query, 'list').values), index);
+      const page = await plan(pageSql(query, 'list').sql, pageSql(query, 'list').values);
+      assert.match(page, index);
+      // A narrow filter sorts its few matches; a partial index is walked in order already.
+      if (counted !== index) assert.doesNotMatch(page, /TEMP B-TREE/, JSON.stringify(filters));
       const count = countSql(query.filter);
-      assert.match(await plan(count.sql, count.values), index);
+      assert.match(await plan(count.sql, count.values), counted);
       const capped = countSql(query.filter, TOTAL_COUNTED);
-      assert.match(await plan(capped.sql, capped.values), index);
+      assert.match(await plan(capped.sql, capped.values), counted);
     }
   });
 

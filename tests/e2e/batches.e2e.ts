@@ -2,7 +2,24 @@ import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
+import { addDays } from '../../shared/calculation/dates.ts';
 import { collectConsoleErrors, startConsole } from './browser.ts';
+import { shoot } from './screens.ts';
+
+/** Relative luminance of a CSS rgb() colour. source: Web Content Accessibility Guidelines 2.1, "relative luminance" */
+function luminance(css: string): number {
+  const [r, g, b] = (css.match(/\d+(\.\d+)?/g) ?? []).slice(0, 3).map((v) => {
+    const s = Number(v) / 255;
+    return s <= 0.03928 ? s / 12.92 : ((s + 0.055) / 1.055) ** 2.4;
+  });
+  return 0.2126 * r + 0.7152 * g + 0.0722 * b;
+}
+
+/** Contrast ratio of two CSS colours. source: Web Content Accessibility Guidelines 2.1, "contrast ratio" */
+function contrast(a: string, b: string): number {
+  const [hi, lo] = [luminance(a), luminance(b)].sort((x, y) => y - x);
+  return (hi + 0.05) / (lo + 0.05);
+}
 
 /** Chooses an option of a Material select by its visible text. */
 async function choose(page: Page, testId: string, option: RegExp): Promise<void> {
@@ -198,20 +215,116 @@ describe('the batch log in the console', () => {
     assert.ok(csv.slice(1).every((row) => row.includes('quillmoor-belly')));
   });
 
-  it('should list what is curing, overdue first', async (t) => {
+  it('should open newest started first, and mark failed and overdue rows in words', async (t) => {
     const session = await startConsole(t);
+    const { server } = session;
+    const today = new Date().toLocaleDateString('en-CA');
+    // A belly started ten days ago and still curing: 8 days to ready (formulas/quillmoor-belly.yaml).
+    const late = await server.as('tobin').post('/api/batches', {
+      formula: 'quillmoor-belly',
+      batch: { meat: '4.26kg', thickness: '4cm', start: addDays(today, -10) },
+    });
+    assert.equal(late.status, 201, late.text);
+    const lateLot = late.json.batch.lotCode as string;
+    const moved = await server.as('tobin').post(`/api/batches/${lateLot}/status`, { to: 'curing' });
+    assert.equal(moved.status, 200, moved.text);
+    // A batch that failed a check that does not refuse it (a fat standard is labelling): the
+    // column the log reads, set as such a recording sets it.
+    const failed = await server.as('rosa').post('/api/batches', {
+      formula: 'chuck-grind',
+      batch: { total: '20kg' },
+    });
+    assert.equal(failed.status, 201, failed.text);
+    const failedLot = failed.json.batch.lotCode as string;
+    await server.context.db.sequelize.query(
+      'UPDATE batches SET checks_passed = 0 WHERE lot_code = ?',
+      {
+        replacements: [failedLot],
+      },
+    );
+
     const page = await session.page('imke');
-    await page.goto(`${session.server.url}/curing`, { waitUntil: 'networkidle' });
-    const rows = page.getByTestId('curing-row');
-    await rows.first().waitFor();
-    const overdue = await rows.evaluateAll((elements) =>
-      elements.map((e) => e.getAttribute('data-overdue')),
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${server.url}/batches`, { waitUntil: 'networkidle' });
+    await page.getByTestId('batch-row').first().waitFor();
+    assert.equal(
+      await page.getByRole('columnheader', { name: 'Started' }).getAttribute('aria-sort'),
+      'descending',
+      'newest started first',
     );
-    const firstNotOverdue = overdue.indexOf('false');
-    assert.ok(
-      firstNotOverdue === -1 || overdue.slice(firstNotOverdue).every((v) => v === 'false'),
-      overdue.join(),
+    const shown = await page
+      .getByTestId('batch-row')
+      .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-lot')));
+    const newest = (
+      await server.as('imke').get('/api/batches?sort=started&order=desc&limit=25')
+    ).json.items.map((b: { lotCode: string }) => b.lotCode);
+    assert.deepEqual(shown, newest);
+
+    // Overdue: one click, and each row says so with an icon and a word.
+    await page.getByTestId('show-overdue').click();
+    await page.waitForURL(/show=overdue/);
+    const lateRow = page.locator(`[data-testid="batch-row"][data-lot="${lateLot}"]`);
+    await lateRow.waitFor();
+    const rows = page.getByTestId('batch-row');
+    assert.equal(
+      await page.locator('[data-testid="batch-row"] [data-testid="mark-overdue"]').count(),
+      await rows.count(),
     );
-    await session.screenshot(page, 'curing-now');
+    assert.match(await lateRow.getByTestId('mark-overdue').innerText(), /Overdue/);
+    assert.equal(await lateRow.locator('mat-icon').first().innerText(), 'schedule');
+
+    // Failed checks: FAIL in words beside its icon.
+    await page.getByTestId('show-failed').click();
+    const failedRow = page.locator(`[data-testid="batch-row"][data-lot="${failedLot}"]`);
+    await failedRow.waitFor();
+    assert.match(await failedRow.locator('.verdict').innerText(), /close\s*FAIL/);
+    assert.equal(await rows.count(), 1, 'only the batch with a failed check');
+
+    // One colour a status, none of them the colour of PASS or FAIL; words readable on each (AA).
+    await page.getByTestId('show-all').click();
+    await page.waitForURL((url) => !url.search.includes('show='));
+    await page.getByTestId('page-size').click();
+    await page.getByRole('option', { name: '100' }).click();
+    await page.waitForURL(/size=100/);
+    await page.getByTestId('batch-row').nth(30).waitFor();
+    // Read in the page, judged here (a function declared inside evaluate would not survive tsx).
+    const colours = {
+      chips: (
+        await page
+          .locator('app-batch-status-chip')
+          .evaluateAll((chips) =>
+            chips.map((chip) => [
+              chip.getAttribute('data-status') ?? '',
+              getComputedStyle(chip).backgroundColor,
+              getComputedStyle(chip).color,
+            ]),
+          )
+      ).map(([status, bg, fg]) => ({ status, bg, contrast: contrast(bg, fg) })),
+      verdicts: await page
+        .locator('.verdict')
+        .evaluateAll((verdicts) => verdicts.map((v) => getComputedStyle(v).backgroundColor)),
+    };
+    const byStatus = new Map(colours.chips.map((c) => [c.status, c.bg]));
+    assert.ok(byStatus.size >= 4, [...byStatus.keys()].join());
+    assert.equal(new Set(byStatus.values()).size, byStatus.size, 'each status its own colour');
+    for (const chip of colours.chips) {
+      assert.ok(!colours.verdicts.includes(chip.bg), `${chip.status} is not a check's colour`);
+      // WCAG 2.1 AA, 1.4.3: 4.5:1 for text. source: Web Content Accessibility Guidelines 2.1, 1.4.3
+      assert.ok(chip.contrast >= 4.5, `${chip.status}: ${chip.contrast.toFixed(2)}:1`);
+    }
+
+    // The nitrite chart: time to scale, and a caption saying what it judges.
+    await page.getByTestId('nitrite-chart-toggle').click();
+    await page.getByTestId('nitrite-chart').waitFor();
+    assert.match(
+      await page.getByTestId('nitrite-chart-scope').innerText(),
+      /judges ingoing nitrite only/,
+    );
+    for (const width of [1280, 820, 390]) {
+      await page.setViewportSize({ width, height: width === 390 ? 844 : 1000 });
+      await page.waitForTimeout(200);
+      await shoot(session, page, `batch-log-${width}`);
+    }
+    assert.deepEqual(errors, []);
   });
 });

@@ -6,11 +6,10 @@ import type { Locator, Page } from 'playwright-core';
 import { handClock } from '../helpers/mail.ts';
 import { CONTROLLED, controlledFormulaYaml } from '../helpers/process-calls.ts';
 import type { DemoUser, TestServer } from '../helpers/test-server.ts';
-import { collectConsoleErrors, startConsole, type ConsoleSession } from './browser.ts';
+import { collectConsoleErrors, startConsole } from './browser.ts';
+import { TABLET, atWidths, shoot, sideways } from './screens.ts';
 
 const MINUTE = 60_000;
-/** The tablet at the smoker. */
-const TABLET = { width: 820, height: 1180 };
 
 /** The controlled formula in the server's folder, and a batch of it starting today. */
 async function controlledBatch(
@@ -45,21 +44,6 @@ async function readAt(page: Page, control: string, value: string): Promise<void>
   assert.equal(await box.locator('.mat-form-field-invalid').count(), 0, 'the box is not in error');
 }
 
-/**
- * How far anything sticks out sideways, in pixels: past the window, or past the shell's content
- * pane (which scrolls on its own, so the window alone would not show it).
- */
-async function sideways(page: Page): Promise<number> {
-  return page.evaluate(() =>
-    Math.max(
-      document.documentElement.scrollWidth - window.innerWidth,
-      ...[...document.querySelectorAll('mat-sidenav-content')].map(
-        (pane) => pane.scrollWidth - pane.clientWidth,
-      ),
-    ),
-  );
-}
-
 /** Asserts that no form field's label runs under its own suffix (a unit such as kg). */
 async function overlapFree(scope: Locator): Promise<void> {
   const clashes = await scope.locator('mat-form-field').evaluateAll((fields) =>
@@ -75,32 +59,6 @@ async function overlapFree(scope: Locator): Promise<void> {
     }),
   );
   assert.deepEqual(clashes, [], 'a label runs under its unit');
-}
-
-/** Runs `look` at a desk (1280), the tablet (820) and a phone (390), then back at the tablet. */
-async function atWidths(page: Page, look: (width: number) => Promise<void>): Promise<void> {
-  for (const width of [1280, 820, 390]) {
-    await page.setViewportSize({ width, height: width === 390 ? 844 : 1000 });
-    // The chart redraws on the resize a frame later.
-    await page.waitForTimeout(200);
-    await look(width);
-  }
-  await page.setViewportSize(TABLET);
-}
-
-/**
- * A screenshot of the whole page: the content pane scrolls inside the shell, so the window is
- * made as tall as the content for the picture, then put back.
- */
-async function shoot(session: ConsoleSession, page: Page, name: string): Promise<void> {
-  const size = page.viewportSize() ?? TABLET;
-  const tall = await page.evaluate(() => {
-    const pane = document.querySelector('mat-sidenav-content');
-    return pane ? pane.scrollHeight + pane.getBoundingClientRect().top : 0;
-  });
-  if (tall > size.height) await page.setViewportSize({ ...size, height: Math.min(tall, 8000) });
-  await session.screenshot(page, name);
-  await page.setViewportSize(size);
 }
 
 describe('the process record in the console', () => {

@@ -52,7 +52,7 @@ describe('signing in to the console', () => {
         .innerText();
       assert.match(areas, /Formulas/);
       assert.match(areas, /Batch log/);
-      assert.match(areas, /Curing now/);
+      assert.match(areas, /Today/);
       assert.equal(/People/.test(areas), user === 'rosa', 'only admins see People');
       if (user === 'rosa') await session.screenshot(page, 'shell-admin');
       await page.getByRole('button', { name: 'Your account' }).click();

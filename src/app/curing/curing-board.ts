@@ -4,6 +4,7 @@ import { firstValueFrom } from 'rxjs';
 import type { BatchListItem, BatchPage } from '../batches/batch-types';
 import { messageOf } from '../core/api/message-of';
 import { isoDateOf } from '../ui/batch-sheet/iso-day-pipe';
+import { boardOf } from './board-rows';
 import { holdingBatches } from './days-left';
 
 /** Enough pages for any kitchen's cooler; the API gives at most 200 a page. */
@@ -11,7 +12,8 @@ const MAX_PAGES = 10;
 
 /**
  * What is curing or proofing now: GET /api/batches?status=curing,proofing&sort=ready&order=asc,
- * every page, ordered overdue first with the days each has left, counted from today here.
+ * every page, ordered overdue first with the days each has left, counted from today here; and
+ * the board's quick move, marking a batch done.
  */
 @Injectable({ providedIn: 'root' })
 export class CuringBoard {
@@ -25,6 +27,12 @@ export class CuringBoard {
   readonly entries = computed(() => holdingBatches(this.batches() ?? [], this.day()));
   /** How many are overdue. */
   readonly overdueCount = computed(() => this.entries().filter((e) => e.overdue).length);
+  /** The daily board: cures and doughs apart, what is due today first. */
+  readonly board = computed(() => boardOf(this.batches() ?? [], this.day()));
+  /** How many cures are turned today. */
+  readonly turnTodayCount = computed(
+    () => this.board().curing.filter((row) => row.due === 'turn').length,
+  );
   /** How many are ready today. */
   readonly readyTodayCount = computed(() => this.entries().filter((e) => e.daysLeft === 0).length);
   /** The day the days are counted from, YYYY-MM-DD. */
@@ -35,6 +43,27 @@ export class CuringBoard {
   readonly loading = this.busy.asReadonly();
   /** Why it could not be read, or null. */
   readonly error = this.failure.asReadonly();
+
+  /**
+   * Marks a held batch done (POST /api/batches/:lot/status), then reads the board again.
+   * @param reason asked of an admin moving a signed-off batch
+   * @returns null when it was moved, else why not in words (a hold, someone else moved it first)
+   */
+  async markDone(lot: string, reason?: string): Promise<string | null> {
+    try {
+      await firstValueFrom(
+        this.http.post(`/api/batches/${encodeURIComponent(lot)}/status`, {
+          to: 'done',
+          ...(reason ? { reason } : {}),
+        }),
+      );
+      return null;
+    } catch (error) {
+      return messageOf(error);
+    } finally {
+      await this.load();
+    }
+  }
 
   /** Reads the list again, and counts the days from today. */
   async load(): Promise<void> {

@@ -3,7 +3,7 @@ import type { Routes } from '@angular/router';
 export default [
   {
     path: '',
-    title: 'Curing now · Larderbook',
-    loadComponent: () => import('./curing-now/curing-now'),
+    title: 'Today · Larderbook',
+    loadComponent: () => import('./today-board/today-board'),
   },
 ] satisfies Routes;

@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { BatchSummary } from '../batches/batch-types';
-import { daysBetween, daysLeftWords, holdingBatches } from './days-left.ts';
+import { daysBetween, daysLeftWords, holdingBatches, isOverdue } from './days-left.ts';
 
 const held = (lotCode: string, readyOn: string | null): BatchSummary =>
   ({ lotCode, readyOn }) as unknown as BatchSummary;
@@ -51,5 +51,15 @@ describe('daysLeftWords', () => {
     assert.equal(daysLeftWords(1), '1 day left');
     assert.equal(daysLeftWords(6), '6 days left');
     assert.equal(daysLeftWords(null), 'No ready date');
+  });
+});
+
+describe('isOverdue', () => {
+  it('should count a batch overdue only while it is held after its ready day', () => {
+    const batch = { status: 'curing' as const, readyOn: '2026-12-02' };
+    assert.equal(isOverdue(batch, '2026-12-02'), false);
+    assert.equal(isOverdue(batch, '2026-12-03'), true);
+    assert.equal(isOverdue({ ...batch, status: 'done' }, '2026-12-03'), false);
+    assert.equal(isOverdue({ ...batch, readyOn: null }, '2026-12-03'), false);
   });
 });

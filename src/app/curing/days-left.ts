@@ -1,8 +1,8 @@
 import type { BatchSummary } from '../batches/batch-types';
 
 /** A batch that is curing or proofing, with how long it has to go. */
-export interface HoldingBatch {
-  readonly batch: BatchSummary;
+export interface HoldingBatch<T extends BatchSummary = BatchSummary> {
+  readonly batch: T;
   /** Days until the ready date (negative when overdue); null when it has none. */
   readonly daysLeft: number | null;
   /** Whether the ready date is before today. */
@@ -21,11 +21,24 @@ export function daysBetween(from: string, to: string): number {
 }
 
 /**
+ * Whether a batch is overdue: still curing or proofing after its ready day (as the API's
+ * overdueOn filter counts it).
+ * @param today the local calendar day, YYYY-MM-DD
+ */
+export function isOverdue(batch: Pick<BatchSummary, 'status' | 'readyOn'>, today: string): boolean {
+  const held = batch.status === 'curing' || batch.status === 'proofing';
+  return held && batch.readyOn !== null && batch.readyOn < today;
+}
+
+/**
  * The holding batches in the order to look at them: overdue first (longest overdue first), then
  * by ready date, then those with no ready date (such as proofing doughs).
  * @param today the local calendar day, YYYY-MM-DD
  */
-export function holdingBatches(batches: readonly BatchSummary[], today: string): HoldingBatch[] {
+export function holdingBatches<T extends BatchSummary>(
+  batches: readonly T[],
+  today: string,
+): HoldingBatch<T>[] {
   return batches
     .map((batch) => {
       const daysLeft = batch.readyOn ? daysBetween(today, batch.readyOn) : null;

@@ -33,7 +33,7 @@ type OperatorChoice = number | 'other' | null;
 
 /** The filters of the batch log, as a change to the view. */
 export type FilterChange = Partial<
-  Pick<LogQuery, 'formula' | 'kind' | 'statuses' | 'operator' | 'from' | 'to' | 'lot'>
+  Pick<LogQuery, 'formula' | 'kind' | 'statuses' | 'operator' | 'from' | 'to' | 'lot' | 'show'>
 >;
 
 const LOT_DELAY_MS = 350;
@@ -169,6 +169,7 @@ export class BatchFilters {
       from: null,
       to: null,
       lot: null,
+      show: null,
     });
   }
 

@@ -32,14 +32,18 @@ import {
 import { ActivatedRoute, Router, RouterLink, type ParamMap } from '@angular/router';
 import { SessionStore } from '../../core/auth/session-store';
 import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
-import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
+import { UNSIGNABLE_STATUSES } from '../../../../shared/workflow/batch-status.ts';
 import type { BatchListItem, FormulaKind } from '../batch-types';
+import { isOverdue } from '../../curing/days-left';
 import { FormulaOptions } from '../formula-options';
 import { NitriteChart } from '../nitrite-chart/nitrite-chart';
 import { BatchFilters, type FilterChange } from './batch-filters';
 import { BatchLog } from './batch-log';
 import { CursorPaginator } from './cursor-paginator';
 import {
+  DEFAULT_QUERY,
+  SHOWS,
   csvHref,
   isFiltered,
   paramsFromQuery,
@@ -103,11 +107,19 @@ export default class BatchLogPage {
 
   private readonly params = toSignal(this.route.queryParamMap, { requireSync: true });
   protected readonly query = computed(() => queryFromParams(paramRecord(this.params())));
-  /** The page's batches as the table shows them. */
+  /** The page's batches as the table shows them, with the marks a row carries. */
   protected readonly rows = computed(() =>
-    this.log.items().map((batch) => ({ ...batch, kindWords: KIND_WORDS[batch.kind] })),
+    this.log.items().map((batch) => ({
+      ...batch,
+      kindWords: KIND_WORDS[batch.kind],
+      overdue: isOverdue(batch, this.today),
+      awaitsSignOff: !batch.signedOff && !UNSIGNABLE_STATUSES.includes(batch.status),
+    })),
   );
-  protected readonly exportHref = computed(() => csvHref(this.query()));
+  /** The kitchen's day, for "overdue"; read when the page opens. */
+  protected readonly today = isoDateOf(new Date()) ?? '';
+  protected readonly exportHref = computed(() => csvHref(this.query(), this.today));
+  protected readonly shows = SHOWS;
   protected readonly filtered = computed(() => isFiltered(this.query()));
   protected readonly canRecord = computed(() => this.session.hasRole('admin', 'cook'));
   protected readonly columns = [
@@ -149,7 +161,8 @@ export default class BatchLogPage {
   }
 
   protected sortBy(sort: Sort): void {
-    if (sort.direction === '') this.showView({ ...this.query(), sort: 'recorded', order: 'desc' });
+    if (sort.direction === '')
+      this.showView({ ...this.query(), sort: DEFAULT_QUERY.sort, order: DEFAULT_QUERY.order });
     else this.showView({ ...this.query(), sort: sort.active as LogSort, order: sort.direction });
   }
 
@@ -166,6 +179,7 @@ export default class BatchLogPage {
       from: null,
       to: null,
       lot: null,
+      show: null,
     });
   }
 

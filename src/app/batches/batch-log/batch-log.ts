@@ -2,6 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { messageOf } from '../../core/api/message-of';
+import { isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import type { BatchListItem, BatchPage, PersonRef } from '../batch-types';
 import { DEFAULT_QUERY, apiFilterParams, type LogQuery } from './log-query';
 
@@ -102,7 +103,7 @@ export class BatchLog {
     this.busy.set(true);
     this.failure.set(null);
     const params: Record<string, string> = {
-      ...apiFilterParams(query),
+      ...apiFilterParams(query, isoDateOf(new Date()) ?? ''),
       limit: String(query.size),
       ...(position.cursor ? { cursor: position.cursor } : {}),
     };

@@ -23,6 +23,7 @@ describe('queryFromParams', () => {
       from: '2026-11-01',
       to: '2026-11-30',
       lot: '2611',
+      show: 'sign-off',
       sort: 'ready',
       order: 'desc',
       size: '100',
@@ -35,6 +36,7 @@ describe('queryFromParams', () => {
       from: '2026-11-01',
       to: '2026-11-30',
       lot: '2611',
+      show: 'sign-off',
       sort: 'ready',
       order: 'desc',
       size: 100,
@@ -48,10 +50,15 @@ describe('queryFromParams', () => {
       operator: 'tobin',
       from: '1 Nov',
       lot: 'a b',
+      show: 'everything',
       sort: 'colour',
       size: '30',
     });
     assert.deepEqual(query, { ...DEFAULT_QUERY, statuses: ['curing'] });
+  });
+
+  it('should open newest first by start day', () => {
+    assert.deepEqual([DEFAULT_QUERY.sort, DEFAULT_QUERY.order], ['started', 'desc']);
   });
 
   it('should take the sort’s own order when none is given', () => {
@@ -72,6 +79,7 @@ describe('paramsFromQuery', () => {
     const query = {
       ...DEFAULT_QUERY,
       statuses: ['curing' as const],
+      show: 'overdue' as const,
       sort: 'lot' as const,
       order: 'asc' as const,
       size: 50 as const,
@@ -91,16 +99,25 @@ describe('apiFilterParams and csvHref', () => {
       statuses: ['curing' as const, 'proofing' as const],
       size: 100 as const,
     };
-    assert.deepEqual(apiFilterParams(query), {
+    assert.deepEqual(apiFilterParams(query, '2026-12-03'), {
       kind: 'cure',
       status: 'curing,proofing',
-      sort: 'recorded',
+      sort: 'started',
       order: 'desc',
     });
     assert.equal(
-      csvHref(query),
-      '/api/batches.csv?kind=cure&status=curing%2Cproofing&sort=recorded&order=desc',
+      csvHref(query, '2026-12-03'),
+      '/api/batches.csv?kind=cure&status=curing%2Cproofing&sort=started&order=desc',
     );
+  });
+
+  it('should ask the server for each quick filter, overdue counted from the day given', () => {
+    const params = (show: 'sign-off' | 'failed' | 'overdue') =>
+      apiFilterParams({ ...DEFAULT_QUERY, show }, '2026-12-03');
+    assert.equal(params('sign-off')['needsSignOff'], 'true');
+    assert.equal(params('failed')['checks'], 'failed');
+    assert.equal(params('overdue')['overdueOn'], '2026-12-03');
+    assert.equal(isFiltered({ ...DEFAULT_QUERY, show: 'failed' }), true);
   });
 });
 

@@ -11,6 +11,19 @@ export type PageSize = 25 | 50 | 100;
 /** The page sizes offered. */
 export const PAGE_SIZES: readonly PageSize[] = [25, 50, 100];
 
+/**
+ * The log's quick filters, one at a time: the reviewer's queue (not signed off yet), batches with
+ * a failed check, batches held past their ready day.
+ */
+export type LogShow = 'sign-off' | 'failed' | 'overdue';
+
+/** The quick filters in the order they are offered, with their words. */
+export const SHOWS: readonly { readonly value: LogShow; readonly words: string }[] = [
+  { value: 'sign-off', words: 'Needs sign-off' },
+  { value: 'failed', words: 'Failed checks' },
+  { value: 'overdue', words: 'Overdue' },
+];
+
 /** The log's view: filters, sort and page size, as kept in the address bar. */
 export interface LogQuery {
   readonly formula: string | null;
@@ -23,6 +36,8 @@ export interface LogQuery {
   readonly to: string | null;
   /** Start of a lot code, upper-case. */
   readonly lot: string | null;
+  /** A quick filter, or null for none. */
+  readonly show: LogShow | null;
   readonly sort: LogSort;
   readonly order: 'asc' | 'desc';
   readonly size: PageSize;
@@ -38,7 +53,7 @@ export const DEFAULT_ORDER: Readonly<Record<LogSort, 'asc' | 'desc'>> = {
   formula: 'asc',
 };
 
-/** The log as it opens: everything, newest first, 25 a page. */
+/** The log as it opens: everything, the latest started first, 25 a page. */
 export const DEFAULT_QUERY: LogQuery = {
   formula: null,
   kind: null,
@@ -47,7 +62,8 @@ export const DEFAULT_QUERY: LogQuery = {
   from: null,
   to: null,
   lot: null,
-  sort: 'recorded',
+  show: null,
+  sort: 'started',
   order: 'desc',
   size: 25,
 };
@@ -65,7 +81,9 @@ export type QueryParams = Readonly<Record<string, string | undefined>>;
 export function queryFromParams(params: QueryParams): LogQuery {
   const kind = params['kind'];
   const sort = params['sort'];
-  const validSort = sort !== undefined && sort in DEFAULT_ORDER ? (sort as LogSort) : 'recorded';
+  const validSort =
+    sort !== undefined && sort in DEFAULT_ORDER ? (sort as LogSort) : DEFAULT_QUERY.sort;
+  const show = SHOWS.find((s) => s.value === params['show'])?.value ?? null;
   const order = params['order'];
   const size = Number(params['size']);
   const operator = Number(params['operator']);
@@ -85,6 +103,7 @@ export function queryFromParams(params: QueryParams): LogQuery {
     from: params['from'] && DATE.test(params['from']) ? params['from'] : null,
     to: params['to'] && DATE.test(params['to']) ? params['to'] : null,
     lot: lot && /^[0-9A-Z-]{1,20}$/.test(lot) ? lot : null,
+    show,
     sort: validSort,
     order: order === 'asc' || order === 'desc' ? order : DEFAULT_ORDER[validSort],
     size: (PAGE_SIZES as readonly number[]).includes(size) ? (size as PageSize) : 25,
@@ -96,7 +115,7 @@ export function queryFromParams(params: QueryParams): LogQuery {
  * plain address. Null removes a parameter when merged into the current URL.
  */
 export function paramsFromQuery(query: LogQuery): Record<string, string | null> {
-  const sortShown = query.sort !== 'recorded' || query.order !== 'desc';
+  const sortShown = query.sort !== DEFAULT_QUERY.sort || query.order !== DEFAULT_QUERY.order;
   return {
     formula: query.formula,
     kind: query.kind,
@@ -105,6 +124,7 @@ export function paramsFromQuery(query: LogQuery): Record<string, string | null> 
     from: query.from,
     to: query.to,
     lot: query.lot,
+    show: query.show,
     sort: sortShown ? query.sort : null,
     order: sortShown ? query.order : null,
     size: query.size === 25 ? null : String(query.size),
@@ -114,8 +134,9 @@ export function paramsFromQuery(query: LogQuery): Record<string, string | null> 
 /**
  * The API's filter and sort parameters for a view (GET /api/batches and /api/batches.csv share
  * them), without empty ones.
+ * @param today the kitchen's calendar day, YYYY-MM-DD: "overdue" is a ready day before it
  */
-export function apiFilterParams(query: LogQuery): Record<string, string> {
+export function apiFilterParams(query: LogQuery, today: string): Record<string, string> {
   const params: Record<string, string> = {};
   if (query.formula) params['formula'] = query.formula;
   if (query.kind) params['kind'] = query.kind;
@@ -124,14 +145,17 @@ export function apiFilterParams(query: LogQuery): Record<string, string> {
   if (query.from) params['from'] = query.from;
   if (query.to) params['to'] = query.to;
   if (query.lot) params['lot'] = query.lot;
+  if (query.show === 'sign-off') params['needsSignOff'] = 'true';
+  if (query.show === 'failed') params['checks'] = 'failed';
+  if (query.show === 'overdue') params['overdueOn'] = today;
   params['sort'] = query.sort;
   params['order'] = query.order;
   return params;
 }
 
 /** The CSV export of exactly the batches a view lists (every page of it). */
-export function csvHref(query: LogQuery): string {
-  return `/api/batches.csv?${new URLSearchParams(apiFilterParams(query)).toString()}`;
+export function csvHref(query: LogQuery, today: string): string {
+  return `/api/batches.csv?${new URLSearchParams(apiFilterParams(query, today)).toString()}`;
 }
 
 /** Whether a view narrows the log at all. */
@@ -143,6 +167,7 @@ export function isFiltered(query: LogQuery): boolean {
     query.operator !== null ||
     query.from !== null ||
     query.to !== null ||
-    query.lot !== null
+    query.lot !== null ||
+    query.show !== null
   );
 }

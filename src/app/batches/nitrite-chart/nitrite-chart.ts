@@ -13,7 +13,6 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import {
-  CategoryScale,
   Chart,
   Legend,
   LineController,
@@ -32,17 +31,24 @@ import { nitriteSummary } from './nitrite-points';
 
 Chart.defaults.font.family = 'Fira Sans';
 
-// A canvas cannot read CSS custom properties: these are tones of our palette (_theme-colors.scss).
-const INK = '#974824';
+// A canvas cannot read CSS custom properties. The batches in blue, solid, with points; the limit
+// in the error red of our palette (_theme-colors.scss), dashed, with none: apart by hue and by
+// style, each 6.4:1 or more on white.
+const INK = '#1f5fa8';
 const LIMIT_INK = '#ba1a1a';
 const GRID = '#e8e0da';
 
-const SHORT_DAY = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short' });
+const SHORT_DAY = new Intl.DateTimeFormat('en-GB', {
+  day: 'numeric',
+  month: 'short',
+  timeZone: 'UTC',
+});
 
 /**
  * Ingoing nitrite of each recorded batch of one cure formula over time, with the formula's
- * ceiling drawn as a line: a drift towards the limit shows at a glance. The same figures are in a
- * table for screen readers, and summed up in words under the chart.
+ * ceiling drawn as a line: a drift towards the limit shows at a glance. Time runs to scale (a
+ * fortnight without batches is a gap, not one step). The same figures are in a table for screen
+ * readers, and summed up in words under the chart.
  */
 @Component({
   selector: 'app-nitrite-chart',
@@ -59,15 +65,7 @@ const SHORT_DAY = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'sho
   providers: [
     NitriteHistory,
     provideCharts({
-      registerables: [
-        LineController,
-        LineElement,
-        PointElement,
-        LinearScale,
-        CategoryScale,
-        Tooltip,
-        Legend,
-      ],
+      registerables: [LineController, LineElement, PointElement, LinearScale, Tooltip, Legend],
     }),
   ],
   templateUrl: './nitrite-chart.html',
@@ -92,28 +90,30 @@ export class NitriteChart {
   protected readonly data = computed<ChartData<'line'>>(() => {
     const points = this.points();
     return {
-      labels: points.map((p) => shortDay(p.day)),
       datasets: [
         {
-          label: 'Ingoing nitrite (ppm)',
-          data: points.map((p) => p.ppm),
+          label: 'Ingoing nitrite of each batch (ppm)',
+          data: points.map((p) => ({ x: dayMs(p.day), y: p.ppm })),
           borderColor: INK,
           backgroundColor: INK,
+          borderWidth: 2,
           pointBackgroundColor: points.map((p) => (p.over ? LIMIT_INK : INK)),
-          pointRadius: 4,
-          pointHoverRadius: 6,
+          pointStyle: points.map((p) => (p.over ? 'triangle' : 'circle')),
+          pointRadius: points.map((p) => (p.over ? 7 : 4)),
+          pointHoverRadius: 7,
           tension: 0,
         },
         {
           label: 'Limit (ppm)',
-          data: points.map((p) => p.limit),
+          data: points.map((p) => ({ x: dayMs(p.day), y: p.limit })),
           borderColor: LIMIT_INK,
           backgroundColor: LIMIT_INK,
-          borderDash: [6, 4],
+          borderDash: [8, 5],
           borderWidth: 2,
           pointRadius: 0,
           pointHoverRadius: 0,
           pointStyle: 'line',
+          // A limit holds until the batch that was checked against another one.
           stepped: true,
         },
       ],
@@ -122,11 +122,15 @@ export class NitriteChart {
   protected readonly options = computed<ChartOptions<'line'>>(() => {
     const points = this.points();
     const top = Math.max(0, ...points.map((p) => Math.max(p.ppm, p.limit ?? 0)));
+    const first = points.length ? dayMs(points[0].day) : 0;
+    const last = points.length ? dayMs(points[points.length - 1].day) : 0;
+    // One batch, or all on one day: a day either side, so the point is not on the edge.
+    const pad = last > first ? 0 : DAY_MS;
     return {
       responsive: true,
       maintainAspectRatio: false,
       animation: false,
-      interaction: { mode: 'index', intersect: false },
+      interaction: { mode: 'nearest', axis: 'x', intersect: false },
       scales: {
         y: {
           beginAtZero: true,
@@ -134,7 +138,18 @@ export class NitriteChart {
           title: { display: true, text: 'ppm of green weight' },
           grid: { color: GRID },
         },
-        x: { grid: { display: false } },
+        x: {
+          type: 'linear',
+          min: first - pad,
+          max: last + pad,
+          title: { display: true, text: 'Day recorded (to scale)' },
+          grid: { color: GRID },
+          ticks: {
+            maxTicksLimit: 8,
+            maxRotation: 0,
+            callback: (value) => shortDay(Number(value)),
+          },
+        },
       },
       plugins: {
         legend: { position: 'bottom', labels: { usePointStyle: true } },
@@ -144,7 +159,7 @@ export class NitriteChart {
               const point = points[items[0]?.dataIndex ?? 0];
               return point ? `${point.lot} · ${point.day}` : '';
             },
-            label: (item) => `${item.dataset.label ?? ''}: ${Number(item.raw).toFixed(1)}`,
+            label: (item) => `${item.dataset.label ?? ''}: ${Number(item.parsed.y).toFixed(1)}`,
           },
         },
       },
@@ -169,7 +184,15 @@ export class NitriteChart {
   }
 }
 
-function shortDay(iso: string): string {
+const DAY_MS = 86_400_000;
+
+/** A calendar day (YYYY-MM-DD) as milliseconds at its UTC midnight: days an equal step apart. */
+function dayMs(iso: string): number {
   const [year, month, day] = iso.split('-').map(Number);
-  return SHORT_DAY.format(new Date(year, month - 1, day));
+  return Date.UTC(year, month - 1, day);
+}
+
+/** A tick's milliseconds as a short day, "3 Dec", read back in UTC as it was made. */
+function shortDay(ms: number): string {
+  return SHORT_DAY.format(new Date(ms));
 }

@@ -8,10 +8,11 @@ import { AttentionNow } from '../attention-now';
 /** How often the list is read again while the board is open. */
 const REFRESH_MS = 60_000;
 
+/** Each kind: its icon, its name, and the quick action its link leads to on the batch page. */
 const KIND = {
-  deviation: { icon: 'front_hand', words: 'On hold' },
-  'stage-deadline': { icon: 'ac_unit', words: 'Cooling deadline' },
-  'reading-due': { icon: 'thermostat', words: 'Reading due' },
+  deviation: { icon: 'front_hand', words: 'On hold', action: 'Record the action' },
+  'stage-deadline': { icon: 'ac_unit', words: 'Cooling deadline', action: 'Enter a reading' },
+  'reading-due': { icon: 'thermostat', words: 'Reading due', action: 'Enter a reading' },
 } as const;
 
 /**

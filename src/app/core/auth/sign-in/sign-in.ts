@@ -84,7 +84,7 @@ export default class SignIn implements OnInit {
       await this.session.signIn(username.trim(), password);
       const target = this.returnUrl();
       await this.router.navigateByUrl(
-        target?.startsWith('/') && !target.startsWith('//') ? target : '/batches',
+        target?.startsWith('/') && !target.startsWith('//') ? target : '/today',
       );
     } catch (error) {
       this.failure.set(messageOf(error, 'Signing in failed; try again.'));

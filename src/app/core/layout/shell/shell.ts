@@ -9,14 +9,16 @@ import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
 import { MatSidenav, MatSidenavContainer, MatSidenavContent } from '@angular/material/sidenav';
 import { MatToolbar } from '@angular/material/toolbar';
 import { MatTooltip } from '@angular/material/tooltip';
-import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
-import { map } from 'rxjs';
+import { NavigationEnd, Router, RouterLink, RouterOutlet } from '@angular/router';
+import { filter, map } from 'rxjs';
 import { Role } from '../../api/api-types';
 import { SessionStore } from '../../auth/session-store';
 
 /** One area of the console in the left navigation. */
 interface Area {
   readonly path: string;
+  /** Query parameters of the link, for an area that is a view of another (the queue). */
+  readonly query?: Readonly<Record<string, string>>;
   readonly label: string;
   readonly icon: string;
   /** Roles that see it; all when absent. */
@@ -24,10 +26,17 @@ interface Area {
 }
 
 const AREAS: readonly Area[] = [
+  { path: '/today', label: 'Today', icon: 'today' },
+  { path: '/batches', label: 'Batch log', icon: 'list_alt' },
+  {
+    path: '/batches',
+    query: { show: 'sign-off' },
+    label: 'To sign off',
+    icon: 'pending_actions',
+    roles: ['admin', 'reviewer'],
+  },
   { path: '/formulas', label: 'Formulas', icon: 'menu_book' },
   { path: '/plans', label: 'Plans', icon: 'event' },
-  { path: '/batches', label: 'Batch log', icon: 'list_alt' },
-  { path: '/curing', label: 'Curing now', icon: 'hourglass_top' },
   { path: '/equipment', label: 'Equipment', icon: 'kitchen' },
   { path: '/reports', label: 'HACCP report', icon: 'fact_check', roles: ['admin', 'reviewer'] },
   { path: '/people', label: 'People', icon: 'group', roles: ['admin'] },
@@ -41,7 +50,6 @@ const ROLE_NAMES: Record<Role, string> = { admin: 'Admin', cook: 'Cook', reviewe
   imports: [
     RouterOutlet,
     RouterLink,
-    RouterLinkActive,
     MatToolbar,
     MatIcon,
     MatMenu,
@@ -81,6 +89,33 @@ export default class Shell {
   protected readonly areas = computed(() => {
     const role = this.person()?.role;
     return AREAS.filter((area) => !area.roles || (role !== undefined && area.roles.includes(role)));
+  });
+
+  /** The address shown, after redirects. */
+  private readonly url = toSignal(
+    this.router.events.pipe(
+      filter((event) => event instanceof NavigationEnd),
+      map((event) => event.urlAfterRedirects),
+    ),
+    { initialValue: this.router.url },
+  );
+  /**
+   * The area the page belongs to: the one whose path holds the address and whose query matches
+   * it, the most particular first — the sign-off queue before the batch log it is a view of.
+   */
+  protected readonly activeArea = computed(() => {
+    const tree = this.router.parseUrl(this.url());
+    const path = `/${tree.root.children['primary']?.segments.map((s) => s.path).join('/') ?? ''}`;
+    const query = tree.queryParams as Record<string, string | undefined>;
+    const fits = (area: Area): boolean =>
+      (path === area.path || path.startsWith(`${area.path}/`)) &&
+      Object.entries(area.query ?? {}).every(([key, value]) => query[key] === value);
+    const weight = (area: Area): number => Object.keys(area.query ?? {}).length;
+    return (
+      this.areas()
+        .filter(fits)
+        .sort((a, b) => weight(b) - weight(a))[0] ?? null
+    );
   });
 
   protected async changePassword(): Promise<void> {
