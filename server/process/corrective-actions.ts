@@ -6,6 +6,7 @@ import type { ChangeOptions } from '../batches/batch.ts';
 import { insertRow } from '../db/insert-row.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import type { ProcessDeps } from './judge-and-open.ts';
+import { refuseOnReleased } from './released.ts';
 
 /** What happened to the product after a deviation. source: 9 CFR 417.3(a)(4) (product disposition) */
 export const DISPOSITIONS: readonly Disposition[] = [
@@ -65,6 +66,7 @@ function gramsOf(request: ActionRequest): string | null {
 
 interface DeviationAt {
   id: number;
+  batch_id: number | null;
   /** What it concerns: the batch's lot code, or the piece of equipment's name. */
   subject: string | null;
   standing: number | null;
@@ -73,7 +75,7 @@ interface DeviationAt {
 /**
  * Records the corrective action that closes a deviation. A second action replaces the standing
  * one (which stays, as an earlier action) and needs a reason.
- * @throws AppError 404 no such deviation; 422 bad-action (a blank text, no amount), reason-needed
+ * @throws AppError 404 no such deviation; 409 released (its batch); 422 bad-action (a blank text, no amount), reason-needed
  */
 export async function recordAction(
   deps: ProcessDeps,
@@ -89,7 +91,7 @@ export async function recordAction(
   const at = by.at ?? new Date().toISOString();
   return deps.db.write(async (t) => {
     const [deviation] = await deps.db.sequelize.query<DeviationAt>(
-      `SELECT d.id, COALESCE(b.lot_code, e.name) AS subject,
+      `SELECT d.id, d.batch_id, COALESCE(b.lot_code, e.name) AS subject,
          (SELECT a.id FROM corrective_actions a WHERE a.deviation_id = d.id AND NOT EXISTS
            (SELECT 1 FROM corrective_actions c WHERE c.corrects_id = a.id)) AS standing
        FROM deviations d LEFT JOIN batches b ON b.id = d.batch_id
@@ -97,6 +99,8 @@ export async function recordAction(
       { replacements: [deviationId], type: QueryTypes.SELECT, transaction: t },
     );
     if (!deviation?.subject) throw notFound(`no deviation ${deviationId}`);
+    if (deviation.batch_id !== null)
+      await refuseOnReleased(deps.db, t, { id: deviation.batch_id, lotCode: deviation.subject });
     const reason = request.reason?.trim() || null;
     if (deviation.standing !== null && !reason)
       throw new AppError(

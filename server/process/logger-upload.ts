@@ -11,6 +11,7 @@ import { judgeAndOpen, type ProcessDeps } from './judge-and-open.ts';
 import { kitchenTimeZone } from './kitchen-clock.ts';
 import { controlNamed, readingTime, refuseReadingsOn } from './reading-input.ts';
 import { insertReadings } from './reading-writes.ts';
+import { refuseOnReleased } from './released.ts';
 
 /** The largest logger file read: a day at one point a minute is about 40 kB. common practice, no source */
 export const MAX_LOG_BYTES = 2 * 1024 * 1024;
@@ -52,7 +53,7 @@ function pointsOf(text: string): LoggedPoint[] {
 /**
  * A data logger's CSV export stored as readings of one control, all or nothing: any line that
  * cannot be read refuses the whole file, naming the line. Judged once at the end.
- * @throws AppError 404 no such lot; 409 not-started or discarded; 413 too-large; 422 bad-log,
+ * @throws AppError 404 no such lot; 409 not-started, discarded or released; 413 too-large; 422 bad-log,
  *   unknown-control, bad-time, not-temperature
  */
 export async function uploadReadings(
@@ -88,6 +89,7 @@ export async function uploadReadings(
   return deps.db.write(async (t) => {
     const batch = await deps.process.batch(lot, t);
     refuseReadingsOn(lot, batch.status);
+    await refuseOnReleased(deps.db, t, batch);
     await insertReadings(deps, t, batch.id, readings, by);
     const judgement = await judgeAndOpen(deps, t, batch, controls, now, by);
     await deps.audit.append(
