@@ -149,7 +149,7 @@ export async function uploadReadings(
     if (fresh.length === 0)
       return { added: 0, alreadyStored, deviations: [], message: uploadWords(0, alreadyStored) };
     await insertReadings(deps, t, batch.id, fresh, by);
-    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by);
+    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by, 'readings');
     await deps.audit.append(
       {
         actor: by.actor,

@@ -125,7 +125,7 @@ export async function addReading(
       [{ ...parsed, control: control.id, at, source }],
       by,
     );
-    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by);
+    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by, 'readings');
     await deps.audit.append(
       {
         actor: by.actor,
@@ -210,7 +210,7 @@ export async function correctReading(
       [{ ...parsed, control: control.id, at, source, correctsId: readingId, reason }],
       by,
     );
-    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by);
+    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by, 'readings');
     await deps.audit.append(
       {
         actor: by.actor,
