@@ -45,10 +45,7 @@ export function readingsCommand(io: Io): Command {
         throw error;
       }
       if (options.json) io.out(`${JSON.stringify(stored, null, 2)}\n`);
-      else
-        io.out(
-          `Stored ${stored.added} reading(s) from ${file} at ${control} of lot ${lot.toUpperCase()}.\n`,
-        );
+      else io.out(`${file}, ${control} of lot ${lot.toUpperCase()}: ${stored.message}\n`);
       reportDeviations(io, stored.deviations, !!options.json);
     });
 }

@@ -29,7 +29,11 @@ export interface PlanToRecord {
 /** What a logger file's upload stored: how many readings, and the deviations they opened. */
 export interface UploadedReadings {
   readonly added: number;
+  /** Points of the file the batch had from a logger already: not stored again. */
+  readonly alreadyStored: number;
   readonly deviations: readonly Deviation[];
+  /** What was stored, in words. */
+  readonly message: string;
 }
 
 /** The period of a report: days YYYY-MM-DD, both optional (the last 30 days by default). */

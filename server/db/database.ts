@@ -14,6 +14,7 @@ import * as startedCalculation from './migrations/008-started-calculation.ts';
 import * as processAlertPrefs from './migrations/009-process-alert-prefs.ts';
 import * as plans from './migrations/010-plans.ts';
 import * as reviewQueueIndexes from './migrations/011-review-queue-indexes.ts';
+import * as unaffectedDisposition from './migrations/012-unaffected-disposition.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -37,6 +38,7 @@ const MIGRATIONS = [
   processAlertPrefs,
   plans,
   reviewQueueIndexes,
+  unaffectedDisposition,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

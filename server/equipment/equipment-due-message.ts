@@ -2,6 +2,7 @@ import type { Equipment } from '../../shared/api/equipment.ts';
 import { composeMessage, standardFooter, type MessageContent } from '../mail/mail-message.ts';
 import { kitchenTimeZone } from '../process/kitchen-clock.ts';
 import { shortMomentWords } from '../../shared/presentation/date-words.ts';
+import { PROCESS_ALERT_REASON } from '../process/process-alert-message.ts';
 
 /** Everything an equipment-due reminder's words depend on. */
 export interface EquipmentDueFacts {
@@ -38,10 +39,6 @@ export function equipmentDueMessage(facts: EquipmentDueFacts): MessageContent {
         : 'Take the reading and record it: out of the limit, it opens a deviation for a corrective action.',
     ],
     action: { label: 'Open the equipment log', url: facts.equipmentUrl },
-    footer: standardFooter(
-      facts.kitchen,
-      facts.consoleUrl,
-      'You get it because your reminder choices include overdue reminders.',
-    ),
+    footer: standardFooter(facts.kitchen, facts.consoleUrl, PROCESS_ALERT_REASON),
   });
 }

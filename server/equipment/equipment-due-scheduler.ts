@@ -13,9 +13,6 @@ import { insertRow } from '../db/insert-row.ts';
  */
 export const DUE_GRACE_MS = 30 * 60_000;
 
-/** The reminder choice these go to: a reading not taken on time is overdue. */
-const CHOICE = 'overdue';
-
 /** How the job runs; tests move its clock. */
 export interface EquipmentDueOptions {
   /** The clock; the context's by default. */
@@ -43,8 +40,8 @@ export const dueKey = (equipment: Pick<Equipment, 'id' | 'kind'>, dueAt: string)
  * and every few minutes, for each piece in use whose next reading (or ice-point check) fell due
  * more than {@link DUE_GRACE_MS} ago. Each is decided in one write transaction: its
  * process_alerts_sent row (kind 'equipment-due', UNIQUE key naming the equipment and the time it
- * fell due), a message to each person whose choices include overdue reminders, an audit entry. A
- * crash before the commit leaves nothing; after it, the row keeps any run from sending it again.
+ * fell due), a message to each person who gets process alerts (as a batch's alerts go), an audit
+ * entry. A crash before the commit leaves nothing; after it, the row keeps any run from sending it again.
  */
 export class EquipmentDueScheduler extends PeriodicRun<SentEquipmentDue[]> {
   private readonly now: () => Date;
@@ -82,7 +79,7 @@ export class EquipmentDueScheduler extends PeriodicRun<SentEquipmentDue[]> {
     const equipment = await viewOf(this.rows, row, now, t);
     const dueAt = equipment.nextDue;
     if (!dueAt || !isChased(dueAt, now)) return undefined;
-    const recipients = await reminderPrefs.recipients(t, CHOICE);
+    const recipients = await reminderPrefs.processAlertRecipients(t);
     const inserted = await insertRow(
       db,
       t,
@@ -104,8 +101,8 @@ export class EquipmentDueScheduler extends PeriodicRun<SentEquipmentDue[]> {
         ...content,
         to: { address: person.email, name: person.displayName },
         personId: person.id,
-        // The outbox's kinds are the reminder choices; this one is sent as an overdue reminder.
-        kind: `reminder-${CHOICE}`,
+        // A reading or check of the kitchen's equipment not taken on time is a process alert.
+        kind: 'process-alert',
         related: equipment.name,
       });
     }

@@ -1,4 +1,4 @@
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import type { Deviation, Disposition } from '../../shared/api/process-record.ts';
 import { parseMass } from '../../shared/units/mass.ts';
 import { QuantityError } from '../../shared/units/quantity-error.ts';
@@ -6,6 +6,7 @@ import type { ChangeOptions } from '../batches/batch.ts';
 import { insertRow } from '../db/insert-row.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import type { ProcessDeps } from './judge-and-open.ts';
+import { refuseOnReleased } from './released.ts';
 
 /** What happened to the product after a deviation. source: 9 CFR 417.3(a)(4) (product disposition) */
 export const DISPOSITIONS: readonly Disposition[] = [
@@ -63,8 +64,109 @@ function gramsOf(request: ActionRequest): string | null {
   }
 }
 
+/** One corrective action to write: what it closes, the four things, what it replaces. */
+interface NewAction {
+  readonly deviationId: number;
+  /** The lot code or equipment name, for the audit log. */
+  readonly subject: string;
+  readonly cause: string;
+  readonly restored: string;
+  readonly prevention: string;
+  readonly disposition: Disposition;
+  readonly grams: string | null;
+  /** The standing action it replaces, and why; null for the first. */
+  readonly replaces: number | null;
+  readonly reason: string | null;
+}
+
+/**
+ * Writes a corrective action and its audit entry in the caller's write. `by` is null when the
+ * server records it (a deadline the readings showed was met).
+ */
+async function writeAction(
+  deps: ProcessDeps,
+  t: Transaction,
+  action: NewAction,
+  by: ChangeOptions | null,
+  at: string,
+): Promise<void> {
+  const { lastId } = await insertRow(
+    deps.db,
+    t,
+    `INSERT INTO corrective_actions (deviation_id, cause, restored, prevention, disposition,
+       disposition_grams, recorded_by, recorded_at, corrects_id, reason)
+     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+    [
+      action.deviationId,
+      action.cause,
+      action.restored,
+      action.prevention,
+      action.disposition,
+      action.grams,
+      by?.actor.id ?? null,
+      at,
+      action.replaces,
+      action.replaces === null ? null : action.reason,
+    ],
+  );
+  await deps.audit.append(
+    {
+      actor: by?.actor ?? null,
+      action: 'corrective-action',
+      subject: action.subject,
+      detail: {
+        deviation: action.deviationId,
+        action: lastId,
+        disposition: action.disposition,
+        ...(action.grams === null ? {} : { grams: action.grams }),
+        ...(action.replaces === null ? {} : { replaces: action.replaces, reason: action.reason }),
+      },
+      ...(by?.ip === undefined ? {} : { ip: by.ip }),
+    },
+    t,
+  );
+}
+
+/**
+ * Closes, in the caller's write, a deadline deviation that the readings as they now stand show
+ * was not missed: readings taken before the deadline were entered after it, and the deviation was
+ * opened on the record as it was then. It stays on the record, closed by the server with the
+ * reason and the product marked unaffected; nothing is deleted.
+ */
+export async function closeAsMet(
+  deps: ProcessDeps,
+  t: Transaction,
+  deviation: { readonly id: number; readonly subject: string; readonly key: string },
+  control: { readonly title: string },
+  at: string,
+): Promise<void> {
+  // A cooling deadline's key ends in its stage: "batch 12/chill/stage-1".
+  const stage = /\/stage-(\d+)$/.exec(deviation.key)?.[1];
+  const what = stage ? `stage ${stage} of ${control.title}` : control.title;
+  await writeAction(
+    deps,
+    t,
+    {
+      deviationId: deviation.id,
+      subject: deviation.subject,
+      cause: `Readings of ${control.title} taken before the deadline were entered after it had passed; the deviation was opened on the record as it stood then.`,
+      restored: `The readings as they now stand show ${what} reached by its deadline.`,
+      // source: 9 CFR 417.5(b): each entry on a HACCP record is made at the time the event occurs
+      prevention:
+        'Enter each reading when it is taken, so the record shows it as the work goes on.',
+      disposition: 'unaffected',
+      grams: null,
+      replaces: null,
+      reason: null,
+    },
+    null,
+    at,
+  );
+}
+
 interface DeviationAt {
   id: number;
+  batch_id: number | null;
   /** What it concerns: the batch's lot code, or the piece of equipment's name. */
   subject: string | null;
   standing: number | null;
@@ -73,7 +175,7 @@ interface DeviationAt {
 /**
  * Records the corrective action that closes a deviation. A second action replaces the standing
  * one (which stays, as an earlier action) and needs a reason.
- * @throws AppError 404 no such deviation; 422 bad-action (a blank text, no amount), reason-needed
+ * @throws AppError 404 no such deviation; 409 released (its batch); 422 bad-action (a blank text, no amount), reason-needed
  */
 export async function recordAction(
   deps: ProcessDeps,
@@ -89,7 +191,7 @@ export async function recordAction(
   const at = by.at ?? new Date().toISOString();
   return deps.db.write(async (t) => {
     const [deviation] = await deps.db.sequelize.query<DeviationAt>(
-      `SELECT d.id, COALESCE(b.lot_code, e.name) AS subject,
+      `SELECT d.id, d.batch_id, COALESCE(b.lot_code, e.name) AS subject,
          (SELECT a.id FROM corrective_actions a WHERE a.deviation_id = d.id AND NOT EXISTS
            (SELECT 1 FROM corrective_actions c WHERE c.corrects_id = a.id)) AS standing
        FROM deviations d LEFT JOIN batches b ON b.id = d.batch_id
@@ -97,6 +199,8 @@ export async function recordAction(
       { replacements: [deviationId], type: QueryTypes.SELECT, transaction: t },
     );
     if (!deviation?.subject) throw notFound(`no deviation ${deviationId}`);
+    if (deviation.batch_id !== null)
+      await refuseOnReleased(deps.db, t, { id: deviation.batch_id, lotCode: deviation.subject });
     const reason = request.reason?.trim() || null;
     if (deviation.standing !== null && !reason)
       throw new AppError(
@@ -105,40 +209,22 @@ export async function recordAction(
         'this deviation has a corrective action already; say why it is replaced',
         [{ field: 'reason', message: 'is needed to replace a corrective action' }],
       );
-    const { lastId: actionId } = await insertRow(
-      deps.db,
+    await writeAction(
+      deps,
       t,
-      `INSERT INTO corrective_actions (deviation_id, cause, restored, prevention, disposition,
-         disposition_grams, recorded_by, recorded_at, corrects_id, reason)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
-      [
-        deviationId,
-        request.cause.trim(),
-        request.restored.trim(),
-        request.prevention.trim(),
-        request.disposition,
-        grams,
-        by.actor.id,
-        at,
-        deviation.standing,
-        deviation.standing === null ? null : reason,
-      ],
-    );
-    await deps.audit.append(
       {
-        actor: by.actor,
-        action: 'corrective-action',
+        deviationId,
         subject: deviation.subject,
-        detail: {
-          deviation: deviationId,
-          action: actionId,
-          disposition: request.disposition,
-          ...(grams === null ? {} : { grams }),
-          ...(deviation.standing === null ? {} : { replaces: deviation.standing, reason }),
-        },
-        ...(by.ip === undefined ? {} : { ip: by.ip }),
+        cause: request.cause.trim(),
+        restored: request.restored.trim(),
+        prevention: request.prevention.trim(),
+        disposition: request.disposition,
+        grams,
+        replaces: deviation.standing,
+        reason,
       },
-      t,
+      by,
+      at,
     );
     const { key: _key, ...closed } = (await deps.process.deviation(deviationId, t))!;
     return closed;

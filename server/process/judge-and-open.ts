@@ -4,8 +4,9 @@ import type { ResolvedControl } from '../../shared/process/control-types.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { Database } from '../db/database.ts';
+import { closeAsMet } from './corrective-actions.ts';
 import { openDeviation } from './deviation-writes.ts';
-import { deviationsToOpen, judgeBatch } from './judge-batch.ts';
+import { deadlinesNowMet, deviationsToOpen, judgeBatch, type DeadlinesBy } from './judge-batch.ts';
 import { kitchenClock } from './kitchen-clock.ts';
 import type { ProcessBatch, ProcessRepository } from './process-repository.ts';
 
@@ -27,7 +28,11 @@ export interface Judgement {
 /**
  * Inside the caller's write: judges every control of the batch on what the transaction sees, at
  * `at`, and opens a deviation for each miss not opened before (by anyone, ever: the dedupe key).
+ * A deadline deviation still open that the readings now show was met (readings taken in time,
+ * entered after the deadline) is closed by the server with the reason, never deleted.
  * @param by who caused the judgement; null when the server's deadline scan found the miss
+ * @param deadlines 'readings' when readings were written: a deadline is then missed only on a
+ *   reading taken after it, so readings entered late are judged by the time they were taken
  */
 export async function judgeAndOpen(
   deps: ProcessDeps,
@@ -36,13 +41,23 @@ export async function judgeAndOpen(
   controls: readonly ResolvedControl[],
   at: string,
   by: ChangeOptions | null,
+  deadlines: DeadlinesBy = 'clock',
 ): Promise<Judgement> {
   const readings = await deps.process.readings(batch.id, t);
   const judged = judgeBatch(controls, readings, batch.status, kitchenClock(at));
   const opened: Judgement['opened'] = [];
-  for (const deviation of deviationsToOpen(batch, judged)) {
+  for (const deviation of deviationsToOpen(batch, judged, deadlines)) {
     const id = await openDeviation(deps.db, deps.audit, t, { ...deviation, openedAt: at }, by);
     if (id !== null) opened.push({ id, control: deviation.control });
   }
+  const deviations = await deps.process.deviations(batch.id, t);
+  for (const { deviation, control } of deadlinesNowMet(batch.id, judged, deviations))
+    await closeAsMet(
+      deps,
+      t,
+      { id: deviation.id, subject: batch.lotCode, key: deviation.key },
+      control.control,
+      at,
+    );
   return { controls: judged, readings, opened };
 }

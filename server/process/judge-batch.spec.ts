@@ -2,7 +2,13 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { Reading } from '../../shared/api/process-record.ts';
 import { resolveControl } from '../../shared/process/resolve-control.ts';
-import { controlClosed, deviationsToOpen, judgeBatch, missKey } from './judge-batch.ts';
+import {
+  controlClosed,
+  deadlinesNowMet,
+  deviationsToOpen,
+  judgeBatch,
+  missKey,
+} from './judge-batch.ts';
 
 const COOK = resolveControl({
   id: 'cook',
@@ -18,6 +24,13 @@ const HOLD = resolveControl({
   measure: 'internal-temperature',
   rule: 'cold-holding',
   every: '1 h',
+});
+const CHILL = resolveControl({
+  id: 'chill',
+  title: 'Chilling',
+  step: 'chill',
+  measure: 'internal-temperature',
+  rule: 'fsis-cooling-option-1',
 });
 const CLOCK = { now: '2026-03-02T18:00:00.000Z', timeZone: 'UTC' };
 
@@ -101,5 +114,40 @@ describe('judging a batch', () => {
     assert.equal(controlClosed(12, judged[1]!, new Set([key])), true);
     const waiting = judgeBatch([COOK, HOLD], [hot], 'done', CLOCK)[1]!;
     assert.equal(controlClosed(12, waiting, new Set()), false);
+  });
+
+  // source: FSIS Appendix B (1999) option 1: 54.4 °C (130 °F) to 26.7 °C (80 °F) within 1.5 h
+  const cooling = [
+    reading('chill', '2026-03-02T12:00:00.000Z', '55'),
+    reading('chill', '2026-03-02T12:30:00.000Z', '40'),
+  ];
+
+  it('opens a deadline miss on the readings only once one was taken after the deadline', () => {
+    const judged = judgeBatch([CHILL], cooling, 'in-progress', CLOCK);
+    assert.equal(judged[0]!.state.misses[0]!.kind, 'deadline', 'missed at the clock');
+    assert.deepEqual(deviationsToOpen({ id: 1, lotCode: 'L' }, judged, 'readings'), []);
+    assert.equal(deviationsToOpen({ id: 1, lotCode: 'L' }, judged, 'clock').length, 1);
+    const after = [...cooling, reading('chill', '2026-03-02T13:40:00.000Z', '30')];
+    const shown = judgeBatch([CHILL], after, 'in-progress', CLOCK);
+    assert.deepEqual(
+      deviationsToOpen({ id: 1, lotCode: 'L' }, shown, 'readings').map((d) => d.kind),
+      ['deadline'],
+    );
+  });
+
+  it('finds an open deadline deviation the readings now show was met, and keeps a late one', () => {
+    const key = 'batch 1/chill/stage-1';
+    const open = { kind: 'deadline' as const, control: 'chill', action: null, key };
+    const inTime = [...cooling, reading('chill', '2026-03-02T13:15:00.000Z', '26')];
+    const met = judgeBatch([CHILL], inTime, 'in-progress', CLOCK);
+    assert.deepEqual(
+      deadlinesNowMet(1, met, [open]).map((m) => m.deviation.key),
+      [key],
+    );
+    const late = [...cooling, reading('chill', '2026-03-02T13:45:00.000Z', '26')];
+    assert.deepEqual(
+      deadlinesNowMet(1, judgeBatch([CHILL], late, 'in-progress', CLOCK), [open]),
+      [],
+    );
   });
 });

@@ -7,6 +7,7 @@ import type {
 } from '../../shared/process/control-types.ts';
 import { evaluateControl, type Clock } from '../../shared/process/evaluate-control.ts';
 import type { DeviationToOpen } from './deviation-writes.ts';
+import type { KeyedDeviation } from './process-repository.ts';
 
 /** Statuses past every step: the product is finished or gone. */
 const PAST_EVERY_STEP: readonly BatchStatus[] = ['done', 'discarded'];
@@ -46,6 +47,13 @@ export function judgeBatch(
   });
 }
 
+/**
+ * What opens a deadline's miss: the clock passing it with no reading (the deadline scan, marking
+ * a batch done, verifying it), or only the readings (a reading, a correction or a logger file
+ * written: see {@link shownByReadings}).
+ */
+export type DeadlinesBy = 'clock' | 'readings';
+
 /** The dedupe key of one miss: `batch <id>/<control>/<miss key>`, opened once across servers. */
 export function missKey(batchId: number, control: string, miss: ControlMiss): string {
   return `batch ${batchId}/${control}/${miss.key}`;
@@ -58,21 +66,62 @@ export function missKey(batchId: number, control: string, miss: ControlMiss): st
 export function deviationsToOpen(
   batch: { readonly id: number; readonly lotCode: string },
   judged: readonly BatchControl[],
+  deadlines: DeadlinesBy = 'clock',
 ): DeviationToOpen[] {
   return judged.flatMap(({ control, state, readings }) =>
-    state.misses.map((miss) => ({
-      batchId: batch.id,
-      subject: batch.lotCode,
-      control: control.id,
-      kind: miss.kind,
-      what: `${control.title}: ${miss.what}`,
-      readingId:
-        miss.kind === 'reading'
-          ? (readings.find((r) => r.correctedBy === null && r.at === miss.at)?.id ?? null)
-          : null,
-      key: missKey(batch.id, control.id, miss),
-    })),
+    state.misses
+      .filter((miss) => deadlines === 'clock' || shownByReadings(miss, readings))
+      .map((miss) => ({
+        batchId: batch.id,
+        subject: batch.lotCode,
+        control: control.id,
+        kind: miss.kind,
+        what: `${control.title}: ${miss.what}`,
+        readingId:
+          miss.kind === 'reading'
+            ? (readings.find((r) => r.correctedBy === null && r.at === miss.at)?.id ?? null)
+            : null,
+        key: missKey(batch.id, control.id, miss),
+      })),
   );
+}
+
+/**
+ * Whether a miss is shown by the readings themselves: any but a deadline; a deadline only when a
+ * standing reading of the control was taken after it (and none reached the stage by then). A
+ * reading entered late is judged by the time it was taken: the readings typed in after a deadline,
+ * one by one, do not miss it before the one taken after it (or the one that reached it) is in.
+ */
+export function shownByReadings(miss: ControlMiss, readings: readonly Reading[]): boolean {
+  if (miss.kind !== 'deadline') return true;
+  const deadline = Date.parse(miss.at);
+  return readings.some((r) => r.correctedBy === null && Date.parse(r.at) > deadline);
+}
+
+/**
+ * The open deadline deviations of a batch that its readings as they now stand no longer miss:
+ * readings taken in time came in after the deadline had passed. A stage reached late is still
+ * missed (the same key, now a reading's miss): its deviation stands.
+ * @param deviations the batch's deviations, with their dedupe keys
+ */
+export function deadlinesNowMet<
+  D extends Pick<KeyedDeviation, 'kind' | 'control' | 'action' | 'key'>,
+>(
+  batchId: number,
+  judged: readonly BatchControl[],
+  deviations: readonly D[],
+): { deviation: D; control: BatchControl }[] {
+  const missed = new Set(
+    judged.flatMap(({ control, state }) =>
+      state.misses.map((miss) => missKey(batchId, control.id, miss)),
+    ),
+  );
+  return deviations.flatMap((deviation) => {
+    if (deviation.kind !== 'deadline' || deviation.action !== null || missed.has(deviation.key))
+      return [];
+    const control = judged.find((c) => c.control.id === deviation.control);
+    return control ? [{ deviation, control }] : [];
+  });
 }
 
 /** The limit types judged reading by reading: in limit so far is all they can ever be. */

@@ -47,6 +47,10 @@ function paragraphsOf({ alert, now }: ProcessAlertFacts): string[] {
   }
 }
 
+/** Why a person gets a process alert, as its footer says. */
+export const PROCESS_ALERT_REASON =
+  'You get it because your choices include process alerts (readings due, cooling deadlines, deviations).';
+
 /** A process alert's words, plain text and HTML. */
 export function processAlertMessage(facts: ProcessAlertFacts): MessageContent {
   return composeMessage({
@@ -57,10 +61,6 @@ export function processAlertMessage(facts: ProcessAlertFacts): MessageContent {
       label: facts.alert.batchId === null ? 'Open Larderbook' : 'Open the batch',
       url: facts.url,
     },
-    footer: standardFooter(
-      facts.kitchen,
-      facts.consoleUrl,
-      'You get it because your choices include process alerts (readings due, cooling deadlines, deviations).',
-    ),
+    footer: standardFooter(facts.kitchen, facts.consoleUrl, PROCESS_ALERT_REASON),
   });
 }

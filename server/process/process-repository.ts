@@ -272,7 +272,8 @@ export class ProcessRepository {
       ...(await weighedPart(this.db, this.controls.history, batch.id, weighings, t)),
       deviations: deviations.map(({ key: _key, ...deviation }) => deviation),
       onHold: deviations.some((d) => d.action === null),
-      nonconforming: deviations.length > 0,
+      // A deadline the readings later showed was met is no miss: its deviation stays, closed.
+      nonconforming: deviations.some((d) => d.action?.disposition !== 'unaffected'),
       verification,
       plannedBy: personRef(row.planned_by, row.planner_name),
       startedBy: personRef(row.started_by, row.starter_name),

@@ -113,7 +113,8 @@ export function batchProcessRouter(context: AppContext): Router {
         String(res.locals.loggerText),
         changeBy(req, context),
       );
-      res.status(201).json(answer);
+      // Nothing new (the same file again) is no error, but nothing was created either.
+      res.status(answer.added > 0 ? 201 : 200).json(answer);
     },
   );
 

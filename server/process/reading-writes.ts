@@ -8,6 +8,7 @@ import type { ChangeOptions } from '../batches/batch.ts';
 import { insertRow } from '../db/insert-row.ts';
 import { AppError, conflict, notFound } from '../http/app-error.ts';
 import { judgeAndOpen, type Judgement, type ProcessDeps } from './judge-and-open.ts';
+import { refuseOnReleased } from './released.ts';
 import type { ProcessBatch } from './process-repository.ts';
 import {
   controlNamed,
@@ -97,7 +98,7 @@ async function answerOf(
 /**
  * Records one reading at a batch's control, judges the batch again at once and opens a
  * deviation for each new miss, all in one write.
- * @throws AppError 404 no such lot; 409 not-started or discarded; 422 unknown-control,
+ * @throws AppError 404 no such lot; 409 not-started, discarded or released; 422 unknown-control,
  *   bad-reading, bad-time
  */
 export async function addReading(
@@ -116,6 +117,7 @@ export async function addReading(
   return deps.db.write(async (t) => {
     const batch = await deps.process.batch(lot, t);
     refuseReadingsOn(lot, batch.status);
+    await refuseOnReleased(deps.db, t, batch);
     const id = await insertReadings(
       deps,
       t,
@@ -123,7 +125,7 @@ export async function addReading(
       [{ ...parsed, control: control.id, at, source }],
       by,
     );
-    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by);
+    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by, 'readings');
     await deps.audit.append(
       {
         actor: by.actor,
@@ -158,7 +160,8 @@ interface StoredReading {
 /**
  * Corrects a reading: a new reading replaces it, the old one stays (marked correctedBy). A reading
  * corrected once is not corrected again; its correction is. Judged again at once.
- * @throws AppError 404 no such batch reading; 409 already-corrected; 422 bad-reading, bad-time,
+ * @throws AppError 404 no such batch reading; 409 already-corrected, released; 422 bad-reading,
+ *   bad-time,
  *   reason-needed
  */
 export async function correctReading(
@@ -199,6 +202,7 @@ export async function correctReading(
         [{ correctedBy: current.corrected_by }],
       );
     const batch = await deps.process.batch(old.lot_code, t);
+    await refuseOnReleased(deps.db, t, batch);
     const id = await insertReadings(
       deps,
       t,
@@ -206,7 +210,7 @@ export async function correctReading(
       [{ ...parsed, control: control.id, at, source, correctsId: readingId, reason }],
       by,
     );
-    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by);
+    const judgement = await judgeAndOpen(deps, t, batch, controls, now, by, 'readings');
     await deps.audit.append(
       {
         actor: by.actor,

@@ -18,6 +18,7 @@ import { formulaAtRevision } from '../formulas/formula-at-revision.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
 import { AppError, conflict, notFound } from '../http/app-error.ts';
 import { recordedBatch, type RecordedBatch } from './recorded-batch.ts';
+import { refuseOnReleased } from './released.ts';
 import { batchWeighings, standingWeighings, weighingById } from './weighing-rows.ts';
 import { judgeWeighings } from './weights-verdict.ts';
 
@@ -182,8 +183,8 @@ function stageTime(at: string | undefined, now: string): string {
  * Records lines and a stage weight as weighed, in one write with its audit entry, then judges the
  * batch's standing weights (see judgeWeighings): a line or stage already weighed is corrected, not
  * weighed again.
- * @throws AppError 404 no such lot, 409 'not-started'/'discarded'/'already-weighed', 422
- *   'bad-weighing' naming the field (a name not on the sheet, a stage the formula has not)
+ * @throws AppError 404 no such lot, 409 'not-started'/'discarded'/'released'/'already-weighed',
+ *   422 'bad-weighing' naming the field (a name not on the sheet, a stage the formula has not)
  */
 export async function addWeighings(
   deps: WeighingDeps,
@@ -199,6 +200,7 @@ export async function addWeighings(
     if (batch.formulaRevision !== seen.formulaRevision)
       throw conflict('batch-changed', `batch ${batch.lotCode} changed meanwhile; weigh again`);
     mustBeUnderWay(batch);
+    await refuseOnReleased(deps.db, t, batch);
     const rows = rowsOf(request, batch, formula, at);
     const before = standingWeighings(await batchWeighings(deps.db, batch.id, t));
     for (const row of rows) {
@@ -222,7 +224,7 @@ export async function addWeighings(
 /**
  * Corrects one standing weighing with a new row that names it (corrects_id) and says why; the
  * old row stays. The batch's weights are judged again, as after any weighing.
- * @throws AppError 404 no such weighing, 409 'already-corrected' (correct the newer one)
+ * @throws AppError 404 no such weighing, 409 'already-corrected' (correct the newer one), 'released'
  */
 export async function correctWeighing(
   deps: WeighingDeps,
@@ -250,6 +252,7 @@ export async function correctWeighing(
       );
     const batch = await recordedBatch(deps.db, seen.lotCode, t);
     mustBeUnderWay(batch);
+    await refuseOnReleased(deps.db, t, batch);
     const row: NewRow = {
       kind: old.kind,
       name: old.name,

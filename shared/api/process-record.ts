@@ -126,8 +126,13 @@ export interface Refusal {
   readonly lotCode: string | null;
 }
 
-/** What happened to the product after a deviation (9 CFR 417.3(a)(4)). */
-export type Disposition = 'recooked' | 'rechilled' | 'reworked' | 'diverted' | 'discarded';
+/**
+ * What happened to the product after a deviation (9 CFR 417.3(a)(4)). `unaffected` only closes a
+ * deadline deviation opened before readings taken in time were entered: the server records it,
+ * with the reason, when those readings show the limit was met; a person cannot choose it.
+ */
+export type Disposition =
+  'recooked' | 'rechilled' | 'reworked' | 'diverted' | 'discarded' | 'unaffected';
 
 /** The corrective action that closes a deviation, with the four things 9 CFR 417.3(a) asks. */
 export interface CorrectiveAction extends EntryStamp {
@@ -182,7 +187,11 @@ export interface ProcessRecord {
   readonly deviations: readonly Deviation[];
   /** Open deviations hold the batch: it cannot be marked done or released. */
   readonly onHold: boolean;
-  /** Any deviation ever opened: kept as nonconforming with its disposition, never dropped. */
+  /**
+   * Any deviation ever opened that was a miss: kept as nonconforming with its disposition, never
+   * dropped. A deadline deviation closed as unaffected (the readings, entered late, show it met)
+   * does not count; it stays listed.
+   */
   readonly nonconforming: boolean;
   readonly verification: Verification | null;
   /** Who planned it (recorded it as planned) and who started it, when they differ. */

@@ -2,7 +2,13 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import { EquipmentDueScheduler } from '../../server/equipment/equipment-due-scheduler.ts';
-import { giveDemoAddresses, handClock, localNoon, readOutbox } from '../helpers/mail.ts';
+import {
+  giveDemoAddresses,
+  handClock,
+  localNoon,
+  readMessage,
+  readOutbox,
+} from '../helpers/mail.ts';
 import { startTestServer } from '../helpers/test-server.ts';
 
 const HOUR = 3_600_000;
@@ -13,6 +19,15 @@ describe('equipment due reminders', () => {
     const clock = handClock(localNoon('2024-03-04'));
     const server = await startTestServer(t, {}, { now: clock.now });
     await giveDemoAddresses(server);
+    // Tobin wants no overdue reminders but keeps process alerts; equipment readings are process
+    // alerts, so they follow the second choice.
+    const before = await server.as('tobin').get('/api/people/me/reminders');
+    const choice = await server.as('tobin').request('PUT', '/api/people/me/reminders', {
+      ...before.json.choices,
+      overdue: false,
+      processAlerts: true,
+    });
+    assert.equal(choice.status, 200, choice.text);
     const add = async (body: object): Promise<number> => {
       const added = await server.as('rosa').post('/api/equipment', body);
       assert.equal(added.status, 201, added.text);
@@ -57,19 +72,22 @@ describe('equipment due reminders', () => {
     assert.deepEqual(await run(), []);
     clock.set(new Date(readAt + 4 * HOUR + 30 * MINUTE));
     const due = new Date(readAt + 4 * HOUR).toISOString();
-    // The overdue choice: every role's default (server/reminders/reminder-prefs-repository.ts).
-    assert.deepEqual(await run(), [`Prep cooler ${due} → imke, rosa, tobin`]);
-    assert.equal((await mine()).length, 3);
-    const [message] = await mine();
+    // Process alerts: admins and cooks by default, not reviewers
+    // (server/reminders/reminder-prefs-repository.ts); Tobin by his own choice.
+    assert.deepEqual(await run(), [`Prep cooler ${due} → rosa, tobin`]);
+    assert.equal((await mine()).length, 2);
+    const message = await readMessage(server, (await mine())[0]!.id);
     assert.match(message.subject, /^Overdue: Prep cooler reading, due /);
-    assert.equal(message.kind, 'reminder-overdue');
+    assert.equal(message.kind, 'process-alert');
+    assert.match(message.text, /your choices include process alerts/);
+    assert.doesNotMatch(message.text, /overdue reminders/);
 
     // Later runs, and a restart: not again.
     clock.advance(2 * HOUR);
     assert.deepEqual(await run(), []);
     await server.restart();
     assert.deepEqual(await run(), []);
-    assert.equal((await mine()).length, 3);
+    assert.equal((await mine()).length, 2);
 
     // A reading taken: the next one is due 4 h on, and is chased once in its turn.
     const again = await server.as('tobin').post(`/api/equipment/${cooler}/readings`, {
@@ -78,7 +96,7 @@ describe('equipment due reminders', () => {
     assert.equal(again.status, 201, again.text);
     clock.advance(5 * HOUR);
     const next = new Date(Date.parse(again.json.reading.at) + 4 * HOUR).toISOString();
-    assert.deepEqual(await run(), [`Prep cooler ${next} → imke, rosa, tobin`]);
+    assert.deepEqual(await run(), [`Prep cooler ${next} → rosa, tobin`]);
 
     // The thermometer's week: its check is chased once, then no more.
     clock.set(new Date(Date.parse(check.json.calibration.at) + 168 * HOUR + HOUR));

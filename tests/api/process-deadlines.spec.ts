@@ -1,24 +1,14 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { DeadlineScan } from '../../server/process/deadline-scan.ts';
-import type { HandClock } from '../helpers/mail.ts';
 import {
   at,
   processOf,
   reading,
   recordControlled,
   rowCount,
+  scan,
   startProcessServer,
 } from '../helpers/process-calls.ts';
-import type { TestServer } from '../helpers/test-server.ts';
-
-/** A scan on the server's current context (a new one after a restart), on the test's clock. */
-async function scan(server: TestServer, clock: HandClock) {
-  const scanner = new DeadlineScan(await server.context.records.processRecords(), server.context, {
-    now: clock.now,
-  });
-  return scanner.runOnce();
-}
 
 // source: USDA FSIS, Appendix B, Compliance Guidelines for Cooling Heat-Treated Meat and Poultry
 // Products (Stabilization) (1999), option 1: from 130 °F, 80 °F must be reached within 1.5 hours.

@@ -3,36 +3,13 @@ import { describe, it } from 'node:test';
 import {
   RECHILLED,
   at,
+  cleanRun,
+  move,
   processOf,
   reading,
   recordControlled,
   startProcessServer,
 } from '../helpers/process-calls.ts';
-import type { HandClock } from '../helpers/mail.ts';
-import type { ApiClient } from '../helpers/test-server.ts';
-
-/** Moves a batch along, asserting each move is taken. */
-async function move(client: ApiClient, lot: string, ...statuses: string[]): Promise<void> {
-  for (const to of statuses) {
-    const response = await client.post(`/api/batches/${lot}/status`, { to });
-    assert.equal(response.status, 200, `${to}: ${response.text}`);
-  }
-}
-
-/** Every control of the fixture within its limit, the cool done in time; the clock after it. */
-async function cleanRun(client: ApiClient, lot: string, clock: HandClock): Promise<void> {
-  clock.set(new Date(at(366)));
-  // source: the fixture's smoker limit, 60–80 °C (the kitchen's own)
-  await reading(client, lot, 'smoker', '72 °C', at(0));
-  // source: FSIS Appendix A (1999), 158 °F (70 °C) instant lethality, meat other than poultry
-  await reading(client, lot, 'cook', '159 °F', at(1));
-  // source: FSIS Appendix B (1999) option 1: 130 → 80 °F within 1.5 h, 80 → 40 °F within 5 h
-  await reading(client, lot, 'chill', '130 °F', at(2));
-  await reading(client, lot, 'chill', '80 °F', at(80));
-  await reading(client, lot, 'chill', '40 °F', at(360));
-  // source: FDA Food Code 2022 §3-501.16(A)(2), cold holding at 41 °F or below
-  await reading(client, lot, 'hold', '38 °F', at(365));
-}
 
 describe('hold and release', () => {
   it('should hold a batch with an open deviation from done and verification until its corrective action', async (t) => {

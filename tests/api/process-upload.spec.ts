@@ -34,7 +34,12 @@ describe('uploading a data logger’s file', () => {
     );
     const ms = Date.now() - started;
     assert.equal(response.status, 201, response.text);
-    assert.deepEqual(response.json, { added: 1440, deviations: [] });
+    assert.deepEqual(response.json, {
+      added: 1440,
+      alreadyStored: 0,
+      deviations: [],
+      message: '1,440 readings stored.',
+    });
     const smoker = (await processOf(server, lot)).controls.find((c) => c.control.id === 'smoker')!;
     assert.equal(smoker.readings.length, 1440);
     assert.ok(smoker.readings.every((r) => r.source === 'logger'));
@@ -42,6 +47,71 @@ describe('uploading a data logger’s file', () => {
     const audit = await server.as('rosa').get('/api/audit?action=readings-upload');
     assert.equal(audit.json.events[0].detail.count, 1440);
     t.diagnostic(`1,440 points stored and judged in ${ms} ms`);
+
+    // The same file again: nothing is stored twice, and the answer says so.
+    const again0 = Date.now();
+    const again = await tobin.post(
+      `/api/batches/${lot}/readings/upload?control=smoker`,
+      loggerCsv(values),
+      CSV,
+    );
+    const againMs = Date.now() - again0;
+    assert.equal(again.status, 200, again.text);
+    assert.deepEqual(again.json, {
+      added: 0,
+      alreadyStored: 1440,
+      deviations: [],
+      message: 'Nothing new: all 1,440 readings in this file were stored already.',
+    });
+    assert.equal(
+      (await processOf(server, lot)).controls.find((c) => c.control.id === 'smoker')!.readings
+        .length,
+      1440,
+    );
+    t.diagnostic(`the same 1,440 points found stored already in ${againMs} ms`);
+  });
+
+  it('should store only the new points of a file that overlaps one stored before', async (t) => {
+    const { server, clock } = await startProcessServer(t);
+    const rosa = server.as('rosa');
+    const lot = await recordControlled(rosa);
+    clock.set(new Date(at(60)));
+    // source: the fixture's smoker limit, 60–80 °C (the kitchen's own): 70 °C stays inside
+    const first = await rosa.post(
+      `/api/batches/${lot}/readings/upload?control=smoker`,
+      loggerCsv(Array.from({ length: 10 }, () => '70')),
+      CSV,
+    );
+    assert.equal(first.status, 201, first.text);
+    assert.equal(first.json.added, 10);
+    // Minutes 0–14: the first ten as before, five new; minute 3 read 71 °C, a point of its own.
+    const values = Array.from({ length: 15 }, (_, minute) => (minute === 3 ? '71' : '70'));
+    const second = await rosa.post(
+      `/api/batches/${lot}/readings/upload?control=smoker`,
+      loggerCsv(values),
+      CSV,
+    );
+    assert.equal(second.status, 201, second.text);
+    assert.equal(second.json.added, 6);
+    assert.equal(second.json.alreadyStored, 9);
+    assert.equal(
+      second.json.message,
+      '6 new readings stored; 9 in this file were stored already and were not stored again.',
+    );
+    // The same point typed by hand is not the logger's: the file's point is stored beside it.
+    await reading(rosa, lot, 'smoker', '70', at(20));
+    const third = await rosa.post(
+      `/api/batches/${lot}/readings/upload?control=smoker`,
+      loggerCsv(Array.from({ length: 21 }, () => '70')),
+      CSV,
+    );
+    assert.equal(third.json.added, 6, third.text);
+    assert.equal(await rowCount(server, 'readings'), 10 + 6 + 1 + 6);
+    const audit = await server.as('rosa').get('/api/audit?action=readings-upload');
+    assert.deepEqual(
+      audit.json.events.map((e: { detail: { count: number } }) => e.detail.count),
+      [6, 6, 10],
+    );
   });
 
   it('should refuse a file with a bad line at that line and store nothing', async (t) => {

@@ -75,8 +75,15 @@ describe('larder reading, readings and report', () => {
     assertExit(stored, 0);
     assert.match(
       stored.stdout,
-      new RegExp(`Stored 3 reading\\(s\\) from .*chamber\\.csv at smoker of lot ${lot}`),
+      new RegExp(`chamber\\.csv, smoker of lot ${lot}: 3 readings stored\\.`),
     );
+    // The same file again: nothing stored twice, and no failure.
+    const again = await runLarder(['readings', lot, 'smoker', good], {
+      env: { ...env, TZ: 'UTC' },
+    });
+    assertExit(again, 0);
+    assert.match(again.stdout, /Nothing new: all 3 readings in this file were stored already\./);
+    assert.equal(await rowCount(server, 'readings'), before + 3);
   });
 
   it('should write the report as a PDF for a reviewer, from the server or this machine, and refuse a cook', async (t) => {

@@ -168,6 +168,11 @@ describe('the process record in the console', () => {
     // A released record is closed: no reading is due on it and none is taken.
     assert.equal(await reviewer.getByTestId('control-due').count(), 0);
     assert.equal(await reviewer.getByTestId('reading-form').count(), 0);
+    // Nor is anything on it corrected, weighed or replaced: the server refuses it all.
+    assert.match(await reviewer.getByTestId('released').innerText(), /record is closed/);
+    assert.equal(await reviewer.getByTestId('reading-correct').count(), 0);
+    assert.equal(await reviewer.getByTestId('stage-form').count(), 0);
+    assert.equal(await reviewer.getByRole('button', { name: /Replace the action/ }).count(), 0);
 
     await atWidths(reviewer, async (width) => {
       await shoot(session, reviewer, `process-batch-${width}`);
@@ -190,6 +195,17 @@ describe('the process record in the console', () => {
     assert.equal(await cook.getByTestId('batch-status').innerText(), 'Planned');
     // A marker on the window: a form that reloads the page instead of sending would lose it.
     await cook.evaluate(() => Object.assign(window, { samePage: true }));
+    // Not started, it takes no readings: no entry on its cards, and words that say when.
+    assert.equal(await cook.getByTestId('reading-form').count(), 0, 'no reading entry yet');
+    const wait = cook.getByTestId('readings-wait');
+    assert.match(await wait.innerText(), /Readings start when the batch is started/);
+    assert.match(await wait.innerText(), /Start this batch/);
+    for (const width of [820, 390]) {
+      await cook.setViewportSize({ width, height: width === 390 ? 844 : 1180 });
+      await shoot(session, cook, `process-planned-${width}`);
+      assert.equal(await sideways(cook), 0, `nothing sticks out sideways at ${width} px`);
+    }
+    await cook.setViewportSize(TABLET);
 
     await cook.getByTestId('start-batch').click();
     const dialog = cook.getByTestId('start-dialog');
@@ -213,6 +229,8 @@ describe('the process record in the console', () => {
     // The batch is read again beside its process record: its status follows within moments.
     await cook.getByTestId('batch-status').getByText('In progress').waitFor({ timeout: 2000 });
     assert.equal(await cook.getByTestId('start-batch').count(), 0, 'no second start');
+    await card(cook, 'smoker').getByTestId('reading-form').waitFor();
+    assert.equal(await cook.getByTestId('readings-wait').count(), 0);
     assert.equal(
       await cook.evaluate(() => (window as unknown as { samePage?: boolean }).samePage),
       true,

@@ -2,6 +2,7 @@ import assert from 'node:assert/strict';
 import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { QueryTypes } from 'sequelize';
+import { DeadlineScan } from '../../server/process/deadline-scan.ts';
 import type { ProcessRecord } from '../../shared/api/process-record.ts';
 import { handClock, type HandClock } from './mail.ts';
 import { REPO_ROOT } from './run-larder.ts';
@@ -107,6 +108,37 @@ export async function reading(
   });
   assert.equal(response.status, 201, response.text);
   return response.json;
+}
+
+/** Moves a batch along, asserting each move is taken. */
+export async function move(client: ApiClient, lot: string, ...statuses: string[]): Promise<void> {
+  for (const to of statuses) {
+    const response = await client.post(`/api/batches/${lot}/status`, { to });
+    assert.equal(response.status, 200, `${to}: ${response.text}`);
+  }
+}
+
+/** Every control of the fixture within its limit, the cool done in time; the clock after it. */
+export async function cleanRun(client: ApiClient, lot: string, clock: HandClock): Promise<void> {
+  clock.set(new Date(at(366)));
+  // source: the fixture's smoker limit, 60–80 °C (the kitchen's own)
+  await reading(client, lot, 'smoker', '72 °C', at(0));
+  // source: FSIS Appendix A (1999), 158 °F (70 °C) instant lethality, meat other than poultry
+  await reading(client, lot, 'cook', '159 °F', at(1));
+  // source: FSIS Appendix B (1999) option 1: 130 → 80 °F within 1.5 h, 80 → 40 °F within 5 h
+  await reading(client, lot, 'chill', '130 °F', at(2));
+  await reading(client, lot, 'chill', '80 °F', at(80));
+  await reading(client, lot, 'chill', '40 °F', at(360));
+  // source: FDA Food Code 2022 §3-501.16(A)(2), cold holding at 41 °F or below
+  await reading(client, lot, 'hold', '38 °F', at(365));
+}
+
+/** A deadline scan on the server's current context (a new one after a restart), on the test's clock. */
+export async function scan(server: TestServer, clock: HandClock) {
+  const scanner = new DeadlineScan(await server.context.records.processRecords(), server.context, {
+    now: clock.now,
+  });
+  return scanner.runOnce();
 }
 
 /** The batch's process record as an admin reads it. */

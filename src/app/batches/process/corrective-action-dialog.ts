@@ -63,7 +63,10 @@ export class CorrectiveActionDialog {
   private readonly dialog =
     inject<MatDialogRef<CorrectiveActionDialog, ActionRequest>>(MatDialogRef);
   protected readonly data = inject<ActionDialogData>(MAT_DIALOG_DATA);
-  protected readonly dispositions = Object.entries(DISPOSITION_WORDS) as [Disposition, string][];
+  // Not affected is the server's alone: it closes a deadline the readings later showed was met.
+  protected readonly dispositions = (
+    Object.entries(DISPOSITION_WORDS) as [Disposition, string][]
+  ).filter(([disposition]) => disposition !== 'unaffected');
   private readonly fb = inject(NonNullableFormBuilder);
   protected readonly form = this.fb.group({
     cause: ['', REQUIRED],

@@ -108,13 +108,14 @@ export const STATUS_WORDS: Readonly<Record<ControlStatus, string>> = {
   missed: 'Limit missed',
 };
 
-/** What happened to the product, as the corrective action dialog offers it. */
+/** What happened to the product, in words; the dialog offers all but `unaffected`. */
 export const DISPOSITION_WORDS: Readonly<Record<Disposition, string>> = {
   recooked: 'Re-cooked',
   rechilled: 'Re-chilled',
   reworked: 'Re-worked',
   diverted: 'Diverted to another use',
   discarded: 'Discarded',
+  unaffected: 'Not affected: the readings show the limit was met',
 };
 
 /** The stage weights in the order of the work, with their words. */

@@ -27,6 +27,9 @@ import { clockWords } from '../process-words';
           @if (verified.note) {
             <span class="note">“{{ verified.note }}”</span>
           }
+          <span class="note">
+            The record is closed once released: nothing more is recorded or corrected on it.
+          </span>
         </span>
       </p>
     } @else if (canVerify()) {
