@@ -12,6 +12,7 @@ import * as reminders from './migrations/006-reminders.ts';
 import * as processRecords from './migrations/007-process-records.ts';
 import * as startedCalculation from './migrations/008-started-calculation.ts';
 import * as processAlertPrefs from './migrations/009-process-alert-prefs.ts';
+import * as loggerSummaries from './migrations/010-logger-summaries.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -33,6 +34,7 @@ const MIGRATIONS = [
   processRecords,
   startedCalculation,
   processAlertPrefs,
+  loggerSummaries,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */
