@@ -1,4 +1,5 @@
 import { fontRuns, type FontRun, type FontWeight } from './sheet-fonts.ts';
+import { drawLine, rememberColours, strokeLine, wrapLines, type TextLine } from './sheet-text.ts';
 
 /** The sheet's palette: the console's warm rust, olive and paper tones, in print strength. */
 export const INK = {
@@ -62,11 +63,11 @@ export const BODY = 9.5;
 /** Small print: notes, sources, table headings, points. */
 export const SMALL = BODY - 1.5;
 const LINE_GAP = 1.6;
-/** A text's height in a width, and whether it is one line. */
+/** A text's height in a width, and its lines. */
 interface Measured {
   readonly height: number;
-  /** The width of a text of one line in one font, trailing spaces left out; else undefined. */
-  readonly lineWidth: number | undefined;
+  /** The lines of a text in one font, as pdfkit wraps them; undefined for a text in two. */
+  readonly lines: readonly TextLine[] | undefined;
 }
 /** Texts already measured, by weight, size, width and text: a report repeats its words. */
 const measured = new Map<string, Measured>();
@@ -120,6 +121,7 @@ export class SheetLayout {
     this.top = margins.top;
     this.bottom = height - margins.bottom;
     this.y = doc.y;
+    rememberColours(doc);
     // pdfkit adds a page itself when a text runs past the bottom; both ways start the same.
     doc.on('pageAdded', () => {
       this.y = this.top;
@@ -165,19 +167,16 @@ export class SheetLayout {
     const key = `${weight}|${size}|${width}|${text}`;
     const known = measured.get(key);
     if (known) return known;
-    // Measured in the run's first font: the other subset differs only in a few letters.
     const runs = runsOf(text || ' ', weight);
     const doc = this.doc.font(runs[0].font).fontSize(size);
+    if (runs.length === 1)
+      return remember(measured, key, wrapLines(doc, runs[0].text, width, LINE_GAP));
+    // Measured in the run's first font: the other subset differs only in a few letters.
     const height = doc.heightOfString(runs.map((run) => run.text).join(''), {
       width,
       lineGap: LINE_GAP,
     });
-    const oneLine =
-      runs.length === 1 &&
-      !text.includes('\n') &&
-      height <= doc.currentLineHeight(true) + LINE_GAP + 0.01;
-    const lineWidth = oneLine ? doc.widthOfString(runs[0].text.trimEnd()) : undefined;
-    return remember(measured, key, { height, lineWidth });
+    return remember(measured, key, { height, lines: undefined });
   }
 
   /** Draws text at a place without moving the flow; returns its height. */
@@ -186,14 +185,20 @@ export class SheetLayout {
     const runs = runsOf(text, style.weight ?? 'regular');
     if (!runs.length) return 0;
     const doc = this.doc.fillColor(style.color ?? INK.text).fontSize(style.size ?? BODY);
-    const { height, lineWidth } = this.measured(text, style, width);
-    if (lineWidth !== undefined) {
-      // One line in one font: placed here, without pdfkit wrapping it again word by word.
-      const room = width - lineWidth;
-      const shift = style.align === 'right' ? room : style.align === 'center' ? room / 2 : 0;
-      doc.font(runs[0].font).text(runs[0].text, x + shift, y, {
-        lineBreak: false,
-        lineGap: LINE_GAP,
+    const { height, lines } = this.measured(text, style, width);
+    // A text in one font is placed line by line as pdfkit wrapped it when it was measured,
+    // unless it runs past the foot of the page, where pdfkit would go on on the next one.
+    if (lines && (lines.length === 1 || y + height <= this.bottom)) {
+      doc.font(runs[0].font);
+      const step = doc.currentLineHeight(true) + LINE_GAP;
+      lines.forEach((line, i) => {
+        const shift =
+          style.align === 'right'
+            ? width - line.width
+            : style.align === 'center'
+              ? (width - line.wrapped) / 2
+              : 0;
+        drawLine(doc, line.text, x + shift, y + i * step);
       });
       return height;
     }
@@ -217,7 +222,7 @@ export class SheetLayout {
   /** A thin line across the text area (or from `from` to `to`). */
   rule(color: string = INK.rule, weight = 0.6, from = this.left, to = this.right): void {
     if (this.counting) return;
-    this.doc.moveTo(from, this.y).lineTo(to, this.y).lineWidth(weight).strokeColor(color).stroke();
+    strokeLine(this.doc, [from, this.y], [to, this.y], weight, color);
   }
 
   /** A box to tick, drawn (not a character), with its top-left corner at x, y. */
