@@ -20,6 +20,8 @@ interface PdfkitInternals {
 
 interface PdfkitFont {
   readonly id: string;
+  /** Each word laid out, by its text (pdfkit's EmbeddedFont). */
+  layoutCache: object;
   readonly ascender: number;
   encode(text: string): [string[], GlyphPosition[]];
   ref(): unknown;
@@ -72,6 +74,28 @@ export function wrapLines(
   d.x = x;
   d.y = y;
   return { lines, height };
+}
+
+/** Words laid out in each font (glyphs and advances), shared by every document, by font name. */
+const layouts = new Map<string, { cache: object; documents: number }>();
+/** Documents a font's laid-out words are kept for before they start over. */
+const LAYOUTS_FOR = 50;
+
+/**
+ * Opens each of a document's fonts with the words already laid out in it by earlier documents.
+ * pdfkit lays out (shapes, kerns) every word of a text in the font and keeps the result for the
+ * document only; a report lays out the same words in two documents, and the next report again.
+ * The glyphs and advances of a word depend on the font alone, not on the document.
+ */
+export function shareLayouts(doc: PDFKit.PDFDocument, names: readonly string[]): void {
+  for (const name of names) {
+    let shared = layouts.get(name);
+    if (!shared || shared.documents >= LAYOUTS_FOR)
+      layouts.set(name, (shared = { cache: Object.create(null) as object, documents: 0 }));
+    shared.documents++;
+    doc.font(name);
+    internals(doc)._font.layoutCache = shared.cache;
+  }
 }
 
 /** Glyph runs already encoded, by font (one document's) and text: `[<…> n …] TJ` lines. */
@@ -130,10 +154,19 @@ export function drawLine(doc: PDFKit.PDFDocument, text: string, x: number, y: nu
   page.fonts[font.id] ??= font.ref();
   const size = d._fontSize;
   const top = page.height - y - (font.ascender / 1000) * size;
-  doc.addContent(
+  write(
+    doc,
     `q\n1 0 0 -1 0 ${number(page.height)} cm\nBT\n1 0 0 1 ${number(x)} ${number(top)} Tm\n` +
       `/${font.id} ${number(size)} Tf\n${run}${run ? '\n' : ''}ET\nQ`,
   );
+}
+
+/**
+ * Adds operators to the page's content as bytes, as pdfkit's `addContent` would (a line each),
+ * but converted by Node at once rather than by pdfkit a character at a time. They are ASCII.
+ */
+function write(doc: PDFKit.PDFDocument, operators: string): void {
+  doc.addContent(Buffer.from(`${operators}\n`, 'latin1'));
 }
 
 /**
@@ -183,7 +216,8 @@ export function strokeLine(
   color: string,
 ): void {
   doc.strokeColor(color);
-  doc.addContent(
+  write(
+    doc,
     `${number(x1)} ${number(y1)} m\n${number(x2)} ${number(y2)} l\n${number(weight)} w\nS`,
   );
 }
