@@ -10,6 +10,7 @@ import { addDays } from '../shared/calculation/dates.ts';
 import { READINGS_SQL } from '../server/process/process-repository.ts';
 import {
   BATCH_READINGS_SQL,
+  LOGGER_SUMMARIES_SQL,
   LOGGER_SUMMARY_SQL,
   PERIOD_BATCHES_SQL,
 } from '../server/reports/haccp-queries.ts';
@@ -256,8 +257,17 @@ export async function benchProcessRecords(): Promise<void> {
         PERIOD_BATCHES_SQL,
         [from, to, ...Array<string[]>(5).fill([start, end]).flat()],
       ],
-      ['report: readings of a page of batches', BATCH_READINGS_SQL([1, 2, 3]), [1, 2, 3, 1, 2, 3]],
-      ['report: a page of logger readings summed up', LOGGER_SUMMARY_SQL('batch_id', 3), [1, 2, 3]],
+      [
+        'report: readings of a page of batches',
+        BATCH_READINGS_SQL([1, 2, 3]),
+        [1, 2, 3, 1, 2, 3, 1, 2, 3],
+      ],
+      ['report: a page of logger summaries', LOGGER_SUMMARIES_SQL(3), [1, 2, 3]],
+      [
+        'report: an equipment log summed up',
+        LOGGER_SUMMARY_SQL('equipment_id', 1, true),
+        [start, end, start, end, 1, start, end],
+      ],
     ];
     process.stdout.write('  query plans\n');
     for (const [label, sql, values] of plans) {

@@ -15,6 +15,7 @@ import * as processAlertPrefs from './migrations/009-process-alert-prefs.ts';
 import * as plans from './migrations/010-plans.ts';
 import * as reviewQueueIndexes from './migrations/011-review-queue-indexes.ts';
 import * as unaffectedDisposition from './migrations/012-unaffected-disposition.ts';
+import * as loggerSummaries from './migrations/013-logger-summaries.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -39,6 +40,7 @@ const MIGRATIONS = [
   plans,
   reviewQueueIndexes,
   unaffectedDisposition,
+  loggerSummaries,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

@@ -1,7 +1,8 @@
 import PDFDocument from 'pdfkit';
 import type { UnitSystem } from '../../shared/index.ts';
-import { fontName, fontFile, sheetFonts } from './sheet-fonts.ts';
+import { fontData, fontName, sheetFonts } from './sheet-fonts.ts';
 import { BODY, INK, SheetLayout } from './sheet-layout.ts';
+import { shareLayouts } from './sheet-text.ts';
 
 /** Margins of the area the sheet flows in, points (about 17 mm; the foot leaves room for the footer). */
 const MARGINS = { top: 46, bottom: 58, left: 48, right: 48 };
@@ -42,8 +43,9 @@ function sheetLayout(setup: SheetSetup, bufferPages: boolean, counting: boolean)
     size: setup.units === 'us' ? 'LETTER' : 'A4',
     margins: MARGINS,
     bufferPages,
-    // The sheet's own font from the start, so pdfkit never loads its built-in Helvetica.
-    font: fontFile('regular', 'latin'),
+    // The sheet's own font from the start, so pdfkit never loads its built-in Helvetica. pdfkit
+    // takes a font's data here as in registerFont, though its types name only a file.
+    font: fontData('regular', 'latin') as unknown as string,
     lang: 'en',
     displayTitle: true,
     info: {
@@ -54,7 +56,13 @@ function sheetLayout(setup: SheetSetup, bufferPages: boolean, counting: boolean)
       CreationDate: utcDay(setup.created),
     },
   });
-  for (const { name, file } of sheetFonts()) doc.registerFont(name, file);
+  const fonts = sheetFonts();
+  for (const { name, data } of fonts) doc.registerFont(name, data);
+  shareLayouts(
+    doc,
+    fonts.map((f) => f.name),
+  );
+  doc.font(fontName('regular', 'latin'));
   return new SheetLayout(
     doc,
     (layout) => {

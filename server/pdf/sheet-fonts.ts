@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import { postscriptName, sfntOfWoff } from './woff-font.ts';
 
 /** The two weights a sheet uses: regular text, and semibold for headings and what to weigh. */
 export type FontWeight = 'regular' | 'semibold';
@@ -28,35 +29,45 @@ const SPELLED: Readonly<Record<string, string>> = {
 
 const require = createRequire(import.meta.url);
 
-const files = new Map<string, string>();
+const fonts = new Map<string, { data: Buffer; postscript: string | undefined }>();
 
-/** The font file of one weight and subset, found through the package's own exports (once). */
-export function fontFile(weight: FontWeight, subset: Subset): string {
+/** A font of one weight and subset, found through the package's own exports, unwrapped (once). */
+function font(weight: FontWeight, subset: Subset) {
   const key = `${subset}-${WEIGHT_FILE[weight]}`;
-  let file = files.get(key);
-  if (!file) {
-    file = require.resolve(`@fontsource/fira-sans/files/fira-sans-${key}-normal.woff`);
-    files.set(key, file);
+  let found = fonts.get(key);
+  if (!found) {
+    const file = require.resolve(`@fontsource/fira-sans/files/fira-sans-${key}-normal.woff`);
+    const data = sfntOfWoff(readFileSync(file));
+    found = { data, postscript: postscriptName(data) };
+    fonts.set(key, found);
   }
-  return file;
+  return found;
+}
+
+/**
+ * The font of one weight and subset as a document is given it: the OpenType font inside the
+ * package's WOFF file (woff-font.ts), read and unwrapped once for every sheet.
+ */
+export function fontData(weight: FontWeight, subset: Subset): Buffer {
+  return font(weight, subset).data;
 }
 
 /**
  * The name a font is registered under in a document. The regular Latin font, which the document
- * opens first as its default, goes by its file: pdfkit keeps a font under the name it is first
- * asked for, and asked for under a second name it decodes the whole font again on every call
- * (it finds it equal to the open one and returns before keeping the name) — most of the time of
- * a long report went there.
+ * opens first as its default, goes by the PostScript name inside it, as pdfkit keeps it: pdfkit
+ * keeps a font under the name it is first asked for, and asked for under a second name it opens
+ * the whole font again on every call (it finds it equal to the open one and returns before
+ * keeping the name) — most of the time of a long report went there.
  */
 export function fontName(weight: FontWeight, subset: Subset): string {
-  if (weight === 'regular' && subset === 'latin') return fontFile(weight, subset);
-  return `fira-${WEIGHT_FILE[weight]}-${subset}`;
+  const postscript = weight === 'regular' && subset === 'latin' && font(weight, subset).postscript;
+  return postscript || `fira-${WEIGHT_FILE[weight]}-${subset}`;
 }
 
-/** Every font a sheet may use, to register with a document: name and file. */
-export function sheetFonts(): { name: string; file: string }[] {
+/** Every font a sheet may use, to register with a document: name and data. */
+export function sheetFonts(): { name: string; data: Buffer }[] {
   return (Object.keys(WEIGHT_FILE) as FontWeight[]).flatMap((weight) =>
-    SUBSETS.map((subset) => ({ name: fontName(weight, subset), file: fontFile(weight, subset) })),
+    SUBSETS.map((subset) => ({ name: fontName(weight, subset), data: fontData(weight, subset) })),
   );
 }
 

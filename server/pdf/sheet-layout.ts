@@ -1,4 +1,6 @@
-import { fontRuns, type FontRun, type FontWeight } from './sheet-fonts.ts';
+import type { FontWeight } from './sheet-fonts.ts';
+import { LINE_GAP, measureText, runsOf, type Measured } from './sheet-measure.ts';
+import { drawLine, rememberColours, strokeLine } from './sheet-text.ts';
 
 /** The sheet's palette: the console's warm rust, olive and paper tones, in print strength. */
 export const INK = {
@@ -44,6 +46,13 @@ export interface CellText {
 /** One table cell: text, or a box to tick when the line is weighed. */
 export type Cell = string | CellText | 'tick-box';
 
+/** A table row with its cells' text and style worked out, and its height. */
+interface LaidRow {
+  readonly row: Row;
+  readonly cells: readonly (CellText | undefined)[];
+  readonly height: number;
+}
+
 /** One table row. */
 export interface Row {
   readonly cells: readonly Cell[];
@@ -61,31 +70,6 @@ export interface Row {
 export const BODY = 9.5;
 /** Small print: notes, sources, table headings, points. */
 export const SMALL = BODY - 1.5;
-const LINE_GAP = 1.6;
-/** A text's height in a width, and whether it is one line. */
-interface Measured {
-  readonly height: number;
-  /** The width of a text of one line in one font, trailing spaces left out; else undefined. */
-  readonly lineWidth: number | undefined;
-}
-/** Texts already measured, by weight, size, width and text: a report repeats its words. */
-const measured = new Map<string, Measured>();
-/** Texts already split into font runs, by weight and text. */
-const split = new Map<string, FontRun[]>();
-/** Kept short of growing without end over a long-running server's many sheets. */
-const REMEMBERED_MOST = 20_000;
-
-function remember<T>(map: Map<string, T>, key: string, value: T): T {
-  if (map.size >= REMEMBERED_MOST) map.clear();
-  map.set(key, value);
-  return value;
-}
-
-/** {@link fontRuns}, remembered: a report draws the same words on every batch. */
-function runsOf(text: string, weight: FontWeight): FontRun[] {
-  const key = `${weight}|${text}`;
-  return split.get(key) ?? remember(split, key, fontRuns(text, weight));
-}
 const CELL_PAD_X = 5;
 const CELL_PAD_Y = 4;
 /** The side of a tick box, points. */
@@ -120,6 +104,7 @@ export class SheetLayout {
     this.top = margins.top;
     this.bottom = height - margins.bottom;
     this.y = doc.y;
+    rememberColours(doc);
     // pdfkit adds a page itself when a text runs past the bottom; both ways start the same.
     doc.on('pageAdded', () => {
       this.y = this.top;
@@ -160,24 +145,7 @@ export class SheetLayout {
   }
 
   private measured(text: string, style: TextStyle, width: number): Measured {
-    const weight = style.weight ?? 'regular';
-    const size = style.size ?? BODY;
-    const key = `${weight}|${size}|${width}|${text}`;
-    const known = measured.get(key);
-    if (known) return known;
-    // Measured in the run's first font: the other subset differs only in a few letters.
-    const runs = runsOf(text || ' ', weight);
-    const doc = this.doc.font(runs[0].font).fontSize(size);
-    const height = doc.heightOfString(runs.map((run) => run.text).join(''), {
-      width,
-      lineGap: LINE_GAP,
-    });
-    const oneLine =
-      runs.length === 1 &&
-      !text.includes('\n') &&
-      height <= doc.currentLineHeight(true) + LINE_GAP + 0.01;
-    const lineWidth = oneLine ? doc.widthOfString(runs[0].text.trimEnd()) : undefined;
-    return remember(measured, key, { height, lineWidth });
+    return measureText(this.doc, text, style.weight ?? 'regular', style.size ?? BODY, width);
   }
 
   /** Draws text at a place without moving the flow; returns its height. */
@@ -186,14 +154,20 @@ export class SheetLayout {
     const runs = runsOf(text, style.weight ?? 'regular');
     if (!runs.length) return 0;
     const doc = this.doc.fillColor(style.color ?? INK.text).fontSize(style.size ?? BODY);
-    const { height, lineWidth } = this.measured(text, style, width);
-    if (lineWidth !== undefined) {
-      // One line in one font: placed here, without pdfkit wrapping it again word by word.
-      const room = width - lineWidth;
-      const shift = style.align === 'right' ? room : style.align === 'center' ? room / 2 : 0;
-      doc.font(runs[0].font).text(runs[0].text, x + shift, y, {
-        lineBreak: false,
-        lineGap: LINE_GAP,
+    const { height, lines } = this.measured(text, style, width);
+    // A text in one font is placed line by line as pdfkit wrapped it when it was measured,
+    // unless it runs past the foot of the page, where pdfkit would go on on the next one.
+    if (lines && (lines.length === 1 || y + height <= this.bottom)) {
+      doc.font(runs[0].font);
+      const step = doc.currentLineHeight(true) + LINE_GAP;
+      lines.forEach((line, i) => {
+        const shift =
+          style.align === 'right'
+            ? width - line.width
+            : style.align === 'center'
+              ? (width - line.wrapped) / 2
+              : 0;
+        drawLine(doc, line.text, x + shift, y + i * step);
       });
       return height;
     }
@@ -217,7 +191,7 @@ export class SheetLayout {
   /** A thin line across the text area (or from `from` to `to`). */
   rule(color: string = INK.rule, weight = 0.6, from = this.left, to = this.right): void {
     if (this.counting) return;
-    this.doc.moveTo(from, this.y).lineTo(to, this.y).lineWidth(weight).strokeColor(color).stroke();
+    strokeLine(this.doc, [from, this.y], [to, this.y], weight, color);
   }
 
   /** A box to tick, drawn (not a character), with its top-left corner at x, y. */
@@ -271,23 +245,19 @@ export class SheetLayout {
     return height;
   }
 
-  private rowHeight(row: Row, columns: readonly Column[], edges: readonly number[]): number {
+  /** A row ready to lay out: its cells' text and style, once, and its height. */
+  private laidRow(row: Row, columns: readonly Column[], edges: readonly number[]): LaidRow {
+    const cells = row.cells.map((cell, i) => this.cellText(cell, row, columns[i]));
     let height = TICK;
-    row.cells.forEach((cell, i) => {
-      const content = this.cellText(cell, row, columns[i]);
+    cells.forEach((content, i) => {
       if (!content) return;
       const width = edges[i + 1] - edges[i] - 2 * CELL_PAD_X;
       height = Math.max(height, this.cellBlock(content, 0, 0, width, true));
     });
-    return height + 2 * CELL_PAD_Y;
+    return { row, cells, height: height + 2 * CELL_PAD_Y };
   }
 
-  private drawRow(
-    row: Row,
-    columns: readonly Column[],
-    edges: readonly number[],
-    height: number,
-  ): void {
+  private drawRow({ row, cells, height }: LaidRow, edges: readonly number[]): void {
     const doc = this.doc;
     const [from, to] = [edges[0], edges[edges.length - 1]];
     if (row.fill && !this.counting)
@@ -296,14 +266,13 @@ export class SheetLayout {
         .fillColor(row.fill)
         .fill();
     if (row.ruleAbove) this.rule(INK.text, 0.9, from, to);
-    row.cells.forEach((cell, i) => {
+    cells.forEach((content, i) => {
       const x = edges[i] + CELL_PAD_X;
       const width = edges[i + 1] - edges[i] - 2 * CELL_PAD_X;
-      if (cell === 'tick-box') {
+      if (row.cells[i] === 'tick-box') {
         this.tickBox(edges[i] + (edges[i + 1] - edges[i] - TICK) / 2, this.y + CELL_PAD_Y + 1);
         return;
       }
-      const content = this.cellText(cell, row, columns[i]);
       if (content) this.cellBlock(content, x, this.y + CELL_PAD_Y, width, false);
     });
     this.y += height;
@@ -322,22 +291,21 @@ export class SheetLayout {
     { continued, width = this.width }: { continued?: () => void; width?: number } = {},
   ): void {
     const edges = this.columnEdges(columns, width);
-    const headerHeight = header ? this.rowHeight(header, columns, edges) : 0;
+    const head = header && this.laidRow(header, columns, edges);
     const drawHeader = (): void => {
-      if (header) this.drawRow(header, columns, edges, headerHeight);
+      if (head) this.drawRow(head, edges);
     };
+    const laid = rows.map((row) => this.laidRow(row, columns, edges));
     // The header never stands alone at the foot of a page.
-    this.ensure(headerHeight + (rows[0] ? this.rowHeight(rows[0], columns, edges) : 0));
+    this.ensure((head?.height ?? 0) + (laid[0]?.height ?? 0));
     drawHeader();
-    const heights = rows.map((row) => this.rowHeight(row, columns, edges));
-    rows.forEach((row, i) => {
-      const height = heights[i];
-      const kept = rows[i + 1]?.keepWithPrevious ? heights[i + 1] : 0;
-      if (this.ensure(height + kept)) {
+    laid.forEach((line, i) => {
+      const kept = laid[i + 1]?.row.keepWithPrevious ? laid[i + 1].height : 0;
+      if (this.ensure(line.height + kept)) {
         continued?.();
         drawHeader();
       }
-      this.drawRow(row, columns, edges, height);
+      this.drawRow(line, edges);
     });
   }
 }

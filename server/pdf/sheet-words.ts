@@ -5,9 +5,19 @@ export function dayInWords(day: string): string {
   return dayWords(day);
 }
 
+/** Moments already put in words: a report names the same times again and again. */
+const moments = new Map<string, string>();
+/** Kept short of growing without end over a long-running server's many sheets. */
+const MOMENTS_MOST = 10_000;
+
 /** An ISO timestamp in words in this machine's time zone (the kitchen's), "3 Dec 2026, 14:05". */
 export function momentInWords(moment: string): string {
-  return momentWords(moment);
+  const known = moments.get(moment);
+  if (known !== undefined) return known;
+  const words = momentWords(moment);
+  if (moments.size >= MOMENTS_MOST) moments.clear();
+  moments.set(moment, words);
+  return words;
 }
 
 /** A formula kind as a sheet names it: "Cure". */

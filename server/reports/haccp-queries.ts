@@ -94,7 +94,9 @@ const STANDING_LOGGER = `x.source = 'logger'
  * The logger readings of some batches (or equipment) summed up per control by SQLite, along the
  * readings_batch index: a month's million readings never become objects. The lowest and highest
  * are found on the value as a number (SQLite keeps the text of the row it picked): a summary to
- * read, not a judgement against a limit — the misses are the deviations the judging opened.
+ * read, not a judgement against a limit — the misses are the deviations the judging opened. Among
+ * equal values, the earlier entry's text. A batch's are kept summed up as they are written
+ * (LOGGER_SUMMARIES_SQL); this sums up an equipment log's readings of a period.
  */
 export const LOGGER_SUMMARY_SQL = (owner: 'batch_id' | 'equipment_id', n: number, period = false) =>
   `SELECT x.${owner} AS owner, x.control, COUNT(*) AS count, MIN(x.taken_at) AS first,
@@ -102,27 +104,41 @@ export const LOGGER_SUMMARY_SQL = (owner: 'batch_id' | 'equipment_id', n: number
      (SELECT m.value FROM readings m WHERE m.${owner} = x.${owner} AND m.control = x.control
         AND m.source = 'logger' ${period ? 'AND m.taken_at >= ? AND m.taken_at < ?' : ''}
         AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = m.id)
-        ORDER BY CAST(m.value AS REAL) LIMIT 1) AS min,
+        ORDER BY CAST(m.value AS REAL), m.id LIMIT 1) AS min,
      (SELECT m.value FROM readings m WHERE m.${owner} = x.${owner} AND m.control = x.control
         AND m.source = 'logger' ${period ? 'AND m.taken_at >= ? AND m.taken_at < ?' : ''}
         AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = m.id)
-        ORDER BY CAST(m.value AS REAL) DESC LIMIT 1) AS max
+        ORDER BY CAST(m.value AS REAL) DESC, m.id LIMIT 1) AS max
    FROM readings x WHERE x.${owner} IN (${Array.from({ length: n }, () => '?').join(', ')})
      ${period ? 'AND x.taken_at >= ? AND x.taken_at < ?' : ''} AND ${STANDING_LOGGER}
    GROUP BY x.${owner}, x.control`;
 
 /**
- * The readings of some batches the report lists one by one: every reading entered by hand, every
- * logger reading corrected, and every logger reading a deviation names (the judging's misses);
- * by batch, control and time.
+ * The standing logger readings of some batches summed up per control, as the triggers of the
+ * logger_summaries table keep them (migration 013): the same figures as LOGGER_SUMMARY_SQL,
+ * without reading the batches' thousands of readings.
+ */
+export const LOGGER_SUMMARIES_SQL = (n: number): string =>
+  `SELECT batch_id AS owner, control, readings AS count, first_at AS first, last_at AS last,
+     lowest AS min, highest AS max
+   FROM logger_summaries WHERE batch_id IN (${Array.from({ length: n }, () => '?').join(', ')})
+   ORDER BY batch_id, control`;
+
+/**
+ * The readings of some batches the report lists one by one: every reading entered by hand (the
+ * readings_by_hand index), every logger reading corrected (the readings_corrects index; the
+ * corrections of all time are few), and every logger reading a deviation names (the judging's
+ * misses); by batch, control and time. None of a logger's thousands is read to find them.
  */
 export const BATCH_READINGS_SQL = (ids: readonly number[]): string =>
   `SELECT ${STAMP_COLUMNS}, x.batch_id, x.equipment_id, x.control, x.taken_at, x.value,
      x.entered_as, x.source
    FROM readings x LEFT JOIN people rp ON rp.id = x.recorded_by
-   WHERE x.batch_id IN (${marks(ids)}) AND (x.source <> 'logger'
-     OR EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = x.id)
-     OR x.id IN (SELECT reading_id FROM deviations WHERE batch_id IN (${marks(ids)})))
+   WHERE x.id IN (
+       SELECT id FROM readings WHERE batch_id IN (${marks(ids)}) AND source <> 'logger'
+       UNION SELECT corrects_id FROM readings WHERE corrects_id IS NOT NULL
+       UNION SELECT reading_id FROM deviations WHERE batch_id IN (${marks(ids)}))
+     AND x.batch_id IN (${marks(ids)})
    ORDER BY x.batch_id, x.control, x.taken_at, x.id`;
 
 /** Reads the whole record of a few batches (a page of the report), a query per kind of entry. */
@@ -140,8 +156,8 @@ export async function batchRecords(
        LEFT JOIN people pl ON pl.id = b.planned_by LEFT JOIN people st ON st.id = b.started_by
      WHERE b.id IN (${marks(ids)}) ORDER BY b.started_on, b.id`,
   );
-  const readings = await read<ReadingRow>(BATCH_READINGS_SQL(ids), [...ids, ...ids]);
-  const logged = await read<LoggerRow>(LOGGER_SUMMARY_SQL('batch_id', ids.length), ids);
+  const readings = await read<ReadingRow>(BATCH_READINGS_SQL(ids), [...ids, ...ids, ...ids]);
+  const logged = await read<LoggerRow>(LOGGER_SUMMARIES_SQL(ids.length), ids);
   const weighings = await read<WeighingRow>(
     `SELECT ${STAMP_COLUMNS}, x.batch_id, x.kind, x.name, x.planned_grams, x.grams, x.weighed_at
      FROM weighings x LEFT JOIN people rp ON rp.id = x.recorded_by
