@@ -2,7 +2,7 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
 import { collectConsoleErrors, startConsole } from './browser.ts';
-import { shootAtWidths } from './widths.ts';
+import { shootAtWidths } from './screens.ts';
 
 /** Replaces text in the YAML editor, as someone typing into it would. */
 async function editYaml(page: Page, from: string, to: string): Promise<void> {

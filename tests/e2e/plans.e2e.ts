@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
 import { collectConsoleErrors, startConsole } from './browser.ts';
-import { shootAtWidths } from './widths.ts';
+import { shootAtWidths } from './screens.ts';
 
 /** A calendar day `days` after `day` (YYYY-MM-DD). */
 function addDays(day: string, days: number): string {

@@ -1,3 +1,4 @@
+import assert from 'node:assert/strict';
 import type { Page } from 'playwright-core';
 import type { ConsoleSession } from './browser.ts';
 
@@ -43,4 +44,19 @@ export async function shoot(session: ConsoleSession, page: Page, name: string): 
   if (tall > size.height) await page.setViewportSize({ ...size, height: Math.min(tall, 8000) });
   await session.screenshot(page, name);
   await page.setViewportSize(size);
+}
+
+/**
+ * Screenshots of a screen at every width, `name-1280.png` and so on, each of the whole content;
+ * fails if anything sticks out sideways at any of them.
+ */
+export async function shootAtWidths(
+  session: ConsoleSession,
+  page: Page,
+  name: string,
+): Promise<void> {
+  await atWidths(page, async (width) => {
+    assert.equal(await sideways(page), 0, `${name}: nothing sticks out sideways at ${width} px`);
+    await shoot(session, page, `${name}-${width}`);
+  });
 }

@@ -1,14 +1,9 @@
 import type { FormulaRevision } from '../../../../shared/api/formula-api.ts';
+import { revisionInWords } from '../../formulas/revision-words.ts';
 
 /** What the formula's history knows of one revision: its record, or whether it is on disk now. */
 export type RevisionFacts = Partial<Omit<FormulaRevision, 'revision'>> & {
   readonly current?: boolean;
-};
-
-const MADE: Readonly<Record<string, string>> = {
-  save: 'edited in the console',
-  create: 'created in the console',
-  upload: 'uploaded in the console',
 };
 
 /**
@@ -21,11 +16,10 @@ const MADE: Readonly<Record<string, string>> = {
 export function revisionWords(facts: RevisionFacts | null, day: (iso: string) => string): string {
   if (!facts) return 'an earlier version of the formula, no longer kept';
   const since = facts.current ? 'still its current version' : 'it has changed since';
-  const made = facts.source ? MADE[facts.source] : undefined;
-  if (made) {
-    const by = facts.author ? ` by ${facts.author.displayName}` : '';
+  if (facts.source && facts.source !== 'disk') {
     const on = facts.at ? ` on ${day(facts.at)}` : '';
-    return `the formula as ${made}${by}${on} (${since})`;
+    const made = revisionInWords({ source: facts.source, author: facts.author ?? null });
+    return `the formula as ${made}${on} (${since})`;
   }
   if (facts.source === 'disk' && facts.at)
     return `the formula as changed in the files, found on ${day(facts.at)} (${since})`;
