@@ -7,7 +7,7 @@ import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import sqlite3 from 'sqlite3';
 import { addDays } from '../shared/calculation/dates.ts';
-import { READINGS_SQL } from '../server/process/process-repository.ts';
+import { RECORD_READINGS_SQL } from '../server/process/record-readings.ts';
 import {
   BATCH_READINGS_SQL,
   LOGGER_SUMMARY_SQL,
@@ -250,7 +250,7 @@ export async function benchProcessRecords(): Promise<void> {
     const start = new Date(`${from}T00:00:00`).toISOString();
     const end = new Date(`${addDays(to, 1)}T00:00:00`).toISOString();
     const plans: [string, string, unknown[]][] = [
-      ['process record: its readings', READINGS_SQL, [bigId]],
+      ['process record: its readings', RECORD_READINGS_SQL, [bigId]],
       [
         "report: the period's batches",
         PERIOD_BATCHES_SQL,
@@ -265,9 +265,12 @@ export async function benchProcessRecords(): Promise<void> {
       process.stdout.write(`    ${label}: ${plan.map((row) => row.detail).join(' | ')}\n`);
     }
     db.close();
+    const recordCpu = server.cpuSeconds();
     const record = await timed(`${server.url}/api/batches/${big.lot}/process`, REVIEWER, REQUESTS);
+    // The server's CPU time is steadier than the wall clock on a shared machine.
+    const recordCpuMs = ((server.cpuSeconds() - recordCpu) * 1000) / REQUESTS;
     process.stdout.write(
-      `  GET /api/batches/:lot/process, 4 controls × 1,440 readings, ${REQUESTS} requests in turn: p50 ${record.p50.toFixed(1)} ms, p95 ${record.p95.toFixed(1)} ms (target p95 ≤ 50 ms); first ${record.first.toFixed(0)} ms; ${(record.bytes / 1000).toFixed(0)} kB\n`,
+      `  GET /api/batches/:lot/process, 4 controls × 1,440 readings, ${REQUESTS} requests in turn: p50 ${record.p50.toFixed(1)} ms, p95 ${record.p95.toFixed(1)} ms (target p95 ≤ 50 ms); first ${record.first.toFixed(0)} ms; server CPU ${recordCpuMs.toFixed(1)} ms each; ${(record.bytes / 1000).toFixed(0)} kB\n`,
     );
     // 5. The HACCP report of the month, each format twice (the second with warm caches).
     // JSON and CSV first: a PDF that fails (memory) must not hide their figures.
