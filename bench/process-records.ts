@@ -7,7 +7,7 @@ import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import sqlite3 from 'sqlite3';
 import { addDays } from '../shared/calculation/dates.ts';
-import { READINGS_SQL } from '../server/process/process-repository.ts';
+import { RECORD_READINGS_SQL } from '../server/process/record-readings.ts';
 import {
   BATCH_READINGS_SQL,
   LOGGER_SUMMARIES_SQL,
@@ -152,6 +152,10 @@ export async function benchProcessRecords(): Promise<void> {
         (r) => [r.lot_code, r.id],
       ),
     );
+    // The month's batches are done before their readings are written: the server judges every
+    // batch being made each minute (deadlines, alerts), and a scan of a thousand batches
+    // caught with their readings half written ran on into the timed requests.
+    await run(db, "UPDATE batches SET status = 'done' WHERE formula_id = ?", [CONTROLLED]);
     // 2. A million readings: 960 logger points a batch, and one batch with 1,440 at each control.
     const big = lots[lots.length - 1];
     const bigId = ids.get(big.lot)!;
@@ -202,7 +206,6 @@ export async function benchProcessRecords(): Promise<void> {
         `${day}T20:00:00.000Z`,
       ]);
     }
-    await run(db, "UPDATE batches SET status = 'done' WHERE formula_id = ?", [CONTROLLED]);
     await run(db, 'COMMIT');
     await run(db, 'ANALYZE');
     const [{ n }] = await all<{ n: number }>(db, 'SELECT COUNT(*) AS n FROM readings');
@@ -251,7 +254,7 @@ export async function benchProcessRecords(): Promise<void> {
     const start = new Date(`${from}T00:00:00`).toISOString();
     const end = new Date(`${addDays(to, 1)}T00:00:00`).toISOString();
     const plans: [string, string, unknown[]][] = [
-      ['process record: its readings', READINGS_SQL, [bigId]],
+      ['process record: its readings', RECORD_READINGS_SQL, [bigId]],
       [
         "report: the period's batches",
         PERIOD_BATCHES_SQL,
@@ -275,9 +278,12 @@ export async function benchProcessRecords(): Promise<void> {
       process.stdout.write(`    ${label}: ${plan.map((row) => row.detail).join(' | ')}\n`);
     }
     db.close();
+    const recordCpu = server.cpuSeconds();
     const record = await timed(`${server.url}/api/batches/${big.lot}/process`, REVIEWER, REQUESTS);
+    // The server's CPU time is steadier than the wall clock on a shared machine.
+    const recordCpuMs = ((server.cpuSeconds() - recordCpu) * 1000) / REQUESTS;
     process.stdout.write(
-      `  GET /api/batches/:lot/process, 4 controls × 1,440 readings, ${REQUESTS} requests in turn: p50 ${record.p50.toFixed(1)} ms, p95 ${record.p95.toFixed(1)} ms (target p95 ≤ 50 ms); first ${record.first.toFixed(0)} ms; ${(record.bytes / 1000).toFixed(0)} kB\n`,
+      `  GET /api/batches/:lot/process, 4 controls × 1,440 readings, ${REQUESTS} requests in turn: p50 ${record.p50.toFixed(1)} ms, p95 ${record.p95.toFixed(1)} ms (target p95 ≤ 50 ms); first ${record.first.toFixed(0)} ms; server CPU ${recordCpuMs.toFixed(1)} ms each; ${(record.bytes / 1000).toFixed(0)} kB\n`,
     );
     // 5. The HACCP report of the month, each format twice (the second with warm caches).
     // JSON and CSV first: a PDF that fails (memory) must not hide their figures.

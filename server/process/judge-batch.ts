@@ -31,18 +31,38 @@ export function judgeBatch(
     if (list) list.push(reading);
     else byControl.set(reading.control, [reading]);
   }
+  const standing = new Map<string, ReadingPoint[]>();
+  for (const [id, all] of byControl)
+    standing.set(
+      id,
+      all
+        .filter((r) => r.correctedBy === null)
+        .sort((a, b) => (a.at === b.at ? a.id - b.id : a.at < b.at ? -1 : 1))
+        .map((r) => ({ at: r.at, value: r.value })),
+    );
+  return judgeStanding(controls, standing, status, clock).map((judged) => ({
+    ...judged,
+    readings: byControl.get(judged.control.id) ?? [],
+  }));
+}
+
+/**
+ * Every control judged as `judgeBatch` does, given each control's standing readings.
+ * @param standing by control id, the standing readings oldest first (by time, then id); a
+ * control with readings, all of them corrected, is there with none
+ */
+export function judgeStanding(
+  controls: readonly ResolvedControl[],
+  standing: ReadonlyMap<string, readonly ReadingPoint[]>,
+  status: BatchStatus,
+  clock: Clock,
+): Omit<BatchControl, 'readings'>[] {
   const over = PAST_EVERY_STEP.includes(status);
   return controls.map((control, index) => {
-    const all = byControl.get(control.id) ?? [];
-    const standing: ReadingPoint[] = all
-      .filter((r) => r.correctedBy === null)
-      .sort((a, b) => (a.at === b.at ? a.id - b.id : a.at < b.at ? -1 : 1))
-      .map((r) => ({ at: r.at, value: r.value }));
-    const stepOver = over || controls.slice(index + 1).some((later) => byControl.has(later.id));
+    const stepOver = over || controls.slice(index + 1).some((later) => standing.has(later.id));
     return {
       control,
-      state: evaluateControl(control, standing, clock, { stepOver }),
-      readings: all,
+      state: evaluateControl(control, standing.get(control.id) ?? [], clock, { stepOver }),
     };
   });
 }

@@ -12,8 +12,10 @@ import type { Database } from '../db/database.ts';
 import { readRows } from '../db/read-row.ts';
 import { notFound } from '../http/app-error.ts';
 import type { FormulaControls } from './formula-controls.ts';
-import { judgeBatch } from './judge-batch.ts';
+import { judgeBatch, judgeStanding } from './judge-batch.ts';
 import { kitchenClock } from './kitchen-clock.ts';
+import { recordJson, type RecordRest } from './record-json.ts';
+import { recordReadings } from './record-readings.ts';
 import { weighedPart } from './weighed-record.ts';
 import { WEIGHINGS_SQL } from './weighing-rows.ts';
 import {
@@ -71,7 +73,7 @@ const BATCH_SQL = `SELECT b.id, b.lot_code, b.status, b.formula_id, b.formula_re
 // driver building each of a day's thousands of rows as an object, column by column, took about
 // a third longer. The keys are the columns' names and SQLite's types are kept (integers as
 // numbers, text as strings, NULL as null), so each element is the row the driver would give.
-export const READINGS_SQL = `SELECT json_group_array(json_object('id', x.id,
+const READINGS_SQL = `SELECT json_group_array(json_object('id', x.id,
   'recorded_by', x.recorded_by, 'recorded_at', x.recorded_at, 'corrects_id', x.corrects_id,
   'reason', x.reason, 'control', x.control, 'taken_at', x.taken_at, 'value', x.value,
   'entered_as', x.entered_as, 'source', x.source) ORDER BY x.control, x.taken_at, x.id) AS rows
@@ -252,24 +254,47 @@ export class ProcessRepository {
     };
   }
 
-  /** GET /api/batches/:lot/process: the whole process record at `now`. */
+  /** The whole process record at `now`, as the API sends it. */
   async record(lot: string, now: string, t?: Transaction): Promise<ProcessRecord> {
     const row = await this.batchRow(lot, t);
     const batch = toBatch(row);
-    const [{ controls }, deviations, weighingRows, verification] = await Promise.all([
+    const [{ controls }, rest] = await Promise.all([
       this.judged(batch, now, t),
-      this.deviations(batch.id, t),
-      this.select<WeighingRow>(WEIGHINGS_SQL, [batch.id], t),
-      this.verification(batch.id, t),
+      this.recordRest(row, t),
+    ]);
+    return { lotCode: batch.lotCode, controls, ...rest };
+  }
+
+  /**
+   * GET /api/batches/:lot/process: the process record at `now` as UTF-8 JSON in pieces, the same
+   * text as `JSON.stringify(record(…))`; the readings are written by SQLite, never objects.
+   */
+  async recordJson(lot: string, now: string): Promise<Buffer[]> {
+    const row = await this.batchRow(lot);
+    const batch = toBatch(row);
+    const [controls, readings, rest] = await Promise.all([
+      this.controlsOf(batch),
+      recordReadings((sql, values) => this.select(sql, values), batch.id),
+      this.recordRest(row),
+    ]);
+    const standing = new Map([...readings].map(([id, r]) => [id, r.standing]));
+    const judged = judgeStanding(controls, standing, batch.status, kitchenClock(now));
+    return recordJson(batch.lotCode, judged, readings, rest);
+  }
+
+  /** All of a process record but its controls. */
+  private async recordRest(row: BatchRow, t?: Transaction): Promise<RecordRest> {
+    const [deviations, weighingRows, verification] = await Promise.all([
+      this.deviations(row.id, t),
+      this.select<WeighingRow>(WEIGHINGS_SQL, [row.id], t),
+      this.verification(row.id, t),
     ]);
     const weighingCorrections = correctedByOf(weighingRows);
     const weighings = weighingRows.map((w) => toWeighing(w, weighingCorrections));
     return {
-      lotCode: batch.lotCode,
-      controls,
       weighings,
       // The ingoing nitrite and yields on the weights as weighed, the plan a start replaced.
-      ...(await weighedPart(this.db, this.controls.history, batch.id, weighings, t)),
+      ...(await weighedPart(this.db, this.controls.history, row.id, weighings, t)),
       deviations: deviations.map(({ key: _key, ...deviation }) => deviation),
       onHold: deviations.some((d) => d.action === null),
       // A deadline the readings later showed was met is no miss: its deviation stays, closed.

@@ -234,6 +234,11 @@ export class Records {
     return this.withProcess((p) => p.process.record(lotCodeOf(lot), now));
   }
 
+  /** A batch's process record judged at `now` (ISO), as the API sends it: UTF-8 JSON in pieces. */
+  processRecordJson(lot: string, now: string = new Date().toISOString()): Promise<Buffer[]> {
+    return this.withProcess((p) => p.process.recordJson(lotCodeOf(lot), now));
+  }
+
   /** Records a reading at a control; deviations open for new misses in the same write. */
   addReading(
     lot: string,

@@ -5,7 +5,7 @@
  */
 import { Decimal } from '../decimal.ts';
 import type { ReadingPoint } from './control-types.ts';
-import { instantMs } from './judge-time.ts';
+import { instantMs, isoMs } from './judge-time.ts';
 
 /** A reading with its time and value parsed. */
 export interface JudgedPoint extends ReadingPoint {
@@ -26,7 +26,7 @@ export function judgedPoints(readings: readonly ReadingPoint[]): JudgedPoint[] {
       decimal = new Decimal(reading.value);
       decimals.set(reading.value, decimal);
     }
-    return { at: reading.at, value: reading.value, ms: Date.parse(reading.at), decimal };
+    return { at: reading.at, value: reading.value, ms: isoMs(reading.at), decimal };
   });
 }
 
