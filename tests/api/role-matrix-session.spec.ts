@@ -90,6 +90,11 @@ describe('CSRF: cookie-signed changes without X-CSRF-Token', () => {
     assert.equal(response.status, 403, response.text);
     assert.equal(response.json?.error?.code, 'csrf');
     const still = await send(server(), tobin, { method: 'GET', path: '/api/session' });
-    assert.equal(still.status, 200, 'the session must survive a refused sign-out');
+    assert.equal(still.status, 200, still.text);
+    assert.equal(
+      still.json?.person?.username,
+      'tobin',
+      'the session must survive a refused sign-out',
+    );
   });
 });

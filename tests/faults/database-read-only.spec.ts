@@ -87,7 +87,8 @@ describe('a read-only database file', () => {
     const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0];
     if (cookie) {
       const who = await fetch(`${url}/api/session`, { headers: { cookie } });
-      assert.equal(who.status, 401, 'a refused sign-in must not sign anyone in');
+      const body = (await who.json()) as { person: unknown };
+      assert.equal(body.person, null, 'a refused sign-in must not sign anyone in');
     }
 
     const batch = await call(url, 'imke', 'GET', `/api/batches/${lot}`);
