@@ -199,10 +199,11 @@ describe('plans in the console', () => {
     assert.equal(lots.length, 4);
     for (const lot of lots) assert.ok(!already.includes(lot), `${lot} is a new batch`);
     await page.getByTestId('plan-already-recorded').waitFor({ state: 'detached' });
-    assert.match(
-      await items.filter({ hasText: '120 × Smokehouse burger' }).first().innerText(),
-      /Recorded: 4 batches, by Tobin/,
-    );
+    // The list of plans made is read again once the batches are recorded.
+    await items
+      .filter({ hasText: '120 × Smokehouse burger' })
+      .filter({ hasText: /Recorded: 4 batches, by Tobin/ })
+      .waitFor();
     // The browser logs the refusal it was given; nothing else went wrong.
     assert.deepEqual(
       errors.filter((e) => !/status of 409/.test(e)),

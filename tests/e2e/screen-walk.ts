@@ -62,9 +62,10 @@ export function declaredRoutePaths(): string[] {
     file.endsWith('.routes.ts'),
   );
   return files.flatMap((file) =>
-    [...readFileSync(path.join(app, file), 'utf8').matchAll(/path: '([^']*)'/g)].map(
-      (match) => match[1],
-    ),
+    [...readFileSync(path.join(app, file), 'utf8').matchAll(/path: '([^']*)'(.*)/g)]
+      // A redirect shows the screen it leads to, which is walked under its own address.
+      .filter((match) => !match[2].includes('redirectTo'))
+      .map((match) => match[1]),
   );
 }
 

@@ -142,7 +142,7 @@ describe('signing in to the console', () => {
       const scroll = await page.evaluate(() => document.documentElement.scrollWidth);
       assert.ok(scroll <= width, `${width} px: the page is ${scroll} px wide`);
     }
-    await page.getByRole('button', { name: 'Fill in Tobin Marrowfeld (cook)' }).click();
+    await page.getByRole('button', { name: /^Fill in Tobin Marrowfeld \(cook\)/ }).click();
     assert.equal(await page.getByLabel('Username').inputValue(), 'tobin');
     assert.equal(await page.getByLabel('Password').inputValue(), 'quillmoor-cook');
     await page.getByRole('button', { name: 'Sign in', exact: true }).click();
