@@ -59,11 +59,23 @@ describe('recording a batch from the keyboard', () => {
     await tabTo(page, 'record-formula');
     await page.keyboard.press('Enter');
     await page.getByRole('option', { name: /Quillmoor belly/ }).waitFor();
+    const activeText = (): Promise<string> =>
+      page.evaluate(
+        () => document.querySelector('mat-option.mat-mdc-option-active')?.textContent ?? '',
+      );
     for (let i = 0; i < 15; i++) {
-      const active = page.locator('mat-option.mat-mdc-option-active');
-      if (/Quillmoor belly/.test((await active.count()) ? await active.innerText() : '')) break;
+      const before = await activeText();
+      if (/Quillmoor belly/.test(before)) break;
       await page.keyboard.press('ArrowDown');
+      // The list marks the next option a frame later: wait for it, so no key press is read twice.
+      await page.waitForFunction(
+        (previous) =>
+          (document.querySelector('mat-option.mat-mdc-option-active')?.textContent ?? '') !==
+          previous,
+        before,
+      );
     }
+    assert.match(await activeText(), /Quillmoor belly/);
     await page.keyboard.press('Enter');
     await page.getByTestId('record-field-meat').waitFor();
     // formulas/quillmoor-belly.yaml holds 2 days per cm: the thickness, never the heaviest piece.
