@@ -72,3 +72,28 @@ export { evaluateControl, type Clock, type EvaluateOptions } from './process/eva
 export { canonicalUnit, parseReadingValue } from './process/reading-value.ts';
 export { LoggerCsvError, parseLoggerCsv, type LoggedPoint } from './process/logger-csv.ts';
 export { actualCureChecks, type ActualCureWeights } from './calculation/cure/actual-nitrite.ts';
+export {
+  ingredientStatement,
+  type IngredientStatement,
+  type StatementEntry,
+  type StatementIngredient,
+} from './labels/ingredient-statement.ts';
+export { allergenStatement } from './labels/allergen-statement.ts';
+export {
+  FOOD_CODE_DAYS,
+  dateMark,
+  type DateMark,
+  type DateMarkBasis,
+  type DateMarkInput,
+  type ValidatedShelfLife,
+} from './labels/date-mark.ts';
+export { suggestLots, type FifoSuggestion, type LotTake, type StockLot } from './stock/fifo.ts';
+export {
+  leastCostBlend,
+  type BlendRefusal,
+  type BlendShare,
+  type LeastCostAsk,
+  type LeastCostBlend,
+  type TrimOnHand,
+} from './costing/least-cost-blend.ts';
+export { maxGramsAtTarget } from './costing/blend-capacity.ts';

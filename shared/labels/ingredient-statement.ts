@@ -73,7 +73,7 @@ export function ingredientStatement(
 ): IngredientStatement {
   const byName = new Map<string, { name: string; grams: Decimal; subIngredients: string[] }>();
   for (const ingredient of ingredients) {
-    if (ingredient.grams.isNegative()) {
+    if (ingredient.grams.lessThan(ZERO)) {
       throw new RangeError(`ingredientStatement: ${ingredient.name} weighs less than nothing`);
     }
     const key = sameName(ingredient.name);

@@ -77,7 +77,7 @@ export function suggestLots(
   needed: Decimal,
   useOn: string,
 ): FifoSuggestion {
-  if (needed.isNegative()) throw new RangeError(`suggestLots: a need of ${needed} is negative`);
+  if (needed.lessThan(ZERO)) throw new RangeError(`suggestLots: a need of ${needed} is negative`);
   if (!isIsoDate(useOn)) throw new RangeError(`suggestLots: ${useOn} is not a calendar date`);
   const own = lots.filter((lot) => lot.item === item && lot.remaining.greaterThan(ZERO));
   for (const lot of own) {
