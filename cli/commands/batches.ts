@@ -3,7 +3,7 @@ import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
 import { textTable } from '../output/text-table.ts';
-import { recordKeeper, serverOf } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption } from '../records/record-keeper.ts';
 
 const FILTERS = [
   'formula',
@@ -54,7 +54,7 @@ export function batchesCommand(io: Io): Command {
     .option('--order <order>', 'asc or desc')
     .option('--limit <n>', 'batches per page, 1–200 (default 50)')
     .option('--cursor <cursor>', 'the page after this one (printed at the end of a page)')
-    .option('--server <url>', 'read from this server (default: $LARDER_SERVER, else this machine)')
+    .addOption(serverOption('read from this server'))
     .option('--json', 'print the page as JSON')
     .addHelpText(
       'after',
@@ -63,7 +63,7 @@ export function batchesCommand(io: Io): Command {
     .action(async (options: ListOptions) => {
       const query: Record<string, string> = {};
       for (const key of FILTERS) if (options[key] !== undefined) query[key] = options[key];
-      const page = await (await recordKeeper(serverOf(options.server))).listBatches(query);
+      const page = await (await recordKeeper(options.server)).listBatches(query);
       if (options.json) return io.out(`${JSON.stringify(page, null, 2)}\n`);
       const rows = page.items.map((b) => [
         b.lotCode,
@@ -100,7 +100,7 @@ export function batchesCommand(io: Io): Command {
     .command('show')
     .description('one batch: its sheet as recorded, checks, and every event')
     .argument('<lot>', 'lot code')
-    .option('--server <url>', 'read from this server (default: $LARDER_SERVER, else this machine)')
+    .addOption(serverOption('read from this server'))
     .option('--json', 'print the batch as JSON')
     .option('--pdf <file>', 'write the batch sheet as recorded to a PDF file, with its lot code')
     .option('--force', 'with --pdf: replace the file if it exists')
@@ -113,7 +113,7 @@ export function batchesCommand(io: Io): Command {
       const pdf = options.pdf ? { file: options.pdf, force: !!options.force } : undefined;
       // The PDF tools load only for --pdf; the path is checked before the batch is read.
       if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
-      const batch = await (await recordKeeper(serverOf(options.server))).showBatch(lot);
+      const batch = await (await recordKeeper(options.server)).showBatch(lot);
       if (pdf)
         await (await import('../output/pdf-file.ts')).writeBatchSheet(pdf, batch.result, batch);
       if (options.json) return io.out(`${JSON.stringify(batch, null, 2)}\n`);

@@ -16,7 +16,7 @@ import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import { formulasFolder, loadFormula } from '../formula-files.ts';
 import { today, type Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
-import { recordKeeper, serverOf } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption } from '../records/record-keeper.ts';
 
 /**
  * Every batch option's flag, value name and help, in the order --help lists them. Commander turns
@@ -136,10 +136,7 @@ export function calcCommand(io: Io): Command {
       '--record',
       'record the batch with its lot code (as $LARDER_USER, password in $LARDER_PASSWORD)',
     )
-    .option(
-      '--server <url>',
-      'with --record: record on this Larderbook server instead of this machine (default: $LARDER_SERVER)',
-    )
+    .addOption(serverOption('with --record: record on this server'))
     .addOption(
       new Option('--status <status>', 'with --record: planned or in-progress (default)').choices([
         'planned',
@@ -231,7 +228,7 @@ async function recordBatch(
   pdf: PdfTarget | undefined,
   io: Io,
 ): Promise<void> {
-  const keeper = await recordKeeper(serverOf(options.server));
+  const keeper = await recordKeeper(options.server);
   const batch = await keeper.recordBatch({
     formula: formulaId,
     folder: path.dirname(path.resolve(file)),

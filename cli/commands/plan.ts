@@ -19,7 +19,7 @@ import { formulaFilesIn, formulasFolder, loadFormula, readFormulaFile } from '..
 import { today, type Io } from '../io.ts';
 import type { PdfTarget } from '../output/pdf-file.ts';
 import { renderPlanSheet } from '../output/plan-sheet.ts';
-import { recordKeeper, serverOf } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption } from '../records/record-keeper.ts';
 
 interface PlanOptions {
   count: string;
@@ -70,10 +70,7 @@ export function planCommand(io: Io): Command {
       '--record',
       'record every batch as planned, starting on its day (as $LARDER_USER, password in $LARDER_PASSWORD)',
     )
-    .option(
-      '--server <url>',
-      'with --record: record on this Larderbook server instead of this machine (default: $LARDER_SERVER)',
-    )
+    .addOption(serverOption('with --record: record on this server'))
     .option(
       '--pdf <file>',
       'write the plan to a PDF file: an overview, then one production sheet per start day',
@@ -188,7 +185,7 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
     }
   };
   if (options.record) {
-    const keeper = await recordKeeper(serverOf(options.server));
+    const keeper = await recordKeeper(options.server);
     const recorded = await keeper.recordPlan({
       assembly: formula.id,
       count,

@@ -2,7 +2,7 @@ import { Command } from 'commander';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { readingWords, reportDeviations } from '../output/process-words.ts';
-import { recordKeeper, serverOf } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption } from '../records/record-keeper.ts';
 
 interface ReadingOptions {
   at?: string;
@@ -36,7 +36,7 @@ export function readingCommand(io: Io): Command {
       'what was read: "71.5C", "160 F", "6.2" (pH); the control\'s unit when bare',
     )
     .option('--at <time>', 'when it was taken: HH:MM today, or ISO 8601 with a zone (default: now)')
-    .option('--server <url>', 'record on this server (default: $LARDER_SERVER, else this machine)')
+    .addOption(serverOption('record on this server'))
     .option('--json', "print the reading, the control's state and any deviation as JSON")
     .addHelpText(
       'after',
@@ -48,7 +48,7 @@ export function readingCommand(io: Io): Command {
         value,
         ...(options.at ? { at: readingTime(options.at) } : {}),
       };
-      const answer = await (await recordKeeper(serverOf(options.server))).addReading(lot, request);
+      const answer = await (await recordKeeper(options.server)).addReading(lot, request);
       if (options.json) io.out(`${JSON.stringify(answer, null, 2)}\n`);
       else io.out(readingWords(lot.toUpperCase(), value, answer));
       reportDeviations(io, answer.deviation ? [answer.deviation] : [], !!options.json);

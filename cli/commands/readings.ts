@@ -3,7 +3,7 @@ import { Command } from 'commander';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { reportDeviations } from '../output/process-words.ts';
-import { recordKeeper, serverOf } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption } from '../records/record-keeper.ts';
 
 interface ReadingsOptions {
   server?: string;
@@ -26,7 +26,7 @@ export function readingsCommand(io: Io): Command {
     .argument('<lot>', 'lot code')
     .argument('<control>', "the control's id in the formula, e.g. chill")
     .argument('<file>', "the logger's CSV export (time, temperature per line)")
-    .option('--server <url>', 'store on this server (default: $LARDER_SERVER, else this machine)')
+    .addOption(serverOption('store on this server'))
     .option('--json', 'print what was stored and the deviations opened as JSON')
     .addHelpText(
       'after',
@@ -34,7 +34,7 @@ export function readingsCommand(io: Io): Command {
     )
     .action(async (lot: string, control: string, file: string, options: ReadingsOptions) => {
       const text = await loggerText(file);
-      const keeper = await recordKeeper(serverOf(options.server));
+      const keeper = await recordKeeper(options.server);
       let stored;
       try {
         stored = await keeper.uploadReadings(lot, control, text);

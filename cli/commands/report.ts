@@ -3,7 +3,7 @@ import type { HaccpReport, ReportBatch } from '../../shared/api/haccp-report.ts'
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { textTable } from '../output/text-table.ts';
-import { recordKeeper, serverOf, type ReportOutput } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, type ReportOutput } from '../records/record-keeper.ts';
 
 interface ReportOptions {
   from?: string;
@@ -55,7 +55,7 @@ export function reportCommand(io: Io): Command {
     .option('--pdf <file>', 'write the report as a PDF file')
     .option('--csv <file>', 'write the report as CSV, one line per record entry')
     .option('--force', 'with --pdf or --csv: replace the file if it exists')
-    .option('--server <url>', 'from this server (default: $LARDER_SERVER, else this machine)')
+    .addOption(serverOption('from this server'))
     .option('--json', 'print the report as JSON')
     .addHelpText(
       'after',
@@ -76,7 +76,7 @@ export function reportCommand(io: Io): Command {
         ...(options.from ? { from: options.from } : {}),
         ...(options.to ? { to: options.to } : {}),
       };
-      const report = await (await recordKeeper(serverOf(options.server))).report(format, period);
+      const report = await (await recordKeeper(options.server)).report(format, period);
       if (report.format === 'json')
         return io.out(
           options.json ? `${JSON.stringify(report.body, null, 2)}\n` : summary(report.body),

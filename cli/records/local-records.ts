@@ -52,8 +52,8 @@ export async function withLocalRecords<T>(
  */
 async function recorder(
   records: Records,
-  verb: PersonVerb = 'record',
-  roles: readonly Role[] = RECORDING_ROLES,
+  verb: PersonVerb,
+  roles: readonly Role[],
 ): Promise<Person> {
   const { username, password } = credentialsFor(verb);
   const person = await records.signIn(username, password);
@@ -71,6 +71,23 @@ async function recorder(
 }
 
 /**
+ * Opens this machine's records for a verb that acts as a person, signs in $LARDER_USER with a
+ * role the verb needs, and runs `work` as them.
+ */
+function asPerson<T>(
+  verb: PersonVerb,
+  roles: readonly Role[],
+  work: (records: Records, actor: Person) => Promise<T>,
+  formulasFolder?: string,
+): Promise<T> {
+  return withLocalRecords(
+    verb,
+    async (records) => work(records, await recorder(records, verb, roles)),
+    formulasFolder,
+  );
+}
+
+/**
  * This machine's records. Recording signs in as $LARDER_USER; reading needs no one, as whoever
  * can run larder here can read the database file itself.
  */
@@ -79,9 +96,10 @@ export class LocalRecords implements RecordKeeper {
 
   /** Records a batch from the formula file as it is now; its revision joins the formula's history. */
   recordBatch({ folder, ...request }: BatchToRecord): Promise<Batch> {
-    return withLocalRecords(
+    return asPerson(
       'record',
-      async (records) => records.recordBatch(request, today(), { actor: await recorder(records) }),
+      RECORDING_ROLES,
+      (records, actor) => records.recordBatch(request, today(), { actor }),
       folder,
     );
   }
@@ -90,13 +108,12 @@ export class LocalRecords implements RecordKeeper {
   async recordPlan(request: PlanToRecord): Promise<{ plan: PresentedPlan; batches: Batch[] }> {
     // Made before the records are opened: a plan that cannot be made says why first.
     const plan = request.plan();
-    return withLocalRecords(
+    return asPerson(
       'record',
-      async (records) => ({
+      RECORDING_ROLES,
+      async (records, actor) => ({
         plan: presentPlan(plan, request.units),
-        batches: await records.recordPlan(plan, request.units, {
-          actor: await recorder(records),
-        }),
+        batches: await records.recordPlan(plan, request.units, { actor }),
       }),
       request.folder,
     );
@@ -111,27 +128,23 @@ export class LocalRecords implements RecordKeeper {
   }
 
   addReading(lot: string, request: ReadingRequest): Promise<ReadingAnswer> {
-    return withLocalRecords('reading', async (records) =>
-      records.addReading(lot, request, 'command', {
-        actor: await recorder(records, 'reading', PROCESS_ROLES),
-      }),
+    return asPerson('reading', PROCESS_ROLES, (records, actor) =>
+      records.addReading(lot, request, 'command', { actor }),
     );
   }
 
   uploadReadings(lot: string, control: string, text: string): Promise<UploadedReadings> {
-    return withLocalRecords('reading', async (records) =>
-      records.uploadReadings(lot, control, text, {
-        actor: await recorder(records, 'reading', PROCESS_ROLES),
-      }),
+    return asPerson('reading', PROCESS_ROLES, (records, actor) =>
+      records.uploadReadings(lot, control, text, { actor }),
     );
   }
 
   /** The report from this machine's records, as whoever $LARDER_USER is (admin or reviewer). */
   report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput> {
-    return withLocalRecords('report', async (records) => {
+    return asPerson('report', REPORT_ROLES, async (records, by) => {
       const produced = await records.produceReport(format, {
         query: period,
-        by: await recorder(records, 'report', REPORT_ROLES),
+        by,
         kitchen: Records.kitchenName(),
         now: new Date(),
       });

@@ -1,3 +1,4 @@
+import { Option } from 'commander';
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import type { HaccpReport } from '../../shared/api/haccp-report.ts';
 import type { Deviation, ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
@@ -67,16 +68,19 @@ export interface RecordKeeper {
   report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput>;
 }
 
-/** The server a verb works with: --server, else $LARDER_SERVER, else none (this machine). */
-export function serverOf(option: string | undefined): string | undefined {
-  return option ?? process.env.LARDER_SERVER;
-}
-
 /**
- * The records on `server`, or on this machine when there is none. Each side loads when first
- * asked for: this machine's with the database stack.
+ * The one place a verb's records are chosen: the server of --server, else of $LARDER_SERVER,
+ * else this machine's. Each door loads when first asked for: this machine's with the database
+ * stack, a server's with none of it.
+ * @param option the verb's --server, if given
  */
-export async function recordKeeper(server: string | undefined): Promise<RecordKeeper> {
+export async function recordKeeper(option: string | undefined): Promise<RecordKeeper> {
+  const server = option ?? process.env.LARDER_SERVER;
   if (server) return new (await import('./server-records.ts')).ServerRecords(server);
   return new (await import('./local-records.ts')).LocalRecords();
+}
+
+/** The --server option of a verb that reads or writes the records: `what` it does there. */
+export function serverOption(what: string): Option {
+  return new Option('--server <url>', `${what} (default: $LARDER_SERVER, else this machine)`);
 }

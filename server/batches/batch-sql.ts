@@ -71,7 +71,7 @@ export function whereOf(
   }
   if (filter.signedOff !== undefined)
     clauses.push(filter.signedOff ? 'b.signed_off_at IS NOT NULL' : 'b.signed_off_at IS NULL');
-  // These two are written with literals, as the partial indexes of 010 are, so that SQLite sees
+  // These two are written with literals, as the partial indexes of 011 are, so that SQLite sees
   // the query implies an index's WHERE and walks that index: it holds only the matching rows.
   if (filter.needsSignOff) clauses.push(NEEDS_SIGN_OFF);
   if (filter.checksPassed !== undefined)
@@ -109,6 +109,12 @@ export function countSql(filter: BatchFilter, upTo?: number): SqlPart {
  * columns of list items (LIST_COLUMNS) or of summaries alone (the CSV export).
  * A backward page (a prev cursor) is read in reverse order and must be turned round by the caller.
  * `sort_key` is the value of the sort expression, for the cursors.
+ *
+ * In two steps: the page's ids and sort keys first, from batches alone, then the columns of those
+ * rows only. A filter whose index is not in the page's order (overdue, a lot prefix) sorts its
+ * matches; sorting ids and keys leaves building each row's columns (the people's names, the
+ * nitrite check picked out of the stored result) to the page's rows, not every match. The outer
+ * query reads the ids in the order the inner one gives them, so it sorts nothing again.
  */
 export function pageSql(query: ListQuery, columns: 'list' | 'summary'): SqlPart {
   const { clauses, values } = whereOf(query.filter, query.sort);
@@ -130,11 +136,16 @@ export function pageSql(query: ListQuery, columns: 'list' | 'summary'): SqlPart 
   }
   const direction = descending ? 'DESC' : 'ASC';
   return {
-    sql: `SELECT ${columns === 'list' ? LIST_COLUMNS : SUMMARY_COLUMNS}, ${sort.expr} AS sort_key
-      FROM ${BATCHES_WITH_PEOPLE}
-      ${where(clauses)}
-      ORDER BY ${sort.expr} ${direction}, b.id ${direction}
-      LIMIT ?`,
+    sql: `SELECT ${columns === 'list' ? LIST_COLUMNS : SUMMARY_COLUMNS}, page.sort_key
+      FROM (
+        SELECT b.id, ${sort.expr} AS sort_key FROM batches b
+        ${where(clauses)}
+        ORDER BY ${sort.expr} ${direction}, b.id ${direction}
+        LIMIT ?
+      ) page
+      CROSS JOIN ${BATCHES_WITH_PEOPLE}
+      WHERE b.id = page.id
+      ORDER BY page.sort_key ${direction}, page.id ${direction}`,
     values: [...values, query.limit + 1],
   };
 }

@@ -1,5 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import type { AuditAction } from '../../shared/api/audit-event.ts';
+import { appendChange } from '../audit/append-change.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import {
@@ -82,27 +82,6 @@ export class BatchWrites {
     );
   }
 
-  /** Appends an audit entry, unless the change is demo history (options.audit false). */
-  async audited(
-    t: Transaction,
-    options: ChangeOptions,
-    action: AuditAction,
-    lot: string,
-    detail: object,
-  ): Promise<void> {
-    if (options.audit === false) return;
-    await this.audit.append(
-      {
-        actor: options.actor,
-        action,
-        subject: lot,
-        detail,
-        ...(options.ip === undefined ? {} : { ip: options.ip }),
-      },
-      t,
-    );
-  }
-
   /**
    * Inserts a batch under the next free lot code of its start day and formula initials, found
    * in this same transaction (BEGIN IMMEDIATE holds the write lock, so no other record can take
@@ -161,7 +140,7 @@ export class BatchWrites {
       to: batch.status,
       reason: null,
     });
-    await this.audited(t, options, 'batch-record', lot, {
+    await appendChange(this.audit, t, options, 'batch-record', lot, {
       formula: batch.formula.id,
       revision: batch.formula.revision,
       status: batch.status,
@@ -247,7 +226,7 @@ export class BatchWrites {
       [to, at, to, reason, batch.id],
     );
     await this.event(t, batch.id, at, options, { type: 'status', from: batch.status, to, reason });
-    await this.audited(t, options, 'batch-status', lot, {
+    await appendChange(this.audit, t, options, 'batch-status', lot, {
       from: batch.status,
       to,
       ...(reason ? { reason } : {}),
@@ -295,7 +274,7 @@ export class BatchWrites {
       to: null,
       reason: note,
     });
-    await this.audited(t, options, 'batch-sign-off', lot, {
+    await appendChange(this.audit, t, options, 'batch-sign-off', lot, {
       status: batch.status,
       ...(note ? { note } : {}),
     });

@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { Formula, RawBatchOptions } from '../../shared/index.ts';
 import type { Batch } from '../../shared/api/batch-record.ts';
 import type { PlannedCalculation, StartRequest } from '../../shared/api/process-record.ts';
+import { appendChange } from '../audit/append-change.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { formulaAtRevision } from '../formulas/formula-at-revision.ts';
@@ -121,7 +122,7 @@ export async function startBatch(
       to: 'in-progress',
       reason: startReason(current, started),
     });
-    await deps.batches.writes.audited(t, by, 'batch-start', current.lotCode, {
+    await appendChange(deps.audit, t, by, 'batch-start', current.lotCode, {
       revision: started.formula.revision,
       plannedRevision: current.formulaRevision,
       inputs: started.inputs,

@@ -2,6 +2,7 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import type { PlanResult } from '../../shared/index.ts';
 import type { BatchSummary } from '../../shared/api/batch-record.ts';
 import type { PlanListItem } from '../../shared/api/plan-record.ts';
+import { appendChange } from '../audit/append-change.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import {
   BATCHES_WITH_PEOPLE,
@@ -146,23 +147,17 @@ export class PlanRepository {
     return [plan.assembly.id, plan.assembly.title, plan.count, plan.serviceDate];
   }
 
-  private async audited(
+  private audited(
     t: Transaction,
     options: ChangeOptions,
     action: 'plan-make' | 'plan-record',
     plan: PlanResult,
     detail: object,
   ): Promise<void> {
-    if (options.audit === false) return;
-    await this.audit.append(
-      {
-        actor: options.actor,
-        action,
-        subject: plan.assembly.id,
-        detail: { count: plan.count, serviceDate: plan.serviceDate, ...detail },
-        ...(options.ip === undefined ? {} : { ip: options.ip }),
-      },
-      t,
-    );
+    return appendChange(this.audit, t, options, action, plan.assembly.id, {
+      count: plan.count,
+      serviceDate: plan.serviceDate,
+      ...detail,
+    });
   }
 }

@@ -3,19 +3,11 @@ import { PeriodicRun } from '../reminders/periodic-run.ts';
 import { deviationsToOpen, judgeBatch } from './judge-batch.ts';
 import { judgeAndOpen, type ProcessDeps } from './judge-and-open.ts';
 import { kitchenClock } from './kitchen-clock.ts';
+import type { ProcessJobOptions } from './process-job-options.ts';
 import { BEING_MADE } from './process-repository.ts';
 
 /** How often the controls of batches being made are judged: a cooling deadline is to the minute. common practice, no source */
 export const SCAN_EVERY_MS = 60_000;
-
-/** How the scan runs; tests move its clock and run it by hand. */
-export interface DeadlineScanOptions {
-  /** The clock; the context's by default. */
-  readonly now?: () => Date;
-  readonly intervalMs?: number;
-  /** Where a failed run is reported; the server log by default. */
-  readonly report?: (error: unknown) => void;
-}
 
 /** What one run opened: each deviation's id and the lot it holds. */
 export interface ScanRun {
@@ -36,7 +28,7 @@ export class DeadlineScan extends PeriodicRun<ScanRun> {
   constructor(
     private readonly deps: ProcessDeps,
     context: Pick<AppContext, 'now'>,
-    options: DeadlineScanOptions = {},
+    options: ProcessJobOptions = {},
   ) {
     super(options.intervalMs ?? SCAN_EVERY_MS, options.report);
     this.now = options.now ?? context.now;

@@ -5,6 +5,7 @@ import { PeriodicRun } from '../reminders/periodic-run.ts';
 import type { ProcessDeps } from './judge-and-open.ts';
 import { judgeBatch } from './judge-batch.ts';
 import { kitchenClock } from './kitchen-clock.ts';
+import type { ProcessJobOptions } from './process-job-options.ts';
 import { processAlertMessage } from './process-alert-message.ts';
 import { batchAlerts, type ProcessAlert } from './process-alerts.ts';
 import { BEING_MADE, type ProcessBatch } from './process-repository.ts';
@@ -13,14 +14,6 @@ import { BEING_MADE, type ProcessBatch } from './process-repository.ts';
 export const ALERT_EVERY_MS = 60_000;
 /** How far back a deviation still open is alerted: a server started on an old database does not mail its history. */
 export const DEVIATION_ALERT_WINDOW_MS = 24 * 60 * 60_000;
-
-/** How the scheduler runs; tests move its clock and run it by hand. */
-export interface ProcessAlertOptions {
-  readonly now?: () => Date;
-  readonly intervalMs?: number;
-  /** Where a failed run is reported; the server log by default. */
-  readonly report?: (error: unknown) => void;
-}
 
 /** An alert one run sent, and to whom (usernames; empty when nobody wants them). */
 export interface SentAlert {
@@ -75,7 +68,7 @@ export class ProcessAlertScheduler extends PeriodicRun<SentAlert[]> {
   constructor(
     private readonly context: AppContext,
     private readonly deps: ProcessDeps,
-    options: ProcessAlertOptions = {},
+    options: ProcessJobOptions = {},
   ) {
     super(options.intervalMs ?? ALERT_EVERY_MS, options.report);
     this.now = options.now ?? context.now;

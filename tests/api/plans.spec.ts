@@ -163,6 +163,33 @@ describe('POST /api/plans', () => {
     assert.equal(bad.status, 400);
   });
 
+  it('should note in the audit log who made a plan and who recorded it, from where', async () => {
+    const day = addDays(SERVICE, 28);
+    const made = await server()
+      .as('imke')
+      .post('/api/plans', { ...BURGERS, count: 30, for: day });
+    assert.equal(made.status, 200, made.text);
+    const recorded = await server()
+      .as('tobin')
+      .post('/api/plans/record', { ...BURGERS, count: 30, for: day });
+    assert.equal(recorded.status, 201, recorded.text);
+    const lots = recorded.json.batches.map((b: { lotCode: string }) => b.lotCode);
+    const ofDay = async (action: 'plan-make' | 'plan-record') =>
+      (await server().context.audit.list({ limit: 50, action })).filter(
+        (event) => (event.detail as { serviceDate?: string }).serviceDate === day,
+      );
+    const [make] = await ofDay('plan-make');
+    assert.equal(make.actorName, 'imke');
+    assert.equal(make.subject, 'smokehouse-burger');
+    assert.deepEqual(make.detail, { count: 30, serviceDate: day });
+    assert.equal(typeof make.ip, 'string', 'the address the plan was made from');
+    const [record] = await ofDay('plan-record');
+    assert.equal(record.actorName, 'tobin');
+    assert.equal(record.subject, 'smokehouse-burger');
+    assert.deepEqual(record.detail, { count: 30, serviceDate: day, lots, again: false });
+    assert.equal(typeof record.ip, 'string');
+  });
+
   it('should list the plans made, who made them and whether they were recorded', async () => {
     const day = addDays(SERVICE, 14);
     const shown = await server()
