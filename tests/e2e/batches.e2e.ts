@@ -2,8 +2,8 @@ import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
-import { addDays } from '../../shared/calculation/dates.ts';
 import { collectConsoleErrors, startConsole } from './browser.ts';
+import { recordMarkedBatches } from './marked-batches.ts';
 import { shoot } from './screens.ts';
 
 /** Relative luminance of a CSS rgb() colour. source: Web Content Accessibility Guidelines 2.1, "relative luminance" */
@@ -218,30 +218,7 @@ describe('the batch log in the console', () => {
   it('should open newest started first, and mark failed and overdue rows in words', async (t) => {
     const session = await startConsole(t);
     const { server } = session;
-    const today = new Date().toLocaleDateString('en-CA');
-    // A belly started ten days ago and still curing: 8 days to ready (formulas/quillmoor-belly.yaml).
-    const late = await server.as('tobin').post('/api/batches', {
-      formula: 'quillmoor-belly',
-      batch: { meat: '4.26kg', thickness: '4cm', start: addDays(today, -10) },
-    });
-    assert.equal(late.status, 201, late.text);
-    const lateLot = late.json.batch.lotCode as string;
-    const moved = await server.as('tobin').post(`/api/batches/${lateLot}/status`, { to: 'curing' });
-    assert.equal(moved.status, 200, moved.text);
-    // A batch that failed a check that does not refuse it (a fat standard is labelling): the
-    // column the log reads, set as such a recording sets it.
-    const failed = await server.as('rosa').post('/api/batches', {
-      formula: 'chuck-grind',
-      batch: { total: '20kg' },
-    });
-    assert.equal(failed.status, 201, failed.text);
-    const failedLot = failed.json.batch.lotCode as string;
-    await server.context.db.sequelize.query(
-      'UPDATE batches SET checks_passed = 0 WHERE lot_code = ?',
-      {
-        replacements: [failedLot],
-      },
-    );
+    const { lateLot, failedLot } = await recordMarkedBatches(server);
 
     const page = await session.page('imke');
     const errors = collectConsoleErrors(page);

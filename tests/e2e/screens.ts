@@ -60,3 +60,27 @@ export async function shootAtWidths(
     await shoot(session, page, `${name}-${width}`);
   });
 }
+
+/**
+ * What scrolls sideways inside the page: each element wider than its own box that lets its
+ * content scroll (a table in a frame), named by its test id or tag and classes. `sideways` does
+ * not see these: the page itself stays put while the frame scrolls.
+ */
+export async function framesSideways(page: Page): Promise<string[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll('mat-sidenav-content *')]
+      .filter((el) => {
+        const overflow = getComputedStyle(el).overflowX;
+        return (
+          (overflow === 'auto' || overflow === 'scroll') &&
+          el.scrollWidth - el.clientWidth > 1 &&
+          (el as HTMLElement).offsetParent !== null
+        );
+      })
+      .map(
+        (el) =>
+          el.getAttribute('data-testid') ??
+          `${el.tagName.toLowerCase()}.${[...el.classList].join('.')}`,
+      ),
+  );
+}

@@ -1,3 +1,4 @@
+import { NgTemplateOutlet } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -14,8 +15,10 @@ import {
   MatExpansionPanelHeader,
   MatExpansionPanelTitle,
 } from '@angular/material/expansion';
+import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatOption, MatSelect } from '@angular/material/select';
 import { MatSort, MatSortHeader, type Sort } from '@angular/material/sort';
 import {
   MatCell,
@@ -33,18 +36,19 @@ import { ActivatedRoute, Router, RouterLink, type ParamMap } from '@angular/rout
 import { SessionStore } from '../../core/auth/session-store';
 import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
 import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
-import { UNSIGNABLE_STATUSES } from '../../../../shared/workflow/batch-status.ts';
-import type { BatchListItem, FormulaKind } from '../batch-types';
-import { isOverdue } from '../../curing/days-left';
+import { mediaMatch } from '../../ui/media-match';
+import type { BatchListItem } from '../batch-types';
 import { FormulaOptions } from '../formula-options';
 import { NitriteChart } from '../nitrite-chart/nitrite-chart';
 import { BatchFilters, type FilterChange } from './batch-filters';
+import { BatchLogCards } from './batch-log-cards';
 import { BatchLog } from './batch-log';
 import { CursorPaginator } from './cursor-paginator';
 import {
   DEFAULT_QUERY,
   SHOWS,
   csvHref,
+  filterCount,
   isFiltered,
   paramsFromQuery,
   queryFromParams,
@@ -52,14 +56,14 @@ import {
   type LogSort,
   type PageSize,
 } from './log-query';
+import { logRowsOf } from './log-row';
+import { SORT_CHOICES, sortOfValue, sortValueOf } from './log-sorts';
 
-const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
-  cure: 'Cure',
-  dough: 'Dough',
-  blend: 'Blend',
-  mix: 'Mix',
-  assembly: 'Assembly',
-};
+/**
+ * Where the table does not fit and the log stacks as cards: the table needs 960 px, and wider
+ * than 840 px the navigation beside it takes 220 px and the margins 48 (src/app/core/layout/shell).
+ */
+const STACKED = '(max-width: 1229.98px)';
 
 /**
  * The batch log: every recorded batch, sorted, filtered and paged on the server, with the view
@@ -70,6 +74,7 @@ const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
   selector: 'app-batch-log-page',
   imports: [
     RouterLink,
+    NgTemplateOutlet,
     MatCell,
     MatCellDef,
     MatColumnDef,
@@ -84,18 +89,23 @@ const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
     MatSortHeader,
     MatButton,
     MatIcon,
+    MatFormField,
+    MatLabel,
+    MatSelect,
+    MatOption,
     MatProgressBar,
     MatExpansionPanel,
     MatExpansionPanelHeader,
     MatExpansionPanelTitle,
     BatchFilters,
     CursorPaginator,
+    BatchLogCards,
     BatchStatusChip,
     IsoDayPipe,
     NitriteChart,
   ],
   templateUrl: './batch-log-page.html',
-  styleUrl: './batch-log-page.css',
+  styleUrls: ['./log-marks.css', './batch-log-page.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export default class BatchLogPage {
@@ -108,19 +118,20 @@ export default class BatchLogPage {
   private readonly params = toSignal(this.route.queryParamMap, { requireSync: true });
   protected readonly query = computed(() => queryFromParams(paramRecord(this.params())));
   /** The page's batches as the table shows them, with the marks a row carries. */
-  protected readonly rows = computed(() =>
-    this.log.items().map((batch) => ({
-      ...batch,
-      kindWords: KIND_WORDS[batch.kind],
-      overdue: isOverdue(batch, this.today),
-      awaitsSignOff: !batch.signedOff && !UNSIGNABLE_STATUSES.includes(batch.status),
-    })),
-  );
+  protected readonly rows = computed(() => logRowsOf(this.log.items(), this.today));
+  /** A phone or a tablet: the batches as stacked cards, sorted by a select, the filters folded. */
+  protected readonly narrow = mediaMatch(STACKED);
   /** The kitchen's day, for "overdue"; read when the page opens. */
   protected readonly today = isoDateOf(new Date()) ?? '';
   protected readonly exportHref = computed(() => csvHref(this.query(), this.today));
   protected readonly shows = SHOWS;
   protected readonly filtered = computed(() => isFiltered(this.query()));
+  protected readonly filterCount = computed(() => filterCount(this.query()));
+  protected readonly sortChoices = SORT_CHOICES.map((choice) => ({
+    value: sortValueOf(choice),
+    words: choice.words,
+  }));
+  protected readonly sortValue = computed(() => sortValueOf(this.query()));
   protected readonly canRecord = computed(() => this.session.hasRole('admin', 'cook'));
   protected readonly columns = [
     'lot',
@@ -164,6 +175,12 @@ export default class BatchLogPage {
     if (sort.direction === '')
       this.showView({ ...this.query(), sort: DEFAULT_QUERY.sort, order: DEFAULT_QUERY.order });
     else this.showView({ ...this.query(), sort: sort.active as LogSort, order: sort.direction });
+  }
+
+  /** A choice of the sort select (the stacked log has no column headers). */
+  protected sortByValue(value: string): void {
+    const sort = sortOfValue(value);
+    if (sort) this.showView({ ...this.query(), ...sort });
   }
 
   protected resize(size: PageSize): void {

@@ -171,3 +171,18 @@ export function isFiltered(query: LogQuery): boolean {
     query.show !== null
   );
 }
+
+/**
+ * How many of the filter boxes narrow the view (formula, kind, status, operator, dates, lot
+ * code), for a folded "Filters" heading; the quick filters stay in sight and are not counted.
+ */
+export function filterCount(query: LogQuery): number {
+  return [
+    query.formula !== null,
+    query.kind !== null,
+    query.statuses.length > 0,
+    query.operator !== null,
+    query.from !== null || query.to !== null,
+    query.lot !== null,
+  ].filter(Boolean).length;
+}

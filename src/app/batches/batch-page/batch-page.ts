@@ -20,7 +20,6 @@ import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { signOffConcern } from '../../../../shared/workflow/workflow-rules.ts';
 import { BatchLog } from '../batch-log/batch-log';
 import { offeredMoves, signOffBlocked, type OfferedMove } from '../batch-status';
-import type { FormulaKind } from '../batch-types';
 import { HoldBanner } from '../process/hold-banner/hold-banner';
 import { ProcessSection } from '../process/process-section/process-section';
 import { ProcessStore } from '../process/process-store';
@@ -30,14 +29,7 @@ import { revisionWords } from './revision-words';
 import { ReasonDialog, type ReasonDialogData } from './reason-dialog';
 import { SignOffDialog, type SignOff, type SignOffDialogData } from './sign-off-dialog';
 import { StatusTimeline } from './status-timeline';
-
-const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
-  cure: 'Cure',
-  dough: 'Dough',
-  blend: 'Blend',
-  mix: 'Mix',
-  assembly: 'Assembly',
-};
+import { FORMULA_KIND_WORDS as KIND_WORDS } from '../formula-kind-words';
 
 /**
  * One batch: its lot code, formula and revision, status and the history of every change, the

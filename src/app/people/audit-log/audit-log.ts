@@ -1,3 +1,4 @@
+import { NgTemplateOutlet } from '@angular/common';
 import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
@@ -27,6 +28,7 @@ import { AuditSubject, actorText, subjectOf } from '../audit-subject';
 import { PeopleStore } from '../people-store';
 import { OlderPagesFooter } from '../older-pages-footer/older-pages-footer';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { PHONE_WIDTH, mediaMatch } from '../../ui/media-match';
 
 /** A row of the log with its words worked out once. */
 interface AuditRow {
@@ -54,6 +56,7 @@ type FilterForm = FormGroup<{
   selector: 'app-audit-log',
   imports: [
     IsoDayPipe,
+    NgTemplateOutlet,
     ReactiveFormsModule,
     RouterLink,
     MatButton,
@@ -103,7 +106,11 @@ export default class AuditLog implements OnInit {
       detail: detailText(event),
     })),
   );
-  protected readonly columns = ['at', 'who', 'action', 'subject', 'detail'];
+  /** A phone: what was done carries to what, who, when and the detail beneath it. */
+  protected readonly narrow = mediaMatch(PHONE_WIDTH);
+  protected readonly columns = computed(() =>
+    this.narrow() ? ['action'] : ['at', 'who', 'action', 'subject', 'detail'],
+  );
   protected readonly filterForm: FilterForm = new FormGroup({
     action: new FormControl<AuditAction | ''>('', { nonNullable: true }),
     actor: new FormControl('', { nonNullable: true }),

@@ -26,6 +26,7 @@ import {
 } from '../outbox-message';
 import { OutboxStore } from '../outbox-store';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { PHONE_WIDTH, mediaMatch } from '../../ui/media-match';
 
 /** A row of the outbox with its words worked out once. */
 interface OutboxRow {
@@ -75,7 +76,11 @@ export default class Outbox implements OnInit {
       status: deliveryStatus(message),
     })),
   );
-  protected readonly columns = ['at', 'to', 'subject', 'kind', 'status'];
+  /** A phone: the subject carries to whom, the kind and when; the status stays beside it. */
+  protected readonly narrow = mediaMatch(PHONE_WIDTH);
+  protected readonly columns = computed(() =>
+    this.narrow() ? ['subject', 'status'] : ['at', 'to', 'subject', 'kind', 'status'],
+  );
 
   ngOnInit(): void {
     void this.store.load();

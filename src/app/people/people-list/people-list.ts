@@ -1,4 +1,3 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
 import { DOCUMENT } from '@angular/common';
 import {
   ChangeDetectionStrategy,
@@ -26,11 +25,10 @@ import {
   MatTable,
 } from '@angular/material/table';
 import { MatTooltip } from '@angular/material/tooltip';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { Router } from '@angular/router';
-import { map } from 'rxjs';
 import { Person } from '../../core/api/api-types';
 import { messageOf } from '../../core/api/message-of';
+import { PHONE_WIDTH, mediaMatch } from '../../ui/media-match';
 import { SessionStore } from '../../core/auth/session-store';
 import {
   InvitationLinkDialog,
@@ -84,12 +82,7 @@ export default class PeopleList implements OnInit {
   protected readonly failure = this.store.failure;
   protected readonly meId = computed(() => this.session.person()?.id ?? null);
   /** A phone: the name column carries username, role and status, and the actions come next. */
-  protected readonly narrow = toSignal(
-    inject(BreakpointObserver)
-      .observe('(max-width: 599.98px)')
-      .pipe(map((state) => state.matches)),
-    { initialValue: false },
-  );
+  protected readonly narrow = mediaMatch(PHONE_WIDTH);
   protected readonly columns = computed(() =>
     this.narrow()
       ? ['name', 'actions']

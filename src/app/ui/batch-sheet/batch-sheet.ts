@@ -1,17 +1,9 @@
 import { NgTemplateOutlet } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { IsoDayPipe } from './iso-day-pipe';
-import type { FormulaKind } from '../../../../shared/formula/formula-types.ts';
 import type { PresentedResult } from '../../../../shared/presentation/presented-result.ts';
 import { OptionWordsPipe } from '../option-words-pipe';
-
-const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
-  cure: 'Cure',
-  dough: 'Dough',
-  blend: 'Blend',
-  mix: 'Mix',
-  assembly: 'Assembly',
-};
+import { FORMULA_KIND_WORDS as KIND_WORDS } from '../../batches/formula-kind-words';
 
 /**
  * A calculated batch as a sheet to work from, top to bottom in the order the work is done:
