@@ -105,9 +105,23 @@ export async function recordTurn(
       [{ turn }],
     );
   }
-  await db.sequelize.query(
-    'INSERT INTO batch_turns (batch_id, turned_on, recorded_at, person_id, note) VALUES (?, ?, ?, ?, ?)',
-    { replacements: [batch.id, day, at, options.actor.id, note], transaction: t },
-  );
+  await insertTurn(db, t, { lot, day, at, personId: options.actor.id, note });
   await writes.audited(t, options, 'batch-turn', lot, { on: day, ...(note ? { note } : {}) });
+}
+
+/**
+ * Writes one turn as it is given, unchecked: one already on that day is kept. Recording goes
+ * through {@link recordTurn}; the demo's history, written as it happened, comes straight here.
+ */
+export async function insertTurn(
+  db: Database,
+  t: Transaction,
+  turn: { lot: string; day: string; at: string; personId: number; note: string | null },
+): Promise<void> {
+  await db.sequelize.query(
+    `INSERT INTO batch_turns (batch_id, turned_on, recorded_at, person_id, note)
+     SELECT id, ?, ?, ?, ? FROM batches WHERE lot_code = ?
+     ON CONFLICT (batch_id, turned_on) DO NOTHING`,
+    { replacements: [turn.day, turn.at, turn.personId, turn.note, turn.lot], transaction: t },
+  );
 }

@@ -30,6 +30,7 @@ import { revisionWords } from './revision-words';
 import { ReasonDialog, type ReasonDialogData } from './reason-dialog';
 import { SignOffDialog, type SignOff, type SignOffDialogData } from './sign-off-dialog';
 import { StatusTimeline } from './status-timeline';
+import { TurnList } from './turn-list';
 
 const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
   cure: 'Cure',
@@ -56,6 +57,7 @@ const KIND_WORDS: Readonly<Record<FormulaKind, string>> = {
     BatchStatusChip,
     IsoDayPipe,
     StatusTimeline,
+    TurnList,
     HoldBanner,
     ProcessSection,
   ],
