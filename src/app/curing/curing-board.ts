@@ -29,7 +29,7 @@ export class CuringBoard {
   readonly overdueCount = computed(() => this.entries().filter((e) => e.overdue).length);
   /** The daily board: cures and doughs apart, what is due today first. */
   readonly board = computed(() => boardOf(this.batches() ?? [], this.day()));
-  /** How many cures are turned today. */
+  /** How many cures owe a turn today (one missed before today included). */
   readonly turnTodayCount = computed(
     () => this.board().curing.filter((row) => row.due === 'turn').length,
   );
