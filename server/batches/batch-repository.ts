@@ -18,6 +18,7 @@ import {
   type BatchRow,
 } from './batch-rows.ts';
 import { countSql, pageSql } from './batch-sql.ts';
+import { recordTurn, turnsOf } from './batch-turns.ts';
 import { BatchWrites } from './batch-writes.ts';
 
 /**
@@ -160,6 +161,17 @@ export class BatchRepository {
     });
   }
 
+  /**
+   * Records that a curing batch was turned today, with an audit entry, in one write.
+   * @throws AppError 404 no such lot; 409 'discarded', 'released', 'not-curing', 'already-turned'
+   */
+  turn(lot: string, note: string | null, options: ChangeOptions): Promise<Batch> {
+    return this.write(async (t) => {
+      await recordTurn(this.db, this.writes, t, lot, note, options);
+      return this.mustGet(lot, t);
+    });
+  }
+
   /** One batch with its events, oldest first; undefined when there is no such lot. */
   async get(lot: string, transaction?: Transaction): Promise<Batch | undefined> {
     const [row] = await this.select<BatchRow>(
@@ -176,7 +188,7 @@ export class BatchRepository {
       [row.id],
       transaction,
     );
-    return toBatch(row, events.map(toEvent));
+    return toBatch(row, events.map(toEvent), await turnsOf(this.db, row.id, transaction));
   }
 
   private async mustGet(lot: string, transaction?: Transaction): Promise<Batch> {

@@ -11,7 +11,9 @@ import type {
   BatchListItem,
   BatchStatus,
   BatchSummary,
+  BatchTurn,
 } from '../../shared/api/batch-record.ts';
+import { LAST_TURN_COLUMN, lastTurnOf } from './batch-turns.ts';
 
 /** A batch row joined with the names of its operator and reviewer. */
 export interface BatchRow {
@@ -43,6 +45,8 @@ export interface BatchRow {
   nitrite_max?: string | null;
   /** Only in a list: a curing batch's turning rule, days (LIST_COLUMNS). */
   flip_every_days?: number | null;
+  /** Only in a list: a curing batch's latest turn as JSON (LAST_TURN_COLUMN). */
+  last_turn?: string | null;
 }
 
 /** A batch event row joined with the name of whoever made it. */
@@ -74,7 +78,8 @@ export const LIST_COLUMNS = `${SUMMARY_COLUMNS},
     SELECT json_object('limit', c.value ->> 'limit', 'status', c.value ->> 'status')
     FROM json_each(b.result, '$.checks') c WHERE c.value ->> 'id' = 'nitrite-max'
   ) END AS nitrite_max,
-  CASE WHEN b.status = 'curing' THEN b.result ->> '$.schedule.flipEveryDays' END AS flip_every_days`;
+  CASE WHEN b.status = 'curing' THEN b.result ->> '$.schedule.flipEveryDays' END AS flip_every_days,
+  ${LAST_TURN_COLUMN}`;
 
 /**
  * batches joined to the people it names. LEFT JOINs keep batches the outer loop of the query,
@@ -126,15 +131,21 @@ export function toListItem(row: BatchRow): BatchListItem {
       ? (JSON.parse(row.nitrite_max) as BatchListItem['nitriteMax'])
       : null,
     flipEveryDays: row.flip_every_days ?? null,
+    lastTurn: lastTurnOf(row.last_turn),
   };
 }
 
 /** A row read with its result column as the full batch. */
-export function toBatch(row: BatchRow, events?: readonly BatchEvent[]): Batch {
+export function toBatch(
+  row: BatchRow,
+  events?: readonly BatchEvent[],
+  turns?: readonly BatchTurn[],
+): Batch {
   return {
     ...toSummary(row),
     result: withRecordedAllergens(JSON.parse(row.result ?? 'null') as PresentedResult | null),
     ...(events ? { events } : {}),
+    ...(turns ? { turns } : {}),
   };
 }
 

@@ -41,6 +41,12 @@ const SIGN_OFF_BODY = {
   properties: { note: { type: 'string', minLength: 1, maxLength: 500 } },
 } as const;
 
+const TURN_BODY = {
+  type: 'object',
+  additionalProperties: false,
+  properties: { note: { type: 'string', maxLength: 500 } },
+} as const;
+
 /** A body-less POST counts as an empty object, so `{}` need not be sent. */
 const emptyBody: RequestHandler = (req, _res, next) => {
   req.body ??= {};
@@ -98,6 +104,23 @@ export function batchesRouter(context: AppContext): Router {
         changeBy(req, context),
       );
       res.json({ batch });
+    },
+  );
+
+  // A turn of a curing batch, today, by whoever is signed in.
+  router.post(
+    '/:lot/turns',
+    requireRole(...RECORDING_ROLES),
+    emptyBody,
+    validateBody(TURN_BODY),
+    async (req, res) => {
+      const { note } = req.body as { note?: string };
+      const batch = await records.turnBatch(
+        lotOf(req),
+        note?.trim() || null,
+        changeBy(req, context),
+      );
+      res.status(201).json({ batch });
     },
   );
 

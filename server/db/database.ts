@@ -16,6 +16,7 @@ import * as plans from './migrations/010-plans.ts';
 import * as reviewQueueIndexes from './migrations/011-review-queue-indexes.ts';
 import * as unaffectedDisposition from './migrations/012-unaffected-disposition.ts';
 import * as loggerSummaries from './migrations/013-logger-summaries.ts';
+import * as turns from './migrations/014-turns.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -41,6 +42,7 @@ const MIGRATIONS = [
   reviewQueueIndexes,
   unaffectedDisposition,
   loggerSummaries,
+  turns,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

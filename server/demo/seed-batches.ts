@@ -6,6 +6,7 @@ import type { BatchActor, ChangeOptions } from '../batches/batch.ts';
 import { prepareBatch } from '../batches/prepare-batch.ts';
 import type { CurrentFormula } from '../formulas/formula-store.ts';
 import { AppError } from '../http/app-error.ts';
+import { seedTurns } from './seed-turns.ts';
 
 /** One batch of the invented kitchen's recent weeks: which formula, which day, how big. */
 interface DemoBatch {
@@ -258,6 +259,15 @@ async function seedOne(
       by(operator, at(day, minutes)),
     );
   }
+  if (steps.at(-1)?.[0] === 'curing')
+    await seedTurns(context, transaction, {
+      lot,
+      result: prepared.result,
+      index,
+      today,
+      now,
+      by: operator,
+    });
   // A batch that failed a check waits for the reviewer to look at it in person. Imke signs off
   // and never records, so the demo holds to separation of duties; every sign-off comes after
   // the last move, and every cure cures before it is done, as the workflow rules ask.

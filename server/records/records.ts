@@ -177,6 +177,11 @@ export class Records {
     return this.guard(() => this.deps.batches.signOff(lotCodeOf(lot), note, by));
   }
 
+  /** Records that a curing batch was turned today by the person making the change. */
+  turnBatch(lot: string, note: string | null, by: ChangeOptions): Promise<Batch> {
+    return this.guard(() => this.deps.batches.turn(lotCodeOf(lot), note, by));
+  }
+
   // Weights as weighed, starting a planned batch, refused calculations (the process record).
 
   /** Records lines and a stage weight as weighed; deviations open where the weights miss a limit. */

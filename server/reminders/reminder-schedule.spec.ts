@@ -32,6 +32,19 @@ describe('reminder schedule', () => {
     assert.deepEqual(dueReminders(BELLY, '2026-12-09'), [{ kind: 'flip', dueOn: '2026-12-08' }]);
   });
 
+  it('should owe no flip for a batch already turned on or after its flip day', () => {
+    const turned = (lastTurnedOn: string) => ({ ...BELLY, lastTurnedOn });
+    assert.deepEqual(dueReminders(turned('2026-12-04'), '2026-12-04'), []);
+    assert.deepEqual(dueReminders(turned('2026-12-05'), '2026-12-05'), []);
+    // A turn the day before the flip day does not stand for it; nor an older flip's for a newer.
+    assert.deepEqual(dueReminders(turned('2026-12-03'), '2026-12-04'), [
+      { kind: 'flip', dueOn: '2026-12-04' },
+    ]);
+    assert.deepEqual(dueReminders(turned('2026-12-04'), '2026-12-06'), [
+      { kind: 'flip', dueOn: '2026-12-06' },
+    ]);
+  });
+
   it('should owe ready on the ready day and no flip', () => {
     assert.deepEqual(dueReminders(BELLY, '2026-12-10'), [{ kind: 'ready', dueOn: '2026-12-10' }]);
   });

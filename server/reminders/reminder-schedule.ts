@@ -1,5 +1,5 @@
 import { addDays } from '../../shared/calculation/dates.ts';
-import { flipDays, type HoldDates as TurnHold } from '../../shared/calculation/turn-days.ts';
+import { turnOwedSince, type HoldDates as TurnHold } from '../../shared/calculation/turn-days.ts';
 
 /** The three reminders: turn the meat, it is ready, it is past ready and still held. */
 export const REMINDER_KINDS = ['flip', 'ready', 'overdue'] as const;
@@ -14,6 +14,8 @@ export interface HoldDates extends TurnHold {
    * recorded later starts in the past: nothing due before this day is sent.
    */
   readonly recordedOn?: string;
+  /** The latest day a turn was recorded on, YYYY-MM-DD; none when never turned. */
+  readonly lastTurnedOn?: string | null;
 }
 
 /** A reminder that has come due: which, and the day it is for. */
@@ -28,7 +30,8 @@ export interface DueReminder {
  * is for, so that it can be sent once and only once:
  * - flip: the latest flip day up to today, while the ready day has not come. One missed while
  *   the server was down is sent late; an older one that a newer flip day has replaced is not
- *   (turning the meat twice for two missed days would be wrong).
+ *   (turning the meat twice for two missed days would be wrong); nor one already turned for: a
+ *   turn recorded on or after its day settles it (the board's rule, turnOwedSince).
  * - ready: the ready day, from that day on (late if need be).
  * - overdue: the day after the ready day, from then on.
  * None is owed for a day before the batch was recorded: a batch recorded after the event (from
@@ -38,12 +41,8 @@ export interface DueReminder {
  */
 export function dueReminders(hold: HoldDates, today: string): DueReminder[] {
   const due: DueReminder[] = [];
-  if (today < hold.ready) {
-    const flip = flipDays(hold)
-      .filter((day) => day <= today)
-      .at(-1);
-    if (flip) due.push({ kind: 'flip', dueOn: flip });
-  }
+  const flip = turnOwedSince(hold, hold.lastTurnedOn ?? null, today);
+  if (flip) due.push({ kind: 'flip', dueOn: flip });
   if (today >= hold.ready) due.push({ kind: 'ready', dueOn: hold.ready });
   const overdue = addDays(hold.ready, 1);
   if (today >= overdue) due.push({ kind: 'overdue', dueOn: overdue });

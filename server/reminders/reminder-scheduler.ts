@@ -48,6 +48,7 @@ interface HeldRow {
   schedule_start: string | null;
   schedule_ready: string | null;
   flip_every_days: number | null;
+  last_turned_on: string | null;
 }
 
 /**
@@ -62,6 +63,7 @@ function holdOf(row: HeldRow): HoldDates | undefined {
       ready: row.schedule_ready,
       flipEveryDays: row.flip_every_days,
       recordedOn,
+      lastTurnedOn: row.last_turned_on,
     };
   return row.ready_on ? { start: row.started_on, ready: row.ready_on, recordedOn } : undefined;
 }
@@ -95,7 +97,8 @@ export class ReminderScheduler extends PeriodicRun<ReminderRun> {
       `SELECT id, lot_code, formula_title, status, started_on, ready_on, recorded_at,
          json_extract(result, '$.schedule.start') AS schedule_start,
          json_extract(result, '$.schedule.ready') AS schedule_ready,
-         json_extract(result, '$.schedule.flipEveryDays') AS flip_every_days
+         json_extract(result, '$.schedule.flipEveryDays') AS flip_every_days,
+         (SELECT MAX(turned_on) FROM batch_turns t WHERE t.batch_id = batches.id) AS last_turned_on
        FROM batches WHERE status IN ('curing', 'proofing') ORDER BY id`,
       { type: QueryTypes.SELECT },
     );
@@ -131,8 +134,8 @@ export class ReminderScheduler extends PeriodicRun<ReminderRun> {
 
   /**
    * Writes one reminder: its row, a message to each person who wants it, an audit entry.
-   * @returns the recipients' usernames, or undefined when it was sent already or the batch
-   *   is no longer held (checked under the write lock)
+   * @returns the recipients' usernames, or undefined when it was sent already, the batch is no
+   *   longer held or (a turn reminder) was turned for since (checked under the write lock)
    */
   private async send(
     t: Transaction,
@@ -154,6 +157,14 @@ export class ReminderScheduler extends PeriodicRun<ReminderRun> {
       [batchId, due.kind, due.dueOn],
     );
     if (already) return undefined;
+    // A turn recorded since the run read the batches settles its turn reminder all the same.
+    if (due.kind === 'flip') {
+      const [turned] = await select<{ id: number }>(
+        'SELECT id FROM batch_turns WHERE batch_id = ? AND turned_on >= ? LIMIT 1',
+        [batchId, due.dueOn],
+      );
+      if (turned) return undefined;
+    }
     const recipients = await reminderPrefs.recipients(t, due.kind);
     const at = this.now().toISOString();
     await db.sequelize.query(

@@ -16,6 +16,7 @@ export const AUDIT_ACTIONS = [
   'batch-record',
   'batch-status',
   'batch-sign-off',
+  'batch-turn',
   'person-add',
   'person-change',
   'password-reset',

@@ -29,6 +29,16 @@ export interface BatchEvent {
   readonly reason: string | null;
 }
 
+/** One turn (overhaul) of a curing batch, as the cook recorded it: one a day at most. */
+export interface BatchTurn {
+  /** The kitchen's calendar day it was turned on, YYYY-MM-DD. */
+  readonly on: string;
+  /** When it was recorded (ISO timestamp). */
+  readonly at: string;
+  readonly by: PersonRef;
+  readonly note: string | null;
+}
+
 /** A batch without its full result: what the log lists and the CSV export writes. */
 export interface BatchSummary {
   /** Readable and unique, YYMMDD-XX-NN: start date, formula initials, the day's sequence. */
@@ -62,6 +72,8 @@ export interface Batch extends BatchSummary {
   readonly result: PresentedResult;
   /** Oldest first; present on a single batch, absent in lists. */
   readonly events?: readonly BatchEvent[];
+  /** Its turns, oldest first; present on a single batch, absent in lists. */
+  readonly turns?: readonly BatchTurn[];
 }
 
 /**
@@ -77,6 +89,8 @@ export interface BatchListItem extends BatchSummary {
    * formula said when it was calculated; null when it is not curing or has no such rule.
    */
   readonly flipEveryDays: number | null;
+  /** A batch still curing: its latest turn (day, when, by whom); null when not curing or never turned. */
+  readonly lastTurn: Omit<BatchTurn, 'note'> | null;
 }
 
 /** GET /api/batches: one keyset page of the log, newest first unless sorted otherwise. */

@@ -25,3 +25,25 @@ export function flipDays(hold: HoldDates): string[] {
     days.push(day);
   }
 }
+
+/**
+ * The turning day a cure still owes a turn for on `today`, or null when none is owed: the latest
+ * turning day on or before today, while the ready day has not come, unless a turn is recorded on
+ * or after it. A turn missed yesterday is still owed today; an older one that a newer turning day
+ * has replaced is not owed twice (one turn puts the meat right). The board and the reminders both
+ * decide from here. The rule that a missed turn stays owed until done: common practice, no source.
+ * @param lastTurnedOn the latest day a turn was recorded on, YYYY-MM-DD, or null for none
+ * @param today the kitchen's calendar day, YYYY-MM-DD
+ */
+export function turnOwedSince(
+  hold: HoldDates,
+  lastTurnedOn: string | null,
+  today: string,
+): string | null {
+  if (today >= hold.ready) return null;
+  const latest = flipDays(hold)
+    .filter((day) => day <= today)
+    .at(-1);
+  if (!latest) return null;
+  return lastTurnedOn !== null && lastTurnedOn >= latest ? null : latest;
+}

@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { dayWords, momentWords, shortMomentWords } from './date-words.ts';
+import { dayWords, momentWords, shortDayWords, shortMomentWords } from './date-words.ts';
 
 // The expected weekdays are from the Gregorian calendar: 3 Dec 2026 is a Thursday, 29 Feb 2024
 // a Thursday, 1 Jan 2027 a Friday. from memory
@@ -26,6 +26,13 @@ describe('dates and times in words, one form each', () => {
     assert.equal(shortMomentWords('2026-12-03T14:32:00Z', 'UTC'), 'Thu 3 Dec, 14:32');
     assert.equal(shortMomentWords('2024-02-29T07:05:00Z', 'UTC'), 'Thu 29 Feb, 07:05');
     assert.equal(shortMomentWords('2026-12-31T23:30:00Z', 'Europe/Berlin'), 'Fri 1 Jan, 00:30');
+  });
+
+  it('should write the short day of a board as "Wed 2 Dec", a calendar day in any zone', () => {
+    // 2 Dec 2026 is a Wednesday (a day before Thursday 3 Dec, above). from memory
+    assert.equal(shortDayWords('2026-12-02'), 'Wed 2 Dec');
+    assert.equal(shortDayWords('2024-02-29', 'Pacific/Kiritimati'), 'Thu 29 Feb');
+    assert.equal(shortDayWords('2026-12-31T23:30:00Z', 'Europe/Berlin'), 'Fri 1 Jan');
   });
 
   it('should give back text that is no date as it is', () => {

@@ -45,6 +45,12 @@ export function dayWords(value: string | Date, timeZone?: string): string {
   return wall ? dayText(wall) : String(value);
 }
 
+/** A day in short, for a board with the year plain: "Wed 2 Dec" (a calendar day as it is). */
+export function shortDayWords(value: string | Date, timeZone?: string): string {
+  const wall = (typeof value === 'string' && calendarDay(value)) || momentOf(value, timeZone);
+  return wall ? `${weekday(wall)} ${wall.day} ${MONTHS[wall.month - 1]}` : String(value);
+}
+
 /** A moment: "3 Dec 2026, 14:32", on the wall clock of `timeZone` (by default this program's). */
 export function momentWords(value: string | Date, timeZone?: string): string {
   const wall = momentOf(value, timeZone);

@@ -104,6 +104,11 @@ const ROUTES: readonly BodyRoute[] = [
     path: `/api/batches/${await freshLot(setup)}/status`,
     valid: { to: 'curing', reason: 'Into the walk-in' },
   })),
+  route('POST', '/api/batches/:lot/turns', 'tobin', [], async (setup) => {
+    const lot = await freshLot(setup);
+    await setupJson(setup, 'POST', `/api/batches/${lot}/status`, { to: 'curing' });
+    return { path: `/api/batches/${lot}/turns`, valid: { note: 'Turned and rubbed' } };
+  }),
   route('POST', '/api/batches/:lot/sign-off', 'imke', [], async (setup) => ({
     path: `/api/batches/${await freshLot(setup)}/sign-off`,
     valid: { note: 'Sheet checked' },

@@ -165,12 +165,13 @@ describe('listing batches', () => {
       const lot = String(item.lotCode);
       const one = await reader.get(`/api/batches/${lot}`);
       assert.equal(one.status, 200, one.text);
-      const { result, events, ...summary } = one.json.batch as {
+      const { result, events, turns, ...summary } = one.json.batch as {
         result: {
           checks: { id: string; limit: string; status: string }[];
           schedule?: { flipEveryDays?: number };
         };
         events: unknown[];
+        turns: { on: string; at: string; by: unknown; note: string | null }[];
         nitritePpm: string | null;
         status: string;
       };
@@ -187,6 +188,11 @@ describe('listing batches', () => {
               : null,
           flipEveryDays:
             summary.status === 'curing' ? (result.schedule?.flipEveryDays ?? null) : null,
+          // A curing batch's latest turn, without its note.
+          lastTurn:
+            summary.status === 'curing' && turns.length > 0
+              ? (({ note: _note, ...last }) => last)(turns[turns.length - 1])
+              : null,
         },
         lot,
       );

@@ -4,6 +4,7 @@ import type { Page } from 'playwright-core';
 import { addDays } from '../../shared/calculation/dates.ts';
 import type { TestServer } from '../helpers/test-server.ts';
 import { collectConsoleErrors, startConsole } from './browser.ts';
+import { assertAccessible } from './accessibility.ts';
 import { atWidths, shoot, sideways } from './screens.ts';
 
 /** A phone held upright. */
@@ -94,6 +95,76 @@ describe('the daily board in the console', () => {
     await cardOf(page, turn).getByTestId('open-batch').click();
     await page.waitForURL(new RegExp(`/batches/${turn}$`));
     assert.deepEqual(errors, []);
+  });
+
+  it('should let a cook mark a turn from a card on a phone, and say a missed turn in words', async (t) => {
+    const session = await startConsole(t);
+    const { server } = session;
+    // Started 2 days ago: today is its first turning day. Started 3 days ago: its turning day
+    // was yesterday, and a missed turn stays due (common practice, no source).
+    const turn = await curingBelly(server, 2);
+    const missed = await curingBelly(server, 3);
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    await page.setViewportSize(PHONE);
+    await cardOf(page, turn).waitFor();
+    const yesterday = Number(addDays(today(), -1).slice(8));
+    assert.match(
+      await cardOf(page, missed).getByTestId('due-flag').innerText(),
+      new RegExp(`Turn due since [A-Z][a-z]{2} ${yesterday} [A-Z][a-z]{2}`),
+    );
+
+    // The button says which batch it turns, and is big enough for a thumb.
+    const button = page.getByRole('button', { name: new RegExp(`^Mark turned: .+, lot ${turn}$`) });
+    const box = await button.boundingBox();
+    assert.ok(box && box.height >= 44 && box.x + box.width <= PHONE.width, 'thumb size');
+    await button.click();
+    await page.getByText(`Turned — recorded for ${turn}`).waitFor();
+    await cardOf(page, turn).getByTestId('turned-today').waitFor();
+    assert.match(
+      await cardOf(page, turn).getByTestId('turned-today').innerText(),
+      /Turned today · Tobin Marrowfeld \(cook\)/,
+    );
+    assert.equal(await cardOf(page, turn).getByTestId('due-flag').count(), 0, 'no longer due');
+    assert.equal(await cardOf(page, turn).getByTestId('mark-turned').count(), 0);
+    const recorded = (await server.as('tobin').get(`/api/batches/${turn}`)).json.batch.turns;
+    assert.deepEqual(
+      recorded.map((r: { on: string; by: { displayName: string } }) => [r.on, r.by.displayName]),
+      [[today(), 'Tobin Marrowfeld (cook)']],
+    );
+
+    // Someone else turned the missed one meanwhile: the card says so in words, then shows it.
+    const rosa = await server.as('rosa').post(`/api/batches/${missed}/turns`);
+    assert.equal(rosa.status, 201, rosa.text);
+    await cardOf(page, missed).getByTestId('mark-turned').click();
+    await cardOf(page, missed).getByTestId('card-error').waitFor();
+    assert.match(
+      await cardOf(page, missed).getByTestId('card-error').innerText(),
+      /already turned today, by Rosa Quennick \(head cook\) at \d\d:\d\d/,
+    );
+    await cardOf(page, missed).getByTestId('turned-today').waitFor();
+    await assertAccessible(page, 'the board with turns owed, done and refused');
+
+    await atWidths(page, async (width) => {
+      await shoot(session, page, `board-turns-${width}`);
+      assert.equal(await sideways(page), 0, `nothing sticks out sideways at ${width} px`);
+    });
+    // The batch page lists the turn, in the product's date words.
+    await page.setViewportSize(PHONE);
+    await cardOf(page, turn).getByTestId('open-batch').click();
+    await page.waitForURL(new RegExp(`/batches/${turn}$`));
+    const listed = page.getByTestId('turn');
+    await listed.first().waitFor();
+    assert.match(await listed.first().innerText(), /Turned \d{1,2} [A-Z][a-z]{2} \d{4}/);
+    assert.match(await listed.first().innerText(), /Tobin Marrowfeld \(cook\) · recorded/);
+    await listed.first().scrollIntoViewIfNeeded();
+    await session.screenshot(page, 'batch-turns-390');
+    await assertAccessible(page, 'the batch page with its turns');
+    // The one refusal asked for above, and nothing else.
+    assert.deepEqual(
+      errors.filter((e) => !/status of 409/.test(e)),
+      [],
+    );
   });
 
   it('should list what is curing, overdue first', async (t) => {

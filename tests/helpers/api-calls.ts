@@ -96,7 +96,14 @@ export async function send(
 }
 
 /** The tables every write touches; a refused request must leave each count as it was. */
-export const TABLES = ['batches', 'batch_events', 'people', 'audit_events', 'formula_revisions'];
+export const TABLES = [
+  'batches',
+  'batch_events',
+  'batch_turns',
+  'people',
+  'audit_events',
+  'formula_revisions',
+];
 
 /** What the server has stored: row counts per table and every file of the formulas folder. */
 export interface Snapshot {

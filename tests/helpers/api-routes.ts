@@ -193,6 +193,15 @@ export const ROUTES: readonly RouteCase[] = [
     path: `/api/batches/${await freshLot(fx)}/status`,
     body: { to: 'curing' },
   })),
+  route('POST', '/api/batches/:lot/turns', ['cook', 'admin'], async (fx) => {
+    const lot = await freshLot(fx);
+    await setupCall(fx, {
+      method: 'POST',
+      path: `/api/batches/${lot}/status`,
+      body: { to: 'curing' },
+    });
+    return { path: `/api/batches/${lot}/turns`, body: { note: 'Turned and rubbed.' } };
+  }),
   route('POST', '/api/batches/:lot/sign-off', ['reviewer', 'admin'], async (fx) => ({
     path: `/api/batches/${await cooksLot(fx)}/sign-off`,
     body: { note: 'Checked the sheet.' },

@@ -13,6 +13,7 @@ export type {
   BatchPage,
   BatchStatus,
   BatchSummary,
+  BatchTurn,
   PersonRef,
 } from '../../../shared/api/batch-record.ts';
 export type { FormulaKind } from '../../../shared/formula/formula-types.ts';

@@ -1,4 +1,4 @@
-import { flipDays } from '../../../shared/calculation/turn-days.ts';
+import { turnOwedSince } from '../../../shared/calculation/turn-days.ts';
 import type { BatchListItem } from '../batches/batch-types';
 import { holdingBatches, type HoldingBatch } from './days-left';
 
@@ -9,11 +9,13 @@ export type DueToday = 'overdue' | 'ready' | 'turn' | null;
 export interface BoardRow extends HoldingBatch<BatchListItem> {
   /** What is due today; null when nothing is. */
   readonly due: DueToday;
+  /** Its turning: a turn owed, or today's turn done. */
+  readonly turn: BoardTurn;
 }
 
 /** The board's two lists: cures (curing) and doughs (proofing), kept apart. */
 export interface Board {
-  /** Curing batches: those with something due today first (overdue, ready, to turn), then by ready day. */
+  /** Curing batches: those with something due today first (overdue, ready, a turn owed), then by ready day. */
   readonly curing: readonly BoardRow[];
   /** Proofing doughs, overdue first, then by ready day. */
   readonly proofing: readonly BoardRow[];
@@ -21,35 +23,48 @@ export interface Board {
 
 const RANK: Readonly<Record<Exclude<DueToday, null>, number>> = { overdue: 0, ready: 1, turn: 2 };
 
+/** A curing batch's turning as the board shows it. */
+export interface BoardTurn {
+  /** The turning day a turn is owed since (today, or a day missed before it); null when none is. */
+  readonly owedSince: string | null;
+  /** Today's turn, when one is recorded today; else null. */
+  readonly turnedToday: BatchListItem['lastTurn'];
+}
+
 /**
- * Whether a curing batch is turned today: today is one of its turning days (its formula's rule
- * counted from its start, before its ready day), the same days the reminders are sent for.
+ * A curing batch's turning on `today`: a turn is owed since the latest turning day on or before
+ * today (its formula's rule counted from its start, before its ready day — the days the reminders
+ * are sent for) when no turn is recorded on or after it; and today's turn, when there is one.
  */
-export function turnsToday(batch: BatchListItem, today: string): boolean {
-  if (!batch.readyOn || !batch.flipEveryDays) return false;
-  return flipDays({
-    start: batch.startedOn,
-    ready: batch.readyOn,
-    flipEveryDays: batch.flipEveryDays,
-  }).includes(today);
+export function turnOf(batch: BatchListItem, today: string): BoardTurn {
+  const last = batch.status === 'curing' ? batch.lastTurn : null;
+  const owedSince =
+    batch.status === 'curing' && batch.readyOn && batch.flipEveryDays
+      ? turnOwedSince(
+          { start: batch.startedOn, ready: batch.readyOn, flipEveryDays: batch.flipEveryDays },
+          last?.on ?? null,
+          today,
+        )
+      : null;
+  return { owedSince, turnedToday: last?.on === today ? last : null };
 }
 
 /**
  * The daily board from the held batches: each with what is due today, cures and doughs apart,
- * what is due first (overdue, ready today, to turn today), then the rest by ready day.
+ * what is due first (overdue, ready today, a turn owed), then the rest by ready day.
  * @param today the kitchen's calendar day, YYYY-MM-DD
  */
 export function boardOf(batches: readonly BatchListItem[], today: string): Board {
   const rows = holdingBatches(batches, today).map((held): BoardRow => {
-    const { batch } = held;
+    const turn = turnOf(held.batch, today);
     const due: DueToday = held.overdue
       ? 'overdue'
       : held.daysLeft === 0
         ? 'ready'
-        : batch.status === 'curing' && turnsToday(batch, today)
+        : turn.owedSince
           ? 'turn'
           : null;
-    return { ...held, due };
+    return { ...held, due, turn };
   });
   // holdingBatches' order (overdue, then by ready day) is kept within each rank: the sort is stable.
   const ranked = (list: BoardRow[]): BoardRow[] =>

@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { BatchListItem, BatchPage } from '../batches/batch-types';
+import type { Batch, BatchListItem, BatchPage } from '../batches/batch-types';
 import { messageOf } from '../core/api/message-of';
 import { isoDateOf } from '../ui/batch-sheet/iso-day-pipe';
 import { boardOf } from './board-rows';
@@ -29,7 +29,7 @@ export class CuringBoard {
   readonly overdueCount = computed(() => this.entries().filter((e) => e.overdue).length);
   /** The daily board: cures and doughs apart, what is due today first. */
   readonly board = computed(() => boardOf(this.batches() ?? [], this.day()));
-  /** How many cures are turned today. */
+  /** How many cures owe a turn today (one missed before today included). */
   readonly turnTodayCount = computed(
     () => this.board().curing.filter((row) => row.due === 'turn').length,
   );
@@ -62,6 +62,30 @@ export class CuringBoard {
       return messageOf(error);
     } finally {
       await this.load();
+    }
+  }
+
+  /**
+   * Records that a curing batch was turned today (POST /api/batches/:lot/turns) and puts the
+   * turn on its card at once; someone else's turn recorded first is read in with the refusal.
+   * @returns null when it was recorded, else why not in words (turned already, no longer curing)
+   */
+  async markTurned(lot: string): Promise<string | null> {
+    try {
+      const { batch } = await firstValueFrom(
+        this.http.post<{ batch: Batch }>(`/api/batches/${encodeURIComponent(lot)}/turns`, {}),
+      );
+      const last = batch.turns?.at(-1);
+      if (last) {
+        const lastTurn = { on: last.on, at: last.at, by: last.by };
+        this.batches.update((list) =>
+          list ? list.map((item) => (item.lotCode === lot ? { ...item, lastTurn } : item)) : list,
+        );
+      }
+      return null;
+    } catch (error) {
+      void this.load();
+      return messageOf(error);
     }
   }
 

@@ -6,6 +6,7 @@ describe('audit event words', () => {
   describe('actionText', () => {
     it('should name a known action in words', () => {
       assert.equal(actionText({ action: 'batch-sign-off', detail: null }), 'Signed a batch off');
+      assert.equal(actionText({ action: 'batch-turn', detail: null }), 'Turned a cure');
     });
 
     it('should tell a person changing their own password from an admin reset', () => {
@@ -47,6 +48,11 @@ describe('audit event words', () => {
           },
         },
         expected: '“Less salt” · revision aaaaaaaa · was bbbbbbbb',
+      },
+      {
+        name: 'a cure turned, with its day in words and the note',
+        event: { action: 'batch-turn', detail: { on: '2026-12-04', note: 'Restacked' } },
+        expected: 'on 4 Dec 2026 · note: Restacked',
       },
       {
         name: 'a batch moved on with a reason',

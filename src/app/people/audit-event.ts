@@ -1,4 +1,5 @@
 import type { AuditAction, AuditEvent } from '../../../shared/api/audit-event.ts';
+import { dayWords } from '../../../shared/presentation/date-words.ts';
 import { processDetailText } from './audit-process-detail';
 import { fieldsOf, join, present, recipientsText, wordsOf } from './audit-words';
 
@@ -17,6 +18,7 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'batch-record', label: 'Recorded a batch' },
   { value: 'batch-status', label: 'Moved a batch on' },
   { value: 'batch-sign-off', label: 'Signed a batch off' },
+  { value: 'batch-turn', label: 'Turned a cure' },
   { value: 'person-add', label: 'Added a person' },
   { value: 'person-change', label: 'Changed a person' },
   { value: 'password-reset', label: 'Reset a password' },
@@ -123,6 +125,14 @@ export function detailText(event: Pick<AuditEvent, 'action' | 'detail'>): string
       return join(
         [
           present(detail['status']) ? `at status ${statusText(detail['status'])}` : '',
+          present(detail['note']) ? `note: ${wordsOf(detail['note'])}` : '',
+        ],
+        ' · ',
+      );
+    case 'batch-turn':
+      return join(
+        [
+          present(detail['on']) ? `on ${dayWords(wordsOf(detail['on']))}` : '',
           present(detail['note']) ? `note: ${wordsOf(detail['note'])}` : '',
         ],
         ' · ',

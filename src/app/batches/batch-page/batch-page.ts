@@ -30,6 +30,7 @@ import { ReasonDialog, type ReasonDialogData } from './reason-dialog';
 import { SignOffDialog, type SignOff, type SignOffDialogData } from './sign-off-dialog';
 import { StatusTimeline } from './status-timeline';
 import { FORMULA_KIND_WORDS as KIND_WORDS } from '../formula-kind-words';
+import { TurnList } from './turn-list';
 
 /**
  * One batch: its lot code, formula and revision, status and the history of every change, the
@@ -48,6 +49,7 @@ import { FORMULA_KIND_WORDS as KIND_WORDS } from '../formula-kind-words';
     BatchStatusChip,
     IsoDayPipe,
     StatusTimeline,
+    TurnList,
     HoldBanner,
     ProcessSection,
   ],

@@ -6,6 +6,7 @@ import { BatchStatusChip } from '../../ui/batch-sheet/batch-status-chip';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import type { BoardRow } from '../board-rows';
 import { daysLeftWords } from '../days-left';
+import { shortDayWords } from '../../../../shared/presentation/date-words.ts';
 
 /** What a due batch's flag says, with its icon: words first, the colour only repeats them. */
 const DUE = {
@@ -13,16 +14,19 @@ const DUE = {
   ready: { icon: 'event_available', words: () => 'Ready today' },
   turn: {
     icon: 'autorenew',
-    words: (row: BoardRow) =>
-      row.batch.flipEveryDays === 1
-        ? 'Turn today (every day)'
-        : `Turn today (every ${row.batch.flipEveryDays} days)`,
+    words: (row: BoardRow, today: string) =>
+      row.turn.owedSince && row.turn.owedSince < today
+        ? `Turn due since ${shortDayWords(row.turn.owedSince)}`
+        : row.batch.flipEveryDays === 1
+          ? 'Turn today (every day)'
+          : `Turn today (every ${row.batch.flipEveryDays} days)`,
   },
 } as const;
 
 /**
  * One held batch on the daily board, as a card that stacks on a phone: what is due today in
- * words, its days, and the quick actions — mark it done (the page asks first) and open it.
+ * words, its days, and the quick actions — mark a turn done, mark it done (the page asks
+ * first) and open it. A cure turned today says so, and by whom.
  */
 @Component({
   selector: 'app-board-card',
@@ -50,12 +54,25 @@ export class BoardCard {
   readonly failure = input<string | null>(null);
   /** Mark done was asked for. */
   readonly markDone = output<void>();
+  /** The kitchen's calendar day the board counts from, YYYY-MM-DD. */
+  readonly today = input.required<string>();
+  /** Mark turned was asked for. */
+  readonly markTurned = output<void>();
 
   protected readonly flag = computed(() => {
     const row = this.row();
     if (!row.due) return null;
     const due = DUE[row.due];
-    return { kind: row.due, icon: due.icon, words: due.words(row) };
+    return { kind: row.due, icon: due.icon, words: due.words(row, this.today()) };
   });
   protected readonly left = computed(() => daysLeftWords(this.row().daysLeft));
+  /** Whether a turn can be marked here: a cure owes one and this person moves batches. */
+  protected readonly canTurn = computed(() => this.canMove() && !!this.row().turn.owedSince);
+  /**
+   * The turn button's name: what it does to which batch, for a screen reader; it begins with the
+   * words on the button, so a voice command of what is seen finds it.
+   */
+  protected readonly turnLabel = computed(
+    () => `Mark turned: ${this.row().batch.formula.title}, lot ${this.row().batch.lotCode}`,
+  );
 }

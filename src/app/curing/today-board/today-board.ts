@@ -11,6 +11,7 @@ import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { SAFE_WORKFLOW_RULES } from '../../../../shared/workflow/workflow-rules.ts';
@@ -28,7 +29,7 @@ import { SignOffQueue } from '../sign-off-queue';
 
 /**
  * Today: a cook's daily board. What needs attention now (readings due, cooling deadlines,
- * holds); then the cures — overdue, ready today and to turn today first — and the doughs
+ * holds); then the cures — overdue, ready today and a turn owed first — and the doughs
  * proofing, apart; each a card with its quick actions. A reviewer sees the sign-off queue too.
  */
 @Component({
@@ -45,6 +46,7 @@ export default class TodayBoard implements OnInit {
   private readonly session = inject(SessionStore);
   private readonly dialog = inject(MatDialog);
   private readonly log = inject(BatchLog);
+  private readonly snackBar = inject(MatSnackBar);
 
   protected readonly now = new Date();
   /** Cooks and admins move batches along; reviewers look and sign off. */
@@ -91,6 +93,20 @@ export default class TodayBoard implements OnInit {
     return done ? done.blocked : 'This batch cannot be marked done from here.';
   }
 
+  /** Records today's turn of a cure, and says so in a snack-bar; a refusal shows on its card. */
+  protected async markTurned(row: BoardRow): Promise<void> {
+    const lot = row.batch.lotCode;
+    if (this.moving()) return;
+    this.moving.set(lot);
+    const failure = await this.board.markTurned(lot);
+    this.moving.set(null);
+    this.noteFailure(lot, failure);
+    if (!failure) {
+      this.log.invalidate();
+      this.snackBar.open(`Turned — recorded for ${lot}`, 'Close', { duration: 6000 });
+    }
+  }
+
   /** Asks, then marks the batch done; a signed-off batch asks an admin's reason instead. */
   protected async markDone(row: BoardRow): Promise<void> {
     const { batch } = row;
@@ -120,12 +136,17 @@ export default class TodayBoard implements OnInit {
     this.moving.set(batch.lotCode);
     const failure = await this.board.markDone(batch.lotCode, reason);
     this.moving.set(null);
-    const { [batch.lotCode]: _old, ...others } = this.failures();
-    this.failures.set(failure ? { ...others, [batch.lotCode]: failure } : others);
+    this.noteFailure(batch.lotCode, failure);
     if (!failure) {
       this.log.invalidate();
       void this.attention.load();
       if (this.reviews()) void this.queue.load();
     }
+  }
+
+  /** Keeps why a lot's last action failed, or forgets it when the action went through. */
+  private noteFailure(lot: string, failure: string | null): void {
+    const { [lot]: _old, ...others } = this.failures();
+    this.failures.set(failure ? { ...others, [lot]: failure } : others);
   }
 }
