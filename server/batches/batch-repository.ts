@@ -54,7 +54,7 @@ export class BatchRepository {
   /** @param rules the kitchen's workflow rules, which every change is held to */
   constructor(
     private readonly db: Database,
-    audit: AuditRepository,
+    private readonly audit: AuditRepository,
     /** The kitchen's workflow rules, which release is held to as well. */
     readonly rules: WorkflowRules,
   ) {
@@ -167,7 +167,7 @@ export class BatchRepository {
    */
   turn(lot: string, note: string | null, options: ChangeOptions): Promise<Batch> {
     return this.write(async (t) => {
-      await recordTurn(this.db, this.writes, t, lot, note, options);
+      await recordTurn(this.db, this.audit, t, lot, note, options);
       return this.mustGet(lot, t);
     });
   }

@@ -1,13 +1,15 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { BatchTurn } from '../../shared/api/batch-record.ts';
 import { statusInWords } from '../../shared/workflow/batch-status.ts';
+import { appendChange } from '../audit/append-change.ts';
+import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { conflict, notFound } from '../http/app-error.ts';
 import { kitchenTime } from '../process/kitchen-clock.ts';
 import { refuseOnReleased } from '../process/released.ts';
 import { localDate } from '../reminders/reminder-schedule.ts';
 import type { ChangeOptions } from './batch.ts';
-import type { BatchWrites, CurrentRow } from './batch-writes.ts';
+import type { CurrentRow } from './batch-writes.ts';
 
 interface TurnRow {
   turned_on: string;
@@ -71,7 +73,7 @@ export async function turnsOf(
  */
 export async function recordTurn(
   db: Database,
-  writes: BatchWrites,
+  audit: AuditRepository,
   t: Transaction,
   lot: string,
   note: string | null,
@@ -106,7 +108,7 @@ export async function recordTurn(
     );
   }
   await insertTurn(db, t, { lot, day, at, personId: options.actor.id, note });
-  await writes.audited(t, options, 'batch-turn', lot, { on: day, ...(note ? { note } : {}) });
+  await appendChange(audit, t, options, 'batch-turn', lot, { on: day, ...(note ? { note } : {}) });
 }
 
 /**
