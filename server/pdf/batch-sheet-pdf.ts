@@ -1,17 +1,12 @@
 import type { BatchSummary } from '../../shared/api/batch-record.ts';
-import { addDays, criticalFailures, type PresentedResult } from '../../shared/index.ts';
+import { criticalFailures, type PresentedResult } from '../../shared/index.ts';
 import { drawQrCode, qrMatrix, QUIET_ZONE_MODULES } from './qr-code.ts';
 import { finishSheet, openSheet } from './sheet-document.ts';
-import { BODY, INK, SMALL, TICK, type SheetLayout } from './sheet-layout.ts';
-import {
-  bulletList,
-  checkBlock,
-  figureTable,
-  heading,
-  signOffLines,
-  subheading,
-  weighTable,
-} from './sheet-sections.ts';
+import { hold } from './sheet-hold.ts';
+import { factGrid, type Fact } from './sheet-facts.ts';
+import { bulletList, numberedSteps } from './sheet-lists.ts';
+import { INK, SMALL, type SheetLayout } from './sheet-layout.ts';
+import { checkBlocks, heading, signOffLines, weighTable } from './sheet-sections.ts';
 import { statusInWords } from '../../shared/workflow/batch-status.ts';
 import { dayInWords, kindWords, momentInWords } from './sheet-words.ts';
 import { optionsInWords } from '../../shared/presentation/option-words.ts';
@@ -30,8 +25,10 @@ export interface SheetSource {
 
 /** The lot code of a sheet, or words for a calculation that was not recorded. */
 export const NO_LOT = 'not recorded';
-/** Widest the QR code may be, quiet zone included, points (about 27 mm). */
-const QR_SIDE = 76;
+/** Widest the QR code may be, quiet zone included, points (about 25 mm). */
+const QR_SIDE = 72;
+/** The most facts in the header's row beside the QR code. */
+const HEADER_FACTS = 6;
 const REFUSAL = 'REFUSED: a critical limit is failed. Do not make this batch.';
 
 /** The first 12 hex digits of a revision: enough to tell revisions apart on paper. */
@@ -39,24 +36,36 @@ export function shortRevision(revision: string): string {
   return revision.slice(0, 12);
 }
 
-/** Label over value, side by side along a row: the record's facts. */
-function facts(layout: SheetLayout, pairs: readonly [string, string][], width: number): void {
-  const cell = width / pairs.length;
-  pairs.forEach(([label, value], i) => {
-    const x = layout.left + i * cell;
-    layout.draw(
-      label.toUpperCase(),
-      { size: 7, color: INK.muted, weight: 'semibold' },
-      x,
-      layout.y,
-      cell - 8,
-    );
-    layout.draw(value, { size: BODY }, x, layout.y + 10, cell - 8);
-  });
-  layout.gap(26);
+/**
+ * The record's facts: status, people (the reviewer with the moment of the sign-off), and the
+ * start and ready days unless the hold prints the same days a little further down.
+ */
+function recordFacts(record: SheetRecord, result: PresentedResult): Fact[] {
+  const schedule = result.critical ? undefined : result.schedule;
+  const holdSays = schedule?.start === record.startedOn && schedule?.ready === record.readyOn;
+  return [
+    { label: 'Status', value: statusInWords(record.status) },
+    { label: 'Operator', value: record.operator.displayName },
+    ...(holdSays
+      ? []
+      : [
+          { label: 'Started', value: dayInWords(record.startedOn) },
+          { label: 'Ready', value: record.readyOn ? dayInWords(record.readyOn) : '—' },
+        ]),
+    record.signedOff
+      ? {
+          label: 'Signed off',
+          value: record.signedOff.by.displayName,
+          note: `${momentInWords(record.signedOff.at)}, reviewer, as recorded`,
+        }
+      : { label: 'Signed off', value: 'not yet' },
+  ];
 }
 
-/** Title, formula, lot code with its QR code, and the record's facts. */
+/**
+ * Title, lot code with its QR code beside them, the formula and its revision, and a row of facts:
+ * the record's, then the batch's inputs (what it was worked out from).
+ */
 function header(
   layout: SheetLayout,
   result: PresentedResult,
@@ -64,84 +73,56 @@ function header(
   revision: string | undefined,
 ): void {
   const top = layout.y;
-  const textWidth = layout.width - QR_SIDE - 16;
-  layout.draw(
-    'LARDERBOOK · BATCH SHEET',
-    { size: 7.5, weight: 'semibold', color: INK.rust },
-    layout.left,
-    top,
-    textWidth,
-  );
-  layout.y = top + 13;
+  const textWidth = layout.width - (record ? QR_SIDE + 14 : 0);
   layout.y += layout.draw(
     record?.formula.title ?? result.formula.title,
-    { size: 18, weight: 'semibold' },
+    { size: 16, weight: 'semibold' },
     layout.left,
     layout.y,
     textWidth,
   );
   const formula = [
+    'Batch sheet',
     result.formula.id,
     revision ? `revision ${shortRevision(revision)}` : 'revision not recorded',
     kindWords(result.formula.kind),
     result.units === 'us' ? 'US units' : 'metric units',
   ].join(' · ');
-  layout.y +=
-    layout.draw(formula, { size: SMALL, color: INK.muted }, layout.left, layout.y + 2, textWidth) +
-    10;
+  // The formula's line goes beside the lot when both fit on one line, under it when not.
+  const lot = record
+    ? { text: record.lotCode, style: { size: 15, weight: 'semibold', color: INK.rust } as const }
+    : { text: `${NO_LOT}: a calculation, not a recorded batch`, style: { size: 11 } };
+  const formulaStyle = { size: SMALL, color: INK.muted } as const;
+  const lotEnd = 26 + layout.widthOf(lot.text, lot.style) + 16;
+  const beside = lotEnd + layout.widthOf(formula, formulaStyle) <= textWidth;
+  if (!beside) {
+    layout.y += layout.draw(formula, formulaStyle, layout.left, layout.y + 1, textWidth) + 6;
+  } else layout.y += 3;
   layout.draw('Lot', { size: 11, color: INK.muted }, layout.left, layout.y + 3, 30);
-  if (record) {
-    layout.draw(
-      record.lotCode,
-      { size: 16, weight: 'semibold', color: INK.rust },
-      layout.left + 26,
-      layout.y,
-      textWidth - 26,
-    );
-  } else {
-    layout.draw(
-      `${NO_LOT}: a calculation, not a recorded batch`,
-      { size: 11 },
-      layout.left + 26,
-      layout.y + 3,
-      textWidth - 26,
-    );
+  layout.draw(lot.text, lot.style, layout.left + 26, layout.y + (record ? 0 : 3), textWidth - 26);
+  if (beside) {
+    const x = layout.left + lotEnd;
+    layout.draw(formula, formulaStyle, x, layout.y + 6, textWidth - lotEnd);
   }
-  layout.gap(26);
+  layout.gap(24);
   if (record) {
     const qrModule = QR_SIDE / (qrMatrix(record.lotCode).length + 2 * QUIET_ZONE_MODULES);
+    // No caption under it: the lot code is printed large beside it.
     drawQrCode(layout.doc, record.lotCode, layout.right - QR_SIDE, top - 4, qrModule);
-    layout.draw(
-      record.lotCode,
-      { size: 7, color: INK.muted, align: 'center' },
-      layout.right - QR_SIDE,
-      top + QR_SIDE - 6,
-      QR_SIDE,
-    );
-    layout.y = Math.max(layout.y, top + QR_SIDE + 6);
-    facts(
-      layout,
-      [
-        ['Status', statusInWords(record.status)],
-        ['Operator', record.operator.displayName],
-        ['Started', dayInWords(record.startedOn)],
-        ['Ready', record.readyOn ? dayInWords(record.readyOn) : '—'],
-        ['Signed off', record.signedOff ? record.signedOff.by.displayName : 'not yet'],
-      ],
-      layout.width,
-    );
-  } else if (result.schedule && !result.critical) {
-    facts(
-      layout,
-      [
-        ['Start', dayInWords(result.schedule.start)],
-        ['Ready', dayInWords(result.schedule.ready)],
-      ],
-      layout.width * 0.4,
-    );
   }
+  // The facts sit beside the QR code, under the lot; the inputs are figures, so in semibold.
+  // When they are too many for one row there, the inputs follow under the QR code.
+  const own = record ? recordFacts(record, result) : [];
+  const inputs = result.inputs.map((input) => ({ ...input, strong: true }));
+  const together = own.length + inputs.length <= HEADER_FACTS;
+  factGrid(layout, together ? [...own, ...inputs] : own, {
+    perRow: HEADER_FACTS,
+    width: textWidth,
+  });
+  if (record) layout.y = Math.max(layout.y, top + QR_SIDE - 2);
+  if (!together) factGrid(layout, inputs, { perRow: HEADER_FACTS });
   layout.rule(INK.text, 0.8);
-  layout.gap(6);
+  layout.gap(4);
 }
 
 /** The refusal, in a red box that cannot be missed, with the checks that failed. */
@@ -171,58 +152,10 @@ function refusal(layout: SheetLayout, result: PresentedResult): void {
   layout.y += height + 6;
 }
 
-/** Hold: days, start and ready, and a box for each turn with its date. */
-function hold(layout: SheetLayout, schedule: NonNullable<PresentedResult['schedule']>): void {
-  layout.ensure(60);
-  const days = `${schedule.days} ${schedule.days === 1 ? 'day' : 'days'}`;
-  layout.draw(days, { size: 15, weight: 'semibold' }, layout.left, layout.y, 90);
-  const start = `Start ${dayInWords(schedule.start)}`;
-  const ready = `ready ${dayInWords(schedule.ready)}`;
-  const x = layout.left + 90;
-  layout.draw(start, { size: 11 }, x, layout.y + 3, 200);
-  const arrowX = x + layout.doc.widthOfString(start) + 8;
-  const arrowY = layout.y + 10;
-  layout.doc
-    .moveTo(arrowX, arrowY)
-    .lineTo(arrowX + 18, arrowY)
-    .moveTo(arrowX + 14, arrowY - 3.5)
-    .lineTo(arrowX + 18, arrowY)
-    .lineTo(arrowX + 14, arrowY + 3.5)
-    .lineWidth(1)
-    .strokeColor(INK.text)
-    .stroke();
-  layout.draw(ready, { size: 11, weight: 'semibold' }, arrowX + 26, layout.y + 3, 200);
-  layout.gap(24);
-  layout.paragraph(schedule.rule, { color: INK.muted, size: SMALL });
-  const every = schedule.flipEveryDays;
-  if (!every) return;
-  layout.paragraph(`Turn every ${every} ${every === 1 ? 'day' : 'days'}; tick each turn:`);
-  const turns: number[] = [];
-  for (let day = every; day < schedule.days; day += every) turns.push(day);
-  const step = 92;
-  const perRow = Math.max(1, Math.floor(layout.width / step));
-  turns.forEach((day, i) => {
-    if (i % perRow === 0) {
-      if (i) layout.gap(18);
-      layout.ensure(18);
-    }
-    const x = layout.left + (i % perRow) * step;
-    layout.tickBox(x, layout.y + 1);
-    layout.draw(
-      `day ${day}, ${dayInWords(addDays(schedule.start, day))}`,
-      { size: SMALL },
-      x + TICK + 5,
-      layout.y + 1,
-      step - TICK - 8,
-    );
-  });
-  if (turns.length) layout.gap(20);
-}
-
-/** Checks, warnings, yields and portions: what to verify once the batch is made. */
+/** Checks, warnings and portions: what to verify once the batch is made. */
 function check(layout: SheetLayout, result: PresentedResult, title: string): void {
   heading(layout, title, 60);
-  for (const limit of result.checks) checkBlock(layout, limit);
+  checkBlocks(layout, result.checks);
   for (const warning of result.warnings) {
     layout.paragraph(`Warning: ${optionsInWords(warning)}`, {
       color: INK.warn,
@@ -230,21 +163,6 @@ function check(layout: SheetLayout, result: PresentedResult, title: string): voi
     });
   }
   if (result.critical) return;
-  if (result.yields?.length) {
-    subheading(layout, 'Yields');
-    layout.table(
-      [{ width: 3 }, { width: 2, align: 'right' }, { width: 3, align: 'right' }],
-      {
-        cells: ['After', 'Yield', 'Expected weight'].map((text) => ({
-          text,
-          style: { size: SMALL, color: INK.muted },
-        })),
-      },
-      result.yields.map((y) => ({ cells: [y.step, y.percent, y.amount] })),
-      { width: layout.width * 0.6 },
-    );
-    layout.gap(6);
-  }
   if (result.portions) {
     const p = result.portions;
     layout.paragraph(`Portions: ${p.sentence}`, {
@@ -255,12 +173,20 @@ function check(layout: SheetLayout, result: PresentedResult, title: string): voi
 
 /**
  * The body of a batch's sheet, in the order the work is done: the batch, weigh (a box to tick
- * beside every line), mix and apply, hold, check; then allergens, cautions and notes. A refused
- * result prints no amounts. Shared by the batch sheet and each day of a plan's sheets.
+ * beside every line), mix and apply (with the formula's note, the figures and the yields to
+ * expect), hold, check; then allergens and cautions. A refused result prints no amounts.
+ * @param options.inputs whether to print the inputs (a batch sheet has them in its header) Shared by the batch sheet and each day of a plan's sheets.
  */
-export function batchBody(layout: SheetLayout, result: PresentedResult): void {
-  heading(layout, 'The batch');
-  figureTable(layout, result.inputs);
+export function batchBody(
+  layout: SheetLayout,
+  result: PresentedResult,
+  { inputs = true }: { inputs?: boolean } = {},
+): void {
+  // The batch's inputs need no heading: each is labelled.
+  if (inputs) {
+    layout.gap(4);
+    factGrid(layout, result.inputs, { perRow: 5, strong: true });
+  }
   const refused = result.critical;
   // The work's steps are numbered: 1 · Weigh, 2 · Mix and apply…
   let step = 0;
@@ -268,34 +194,31 @@ export function batchBody(layout: SheetLayout, result: PresentedResult): void {
   if (!refused) {
     heading(layout, numbered('Weigh'), 90);
     for (const group of result.groups) weighTable(layout, group);
-    if (result.steps.length || result.figures.length) {
+    // The figures to work to, and the weights to expect after each step: one row of facts.
+    const worked: Fact[] = [
+      ...result.figures,
+      ...(result.yields ?? []).map((y) => ({
+        label: `Expected after ${y.step}`,
+        value: y.amount,
+        note: `yield ${y.percent}`,
+      })),
+    ];
+    if (result.steps.length || worked.length) {
       heading(layout, numbered('Mix and apply'));
-      result.steps.forEach((text, i) => {
-        layout.ensure(layout.measure(text, {}, layout.width - 20));
-        layout.draw(
-          `${i + 1}.`,
-          { weight: 'semibold', color: INK.rust },
-          layout.left,
-          layout.y,
-          18,
-        );
-        layout.y += layout.draw(text, {}, layout.left + 20, layout.y, layout.width - 20) + 4;
-      });
-      if (result.figures.length) {
-        subheading(layout, 'Figures');
-        figureTable(layout, result.figures);
+      numberedSteps(layout, result.steps);
+      if (worked.length) {
+        layout.gap(4);
+        factGrid(layout, worked, { perRow: 4, strong: true });
       }
     }
+    // The formula's own note is an instruction for the work: it goes with the steps.
+    if (result.notes) layout.paragraph(`Note: ${result.notes.trim()}`, { weight: 'semibold' });
     if (result.schedule) {
       heading(layout, numbered('Hold'));
       hold(layout, result.schedule);
     }
   }
-  if (
-    result.checks.length ||
-    result.warnings.length ||
-    (!refused && (result.yields?.length || result.portions))
-  )
+  if (result.checks.length || result.warnings.length || (!refused && result.portions))
     check(layout, result, refused ? 'Check' : numbered('Check'));
   if (result.allergens.length) {
     heading(layout, 'Allergens', 20);
@@ -304,11 +227,8 @@ export function batchBody(layout: SheetLayout, result: PresentedResult): void {
     });
   }
   heading(layout, 'Cautions');
-  bulletList(layout, result.cautions);
-  if (result.notes) {
-    heading(layout, 'Notes', 20);
-    layout.paragraph(result.notes.trim());
-  }
+  bulletList(layout, result.cautions, { columns: 2 });
+  if (refused && result.notes) layout.paragraph(`Note: ${result.notes.trim()}`);
 }
 
 /**
@@ -336,17 +256,15 @@ export function renderBatchSheetPdf(
   header(layout, result, record, record?.formula.revision ?? source.revision);
   const refused = result.critical;
   if (refused) refusal(layout, result);
-  batchBody(layout, result);
-  layout.gap(6);
-  layout.paragraph(result.rounding, { size: SMALL, color: INK.muted });
-  if (refused) layout.paragraph(REFUSAL, { weight: 'semibold', color: INK.fail, size: 11 });
-  const signed = record?.signedOff;
-  signOffLines(
-    layout,
-    refused ? ['Checked by'] : ['Weighed by', 'Checked by'],
-    signed
-      ? `Signed off by ${signed.by.displayName}, ${momentInWords(signed.at)} (reviewer, as recorded in Larderbook)`
-      : undefined,
-  );
+  batchBody(layout, result, { inputs: false });
+  if (refused) {
+    layout.gap(6);
+    layout.paragraph(REFUSAL, { weight: 'semibold', color: INK.fail, size: 11 });
+  }
+  // How the amounts were rounded goes beside the lines to sign; a sign-off already recorded is
+  // in the header's facts.
+  signOffLines(layout, refused ? ['Checked by'] : ['Weighed by', 'Checked by'], {
+    aside: result.rounding,
+  });
   return finishSheet(layout, lot);
 }

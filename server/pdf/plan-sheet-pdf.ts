@@ -2,7 +2,8 @@ import type { PresentedPlan, PresentedPlanBatch } from '../../shared/index.ts';
 import { batchBody } from './batch-sheet-pdf.ts';
 import { finishSheet, openSheet } from './sheet-document.ts';
 import { INK, SMALL, TICK, type SheetLayout } from './sheet-layout.ts';
-import { bulletList, heading, signOffLines, subheading } from './sheet-sections.ts';
+import { bulletList } from './sheet-lists.ts';
+import { heading, signOffLines, subheading } from './sheet-sections.ts';
 import { optionsInWords } from '../../shared/presentation/option-words.ts';
 import { dayInWords, kindWords } from './sheet-words.ts';
 

@@ -67,11 +67,11 @@ export interface Row {
 }
 
 /** Body text size, points. */
-export const BODY = 9.5;
+export const BODY = 9;
 /** Small print: notes, sources, table headings, points. */
-export const SMALL = BODY - 1.5;
+export const SMALL = BODY - 1;
 const CELL_PAD_X = 5;
-const CELL_PAD_Y = 4;
+const CELL_PAD_Y = 2;
 /** The side of a tick box, points. */
 export const TICK = 9;
 
@@ -142,6 +142,28 @@ export class SheetLayout {
   /** The height a text takes in a width. */
   measure(text: string, style: TextStyle, width: number): number {
     return this.measured(text, style, width).height;
+  }
+
+  /**
+   * Where the last line of a text in a width starts, down from its top, and how wide it is; for
+   * a text in two fonts, undefined (its lines are not known).
+   */
+  lastLine(
+    text: string,
+    style: TextStyle,
+    width: number,
+  ): { top: number; width: number } | undefined {
+    const { height, lines } = this.measured(text, style, width);
+    const last = lines?.[lines.length - 1];
+    return last && lines
+      ? { top: (height * (lines.length - 1)) / lines.length, width: last.width }
+      : undefined;
+  }
+
+  /** The width a text takes on one line, points. */
+  widthOf(text: string, style: TextStyle): number {
+    const line = this.measured(text, style, 10_000).lines?.[0];
+    return line ? line.width : this.doc.widthOfString(text);
   }
 
   private measured(text: string, style: TextStyle, width: number): Measured {

@@ -4,7 +4,7 @@ import { fontRuns, type FontRun, type FontWeight } from './sheet-fonts.ts';
 import { wrapLines, type TextLine } from './sheet-text.ts';
 
 /** The space between the lines of a text, points. */
-export const LINE_GAP = 1.6;
+export const LINE_GAP = 1.2;
 
 /** A text's height in a width, and its lines. */
 export interface Measured {

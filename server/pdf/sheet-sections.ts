@@ -4,26 +4,26 @@ import { BODY, INK, SMALL, TICK, type Column, type Row, type SheetLayout } from 
 
 /** A section heading, kept on a page with at least `keep` points of what follows it. */
 export function heading(layout: SheetLayout, text: string, keep = 48): void {
-  layout.gap(8);
-  layout.ensure(22 + keep);
+  layout.gap(3);
+  layout.ensure(15 + keep);
   layout.draw(
     text.toUpperCase(),
-    { weight: 'semibold', size: 10.5, color: INK.rust },
+    { weight: 'semibold', size: 10, color: INK.rust },
     layout.left,
     layout.y,
     layout.width,
   );
-  layout.gap(15);
+  layout.gap(12);
   layout.rule(INK.rust, 0.8);
-  layout.gap(7);
+  layout.gap(3.5);
 }
 
 /** A heading inside a section (a weigh group, "Figures"). */
 export function subheading(layout: SheetLayout, text: string, keep = 40): void {
-  layout.gap(6);
-  layout.ensure(16 + keep);
+  layout.gap(4);
+  layout.ensure(14 + keep);
   layout.draw(text, { weight: 'semibold', size: BODY + 0.5 }, layout.left, layout.y, layout.width);
-  layout.gap(16);
+  layout.gap(14);
 }
 
 /** Label, value and note rows: the batch's inputs, figures to work to. */
@@ -60,7 +60,8 @@ export function weighTable(layout: SheetLayout, group: PresentedGroup): void {
   const header: Row = {
     cells: [
       { text: '', style: head },
-      { text: 'Ingredient', style: head },
+      // The group's title heads the ingredient column: a line saved on a sheet pinned by the work.
+      { text: group.title, style: { weight: 'semibold', size: BODY + 0.5 } },
       ...(hasPercent ? [{ text: `% of ${group.percentOf ?? 'total'}`, style: head }] : []),
       { text: 'Weigh', style: head },
       ...(hasGrams ? [{ text: 'in grams', style: head }] : []),
@@ -120,7 +121,7 @@ export function weighTable(layout: SheetLayout, group: PresentedGroup): void {
       ],
     });
   }
-  subheading(layout, group.title, 60);
+  layout.gap(4);
   layout.table(columns, header, rows, {
     continued: () => subheading(layout, `${group.title} (continued)`, 0),
   });
@@ -133,59 +134,64 @@ const VERDICT_INK = {
   FAIL: { text: INK.white, fill: INK.fail },
 } as const;
 
-/** One limit check: PASS, FAIL or WARN in words on a coloured badge, its sentence and source. */
-export function checkBlock(layout: SheetLayout, check: PresentedCheck): void {
-  const badge = 44;
-  const x = layout.left + badge + 10;
-  const width = layout.right - x;
-  const label = `${check.label}${check.critical ? ' · critical limit' : ''}`;
-  const source = `Source: ${check.source}`;
-  const height =
-    layout.measure(label, { weight: 'semibold' }, width) +
-    layout.measure(check.sentence, {}, width) +
-    layout.measure(source, { size: SMALL }, width) +
-    4;
-  layout.ensure(height);
+const BADGE = 44;
+
+/** The height of one check's block in a width. */
+function checkHeight(layout: SheetLayout, check: PresentedCheck, width: number): number {
+  const text = width - BADGE - 10;
+  return Math.max(
+    17,
+    layout.measure(checkLabel(check), { weight: 'semibold' }, text) +
+      layout.measure(check.sentence, {}, text) +
+      layout.measure(`Source: ${check.source}`, { size: SMALL }, text),
+  );
+}
+
+function checkLabel(check: PresentedCheck): string {
+  return `${check.label}${check.critical ? ' · critical limit' : ''}`;
+}
+
+/** Draws one check's block at x in a width, from the flow's line, without moving it. */
+function drawCheck(layout: SheetLayout, check: PresentedCheck, x: number, width: number): void {
+  const text = width - BADGE - 10;
   const ink = VERDICT_INK[check.verdict];
-  layout.doc.roundedRect(layout.left, layout.y, badge, 17, 3).fillColor(ink.fill).fill();
+  if (!layout.counting)
+    layout.doc.roundedRect(x, layout.y, BADGE, 17, 3).fillColor(ink.fill).fill();
   layout.draw(
     check.verdict,
     { weight: 'semibold', color: ink.text, align: 'center', size: BODY },
-    layout.left,
+    x,
     layout.y + 3.5,
-    badge,
+    BADGE,
   );
   let y = layout.y;
-  y += layout.draw(label, { weight: 'semibold' }, x, y, width);
-  y += layout.draw(check.sentence, {}, x, y, width);
-  y += layout.draw(source, { size: SMALL, color: INK.muted }, x, y, width);
-  layout.y = Math.max(y, layout.y + 17) + 8;
+  const at = x + BADGE + 10;
+  y += layout.draw(checkLabel(check), { weight: 'semibold' }, at, y, text);
+  y += layout.draw(check.sentence, {}, at, y, text);
+  layout.draw(`Source: ${check.source}`, { size: SMALL, color: INK.muted }, at, y, text);
 }
 
-/** A bulleted list, each item kept whole; `source` is printed after the text, in grey. */
-export function bulletList(
-  layout: SheetLayout,
-  items: readonly { readonly text: string; readonly source?: string }[],
-): void {
-  const indent = 12;
-  for (const item of items) {
-    const width = layout.width - indent;
-    const source = item.source ? `Source: ${item.source}` : '';
-    const sourceStyle = { size: SMALL, color: INK.muted };
-    layout.ensure(
-      layout.measure(item.text, {}, width) +
-        (source ? layout.measure(source, sourceStyle, width) : 0),
-    );
-    layout.draw('•', { color: INK.rust }, layout.left + 2, layout.y, indent);
-    layout.y += layout.draw(item.text, {}, layout.left + indent, layout.y, width);
-    if (source) layout.y += layout.draw(source, sourceStyle, layout.left + indent, layout.y, width);
-    layout.gap(4);
+/**
+ * Limit checks: PASS, FAIL or WARN in words on a coloured badge, each with its sentence and
+ * source; two side by side, a pair kept whole on a page.
+ */
+export function checkBlocks(layout: SheetLayout, checks: readonly PresentedCheck[]): void {
+  const gutter = 16;
+  const half = (layout.width - gutter) / 2;
+  for (let i = 0; i < checks.length; i += 2) {
+    const pair = checks.slice(i, i + 2);
+    // A check alone on its row takes the whole width.
+    const width = checks.length === 1 ? layout.width : half;
+    const height = Math.max(...pair.map((check) => checkHeight(layout, check, width)));
+    layout.ensure(height);
+    pair.forEach((check, n) => drawCheck(layout, check, layout.left + n * (half + gutter), width));
+    layout.gap(height + 5);
   }
 }
 
 /** A line to write on after a label: "Weighed by ________". */
 function writeOnLine(layout: SheetLayout, label: string, x: number, width: number): void {
-  const labelWidth = layout.doc.widthOfString(label) + 6;
+  const labelWidth = layout.widthOf(label, {}) + 6;
   layout.draw(label, {}, x, layout.y, labelWidth);
   layout.doc
     .moveTo(x + labelWidth, layout.y + 11)
@@ -197,22 +203,41 @@ function writeOnLine(layout: SheetLayout, label: string, x: number, width: numbe
 
 /**
  * The lines a cook and a checker sign on paper ("Weighed by ____ Date ____"), each with a date,
- * kept together at the end of the sheet; `recorded` is a sign-off already in the record.
+ * kept together at the end of the sheet: side by side, or stacked on the right beside `aside`,
+ * a note in small print (how the amounts were rounded). `recorded` is a sign-off already in the
+ * record, printed under the lines.
  */
 export function signOffLines(
   layout: SheetLayout,
   labels: readonly string[],
-  recorded?: string,
+  { recorded, aside }: { recorded?: string; aside?: string } = {},
 ): void {
-  const rowHeight = 30;
-  layout.ensure(rowHeight * labels.length + 40 + (recorded ? 20 : 0));
-  heading(layout, 'Sign-off', 0);
-  const nameWidth = layout.width * 0.62;
-  for (const label of labels) {
-    layout.gap(8);
-    writeOnLine(layout, label, layout.left, nameWidth - 16);
-    writeOnLine(layout, 'Date', layout.left + nameWidth, layout.width - nameWidth);
-    layout.gap(rowHeight - 8);
-  }
-  if (recorded) layout.paragraph(recorded, { weight: 'semibold', color: INK.pass });
+  const rowHeight = 20;
+  const asideWidth = aside ? layout.width * 0.6 : 0;
+  const asideStyle = { size: SMALL, color: INK.muted } as const;
+  const asideHeight = aside ? layout.measure(aside, asideStyle, asideWidth) : 0;
+  // The lines: stacked beside the note, or side by side across the page.
+  const x = aside ? layout.left + asideWidth + 20 : layout.left;
+  const width = layout.right - x;
+  const recordedStyle = { weight: 'semibold', color: INK.pass } as const;
+  const recordedHeight = recorded ? layout.measure(recorded, recordedStyle, width) + 2 : 0;
+  const linesHeight = (aside ? rowHeight * labels.length : rowHeight) + recordedHeight;
+  layout.ensure(Math.max(asideHeight, linesHeight) + 12);
+  // The labels say what is signed: a rule sets the lines apart, without a heading.
+  layout.gap(6);
+  layout.rule(INK.rust, 0.8);
+  layout.gap(6);
+  const top = layout.y;
+  if (aside) layout.draw(aside, asideStyle, layout.left, top, asideWidth);
+  const gutter = 24;
+  const each = aside ? width : (width - gutter * (labels.length - 1)) / labels.length;
+  labels.forEach((label, i) => {
+    layout.y = aside ? top + i * rowHeight : top;
+    const at = aside ? x : x + i * (each + gutter);
+    writeOnLine(layout, label, at, each * 0.62 - 10);
+    writeOnLine(layout, 'Date', at + each * 0.62, each * 0.38);
+  });
+  const linesEnd = top + linesHeight - recordedHeight;
+  if (recorded) layout.draw(recorded, recordedStyle, x, linesEnd, width);
+  layout.y = top + Math.max(asideHeight, linesHeight) + 4;
 }

@@ -171,7 +171,8 @@ function write(doc: PDFKit.PDFDocument, operators: string): void {
 
 /**
  * Sets fill and stroke colours only when they change: pdfkit writes the colour again for every
- * text and rule. What is set is forgotten on a new page and restored with the graphics state.
+ * text and rule. What is set is forgotten on a new page (or on going back to one) and restored
+ * with the graphics state.
  */
 export function rememberColours(doc: PDFKit.PDFDocument): void {
   let fill: unknown;
@@ -205,6 +206,13 @@ export function rememberColours(doc: PDFKit.PDFDocument): void {
     fill = undefined;
     stroke = undefined;
   });
+  // Going back to a page (to write its footer) finds it in the colours its own text left.
+  const switchToPage = doc.switchToPage.bind(doc);
+  doc.switchToPage = (page) => {
+    fill = undefined;
+    stroke = undefined;
+    return switchToPage(page);
+  };
 }
 
 /** A straight line from one point to another, as pdfkit's moveTo, lineTo, lineWidth and stroke write it. */

@@ -5,6 +5,11 @@ export function dayInWords(day: string): string {
   return dayWords(day);
 }
 
+/** A calendar day without its year, "2 Dec", where the year is printed close by. */
+export function shortDayInWords(day: string): string {
+  return dayWords(day).replace(/ \d{4}$/, '');
+}
+
 /** Moments already put in words: a report names the same times again and again. */
 const moments = new Map<string, string>();
 /** Kept short of growing without end over a long-running server's many sheets. */

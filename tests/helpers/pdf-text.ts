@@ -3,6 +3,8 @@ import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 /** A PDF read back: its pages' text, each page's items joined by spaces, and its metadata. */
 export interface PdfText {
   readonly pages: readonly string[];
+  /** Each page's width and height, points, as the reader sees them (A4 is 595 × 842). */
+  readonly sizes: readonly (readonly [number, number])[];
   readonly title: string;
   /** Every page's text, joined. */
   readonly all: string;
@@ -20,8 +22,12 @@ export async function pdfText(bytes: Uint8Array): Promise<PdfText> {
     isEvalSupported: false,
   }).promise;
   const pages: string[] = [];
+  const sizes: [number, number][] = [];
   for (let i = 1; i <= document.numPages; i++) {
-    const content = await (await document.getPage(i)).getTextContent();
+    const page = await document.getPage(i);
+    const { width, height } = page.getViewport({ scale: 1 });
+    sizes.push([Math.round(width), Math.round(height)]);
+    const content = await page.getTextContent();
     const words = content.items.map((item) => ('str' in item ? item.str : '')).filter(Boolean);
     // Runs of spaces collapse, so a test matches "10.7 g" however the writer split the line.
     pages.push(words.join(' ').replace(/\s+/g, ' '));
@@ -30,6 +36,7 @@ export async function pdfText(bytes: Uint8Array): Promise<PdfText> {
   await document.destroy();
   return {
     pages,
+    sizes,
     title: String((info as { Title?: string }).Title ?? ''),
     all: pages.join('\n'),
   };

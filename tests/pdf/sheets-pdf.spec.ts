@@ -19,8 +19,8 @@ const BELLY_CALC = ['calc', 'quillmoor-belly', '--meat', '4.26kg', '--thickness'
 
 /** The demo belly at 4.26 kg, worked by hand from formulas/quillmoor-belly.yaml. */
 const BELLY_FIGURES = [
-  // Green weight as given.
-  /Green weight 4260 g/,
+  // Green weight as given (its label printed in capitals).
+  /Green weight 4260 g/i,
   // Curing salt 0.25 % × 4260 g = 10.65 g, weighed to 0.1 g rounding half up: 10.7 g.
   /curing salt no\. 1 \(6\.25 % nitrite\).* 0\.25 % 10\.7 g/,
   // Salt 2.25 % × 4260 g = 95.85 g → 95.9 g (under 100 g: to 0.1 g).
@@ -158,7 +158,7 @@ describe('batch sheets as PDF from the command line', () => {
     // formula layout standards (2009); own example, derived
     assert.match(sheet.all, /sponge .*1288\.2 g/);
     assert.match(sheet.all, /the exact weight is 4453\.6 g/);
-    assert.match(sheet.all, /Mixed dough 4453\.6 g/);
+    assert.match(sheet.all, /Mixed dough 4453\.6 g/i);
     assert.doesNotMatch(sheet.all, /4454 g|1288 g/);
     assert.match(sheet.all, /the other 133\.6 g is the loss allowance/);
   });

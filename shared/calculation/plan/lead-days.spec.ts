@@ -20,7 +20,7 @@ describe('leadDaysOf: days between ready and service', () => {
   it('should take the formula’s own lead_days, zero included', () => {
     assert.deepEqual(leadDaysOf({ ...BELLY, lead_days: 0 }), {
       days: 0,
-      source: "the formula's lead_days",
+      source: "the formula's own",
     });
     assert.equal(leadDaysOf({ ...SAUCE, lead_days: 2 }).days, 2);
   });

@@ -19,7 +19,7 @@ export const DEFAULT_LEAD_DAYS = {
 /** A formula's lead days and where they came from, in words. */
 export interface LeadDays {
   readonly days: number;
-  /** "the formula's lead_days", or the default with what it is for. */
+  /** "the formula's own", or the default with what it is for. */
   readonly source: string;
 }
 
@@ -34,7 +34,8 @@ export function daysInWords(days: number): string {
  */
 export function leadDaysOf(formula: BatchFormula): LeadDays {
   if (formula.lead_days !== undefined) {
-    return { days: formula.lead_days, source: "the formula's lead_days" };
+    // In a cook's words: the sheet never names a field of the formula file.
+    return { days: formula.lead_days, source: "the formula's own" };
   }
   const rule = "the kitchen's own rule, common practice, no source";
   switch (formula.kind) {

@@ -57,7 +57,7 @@ describe('planAssembly: a part applied to another part (the rub on the brisket)'
     const rub = batchOf(plan, 'brisket-rub');
     assert.equal(places4(grams(rub.batch.total)), '167.0201');
     assert.deepEqual(rub.purposes, [
-      'Smoked corned-beef sandwich (60 units): 1.5 % of the green weight of Brisket flat, equilibrium brine (brisket-brine)',
+      'Smoked corned-beef sandwich (60 units): 1.5 % of the green weight of Brisket flat, equilibrium brine',
     ]);
   });
 

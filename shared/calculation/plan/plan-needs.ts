@@ -125,7 +125,8 @@ function demandOf(
     return {
       ...none,
       grams: fraction(new Decimal(component.pct ?? 0)).times(green),
-      words: `${component.pct} % of the green weight of ${base?.title ?? on} (${on})`,
+      // Named by title, as everything a cook reads: the id only when there is no title.
+      words: `${component.pct} % of the green weight of ${base?.title ?? on}`,
     };
   }
   if (key === 'portions' && formula.kind === 'blend') {

@@ -104,6 +104,6 @@ describe('planAssembly: nested assemblies, one batch per formula, yields carried
     // 30 × (4 × 20 g + 15 g) = 2 850 g finished.
     assert.deepEqual(belly?.batch, { want: '2850 g', thickness: '50 mm', start: '2026-12-05' });
     assert.equal(belly?.ready, '2026-12-15');
-    assert.match(belly?.rule ?? '', /3 days before service \(lead days: the formula's lead_days\)/);
+    assert.match(belly?.rule ?? '', /3 days before service \(lead days: the formula's own\)/);
   });
 });
