@@ -39,7 +39,7 @@ function reportSetup(head: ReportHead): SheetSetup {
     subject: `HACCP records from ${head.from} to ${head.to}`,
     units: 'metric',
     created: head.producedAt.slice(0, 10),
-    lot: `HACCP records ${head.from} to ${head.to}`,
+    lot: `HACCP records ${periodWords(head)}`,
     running: periodWords(head),
   };
 }

@@ -145,6 +145,12 @@ describe('the HACCP records report', () => {
     assert.match(all, /Ingoing nitrite 250 ppm is over the 200 ppm ceiling\./);
     assert.match(all, /Test walk-in \(cooler\)/);
     assert.match(pages[0], new RegExp(`page 1 of ${pages.length}`));
+    // The footer names the period in the same words as the page, never as YYYY-MM-DD.
+    assert.match(
+      pages[0],
+      /HACCP records \d{1,2} [A-Z][a-z]{2} \d{4} to \d{1,2} [A-Z][a-z]{2} \d{4}/,
+    );
+    assert.doesNotMatch(all, /\d{4}-\d{2}-\d{2}/);
   });
 
   it('should give the CSV one record per entry with its type, fields quoted as RFC 4180 says', async (t) => {
