@@ -37,8 +37,8 @@ export interface IngredientStatement {
   readonly text: string;
 }
 
-/** The same ingredient however it is capitalised or spaced ("Salt", "salt "). */
-function sameName(name: string): string {
+/** An ingredient name as compared: however it is capitalised or spaced ("Salt", "salt "). */
+export function sameName(name: string): string {
   return name.trim().replace(/\s+/g, ' ').toLowerCase();
 }
 
