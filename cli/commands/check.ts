@@ -46,7 +46,7 @@ const PROGRESS_FROM = 50;
 export function checkCommand(io: Io): Command {
   return new Command('check')
     .description(
-      'check formula files: YAML, schema, percentages and nitrite limits; a folder also checks its assemblies against the formulas they name',
+      'check formula files: YAML, schema, percentages and nitrite limits; a folder also checks its assemblies against the formulas they name, and every formula against its catalogue of materials (catalogue.yaml)',
     )
     .argument('[paths...]', 'files or folders to check (default: $LARDER_FORMULAS or ./formulas)')
     .option('--staged', 'check the formula files staged in git, as staged (for a pre-commit hook)')
@@ -57,6 +57,7 @@ export function checkCommand(io: Io): Command {
 Examples:
   larder check                      every formula under ./formulas
   larder check formulas/ham-pump.yaml  one file
+  larder check formulas/catalogue.yaml  the catalogue of materials alone
   larder check --staged             in .git/hooks/pre-commit: refuse a commit with a bad formula
 
 Environment:
@@ -117,18 +118,18 @@ async function runCheck(paths: string[], options: CheckOptions, io: Io): Promise
   } else {
     for (const report of reports)
       for (const problem of report.problems) io.out(`${formatProblem(problem)}\n`);
-    const catalogues = catalogueReports.length;
-    const and =
-      catalogues === 0
-        ? ''
-        : catalogues === 1
-          ? ' and the catalogue'
-          : ` and ${catalogues} catalogues`;
     io.out(
-      `Checked ${checked.formulas.length} formula file(s)${and}: ${summary.ok} ok, ${summary.failed} with errors, ${summary.warnings} warning(s).\n`,
+      `Checked ${checkedWhat(checked.formulas.length, catalogueReports.length)}: ${summary.ok} ok, ${summary.failed} with errors, ${summary.warnings} warning(s).\n`,
     );
   }
   if (failed > 0) process.exitCode = EXIT.formula;
+}
+
+/** "11 formula file(s) and the catalogue", "the catalogue", as the summary says it. */
+function checkedWhat(formulas: number, catalogues: number): string {
+  const what = catalogues === 1 ? 'the catalogue' : `${catalogues} catalogues`;
+  if (catalogues === 0) return `${formulas} formula file(s)`;
+  return formulas === 0 ? what : `${formulas} formula file(s) and ${what}`;
 }
 
 async function readPaths(paths: string[], threads: number | undefined, io: Io): Promise<Checked> {

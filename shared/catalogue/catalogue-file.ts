@@ -1,5 +1,8 @@
+/** The catalogue's name, which no formula may take as its id. */
+export const CATALOGUE_ID = 'catalogue';
+
 /** The catalogue's file name, at the top of the formulas folder. */
-export const CATALOGUE_FILE = 'catalogue.yaml';
+export const CATALOGUE_FILE = `${CATALOGUE_ID}.yaml`;
 
 /** Whether a file name (with or without its folder) is the catalogue of materials. */
 export function isCatalogueFile(name: string): boolean {

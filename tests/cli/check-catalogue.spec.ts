@@ -133,6 +133,14 @@ describe('larder check with a catalogue of materials', () => {
     assert.match(run.stdout, /and the catalogue: 1 ok, 1 with errors, 0 warning\(s\)\.$/m);
   });
 
+  it('checks the catalogue named alone', async (t) => {
+    const dir = folder(t, CATALOGUE.replace('kind: salt', 'kind: salts'));
+    const run = await runLarder(['check', path.join(dir, 'catalogue.yaml')]);
+    assertExit(run, 3);
+    assert.match(run.stdout, /catalogue\.yaml:3:70: error: "kind" must be one of/);
+    assert.match(run.stdout, /^Checked the catalogue: 0 ok, 1 with errors, 0 warning\(s\)\.$/m);
+  });
+
   it('says nothing of a catalogue a folder does not have', async (t) => {
     const dir = makeTempDir(t);
     writeText(dir, 'bacon.yaml', DRY_BACON);
