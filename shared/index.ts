@@ -95,6 +95,7 @@ export {
 } from './catalogue/link-catalogue.ts';
 export { materialLines, type MaterialLine } from './catalogue/formula-lines.ts';
 export { checkCatalogue } from './catalogue/check-catalogue.ts';
+export { labelNames, type LabelName } from './catalogue/label-names.ts';
 export { CATALOGUE_SCHEMA } from './validation/catalogue-validator.ts';
 export {
   FOOD_CODE_DAYS,
