@@ -10,6 +10,7 @@ import { availableParallelism, tmpdir } from 'node:os';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { checkThreads, threadsSetting } from '../cli/check-threads.ts';
+import { isFormulaFileName } from '../shared/index.ts';
 
 const FILES = Number(process.env.BENCH_CHECK_FILES ?? 2000);
 const RUNS = Number(process.env.BENCH_CHECK_RUNS ?? 3);
@@ -69,7 +70,7 @@ export function benchCheckMany(): { msPerFile: number } {
   const folder = mkdtempSync(path.join(tmpdir(), 'larder-check-'));
   try {
     const demos = readdirSync('formulas')
-      .filter((name) => name.endsWith('.yaml'))
+      .filter(isFormulaFileName)
       .map((name) => readFileSync(path.join('formulas', name), 'utf8'))
       // An assembly names other formulas by id, which the renamed copies no longer carry.
       .filter((text) => !/^kind: assembly$/m.test(text));

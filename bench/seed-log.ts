@@ -6,6 +6,7 @@ import path from 'node:path';
 import sqlite3 from 'sqlite3';
 import {
   calculate,
+  isFormulaFileName,
   parseBatchOptions,
   presentResult,
   readFormula,
@@ -54,7 +55,7 @@ interface Template {
 
 function templates(): Template[] {
   return readdirSync('formulas')
-    .filter((name) => name.endsWith('.yaml'))
+    .filter(isFormulaFileName)
     .flatMap((name) => {
       const text = readFileSync(path.join('formulas', name), 'utf8');
       const formula = readFormula(text, name).formula;

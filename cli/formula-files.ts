@@ -4,6 +4,7 @@ import {
   MAX_FORMULA_BYTES,
   TOO_LARGE_MESSAGE,
   formatProblem,
+  isFormulaFileName,
   readFormula,
   type Formula,
   type FormulaReading,
@@ -15,9 +16,9 @@ export function formulasFolder(option?: string): string {
   return option ?? process.env.LARDER_FORMULAS ?? 'formulas';
 }
 
-/** Whether a file name is a formula file. */
+/** Whether a file name is a formula file: *.yaml or *.yml, not the catalogue of materials. */
 export function isFormulaFile(name: string): boolean {
-  return /\.ya?ml$/i.test(name);
+  return isFormulaFileName(name);
 }
 
 /** Every formula file under a folder, sorted, depth first. */

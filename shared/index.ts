@@ -79,6 +79,24 @@ export {
   type StatementIngredient,
 } from './labels/ingredient-statement.ts';
 export { allergenStatement } from './labels/allergen-statement.ts';
+export type * from './catalogue/catalogue-types.ts';
+export { CATALOGUE_FILE, isCatalogueFile, isFormulaFileName } from './catalogue/catalogue-file.ts';
+export {
+  readCatalogue,
+  STRENGTH_KEYS,
+  type CatalogueReading,
+  type ItemPlaces,
+} from './catalogue/read-catalogue.ts';
+export {
+  catalogueProblems,
+  linkLines,
+  type LinkCatalogue,
+  type LinkedLine,
+} from './catalogue/link-catalogue.ts';
+export { materialLines, type MaterialLine } from './catalogue/formula-lines.ts';
+export { checkCatalogue } from './catalogue/check-catalogue.ts';
+export { labelNames, type LabelName } from './catalogue/label-names.ts';
+export { CATALOGUE_SCHEMA } from './validation/catalogue-validator.ts';
 export {
   FOOD_CODE_DAYS,
   dateMark,

@@ -3,6 +3,7 @@ import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import {
   MAX_ALIAS_COUNT,
+  isFormulaFileName,
   isFormulaId,
   parseYamlWithinLimits,
   readFormula,
@@ -71,14 +72,15 @@ export async function readFormulaFileAt(
 }
 
 /**
- * Every *.yaml / *.yml file directly in the folder, read and checked, sorted by name; `linked`
- * when any of them is a symbolic link (its target can change with no notice in this folder).
+ * Every *.yaml / *.yml file directly in the folder but the catalogue of materials, read and
+ * checked, sorted by name; `linked` when any of them is a symbolic link (its target can change
+ * with no notice in this folder).
  */
 export async function readFormulaFolder(
   folder: string,
 ): Promise<{ files: FormulaFile[]; linked: boolean }> {
   const entries = readdirSync(folder, { withFileTypes: true })
-    .filter((entry) => /\.ya?ml$/i.test(entry.name))
+    .filter((entry) => isFormulaFileName(entry.name))
     .sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
   const files = await Promise.all(entries.map((entry) => readFormulaFileAt(folder, entry.name)));
   return {

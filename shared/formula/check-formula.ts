@@ -5,7 +5,8 @@ import { checkMixFormula } from '../calculation/mix/check-mix-formula.ts';
 import { checkSpecies } from '../calculation/check-species.ts';
 import { checkAssemblyFormula } from '../calculation/plan/check-assembly-formula.ts';
 import { checkControls } from '../process/check-controls.ts';
-import type { ContentProblem } from './formula-problem.ts';
+import { CATALOGUE_FILE, CATALOGUE_ID } from '../catalogue/catalogue-file.ts';
+import { contentError, type ContentProblem } from './formula-problem.ts';
 import type { Formula } from './formula-types.ts';
 
 /**
@@ -15,7 +16,19 @@ import type { Formula } from './formula-types.ts';
  * kind's process controls are checked (checkControls).
  */
 export function checkFormulaContent(formula: Formula): ContentProblem[] {
-  return [...kindProblems(formula), ...checkControls(formula)];
+  return [...idProblems(formula), ...kindProblems(formula), ...checkControls(formula)];
+}
+
+/** The catalogue's name is kept: a formula with its id would be filed as catalogue.yaml. */
+function idProblems(formula: Formula): ContentProblem[] {
+  return formula.id === CATALOGUE_ID
+    ? [
+        contentError(
+          ['id'],
+          `the id "${formula.id}" is kept for the catalogue of materials (${CATALOGUE_FILE}); give the formula another`,
+        ),
+      ]
+    : [];
 }
 
 function kindProblems(formula: Formula): ContentProblem[] {

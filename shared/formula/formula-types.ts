@@ -66,6 +66,8 @@ export type CureProduct = 'bacon' | 'whole-muscle' | 'comminuted';
 
 export interface CureIngredient {
   name: string;
+  /** Key of its item in the catalogue of materials; without it the name is looked up there. */
+  item?: string;
   /** % of green weight (dry, pump) or of meat plus water (brine). */
   pct: number;
   /** Sodium nitrite in the ingredient, % by weight. */
@@ -139,6 +141,8 @@ export type YeastKind = 'fresh' | 'active-dry' | 'instant';
 
 export interface DoughIngredient {
   name: string;
+  /** Key of its item in the catalogue of materials; without it the name is looked up there. */
+  item?: string;
   /** Baker's percentage. */
   pct: number;
   flour?: boolean;
@@ -173,6 +177,8 @@ export interface DoughFormula extends FormulaBase {
 export interface BlendComponent {
   key: string;
   name: string;
+  /** Key of its item in the catalogue of materials; without it the name is looked up there. */
+  item?: string;
   fat?: number;
   lean?: number;
   /** Beef fat added as such (loose fat, suet), not trimmings: not allowed in ground beef. */
@@ -187,7 +193,7 @@ export interface BlendFormula extends FormulaBase {
   /** Two to five components. */
   components: BlendComponent[];
   target: { fat?: number; lean?: number };
-  ingredients?: { name: string; pct: number; allergens?: Allergen[] }[];
+  ingredients?: { name: string; item?: string; pct: number; allergens?: Allergen[] }[];
   /** Portion weight, e.g. "4 oz". */
   portion?: string;
   /** Blend lost in grinding and forming, % of the batch; portions come from the rest. */
@@ -199,6 +205,8 @@ export interface BlendFormula extends FormulaBase {
 
 export interface MixIngredient {
   name: string;
+  /** Key of its item in the catalogue of materials; without it the name is looked up there. */
+  item?: string;
   /** % of the base ingredient. */
   pct: number;
   base?: boolean;

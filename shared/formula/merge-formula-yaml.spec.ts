@@ -3,7 +3,7 @@ import { readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
 import { parse } from 'yaml';
-import { readFormula } from '../../shared/index.ts';
+import { isFormulaFileName, readFormula } from '../../shared/index.ts';
 import { mergeFormulaIntoYaml } from './merge-formula-yaml.ts';
 
 const FORMULAS = path.join(import.meta.dirname, '..', '..', 'formulas');
@@ -32,7 +32,7 @@ function json(text: string): Record<string, unknown> {
 
 describe('mergeFormulaIntoYaml', () => {
   it('should give back every demo formula unchanged when its own values are merged in', () => {
-    for (const name of readdirSync(FORMULAS).filter((n) => n.endsWith('.yaml'))) {
+    for (const name of readdirSync(FORMULAS).filter(isFormulaFileName)) {
       const text = readFileSync(path.join(FORMULAS, name), 'utf8');
       const formula = readFormula(text, name).formula;
       assert.ok(formula, name);

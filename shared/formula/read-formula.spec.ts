@@ -26,6 +26,36 @@ describe('readFormula', () => {
     assert.equal(reading.formula?.id, 'test-belly');
   });
 
+  it('should keep the id "catalogue" for the catalogue of materials', () => {
+    const problems = only(`${GOOD.replace('id: test-belly', 'id: catalogue')}species: pork\n`);
+    // "id:" is line 2, column 1 of GOOD. own example
+    assert.deepEqual(
+      problems.map((p) => [p.line, p.column, p.message]),
+      [
+        [
+          2,
+          1,
+          'the id "catalogue" is kept for the catalogue of materials (catalogue.yaml); give the formula another',
+        ],
+      ],
+    );
+  });
+
+  it('should say what an item key looks like', () => {
+    const problems = only(GOOD.replace('{ name: salt,', '{ name: salt, item: Kosher Salt,'));
+    // The salt line is line 8; "item" is its second key, at column 19. own example
+    assert.deepEqual(
+      problems.map((p) => [p.line, p.column, p.message]),
+      [
+        [
+          8,
+          19,
+          '"item" must be the key of an item in the catalogue: lower-case letters, digits and dashes, starting with a letter, e.g. "kosher-salt", not "Kosher Salt"',
+        ],
+      ],
+    );
+  });
+
   it('should name the line and column of a YAML syntax error', () => {
     const problems = only(
       GOOD.replace(

@@ -3,9 +3,9 @@ import { schemaErrors } from '../validation/formula-validator.ts';
 import { schemaProblems } from '../validation/schema-messages.ts';
 import { checkFormulaContent } from './check-formula.ts';
 import { explicitTag } from './explicit-tag.ts';
-import type { ContentProblem, FormulaProblem } from './formula-problem.ts';
+import type { ContentProblem, FormulaPath, FormulaProblem } from './formula-problem.ts';
 import type { Formula } from './formula-types.ts';
-import { locate } from './locate.ts';
+import { locate, type Position } from './locate.ts';
 import { parseYamlWithinLimits } from './parse-yaml.ts';
 import { MAX_ALIAS_COUNT, limitFormulaProblem, type YamlLimit } from './yaml-limits.ts';
 import { yamlErrorMessage } from './yaml-messages.ts';
@@ -26,7 +26,42 @@ export interface FormulaReading {
  * @param file the name to print in problems
  */
 export function readFormula(text: string, file: string): FormulaReading {
-  const whole = (message: string): FormulaReading => ({
+  const read = readYamlValue(
+    text,
+    file,
+    'a formula file is a set of keys (formula:, id:, title:, kind:, …)',
+  );
+  if (!read.ok) return { problems: read.problems, limit: read.limit };
+  const { value, place } = read;
+  const errors = schemaErrors(value);
+  if (errors.length > 0)
+    return { problems: sortByPosition(schemaProblems(errors, value).map(place)) };
+
+  const formula = value as unknown as Formula;
+  const problems = sortByPosition(checkFormulaContent(formula).map(place));
+  return problems.some((p) => p.severity === 'error') ? { problems } : { formula, problems };
+}
+
+/** A YAML file read into a plain value, or the problems that stopped it. */
+export type YamlValue =
+  | {
+      readonly ok: true;
+      readonly value: Record<string, unknown>;
+      /** Gives a problem found at a path of the value its line and column. */
+      readonly place: (problem: ContentProblem) => FormulaProblem;
+      /** Where a path of the value is in the text. */
+      readonly locate: (path: FormulaPath) => Position;
+    }
+  | { readonly ok: false; readonly problems: FormulaProblem[]; readonly limit?: YamlLimit };
+
+/**
+ * Reads a YAML file of keys, as every file beside the formulas is read: within the size and
+ * shape limits, then syntax, tags, control characters, and a set of keys at the top.
+ * @param notKeys what the file is told when its top is not a set of keys
+ */
+export function readYamlValue(text: string, file: string, notKeys: string): YamlValue {
+  const whole = (message: string): YamlValue => ({
+    ok: false,
     problems: [{ file, line: 0, column: 0, path: [], message, severity: 'error' }],
   });
   const lineCounter = new LineCounter();
@@ -34,13 +69,18 @@ export function readFormula(text: string, file: string): FormulaReading {
   // parser is stopped where it passes a limit.
   const parsed = parseYamlWithinLimits(text, { lineCounter, uniqueKeys: true });
   if (!parsed.ok) {
-    return { problems: [limitFormulaProblem(parsed.problem, file)], limit: parsed.problem.limit };
+    return {
+      ok: false,
+      problems: [limitFormulaProblem(parsed.problem, file)],
+      limit: parsed.problem.limit,
+    };
   }
   if (text.trim() === '') return whole('the file is empty');
 
   const control = controlCharacter(text);
   if (control) {
     return {
+      ok: false,
       problems: [
         {
           file,
@@ -66,13 +106,14 @@ export function readFormula(text: string, file: string): FormulaReading {
         severity: 'error',
       };
     });
-    return { problems };
+    return { ok: false, problems };
   }
 
   const tagged = explicitTag(doc);
   if (tagged) {
     const { line, col } = lineCounter.linePos(tagged.offset);
     return {
+      ok: false,
       problems: [
         {
           file,
@@ -93,26 +134,19 @@ export function readFormula(text: string, file: string): FormulaReading {
     // yaml throws here for an unresolved alias or an alias bomb; both are the file's fault.
     return whole(`YAML: ${error instanceof Error ? error.message : String(error)}`);
   }
-  if (value === null || typeof value !== 'object' || Array.isArray(value)) {
-    return whole('a formula file is a set of keys (formula:, id:, title:, kind:, …)');
-  }
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) return whole(notKeys);
 
+  const where = (path: FormulaPath): Position => locate(doc, lineCounter, path);
   const place = (problem: ContentProblem): FormulaProblem => ({
     ...problem,
     file,
-    ...locate(doc, lineCounter, problem.path),
+    ...where(problem.path),
   });
   // An escape in a quoted value ("\0", "\x07") writes a control character the text check above
   // cannot see; it would reach sheets, files and the database all the same.
   const escaped = escapedControl(value, []);
-  if (escaped) return { problems: [place(escaped)] };
-  const errors = schemaErrors(value);
-  if (errors.length > 0)
-    return { problems: sortByPosition(schemaProblems(errors, value).map(place)) };
-
-  const formula = value as Formula;
-  const problems = sortByPosition(checkFormulaContent(formula).map(place));
-  return problems.some((p) => p.severity === 'error') ? { problems } : { formula, problems };
+  if (escaped) return { ok: false, problems: [place(escaped)] };
+  return { ok: true, value: value as Record<string, unknown>, place, locate: where };
 }
 
 // Control characters other than tab, line feed and carriage return: never typed on purpose, and
@@ -191,7 +225,8 @@ export function placeProblems(
   );
 }
 
-function sortByPosition(problems: FormulaProblem[]): FormulaProblem[] {
+/** Problems in the order of the file, by line and column. */
+export function sortByPosition(problems: FormulaProblem[]): FormulaProblem[] {
   return problems.sort((a, b) => a.line - b.line || a.column - b.column);
 }
 

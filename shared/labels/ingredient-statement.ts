@@ -4,9 +4,9 @@ import { type Decimal, ZERO } from '../decimal.ts';
  * One ingredient of a batch as the ingredient statement needs it: its name, its weight in the
  * batch, and, for a compound ingredient, the sub-ingredients it is made of.
  *
- * The formula file has no place yet for a compound ingredient's sub-ingredients (a cure
- * ingredient carries its nitrite and salt percentages, not their names), so this pure input type
- * holds them until the catalogue of materials does. The sub-ingredients are names in the order
+ * A formula line carries its nitrite and salt percentages, not the names of a compound
+ * ingredient's own ingredients: those come from the line's item in the catalogue of materials
+ * (labelNames in shared/catalogue/label-names.ts). The sub-ingredients are names in the order
  * of the supplier's own ingredient statement, which that label already gives in descending order
  * of predominance (21 CFR 101.4(a)(1)), so their order is kept as given; no percentages are
  * needed. A batch result's amount line (name and grams) fits this shape, without sub-ingredients.
@@ -37,8 +37,8 @@ export interface IngredientStatement {
   readonly text: string;
 }
 
-/** The same ingredient however it is capitalised or spaced ("Salt", "salt "). */
-function sameName(name: string): string {
+/** An ingredient name as compared: however it is capitalised or spaced ("Salt", "salt "). */
+export function sameName(name: string): string {
   return name.trim().replace(/\s+/g, ' ').toLowerCase();
 }
 

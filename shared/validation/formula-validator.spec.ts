@@ -1,10 +1,12 @@
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
-import { VALIDATOR_FILE, validatorSource } from '../../scripts/build-validator.mjs';
+import { VALIDATORS, validatorSource } from '../../scripts/build-validator.mjs';
 
-describe('the generated formula validator', () => {
-  it('should match the schema as it is now (run `npm run build:validator` after editing the schema)', () => {
-    assert.equal(readFileSync(VALIDATOR_FILE, 'utf8'), validatorSource());
-  });
+describe('the generated validators', () => {
+  for (const validator of VALIDATORS) {
+    it(`should match ${validator.schema} as it is now (run \`npm run build:validator\` after editing it)`, () => {
+      assert.equal(readFileSync(validator.file, 'utf8'), validatorSource(validator));
+    });
+  }
 });

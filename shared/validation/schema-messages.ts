@@ -8,6 +8,7 @@ const PATTERN_MESSAGES: Readonly<Record<string, string>> = {
   id: 'may hold only lower-case letters, digits and dashes, 2 to 63 characters, e.g. "hickory-belly"',
   formula: 'must be a formula id: lower-case letters, digits and dashes, e.g. "chuck-grind"',
   key: 'may hold only lower-case letters, digits and dashes, starting with a letter, e.g. "lean"',
+  item: 'must be the key of an item in the catalogue: lower-case letters, digits and dashes, starting with a letter, e.g. "kosher-salt"',
 };
 
 function pathOf(instancePath: string): (string | number)[] {

@@ -4,6 +4,7 @@ import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { describe, it } from 'node:test';
 import { startTestServer } from '../helpers/test-server.ts';
+import { isFormulaFileName } from '../../shared/index.ts';
 
 const sha256 = (text: string): string => createHash('sha256').update(text, 'utf8').digest('hex');
 
@@ -23,8 +24,14 @@ describe('reading formulas', () => {
     const server = await startTestServer(t);
     const response = await server.as('imke').get('/api/formulas');
     assert.equal(response.status, 200);
-    const files = readdirSync(server.formulasDir).filter((name) => name.endsWith('.yaml'));
+    // Every formula file; the catalogue of materials beside them is not a formula.
+    const files = readdirSync(server.formulasDir).filter(isFormulaFileName);
+    assert.ok(readdirSync(server.formulasDir).includes('catalogue.yaml'));
     assert.equal(response.json.formulas.length, files.length);
+    assert.deepEqual(
+      response.json.formulas.filter((f: { file: string }) => f.file === 'catalogue.yaml'),
+      [],
+    );
     const belly = response.json.formulas.find((f: { id: string }) => f.id === 'quillmoor-belly');
     const text = readFileSync(path.join(server.formulasDir, 'quillmoor-belly.yaml'), 'utf8');
     assert.deepEqual(

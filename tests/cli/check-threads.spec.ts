@@ -13,9 +13,11 @@ import {
   type JsonFailure,
 } from '../helpers/run-larder.ts';
 import { DRY_BACON, dryBaconWith, makeTempDir, writeText } from '../helpers/temp-files.ts';
+import { isFormulaFileName } from '../../shared/index.ts';
 
 const DEMO_FOLDER = path.join(REPO_ROOT, 'formulas');
-const demoNames = readdirSync(DEMO_FOLDER).filter((name) => name.endsWith('.yaml'));
+// The formulas only: the copies are checked without the catalogue of materials.
+const demoNames = readdirSync(DEMO_FOLDER).filter(isFormulaFileName);
 const demoText = (name: string): string => readFileSync(path.join(DEMO_FOLDER, name), 'utf8');
 
 /** Copies of the demo formulas with ids of their own: 320 files, seven batches of 50 or fewer. */

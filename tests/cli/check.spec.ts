@@ -19,10 +19,9 @@ import {
   writeMix,
   writeText,
 } from '../helpers/temp-files.ts';
+import { isFormulaFileName } from '../../shared/index.ts';
 
-const demoFiles = readdirSync(path.join(REPO_ROOT, 'formulas')).filter((name) =>
-  /\.ya?ml$/.test(name),
-);
+const demoFiles = readdirSync(path.join(REPO_ROOT, 'formulas')).filter(isFormulaFileName);
 
 /**
  * DRY_BACON with 0.4 % curing salt: 0.4 % × 6.25 % × 1 000 000 = 250 ppm ingoing nitrite, over the
@@ -36,7 +35,8 @@ describe('larder check on the demo formulas', () => {
     assertExit(run, 0);
     assert.equal(
       run.stdout,
-      `Checked ${demoFiles.length} formula file(s): ${demoFiles.length} ok, 0 with errors, 0 warning(s).\n`,
+      // The formulas and the catalogue of materials beside them.
+      `Checked ${demoFiles.length} formula file(s) and the catalogue: ${demoFiles.length + 1} ok, 0 with errors, 0 warning(s).\n`,
     );
     assert.equal(run.stderr, '');
   });
@@ -46,13 +46,18 @@ describe('larder check on the demo formulas', () => {
     assertExit(run, 0);
     const report = stdoutJson<CheckReport>(run);
     assert.deepEqual(report.summary, {
-      files: demoFiles.length,
-      ok: demoFiles.length,
+      files: demoFiles.length + 1,
+      ok: demoFiles.length + 1,
       failed: 0,
       warnings: 0,
     });
-    assert.deepEqual(report.files.map((f) => path.basename(f.file)).sort(), [...demoFiles].sort());
-    for (const file of report.files) {
+    const [catalogue, ...formulas] = report.files;
+    assert.deepEqual(
+      { ...catalogue, file: path.basename(catalogue.file) },
+      { file: 'catalogue.yaml', kind: 'catalogue', ok: true, problems: [] },
+    );
+    assert.deepEqual(formulas.map((f) => path.basename(f.file)).sort(), [...demoFiles].sort());
+    for (const file of formulas) {
       assert.equal(file.ok, true, file.file);
       assert.deepEqual(file.problems, [], file.file);
       assert.equal(

@@ -8,6 +8,7 @@ import {
   failsCriticalLimit,
   formatProblem,
   formulaLibrary,
+  isFormulaFileName,
   parseBatchOptions,
   planAssembly,
   readFormula,
@@ -16,7 +17,7 @@ import {
 } from '../../shared/index.ts';
 
 const FOLDER = 'formulas';
-const files = readdirSync(FOLDER).filter((name) => name.endsWith('.yaml'));
+const files = readdirSync(FOLDER).filter(isFormulaFileName);
 const texts = new Map(files.map((file) => [file, readFileSync(path.join(FOLDER, file), 'utf8')]));
 const readings = files.map((file) => ({ file, reading: readFormula(texts.get(file) ?? '', file) }));
 const library = formulaLibrary(readings);

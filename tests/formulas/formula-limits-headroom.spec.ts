@@ -6,6 +6,7 @@ import {
   MAX_FORMULA_BYTES,
   MAX_YAML_DEPTH,
   MAX_YAML_NODES,
+  isFormulaFileName,
   readFormula,
 } from '../../shared/index.ts';
 import { utf8Length, yamlShape } from '../../shared/formula/yaml-limits.ts';
@@ -49,7 +50,7 @@ function largestMix(letter: string): string {
 describe('the formula limits leave room for any formula', () => {
   it('should find every demo formula far below them: a quarter of the depth, a tenth of the values', () => {
     const folder = path.join(REPO_ROOT, 'formulas');
-    for (const name of readdirSync(folder).filter((file) => file.endsWith('.yaml'))) {
+    for (const name of readdirSync(folder).filter(isFormulaFileName)) {
       const text = readFileSync(path.join(folder, name), 'utf8');
       const shape = yamlShape(text);
       assert.ok(shape.depth * 4 <= MAX_YAML_DEPTH, `${name}: ${shape.depth} levels`);

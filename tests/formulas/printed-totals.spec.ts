@@ -6,6 +6,7 @@ import { renderBatchSheet } from '../../cli/output/batch-sheet.ts';
 import { Decimal } from '../../shared/decimal.ts';
 import {
   calculate,
+  isFormulaFileName,
   parseBatchOptions,
   presentResult,
   readFormula,
@@ -22,7 +23,7 @@ import {
 
 const FOLDER = 'formulas';
 const formulas = readdirSync(FOLDER)
-  .filter((name) => name.endsWith('.yaml'))
+  .filter(isFormulaFileName)
   .map((file) => readFormula(readFileSync(path.join(FOLDER, file), 'utf8'), file).formula)
   .filter((formula): formula is Formula => formula !== undefined && formula.kind !== 'assembly');
 

@@ -9,6 +9,7 @@ import {
   failsCriticalLimit,
   formatProblem,
   formulaLibrary,
+  isFormulaFileName,
   LIBRARY_SCHEMA_PATH,
   parseBatchOptions,
   planAssembly,
@@ -50,7 +51,7 @@ const SAMPLE: Record<BatchKind, RawBatchOptions> = {
 const SCHEMA = path.join(REPO_ROOT, 'shared', 'schema', 'formula.schema.json');
 const FOLDER = path.join(REPO_ROOT, 'formulas');
 const DEMO = readdirSync(FOLDER)
-  .filter((name) => name.endsWith('.yaml'))
+  .filter(isFormulaFileName)
   .map((name) => ({ file: name, text: readFileSync(path.join(FOLDER, name), 'utf8') }));
 
 /** The demo formulas as the list of formulas gives them. */

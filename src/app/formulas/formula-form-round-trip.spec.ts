@@ -4,13 +4,15 @@ import assert from 'node:assert/strict';
 import { readFileSync, readdirSync } from 'node:fs';
 import { describe, it } from 'node:test';
 import { FormBuilder } from '@angular/forms';
+import { isFormulaFileName } from '../../../shared/catalogue/catalogue-file.ts';
 import { fillFormulaForm } from './fill-formula-form.ts';
 import { createFormulaForm } from './formula-form-model.ts';
 import { formulaFromForm } from './formula-from-form.ts';
 import { parseFormulaYaml, writeFormulaYaml } from './formula-yaml.ts';
 
 const FOLDER = new URL('../../../formulas/', import.meta.url);
-const DEMO = readdirSync(FOLDER).filter((name) => name.endsWith('.yaml'));
+// The formulas, not the catalogue of materials beside them.
+const DEMO = readdirSync(FOLDER).filter(isFormulaFileName);
 
 describe('the structured form', () => {
   for (const name of DEMO) {

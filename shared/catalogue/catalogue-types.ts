@@ -1,0 +1,52 @@
+/**
+ * TypeScript shapes of the catalogue of materials (catalogue.yaml beside the formulas). They
+ * mirror shared/schema/catalogue.schema.json, which is the authority.
+ */
+import type { Allergen } from '../formula/formula-types.ts';
+
+/** What sort of material an item is. */
+export type ItemKind =
+  | 'meat'
+  | 'poultry'
+  | 'seafood'
+  | 'curing-salt'
+  | 'salt'
+  | 'sugar'
+  | 'spice'
+  | 'flour'
+  | 'dairy'
+  | 'egg'
+  | 'fat'
+  | 'yeast'
+  | 'water'
+  | 'sauce'
+  | 'additive'
+  | 'other';
+
+/** The unit an item is stocked and received in. */
+export type StockUnit = 'g' | 'kg' | 'oz' | 'lb' | 'ml' | 'l' | 'each';
+
+/** One material the formulas use. */
+export interface CatalogueItem {
+  /** Short name a formula line gives as `item:`. */
+  key: string;
+  /** The name as it appears on a label. */
+  name: string;
+  /** Other names formula lines give it, matched however capitalised or spaced. */
+  formula_names?: string[];
+  kind: ItemKind;
+  unit: StockUnit;
+  /** A compound ingredient's own ingredients, in the order of the supplier's label. */
+  sub_ingredients?: string[];
+  allergens?: Allergen[];
+  /** Sodium nitrite, % by weight: required for a curing salt. */
+  nitrite?: number;
+  /** Sodium nitrate, % by weight. */
+  nitrate?: number;
+}
+
+/** The catalogue file. */
+export interface Catalogue {
+  catalogue: 1;
+  items: CatalogueItem[];
+}
