@@ -41,10 +41,21 @@ export function openSheet(setup: SheetSetup): SheetLayout {
   return sheetLayout(setup, true, false);
 }
 
-function sheetLayout(setup: SheetSetup, bufferPages: boolean, counting: boolean): SheetLayout {
+/** A page of a size of its own (a label), points, and the margins of the area it flows in. */
+export interface PageSize {
+  readonly size: readonly [number, number];
+  readonly margins: typeof MARGINS;
+}
+
+/** A document in the sheet's fonts with its metadata, on A4 or Letter paper or a page of its own. */
+function sheetDocument(
+  setup: SheetSetup,
+  bufferPages: boolean,
+  page?: PageSize,
+): PDFKit.PDFDocument {
   const doc = new PDFDocument({
-    size: setup.units === 'us' ? 'LETTER' : 'A4',
-    margins: MARGINS,
+    size: page ? [...page.size] : setup.units === 'us' ? 'LETTER' : 'A4',
+    margins: page?.margins ?? MARGINS,
     bufferPages,
     // The sheet's own font from the start, so pdfkit never loads its built-in Helvetica. pdfkit
     // takes a font's data here as in registerFont, though its types name only a file.
@@ -66,6 +77,24 @@ function sheetLayout(setup: SheetSetup, bufferPages: boolean, counting: boolean)
     fonts.map((f) => f.name),
   );
   doc.font(fontName('regular', 'latin'));
+  return doc;
+}
+
+/**
+ * Opens a label: one page of its own size in the sheet's fonts, with no running header or
+ * footer. Read its bytes with {@link finishLabel}.
+ */
+export function openLabel(setup: SheetSetup, page: PageSize): SheetLayout {
+  return new SheetLayout(sheetDocument(setup, false, page), () => undefined);
+}
+
+/** Ends a label's document and returns its bytes. */
+export function finishLabel(layout: SheetLayout): Promise<Buffer> {
+  return documentBytes(layout.doc);
+}
+
+function sheetLayout(setup: SheetSetup, bufferPages: boolean, counting: boolean): SheetLayout {
+  const doc = sheetDocument(setup, bufferPages);
   return new SheetLayout(
     doc,
     (layout) => {
@@ -180,6 +209,11 @@ export function finishSheet(layout: SheetLayout, lot: string): Promise<Buffer> {
     doc.switchToPage(i);
     footer(layout, footerWords(lot, i - start + 1, count));
   }
+  return documentBytes(doc);
+}
+
+/** Ends a document and resolves with its bytes. */
+function documentBytes(doc: PDFKit.PDFDocument): Promise<Buffer> {
   return new Promise((resolve, reject) => {
     const chunks: Buffer[] = [];
     doc.on('data', (chunk: Buffer) => chunks.push(chunk));
