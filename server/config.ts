@@ -36,6 +36,8 @@ export interface ServerConfig {
   readonly mailFrom: string;
   /** How the messages name the kitchen: "Larderbook at …". */
   readonly kitchenName: string;
+  /** The kitchen's address as its product labels print it; null when not given. */
+  readonly kitchenAddress: string | null;
   /** Minutes between two runs of the reminder scheduler. */
   readonly reminderMinutes: number;
   /**
@@ -166,6 +168,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     smtpUrl,
     mailFrom: env.LARDER_MAIL_FROM || 'Larderbook <larderbook@localhost>',
     kitchenName: env.LARDER_KITCHEN || (mode === 'demo' ? 'Quillmoor Smokehouse' : 'the kitchen'),
+    // The demo's address is invented, as its kitchen is.
+    kitchenAddress:
+      env.LARDER_KITCHEN_ADDRESS?.trim() || (mode === 'demo' ? '14 Kiln Lane, Quillmoor' : null),
     reminderMinutes: integer(env, 'LARDER_REMINDER_MINUTES', 15, 1, 24 * 60),
     trustProxy,
     httpsOnly,

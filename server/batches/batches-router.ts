@@ -11,6 +11,7 @@ import { FORMULA_ID_PATTERN } from '../../shared/formula/formula-id.ts';
 import { BATCH_STATUSES, RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
 import { parseListQuery } from './batch-query.ts';
+import { labelRoute } from './label-route.ts';
 
 const RECORD_BODY = {
   type: 'object',
@@ -90,6 +91,9 @@ export function batchesRouter(context: AppContext): Router {
     res.setHeader('Cache-Control', 'no-store');
     res.send(pdf);
   });
+
+  // A product label for the batch's packages (4 × 6 in or 2 × 1 in), for any signed-in role.
+  router.get('/:lot/label.pdf', labelRoute(context));
 
   router.post(
     '/:lot/status',

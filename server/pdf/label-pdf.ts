@@ -1,12 +1,9 @@
 import type { ProductLabel } from '../../shared/labels/product-label.ts';
+import type { LabelSize } from './label-sizes.ts';
 import { drawQrCode, qrMatrix, QUIET_ZONE_MODULES } from './qr-code.ts';
 import { finishLabel, openLabel, type PageSize } from './sheet-document.ts';
 import { INK, type SheetLayout, type TextStyle } from './sheet-layout.ts';
 import { dayInWords } from './sheet-words.ts';
-
-/** The label sizes printed: thermal labels, width × height in inches. */
-export const LABEL_SIZES = ['4x6', '2x1'] as const;
-export type LabelSize = (typeof LABEL_SIZES)[number];
 
 /** Points in an inch (PDF user space). source: ISO 32000-1:2008, 8.3.2.3 (1/72 inch) */
 const POINTS_PER_INCH = 72;

@@ -14,6 +14,10 @@ import { loadConfig } from '../config.ts';
 import type { Database } from '../db/database.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
 import type { SheetRecord, SheetSource } from '../pdf/batch-sheet-pdf.ts';
+import type { LabelSize } from '../pdf/label-sizes.ts';
+import type { ProductLabel } from '../../shared/labels/product-label.ts';
+import type { Formula } from '../../shared/index.ts';
+import { formulaAtRevision } from '../formulas/formula-at-revision.ts';
 import {
   addPerson,
   usernameTaken,
@@ -154,6 +158,15 @@ export class Records {
   /** One batch with its events, by lot code in either case. */
   showBatch(lot: string): Promise<Batch> {
     return this.guard(() => showBatch(lot, this.deps.batches));
+  }
+
+  /**
+   * The formula a batch was calculated from, at that revision (for its product label);
+   * undefined when the history no longer keeps that revision.
+   */
+  async formulaOf(batch: Batch): Promise<Formula | undefined> {
+    const at = await formulaAtRevision(this.deps.history, batch.formula.id, batch.formula.revision);
+    return at?.formula;
   }
 
   /** Moves a batch along its status machine under the workflow rules. */
@@ -395,6 +408,11 @@ export async function batchSheetPdf(
   source?: SheetSource,
 ): Promise<Buffer> {
   return (await import('../pdf/batch-sheet-pdf.ts')).renderBatchSheetPdf(result, record, source);
+}
+
+/** A product label as PDF bytes at a thermal label's size; pdfkit loads on first use. */
+export async function labelPdf(label: ProductLabel, size: LabelSize): Promise<Buffer> {
+  return (await import('../pdf/label-pdf.ts')).renderLabelPdf(label, size);
 }
 
 /** A plan on paper as PDF bytes: an overview, then one production sheet per start day. */

@@ -1,7 +1,8 @@
 import assert from 'node:assert/strict';
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
-import { renderLabelPdf, type LabelSize } from '../../server/pdf/label-pdf.ts';
+import { renderLabelPdf } from '../../server/pdf/label-pdf.ts';
+import type { LabelSize } from '../../server/pdf/label-sizes.ts';
 import { readCatalogue } from '../../shared/catalogue/read-catalogue.ts';
 import { productLabel } from '../../shared/labels/product-label.ts';
 import {

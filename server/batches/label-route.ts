@@ -1,0 +1,104 @@
+import { existsSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import type { Request, RequestHandler } from 'express';
+import type { AppContext } from '../app-context.ts';
+import { badRequest, conflict } from '../http/app-error.ts';
+import { LABEL_SIZES, type LabelSize } from '../pdf/label-sizes.ts';
+import { labelPdf } from '../records/records.ts';
+import { serverToday } from '../server-today.ts';
+import { CATALOGUE_FILE } from '../../shared/catalogue/catalogue-file.ts';
+import type { Catalogue } from '../../shared/catalogue/catalogue-types.ts';
+import { readCatalogue } from '../../shared/catalogue/read-catalogue.ts';
+import { isIsoDate } from '../../shared/calculation/dates.ts';
+import type { Decimal } from '../../shared/decimal.ts';
+import { productLabel } from '../../shared/labels/product-label.ts';
+import { parseMass } from '../../shared/units/mass.ts';
+import { QuantityError } from '../../shared/units/quantity-error.ts';
+
+/** What a label request asks for, read from its query. */
+interface LabelQuery {
+  readonly size: LabelSize;
+  readonly netGrams?: Decimal;
+  readonly packedOn: string;
+}
+
+/** One query parameter as text, or undefined; a parameter given twice is refused. */
+function one(req: Request, name: string): string | undefined {
+  const value = req.query[name];
+  if (value === undefined) return undefined;
+  if (typeof value !== 'string') throw badRequest(`give ${name} once`);
+  return value.trim();
+}
+
+/** The size, net weight and packed-on day of a label request, or a refusal in words. */
+function labelQuery(req: Request, today: string): LabelQuery {
+  const size = one(req, 'size') || '4x6';
+  if (!(LABEL_SIZES as readonly string[]).includes(size))
+    throw badRequest(`a label is 4x6 or 2x1 (inches), not "${size}"`);
+  const net = one(req, 'net');
+  let netGrams: Decimal | undefined;
+  if (net) {
+    try {
+      netGrams = parseMass(net);
+    } catch (error) {
+      if (error instanceof QuantityError) throw badRequest(`the net weight: ${error.message}`);
+      throw error;
+    }
+    if (netGrams.isZero()) throw badRequest('the net weight must be more than 0');
+  } else if (size === '4x6')
+    throw badRequest(
+      'a 4 × 6 label declares the net weight of the package: give it as net, such as 340 g or 12 oz',
+    );
+  const packedOn = one(req, 'packed') || today;
+  if (!isIsoDate(packedOn))
+    throw badRequest(`the packed-on day is a date such as 2026-03-02, not "${packedOn}"`);
+  return { size: size as LabelSize, netGrams, packedOn };
+}
+
+/** The catalogue beside the formulas when it reads cleanly; without it labels keep formula names. */
+function catalogueOf(formulasDir: string): Catalogue | undefined {
+  const file = path.join(formulasDir, CATALOGUE_FILE);
+  if (!existsSync(file)) return undefined;
+  return readCatalogue(readFileSync(file, 'utf8'), CATALOGUE_FILE).catalogue;
+}
+
+/**
+ * GET /api/batches/:lot/label.pdf?size=4x6|2x1&net=MASS&packed=YYYY-MM-DD: a product label for
+ * a recorded batch, packed today unless another day is given. A batch not made yet, or thrown
+ * away, has no label.
+ */
+export function labelRoute(context: AppContext): RequestHandler {
+  const { records, config } = context;
+  return async (req, res) => {
+    const query = labelQuery(req, serverToday(context));
+    const batch = await records.showBatch(String(req.params.lot));
+    if (batch.status === 'planned' || batch.status === 'discarded')
+      throw conflict(
+        'not-packed',
+        `batch ${batch.lotCode} is ${batch.status === 'planned' ? 'planned, not made yet' : 'discarded'}: it has no product to label`,
+      );
+    const formula = await records.formulaOf(batch);
+    if (!formula)
+      throw conflict(
+        'formula-unavailable',
+        `the formula ${batch.formula.id} is no longer kept at the revision this batch was calculated from`,
+      );
+    const label = productLabel({
+      formula,
+      result: batch.result,
+      catalogue: catalogueOf(config.formulasDir),
+      lotCode: batch.lotCode,
+      packedOn: query.packedOn,
+      netGrams: query.netGrams,
+      kitchen: { name: config.kitchenName, address: config.kitchenAddress ?? undefined },
+    });
+    const pdf = await labelPdf(label, query.size);
+    res.setHeader('Content-Type', 'application/pdf');
+    res.setHeader(
+      'Content-Disposition',
+      `attachment; filename="${batch.lotCode}-label-${query.size}.pdf"`,
+    );
+    res.setHeader('Cache-Control', 'no-store');
+    res.send(pdf);
+  };
+}

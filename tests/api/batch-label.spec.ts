@@ -1,0 +1,66 @@
+import assert from 'node:assert/strict';
+import { describe, it } from 'node:test';
+import { BELLY, recordBatch } from '../helpers/batch-calls.ts';
+import { pdfText } from '../helpers/pdf-text.ts';
+import { PASSWORDS, startTestServer, type TestServer } from '../helpers/test-server.ts';
+
+/** A label as the reviewer fetches it: any signed-in role may. */
+async function fetchLabel(server: TestServer, route: string) {
+  const auth = Buffer.from(`rosa:${PASSWORDS.rosa}`).toString('base64');
+  const response = await fetch(server.url + route, { headers: { authorization: `Basic ${auth}` } });
+  const bytes = new Uint8Array(await response.arrayBuffer());
+  return { status: response.status, type: response.headers.get('content-type'), bytes };
+}
+
+describe('GET /api/batches/:lot/label.pdf', () => {
+  it('should print a recorded batch’s label at either size, read back with its lot code', async (t) => {
+    const server = await startTestServer(t);
+    const lot = await recordBatch(server.as('tobin'), BELLY);
+    const big = await fetchLabel(
+      server,
+      `/api/batches/${lot}/label.pdf?size=4x6&net=12%20oz&packed=2026-03-02`,
+    );
+    assert.equal(big.status, 200);
+    assert.equal(big.type, 'application/pdf');
+    const text = await pdfText(big.bytes);
+    // 4 × 6 in at 72 points to the inch. source: ISO 32000-1:2008, 8.3.2.3
+    assert.deepEqual(text.sizes, [[288, 432]]);
+    assert.ok(text.all.includes(lot), text.all);
+    // The catalogue's names, heaviest first (shared/labels/product-label.spec.ts works them).
+    assert.match(text.all, /Ingredients: pork, sea salt, brown sugar, black pepper, curing salt/);
+    // 12 oz = 340.19 g, rounded down. source: NIST SP 811 (2008), Appendix B.8
+    assert.match(text.all, /Net wt 12 oz \(340 g\)/);
+    // Use by day 7 from 2 March. source: FDA Food Code 2022, 3-501.17(A)
+    assert.match(text.all, /Use by 8 Mar 2026/);
+    assert.match(text.all, /Quillmoor Smokehouse 14 Kiln Lane, Quillmoor/);
+
+    const small = await fetchLabel(server, `/api/batches/${lot}/label.pdf?size=2x1`);
+    assert.equal(small.status, 200);
+    const smallText = await pdfText(small.bytes);
+    assert.deepEqual(smallText.sizes, [[144, 72]]);
+    assert.ok(smallText.all.includes(`Lot ${lot}`), smallText.all);
+  });
+
+  it('should refuse a label it cannot print, saying why', async (t) => {
+    const server = await startTestServer(t);
+    const tobin = server.as('tobin');
+    const lot = await recordBatch(tobin, BELLY);
+    const refusals: [string, number, RegExp][] = [
+      [`/api/batches/${lot}/label.pdf`, 400, /declares the net weight of the package/],
+      [`/api/batches/${lot}/label.pdf?size=4x6&net=plenty`, 400, /the net weight/],
+      [`/api/batches/${lot}/label.pdf?size=4x6&net=0%20g`, 400, /more than 0/],
+      [`/api/batches/${lot}/label.pdf?size=3x5&net=1%20lb`, 400, /4x6 or 2x1/],
+      [`/api/batches/${lot}/label.pdf?size=2x1&packed=March`, 400, /a date such as/],
+      ['/api/batches/261202-QB-99/label.pdf?size=2x1', 404, /./],
+    ];
+    for (const [route, status, words] of refusals) {
+      const response = await tobin.get(route);
+      assert.equal(response.status, status, route);
+      assert.match(response.json.error.message, words, route);
+    }
+    const planned = await recordBatch(tobin, { ...BELLY, status: 'planned' });
+    const early = await tobin.get(`/api/batches/${planned}/label.pdf?size=2x1`);
+    assert.equal(early.status, 409);
+    assert.match(early.json.error.message, /planned, not made yet/);
+  });
+});
