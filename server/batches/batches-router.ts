@@ -12,6 +12,7 @@ import { BATCH_STATUSES, RECORD_STATUSES } from '../../shared/workflow/batch-sta
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
 import { parseListQuery } from './batch-query.ts';
 import { labelRoute } from './label-route.ts';
+import { sendPdf } from '../http/send-pdf.ts';
 
 const RECORD_BODY = {
   type: 'object',
@@ -86,10 +87,7 @@ export function batchesRouter(context: AppContext): Router {
   router.get('/:lot/sheet.pdf', async (req, res) => {
     const batch = await records.showBatch(lotOf(req));
     const pdf = await batchSheetPdf(batch.result, batch);
-    res.setHeader('Content-Type', 'application/pdf');
-    res.setHeader('Content-Disposition', `attachment; filename="${batch.lotCode}.pdf"`);
-    res.setHeader('Cache-Control', 'no-store');
-    res.send(pdf);
+    sendPdf(res, pdf, `${batch.lotCode}.pdf`);
   });
 
   // A product label for the batch's packages (4 × 6 in or 2 × 1 in), for any signed-in role.

@@ -14,6 +14,7 @@ import type { Decimal } from '../../shared/decimal.ts';
 import { productLabel } from '../../shared/labels/product-label.ts';
 import { parseMass } from '../../shared/units/mass.ts';
 import { QuantityError } from '../../shared/units/quantity-error.ts';
+import { sendPdf } from '../http/send-pdf.ts';
 
 /** What a label request asks for, read from its query. */
 interface LabelQuery {
@@ -93,12 +94,6 @@ export function labelRoute(context: AppContext): RequestHandler {
       kitchen: { name: config.kitchenName, address: config.kitchenAddress ?? undefined },
     });
     const pdf = await labelPdf(label, query.size);
-    res.setHeader('Content-Type', 'application/pdf');
-    res.setHeader(
-      'Content-Disposition',
-      `attachment; filename="${batch.lotCode}-label-${query.size}.pdf"`,
-    );
-    res.setHeader('Cache-Control', 'no-store');
-    res.send(pdf);
+    sendPdf(res, pdf, `${batch.lotCode}-label-${query.size}.pdf`);
   };
 }

@@ -8,6 +8,7 @@ import { RECORDING_ROLES, planSheetPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
 import type { PlanList } from '../../shared/api/plan-record.ts';
 import { PLAN_BODY, RECORD_BODY, planFromStore, type PlanRequest } from './plan-request.ts';
+import { sendPdf } from '../http/send-pdf.ts';
 
 /**
  * /api/plans: the plans made (every signed-in role), plan N units of an assembly for a service
@@ -42,13 +43,7 @@ export function plansRouter(context: AppContext): Router {
     );
     // pdfkit loads on the first sheet, not at start.
     const pdf = await planSheetPdf(plan);
-    res.setHeader('Content-Type', 'application/pdf');
-    res.setHeader(
-      'Content-Disposition',
-      `attachment; filename="plan-${plan.assembly.id}-${plan.serviceDate}.pdf"`,
-    );
-    res.setHeader('Cache-Control', 'no-store');
-    res.send(pdf);
+    sendPdf(res, pdf, `plan-${plan.assembly.id}-${plan.serviceDate}.pdf`);
   });
 
   router.post(
