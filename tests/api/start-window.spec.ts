@@ -73,7 +73,11 @@ describe('start days outside a year of today', () => {
     const server = await startTestServer(t, {}, { now: clockFrom(TODAY) });
     const before = await batchCounts(server);
     for (const route of ['/api/plans', '/api/plans/record']) {
-      for (const day of ['2126-12-24', '9999-12-31', '2027-12-04']) {
+      for (const [day, words] of [
+        ['2126-12-24', '24 Dec 2126'],
+        ['9999-12-31', '31 Dec 9999'],
+        ['2027-12-04', '4 Dec 2027'],
+      ]) {
         const response = await server
           .as('tobin')
           .post(route, { assembly: 'smokehouse-burger', count: 120, for: day });
@@ -81,7 +85,8 @@ describe('start days outside a year of today', () => {
         assert.equal(response.status, 400, response.text);
         assert.equal(
           response.json.error.message,
-          `the service date ${day} is more than a year ahead: plan for a day up to 2027-12-03 (a year from today, ${TODAY})`,
+          // A cook reads it on the Plans page: days in words, as every date there.
+          `the service date ${words} is more than a year ahead: plan for a day up to 3 Dec 2027 (a year from today, 3 Dec 2026)`,
         );
       }
     }

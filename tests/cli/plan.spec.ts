@@ -81,8 +81,12 @@ describe('larder plan', () => {
       ...TODAY,
     ]);
     // 5 Dec − (8 hold + 2 lead) days = 25 Nov; 2 Dec + 10 days = 12 Dec.
-    assertCleanFailure(run, 2, /quillmoor-belly must start 2026-11-25, already past/);
-    assert.match(run.stderr, /earliest service this plan can make is 2026-12-12/);
+    assertCleanFailure(
+      run,
+      2,
+      /Quillmoor belly, dry equilibrium cure must start 25 Nov 2026, already past/,
+    );
+    assert.match(run.stderr, /earliest service this plan can make is 12 Dec 2026/);
   });
 
   it('should refuse a batch formula, a missing part and a circle of assemblies', async (t) => {

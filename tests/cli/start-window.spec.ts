@@ -90,7 +90,7 @@ describe('larder plan for a day more than a year ahead', () => {
     assertCleanFailure(
       run,
       2,
-      /the service date 2126-12-24 is more than a year ahead: plan for a day up to 2027-12-02/,
+      /the service date 24 Dec 2126 is more than a year ahead: plan for a day up to 2 Dec 2027/,
     );
   });
 });

@@ -280,7 +280,16 @@ describe('plans in the console', () => {
     const refusal = page.getByTestId('plan-refusal');
     await refusal.waitFor();
     assert.match(await refusal.innerText(), /before today/);
-    assert.equal(await page.getByTestId('plan-refusal-formula').innerText(), 'quillmoor-belly');
+    // The formula by its title and the days in words: no id, no ISO date on a cook's screen.
+    const message = await page.getByTestId('plan-refusal-message').innerText();
+    assert.match(
+      message,
+      /^Quillmoor belly, dry equilibrium cure must start \d{1,2} [A-Z][a-z]{2} \d{4}, already past/,
+    );
+    assert.doesNotMatch(await refusal.innerText(), /\d{4}-\d{2}-\d{2}|quillmoor-belly/);
+    const link = page.getByTestId('plan-refusal-formula');
+    assert.equal(await link.innerText(), 'Open the formula');
+    assert.match((await link.getAttribute('href')) ?? '', /\/formulas\/quillmoor-belly$/);
     assert.equal(await page.getByTestId('plan-record').count(), 0);
     await session.screenshot(page, 'plan-refused');
   });
