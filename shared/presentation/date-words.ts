@@ -45,6 +45,15 @@ export function dayWords(value: string | Date, timeZone?: string): string {
   return wall ? dayText(wall) : String(value);
 }
 
+/**
+ * A day in short, for a chart's axis where the year is plain: "3 Dec". Read as {@link dayWords}
+ * reads its value.
+ */
+export function shortDayWords(value: string | Date, timeZone?: string): string {
+  const wall = (typeof value === 'string' && calendarDay(value)) || momentOf(value, timeZone);
+  return wall ? `${wall.day} ${MONTHS[wall.month - 1]}` : String(value);
+}
+
 /** A moment: "3 Dec 2026, 14:32", on the wall clock of `timeZone` (by default this program's). */
 export function momentWords(value: string | Date, timeZone?: string): string {
   const wall = momentOf(value, timeZone);
