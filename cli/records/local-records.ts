@@ -96,6 +96,7 @@ export class LocalRecords implements RecordKeeper {
         plan: presentPlan(plan, request.units),
         batches: await records.recordPlan(plan, request.units, {
           actor: await recorder(records),
+          again: request.again === true,
         }),
       }),
       request.folder,

@@ -8,6 +8,7 @@ import {
   REPO_ROOT,
   assertCleanFailure,
   assertExit,
+  localCook,
   runLarder,
   stdoutJson,
 } from '../helpers/run-larder.ts';
@@ -143,14 +144,7 @@ describe('larder plan', () => {
   });
 
   it('should record every batch of the plan as planned, on its start day', async (t) => {
-    const data = path.join(makeTempDir(t), 'data');
-    assertExit(
-      await runLarder(['users', 'add', 'tobin', '--role', 'cook'], {
-        env: { LARDER_DATA: data, LARDER_NEW_PASSWORD: 'tobin-pass-1' },
-      }),
-      0,
-    );
-    const env = { LARDER_DATA: data, LARDER_USER: 'tobin', LARDER_PASSWORD: 'tobin-pass-1' };
+    const env = await localCook(t);
     // A recorded plan starts from this machine's today: --today is refused with --record.
     const pretend = await runLarder([...BURGER, ...TODAY, '--record'], { env });
     assertCleanFailure(pretend, 2, /--today cannot be used with --record/);
