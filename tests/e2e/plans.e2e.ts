@@ -88,6 +88,11 @@ describe('plans in the console', () => {
       [SERVICE, ['chuck-grind', 'house-sauce']],
     ]);
     assert.equal(await page.getByTestId('plan-batch').count(), 4);
+    // Each batch names its formula by title and links to it without showing its id.
+    for (const text of await page.getByTestId('plan-batch').allInnerTexts()) {
+      assert.doesNotMatch(text, /quillmoor-belly|pit-bun|chuck-grind|house-sauce/);
+      assert.match(text, /Open the formula/);
+    }
 
     // 120 burgers × 2 patties = 240 portions of 4 oz; 240 × 113.398 g = 27 215.5 g → 27.216 kg.
     // source: the formula files (portions: 2, portion: 4 oz); 1 oz = 28.349523125 g (NIST SP 811)
