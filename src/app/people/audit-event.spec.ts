@@ -23,6 +23,27 @@ describe('audit event words', () => {
         'Set their password from an invitation',
       );
     });
+
+    it('should never say a message was sent when it was only kept in the outbox', () => {
+      const kept = { kept: true };
+      assert.equal(
+        actionText({
+          action: 'invitation-send',
+          detail: { to: 'wren@quillmoor.invalid', ...kept },
+        }),
+        'Kept an invitation (no mail server)',
+      );
+      assert.equal(
+        actionText({ action: 'reminder-send', detail: { kind: 'flip', ...kept } }),
+        'Kept a reminder (no mail server)',
+      );
+      assert.equal(
+        actionText({ action: 'process-alert-send', detail: { what: 'x', ...kept } }),
+        'Kept an alert (no mail server)',
+      );
+      assert.equal(actionText({ action: 'invitation-send', detail: {} }), 'Sent an invitation');
+      assert.equal(actionText({ action: 'reminder-send', detail: null }), 'Sent a reminder');
+    });
   });
 
   describe('detailText', () => {
@@ -111,12 +132,12 @@ describe('audit event words', () => {
           action: 'reminder-send',
           detail: { kind: 'flip', dueOn: '2024-03-02', to: ['rosa', 'tobin'] },
         },
-        expected: 'flip reminder, due 2024-03-02, to rosa, tobin',
+        expected: 'flip reminder, due 2 Mar 2024, to rosa, tobin',
       },
       {
         name: 'a reminder nobody could be sent',
         event: { action: 'reminder-send', detail: { kind: 'ready', dueOn: '2024-03-08', to: [] } },
-        expected: 'ready reminder, due 2024-03-08, to nobody',
+        expected: 'ready reminder, due 8 Mar 2024, to nobody',
       },
     ];
     for (const { name, event, expected } of cases) {
