@@ -3,6 +3,23 @@ import { describe, it } from 'node:test';
 import { actionText, detailText } from './audit-event.ts';
 
 describe('audit event words', () => {
+  describe('plans', () => {
+    it('should say a plan in words, never its field names or a YYYY-MM-DD day', () => {
+      const made = { count: 120, serviceDate: '2026-12-18' };
+      assert.equal(
+        detailText({ action: 'plan-make', detail: made }),
+        '120 for the service on 18 Dec 2026',
+      );
+      assert.equal(
+        detailText({
+          action: 'plan-record',
+          detail: { ...made, lots: ['261203-CG-01', '261203-PB-01'], again: true },
+        }),
+        '120 for the service on 18 Dec 2026 · 2 batches: 261203-CG-01, 261203-PB-01 · recorded again',
+      );
+    });
+  });
+
   describe('actionText', () => {
     it('should name a known action in words', () => {
       assert.equal(actionText({ action: 'batch-sign-off', detail: null }), 'Signed a batch off');

@@ -169,6 +169,9 @@ export function detailText(event: Pick<AuditEvent, 'action' | 'detail'>): string
         ],
         ', ',
       );
+    case 'plan-make':
+    case 'plan-record':
+      return planText(detail);
     case 'sign-in-throttled':
       return join(
         [
@@ -198,6 +201,23 @@ function personChangeText(detail: Record<string, unknown>): string {
     else parts.push(`${key} → ${wordsOf(value)}`);
   }
   return parts.join(', ');
+}
+
+/** A plan's entry: how many for which service, and for a recording the lots it made. */
+function planText(detail: Record<string, unknown>): string {
+  const lots = Array.isArray(detail['lots']) ? detail['lots'].map(wordsOf) : undefined;
+  return join(
+    [
+      typeof detail['count'] === 'number' && present(detail['serviceDate'])
+        ? `${detail['count']} for the service on ${dayWords(wordsOf(detail['serviceDate']))}`
+        : '',
+      lots === undefined
+        ? ''
+        : `${lots.length} ${lots.length === 1 ? 'batch' : 'batches'}${lots.length > 0 ? `: ${lots.join(', ')}` : ''}`,
+      detail['again'] === true ? 'recorded again' : '',
+    ],
+    ' · ',
+  );
 }
 
 function reminderChoicesText(detail: Record<string, unknown>): string {
