@@ -7,6 +7,7 @@ import {
   dayMonthWords,
   shortDayWords,
   shortMomentWords,
+  weekdayDayWords,
 } from './date-words.ts';
 
 // The expected weekdays are from the Gregorian calendar: 3 Dec 2026 is a Thursday, 29 Feb 2024
@@ -33,6 +34,12 @@ describe('dates and times in words, one form each', () => {
     assert.equal(shortMomentWords('2026-12-03T14:32:00Z', 'UTC'), 'Thu 3 Dec, 14:32');
     assert.equal(shortMomentWords('2024-02-29T07:05:00Z', 'UTC'), 'Thu 29 Feb, 07:05');
     assert.equal(shortMomentWords('2026-12-31T23:30:00Z', 'Europe/Berlin'), 'Fri 1 Jan, 00:30');
+  });
+
+  it('should head a page with the day and its weekday: "Thu 3 Dec 2026"', () => {
+    // 3 Dec 2026 is a Thursday; 29 Feb 2028 a Tuesday. from memory
+    assert.equal(weekdayDayWords('2026-12-03'), 'Thu 3 Dec 2026');
+    assert.equal(weekdayDayWords('2028-02-29T23:30:00Z', 'Europe/Berlin'), 'Wed 1 Mar 2028');
   });
 
   it('should write the short day of a board as "Wed 2 Dec", a calendar day in any zone', () => {

@@ -45,6 +45,12 @@ export function dayWords(value: string | Date, timeZone?: string): string {
   return wall ? dayText(wall) : String(value);
 }
 
+/** A day with its weekday, for a page's heading: "Thu 3 Dec 2026". Read as {@link dayWords} reads it. */
+export function weekdayDayWords(value: string | Date, timeZone?: string): string {
+  const wall = (typeof value === 'string' && calendarDay(value)) || momentOf(value, timeZone);
+  return wall ? `${weekday(wall)} ${dayText(wall)}` : String(value);
+}
+
 /** A day in short, for a board with the year plain: "Wed 2 Dec" (a calendar day as it is). */
 export function shortDayWords(value: string | Date, timeZone?: string): string {
   const wall = (typeof value === 'string' && calendarDay(value)) || momentOf(value, timeZone);
