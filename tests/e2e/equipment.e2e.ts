@@ -67,7 +67,15 @@ describe('equipment in the console', () => {
     await action.getByTestId('action-cause').fill('The door was left ajar during a delivery.');
     await action.getByTestId('action-restored').fill('Door shut; read 3.5 °C half an hour later.');
     await action.getByTestId('action-prevention').fill('A door alarm after two minutes open.');
-    await action.getByTestId('disposition-rechilled').click();
+    await action.getByTestId('disposition-rechilled').getByRole('radio').check();
+    // Under load a keystroke can land before the dialog settles: confirm only a form that holds it all.
+    for (const [field, text] of [
+      ['action-cause', 'The door was left ajar during a delivery.'],
+      ['action-restored', 'Door shut; read 3.5 °C half an hour later.'],
+      ['action-prevention', 'A door alarm after two minutes open.'],
+    ] as const) {
+      assert.equal(await action.getByTestId(field).inputValue(), text, field);
+    }
     await action.getByTestId('action-confirm').click();
     await action.waitFor({ state: 'detached' });
     const acted = page.getByTestId('reading-acted').or(page.getByTestId('reading-failure'));

@@ -141,7 +141,7 @@ describe('the process record in the console', () => {
       .getByTestId('action-restored')
       .fill('Door closed, gasket checked; the belly went back in the blast chiller.');
     await dialog.getByTestId('action-prevention').fill('Door alarm set to sound after 2 minutes.');
-    await dialog.getByTestId('disposition-rechilled').click();
+    await dialog.getByTestId('disposition-rechilled').getByRole('radio').check();
     await dialog.getByTestId('action-weight').fill('3.9');
     await shoot(session, cook, 'process-action-820');
     await dialog.getByTestId('action-confirm').click();
