@@ -117,6 +117,11 @@ describe('formulas in the console', () => {
     const bar = page.getByTestId('save-bar');
     const count = page.getByTestId('save-problem-count');
     assert.match(await count.innerText(), /No problems/);
+    // With nothing to save the bar is a line, not a third of a phone's screen.
+    await page.setViewportSize({ width: 390, height: 844 });
+    assert.equal(await page.getByTestId('save-message').count(), 0);
+    assert.ok(((await bar.boundingBox())?.height ?? 999) < 130, 'a short save bar on a phone');
+    await page.setViewportSize({ width: 1280, height: 860 });
     // At the top of a long form the bar is held at the foot of the window, not below the fold.
     const inView = async (): Promise<boolean> => {
       const box = await bar.boundingBox();
