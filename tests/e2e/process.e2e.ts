@@ -6,7 +6,7 @@ import type { Locator, Page } from 'playwright-core';
 import { handClock } from '../helpers/mail.ts';
 import { CONTROLLED, controlledFormulaYaml } from '../helpers/process-calls.ts';
 import type { DemoUser, TestServer } from '../helpers/test-server.ts';
-import { collectConsoleErrors, startConsole } from './browser.ts';
+import { collectConsoleErrors, dialogSettled, startConsole } from './browser.ts';
 import { TABLET, atWidths, shoot, sideways } from './screens.ts';
 
 const MINUTE = 60_000;
@@ -135,6 +135,7 @@ describe('the process record in the console', () => {
     await banner.getByTestId('record-action').click();
     const dialog = cook.getByTestId('action-dialog');
     await dialog.waitFor();
+    await dialogSettled(cook);
     assert.notEqual(await dialog.getByTestId('action-restored').inputValue(), '');
     await dialog.getByTestId('action-cause').fill('The blast chiller door was left ajar.');
     await dialog
