@@ -120,7 +120,18 @@ describe('formulas in the console', () => {
     // With nothing to save the bar is a line, not a third of a phone's screen.
     await page.setViewportSize({ width: 390, height: 844 });
     assert.equal(await page.getByTestId('save-message').count(), 0);
-    assert.ok(((await bar.boundingBox())?.height ?? 999) < 130, 'a short save bar on a phone');
+    // The page reflows after the resize (the navigation folds away): measure once it has settled.
+    await page
+      .waitForFunction(
+        () =>
+          (document.querySelector('[data-testid=save-bar]')?.getBoundingClientRect().height ?? 999) <
+          130,
+        undefined,
+        { timeout: 5000 },
+      )
+      .catch(() => undefined);
+    const barHeight = (await bar.boundingBox())?.height ?? 999;
+    assert.ok(barHeight < 130, `a short save bar on a phone, not ${barHeight} px`);
     await page.setViewportSize({ width: 1280, height: 860 });
     // At the top of a long form the bar is held at the foot of the window, not below the fold.
     const inView = async (): Promise<boolean> => {
