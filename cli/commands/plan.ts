@@ -29,6 +29,7 @@ interface PlanOptions {
   json?: boolean;
   formulas?: string;
   record?: boolean;
+  again?: boolean;
   server?: string;
   pdf?: string;
   force?: boolean;
@@ -70,6 +71,10 @@ export function planCommand(io: Io): Command {
       '--record',
       'record every batch as planned, starting on its day (as $LARDER_USER, password in $LARDER_PASSWORD)',
     )
+    .option(
+      '--again',
+      'with --record: record the batches again even if this plan was recorded before',
+    )
     .addOption(serverOption('with --record: record on this server'))
     .option(
       '--pdf <file>',
@@ -86,7 +91,8 @@ Examples:
   LARDER_USER=tobin LARDER_PASSWORD=… larder plan corned-beef-sandwich --count 60 --for 2026-12-18 --record
 ${EXIT_CODES_HELP}
   (2 also when the plan cannot be made: a batch that would start before today, a service day
-   more than a year ahead, or a batch too big)`,
+   more than a year ahead, or a batch too big; and with --record, when batches were recorded
+   for the same menu item and service day before, unless --again)`,
     )
     .action((reference: string, options: PlanOptions) => runPlan(reference, options, io));
 }
@@ -148,6 +154,8 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
   if (options.server && !options.record) {
     throw new CliError('--server goes with --record', EXIT.usage);
   }
+  if (options.again && !options.record)
+    throw new CliError('--again goes with --record', EXIT.usage);
   if (options.force && !options.pdf) throw new CliError('--force goes with --pdf', EXIT.usage);
   const pdf: PdfTarget | undefined = options.pdf
     ? { file: options.pdf, force: !!options.force }
@@ -193,6 +201,7 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
       units: options.units,
       folder,
       plan,
+      again: options.again === true,
     });
     if (pdf) await writePlanPdf(pdf, recorded.plan);
     return printRecorded(

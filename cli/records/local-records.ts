@@ -113,7 +113,10 @@ export class LocalRecords implements RecordKeeper {
       RECORDING_ROLES,
       async (records, actor) => ({
         plan: presentPlan(plan, request.units),
-        batches: await records.recordPlan(plan, request.units, { actor }),
+        batches: await records.recordPlan(plan, request.units, {
+          actor,
+          again: request.again === true,
+        }),
       }),
       request.folder,
     );

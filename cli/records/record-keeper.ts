@@ -25,6 +25,8 @@ export interface PlanToRecord {
   readonly folder: string;
   /** Makes the plan on this machine, from today; a server makes its own. */
   readonly plan: () => PlanResult;
+  /** Record the batches even when the plan was recorded before (`--again`). */
+  readonly again?: boolean;
 }
 
 /** What a logger file's upload stored: how many readings, and the deviations they opened. */

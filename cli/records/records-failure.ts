@@ -1,4 +1,5 @@
 import { FORMULA_REFUSALS, type PlanRefusal } from '../../shared/index.ts';
+import type { PlanAlreadyRecorded } from '../../shared/api/plan-record.ts';
 import type { RecordsFailure } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 
@@ -52,13 +53,27 @@ function lineOf(detail: unknown): string {
  */
 const SAID_IN_FULL = new Set(['critical-limit', 'bad-log', 'hold-size-needed']);
 
+/** A plan recorded before: its lots, one a line, and how to record new batches all the same. */
+function alreadyRecordedLines(details: readonly unknown[]): string[] {
+  const batches = (details[0] as Partial<PlanAlreadyRecorded> | undefined)?.batches ?? [];
+  return [
+    ...batches.map((b) => `  lot ${b.lotCode} · ${b.formula.id} · ${b.status}`),
+    'give --again to record new batches for it as well',
+  ];
+}
+
 /**
  * The one place record keeping's failures become the command's: the exit code and the lines
  * under the message. A refused batch's message already names every failed check, a refused
- * logger file's the line at fault.
+ * logger file's the line at fault; a plan recorded before lists the lots it has.
  */
 export function cliErrorOf(failure: RecordsFailureFacts, verb: RecordsVerb): CliError {
-  const details = SAID_IN_FULL.has(failure.code) ? [] : failure.details.map(lineOf);
+  const details =
+    failure.code === 'plan-already-recorded'
+      ? alreadyRecordedLines(failure.details)
+      : SAID_IN_FULL.has(failure.code)
+        ? []
+        : failure.details.map(lineOf);
   return new CliError(failure.message, exitCodeOf(failure, verb), details);
 }
 

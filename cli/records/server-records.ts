@@ -46,12 +46,13 @@ export class ServerRecords implements RecordKeeper {
   }
 
   recordPlan(request: PlanToRecord): Promise<{ plan: PresentedPlan; batches: Batch[] }> {
-    const { assembly, count, serviceDate, units } = request;
+    const { assembly, count, serviceDate, units, again } = request;
     return this.call('record', 'POST', '/api/plans/record', {
       assembly,
       count,
       for: serviceDate,
       units,
+      ...(again ? { again: true } : {}),
     });
   }
 

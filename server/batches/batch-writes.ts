@@ -16,6 +16,7 @@ import { UNSIGNABLE_STATUSES, refusedMove } from '../../shared/workflow/batch-st
 import { doneRefusal } from '../../shared/workflow/release-rules.ts';
 import type { ChangeOptions, NewBatch } from './batch.ts';
 import { MAX_LOT_SEQUENCE, lotCode, lotPrefix, prefixRange } from './lot-code.ts';
+import { dayWords } from '../../shared/presentation/date-words.ts';
 
 /** A workflow rule's refusal as the API's error; a missing reason names its field. */
 function ruleError(refusal: WorkflowRefusal): AppError {
@@ -100,7 +101,7 @@ export class BatchWrites {
     if (sequence > MAX_LOT_SEQUENCE)
       throw conflict(
         'lot-codes-exhausted',
-        `${MAX_LOT_SEQUENCE} batches of ${batch.formula.id} already start on ${batch.startedOn}`,
+        `${MAX_LOT_SEQUENCE} batches of ${batch.formula.title} already start on ${dayWords(batch.startedOn)}`,
       );
     const lot = lotCode(prefix, sequence);
     const [id] = (await this.db.sequelize.query(

@@ -13,6 +13,7 @@ import { keepingRefusals } from '../process/refusals.ts';
 import type { ChangeOptions, NewBatch } from './batch.ts';
 import type { BatchRepository } from './batch-repository.ts';
 import { prepareBatch } from './prepare-batch.ts';
+import { dayWords } from '../../shared/presentation/date-words.ts';
 
 /** What starting a batch works with. */
 export interface StartDeps {
@@ -67,9 +68,10 @@ function startDayWarning(planned: string, started: string, readyOn: string | nul
   const days = daysBetween(planned, started);
   if (days === 0) return [];
   const span = `${Math.abs(days)} day${Math.abs(days) === 1 ? '' : 's'}`;
-  const ready = readyOn ? ` It is now ready on ${readyOn}.` : '';
+  const ready = readyOn ? ` It is now ready on ${dayWords(readyOn)}.` : '';
+  const when = days > 0 ? 'later' : 'earlier';
   return [
-    `Started on ${started}, ${span} ${days > 0 ? 'later' : 'earlier'} than planned (${planned}).${ready}`,
+    `Started on ${dayWords(started)}, ${span} ${when} than planned (${dayWords(planned)}).${ready}`,
   ];
 }
 

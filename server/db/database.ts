@@ -17,6 +17,7 @@ import * as reviewQueueIndexes from './migrations/011-review-queue-indexes.ts';
 import * as unaffectedDisposition from './migrations/012-unaffected-disposition.ts';
 import * as loggerSummaries from './migrations/013-logger-summaries.ts';
 import * as turns from './migrations/014-turns.ts';
+import * as stock from './migrations/015-stock.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -43,6 +44,7 @@ const MIGRATIONS = [
   unaffectedDisposition,
   loggerSummaries,
   turns,
+  stock,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

@@ -6,6 +6,7 @@ import { equipmentDueMessage } from './equipment-due-message.ts';
 import { EquipmentRows } from './equipment-rows.ts';
 import { viewOf } from './equipment-view.ts';
 import { insertRow } from '../db/insert-row.ts';
+import { deliveryFact } from '../mail/mail-service.ts';
 
 /**
  * How long after a reading or check falls due it is chased: a cook on their round is not
@@ -111,7 +112,7 @@ export class EquipmentDueScheduler extends PeriodicRun<SentEquipmentDue[]> {
       {
         action: 'process-alert-send',
         subject: equipment.name,
-        detail: { kind: 'equipment-due', equipment: id, dueAt, to },
+        detail: { kind: 'equipment-due', equipment: id, dueAt, to, ...deliveryFact(mail) },
       },
       t,
     );

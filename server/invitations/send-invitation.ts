@@ -4,6 +4,7 @@ import { conflict } from '../http/app-error.ts';
 import { composeMessage, standardFooter, type MessageContent } from '../mail/mail-message.ts';
 import type { Person } from '../../shared/api/person.ts';
 import { INVITATION_HOURS } from './invitation-repository.ts';
+import { deliveryFact } from '../mail/mail-service.ts';
 
 /** What an admin is told about an invitation: where it went and until when it works. */
 export interface InvitationSent {
@@ -87,7 +88,7 @@ export async function sendInvitation(
       actor: by.actor,
       action: 'invitation-send',
       subject: person.username,
-      detail: { to: person.email, expiresAt },
+      detail: { to: person.email, expiresAt, ...deliveryFact(mail) },
       ...(by.ip === undefined ? {} : { ip: by.ip }),
     },
     transaction,

@@ -17,6 +17,14 @@ export interface MailService {
   close(): Promise<void>;
 }
 
+/**
+ * What an audit entry of a message says of its delivery: `kept: true` when no mail server is set
+ * up, as the message then stays in the outbox and never leaves; nothing otherwise.
+ */
+export function deliveryFact(mail: Pick<MailService, 'mailer'>): { kept?: true } {
+  return mail.mailer.transport === 'local' ? { kept: true } : {};
+}
+
 /** The domain of an address such as "Larderbook <larder@example.com>", for Message-IDs. */
 function domainOf(from: string): string {
   const match = /@([A-Za-z0-9.-]+)>?\s*$/.exec(from);

@@ -1,4 +1,5 @@
 import type { PlanResult, UnitSystem } from '../../shared/index.ts';
+import { dayWords } from '../../shared/presentation/date-words.ts';
 import type { Batch } from '../../shared/api/batch-record.ts';
 import type { PlanAlreadyRecorded } from '../../shared/api/plan-record.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
@@ -72,7 +73,7 @@ function alreadyRecorded(plan: PlanResult, batches: PlanAlreadyRecorded['batches
   return new AppError(
     409,
     'plan-already-recorded',
-    `${n} ${n === 1 ? 'batch is' : 'batches are'} already recorded for ${plan.assembly.title} on ${plan.serviceDate}: record again only to make more`,
+    `${n} ${n === 1 ? 'batch is' : 'batches are'} already recorded for ${plan.assembly.title} on ${dayWords(plan.serviceDate)}: record again only to make more`,
     [detail],
   );
 }

@@ -1,3 +1,4 @@
+import { clockWords } from '../../shared/process/control-words.ts';
 import type { Clock } from '../../shared/process/evaluate-control.ts';
 
 /** The zone last asked for, with the TZ it was asked under. */
@@ -23,15 +24,10 @@ export function kitchenClock(now: Date | string): Clock {
   };
 }
 
-/** A moment as the kitchen's clock shows it, "14:32", or "3 Dec 14:32" on another day. */
+/**
+ * A moment as the kitchen's clock shows it in the product's words: "14:32" today, "Thu 3 Dec,
+ * 14:32" on another day (the process record's words, shared/process/control-words.ts).
+ */
 export function kitchenTime(iso: string, today: string = new Date().toISOString()): string {
-  const timeZone = kitchenTimeZone();
-  const day = (at: string): string =>
-    new Intl.DateTimeFormat('en-GB', { timeZone, dateStyle: 'medium' }).format(new Date(at));
-  const time = new Intl.DateTimeFormat('en-GB', {
-    timeZone,
-    hour: '2-digit',
-    minute: '2-digit',
-  }).format(new Date(iso));
-  return day(iso) === day(today) ? time : `${day(iso).replace(/ \d{4}$/, '')} ${time}`;
+  return clockWords(iso, kitchenTimeZone(), today);
 }

@@ -1,5 +1,6 @@
 import { composeMessage, standardFooter, type MessageContent } from '../mail/mail-message.ts';
-import { kitchenTime } from './kitchen-clock.ts';
+import { shortMomentWords } from '../../shared/presentation/date-words.ts';
+import { kitchenTimeZone } from './kitchen-clock.ts';
 import type { ProcessAlert } from './process-alerts.ts';
 
 /** Everything an alert's words depend on. */
@@ -26,7 +27,12 @@ function subjectOf({ alert }: ProcessAlertFacts): string {
   }
 }
 
-function paragraphsOf({ alert, now }: ProcessAlertFacts): string[] {
+/** A moment of an alert: with its day always, as an e-mail is read later than it is sent. */
+function when(iso: string): string {
+  return shortMomentWords(iso, kitchenTimeZone());
+}
+
+function paragraphsOf({ alert }: ProcessAlertFacts): string[] {
   const lot = alert.batchId === null ? alert.subject : `Lot ${alert.subject}, ${alert.title}`;
   switch (alert.kind) {
     case 'reading-due':
@@ -36,12 +42,12 @@ function paragraphsOf({ alert, now }: ProcessAlertFacts): string[] {
       ];
     case 'stage-deadline':
       return [
-        `${lot}: ${alert.what}. The deadline is ${kitchenTime(alert.at, now)}.`,
+        `${lot}: ${alert.what}. The deadline is ${when(alert.at)}.`,
         'Check the product temperature now; if it will not make it, move it to a colder place (blast chiller, ice bath) before the deadline passes.',
       ];
     case 'deviation':
       return [
-        `${lot}: a critical limit was missed at ${kitchenTime(alert.at, now)}. ${alert.what}`,
+        `${lot}: a critical limit was missed at ${when(alert.at)}. ${alert.what}`,
         'The product is on hold. Record the corrective action: the cause, how control was restored, what prevents it happening again, and what happened to the product.',
       ];
   }

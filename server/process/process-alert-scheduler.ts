@@ -9,6 +9,7 @@ import type { ProcessJobOptions } from './process-job-options.ts';
 import { processAlertMessage } from './process-alert-message.ts';
 import { batchAlerts, type ProcessAlert } from './process-alerts.ts';
 import { BEING_MADE, type ProcessBatch } from './process-repository.ts';
+import { deliveryFact } from '../mail/mail-service.ts';
 
 /** How often alerts are decided: a cooling deadline is to the minute. common practice, no source */
 export const ALERT_EVERY_MS = 60_000;
@@ -182,6 +183,7 @@ export class ProcessAlertScheduler extends PeriodicRun<SentAlert[]> {
           key: alert.key,
           what: alert.what,
           to: recipients.map((p) => p.username),
+          ...deliveryFact(mail),
         },
       },
       t,

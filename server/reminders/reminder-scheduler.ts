@@ -10,6 +10,7 @@ import {
   type HoldDates,
   type ReminderKind,
 } from './reminder-schedule.ts';
+import { deliveryFact } from '../mail/mail-service.ts';
 
 /** The statuses that are a hold: a cure curing, a dough proofing. */
 const HELD: readonly BatchStatus[] = ['curing', 'proofing'];
@@ -194,7 +195,12 @@ export class ReminderScheduler extends PeriodicRun<ReminderRun> {
       {
         action: 'reminder-send',
         subject: batch.lotCode,
-        detail: { kind: due.kind, dueOn: due.dueOn, to: recipients.map((p) => p.username) },
+        detail: {
+          kind: due.kind,
+          dueOn: due.dueOn,
+          to: recipients.map((p) => p.username),
+          ...deliveryFact(mail),
+        },
       },
       t,
     );

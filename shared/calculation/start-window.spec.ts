@@ -34,7 +34,7 @@ describe('start-date window', () => {
   it('should refuse 9999-12-31, naming the field and the days allowed', () => {
     refuses(
       () => checkStartDate('9999-12-31', TODAY),
-      /^--start 9999-12-31 is more than a year ahead: a batch can start from 2025-12-03 to 2027-12-03/,
+      /^--start 31 Dec 9999 is more than a year ahead: a batch can start from 3 Dec 2025 to 3 Dec 2027 \(a year either side of today, 3 Dec 2026\)$/,
     );
   });
 
@@ -47,7 +47,7 @@ describe('start-date window', () => {
     refuses(() => checkStartDate('2027-12-04', TODAY), /more than a year ahead/);
     refuses(
       () => checkStartDate('2025-12-02', TODAY),
-      /^--start 2025-12-02 is more than a year back: a batch can start from 2025-12-03 to 2027-12-03/,
+      /^--start 2 Dec 2025 is more than a year back: a batch can start from 3 Dec 2025 to 3 Dec 2027/,
     );
     refuses(() => checkStartDate('1999-01-01', TODAY), /more than a year back/);
   });

@@ -1,4 +1,5 @@
 import { BatchError } from './batch-error.ts';
+import { dayWords } from '../presentation/date-words.ts';
 import { addDays, isIsoDate } from './dates.ts';
 
 // A batch's start day lies within a year either side of today. A year back lets a kitchen record
@@ -40,9 +41,10 @@ export function checkStartDate(start: string, today: string, option = 'start'): 
   const { earliest, latest } = startWindow(today);
   if (start >= earliest && start <= latest) return start;
   const side = start > latest ? 'ahead' : 'back';
+  // The console shows it with the option in a field's words: the days are said in words too.
   throw new BatchError(
-    `--${option} ${start} is more than a year ${side}: a batch can start from ${earliest} to ` +
-      `${latest} (a year either side of today, ${today})`,
+    `--${option} ${dayWords(start)} is more than a year ${side}: a batch can start from ` +
+      `${dayWords(earliest)} to ${dayWords(latest)} (a year either side of today, ${dayWords(today)})`,
     option,
   );
 }

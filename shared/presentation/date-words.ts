@@ -1,7 +1,7 @@
 /**
  * The one way Larderbook writes dates and times for people, on the console, in e-mails, on
- * PDFs and in the CLI: a day "3 Dec 2026", a moment "3 Dec 2026, 14:32", and the short form of
- * a board or a log "Thu 3 Dec, 14:32". Day and month in words, so neither is read the wrong way
+ * PDFs and in the CLI: a day "3 Dec 2026", a moment "3 Dec 2026, 14:32", the short form of
+ * a board or a log "Thu 3 Dec, 14:32", and the clock alone "14:32" for a time of today. Day and month in words, so neither is read the wrong way
  * round; a 24-hour clock. Month and weekday names are our own, not the runtime's locale data,
  * so Node and every browser write the same ("Sep", never "Sept").
  */
@@ -45,10 +45,25 @@ export function dayWords(value: string | Date, timeZone?: string): string {
   return wall ? dayText(wall) : String(value);
 }
 
+/** A day with its weekday, for a page's heading: "Thu 3 Dec 2026". Read as {@link dayWords} reads it. */
+export function weekdayDayWords(value: string | Date, timeZone?: string): string {
+  const wall = (typeof value === 'string' && calendarDay(value)) || momentOf(value, timeZone);
+  return wall ? `${weekday(wall)} ${dayText(wall)}` : String(value);
+}
+
 /** A day in short, for a board with the year plain: "Wed 2 Dec" (a calendar day as it is). */
 export function shortDayWords(value: string | Date, timeZone?: string): string {
   const wall = (typeof value === 'string' && calendarDay(value)) || momentOf(value, timeZone);
   return wall ? `${weekday(wall)} ${wall.day} ${MONTHS[wall.month - 1]}` : String(value);
+}
+
+/**
+ * A day in short, for a chart's axis where the year is plain: "3 Dec". Read as {@link dayWords}
+ * reads its value.
+ */
+export function dayMonthWords(value: string | Date, timeZone?: string): string {
+  const wall = (typeof value === 'string' && calendarDay(value)) || momentOf(value, timeZone);
+  return wall ? `${wall.day} ${MONTHS[wall.month - 1]}` : String(value);
 }
 
 /** A moment: "3 Dec 2026, 14:32", on the wall clock of `timeZone` (by default this program's). */
@@ -57,10 +72,39 @@ export function momentWords(value: string | Date, timeZone?: string): string {
   return wall ? `${dayText(wall)}, ${timeText(wall)}` : String(value);
 }
 
+const shortText = (w: Wall): string =>
+  `${weekday(w)} ${w.day} ${MONTHS[w.month - 1]}, ${timeText(w)}`;
+
 /** A moment in short, for a board or a log with the year plain: "Thu 3 Dec, 14:32". */
 export function shortMomentWords(value: string | Date, timeZone?: string): string {
   const wall = momentOf(value, timeZone);
-  return wall
-    ? `${weekday(wall)} ${wall.day} ${MONTHS[wall.month - 1]}, ${timeText(wall)}`
-    : String(value);
+  return wall ? shortText(wall) : String(value);
+}
+
+// A process record says thousands of times against the same today: its day is read once.
+let lastToday: { key: string; wall: Wall | null } | null = null;
+
+function todayOf(today: string | Date, timeZone: string | undefined): Wall | null {
+  const key = `${String(today instanceof Date ? today.getTime() : today)}|${timeZone ?? ''}`;
+  if (lastToday?.key !== key) lastToday = { key, wall: momentOf(today, timeZone) };
+  return lastToday.wall;
+}
+
+/**
+ * A moment of a record being worked, said against today: the clock alone "14:32" today, the
+ * short moment "Thu 3 Dec, 14:32" on another day of the year, the whole moment
+ * "3 Dec 2025, 14:32" in another year. Days are the wall clock's of `timeZone`.
+ * @param today now, or any moment of the day to say times against
+ */
+export function clockMomentWords(
+  value: string | Date,
+  today: string | Date,
+  timeZone?: string,
+): string {
+  const wall = momentOf(value, timeZone);
+  const now = todayOf(today, timeZone);
+  if (!wall || !now) return String(value);
+  if (wall.year !== now.year) return `${dayText(wall)}, ${timeText(wall)}`;
+  if (wall.month === now.month && wall.day === now.day) return timeText(wall);
+  return shortText(wall);
 }

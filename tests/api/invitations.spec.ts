@@ -118,6 +118,8 @@ describe('invitations', () => {
     const audit = await server.as('rosa').get('/api/audit?action=invitation-send');
     assert.equal(audit.json.events[0].subject, 'wren');
     assert.equal(audit.json.events[0].actorName, 'rosa');
+    // No mail server: the message stays in the outbox, and the entry says so.
+    assert.equal(audit.json.events[0].detail.kept, true);
   });
 
   it('should show the link in the answer once, and never again through the API or in the database', async (t) => {

@@ -77,6 +77,9 @@ describe('mail through an SMTP server (LARDER_SMTP_URL)', () => {
     const [row] = await readOutbox(server);
     assert.equal(row.transport, 'smtp');
     assert.equal(row.state, 'sent');
+    // Handed to a mail server: the audit entry does not say it was kept here.
+    const audit = await server.as('rosa').get('/api/audit?action=invitation-send');
+    assert.equal(audit.json.events[0].detail.kept, undefined);
     const unwrapped = message.data.replace(/=\r\n/g, '').replace(/=3D/g, '=');
     // Once sent, the outbox no longer holds the token; the delivered link is the only one, and works.
     const kept = await readMessage(server, row.id);

@@ -53,6 +53,12 @@ describe('POST /api/plans', () => {
     assert.equal(soon.json.error.code, 'plan-refused');
     assert.equal(soon.json.error.details[0].formula, 'quillmoor-belly');
     assert.match(soon.json.error.message, /already past/);
+    // The message is read by a cook: the formula by its title and days in words, never ISO.
+    assert.match(
+      soon.json.error.message,
+      /^Quillmoor belly, dry equilibrium cure must start \d{1,2} [A-Z][a-z]{2} \d{4}, /,
+    );
+    assert.doesNotMatch(soon.json.error.message, /\d{4}-\d{2}-\d{2}/);
 
     const notAssembly = await server()
       .as('tobin')
@@ -146,6 +152,9 @@ describe('POST /api/plans', () => {
     assert.equal(twice.json.error.code, 'plan-already-recorded');
     const detail = twice.json.error.details[0];
     assert.equal(detail.serviceDate, day);
+    // The machine field keeps the ISO day; the words a cook reads say it as a day.
+    assert.match(twice.json.error.message, / on \d{1,2} [A-Z][a-z]{2} \d{4}: record again/);
+    assert.doesNotMatch(twice.json.error.message, /\d{4}-\d{2}-\d{2}/);
     assert.deepEqual(
       detail.batches.map((b: { lotCode: string }) => b.lotCode).sort(),
       [...lots].sort(),

@@ -134,7 +134,7 @@ describe('starting a planned batch on what is really there', () => {
     assert.equal(response.json.batch.readyOn, '2024-03-12');
     assert.equal(response.json.batch.startedOn, '2024-03-04');
     assert.deepEqual(response.json.warnings, [
-      'Started on 2024-03-04, 2 days later than planned (2024-03-02). It is now ready on 2024-03-12.',
+      'Started on 4 Mar 2024, 2 days later than planned (2 Mar 2024). It is now ready on 12 Mar 2024.',
     ]);
   });
 

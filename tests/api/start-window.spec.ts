@@ -6,7 +6,15 @@ import { clockFrom, startTestServer, type ApiResponse } from '../helpers/test-se
 // The server's today: a start may lie from 2025-12-03 to 2027-12-03 (365 days either way).
 // source: our start-day window (shared/calculation/start-window.ts)
 const TODAY = '2026-12-03';
-const RANGE = 'a batch can start from 2025-12-03 to 2027-12-03';
+const RANGE = 'a batch can start from 3 Dec 2025 to 3 Dec 2027';
+// The days as a cook reads them on the console. source: the calendar
+const WORDS: Readonly<Record<string, string>> = {
+  '9999-12-31': '31 Dec 9999',
+  '2126-12-24': '24 Dec 2126',
+  '2027-12-04': '4 Dec 2027',
+  '2025-12-02': '2 Dec 2025',
+  '1990-06-01': '1 Jun 1990',
+};
 
 const belly = (start: string) => ({
   formula: 'quillmoor-belly',
@@ -20,7 +28,7 @@ function assertOutOfWindow(response: ApiResponse, start: string, side: 'ahead' |
   assert.equal(response.json.error.code, 'bad-batch');
   assert.equal(
     response.json.error.message,
-    `--start ${start} is more than a year ${side}: ${RANGE} (a year either side of today, ${TODAY})`,
+    `--start ${WORDS[start]} is more than a year ${side}: ${RANGE} (a year either side of today, 3 Dec 2026)`,
   );
   assert.deepEqual(response.json.error.details, [{ option: 'start' }]);
 }
@@ -73,7 +81,11 @@ describe('start days outside a year of today', () => {
     const server = await startTestServer(t, {}, { now: clockFrom(TODAY) });
     const before = await batchCounts(server);
     for (const route of ['/api/plans', '/api/plans/record']) {
-      for (const day of ['2126-12-24', '9999-12-31', '2027-12-04']) {
+      for (const [day, words] of [
+        ['2126-12-24', '24 Dec 2126'],
+        ['9999-12-31', '31 Dec 9999'],
+        ['2027-12-04', '4 Dec 2027'],
+      ]) {
         const response = await server
           .as('tobin')
           .post(route, { assembly: 'smokehouse-burger', count: 120, for: day });
@@ -81,7 +93,8 @@ describe('start days outside a year of today', () => {
         assert.equal(response.status, 400, response.text);
         assert.equal(
           response.json.error.message,
-          `the service date ${day} is more than a year ahead: plan for a day up to 2027-12-03 (a year from today, ${TODAY})`,
+          // A cook reads it on the Plans page: days in words, as every date there.
+          `the service date ${words} is more than a year ahead: plan for a day up to 3 Dec 2027 (a year from today, 3 Dec 2026)`,
         );
       }
     }

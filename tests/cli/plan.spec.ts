@@ -8,6 +8,7 @@ import {
   REPO_ROOT,
   assertCleanFailure,
   assertExit,
+  localCook,
   runLarder,
   stdoutJson,
 } from '../helpers/run-larder.ts';
@@ -81,8 +82,12 @@ describe('larder plan', () => {
       ...TODAY,
     ]);
     // 5 Dec − (8 hold + 2 lead) days = 25 Nov; 2 Dec + 10 days = 12 Dec.
-    assertCleanFailure(run, 2, /quillmoor-belly must start 2026-11-25, already past/);
-    assert.match(run.stderr, /earliest service this plan can make is 2026-12-12/);
+    assertCleanFailure(
+      run,
+      2,
+      /Quillmoor belly, dry equilibrium cure must start 25 Nov 2026, already past/,
+    );
+    assert.match(run.stderr, /earliest service this plan can make is 12 Dec 2026/);
   });
 
   it('should refuse a batch formula, a missing part and a circle of assemblies', async (t) => {
@@ -139,14 +144,7 @@ describe('larder plan', () => {
   });
 
   it('should record every batch of the plan as planned, on its start day', async (t) => {
-    const data = path.join(makeTempDir(t), 'data');
-    assertExit(
-      await runLarder(['users', 'add', 'tobin', '--role', 'cook'], {
-        env: { LARDER_DATA: data, LARDER_NEW_PASSWORD: 'tobin-pass-1' },
-      }),
-      0,
-    );
-    const env = { LARDER_DATA: data, LARDER_USER: 'tobin', LARDER_PASSWORD: 'tobin-pass-1' };
+    const env = await localCook(t);
     // A recorded plan starts from this machine's today: --today is refused with --record.
     const pretend = await runLarder([...BURGER, ...TODAY, '--record'], { env });
     assertCleanFailure(pretend, 2, /--today cannot be used with --record/);

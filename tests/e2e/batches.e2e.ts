@@ -297,6 +297,10 @@ describe('the batch log in the console', () => {
       await page.getByTestId('nitrite-chart-scope').innerText(),
       /judges ingoing nitrite only/,
     );
+    // Its days in the product's words, never ISO: "from 1 Nov 2026 to 3 Dec 2026".
+    const summary = await page.getByTestId('nitrite-chart-summary').innerText();
+    assert.match(summary, /\d{1,2} [A-Z][a-z]{2} \d{4}/);
+    assert.doesNotMatch(summary, /\d{4}-\d{2}-\d{2}/);
     for (const width of [1280, 820, 390]) {
       await page.setViewportSize({ width, height: width === 390 ? 844 : 1000 });
       await page.waitForTimeout(200);

@@ -108,3 +108,16 @@ export async function startConsole(
     },
   };
 }
+
+/**
+ * Waits until the dialog opened last has taken the keyboard focus. A dialog moves focus to its
+ * first field when its opening animation ends; text typed before that, under load, can land in
+ * that first field instead of the one it was meant for.
+ */
+export async function dialogSettled(page: Page): Promise<void> {
+  await page.waitForFunction(() => {
+    const dialogs = document.querySelectorAll('mat-dialog-container');
+    const last = dialogs[dialogs.length - 1];
+    return last !== undefined && last.contains(document.activeElement);
+  });
+}

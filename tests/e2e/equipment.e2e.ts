@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { Locator, Page } from 'playwright-core';
-import { collectConsoleErrors, startConsole } from './browser.ts';
+import { collectConsoleErrors, dialogSettled, startConsole } from './browser.ts';
 
 /** The card of the demo's piece of equipment with this name. */
 function card(page: Page, name: string): Locator {
@@ -64,10 +64,20 @@ describe('equipment in the console', () => {
     // The corrective action, the four things a HACCP record asks, in the batch page's dialog.
     await dialog.getByTestId('reading-act').click();
     const action = page.getByTestId('action-dialog');
+    await action.waitFor();
+    await dialogSettled(page);
     await action.getByTestId('action-cause').fill('The door was left ajar during a delivery.');
     await action.getByTestId('action-restored').fill('Door shut; read 3.5 °C half an hour later.');
     await action.getByTestId('action-prevention').fill('A door alarm after two minutes open.');
-    await action.getByTestId('disposition-rechilled').click();
+    await action.getByTestId('disposition-rechilled').getByRole('radio').check();
+    // Under load a keystroke can land before the dialog settles: confirm only a form that holds it all.
+    for (const [field, text] of [
+      ['action-cause', 'The door was left ajar during a delivery.'],
+      ['action-restored', 'Door shut; read 3.5 °C half an hour later.'],
+      ['action-prevention', 'A door alarm after two minutes open.'],
+    ] as const) {
+      assert.equal(await action.getByTestId(field).inputValue(), text, field);
+    }
     await action.getByTestId('action-confirm').click();
     await action.waitFor({ state: 'detached' });
     const acted = page.getByTestId('reading-acted').or(page.getByTestId('reading-failure'));

@@ -26,6 +26,16 @@ describe('formulas in the console', () => {
     // source: USDA FSIS Directive 7620.3 ch. 3 (dry cure: nitrite × 10^6 / green weight)
     await sheet.getByText('156.3 ppm').first().waitFor();
     await session.screenshot(page, 'formula-page');
+    // An admin, who works with the files, reads the file's name in words, not the id as code.
+    assert.equal(
+      await page.getByRole('heading', { level: 1 }).innerText(),
+      'Quillmoor belly, dry equilibrium cure',
+    );
+    assert.equal(
+      await page.getByTestId('formula-file-name').innerText(),
+      'File: quillmoor-belly.yaml',
+    );
+    assert.equal(await page.locator('.head code').count(), 0);
     const revisionsBefore = await page.getByTestId('history-row').count();
 
     // 0.24 % instead of 0.25 %: 0.24 × 0.0625 × 10^4 = 150.0 ppm (same source)
@@ -90,6 +100,12 @@ describe('formulas in the console', () => {
     await page.goto(`${session.server.url}/formulas/pit-bun`, { waitUntil: 'networkidle' });
     await page.getByTestId('result-sheet').waitFor();
     assert.equal(await page.getByTestId('save-formula').count(), 0);
+    // The recipe is headed by its title; its id or file name is nowhere a cook reads.
+    assert.equal(
+      await page.getByRole('heading', { level: 1 }).innerText(),
+      'Milk and honey bun, with sponge',
+    );
+    assert.doesNotMatch(await page.locator('app-formula-page').innerText(), /pit-bun/);
   });
 
   it('should keep Save in reach at the foot of the screen, with the problem count beside it', async (t) => {
@@ -101,6 +117,22 @@ describe('formulas in the console', () => {
     const bar = page.getByTestId('save-bar');
     const count = page.getByTestId('save-problem-count');
     assert.match(await count.innerText(), /No problems/);
+    // With nothing to save the bar is a line, not a third of a phone's screen.
+    await page.setViewportSize({ width: 390, height: 844 });
+    assert.equal(await page.getByTestId('save-message').count(), 0);
+    // The page reflows after the resize (the navigation folds away): measure once it has settled.
+    await page
+      .waitForFunction(
+        () =>
+          (document.querySelector('[data-testid=save-bar]')?.getBoundingClientRect().height ?? 999) <
+          130,
+        undefined,
+        { timeout: 5000 },
+      )
+      .catch(() => undefined);
+    const barHeight = (await bar.boundingBox())?.height ?? 999;
+    assert.ok(barHeight < 130, `a short save bar on a phone, not ${barHeight} px`);
+    await page.setViewportSize({ width: 1280, height: 860 });
     // At the top of a long form the bar is held at the foot of the window, not below the fold.
     const inView = async (): Promise<boolean> => {
       const box = await bar.boundingBox();

@@ -88,6 +88,11 @@ describe('plans in the console', () => {
       [SERVICE, ['chuck-grind', 'house-sauce']],
     ]);
     assert.equal(await page.getByTestId('plan-batch').count(), 4);
+    // Each batch names its formula by title and links to it without showing its id.
+    for (const text of await page.getByTestId('plan-batch').allInnerTexts()) {
+      assert.doesNotMatch(text, /quillmoor-belly|pit-bun|chuck-grind|house-sauce/);
+      assert.match(text, /Open the formula/);
+    }
 
     // 120 burgers × 2 patties = 240 portions of 4 oz; 240 × 113.398 g = 27 215.5 g → 27.216 kg.
     // source: the formula files (portions: 2, portion: 4 oz); 1 oz = 28.349523125 g (NIST SP 811)
@@ -280,7 +285,16 @@ describe('plans in the console', () => {
     const refusal = page.getByTestId('plan-refusal');
     await refusal.waitFor();
     assert.match(await refusal.innerText(), /before today/);
-    assert.equal(await page.getByTestId('plan-refusal-formula').innerText(), 'quillmoor-belly');
+    // The formula by its title and the days in words: no id, no ISO date on a cook's screen.
+    const message = await page.getByTestId('plan-refusal-message').innerText();
+    assert.match(
+      message,
+      /^Quillmoor belly, dry equilibrium cure must start \d{1,2} [A-Z][a-z]{2} \d{4}, already past/,
+    );
+    assert.doesNotMatch(await refusal.innerText(), /\d{4}-\d{2}-\d{2}|quillmoor-belly/);
+    const link = page.getByTestId('plan-refusal-formula');
+    assert.equal(await link.innerText(), 'Open the formula');
+    assert.match((await link.getAttribute('href')) ?? '', /\/formulas\/quillmoor-belly$/);
     assert.equal(await page.getByTestId('plan-record').count(), 0);
     await session.screenshot(page, 'plan-refused');
   });

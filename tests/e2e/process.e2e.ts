@@ -6,7 +6,7 @@ import type { Locator, Page } from 'playwright-core';
 import { handClock } from '../helpers/mail.ts';
 import { CONTROLLED, controlledFormulaYaml } from '../helpers/process-calls.ts';
 import type { DemoUser, TestServer } from '../helpers/test-server.ts';
-import { collectConsoleErrors, startConsole } from './browser.ts';
+import { collectConsoleErrors, dialogSettled, startConsole } from './browser.ts';
 import { TABLET, atWidths, shoot, sideways } from './screens.ts';
 
 const MINUTE = 60_000;
@@ -135,13 +135,14 @@ describe('the process record in the console', () => {
     await banner.getByTestId('record-action').click();
     const dialog = cook.getByTestId('action-dialog');
     await dialog.waitFor();
+    await dialogSettled(cook);
     assert.notEqual(await dialog.getByTestId('action-restored').inputValue(), '');
     await dialog.getByTestId('action-cause').fill('The blast chiller door was left ajar.');
     await dialog
       .getByTestId('action-restored')
       .fill('Door closed, gasket checked; the belly went back in the blast chiller.');
     await dialog.getByTestId('action-prevention').fill('Door alarm set to sound after 2 minutes.');
-    await dialog.getByTestId('disposition-rechilled').click();
+    await dialog.getByTestId('disposition-rechilled').getByRole('radio').check();
     await dialog.getByTestId('action-weight').fill('3.9');
     await shoot(session, cook, 'process-action-820');
     await dialog.getByTestId('action-confirm').click();

@@ -73,6 +73,12 @@ export function declaredRoutePaths(): string[] {
 async function settle(page: Page): Promise<void> {
   await page.waitForLoadState('networkidle');
   await page.waitForTimeout(250);
+  // A resize below the tablet width slides the navigation shut: picture it shut, not on its way.
+  await page.waitForFunction(() =>
+    document
+      .getAnimations()
+      .every((a) => !(a instanceof CSSTransition) || a.playState !== 'running'),
+  );
 }
 
 /** Visits a screen, then at every size saves a screenshot and notes the problems axe finds. */

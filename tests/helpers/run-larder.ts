@@ -3,6 +3,7 @@ import { execFile } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { makeTempDir } from './temp-files.ts';
 
 /** The repository root: the built command runs from here unless a test gives another folder. */
 export const REPO_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -173,4 +174,24 @@ export interface CheckReport {
       readonly message: string;
     }[];
   }[];
+}
+
+/**
+ * A fresh database on this machine with one cook, tobin, and the settings that record as them:
+ * `LARDER_DATA`, `LARDER_USER` and `LARDER_PASSWORD`.
+ */
+export async function localCook(t: { after(fn: () => unknown): void }): Promise<{
+  readonly LARDER_DATA: string;
+  readonly LARDER_USER: string;
+  readonly LARDER_PASSWORD: string;
+}> {
+  const data = path.join(makeTempDir(t), 'data');
+  const password = 'tobin-pass-1';
+  assertExit(
+    await runLarder(['users', 'add', 'tobin', '--role', 'cook'], {
+      env: { LARDER_DATA: data, LARDER_NEW_PASSWORD: password },
+    }),
+    0,
+  );
+  return { LARDER_DATA: data, LARDER_USER: 'tobin', LARDER_PASSWORD: password };
 }

@@ -113,7 +113,7 @@ describe('planAssembly: a part applied to another part (the rub on the brisket)'
       (error: unknown) =>
         error instanceof PlanError &&
         error.reason === 'past-start' &&
-        /^brisket-brine must start 2026-11-29, .*it needs 11 days; the earliest service this plan can make is 2026-12-13\)$/.test(
+        /^Brisket flat, equilibrium brine must start 29 Nov 2026, .*it needs 11 days; the earliest service this plan can make is 13 Dec 2026\)$/.test(
           error.message,
         ),
     );

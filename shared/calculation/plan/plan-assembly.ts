@@ -5,6 +5,7 @@ import type { Allergen } from '../../formula/formula-types.ts';
 import { collectAllergens } from '../allergens.ts';
 import { BatchError } from '../batch-error.ts';
 import { checkProblem } from '../../presentation/check-figures.ts';
+import { dayWords } from '../../presentation/date-words.ts';
 import {
   criticalFailures,
   failsCriticalLimit,
@@ -50,7 +51,8 @@ function checkOptions({ count, serviceDate, today }: PlanOptions): void {
   const { latest } = startWindow(today);
   if (serviceDate > latest) {
     throw new PlanError(
-      `the service date ${serviceDate} is more than a year ahead: plan for a day up to ${latest} (a year from today, ${today})`,
+      `the service date ${dayWords(serviceDate)} is more than a year ahead: plan for a day up ` +
+        `to ${dayWords(latest)} (a year from today, ${dayWords(today)})`,
       'bad-input',
     );
   }
@@ -70,10 +72,11 @@ function refusePastStarts(
   const needed = ({ start }: PlannedDates) => daysBetween(start, serviceDate);
   const longest = Math.max(...dated.map(({ dates }) => needed(dates)));
   const { need, dates } = late[0];
+  // People read it (the console shows it as it is): the formula by its title, days in words.
   throw new PlanError(
-    `${need.formula.id} must start ${dates.start}, already past; plan for a later date ` +
-      `(for service on ${serviceDate} it needs ${needed(dates)} days; ` +
-      `the earliest service this plan can make is ${addDays(today, longest)})`,
+    `${need.formula.title} must start ${dayWords(dates.start)}, already past; plan for a later ` +
+      `date (for service on ${dayWords(serviceDate)} it needs ${needed(dates)} days; ` +
+      `the earliest service this plan can make is ${dayWords(addDays(today, longest))})`,
     'past-start',
     need.formula.id,
   );
@@ -86,13 +89,13 @@ function calculateNeed(need: Need, batch: PlanBatch['batch'], today: string): Ca
     result = calculate(formula, parseBatchOptions(batch, formula, { today }));
   } catch (error) {
     if (error instanceof BatchError) {
-      throw new PlanError(`${formula.id}: ${error.message}`, 'bad-batch', formula.id);
+      throw new PlanError(`${formula.title}: ${error.message}`, 'bad-batch', formula.id);
     }
     throw error;
   }
   if (failsCriticalLimit(result)) {
     throw new PlanError(
-      `${formula.id} is refused, and the plan with it: ` +
+      `${formula.title} is refused, and the plan with it: ` +
         criticalFailures(result.checks).map(checkProblem).join('; '),
       'critical-limit',
       formula.id,
@@ -158,7 +161,7 @@ export function planAssembly(
     const size = plannedSize(need);
     const batch = { ...size.batch, start: dates.start };
     const result = calculateNeed(need, batch, options.today);
-    warnings.push(...size.warnings, ...result.warnings.map((w) => `${need.formula.id}: ${w}`));
+    warnings.push(...size.warnings, ...result.warnings.map((w) => `${need.formula.title}: ${w}`));
     const planBatch: PlanBatch = {
       formula: { id: need.formula.id, title: need.formula.title, kind: need.formula.kind },
       purposes: need.purposes,

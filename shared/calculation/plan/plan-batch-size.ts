@@ -63,7 +63,7 @@ export function plannedSize(need: Need): PlannedSize {
       return {
         batch: { total: grams(forPieces.plus(need.grams)) },
         warnings: [
-          `${formula.id} is needed both by pieces and by weight: one batch of dough, from which ` +
+          `${formula.title} is needed both by pieces and by weight: one batch of dough, from which ` +
             `${need.pieces.toString()} pieces of ${formula.piece} are divided (loss ${loss.toString()} %).`,
         ],
       };
@@ -80,7 +80,7 @@ export function plannedSize(need: Need): PlannedSize {
           batch: { meat: grams(need.grams), ...sizes },
           green: need.grams,
           warnings: [
-            `${formula.id} gives no yields, so its green weight was planned as the finished ` +
+            `${formula.title} gives no yields, so its green weight was planned as the finished ` +
               'weight; add yields: to the formula to allow for what curing, smoking and slicing lose.',
           ],
         };

@@ -27,10 +27,11 @@ describe('planAssembly refuses a plan that cannot be made, naming the formula', 
   it('should refuse a start day already past, and say the earliest service it can make', () => {
     // The bacon needs 8 hold days + 1 lead day: for 2026-12-18 it starts 2026-12-09, which is
     // before 2026-12-10; from 2026-12-10 the earliest service is 2026-12-10 + 9 = 2026-12-19.
+    // A cook reads it: the formula by its title, the days as the product writes days.
     assertRefused(
       () => planAssembly(BURGER, KITCHEN, { ...OPTIONS, today: '2026-12-10' }),
       'past-start',
-      /^quillmoor-belly must start 2026-12-09, already past; plan for a later date .*earliest service this plan can make is 2026-12-19/,
+      /^Quillmoor belly, dry equilibrium cure must start 9 Dec 2026, already past; plan for a later date \(for service on 18 Dec 2026 .*earliest service this plan can make is 19 Dec 2026\)$/,
       'quillmoor-belly',
     );
   });
@@ -104,7 +105,7 @@ describe('planAssembly refuses a plan that cannot be made, naming the formula', 
     assertRefused(
       () => planAssembly(BURGER, libraryOf(hot, GRIND, BUN, SAUCE), OPTIONS),
       'critical-limit',
-      /^quillmoor-belly is refused, and the plan with it: critical limit exceeded: ingoing sodium nitrite 312\.5 ppm is over 200 ppm for dry-cured bacon/,
+      /^Quillmoor belly, dry equilibrium cure is refused, and the plan with it: critical limit exceeded: ingoing sodium nitrite 312\.5 ppm is over 200 ppm for dry-cured bacon/,
       'quillmoor-belly',
     );
   });
@@ -114,7 +115,7 @@ describe('planAssembly refuses a plan that cannot be made, naming the formula', 
     assertRefused(
       () => planAssembly(BURGER, KITCHEN, { ...OPTIONS, count: 100_000 }),
       'bad-batch',
-      /^chuck-grind: --total .* is more than 1000 kg/,
+      /^Smokehouse burger grind 80\/20: --total .* is more than 1000 kg/,
     );
   });
 
@@ -138,12 +139,16 @@ describe('planAssembly refuses a plan that cannot be made, naming the formula', 
 
   it('should refuse a service day more than a year ahead, naming the last day it can plan for', () => {
     // A year (365 days) from 2026-11-20 is 2027-11-20. source: our start-day window (start-window.ts)
-    for (const serviceDate of ['2126-12-24', '9999-12-31', '2027-11-21']) {
+    for (const [serviceDate, words] of [
+      ['2126-12-24', '24 Dec 2126'],
+      ['9999-12-31', '31 Dec 9999'],
+      ['2027-11-21', '21 Nov 2027'],
+    ]) {
       assertRefused(
         () => planAssembly(BURGER, KITCHEN, { ...OPTIONS, serviceDate }),
         'bad-input',
         new RegExp(
-          `^the service date ${serviceDate} is more than a year ahead: plan for a day up to 2027-11-20`,
+          `^the service date ${words} is more than a year ahead: plan for a day up to 20 Nov 2027 \\(a year from today, 20 Nov 2026\\)$`,
         ),
       );
     }

@@ -3,6 +3,23 @@ import { describe, it } from 'node:test';
 import { actionText, detailText } from './audit-event.ts';
 
 describe('audit event words', () => {
+  describe('plans', () => {
+    it('should say a plan in words, never its field names or a YYYY-MM-DD day', () => {
+      const made = { count: 120, serviceDate: '2026-12-18' };
+      assert.equal(
+        detailText({ action: 'plan-make', detail: made }),
+        '120 for the service on 18 Dec 2026',
+      );
+      assert.equal(
+        detailText({
+          action: 'plan-record',
+          detail: { ...made, lots: ['261203-CG-01', '261203-PB-01'], again: true },
+        }),
+        '120 for the service on 18 Dec 2026 · 2 batches: 261203-CG-01, 261203-PB-01 · recorded again',
+      );
+    });
+  });
+
   describe('actionText', () => {
     it('should name a known action in words', () => {
       assert.equal(actionText({ action: 'batch-sign-off', detail: null }), 'Signed a batch off');
@@ -22,6 +39,27 @@ describe('audit event words', () => {
         actionText({ action: 'password-reset', detail: { via: 'invitation' } }),
         'Set their password from an invitation',
       );
+    });
+
+    it('should never say a message was sent when it was only kept in the outbox', () => {
+      const kept = { kept: true };
+      assert.equal(
+        actionText({
+          action: 'invitation-send',
+          detail: { to: 'wren@quillmoor.invalid', ...kept },
+        }),
+        'Kept an invitation (no mail server)',
+      );
+      assert.equal(
+        actionText({ action: 'reminder-send', detail: { kind: 'flip', ...kept } }),
+        'Kept a reminder (no mail server)',
+      );
+      assert.equal(
+        actionText({ action: 'process-alert-send', detail: { what: 'x', ...kept } }),
+        'Kept an alert (no mail server)',
+      );
+      assert.equal(actionText({ action: 'invitation-send', detail: {} }), 'Sent an invitation');
+      assert.equal(actionText({ action: 'reminder-send', detail: null }), 'Sent a reminder');
     });
   });
 
@@ -111,12 +149,12 @@ describe('audit event words', () => {
           action: 'reminder-send',
           detail: { kind: 'flip', dueOn: '2024-03-02', to: ['rosa', 'tobin'] },
         },
-        expected: 'flip reminder, due 2024-03-02, to rosa, tobin',
+        expected: 'flip reminder, due 2 Mar 2024, to rosa, tobin',
       },
       {
         name: 'a reminder nobody could be sent',
         event: { action: 'reminder-send', detail: { kind: 'ready', dueOn: '2024-03-08', to: [] } },
-        expected: 'ready reminder, due 2024-03-08, to nobody',
+        expected: 'ready reminder, due 8 Mar 2024, to nobody',
       },
     ];
     for (const { name, event, expected } of cases) {

@@ -22,9 +22,9 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'person-add', label: 'Added a person' },
   { value: 'person-change', label: 'Changed a person' },
   { value: 'password-reset', label: 'Reset a password' },
-  { value: 'invitation-send', label: 'Sent an invitation' },
+  { value: 'invitation-send', label: 'Sent or kept an invitation' },
   { value: 'reminder-choices', label: 'Chose their reminders' },
-  { value: 'reminder-send', label: 'Sent a reminder' },
+  { value: 'reminder-send', label: 'Sent or kept a reminder' },
   { value: 'reading-add', label: 'Took a reading' },
   { value: 'reading-correct', label: 'Corrected a reading' },
   { value: 'readings-upload', label: 'Uploaded a thermometer log' },
@@ -37,13 +37,26 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'equipment-add', label: 'Added equipment' },
   { value: 'equipment-change', label: 'Changed equipment' },
   { value: 'calibration-add', label: 'Checked a thermometer' },
-  { value: 'process-alert-send', label: 'Sent an alert' },
+  { value: 'process-alert-send', label: 'Sent or kept an alert' },
   { value: 'report-produce', label: 'Produced a HACCP report' },
   { value: 'plan-make', label: 'Made a plan' },
   { value: 'plan-record', label: 'Recorded a plan as planned' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));
+
+/**
+ * A message's entry in words: sent, or kept in the outbox when no mail server was set up (the
+ * server notes `kept: true`) — never "sent" for a message that did not leave.
+ */
+const MESSAGE_LABELS: Readonly<Record<string, { sent: string; kept: string }>> = {
+  'invitation-send': {
+    sent: 'Sent an invitation',
+    kept: 'Kept an invitation (no mail server)',
+  },
+  'reminder-send': { sent: 'Sent a reminder', kept: 'Kept a reminder (no mail server)' },
+  'process-alert-send': { sent: 'Sent an alert', kept: 'Kept an alert (no mail server)' },
+};
 
 const STATUS_WORDS: Readonly<Record<string, string>> = {
   planned: 'planned',
@@ -66,6 +79,8 @@ export function actionText(event: Pick<AuditEvent, 'action' | 'detail'>): string
   if (event.action === 'password-reset' && fieldsOf(event.detail)['via'] === 'invitation') {
     return 'Set their password from an invitation';
   }
+  const message = MESSAGE_LABELS[event.action];
+  if (message) return fieldsOf(event.detail)['kept'] === true ? message.kept : message.sent;
   return ACTION_LABELS.get(event.action) ?? event.action;
 }
 
@@ -149,11 +164,14 @@ export function detailText(event: Pick<AuditEvent, 'action' | 'detail'>): string
       return join(
         [
           present(detail['kind']) ? `${wordsOf(detail['kind'])} reminder` : '',
-          present(detail['dueOn']) ? `due ${wordsOf(detail['dueOn'])}` : '',
+          present(detail['dueOn']) ? `due ${dayWords(wordsOf(detail['dueOn']))}` : '',
           recipientsText(detail['to']),
         ],
         ', ',
       );
+    case 'plan-make':
+    case 'plan-record':
+      return planText(detail);
     case 'sign-in-throttled':
       return join(
         [
@@ -183,6 +201,23 @@ function personChangeText(detail: Record<string, unknown>): string {
     else parts.push(`${key} → ${wordsOf(value)}`);
   }
   return parts.join(', ');
+}
+
+/** A plan's entry: how many for which service, and for a recording the lots it made. */
+function planText(detail: Record<string, unknown>): string {
+  const lots = Array.isArray(detail['lots']) ? detail['lots'].map(wordsOf) : undefined;
+  return join(
+    [
+      typeof detail['count'] === 'number' && present(detail['serviceDate'])
+        ? `${detail['count']} for the service on ${dayWords(wordsOf(detail['serviceDate']))}`
+        : '',
+      lots === undefined
+        ? ''
+        : `${lots.length} ${lots.length === 1 ? 'batch' : 'batches'}${lots.length > 0 ? `: ${lots.join(', ')}` : ''}`,
+      detail['again'] === true ? 'recorded again' : '',
+    ],
+    ' · ',
+  );
 }
 
 function reminderChoicesText(detail: Record<string, unknown>): string {

@@ -31,6 +31,8 @@ import { SignOffDialog, type SignOff, type SignOffDialogData } from './sign-off-
 import { StatusTimeline } from './status-timeline';
 import { FORMULA_KIND_WORDS as KIND_WORDS } from '../formula-kind-words';
 import { TurnList } from './turn-list';
+import { FormulaOptions } from '../formula-options';
+import { notesInWords } from './notes-words';
 
 /**
  * One batch: its lot code, formula and revision, status and the history of every change, the
@@ -64,6 +66,7 @@ export default class BatchPage {
   private readonly log = inject(BatchLog);
   protected readonly store = inject(BatchStore);
   protected readonly process = inject(ProcessStore);
+  private readonly formulas = inject(FormulaOptions);
 
   /** The lot code from the address. */
   readonly lot = input.required<string>();
@@ -138,6 +141,13 @@ export default class BatchPage {
     const days = new IsoDayPipe();
     return revisionWords(facts, (iso) => days.transform(iso));
   });
+  /** The notes in words: a plan's note names its menu item by title and its day as we write days. */
+  protected readonly notesText = computed(() => {
+    const notes = this.batch()?.notes;
+    if (!notes) return '';
+    const titles = new Map(this.formulas.formulas().map((f) => [f.id, f.title]));
+    return notesInWords(notes, (id) => titles.get(id));
+  });
   protected readonly isAdmin = computed(() => this.session.hasRole('admin'));
   /** The batch sheet as a PDF, made by the server (GET /api/batches/:lot/sheet.pdf). */
   protected readonly pdfLink = computed(() => {
@@ -151,6 +161,7 @@ export default class BatchPage {
       // Only the lot code starts a read; what the read itself touches must not start another.
       untracked(() => {
         void this.store.load(lot);
+        void this.formulas.load();
         void this.process.load(lot);
       });
     });

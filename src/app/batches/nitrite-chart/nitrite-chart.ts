@@ -24,10 +24,11 @@ import {
   type ChartOptions,
 } from 'chart.js';
 import { BaseChartDirective, provideCharts } from 'ng2-charts';
+import { dayWords } from '../../../../shared/presentation/date-words.ts';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { FormulaOptions } from '../formula-options';
 import { NitriteHistory } from './nitrite-history';
-import { nitriteSummary } from './nitrite-points';
+import { axisDayWords, nitriteSummary } from './nitrite-points';
 
 Chart.defaults.font.family = 'Fira Sans';
 
@@ -37,12 +38,6 @@ Chart.defaults.font.family = 'Fira Sans';
 const INK = '#1f5fa8';
 const LIMIT_INK = '#ba1a1a';
 const GRID = '#e8e0da';
-
-const SHORT_DAY = new Intl.DateTimeFormat('en-GB', {
-  day: 'numeric',
-  month: 'short',
-  timeZone: 'UTC',
-});
 
 /**
  * Ingoing nitrite of each recorded batch of one cure formula over time, with the formula's
@@ -147,7 +142,7 @@ export class NitriteChart {
           ticks: {
             maxTicksLimit: 8,
             maxRotation: 0,
-            callback: (value) => shortDay(Number(value)),
+            callback: (value) => axisDayWords(Number(value), first - pad, last + pad),
           },
         },
       },
@@ -157,7 +152,7 @@ export class NitriteChart {
           callbacks: {
             title: (items) => {
               const point = points[items[0]?.dataIndex ?? 0];
-              return point ? `${point.lot} · ${point.day}` : '';
+              return point ? `${point.lot} · ${dayWords(point.day)}` : '';
             },
             label: (item) => `${item.dataset.label ?? ''}: ${Number(item.parsed.y).toFixed(1)}`,
           },
@@ -190,9 +185,4 @@ const DAY_MS = 86_400_000;
 function dayMs(iso: string): number {
   const [year, month, day] = iso.split('-').map(Number);
   return Date.UTC(year, month - 1, day);
-}
-
-/** A tick's milliseconds as a short day, "3 Dec", read back in UTC as it was made. */
-function shortDay(ms: number): string {
-  return SHORT_DAY.format(new Date(ms));
 }

@@ -1,9 +1,10 @@
+import { dayWords, dayMonthWords } from '../../../../shared/presentation/date-words.ts';
 import type { BatchListItem } from '../batch-types';
 
 /** One recorded cure batch on the nitrite chart. */
 export interface NitritePoint {
   readonly lot: string;
-  /** Day it was recorded, YYYY-MM-DD. */
+  /** Day it was recorded on the kitchen's calendar (the browser's zone), YYYY-MM-DD. */
   readonly day: string;
   /** Ingoing sodium nitrite, ppm of green weight, for drawing. */
   readonly ppm: number;
@@ -13,6 +14,13 @@ export interface NitritePoint {
   readonly limit: number | null;
   /** Whether the batch was over its ceiling (a limit raised or lowered since it was recorded). */
   readonly over: boolean;
+}
+
+/** The calendar day a moment falls on in the browser's zone (the kitchen's), YYYY-MM-DD. */
+function kitchenDay(iso: string): string {
+  const at = new Date(iso);
+  const two = (n: number): string => String(n).padStart(2, '0');
+  return `${at.getFullYear()}-${two(at.getMonth() + 1)}-${two(at.getDate())}`;
 }
 
 /**
@@ -30,7 +38,7 @@ export function nitritePoints(batches: readonly BatchListItem[]): NitritePoint[]
     const hasLimit = Number.isFinite(limit);
     points.push({
       lot: batch.lotCode,
-      day: batch.recordedAt.slice(0, 10),
+      day: kitchenDay(batch.recordedAt),
       ppm,
       ppmText: `${ppm.toFixed(1)} ppm`,
       limit: hasLimit ? limit : null,
@@ -55,8 +63,8 @@ export function nitriteSummary(points: readonly NitritePoint[], title: string): 
   const count = points.length === 1 ? '1 batch' : `${points.length} batches`;
   const span =
     points.length === 1
-      ? `on ${points[0].day}: ${points[0].ppmText}`
-      : `from ${points[0].day} to ${points[points.length - 1].day}: ${low} to ${high} ppm`;
+      ? `on ${dayWords(points[0].day)}: ${points[0].ppmText}`
+      : `from ${dayWords(points[0].day)} to ${dayWords(points[points.length - 1].day)}: ${low} to ${high} ppm`;
   const limitWords =
     limits.length === 0
       ? 'no limit recorded'
@@ -65,4 +73,14 @@ export function nitriteSummary(points: readonly NitritePoint[], title: string): 
         : `limits ${limits.join(', ')} ppm`;
   const overWords = over === 0 ? 'none over the limit' : `${over} over the limit`;
   return `Ingoing nitrite of ${title}, ${count} ${span}; ${limitWords}; ${overWords}.`;
+}
+
+/**
+ * A label of the chart's time axis, whose days are milliseconds at UTC midnight: "3 Dec", or
+ * "3 Dec 2026" when the axis from `min` to `max` spans more than one year.
+ */
+export function axisDayWords(ms: number, min: number, max: number): string {
+  const day = new Date(ms).toISOString().slice(0, 10);
+  const oneYear = new Date(min).getUTCFullYear() === new Date(max).getUTCFullYear();
+  return oneYear ? dayMonthWords(day) : dayWords(day);
 }

@@ -128,7 +128,7 @@ export const STAGE_WORDS: Readonly<Record<StageName, string>> = {
   sliced: 'After slicing',
 };
 
-/** A time of day on the kitchen's clock, with the day when it is not today: "14:32", "3 Mar 09:10". */
+/** A time of day on the kitchen's clock, with the day when it is not today: "14:32", "Tue 3 Mar, 09:10". */
 export function clockWords(iso: string, now: Date = new Date()): string {
   if (Number.isNaN(new Date(iso).getTime())) return iso;
   return coreClockWords(iso, KITCHEN_ZONE, now.toISOString());

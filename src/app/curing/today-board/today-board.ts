@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -20,6 +19,7 @@ import { BatchLog } from '../../batches/batch-log/batch-log';
 import { ReasonDialog, type ReasonDialogData } from '../../batches/batch-page/reason-dialog';
 import { SessionStore } from '../../core/auth/session-store';
 import { AttentionNow } from '../attention-now';
+import { weekdayDayWords } from '../../../../shared/presentation/date-words.ts';
 import { BoardCard } from '../board-card/board-card';
 import type { BoardRow } from '../board-rows';
 import { CuringBoard } from '../curing-board';
@@ -34,7 +34,7 @@ import { SignOffQueue } from '../sign-off-queue';
  */
 @Component({
   selector: 'app-today-board',
-  imports: [DatePipe, RouterLink, MatButton, MatIcon, MatProgressBar, BoardCard, NeedsAttention],
+  imports: [RouterLink, MatButton, MatIcon, MatProgressBar, BoardCard, NeedsAttention],
   templateUrl: './today-board.html',
   styleUrl: './today-board.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -48,7 +48,8 @@ export default class TodayBoard implements OnInit {
   private readonly log = inject(BatchLog);
   private readonly snackBar = inject(MatSnackBar);
 
-  protected readonly now = new Date();
+  /** The day at the head of the board, in the product's words: "Thu 3 Dec 2026". */
+  protected readonly today = weekdayDayWords(new Date());
   /** Cooks and admins move batches along; reviewers look and sign off. */
   protected readonly canMove = computed(() => this.session.hasRole('admin', 'cook'));
   protected readonly reviews = computed(() => this.session.hasRole('admin', 'reviewer'));

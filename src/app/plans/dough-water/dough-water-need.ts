@@ -34,8 +34,8 @@ export function waterFigures(
 
 /**
  * Whether a plan's warning is the one about a batch's water temperature: the core prefixes each
- * batch's warnings with its formula id.
+ * batch's warnings with its formula's title.
  */
-export function isWaterWarning(warning: string, formulaId: string): boolean {
-  return warning.startsWith(`${formulaId}:`) && /water temperature/i.test(warning);
+export function isWaterWarning(warning: string, formulaTitle: string): boolean {
+  return warning.startsWith(`${formulaTitle}:`) && /water temperature/i.test(warning);
 }

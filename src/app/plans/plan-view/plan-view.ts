@@ -54,7 +54,7 @@ export class PlanView {
   /** The plan's warnings but those the doughs' boxes answer. */
   protected readonly otherWarnings = computed(() =>
     this.plan().warnings.filter(
-      (warning) => !this.doughs().some((dough) => isWaterWarning(warning, dough.formula.id)),
+      (warning) => !this.doughs().some((dough) => isWaterWarning(warning, dough.formula.title)),
     ),
   );
 
