@@ -11,7 +11,7 @@ import { FORMULA_ID_PATTERN } from '../../shared/formula/formula-id.ts';
 import { BATCH_STATUSES, RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
 import { parseListQuery } from './batch-query.ts';
-import { labelRoute } from './label-route.ts';
+import { labelContentRoute, labelRoute } from './label-route.ts';
 import { sendPdf } from '../http/send-pdf.ts';
 
 const RECORD_BODY = {
@@ -90,8 +90,10 @@ export function batchesRouter(context: AppContext): Router {
     sendPdf(res, pdf, `${batch.lotCode}.pdf`);
   });
 
-  // A product label for the batch's packages (4 × 6 in or 2 × 1 in), for any signed-in role.
+  // A product label for the batch's packages (4 × 6 in, 2 × 1 in, or a letter or A4 sheet of
+  // small labels), and its content for the console's preview, for any signed-in role.
   router.get('/:lot/label.pdf', labelRoute(context));
+  router.get('/:lot/label', labelContentRoute(context));
 
   router.post(
     '/:lot/status',

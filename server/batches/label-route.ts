@@ -2,7 +2,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import type { Request, RequestHandler } from 'express';
 import type { AppContext } from '../app-context.ts';
-import { badRequest, conflict } from '../http/app-error.ts';
+import { AppError, badRequest, conflict } from '../http/app-error.ts';
 import { LABEL_SIZES, type LabelSize } from '../pdf/label-sizes.ts';
 import { labelPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
@@ -11,7 +11,11 @@ import type { Catalogue } from '../../shared/catalogue/catalogue-types.ts';
 import { readCatalogue } from '../../shared/catalogue/read-catalogue.ts';
 import { isIsoDate } from '../../shared/calculation/dates.ts';
 import type { Decimal } from '../../shared/decimal.ts';
-import { productLabel } from '../../shared/labels/product-label.ts';
+import {
+  productLabel,
+  productLabelView,
+  type ProductLabel,
+} from '../../shared/labels/product-label.ts';
 import { parseMass } from '../../shared/units/mass.ts';
 import { QuantityError } from '../../shared/units/quantity-error.ts';
 import { sendPdf } from '../http/send-pdf.ts';
@@ -31,11 +35,16 @@ function one(req: Request, name: string): string | undefined {
   return value.trim();
 }
 
-/** The size, net weight and packed-on day of a label request, or a refusal in words. */
-function labelQuery(req: Request, today: string): LabelQuery {
+/**
+ * The size, net weight and packed-on day of a label request, or a refusal in words. A preview
+ * shows the content of every size, so it may go without the net weight the 4 × 6 label needs.
+ */
+function labelQuery(req: Request, today: string, preview = false): LabelQuery {
   const size = one(req, 'size') || '4x6';
   if (!(LABEL_SIZES as readonly string[]).includes(size))
-    throw badRequest(`a label is 4x6 or 2x1 (inches), not "${size}"`);
+    throw badRequest(
+      `a label is 4x6 or 2x1 (inches), or a sheet of small labels on letter or a4 paper, not "${size}"`,
+    );
   const net = one(req, 'net');
   let netGrams: Decimal | undefined;
   if (net) {
@@ -46,7 +55,7 @@ function labelQuery(req: Request, today: string): LabelQuery {
       throw error;
     }
     if (netGrams.isZero()) throw badRequest('the net weight must be more than 0');
-  } else if (size === '4x6')
+  } else if (size === '4x6' && !preview)
     throw badRequest(
       'a 4 × 6 label declares the net weight of the package: give it as net, such as 340 g or 12 oz',
     );
@@ -63,37 +72,65 @@ function catalogueOf(formulasDir: string): Catalogue | undefined {
   return readCatalogue(readFileSync(file, 'utf8'), CATALOGUE_FILE).catalogue;
 }
 
+/** The label of the batch a request names, worked out from its formula and recorded weights. */
+async function batchLabel(
+  context: AppContext,
+  req: Request,
+  query: LabelQuery,
+): Promise<ProductLabel> {
+  const { records, config } = context;
+  const batch = await records.showBatch(String(req.params.lot));
+  if (batch.status === 'planned' || batch.status === 'discarded')
+    throw conflict(
+      'not-packed',
+      `batch ${batch.lotCode} is ${batch.status === 'planned' ? 'planned, not made yet' : 'discarded'}: it has no product to label`,
+    );
+  const formula = await records.formulaOf(batch);
+  if (!formula)
+    throw conflict(
+      'formula-unavailable',
+      `the formula ${batch.formula.id} is no longer kept at the revision this batch was calculated from`,
+    );
+  return productLabel({
+    formula,
+    result: batch.result,
+    catalogue: catalogueOf(config.formulasDir),
+    lotCode: batch.lotCode,
+    packedOn: query.packedOn,
+    netGrams: query.netGrams,
+    kitchen: { name: config.kitchenName, address: config.kitchenAddress ?? undefined },
+  });
+}
+
 /**
- * GET /api/batches/:lot/label.pdf?size=4x6|2x1&net=MASS&packed=YYYY-MM-DD: a product label for
- * a recorded batch, packed today unless another day is given. A batch not made yet, or thrown
- * away, has no label.
+ * GET /api/batches/:lot/label.pdf?size=4x6|2x1|letter|a4&net=MASS&packed=YYYY-MM-DD: a product
+ * label for a recorded batch, packed today unless another day is given; letter and a4 are sheets
+ * of the 2 × 1 label. A batch not made yet, or thrown away, has no label; a 4 × 6 label whose
+ * content does not fit is refused with 422 label-too-full.
  */
 export function labelRoute(context: AppContext): RequestHandler {
-  const { records, config } = context;
   return async (req, res) => {
     const query = labelQuery(req, serverToday(context));
-    const batch = await records.showBatch(String(req.params.lot));
-    if (batch.status === 'planned' || batch.status === 'discarded')
-      throw conflict(
-        'not-packed',
-        `batch ${batch.lotCode} is ${batch.status === 'planned' ? 'planned, not made yet' : 'discarded'}: it has no product to label`,
-      );
-    const formula = await records.formulaOf(batch);
-    if (!formula)
-      throw conflict(
-        'formula-unavailable',
-        `the formula ${batch.formula.id} is no longer kept at the revision this batch was calculated from`,
-      );
-    const label = productLabel({
-      formula,
-      result: batch.result,
-      catalogue: catalogueOf(config.formulasDir),
-      lotCode: batch.lotCode,
-      packedOn: query.packedOn,
-      netGrams: query.netGrams,
-      kitchen: { name: config.kitchenName, address: config.kitchenAddress ?? undefined },
-    });
-    const pdf = await labelPdf(label, query.size);
-    sendPdf(res, pdf, `${batch.lotCode}-label-${query.size}.pdf`);
+    const label = await batchLabel(context, req, query);
+    let pdf: Buffer;
+    try {
+      pdf = await labelPdf(label, query.size);
+    } catch (error) {
+      if (error instanceof Error && error.name === 'LabelTooFullError')
+        throw new AppError(422, 'label-too-full', error.message);
+      throw error;
+    }
+    sendPdf(res, pdf, `${label.lotCode}-label-${query.size}.pdf`);
+  };
+}
+
+/**
+ * GET /api/batches/:lot/label?net=MASS&packed=YYYY-MM-DD: the label's content as it prints, for
+ * the console's preview; the net weight is optional here.
+ */
+export function labelContentRoute(context: AppContext): RequestHandler {
+  return async (req, res) => {
+    const query = labelQuery(req, serverToday(context), true);
+    res.json(productLabelView(await batchLabel(context, req, query)));
   };
 }

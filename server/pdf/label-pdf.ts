@@ -1,31 +1,46 @@
 import type { ProductLabel } from '../../shared/labels/product-label.ts';
+import { drawSafeHandling, shiHeight } from './label-safe-handling.ts';
 import type { LabelSize } from './label-sizes.ts';
-import { drawQrCode, qrMatrix, QUIET_ZONE_MODULES } from './qr-code.ts';
+import { CELL, labelQr, labelSheet, smallLabel, type SheetGrid } from './label-small.ts';
 import { finishLabel, openLabel, type PageSize } from './sheet-document.ts';
 import { INK, type SheetLayout, type TextStyle } from './sheet-layout.ts';
 import { dayInWords } from './sheet-words.ts';
 
 /** Points in an inch (PDF user space). source: ISO 32000-1:2008, 8.3.2.3 (1/72 inch) */
 const POINTS_PER_INCH = 72;
+/** Points in a millimetre. source: ISO 32000-1:2008, 8.3.2.3, with 1 in = 25.4 mm (NIST SP 811, B.8) */
+const POINTS_PER_MM = POINTS_PER_INCH / 25.4;
+
+/**
+ * Small labels on a sheet. Letter paper, 8.5 × 11 in (ANSI/ASME Y14.1, from memory): 4 × 10 cells
+ * of 2 × 1 in leave 1/4 in at the sides and 1/2 in at the top and bottom. A4, 210 × 297 mm
+ * (ISO 216): 3 × 11 cells; a fourth column would leave 3.4 mm at the sides, less than most
+ * printers can print to (common practice, no source).
+ */
+const SHEETS: Readonly<Record<'letter' | 'a4', SheetGrid>> = {
+  letter: { paper: [8.5 * POINTS_PER_INCH, 11 * POINTS_PER_INCH], columns: 4, rows: 10 },
+  a4: { paper: [210 * POINTS_PER_MM, 297 * POINTS_PER_MM], columns: 3, rows: 11 },
+};
 
 const PAGES: Record<LabelSize, PageSize> = {
   '4x6': {
     size: [4 * POINTS_PER_INCH, 6 * POINTS_PER_INCH],
     margins: { top: 14, bottom: 14, left: 14, right: 14 },
   },
-  '2x1': {
-    size: [2 * POINTS_PER_INCH, 1 * POINTS_PER_INCH],
-    margins: { top: 4, bottom: 4, left: 4, right: 4 },
-  },
+  '2x1': { size: [CELL.width, CELL.height], margins: { top: 4, bottom: 4, left: 4, right: 4 } },
+  letter: { size: SHEETS.letter.paper, margins: { top: 4, bottom: 4, left: 4, right: 4 } },
+  a4: { size: SHEETS.a4.paper, margins: { top: 4, bottom: 4, left: 4, right: 4 } },
 };
 
-/** Smallest and largest size of the ingredient statement on a 4 × 6 label, points. */
+/** Sizes of the ingredient statement on a 4 × 6 label, largest first, points. */
 const STATEMENT_SIZES = [8.5, 8, 7.5, 7, 6.5, 6] as const;
 
-/** Draws a QR code of a text filling a square of a side, quiet zone included. */
-function qr(layout: SheetLayout, text: string, x: number, y: number, side: number): void {
-  const module = side / (qrMatrix(text).length + 2 * QUIET_ZONE_MODULES);
-  drawQrCode(layout.doc, text, x, y, module);
+/**
+ * A label whose content does not fit its size; the route answers it in words, knowing it by its
+ * name (the route does not load pdfkit to compare classes).
+ */
+export class LabelTooFullError extends Error {
+  override readonly name = 'LabelTooFullError';
 }
 
 /** Draws a text in the flow and moves past it. */
@@ -35,11 +50,9 @@ function line(layout: SheetLayout, text: string, style: TextStyle, after = 2): v
 
 /** The kitchen's name and address, at the foot of the label; returns where it starts. */
 function kitchenFoot(layout: SheetLayout, label: ProductLabel, bottom: number): number {
-  const name = { size: 8.5, weight: 'semibold' } as const;
-  const address = { size: 8 } as const;
   const lines = [
-    { text: label.kitchen.name, style: name },
-    ...(label.kitchen.address ? [{ text: label.kitchen.address, style: address }] : []),
+    { text: label.kitchen.name, style: { size: 8.5, weight: 'semibold' } as const },
+    ...(label.kitchen.address ? [{ text: label.kitchen.address, style: { size: 8 } }] : []),
   ];
   const heights = lines.map((l) => layout.measure(l.text, l.style, layout.width));
   let y = bottom - heights.reduce((a, b) => a + b, 0);
@@ -51,109 +64,104 @@ function kitchenFoot(layout: SheetLayout, label: ProductLabel, bottom: number): 
   return top;
 }
 
+/** One line of the block beside the QR code: its text and how it is set. */
+type Fact = readonly [string, TextStyle];
+
+/** The net weight, the lot, the packed-on and use-by days, each on a line of its own. */
+function factsOf(label: ProductLabel): Fact[] {
+  return [
+    ...(label.net ? [[label.net.text, { size: 13, weight: 'semibold' }] as Fact] : []),
+    [`Lot ${label.lotCode}`, { size: 12, weight: 'semibold' }],
+    [`Packed on ${dayInWords(label.packedOn)}`, { size: 9.5 }],
+    ...(label.useBy.mark
+      ? [[`Use by ${dayInWords(label.useBy.mark.useBy)}`, { size: 11, weight: 'semibold' }] as Fact]
+      : []),
+  ];
+}
+
+/** Gap under each fact, points (our own). */
+const FACT_GAP = 3;
+
 /**
- * The 4 × 6 in label: the product's name, the ingredient statement and what it contains, the
- * net weight, the lot code with its QR code beside the packed-on and use-by days, "Keep
- * refrigerated" on a dark band, and the kitchen at the foot. The statement is set as large as
- * the label allows, from 8.5 down to 6 points.
+ * The 4 × 6 in label: the product's name, the ingredient statement and what it contains, then
+ * the net weight, the lot code, the packed-on and use-by days beside the lot's QR code, the keep
+ * statement on a dark band, the safe handling instructions in their box when the product needs
+ * them, and the kitchen at the foot. The statement is set as large as the label allows, from 8.5
+ * down to 6 points; a label whose content does not fit even so is refused.
  */
 function fourBySix(layout: SheetLayout, label: ProductLabel): void {
   const bottom = layout.doc.page.height - layout.doc.page.margins.bottom;
-  const footTop = kitchenFoot(layout, label, bottom);
-  line(layout, label.product, { size: 15, weight: 'semibold' }, 6);
+  let floor = kitchenFoot(layout, label, bottom) - 6;
+  if (label.instructions) {
+    floor -= shiHeight(layout, label.instructions, layout.width);
+    drawSafeHandling(layout, label.instructions, layout.left, floor, layout.width);
+    floor -= 6;
+  }
+  line(layout, label.product, { size: 15, weight: 'semibold' }, 5);
+  const side = label.instructions ? 64 : 84;
+  const facts = factsOf(label);
+  const factsWidth = layout.width - side;
+  const factsHeight = facts.reduce(
+    (h, [text, style]) => h + layout.measure(text, style, factsWidth) + FACT_GAP,
+    0,
+  );
+  const band = label.handling ? 20 : 0;
+  // Under the statement: the rule, the block beside the QR code, and the band.
+  const below = 10 + Math.max(side, factsHeight) + (band ? 6 + band : 0);
   const statement = [label.ingredients.text, label.contains].filter(Boolean) as string[];
-  // The block under the statement: net weight, lot and days, the band; about 180 points.
-  const below = 22 + 10 + 92 + 8 + 24 + 8;
-  const room = footTop - layout.y - below;
-  const size =
-    STATEMENT_SIZES.find(
-      (s) =>
-        statement.reduce((h, text) => h + layout.measure(text, { size: s }, layout.width) + 3, 0) <=
-        room,
-    ) ?? STATEMENT_SIZES[STATEMENT_SIZES.length - 1];
+  const room = floor - layout.y - below;
+  const size = STATEMENT_SIZES.find(
+    (s) =>
+      statement.reduce((h, text) => h + layout.measure(text, { size: s }, layout.width) + 3, 0) <=
+      room,
+  );
+  if (size === undefined)
+    throw new LabelTooFullError(
+      'the ingredient statement does not fit on a 4 × 6 label beside everything else it must say',
+    );
   line(layout, label.ingredients.text, { size }, 3);
   if (label.contains) line(layout, label.contains, { size, weight: 'semibold' }, 3);
-  layout.gap(5);
+  layout.gap(3);
   layout.rule(INK.black, 0.8);
-  layout.gap(6);
-  if (label.net) line(layout, label.net.text, { size: 14, weight: 'semibold' }, 4);
-  layout.rule(INK.black, 0.8);
-  layout.gap(8);
+  layout.gap(7);
   const top = layout.y;
-  const side = 84;
-  qr(layout, label.lotCode, layout.left - 4, top, side);
-  const x = layout.left + side + 4;
-  const width = layout.right - x;
-  const muted = { size: 8, color: INK.muted } as const;
-  const facts: [string, string, number][] = [
-    ['Lot', label.lotCode, 14],
-    ['Packed on', dayInWords(label.packedOn), 11],
-    ['Use by', dayInWords(label.useBy.useBy), 11],
-  ];
-  let y = top + 2;
-  for (const [name, value, size] of facts) {
-    y += layout.draw(name, muted, x, y, width);
-    y += layout.draw(value, { size, weight: 'semibold' }, x, y, width) + 3;
+  let y = top;
+  for (const [text, style] of facts)
+    y += layout.draw(text, style, layout.left, y, factsWidth) + FACT_GAP;
+  // The QR code's quiet zone is its own margin on the right.
+  labelQr(layout, label.lotCode, layout.right - side + 4, top - 4, side);
+  layout.y = Math.max(y, top + side - 4) + 6;
+  if (label.handling) {
+    layout.doc.rect(layout.left, layout.y, layout.width, band).fillColor(INK.black).fill();
+    layout.draw(
+      label.handling.toUpperCase(),
+      { size: 12, weight: 'semibold', color: INK.white, align: 'center' },
+      layout.left,
+      layout.y + 4,
+      layout.width,
+    );
   }
-  layout.y = Math.max(y, top + side) + 8;
-  const band = 24;
-  layout.doc.rect(layout.left, layout.y, layout.width, band).fillColor(INK.black).fill();
-  layout.draw(
-    label.handling.toUpperCase(),
-    { size: 13, weight: 'semibold', color: INK.white, align: 'center' },
-    layout.left,
-    layout.y + 5,
-    layout.width,
-  );
-  layout.y += band + 8;
 }
 
 /**
- * The 2 × 1 in label, for small packs: only the product's name, the lot code with its QR code,
- * the packed-on and use-by days and the net weight when given. It carries no ingredient
- * statement, allergens or kitchen: a pack this small needs the 4 × 6 label too, or a carton
- * that carries them.
- */
-function twoByOne(layout: SheetLayout, label: ProductLabel): void {
-  const { height, margins } = layout.doc.page;
-  const side = height - margins.top - margins.bottom;
-  qr(layout, label.lotCode, layout.left - 3, margins.top, side);
-  const x = layout.left + side;
-  const width = layout.right - x;
-  let y = margins.top;
-  const product = [7, 6.5, 6].find(
-    (size) => layout.measure(label.product, { size, weight: 'semibold' }, width) <= 2 * size * 1.3,
-  );
-  y += layout.draw(label.product, { size: product ?? 6, weight: 'semibold' }, x, y, width) + 1;
-  y += layout.draw(`Lot ${label.lotCode}`, { size: 8, weight: 'semibold' }, x, y, width) + 1;
-  y += layout.draw(`Packed ${dayInWords(label.packedOn)}`, { size: 6 }, x, y, width);
-  y += layout.draw(
-    `Use by ${dayInWords(label.useBy.useBy)}`,
-    { size: 6, weight: 'semibold' },
-    x,
-    y,
-    width,
-  );
-  if (label.net) layout.draw(label.net.text, { size: 6 }, x, y, width);
-}
-
-/**
- * A product label as a one-page PDF at a thermal label's size, in the sheet's fonts, its lot
- * code in words and as a QR code. The safe handling instructions of raw meat and poultry are
- * not printed yet (their text is to be taken word for word from 9 CFR 317.2(l)).
+ * A product label as a PDF in the sheet's fonts (Fira Sans, shipped with the console), its lot
+ * code in words and as a QR code: one page at a thermal label's size (4 × 6 or 2 × 1 in), or a
+ * letter or A4 sheet of the small label.
+ * @throws LabelTooFullError when the 4 × 6 label cannot hold its content
  */
 export function renderLabelPdf(label: ProductLabel, size: LabelSize): Promise<Buffer> {
   const layout = openLabel(
     {
       title: label.product,
       subject: `Product label, lot ${label.lotCode}`,
-      units: 'us',
+      units: size === 'a4' ? 'metric' : 'us',
       created: label.packedOn,
       lot: label.lotCode,
     },
     PAGES[size],
   );
   if (size === '4x6') fourBySix(layout, label);
-  else twoByOne(layout, label);
+  else if (size === '2x1') smallLabel(layout, label, { x: 0, y: 0, ...CELL });
+  else labelSheet(layout, label, SHEETS[size]);
   return finishLabel(layout);
 }

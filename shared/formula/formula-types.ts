@@ -50,6 +50,18 @@ export interface FormulaBase {
   controls?: FormulaControl[];
 }
 
+/** How the packed product is stored, which decides its label's keep statement. */
+export type ProductStorage = 'refrigerated' | 'frozen' | 'shelf-stable';
+
+/** How a product is kept and dated on its label (the formula's `label` key). */
+export interface LabelKeeping {
+  storage: ProductStorage;
+  /** Eaten as it is, without cooking: cooked, or smoked to a lethality. */
+  ready_to_eat: boolean;
+  /** The kitchen's own validated shelf life, the day of preparation counted as day 1. */
+  shelf_life?: { days: number; basis: string };
+}
+
 /** Weight after each process step as a percent of the weight before it. */
 export interface Yields {
   trim?: number;
@@ -113,6 +125,8 @@ export interface CureFormula extends FormulaBase {
   yields?: Yields;
   /** Days from the end of the hold to service (smoking, resting, slicing); default 1. */
   lead_days?: number;
+  /** How the product is kept and dated on its label. */
+  label?: LabelKeeping;
 }
 
 /** Foods with a published water content (shared/reference/water-content.ts). */
@@ -172,6 +186,8 @@ export interface DoughFormula extends FormulaBase {
   ddt?: { target: string; friction?: string };
   /** Days from the start of the batch to service; default 1 with a preferment, else 0. */
   lead_days?: number;
+  /** How the product is kept and dated on its label. */
+  label?: LabelKeeping;
 }
 
 export interface BlendComponent {
@@ -201,6 +217,8 @@ export interface BlendFormula extends FormulaBase {
   yields?: Yields;
   /** Days from making the blend to service; default 0. */
   lead_days?: number;
+  /** How the product is kept and dated on its label. */
+  label?: LabelKeeping;
 }
 
 export interface MixIngredient {
@@ -219,6 +237,8 @@ export interface MixFormula extends FormulaBase {
   ingredients: MixIngredient[];
   /** Days from making the mix to service; default 0. */
   lead_days?: number;
+  /** How the product is kept and dated on its label. */
+  label?: LabelKeeping;
 }
 
 /**

@@ -8,7 +8,8 @@ import { dec } from '../decimal.ts';
 import { readFormula } from '../formula/read-formula.ts';
 import type { Formula } from '../formula/formula-types.ts';
 import { presentResult } from '../presentation/present-result.ts';
-import { productLabel, safeHandling } from './product-label.ts';
+import { productLabel } from './product-label.ts';
+import { safeHandling } from './safe-handling.ts';
 
 const FORMULAS = new URL('../../formulas/', import.meta.url);
 const read = (name: string): string => readFileSync(new URL(name, FORMULAS), 'utf8');
@@ -58,20 +59,52 @@ describe('productLabel', () => {
 
   // source: FDA Food Code 2022, 3-501.17(A): 7 days at 5 °C (41 °F) or below, "the day of
   // preparation shall be counted as Day 1": packed Monday 2 March 2026, day 7 is Sunday 8 March.
-  it('should date the label by the Food Code, the packed day counted as day 1', () => {
-    const label = labelOf('quillmoor-belly', { meat: dec('5000'), start: '2026-02-20' });
+  // The ham is cooked to a lethality and kept cold: ready to eat, refrigerated.
+  it('should date a ready-to-eat refrigerated label by the Food Code, the packed day as day 1', () => {
+    const label = labelOf('ham-pump', { meat: dec('5000'), start: '2026-02-20' });
     assert.equal(label.packedOn, '2026-03-02');
-    assert.equal(label.useBy.useBy, '2026-03-08');
-    assert.equal(label.useBy.basis, 'food-code');
+    assert.equal(label.useBy.mark?.dayOne, '2026-03-02');
+    assert.equal(label.useBy.mark?.useBy, '2026-03-08');
+    assert.equal(label.useBy.mark?.basis, 'food-code');
     assert.equal(label.handling, 'Keep refrigerated');
+    assert.equal(label.instructions, undefined);
   });
 
+  // A raw product is not dated by the Food Code's 7 days (3-501.17 is for ready-to-eat food):
+  // without a validated shelf life it has no use-by day. source: FDA Food Code 2022, 3-501.17(A)
+  it('should give the raw bacon no use-by day, saying why, and keep it refrigerated', () => {
+    const label = labelOf('quillmoor-belly', { meat: dec('5000'), start: '2026-02-20' });
+    assert.equal(label.useBy.mark, undefined);
+    assert.match(label.useBy.none ?? '', /not ready to eat/);
+    // source: 9 CFR 381.125(a), "Keep Refrigerated" (read, 2019 CFR); 317.2(k), from memory
+    assert.equal(label.handling, 'Keep refrigerated');
+  });
   // source: FSIS Directive 10240.4, Resource 1: a meat product that has not had a lethality
   // treatment is not ready to eat and needs the safe handling instructions (9 CFR 317.2(l)).
   it('should ask for the safe handling instructions on the cold-smoked bacon', () => {
     const label = labelOf('quillmoor-belly', { meat: dec('5000'), start: '2026-02-20' });
     assert.equal(label.safeHandling.required, true);
-    assert.match(label.safeHandling.reason, /not ready to eat/);
+    assert.match(label.safeHandling.reason, /not ready to eat.*317\.2\(l\)/);
+    // The heading, the rationale and the four statements word for word, in the regulation's
+    // order. source: 9 CFR 381.125(b)(2) and (b)(3)(i)–(iv) (1-1-06 edition); FSIS, "Safe
+    // Handling Label Text"
+    assert.equal(label.instructions?.heading, 'Safe Handling Instructions');
+    assert.equal(
+      label.instructions?.rationale,
+      'This product was prepared from inspected and passed meat and/or poultry. Some food products may contain bacteria that could cause illness if the product is mishandled or cooked improperly. For your protection, follow these safe handling instructions.',
+    );
+    assert.deepEqual(
+      label.instructions?.statements.map((s) => [s.picture, s.text]),
+      [
+        ['refrigerator', 'Keep refrigerated or frozen. Thaw in refrigerator or microwave.'],
+        [
+          'hands',
+          'Keep raw meat and poultry separate from other foods. Wash working surfaces (including cutting boards), utensils, and hands after touching raw meat or poultry.',
+        ],
+        ['skillet', 'Cook thoroughly.'],
+        ['thermometer', 'Keep hot foods hot. Refrigerate leftovers immediately or discard.'],
+      ],
+    );
   });
 
   // chuck-grind, 10 000 g at 20 % fat from trims of 15 % and 50 % fat, by the Pearson square:
@@ -103,5 +136,103 @@ describe('productLabel', () => {
   // treatment is ready to eat; the demo ham is cooked to an FSIS Appendix A lethality control.
   it('should not ask safe handling of a ham cooked to a lethality control', () => {
     assert.equal(safeHandling(formula('ham-pump')).required, false);
+  });
+
+  // A butter sauce of our own, on 1 000 g of butter: butter 1 000 g, Worcestershire sauce 5 % =
+  // 50 g, black pepper 1 % = 10 g. Heaviest first, each compound ingredient followed by its own
+  // ingredients in parentheses in the order the catalogue gives them (the supplier's label).
+  // source: 21 CFR 101.4(a)(1) (descending order of predominance by weight) and 101.4(b)(2)(i)
+  // (a parenthetical listing of a multi-ingredient ingredient's own ingredients); 9 CFR
+  // 317.2(c)(2) and (f) for a meat product, (f)(1)'s order from memory. Allergens with their
+  // kinds: source: 21 U.S.C. 343(w)(1)(A) and (w)(2) (FALCPA 2004 §203): "Contains" and the
+  // species of fish — butter holds milk, Worcestershire sauce anchovy (formulas/catalogue.yaml).
+  it('should list a sauce with compound ingredients heaviest first and say it contains milk and fish', () => {
+    const sauce = readFormula(
+      [
+        'formula: 1',
+        'id: anchovy-butter',
+        'title: Anchovy butter',
+        'kind: mix',
+        'ingredients:',
+        '  - { name: unsalted butter, pct: 100, base: true }',
+        '  - { name: fine black pepper, pct: 1 }',
+        '  - { name: Worcestershire sauce, pct: 5 }',
+        'label: { storage: refrigerated, ready_to_eat: true }',
+      ].join('\n'),
+      'anchovy-butter.yaml',
+    ).formula;
+    assert.ok(sauce && sauce.kind === 'mix');
+    const label = productLabel({
+      formula: sauce,
+      result: presentResult(calculate(sauce, { total: dec('1060') }), 'metric'),
+      catalogue,
+      lotCode: '260302-AB-01',
+      packedOn: '2026-03-02',
+      kitchen: { name: 'Quillmoor Smokehouse' },
+    });
+    assert.equal(
+      label.ingredients.text,
+      'Ingredients: butter (cream), Worcestershire sauce (distilled vinegar, molasses, water, ' +
+        'sugar, onions, anchovies, salt, garlic, cloves, tamarind extract, natural flavorings), ' +
+        'black pepper',
+    );
+    assert.deepEqual(
+      label.ingredients.entries.map((entry) => entry.grams.toFixed(0)),
+      ['1000', '50', '10'],
+    );
+    assert.equal(label.contains, 'Contains: milk, fish (anchovy)');
+  });
+
+  // A validated shelf life replaces the Food Code's 7 days and is counted the same way, day 1
+  // the packed day: 10 days from Monday 2 March 2026 is Wednesday 11 March.
+  // source: FDA Food Code 2022, 3-501.17(A), "the day of preparation shall be counted as Day 1"
+  it('should date a raw product by its validated shelf life, and keep a frozen one frozen', () => {
+    const belly = formula('quillmoor-belly');
+    assert.equal(belly.kind, 'cure');
+    const validated = {
+      ...belly,
+      label: {
+        storage: 'frozen' as const,
+        ready_to_eat: false,
+        shelf_life: { days: 10, basis: 'challenge study, Quillmoor lab report 3, 2026' },
+      },
+    };
+    const label = productLabel({
+      formula: validated,
+      result: presentResult(
+        calculate(validated, { meat: dec('5000'), start: '2026-02-20' }),
+        'metric',
+      ),
+      catalogue,
+      lotCode: '260302-QB-01',
+      packedOn: '2026-03-02',
+      kitchen: { name: 'Quillmoor Smokehouse' },
+    });
+    assert.equal(label.useBy.mark?.useBy, '2026-03-11');
+    assert.equal(label.useBy.mark?.basis, 'validated');
+    assert.equal(label.useBy.mark?.source, 'challenge study, Quillmoor lab report 3, 2026');
+    // source: 9 CFR 381.125(a), "Keep Frozen" (read, 2019 CFR); 317.2(k), from memory
+    assert.equal(label.handling, 'Keep frozen');
+    assert.equal(label.safeHandling.required, true);
+  });
+
+  // A baked bun kept at room temperature: no keep statement, and no date mark (the Food Code's is
+  // for refrigerated food, FDA Food Code 2022, 3-501.17(A)).
+  it('should print no keep statement and no use-by day on a shelf-stable bun', () => {
+    const label = labelOf('pit-bun', { pieces: 24 });
+    assert.equal(label.handling, undefined);
+    assert.equal(label.useBy.mark, undefined);
+    assert.match(label.useBy.none ?? '', /shelf-stable/);
+    assert.equal(label.instructions, undefined);
+  });
+
+  // The formula's word wins over the controls: a smoked product the kitchen says is not ready to
+  // eat carries the instructions. source: 9 CFR 381.125(b), products "that have not undergone
+  // other processing that would render them ready-to-eat" (read, 2019 CFR)
+  it('should ask safe handling of a smoked meat its formula says is not ready to eat', () => {
+    const ham = formula('ham-pump');
+    assert.equal(ham.kind, 'cure');
+    const raw = { ...ham, label: { storage: 'refrigerated' as const, ready_to_eat: false } };
+    assert.equal(safeHandling(raw).required, true);
   });
 });

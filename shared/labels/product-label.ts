@@ -4,19 +4,19 @@ import type { Allergen, Formula } from '../formula/formula-types.ts';
 import { materialLines } from '../catalogue/formula-lines.ts';
 import { linkLines } from '../catalogue/link-catalogue.ts';
 import type { PresentedResult } from '../presentation/presented-result.ts';
+import type { ProductLabelView } from '../api/product-label-view.ts';
 import { allergenStatement } from './allergen-statement.ts';
-import { dateMark, type DateMark } from './date-mark.ts';
 import { ingredientStatement, type IngredientStatement } from './ingredient-statement.ts';
 import { labelIngredients } from './label-ingredients.ts';
+import { keepStatement, useByOf, type KeepStatement, type UseBy } from './label-keeping.ts';
 import { netWeight, type NetWeight } from './net-weight.ts';
-
-/**
- * The handling statement of a perishable product.
- * source (from memory, re-check against eCFR): 9 CFR 317.2(k), perishable meat products "shall
- * be labeled with the statement 'Keep Refrigerated'" or a like statement; 9 CFR 381.125(a) for
- * poultry.
- */
-export const KEEP_REFRIGERATED = 'Keep refrigerated';
+import { safeHandling, type SafeHandling } from './safe-handling.ts';
+import {
+  SHI_HEADING,
+  SHI_RATIONALE,
+  SHI_STATEMENTS,
+  type ShiStatement,
+} from './safe-handling-text.ts';
 
 /** What a product label is worked out from. */
 export interface ProductLabelInput {
@@ -34,11 +34,11 @@ export interface ProductLabelInput {
   readonly kitchen: { readonly name: string; readonly address?: string };
 }
 
-/** Whether a product needs the safe handling instructions of raw meat and poultry, and why. */
-export interface SafeHandling {
-  readonly required: boolean;
-  /** Why, in words for the record. */
-  readonly reason: string;
+/** The safe handling instructions as a label prints them (shared/labels/safe-handling-text.ts). */
+export interface SafeHandlingInstructions {
+  readonly heading: string;
+  readonly rationale: string;
+  readonly statements: readonly ShiStatement[];
 }
 
 /** The content of a product label, every text worked out; no layout. */
@@ -51,9 +51,13 @@ export interface ProductLabel {
   readonly net?: NetWeight;
   readonly lotCode: string;
   readonly packedOn: string;
-  readonly useBy: DateMark;
-  readonly handling: typeof KEEP_REFRIGERATED;
+  /** The use-by day, or why there is none. */
+  readonly useBy: UseBy;
+  /** "Keep refrigerated" or "Keep frozen"; none for a shelf-stable product or one not set. */
+  readonly handling?: KeepStatement;
   readonly safeHandling: SafeHandling;
+  /** The safe handling instructions word for word, when they are required. */
+  readonly instructions?: SafeHandlingInstructions;
   readonly kitchen: ProductLabelInput['kitchen'];
 }
 
@@ -74,47 +78,14 @@ function labelAllergens(
   return [...declared, ...items];
 }
 
-/** The process-control rules of an in-plant lethality step (FSIS Appendix A): a cooked product. */
-const LETHALITY_RULE = /^fsis-lethality-/;
-
-/**
- * Whether a batch of a formula is raw or not ready to eat meat or poultry, which must carry the
- * safe handling instructions: a cure or a blend of a named species whose controls have no
- * in-plant lethality step (FSIS Appendix A). A burger grind is raw; a cold-smoked bacon is cured
- * but not cooked; a ham cooked to a lethality control is ready to eat. A sauce or a dough is not
- * a meat or poultry product. A formula's lethality control is taken as the product's cook before
- * packing: common practice, no source.
- * source: FSIS Directive 10240.4, Resource 1 ("Chart of ready-to-eat vs not ready-to-eat
- * products"): a product containing meat or poultry "which has not received an adequate lethality
- * treatment for pathogens (i.e., raw or partially cooked product)" is not ready to eat, and "Use
- * of Safe Handling Instruction (SHI) labeling required"; 9 CFR 317.2(l) (meat) and 381.125(b)
- * (poultry).
- */
-export function safeHandling(formula: Formula): SafeHandling {
-  const meat = (formula.kind === 'cure' || formula.kind === 'blend') && formula.species;
-  if (!meat) return { required: false, reason: 'not a meat or poultry product' };
-  const cooked = (formula.controls ?? []).some((control) =>
-    LETHALITY_RULE.test(control.rule ?? ''),
-  );
-  return cooked
-    ? { required: false, reason: 'cooked to a lethality control before packing: ready to eat' }
-    : {
-        required: true,
-        reason:
-          formula.kind === 'blend'
-            ? 'raw meat or poultry (9 CFR 317.2(l), 381.125(b))'
-            : 'cured but not cooked to a lethality control: not ready to eat (9 CFR 317.2(l), 381.125(b))',
-      };
-}
-
 /**
  * The content of a product label for a recorded batch: the formula's title as the product's
  * name, the ingredient statement from the batch's weights and the catalogue's names, the
  * "Contains:" statement, the net weight in US and metric units, the lot code, the packed-on day
- * and the use-by day by the Food Code's date marking (7 days, the packed day counted as day 1),
- * "Keep refrigerated", whether the safe handling instructions are required, and the kitchen.
- * The formula schema has no validated shelf life yet, so the use-by day is always the Food
- * Code's.
+ * the use-by day (the formula's validated shelf life, or the Food Code's 7 days for a ready-to-eat
+ * refrigerated product, or none: label-keeping.ts), "Keep refrigerated" or "Keep frozen" when
+ * the formula says it is so stored, the safe handling instructions when the product is raw or
+ * not-ready-to-eat meat or poultry, and the kitchen.
  * @throws RangeError for a packed-on day that is not a calendar date, or a net weight of nothing
  */
 export function productLabel(input: ProductLabelInput): ProductLabel {
@@ -122,6 +93,8 @@ export function productLabel(input: ProductLabelInput): ProductLabel {
     labelIngredients(input.formula, input.result, input.catalogue),
   );
   const contains = allergenStatement(labelAllergens(input.formula, input.catalogue));
+  const keeping = input.formula.kind === 'assembly' ? undefined : input.formula.label;
+  const shi = safeHandling(input.formula);
   return {
     product: input.formula.title,
     ingredients,
@@ -129,9 +102,31 @@ export function productLabel(input: ProductLabelInput): ProductLabel {
     net: input.netGrams === undefined ? undefined : netWeight(input.netGrams),
     lotCode: input.lotCode,
     packedOn: input.packedOn,
-    useBy: dateMark({ preparedOn: input.packedOn }),
-    handling: KEEP_REFRIGERATED,
-    safeHandling: safeHandling(input.formula),
+    useBy: useByOf(keeping, input.packedOn),
+    handling: keepStatement(keeping?.storage),
+    safeHandling: shi,
+    instructions: shi.required
+      ? { heading: SHI_HEADING, rationale: SHI_RATIONALE, statements: SHI_STATEMENTS }
+      : undefined,
     kitchen: input.kitchen,
+  };
+}
+
+/** A label's content as the API sends it (shared/api/product-label-view.ts). */
+export function productLabelView(label: ProductLabel): ProductLabelView {
+  return {
+    product: label.product,
+    ingredients: label.ingredients.text,
+    contains: label.contains,
+    net: label.net?.text,
+    lotCode: label.lotCode,
+    packedOn: label.packedOn,
+    useBy: label.useBy.mark
+      ? { day: label.useBy.mark.useBy, source: label.useBy.mark.source }
+      : { none: label.useBy.none ?? '' },
+    handling: label.handling,
+    safeHandling: label.safeHandling,
+    instructions: label.instructions,
+    kitchen: label.kitchen,
   };
 }

@@ -30,8 +30,12 @@ describe('GET /api/batches/:lot/label.pdf', () => {
     assert.match(text.all, /Ingredients: pork, sea salt, brown sugar, black pepper, curing salt/);
     // 12 oz = 340.19 g, rounded down. source: NIST SP 811 (2008), Appendix B.8
     assert.match(text.all, /Net wt 12 oz \(340 g\)/);
-    // Use by day 7 from 2 March. source: FDA Food Code 2022, 3-501.17(A)
-    assert.match(text.all, /Use by 8 Mar 2026/);
+    // The demo bacon is cold-smoked and sold raw: no Food Code use-by day (3-501.17 is for
+    // ready-to-eat food), and the safe handling instructions. source: FDA Food Code 2022,
+    // 3-501.17(A); 9 CFR 317.2(l) and 381.125(b)
+    assert.doesNotMatch(text.all, /Use by/);
+    assert.match(text.all, /Safe Handling Instructions This product was prepared from inspected/);
+    assert.match(text.all, /KEEP REFRIGERATED/);
     assert.match(text.all, /Quillmoor Smokehouse 14 Kiln Lane, Quillmoor/);
 
     const small = await fetchLabel(server, `/api/batches/${lot}/label.pdf?size=2x1`);
@@ -39,6 +43,29 @@ describe('GET /api/batches/:lot/label.pdf', () => {
     const smallText = await pdfText(small.bytes);
     assert.deepEqual(smallText.sizes, [[144, 72]]);
     assert.ok(smallText.all.includes(`Lot ${lot}`), smallText.all);
+
+    // A letter sheet of 40 small labels, 8.5 × 11 in (from memory; label-pdf.ts's own grid).
+    const sheet = await fetchLabel(server, `/api/batches/${lot}/label.pdf?size=letter`);
+    assert.equal(sheet.status, 200);
+    const sheetText = await pdfText(sheet.bytes);
+    assert.deepEqual(sheetText.sizes, [[612, 792]]);
+    assert.equal(sheetText.all.split(`Lot ${lot}`).length - 1, 40);
+  });
+
+  it('should give the label’s content for the preview, the net weight optional', async (t) => {
+    const server = await startTestServer(t);
+    const lot = await recordBatch(server.as('tobin'), BELLY);
+    const preview = await server.as('rosa').get(`/api/batches/${lot}/label?packed=2026-03-02`);
+    assert.equal(preview.status, 200);
+    const view = preview.json;
+    assert.equal(view.lotCode, lot);
+    assert.equal(view.net, undefined);
+    assert.match(view.ingredients, /^Ingredients: pork, sea salt/);
+    assert.match(view.useBy.none, /not ready to eat/);
+    assert.equal(view.handling, 'Keep refrigerated');
+    // source: 9 CFR 381.125(b)(2) (read, 2019 CFR), the heading
+    assert.equal(view.instructions.heading, 'Safe Handling Instructions');
+    assert.equal(view.instructions.statements.length, 4);
   });
 
   it('should refuse a label it cannot print, saying why', async (t) => {

@@ -89,6 +89,10 @@ export const EXTRA_ROUTES: readonly RouteCase[] = [
     const recorded = await setupCall(fx, { method: 'POST', path: '/api/batches', body: BELLY });
     return { path: `/api/batches/${recorded.batch.lotCode}/label.pdf?size=4x6&net=340%20g` };
   }),
+  extra('GET', '/api/batches/:lot/label', ALL, async (fx) => {
+    const recorded = await setupCall(fx, { method: 'POST', path: '/api/batches', body: BELLY });
+    return { path: `/api/batches/${recorded.batch.lotCode}/label` };
+  }),
   extra('GET', '/api/people/me/reminders', ALL, async () => ({ path: '/api/people/me/reminders' })),
   extra('PUT', '/api/people/me/reminders', ALL, async () => ({
     path: '/api/people/me/reminders',

@@ -8,6 +8,8 @@ export interface PdfText {
   readonly title: string;
   /** Every page's text, joined. */
   readonly all: string;
+  /** Every piece of text as the reader found it, with its type size in points. */
+  readonly items: readonly { readonly text: string; readonly size: number }[];
 }
 
 /**
@@ -22,6 +24,7 @@ export async function pdfText(bytes: Uint8Array): Promise<PdfText> {
     isEvalSupported: false,
   }).promise;
   const pages: string[] = [];
+  const items: { text: string; size: number }[] = [];
   const sizes: [number, number][] = [];
   for (let i = 1; i <= document.numPages; i++) {
     const page = await document.getPage(i);
@@ -29,6 +32,10 @@ export async function pdfText(bytes: Uint8Array): Promise<PdfText> {
     sizes.push([Math.round(width), Math.round(height)]);
     const content = await page.getTextContent();
     const words = content.items.map((item) => ('str' in item ? item.str : '')).filter(Boolean);
+    for (const item of content.items)
+      if ('str' in item && item.str.trim())
+        // The text matrix's vertical scale is the type size of text set upright.
+        items.push({ text: item.str, size: Math.abs(item.transform[3] as number) });
     // Runs of spaces collapse, so a test matches "10.7 g" however the writer split the line.
     pages.push(words.join(' ').replace(/\s+/g, ' '));
   }
@@ -39,5 +46,6 @@ export async function pdfText(bytes: Uint8Array): Promise<PdfText> {
     sizes,
     title: String((info as { Title?: string }).Title ?? ''),
     all: pages.join('\n'),
+    items,
   };
 }
