@@ -1,0 +1,107 @@
+import { HttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
+import { MatAnchor } from '@angular/material/button';
+import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { MatOption, MatSelect } from '@angular/material/select';
+import { catchError, combineLatest, debounceTime, map, of, startWith, switchMap } from 'rxjs';
+import type { ProductLabelView } from '../../../../shared/api/product-label-view.ts';
+import type { ShiPicture } from '../../../../shared/labels/safe-handling-text.ts';
+import { messageOf } from '../../core/api/message-of';
+import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import {
+  LABEL_SIZE_CHOICES,
+  labelContentUrl,
+  labelPdfUrl,
+  labelProblem,
+  type LabelAsk,
+  type LabelSizeChoice,
+} from './label-request';
+
+/** The preview as read: the label's content, or why it could not be worked out. */
+type Preview = { readonly view: ProductLabelView } | { readonly error: string };
+
+/** The Material Symbols standing for the pictures the printed label draws of its own. */
+const PICTURE_ICONS: Readonly<Record<ShiPicture, string>> = {
+  refrigerator: 'kitchen',
+  hands: 'wash',
+  skillet: 'skillet',
+  thermometer: 'thermometer',
+};
+
+/**
+ * A batch's product label: its content as it will print, worked out by the API from the batch's
+ * formula and recorded weights, with a size, the package's net weight and the packed-on day to
+ * choose, and "Print label" opening the PDF. The caution that label approval is the kitchen's to
+ * follow stands above it.
+ */
+@Component({
+  selector: 'app-label-preview',
+  imports: [
+    ReactiveFormsModule,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatInput,
+    MatSelect,
+    MatOption,
+    MatAnchor,
+    MatIcon,
+    IsoDayPipe,
+  ],
+  templateUrl: './label-preview.html',
+  styleUrl: './label-preview.css',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class LabelPreview {
+  private readonly http = inject(HttpClient);
+
+  /** The batch's lot code. */
+  readonly lot = input.required<string>();
+
+  protected readonly sizes = LABEL_SIZE_CHOICES;
+  protected readonly icons = PICTURE_ICONS;
+  protected readonly form = new FormGroup({
+    size: new FormControl<LabelSizeChoice>('4x6', { nonNullable: true }),
+    net: new FormControl('', { nonNullable: true }),
+    packed: new FormControl('', { nonNullable: true }),
+  });
+  private readonly ask = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), {
+    initialValue: this.form.getRawValue() as LabelAsk,
+  });
+
+  protected readonly small = computed(() => this.ask().size !== '4x6');
+  protected readonly problem = computed(() => labelProblem(this.ask()));
+  protected readonly pdfUrl = computed(() => labelPdfUrl(this.lot(), this.ask()));
+
+  /** The content, asked for again a moment after the net weight or the day changes. */
+  protected readonly preview = toSignal(
+    combineLatest([
+      toObservable(this.lot),
+      this.form.valueChanges.pipe(
+        startWith(null),
+        map(() => this.form.getRawValue()),
+        debounceTime(300),
+      ),
+    ]).pipe(
+      switchMap(([lot, ask]) =>
+        this.http.get<ProductLabelView>(labelContentUrl(lot, ask)).pipe(
+          map((view): Preview => ({ view })),
+          catchError((error: unknown) => of<Preview>({ error: messageOf(error) })),
+        ),
+      ),
+    ),
+  );
+
+  protected readonly view = computed(() => {
+    const preview = this.preview();
+    return preview && 'view' in preview ? preview.view : undefined;
+  });
+  protected readonly error = computed(() => {
+    const preview = this.preview();
+    return preview && 'error' in preview ? preview.error : undefined;
+  });
+}

@@ -1,0 +1,46 @@
+/** The sizes a product label prints at, as the API names them, with a cook's words for each. */
+export const LABEL_SIZE_CHOICES = [
+  { size: '4x6', words: '4 × 6 in, the full label' },
+  { size: '2x1', words: '2 × 1 in, lot and days' },
+  { size: 'letter', words: 'Letter sheet, 40 small labels' },
+  { size: 'a4', words: 'A4 sheet, 33 small labels' },
+] as const;
+
+/** One of the label sizes. */
+export type LabelSizeChoice = (typeof LABEL_SIZE_CHOICES)[number]['size'];
+
+/** What a label is asked for with: its size, the package's net weight and the packed-on day. */
+export interface LabelAsk {
+  readonly size: LabelSizeChoice;
+  /** "340 g", "12 oz"; empty for none. */
+  readonly net: string;
+  /** YYYY-MM-DD; empty for today. */
+  readonly packed: string;
+}
+
+/** The query of a label request: only what is given. */
+function query(ask: LabelAsk, withSize: boolean): string {
+  const params = new URLSearchParams();
+  if (withSize) params.set('size', ask.size);
+  if (ask.net.trim()) params.set('net', ask.net.trim());
+  if (ask.packed) params.set('packed', ask.packed);
+  const text = params.toString();
+  return text ? `?${text}` : '';
+}
+
+/** The address of a batch's label content, for the preview. */
+export function labelContentUrl(lot: string, ask: LabelAsk): string {
+  return `/api/batches/${encodeURIComponent(lot)}/label${query(ask, false)}`;
+}
+
+/** The address of a batch's label PDF at the size asked for. */
+export function labelPdfUrl(lot: string, ask: LabelAsk): string {
+  return `/api/batches/${encodeURIComponent(lot)}/label.pdf${query(ask, true)}`;
+}
+
+/** What stops the label printing, in words, or null: a 4 × 6 label declares the net weight. */
+export function labelProblem(ask: LabelAsk): string | null {
+  if (ask.size === '4x6' && !ask.net.trim())
+    return 'Give the net weight of the package: a 4 × 6 label declares it.';
+  return null;
+}

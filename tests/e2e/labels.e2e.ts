@@ -1,0 +1,123 @@
+import assert from 'node:assert/strict';
+import { readFileSync } from 'node:fs';
+import { describe, it } from 'node:test';
+import { pdfText } from '../helpers/pdf-text.ts';
+import type { Page } from 'playwright-core';
+import { collectConsoleErrors, startConsole, ARTIFACTS } from './browser.ts';
+import { shootAtWidths } from './screens.ts';
+import path from 'node:path';
+
+const TODAY = new Date().toISOString().slice(0, 10);
+
+/**
+ * The house sauce's statement worked by hand from formulas/house-sauce.yaml: mayonnaise 100 %,
+ * chili sauce 25 %, dill pickle brine 8 %, Worcestershire sauce 3 %, smoked paprika 1.5 %,
+ * granulated garlic 0.8 %, fine black pepper 0.5 % of the mayonnaise — heaviest first, each named
+ * as formulas/catalogue.yaml labels it, a compound ingredient's own ingredients in parentheses.
+ * source: 21 CFR 101.4(a)(1) and (b)(2)(i); 9 CFR 317.2(f), from memory
+ */
+const STATEMENT =
+  'Ingredients: mayonnaise (soybean oil, water, egg yolks, distilled vinegar, salt, sugar, ' +
+  'lemon juice concentrate), chili sauce (tomato concentrate, sugar, distilled vinegar, salt, ' +
+  'onion, red pepper, spices), dill pickle brine (water, distilled vinegar, salt, dill, garlic), ' +
+  'Worcestershire sauce (distilled vinegar, molasses, water, sugar, onions, anchovies, salt, ' +
+  'garlic, cloves, tamarind extract, natural flavorings), smoked paprika, dehydrated garlic, ' +
+  'black pepper';
+
+/** The label section alone at every width, to look at closely (the page shots are long). */
+async function shootSection(page: Page, name: string): Promise<void> {
+  for (const width of [1280, 820, 390]) {
+    await page.setViewportSize({ width, height: 900 });
+    await page
+      .locator('section.product-label')
+      .screenshot({ path: path.join(ARTIFACTS, `${name}-section-${width}.png`) });
+  }
+  await page.setViewportSize({ width: 1280, height: 860 });
+}
+
+describe('product labels in the console', () => {
+  it('should preview a batch’s label, print it and read the PDF back', async (t) => {
+    const session = await startConsole(t);
+    const recorded = await session.server.as('tobin').post('/api/batches', {
+      formula: 'house-sauce',
+      batch: { total: '2 kg', start: TODAY },
+    });
+    assert.equal(recorded.status, 201, recorded.text);
+    const lot = recorded.json.batch.lotCode as string;
+
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    await page.getByTestId('label-caution').waitFor();
+    assert.match(await page.getByTestId('label-caution').innerText(), /FSIS label approval/);
+
+    await page.getByTestId('label-net').fill('250 g');
+    await page.getByTestId('label-packed').fill('2026-03-02');
+    // Ready to eat and held cold: use by day 7, the packed day counted as day 1.
+    // source: FDA Food Code 2022, 3-501.17(A)
+    await page.getByTestId('label-use-by').filter({ hasText: '8 Mar 2026' }).waitFor();
+    const preview = page.getByTestId('label-preview');
+    assert.equal((await page.getByTestId('label-ingredients').innerText()).trim(), STATEMENT);
+    // source: 21 U.S.C. 343(w)(1)(A) and (w)(2): "Contains" and the species of fish
+    assert.equal(
+      (await page.getByTestId('label-contains').innerText()).trim(),
+      'Contains: egg, fish (anchovy)',
+    );
+    assert.equal(await page.getByTestId('label-shi').count(), 0);
+    await preview.scrollIntoViewIfNeeded();
+    await shootAtWidths(session, page, 'label-preview');
+    await shootSection(page, 'label-preview');
+
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByTestId('label-print').click(),
+    ]);
+    assert.equal(download.suggestedFilename(), `${lot}-label-4x6.pdf`);
+    const text = await pdfText(readFileSync(await download.path()));
+    // 4 × 6 in at 72 points to the inch. source: ISO 32000-1:2008, 8.3.2.3
+    assert.deepEqual(text.sizes, [[288, 432]]);
+    assert.ok(text.all.includes(STATEMENT), text.all);
+    assert.ok(text.all.includes('Contains: egg, fish (anchovy)'), text.all);
+    assert.match(text.all, /Use by 8 Mar 2026/);
+    // 250 g is 8.8 oz, rounded down. source: NIST SP 811 (2008), Appendix B.8
+    assert.match(text.all, /Net wt 8\.8 oz \(250 g\)/);
+    assert.deepEqual(errors, []);
+  });
+
+  it('should show the raw bacon’s safe handling instructions and no use-by day', async (t) => {
+    const session = await startConsole(t);
+    const recorded = await session.server.as('tobin').post('/api/batches', {
+      formula: 'quillmoor-belly',
+      batch: { meat: '4.26kg', thickness: '4cm', start: TODAY },
+    });
+    assert.equal(recorded.status, 201, recorded.text);
+    const lot = recorded.json.batch.lotCode as string;
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    const shi = page.getByTestId('label-shi');
+    await shi.waitFor();
+    // source: 9 CFR 381.125(b)(2)–(3) (read, 2019 CFR and 1-1-06 edition); 317.2(l) for meat
+    assert.match(await shi.innerText(), /^Safe Handling Instructions\s+This product was prepared/);
+    assert.equal(await page.getByTestId('label-use-by').count(), 0);
+    assert.match(await page.getByTestId('label-notes').innerText(), /No use-by day: not ready/);
+    await shootSection(page, 'label-preview-raw-4x6');
+    // Without a net weight, the 4 × 6 label is not offered; the small sheet is.
+    assert.match(await page.getByTestId('label-problem').innerText(), /net weight/);
+    await page.getByTestId('label-size').click();
+    await page.getByRole('option', { name: 'Letter sheet, 40 small labels' }).click();
+    // The list of sizes closes with an animation; the screenshots wait for it to go.
+    await page.getByRole('listbox').waitFor({ state: 'detached' });
+    await page.getByTestId('label-print').waitFor();
+    await shootAtWidths(session, page, 'label-preview-raw');
+    await shootSection(page, 'label-preview-raw');
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByTestId('label-print').click(),
+    ]);
+    const text = await pdfText(readFileSync(await download.path()));
+    assert.deepEqual(text.sizes, [[612, 792]]);
+    assert.equal(text.all.split(`Lot ${lot}`).length - 1, 40);
+    assert.deepEqual(errors, []);
+  });
+});
