@@ -48,7 +48,11 @@ function line(layout: SheetLayout, text: string, style: TextStyle, after = 2): v
   layout.y += layout.draw(text, style, layout.left, layout.y, layout.width) + after;
 }
 
-/** The kitchen's name and address, at the foot of the label; returns where it starts. */
+/**
+ * The kitchen's name and address, at the foot of the label; returns where it starts.
+ * source: 9 CFR 317.2(c)(3), "The name and place of business of the manufacturer, packer, or
+ * distributor for whom the product is prepared" (read at foodcompliance.com)
+ */
 function kitchenFoot(layout: SheetLayout, label: ProductLabel, bottom: number): number {
   const lines = [
     { text: label.kitchen.name, style: { size: 8.5, weight: 'semibold' } as const },
@@ -67,7 +71,15 @@ function kitchenFoot(layout: SheetLayout, label: ProductLabel, bottom: number): 
 /** One line of the block beside the QR code: its text and how it is set. */
 type Fact = readonly [string, TextStyle];
 
-/** The net weight, the lot, the packed-on and use-by days, each on a line of its own. */
+/**
+ * The net weight, the lot, the packed-on and use-by days, each on a line of its own. Where each
+ * fixed word comes from: "Net wt" — 9 CFR 317.2(h) and 21 CFR 101.105(a), from memory (see
+ * shared/labels/net-weight.ts); "Use by" — the Food Code asks for "the date or day by which the
+ * food shall be consumed on the premises, sold, or discarded" (FDA Food Code 2022, 3-501.17(A),
+ * read as quoted in shared/labels/date-mark.ts) and names no words for the label, so "Use by" is
+ * common practice, no source; "Lot" and "Packed on" — common practice, no source (a lot code and
+ * a packing date are what a recall asks for, FSIS Directive 8080.1, from memory).
+ */
 function factsOf(label: ProductLabel): Fact[] {
   return [
     ...(label.net ? [[label.net.text, { size: 13, weight: 'semibold' }] as Fact] : []),
