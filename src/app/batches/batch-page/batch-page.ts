@@ -57,7 +57,7 @@ import { notesInWords } from './notes-words';
   ],
   providers: [BatchStore, ProcessStore],
   templateUrl: './batch-page.html',
-  styleUrl: './batch-page.css',
+  styleUrls: ['../../ui/verdict.css', './batch-page.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export default class BatchPage {
