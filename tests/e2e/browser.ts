@@ -104,6 +104,7 @@ export async function startConsole(
       return page;
     },
     screenshot: async (page, name) => {
+      await transitionsDone(page);
       await page.screenshot({ path: path.join(ARTIFACTS, `${name}.png`), fullPage: true });
     },
   };
@@ -120,4 +121,21 @@ export async function dialogSettled(page: Page): Promise<void> {
     const last = dialogs[dialogs.length - 1];
     return last !== undefined && last.contains(document.activeElement);
   });
+}
+
+/**
+ * Waits until no CSS transition is running: a resize below the tablet width slides the navigation
+ * shut, and a picture taken on its way shows it half drawn over the screen.
+ */
+export async function transitionsDone(page: Page): Promise<void> {
+  // A resize is answered a frame or two later (the layout's media queries, then the drawer).
+  await page.evaluate(
+    () =>
+      new Promise<void>((done) => requestAnimationFrame(() => requestAnimationFrame(() => done()))),
+  );
+  await page.waitForFunction(() =>
+    document
+      .getAnimations()
+      .every((a) => !(a instanceof CSSTransition) || a.playState !== 'running'),
+  );
 }

@@ -10,7 +10,7 @@ import type { Page } from 'playwright-core';
 import { REPO_ROOT } from '../helpers/run-larder.ts';
 import type { DemoUser } from '../helpers/test-server.ts';
 import { accessibilityProblems, describeProblems } from './accessibility.ts';
-import { ARTIFACTS, startConsole, type ConsoleSession } from './browser.ts';
+import { ARTIFACTS, startConsole, transitionsDone, type ConsoleSession } from './browser.ts';
 
 /** A desk screen, a tablet held upright and a phone (CSS px). common practice, no source */
 export const SIZES = [
@@ -73,12 +73,7 @@ export function declaredRoutePaths(): string[] {
 async function settle(page: Page): Promise<void> {
   await page.waitForLoadState('networkidle');
   await page.waitForTimeout(250);
-  // A resize below the tablet width slides the navigation shut: picture it shut, not on its way.
-  await page.waitForFunction(() =>
-    document
-      .getAnimations()
-      .every((a) => !(a instanceof CSSTransition) || a.playState !== 'running'),
-  );
+  await transitionsDone(page);
 }
 
 /** Visits a screen, then at every size saves a screenshot and notes the problems axe finds. */

@@ -14,7 +14,7 @@ import type { LogRow } from './log-row';
   selector: 'app-batch-log-cards',
   imports: [RouterLink, MatIcon, BatchStatusChip, IsoDayPipe],
   templateUrl: './batch-log-cards.html',
-  styleUrls: ['./log-marks.css', './batch-log-cards.css'],
+  styleUrls: ['../../ui/verdict.css', './log-marks.css', './batch-log-cards.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class BatchLogCards {

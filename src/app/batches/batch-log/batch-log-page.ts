@@ -105,7 +105,7 @@ const STACKED = '(max-width: 1229.98px)';
     NitriteChart,
   ],
   templateUrl: './batch-log-page.html',
-  styleUrls: ['./log-marks.css', './batch-log-page.css'],
+  styleUrls: ['../../ui/verdict.css', './log-marks.css', './batch-log-page.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export default class BatchLogPage {

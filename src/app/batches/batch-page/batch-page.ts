@@ -59,7 +59,7 @@ import { LabelPreview } from '../label-preview/label-preview';
   ],
   providers: [BatchStore, ProcessStore],
   templateUrl: './batch-page.html',
-  styleUrl: './batch-page.css',
+  styleUrls: ['../../ui/verdict.css', './batch-page.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export default class BatchPage {
