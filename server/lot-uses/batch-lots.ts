@@ -244,7 +244,10 @@ export async function batchLots(deps: LotUsesDeps, lot: string): Promise<BatchLo
     lotCode: batch.lotCode,
     usedOn: batch.startedOn,
     uses: uses.map(recordedView),
-    suggested: uses.length ? [] : await suggestionFor(deps, batch, of),
+    // Once lots are recorded nothing is suggested, but what is on hand stays, to change them by.
+    suggested: (await suggestionFor(deps, batch, of)).map((item) =>
+      uses.length ? { ...item, takes: [], shortfall: null } : item,
+    ),
     notInCatalogue: of.needs.unlinked.map((line) => ({
       name: line.name,
       grams: line.grams.toString(),

@@ -24,7 +24,8 @@ interface NewUse {
 
 /** A pick that cannot be recorded: 422 with a stable code, naming the pick at fault. */
 function refused(code: string, field: string, message: string): AppError {
-  return new AppError(422, code, `${field}: ${message}`, [{ field, message }]);
+  // The words alone, as a cook reads them; the field is in the details.
+  return new AppError(422, code, message, [{ field, message }]);
 }
 
 /**
@@ -45,7 +46,11 @@ export async function recordLotUses(
   by: ChangeOptions,
 ): Promise<BatchLots> {
   if (Boolean(request.accept) === Boolean(request.picks))
-    throw refused('bad-lots', '(body)', 'either accept the suggested lots or give picks, not both');
+    throw refused(
+      'bad-lots',
+      '(body)',
+      'either accept the suggested lots or give the lots used, not both',
+    );
   const at = by.at ?? new Date().toISOString();
   const seen = await recordedBatch(deps.db, lot);
   const formula = await formulaOf(deps.history, seen);

@@ -52,7 +52,7 @@ export interface SuggestedItem {
   readonly need: string | null;
   /** Whether the need is what was weighed, not the calculation. */
   readonly weighed: boolean;
-  /** The lots suggested, in the order to use them. */
+  /** The lots suggested, in the order to use them; none once lots are recorded. */
   readonly takes: readonly LotUseView[];
   /** What the lots on hand cannot cover, base measure; null when the need is not known. */
   readonly shortfall: string | null;
@@ -69,7 +69,7 @@ export interface BatchLots {
   readonly usedOn: string;
   /** The lots recorded as used; empty until recorded. */
   readonly uses: readonly LotUseView[];
-  /** The suggestion, per item; empty once lots are recorded. */
+  /** What the batch needs, per item, with the lots on hand; the suggested takes only until lots are recorded. */
   readonly suggested: readonly SuggestedItem[];
   /** Lines of the batch with no catalogue item: they cannot draw on stock. */
   readonly notInCatalogue: readonly { readonly name: string; readonly grams: string }[];

@@ -33,6 +33,7 @@ import { FORMULA_KIND_WORDS as KIND_WORDS } from '../formula-kind-words';
 import { TurnList } from './turn-list';
 import { FormulaOptions } from '../formula-options';
 import { notesInWords } from './notes-words';
+import { MadeFrom } from '../made-from/made-from';
 
 /**
  * One batch: its lot code, formula and revision, status and the history of every change, the
@@ -54,6 +55,7 @@ import { notesInWords } from './notes-words';
     TurnList,
     HoldBanner,
     ProcessSection,
+    MadeFrom,
   ],
   providers: [BatchStore, ProcessStore],
   templateUrl: './batch-page.html',
