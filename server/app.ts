@@ -33,6 +33,7 @@ import { reportsRouter } from './reports/reports-router.ts';
 import { startRouter } from './batches/start-router.ts';
 import { refusalsRouter } from './process/refusals-router.ts';
 import { batchWeighingsRouter, weighingsRouter } from './process/weighings-router.ts';
+import { lotUsesRouter } from './lot-uses/lot-uses-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
 const JSON_LIMIT = '512kb';
@@ -78,6 +79,7 @@ export function createApp(context: AppContext): Express {
   api.use('/formulas', formulasRouter(context));
   api.use('/batches', batchProcessRouter(context), batchesRouter(context));
   api.use('/batches', batchWeighingsRouter(context), startRouter(context));
+  api.use('/batches', lotUsesRouter(context));
   api.use('/weighings', weighingsRouter(context));
   api.use('/refusals', refusalsRouter(context));
   api.use('/readings', readingsRouter(context));

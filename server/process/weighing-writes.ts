@@ -57,7 +57,7 @@ function gramsOf(text: string, field: string): Decimal {
 }
 
 /** The formula a batch was calculated from, at its revision. */
-async function formulaOf(history: FormulaHistory, batch: RecordedBatch): Promise<Formula> {
+export async function formulaOf(history: FormulaHistory, batch: RecordedBatch): Promise<Formula> {
   const at = await formulaAtRevision(history, batch.formulaId, batch.formulaRevision);
   if (!at)
     throw conflict(

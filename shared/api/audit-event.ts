@@ -39,6 +39,7 @@ export const AUDIT_ACTIONS = [
   'report-produce',
   'plan-make',
   'plan-record',
+  'batch-lots',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

@@ -87,6 +87,17 @@ describe('linking formula lines to the catalogue', () => {
     ]);
   });
 
+  it("should refuse a cure's meat item the catalogue does not have", () => {
+    const formula = { ...cure(CURE), meat_item: 'pork-bely' } as Formula;
+    assert.deepEqual(catalogueProblems(formula, catalogue()), [
+      {
+        path: ['meat_item'],
+        severity: 'error',
+        message: 'there is no item "pork-bely" in the catalogue (formulas/catalogue.yaml)',
+      },
+    ]);
+  });
+
   it('should refuse an item key the catalogue does not have, with the nearest key', () => {
     const formula = cure(CURE.replace('curing-salt-1', 'curing-salt-2'));
     assert.deepEqual(catalogueProblems(formula, catalogue()), [

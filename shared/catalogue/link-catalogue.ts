@@ -41,46 +41,55 @@ export function linkLines(formula: Formula, catalogue: Catalogue): LinkedLine[] 
 }
 
 /**
- * What the catalogue says of a formula: an `item:` that names no item is an error; a line with
+ * What the catalogue says of a formula: an `item:` (or a cure's `meat_item:`) that names no item
+ * is an error; a line with
  * no item is a warning (a kitchen adopts the catalogue gradually); a line whose nitrite or
  * nitrate differs from its item's is an error with both places, since one of them is wrong; an
  * allergen of the item the line does not declare is a warning.
  */
 export function catalogueProblems(formula: Formula, linked: LinkCatalogue): ContentProblem[] {
   const { items } = linked.catalogue;
-  return linkLines(formula, linked.catalogue).flatMap(({ line, index }): ContentProblem[] => {
-    if (line.item && index === undefined) {
-      const guess = closestWord(
-        line.item,
-        items.map((item) => item.key),
-      );
-      const hint = guess ? `; did you mean "${guess}"?` : '';
-      return [
-        {
-          path: [...line.path, 'item'],
-          severity: 'error',
-          message: `there is no item "${line.item}" in the catalogue (${linked.file})${hint}`,
-        },
-      ];
-    }
-    if (index === undefined) {
-      const matches = namedItems(items, line.name);
-      return [
-        {
-          path: line.path,
-          severity: 'warning',
-          message:
-            matches.length > 1
-              ? `"${line.name}" names more than one item in the catalogue (${matches.map((i) => items[i].key).join(', ')}); say which with item:`
-              : `"${line.name}" is not in the catalogue (${linked.file}); add it there, or name its item with item:`,
-        },
-      ];
-    }
+  const unknown = (key: string, path: ContentProblem['path']): ContentProblem[] => {
+    const guess = closestWord(
+      key,
+      items.map((item) => item.key),
+    );
+    const hint = guess ? `; did you mean "${guess}"?` : '';
     return [
-      ...strengthProblems(line, items[index], at(linked, index)),
-      ...allergenProblems(line, items[index]),
+      {
+        path,
+        severity: 'error',
+        message: `there is no item "${key}" in the catalogue (${linked.file})${hint}`,
+      },
     ];
-  });
+  };
+  const meat =
+    formula.kind === 'cure' && formula.meat_item && !items.some((i) => i.key === formula.meat_item)
+      ? unknown(formula.meat_item, ['meat_item'])
+      : [];
+  return [
+    ...meat,
+    ...linkLines(formula, linked.catalogue).flatMap(({ line, index }): ContentProblem[] => {
+      if (line.item && index === undefined) return unknown(line.item, [...line.path, 'item']);
+      if (index === undefined) {
+        const matches = namedItems(items, line.name);
+        return [
+          {
+            path: line.path,
+            severity: 'warning',
+            message:
+              matches.length > 1
+                ? `"${line.name}" names more than one item in the catalogue (${matches.map((i) => items[i].key).join(', ')}); say which with item:`
+                : `"${line.name}" is not in the catalogue (${linked.file}); add it there, or name its item with item:`,
+          },
+        ];
+      }
+      return [
+        ...strengthProblems(line, items[index], at(linked, index)),
+        ...allergenProblems(line, items[index]),
+      ];
+    }),
+  ];
 }
 
 /** The indexes of the items a name matches. */

@@ -110,6 +110,8 @@ export interface CureFormula extends FormulaBase {
   product: CureProduct;
   /** Asked for by the checks: without it the sheet gives the highest cooking temperature. */
   species?: FormulaSpecies;
+  /** Key of the meat's item in the catalogue of materials: the green weight draws on its lots. */
+  meat_item?: string;
   ingredients: CureIngredient[];
   brine?: {
     water_pct?: number;

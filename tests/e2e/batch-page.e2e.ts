@@ -101,7 +101,7 @@ describe('recording a batch from the keyboard', () => {
 
     await page.keyboard.type('4');
     await page.keyboard.press('Enter');
-    await page.waitForURL(/\/batches\/\d{6}-QB-\d{2}$/);
+    await page.waitForURL(/\/batches\/\d{6}-QB-\d{2}#made-from$/);
     assert.deepEqual(errors, []);
   });
 

@@ -41,7 +41,7 @@ describe('the batch log in the console', () => {
     await page.getByTestId('record-preview').getByText('10.7 g').first().waitFor();
     await session.screenshot(page, 'record-batch');
     await page.getByTestId('record-submit').click();
-    await page.waitForURL(/\/batches\/\d{6}-QB-\d{2}$/);
+    await page.waitForURL(/\/batches\/\d{6}-QB-\d{2}#made-from$/);
     const lot = await page.getByTestId('batch-lot').innerText();
     assert.match(lot, /\d{6}-QB-\d{2}/);
     await page.getByTestId('timeline').waitFor();

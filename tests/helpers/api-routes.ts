@@ -11,6 +11,7 @@ import {
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
 import { WEIGHTS_ROUTES } from './weights-routes.ts';
+import { LOT_USE_ROUTES } from './lot-use-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
 
 /** The callers of the role matrix. */
@@ -211,6 +212,8 @@ export const ROUTES: readonly RouteCase[] = [
   ...PROCESS_ROUTES,
   // Weights as weighed, starting a planned batch, refused calculations.
   ...WEIGHTS_ROUTES,
+  // What a batch was made from: the lots it used.
+  ...LOT_USE_ROUTES,
   ...EQUIPMENT_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({

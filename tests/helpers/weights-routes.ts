@@ -19,7 +19,8 @@ async function bellyLot(fx: Fixture, status: 'in-progress' | 'planned'): Promise
   return (await setupCall(fx, call)).batch.lotCode;
 }
 
-function route(
+/** A route case whose request is built per cell. */
+export function route(
   method: string,
   template: string,
   allowed: readonly Role[],

@@ -17,6 +17,21 @@ describe('audit event words', () => {
         }),
         '120 for the service on 18 Dec 2026 · 2 batches: 261203-CG-01, 261203-PB-01 · recorded again',
       );
+      assert.equal(
+        detailText({
+          action: 'batch-lots',
+          detail: {
+            usedOn: '2026-12-03',
+            accepted: true,
+            replaced: [4],
+            uses: [
+              { item: 'pork-belly', lot: 'R261201-01', amount: '6000' },
+              { item: 'pork-belly', lot: 'R261202-01', amount: '4000' },
+            ],
+          },
+        }),
+        'used on 3 Dec 2026 · 2 lots: R261201-01, R261202-01 · as suggested · recorded again',
+      );
     });
   });
 

@@ -41,6 +41,7 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'report-produce', label: 'Produced a HACCP report' },
   { value: 'plan-make', label: 'Made a plan' },
   { value: 'plan-record', label: 'Recorded a plan as planned' },
+  { value: 'batch-lots', label: 'Recorded the lots a batch used' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));
@@ -172,6 +173,8 @@ export function detailText(event: Pick<AuditEvent, 'action' | 'detail'>): string
     case 'plan-make':
     case 'plan-record':
       return planText(detail);
+    case 'batch-lots':
+      return lotsText(detail);
     case 'sign-in-throttled':
       return join(
         [
@@ -215,6 +218,22 @@ function planText(detail: Record<string, unknown>): string {
         ? ''
         : `${lots.length} ${lots.length === 1 ? 'batch' : 'batches'}${lots.length > 0 ? `: ${lots.join(', ')}` : ''}`,
       detail['again'] === true ? 'recorded again' : '',
+    ],
+    ' · ',
+  );
+}
+
+/** The lots a batch used, in words: "used on 3 Dec 2026 · 2 lots: R261201-01, R261202-01". */
+function lotsText(detail: Record<string, unknown>): string {
+  const lots = Array.isArray(detail['uses'])
+    ? [...new Set(detail['uses'].map((use) => wordsOf(fieldsOf(use)['lot'])))]
+    : [];
+  return join(
+    [
+      present(detail['usedOn']) ? `used on ${dayWords(wordsOf(detail['usedOn']))}` : '',
+      `${lots.length} ${lots.length === 1 ? 'lot' : 'lots'}${lots.length ? `: ${lots.join(', ')}` : ''}`,
+      detail['accepted'] === true ? 'as suggested' : '',
+      Array.isArray(detail['replaced']) ? 'recorded again' : '',
     ],
     ' · ',
   );

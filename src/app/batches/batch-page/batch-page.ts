@@ -34,6 +34,7 @@ import { TurnList } from './turn-list';
 import { FormulaOptions } from '../formula-options';
 import { notesInWords } from './notes-words';
 import { LabelPreview } from '../label-preview/label-preview';
+import { MadeFrom } from '../made-from/made-from';
 
 /**
  * One batch: its lot code, formula and revision, status and the history of every change, the
@@ -56,6 +57,7 @@ import { LabelPreview } from '../label-preview/label-preview';
     HoldBanner,
     ProcessSection,
     LabelPreview,
+    MadeFrom,
   ],
   providers: [BatchStore, ProcessStore],
   templateUrl: './batch-page.html',

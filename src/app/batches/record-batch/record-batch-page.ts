@@ -220,7 +220,8 @@ export default class RecordBatchPage implements OnInit {
     });
     if (batch) {
       this.log.invalidate();
-      await this.router.navigate(['/batches', batch.lotCode]);
+      // Straight on to what it was made from: the batch page opens at its lots.
+      await this.router.navigate(['/batches', batch.lotCode], { fragment: 'made-from' });
     } else {
       this.markProblemField();
     }

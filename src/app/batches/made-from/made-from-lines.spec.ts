@@ -1,0 +1,61 @@
+import assert from 'node:assert/strict';
+import { describe, it } from 'node:test';
+import type { SuggestedItem } from '../../../../shared/api/batch-lots.ts';
+import { amountText, picksOf, startingLines } from './made-from-lines.ts';
+
+const BELLY: SuggestedItem = {
+  item: 'pork-belly',
+  name: 'pork belly',
+  source: 'receipt',
+  unit: 'kg',
+  measure: 'g',
+  need: '10000',
+  weighed: false,
+  takes: [
+    {
+      source: 'receipt',
+      item: 'pork-belly',
+      itemName: 'pork belly',
+      lotCode: 'R261201-01',
+      supplier: 'Hollin Vale Farm',
+      supplierLot: 'HV-01',
+      amount: '5952.380952380952',
+      measure: 'g',
+      lotAmount: '5.952380952380952',
+      lotUnit: 'kg',
+      useBy: '2026-12-05',
+      usedOn: '2026-12-03',
+    },
+  ],
+  shortfall: '0',
+  expired: [],
+  onHand: [],
+};
+
+describe('the lines of what a batch was made from', () => {
+  // hand-worked: 5.952380… kg to the gram is 5.952 kg; 12 eggs stay 12
+  it('should start from the suggestion, each amount to the gram in the unit the lot came in', () => {
+    assert.deepEqual(startingLines(BELLY), [{ lot: 'R261201-01', amount: '5.952 kg' }]);
+    assert.equal(amountText({ lotAmount: '12', lotUnit: 'each' }), '12');
+  });
+
+  it('should leave out a line with no lot chosen and give a part its batch', () => {
+    const part: SuggestedItem = { ...BELLY, item: 'chuck-grind', source: 'batch', takes: [] };
+    assert.deepEqual(
+      picksOf([
+        {
+          item: BELLY,
+          lines: [
+            { lot: 'R261201-01', amount: ' 6 kg ' },
+            { lot: '', amount: '1 kg' },
+          ],
+        },
+        { item: part, lines: [{ lot: '261202-CG-01', amount: '2 kg' }] },
+      ]),
+      [
+        { item: 'pork-belly', lot: 'R261201-01', amount: '6 kg' },
+        { part: 'chuck-grind', batch: '261202-CG-01', amount: '2 kg' },
+      ],
+    );
+  });
+});
