@@ -35,9 +35,17 @@ export function linkLines(formula: Formula, catalogue: Catalogue): LinkedLine[] 
   return materialLines(formula).map((line) => {
     const index = line.item
       ? catalogue.items.findIndex((item) => item.key === line.item)
-      : onlyOne(namedItems(catalogue.items, line.name));
+      : itemNamed(catalogue, line.name);
     return { line, index: index === undefined || index < 0 ? undefined : index };
   });
+}
+
+/**
+ * The index of the one item a name matches (the item's name or one of its formula names, however
+ * capitalised or spaced); undefined when none does, or more than one.
+ */
+export function itemNamed(catalogue: Catalogue, name: string): number | undefined {
+  return onlyOne(namedItems(catalogue.items, name));
 }
 
 /**

@@ -1,0 +1,82 @@
+import { QueryTypes } from 'sequelize';
+import type { TestServer } from './test-server.ts';
+
+/** A delivery as the receipts table keeps it; amounts in the item's base measure (grams here). */
+export interface ReceiptToAdd {
+  readonly item: string;
+  readonly itemName: string;
+  readonly supplier: string;
+  readonly supplierLot: string;
+  /** Grams received; what is left too unless `remaining` says otherwise. */
+  readonly grams: string;
+  readonly remaining?: string;
+  readonly useBy?: string;
+  /** When it was taken in, ISO 8601 with its offset. */
+  readonly receivedAt: string;
+  readonly decision?: 'accepted' | 'accepted-with-action' | 'refused';
+  readonly emptiedOn?: string;
+}
+
+/**
+ * Empties the test server's stock: no lot uses, no receipts (deviations opened at the door lose
+ * their link), so a test starts from a kitchen that has received nothing, whatever demo
+ * deliveries the server was started with.
+ */
+export async function clearStock(server: TestServer): Promise<void> {
+  const { sequelize } = server.context.db;
+  await sequelize.query('DELETE FROM lot_uses');
+  await sequelize.query('UPDATE deviations SET receipt_id = NULL WHERE receipt_id IS NOT NULL');
+  await sequelize.query('DELETE FROM receipts');
+}
+
+/**
+ * Writes deliveries straight into the receipts table with plain SQL, as receiving will keep them
+ * (migration 015): the kitchen's lot code R + the receiving day YYMMDD + "-" + the day's
+ * sequence from 01, received by the demo admin.
+ * @returns the lot codes, in the order given
+ */
+export async function addReceipts(
+  server: TestServer,
+  receipts: readonly ReceiptToAdd[],
+): Promise<string[]> {
+  const { sequelize } = server.context.db;
+  const [admin] = await sequelize.query<{ id: number }>(
+    "SELECT id FROM people WHERE username = 'rosa'",
+    { type: QueryTypes.SELECT },
+  );
+  const codes: string[] = [];
+  for (const r of receipts) {
+    const day = r.receivedAt.slice(0, 10);
+    const [{ n }] = await sequelize.query<{ n: number }>(
+      'SELECT COUNT(*) AS n FROM receipts WHERE received_on = ?',
+      { replacements: [day], type: QueryTypes.SELECT },
+    );
+    const code = `R${day.slice(2).replace(/-/g, '')}-${String(n + 1).padStart(2, '0')}`;
+    await sequelize.query(
+      `INSERT INTO receipts (lot_code, item, item_name, supplier, supplier_lot, use_by, quantity,
+         unit, amount, remaining, decision, received_at, received_on, person_id, emptied_on)
+       VALUES (?, ?, ?, ?, ?, ?, ?, 'g', ?, ?, ?, ?, ?, ?, ?)`,
+      {
+        replacements: [
+          code,
+          r.item,
+          r.itemName,
+          r.supplier,
+          r.supplierLot,
+          r.useBy ?? null,
+          r.grams,
+          r.grams,
+          r.remaining ?? r.grams,
+          r.decision ?? 'accepted',
+          r.receivedAt,
+          day,
+          admin.id,
+          r.emptiedOn ?? null,
+        ],
+        type: QueryTypes.INSERT,
+      },
+    );
+    codes.push(code);
+  }
+  return codes;
+}
