@@ -64,7 +64,7 @@ function presentLine(
     lastFrom: line.lastFrom ?? null,
     outOfDate: line.outOfDate.map(
       (lot) =>
-        `lot ${lot.lot} is past its use-by (${dayWords(lot.useBy)}) by ${dayWords(lot.neededOn)}: use it first elsewhere or discard it`,
+        `lot ${lot.lot} is past its use-by (${dayWords(lot.useBy)}) on ${dayWords(lot.neededOn)}, when it would be used: use it elsewhere first or discard it`,
     ),
     usedBy,
   };

@@ -34,7 +34,7 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
   const server = suiteServer();
 
   before(async () => {
-    await clearStock(server());
+    await clearStock(server().context.db);
   });
 
   it('should say there is no stock to compare with before any delivery is recorded', async () => {
@@ -52,7 +52,7 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
     let answer: Awaited<ReturnType<ReturnType<ReturnType<typeof server>['as']>['get']>>;
     before(async () => {
       const at = (time: string) => `${TODAY}T${time}:00Z`;
-      codes = await addReceipts(server(), [
+      codes = await addReceipts(server().context.db, [
         // Use by five days before service: good for the belly, past it by the bun's day.
         {
           item: 'sea-salt',

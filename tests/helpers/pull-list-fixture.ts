@@ -1,5 +1,9 @@
-import { QueryTypes } from 'sequelize';
-import type { TestServer } from './test-server.ts';
+import { QueryTypes, type Sequelize } from 'sequelize';
+
+/** A database to write to: a test server's (`server.context.db`) or one opened on a file. */
+export interface StockDatabase {
+  readonly sequelize: Sequelize;
+}
 
 /** A delivery as the receipts table keeps it; amounts in the item's base measure (grams here). */
 export interface ReceiptToAdd {
@@ -22,8 +26,7 @@ export interface ReceiptToAdd {
  * their link), so a test starts from a kitchen that has received nothing, whatever demo
  * deliveries the server was started with.
  */
-export async function clearStock(server: TestServer): Promise<void> {
-  const { sequelize } = server.context.db;
+export async function clearStock({ sequelize }: StockDatabase): Promise<void> {
   await sequelize.query('DELETE FROM lot_uses');
   await sequelize.query('UPDATE deviations SET receipt_id = NULL WHERE receipt_id IS NOT NULL');
   await sequelize.query('DELETE FROM receipts');
@@ -32,16 +35,15 @@ export async function clearStock(server: TestServer): Promise<void> {
 /**
  * Writes deliveries straight into the receipts table with plain SQL, as receiving will keep them
  * (migration 015): the kitchen's lot code R + the receiving day YYMMDD + "-" + the day's
- * sequence from 01, received by the demo admin.
+ * sequence from 01, received by the first person on the records.
  * @returns the lot codes, in the order given
  */
 export async function addReceipts(
-  server: TestServer,
+  { sequelize }: StockDatabase,
   receipts: readonly ReceiptToAdd[],
 ): Promise<string[]> {
-  const { sequelize } = server.context.db;
-  const [admin] = await sequelize.query<{ id: number }>(
-    "SELECT id FROM people WHERE username = 'rosa'",
+  const [person] = await sequelize.query<{ id: number }>(
+    'SELECT id FROM people ORDER BY id LIMIT 1',
     { type: QueryTypes.SELECT },
   );
   const codes: string[] = [];
@@ -70,7 +72,7 @@ export async function addReceipts(
           r.decision ?? 'accepted',
           r.receivedAt,
           day,
-          admin.id,
+          person.id,
           r.emptiedOn ?? null,
         ],
         type: QueryTypes.INSERT,
