@@ -4,7 +4,7 @@ import path from 'node:path';
 import { before, describe, it } from 'node:test';
 import { addDays, dec } from '../../shared/index.ts';
 import { snapshot, suiteServer } from '../helpers/api-calls.ts';
-import { addReceipts, clearStock } from '../helpers/pull-list-fixture.ts';
+import { addReceipts, burgerReceipts, clearStock } from '../helpers/pull-list-fixture.ts';
 
 /** The server plans from its own today; a day far enough ahead for the belly's 10 days. */
 const TODAY = new Date().toISOString().slice(0, 10);
@@ -52,17 +52,9 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
     let answer: Awaited<ReturnType<ReturnType<ReturnType<typeof server>['as']>['get']>>;
     before(async () => {
       const at = (time: string) => `${TODAY}T${time}:00Z`;
+      // burgerReceipts: sea salt 5 000 g to use by service − 5, honey, 5 g of curing salt.
       codes = await addReceipts(server().context.db, [
-        // Use by five days before service: good for the belly, past it by the bun's day.
-        {
-          item: 'sea-salt',
-          itemName: 'sea salt',
-          supplier: 'Harrowgate Dry Goods',
-          supplierLot: 'HG-2231',
-          grams: '5000',
-          useBy: addDays(SERVICE, -5),
-          receivedAt: at('06:00'),
-        },
+        ...burgerReceipts(TODAY, SERVICE),
         {
           item: 'sea-salt',
           itemName: 'sea salt',
@@ -91,14 +83,6 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
           remaining: '0',
           receivedAt: at('05:00'),
           emptiedOn: TODAY,
-        },
-        {
-          item: 'honey',
-          itemName: 'honey',
-          supplier: 'Ashby Apiary',
-          supplierLot: 'AA-7',
-          grams: '10000',
-          receivedAt: at('06:20'),
         },
       ]);
       const before = await snapshot(server());

@@ -4,7 +4,7 @@ import { describe, it } from 'node:test';
 import { today } from '../../cli/io.ts';
 import { openDatabase } from '../../server/db/database.ts';
 import { addDays } from '../../shared/index.ts';
-import { addReceipts, clearStock, type ReceiptToAdd } from '../helpers/pull-list-fixture.ts';
+import { addReceipts, burgerReceipts, clearStock } from '../helpers/pull-list-fixture.ts';
 import { assertExit, localCook, runLarder, stdoutJson } from '../helpers/run-larder.ts';
 import { PASSWORDS, startTestServer } from '../helpers/test-server.ts';
 
@@ -12,26 +12,8 @@ import { PASSWORDS, startTestServer } from '../helpers/test-server.ts';
 const SERVICE = addDays(today(), 21);
 const PLAN = ['plan', 'smokehouse-burger', '--count', '120', '--for', SERVICE];
 
-/** Honey for the bun (6 % of its flour, under 1 kg), and too little curing salt for the belly. */
-const RECEIPTS: ReceiptToAdd[] = [
-  {
-    item: 'honey',
-    itemName: 'honey',
-    supplier: 'Ashby Apiary',
-    supplierLot: 'AA-7',
-    grams: '10000',
-    receivedAt: `${today()}T06:20:00Z`,
-  },
-  {
-    item: 'curing-salt-1',
-    itemName: 'curing salt',
-    supplier: 'Kestrel Cure Supply',
-    supplierLot: 'KC-31',
-    grams: '5',
-    useBy: addDays(SERVICE, 300),
-    receivedAt: `${today()}T06:30:00Z`,
-  },
-];
+/** Sea salt, honey for the bun (6 % of its flour, under 1 kg), and too little curing salt. */
+const RECEIPTS = burgerReceipts(today(), SERVICE);
 
 interface Line {
   item: string;

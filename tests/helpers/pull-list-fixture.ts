@@ -82,3 +82,41 @@ export async function addReceipts(
   }
   return codes;
 }
+
+/**
+ * Deliveries received `today` (YYYY-MM-DD) against 120 burgers served on `service`, invented
+ * for the tests: 5 000 g of sea salt to use by five days before service (good for the belly's
+ * day, past it by the bun's), 10 kg of honey, and 5 g of curing salt, less than the belly needs.
+ */
+export function burgerReceipts(today: string, service: string): ReceiptToAdd[] {
+  const at = (time: string) => `${today}T${time}:00Z`;
+  const [y, m, d] = service.split('-').map(Number);
+  const useBy = new Date(Date.UTC(y, m - 1, d - 5)).toISOString().slice(0, 10);
+  return [
+    {
+      item: 'sea-salt',
+      itemName: 'sea salt',
+      supplier: 'Harrowgate Dry Goods',
+      supplierLot: 'HG-2231',
+      grams: '5000',
+      useBy,
+      receivedAt: at('06:00'),
+    },
+    {
+      item: 'honey',
+      itemName: 'honey',
+      supplier: 'Ashby Apiary',
+      supplierLot: 'AA-7',
+      grams: '10000',
+      receivedAt: at('06:20'),
+    },
+    {
+      item: 'curing-salt-1',
+      itemName: 'curing salt',
+      supplier: 'Kestrel Cure Supply',
+      supplierLot: 'KC-31',
+      grams: '5',
+      receivedAt: at('06:30'),
+    },
+  ];
+}
