@@ -107,6 +107,16 @@ export {
 } from './labels/date-mark.ts';
 export { suggestLots, type FifoSuggestion, type LotTake, type StockLot } from './stock/fifo.ts';
 export {
+  pullAgainstStock,
+  type ItemNeed,
+  type ItemUse,
+  type LastDelivery,
+  type PullLine,
+} from './stock/pull-list.ts';
+export { planItemNeeds, type PlanItemNeeds } from './stock/plan-item-needs.ts';
+export { PLAN_STOCK_NOTE, planStock, type StockOnHand } from './stock/plan-stock.ts';
+export type * from './stock/plan-stock-types.ts';
+export {
   leastCostBlend,
   type BlendRefusal,
   type BlendShare,

@@ -10,16 +10,20 @@ import {
   isIsoDate,
   planAssembly,
   presentPlan,
+  type FormulaLibrary,
   type PlanResult,
+  type PlanStock,
   type PresentedPlan,
   type UnitSystem,
 } from '../../shared/index.ts';
+import type { PlanWithStock } from '../../shared/api/plan-record.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import { formulaFilesIn, formulasFolder, loadFormula, readFormulaFile } from '../formula-files.ts';
 import { today, type Io } from '../io.ts';
 import type { PdfTarget } from '../output/pdf-file.ts';
 import { renderPlanSheet } from '../output/plan-sheet.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { renderPlanStock } from '../output/plan-stock-sheet.ts';
+import { localRecordKeeper, recordKeeper, type PlanToRecord } from '../records/record-keeper.ts';
 
 interface PlanOptions {
   count: string;
@@ -75,7 +79,12 @@ export function planCommand(io: Io): Command {
       '--again',
       'with --record: record the batches again even if this plan was recorded before',
     )
-    .addOption(serverOption('with --record: record on this server'))
+    .addOption(
+      new Option(
+        '--server <url>',
+        'plan on this server and compare the pull list with its stock; with --record, record there (for --record the default is $LARDER_SERVER, else this machine)',
+      ),
+    )
     .option(
       '--pdf <file>',
       'write the plan to a PDF file: an overview, then one production sheet per start day',
@@ -151,9 +160,6 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
   const count = readCount(options.count);
   const serviceDate = readDate(options.for, 'for');
   const planned = options.today === undefined ? today() : readDate(options.today, 'today');
-  if (options.server && !options.record) {
-    throw new CliError('--server goes with --record', EXIT.usage);
-  }
   if (options.again && !options.record)
     throw new CliError('--again goes with --record', EXIT.usage);
   if (options.force && !options.pdf) throw new CliError('--force goes with --pdf', EXIT.usage);
@@ -170,6 +176,12 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
       EXIT.usage,
     );
   }
+  if (options.server && options.today) {
+    throw new CliError(
+      '--today cannot be used with --server: the server plans from its own today',
+      EXIT.usage,
+    );
+  }
   const { formula, file, warnings } = loadFormula(reference, formulasFolder(options.formulas));
   for (const warning of warnings) io.err(`${warning}\n`);
   if (formula.kind !== 'assembly') {
@@ -180,43 +192,54 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
   }
   // The formulas the assembly names: --formulas, else the folder of the assembly's own file.
   const folder = options.formulas ?? (isPath(reference) ? path.dirname(file) : formulasFolder());
+  // Made once, when first asked for: a server makes its own plan.
+  let library: FormulaLibrary | undefined;
+  const formulas = (): FormulaLibrary => (library ??= libraryIn(folder, file, io));
+  let made: PlanResult | undefined;
   const plan = (): PlanResult => {
     try {
-      return planAssembly(formula, libraryIn(folder, file, io), {
-        count,
-        serviceDate,
-        today: planned,
-      });
+      made ??= planAssembly(formula, formulas(), { count, serviceDate, today: planned });
+      return made;
     } catch (error) {
       if (error instanceof PlanError) throw planFailure(error);
       throw error;
     }
   };
+  const request: PlanToRecord = {
+    assembly: formula.id,
+    count,
+    serviceDate,
+    units: options.units,
+    folder,
+    plan,
+    formulas,
+    again: options.again === true,
+  };
+  const json = options.json === true;
   if (options.record) {
     const keeper = await recordKeeper(options.server);
-    const recorded = await keeper.recordPlan({
-      assembly: formula.id,
-      count,
-      serviceDate,
-      units: options.units,
-      folder,
-      plan,
-      again: options.again === true,
-    });
+    const recorded = await keeper.recordPlan(request);
+    const stock = (await keeper.planStock(request))?.stock;
     if (pdf) await writePlanPdf(pdf, recorded.plan);
-    return printRecorded(
-      recorded.plan,
-      recorded.batches,
-      io,
-      options.json === true,
-      keeper.server,
-      pdf,
-    );
+    return printRecorded(recorded.plan, recorded.batches, io, json, keeper.server, pdf, stock);
   }
-  const presented = presentPlan(plan(), options.units);
+  // With --server the server plans and compares with its stock; else this machine's records,
+  // when it keeps any, give the stock.
+  const keeper = options.server ? await recordKeeper(options.server) : await localRecordKeeper();
+  const withStock = options.server ? await keeper.planStock(request) : undefined;
+  const presented = withStock ? withoutStock(withStock) : presentPlan(plan(), options.units);
+  const stock = withStock?.stock ?? (await keeper.planStock(request))?.stock;
   if (pdf) await writePlanPdf(pdf, presented);
-  if (options.json) io.out(`${JSON.stringify(presented, null, 2)}\n`);
-  else io.out(pdf ? `Wrote the plan to ${pdf.file}\n` : renderPlanSheet(presented));
+  if (json) io.out(`${JSON.stringify(stock ? { ...presented, stock } : presented, null, 2)}\n`);
+  else {
+    io.out(pdf ? `Wrote the plan to ${pdf.file}\n` : renderPlanSheet(presented));
+    if (stock) io.out(renderPlanStock(stock));
+  }
+}
+
+/** The plan of an answer that carries its stock, alone. */
+function withoutStock({ stock: _stock, ...plan }: PlanWithStock): PresentedPlan {
+  return plan;
 }
 
 /** Renders the plan's sheets and writes them whole (the PDF stack loads only here). */
@@ -231,12 +254,14 @@ function printRecorded(
   json: boolean,
   url?: string,
   pdf?: PdfTarget,
+  stock?: PlanStock,
 ): void {
   if (json) {
-    io.out(`${JSON.stringify({ plan, batches }, null, 2)}\n`);
+    io.out(`${JSON.stringify({ plan, batches, ...(stock ? { stock } : {}) }, null, 2)}\n`);
     return;
   }
   io.out(pdf ? `Wrote the plan to ${pdf.file}\n` : renderPlanSheet(plan));
+  if (stock) io.out(renderPlanStock(stock));
   io.out(`\nRecorded ${batches.length} planned batch(es)${url ? ` on ${url}` : ''}:\n`);
   for (const batch of batches) {
     io.out(

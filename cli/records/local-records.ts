@@ -1,6 +1,9 @@
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import type { ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
-import { presentPlan, type PresentedPlan } from '../../shared/index.ts';
+import { existsSync } from 'node:fs';
+import type { PlanWithStock } from '../../shared/api/plan-record.ts';
+import { presentPlan, readCatalogue, type PresentedPlan } from '../../shared/index.ts';
+import { catalogueIn, catalogueText } from '../check-catalogue.ts';
 import {
   PROCESS_ROLES,
   RECORDING_ROLES,
@@ -8,6 +11,7 @@ import {
   Records,
   RecordsError,
   openRecords,
+  recordsFile,
   type Person,
   type Role,
 } from '../../server/records/records.ts';
@@ -87,6 +91,15 @@ function asPerson<T>(
   );
 }
 
+/** The file of this machine's records, which may not exist yet. */
+function localRecordsFile(): string {
+  try {
+    return recordsFile();
+  } catch (error) {
+    throw error instanceof RecordsError ? cliErrorOf(error, 'list') : error;
+  }
+}
+
 /**
  * This machine's records. Recording signs in as $LARDER_USER; reading needs no one, as whoever
  * can run larder here can read the database file itself.
@@ -120,6 +133,20 @@ export class LocalRecords implements RecordKeeper {
       }),
       request.folder,
     );
+  }
+
+  /** The plan made here, and its pull list against the lots on hand in this machine's records. */
+  async planStock(request: PlanToRecord): Promise<PlanWithStock | undefined> {
+    // Printing a plan creates no database: without records there is no stock to speak of.
+    if (!existsSync(localRecordsFile())) return undefined;
+    const plan = request.plan();
+    const catalogueFile = catalogueIn(request.folder);
+    const text = catalogueText(catalogueFile);
+    const catalogue = text === undefined ? undefined : readCatalogue(text, catalogueFile);
+    return withLocalRecords('list', async (records) => ({
+      ...presentPlan(plan, request.units),
+      stock: await records.planStock(plan, request.formulas(), catalogue, request.units),
+    }));
   }
 
   listBatches(query: Record<string, string>): Promise<BatchPage> {

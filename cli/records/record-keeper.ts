@@ -2,7 +2,14 @@ import { Option } from 'commander';
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import type { HaccpReport } from '../../shared/api/haccp-report.ts';
 import type { Deviation, ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
-import type { PlanResult, PresentedPlan, RawBatchOptions, UnitSystem } from '../../shared/index.ts';
+import type { PlanWithStock } from '../../shared/api/plan-record.ts';
+import type {
+  FormulaLibrary,
+  PlanResult,
+  PresentedPlan,
+  RawBatchOptions,
+  UnitSystem,
+} from '../../shared/index.ts';
 
 /** A batch to record, as `larder calc --record` gives it. */
 export interface BatchToRecord {
@@ -25,6 +32,8 @@ export interface PlanToRecord {
   readonly folder: string;
   /** Makes the plan on this machine, from today; a server makes its own. */
   readonly plan: () => PlanResult;
+  /** The formulas of the folder by id, which the plan on this machine is made from. */
+  readonly formulas: () => FormulaLibrary;
   /** Record the batches even when the plan was recorded before (`--again`). */
   readonly again?: boolean;
 }
@@ -60,6 +69,11 @@ export interface RecordKeeper {
   readonly server: string | undefined;
   recordBatch(request: BatchToRecord): Promise<Batch>;
   recordPlan(request: PlanToRecord): Promise<{ plan: PresentedPlan; batches: Batch[] }>;
+  /**
+   * The plan as these records make it, with its pull list against their lots on hand; undefined
+   * when this machine keeps no records yet. Reads only.
+   */
+  planStock(request: PlanToRecord): Promise<PlanWithStock | undefined>;
   listBatches(query: Record<string, string>): Promise<BatchPage>;
   showBatch(lot: string): Promise<Batch>;
   /** Records a reading at a batch's control (source: the command); misses open deviations. */
@@ -79,6 +93,14 @@ export interface RecordKeeper {
 export async function recordKeeper(option: string | undefined): Promise<RecordKeeper> {
   const server = option ?? process.env.LARDER_SERVER;
   if (server) return new (await import('./server-records.ts')).ServerRecords(server);
+  return new (await import('./local-records.ts')).LocalRecords();
+}
+
+/**
+ * This machine's records, whatever $LARDER_SERVER says: for a verb that reads them only when
+ * --server is not given.
+ */
+export async function localRecordKeeper(): Promise<RecordKeeper> {
   return new (await import('./local-records.ts')).LocalRecords();
 }
 

@@ -1,6 +1,7 @@
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import type { HaccpReport } from '../../shared/api/haccp-report.ts';
 import type { ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
+import type { PlanWithStock } from '../../shared/api/plan-record.ts';
 import type { PresentedPlan } from '../../shared/index.ts';
 import { failureOfStatus } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
@@ -54,6 +55,13 @@ export class ServerRecords implements RecordKeeper {
       units,
       ...(again ? { again: true } : {}),
     });
+  }
+
+  /** The plan as the server makes it, with its pull list against the server's lots on hand. */
+  planStock(request: PlanToRecord): Promise<PlanWithStock> {
+    const { assembly, count, serviceDate, units } = request;
+    const query = new URLSearchParams({ assembly, count: String(count), for: serviceDate, units });
+    return this.call('list', 'GET', `/api/plans/pull-list?${query}`);
   }
 
   listBatches(query: Record<string, string>): Promise<BatchPage> {

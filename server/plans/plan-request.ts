@@ -1,9 +1,11 @@
+import type { RequestHandler } from 'express';
 import {
   FORMULA_ID_PATTERN,
   FORMULA_REFUSALS,
   PlanError,
   formulaLibrary,
   planAssembly,
+  type FormulaLibrary,
   type PlanResult,
 } from '../../shared/index.ts';
 import { filesById } from '../formulas/formula-files.ts';
@@ -33,6 +35,19 @@ export const PLAN_BODY = {
     units: { enum: ['metric', 'us'] },
   },
 } as const;
+
+/**
+ * GET /api/plans/pull-list's query as the body POST /api/plans takes, for the same schema to
+ * check: a count of digits becomes a number; anything else is left for the schema to refuse.
+ */
+export const planFromQuery: RequestHandler = (req, _res, next) => {
+  const { count, ...rest } = req.query as Record<string, string | undefined>;
+  req.body = {
+    ...Object.fromEntries(Object.entries(rest).filter(([, value]) => value !== undefined)),
+    ...(count === undefined ? {} : { count: /^\d{1,6}$/.test(count) ? Number(count) : count }),
+  };
+  next();
+};
 
 /** The body of POST /api/plans/record: a plan, and `again` to record it although it was before. */
 export const RECORD_BODY = {
@@ -71,6 +86,18 @@ export async function planFromStore(
   request: PlanRequest,
   today: string,
 ): Promise<PlanResult> {
+  return (await planWithFormulas(store, request, today)).plan;
+}
+
+/**
+ * As {@link planFromStore}, with the formulas the plan was made from, by id (what the pull list
+ * needs to link the plan's lines to the catalogue of materials).
+ */
+export async function planWithFormulas(
+  store: FormulaStore,
+  request: PlanRequest,
+  today: string,
+): Promise<{ plan: PlanResult; formulas: FormulaLibrary }> {
   const files = await store.files();
   const file = filesById(files).get(request.assembly);
   if (!file) throw notFound(`no formula "${request.assembly}"`);
@@ -92,11 +119,12 @@ export async function planFromStore(
   }
   const library = formulaLibrary(files.map((f) => ({ file: f.name, reading: f.reading })));
   try {
-    return planAssembly(formula, library, {
+    const plan = planAssembly(formula, library, {
       count: request.count,
       serviceDate: request.for,
       today,
     });
+    return { plan, formulas: library };
   } catch (error) {
     if (error instanceof PlanError) throw planRefusal(error);
     throw error;

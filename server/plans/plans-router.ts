@@ -7,12 +7,23 @@ import { validateBody } from '../http/validate-body.ts';
 import { RECORDING_ROLES, planSheetPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
 import type { PlanList } from '../../shared/api/plan-record.ts';
-import { PLAN_BODY, RECORD_BODY, planFromStore, type PlanRequest } from './plan-request.ts';
 import { sendPdf } from '../http/send-pdf.ts';
+import { allowQuery } from '../http/require-json.ts';
+import type { PlanWithStock } from '../../shared/api/plan-record.ts';
+import {
+  PLAN_BODY,
+  RECORD_BODY,
+  planFromQuery,
+  planFromStore,
+  planWithFormulas,
+  type PlanRequest,
+} from './plan-request.ts';
+import { catalogueBeside } from './plan-stock-check.ts';
 
 /**
  * /api/plans: the plans made (every signed-in role), plan N units of an assembly for a service
- * day (every signed-in role), and record the plan's batches as planned (admins and cooks). A plan
+ * day with its pull list against the lots on hand (every signed-in role; GET /pull-list the same
+ * without noting the plan as made), and record the plan's batches as planned (admins and cooks). A plan
  * that cannot be made is 422 with the reason, naming the formula; nothing is recorded. A plan
  * whose menu item and day already have batches recorded is 409 with those batches, unless the
  * body says `again: true`.
@@ -26,13 +37,47 @@ export function plansRouter(context: AppContext): Router {
     res.json({ plans: await records.listPlans() } satisfies PlanList);
   });
 
-  // A plan worked out is noted as made (once per menu item, count and day), for the list.
+  // A plan worked out is noted as made (once per menu item, count and day), for the list; it
+  // comes with its pull list against the lots on hand.
   router.post('/', validateBody(PLAN_BODY), async (req, res) => {
     const request = req.body as PlanRequest;
-    const plan = await planFromStore(formulas, request, serverToday(context));
+    const { plan, formulas: library } = await planWithFormulas(
+      formulas,
+      request,
+      serverToday(context),
+    );
     await records.planMade(plan, changeBy(req, context));
-    res.json(presentPlan(plan, request.units ?? 'metric'));
+    const units = request.units ?? 'metric';
+    const stock = await records.planStock(
+      plan,
+      library,
+      await catalogueBeside(formulas.folder),
+      units,
+    );
+    res.json({ ...presentPlan(plan, units), stock } satisfies PlanWithStock);
   });
+
+  // The same plan and its pull list against the lots on hand, read only: nothing is noted.
+  router.get(
+    '/pull-list',
+    allowQuery('assembly', 'count', 'for', 'units'),
+    planFromQuery,
+    validateBody(PLAN_BODY),
+    async (req, res) => {
+      const request = req.body as PlanRequest;
+      const { plan, formulas: library } = await planWithFormulas(
+        formulas,
+        request,
+        serverToday(context),
+      );
+      const units = request.units ?? 'metric';
+      const catalogue = await catalogueBeside(formulas.folder);
+      res.json({
+        ...presentPlan(plan, units),
+        stock: await records.planStock(plan, library, catalogue, units),
+      } satisfies PlanWithStock);
+    },
+  );
 
   // The plan on paper: an overview, then one production sheet per start day.
   router.post('/sheet.pdf', validateBody(PLAN_BODY), async (req, res) => {

@@ -1,7 +1,15 @@
 // The back end's one door to the records: the API's routers and the larder command both keep
 // records through it. It loads light; the database stack and the PDF stack load when first used.
 import type { Transaction } from 'sequelize';
-import type { PlanResult, PresentedPlan, PresentedResult, UnitSystem } from '../../shared/index.ts';
+import type {
+  CatalogueReading,
+  FormulaLibrary,
+  PlanResult,
+  PlanStock,
+  PresentedPlan,
+  PresentedResult,
+  UnitSystem,
+} from '../../shared/index.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import { MIN_PASSWORD_LENGTH } from '../auth/passwords.ts';
 import type { Batch, BatchPage, BatchStatus } from '../../shared/api/batch-record.ts';
@@ -27,6 +35,7 @@ import {
 import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
 import { mustFindPerson, resetPassword, type PersonKey } from '../people/reset-password.ts';
+import { comparePlanWithStock } from '../plans/plan-stock-check.ts';
 import { PlanRepository } from '../plans/plan-repository.ts';
 import { recordPlan } from '../plans/record-plan.ts';
 import type { PlanListItem } from '../../shared/api/plan-record.ts';
@@ -141,6 +150,20 @@ export class Records {
   /** The latest plans made, newest first, recorded or not. */
   listPlans(): Promise<PlanListItem[]> {
     return this.guard(() => this.plans().list());
+  }
+
+  /**
+   * A plan's pull list against the lots on hand, or why it cannot be compared (no catalogue, a
+   * catalogue with errors, no delivery recorded yet). Reads only.
+   * @param formulas the formulas the plan was made from, by id
+   */
+  planStock(
+    plan: PlanResult,
+    formulas: FormulaLibrary,
+    catalogue: CatalogueReading | undefined,
+    units: UnitSystem,
+  ): Promise<PlanStock> {
+    return this.guard(() => comparePlanWithStock(this.deps.db, plan, formulas, catalogue, units));
   }
 
   private planRepository: PlanRepository | undefined;

@@ -2,6 +2,8 @@
  * The plans the API lists (GET /api/plans) and the answer when a plan's batches are already
  * recorded (409 'plan-already-recorded'): one definition for the server and the console.
  */
+import type { PresentedPlan } from '../presentation/presented-plan.ts';
+import type { PlanStock } from '../stock/plan-stock-types.ts';
 import type { BatchSummary, PersonRef } from './batch-record.ts';
 
 /** One plan made: what, how many, for which day of service, who made it and whether it is recorded. */
@@ -36,4 +38,12 @@ export interface PlanAlreadyRecorded {
   readonly assembly: string;
   readonly serviceDate: string;
   readonly batches: readonly BatchSummary[];
+}
+
+/**
+ * POST /api/plans and GET /api/plans/pull-list: the plan, and its pull list against the lots on
+ * hand (or why it could not be compared).
+ */
+export interface PlanWithStock extends PresentedPlan {
+  readonly stock: PlanStock;
 }

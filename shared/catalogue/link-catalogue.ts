@@ -35,17 +35,24 @@ export function linkLines(formula: Formula, catalogue: Catalogue): LinkedLine[] 
   return materialLines(formula).map((line) => {
     const index = line.item
       ? catalogue.items.findIndex((item) => item.key === line.item)
-      : onlyOne(namedItems(catalogue.items, line.name));
+      : itemNamed(catalogue, line.name);
     return { line, index: index === undefined || index < 0 ? undefined : index };
   });
 }
 
 /**
+ * The index of the one item a name matches (the item's name or one of its formula names, however
+ * capitalised or spaced); undefined when none does, or more than one.
+ */
+export function itemNamed(catalogue: Catalogue, name: string): number | undefined {
+  return onlyOne(namedItems(catalogue.items, name));
+}
+
+/**
  * What the catalogue says of a formula: an `item:` (or a cure's `meat_item:`) that names no item
- * is an error; a line with
- * no item is a warning (a kitchen adopts the catalogue gradually); a line whose nitrite or
- * nitrate differs from its item's is an error with both places, since one of them is wrong; an
- * allergen of the item the line does not declare is a warning.
+ * is an error; a line with no item is a warning (a kitchen adopts the catalogue gradually); a
+ * line whose nitrite or nitrate differs from its item's is an error with both places, since one
+ * of them is wrong; an allergen of the item the line does not declare is a warning.
  */
 export function catalogueProblems(formula: Formula, linked: LinkCatalogue): ContentProblem[] {
   const { items } = linked.catalogue;

@@ -215,6 +215,10 @@ export const ROUTES: readonly RouteCase[] = [
   // What a batch was made from: the lots it used.
   ...LOT_USE_ROUTES,
   ...EQUIPMENT_ROUTES,
+  // A plan's pull list against the lots on hand, a month ahead (past every hold of the burger).
+  route('GET', '/api/plans/pull-list', ALL, async () => ({
+    path: `/api/plans/pull-list?assembly=smokehouse-burger&count=120&for=${new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10)}`,
+  })),
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',

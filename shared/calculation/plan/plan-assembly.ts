@@ -169,17 +169,15 @@ export function planAssembly(
       result,
       ...dates,
       ...(goesOn.length ? { goesOn } : {}),
+      materials: pullItemsOf(need.formula, result, size.green),
     };
-    return { need, green: size.green, batch: planBatch };
+    return planBatch;
   });
-  planned.sort(
-    (a, b) =>
-      a.batch.start.localeCompare(b.batch.start) ||
-      a.batch.formula.title.localeCompare(b.batch.formula.title),
+  const batches = planned.sort(
+    (a, b) => a.start.localeCompare(b.start) || a.formula.title.localeCompare(b.formula.title),
   );
-  const batches = planned.map((p) => p.batch);
   const allergens = collectAllergens(batches.map((b) => b.result.allergens));
-  const items = planned.flatMap((p) => pullItemsOf(p.need.formula, p.batch.result, p.green));
+  const items = batches.flatMap((batch) => batch.materials);
   return {
     assembly: { id: assembly.id, title: assembly.title },
     count: options.count,

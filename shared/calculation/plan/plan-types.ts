@@ -41,6 +41,19 @@ export interface PlanBatch {
   readonly rule: string;
   /** For a part applied to others (a rub): what it goes on, and when; absent otherwise. */
   readonly goesOn?: readonly AppliedPart[];
+  /** The raw materials of this batch alone, before the plan adds them up (see pullList). */
+  readonly materials: readonly BatchMaterial[];
+}
+
+/** One raw material of one batch, as the batch's formula names it. */
+export interface BatchMaterial {
+  readonly name: string;
+  /** Exact grams the batch weighs in. */
+  readonly grams: Decimal;
+  /** Exact grams to buy or pull before trimming, where a trim yield applies. */
+  readonly beforeTrimGrams?: Decimal;
+  /** The formula id of the batch. */
+  readonly formula: string;
 }
 
 /** One day's production: the batches that start on it. */

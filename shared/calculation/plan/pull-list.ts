@@ -3,15 +3,10 @@ import type { BatchFormula } from '../../formula/formula-types.ts';
 import type { AmountLine, CalcResult } from '../calc-result.ts';
 import { OVERALL_FORMULA_TITLE } from '../dough/calculate-dough.ts';
 import { BEFORE_TRIM, yieldStages } from '../yields.ts';
-import type { PullItem } from './plan-types.ts';
+import type { BatchMaterial, PullItem } from './plan-types.ts';
 
 /** One formula's raw materials, before they are added up across the plan. */
-interface RawItem {
-  readonly name: string;
-  readonly grams: Decimal;
-  readonly beforeTrimGrams?: Decimal;
-  readonly formula: string;
-}
+type RawItem = BatchMaterial;
 
 function linesToItems(lines: readonly AmountLine[], formula: string): RawItem[] {
   return lines.map((line) => ({ name: line.name, grams: line.grams, formula }));

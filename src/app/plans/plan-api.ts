@@ -8,7 +8,7 @@ import type {
   PlanListItem,
   PlanRequest,
   PlanUnits,
-  PresentedPlan,
+  PlanWithStock,
   PresentedResult,
   RawBatchOptions,
   RecordedPlan,
@@ -38,9 +38,9 @@ export class PlanApi {
     return options.sort((a, b) => a.title.localeCompare(b.title));
   }
 
-  /** Works out a plan; records nothing. */
-  plan(request: PlanRequest): Promise<PresentedPlan> {
-    return firstValueFrom(this.http.post<PresentedPlan>('/api/plans', request));
+  /** Works out a plan, with its pull list against the lots on hand; records nothing. */
+  plan(request: PlanRequest): Promise<PlanWithStock> {
+    return firstValueFrom(this.http.post<PlanWithStock>('/api/plans', request));
   }
 
   /**

@@ -5,7 +5,7 @@ import { messageOf } from '../core/api/message-of';
 import { PlanApi } from './plan-api';
 import { pdfFileName } from './plan-query';
 import { alreadyRecordedOf, refusalOf, type PlanRefusalView } from './plan-refusal';
-import type { AssemblyOption, PlanListItem, PlanRequest, PresentedPlan } from './plan-types';
+import type { AssemblyOption, PlanListItem, PlanRequest, PlanWithStock } from './plan-types';
 import { saveBlob } from '../ui/save-blob';
 
 /**
@@ -20,7 +20,7 @@ export class PlanStore {
   private readonly log = inject(BatchLog);
   private readonly assemblyList = signal<readonly AssemblyOption[] | null>(null);
   private readonly assemblyFailure = signal<string | null>(null);
-  private readonly shown = signal<{ request: PlanRequest; plan: PresentedPlan } | null>(null);
+  private readonly shown = signal<{ request: PlanRequest; plan: PlanWithStock } | null>(null);
   private readonly busy = signal(false);
   private readonly refused = signal<PlanRefusalView | null>(null);
   private readonly recordedBatches = signal<readonly Batch[] | null>(null);

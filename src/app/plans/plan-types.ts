@@ -12,7 +12,13 @@ export type {
   PlanAlreadyRecorded,
   PlanList,
   PlanListItem,
+  PlanWithStock,
 } from '../../../shared/api/plan-record.ts';
+export type {
+  PlanStock,
+  PresentedPullLine,
+  PresentedWeight,
+} from '../../../shared/stock/plan-stock-types.ts';
 export type {
   PresentedPlan,
   PresentedPlanBatch,

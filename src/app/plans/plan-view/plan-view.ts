@@ -11,24 +11,25 @@ import {
 } from '../dough-water/dough-water-need';
 import { PlanSchedule } from '../plan-schedule/plan-schedule';
 import { plainNote, whenInWords } from '../plan-words';
-import type { PresentedPlan } from '../plan-types';
+import type { PlanStock, PresentedPlan } from '../plan-types';
+import { PlanStockView } from '../plan-stock/plan-stock';
 
 /**
  * A plan as the kitchen works from it: the allergens of the whole menu item first, the warnings,
  * the schedule day by day, the cautions (always shown: they are about food safety), then every
  * batch with what it is for, its quantities and its batch sheet, and the pull list added up over
- * every batch. Presentational only.
+ * every batch, and that pull list against the lots on hand. Presentational only.
  */
 @Component({
   selector: 'app-plan-view',
-  imports: [RouterLink, MatIcon, IsoDayPipe, BatchSheet, PlanSchedule, DoughWater],
+  imports: [RouterLink, MatIcon, IsoDayPipe, BatchSheet, PlanSchedule, DoughWater, PlanStockView],
   templateUrl: './plan-view.html',
   styleUrl: './plan-view.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PlanView {
-  /** The plan, as the API presents it. */
-  readonly plan = input.required<PresentedPlan>();
+  /** The plan, as the API presents it, with its pull list against stock when the API sent it. */
+  readonly plan = input.required<PresentedPlan & { readonly stock?: PlanStock }>();
 
   /** The allergens as the law words them, kinds named: "milk, fish (anchovy)". */
   protected readonly allergens = computed(() => this.plan().allergens);
@@ -42,7 +43,8 @@ export class PlanView {
   protected readonly beforeTrim = computed(() =>
     this.plan().pullList.some((item) => item.beforeTrim !== undefined),
   );
-  private readonly titles = computed(
+  /** Formula titles by id. */
+  protected readonly titles = computed(
     () => new Map(this.plan().batches.map((batch) => [batch.formula.id, batch.formula.title])),
   );
 
