@@ -121,3 +121,23 @@ describe('planItemNeeds', () => {
     );
   });
 });
+
+describe('planItemNeeds, a cure naming its meat', () => {
+  // The same belly batch, its formula naming the pork belly it is cured from: by hand, its
+  // 12 000 g of green meat is a need of that item on 7 Dec, no longer a line apart.
+  const belly = { ...BELLY, meat_item: 'pork-belly' };
+  const catalogue: Catalogue = {
+    ...CATALOGUE,
+    items: [...CATALOGUE.items, { key: 'pork-belly', name: 'pork', kind: 'meat', unit: 'kg' }],
+  };
+  const { needs, apart } = planItemNeeds(PLAN, libraryOf(belly, GRIND, BUN_WITH_ITEM), catalogue);
+
+  it('should draw the green meat on the item its meat_item names', () => {
+    const meat = needs.find((need) => need.item === 'pork-belly');
+    assert.deepEqual(
+      meat?.uses.map((use) => `${use.start} ${use.formula} ${use.amount.toString()}`),
+      ['2026-12-07 quillmoor-belly 12000'],
+    );
+    assert.ok(!apart.some((line) => line.name.startsWith('green meat')));
+  });
+});

@@ -1,5 +1,6 @@
 import { componentLabel } from '../calculation/blend/blend-fat.ts';
 import type { BatchMaterial, PlanResult } from '../calculation/plan/plan-types.ts';
+import { greenMeatName } from '../calculation/plan/pull-list.ts';
 import type { Catalogue, CatalogueItem } from '../catalogue/catalogue-types.ts';
 import { itemNamed, linkLines } from '../catalogue/link-catalogue.ts';
 import type { Decimal } from '../decimal.ts';
@@ -48,6 +49,11 @@ function linkedNames(formula: Formula | undefined, catalogue: Catalogue): Map<st
       names.push(componentLabel(formula.components[line.path[1] as number]));
     }
     for (const name of names) if (!byName.has(sameName(name))) byName.set(sameName(name), index);
+  }
+  // A cure's green meat is no line of the formula: its meat_item names the item it is drawn from.
+  if (formula.kind === 'cure' && formula.meat_item !== undefined) {
+    const meat = catalogue.items.findIndex((item) => item.key === formula.meat_item);
+    if (meat >= 0) byName.set(sameName(greenMeatName(formula.title)), meat);
   }
   return byName;
 }

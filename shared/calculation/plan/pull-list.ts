@@ -12,6 +12,11 @@ function linesToItems(lines: readonly AmountLine[], formula: string): RawItem[] 
   return lines.map((line) => ({ name: line.name, grams: line.grams, formula }));
 }
 
+/** The pull-list name of a cure's green meat. */
+export function greenMeatName(title: string): string {
+  return `green meat for ${title}`;
+}
+
 /**
  * The raw materials of one batch:
  * - cure: "green meat for <title>" at the green weight (with the weight before trimming when the
@@ -29,7 +34,7 @@ export function pullItemsOf(formula: BatchFormula, result: CalcResult, green?: D
       if (green) {
         const beforeTrim = yieldStages(green, formula.yields).find((s) => s.step === BEFORE_TRIM);
         meat.push({
-          name: `green meat for ${formula.title}`,
+          name: greenMeatName(formula.title),
           grams: green,
           ...(beforeTrim ? { beforeTrimGrams: beforeTrim.grams } : {}),
           formula: id,
