@@ -39,6 +39,7 @@ export const AUDIT_ACTIONS = [
   'report-produce',
   'plan-make',
   'plan-record',
+  'recall-produce',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

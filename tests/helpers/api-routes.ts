@@ -10,6 +10,7 @@ import {
 } from './api-calls.ts';
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
+import { TRACE_ROUTES } from './trace-routes.ts';
 import { WEIGHTS_ROUTES } from './weights-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
 
@@ -212,6 +213,8 @@ export const ROUTES: readonly RouteCase[] = [
   // Weights as weighed, starting a planned batch, refused calculations.
   ...WEIGHTS_ROUTES,
   ...EQUIPMENT_ROUTES,
+  // Trace back and forward, the recall report: every signed-in role.
+  ...TRACE_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',

@@ -41,6 +41,7 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'report-produce', label: 'Produced a HACCP report' },
   { value: 'plan-make', label: 'Made a plan' },
   { value: 'plan-record', label: 'Recorded a plan as planned' },
+  { value: 'recall-produce', label: 'Produced a recall report' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));
