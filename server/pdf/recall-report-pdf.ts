@@ -94,20 +94,34 @@ function totals(layout: SheetLayout, report: RecallReport): void {
     );
 }
 
-/** The tree forward, one lot a line, indented by level. */
+/**
+ * The most lines of the tree a PDF prints: the table above lists every batch already, and a
+ * longer tree makes a report that takes long to write and longer to read.
+ */
+const TREE_LINES = 300;
+
+/** The tree forward, one lot a line, indented by level, to {@link TREE_LINES} lines. */
 function tree(layout: SheetLayout, report: RecallReport): void {
   heading(layout, 'Where it went, level by level');
+  let lines = 0;
   const line = (node: TraceNode): void => {
-    const use = node.use ? ` — ${useWords(node.use)}` : '';
-    const cut = node.cut ? ` (${CUT_WORDS[node.cut]})` : '';
-    layout.paragraph(
-      `${lotName(node.lot)}${use}${cut}`,
-      node.level === 0 ? { weight: 'semibold' } : {},
-      { indent: Math.min(node.level, 8) * 14, after: 2 },
-    );
+    if (lines++ < TREE_LINES) {
+      const use = node.use ? ` — ${useWords(node.use)}` : '';
+      const cut = node.cut ? ` (${CUT_WORDS[node.cut]})` : '';
+      layout.paragraph(
+        `${lotName(node.lot)}${use}${cut}`,
+        node.level === 0 ? { weight: 'semibold' } : {},
+        { indent: Math.min(node.level, 8) * 14, after: 2 },
+      );
+    }
     node.children.forEach(line);
   };
   report.tree.roots.forEach(line);
+  if (lines > TREE_LINES)
+    layout.paragraph(
+      `The tree goes on for ${lines - TREE_LINES} more line(s): every batch is in the table above and in the CSV, and the whole tree on the Trace screen.`,
+      { color: INK.muted },
+    );
 }
 
 /**
