@@ -42,17 +42,17 @@ describe('trace back and forward over received lots and lot uses', () => {
       [
         '261206-BA-01',
         '  261204-BG-01 4000 g 2026-12-06',
-        '    R261202-01 6000 g 2026-12-04',
-        '    R261202-02 4000 g 2026-12-04',
+        '    R261202-91 6000 g 2026-12-04',
+        '    R261202-92 4000 g 2026-12-04',
         '  261205-SL-01 1200 g 2026-12-06',
         '    261201-SB-01 5000 g 2026-12-05',
-        '      R261201-01 6000 g 2026-12-01',
-        '      R261201-02 15 g 2026-12-01',
+        '      R261201-91 6000 g 2026-12-01',
+        '      R261201-92 15 g 2026-12-01',
         '    261203-SB-02 3000 g 2026-12-05',
-        '      R261201-01 4000 g 2026-12-03',
-        '      R261203-01 2000 g 2026-12-03',
-        '      R261201-02 15 g 2026-12-03',
-        '  R261205-01 120 each 2026-12-06',
+        '      R261201-91 4000 g 2026-12-03',
+        '      R261203-91 2000 g 2026-12-03',
+        '      R261201-92 15 g 2026-12-03',
+        '  R261205-91 120 each 2026-12-06',
       ].join('\n'),
     );
     assert.equal(back.batches, 4, 'grind, sliced bacon and both smoked bellies');
@@ -70,23 +70,23 @@ describe('trace back and forward over received lots and lot uses', () => {
         belly.establishment,
         belly.itemName,
       ],
-      ['Hollin Farm', '4471', 'M1234', 'Pork belly'],
+      ['Hollin Farm', 'HF-4471', 'M1234', 'Pork belly'],
     );
   });
 
   it("should trace a supplier's lot delivered twice forward to every batch, three levels down, as drawn", async () => {
-    const search = { supplierLot: '4471', supplier: 'hollin farm' };
+    const search = { supplierLot: 'HF-4471', supplier: 'hollin farm' };
     const forward = await reader.forward(search, await reader.forwardRoots(search));
     assert.equal(
       lines(forward.roots).join('\n'),
       [
-        'R261201-01',
+        'R261201-91',
         '  261201-SB-01 6000 g 2026-12-01',
         '    261205-SL-01 5000 g 2026-12-05',
         '      261206-BA-01 1200 g 2026-12-06',
         '  261203-SB-02 4000 g 2026-12-03',
         '    261205-SL-01 3000 g 2026-12-05 (shown-above)',
-        'R261203-01',
+        'R261203-91',
         '  261203-SB-02 2000 g 2026-12-03 (shown-above)',
       ].join('\n'),
     );
@@ -97,11 +97,11 @@ describe('trace back and forward over received lots and lot uses', () => {
 
   it('should trace forward from one received lot and from a batch', async () => {
     const fromSalt = await reader.forward(
-      { lot: 'R261201-02' },
-      await reader.forwardRoots({ lot: 'r261201-02' }),
+      { lot: 'R261201-92' },
+      await reader.forwardRoots({ lot: 'r261201-92' }),
     );
     assert.deepEqual(lines(fromSalt.roots).slice(0, 2), [
-      'R261201-02',
+      'R261201-92',
       '  261201-SB-01 15 g 2026-12-01',
     ]);
     assert.equal(fromSalt.batches, 4, 'both bellies, the bacon and the burger');
@@ -118,8 +118,8 @@ describe('trace back and forward over received lots and lot uses', () => {
       /no received lot or batch with lot code R991231-09/,
     );
     await assert.rejects(
-      reader.forwardRoots({ supplierLot: '4471', supplier: 'Fernlea Bakery' }),
-      /no delivery of supplier lot 4471 from Fernlea Bakery/,
+      reader.forwardRoots({ supplierLot: 'HF-4471', supplier: 'Fernlea Bakery' }),
+      /no delivery of supplier lot HF-4471 from Fernlea Bakery/,
     );
   });
 

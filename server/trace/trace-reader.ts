@@ -119,7 +119,10 @@ export class TraceReader {
       ...roots.batches.map((b): LotKey => `b${b.id}`),
     ];
     const tree = buildTree({ roots: keys, edges: measured(edges, lots), lots });
-    return { direction: 'forward', searched, ...tree };
+    // A lot asked for in any case is named as its label has it.
+    const root = roots.receipts[0] ?? roots.batches[0];
+    const named = 'lot' in searched && root ? { lot: root.lot_code } : searched;
+    return { direction: 'forward', searched: named, ...tree };
   }
 
   /** Every lot the links name, read by primary key, with the rows already at hand. */

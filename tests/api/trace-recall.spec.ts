@@ -7,8 +7,8 @@ import { pdfText } from '../helpers/pdf-text.ts';
 import { PASSWORDS, clockFrom, startTestServer, type TestServer } from '../helpers/test-server.ts';
 import { insertSmokehouseLots } from '../helpers/trace-fixture.ts';
 
-// The kitchen drawn in tests/helpers/trace-fixture.ts: Hollin Farm's lot 4471 came in twice
-// (R261201-01, R261203-01) and went into both smoked bellies, the sliced bacon made from them and
+// The kitchen drawn in tests/helpers/trace-fixture.ts: Hollin Farm's lot HF-4471 came in twice
+// (R261201-91, R261203-91) and went into both smoked bellies, the sliced bacon made from them and
 // the burger assembly made from that, planned for service on 8 Dec 2026.
 
 /** A server whose today is 7 Dec 2026, the day before the burger's service, with the drawn lots. */
@@ -29,7 +29,7 @@ async function fetchFile(server: TestServer, route: string) {
   };
 }
 
-const HOLLIN = '/api/trace/recall?supplierLot=4471&supplier=Hollin%20Farm';
+const HOLLIN = '/api/trace/recall?supplierLot=HF-4471&supplier=Hollin%20Farm';
 
 describe('trace and recall over the API', () => {
   it('should trace a batch back and a received lot forward for a cook', async (t) => {
@@ -42,7 +42,7 @@ describe('trace and recall over the API', () => {
       answer.roots[0].children.map((c) => c.lot.lotCode),
       ['261201-SB-01', '261203-SB-02'],
     );
-    const forward = await server.as('tobin').get('/api/trace/forward/R261205-01');
+    const forward = await server.as('tobin').get('/api/trace/forward/R261205-91');
     assert.equal(forward.status, 200, forward.text);
     assert.deepEqual(
       (forward.json as TraceAnswer).roots[0].children.map((c) => [
@@ -65,7 +65,7 @@ describe('trace and recall over the API', () => {
     assert.equal(report.producedBy, 'Tobin Marrowfeld (cook)');
     assert.deepEqual(
       report.recalled.map((l) => l.lotCode),
-      ['R261201-01', 'R261203-01'],
+      ['R261201-91', 'R261203-91'],
     );
     // Nearest first, then by start day: as drawn.
     assert.deepEqual(
@@ -76,8 +76,8 @@ describe('trace and recall over the API', () => {
         b.uses.map((u) => `${u.from} ${u.amount}`).join(' + '),
       ]),
       [
-        [1, '261201-SB-01', 'done', 'R261201-01 6000'],
-        [1, '261203-SB-02', 'curing', 'R261201-01 4000 + R261203-01 2000'],
+        [1, '261201-SB-01', 'done', 'R261201-91 6000'],
+        [1, '261203-SB-02', 'curing', 'R261201-91 4000 + R261203-91 2000'],
         [2, '261205-SL-01', 'done', '261201-SB-01 5000 + 261203-SB-02 3000'],
         [3, '261206-BA-01', 'planned', '261205-SL-01 1200'],
       ],
@@ -88,7 +88,7 @@ describe('trace and recall over the API', () => {
     assert.deepEqual(report.totals.byStatus, { done: 2, curing: 1, planned: 1 });
     // 2000 g of the first delivery is left; the curing belly and the burger for 8 Dec are still here.
     assert.deepEqual(report.onHand, {
-      lots: [{ lotCode: 'R261201-01', remaining: '2000', measure: 'g' }],
+      lots: [{ lotCode: 'R261201-91', remaining: '2000', measure: 'g' }],
       batches: ['261203-SB-02', '261206-BA-01'],
     });
     assert.match(report.caution, /recall plan/);
@@ -98,7 +98,10 @@ describe('trace and recall over the API', () => {
     }>("SELECT actor_name, subject FROM audit_events WHERE action = 'recall-produce'", {
       type: QueryTypes.SELECT,
     });
-    assert.deepEqual(audit, { actor_name: 'tobin', subject: 'supplier lot 4471 from Hollin Farm' });
+    assert.deepEqual(audit, {
+      actor_name: 'tobin',
+      subject: 'supplier lot HF-4471 from Hollin Farm',
+    });
   });
 
   it('should write the recall report as a PDF a person can read and as CSV', async (t) => {
@@ -106,16 +109,16 @@ describe('trace and recall over the API', () => {
     const pdf = await fetchFile(server, HOLLIN.replace('/recall?', '/recall.pdf?'));
     assert.equal(pdf.status, 200);
     assert.equal(pdf.type, 'application/pdf');
-    assert.match(pdf.disposition, /recall-supplier-lot-4471-from-hollin-farm\.pdf/);
+    assert.match(pdf.disposition, /recall-supplier-lot-hf-4471-from-hollin-farm\.pdf/);
     const { all, title } = await pdfText(pdf.bytes);
     assert.equal(title, 'Recall report, Quillmoor Smokehouse');
     for (const words of [
-      'Recall: supplier lot 4471 from Hollin Farm',
+      'Recall: supplier lot HF-4471 from Hollin Farm',
       'produced by',
       '261206-BA-01',
       'service 8 Dec 2026',
-      'R261201-01: 4000 g on 3 Dec 2026',
-      'Received lot R261201-01: 2000 g left',
+      'R261201-91: 4000 g on 3 Dec 2026',
+      'Received lot R261201-91: 2000 g left',
       "kitchen's own recall plan",
     ])
       assert.ok(all.includes(words), `${words} in ${all}`);
@@ -155,7 +158,10 @@ describe('trace and recall over the API', () => {
     assert.equal((await cook.get('/api/trace/back/R991231-01')).status, 404);
     assert.equal((await cook.get('/api/trace/recall?supplierLot=9999')).status, 404);
     assert.equal((await cook.get('/api/trace/recall')).status, 400);
-    assert.equal((await cook.get('/api/trace/recall?lot=R261201-01&supplierLot=4471')).status, 400);
-    assert.equal((await cook.get('/api/trace/recall?lot=R261201-01&color=red')).status, 400);
+    assert.equal(
+      (await cook.get('/api/trace/recall?lot=R261201-91&supplierLot=HF-4471')).status,
+      400,
+    );
+    assert.equal((await cook.get('/api/trace/recall?lot=R261201-91&color=red')).status, 400);
   });
 });

@@ -43,12 +43,12 @@ describe('larder trace and larder recall', () => {
         [
           'Sliced bacon 261205-SL-01',
           '├─ Smoked belly 261201-SB-01: 5000 g on 5 Dec 2026',
-          '│  ├─ Pork belly R261201-01: 6000 g on 1 Dec 2026',
-          '│  └─ Curing salt R261201-02: 15.0 g on 1 Dec 2026',
+          '│  ├─ Pork belly R261201-91: 6000 g on 1 Dec 2026',
+          '│  └─ Curing salt R261201-92: 15.0 g on 1 Dec 2026',
           '└─ Smoked belly 261203-SB-02: 3000 g on 5 Dec 2026',
-          '   ├─ Pork belly R261201-01: 4000 g on 3 Dec 2026',
-          '   ├─ Pork belly R261203-01: 2000 g on 3 Dec 2026',
-          '   └─ Curing salt R261201-02: 15.0 g on 3 Dec 2026',
+          '   ├─ Pork belly R261201-91: 4000 g on 3 Dec 2026',
+          '   ├─ Pork belly R261203-91: 2000 g on 3 Dec 2026',
+          '   └─ Curing salt R261201-92: 15.0 g on 3 Dec 2026',
         ],
       );
       assert.match(
@@ -57,7 +57,7 @@ describe('larder trace and larder recall', () => {
       );
       assert.match(
         run.stdout,
-        /Pork belly R261201-01: 6000 g on 1 Dec 2026 · Hollin Farm lot 4471 · est\. M1234/,
+        /Pork belly R261201-91: 6000 g on 1 Dec 2026 · Hollin Farm lot HF-4471 · est\. M1234/,
       );
     });
   }
@@ -65,44 +65,44 @@ describe('larder trace and larder recall', () => {
   it('should print the recall of a supplier lot, and write its PDF and CSV', async (t) => {
     const server = await kitchen(t);
     const env = as(server, 'server');
-    const json = await runLarder(['recall', '--supplier-lot', '4471', '--json'], { env });
+    const json = await runLarder(['recall', '--supplier-lot', 'HF-4471', '--json'], { env });
     assertExit(json, 0);
     assert.deepEqual(
       stdoutJson<RecallReport>(json).batches.map((b) => b.lotCode),
       ['261201-SB-01', '261203-SB-02', '261205-SL-01', '261206-BA-01'],
     );
     const summary = await runLarder(
-      ['recall', '--supplier-lot', '4471', '--supplier', 'Hollin Farm'],
+      ['recall', '--supplier-lot', 'HF-4471', '--supplier', 'Hollin Farm'],
       { env },
     );
     assertExit(summary, 0);
     assert.match(
       summary.stdout,
-      /Recall of supplier lot 4471 from Hollin Farm, Quillmoor Smokehouse: produced by Tobin/,
+      /Recall of supplier lot HF-4471 from Hollin Farm, Quillmoor Smokehouse: produced by Tobin/,
     );
     assert.match(
       summary.stdout,
       /4 affected batch\(es\)\. Received 14.000 kg; used straight from the recalled lots 12.000 kg\./,
     );
-    assert.match(summary.stdout, /Still on hand: R261201-01 \(2000 g left\), 261203-SB-02/);
+    assert.match(summary.stdout, /Still on hand: R261201-91 \(2000 g left\), 261203-SB-02/);
     const dir = makeTempDir(t);
     const pdf = path.join(dir, 'recall.pdf');
     assertExit(
-      await runLarder(['recall', '--lot', 'R261202-02', '--pdf', pdf], {
+      await runLarder(['recall', '--lot', 'R261202-92', '--pdf', pdf], {
         env: as(server, 'local'),
       }),
       0,
     );
     const { all } = await pdfText(readFileSync(pdf));
-    assert.ok(all.includes('Recall: lot R261202-02'), all);
+    assert.ok(all.includes('Recall: lot R261202-92'), all);
     assert.ok(all.includes('261206-BA-01'), all);
     const csv = path.join(dir, 'recall.csv');
-    assertExit(await runLarder(['recall', '--lot', 'R261202-02', '--csv', csv], { env }), 0);
+    assertExit(await runLarder(['recall', '--lot', 'R261202-92', '--csv', csv], { env }), 0);
     const rows = parseCsv(readFileSync(csv, 'utf8'));
     assert.deepEqual(
       rows.slice(1).map((row) => [row[0], row[2]]),
       [
-        ['recalled lot', 'R261202-02'],
+        ['recalled lot', 'R261202-92'],
         ['batch', '261204-BG-01'],
         ['batch', '261206-BA-01'],
       ],

@@ -141,19 +141,19 @@ export function insertUse(db: Database, u: FixtureUse): Promise<number> {
 //
 //   burger assembly 261206-BA-01 (for service 8 Dec)
 //     ├─ burger grind 261204-BG-01        4000 g [12-06]
-//     │    ├─ beef trim R261202-01        6000 g [12-04]   Brackenmoor Meats lot TR-301
-//     │    └─ beef trim R261202-02        4000 g [12-04]   Brackenmoor Meats lot TR-302  (two lots of one item)
+//     │    ├─ beef trim R261202-91        6000 g [12-04]   Brackenmoor Meats lot TR-301
+//     │    └─ beef trim R261202-92        4000 g [12-04]   Brackenmoor Meats lot TR-302  (two lots of one item)
 //     ├─ sliced bacon 261205-SL-01        1200 g [12-06]
 //     │    ├─ smoked belly 261201-SB-01   5000 g [12-05]
-//     │    │    ├─ pork belly R261201-01  6000 g [12-01]   Hollin Farm lot 4471
-//     │    │    └─ curing salt R261201-02   15 g [12-01]   Saltmarsh Supply lot CS-88
+//     │    │    ├─ pork belly R261201-91  6000 g [12-01]   Hollin Farm lot HF-4471
+//     │    │    └─ curing salt R261201-92   15 g [12-01]   Saltmarsh Supply lot CS-88
 //     │    └─ smoked belly 261203-SB-02   3000 g [12-05]
-//     │         ├─ pork belly R261201-01  4000 g [12-03]   (the same belly lot in a second batch)
-//     │         ├─ pork belly R261203-01  2000 g [12-03]   Hollin Farm lot 4471, delivered again
-//     │         └─ curing salt R261201-02   15 g [12-03]
-//     └─ brioche buns R261205-01           120 each [12-06]  Fernlea Bakery lot BUN-771
+//     │         ├─ pork belly R261201-91  4000 g [12-03]   (the same belly lot in a second batch)
+//     │         ├─ pork belly R261203-91  2000 g [12-03]   Hollin Farm lot HF-4471, delivered again
+//     │         └─ curing salt R261201-92   15 g [12-03]
+//     └─ brioche buns R261205-91           120 each [12-06]  Fernlea Bakery lot BUN-771
 //
-// So Hollin Farm's lot 4471 (two receipts) went forward to both smoked bellies, the sliced bacon
+// So Hollin Farm's lot HF-4471 (two receipts) went forward to both smoked bellies, the sliced bacon
 // made from them and the burger assembly made from that: four batches over three levels.
 
 /** Inserts the drawn kitchen's received lots, batches and lot uses; returns the batches' ids. */
@@ -180,17 +180,17 @@ export async function insertSmokehouseLots(db: Database): Promise<Record<string,
       ...extra,
     });
   const belly1 = await receipt(
-    'R261201-01',
+    'R261201-91',
     'pork-belly',
     'Pork belly',
     'Hollin Farm',
-    '4471',
+    'HF-4471',
     '2026-12-01',
     '12000',
     { remaining: '2000' },
   );
   const salt = await receipt(
-    'R261201-02',
+    'R261201-92',
     'curing-salt',
     'Curing salt',
     'Saltmarsh Supply',
@@ -200,7 +200,7 @@ export async function insertSmokehouseLots(db: Database): Promise<Record<string,
     { remaining: '970' },
   );
   const trim1 = await receipt(
-    'R261202-01',
+    'R261202-91',
     'beef-trim',
     'Beef trim',
     'Brackenmoor Meats',
@@ -209,7 +209,7 @@ export async function insertSmokehouseLots(db: Database): Promise<Record<string,
     '6000',
   );
   const trim2 = await receipt(
-    'R261202-02',
+    'R261202-92',
     'beef-trim',
     'Beef trim',
     'Brackenmoor Meats',
@@ -219,16 +219,16 @@ export async function insertSmokehouseLots(db: Database): Promise<Record<string,
     { remaining: '4000' },
   );
   const belly2 = await receipt(
-    'R261203-01',
+    'R261203-91',
     'pork-belly',
     'Pork belly',
     'Hollin Farm',
-    '4471',
+    'HF-4471',
     '2026-12-03',
     '2000',
   );
   const buns = await receipt(
-    'R261205-01',
+    'R261205-91',
     'brioche-bun',
     'Brioche bun',
     'Fernlea Bakery',
