@@ -42,7 +42,13 @@ function batchTable(layout: SheetLayout, report: RecallReport): void {
     return;
   }
   layout.table(
-    [{ width: 1, align: 'right' }, { width: 5 }, { width: 3 }, { width: 5 }, { width: 6 }],
+    [
+      { width: 36, fixed: true, align: 'right' },
+      { width: 4 },
+      { width: 2.4 },
+      { width: 4 },
+      { width: 7.6 },
+    ],
     { cells: ['Level', 'Batch', 'Status', 'Days', 'Made with'].map(header) },
     report.batches.map((batch) => ({
       cells: [
