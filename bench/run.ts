@@ -8,6 +8,7 @@ import { benchCheckMany } from './check-many.ts';
 import { benchCliStart } from './cli-start.ts';
 import { benchConsoleBundle } from './console-bundle.ts';
 import { benchProcessRecords } from './process-records.ts';
+import { benchRecall } from './recall.ts';
 import { benchRecordBatches } from './record-batches.ts';
 
 const BENCHES: Record<string, () => unknown> = {
@@ -17,6 +18,7 @@ const BENCHES: Record<string, () => unknown> = {
   'batch-log': benchBatchLog,
   'record-batches': benchRecordBatches,
   'process-records': benchProcessRecords,
+  recall: benchRecall,
   'console-bundle': benchConsoleBundle,
 };
 

@@ -34,6 +34,7 @@ import { startRouter } from './batches/start-router.ts';
 import { refusalsRouter } from './process/refusals-router.ts';
 import { batchWeighingsRouter, weighingsRouter } from './process/weighings-router.ts';
 import { lotUsesRouter } from './lot-uses/lot-uses-router.ts';
+import { traceRouter } from './trace/trace-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
 const JSON_LIMIT = '512kb';
@@ -93,6 +94,7 @@ export function createApp(context: AppContext): Express {
   api.use('/audit', auditRouter(context));
   api.use('/reports', reportsRouter(context));
   api.use('/outbox', outboxRouter(context));
+  api.use('/trace', traceRouter(context));
   api.use(apiNotFound);
 
   app.use('/api', api);

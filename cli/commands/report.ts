@@ -1,9 +1,10 @@
 import { Command } from 'commander';
 import type { HaccpReport, ReportBatch } from '../../shared/api/haccp-report.ts';
-import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
+import { EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { textTable } from '../output/text-table.ts';
-import { recordKeeper, serverOption, type ReportOutput } from '../records/record-keeper.ts';
+import { reportFile, writeReportFile } from '../output/report-file.ts';
+import { recordKeeper, serverOption } from '../records/record-keeper.ts';
 
 interface ReportOptions {
   from?: string;
@@ -62,16 +63,7 @@ export function reportCommand(io: Io): Command {
       `\nSigns in as $LARDER_USER with $LARDER_PASSWORD (admin or reviewer); producing it is written\nin the audit log.\n\nExamples:\n  larder report --from 2026-11-01 --to 2026-11-30 --pdf haccp-november.pdf\n  larder report --csv haccp.csv                          # the last 30 days\n${EXIT_CODES_HELP}`,
     )
     .action(async (options: ReportOptions) => {
-      const chosen = [options.pdf, options.csv, options.json].filter(Boolean).length;
-      if (chosen > 1) throw new CliError('give one of --pdf, --csv or --json', EXIT.usage);
-      if (options.force && !options.pdf && !options.csv)
-        throw new CliError('--force goes with --pdf or --csv', EXIT.usage);
-      const file = options.pdf ?? options.csv;
-      const target = file ? { file, force: !!options.force } : undefined;
-      const files = target ? await import('../output/pdf-file.ts') : undefined;
-      // The path is checked before the report is produced.
-      if (target) await files?.checkPdfTarget(target);
-      const format: ReportOutput['format'] = options.pdf ? 'pdf' : options.csv ? 'csv' : 'json';
+      const { format, target } = await reportFile(options);
       const period = {
         ...(options.from ? { from: options.from } : {}),
         ...(options.to ? { to: options.to } : {}),
@@ -81,8 +73,7 @@ export function reportCommand(io: Io): Command {
         return io.out(
           options.json ? `${JSON.stringify(report.body, null, 2)}\n` : summary(report.body),
         );
-      const bytes = report.format === 'pdf' ? report.body : Buffer.from(report.body, 'utf8');
-      if (target) await files?.writePdf(target, bytes);
-      io.out(`Wrote the HACCP records report to ${file}\n`);
+      if (target) await writeReportFile(target, report);
+      io.out(`Wrote the HACCP records report to ${target?.file}\n`);
     });
 }

@@ -4,11 +4,13 @@ import { existsSync } from 'node:fs';
 import type { PlanWithStock } from '../../shared/api/plan-record.ts';
 import { presentPlan, readCatalogue, type PresentedPlan } from '../../shared/index.ts';
 import { catalogueIn, catalogueText } from '../check-catalogue.ts';
+import type { TraceSearch } from '../../shared/api/trace-record.ts';
 import {
   PROCESS_ROLES,
   RECORDING_ROLES,
   REPORT_ROLES,
   Records,
+  TRACE_ROLES,
   RecordsError,
   openRecords,
   recordsFile,
@@ -21,9 +23,11 @@ import { credentialsFor } from './credentials.ts';
 import type {
   BatchToRecord,
   PlanToRecord,
+  RecallOutput,
   RecordKeeper,
   ReportOutput,
   ReportPeriodOptions,
+  TracedBothWays,
   UploadedReadings,
 } from './record-keeper.ts';
 import { cliErrorOf, type PersonVerb, type RecordsVerb } from './records-failure.ts';
@@ -188,6 +192,28 @@ export class LocalRecords implements RecordKeeper {
       let text = '';
       for await (const chunk of produced.body) text += chunk;
       return { format: 'csv', body: text };
+    });
+  }
+
+  /** Both ways from a lot, from this machine's records; reading needs no one. */
+  trace(lot: string): Promise<TracedBothWays> {
+    return withLocalRecords('trace', async (records) => ({
+      back: await records.traceBack(lot),
+      forward: await records.traceForward({ lot }),
+    }));
+  }
+
+  /** The recall report from this machine's records, produced as $LARDER_USER (any role). */
+  recall(format: RecallOutput['format'], search: TraceSearch): Promise<RecallOutput> {
+    return asPerson('recall', TRACE_ROLES, async (records, by) => {
+      const produced = await records.produceRecall(format, {
+        search,
+        by,
+        kitchen: Records.kitchenName(),
+        now: new Date(),
+      });
+      if (produced.format === 'pdf') return { format: 'pdf', body: new Uint8Array(produced.body) };
+      return produced;
     });
   }
 }

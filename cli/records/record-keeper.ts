@@ -10,6 +10,7 @@ import type {
   RawBatchOptions,
   UnitSystem,
 } from '../../shared/index.ts';
+import type { RecallReport, TraceAnswer, TraceSearch } from '../../shared/api/trace-record.ts';
 
 /** A batch to record, as `larder calc --record` gives it. */
 export interface BatchToRecord {
@@ -60,6 +61,18 @@ export type ReportOutput =
   | { readonly format: 'csv'; readonly body: string }
   | { readonly format: 'json'; readonly body: HaccpReport };
 
+/** A recall report as produced: PDF bytes, CSV text, or the JSON. */
+export type RecallOutput =
+  | { readonly format: 'pdf'; readonly body: Uint8Array }
+  | { readonly format: 'csv'; readonly body: string }
+  | { readonly format: 'json'; readonly body: RecallReport };
+
+/** A lot traced both ways. */
+export interface TracedBothWays {
+  readonly back: TraceAnswer;
+  readonly forward: TraceAnswer;
+}
+
 /**
  * The batch log, kept on this machine or on a Larderbook server: the verbs use it without
  * knowing which. Failures come as the command's errors, with its exit codes.
@@ -82,6 +95,10 @@ export interface RecordKeeper {
   uploadReadings(lot: string, control: string, text: string): Promise<UploadedReadings>;
   /** The HACCP records report of a period, in a format. */
   report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput>;
+  /** Everything that went into a lot, and everywhere it went. */
+  trace(lot: string): Promise<TracedBothWays>;
+  /** The recall report of a supplier lot, a received lot or a batch, in a format. */
+  recall(format: RecallOutput['format'], search: TraceSearch): Promise<RecallOutput>;
 }
 
 /**

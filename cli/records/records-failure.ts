@@ -4,7 +4,8 @@ import type { RecordsFailure } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 
 /** What a larder verb does with the records; each says its failures in its own words. */
-export type RecordsVerb = 'record' | 'list' | 'show' | 'users' | 'backup' | 'reading' | 'report';
+export type RecordsVerb =
+  'record' | 'list' | 'show' | 'users' | 'backup' | 'reading' | 'report' | 'trace' | 'recall';
 
 /** A failure of record keeping, from this machine's records or a server's answer. */
 export interface RecordsFailureFacts {
@@ -23,6 +24,8 @@ const NOT_FOUND_EXIT: Readonly<Record<RecordsVerb, number>> = {
   backup: EXIT.usage,
   reading: EXIT.usage,
   report: EXIT.usage,
+  trace: EXIT.usage,
+  recall: EXIT.usage,
 };
 
 /** Whether a refusal is a formula file's fault: its errors, or a plan refused over one. */
@@ -84,6 +87,8 @@ const WHO = {
   show: 'say who is reading',
   reading: 'say who took the reading',
   report: 'say who is producing the report',
+  trace: 'say who is reading',
+  recall: 'say who is producing the recall report',
 } as const;
 
 /** A verb that acts as a person: recording, or reading a server's log. */

@@ -2,6 +2,7 @@ import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import type { HaccpReport } from '../../shared/api/haccp-report.ts';
 import type { ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
 import type { PlanWithStock } from '../../shared/api/plan-record.ts';
+import type { RecallReport, TraceAnswer, TraceSearch } from '../../shared/api/trace-record.ts';
 import type { PresentedPlan } from '../../shared/index.ts';
 import { failureOfStatus } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
@@ -9,9 +10,11 @@ import { credentialsFor } from './credentials.ts';
 import type {
   BatchToRecord,
   PlanToRecord,
+  RecallOutput,
   RecordKeeper,
   ReportOutput,
   ReportPeriodOptions,
+  TracedBothWays,
   UploadedReadings,
 } from './record-keeper.ts';
 import { cliErrorOf, type PersonVerb } from './records-failure.ts';
@@ -91,6 +94,24 @@ export class ServerRecords implements RecordKeeper {
     const response = await this.send('report', 'GET', route);
     if (!response.ok) return this.refused(response, 'report');
     if (format === 'json') return { format, body: (await response.json()) as HaccpReport };
+    if (format === 'csv') return { format, body: await response.text() };
+    return { format, body: new Uint8Array(await response.arrayBuffer()) };
+  }
+
+  async trace(lot: string): Promise<TracedBothWays> {
+    const code = encodeURIComponent(lot);
+    return {
+      back: await this.call<TraceAnswer>('trace', 'GET', `/api/trace/back/${code}`),
+      forward: await this.call<TraceAnswer>('trace', 'GET', `/api/trace/forward/${code}`),
+    };
+  }
+
+  async recall(format: RecallOutput['format'], search: TraceSearch): Promise<RecallOutput> {
+    const query = new URLSearchParams(search as Record<string, string>);
+    const route = `/api/trace/${format === 'json' ? 'recall' : `recall.${format}`}?${query}`;
+    const response = await this.send('recall', 'GET', route);
+    if (!response.ok) return this.refused(response, 'recall');
+    if (format === 'json') return { format, body: (await response.json()) as RecallReport };
     if (format === 'csv') return { format, body: await response.text() };
     return { format, body: new Uint8Array(await response.arrayBuffer()) };
   }

@@ -18,8 +18,8 @@ function titleOf(plan: PresentedPlan): (id: string) => string {
   return (id) => titles.get(id) ?? id;
 }
 
-/** The small rust label over a page's title, and the title. */
-function pageHead(layout: SheetLayout, label: string, title: string, line: string): void {
+/** The small rust label over a page's title, the title, a muted line under it and a rule. */
+export function pageHead(layout: SheetLayout, label: string, title: string, line: string): void {
   layout.draw(
     label,
     { size: 7.5, weight: 'semibold', color: INK.rust },

@@ -69,6 +69,8 @@ import type { ProcessDeps } from '../process/judge-and-open.ts';
 import type { UploadAnswer } from '../process/logger-upload.ts';
 import type { ProcessUseCases } from '../process/process-writes.ts';
 import type { CorrectionRequest } from '../process/reading-writes.ts';
+import type { TraceAnswer, TraceSearch } from '../../shared/api/trace-record.ts';
+import type { ProducedRecall, RecallFormat, RecallRequest } from '../trace/produce-recall.ts';
 
 export { RecordsError, type RecordsFailure } from './records-error.ts';
 export { failureOfStatus } from '../http/failure-status.ts';
@@ -91,6 +93,7 @@ export type {
 export type { SheetRecord, SheetSource };
 export type { ProducedReport, ReportFormat, ReportRequest };
 export type { ActionRequest, CorrectionRequest, UploadAnswer };
+export type { ProducedRecall, RecallFormat, RecallRequest };
 
 /** The fewest characters a password may have. */
 export { MIN_PASSWORD_LENGTH };
@@ -100,6 +103,9 @@ export { REPORT_ROLES };
 
 /** The roles that record readings at a batch's controls (and correct them, and act on deviations). */
 export const PROCESS_ROLES: readonly Role[] = ['admin', 'cook', 'reviewer'];
+
+/** The roles that trace lots and produce recall reports: everyone signed in. */
+export const TRACE_ROLES: readonly Role[] = ['admin', 'cook', 'reviewer'];
 
 /** The roles that record batches and plans; every role reads the log. */
 export const RECORDING_ROLES: readonly Role[] = ['admin', 'cook'];
@@ -371,6 +377,27 @@ export class Records {
   async produceReport(format: ReportFormat, request: ReportRequest): Promise<ProducedReport> {
     const { produceReport } = await import('../reports/produce-report.ts');
     return this.guard(() => produceReport(this.deps, format, request));
+  }
+
+  // Trace and recall (server/trace): loaded when first asked for.
+
+  /** Everything that went into a lot (a batch, or a received lot, which has nothing behind it). */
+  async traceBack(lot: string): Promise<TraceAnswer> {
+    const { TraceReader } = await import('../trace/trace-reader.ts');
+    return this.guard(() => new TraceReader(this.deps.db.sequelize).back(lot));
+  }
+
+  /** Everywhere a lot or a supplier's lot went, through batches made from batches. */
+  async traceForward(search: TraceSearch): Promise<TraceAnswer> {
+    const { TraceReader } = await import('../trace/trace-reader.ts');
+    const reader = new TraceReader(this.deps.db.sequelize);
+    return this.guard(async () => reader.forward(search, await reader.forwardRoots(search)));
+  }
+
+  /** The recall report of a supplier lot, a received lot or a batch, audited as produced. */
+  async produceRecall(format: RecallFormat, request: RecallRequest): Promise<ProducedRecall> {
+    const { produceRecall } = await import('../trace/produce-recall.ts');
+    return this.guard(() => produceRecall(this.deps, format, request));
   }
 
   /** The kitchen's name on reports: LARDER_KITCHEN, as the server's messages name it. */

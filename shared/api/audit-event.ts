@@ -40,6 +40,7 @@ export const AUDIT_ACTIONS = [
   'plan-make',
   'plan-record',
   'batch-lots',
+  'recall-produce',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

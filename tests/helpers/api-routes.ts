@@ -10,6 +10,7 @@ import {
 } from './api-calls.ts';
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
+import { TRACE_ROUTES } from './trace-routes.ts';
 import { WEIGHTS_ROUTES } from './weights-routes.ts';
 import { LOT_USE_ROUTES } from './lot-use-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
@@ -219,6 +220,8 @@ export const ROUTES: readonly RouteCase[] = [
   route('GET', '/api/plans/pull-list', ALL, async () => ({
     path: `/api/plans/pull-list?assembly=smokehouse-burger&count=120&for=${new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10)}`,
   })),
+  // Trace back and forward, the recall report: every signed-in role.
+  ...TRACE_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',

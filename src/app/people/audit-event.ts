@@ -42,6 +42,7 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'plan-make', label: 'Made a plan' },
   { value: 'plan-record', label: 'Recorded a plan as planned' },
   { value: 'batch-lots', label: 'Recorded the lots a batch used' },
+  { value: 'recall-produce', label: 'Produced a recall report' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));

@@ -1,0 +1,54 @@
+import type { LotMeasure, TracedBatch, TracedReceipt } from '../../shared/api/trace-record.ts';
+import type { BatchRow, ReceiptRow } from './trace-sql.ts';
+
+/**
+ * The base measure of a lot received in a unit (migration 015): grams for kg, g, lb and oz,
+ * millilitres for l and ml, a count for each.
+ */
+export function measureOf(unit: string): LotMeasure {
+  if (unit === 'l' || unit === 'ml') return 'ml';
+  return unit === 'each' ? 'each' : 'g';
+}
+
+/**
+ * The day of service a batch was recorded for, from the note every batch of a plan carries
+ * ("plan: smokehouse-burger ×120 for 2026-12-18", server/plans/record-plan.ts planNote); null
+ * for a batch not recorded from a plan.
+ */
+export function serviceDayOf(notes: string | null): string | null {
+  return /^plan: \S+ ×\d+ for (\d{4}-\d{2}-\d{2})/.exec(notes ?? '')?.[1] ?? null;
+}
+
+/** A received lot's row as a trace shows it. */
+export function tracedReceipt(row: ReceiptRow): TracedReceipt {
+  return {
+    kind: 'receipt',
+    lotCode: row.lot_code,
+    item: row.item,
+    itemName: row.item_name,
+    supplier: row.supplier,
+    supplierLot: row.supplier_lot,
+    establishment: row.establishment,
+    packedOn: row.packed_on,
+    useBy: row.use_by,
+    receivedOn: row.received_on,
+    amount: row.amount,
+    remaining: row.remaining,
+    measure: measureOf(row.unit),
+    emptiedOn: row.emptied_on,
+    decision: row.decision,
+  };
+}
+
+/** A batch's row as a trace shows it. */
+export function tracedBatch(row: BatchRow): TracedBatch {
+  return {
+    kind: 'batch',
+    lotCode: row.lot_code,
+    formula: { id: row.formula_id, title: row.formula_title },
+    status: row.status,
+    startedOn: row.started_on,
+    readyOn: row.ready_on,
+    serviceDay: serviceDayOf(row.notes),
+  };
+}

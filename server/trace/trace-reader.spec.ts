@@ -1,0 +1,188 @@
+import assert from 'node:assert/strict';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { after, before, describe, it } from 'node:test';
+import type { TraceAnswer, TraceNode } from '../../shared/api/trace-record.ts';
+import { openDatabase, type Database } from '../db/database.ts';
+import { insertBatch, insertSmokehouseLots, insertUse } from '../../tests/helpers/trace-fixture.ts';
+import { TraceReader } from './trace-reader.ts';
+import { MOST_LEVELS } from './trace-sql.ts';
+
+// The kitchen drawn in tests/helpers/trace-fixture.ts (insertSmokehouseLots): the trees are
+// checked against that drawing, line by line.
+
+/** A tree as indented lines: lot code, then the linking use's amount and day. */
+function lines(nodes: readonly TraceNode[], indent = ''): string[] {
+  return nodes.flatMap((node) => [
+    `${indent}${node.lot.lotCode}${node.use ? ` ${node.use.amount} ${node.use.measure} ${node.use.usedOn}` : ''}${node.cut ? ` (${node.cut})` : ''}`,
+    ...lines(node.children, `${indent}  `),
+  ]);
+}
+
+describe('trace back and forward over received lots and lot uses', () => {
+  let dir: string;
+  let db: Database;
+  let reader: TraceReader;
+  before(async () => {
+    dir = mkdtempSync(path.join(tmpdir(), 'larder-trace-'));
+    db = await openDatabase(path.join(dir, 'larderbook.sqlite'));
+    reader = new TraceReader(db.sequelize);
+    await insertSmokehouseLots(db);
+  });
+  after(async () => {
+    await db.close();
+    rmSync(dir, { recursive: true, force: true });
+  });
+
+  it('should trace a burger assembly back through every level to the received lots, as drawn', async () => {
+    const back = await reader.back('261206-ba-01');
+    assert.equal(
+      lines(back.roots).join('\n'),
+      [
+        '261206-BA-01',
+        '  261204-BG-01 4000 g 2026-12-06',
+        '    R261202-91 6000 g 2026-12-04',
+        '    R261202-92 4000 g 2026-12-04',
+        '  261205-SL-01 1200 g 2026-12-06',
+        '    261201-SB-01 5000 g 2026-12-05',
+        '      R261201-91 6000 g 2026-12-01',
+        '      R261201-92 15 g 2026-12-01',
+        '    261203-SB-02 3000 g 2026-12-05',
+        '      R261201-91 4000 g 2026-12-03',
+        '      R261203-91 2000 g 2026-12-03',
+        '      R261201-92 15 g 2026-12-03',
+        '  R261205-91 120 each 2026-12-06',
+      ].join('\n'),
+    );
+    assert.equal(back.batches, 4, 'grind, sliced bacon and both smoked bellies');
+    assert.equal(back.incomplete, false);
+  });
+
+  it('should name each received lot with its supplier, supplier lot and establishment number', async () => {
+    const back = await reader.back('261201-SB-01');
+    const belly = back.roots[0].children[0].lot;
+    assert.equal(belly.kind, 'receipt');
+    assert.deepEqual(
+      belly.kind === 'receipt' && [
+        belly.supplier,
+        belly.supplierLot,
+        belly.establishment,
+        belly.itemName,
+      ],
+      ['Hollin Farm', 'HF-4471', 'M1234', 'Pork belly'],
+    );
+  });
+
+  it("should trace a supplier's lot delivered twice forward to every batch, three levels down, as drawn", async () => {
+    const search = { supplierLot: 'HF-4471', supplier: 'hollin farm' };
+    const forward = await reader.forward(search, await reader.forwardRoots(search));
+    assert.equal(
+      lines(forward.roots).join('\n'),
+      [
+        'R261201-91',
+        '  261201-SB-01 6000 g 2026-12-01',
+        '    261205-SL-01 5000 g 2026-12-05',
+        '      261206-BA-01 1200 g 2026-12-06',
+        '  261203-SB-02 4000 g 2026-12-03',
+        '    261205-SL-01 3000 g 2026-12-05 (shown-above)',
+        'R261203-91',
+        '  261203-SB-02 2000 g 2026-12-03 (shown-above)',
+      ].join('\n'),
+    );
+    assert.equal(forward.batches, 4);
+    const assembly = forward.roots[0].children[0].children[0].children[0].lot;
+    assert.equal(assembly.kind === 'batch' && assembly.serviceDay, '2026-12-08');
+  });
+
+  it('should trace forward from one received lot and from a batch', async () => {
+    const fromSalt = await reader.forward(
+      { lot: 'R261201-92' },
+      await reader.forwardRoots({ lot: 'r261201-92' }),
+    );
+    assert.deepEqual(lines(fromSalt.roots).slice(0, 2), [
+      'R261201-92',
+      '  261201-SB-01 15 g 2026-12-01',
+    ]);
+    assert.equal(fromSalt.batches, 4, 'both bellies, the bacon and the burger');
+    const fromGrind = await reader.forward(
+      { lot: '261204-BG-01' },
+      await reader.forwardRoots({ lot: '261204-BG-01' }),
+    );
+    assert.deepEqual(lines(fromGrind.roots), ['261204-BG-01', '  261206-BA-01 4000 g 2026-12-06']);
+  });
+
+  it('should refuse a lot or supplier lot nobody received, in words', async () => {
+    await assert.rejects(
+      reader.back('R991231-09'),
+      /no received lot or batch with lot code R991231-09/,
+    );
+    await assert.rejects(
+      reader.forwardRoots({ supplierLot: 'HF-4471', supplier: 'Fernlea Bakery' }),
+      /no delivery of supplier lot HF-4471 from Fernlea Bakery/,
+    );
+  });
+
+  it('should stop at a loop in the records and at the deepest level it follows', async () => {
+    // A loop no kitchen makes, but a mistyped record could: X made from Y made from X.
+    const x = await insertBatch(db, {
+      lot: '261210-LX-01',
+      formula: 'loop',
+      title: 'Loop',
+      status: 'done',
+      startedOn: '2026-12-10',
+    });
+    const y = await insertBatch(db, {
+      lot: '261210-LY-01',
+      formula: 'loop',
+      title: 'Loop',
+      status: 'done',
+      startedOn: '2026-12-10',
+    });
+    await insertUse(db, { batch: x, source: y, item: 'loop', amount: '1', usedOn: '2026-12-10' });
+    await insertUse(db, { batch: y, source: x, item: 'loop', amount: '1', usedOn: '2026-12-10' });
+    const loop: TraceAnswer = await reader.back('261210-LX-01');
+    assert.deepEqual(lines(loop.roots), [
+      '261210-LX-01',
+      '  261210-LY-01 1 g 2026-12-10',
+      '    261210-LX-01 1 g 2026-12-10 (cycle)',
+    ]);
+    assert.equal(loop.incomplete, true);
+    // A chain longer than a trace follows: each batch made from the one before.
+    let previous = await insertBatch(db, {
+      lot: '261211-CH-00',
+      formula: 'chain',
+      title: 'Chain',
+      status: 'done',
+      startedOn: '2026-12-11',
+    });
+    for (let i = 1; i <= MOST_LEVELS + 2; i++) {
+      const next = await insertBatch(db, {
+        lot: `261211-CH-${String(i).padStart(2, '0')}`,
+        formula: 'chain',
+        title: 'Chain',
+        status: 'done',
+        startedOn: '2026-12-11',
+      });
+      await insertUse(db, {
+        batch: next,
+        source: previous,
+        item: 'chain',
+        amount: '1',
+        usedOn: '2026-12-11',
+      });
+      previous = next;
+    }
+    const chain = await reader.forward(
+      { lot: '261211-CH-00' },
+      await reader.forwardRoots({ lot: '261211-CH-00' }),
+    );
+    const deepest = lines(chain.roots).at(-1) ?? '';
+    assert.match(
+      deepest,
+      new RegExp(`^ {${2 * MOST_LEVELS}}261211-CH-${MOST_LEVELS} 1 g 2026-12-11 \\(depth\\)$`),
+    );
+    assert.equal(chain.batches, MOST_LEVELS);
+    assert.equal(chain.incomplete, true);
+  });
+});
