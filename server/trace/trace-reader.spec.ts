@@ -24,11 +24,12 @@ describe('trace back and forward over received lots and lot uses', () => {
   let dir: string;
   let db: Database;
   let reader: TraceReader;
+  let batches: Record<string, number>;
   before(async () => {
     dir = mkdtempSync(path.join(tmpdir(), 'larder-trace-'));
     db = await openDatabase(path.join(dir, 'larderbook.sqlite'));
     reader = new TraceReader(db.sequelize);
-    await insertSmokehouseLots(db);
+    batches = await insertSmokehouseLots(db);
   });
   after(async () => {
     await db.close();
@@ -110,6 +111,34 @@ describe('trace back and forward over received lots and lot uses', () => {
       await reader.forwardRoots({ lot: '261204-BG-01' }),
     );
     assert.deepEqual(lines(fromGrind.roots), ['261204-BG-01', '  261206-BA-01 4000 g 2026-12-06']);
+  });
+
+  it('should not follow a use recorded again: the corrected record stands', async () => {
+    // The grind first recorded with the drawn kitchen's curing salt, then recorded again without
+    // it: the salt's forward trace stays the four batches drawn.
+    const [[salt]] = (await db.sequelize.query(
+      "SELECT id FROM receipts WHERE lot_code = 'R261201-92'",
+    )) as [{ id: number }[], unknown];
+    const use = await insertUse(db, {
+      batch: batches.bg,
+      receipt: salt.id,
+      item: 'curing-salt-1',
+      amount: '10',
+      usedOn: '2026-12-04',
+    });
+    await db.write((transaction) =>
+      db.sequelize.query("UPDATE lot_uses SET replaced_at = '2026-12-04T10:00:00Z' WHERE id = ?", {
+        replacements: [use],
+        transaction,
+      }),
+    );
+    const fromSalt = await reader.forward(
+      { lot: 'R261201-92' },
+      await reader.forwardRoots({ lot: 'R261201-92' }),
+    );
+    assert.equal(fromSalt.batches, 4);
+    const back = await reader.back('261204-BG-01');
+    assert.ok(!lines(back.roots).some((line) => line.includes('R261201-92')));
   });
 
   it('should refuse a lot or supplier lot nobody received, in words', async () => {

@@ -2,7 +2,8 @@
 // one lookup in an index: going back, a batch's uses by lot_uses_batch; going forward, a received
 // lot's uses by lot_uses_receipt and a batch's uses as an ingredient by lot_uses_source. Lists of
 // ids travel as one JSON array parameter (json_each), so a statement is prepared the same way
-// whatever the number of lots. trace-plans.spec.ts holds every statement to its indexes.
+// whatever the number of lots. trace-plans.spec.ts holds every statement to its indexes. Uses
+// recorded again (replaced_at set, migration 016) were corrected and are not followed.
 
 /** The deepest level a trace follows: far past any real kitchen's batches made from batches. */
 export const MOST_LEVELS = 16;
@@ -30,12 +31,12 @@ export const BACK_USES_SQL = `WITH RECURSIVE walk(batch_id, level) AS (
     VALUES (?1, 0)
     UNION
     SELECT u.source_batch_id, w.level + 1 FROM walk w
-      JOIN lot_uses u ON u.batch_id = w.batch_id
+      JOIN lot_uses u ON u.batch_id = w.batch_id AND u.replaced_at IS NULL
      WHERE u.source_batch_id IS NOT NULL AND w.level < ?2
   )
   SELECT ${USE_COLUMNS}
     FROM (SELECT DISTINCT batch_id FROM walk) w
-    JOIN lot_uses u ON u.batch_id = w.batch_id
+    JOIN lot_uses u ON u.batch_id = w.batch_id AND u.replaced_at IS NULL
    ORDER BY u.batch_id, u.id`;
 
 /**
@@ -46,19 +47,19 @@ export const BACK_USES_SQL = `WITH RECURSIVE walk(batch_id, level) AS (
  */
 export const FORWARD_USES_SQL = `WITH RECURSIVE walk(batch_id, level) AS (
     SELECT u.batch_id, 1 FROM json_each(?1) rj
-      JOIN lot_uses u ON u.receipt_id = rj.value AND u.receipt_id IS NOT NULL
+      JOIN lot_uses u ON u.receipt_id = rj.value AND u.receipt_id IS NOT NULL AND u.replaced_at IS NULL
     UNION
     SELECT bj.value, 0 FROM json_each(?2) bj
     UNION
     SELECT u.batch_id, w.level + 1 FROM walk w
-      JOIN lot_uses u ON u.source_batch_id = w.batch_id AND u.source_batch_id IS NOT NULL
+      JOIN lot_uses u ON u.source_batch_id = w.batch_id AND u.source_batch_id IS NOT NULL AND u.replaced_at IS NULL
      WHERE w.level < ?3
   )
   SELECT ${USE_COLUMNS} FROM json_each(?1) rj
-    JOIN lot_uses u ON u.receipt_id = rj.value AND u.receipt_id IS NOT NULL
+    JOIN lot_uses u ON u.receipt_id = rj.value AND u.receipt_id IS NOT NULL AND u.replaced_at IS NULL
   UNION ALL
   SELECT ${USE_COLUMNS} FROM (SELECT DISTINCT batch_id FROM walk) w
-    JOIN lot_uses u ON u.source_batch_id = w.batch_id AND u.source_batch_id IS NOT NULL
+    JOIN lot_uses u ON u.source_batch_id = w.batch_id AND u.source_batch_id IS NOT NULL AND u.replaced_at IS NULL
   ORDER BY 1`;
 
 /** A received lot as a trace reads it. */
