@@ -39,6 +39,8 @@ export const AUDIT_ACTIONS = [
   'report-produce',
   'plan-make',
   'plan-record',
+  'receipt-record',
+  'receipt-discard',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

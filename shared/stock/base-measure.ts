@@ -59,3 +59,12 @@ export function baseAmount(quantity: string, unit: ReceivedUnit, itemUnit: Stock
     throw new QuantityError(text, MEASURE_WORDS[measure], 'a delivery must be more than nothing');
   return amount;
 }
+
+/**
+ * What is left of a lot in the unit it came in: 2000 g left of 10 lb received (4535.9237 g) is
+ * 4.409 lb. Rounded half-up to 3 places, for display only; stock is kept in the base measure.
+ */
+export function remainingInUnit(remaining: Decimal, quantity: Decimal, amount: Decimal): Decimal {
+  if (amount.isZero()) return new Decimal(0);
+  return remaining.times(quantity).div(amount).toDecimalPlaces(3);
+}

@@ -103,6 +103,7 @@ export const TABLES = [
   'people',
   'audit_events',
   'formula_revisions',
+  'receipts',
 ];
 
 /** What the server has stored: row counts per table and every file of the formulas folder. */

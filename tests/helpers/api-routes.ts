@@ -10,6 +10,7 @@ import {
 } from './api-calls.ts';
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
+import { RECEIPT_ROUTES } from './receipt-routes.ts';
 import { WEIGHTS_ROUTES } from './weights-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
 
@@ -212,6 +213,7 @@ export const ROUTES: readonly RouteCase[] = [
   // Weights as weighed, starting a planned batch, refused calculations.
   ...WEIGHTS_ROUTES,
   ...EQUIPMENT_ROUTES,
+  ...RECEIPT_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',

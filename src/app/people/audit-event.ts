@@ -41,6 +41,8 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'report-produce', label: 'Produced a HACCP report' },
   { value: 'plan-make', label: 'Made a plan' },
   { value: 'plan-record', label: 'Recorded a plan as planned' },
+  { value: 'receipt-record', label: 'Received a delivery' },
+  { value: 'receipt-discard', label: 'Discarded a received lot' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));

@@ -1,0 +1,37 @@
+import type { Receipt, ReceiptPage, ReceiptRequest, StockView } from '../../shared/api/receipt.ts';
+import type { ChangeOptions } from '../batches/batch.ts';
+import type { ProcessDeps } from '../process/judge-and-open.ts';
+import { CatalogueItems } from './catalogue-items.ts';
+import {
+  listReceipts,
+  receiptLotOf,
+  showReceipt,
+  stockOnHand,
+  type ReceiptQuery,
+} from './receipt-reads.ts';
+import { discardReceipt, receive, type StockDeps } from './receipt-writes.ts';
+
+/** Receiving and stock by lot, as record keeping offers them to the API and the command. */
+export interface StockUseCases {
+  receive(request: ReceiptRequest, by: ChangeOptions): Promise<Receipt>;
+  list(query: ReceiptQuery): Promise<ReceiptPage>;
+  show(lot: string): Promise<Receipt>;
+  stock(today: string): Promise<StockView>;
+  discard(lot: string, reason: string, by: ChangeOptions): Promise<Receipt>;
+}
+
+/** The use cases over the process records and the catalogue in the formulas folder. */
+export function stockUseCases(process: ProcessDeps, formulasFolder: string): StockUseCases {
+  const deps: StockDeps = { ...process, catalogue: new CatalogueItems(formulasFolder) };
+  return {
+    receive: async (request, by) => showReceipt(deps, await receive(deps, request, by)),
+    list: (query) => listReceipts(deps, query),
+    show: (lot) => showReceipt(deps, lot),
+    stock: (today) => stockOnHand(deps, today),
+    discard: async (lot, reason, by) => {
+      const code = receiptLotOf(lot);
+      await discardReceipt(deps, code, reason, by);
+      return showReceipt(deps, code);
+    },
+  };
+}
