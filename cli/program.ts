@@ -9,7 +9,9 @@ import { newCommand } from './commands/new.ts';
 import { planCommand } from './commands/plan.ts';
 import { readingCommand } from './commands/reading.ts';
 import { readingsCommand } from './commands/readings.ts';
+import { receiveCommand } from './commands/receive.ts';
 import { reportCommand } from './commands/report.ts';
+import { stockCommand } from './commands/stock.ts';
 import { usersCommand } from './commands/users.ts';
 import type { Io } from './io.ts';
 
@@ -33,6 +35,8 @@ export function createProgram(io: Io): Command {
     readingCommand(io),
     readingsCommand(io),
     reportCommand(io),
+    receiveCommand(io),
+    stockCommand(io),
     usersCommand(io),
     backupCommand(io),
   ]) {

@@ -1,5 +1,6 @@
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import type { ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
+import type { Receipt, ReceiptRequest, StockView } from '../../shared/api/receipt.ts';
 import { presentPlan, type PresentedPlan } from '../../shared/index.ts';
 import {
   PROCESS_ROLES,
@@ -140,6 +141,17 @@ export class LocalRecords implements RecordKeeper {
     return asPerson('reading', PROCESS_ROLES, (records, actor) =>
       records.uploadReadings(lot, control, text, { actor }),
     );
+  }
+
+  receive(request: ReceiptRequest): Promise<Receipt> {
+    return asPerson('receive', RECORDING_ROLES, (records, actor) =>
+      records.receive(request, { actor }),
+    );
+  }
+
+  /** Stock on this machine's today (the kitchen's day). */
+  stock(): Promise<StockView> {
+    return withLocalRecords('stock', (records) => records.stockOnHand(today()));
   }
 
   /** The report from this machine's records, as whoever $LARDER_USER is (admin or reviewer). */

@@ -2,6 +2,7 @@ import { Option } from 'commander';
 import type { Batch, BatchPage } from '../../shared/api/batch-record.ts';
 import type { HaccpReport } from '../../shared/api/haccp-report.ts';
 import type { Deviation, ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
+import type { Receipt, ReceiptRequest, StockView } from '../../shared/api/receipt.ts';
 import type { PlanResult, PresentedPlan, RawBatchOptions, UnitSystem } from '../../shared/index.ts';
 
 /** A batch to record, as `larder calc --record` gives it. */
@@ -68,6 +69,10 @@ export interface RecordKeeper {
   uploadReadings(lot: string, control: string, text: string): Promise<UploadedReadings>;
   /** The HACCP records report of a period, in a format. */
   report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput>;
+  /** Receives a delivery at the door, as the person signed in (admin or cook). */
+  receive(request: ReceiptRequest): Promise<Receipt>;
+  /** What is on hand by item, first to expire first, on today. */
+  stock(): Promise<StockView>;
 }
 
 /**
