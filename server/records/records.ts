@@ -314,6 +314,13 @@ export class Records {
     return this.withStock((s) => s.receive(request, by));
   }
 
+  /** Several deliveries in one write, all or nothing (the demo's history); their lot codes. */
+  receiveAll(
+    deliveries: readonly { readonly request: ReceiptRequest; readonly by: ChangeOptions }[],
+  ): Promise<string[]> {
+    return this.withStock((s) => s.receiveAll(deliveries));
+  }
+
   /** A page of deliveries, newest first, filtered. */
   listReceipts(query: ReceiptQuery): Promise<ReceiptPage> {
     return this.withStock((s) => s.list(query));

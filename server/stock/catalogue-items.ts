@@ -11,7 +11,10 @@ import { AppError } from '../http/app-error.ts';
  * pull can be received at once.
  */
 export class CatalogueItems {
-  private cached: { mtimeMs: number; items: ReadonlyMap<string, CatalogueItem> } | undefined;
+  // The catalogue as last read, by the file's modification time: requests that arrive together
+  // share one read.
+  private cached:
+    { mtimeMs: number; items: Promise<ReadonlyMap<string, CatalogueItem>> } | undefined;
 
   constructor(private readonly folder: string) {}
 
@@ -30,7 +33,18 @@ export class CatalogueItems {
     } catch {
       return new Map();
     }
-    if (this.cached?.mtimeMs === mtimeMs) return this.cached.items;
+    if (this.cached?.mtimeMs !== mtimeMs) {
+      const items = this.read();
+      this.cached = { mtimeMs, items };
+      // A failed read is not kept: the next request reads the file again.
+      items.catch(() => {
+        if (this.cached?.items === items) this.cached = undefined;
+      });
+    }
+    return this.cached.items;
+  }
+
+  private async read(): Promise<ReadonlyMap<string, CatalogueItem>> {
     const reading = readCatalogue(await readFile(this.file, 'utf8'), CATALOGUE_FILE);
     if (!reading.catalogue)
       throw new AppError(
@@ -38,9 +52,7 @@ export class CatalogueItems {
         'catalogue-broken',
         `the catalogue of materials (${CATALOGUE_FILE}) has errors: check the formulas to see them`,
       );
-    const items = new Map(reading.catalogue.items.map((item) => [item.key, item]));
-    this.cached = { mtimeMs, items };
-    return items;
+    return new Map(reading.catalogue.items.map((item) => [item.key, item]));
   }
 
   /**

@@ -1,5 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import type { ReceiptRequest } from '../../shared/api/receipt.ts';
+import type { ReceiptRequest, ReceivingAction } from '../../shared/api/receipt.ts';
 import { appendChange } from '../audit/append-change.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
 import { prefixRange } from '../batches/lot-code.ts';
@@ -10,6 +10,7 @@ import { openDeviation } from '../process/deviation-writes.ts';
 import type { ProcessDeps } from '../process/judge-and-open.ts';
 import type { CatalogueItems } from './catalogue-items.ts';
 import { checkReceipt, type CheckedReceipt } from './receipt-input.ts';
+import { dayWords } from '../../shared/presentation/date-words.ts';
 import { MAX_RECEIPT_SEQUENCE, receiptLotCode, receiptPrefix } from './receipt-lot-code.ts';
 
 /** What receiving works with: the database, its audit log, the process records, the catalogue. */
@@ -34,25 +35,38 @@ async function select<T extends object>(
 }
 
 /**
- * The next free lot code of a receiving day, found inside the caller's write: BEGIN IMMEDIATE
- * holds the write lock, so no other delivery can take it meanwhile (as batches take theirs).
+ * The next free lot codes of the receiving days of a write, read in one query inside it: BEGIN
+ * IMMEDIATE holds the write lock, so no other delivery can take one meanwhile (as batches take
+ * theirs). Returns the function that gives a day's next code.
  */
-async function nextLotCode(deps: StockDeps, t: Transaction, receivedOn: string): Promise<string> {
-  const prefix = receiptPrefix(receivedOn);
-  const [low, high] = prefixRange(prefix);
-  const [last] = await select<{ n: number | null }>(
+async function lotCodes(
+  deps: StockDeps,
+  t: Transaction,
+  days: readonly string[],
+): Promise<(receivedOn: string) => string> {
+  const sorted = [...days].sort();
+  const [low] = prefixRange(receiptPrefix(sorted[0]));
+  const [, high] = prefixRange(receiptPrefix(sorted[sorted.length - 1]));
+  // Every code of a day has the day's prefix ("R261203-", 8 characters) and then its sequence.
+  const rows = await select<{ prefix: string; n: number }>(
     deps,
     t,
-    'SELECT MAX(CAST(substr(lot_code, ?) AS INTEGER)) AS n FROM receipts WHERE lot_code >= ? AND lot_code < ?',
-    [prefix.length + 1, low, high],
+    `SELECT substr(lot_code, 1, 8) AS prefix, MAX(CAST(substr(lot_code, 9) AS INTEGER)) AS n
+     FROM receipts WHERE lot_code >= ? AND lot_code < ? GROUP BY prefix`,
+    [low, high],
   );
-  const sequence = (last?.n ?? 0) + 1;
-  if (sequence > MAX_RECEIPT_SEQUENCE)
-    throw conflict(
-      'lot-codes-exhausted',
-      `${MAX_RECEIPT_SEQUENCE} deliveries are already received today`,
-    );
-  return receiptLotCode(receivedOn, sequence);
+  const last = new Map(rows.map((row) => [row.prefix, row.n]));
+  return (receivedOn) => {
+    const prefix = receiptPrefix(receivedOn);
+    const sequence = (last.get(prefix) ?? 0) + 1;
+    if (sequence > MAX_RECEIPT_SEQUENCE)
+      throw conflict(
+        'lot-codes-exhausted',
+        `${MAX_RECEIPT_SEQUENCE} deliveries are already received on ${dayWords(receivedOn)}`,
+      );
+    last.set(prefix, sequence);
+    return receiptLotCode(receivedOn, sequence);
+  };
 }
 
 async function insertReceipt(
@@ -116,58 +130,99 @@ export async function receive(
   request: ReceiptRequest,
   by: ChangeOptions,
 ): Promise<string> {
-  const at = by.at ?? new Date().toISOString();
-  const item = await deps.catalogue.item(request.item);
-  const checked = checkReceipt(request, item, at.slice(0, 10));
-  const action = checked.decision === 'accepted-with-action' ? request.action! : null;
-  const grams = action ? checkAction(action) : null;
+  const [lot] = await receiveAll(deps, [{ request, by }]);
+  return lot;
+}
+
+/**
+ * Receives several deliveries in one write, all or nothing, each as {@link receive} does (the
+ * demo's weeks of history at once). Returns their lot codes in order.
+ */
+export async function receiveAll(
+  deps: StockDeps,
+  deliveries: readonly { readonly request: ReceiptRequest; readonly by: ChangeOptions }[],
+): Promise<string[]> {
+  if (!deliveries.length) return [];
+  const checked = await Promise.all(
+    deliveries.map(async ({ request, by }) => {
+      const at = by.at ?? new Date().toISOString();
+      const item = await deps.catalogue.item(request.item);
+      const door = checkReceipt(request, item, at.slice(0, 10));
+      const action = door.decision === 'accepted-with-action' ? request.action! : null;
+      return { request, by, at, door, action, grams: action ? checkAction(action) : null };
+    }),
+  );
   return deps.db.write(async (t) => {
-    const lot = await nextLotCode(deps, t, at.slice(0, 10));
-    const id = await insertReceipt(deps, t, request, checked, lot, at, by);
-    await appendChange(deps.audit, t, by, 'receipt-record', lot, {
-      item: item.key,
-      supplier: request.supplier.trim(),
-      supplierLot: request.supplierLot.trim(),
-      quantity: `${checked.quantity} ${request.unit}`,
-      decision: checked.decision,
-      found: checked.judgement.words,
-    });
-    if (action) {
-      const deviation = await openDeviation(
-        deps.db,
-        deps.audit,
-        t,
-        {
-          batchId: null,
-          receiptId: id,
-          subject: lot,
-          control: RECEIVING_CONTROL,
-          kind: 'check',
-          what: `Delivery of ${checked.itemName} from ${request.supplier.trim()} (lot ${request.supplierLot.trim()}): ${checked.judgement.words}`,
-          key: `receipt ${id}/receiving`,
-        },
-        by,
-      );
-      await writeAction(
-        deps,
-        t,
-        {
-          deviationId: deviation!,
-          subject: lot,
-          cause: action.cause.trim(),
-          restored: action.restored.trim(),
-          prevention: action.prevention.trim(),
-          disposition: action.disposition,
-          grams,
-          replaces: null,
-          reason: null,
-        },
-        by,
-        at,
-      );
-    }
-    return lot;
+    const next = await lotCodes(
+      deps,
+      t,
+      checked.map((delivery) => delivery.at.slice(0, 10)),
+    );
+    const lots: string[] = [];
+    for (const delivery of checked)
+      lots.push(await writeReceipt(deps, t, delivery, next(delivery.at.slice(0, 10))));
+    return lots;
   });
+}
+
+/** One checked delivery written in the caller's write: the row, its audit entry, its deviation. */
+async function writeReceipt(
+  deps: StockDeps,
+  t: Transaction,
+  delivery: {
+    readonly request: ReceiptRequest;
+    readonly by: ChangeOptions;
+    readonly at: string;
+    readonly door: CheckedReceipt;
+    readonly action: ReceivingAction | null;
+    readonly grams: string | null;
+  },
+  lot: string,
+): Promise<string> {
+  const { request, by, at, door: checked, action, grams } = delivery;
+  const id = await insertReceipt(deps, t, request, checked, lot, at, by);
+  await appendChange(deps.audit, t, by, 'receipt-record', lot, {
+    item: checked.item.key,
+    supplier: request.supplier.trim(),
+    supplierLot: request.supplierLot.trim(),
+    quantity: `${checked.quantity} ${request.unit}`,
+    decision: checked.decision,
+    found: checked.judgement.words,
+  });
+  if (!action) return lot;
+  const deviation = await openDeviation(
+    deps.db,
+    deps.audit,
+    t,
+    {
+      batchId: null,
+      receiptId: id,
+      subject: lot,
+      control: RECEIVING_CONTROL,
+      kind: 'check',
+      what: `Delivery of ${checked.itemName} from ${request.supplier.trim()} (lot ${request.supplierLot.trim()}): ${checked.judgement.words}`,
+      key: `receipt ${id}/receiving`,
+    },
+    by,
+  );
+  await writeAction(
+    deps,
+    t,
+    {
+      deviationId: deviation!,
+      subject: lot,
+      cause: action.cause.trim(),
+      restored: action.restored.trim(),
+      prevention: action.prevention.trim(),
+      disposition: action.disposition,
+      grams,
+      replaces: null,
+      reason: null,
+    },
+    by,
+    at,
+  );
+  return lot;
 }
 
 /**

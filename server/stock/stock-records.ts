@@ -9,11 +9,15 @@ import {
   stockOnHand,
   type ReceiptQuery,
 } from './receipt-reads.ts';
-import { discardReceipt, receive, type StockDeps } from './receipt-writes.ts';
+import { discardReceipt, receive, receiveAll, type StockDeps } from './receipt-writes.ts';
 
 /** Receiving and stock by lot, as record keeping offers them to the API and the command. */
 export interface StockUseCases {
   receive(request: ReceiptRequest, by: ChangeOptions): Promise<Receipt>;
+  /** Several deliveries in one write, all or nothing; their lot codes. */
+  receiveAll(
+    deliveries: readonly { readonly request: ReceiptRequest; readonly by: ChangeOptions }[],
+  ): Promise<string[]>;
   list(query: ReceiptQuery): Promise<ReceiptPage>;
   show(lot: string): Promise<Receipt>;
   stock(today: string): Promise<StockView>;
@@ -25,6 +29,7 @@ export function stockUseCases(process: ProcessDeps, formulasFolder: string): Sto
   const deps: StockDeps = { ...process, catalogue: new CatalogueItems(formulasFolder) };
   return {
     receive: async (request, by) => showReceipt(deps, await receive(deps, request, by)),
+    receiveAll: (deliveries) => receiveAll(deps, deliveries),
     list: (query) => listReceipts(deps, query),
     show: (lot) => showReceipt(deps, lot),
     stock: (today) => stockOnHand(deps, today),

@@ -56,9 +56,10 @@ describe('larder receive and stock', () => {
       const stock = await runLarder(['stock', '--json'], { env });
       assertExit(stock, 0);
       const item = stdoutJson<StockView>(stock).items.find((i) => i.item === 'pork-belly');
-      assert.equal(item?.lots[0].supplierLot, 'TF-1');
+      const lot = item?.lots.find((l) => l.supplierLot === 'TF-1');
       // source: NIST SP 811 (2008), Appendix B.8: 40 lb = 18143.6948 g
-      assert.equal(item?.onHand, '18143.6948');
+      assert.equal(lot?.remaining, '18143.6948');
+      assert.equal(lot?.remainingInUnit, '40');
       const table = await runLarder(['stock'], { env });
       assertExit(table, 0);
       assert.match(table.stdout, /pork belly\s+R\d{6}-01\s+Test Farm Pork\s+TF-1\s+40 lb/);
