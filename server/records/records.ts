@@ -42,7 +42,13 @@ import {
   type WeighingCorrection,
 } from '../process/weighing-writes.ts';
 import { RecordsError, recordsErrorOf } from './records-error.ts';
-import type { Receipt, ReceiptPage, ReceiptRequest, StockView } from '../../shared/api/receipt.ts';
+import type {
+  Receipt,
+  ReceiptPage,
+  ReceiptRequest,
+  ReceivingItem,
+  StockView,
+} from '../../shared/api/receipt.ts';
 import type { ReceiptQuery } from '../stock/receipt-reads.ts';
 import type { StockUseCases } from '../stock/stock-records.ts';
 import type {
@@ -334,6 +340,11 @@ export class Records {
   /** What is on hand by item on a day, first to expire first. */
   stockOnHand(today: string): Promise<StockView> {
     return this.withStock((s) => s.stock(today));
+  }
+
+  /** The catalogue's items as the receiving door shows them, with their limits. */
+  receivingItems(): Promise<ReceivingItem[]> {
+    return this.withStock((s) => s.items());
   }
 
   /** Discards what is left of a received lot, with the reason. */

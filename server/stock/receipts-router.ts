@@ -94,9 +94,15 @@ export function receiptsRouter(context: AppContext): Router {
   return router;
 }
 
-/** GET /api/stock: what is on hand by item, first to expire first; everyone signed in. */
+/**
+ * GET /api/stock: what is on hand by item, first to expire first; GET /api/stock/items: the
+ * catalogue's items with their receiving limits, for the receiving form. Everyone signed in.
+ */
 export function stockRouter(context: AppContext): Router {
   const router = Router();
+  router.get('/items', allowQuery(), async (_req, res) => {
+    res.json({ items: await context.records.receivingItems() });
+  });
   router.get('/', allowQuery(), async (_req, res) => {
     res.json(await context.records.stockOnHand(serverToday(context)));
   });

@@ -132,3 +132,21 @@ export interface StockView {
   readonly today: string;
   readonly items: readonly StockItemView[];
 }
+
+/** A catalogue item as the receiving door shows it (GET /api/stock/items). */
+export interface ReceivingItem {
+  readonly key: string;
+  /** The name its formula lines give it ("pork belly"), else its label name. */
+  readonly name: string;
+  readonly kind: string;
+  /** The unit it is stocked in, and the units a delivery of it may be given in. */
+  readonly unit: string;
+  readonly units: readonly string[];
+  /** Whether a delivery needs the establishment number (meat and poultry). */
+  readonly establishment: boolean;
+  /** Whether the door needs a reading (chilled goods and shell eggs). */
+  readonly temperature: boolean;
+  /** Its receiving limit, and the limit when it is shipped frozen. */
+  readonly limit: { readonly words: string; readonly source: string | null };
+  readonly frozenLimit: { readonly words: string; readonly source: string | null };
+}

@@ -28,6 +28,7 @@ export const routes: Routes = [
       { path: 'batches', loadChildren: () => import('./batches/batches.routes') },
       { path: 'plans', loadChildren: () => import('./plans/plans.routes') },
       { path: 'equipment', loadChildren: () => import('./equipment/equipment.routes') },
+      { path: 'deliveries', loadChildren: () => import('./stock/stock.routes') },
       {
         path: 'reports',
         canMatch: [roleGuard('admin', 'reviewer')],

@@ -192,6 +192,28 @@ describe('receiving deliveries', () => {
     assert.equal(again.json.error.code, 'not-on-hand');
   });
 
+  it('should list the catalogue items with their receiving limits for the form', async (t) => {
+    const server = await startTestServer(t);
+    const answer = await server.as('imke').get('/api/stock/items');
+    assert.equal(answer.status, 200, answer.text);
+    const items = answer.json.items as {
+      key: string;
+      limit: { words: string };
+      establishment: boolean;
+      units: string[];
+    }[];
+    const belly = items.find((i) => i.key === 'pork-belly')!;
+    // source: FDA Food Code 2022, §3-202.11(A): 5 °C (41 °F) or below
+    assert.equal(belly.limit.words, '5 °C (41 °F) or colder');
+    assert.equal(belly.establishment, true);
+    assert.deepEqual(belly.units, ['g', 'kg', 'oz', 'lb']);
+    assert.equal(
+      items.find((i) => i.key === 'nonfat-dry-milk')!.limit.words,
+      'no temperature limit',
+    );
+    assert.ok(!items.some((i) => i.key === 'water'));
+  });
+
   it('should give every concurrent delivery its own lot code', async (t) => {
     const server = await startTestServer(t);
     const answers = await Promise.all(

@@ -42,6 +42,7 @@ export const SCREENS: readonly Screen[] = [
   { name: 'today', path: () => '/today' },
   { name: 'sign-off-queue', path: () => '/batches?show=sign-off' },
   { name: 'equipment', path: () => '/equipment' },
+  { name: 'deliveries', path: () => '/deliveries' },
   { name: 'haccp-report', path: () => '/reports' },
   { name: 'people', path: () => '/people' },
   { name: 'audit', path: () => '/people/audit' },

@@ -45,4 +45,5 @@ export const RECEIPT_ROUTES: readonly RouteCase[] = [
     body: { reason: 'Dropped on the dock.' },
   })),
   route('GET', '/api/stock', ALL, async () => ({ path: '/api/stock' })),
+  route('GET', '/api/stock/items', ALL, async () => ({ path: '/api/stock/items' })),
 ];
