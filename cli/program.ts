@@ -10,8 +10,10 @@ import { planCommand } from './commands/plan.ts';
 import { readingCommand } from './commands/reading.ts';
 import { readingsCommand } from './commands/readings.ts';
 import { recallCommand } from './commands/recall.ts';
-import { reportCommand } from './commands/report.ts';
 import { traceCommand } from './commands/trace.ts';
+import { receiveCommand } from './commands/receive.ts';
+import { reportCommand } from './commands/report.ts';
+import { stockCommand } from './commands/stock.ts';
 import { usersCommand } from './commands/users.ts';
 import type { Io } from './io.ts';
 
@@ -37,6 +39,8 @@ export function createProgram(io: Io): Command {
     reportCommand(io),
     traceCommand(io),
     recallCommand(io),
+    receiveCommand(io),
+    stockCommand(io),
     usersCommand(io),
     backupCommand(io),
   ]) {

@@ -35,6 +35,7 @@ import { refusalsRouter } from './process/refusals-router.ts';
 import { batchWeighingsRouter, weighingsRouter } from './process/weighings-router.ts';
 import { lotUsesRouter } from './lot-uses/lot-uses-router.ts';
 import { traceRouter } from './trace/trace-router.ts';
+import { receiptsRouter, stockRouter } from './stock/receipts-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
 const JSON_LIMIT = '512kb';
@@ -93,6 +94,8 @@ export function createApp(context: AppContext): Express {
   api.use('/people', peopleRouter(context));
   api.use('/audit', auditRouter(context));
   api.use('/reports', reportsRouter(context));
+  api.use('/receipts', receiptsRouter(context));
+  api.use('/stock', stockRouter(context));
   api.use('/outbox', outboxRouter(context));
   api.use('/trace', traceRouter(context));
   api.use(apiNotFound);

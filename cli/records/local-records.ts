@@ -5,6 +5,7 @@ import type { PlanWithStock } from '../../shared/api/plan-record.ts';
 import { presentPlan, readCatalogue, type PresentedPlan } from '../../shared/index.ts';
 import { catalogueIn, catalogueText } from '../check-catalogue.ts';
 import type { TraceSearch } from '../../shared/api/trace-record.ts';
+import type { Receipt, ReceiptRequest, StockView } from '../../shared/api/receipt.ts';
 import {
   PROCESS_ROLES,
   RECORDING_ROLES,
@@ -171,6 +172,17 @@ export class LocalRecords implements RecordKeeper {
     return asPerson('reading', PROCESS_ROLES, (records, actor) =>
       records.uploadReadings(lot, control, text, { actor }),
     );
+  }
+
+  receive(request: ReceiptRequest): Promise<Receipt> {
+    return asPerson('receive', RECORDING_ROLES, (records, actor) =>
+      records.receive(request, { actor }),
+    );
+  }
+
+  /** Stock on this machine's today (the kitchen's day). */
+  stock(): Promise<StockView> {
+    return withLocalRecords('stock', (records) => records.stockOnHand(today()));
   }
 
   /** The report from this machine's records, as whoever $LARDER_USER is (admin or reviewer). */

@@ -11,6 +11,7 @@ import type {
   UnitSystem,
 } from '../../shared/index.ts';
 import type { RecallReport, TraceAnswer, TraceSearch } from '../../shared/api/trace-record.ts';
+import type { Receipt, ReceiptRequest, StockView } from '../../shared/api/receipt.ts';
 
 /** A batch to record, as `larder calc --record` gives it. */
 export interface BatchToRecord {
@@ -99,6 +100,10 @@ export interface RecordKeeper {
   trace(lot: string): Promise<TracedBothWays>;
   /** The recall report of a supplier lot, a received lot or a batch, in a format. */
   recall(format: RecallOutput['format'], search: TraceSearch): Promise<RecallOutput>;
+  /** Receives a delivery at the door, as the person signed in (admin or cook). */
+  receive(request: ReceiptRequest): Promise<Receipt>;
+  /** What is on hand by item, first to expire first, on today. */
+  stock(): Promise<StockView>;
 }
 
 /**

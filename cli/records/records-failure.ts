@@ -5,7 +5,17 @@ import { CliError, EXIT } from '../cli-error.ts';
 
 /** What a larder verb does with the records; each says its failures in its own words. */
 export type RecordsVerb =
-  'record' | 'list' | 'show' | 'users' | 'backup' | 'reading' | 'report' | 'trace' | 'recall';
+  | 'record'
+  | 'list'
+  | 'show'
+  | 'users'
+  | 'backup'
+  | 'reading'
+  | 'report'
+  | 'trace'
+  | 'recall'
+  | 'receive'
+  | 'stock';
 
 /** A failure of record keeping, from this machine's records or a server's answer. */
 export interface RecordsFailureFacts {
@@ -26,6 +36,8 @@ const NOT_FOUND_EXIT: Readonly<Record<RecordsVerb, number>> = {
   report: EXIT.usage,
   trace: EXIT.usage,
   recall: EXIT.usage,
+  receive: EXIT.usage,
+  stock: EXIT.usage,
 };
 
 /** Whether a refusal is a formula file's fault: its errors, or a plan refused over one. */
@@ -65,12 +77,25 @@ function alreadyRecordedLines(details: readonly unknown[]): string[] {
   ];
 }
 
+/** What `larder receive` is missing, in its own options. */
+const RECEIVE_HINTS: Readonly<Record<string, string>> = {
+  'decision-needed':
+    'give --refuse, or --accept with --cause, --restored, --prevention and --disposition',
+  'action-needed': 'give --cause, --restored, --prevention and --disposition',
+  'establishment-needed': 'give --establishment',
+  'temperature-needed': 'give --temperature',
+  'frozen-needed': 'give --frozen solid or --frozen thawed',
+  'note-needed': 'give --note saying why',
+};
+
 /**
  * The one place record keeping's failures become the command's: the exit code and the lines
  * under the message. A refused batch's message already names every failed check, a refused
  * logger file's the line at fault; a plan recorded before lists the lots it has.
  */
 export function cliErrorOf(failure: RecordsFailureFacts, verb: RecordsVerb): CliError {
+  const hint = verb === 'receive' ? RECEIVE_HINTS[failure.code] : undefined;
+  if (hint) return new CliError(failure.message, exitCodeOf(failure, verb), [hint]);
   const details =
     failure.code === 'plan-already-recorded'
       ? alreadyRecordedLines(failure.details)
@@ -89,6 +114,8 @@ const WHO = {
   report: 'say who is producing the report',
   trace: 'say who is reading',
   recall: 'say who is producing the recall report',
+  receive: 'say who is receiving the delivery',
+  stock: 'say who is reading',
 } as const;
 
 /** A verb that acts as a person: recording, or reading a server's log. */

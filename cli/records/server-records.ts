@@ -3,6 +3,7 @@ import type { HaccpReport } from '../../shared/api/haccp-report.ts';
 import type { ReadingAnswer, ReadingRequest } from '../../shared/api/process-record.ts';
 import type { PlanWithStock } from '../../shared/api/plan-record.ts';
 import type { RecallReport, TraceAnswer, TraceSearch } from '../../shared/api/trace-record.ts';
+import type { Receipt, ReceiptRequest, StockView } from '../../shared/api/receipt.ts';
 import type { PresentedPlan } from '../../shared/index.ts';
 import { failureOfStatus } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
@@ -84,6 +85,15 @@ export class ServerRecords implements RecordKeeper {
   uploadReadings(lot: string, control: string, text: string): Promise<UploadedReadings> {
     const route = `/api/batches/${encodeURIComponent(lot)}/readings/upload?${new URLSearchParams({ control })}`;
     return this.call('reading', 'POST', route, new TextBody('text/csv', text));
+  }
+
+  async receive(request: ReceiptRequest): Promise<Receipt> {
+    return (await this.call<{ receipt: Receipt }>('receive', 'POST', '/api/receipts', request))
+      .receipt;
+  }
+
+  stock(): Promise<StockView> {
+    return this.call('stock', 'GET', '/api/stock');
   }
 
   async report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput> {

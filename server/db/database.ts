@@ -19,6 +19,7 @@ import * as loggerSummaries from './migrations/013-logger-summaries.ts';
 import * as turns from './migrations/014-turns.ts';
 import * as stock from './migrations/015-stock.ts';
 import * as lotUsesReplaced from './migrations/016-lot-uses-replaced.ts';
+import * as receiptJudgement from './migrations/017-receipt-judgement.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -47,6 +48,7 @@ const MIGRATIONS = [
   turns,
   stock,
   lotUsesReplaced,
+  receiptJudgement,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

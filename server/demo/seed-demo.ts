@@ -1,13 +1,15 @@
 import type { AppContext } from '../app-context.ts';
 import { DEMO_PEOPLE } from './demo-people.ts';
 import { seedBatches } from './seed-batches.ts';
+import { seedDeliveries } from './seed-deliveries.ts';
 import { seedEquipment } from './seed-equipment.ts';
 import { seedProcess } from './seed-process.ts';
 
 /**
- * Fills an empty demo database with the invented kitchen's people, a few weeks of their batches,
- * the process records of a few of them and a few days of their equipment logs. Runs only in demo
- * mode and only when there is nobody yet, so restarting the demo keeps what was done in it.
+ * Fills an empty demo database with the invented kitchen's people, a few weeks of their batches
+ * and of the deliveries they could be made from, the process records of a few of them and a few
+ * days of their equipment logs. Runs only in demo mode and only when there is nobody yet, so
+ * restarting the demo keeps what was done in it.
  */
 export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }> {
   if ((await context.people.count()) > 0) return { seeded: false };
@@ -15,6 +17,7 @@ export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }
     for (const person of DEMO_PEOPLE) await context.people.add(person, transaction);
   });
   await seedBatches(context);
+  await seedDeliveries(context);
   await seedProcess(context);
   await seedEquipment(context);
   return { seeded: true };

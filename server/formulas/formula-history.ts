@@ -87,6 +87,11 @@ export class FormulaHistory {
     private readonly audit: AuditRepository,
   ) {}
 
+  /** The folder the formulas (and the catalogue of materials beside them) are read from. */
+  get folder(): string {
+    return this.store.folder;
+  }
+
   /** Records a revision; returns its row id. */
   async insert(revision: NewRevision, transaction: Transaction): Promise<number> {
     // sqlite answers an INSERT with [last row id, rows changed]. Bound, not replaced into the SQL:

@@ -15,19 +15,19 @@ import { heading, subheading } from './sheet-sections.ts';
 import { dayInWords, momentInWords } from './sheet-words.ts';
 
 const muted = (text: string) => ({ text, style: { size: SMALL, color: INK.muted } });
-const header = (...labels: string[]): Row => ({ cells: labels.map(muted) });
+export const header = (...labels: string[]): Row => ({ cells: labels.map(muted) });
 
 /** "1 Dec 2026 to 31 Dec 2026" */
 export const periodWords = (head: ReportHead): string =>
   `${dayInWords(head.from)} to ${dayInWords(head.to)}`;
 
 /** A value in its control's unit; as kept when the control's unit is not known. */
-function valueWords(value: string, unit: string): string {
+export function valueWords(value: string, unit: string): string {
   return unit ? inWords(value, unit) : value;
 }
 
 /** Who and when: "Tobin Ashgrove, 2 Dec 2026, 14:32". */
-function byWords(by: { displayName: string } | null, at: string): string {
+export function byWords(by: { displayName: string } | null, at: string): string {
   return `${by?.displayName ?? 'Larderbook'}, ${momentInWords(at)}`;
 }
 
@@ -106,7 +106,7 @@ function controlsTable(layout: SheetLayout, controls: readonly ReportControl[]):
 }
 
 /** The deviations, each with its corrective action's four parts (9 CFR 417.3(a)). */
-function deviationsBlock(layout: SheetLayout, deviations: readonly Deviation[]): void {
+export function deviationsBlock(layout: SheetLayout, deviations: readonly Deviation[]): void {
   if (!deviations.length) return;
   subheading(layout, 'Deviations and corrective actions');
   layout.table(

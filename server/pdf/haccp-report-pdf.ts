@@ -3,9 +3,11 @@ import type {
   ReportBatch,
   ReportEquipment,
   ReportHead,
+  ReportReceipt,
   ReportRefusal,
 } from '../../shared/api/haccp-report.ts';
 import { batchBlock, equipmentBlock, periodWords, refusalsBlock } from './haccp-report-blocks.ts';
+import { receivingBlock } from './haccp-receiving-block.ts';
 import {
   countedPages,
   countingSheet,
@@ -22,6 +24,7 @@ export interface HaccpReportParts {
   readonly batches: AsyncIterable<ReportBatch>;
   readonly refusals: () => Promise<readonly ReportRefusal[]>;
   readonly equipment: () => Promise<readonly ReportEquipment[]>;
+  readonly receiving: () => Promise<readonly ReportReceipt[]>;
 }
 
 /** The report's records, all read before the first page is laid out. */
@@ -30,6 +33,7 @@ interface ReportContent {
   readonly batches: readonly ReportBatch[];
   readonly refusals: readonly ReportRefusal[];
   readonly equipment: readonly ReportEquipment[];
+  readonly receiving: readonly ReportReceipt[];
 }
 
 /** The report's sheet: its title, and the period in every running header and footer. */
@@ -47,7 +51,7 @@ function reportSetup(head: ReportHead): SheetSetup {
 /** Lays the report out; `pause` is awaited after each batch, to let the pages written go out. */
 async function layReport(
   layout: SheetLayout,
-  { head, batches, refusals, equipment }: ReportContent,
+  { head, batches, refusals, equipment, receiving }: ReportContent,
   pause: () => Promise<void> = async () => undefined,
 ): Promise<void> {
   layout.draw(
@@ -83,6 +87,7 @@ async function layReport(
   if (!batches.length) layout.paragraph('No batches in the period.');
   refusalsBlock(layout, refusals);
   equipmentBlock(layout, equipment);
+  receivingBlock(layout, receiving);
 }
 
 /** Batches laid out between turns of the event loop, when the pages written go out. */
@@ -112,6 +117,7 @@ export async function renderHaccpReportPdf(parts: HaccpReportParts): Promise<Hac
     batches,
     refusals: await parts.refusals(),
     equipment: await parts.equipment(),
+    receiving: await parts.receiving(),
   };
   const counting = countingSheet(reportSetup(parts.head));
   await layReport(counting, content);

@@ -64,8 +64,21 @@ function gramsOf(request: ActionRequest): string | null {
   }
 }
 
+/**
+ * Checks the four things of a corrective action and gives the amount of product in grams (null
+ * when none is said).
+ * @throws AppError 422 'bad-action': a blank text, a disposition not known, no amount
+ */
+export function checkAction(request: ActionRequest): string | null {
+  for (const field of ['cause', 'restored', 'prevention'] as const)
+    if (!request[field]?.trim()) throw refused(field, `say ${FIELD_WORDS[field]}`);
+  if (!DISPOSITIONS.includes(request.disposition))
+    throw refused('disposition', `say what happened to the product: ${DISPOSITIONS.join(', ')}`);
+  return gramsOf(request);
+}
+
 /** One corrective action to write: what it closes, the four things, what it replaces. */
-interface NewAction {
+export interface NewAction {
   readonly deviationId: number;
   /** The lot code or equipment name, for the audit log. */
   readonly subject: string;
@@ -83,7 +96,7 @@ interface NewAction {
  * Writes a corrective action and its audit entry in the caller's write. `by` is null when the
  * server records it (a deadline the readings showed was met).
  */
-async function writeAction(
+export async function writeAction(
   deps: ProcessDeps,
   t: Transaction,
   action: NewAction,
@@ -183,19 +196,16 @@ export async function recordAction(
   request: ActionRequest,
   by: ChangeOptions,
 ): Promise<Deviation> {
-  for (const field of ['cause', 'restored', 'prevention'] as const)
-    if (!request[field]?.trim()) throw refused(field, `say ${FIELD_WORDS[field]}`);
-  if (!DISPOSITIONS.includes(request.disposition))
-    throw refused('disposition', `say what happened to the product: ${DISPOSITIONS.join(', ')}`);
-  const grams = gramsOf(request);
+  const grams = checkAction(request);
   const at = by.at ?? new Date().toISOString();
   return deps.db.write(async (t) => {
     const [deviation] = await deps.db.sequelize.query<DeviationAt>(
-      `SELECT d.id, d.batch_id, COALESCE(b.lot_code, e.name) AS subject,
+      `SELECT d.id, d.batch_id, COALESCE(b.lot_code, e.name, r.lot_code) AS subject,
          (SELECT a.id FROM corrective_actions a WHERE a.deviation_id = d.id AND NOT EXISTS
            (SELECT 1 FROM corrective_actions c WHERE c.corrects_id = a.id)) AS standing
        FROM deviations d LEFT JOIN batches b ON b.id = d.batch_id
-         LEFT JOIN equipment e ON e.id = d.equipment_id WHERE d.id = ?`,
+         LEFT JOIN equipment e ON e.id = d.equipment_id
+         LEFT JOIN receipts r ON r.id = d.receipt_id WHERE d.id = ?`,
       { replacements: [deviationId], type: QueryTypes.SELECT, transaction: t },
     );
     if (!deviation?.subject) throw notFound(`no deviation ${deviationId}`);

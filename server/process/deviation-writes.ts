@@ -9,6 +9,8 @@ import { insertRow } from '../db/insert-row.ts';
 export interface DeviationToOpen {
   readonly batchId: number | null;
   readonly equipmentId?: number | null;
+  /** The delivery it is about: one taken in over its receiving limit. */
+  readonly receiptId?: number | null;
   /** The lot code or equipment name, for the audit log. */
   readonly subject: string;
   readonly control: string | null;
@@ -41,11 +43,12 @@ export async function openDeviation(
   const inserted = await insertRow(
     db,
     t,
-    `INSERT INTO deviations (batch_id, equipment_id, control, kind, what, opened_at, opened_by, reading_id, dedupe_key)
-     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING`,
+    `INSERT INTO deviations (batch_id, equipment_id, receipt_id, control, kind, what, opened_at, opened_by, reading_id, dedupe_key)
+     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (dedupe_key) DO NOTHING`,
     [
       deviation.batchId,
       deviation.equipmentId ?? null,
+      deviation.receiptId ?? null,
       deviation.control,
       deviation.kind,
       deviation.what,

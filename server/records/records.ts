@@ -56,6 +56,15 @@ import {
 } from '../process/weighing-writes.ts';
 import { RecordsError, recordsErrorOf } from './records-error.ts';
 import type {
+  Receipt,
+  ReceiptPage,
+  ReceiptRequest,
+  ReceivingItem,
+  StockView,
+} from '../../shared/api/receipt.ts';
+import type { ReceiptQuery } from '../stock/receipt-reads.ts';
+import type { StockUseCases } from '../stock/stock-records.ts';
+import type {
   Deviation,
   ProcessNow,
   ProcessRecord,
@@ -94,6 +103,7 @@ export type { SheetRecord, SheetSource };
 export type { ProducedReport, ReportFormat, ReportRequest };
 export type { ActionRequest, CorrectionRequest, UploadAnswer };
 export type { ProducedRecall, RecallFormat, RecallRequest };
+export type { Receipt, ReceiptPage, ReceiptQuery, ReceiptRequest, StockView };
 
 /** The fewest characters a password may have. */
 export { MIN_PASSWORD_LENGTH };
@@ -331,6 +341,57 @@ export class Records {
   /** What needs attention now across the batches being made. */
   processNow(now: string = new Date().toISOString()): Promise<ProcessNow> {
     return this.withProcess((p) => p.use.processNow(p.process, now));
+  }
+
+  // Receiving and stock by lot. The stock code loads on first use, with the process records'.
+  private stock?: Promise<StockUseCases>;
+
+  private stockRecords(): Promise<StockUseCases> {
+    this.stock ??= Promise.all([this.processRecords(), import('../stock/stock-records.ts')]).then(
+      ([p, m]) => m.stockUseCases(p, this.deps.history.folder),
+    );
+    return this.stock;
+  }
+
+  private withStock<T>(work: (s: StockUseCases) => Promise<T>): Promise<T> {
+    return this.guard(async () => work(await this.stockRecords()));
+  }
+
+  /** Receives a delivery; over its limit it is refused, or taken in with its corrective action. */
+  receive(request: ReceiptRequest, by: ChangeOptions): Promise<Receipt> {
+    return this.withStock((s) => s.receive(request, by));
+  }
+
+  /** Several deliveries in one write, all or nothing (the demo's history); their lot codes. */
+  receiveAll(
+    deliveries: readonly { readonly request: ReceiptRequest; readonly by: ChangeOptions }[],
+  ): Promise<string[]> {
+    return this.withStock((s) => s.receiveAll(deliveries));
+  }
+
+  /** A page of deliveries, newest first, filtered. */
+  listReceipts(query: ReceiptQuery): Promise<ReceiptPage> {
+    return this.withStock((s) => s.list(query));
+  }
+
+  /** One delivery by the kitchen's lot code. */
+  showReceipt(lot: string): Promise<Receipt> {
+    return this.withStock((s) => s.show(lot));
+  }
+
+  /** What is on hand by item on a day, first to expire first. */
+  stockOnHand(today: string): Promise<StockView> {
+    return this.withStock((s) => s.stock(today));
+  }
+
+  /** The catalogue's items as the receiving door shows them, with their limits. */
+  receivingItems(): Promise<ReceivingItem[]> {
+    return this.withStock((s) => s.items());
+  }
+
+  /** Discards what is left of a received lot, with the reason. */
+  discardReceipt(lot: string, reason: string, by: ChangeOptions): Promise<Receipt> {
+    return this.withStock((s) => s.discard(lot, reason, by));
   }
 
   /** The active person with this username and password, if there is one. */

@@ -2,6 +2,7 @@ import type {
   ReportBatch,
   ReportEquipment,
   ReportHead,
+  ReportReceipt,
   ReportRefusal,
 } from '../../shared/api/haccp-report.ts';
 import type { CorrectiveAction, Deviation, Reading } from '../../shared/api/process-record.ts';
@@ -251,5 +252,31 @@ export function equipmentCsv(equipment: readonly ReportEquipment[]): string {
       for (const d of item.deviations) entries.push(...deviationEntries(d));
       return entries.map((entry) => line({ equipment: item.name, ...entry }));
     })
+    .join('');
+}
+
+/** The deliveries at the door as CSV records: the receiving control, each with its deviation. */
+export function receivingCsv(receiving: readonly ReportReceipt[]): string {
+  return receiving
+    .map((r) =>
+      [
+        {
+          type: 'receipt',
+          lot_code: r.lotCode,
+          control: 'receiving',
+          at: r.receivedAt,
+          value: r.temperatureC,
+          unit: r.temperatureC === null ? null : '°C',
+          by: r.by?.displayName ?? null,
+          limit: r.limit,
+          limit_source: r.limitSource,
+          what: `${r.itemName} from ${r.supplier}, lot ${r.supplierLot}${r.establishment ? `, ${r.establishment}` : ''}: ${r.found}`,
+          note: r.note ? `${r.decision}; ${r.note}` : r.decision,
+        },
+        ...r.deviations.flatMap(deviationEntries),
+      ]
+        .map((entry) => line({ lot_code: r.lotCode, ...entry }))
+        .join(''),
+    )
     .join('');
 }

@@ -178,11 +178,11 @@ export async function batchRecords(
   return { batches, readings, logged, weighings, deviations, actions, verifications };
 }
 
-const DEVIATION_SELECT = `SELECT d.id, d.batch_id, d.equipment_id, d.control, d.kind, d.what,
+export const DEVIATION_SELECT = `SELECT d.id, d.batch_id, d.equipment_id, d.control, d.kind, d.what,
     d.opened_at, d.opened_by, p.display_name AS opener_name, d.dedupe_key, d.reading_id
   FROM deviations d LEFT JOIN people p ON p.id = d.opened_by`;
 
-const ACTION_SELECT = `SELECT ${STAMP_COLUMNS}, x.deviation_id, x.cause, x.restored, x.prevention,
+export const ACTION_SELECT = `SELECT ${STAMP_COLUMNS}, x.deviation_id, x.cause, x.restored, x.prevention,
     x.disposition, x.disposition_grams
   FROM corrective_actions x LEFT JOIN people rp ON rp.id = x.recorded_by`;
 

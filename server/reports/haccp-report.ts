@@ -29,6 +29,7 @@ import {
   type RefusalRow,
 } from './haccp-queries.ts';
 import type { ReportPeriod } from './report-period.ts';
+import { reportReceiving } from './report-receiving.ts';
 import {
   calibrationOf,
   groupBy,
@@ -249,5 +250,6 @@ export async function haccpReport(
     batches,
     refusals: await reportRefusals(source, period),
     equipment: await reportEquipment(source, period),
+    receiving: await reportReceiving(source.sequelize, period),
   };
 }

@@ -6,7 +6,15 @@ import { kitchenTimeZone } from '../process/kitchen-clock.ts';
 import type { HaccpReport, ReportHead } from '../../shared/api/haccp-report.ts';
 import type { Person } from '../../shared/api/person.ts';
 import { RecordsError } from '../records/records-error.ts';
-import { HACCP_CSV_HEADER, batchCsv, equipmentCsv, headCsv, refusalsCsv } from './haccp-csv.ts';
+import {
+  HACCP_CSV_HEADER,
+  batchCsv,
+  equipmentCsv,
+  headCsv,
+  receivingCsv,
+  refusalsCsv,
+} from './haccp-csv.ts';
+import { reportReceiving } from './report-receiving.ts';
 import { periodBatchIds } from './haccp-queries.ts';
 import {
   haccpReport,
@@ -43,6 +51,7 @@ async function* csvChunks(source: ReportSource, period: ReportPeriod, head: Repo
   for await (const batch of reportBatches(source, ids)) yield batchCsv(batch);
   yield refusalsCsv(await reportRefusals(source, period));
   yield equipmentCsv(await reportEquipment(source, period));
+  yield receivingCsv(await reportReceiving(source.sequelize, period));
 }
 
 /**
@@ -93,6 +102,7 @@ export async function produceReport(
     batches: reportBatches(source, ids ?? []),
     refusals: () => reportRefusals(source, period),
     equipment: () => reportEquipment(source, period),
+    receiving: () => reportReceiving(db.sequelize, period),
   });
   return { format, file, body };
 }

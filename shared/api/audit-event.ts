@@ -41,6 +41,8 @@ export const AUDIT_ACTIONS = [
   'plan-record',
   'batch-lots',
   'recall-produce',
+  'receipt-record',
+  'receipt-discard',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

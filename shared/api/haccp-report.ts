@@ -88,6 +88,28 @@ export interface ReportEquipment {
   readonly deviations: readonly Deviation[];
 }
 
+/** A delivery at the door in the period: its temperature against its limit, and what was done. */
+export interface ReportReceipt {
+  readonly lotCode: string;
+  readonly item: string;
+  readonly itemName: string;
+  readonly supplier: string;
+  readonly supplierLot: string;
+  readonly establishment: string | null;
+  readonly receivedAt: string;
+  readonly by: PersonRef | null;
+  /** °C, exact decimal string, or null. */
+  readonly temperatureC: string | null;
+  readonly limit: string;
+  readonly limitSource: string | null;
+  /** What was found against the limit, in words. */
+  readonly found: string;
+  readonly decision: string;
+  readonly note: string | null;
+  /** The deviation a delivery taken in over its limit opened, with its corrective action. */
+  readonly deviations: readonly Deviation[];
+}
+
 /** The report's head: whose, which period, who produced it and when. */
 export interface ReportHead {
   readonly kitchen: string;
@@ -105,4 +127,6 @@ export interface HaccpReport extends ReportHead {
   readonly batches: readonly ReportBatch[];
   readonly refusals: readonly ReportRefusal[];
   readonly equipment: readonly ReportEquipment[];
+  /** Every delivery received or refused in the period, oldest first. */
+  readonly receiving: readonly ReportReceipt[];
 }

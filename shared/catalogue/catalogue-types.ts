@@ -43,6 +43,8 @@ export interface CatalogueItem {
   nitrite?: number;
   /** Sodium nitrate, % by weight. */
   nitrate?: number;
+  /** Kept at room temperature until opened: received with no temperature limit. */
+  shelf_stable?: boolean;
 }
 
 /** The catalogue file. */

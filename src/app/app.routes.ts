@@ -29,6 +29,7 @@ export const routes: Routes = [
       { path: 'plans', loadChildren: () => import('./plans/plans.routes') },
       { path: 'equipment', loadChildren: () => import('./equipment/equipment.routes') },
       { path: 'trace', loadChildren: () => import('./trace/trace.routes') },
+      { path: 'deliveries', loadChildren: () => import('./stock/stock.routes') },
       {
         path: 'reports',
         canMatch: [roleGuard('admin', 'reviewer')],

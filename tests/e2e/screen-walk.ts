@@ -43,6 +43,7 @@ export const SCREENS: readonly Screen[] = [
   { name: 'sign-off-queue', path: () => '/batches?show=sign-off' },
   { name: 'equipment', path: () => '/equipment' },
   { name: 'trace', path: (demo) => `/trace?lot=${demo.lot}` },
+  { name: 'deliveries', path: () => '/deliveries' },
   { name: 'haccp-report', path: () => '/reports' },
   { name: 'people', path: () => '/people' },
   { name: 'audit', path: () => '/people/audit' },

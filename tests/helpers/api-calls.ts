@@ -104,6 +104,7 @@ export const TABLES = [
   'audit_events',
   'formula_revisions',
   'lot_uses',
+  'receipts',
 ];
 
 /** What the server has stored: row counts per table and every file of the formulas folder. */

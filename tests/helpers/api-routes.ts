@@ -11,6 +11,7 @@ import {
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
 import { TRACE_ROUTES } from './trace-routes.ts';
+import { RECEIPT_ROUTES } from './receipt-routes.ts';
 import { WEIGHTS_ROUTES } from './weights-routes.ts';
 import { LOT_USE_ROUTES } from './lot-use-routes.ts';
 import { PASSWORDS, type ApiResponse, type DemoUser, type TestServer } from './test-server.ts';
@@ -222,6 +223,7 @@ export const ROUTES: readonly RouteCase[] = [
   })),
   // Trace back and forward, the recall report: every signed-in role.
   ...TRACE_ROUTES,
+  ...RECEIPT_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',

@@ -33,7 +33,8 @@ const COOLER = { rule: 'cold-holding', every: '4 h' };
 const ALL: readonly Role[] = ['cook', 'reviewer', 'admin'];
 const ADMIN: readonly Role[] = ['admin'];
 
-function route(
+/** A route case whose request is prepared by a function of the fixture. */
+export function route(
   method: string,
   template: string,
   allowed: readonly Role[],

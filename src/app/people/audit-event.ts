@@ -43,6 +43,8 @@ export const AUDIT_ACTIONS: readonly { readonly value: AuditAction; readonly lab
   { value: 'plan-record', label: 'Recorded a plan as planned' },
   { value: 'batch-lots', label: 'Recorded the lots a batch used' },
   { value: 'recall-produce', label: 'Produced a recall report' },
+  { value: 'receipt-record', label: 'Received a delivery' },
+  { value: 'receipt-discard', label: 'Discarded a received lot' },
 ];
 
 const ACTION_LABELS = new Map<string, string>(AUDIT_ACTIONS.map((a) => [a.value, a.label]));

@@ -38,6 +38,7 @@ const AREAS: readonly Area[] = [
   { path: '/formulas', label: 'Formulas', icon: 'menu_book' },
   { path: '/plans', label: 'Plans', icon: 'event' },
   { path: '/equipment', label: 'Equipment', icon: 'kitchen' },
+  { path: '/deliveries', label: 'Deliveries', icon: 'local_shipping' },
   { path: '/trace', label: 'Trace', icon: 'account_tree' },
   { path: '/reports', label: 'HACCP report', icon: 'fact_check', roles: ['admin', 'reviewer'] },
   { path: '/people', label: 'People', icon: 'group', roles: ['admin'] },
