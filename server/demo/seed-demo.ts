@@ -2,6 +2,7 @@ import type { AppContext } from '../app-context.ts';
 import { DEMO_PEOPLE } from './demo-people.ts';
 import { seedBatches } from './seed-batches.ts';
 import { seedDeliveries } from './seed-deliveries.ts';
+import { seedDemoLotUses } from './demo-lot-uses.ts';
 import { seedEquipment } from './seed-equipment.ts';
 import { seedProcess } from './seed-process.ts';
 
@@ -19,6 +20,8 @@ export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }
   await seedBatches(context);
   await seedDeliveries(context);
   await seedProcess(context);
+  // After the deliveries and the weights as weighed: the batches draw on the lots first to expire.
+  await seedDemoLotUses(context);
   await seedEquipment(context);
   return { seeded: true };
 }

@@ -12,6 +12,7 @@ import {
 } from '../../shared/stock/receiving-limit.ts';
 import { QuantityError } from '../../shared/units/quantity-error.ts';
 import { AppError } from '../http/app-error.ts';
+import { itemWords } from '../../shared/catalogue/item-words.ts';
 
 /** A delivery checked and worked out, ready to write. */
 export interface CheckedReceipt {
@@ -162,7 +163,7 @@ export function checkReceipt(
   }
   return {
     item,
-    itemName: item.formula_names?.[0] ?? item.name,
+    itemName: itemWords(item),
     establishment,
     quantity: new Decimal(request.quantity.trim()).toString(),
     amount: amount.toString(),

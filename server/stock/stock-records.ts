@@ -18,6 +18,7 @@ import {
   type ReceiptQuery,
 } from './receipt-reads.ts';
 import { discardReceipt, receive, receiveAll, type StockDeps } from './receipt-writes.ts';
+import { itemWords } from '../../shared/catalogue/item-words.ts';
 
 /** Receiving and stock by lot, as record keeping offers them to the API and the command. */
 export interface StockUseCases {
@@ -50,7 +51,7 @@ export function stockUseCases(process: ProcessDeps, formulasFolder: string): Sto
           const frozen = receivingLimit(item.kind, true, item.shelf_stable);
           return {
             key: item.key,
-            name: item.formula_names?.[0] ?? item.name,
+            name: itemWords(item),
             kind: item.kind,
             unit: item.unit,
             units: RECEIVED_UNITS.filter((u) => baseMeasureOf(u) === baseMeasureOf(item.unit)),

@@ -11,6 +11,7 @@ import { sameName } from '../labels/ingredient-statement.ts';
 import type { PresentedResult } from '../presentation/presented-result.ts';
 import type { StandingWeights } from '../process/weights-as-weighed.ts';
 import { baseMeasureOf, gramsToBase, type BaseMeasure } from './base-measure.ts';
+import { itemWords } from '../catalogue/item-words.ts';
 
 /** What a batch needs of one catalogue item. */
 export interface ItemNeed {
@@ -169,7 +170,7 @@ export function batchNeeds(
   return {
     items: [...items.values()].map(({ item, need }) => ({
       item: item.key,
-      name: item.name,
+      name: itemWords(item),
       unit: item.unit,
       measure: baseMeasureOf(item.unit),
       amount: need.amount,

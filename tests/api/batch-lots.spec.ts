@@ -2,6 +2,7 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import { insertReceipts, lotsLeft, type FixtureReceipt } from '../helpers/lot-use-fixture.ts';
+import { clearStock } from '../helpers/pull-list-fixture.ts';
 import { clockFrom, startTestServer, type TestServer } from '../helpers/test-server.ts';
 
 // The server's today: Thursday 3 December 2026, the day the bellies go into cure.
@@ -55,6 +56,8 @@ describe('a batch consuming lots', () => {
   it('should record the lots picked and take them off what is left', async (t) => {
     const server = await startTestServer(t, {}, { now: CLOCK });
     const { db } = server.context;
+    await clearStock(db);
+
     await insertReceipts(db, [
       belly('R261201-01', '6', '2026-12-01', '2026-12-08'),
       belly('R261202-01', '8', '2026-12-02', '2026-12-10'),
@@ -100,6 +103,8 @@ describe('a batch consuming lots', () => {
   it('should suggest the earliest use-by first, set an expired lot apart, and record the suggestion', async (t) => {
     const server = await startTestServer(t, {}, { now: CLOCK });
     const { db } = server.context;
+    await clearStock(db);
+
     await insertReceipts(db, [
       belly('R261126-01', '5', '2026-11-26', '2026-12-02'),
       belly('R261130-01', '8', '2026-11-30', '2026-12-10'),
@@ -138,6 +143,8 @@ describe('a batch consuming lots', () => {
   it('should refuse more than a lot has left, and each other pick that cannot be true', async (t) => {
     const server = await startTestServer(t, {}, { now: CLOCK });
     const { db } = server.context;
+    await clearStock(db);
+
     await insertReceipts(db, [
       belly('R261201-01', '6', '2026-12-01', '2026-12-08'),
       belly('R261125-01', '3', '2026-11-25', '2026-12-01'),
@@ -181,6 +188,8 @@ describe('a batch consuming lots', () => {
   it('should refuse recording twice, and on replacing give back what the first record took', async (t) => {
     const server = await startTestServer(t, {}, { now: CLOCK });
     const { db } = server.context;
+    await clearStock(db);
+
     await insertReceipts(db, [belly('R261201-01', '10', '2026-12-01', '2026-12-08')]);
     const lot = await baconBatch(server);
     const tobin = server.as('tobin');

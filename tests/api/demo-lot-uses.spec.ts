@@ -5,6 +5,7 @@ import { addDays } from '../../shared/calculation/dates.ts';
 import { Decimal } from '../../shared/decimal.ts';
 import { seedDemoLotUses } from '../../server/demo/demo-lot-uses.ts';
 import { insertReceipts, lotsLeft, type FixtureReceipt } from '../helpers/lot-use-fixture.ts';
+import { clearStock } from '../helpers/pull-list-fixture.ts';
 import { startTestServer } from '../helpers/test-server.ts';
 
 const TODAY = new Date().toISOString().slice(0, 10);
@@ -26,6 +27,8 @@ describe("the demo kitchen's lot uses", () => {
     const server = await startTestServer(t);
     const { db } = server.context;
     // A small lot that expires four weeks ago, a large one good for a month, one long expired.
+    await clearStock(db);
+
     await insertReceipts(db, [
       belly('R-DEMO-01', '6000', addDays(TODAY, -28)),
       belly('R-DEMO-02', '500000', addDays(TODAY, 30)),
