@@ -43,6 +43,8 @@ export interface CatalogueItem {
   nitrite?: number;
   /** Sodium nitrate, % by weight. */
   nitrate?: number;
+  /** Fat, % by weight, of a meat trim or fat (15 for 85/15 trim), for the least-cost blend. */
+  fat?: number;
 }
 
 /** The catalogue file. */
