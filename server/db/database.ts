@@ -18,6 +18,7 @@ import * as unaffectedDisposition from './migrations/012-unaffected-disposition.
 import * as loggerSummaries from './migrations/013-logger-summaries.ts';
 import * as turns from './migrations/014-turns.ts';
 import * as stock from './migrations/015-stock.ts';
+import * as costIndexes from './migrations/016-cost-indexes.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -45,6 +46,7 @@ const MIGRATIONS = [
   loggerSummaries,
   turns,
   stock,
+  costIndexes,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

@@ -8,7 +8,7 @@
 import { Decimal, ZERO, sum } from '../decimal.ts';
 import type { StockUnit } from '../catalogue/catalogue-types.ts';
 import type { FinishedWeight } from './finished-weight.ts';
-import { costOfAmount } from './stock-measure.ts';
+import { type BaseMeasure, costOfAmount } from './stock-measure.ts';
 
 /** Where a line's price came from. */
 export type CostSource = 'lot' | 'earlier-batch' | 'latest-price';
@@ -21,6 +21,8 @@ export interface CostInput {
   readonly item?: string;
   /** How much went in, in the item's base measure: grams, millilitres or a count. */
   readonly amount: Decimal;
+  /** That base measure; grams when not said. */
+  readonly measure?: BaseMeasure;
   readonly source: CostSource;
   /** The received lot or earlier batch it came from (lot and earlier-batch lines). */
   readonly lot?: string;

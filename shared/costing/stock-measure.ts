@@ -25,17 +25,32 @@ export function basePerUnit(unit: StockUnit): Decimal {
   }
 }
 
+/** What lots of an item are kept and used in: grams, millilitres or a count. */
+export type BaseMeasure = 'g' | 'ml' | 'each';
+
+/** The base measure of a unit. */
+export function baseMeasureOf(unit: StockUnit): BaseMeasure {
+  if (unit === 'ml' || unit === 'l') return 'ml';
+  return unit === 'each' ? 'each' : 'g';
+}
+
+/** Whether a text is one of the stock units (a receipt's unit as stored). */
+export function isStockUnit(text: string): text is StockUnit {
+  return ['g', 'kg', 'oz', 'lb', 'ml', 'l', 'each'].includes(text);
+}
+
 /** Whether a unit measures by weight (its base measure is the gram). */
 export function isMassUnit(unit: StockUnit): boolean {
   return unit === 'g' || unit === 'kg' || unit === 'lb' || unit === 'oz';
 }
 
 /**
- * What an amount in the base measure costs at a price per unit received: amount ÷ base per unit
- * × price (850 g at 9.40 a kg: 850 ÷ 1000 × 9.40 = 7.99). Exact; round only to show it.
+ * What an amount in the base measure costs at a price per unit received: amount × price ÷
+ * base per unit (850 g at 9.40 a kg: 850 × 9.40 ÷ 1000 = 7.99). Exact; round only to show it.
  */
 export function costOfAmount(amount: Decimal, unit: StockUnit, pricePerUnit: Decimal): Decimal {
-  return amount.div(basePerUnit(unit)).times(pricePerUnit);
+  // Multiply first: one division, so a price per lb of a round price per kg stays exact.
+  return amount.times(pricePerUnit).div(basePerUnit(unit));
 }
 
 /** A price per unit received as a price per kilogram, for a unit of weight. */

@@ -8,6 +8,7 @@ import {
   type Sender,
   type Snapshot,
 } from './api-calls.ts';
+import { COST_ROUTES } from './cost-routes.ts';
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
 import { WEIGHTS_ROUTES } from './weights-routes.ts';
@@ -212,6 +213,7 @@ export const ROUTES: readonly RouteCase[] = [
   // Weights as weighed, starting a planned batch, refused calculations.
   ...WEIGHTS_ROUTES,
   ...EQUIPMENT_ROUTES,
+  ...COST_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',
