@@ -4,16 +4,10 @@ import { requireRole } from '../auth/authenticate.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { serverToday } from '../server-today.ts';
-import type { BlendTrims, LeastCostAnswer } from '../../shared/api/cost-record.ts';
-import { formatPercent } from '../../shared/calculation/blend/blend-fat.ts';
-import {
-  type LeastCostBlend,
-  type TrimOnHand,
-  leastCostBlend,
-} from '../../shared/costing/least-cost-blend.ts';
+import type { BlendTrims } from '../../shared/api/cost-record.ts';
+import { leastCostAnswer } from '../../shared/costing/least-cost-answer.ts';
+import { type TrimOnHand, leastCostBlend } from '../../shared/costing/least-cost-blend.ts';
 import { Decimal } from '../../shared/decimal.ts';
-import { formatMass } from '../../shared/presentation/format-figure.ts';
-import { moneyText } from '../../shared/presentation/money.ts';
 import { FAT_STANDARDS, type FatStandardKey } from '../../shared/reference/fat-standards.ts';
 import { parseMass } from '../../shared/units/mass.ts';
 import { stockTrims } from './blend-stock.ts';
@@ -67,35 +61,6 @@ function grams(text: string, what: string): Decimal {
   } catch (error) {
     throw badRequest(`${what} is not a weight: ${(error as Error).message}`);
   }
-}
-
-/** The answer as the API sends it. */
-function answer(
-  blend: Extract<LeastCostBlend, { ok: true }>,
-  request: LeastCostRequest,
-  batchGrams: Decimal,
-): LeastCostAnswer {
-  const rule = request.standard ? FAT_STANDARDS[request.standard] : undefined;
-  return {
-    shares: blend.shares.map((share) => ({
-      name: share.trim.name,
-      fat: share.trim.fatPercent.toString(),
-      grams: share.grams.toString(),
-      weightText: formatMass(share.grams, 'metric'),
-      cost: share.cost.toString(),
-      costText: moneyText(share.cost),
-    })),
-    fat: new Decimal(String(request.target)).toString(),
-    batchGrams: batchGrams.toString(),
-    cost: blend.cost.toString(),
-    costText: moneyText(blend.cost),
-    costPerKg: blend.costPerKg.toString(),
-    costPerKgText: moneyText(blend.costPerKg),
-    leftOut: blend.leftOut.map((trim) => trim.name),
-    standard: rule
-      ? `${rule.name}, ${rule.section}: at most ${formatPercent(rule.maxFatPercent)} fat`
-      : null,
-  };
 }
 
 /**
@@ -154,7 +119,13 @@ export function blendsRouter(context: AppContext): Router {
     });
     if (!blend.ok)
       throw new AppError(422, 'blend-refused', blend.message, [{ reason: blend.refusal }]);
-    res.json(answer(blend, request, batchGrams));
+    res.json(
+      leastCostAnswer(blend, {
+        targetFatPercent: new Decimal(String(request.target)),
+        batchGrams,
+        ...(request.standard ? { standard: request.standard } : {}),
+      }),
+    );
   });
 
   return router;

@@ -119,6 +119,8 @@ export interface LeastCostAnswer {
   /** The blend's fat, %: the target, met exactly. */
   readonly fat: string;
   readonly batchGrams: string;
+  /** The batch's weight for a person: "10.000 kg". */
+  readonly batchText: string;
   readonly cost: string;
   readonly costText: string;
   readonly costPerKg: string;

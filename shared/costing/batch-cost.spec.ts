@@ -85,6 +85,15 @@ describe('batchCost', () => {
     assert.equal(cost.portion, null, 'a cure has no portion of its own');
   });
 
+  // Nothing priced is no cost at all, not a cost of 0.00 a kg.
+  it('should give no cost per kilogram when no line has a price', () => {
+    const lines = BACON_LINES.map((line) => ({ ...line, price: undefined }));
+    const cost = batchCost(lines, finishedWeight(bacon, dec('150')));
+    assert.equal(cost.total.toString(), '0');
+    assert.equal(cost.perFinishedKg, null);
+    assert.equal(cost.portion, null);
+  });
+
   // Without yields a cure finishes at its green weight: 89.45 ÷ 10 = 8.945 → 8.95 (half-up).
   it('should take the green weight of a cure without yields, rounding 8.945 up to 8.95', () => {
     const plain = presentResult(

@@ -51,7 +51,10 @@ export interface BatchCost {
   readonly finishedGrams: Decimal;
   /** How the finished weight was found, in words. */
   readonly finishedBasis: string;
-  /** total ÷ finished kilograms; null when the batch finishes at nothing. */
+  /**
+   * total ÷ finished kilograms; null when the batch finishes at nothing or no line has a price
+   * (a cost of 0.00 would say it cost nothing).
+   */
   readonly perFinishedKg: Decimal | null;
   /** One portion's cost: total × portion ÷ the weight portions are cut from. */
   readonly portion: {
@@ -76,7 +79,9 @@ export function batchCost(inputs: readonly CostInput[], weight: FinishedWeight):
     cost: input.price ? costOfAmount(input.amount, input.price.unit, input.price.perUnit) : null,
   }));
   const total = sum(lines.map((line) => line.cost ?? ZERO));
-  const portion = weight.portion;
+  // With no line priced there is no cost to spread, rather than a cost of nothing.
+  const priced = lines.some((line) => line.cost !== null);
+  const portion = priced ? weight.portion : undefined;
   return {
     lines,
     total,
@@ -89,9 +94,10 @@ export function batchCost(inputs: readonly CostInput[], weight: FinishedWeight):
       .map((line) => ({ name: line.name, reason: line.unpriced ?? 'no price known' })),
     finishedGrams: weight.finishedGrams,
     finishedBasis: weight.basis,
-    perFinishedKg: weight.finishedGrams.greaterThan(ZERO)
-      ? total.div(weight.finishedGrams.div(THOUSAND))
-      : null,
+    perFinishedKg:
+      priced && weight.finishedGrams.greaterThan(ZERO)
+        ? total.div(weight.finishedGrams.div(THOUSAND))
+        : null,
     portion:
       portion && portion.fromGrams.greaterThan(ZERO)
         ? {

@@ -43,6 +43,7 @@ export const SCREENS: readonly Screen[] = [
   { name: 'sign-off-queue', path: () => '/batches?show=sign-off' },
   { name: 'equipment', path: () => '/equipment' },
   { name: 'haccp-report', path: () => '/reports' },
+  { name: 'least-cost-blend', path: () => '/costing' },
   { name: 'people', path: () => '/people' },
   { name: 'audit', path: () => '/people/audit' },
   { name: 'outbox', path: () => '/people/outbox' },

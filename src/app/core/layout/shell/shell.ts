@@ -39,6 +39,7 @@ const AREAS: readonly Area[] = [
   { path: '/plans', label: 'Plans', icon: 'event' },
   { path: '/equipment', label: 'Equipment', icon: 'kitchen' },
   { path: '/reports', label: 'HACCP report', icon: 'fact_check', roles: ['admin', 'reviewer'] },
+  { path: '/costing', label: 'Least-cost blend', icon: 'calculate', roles: ['admin', 'reviewer'] },
   { path: '/people', label: 'People', icon: 'group', roles: ['admin'] },
 ];
 
