@@ -3,6 +3,7 @@ import packageJson from '../package.json' with { type: 'json' };
 import { EXIT_CODES_HELP } from './cli-error.ts';
 import { backupCommand } from './commands/backup.ts';
 import { batchesCommand } from './commands/batches.ts';
+import { blendCommand } from './commands/blend.ts';
 import { calcCommand } from './commands/calc.ts';
 import { checkCommand } from './commands/check.ts';
 import { newCommand } from './commands/new.ts';
@@ -32,6 +33,7 @@ export function createProgram(io: Io): Command {
     calcCommand(io),
     checkCommand(io),
     planCommand(io),
+    blendCommand(io),
     newCommand(io),
     batchesCommand(io),
     readingCommand(io),

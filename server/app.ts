@@ -13,6 +13,8 @@ import { batchesCsv, batchesRouter } from './batches/batches-router.ts';
 import { calcRouter } from './calc/calc-router.ts';
 import { equipmentRouter } from './equipment/equipment-router.ts';
 import { plansRouter } from './plans/plans-router.ts';
+import { blendsRouter } from './costing/blends-router.ts';
+import { costsRouter } from './costing/costs-router.ts';
 import { loggerText } from './process/logger-body.ts';
 import {
   batchProcessRouter,
@@ -98,6 +100,8 @@ export function createApp(context: AppContext): Express {
   api.use('/stock', stockRouter(context));
   api.use('/outbox', outboxRouter(context));
   api.use('/trace', traceRouter(context));
+  api.use(costsRouter(context));
+  api.use('/blends', blendsRouter(context));
   api.use(apiNotFound);
 
   app.use('/api', api);

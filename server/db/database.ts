@@ -20,6 +20,7 @@ import * as turns from './migrations/014-turns.ts';
 import * as stock from './migrations/015-stock.ts';
 import * as lotUsesReplaced from './migrations/016-lot-uses-replaced.ts';
 import * as receiptJudgement from './migrations/017-receipt-judgement.ts';
+import * as costIndexes from './migrations/018-cost-indexes.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -49,6 +50,7 @@ const MIGRATIONS = [
   stock,
   lotUsesReplaced,
   receiptJudgement,
+  costIndexes,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

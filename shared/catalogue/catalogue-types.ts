@@ -45,6 +45,8 @@ export interface CatalogueItem {
   nitrate?: number;
   /** Kept at room temperature until opened: received with no temperature limit. */
   shelf_stable?: boolean;
+  /** Fat, % by weight, of a meat trim or fat (15 for 85/15 trim), for the least-cost blend. */
+  fat?: number;
 }
 
 /** The catalogue file. */

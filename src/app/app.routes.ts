@@ -37,6 +37,12 @@ export const routes: Routes = [
       },
       forRolesRoute('reports', 'admin', 'reviewer'),
       {
+        path: 'costing',
+        canMatch: [roleGuard('admin', 'reviewer')],
+        loadChildren: () => import('./costing/costing.routes'),
+      },
+      forRolesRoute('costing', 'admin', 'reviewer'),
+      {
         path: 'people',
         canMatch: [roleGuard('admin')],
         loadChildren: () => import('./people/people.routes'),

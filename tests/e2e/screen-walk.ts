@@ -45,6 +45,7 @@ export const SCREENS: readonly Screen[] = [
   { name: 'trace', path: (demo) => `/trace?lot=${demo.lot}` },
   { name: 'deliveries', path: () => '/deliveries' },
   { name: 'haccp-report', path: () => '/reports' },
+  { name: 'least-cost-blend', path: () => '/costing' },
   { name: 'people', path: () => '/people' },
   { name: 'audit', path: () => '/people/audit' },
   { name: 'outbox', path: () => '/people/outbox' },

@@ -8,6 +8,7 @@ import {
   type Sender,
   type Snapshot,
 } from './api-calls.ts';
+import { COST_ROUTES } from './cost-routes.ts';
 import { EQUIPMENT_ROUTES } from './equipment-routes.ts';
 import { PROCESS_ROUTES } from './process-routes.ts';
 import { TRACE_ROUTES } from './trace-routes.ts';
@@ -224,6 +225,7 @@ export const ROUTES: readonly RouteCase[] = [
   // Trace back and forward, the recall report: every signed-in role.
   ...TRACE_ROUTES,
   ...RECEIPT_ROUTES,
+  ...COST_ROUTES,
   route('GET', '/api/people', ADMIN, '/api/people'),
   route('POST', '/api/people', ADMIN, async () => ({
     path: '/api/people',

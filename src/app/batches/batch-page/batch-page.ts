@@ -22,6 +22,7 @@ import { BatchLog } from '../batch-log/batch-log';
 import { offeredMoves, signOffBlocked, type OfferedMove } from '../batch-status';
 import { HoldBanner } from '../process/hold-banner/hold-banner';
 import { ProcessSection } from '../process/process-section/process-section';
+import { BatchCost } from '../../costing/batch-cost/batch-cost';
 import { ProcessStore } from '../process/process-store';
 import { BatchStore } from './batch-store';
 import { ConfirmDialog, type ConfirmDialogData } from './confirm-dialog';
@@ -45,6 +46,7 @@ import { MadeFrom } from '../made-from/made-from';
   selector: 'app-batch-page',
   imports: [
     RouterLink,
+    BatchCost,
     MatButton,
     MatIconButton,
     MatIcon,

@@ -28,7 +28,7 @@ import { dayWords } from '../../../../shared/presentation/date-words.ts';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { FormulaOptions } from '../formula-options';
 import { NitriteHistory } from './nitrite-history';
-import { axisDayWords, nitriteSummary } from './nitrite-points';
+import { DAY_MS, axisDayWords, dayMs, nitriteSummary } from './nitrite-points';
 
 Chart.defaults.font.family = 'Fira Sans';
 
@@ -177,12 +177,4 @@ export class NitriteChart {
     const id = this.formula();
     if (id) void this.history.load(id);
   }
-}
-
-const DAY_MS = 86_400_000;
-
-/** A calendar day (YYYY-MM-DD) as milliseconds at its UTC midnight: days an equal step apart. */
-function dayMs(iso: string): number {
-  const [year, month, day] = iso.split('-').map(Number);
-  return Date.UTC(year, month - 1, day);
 }

@@ -84,3 +84,12 @@ export function axisDayWords(ms: number, min: number, max: number): string {
   const oneYear = new Date(min).getUTCFullYear() === new Date(max).getUTCFullYear();
   return oneYear ? dayMonthWords(day) : dayWords(day);
 }
+
+/** One day in milliseconds, a step of a chart's time axis. */
+export const DAY_MS = 86_400_000;
+
+/** A calendar day (YYYY-MM-DD) as milliseconds at its UTC midnight: days an equal step apart. */
+export function dayMs(iso: string): number {
+  const [year, month, day] = iso.split('-').map(Number);
+  return Date.UTC(year, month - 1, day);
+}

@@ -27,6 +27,7 @@ import { revisionInWords } from '../revision-words';
 import { FormulaDraft } from '../formula-draft';
 import { FormulaForm } from '../formula-form/formula-form';
 import { FormulaHistory } from '../formula-history/formula-history';
+import { FormulaCostChart } from '../../costing/formula-cost-chart/formula-cost-chart';
 import { FormulaPreview } from '../formula-preview/formula-preview';
 import { FormulaProblems } from '../formula-problems/formula-problems';
 import { FormulaSave } from '../formula-save/formula-save';
@@ -49,6 +50,7 @@ const YAML_TAB = 1;
   selector: 'app-formula-page',
   imports: [
     IsoDayPipe,
+    FormulaCostChart,
     RouterLink,
     MatButton,
     MatIcon,

@@ -41,6 +41,7 @@ const AREAS: readonly Area[] = [
   { path: '/deliveries', label: 'Deliveries', icon: 'local_shipping' },
   { path: '/trace', label: 'Trace', icon: 'account_tree' },
   { path: '/reports', label: 'HACCP report', icon: 'fact_check', roles: ['admin', 'reviewer'] },
+  { path: '/costing', label: 'Least-cost blend', icon: 'calculate', roles: ['admin', 'reviewer'] },
   { path: '/people', label: 'People', icon: 'group', roles: ['admin'] },
 ];
 
