@@ -94,7 +94,7 @@ export class CostRepository {
     );
   }
 
-  /** The lots a batch drew on, in the order recorded. */
+  /** The lots a batch drew on, in the order recorded (not those recorded again: corrected). */
   lotUses(batchId: number): Promise<LotUseRow[]> {
     return readRows<LotUseRow>(
       this.db.sequelize,
@@ -103,7 +103,7 @@ export class CostRepository {
        FROM lot_uses u
        LEFT JOIN receipts r ON r.id = u.receipt_id
        LEFT JOIN batches s ON s.id = u.source_batch_id
-       WHERE u.batch_id = ? ORDER BY u.id`,
+       WHERE u.batch_id = ? AND u.replaced_at IS NULL ORDER BY u.id`,
       [batchId],
     );
   }
