@@ -2,6 +2,7 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import { send, suiteServer } from '../helpers/api-calls.ts';
 import { addReceipt, dayFromToday } from '../helpers/cost-fixture.ts';
+import { clearStock } from '../helpers/pull-list-fixture.ts';
 
 /** The trims of the hand-solved case in shared/costing/least-cost-blend.spec.ts. */
 const TRIMS = [
@@ -75,6 +76,8 @@ describe('POST /api/blends/least-cost', () => {
   // issuer not identified, https://slideplayer.com./slide/7660647, own example). Cost 7.5 × 8 +
   // 2.5 × 2.5 = 66.25, 6.625 a kg → 6.63 (half-up).
   it('should blend the trims on hand at their latest prices: the two-trim Pearson answer', async () => {
+    // From a kitchen that has received nothing: the demo's trims would join the blend.
+    await clearStock(server().context.db);
     await addReceipt(server(), {
       item: 'beef-lean-trim',
       itemName: 'beef',
