@@ -4,6 +4,7 @@ import path from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { addDays } from '../../shared/calculation/dates.ts';
 import { insertReceipts, lotsLeft } from '../helpers/lot-use-fixture.ts';
+import { clearStock } from '../helpers/pull-list-fixture.ts';
 import { ARTIFACTS, collectConsoleErrors, startConsole } from './browser.ts';
 import { atWidths, shootAtWidths } from './screens.ts';
 
@@ -27,6 +28,8 @@ describe('what a batch was made from', () => {
     const later = code(yesterday, 1);
     const earlier = code(twoDaysAgo, 1);
     const salt = code(twoDaysAgo, 2);
+    // From a kitchen that has received nothing: the demo's deliveries would take these codes.
+    await clearStock(server.context.db);
     await insertReceipts(server.context.db, [
       {
         lotCode: earlier,

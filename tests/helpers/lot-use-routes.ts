@@ -6,6 +6,19 @@ import { route } from './weights-routes.ts';
 
 let serial = 0;
 
+/**
+ * The day's next lot code after every one taken, as receiving numbers them: a fuzzed delivery
+ * through the API takes the number after the highest, so a fixed number would meet it.
+ */
+async function freeCode(fx: Fixture, prefix: string): Promise<string> {
+  const [rows] = (await fx.server.context.db.sequelize.query(
+    'SELECT lot_code FROM receipts WHERE lot_code LIKE ?',
+    { replacements: [`${prefix}%`] },
+  )) as [{ lot_code: string }[], unknown];
+  const highest = Math.max(0, ...rows.map((row) => Number(row.lot_code.slice(prefix.length))));
+  return `${prefix}${String(Math.max(highest + 1, 501))}`;
+}
+
 /** A new batch of the demo belly under way, and a lot of belly received today for it. */
 async function bellyWithLot(fx: Fixture): Promise<{ batch: string; lot: string }> {
   const response = await send(fx.server, fx.setup, {
@@ -15,13 +28,13 @@ async function bellyWithLot(fx: Fixture): Promise<{ batch: string; lot: string }
   });
   assert.equal(response.status, 201, response.text);
   const day = BELLY.batch.start;
-  const lot = `R${day.slice(2).replaceAll('-', '')}-${String(++serial + 50)}`;
+  const lot = await freeCode(fx, `R${day.slice(2).replaceAll('-', '')}-`);
   await insertReceipts(fx.server.context.db, [
     {
       lotCode: lot,
       item: 'pork-belly',
       itemName: 'pork belly',
-      supplierLot: `HV-${serial}`,
+      supplierLot: `HV-${++serial}`,
       quantity: '5',
       unit: 'kg',
       amount: '5000',
