@@ -143,7 +143,7 @@ describe('receiving deliveries', () => {
     const salt = await received(server, {
       item: 'kosher-salt',
       supplier: 'Test Mill',
-      supplierLot: 'S-9',
+      supplierLot: 'SL-9',
       quantity: '25',
       unit: 'kg',
     });
@@ -156,7 +156,7 @@ describe('receiving deliveries', () => {
   it('should list deliveries newest first with filters, show one, and discard what is left with a reason', async (t) => {
     const server = await startTestServer(t);
     const a = await received(server, belly({ supplierLot: 'A-1', useBy: dayAfter(10) }));
-    const b = await received(server, belly({ supplierLot: 'B-2', useBy: dayAfter(5) }));
+    const b = await received(server, belly({ supplierLot: 'BL-2', useBy: dayAfter(5) }));
     const list = await server.as('imke').get('/api/receipts?supplier=test%20farm&pageSize=1');
     assert.equal(list.status, 200, list.text);
     assert.equal(list.json.total >= 2, true);
