@@ -124,8 +124,8 @@ describe('formulas in the console', () => {
     await page
       .waitForFunction(
         () =>
-          (document.querySelector('[data-testid=save-bar]')?.getBoundingClientRect().height ?? 999) <
-          130,
+          (document.querySelector('[data-testid=save-bar]')?.getBoundingClientRect().height ??
+            999) < 130,
         undefined,
         { timeout: 5000 },
       )
