@@ -198,7 +198,10 @@ describe('signing off a batch that is not plainly good', () => {
     await page.goto(`${server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
     const summary = await page.getByTestId('failed-checks').innerText();
     assert.match(summary.trim(), /^Fat failed: 35/);
-    assert.doesNotMatch(await page.locator('.facts').innerText(), /see below/);
+    assert.doesNotMatch(
+      await page.getByRole('region', { name: 'The record' }).locator('dl.facts').innerText(),
+      /see below/,
+    );
 
     // Open from the keyboard; Escape gives the focus back to the button.
     await page.getByTestId('sign-off-button').focus();

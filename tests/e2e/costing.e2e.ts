@@ -1,6 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import { addLotUse, addReceipt, dayFromToday } from '../helpers/cost-fixture.ts';
+import { clearStock } from '../helpers/pull-list-fixture.ts';
 import { ARTIFACTS, collectConsoleErrors, startConsole } from './browser.ts';
 import path from 'node:path';
 import { atWidths, shootAtWidths } from './screens.ts';
@@ -14,6 +15,8 @@ describe('costs in the console', () => {
   // beef (source: 9 CFR 319.15(a), as quoted in shared/reference/fat-standards.ts): refused.
   it('should work out the least-cost blend from the trims on hand, and refuse what cannot be', async (t) => {
     const session = await startConsole(t);
+    // From a kitchen that has received nothing: the demo's trims would join the blend.
+    await clearStock(session.server.context.db);
     await addReceipt(session.server, {
       item: 'beef-lean-trim',
       itemName: 'beef',
@@ -75,6 +78,7 @@ describe('costs in the console', () => {
 
   it('should show a batch’s cost and a formula’s cost chart to a reviewer, and neither to a cook', async (t) => {
     const session = await startConsole(t);
+    await clearStock(session.server.context.db);
     const today = dayFromToday(0);
     const recorded = await session.server.as('rosa').post('/api/batches', {
       formula: 'quillmoor-belly',
