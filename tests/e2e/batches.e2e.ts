@@ -242,6 +242,16 @@ describe('the batch log in the console', () => {
     await page.waitForURL(/show=overdue/);
     const lateRow = page.locator(`[data-testid="batch-row"][data-lot="${lateLot}"]`);
     await lateRow.waitFor();
+    // The address changes before the filtered page arrives: wait for the list to be the overdue.
+    await page
+      .waitForFunction(() => {
+        const all = document.querySelectorAll('[data-testid="batch-row"]');
+        const marked = document.querySelectorAll(
+          '[data-testid="batch-row"] [data-testid="mark-overdue"]',
+        );
+        return all.length > 0 && all.length === marked.length;
+      })
+      .catch(() => undefined);
     const rows = page.getByTestId('batch-row');
     assert.equal(
       await page.locator('[data-testid="batch-row"] [data-testid="mark-overdue"]').count(),
