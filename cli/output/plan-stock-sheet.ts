@@ -1,10 +1,10 @@
-import type { PlanStock, PresentedWeight } from '../../shared/index.ts';
+import type { PlanStock, PresentedAmount, PresentedWeight } from '../../shared/index.ts';
 import { dayWords, shortDayWords } from '../../shared/presentation/date-words.ts';
 import { textTable } from './text-table.ts';
 
-/** A weight as printed, "none" for nothing. */
-function amount(weight: PresentedWeight): string {
-  return weight.grams === '0' ? 'none' : weight.amount;
+/** An amount as printed, "none" for nothing. */
+function amount(figure: PresentedWeight | PresentedAmount): string {
+  return ('exact' in figure ? figure.exact : figure.grams) === '0' ? 'none' : figure.amount;
 }
 
 /**
@@ -36,6 +36,9 @@ export function renderPlanStock(stock: PlanStock): string {
         ]),
       ],
       ['left', 'left', 'right', 'right', 'right', 'right', 'left', 'left'],
+    ),
+    ...stock.lines.flatMap((line) =>
+      line.conversion ? [`  ${line.name}: ${line.conversion}`] : [],
     ),
     ...stock.lines.flatMap((line) => line.outOfDate.map((words) => `  ! ${line.name}: ${words}`)),
   );

@@ -176,6 +176,8 @@ export async function suggestionFor(
       unit: need.unit,
       measure: need.measure,
       need: need.amount?.toString() ?? null,
+      grams: need.grams.toString(),
+      weighs: need.measure === 'g' ? null : (need.weighs ?? null),
       weighed: need.weighed,
       takes: takes.map(({ lot, take }) => {
         const row = byCode.get(lot.lot)!;
@@ -209,6 +211,8 @@ export async function suggestionFor(
       unit: 'g',
       measure: 'g',
       need: null,
+      grams: null,
+      weighs: null,
       weighed: false,
       takes: [],
       shortfall: null,

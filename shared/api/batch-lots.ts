@@ -48,8 +48,18 @@ export interface SuggestedItem {
   readonly source: 'receipt' | 'batch';
   readonly unit: StockUnit | null;
   readonly measure: BaseMeasure;
-  /** The need in the base measure; null when the cook must say how much (bought by the each). */
+  /**
+   * The need in the base measure; null when the cook must say how much (bought by the each or by
+   * volume, with no weight per unit in the catalogue).
+   */
   readonly need: string | null;
+  /** What the batch's lines weigh of it, in grams; null for an assembly's part. */
+  readonly grams: string | null;
+  /**
+   * The catalogue's weight per unit the grams were turned by ("50 g" for one, "244 g per cup"),
+   * for an item bought by the each or by volume; null otherwise.
+   */
+  readonly weighs: string | null;
   /** Whether the need is what was weighed, not the calculation. */
   readonly weighed: boolean;
   /** The lots suggested, in the order to use them; none once lots are recorded. */

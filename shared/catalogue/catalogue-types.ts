@@ -47,6 +47,11 @@ export interface CatalogueItem {
   shelf_stable?: boolean;
   /** Fat, % by weight, of a meat trim or fat (15 for 85/15 trim), for the least-cost blend. */
   fat?: number;
+  /**
+   * What one weighs, for an item stocked by count ("50 g"), or a volume of it, for one stocked by
+   * volume ("244 g per cup"): how a formula's grams are compared with its lots.
+   */
+  weighs?: string;
 }
 
 /** The catalogue file. */

@@ -89,6 +89,41 @@ describe('readCatalogue', () => {
     );
   });
 
+  it('should read a weight per unit, and refuse one that does not fit its item at its place', () => {
+    const eggs = `${GOOD}  - key: eggs
+    name: eggs
+    kind: egg
+    unit: each
+    weighs: 50 g
+`;
+    assert.equal(readCatalogue(eggs, 'catalogue.yaml').catalogue?.items[3].weighs, '50 g');
+    const reading = readCatalogue(
+      eggs
+        .replace('weighs: 50 g', 'weighs: 50 g per cup')
+        .replace('unit: kg', 'unit: kg\n    weighs: 5 g'),
+      'formulas/catalogue.yaml',
+    );
+    assert.equal(reading.catalogue, undefined);
+    // Line 8 is the salt's "weighs: 5 g", put under its "unit: kg"; line 24 the eggs' weighs.
+    assert.deepEqual(
+      reading.problems.map((p) => [p.file, p.line, p.column, p.message]),
+      [
+        [
+          'formulas/catalogue.yaml',
+          8,
+          5,
+          'expected no weight per unit, but got "5 g": this item is stocked by weight (kg): leave weighs out',
+        ],
+        [
+          'formulas/catalogue.yaml',
+          24,
+          5,
+          'expected the weight of one, such as "50 g" or "1.8 oz", but got "50 g per cup": this item is stocked by count: give one’s weight',
+        ],
+      ],
+    );
+  });
+
   it('should refuse a file that is not a set of keys', () => {
     const reading = readCatalogue('- salt\n- pepper\n', 'catalogue.yaml');
     assert.match(reading.problems[0].message, /a catalogue file is a set of keys/);

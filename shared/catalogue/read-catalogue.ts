@@ -4,7 +4,9 @@ import { readYamlValue, sortByPosition } from '../formula/read-formula.ts';
 import { sameName } from '../labels/ingredient-statement.ts';
 import { catalogueSchemaErrors } from '../validation/catalogue-validator.ts';
 import { schemaProblems } from '../validation/schema-messages.ts';
+import { QuantityError } from '../units/quantity-error.ts';
 import type { Catalogue, CatalogueItem } from './catalogue-types.ts';
+import { parseItemWeight } from './item-weight.ts';
 
 /** The strengths a formula line and its item must agree on, % by weight. */
 export const STRENGTH_KEYS = ['nitrite', 'nitrate'] as const;
@@ -51,9 +53,25 @@ export function readCatalogue(text: string, file: string): CatalogueReading {
   return problems.length > 0 ? { places, problems } : { catalogue, places, problems };
 }
 
-/** Keys used twice, and formula names given to two items. */
+/** A weight per unit that does not read for its item's unit, at its place. */
+function weightProblem(item: CatalogueItem, i: number): ContentProblem | undefined {
+  if (item.weighs === undefined) return undefined;
+  try {
+    parseItemWeight(item.weighs, item.unit);
+    return undefined;
+  } catch (error) {
+    if (!(error instanceof QuantityError)) throw error;
+    return { path: ['items', i, 'weighs'], severity: 'error', message: error.message };
+  }
+}
+
+/** Keys used twice, formula names given to two items, weights per unit that do not read. */
 function itemProblems(items: readonly CatalogueItem[]): ContentProblem[] {
   const problems: ContentProblem[] = [];
+  items.forEach((item, i) => {
+    const weight = weightProblem(item, i);
+    if (weight) problems.push(weight);
+  });
   const keys = new Map<string, number>();
   const formulaNames = new Map<string, number>();
   items.forEach((item, i) => {

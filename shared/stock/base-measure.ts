@@ -2,7 +2,8 @@
  * A received quantity in its item's base measure: grams for an item stocked by weight,
  * millilitres for one stocked by volume, a count for one stocked each. Pure.
  */
-import type { StockUnit } from '../catalogue/catalogue-types.ts';
+import type { CatalogueItem, StockUnit } from '../catalogue/catalogue-types.ts';
+import { itemWeightOf } from '../catalogue/item-weight.ts';
 import { Decimal } from '../decimal.ts';
 import { GRAMS_PER_OUNCE, GRAMS_PER_POUND, parseMass } from '../units/mass.ts';
 import { QuantityError } from '../units/quantity-error.ts';
@@ -89,14 +90,25 @@ export function inLotUnit(base: Decimal, unit: ReceivedUnit): Decimal {
 /**
  * Grams a formula weighs, in the base measure of an item: grams stay grams; water weighed for an
  * item kept in millilitres counts 1 ml a gram (the project's water convention,
- * WATER_GRAMS_PER_LITRE); anything else bought by volume or by the each has no weight per unit in
- * the catalogue, so undefined: the cook says how much of the lot went in.
+ * WATER_GRAMS_PER_LITRE); anything else bought by volume or by the each goes through the
+ * catalogue's weight per unit (`weighs:`): 1500 g of milk at 244 g per cup is 1500 × 236.5882365
+ * ÷ 244 ml. A count is rounded up to whole pieces (510 g of egg at 50 g is 11 eggs, not 10.2):
+ * a piece is used whole, and what is left of it does not go back into stock (our rule). Without
+ * a weight per unit, undefined: the cook says how much of the lot went in.
  */
-export function gramsToBase(grams: Decimal, unit: StockUnit, water: boolean): Decimal | undefined {
-  const base = baseMeasureOf(unit);
+export function gramsToBase(
+  grams: Decimal,
+  item: Pick<CatalogueItem, 'unit' | 'weighs'>,
+  water: boolean,
+): Decimal | undefined {
+  const base = baseMeasureOf(item.unit);
   if (base === 'g') return grams;
   if (base === 'ml' && water) return grams.div(WATER_GRAMS_PER_LITRE).times(1000);
-  return undefined;
+  const weight = itemWeightOf(item);
+  if (!weight) return undefined;
+  // Multiply first: one division, so a round figure stays exact.
+  const amount = grams.times(weight.per).div(weight.grams);
+  return base === 'each' ? amount.ceil() : amount;
 }
 
 /**

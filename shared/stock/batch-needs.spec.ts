@@ -86,6 +86,18 @@ const BELLY_RESULT = resultOf(
   ],
 );
 
+const BUN = {
+  formula: 1,
+  id: 'test-bun',
+  title: 'Test bun',
+  kind: 'dough',
+  ingredients: [
+    { name: 'bread flour', pct: 100, flour: true },
+    { name: 'whole milk', pct: 30 },
+    { name: 'whole egg', pct: 10 },
+  ],
+} as DoughFormula;
+
 /** The needs as "item: amount" lines and the lines apart as "name: grams", to compare by hand. */
 function said(needs: BatchNeeds): { items: string[]; apart: string[] } {
   const text = (d: Decimal | null) => (d === null ? 'unknown' : d.toString());
@@ -155,17 +167,6 @@ describe('batchNeeds', () => {
   // weighed into the final dough and the overall formula printed for reference count nothing.
   // Milk is bought by the litre and eggs by the each, with no weight per unit in the catalogue.
   it('should count a dough once, leaving what is bought by volume or the each to the cook', () => {
-    const bun: DoughFormula = {
-      formula: 1,
-      id: 'test-bun',
-      title: 'Test bun',
-      kind: 'dough',
-      ingredients: [
-        { name: 'bread flour', pct: 100, flour: true },
-        { name: 'whole milk', pct: 30 },
-        { name: 'whole egg', pct: 10 },
-      ],
-    } as DoughFormula;
     const result = resultOf(
       [],
       [
@@ -182,9 +183,59 @@ describe('batchNeeds', () => {
         { title: 'Overall formula (reference)', lines: [line('bread flour', '1190')] },
       ],
     );
-    assert.deepEqual(said(batchNeeds(bun, result, NONE, CATALOGUE)), {
+    assert.deepEqual(said(batchNeeds(BUN, result, NONE, CATALOGUE)), {
       items: ['bread-flour: 1190', 'whole-milk: unknown', 'eggs: unknown'],
       apart: [],
     });
+  });
+
+  // hand-worked, with the demo catalogue's weights per unit (source: USDA FoodData Central, SR
+  // Legacy, "Egg, whole, raw, fresh", 1 large = 50 g; "Milk, whole, 3.25% milkfat, with added
+  // vitamin D", 1 cup = 244 g; both from memory): the dough's 119 g of egg and the wash's 30 g
+  // are 149 g, 2.98 eggs, so 3 cracked (rounded once: line by line it would be 3 + 1 = 4); the
+  // 357 g of milk are 357 × 236.5882365 ÷ 244 ml (a US cup, NIST SP 811 (2008), Appendix B.8).
+  it('should turn grams into pieces and millilitres through the catalogue, rounding pieces once', () => {
+    const catalogue: Catalogue = {
+      ...CATALOGUE,
+      items: CATALOGUE.items.map((item) =>
+        item.key === 'eggs'
+          ? { ...item, formula_names: ['whole egg', 'egg for the wash'], weighs: '50 g' }
+          : item.key === 'whole-milk'
+            ? { ...item, weighs: '244 g per cup' }
+            : item,
+      ),
+    };
+    const bun: DoughFormula = {
+      ...BUN,
+      ingredients: [...BUN.ingredients, { name: 'egg for the wash', pct: 2.5 }],
+    };
+    const result = resultOf(
+      [],
+      [
+        {
+          title: 'Final dough',
+          lines: [
+            line('bread flour', '1190'),
+            line('whole milk', '357'),
+            line('whole egg', '119'),
+            line('egg for the wash', '30'),
+          ],
+        },
+      ],
+    );
+    const needs = batchNeeds(bun, result, NONE, catalogue);
+    assert.deepEqual(said(needs).items, [
+      'bread-flour: 1190',
+      'whole-milk: 346.1557394692622950819672131147540983607',
+      'eggs: 3',
+    ]);
+    assert.deepEqual(
+      needs.items.map((need) => [need.measure, need.grams.toString()]),
+      [
+        ['g', '1190'],
+        ['ml', '357'],
+        ['each', '149'],
+      ],
+    );
   });
 });

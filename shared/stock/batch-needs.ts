@@ -5,7 +5,7 @@
  */
 import type { Catalogue, CatalogueItem, StockUnit } from '../catalogue/catalogue-types.ts';
 import { linkLines } from '../catalogue/link-catalogue.ts';
-import { Decimal } from '../decimal.ts';
+import { Decimal, ZERO } from '../decimal.ts';
 import type { Formula } from '../formula/formula-types.ts';
 import { sameName } from '../labels/ingredient-statement.ts';
 import type { PresentedResult } from '../presentation/presented-result.ts';
@@ -23,10 +23,16 @@ export interface ItemNeed {
   readonly unit: StockUnit;
   readonly measure: BaseMeasure;
   /**
-   * How much, in the base measure; null when the formula weighs what the lots count or measure by
-   * volume (eggs by the each, milk by the litre): the cook says how much of a lot went in.
+   * How much, in the base measure: grams turned into pieces or millilitres through the
+   * catalogue's weight per unit (pieces rounded up); null when the formula weighs what the lots
+   * count or measure by volume and the catalogue gives no weight per unit: the cook says how much
+   * of a lot went in.
    */
   readonly amount: Decimal | null;
+  /** The grams the batch's lines weigh of it (as weighed where weighed). */
+  readonly grams: Decimal;
+  /** The catalogue's weight per unit (`weighs:`), when it gives one. */
+  readonly weighs?: string;
   /** The lines of the batch's sheet it is for, as the sheet names them. */
   readonly lines: readonly string[];
   /** Whether every one of those lines was weighed (else some count at their calculated grams). */
@@ -156,13 +162,12 @@ export function batchNeeds(
       unlinked.push({ name, grams, weighed });
       continue;
     }
-    const water = waterLine || item.kind === 'water';
-    const amount = gramsToBase(grams, item.unit, water);
     const entry = items.get(item.key) ?? {
       item,
-      need: { amount: new Decimal(0) as Decimal | null, lines: [] as string[], weighed: true },
+      need: { water: ZERO, other: ZERO, lines: [] as string[], weighed: true },
     };
-    entry.need.amount = entry.need.amount && amount ? entry.need.amount.plus(amount) : null;
+    if (waterLine || item.kind === 'water') entry.need.water = entry.need.water.plus(grams);
+    else entry.need.other = entry.need.other.plus(grams);
     entry.need.lines.push(name);
     entry.need.weighed &&= weighed;
     items.set(item.key, entry);
@@ -173,7 +178,9 @@ export function batchNeeds(
       name: itemWords(item),
       unit: item.unit,
       measure: baseMeasureOf(item.unit),
-      amount: need.amount,
+      amount: inBase(need, item),
+      grams: need.water.plus(need.other),
+      ...(item.weighs ? { weighs: item.weighs } : {}),
       lines: need.lines,
       weighed: need.weighed,
     })),
@@ -182,7 +189,27 @@ export function batchNeeds(
 }
 
 interface ItemNeedDraft {
-  amount: Decimal | null;
+  /** Grams of the item's lines weighed as water (the water convention), and of the others. */
+  water: Decimal;
+  other: Decimal;
   lines: string[];
   weighed: boolean;
+}
+
+/**
+ * An item's grams in its base measure, added up before they are turned (so pieces are rounded
+ * up once for the batch, not line by line); null when some cannot be turned.
+ */
+function inBase(need: ItemNeedDraft, item: CatalogueItem): Decimal | null {
+  let amount = ZERO;
+  for (const [grams, water] of [
+    [need.water, true],
+    [need.other, false],
+  ] as const) {
+    if (grams.isZero()) continue;
+    const base = gramsToBase(grams, item, water);
+    if (base === undefined) return null;
+    amount = amount.plus(base);
+  }
+  return amount;
 }

@@ -1,11 +1,13 @@
 import { componentLabel } from '../calculation/blend/blend-fat.ts';
-import type { BatchMaterial, PlanResult } from '../calculation/plan/plan-types.ts';
+import type { BatchMaterial, PlanBatch, PlanResult } from '../calculation/plan/plan-types.ts';
 import { greenMeatName } from '../calculation/plan/pull-list.ts';
 import type { Catalogue, CatalogueItem } from '../catalogue/catalogue-types.ts';
 import { itemNamed, linkLines } from '../catalogue/link-catalogue.ts';
 import type { Decimal } from '../decimal.ts';
 import type { Formula } from '../formula/formula-types.ts';
 import { sameName } from '../labels/ingredient-statement.ts';
+import { itemWeightOf } from '../catalogue/item-weight.ts';
+import { baseMeasureOf, gramsToBase, type BaseMeasure } from './base-measure.ts';
 import type { ApartReason } from './plan-stock-types.ts';
 import type { ItemNeed, ItemUse } from './pull-list.ts';
 
@@ -20,20 +22,31 @@ export interface ApartMaterial {
   readonly reason: ApartReason;
 }
 
+/** What a plan needs of one item, with the measure its amounts are in. */
+export interface PlanItemNeed extends ItemNeed {
+  /** Grams, millilitres or pieces. */
+  readonly measure: BaseMeasure;
+  /** The catalogue's weight per unit the grams were turned by ("50 g"), for an item not weighed. */
+  readonly weighs?: string;
+}
+
 /** A plan's materials by catalogue item, with what cannot be compared with stock apart. */
 export interface PlanItemNeeds {
-  /** Items weighed in and stocked by weight: the amounts are grams. In catalogue order. */
-  readonly needs: readonly ItemNeed[];
+  /**
+   * Items compared with stock, in catalogue order: stocked by weight (grams), or by count or
+   * volume with a weight per unit in the catalogue (pieces, rounded up batch by batch, or
+   * millilitres).
+   */
+  readonly needs: readonly PlanItemNeed[];
   /** In name order. */
   readonly apart: readonly ApartMaterial[];
 }
 
-const WEIGHTS = new Set(['g', 'kg', 'oz', 'lb']);
-
 function reasonApart(item: CatalogueItem | undefined): ApartReason | undefined {
   if (!item) return 'no-item';
   if (item.kind === 'water') return 'tap-water';
-  if (WEIGHTS.has(item.unit)) return undefined;
+  // Weighed in grams: an item stocked by count or volume is compared through its weight per unit.
+  if (baseMeasureOf(item.unit) === 'g' || itemWeightOf(item)) return undefined;
   return item.unit === 'each' ? 'by-count' : 'by-volume';
 }
 
@@ -60,7 +73,8 @@ function linkedNames(formula: Formula | undefined, catalogue: Catalogue): Map<st
 
 /**
  * What a plan's batches need of each catalogue item, batch by batch with each batch's start day,
- * in the item's base measure (grams: only items stocked by weight are compared), from the
+ * in the item's base measure (grams; pieces or millilitres through the catalogue's weight per
+ * unit, a batch's pieces rounded up to whole ones; see gramsToBase), from the
  * batches' own materials (the pull list before it is added up). A material links to the item its
  * formula line names (by `item:` or by name, as `larder check` links it), else to the one item
  * its name matches (a brine's water, which is no line of its own). What to pull is the weight
@@ -72,7 +86,8 @@ export function planItemNeeds(
   formulas: ReadonlyMap<string, Formula>,
   catalogue: Catalogue,
 ): PlanItemNeeds {
-  const uses = new Map<number, { name: string; uses: ItemUse[] }>();
+  // Grams by item and batch: a batch's lines of one item are turned into pieces together.
+  const uses = new Map<number, { name: string; uses: Map<PlanBatch, ItemUse> }>();
   const apart = new Map<
     string,
     { material: BatchMaterial; grams: Decimal; usedBy: string[]; reason: ApartReason }
@@ -84,9 +99,14 @@ export function planItemNeeds(
       const item = index === undefined ? undefined : catalogue.items[index];
       const amount = material.beforeTrimGrams ?? material.grams;
       const reason = reasonApart(item);
-      if (reason === undefined && index !== undefined) {
-        const found = uses.get(index) ?? { name: material.name, uses: [] };
-        found.uses.push({ start: batch.start, amount, formula: batch.formula.id });
+      if (reason === undefined && item && index !== undefined) {
+        const found = uses.get(index) ?? { name: material.name, uses: new Map() };
+        const use = found.uses.get(batch);
+        found.uses.set(batch, {
+          start: batch.start,
+          amount: use ? use.amount.plus(amount) : amount,
+          formula: batch.formula.id,
+        });
         uses.set(index, found);
         continue;
       }
@@ -108,11 +128,21 @@ export function planItemNeeds(
   return {
     needs: [...uses]
       .sort(([a], [b]) => a - b)
-      .map(([index, { name, uses: list }]) => ({
-        item: catalogue.items[index].key,
-        name,
-        uses: list,
-      })),
+      .map(([index, { name, uses: byBatch }]) => {
+        const item = catalogue.items[index];
+        const measure = baseMeasureOf(item.unit);
+        return {
+          item: item.key,
+          name,
+          measure,
+          ...(measure !== 'g' && item.weighs ? { weighs: item.weighs } : {}),
+          // Each batch's grams turned on their own: a batch cracks whole eggs.
+          uses: [...byBatch.values()].map((use) => ({
+            ...use,
+            amount: gramsToBase(use.amount, item, false)!,
+          })),
+        };
+      }),
     apart: [...apart.values()]
       .map(({ material, grams, usedBy, reason }) => ({
         name: material.name,

@@ -8,7 +8,7 @@
  * - no-item: no catalogue item names it (a cure's green meat, a line not yet in the catalogue);
  * - tap-water: the item is water, drawn from the tap, not received in lots;
  * - by-volume / by-count: the item is stocked by volume or by count, but a formula weighs it in
- *   grams, and the catalogue gives no weight per litre or per piece to turn one into the other.
+ *   grams, and the catalogue gives no weight per unit (`weighs:`) to turn one into the other.
  */
 export type ApartReason = 'no-item' | 'tap-water' | 'by-volume' | 'by-count';
 
@@ -18,18 +18,34 @@ export interface PresentedWeight {
   readonly grams: string;
 }
 
+/**
+ * An amount of stock as printed ("1.5 kg", "1.45 l", "12 each") and exact in its measure (grams,
+ * millilitres or pieces), as a string.
+ */
+export interface PresentedAmount {
+  readonly amount: string;
+  readonly exact: string;
+}
+
 /** One item of a plan's pull list against the lots on hand, ready to print or send. */
 export interface PresentedPullLine {
   /** The catalogue item's key. */
   readonly item: string;
   /** The material as the formulas name it. */
   readonly name: string;
-  readonly needed: PresentedWeight;
+  /** What the amounts count: grams, millilitres, or pieces (an item stocked by count). */
+  readonly measure: 'g' | 'ml' | 'each';
+  /**
+   * For an item stocked by count or volume, how the formulas' grams were turned into its
+   * measure, in words ("at 50 g for one, whole pieces for each batch"); null for a weight.
+   */
+  readonly conversion: string | null;
+  readonly needed: PresentedAmount;
   /** Every lot of it on hand now, whatever its use-by. */
-  readonly onHand: PresentedWeight;
+  readonly onHand: PresentedAmount;
   /** What the plan's batches can take from those lots. */
-  readonly usable: PresentedWeight;
-  readonly short: PresentedWeight;
+  readonly usable: PresentedAmount;
+  readonly short: PresentedAmount;
   readonly status: 'covered' | 'short';
   /** When short: the day more must arrive by, YYYY-MM-DD; null when covered. */
   readonly arriveBy: string | null;

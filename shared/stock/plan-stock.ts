@@ -6,10 +6,13 @@ import { weekdayDayWords, dayWords } from '../presentation/date-words.ts';
 import { formatMass } from '../presentation/format-figure.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 import type { StockLot } from './fifo.ts';
-import { planItemNeeds } from './plan-item-needs.ts';
+import { lotAmountWords } from '../presentation/lot-amount.ts';
+import type { BaseMeasure } from './base-measure.ts';
+import { planItemNeeds, type PlanItemNeed } from './plan-item-needs.ts';
 import type {
   ApartReason,
   PlanStock,
+  PresentedAmount,
   PresentedPullLine,
   PresentedWeight,
 } from './plan-stock-types.ts';
@@ -23,12 +26,19 @@ export interface StockOnHand {
   readonly lastFrom: ReadonlyMap<string, LastDelivery>;
 }
 
-const WHY: Readonly<Record<ApartReason, string>> = {
-  'no-item': 'not in the catalogue of materials: check the stock by hand',
-  'tap-water': 'water from the tap: not kept in lots',
-  'by-volume': 'stocked by volume but weighed in the formulas: check the stock by hand',
-  'by-count': 'stocked by count but weighed in the formulas: check the stock by hand',
-};
+/** Why a material is not compared, in a cook's words. */
+function whyApart(reason: ApartReason, name: string): string {
+  switch (reason) {
+    case 'no-item':
+      return 'not in the catalogue of materials: check the stock by hand';
+    case 'tap-water':
+      return 'water from the tap: not kept in lots';
+    case 'by-volume':
+      return `stocked by volume but weighed in the formulas, and the catalogue of materials gives no weight for a volume of ${name}: check the stock by hand`;
+    case 'by-count':
+      return `stocked by count but weighed in the formulas, and the catalogue of materials gives no weight for one ${name}: check the stock by hand`;
+  }
+}
 
 /** How the comparison is made, for the cook. */
 export const PLAN_STOCK_NOTE =
@@ -42,20 +52,40 @@ function weight(grams: Decimal, system: UnitSystem): PresentedWeight {
   return { amount: formatMass(grams, system), grams: grams.toString() };
 }
 
+/** An amount in its measure: a weight as the plan's sheet prints it, else as a lot is counted. */
+function amountIn(value: Decimal, measure: BaseMeasure, system: UnitSystem): PresentedAmount {
+  const exact = value.toString();
+  return {
+    amount: measure === 'g' ? formatMass(value, system) : lotAmountWords(exact, measure),
+    exact,
+  };
+}
+
+/** How an item's grams were turned into its measure, in words; null for a weight. */
+function conversionWords(need: PlanItemNeed | undefined): string | null {
+  if (!need?.weighs || need.measure === 'g') return null;
+  return need.measure === 'each'
+    ? `counted at ${need.weighs} for one, in whole pieces for each batch`
+    : `measured at ${need.weighs}`;
+}
+
 function presentLine(
   line: PullLine,
-  usedBy: readonly string[],
+  need: PlanItemNeed | undefined,
   titles: ReadonlyMap<string, string>,
   system: UnitSystem,
 ): PresentedPullLine {
   const by = line.arriveBy;
+  const measure = need?.measure ?? 'g';
   return {
     item: line.item,
     name: line.name,
-    needed: weight(line.needed, system),
-    onHand: weight(line.onHand, system),
-    usable: weight(line.usable, system),
-    short: weight(line.short, system),
+    measure,
+    conversion: conversionWords(need),
+    needed: amountIn(line.needed, measure, system),
+    onHand: amountIn(line.onHand, measure, system),
+    usable: amountIn(line.usable, measure, system),
+    short: amountIn(line.short, measure, system),
     status: line.short.isZero() ? 'covered' : 'short',
     arriveBy: by?.date ?? null,
     arriveByWords: by
@@ -66,7 +96,7 @@ function presentLine(
       (lot) =>
         `lot ${lot.lot} is past its use-by (${dayWords(lot.useBy)}) on ${dayWords(lot.neededOn)}, when it would be used: use it elsewhere first or discard it`,
     ),
-    usedBy,
+    usedBy: need ? [...new Set(need.uses.map((use) => use.formula))] : [],
   };
 }
 
@@ -91,11 +121,9 @@ export function planStock(
 ): PlanStock {
   const { needs, apart } = planItemNeeds(plan, formulas, catalogue);
   const titles = new Map(plan.batches.map((batch) => [batch.formula.id, batch.formula.title]));
-  const usedBy = new Map(
-    needs.map((need) => [need.item, [...new Set(need.uses.map((use) => use.formula))]]),
-  );
+  const byItem = new Map(needs.map((need) => [need.item, need]));
   const lines = pullAgainstStock(needs, stock.lots, stock.lastFrom).map((line) =>
-    presentLine(line, usedBy.get(line.item) ?? [], titles, system),
+    presentLine(line, byItem.get(line.item), titles, system),
   );
   return {
     compared: true,
@@ -105,7 +133,7 @@ export function planStock(
       name: line.name,
       needed: weight(line.grams, system),
       reason: line.reason,
-      why: WHY[line.reason],
+      why: whyApart(line.reason, line.name),
       usedBy: line.usedBy,
     })),
     note: PLAN_STOCK_NOTE,

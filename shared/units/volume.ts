@@ -5,6 +5,13 @@ import { parseWithTable, spellings, type UnitTable } from './unit-table.ts';
 export const LITRES_PER_US_GALLON = new Decimal('3.785411784');
 
 /**
+ * Litres in one US cup: a sixteenth of the US gallon (8 of its 128 fluid ounces), exact: the cup
+ * of US household measures, as food composition tables give "1 cup". source: NIST SP 811 (2008),
+ * Appendix B.8, cup (U.S.) = 2.365 882 E−04 m³ (from memory)
+ */
+export const LITRES_PER_US_CUP = LITRES_PER_US_GALLON.div(16);
+
+/**
  * Grams of water per litre when a brine's water is measured by volume. We take 1 kg per litre,
  * the density of water at about 4 °C; at kitchen temperatures (15–25 °C) water is 0.997–0.999 kg/L,
  * so a measured litre of tap water weighs at most 0.3 % less than we count. Weigh the water when it

@@ -18,10 +18,12 @@ const BUN_START = addDays(SERVICE, -1);
 interface Line {
   item: string;
   status: string;
-  needed: { grams: string };
-  onHand: { grams: string };
-  usable: { grams: string };
-  short: { grams: string };
+  measure: string;
+  conversion: string | null;
+  needed: { amount: string; exact: string };
+  onHand: { amount: string; exact: string };
+  usable: { amount: string; exact: string };
+  short: { amount: string; exact: string };
   arriveBy: string | null;
   arriveByWords: string | null;
   lastFrom: { supplier: string; receivedOn: string } | null;
@@ -84,6 +86,27 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
           receivedAt: at('05:00'),
           emptiedOn: TODAY,
         },
+        // Eggs counted and milk by volume: compared through the catalogue's weights per unit.
+        {
+          item: 'eggs',
+          itemName: 'eggs',
+          supplier: 'Lowmere Dairy',
+          supplierLot: 'LD-40',
+          grams: '30',
+          unit: 'each',
+          useBy: addDays(SERVICE, 30),
+          receivedAt: at('06:40'),
+        },
+        {
+          item: 'whole-milk',
+          itemName: 'whole milk',
+          supplier: 'Lowmere Dairy',
+          supplierLot: 'LD-41',
+          grams: '6000',
+          unit: 'ml',
+          useBy: addDays(SERVICE, 30),
+          receivedAt: at('06:50'),
+        },
       ]);
       const before = await snapshot(server());
       answer = await server().as('tobin').get(`/api/plans/pull-list?${QUERY}`);
@@ -112,10 +135,10 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
       const belly = dec(9000).div('0.90').div('0.94').times('0.0225');
       const bun = dec(total.grams).minus(belly);
       assert.equal(places4(belly.toString()), '239.3617');
-      assert.equal(places4(salt.needed.grams), places4(total.grams));
-      assert.equal(salt.onHand.grams, '5050');
-      assert.equal(places4(salt.usable.grams), places4(belly.plus(50).toString()));
-      assert.equal(places4(salt.short.grams), places4(bun.minus(50).toString()));
+      assert.equal(places4(salt.needed.exact), places4(total.grams));
+      assert.equal(salt.onHand.exact, '5050');
+      assert.equal(places4(salt.usable.exact), places4(belly.plus(50).toString()));
+      assert.equal(places4(salt.short.exact), places4(bun.minus(50).toString()));
       assert.equal(salt.status, 'short');
       assert.equal(salt.arriveBy, BUN_START);
       assert.match(
@@ -130,8 +153,8 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
     // by hand: none on hand, never received: the belly's whole need is short, by its start day.
     it('should say an item with nothing on hand is short all of it, by its first batch', () => {
       const pepper = line('pepper-cracked');
-      assert.equal(pepper.onHand.grams, '0');
-      assert.equal(pepper.short.grams, pepper.needed.grams);
+      assert.equal(pepper.onHand.exact, '0');
+      assert.equal(pepper.short.exact, pepper.needed.exact);
       assert.equal(pepper.arriveBy, BELLY_START);
       assert.equal(pepper.lastFrom, null);
     });
@@ -140,8 +163,8 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
     it('should say an item the lots cover is covered, with no day to arrive by', () => {
       const honey = line('honey');
       assert.equal(honey.status, 'covered');
-      assert.equal(honey.short.grams, '0');
-      assert.equal(honey.usable.grams, honey.needed.grams);
+      assert.equal(honey.short.exact, '0');
+      assert.equal(honey.usable.exact, honey.needed.exact);
       assert.equal(honey.arriveBy, null);
     });
 
@@ -156,7 +179,32 @@ describe('GET /api/plans/pull-list and POST /api/plans: the pull list against th
       assert.ok(!apart.some((a) => a.name.startsWith('green meat for')));
       assert.ok(lines.some((l) => l.item === 'pork-belly'));
       assert.ok(apart.some((a) => a.name === 'water' && a.reason === 'tap-water'));
-      assert.ok(apart.some((a) => a.name === 'whole egg' && a.reason === 'by-count'));
+      // The catalogue weighs eggs and milk: neither is set apart; the sauce's brine it does not.
+      assert.ok(!apart.some((a) => a.name === 'whole egg' || a.name === 'whole milk'));
+      assert.ok(apart.some((a) => a.name === 'dill pickle brine' && a.reason === 'by-volume'));
+    });
+
+    // by hand: the bun batch's egg, in grams on the pull list, at 50 g a large egg (source: USDA
+    // FoodData Central, SR Legacy, "Egg, whole, raw, fresh", 1 large = 50 g, from memory, as the
+    // demo catalogue gives it), rounded up to whole eggs; its milk at 244 g a US cup of
+    // 236.5882365 ml (source: the same, "Milk, whole, 3.25% milkfat", 1 cup = 244 g, from
+    // memory; the cup from NIST SP 811 (2008), Appendix B.8). Both within what is on hand.
+    it('should compare the eggs in pieces and the milk in millilitres with what is on hand', () => {
+      const grams = (name: string) =>
+        dec(answer.json.pullList.find((i: { name: string }) => i.name === name).grams);
+      const eggs = line('eggs');
+      assert.equal(eggs.measure, 'each');
+      assert.equal(eggs.needed.exact, grams('whole egg').div(50).ceil().toString());
+      assert.equal(eggs.onHand.exact, '30');
+      assert.equal(eggs.status, 'covered');
+      const milk = line('whole-milk');
+      assert.equal(milk.measure, 'ml');
+      assert.equal(
+        places4(milk.needed.exact),
+        places4(grams('whole milk').times('236.5882365').div(244).toString()),
+      );
+      assert.equal(milk.onHand.exact, '6000');
+      assert.equal(milk.status, 'covered');
     });
 
     it('should give POST /api/plans the same comparison', async () => {

@@ -133,6 +133,21 @@ describe('larder check with a catalogue of materials', () => {
     assert.match(run.stdout, /and the catalogue: 1 ok, 1 with errors, 0 warning\(s\)\.$/m);
   });
 
+  it('places a weight per unit that does not fit its item, as an error of the catalogue', async (t) => {
+    // Milk stocked by the litre weighs so much per volume; "244 g" alone says per what? Line 10,
+    // column 58 is its "weighs:", the third item. own example
+    const milk = `${CATALOGUE}  - { key: milk, name: whole milk, kind: dairy, unit: l, weighs: 244 g }\n`;
+    const dir = folder(t, milk);
+    const run = await runLarder(['check', path.join(dir, 'catalogue.yaml')]);
+    assertExit(run, 3);
+    assert.match(
+      run.stdout,
+      /^.*catalogue\.yaml:10:58: error: expected a weight per volume, such as "244 g per cup", "1\.03 kg per l", but got "244 g": this item is stocked by volume: say per how much, such as "per cup" \(at items\[3\]\.weighs\)$/m,
+    );
+    const fixed = folder(t, milk.replace('weighs: 244 g', 'weighs: 244 g per cup'));
+    assertExit(await runLarder(['check', path.join(fixed, 'catalogue.yaml')]), 0);
+  });
+
   it('checks the catalogue named alone', async (t) => {
     const dir = folder(t, CATALOGUE.replace('kind: salt', 'kind: salts'));
     const run = await runLarder(['check', path.join(dir, 'catalogue.yaml')]);

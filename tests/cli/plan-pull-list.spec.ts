@@ -18,9 +18,9 @@ const RECEIPTS = burgerReceipts(today(), SERVICE);
 interface Line {
   item: string;
   status: string;
-  onHand: { grams: string };
-  short: { grams: string };
-  needed: { grams: string };
+  onHand: { exact: string };
+  short: { exact: string };
+  needed: { exact: string };
   arriveBy: string | null;
   lastFrom: { supplier: string } | null;
 }
@@ -39,9 +39,9 @@ function assertStock(lines: Map<string, Line>): void {
   const cure = lines.get('curing-salt-1');
   assert.ok(cure);
   assert.equal(cure.status, 'short');
-  assert.equal(cure.onHand.grams, '5');
+  assert.equal(cure.onHand.exact, '5');
   // by hand: short = needed − the 5 g lot, by the morning the belly starts (service − 10 days)
-  assert.equal(Number(cure.short.grams), Number(cure.needed.grams) - 5);
+  assert.equal(Number(cure.short.exact), Number(cure.needed.exact) - 5);
   assert.equal(cure.arriveBy, addDays(SERVICE, -10));
   assert.equal(cure.lastFrom?.supplier, 'Kestrel Cure Supply');
 }

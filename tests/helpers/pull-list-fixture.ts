@@ -5,14 +5,19 @@ export interface StockDatabase {
   readonly sequelize: Sequelize;
 }
 
-/** A delivery as the receipts table keeps it; amounts in the item's base measure (grams here). */
+/**
+ * A delivery as the receipts table keeps it; amounts in the item's base measure: grams, unless
+ * `unit` says the item is counted (each) or measured (ml).
+ */
 export interface ReceiptToAdd {
   readonly item: string;
   readonly itemName: string;
   readonly supplier: string;
   readonly supplierLot: string;
-  /** Grams received; what is left too unless `remaining` says otherwise. */
+  /** Grams (or pieces, or millilitres) received; what is left too unless `remaining` says otherwise. */
   readonly grams: string;
+  /** The base measure received in: 'g' unless given. */
+  readonly unit?: 'g' | 'ml' | 'each';
   readonly remaining?: string;
   readonly useBy?: string;
   /** When it was taken in, ISO 8601 with its offset. */
@@ -57,7 +62,7 @@ export async function addReceipts(
     await sequelize.query(
       `INSERT INTO receipts (lot_code, item, item_name, supplier, supplier_lot, use_by, quantity,
          unit, amount, remaining, decision, received_at, received_on, person_id, emptied_on)
-       VALUES (?, ?, ?, ?, ?, ?, ?, 'g', ?, ?, ?, ?, ?, ?, ?)`,
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
       {
         replacements: [
           code,
@@ -67,6 +72,7 @@ export async function addReceipts(
           r.supplierLot,
           r.useBy ?? null,
           r.grams,
+          r.unit ?? 'g',
           r.grams,
           r.remaining ?? r.grams,
           r.decision ?? 'accepted',

@@ -16,6 +16,7 @@ export type {
 } from '../../../shared/api/plan-record.ts';
 export type {
   PlanStock,
+  PresentedAmount,
   PresentedPullLine,
   PresentedWeight,
 } from '../../../shared/stock/plan-stock-types.ts';

@@ -10,6 +10,8 @@ const BELLY: SuggestedItem = {
   unit: 'kg',
   measure: 'g',
   need: '10000',
+  grams: '10000',
+  weighs: null,
   weighed: false,
   takes: [
     {

@@ -170,9 +170,14 @@ export class MadeFrom {
   }
 
   protected needWords(item: SuggestedItem): string | null {
-    return item.need === null
-      ? null
-      : lotAmountWords(new Decimal(item.need), item.measure, item.unit);
+    if (item.need === null) return null;
+    const need = lotAmountWords(new Decimal(item.need), item.measure, item.unit);
+    if (item.weighs === null || item.grams === null) return need;
+    // Turned from the batch's grams through the catalogue: say how, so the cook can check it.
+    const grams = lotAmountWords(new Decimal(item.grams), 'g');
+    return item.measure === 'each'
+      ? `${need} (${grams} at ${item.weighs} for one, whole pieces)`
+      : `${need} (${grams} at ${item.weighs})`;
   }
 
   protected shortWords(item: SuggestedItem): string | null {

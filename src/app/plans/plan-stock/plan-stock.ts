@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
-import type { PlanStock, PresentedPullLine, PresentedWeight } from '../plan-types';
+import type { PlanStock, PresentedAmount, PresentedPullLine, PresentedWeight } from '../plan-types';
 
 /**
  * A plan's pull list against the lots on hand: one card per material, short ones first and
@@ -32,9 +32,9 @@ export class PlanStockView {
     () => this.lines().filter((line) => line.status === 'short').length,
   );
 
-  /** A weight for the cook: "none" for nothing. */
-  protected amount(weight: PresentedWeight): string {
-    return weight.grams === '0' ? 'none' : weight.amount;
+  /** An amount for the cook: "none" for nothing. */
+  protected amount(figure: PresentedWeight | PresentedAmount): string {
+    return ('exact' in figure ? figure.exact : figure.grams) === '0' ? 'none' : figure.amount;
   }
 
   /** The batches that use a material, by title. */
