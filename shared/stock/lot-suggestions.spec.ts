@@ -3,7 +3,12 @@ import { describe, it } from 'node:test';
 import { dec } from '../decimal.ts';
 import type { BatchNeeds } from './batch-needs.ts';
 import type { StockLot } from './fifo.ts';
-import { sourceBatchOrder, suggestForNeeds, type SourceCandidate } from './lot-suggestions.ts';
+import {
+  sourceBatchesExpired,
+  sourceBatchOrder,
+  suggestForNeeds,
+  type SourceCandidate,
+} from './lot-suggestions.ts';
 
 const lot = (item: string, code: string, grams: string, useBy?: string): StockLot => ({
   item,
@@ -90,6 +95,41 @@ describe('sourceBatchOrder', () => {
     assert.deepEqual(
       order.map((b) => b.lotCode),
       ['261130-SB-01', '261202-SB-01'],
+    );
+  });
+
+  // hand-worked on Tue 8 Dec 2026: sauce batches dated by the Food Code's 7 days, day 1 the day
+  // each was made, marked done (FDA Food Code 2022, 3-501.17(A); see source-use-by.spec.ts): one
+  // made 1 Dec, use by 7 Dec, is past it and set apart; one started 2 Dec but made 4 Dec (use by
+  // 10 Dec) goes after one started and made 3 Dec (use by 9 Dec): first to expire first, not
+  // first started. A finished batch with no use-by (its formula dates nothing) comes after the
+  // dated ones; the batch under way last, as before.
+  it('should offer finished batches first to expire first, and set those past their use-by apart', () => {
+    const dated = (lotCode: string, startedOn: string, useBy?: string): SourceCandidate => ({
+      ...batch(lotCode, 'done', startedOn),
+      ...(useBy ? { useBy } : {}),
+    });
+    const candidates = [
+      dated('261202-HS-01', '2026-12-02', '2026-12-10'),
+      dated('261203-HS-01', '2026-12-03', '2026-12-09'),
+      dated('261201-HS-01', '2026-12-01', '2026-12-07'),
+      dated('261130-HS-01', '2026-11-30'),
+      batch('261208-HS-01', 'in-progress', '2026-12-08'),
+      // past its use-by more than a week before: never offered, no longer named
+      dated('261120-HS-01', '2026-11-20', '2026-11-26'),
+    ];
+    assert.deepEqual(
+      sourceBatchOrder(candidates, 'chuck-grind', 'X', '2026-12-08').map((b) => b.lotCode),
+      ['261203-HS-01', '261202-HS-01', '261130-HS-01', '261208-HS-01'],
+    );
+    assert.deepEqual(
+      sourceBatchesExpired(candidates, 'chuck-grind', 'X', '2026-12-08').map((b) => b.lotCode),
+      ['261201-HS-01'],
+    );
+    // On its use-by day a batch may still be used.
+    assert.deepEqual(
+      sourceBatchesExpired(candidates, 'chuck-grind', 'X', '2026-12-07').map((b) => b.lotCode),
+      [],
     );
   });
 });
