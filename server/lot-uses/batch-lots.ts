@@ -17,6 +17,7 @@ import { batchNeeds, type BatchNeeds } from '../../shared/stock/batch-needs.ts';
 import { suggestLots, type StockLot } from '../../shared/stock/fifo.ts';
 import {
   assemblyParts,
+  sourceBatchesExpired,
   sourceBatchOrder,
   suggestForNeeds,
 } from '../../shared/stock/lot-suggestions.ts';
@@ -34,6 +35,7 @@ import {
   type ReceiptRow,
   type UseRow,
 } from './lot-use-rows.ts';
+import { datedSources, datedSourcesById, type DatedSource } from './source-use-bys.ts';
 
 /** What lot uses work with. */
 export interface LotUsesDeps {
@@ -115,8 +117,14 @@ function useView(
   };
 }
 
-/** A recorded lot use as the API shows it. */
-export function recordedView(row: UseRow): LotUseView {
+/**
+ * A recorded lot use as the API shows it.
+ * @param sources the batches drawn on, dated, by id: a batch's use-by is worked out, not kept
+ */
+export function recordedView(
+  row: UseRow,
+  sources: ReadonlyMap<number, DatedSource> = new Map(),
+): LotUseView {
   const batch = row.source_batch_id !== null;
   return useView(
     { item: row.item, amount: new Decimal(row.amount), usedOn: row.used_on },
@@ -127,7 +135,7 @@ export function recordedView(row: UseRow): LotUseView {
       supplier: row.supplier,
       supplierLot: row.supplier_lot,
       unit: row.unit,
-      useBy: row.use_by,
+      useBy: batch ? (sources.get(row.source_batch_id!)?.useBy ?? null) : row.use_by,
     },
   );
 }
@@ -139,6 +147,19 @@ function onHandView(row: ReceiptRow): LotOnHand {
     supplierLot: row.supplier_lot,
     remaining: row.remaining,
     useBy: row.use_by,
+  };
+}
+
+/** A batch that may be drawn on as the lots on hand are shown: its use-by, or why it has none. */
+function sourceOnHand(source: DatedSource): LotOnHand {
+  return {
+    lotCode: source.lotCode,
+    supplier: null,
+    supplierLot: null,
+    remaining: null,
+    useBy: source.useBy ?? null,
+    madeOn: source.finishedOn,
+    ...(source.noUseBy ? { noUseBy: source.noUseBy } : {}),
   };
 }
 
@@ -200,9 +221,13 @@ export async function suggestionFor(
     }),
   );
   if (of.parts.length === 0) return items;
-  const candidates = await sourceCandidates(deps.db, of.parts, usedOn, t);
+  const candidates = await datedSources(
+    deps.history,
+    await sourceCandidates(deps.db, of.parts, usedOn, t),
+  );
   const parts = of.parts.map((part): SuggestedItem => {
     const order = sourceBatchOrder(candidates, part, batch.lotCode, usedOn);
+    const expired = sourceBatchesExpired(candidates, part, batch.lotCode, usedOn);
     const title = candidates.find((c) => c.formulaId === part)?.title ?? part;
     return {
       item: part,
@@ -216,14 +241,8 @@ export async function suggestionFor(
       weighed: false,
       takes: [],
       shortfall: null,
-      expired: [],
-      onHand: order.map((c) => ({
-        lotCode: c.lotCode,
-        supplier: null,
-        supplierLot: null,
-        remaining: null,
-        useBy: null,
-      })),
+      expired: expired.map(sourceOnHand),
+      onHand: order.map(sourceOnHand),
     };
   });
   return [...items, ...parts];
@@ -244,10 +263,15 @@ export async function batchLots(deps: LotUsesDeps, lot: string): Promise<BatchLo
   const formula = await formulaOf(deps.history, batch);
   const of = await needsOf(deps, batch, formula);
   const uses = await standingUses(deps.db, batch.id);
+  const sources = await datedSourcesById(
+    deps.db,
+    deps.history,
+    uses.flatMap((use) => (use.source_batch_id === null ? [] : [use.source_batch_id])),
+  );
   return {
     lotCode: batch.lotCode,
     usedOn: batch.startedOn,
-    uses: uses.map(recordedView),
+    uses: uses.map((use) => recordedView(use, sources)),
     // Once lots are recorded nothing is suggested, but what is on hand stays, to change them by.
     suggested: (await suggestionFor(deps, batch, of)).map((item) =>
       uses.length ? { ...item, takes: [], shortfall: null } : item,

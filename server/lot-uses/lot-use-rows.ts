@@ -123,16 +123,47 @@ interface CandidateRow {
   readonly id: number;
   readonly lot_code: string;
   readonly formula_id: string;
+  readonly formula_revision: string;
   readonly formula_title: string;
   readonly status: BatchStatus;
   readonly started_on: string;
   readonly released: number;
+  readonly done_at: string | null;
 }
 
-/** A batch that may be drawn on, with its id and its formula's title. */
-export type SourceRow = SourceCandidate & { readonly id: number; readonly title: string };
+/** A batch that may be drawn on, with its id, its formula's title and revision, and when it was finished. */
+export type SourceRow = SourceCandidate & {
+  readonly id: number;
+  readonly title: string;
+  readonly formulaRevision: string;
+  /** The day it was marked done (UTC, as start days are counted), or null while under way. */
+  readonly finishedOn: string | null;
+};
 
-/** The batches of these formulas started by a day: candidates for an assembly's parts. */
+const CANDIDATE_COLUMNS = `b.id, b.lot_code, b.formula_id, b.formula_revision, b.formula_title,
+  b.status, b.started_on,
+  EXISTS (SELECT 1 FROM verifications v WHERE v.batch_id = b.id) AS released,
+  (SELECT MIN(e.at) FROM batch_events e
+   WHERE e.batch_id = b.id AND e.type = 'status' AND e.to_status = 'done') AS done_at`;
+
+function sourceRow(row: CandidateRow): SourceRow {
+  return {
+    id: row.id,
+    lotCode: row.lot_code,
+    formulaId: row.formula_id,
+    formulaRevision: row.formula_revision,
+    title: row.formula_title,
+    status: row.status,
+    released: row.released === 1,
+    startedOn: row.started_on,
+    finishedOn: row.done_at === null ? null : new Date(row.done_at).toISOString().slice(0, 10),
+  };
+}
+
+/**
+ * The batches of these formulas started by a day: candidates for an assembly's parts, the 200
+ * started last (older ones are long used or past their use-by).
+ */
 export async function sourceCandidates(
   db: Database,
   formulas: readonly string[],
@@ -142,23 +173,30 @@ export async function sourceCandidates(
   if (formulas.length === 0) return [];
   const rows = await select<CandidateRow>(
     db,
-    `SELECT b.id, b.lot_code, b.formula_id, b.formula_title, b.status, b.started_on,
-       EXISTS (SELECT 1 FROM verifications v WHERE v.batch_id = b.id) AS released
+    `SELECT ${CANDIDATE_COLUMNS}
      FROM batches b
      WHERE b.formula_id IN (${formulas.map(() => '?').join(', ')}) AND b.started_on <= ?
-     ORDER BY b.started_on, b.lot_code LIMIT 200`,
+     ORDER BY b.started_on DESC, b.lot_code DESC LIMIT 200`,
     [...formulas, usedOn],
     t,
   );
-  return rows.map((row) => ({
-    id: row.id,
-    lotCode: row.lot_code,
-    formulaId: row.formula_id,
-    title: row.formula_title,
-    status: row.status,
-    released: row.released === 1,
-    startedOn: row.started_on,
-  }));
+  return rows.map(sourceRow);
+}
+
+/** Batches by id, as candidates are read: the sources a batch was made from. */
+export async function sourceRowsById(
+  db: Database,
+  ids: readonly number[],
+  t?: Transaction,
+): Promise<SourceRow[]> {
+  if (ids.length === 0) return [];
+  const rows = await select<CandidateRow>(
+    db,
+    `SELECT ${CANDIDATE_COLUMNS} FROM batches b WHERE b.id IN (${ids.map(() => '?').join(', ')})`,
+    [...ids],
+    t,
+  );
+  return rows.map(sourceRow);
 }
 
 /**

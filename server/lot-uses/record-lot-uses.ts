@@ -13,6 +13,7 @@ import { recordedBatch, type RecordedBatch } from '../process/recorded-batch.ts'
 import { formulaOf } from '../process/weighing-writes.ts';
 import { batchLots, needsOf, suggestionFor, type LotUsesDeps, type NeedsOf } from './batch-lots.ts';
 import { drawsOn, receiptByCode, standingUses } from './lot-use-rows.ts';
+import { datedSourcesById } from './source-use-bys.ts';
 
 /** A lot use about to be written. */
 interface NewUse {
@@ -37,7 +38,8 @@ function refused(code: string, field: string, message: string): AppError {
  * @throws RecordsError 'not-found'; AppError 409 'not-started', 'lots-recorded'; 422 naming the
  *   pick: 'bad-lots', 'bad-amount', 'no-such-lot', 'other-item', 'not-needed', 'refused-lot',
  *   'not-on-hand', 'not-yet-received', 'expired-lot', 'over-draw', 'no-such-batch', 'not-a-part',
- *   'discarded-source', 'self-source', 'source-later', 'cycle', 'nothing-to-record'
+ *   'discarded-source', 'self-source', 'source-later', 'expired-source', 'cycle',
+ *   'nothing-to-record'
  */
 export async function recordLotUses(
   deps: LotUsesDeps,
@@ -236,6 +238,15 @@ async function sourcePick(
       'source-later',
       `${field}.batch`,
       `batch ${code} was started on ${dayWords(source.startedOn)}, after this one`,
+    );
+  const useBy = (await datedSourcesById(deps.db, deps.history, [source.id], t)).get(
+    source.id,
+  )?.useBy;
+  if (useBy !== undefined && useBy < batch.startedOn)
+    throw refused(
+      'expired-source',
+      `${field}.batch`,
+      `batch ${code} was to be used by ${dayWords(useBy)}, before this batch was started on ${dayWords(batch.startedOn)}: discard it`,
     );
   if (await drawsOn(deps.db, source.id, batch.id, t))
     throw refused(

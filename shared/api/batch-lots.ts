@@ -23,7 +23,7 @@ export interface LotUseView {
   /** The same in the unit the lot came in, exact ("2.5" kg), and that unit. */
   readonly lotAmount: string;
   readonly lotUnit: StockUnit | null;
-  /** The lot's use-by (ISO date), when it has one. */
+  /** The lot's use-by (ISO date), when it has one: a batch's is worked out from its formula. */
   readonly useBy: string | null;
   /** The day of use (ISO date). */
   readonly usedOn: string;
@@ -36,7 +36,12 @@ export interface LotOnHand {
   readonly supplierLot: string | null;
   /** What is left, base measure, exact; null for a batch (its weight is not kept as stock). */
   readonly remaining: string | null;
+  /** The last day it may be used (ISO date): the supplier's, or a batch's worked out from its formula. */
   readonly useBy: string | null;
+  /** A batch: the day it was marked done (ISO date), or null while it is under way. */
+  readonly madeOn?: string | null;
+  /** A batch with no use-by: why, in a cook's words ("not ready to eat: …"). */
+  readonly noUseBy?: string;
 }
 
 /** What the batch needs of one item, and the lots suggested for it. */
@@ -66,7 +71,10 @@ export interface SuggestedItem {
   readonly takes: readonly LotUseView[];
   /** What the lots on hand cannot cover, base measure; null when the need is not known. */
   readonly shortfall: string | null;
-  /** Lots of the item past their use-by on the day of use, to be discarded. */
+  /**
+   * Lots of the item past their use-by on the day of use, to be discarded; for an assembly's
+   * part, its batches whose use-by fell in the week before.
+   */
   readonly expired: readonly LotOnHand[];
   /** Every usable lot of the item on hand on the day of use, first to expire first. */
   readonly onHand: readonly LotOnHand[];

@@ -2,6 +2,7 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import { Decimal } from '../../shared/decimal.ts';
 import { insertReceipts, lotsLeft } from '../helpers/lot-use-fixture.ts';
+import { DAIRY_LOTS, dairyDelivery } from '../helpers/dairy-fixture.ts';
 import { clearStock } from '../helpers/pull-list-fixture.ts';
 import { clockFrom, startTestServer } from '../helpers/test-server.ts';
 
@@ -24,32 +25,7 @@ describe('a batch drawing on eggs counted and milk by the litre', () => {
     const server = await startTestServer(t, {}, { now: CLOCK });
     const { db } = server.context;
     await clearStock(db);
-    await insertReceipts(db, [
-      {
-        lotCode: 'R261201-01',
-        item: 'eggs',
-        itemName: 'eggs',
-        supplier: 'Lowmere Dairy',
-        supplierLot: 'LD-1201',
-        quantity: '30',
-        unit: 'each',
-        amount: '30',
-        receivedOn: '2026-12-01',
-        useBy: '2026-12-28',
-      },
-      {
-        lotCode: 'R261201-02',
-        item: 'whole-milk',
-        itemName: 'whole milk',
-        supplier: 'Lowmere Dairy',
-        supplierLot: 'LD-1202',
-        quantity: '6',
-        unit: 'l',
-        amount: '6000',
-        receivedOn: '2026-12-01',
-        useBy: '2026-12-12',
-      },
-    ]);
+    await insertReceipts(db, dairyDelivery('2026-12-01'));
     const made = await server.as('tobin').post('/api/batches', {
       formula: 'pit-bun',
       batch: { pieces: '24', start: '2026-12-03' },
@@ -70,7 +46,7 @@ describe('a batch drawing on eggs counted and milk by the litre', () => {
     assert.equal(eggs.need, eggGrams.div(50).ceil().toString());
     assert.deepEqual(
       eggs.takes.map((u: { lotCode: string; amount: string }) => [u.lotCode, u.amount]),
-      [['R261201-01', eggs.need]],
+      [[DAIRY_LOTS.eggs, eggs.need]],
     );
     // by hand: the sheet's milk at 244 g a US cup of 3.785411784 L ÷ 16 = 236.5882365 ml
     // (source: the same, "Milk, whole, 3.25% milkfat, with added vitamin D", 1 cup = 244 g,
@@ -83,7 +59,7 @@ describe('a batch drawing on eggs counted and milk by the litre', () => {
     const accept = await server.as('tobin').post(`/api/batches/${lot}/lots`, { accept: true });
     assert.equal(accept.status, 201, accept.text);
     const left = await lotsLeft(db);
-    assert.equal(left['R261201-01'].remaining, new Decimal(30).minus(eggs.need).toString());
-    assert.equal(left['R261201-02'].remaining, new Decimal(6000).minus(milk.need).toString());
+    assert.equal(left[DAIRY_LOTS.eggs].remaining, new Decimal(30).minus(eggs.need).toString());
+    assert.equal(left[DAIRY_LOTS.milk].remaining, new Decimal(6000).minus(milk.need).toString());
   });
 });
