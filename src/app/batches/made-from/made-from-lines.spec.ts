@@ -1,7 +1,13 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import type { SuggestedItem } from '../../../../shared/api/batch-lots.ts';
-import { amountText, picksOf, startingLines } from './made-from-lines.ts';
+import type { LotOnHand, SuggestedItem } from '../../../../shared/api/batch-lots.ts';
+import {
+  amountText,
+  lotChoiceWords,
+  noUseByReasons,
+  picksOf,
+  startingLines,
+} from './made-from-lines.ts';
 
 const BELLY: SuggestedItem = {
   item: 'pork-belly',
@@ -59,5 +65,36 @@ describe('the lines of what a batch was made from', () => {
         { part: 'chuck-grind', batch: '261202-CG-01', amount: '2 kg' },
       ],
     );
+  });
+});
+
+describe('a batch offered as a part, in a cook’s words', () => {
+  const part: SuggestedItem = { ...BELLY, item: 'house-sauce', source: 'batch', takes: [] };
+  const lot = (more: Partial<LotOnHand>): LotOnHand => ({
+    lotCode: '261203-HS-01',
+    supplier: null,
+    supplierLot: null,
+    remaining: null,
+    useBy: null,
+    ...more,
+  });
+
+  it('should name its use-by, or why it has none, and the day it was made', () => {
+    assert.equal(
+      lotChoiceWords(lot({ madeOn: '2026-12-03', useBy: '2026-12-09' }), part),
+      '261203-HS-01 · use by 9 Dec 2026 · made 3 Dec 2026',
+    );
+    assert.equal(
+      lotChoiceWords(lot({ madeOn: '2026-12-03', noUseBy: 'kept frozen' }), part),
+      '261203-HS-01 · no use-by · made 3 Dec 2026',
+    );
+    assert.equal(lotChoiceWords(lot({ madeOn: null }), part), '261203-HS-01 · under way');
+    const onHand = [
+      lot({ madeOn: '2026-12-03', noUseBy: 'kept frozen' }),
+      lot({ lotCode: '261204-HS-01', madeOn: '2026-12-04', noUseBy: 'kept frozen' }),
+      lot({ lotCode: '261205-HS-01', madeOn: null, noUseBy: 'not finished yet' }),
+    ];
+    assert.deepEqual(noUseByReasons({ ...part, onHand }), ['kept frozen']);
+    assert.deepEqual(noUseByReasons({ ...BELLY, onHand }), []);
   });
 });

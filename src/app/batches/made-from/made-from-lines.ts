@@ -1,6 +1,7 @@
 import { Decimal } from '../../../../shared/decimal.ts';
 import type { LotOnHand, LotUseView, SuggestedItem } from '../../../../shared/api/batch-lots.ts';
 import type { LotPick } from '../../../../shared/api/batch-lots.ts';
+import { dayWords } from '../../../../shared/presentation/date-words.ts';
 import { lotAmountWords } from '../../../../shared/presentation/lot-amount-words.ts';
 
 /** One lot line a cook may change: which lot, and how much of it went in, as typed. */
@@ -42,14 +43,34 @@ export function picksOf(
   );
 }
 
-/** A lot on hand in a cook's words: "R261201-01 · Hollin Vale Farm HV-01 · 6000 g left". */
-export function lotChoiceWords(lot: LotOnHand, item: SuggestedItem, useBy?: string): string {
+/**
+ * A lot on hand in a cook's words: "R261201-01 · Hollin Vale Farm HV-01 · use by 5 Dec 2026 ·
+ * 6000 g left"; a batch with its use-by and the day it was made: "261203-HS-01 · use by 9 Dec
+ * 2026 · made 3 Dec 2026", "… · no use-by · …", or "… · under way" before it is marked done.
+ */
+export function lotChoiceWords(lot: LotOnHand, item: SuggestedItem): string {
+  if (item.source === 'batch') {
+    // The use-by first: a phone's field shows the start of the words only.
+    if (!lot.madeOn) return `${lot.lotCode} · under way`;
+    const useBy = lot.useBy ? `use by ${dayWords(lot.useBy)}` : 'no use-by';
+    return `${lot.lotCode} · ${useBy} · made ${dayWords(lot.madeOn)}`;
+  }
   const supplier = [lot.supplier, lot.supplierLot].filter(Boolean).join(' ');
   const left =
     lot.remaining === null
       ? null
       : `${lotAmountWords(new Decimal(lot.remaining), item.measure, item.unit)} left`;
-  return [lot.lotCode, supplier, useBy ? `use by ${useBy}` : null, left]
+  return [lot.lotCode, supplier, lot.useBy ? `use by ${dayWords(lot.useBy)}` : null, left]
     .filter(Boolean)
     .join(' · ');
+}
+
+/**
+ * Why the finished batches of a part offered have no use-by, each reason once ("not ready to eat:
+ * …"); none for a received item, or when every finished batch has one.
+ */
+export function noUseByReasons(item: SuggestedItem): string[] {
+  if (item.source !== 'batch') return [];
+  const reasons = item.onHand.flatMap((lot) => (lot.madeOn && lot.noUseBy ? [lot.noUseBy] : []));
+  return [...new Set(reasons)];
 }

@@ -23,7 +23,13 @@ import { lotAmountWords } from '../../../../shared/presentation/lot-amount-words
 import { SessionStore } from '../../core/auth/session-store';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { MadeFromStore } from './made-from-store';
-import { lotChoiceWords, picksOf, startingLines, type PickLine } from './made-from-lines';
+import {
+  lotChoiceWords,
+  noUseByReasons,
+  picksOf,
+  startingLines,
+  type PickLine,
+} from './made-from-lines';
 
 type LineForm = FormGroup<{ lot: FormControl<string>; amount: FormControl<string> }>;
 
@@ -118,15 +124,18 @@ export class MadeFrom {
     });
     this.form.markAsPristine();
     this.entries.set(entries);
+    this.countLines();
   }
 
   protected addLine(entry: Entry): void {
     entry.lines.push(lineForm({ lot: '', amount: '' }));
+    this.countLines();
     this.form.markAsDirty();
   }
 
   protected removeLine(entry: Entry, index: number): void {
     entry.lines.removeAt(index);
+    this.countLines();
     this.form.markAsDirty();
   }
 
@@ -163,7 +172,14 @@ export class MadeFrom {
   }
 
   /** Whether there is anything to record. */
-  protected readonly anyLine = computed(() => this.entries().some((e) => e.lines.length > 0));
+  /** Lines in the form: the form arrays are not signals, so adding one is counted here. */
+  private readonly lineCount = signal(0);
+
+  protected readonly anyLine = computed(() => this.lineCount() > 0);
+
+  private countLines(): void {
+    this.lineCount.set(this.entries().reduce((n, e) => n + e.lines.length, 0));
+  }
 
   protected amountWords(use: LotUseView): string {
     return lotAmountWords(new Decimal(use.amount), use.measure, use.lotUnit);
@@ -185,6 +201,8 @@ export class MadeFrom {
     return lotAmountWords(new Decimal(item.shortfall), item.measure, item.unit);
   }
 
+  protected readonly noUseByReasons = noUseByReasons;
+
   protected expiredWords(lot: LotOnHand): string {
     return `${lot.lotCode} was to be used by ${lot.useBy ? dayWords(lot.useBy) : '—'}: discard it`;
   }
@@ -194,7 +212,7 @@ export class MadeFrom {
 function choicesOf(item: SuggestedItem, uses: readonly LotUseView[]) {
   const onHand = item.onHand.map((lot) => ({
     value: lot.lotCode,
-    words: lotChoiceWords(lot, item, lot.useBy ? dayWords(lot.useBy) : undefined),
+    words: lotChoiceWords(lot, item),
   }));
   const recorded = uses
     .filter((use) => use.item === item.item && !item.onHand.some((l) => l.lotCode === use.lotCode))
