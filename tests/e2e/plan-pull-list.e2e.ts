@@ -30,7 +30,20 @@ describe('a plan’s pull list against stock in the console', () => {
     const session = await startConsole(t);
     const db = session.server.context.db;
     await clearStock(db);
-    await addReceipts(db, burgerReceipts(TODAY, SERVICE));
+    await addReceipts(db, [
+      ...burgerReceipts(TODAY, SERVICE),
+      // Eggs, counted: compared with the bun's grams through the catalogue's 50 g for one.
+      {
+        item: 'eggs',
+        itemName: 'eggs',
+        supplier: 'Lowmere Dairy',
+        supplierLot: 'LD-40',
+        grams: '2',
+        unit: 'each',
+        useBy: addDays(SERVICE, 30),
+        receivedAt: `${TODAY}T06:40:00Z`,
+      },
+    ]);
     const page = await session.page('tobin');
     const errors = collectConsoleErrors(page);
     await page.goto(
@@ -62,6 +75,13 @@ describe('a plan’s pull list against stock in the console', () => {
     // The belly's green meat is compared through its formula's meat_item; tap water is not.
     assert.match(await card('pork-belly').innerText(), /green meat for/);
     assert.match(await stock.getByTestId('stock-apart').innerText(), /water/);
+    // The bun's egg in whole eggs against the 2 on hand, with how its grams were counted.
+    const eggs = card('eggs');
+    assert.match(await eggs.getByTestId('stock-status').innerText(), /Short \d+ each/);
+    assert.equal(
+      await eggs.getByTestId('stock-conversion').innerText(),
+      'Weighed in the formulas: counted at 50 g for one, in whole pieces for each batch.',
+    );
 
     await atWidths(page, async (width) => {
       const inStock = (await framesSideways(page)).filter((frame) => frame.startsWith('stock'));
@@ -71,6 +91,7 @@ describe('a plan’s pull list against stock in the console', () => {
       await page.screenshot({ path: path.join(ARTIFACTS, `plan-pull-list-stock-${width}.png`) });
       await stock.getByTestId('stock-apart').evaluate((list) => list.scrollIntoView());
       await page.screenshot({ path: path.join(ARTIFACTS, `plan-pull-list-apart-${width}.png`) });
+      await eggs.screenshot({ path: path.join(ARTIFACTS, `plan-pull-list-eggs-${width}.png`) });
     });
     await shootAtWidths(session, page, 'plan-pull-list');
     assert.deepEqual(errors, []);
