@@ -6,7 +6,7 @@ import { finishedWeight } from '../../shared/costing/finished-weight.ts';
 import {
   type BaseMeasure,
   baseMeasureOf,
-  isStockUnit,
+  isReceivedUnit,
 } from '../../shared/costing/stock-measure.ts';
 import { Decimal } from '../../shared/decimal.ts';
 import type { Formula } from '../../shared/formula/formula-types.ts';
@@ -82,7 +82,7 @@ export class BatchCosting {
       };
       if (use.unit_cost === null)
         return { ...base, unpriced: 'the lot was received without a price' };
-      if (use.unit === null || !isStockUnit(use.unit))
+      if (use.unit === null || !isReceivedUnit(use.unit))
         return { ...base, unpriced: `the lot was received in ${use.unit ?? 'no unit'}` };
       return {
         ...base,
@@ -173,7 +173,7 @@ export class BatchCosting {
     }
     const price = await this.latestPrice(item.key, day);
     if (!price) return { ...base, amount: grams, measure, unpriced: 'never received with a price' };
-    if (!isStockUnit(price.unit) || baseMeasureOf(price.unit) !== measure) {
+    if (!isReceivedUnit(price.unit) || baseMeasureOf(price.unit) !== measure) {
       return { ...base, amount: grams, measure, unpriced: `last received in ${price.unit}` };
     }
     return {

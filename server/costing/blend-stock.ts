@@ -1,5 +1,5 @@
 import type { BlendTrimRecord } from '../../shared/api/cost-record.ts';
-import { pricePerKg, isStockUnit, baseMeasureOf } from '../../shared/costing/stock-measure.ts';
+import { pricePerKg, isReceivedUnit, baseMeasureOf } from '../../shared/costing/stock-measure.ts';
 import { Decimal, ZERO } from '../../shared/decimal.ts';
 import { catalogueNow } from './catalogue-now.ts';
 import type { CostRepository } from './cost-repository.ts';
@@ -27,7 +27,7 @@ export async function stockTrims(
     if (!onHand.greaterThan(ZERO)) continue;
     const price = await repo.latestPrice(item.key, today);
     const perKg =
-      price && isStockUnit(price.unit) && baseMeasureOf(price.unit) === 'g'
+      price && isReceivedUnit(price.unit) && baseMeasureOf(price.unit) === 'g'
         ? pricePerKg(price.unit, new Decimal(price.unit_cost)).toString()
         : null;
     trims.push({

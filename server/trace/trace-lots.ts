@@ -1,13 +1,13 @@
 import type { LotMeasure, TracedBatch, TracedReceipt } from '../../shared/api/trace-record.ts';
+import { baseMeasureOf, isReceivedUnit } from '../../shared/stock/base-measure.ts';
 import type { BatchRow, ReceiptRow } from './trace-sql.ts';
 
 /**
  * The base measure of a lot received in a unit (migration 015): grams for kg, g, lb and oz,
- * millilitres for l and ml, a count for each.
+ * millilitres for l, ml and gal, a count for each; grams for a unit no longer known.
  */
 export function measureOf(unit: string): LotMeasure {
-  if (unit === 'l' || unit === 'ml') return 'ml';
-  return unit === 'each' ? 'each' : 'g';
+  return isReceivedUnit(unit) ? baseMeasureOf(unit) : 'g';
 }
 
 /**

@@ -6,7 +6,7 @@
  * it (shared/presentation/money.ts: to the cent, half-up).
  */
 import { Decimal, ZERO, sum } from '../decimal.ts';
-import type { StockUnit } from '../catalogue/catalogue-types.ts';
+import type { ReceivedUnit } from '../stock/base-measure.ts';
 import type { FinishedWeight } from './finished-weight.ts';
 import { type BaseMeasure, costOfAmount } from './stock-measure.ts';
 
@@ -27,7 +27,7 @@ export interface CostInput {
   /** The received lot or earlier batch it came from (lot and earlier-batch lines). */
   readonly lot?: string;
   /** Price per unit of `unit` (per kg, per lb, each…); absent when none is known. */
-  readonly price?: { readonly perUnit: Decimal; readonly unit: StockUnit };
+  readonly price?: { readonly perUnit: Decimal; readonly unit: ReceivedUnit };
   /** Why there is no price, in words, when there is none. */
   readonly unpriced?: string;
 }

@@ -82,6 +82,16 @@ const PER_UNIT: Readonly<Record<ReceivedUnit, Decimal>> = {
   each: new Decimal(1),
 };
 
+/** How many of the base measure one of a unit holds: 1000 for kg and l, 453.59237 for lb. */
+export function basePerUnit(unit: ReceivedUnit): Decimal {
+  return PER_UNIT[unit];
+}
+
+/** Whether a text is a unit lots are received in (a receipt's unit as stored). */
+export function isReceivedUnit(text: string): text is ReceivedUnit {
+  return (RECEIVED_UNITS as readonly string[]).includes(text);
+}
+
 /** An amount in the base measure expressed in a lot's own unit: 2500 g of a kg lot is 2.5. */
 export function inLotUnit(base: Decimal, unit: ReceivedUnit): Decimal {
   return base.div(PER_UNIT[unit]);
