@@ -3,13 +3,13 @@ import path from 'node:path';
 import type { Request, RequestHandler } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { AppError, badRequest, conflict } from '../http/app-error.ts';
-import { LABEL_SIZES, type LabelSize } from '../pdf/label-sizes.ts';
 import { labelPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
 import { CATALOGUE_FILE } from '../../shared/catalogue/catalogue-file.ts';
 import type { Catalogue } from '../../shared/catalogue/catalogue-types.ts';
 import { readCatalogue } from '../../shared/catalogue/read-catalogue.ts';
 import { isIsoDate } from '../../shared/calculation/dates.ts';
+import { isLabelSize, labelSizeRefusal, type LabelSize } from '../../shared/labels/label-sizes.ts';
 import type { Decimal } from '../../shared/decimal.ts';
 import {
   productLabel,
@@ -41,7 +41,7 @@ function one(req: Request, name: string): string | undefined {
  */
 function labelQuery(req: Request, today: string, preview = false): LabelQuery {
   const size = one(req, 'size') || '4x6';
-  if (!(LABEL_SIZES as readonly string[]).includes(size))
+  if (!isLabelSize(size))
     throw badRequest(
       `a label is 4x6 or 2x1 (inches), or a sheet of small labels on letter or a4 paper, not "${size}"`,
     );
@@ -62,7 +62,7 @@ function labelQuery(req: Request, today: string, preview = false): LabelQuery {
   const packedOn = one(req, 'packed') || today;
   if (!isIsoDate(packedOn))
     throw badRequest(`the packed-on day is a date such as 2026-03-02, not "${packedOn}"`);
-  return { size: size as LabelSize, netGrams, packedOn };
+  return { size, netGrams, packedOn };
 }
 
 /** The catalogue beside the formulas when it reads cleanly; without it labels keep formula names. */
@@ -105,13 +105,17 @@ async function batchLabel(
 /**
  * GET /api/batches/:lot/label.pdf?size=4x6|2x1|letter|a4&net=MASS&packed=YYYY-MM-DD: a product
  * label for a recorded batch, packed today unless another day is given; letter and a4 are sheets
- * of the 2 × 1 label. A batch not made yet, or thrown away, has no label; a 4 × 6 label whose
- * content does not fit is refused with 422 label-too-full.
+ * of the 2 × 1 label. A batch not made yet, or thrown away, has no label; a small label for a
+ * product that must carry the safe handling instructions is refused with 422
+ * too-small-for-safe-handling, and a 4 × 6 label whose content does not fit with 422
+ * label-too-full.
  */
 export function labelRoute(context: AppContext): RequestHandler {
   return async (req, res) => {
     const query = labelQuery(req, serverToday(context));
     const label = await batchLabel(context, req, query);
+    const refusal = labelSizeRefusal(query.size, label.safeHandling.required);
+    if (refusal) throw new AppError(422, 'too-small-for-safe-handling', refusal);
     let pdf: Buffer;
     try {
       pdf = await labelPdf(label, query.size);

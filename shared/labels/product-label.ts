@@ -8,6 +8,7 @@ import type { ProductLabelView } from '../api/product-label-view.ts';
 import { allergenStatement } from './allergen-statement.ts';
 import { ingredientStatement, type IngredientStatement } from './ingredient-statement.ts';
 import { labelIngredients } from './label-ingredients.ts';
+import { LABEL_SIZES, labelSizeRefusal } from './label-sizes.ts';
 import { keepStatement, useByOf, type KeepStatement, type UseBy } from './label-keeping.ts';
 import { netWeight, type NetWeight } from './net-weight.ts';
 import { safeHandling, type SafeHandling } from './safe-handling.ts';
@@ -128,5 +129,9 @@ export function productLabelView(label: ProductLabel): ProductLabelView {
     safeHandling: label.safeHandling,
     instructions: label.instructions,
     kitchen: label.kitchen,
+    sizes: LABEL_SIZES.map((size) => {
+      const refused = labelSizeRefusal(size, label.safeHandling.required);
+      return refused ? { size, refused } : { size };
+    }),
   };
 }

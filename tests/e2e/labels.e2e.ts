@@ -102,12 +102,25 @@ describe('product labels in the console', () => {
     assert.equal(await page.getByTestId('label-use-by').count(), 0);
     assert.match(await page.getByTestId('label-notes').innerText(), /No use-by day: not ready/);
     await shootSection(page, 'label-preview-raw-4x6');
-    // Without a net weight, the 4 × 6 label is not offered; the small sheet is.
+    // Without a net weight, the 4 × 6 label is not offered.
     assert.match(await page.getByTestId('label-problem').innerText(), /net weight/);
+    // The small sizes have no room for the instructions the raw bacon must carry: each is
+    // offered as unavailable, and the notes say why (shared/labels/label-sizes.ts).
+    assert.match(
+      await page.getByTestId('label-small-refused').innerText(),
+      /^A 2 × 1 in label is too small for the safe handling instructions this raw or not-ready-to-eat product must carry: print the 4 × 6 in label\.$/,
+    );
     await page.getByTestId('label-size').click();
-    await page.getByRole('option', { name: 'Letter sheet, 40 small labels' }).click();
+    for (const name of ['2 × 1 in', 'Letter sheet', 'A4 sheet']) {
+      const option = page.getByRole('option', { name: new RegExp(`^${name}`) });
+      assert.equal(await option.getAttribute('aria-disabled'), 'true', name);
+      assert.match(await option.innerText(), /too small for this product/);
+    }
+    await shootAtWidths(session, page, 'label-preview-raw-sizes');
+    await page.keyboard.press('Escape');
     // The list of sizes closes with an animation; the screenshots wait for it to go.
     await page.getByRole('listbox').waitFor({ state: 'detached' });
+    await page.getByTestId('label-net').fill('12 oz');
     await page.getByTestId('label-print').waitFor();
     await shootAtWidths(session, page, 'label-preview-raw');
     await shootSection(page, 'label-preview-raw');
@@ -116,8 +129,8 @@ describe('product labels in the console', () => {
       page.getByTestId('label-print').click(),
     ]);
     const text = await pdfText(readFileSync(await download.path()));
-    assert.deepEqual(text.sizes, [[612, 792]]);
-    assert.equal(text.all.split(`Lot ${lot}`).length - 1, 40);
+    assert.deepEqual(text.sizes, [[288, 432]]);
+    assert.match(text.all, /Safe Handling Instructions/);
     assert.deepEqual(errors, []);
   });
 });

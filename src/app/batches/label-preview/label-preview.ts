@@ -17,6 +17,7 @@ import {
   labelContentUrl,
   labelPdfUrl,
   labelProblem,
+  refusedSizes,
   type LabelAsk,
   type LabelSizeChoice,
 } from './label-request';
@@ -74,7 +75,6 @@ export class LabelPreview {
   });
 
   protected readonly small = computed(() => this.ask().size !== '4x6');
-  protected readonly problem = computed(() => labelProblem(this.ask()));
   protected readonly pdfUrl = computed(() => labelPdfUrl(this.lot(), this.ask()));
 
   /** The content, asked for again a moment after the net weight or the day changes. */
@@ -104,4 +104,10 @@ export class LabelPreview {
     const preview = this.preview();
     return preview && 'error' in preview ? preview.error : undefined;
   });
+
+  /** The sizes this product cannot go on, with why, as the label's content says. */
+  protected readonly refused = computed(() => refusedSizes(this.view()?.sizes));
+  /** Why the smallest size is refused, for the notes under the label: the small sizes share it. */
+  protected readonly smallRefused = computed(() => this.refused().get('2x1'));
+  protected readonly problem = computed(() => labelProblem(this.ask(), this.view()?.sizes));
 }
