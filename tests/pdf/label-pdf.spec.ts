@@ -91,7 +91,7 @@ describe('product label PDF', () => {
   // than the rest, the rest with lower-case letters 1/16 inch tall (4.5 points of x-height; Fira
   // Sans's x-height is 527/1000 em, so at least 8.54 points of type). source: 9 CFR
   // 381.125(b)(1)(i) "lettering no smaller than one-sixteenth of an inch" and (b)(2)–(3)
-  // (read); the heading larger, from memory (see shared/labels/safe-handling-text.ts)
+  // (read); the heading larger, read as quoted (see shared/labels/safe-handling-text.ts)
   for (const label of LABELS.filter((l) => l.instructions)) {
     it(`should print the safe handling instructions on ${label.lotCode} in their sizes`, async () => {
       const text = await pdfText(await renderLabelPdf(label, '4x6'));
