@@ -35,6 +35,8 @@ export interface ProductLabelView {
     readonly statements: readonly { readonly text: string; readonly picture: ShiPicture }[];
   };
   readonly kitchen: { readonly name: string; readonly address?: string };
+  /** Where a net weight the label works out comes from, or why it cannot, in a cook's words. */
+  readonly netNote?: string;
   /** Every size, in the order offered, each with why it is refused for this product, if it is. */
   readonly sizes: readonly LabelSizeView[];
 }

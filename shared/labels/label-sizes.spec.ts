@@ -42,6 +42,10 @@ describe('which label sizes hold the safe handling instructions', () => {
     );
   });
 
+  it('should not send the cook to the 4 × 6 label when that cannot hold the label either', () => {
+    assert.match(labelSizeRefusal('2x1', true, false) ?? '', /must carry$/);
+  });
+
   it('should print every size for a product that need not carry them', () => {
     for (const size of LABEL_SIZES) assert.equal(labelSizeRefusal(size, false), undefined);
   });

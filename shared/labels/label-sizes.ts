@@ -75,9 +75,17 @@ const SIZE_WORDS: Readonly<Record<LabelSize, string>> = {
  * Why a size cannot carry a product's label, in a cook's words, or undefined when it can: a
  * product that must carry the safe handling instructions cannot go on a label too small for them.
  * @param needsSafeHandling whether the product must carry the instructions (safe-handling.ts)
+ * @param bigFits whether the 4 × 6 label holds this label, to send the cook to it
  */
-export function labelSizeRefusal(size: LabelSize, needsSafeHandling: boolean): string | undefined {
+export function labelSizeRefusal(
+  size: LabelSize,
+  needsSafeHandling: boolean,
+  bigFits = true,
+): string | undefined {
   if (!needsSafeHandling || holdsSafeHandling(size)) return undefined;
   const are = size === 'letter' || size === 'a4' ? 'are' : 'is';
-  return `${SIZE_WORDS[size]} ${are} too small for the safe handling instructions this raw or not-ready-to-eat product must carry: print the 4 × 6 in label`;
+  return (
+    `${SIZE_WORDS[size]} ${are} too small for the safe handling instructions this raw or ` +
+    `not-ready-to-eat product must carry${bigFits ? ': print the 4 × 6 in label' : ''}`
+  );
 }
