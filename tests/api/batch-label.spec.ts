@@ -1,16 +1,8 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { BELLY, BUN, recordBatch } from '../helpers/batch-calls.ts';
+import { BELLY, BUN, fetchLabel, recordBatch } from '../helpers/batch-calls.ts';
 import { pdfText } from '../helpers/pdf-text.ts';
-import { PASSWORDS, startTestServer, type TestServer } from '../helpers/test-server.ts';
-
-/** A label as the reviewer fetches it: any signed-in role may. */
-async function fetchLabel(server: TestServer, route: string) {
-  const auth = Buffer.from(`rosa:${PASSWORDS.rosa}`).toString('base64');
-  const response = await fetch(server.url + route, { headers: { authorization: `Basic ${auth}` } });
-  const bytes = new Uint8Array(await response.arrayBuffer());
-  return { status: response.status, type: response.headers.get('content-type'), bytes };
-}
+import { startTestServer } from '../helpers/test-server.ts';
 
 describe('GET /api/batches/:lot/label.pdf', () => {
   it('should print a recorded batch’s label at either size, read back with its lot code', async (t) => {

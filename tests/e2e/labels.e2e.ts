@@ -1,6 +1,13 @@
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
+import {
+  BACON_PACK,
+  madeBatch,
+  madeFrom,
+  writeAssembly,
+} from '../helpers/assembly-label-fixture.ts';
+import { insertAssemblyBatch } from '../helpers/lot-use-fixture.ts';
 import { pdfText } from '../helpers/pdf-text.ts';
 import type { Page } from 'playwright-core';
 import { collectConsoleErrors, startConsole, ARTIFACTS } from './browser.ts';
@@ -24,10 +31,14 @@ const STATEMENT =
   'garlic, cloves, tamarind extract, natural flavorings), smoked paprika, dehydrated garlic, ' +
   'black pepper';
 
-/** The label section alone at every width, to look at closely (the page shots are long). */
+/**
+ * The label section alone at every width, to look at closely (the page shots are long). The
+ * window is made tall enough for the whole section: the page scrolls inside its frame, and a
+ * picture of an element is cut at the window's foot.
+ */
 async function shootSection(page: Page, name: string): Promise<void> {
   for (const width of [1280, 820, 390]) {
-    await page.setViewportSize({ width, height: 900 });
+    await page.setViewportSize({ width, height: 2400 });
     await page
       .locator('section.product-label')
       .screenshot({ path: path.join(ARTIFACTS, `${name}-section-${width}.png`) });
@@ -132,5 +143,62 @@ describe('product labels in the console', () => {
     assert.deepEqual(text.sizes, [[288, 432]]);
     assert.match(text.all, /Safe Handling Instructions/);
     assert.deepEqual(errors, []);
+  });
+
+  it('should label a pack of bacon made from a belly batch, its net weight worked out', async (t) => {
+    const session = await startConsole(t);
+    const { server } = session;
+    writeAssembly(server, BACON_PACK.formula, BACON_PACK.lines);
+    const belly = await madeBatch(server, 'quillmoor-belly', {
+      meat: '4.26kg',
+      thickness: '4cm',
+      start: TODAY,
+    });
+    const packs = await insertAssemblyBatch(
+      server.context.db,
+      server.formulasDir,
+      BACON_PACK.formula,
+      `${TODAY.slice(2).replaceAll('-', '')}-TB-01`,
+      TODAY,
+    );
+    await madeFrom(server, packs, [['quillmoor-belly', belly, '3 kg']]);
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    // An assembly batch inserted by hand has no weights of its own, and its cost is not worked
+    // out yet (500 from the costs route, another part's): the only failure allowed here.
+    const failed: string[] = [];
+    page.on('response', (response) => {
+      if (response.status() >= 500) failed.push(new URL(response.url()).pathname);
+    });
+    await page.goto(`${server.url}/batches/${packs}`, { waitUntil: 'networkidle' });
+    await page.getByTestId('label-shi').waitFor();
+    // The pack's one part, a compound ingredient with its own ingredients in parentheses.
+    // source: 21 CFR 101.4(b)(2)(i); the belly's list worked by hand in
+    // shared/labels/product-label.spec.ts
+    assert.equal(
+      (await page.getByTestId('label-ingredients').innerText()).trim(),
+      'Ingredients: Quillmoor belly, dry equilibrium cure (pork, sea salt, brown sugar, ' +
+        'black pepper, curing salt (salt, sodium nitrite))',
+    );
+    // 12 × 25 g = 300 g = 10.58 oz, rounded down. source: NIST SP 811 (2008), Appendix B.8
+    assert.equal(await page.getByTestId('label-net-text').innerText(), 'Net wt 10.5 oz (300 g)');
+    assert.match(await page.getByTestId('label-net-note').innerText(), /one unit by its formula/);
+    await page.getByTestId('label-preview').scrollIntoViewIfNeeded();
+    await shootAtWidths(session, page, 'label-preview-assembly');
+    await shootSection(page, 'label-preview-assembly');
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByTestId('label-print').click(),
+    ]);
+    const text = await pdfText(readFileSync(await download.path()));
+    assert.deepEqual(text.sizes, [[288, 432]]);
+    assert.match(text.all, /Ingredients: Quillmoor belly, dry equilibrium cure \(pork, sea salt/);
+    assert.match(text.all, /Net wt 10\.5 oz \(300 g\)/);
+    assert.match(text.all, /Safe Handling Instructions/);
+    assert.deepEqual([...new Set(failed)], [`/api/batches/${packs}/cost`]);
+    assert.ok(
+      errors.every((error) => /status of 500/.test(error)),
+      errors.join('\n'),
+    );
   });
 });

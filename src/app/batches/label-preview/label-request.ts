@@ -1,4 +1,4 @@
-import type { LabelSizeView } from '../../../../shared/api/product-label-view.ts';
+import type { LabelSizeView, ProductLabelView } from '../../../../shared/api/product-label-view.ts';
 
 /** The sizes a product label prints at, as the API names them, with a cook's words for each. */
 export const LABEL_SIZE_CHOICES = [
@@ -47,12 +47,16 @@ export function refusedSizes(sizes: readonly LabelSizeView[] = []): ReadonlyMap<
 
 /**
  * What stops the label printing, in words, or null: a size too small for what this product must
- * carry (as the label's content says), or a 4 × 6 label without the net weight it declares.
+ * carry (as the label's content says), or a 4 × 6 label without the net weight it declares —
+ * given by the cook, or worked out by the label itself (one unit of an assembly).
  */
-export function labelProblem(ask: LabelAsk, sizes?: readonly LabelSizeView[]): string | null {
-  const refused = refusedSizes(sizes).get(ask.size);
+export function labelProblem(
+  ask: LabelAsk,
+  view?: Pick<ProductLabelView, 'sizes' | 'net'>,
+): string | null {
+  const refused = refusedSizes(view?.sizes).get(ask.size);
   if (refused) return `${refused}.`;
-  if (ask.size === '4x6' && !ask.net.trim())
+  if (ask.size === '4x6' && !ask.net.trim() && !view?.net)
     return 'Give the net weight of the package: a 4 × 6 label declares it.';
   return null;
 }
