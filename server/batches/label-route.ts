@@ -10,7 +10,8 @@ import type { Catalogue } from '../../shared/catalogue/catalogue-types.ts';
 import { readCatalogue } from '../../shared/catalogue/read-catalogue.ts';
 import { isIsoDate } from '../../shared/calculation/dates.ts';
 import { isLabelSize, labelSizeRefusal, type LabelSize } from '../../shared/labels/label-sizes.ts';
-import type { Decimal } from '../../shared/decimal.ts';
+import { dec, type Decimal } from '../../shared/decimal.ts';
+import { netWeight } from '../../shared/labels/net-weight.ts';
 import {
   productLabel,
   productLabelView,
@@ -133,11 +134,12 @@ function tooFull(error: unknown): error is Error {
 
 /**
  * Why a label's content does not fit the 4 × 6 label, as a sentence, or undefined when it fits:
- * found by laying the label out, as printing it would.
+ * found by laying the label out, as printing it would. A label not yet given its net weight is
+ * laid out with one (any weight takes the one line), so that giving it cannot make it too full.
  */
 async function fullLabel(label: ProductLabel): Promise<string | undefined> {
   try {
-    await labelPdf(label, '4x6');
+    await labelPdf({ ...label, net: label.net ?? netWeight(dec('1000')) }, '4x6');
     return undefined;
   } catch (error) {
     if (!tooFull(error)) throw error;
