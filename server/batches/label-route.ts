@@ -3,14 +3,15 @@ import path from 'node:path';
 import type { Request, RequestHandler } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { AppError, badRequest, conflict } from '../http/app-error.ts';
-import { LABEL_SIZES, type LabelSize } from '../pdf/label-sizes.ts';
 import { labelPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
 import { CATALOGUE_FILE } from '../../shared/catalogue/catalogue-file.ts';
 import type { Catalogue } from '../../shared/catalogue/catalogue-types.ts';
 import { readCatalogue } from '../../shared/catalogue/read-catalogue.ts';
 import { isIsoDate } from '../../shared/calculation/dates.ts';
-import type { Decimal } from '../../shared/decimal.ts';
+import { isLabelSize, labelSizeRefusal, type LabelSize } from '../../shared/labels/label-sizes.ts';
+import { dec, type Decimal } from '../../shared/decimal.ts';
+import { netWeight } from '../../shared/labels/net-weight.ts';
 import {
   productLabel,
   productLabelView,
@@ -19,6 +20,7 @@ import {
 import { parseMass } from '../../shared/units/mass.ts';
 import { QuantityError } from '../../shared/units/quantity-error.ts';
 import { sendPdf } from '../http/send-pdf.ts';
+import { assemblyBatchLabel } from './assembly-batch-label.ts';
 
 /** What a label request asks for, read from its query. */
 interface LabelQuery {
@@ -36,12 +38,12 @@ function one(req: Request, name: string): string | undefined {
 }
 
 /**
- * The size, net weight and packed-on day of a label request, or a refusal in words. A preview
- * shows the content of every size, so it may go without the net weight the 4 × 6 label needs.
+ * The size, net weight and packed-on day of a label request, or a refusal in words. Whether the
+ * net weight is needed is known once the label is worked out (labelRoute).
  */
-function labelQuery(req: Request, today: string, preview = false): LabelQuery {
+function labelQuery(req: Request, today: string): LabelQuery {
   const size = one(req, 'size') || '4x6';
-  if (!(LABEL_SIZES as readonly string[]).includes(size))
+  if (!isLabelSize(size))
     throw badRequest(
       `a label is 4x6 or 2x1 (inches), or a sheet of small labels on letter or a4 paper, not "${size}"`,
     );
@@ -55,14 +57,11 @@ function labelQuery(req: Request, today: string, preview = false): LabelQuery {
       throw error;
     }
     if (netGrams.isZero()) throw badRequest('the net weight must be more than 0');
-  } else if (size === '4x6' && !preview)
-    throw badRequest(
-      'a 4 × 6 label declares the net weight of the package: give it as net, such as 340 g or 12 oz',
-    );
+  }
   const packedOn = one(req, 'packed') || today;
   if (!isIsoDate(packedOn))
     throw badRequest(`the packed-on day is a date such as 2026-03-02, not "${packedOn}"`);
-  return { size: size as LabelSize, netGrams, packedOn };
+  return { size, netGrams, packedOn };
 }
 
 /** The catalogue beside the formulas when it reads cleanly; without it labels keep formula names. */
@@ -91,46 +90,72 @@ async function batchLabel(
       'formula-unavailable',
       `the formula ${batch.formula.id} is no longer kept at the revision this batch was calculated from`,
     );
-  return productLabel({
-    formula,
-    result: batch.result,
+  const facts = {
     catalogue: catalogueOf(config.formulasDir),
     lotCode: batch.lotCode,
     packedOn: query.packedOn,
     netGrams: query.netGrams,
     kitchen: { name: config.kitchenName, address: config.kitchenAddress ?? undefined },
-  });
+  };
+  if (formula.kind === 'assembly') return assemblyBatchLabel(context, formula, facts);
+  return productLabel({ formula, result: batch.result, ...facts });
 }
 
 /**
  * GET /api/batches/:lot/label.pdf?size=4x6|2x1|letter|a4&net=MASS&packed=YYYY-MM-DD: a product
  * label for a recorded batch, packed today unless another day is given; letter and a4 are sheets
- * of the 2 × 1 label. A batch not made yet, or thrown away, has no label; a 4 × 6 label whose
- * content does not fit is refused with 422 label-too-full.
+ * of the 2 × 1 label. A batch not made yet, or thrown away, has no label; a small label for a
+ * product that must carry the safe handling instructions is refused with 422
+ * too-small-for-safe-handling, and a 4 × 6 label whose content does not fit with 422
+ * label-too-full.
  */
 export function labelRoute(context: AppContext): RequestHandler {
   return async (req, res) => {
     const query = labelQuery(req, serverToday(context));
     const label = await batchLabel(context, req, query);
-    let pdf: Buffer;
-    try {
-      pdf = await labelPdf(label, query.size);
-    } catch (error) {
-      if (error instanceof Error && error.name === 'LabelTooFullError')
-        throw new AppError(422, 'label-too-full', error.message);
+    const refusal = labelSizeRefusal(query.size, label.safeHandling.required);
+    if (refusal) throw new AppError(422, 'too-small-for-safe-handling', refusal);
+    if (query.size === '4x6' && !label.net)
+      throw badRequest(
+        `a 4 × 6 label declares the net weight of the package: give it as net, such as 340 g or 12 oz${label.netNote ? ` (${label.netNote})` : ''}`,
+      );
+    const pdf = await labelPdf(label, query.size).catch((error: unknown) => {
+      if (tooFull(error)) throw new AppError(422, 'label-too-full', error.message);
       throw error;
-    }
+    });
     sendPdf(res, pdf, `${label.lotCode}-label-${query.size}.pdf`);
   };
 }
 
+/** A label whose content does not fit its size (known by name: the PDF stack loads lazily). */
+function tooFull(error: unknown): error is Error {
+  return error instanceof Error && error.name === 'LabelTooFullError';
+}
+
+/**
+ * Why a label's content does not fit the 4 × 6 label, as a sentence, or undefined when it fits:
+ * found by laying the label out, as printing it would. A label not yet given its net weight is
+ * laid out with one (any weight takes the one line), so that giving it cannot make it too full.
+ */
+async function fullLabel(label: ProductLabel): Promise<string | undefined> {
+  try {
+    await labelPdf({ ...label, net: label.net ?? netWeight(dec('1000')) }, '4x6');
+    return undefined;
+  } catch (error) {
+    if (!tooFull(error)) throw error;
+    return error.message.charAt(0).toUpperCase() + error.message.slice(1);
+  }
+}
+
 /**
  * GET /api/batches/:lot/label?net=MASS&packed=YYYY-MM-DD: the label's content as it prints, for
- * the console's preview; the net weight is optional here.
+ * the console's preview; the net weight is optional here. The 4 × 6 label is laid out to say
+ * whether its content fits, so the preview never offers a label that would be refused.
  */
 export function labelContentRoute(context: AppContext): RequestHandler {
   return async (req, res) => {
-    const query = labelQuery(req, serverToday(context), true);
-    res.json(productLabelView(await batchLabel(context, req, query)));
+    const query = labelQuery(req, serverToday(context));
+    const label = await batchLabel(context, req, query);
+    res.json(productLabelView(label, await fullLabel(label)));
   };
 }

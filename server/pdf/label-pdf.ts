@@ -1,6 +1,6 @@
 import type { ProductLabel } from '../../shared/labels/product-label.ts';
 import { drawSafeHandling, shiHeight } from './label-safe-handling.ts';
-import type { LabelSize } from './label-sizes.ts';
+import { labelSizeRefusal, type LabelSize } from '../../shared/labels/label-sizes.ts';
 import { CELL, labelQr, labelSheet, smallLabel, type SheetGrid } from './label-small.ts';
 import { finishLabel, openLabel, type PageSize } from './sheet-document.ts';
 import { INK, type SheetLayout, type TextStyle } from './sheet-layout.ts';
@@ -36,7 +36,8 @@ const PAGES: Record<LabelSize, PageSize> = {
 const STATEMENT_SIZES = [8.5, 8, 7.5, 7, 6.5, 6] as const;
 
 /**
- * A label whose content does not fit its size; the route answers it in words, knowing it by its
+ * A label whose content does not fit its size, or a size too small for what the product must
+ * carry; the route answers it in words, knowing it by its
  * name (the route does not load pdfkit to compare classes).
  */
 export class LabelTooFullError extends Error {
@@ -159,9 +160,12 @@ function fourBySix(layout: SheetLayout, label: ProductLabel): void {
  * A product label as a PDF in the sheet's fonts (Fira Sans, shipped with the console), its lot
  * code in words and as a QR code: one page at a thermal label's size (4 × 6 or 2 × 1 in), or a
  * letter or A4 sheet of the small label.
- * @throws LabelTooFullError when the 4 × 6 label cannot hold its content
+ * @throws LabelTooFullError when the 4 × 6 label cannot hold its content, or a small label is
+ *   asked for a product that must carry the safe handling instructions
  */
-export function renderLabelPdf(label: ProductLabel, size: LabelSize): Promise<Buffer> {
+export async function renderLabelPdf(label: ProductLabel, size: LabelSize): Promise<Buffer> {
+  const refusal = labelSizeRefusal(size, label.safeHandling.required);
+  if (refusal) throw new LabelTooFullError(refusal);
   const layout = openLabel(
     {
       title: label.product,

@@ -20,7 +20,7 @@ function xHeightShare(layout: SheetLayout): number {
 /**
  * The type sizes of the instructions: the statements at the least size whose lower-case letters
  * stand 1/16 inch tall (rounded up to half a point: 9 points in Fira Sans), the heading 2 points
- * larger and semibold. See SHI_LAYOUT for which rules were read and which are from memory.
+ * larger and semibold. See SHI_LAYOUT for which rules were read, and where.
  */
 export function shiSizes(layout: SheetLayout): { body: TextStyle; heading: TextStyle } {
   const body = Math.ceil((SHI_LAYOUT.minLetterPoints / xHeightShare(layout)) * 2) / 2;

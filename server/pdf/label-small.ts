@@ -27,9 +27,10 @@ export function labelQr(
  * The 2 × 1 in label, for small packs, in a box (the page of a thermal label, or a cell of a
  * sheet): the product's name, the lot code with its QR code, the packed-on day, the use-by day
  * when it has one, and the net weight when given (the words' sources: factsOf in label-pdf.ts;
- * "Packed" is "Packed on" shortened, our own). It carries no ingredient statement, allergens,
- * safe handling instructions or kitchen: it goes on a pack that carries the 4 × 6 label or a
- * carton that does.
+ * "Packed" is "Packed on" shortened, our own). It carries no ingredient statement, allergens or
+ * kitchen: it goes on a pack that carries the 4 × 6 label or a carton that does. It has no room
+ * for the safe handling instructions, so a product that must carry them is not printed on it
+ * (shared/labels/label-sizes.ts).
  */
 export function smallLabel(layout: SheetLayout, label: ProductLabel, box: Box, inset = 4): void {
   const side = box.height - 2 * inset;

@@ -22,7 +22,7 @@ import { loadConfig } from '../config.ts';
 import type { Database } from '../db/database.ts';
 import type { FormulaHistory } from '../formulas/formula-history.ts';
 import type { SheetRecord, SheetSource } from '../pdf/batch-sheet-pdf.ts';
-import type { LabelSize } from '../pdf/label-sizes.ts';
+import type { LabelSize } from '../../shared/labels/label-sizes.ts';
 import type { ProductLabel } from '../../shared/labels/product-label.ts';
 import type { Formula } from '../../shared/index.ts';
 import { formulaAtRevision } from '../formulas/formula-at-revision.ts';

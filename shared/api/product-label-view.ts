@@ -1,4 +1,11 @@
+import type { LabelSize } from '../labels/label-sizes.ts';
 import type { ShiPicture } from '../labels/safe-handling-text.ts';
+
+/** One label size and, when this product cannot go on it, why, in a cook's words. */
+export interface LabelSizeView {
+  readonly size: LabelSize;
+  readonly refused?: string;
+}
 
 /**
  * A product label's content as the API sends it for the console's preview: every text as it
@@ -28,4 +35,8 @@ export interface ProductLabelView {
     readonly statements: readonly { readonly text: string; readonly picture: ShiPicture }[];
   };
   readonly kitchen: { readonly name: string; readonly address?: string };
+  /** Where a net weight the label works out comes from, or why it cannot, in a cook's words. */
+  readonly netNote?: string;
+  /** Every size, in the order offered, each with why it is refused for this product, if it is. */
+  readonly sizes: readonly LabelSizeView[];
 }

@@ -276,6 +276,8 @@ export interface AssemblyComponent {
 export interface AssemblyFormula extends FormulaBase {
   kind: 'assembly';
   components: AssemblyComponent[];
+  /** How a packed unit is kept and dated on its label; its parts' own say nothing of it. */
+  label?: LabelKeeping;
 }
 
 /** Any formula a batch is made from. */

@@ -43,7 +43,7 @@ export function sameName(name: string): string {
 }
 
 /** An entry as printed: the name, then any sub-ingredients in parentheses. */
-function entryText(entry: StatementEntry): string {
+export function entryText(entry: StatementEntry): string {
   if (entry.subIngredients.length === 0) return entry.name;
   return `${entry.name} (${entry.subIngredients.join(', ')})`;
 }

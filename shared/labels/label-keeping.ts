@@ -33,15 +33,24 @@ export interface UseBy {
  * gives one; else the Food Code's date mark, which is for ready-to-eat food held refrigerated
  * only (7 days, the day of preparation counted as day 1); else none, with the reason — a raw
  * product (fresh sausage, a raw cure) is not dated by the Food Code, and a guess is not printed.
+ * A food made of earlier-made parts (an assembly) counts from the earliest of them, given as
+ * `ingredientDays`, however its days are set: a validated shelf life is not made longer by
+ * assembling.
  * source: FDA Food Code 2022, 3-501.17(A), the words read as quoted in shared/labels/date-mark.ts;
  * that the paragraph opens with "refrigerated, ready-to-eat, time/temperature control for safety
- * food", so limiting it to such food, is from memory.
+ * food", so limiting it to such food, is from memory; 3-501.17(C), the earliest-prepared
+ * ingredient's date (read as quoted in date-mark.ts).
  */
-export function useByOf(keeping: LabelKeeping | undefined, packedOn: string): UseBy {
+export function useByOf(
+  keeping: LabelKeeping | undefined,
+  packedOn: string,
+  ingredientDays: readonly string[] = [],
+): UseBy {
   if (keeping?.shelf_life)
     return {
       mark: dateMark({
         preparedOn: packedOn,
+        ingredientDays,
         validated: { days: keeping.shelf_life.days, source: keeping.shelf_life.basis },
       }),
     };
@@ -54,5 +63,5 @@ export function useByOf(keeping: LabelKeeping | undefined, packedOn: string): Us
     return {
       none: 'not ready to eat: the Food Code’s 7 days are for ready-to-eat food, and no validated shelf life is set in its formula',
     };
-  return { mark: dateMark({ preparedOn: packedOn }) };
+  return { mark: dateMark({ preparedOn: packedOn, ingredientDays }) };
 }

@@ -1,6 +1,6 @@
 import type { Catalogue } from '../catalogue/catalogue-types.ts';
 import type { Decimal } from '../decimal.ts';
-import type { Allergen, Formula } from '../formula/formula-types.ts';
+import type { Allergen, Formula, LabelKeeping } from '../formula/formula-types.ts';
 import { materialLines } from '../catalogue/formula-lines.ts';
 import { linkLines } from '../catalogue/link-catalogue.ts';
 import type { PresentedResult } from '../presentation/presented-result.ts';
@@ -8,6 +8,7 @@ import type { ProductLabelView } from '../api/product-label-view.ts';
 import { allergenStatement } from './allergen-statement.ts';
 import { ingredientStatement, type IngredientStatement } from './ingredient-statement.ts';
 import { labelIngredients } from './label-ingredients.ts';
+import { LABEL_SIZES, labelSizeRefusal } from './label-sizes.ts';
 import { keepStatement, useByOf, type KeepStatement, type UseBy } from './label-keeping.ts';
 import { netWeight, type NetWeight } from './net-weight.ts';
 import { safeHandling, type SafeHandling } from './safe-handling.ts';
@@ -59,6 +60,44 @@ export interface ProductLabel {
   /** The safe handling instructions word for word, when they are required. */
   readonly instructions?: SafeHandlingInstructions;
   readonly kitchen: ProductLabelInput['kitchen'];
+  /**
+   * Where the net weight comes from when the label works it out (one unit of an assembly), or
+   * why it cannot, in a cook's words; undefined for a net weight the cook gives.
+   */
+  readonly netNote?: string;
+}
+
+/** What a label says that is worked out from its product, before the package's own facts. */
+export interface LabelContent {
+  readonly product: string;
+  readonly ingredients: IngredientStatement;
+  readonly contains?: string;
+  readonly net?: NetWeight;
+  readonly netNote?: string;
+  readonly useBy: UseBy;
+  readonly storage?: LabelKeeping['storage'];
+  readonly safeHandling: SafeHandling;
+}
+
+/**
+ * A label from its worked-out content and the package's facts: the keep statement for how it is
+ * stored, and the safe handling instructions word for word when they are required.
+ */
+export function labelOf(
+  content: LabelContent,
+  facts: Pick<ProductLabelInput, 'lotCode' | 'packedOn' | 'kitchen'>,
+): ProductLabel {
+  const { storage, ...rest } = content;
+  return {
+    ...rest,
+    lotCode: facts.lotCode,
+    packedOn: facts.packedOn,
+    handling: keepStatement(storage),
+    instructions: content.safeHandling.required
+      ? { heading: SHI_HEADING, rationale: SHI_RATIONALE, statements: SHI_STATEMENTS }
+      : undefined,
+    kitchen: facts.kitchen,
+  };
 }
 
 /**
@@ -66,7 +105,7 @@ export interface ProductLabel {
  * item holds (a line may not declare its item's allergens; check warns of that, the label must
  * not miss them).
  */
-function labelAllergens(
+export function labelAllergens(
   formula: Formula,
   catalogue?: Catalogue,
 ): (readonly Allergen[] | undefined)[] {
@@ -89,31 +128,30 @@ function labelAllergens(
  * @throws RangeError for a packed-on day that is not a calendar date, or a net weight of nothing
  */
 export function productLabel(input: ProductLabelInput): ProductLabel {
-  const ingredients = ingredientStatement(
-    labelIngredients(input.formula, input.result, input.catalogue),
+  const keeping = input.formula.label;
+  return labelOf(
+    {
+      product: input.formula.title,
+      ingredients: ingredientStatement(
+        labelIngredients(input.formula, input.result, input.catalogue),
+      ),
+      contains: allergenStatement(labelAllergens(input.formula, input.catalogue)),
+      net: input.netGrams === undefined ? undefined : netWeight(input.netGrams),
+      useBy: useByOf(keeping, input.packedOn),
+      storage: keeping?.storage,
+      safeHandling: safeHandling(input.formula),
+    },
+    input,
   );
-  const contains = allergenStatement(labelAllergens(input.formula, input.catalogue));
-  const keeping = input.formula.kind === 'assembly' ? undefined : input.formula.label;
-  const shi = safeHandling(input.formula);
-  return {
-    product: input.formula.title,
-    ingredients,
-    contains,
-    net: input.netGrams === undefined ? undefined : netWeight(input.netGrams),
-    lotCode: input.lotCode,
-    packedOn: input.packedOn,
-    useBy: useByOf(keeping, input.packedOn),
-    handling: keepStatement(keeping?.storage),
-    safeHandling: shi,
-    instructions: shi.required
-      ? { heading: SHI_HEADING, rationale: SHI_RATIONALE, statements: SHI_STATEMENTS }
-      : undefined,
-    kitchen: input.kitchen,
-  };
 }
 
-/** A label's content as the API sends it (shared/api/product-label-view.ts). */
-export function productLabelView(label: ProductLabel): ProductLabelView {
+/**
+ * A label's content as the API sends it (shared/api/product-label-view.ts), with every size and
+ * why this product cannot go on it, if it cannot.
+ * @param tooFull why the 4 × 6 label cannot hold this content, when it cannot (found by laying it
+ *   out, which only the PDF stack can)
+ */
+export function productLabelView(label: ProductLabel, tooFull?: string): ProductLabelView {
   return {
     product: label.product,
     ingredients: label.ingredients.text,
@@ -128,5 +166,13 @@ export function productLabelView(label: ProductLabel): ProductLabelView {
     safeHandling: label.safeHandling,
     instructions: label.instructions,
     kitchen: label.kitchen,
+    netNote: label.netNote,
+    sizes: LABEL_SIZES.map((size) => {
+      const refused =
+        size === '4x6' && tooFull
+          ? tooFull
+          : labelSizeRefusal(size, label.safeHandling.required, !tooFull);
+      return refused ? { size, refused } : { size };
+    }),
   };
 }

@@ -17,7 +17,16 @@
  *   94-7217, read at govinfo.gov: it makes "safe handling instructions mandatory on all raw meat
  *   and poultry product labeling", with "a rationale statement" and statements on storage,
  *   cross-contamination, cooking and leftovers). That 317.2(l) carries the same words, and its
- *   paragraph numbers (l)(1) to (l)(3), are from memory: re-check against eCFR.
+ *   paragraph numbers (l)(1) to (l)(3), are from memory: re-check against eCFR. The text of
+ *   317.2(l) itself could not be read (the 2004 CFR page and the 1994 rule were found, but not
+ *   as far as paragraph (l)).
+ * - FSIS Directive 7235.1, Mandatory Safe Handling Statements on Labeling of Raw and Partially
+ *   Cooked Meat and Poultry Products (May 11, 1994; read at foodcompliance.com): "Sections 317.2
+ *   and 381.125 of the MPI Regulations require specific safe handling instructions to be provided
+ *   on the labeling of all meat and meat products of cattle, swine, sheep, goat, or equine, and
+ *   poultry products" (VI.A), so one set of words serves meat and poultry; and the messages need
+ *   not be set out as a table, but "the order of the information needs to remain the same"
+ *   (Attachment 2, D.1).
  */
 
 /** The heading. source: 9 CFR 381.125(b)(2) (read, 2019 CFR); 9 CFR 317.2(l)(2), from memory */
@@ -80,10 +89,14 @@ const POINTS_PER_INCH = 72;
  * 'Safe Handling Instructions' which shall be set in typ[e]…" (the excerpt breaks off there);
  * (b)(3): a picture next to each statement.
  *
- * From memory (the wording not read; summarised as "set off by border", "one-color printing on
- * single-color, contrasting background", "type no smaller than 1/16 in, except heading, which
- * must be larger" in barnardhealth.us): the heading in type larger than the rest; the whole set
- * off by a border; one colour of type on one contrasting background.
+ * Read as quoted, not in the regulation itself (a summary of the safe handling label rules at
+ * documentine.com gives the words without naming the paragraph): "under the heading 'Safe Handling
+ * Instructions' which shall be set in type size larger than the print size of the rationale
+ * statement and handling statements. The safe handling information shall be set off by a border
+ * and shall be one color"; barnardhealth.us sums up the same as "set off by border", "one-color
+ * printing on single-color, contrasting background", "type no smaller than 1/16 in, except
+ * heading, which must be larger". That the background is of one contrasting colour is from that
+ * summary only.
  *
  * Our own reading, no source: "lettering" is measured as the height of a lower-case letter (the
  * font's x-height), the strictest of the usual readings; the statements stay in the regulation's
@@ -92,8 +105,8 @@ const POINTS_PER_INCH = 72;
 export const SHI_LAYOUT = {
   /** The least height of a lower-case letter, points: 1/16 inch. */
   minLetterPoints: POINTS_PER_INCH / 16,
-  /** A border round the whole (from memory). */
+  /** A border round the whole (read as quoted, above). */
   border: true,
-  /** Black type on white (from memory: one colour on one contrasting background). */
+  /** Black type on white: "one color" (read as quoted), on one contrasting background. */
   oneColour: true,
 } as const;

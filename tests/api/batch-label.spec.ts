@@ -1,16 +1,8 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { BELLY, recordBatch } from '../helpers/batch-calls.ts';
+import { BELLY, BUN, fetchLabel, recordBatch } from '../helpers/batch-calls.ts';
 import { pdfText } from '../helpers/pdf-text.ts';
-import { PASSWORDS, startTestServer, type TestServer } from '../helpers/test-server.ts';
-
-/** A label as the reviewer fetches it: any signed-in role may. */
-async function fetchLabel(server: TestServer, route: string) {
-  const auth = Buffer.from(`rosa:${PASSWORDS.rosa}`).toString('base64');
-  const response = await fetch(server.url + route, { headers: { authorization: `Basic ${auth}` } });
-  const bytes = new Uint8Array(await response.arrayBuffer());
-  return { status: response.status, type: response.headers.get('content-type'), bytes };
-}
+import { startTestServer } from '../helpers/test-server.ts';
 
 describe('GET /api/batches/:lot/label.pdf', () => {
   it('should print a recorded batch’s label at either size, read back with its lot code', async (t) => {
@@ -37,7 +29,12 @@ describe('GET /api/batches/:lot/label.pdf', () => {
     assert.match(text.all, /Safe Handling Instructions This product was prepared from inspected/);
     assert.match(text.all, /KEEP REFRIGERATED/);
     assert.match(text.all, /Quillmoor Smokehouse 14 Kiln Lane, Quillmoor/);
+  });
 
+  it('should print a ready-to-eat product small, alone or 40 to a letter sheet', async (t) => {
+    const server = await startTestServer(t);
+    // The buns are ready to eat and no meat: no safe handling instructions to make room for.
+    const lot = await recordBatch(server.as('tobin'), BUN);
     const small = await fetchLabel(server, `/api/batches/${lot}/label.pdf?size=2x1`);
     assert.equal(small.status, 200);
     const smallText = await pdfText(small.bytes);
@@ -50,6 +47,34 @@ describe('GET /api/batches/:lot/label.pdf', () => {
     const sheetText = await pdfText(sheet.bytes);
     assert.deepEqual(sheetText.sizes, [[612, 792]]);
     assert.equal(sheetText.all.split(`Lot ${lot}`).length - 1, 40);
+  });
+
+  // The words of the safe handling instructions need 3.57 square inches at 1/16 in lettering; a
+  // 2 × 1 in label has 2 (shared/labels/label-sizes.ts, tests/pdf/label-fit.spec.ts).
+  // source: 9 CFR 381.125(b)(1)(i) (read, 2019 CFR); 9 CFR 317.2(l) for meat, from memory
+  it('should refuse the raw bacon a small label, too small for its safe handling instructions', async (t) => {
+    const server = await startTestServer(t);
+    const tobin = server.as('tobin');
+    const lot = await recordBatch(tobin, BELLY);
+    for (const size of ['2x1', 'letter', 'a4']) {
+      const response = await tobin.get(`/api/batches/${lot}/label.pdf?size=${size}`);
+      assert.equal(response.status, 422, size);
+      assert.equal(response.json.error.code, 'too-small-for-safe-handling');
+      assert.match(
+        response.json.error.message,
+        /too small for the safe handling instructions this raw or not-ready-to-eat product must carry: print the 4 × 6 in label$/,
+      );
+    }
+    const view = (await tobin.get(`/api/batches/${lot}/label`)).json;
+    assert.deepEqual(
+      view.sizes.map((s: { size: string; refused?: string }) => [s.size, s.refused !== undefined]),
+      [
+        ['4x6', false],
+        ['2x1', true],
+        ['letter', true],
+        ['a4', true],
+      ],
+    );
   });
 
   it('should give the label’s content for the preview, the net weight optional', async (t) => {

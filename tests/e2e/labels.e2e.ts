@@ -1,6 +1,13 @@
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
+import {
+  BACON_PACK,
+  madeBatch,
+  madeFrom,
+  writeAssembly,
+} from '../helpers/assembly-label-fixture.ts';
+import { insertAssemblyBatch } from '../helpers/lot-use-fixture.ts';
 import { pdfText } from '../helpers/pdf-text.ts';
 import type { Page } from 'playwright-core';
 import { collectConsoleErrors, startConsole, ARTIFACTS } from './browser.ts';
@@ -24,10 +31,14 @@ const STATEMENT =
   'garlic, cloves, tamarind extract, natural flavorings), smoked paprika, dehydrated garlic, ' +
   'black pepper';
 
-/** The label section alone at every width, to look at closely (the page shots are long). */
+/**
+ * The label section alone at every width, to look at closely (the page shots are long). The
+ * window is made tall enough for the whole section: the page scrolls inside its frame, and a
+ * picture of an element is cut at the window's foot.
+ */
 async function shootSection(page: Page, name: string): Promise<void> {
   for (const width of [1280, 820, 390]) {
-    await page.setViewportSize({ width, height: 900 });
+    await page.setViewportSize({ width, height: 2400 });
     await page
       .locator('section.product-label')
       .screenshot({ path: path.join(ARTIFACTS, `${name}-section-${width}.png`) });
@@ -102,12 +113,25 @@ describe('product labels in the console', () => {
     assert.equal(await page.getByTestId('label-use-by').count(), 0);
     assert.match(await page.getByTestId('label-notes').innerText(), /No use-by day: not ready/);
     await shootSection(page, 'label-preview-raw-4x6');
-    // Without a net weight, the 4 × 6 label is not offered; the small sheet is.
+    // Without a net weight, the 4 × 6 label is not offered.
     assert.match(await page.getByTestId('label-problem').innerText(), /net weight/);
+    // The small sizes have no room for the instructions the raw bacon must carry: each is
+    // offered as unavailable, and the notes say why (shared/labels/label-sizes.ts).
+    assert.match(
+      await page.getByTestId('label-small-refused').innerText(),
+      /^A 2 × 1 in label is too small for the safe handling instructions this raw or not-ready-to-eat product must carry: print the 4 × 6 in label\.$/,
+    );
     await page.getByTestId('label-size').click();
-    await page.getByRole('option', { name: 'Letter sheet, 40 small labels' }).click();
+    for (const name of ['2 × 1 in', 'Letter sheet', 'A4 sheet']) {
+      const option = page.getByRole('option', { name: new RegExp(`^${name}`) });
+      assert.equal(await option.getAttribute('aria-disabled'), 'true', name);
+      assert.match(await option.innerText(), /too small for this product/);
+    }
+    await shootAtWidths(session, page, 'label-preview-raw-sizes');
+    await page.keyboard.press('Escape');
     // The list of sizes closes with an animation; the screenshots wait for it to go.
     await page.getByRole('listbox').waitFor({ state: 'detached' });
+    await page.getByTestId('label-net').fill('12 oz');
     await page.getByTestId('label-print').waitFor();
     await shootAtWidths(session, page, 'label-preview-raw');
     await shootSection(page, 'label-preview-raw');
@@ -116,8 +140,65 @@ describe('product labels in the console', () => {
       page.getByTestId('label-print').click(),
     ]);
     const text = await pdfText(readFileSync(await download.path()));
-    assert.deepEqual(text.sizes, [[612, 792]]);
-    assert.equal(text.all.split(`Lot ${lot}`).length - 1, 40);
+    assert.deepEqual(text.sizes, [[288, 432]]);
+    assert.match(text.all, /Safe Handling Instructions/);
     assert.deepEqual(errors, []);
+  });
+
+  it('should label a pack of bacon made from a belly batch, its net weight worked out', async (t) => {
+    const session = await startConsole(t);
+    const { server } = session;
+    writeAssembly(server, BACON_PACK.formula, BACON_PACK.lines);
+    const belly = await madeBatch(server, 'quillmoor-belly', {
+      meat: '4.26kg',
+      thickness: '4cm',
+      start: TODAY,
+    });
+    const packs = await insertAssemblyBatch(
+      server.context.db,
+      server.formulasDir,
+      BACON_PACK.formula,
+      `${TODAY.slice(2).replaceAll('-', '')}-TB-01`,
+      TODAY,
+    );
+    await madeFrom(server, packs, [['quillmoor-belly', belly, '3 kg']]);
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    // An assembly batch inserted by hand has no weights of its own, and its cost is not worked
+    // out yet (500 from the costs route, another part's): the only failure allowed here.
+    const failed: string[] = [];
+    page.on('response', (response) => {
+      if (response.status() >= 500) failed.push(new URL(response.url()).pathname);
+    });
+    await page.goto(`${server.url}/batches/${packs}`, { waitUntil: 'networkidle' });
+    await page.getByTestId('label-shi').waitFor();
+    // The pack's one part, a compound ingredient with its own ingredients in parentheses.
+    // source: 21 CFR 101.4(b)(2)(i); the belly's list worked by hand in
+    // shared/labels/product-label.spec.ts
+    assert.equal(
+      (await page.getByTestId('label-ingredients').innerText()).trim(),
+      'Ingredients: Quillmoor belly, dry equilibrium cure (pork, sea salt, brown sugar, ' +
+        'black pepper, curing salt (salt, sodium nitrite))',
+    );
+    // 12 × 25 g = 300 g = 10.58 oz, rounded down. source: NIST SP 811 (2008), Appendix B.8
+    assert.equal(await page.getByTestId('label-net-text').innerText(), 'Net wt 10.5 oz (300 g)');
+    assert.match(await page.getByTestId('label-net-note').innerText(), /one unit by its formula/);
+    await page.getByTestId('label-preview').scrollIntoViewIfNeeded();
+    await shootAtWidths(session, page, 'label-preview-assembly');
+    await shootSection(page, 'label-preview-assembly');
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByTestId('label-print').click(),
+    ]);
+    const text = await pdfText(readFileSync(await download.path()));
+    assert.deepEqual(text.sizes, [[288, 432]]);
+    assert.match(text.all, /Ingredients: Quillmoor belly, dry equilibrium cure \(pork, sea salt/);
+    assert.match(text.all, /Net wt 10\.5 oz \(300 g\)/);
+    assert.match(text.all, /Safe Handling Instructions/);
+    assert.deepEqual([...new Set(failed)], [`/api/batches/${packs}/cost`]);
+    assert.ok(
+      errors.every((error) => /status of 500/.test(error)),
+      errors.join('\n'),
+    );
   });
 });

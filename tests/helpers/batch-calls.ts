@@ -1,5 +1,5 @@
 import assert from 'node:assert/strict';
-import type { ApiClient, TestServer } from './test-server.ts';
+import { PASSWORDS, type ApiClient, type TestServer } from './test-server.ts';
 
 export { BELLY } from './api-calls.ts';
 
@@ -37,4 +37,12 @@ export async function readBatch(server: TestServer, lot: string): Promise<ReadBa
   const response = await server.as('rosa').get(`/api/batches/${lot}`);
   assert.equal(response.status, 200, response.text);
   return response.json.batch as ReadBatch;
+}
+
+/** A batch's label (or any file) as the head cook fetches it, its bytes whole: any role may. */
+export async function fetchLabel(server: TestServer, route: string) {
+  const auth = Buffer.from(`rosa:${PASSWORDS.rosa}`).toString('base64');
+  const response = await fetch(server.url + route, { headers: { authorization: `Basic ${auth}` } });
+  const bytes = new Uint8Array(await response.arrayBuffer());
+  return { status: response.status, type: response.headers.get('content-type'), bytes };
 }

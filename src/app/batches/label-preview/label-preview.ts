@@ -6,7 +6,7 @@ import { MatAnchor } from '@angular/material/button';
 import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
-import { MatOption, MatSelect } from '@angular/material/select';
+import { MatOption, MatSelect, MatSelectTrigger } from '@angular/material/select';
 import { catchError, combineLatest, debounceTime, map, of, startWith, switchMap } from 'rxjs';
 import type { ProductLabelView } from '../../../../shared/api/product-label-view.ts';
 import type { ShiPicture } from '../../../../shared/labels/safe-handling-text.ts';
@@ -17,6 +17,7 @@ import {
   labelContentUrl,
   labelPdfUrl,
   labelProblem,
+  refusedSizes,
   type LabelAsk,
   type LabelSizeChoice,
 } from './label-request';
@@ -47,6 +48,7 @@ const PICTURE_ICONS: Readonly<Record<ShiPicture, string>> = {
     MatHint,
     MatInput,
     MatSelect,
+    MatSelectTrigger,
     MatOption,
     MatAnchor,
     MatIcon,
@@ -74,7 +76,10 @@ export class LabelPreview {
   });
 
   protected readonly small = computed(() => this.ask().size !== '4x6');
-  protected readonly problem = computed(() => labelProblem(this.ask()));
+  /** The chosen size in words, without the option's note of why it is unavailable. */
+  protected readonly chosenWords = computed(
+    () => this.sizes.find((choice) => choice.size === this.ask().size)?.words ?? '',
+  );
   protected readonly pdfUrl = computed(() => labelPdfUrl(this.lot(), this.ask()));
 
   /** The content, asked for again a moment after the net weight or the day changes. */
@@ -104,4 +109,10 @@ export class LabelPreview {
     const preview = this.preview();
     return preview && 'error' in preview ? preview.error : undefined;
   });
+
+  /** The sizes this product cannot go on, with why, as the label's content says. */
+  protected readonly refused = computed(() => refusedSizes(this.view()?.sizes));
+  /** Why the smallest size is refused, for the notes under the label: the small sizes share it. */
+  protected readonly smallRefused = computed(() => this.refused().get('2x1'));
+  protected readonly problem = computed(() => labelProblem(this.ask(), this.view()));
 }

@@ -22,4 +22,27 @@ describe('asking for a product label in the console', () => {
     assert.equal(labelProblem({ size: '4x6', net: '340 g', packed: '' }), null);
     assert.equal(labelProblem({ size: '2x1', net: '', packed: '' }), null);
   });
+
+  it('should give the API’s reason for a size too small for this product, before the net weight', () => {
+    const view = {
+      sizes: [
+        { size: '4x6' },
+        {
+          size: '2x1',
+          refused: 'A 2 × 1 in label is too small for the safe handling instructions',
+        },
+      ],
+    } as const;
+    assert.equal(
+      labelProblem({ size: '2x1', net: '', packed: '' }, view),
+      'A 2 × 1 in label is too small for the safe handling instructions.',
+    );
+    assert.match(labelProblem({ size: '4x6', net: '', packed: '' }, view) ?? '', /net weight/);
+    assert.equal(labelProblem({ size: 'letter', net: '', packed: '' }, view), null);
+  });
+
+  it('should print a 4 × 6 label whose net weight the label works out itself', () => {
+    const view = { sizes: [{ size: '4x6' }], net: 'Net wt 10.5 oz (300 g)' } as const;
+    assert.equal(labelProblem({ size: '4x6', net: '', packed: '' }, view), null);
+  });
 });

@@ -1,3 +1,5 @@
+import type { LabelSizeView, ProductLabelView } from '../../../../shared/api/product-label-view.ts';
+
 /** The sizes a product label prints at, as the API names them, with a cook's words for each. */
 export const LABEL_SIZE_CHOICES = [
   { size: '4x6', words: '4 × 6 in, the full label' },
@@ -38,9 +40,23 @@ export function labelPdfUrl(lot: string, ask: LabelAsk): string {
   return `/api/batches/${encodeURIComponent(lot)}/label.pdf${query(ask, true)}`;
 }
 
-/** What stops the label printing, in words, or null: a 4 × 6 label declares the net weight. */
-export function labelProblem(ask: LabelAsk): string | null {
-  if (ask.size === '4x6' && !ask.net.trim())
+/** Why the API refuses a size for this product, in its words, by size (none once it can print). */
+export function refusedSizes(sizes: readonly LabelSizeView[] = []): ReadonlyMap<string, string> {
+  return new Map(sizes.flatMap((view) => (view.refused ? [[view.size, view.refused]] : [])));
+}
+
+/**
+ * What stops the label printing, in words, or null: a size too small for what this product must
+ * carry (as the label's content says), or a 4 × 6 label without the net weight it declares —
+ * given by the cook, or worked out by the label itself (one unit of an assembly).
+ */
+export function labelProblem(
+  ask: LabelAsk,
+  view?: Pick<ProductLabelView, 'sizes' | 'net'>,
+): string | null {
+  const refused = refusedSizes(view?.sizes).get(ask.size);
+  if (refused) return `${refused}.`;
+  if (ask.size === '4x6' && !ask.net.trim() && !view?.net)
     return 'Give the net weight of the package: a 4 × 6 label declares it.';
   return null;
 }
