@@ -19,12 +19,13 @@ import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
-import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ApiError } from '../../core/api/api-error';
 import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { LoadState } from '../../ui/load-state/load-state';
+import { PageHead } from '../../ui/page-head/page-head';
 import { StockStore, type Receipt, type ReceiptRequest, type StockLotView } from '../stock-store';
 
 /** What was done with a delivery, in a cook's words. */
@@ -53,6 +54,7 @@ const DISPOSITIONS = [
   imports: [
     ReactiveFormsModule,
     IsoDayPipe,
+    LoadState,
     MatButton,
     MatCheckbox,
     MatFormField,
@@ -61,8 +63,8 @@ const DISPOSITIONS = [
     MatInput,
     MatLabel,
     MatOption,
-    MatProgressBar,
     MatSelect,
+    PageHead,
   ],
   templateUrl: './deliveries-page.html',
   styleUrl: './deliveries-page.css',
