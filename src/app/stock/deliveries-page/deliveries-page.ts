@@ -44,6 +44,9 @@ const DISPOSITIONS = [
   { value: 'recooked', label: 'Cooked again' },
 ] as const;
 
+/** The latest deliveries shown at first. */
+const RECENT_FEW = 6;
+
 /**
  * Deliveries: the receiving form (the item's limit beside the temperature; over it, refuse or
  * take it in with a corrective action), stock on hand by item with its lots first to expire
@@ -124,6 +127,12 @@ export default class DeliveriesPage implements OnInit {
   /** Taking it in: the corrective action is being asked for. */
   protected readonly takingIn = signal(false);
   protected readonly saved = signal<Receipt | null>(null);
+  /** How many of the latest deliveries show until all are asked for: the stock stays in reach. */
+  protected readonly recentFew = RECENT_FEW;
+  protected readonly allRecent = signal(false);
+  protected readonly recentShown = computed(() =>
+    this.allRecent() ? this.store.recent() : this.store.recent().slice(0, RECENT_FEW),
+  );
   /** The lot whose discard is being confirmed, and the reason typed. */
   protected readonly discarding = signal<string | null>(null);
   protected readonly discardReason = this.fb.control('');
@@ -182,6 +191,8 @@ export default class DeliveriesPage implements OnInit {
     }
     this.busy.set(true);
     this.failure.set(null);
+    // The last delivery's "Taken in" must not stand beside this one's question.
+    this.saved.set(null);
     try {
       const receipt = await this.store.receive(this.request(decision));
       this.saved.set(receipt);
