@@ -42,14 +42,17 @@ export function picksOf(
   );
 }
 
-/** A lot on hand in a cook's words: "R261201-01 · Hollin Vale Farm HV-01 · 6000 g left". */
-export function lotChoiceWords(lot: LotOnHand, item: SuggestedItem, useBy?: string): string {
+/** What a cook needs to know of a lot on hand after its code: "Hollin Vale Farm HV-01 · 6000 g left". */
+export function lotDetailWords(lot: LotOnHand, item: SuggestedItem, useBy?: string): string {
   const supplier = [lot.supplier, lot.supplierLot].filter(Boolean).join(' ');
   const left =
     lot.remaining === null
       ? null
       : `${lotAmountWords(new Decimal(lot.remaining), item.measure, item.unit)} left`;
-  return [lot.lotCode, supplier, useBy ? `use by ${useBy}` : null, left]
-    .filter(Boolean)
-    .join(' · ');
+  return [supplier, useBy ? `use by ${useBy}` : null, left].filter(Boolean).join(' · ');
+}
+
+/** A lot on hand in a cook's words: "R261201-01 · Hollin Vale Farm HV-01 · 6000 g left". */
+export function lotChoiceWords(lot: LotOnHand, item: SuggestedItem, useBy?: string): string {
+  return [lot.lotCode, lotDetailWords(lot, item, useBy)].filter(Boolean).join(' · ');
 }
