@@ -10,21 +10,12 @@ import {
 } from '@angular/core';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatOption, MatSelect } from '@angular/material/select';
-import {
-  Legend,
-  LineController,
-  LineElement,
-  LinearScale,
-  PointElement,
-  Tooltip,
-  type ChartData,
-  type ChartOptions,
-} from 'chart.js';
-import { provideCharts } from 'ng2-charts';
+import { Legend, type ChartData, type ChartOptions } from 'chart.js';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { ChartFrame } from '../../ui/chart-frame/chart-frame';
 import { CHART_GRID, CHART_INK, CHART_LIMIT_INK } from '../../ui/chart-frame/chart-inks';
 import { DAY_MS, dayAxis, dayMs, lotDayTitle } from '../../ui/chart-frame/day-axis';
+import { provideLineChart } from '../../ui/chart-frame/line-chart-parts';
 import { LoadState } from '../../ui/load-state/load-state';
 import { FormulaOptions } from '../formula-options';
 import { NitriteHistory } from './nitrite-history';
@@ -39,12 +30,7 @@ import { nitriteSummary } from './nitrite-points';
 @Component({
   selector: 'app-nitrite-chart',
   imports: [ChartFrame, LoadState, MatFormField, MatLabel, MatSelect, MatOption, IsoDayPipe],
-  providers: [
-    NitriteHistory,
-    provideCharts({
-      registerables: [LineController, LineElement, PointElement, LinearScale, Tooltip, Legend],
-    }),
-  ],
+  providers: [NitriteHistory, provideLineChart(Legend)],
   templateUrl: './nitrite-chart.html',
   styleUrl: './nitrite-chart.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

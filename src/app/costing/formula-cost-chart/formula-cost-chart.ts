@@ -1,19 +1,11 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
-import {
-  LineController,
-  LineElement,
-  LinearScale,
-  PointElement,
-  Tooltip,
-  type ChartData,
-  type ChartOptions,
-} from 'chart.js';
-import { provideCharts } from 'ng2-charts';
+import type { ChartData, ChartOptions } from 'chart.js';
 import { SessionStore } from '../../core/auth/session-store';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { ChartFrame } from '../../ui/chart-frame/chart-frame';
 import { CHART_GRID, CHART_INK } from '../../ui/chart-frame/chart-inks';
 import { DAY_MS, dayAxis, dayMs, lotDayTitle } from '../../ui/chart-frame/day-axis';
+import { provideLineChart } from '../../ui/chart-frame/line-chart-parts';
 import { latestRead } from '../../ui/latest-read';
 import { LoadState } from '../../ui/load-state/load-state';
 import { CostApi } from '../cost-api';
@@ -28,11 +20,7 @@ import { costPoints, costSummary } from './cost-points';
 @Component({
   selector: 'app-formula-cost-chart',
   imports: [ChartFrame, IsoDayPipe, LoadState],
-  providers: [
-    provideCharts({
-      registerables: [LineController, LineElement, PointElement, LinearScale, Tooltip],
-    }),
-  ],
+  providers: [provideLineChart()],
   templateUrl: './formula-cost-chart.html',
   styleUrl: './formula-cost-chart.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -8,8 +8,8 @@ Chart.defaults.font.family = 'Fira Sans';
 /**
  * A line chart in its figure: the canvas at a fixed height (never pushing the page sideways while
  * it redraws after a resize), named for screen readers by its summary, with the caption projected
- * under it. The chart's kinds of parts are registered by the component that uses the frame
- * (`provideCharts` in its providers), so each screen loads only what it draws.
+ * under it. The Chart.js parts it draws with come from the component that uses the frame
+ * (`provideLineChart` in its providers), so each screen loads only what it draws.
  */
 @Component({
   selector: 'app-chart-frame',

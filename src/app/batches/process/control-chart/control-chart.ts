@@ -3,18 +3,13 @@ import {
   Decimation,
   Filler,
   Legend,
-  LineController,
-  LineElement,
-  LinearScale,
-  PointElement,
-  Tooltip,
   type ChartData,
   type ChartDataset,
   type ChartOptions,
 } from 'chart.js';
-import { provideCharts } from 'ng2-charts';
 import { ChartFrame } from '../../../ui/chart-frame/chart-frame';
 import { CHART_GRID, CHART_LIMIT_INK } from '../../../ui/chart-frame/chart-inks';
+import { provideLineChart } from '../../../ui/chart-frame/line-chart-parts';
 import { curvePoints, limitBands, type CurvePoint, type LimitBand } from '../curve-points';
 import type { BatchControl } from '../process-types';
 import { clockWords, limitWords, valueWords } from '../process-words';
@@ -37,20 +32,7 @@ const DECIMATE_ABOVE = 400;
 @Component({
   selector: 'app-control-chart',
   imports: [ChartFrame],
-  providers: [
-    provideCharts({
-      registerables: [
-        LineController,
-        LineElement,
-        PointElement,
-        LinearScale,
-        Tooltip,
-        Legend,
-        Filler,
-        Decimation,
-      ],
-    }),
-  ],
+  providers: [provideLineChart(Legend, Filler, Decimation)],
   template: `
     <app-chart-frame
       [data]="data()"
