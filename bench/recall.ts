@@ -2,7 +2,8 @@
 // from a supplier lot, a backward trace of a batch, the whole recall report as JSON and as PDF —
 // p50/p95 over different lots against the one-second target, with the query plans each relies
 // on. Runs in this process through the same code the API calls (server/trace), on a database
-// seeded once by bench/seed-recall.ts and kept in BENCH_RECALL_DIR for later runs.
+// seeded once by bench/seed-recall.ts and kept in BENCH_RECALL_DIR for later runs; then the first
+// PDF of a fresh server, in a process of its own (bench/recall-fresh.ts).
 import { existsSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -14,6 +15,7 @@ import { produceRecall } from '../server/trace/produce-recall.ts';
 import { TRACE_STATEMENTS, fullScans, planOf } from '../server/trace/trace-plans.ts';
 import { TraceReader } from '../server/trace/trace-reader.ts';
 import { MOST_LEVELS } from '../server/trace/trace-sql.ts';
+import { benchFirstRecallPdf } from './recall-fresh.ts';
 import { RECALL_SEED_VERSION, seedRecall } from './seed-recall.ts';
 
 const BATCHES = Number(process.env.BENCH_RECALL_BATCHES ?? 1_000_000);
@@ -94,6 +96,7 @@ export async function benchRecall(): Promise<void> {
     await seedRecall(dataDir, BATCHES, (text) => process.stdout.write(text));
   }
   const db = await openDatabase(path.join(dataDir, 'larderbook.sqlite'));
+  let sample: { supplier_lot: string; supplier: string } | undefined;
   try {
     const [counts] = await readRows<{ batches: number; uses: number; receipts: number }>(
       db.sequelize,
@@ -143,7 +146,10 @@ export async function benchRecall(): Promise<void> {
       return produced.format === 'pdf' ? Math.round(produced.body.length / 1000) : 0;
     });
     process.stdout.write(line('recall report of a supplier lot, PDF', pdf, 'kB'));
+    sample = supplierLots[0];
   } finally {
     await db.close();
   }
+  // In a server process of its own: the first PDF of its life, apart from the warm ones above.
+  if (sample) await benchFirstRecallPdf(dataDir, sample, TARGET_MS);
 }

@@ -10,6 +10,7 @@ import { DeadlineScan } from './process/deadline-scan.ts';
 import { ProcessAlertScheduler } from './process/process-alert-scheduler.ts';
 import { ReminderScheduler } from './reminders/reminder-scheduler.ts';
 import { startBanner } from './start-banner.ts';
+import { startWarmUp, warmPdf } from './pdf/warm-pdf.ts';
 
 /* eslint-disable no-console -- the server talks to whoever started it */
 
@@ -54,6 +55,8 @@ async function main(): Promise<void> {
       mail: `${context.mail.mailer.description}; links to ${context.mail.links.base()}; reminders every ${config.reminderMinutes} min`,
     });
     for (const line of banner) console.log(line);
+    // Soon after listening: the first recall PDF should not wait for the PDF code and fonts.
+    void startWarmUp(warmPdf, (message) => console.error(`larderbook: ${message}`));
   });
   server.on('error', (error) => {
     console.error(`larderbook: cannot listen on ${config.host}:${config.port}: ${error.message}`);

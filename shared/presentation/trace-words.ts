@@ -19,6 +19,14 @@ export function lotName(lot: TracedLot): string {
 }
 
 /**
+ * An establishment number as the facts of a lot say it: as typed when it already reads as the
+ * mark of inspection does ("EST. 38214"), else named ("est. P-4821"), never "est. EST. 38214".
+ */
+export function establishmentWords(establishment: string): string {
+  return /^est\b/i.test(establishment.trim()) ? establishment.trim() : `est. ${establishment}`;
+}
+
+/**
  * The facts of a lot after its name. A received lot: "Hollin Farm lot 4471 · est. M1234 ·
  * received 1 Dec 2026 · 2.000 kg left"; a batch: "curing · started 3 Dec 2026 · ready 10 Dec 2026 ·
  * for service 8 Dec 2026".
@@ -27,7 +35,7 @@ export function lotFacts(lot: TracedLot): string {
   if (lot.kind === 'receipt')
     return [
       `${lot.supplier} lot ${lot.supplierLot}`,
-      ...(lot.establishment ? [`est. ${lot.establishment}`] : []),
+      ...(lot.establishment ? [establishmentWords(lot.establishment)] : []),
       `received ${dayWords(lot.receivedOn)}`,
       ...(lot.useBy ? [`use by ${dayWords(lot.useBy)}`] : []),
       lot.decision === 'refused'

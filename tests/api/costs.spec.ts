@@ -1,8 +1,12 @@
 import assert from 'node:assert/strict';
 import { before, describe, it } from 'node:test';
 import { BELLY, send, suiteServer } from '../helpers/api-calls.ts';
-import { addLotUse, addReceipt, dayFromToday } from '../helpers/cost-fixture.ts';
-import { clearStock } from '../helpers/pull-list-fixture.ts';
+import {
+  addLotUse,
+  addReceipt,
+  bellyInEmptyKitchen,
+  dayFromToday,
+} from '../helpers/cost-fixture.ts';
 
 // The demo belly (quillmoor-belly), 4.26 kg green: fine sea salt 2.25 % = 95.85 g, curing salt
 // 0.25 % = 10.65 g, dark brown sugar 1.2 % = 51.12 g, cracked black pepper 0.3 % = 12.78 g;
@@ -22,15 +26,7 @@ describe('GET /api/batches/:lot/cost', () => {
   const server = suiteServer();
   let lot: string;
   before(async () => {
-    // From a kitchen that has received nothing: the demo's deliveries would set the latest prices.
-    await clearStock(server().context.db);
-    const recorded = await send(server(), 'rosa', {
-      method: 'POST',
-      path: '/api/batches',
-      body: BELLY,
-    });
-    assert.equal(recorded.status, 201, recorded.text);
-    lot = recorded.json.batch.lotCode;
+    lot = await bellyInEmptyKitchen(server());
     const belly = await addReceipt(server(), {
       item: 'pork-belly',
       itemName: 'pork belly',

@@ -1,6 +1,9 @@
 // Received lots and lot uses written straight into the tables (migration 015), for the costing
 // tests: the receiving and consuming code is written alongside, and costing reads only the rows.
+import assert from 'node:assert/strict';
+import { BELLY, send } from './api-calls.ts';
 import { addRow, idOf } from './process-rows.ts';
+import { clearStock } from './pull-list-fixture.ts';
 import type { TestServer } from './test-server.ts';
 
 /** A delivery as the costing tests need it; the rest of the row is filled in. */
@@ -74,4 +77,19 @@ export async function addLotUse(
     amount: use.amount,
     used_on: dayFromToday(0),
   });
+}
+
+/**
+ * Empties the stock (the demo's deliveries would set the latest prices), then records a batch of
+ * the demo belly, 4.26 kg green, as the demo cook; its lot code.
+ */
+export async function bellyInEmptyKitchen(server: TestServer): Promise<string> {
+  await clearStock(server.context.db);
+  const recorded = await send(server, 'rosa', {
+    method: 'POST',
+    path: '/api/batches',
+    body: BELLY,
+  });
+  assert.equal(recorded.status, 201, recorded.text);
+  return recorded.json.batch.lotCode as string;
 }

@@ -4,6 +4,7 @@ import type { LotOnHand, SuggestedItem } from '../../../../shared/api/batch-lots
 import {
   amountText,
   lotChoiceWords,
+  lotDetailWords,
   noUseByReasons,
   picksOf,
   startingLines,
@@ -64,6 +65,32 @@ describe('the lines of what a batch was made from', () => {
         { item: 'pork-belly', lot: 'R261201-01', amount: '6 kg' },
         { part: 'chuck-grind', batch: '261202-CG-01', amount: '2 kg' },
       ],
+    );
+  });
+
+  // hand-worked: 6 000 g of a lot bought by the kilogram is 6 kg
+  it('should put a lot’s code in the list and the rest under the field once it is chosen', () => {
+    const lot = {
+      lotCode: 'R261201-01',
+      supplier: 'Hollin Vale Farm',
+      supplierLot: 'HV-01',
+      remaining: '6000',
+      useBy: '2026-12-05',
+    };
+    assert.equal(
+      lotDetailWords(lot, BELLY),
+      'Hollin Vale Farm HV-01 · use by 5 Dec 2026 · 6 kg left',
+    );
+    assert.equal(
+      lotChoiceWords(lot, BELLY),
+      'R261201-01 · Hollin Vale Farm HV-01 · use by 5 Dec 2026 · 6 kg left',
+    );
+    assert.equal(
+      lotDetailWords(
+        { ...lot, supplier: null, supplierLot: null, remaining: null, useBy: null },
+        BELLY,
+      ),
+      '',
     );
   });
 });

@@ -44,25 +44,30 @@ export function picksOf(
 }
 
 /**
- * A lot on hand in a cook's words: "R261201-01 · Hollin Vale Farm HV-01 · use by 5 Dec 2026 ·
- * 6000 g left"; a batch with its use-by and the day it was made: "261203-HS-01 · use by 9 Dec
- * 2026 · made 3 Dec 2026", "… · no use-by · …", or "… · under way" before it is marked done.
+ * What a cook needs to know of a lot after its code: "Hollin Vale Farm HV-01 · use by 5 Dec 2026
+ * · 6 kg left"; of a batch, its use-by and the day it was made: "use by 9 Dec 2026 · made 3 Dec
+ * 2026", "no use-by · made …", or "under way" before it is marked done.
  */
-export function lotChoiceWords(lot: LotOnHand, item: SuggestedItem): string {
+export function lotDetailWords(lot: LotOnHand, item: SuggestedItem): string {
   if (item.source === 'batch') {
     // The use-by first: a phone's field shows the start of the words only.
-    if (!lot.madeOn) return `${lot.lotCode} · under way`;
+    if (!lot.madeOn) return 'under way';
     const useBy = lot.useBy ? `use by ${dayWords(lot.useBy)}` : 'no use-by';
-    return `${lot.lotCode} · ${useBy} · made ${dayWords(lot.madeOn)}`;
+    return `${useBy} · made ${dayWords(lot.madeOn)}`;
   }
   const supplier = [lot.supplier, lot.supplierLot].filter(Boolean).join(' ');
   const left =
     lot.remaining === null
       ? null
       : `${lotAmountWords(new Decimal(lot.remaining), item.measure, item.unit)} left`;
-  return [lot.lotCode, supplier, lot.useBy ? `use by ${dayWords(lot.useBy)}` : null, left]
+  return [supplier, lot.useBy ? `use by ${dayWords(lot.useBy)}` : null, left]
     .filter(Boolean)
     .join(' · ');
+}
+
+/** A lot on hand in a cook's words: its code, then its detail (see lotDetailWords). */
+export function lotChoiceWords(lot: LotOnHand, item: SuggestedItem): string {
+  return [lot.lotCode, lotDetailWords(lot, item)].filter(Boolean).join(' · ');
 }
 
 /**

@@ -11,10 +11,10 @@ import {
 } from '@angular/core';
 import { FormArray, FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
-import { MatFormField, MatLabel } from '@angular/material/form-field';
+import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
-import { MatOption, MatSelect } from '@angular/material/select';
+import { MatOption, MatSelect, MatSelectTrigger } from '@angular/material/select';
 import { ActivatedRoute } from '@angular/router';
 import type { LotOnHand, LotUseView, SuggestedItem } from '../../../../shared/api/batch-lots.ts';
 import { Decimal } from '../../../../shared/decimal.ts';
@@ -25,6 +25,7 @@ import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { MadeFromStore } from './made-from-store';
 import {
   lotChoiceWords,
+  lotDetailWords,
   noUseByReasons,
   picksOf,
   startingLines,
@@ -37,8 +38,15 @@ type LineForm = FormGroup<{ lot: FormControl<string>; amount: FormControl<string
 interface Entry {
   readonly item: SuggestedItem;
   readonly lines: FormArray<LineForm>;
-  /** The lots a line may name: on hand, and those recorded before (given back on replacing). */
-  readonly choices: readonly { readonly value: string; readonly words: string }[];
+  /**
+   * The lots a line may name: on hand, and those recorded before (given back on replacing); each
+   * in full for the list, and its detail (all but the code) for under the field once chosen.
+   */
+  readonly choices: readonly {
+    readonly value: string;
+    readonly words: string;
+    readonly detail: string;
+  }[];
 }
 
 function lineForm(line: PickLine): LineForm {
@@ -61,9 +69,11 @@ function lineForm(line: PickLine): LineForm {
     MatIconButton,
     MatIcon,
     MatFormField,
+    MatHint,
     MatLabel,
     MatInput,
     MatSelect,
+    MatSelectTrigger,
     MatOption,
     IsoDayPipe,
   ],
@@ -203,6 +213,11 @@ export class MadeFrom {
 
   protected readonly noUseByReasons = noUseByReasons;
 
+  /** The chosen lot's detail, in full under its field (the field has room for the code only). */
+  protected detailOf(entry: Entry, lot: string): string | undefined {
+    return entry.choices.find((choice) => choice.value === lot)?.detail;
+  }
+
   protected expiredWords(lot: LotOnHand): string {
     return `${lot.lotCode} was to be used by ${lot.useBy ? dayWords(lot.useBy) : '—'}: discard it`;
   }
@@ -213,9 +228,14 @@ function choicesOf(item: SuggestedItem, uses: readonly LotUseView[]) {
   const onHand = item.onHand.map((lot) => ({
     value: lot.lotCode,
     words: lotChoiceWords(lot, item),
+    detail: lotDetailWords(lot, item),
   }));
   const recorded = uses
     .filter((use) => use.item === item.item && !item.onHand.some((l) => l.lotCode === use.lotCode))
-    .map((use) => ({ value: use.lotCode, words: `${use.lotCode} · used in this batch` }));
+    .map((use) => ({
+      value: use.lotCode,
+      words: `${use.lotCode} · used in this batch`,
+      detail: 'used in this batch',
+    }));
   return [...onHand, ...recorded];
 }

@@ -8,36 +8,18 @@ import {
   linkedSignal,
   untracked,
 } from '@angular/core';
-import { MatButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
-import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
-import {
-  Chart,
-  Legend,
-  LineController,
-  LineElement,
-  LinearScale,
-  PointElement,
-  Tooltip,
-  type ChartData,
-  type ChartOptions,
-} from 'chart.js';
-import { BaseChartDirective, provideCharts } from 'ng2-charts';
-import { dayWords } from '../../../../shared/presentation/date-words.ts';
+import { Legend, type ChartData, type ChartOptions } from 'chart.js';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { ChartFrame } from '../../ui/chart-frame/chart-frame';
+import { CHART_GRID, CHART_INK, CHART_LIMIT_INK } from '../../ui/chart-frame/chart-inks';
+import { DAY_MS, dayAxis, dayMs, lotDayTitle } from '../../ui/chart-frame/day-axis';
+import { provideLineChart } from '../../ui/chart-frame/line-chart-parts';
+import { LoadState } from '../../ui/load-state/load-state';
 import { FormulaOptions } from '../formula-options';
 import { NitriteHistory } from './nitrite-history';
-import { DAY_MS, axisDayWords, dayMs, nitriteSummary } from './nitrite-points';
-
-Chart.defaults.font.family = 'Fira Sans';
-
-// A canvas cannot read CSS custom properties. The batches in blue, solid, with points; the limit
-// in the error red of our palette (_theme-colors.scss), dashed, with none: apart by hue and by
-// style, each 6.4:1 or more on white.
-const INK = '#1f5fa8';
-const LIMIT_INK = '#ba1a1a';
-const GRID = '#e8e0da';
+import { nitriteSummary } from './nitrite-points';
 
 /**
  * Ingoing nitrite of each recorded batch of one cure formula over time, with the formula's
@@ -47,22 +29,8 @@ const GRID = '#e8e0da';
  */
 @Component({
   selector: 'app-nitrite-chart',
-  imports: [
-    BaseChartDirective,
-    MatFormField,
-    MatLabel,
-    MatSelect,
-    MatOption,
-    MatButton,
-    MatProgressBar,
-    IsoDayPipe,
-  ],
-  providers: [
-    NitriteHistory,
-    provideCharts({
-      registerables: [LineController, LineElement, PointElement, LinearScale, Tooltip, Legend],
-    }),
-  ],
+  imports: [ChartFrame, LoadState, MatFormField, MatLabel, MatSelect, MatOption, IsoDayPipe],
+  providers: [NitriteHistory, provideLineChart(Legend)],
   templateUrl: './nitrite-chart.html',
   styleUrl: './nitrite-chart.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -82,6 +50,8 @@ export class NitriteChart {
   });
   protected readonly points = this.history.points;
   protected readonly summary = computed(() => nitriteSummary(this.points(), this.title()));
+  // The batches in blue, solid, with points; the limit in red, dashed, with none: apart by hue and
+  // by style.
   protected readonly data = computed<ChartData<'line'>>(() => {
     const points = this.points();
     return {
@@ -89,10 +59,10 @@ export class NitriteChart {
         {
           label: 'Ingoing nitrite of each batch (ppm)',
           data: points.map((p) => ({ x: dayMs(p.day), y: p.ppm })),
-          borderColor: INK,
-          backgroundColor: INK,
+          borderColor: CHART_INK,
+          backgroundColor: CHART_INK,
           borderWidth: 2,
-          pointBackgroundColor: points.map((p) => (p.over ? LIMIT_INK : INK)),
+          pointBackgroundColor: points.map((p) => (p.over ? CHART_LIMIT_INK : CHART_INK)),
           pointStyle: points.map((p) => (p.over ? 'triangle' : 'circle')),
           pointRadius: points.map((p) => (p.over ? 7 : 4)),
           pointHoverRadius: 7,
@@ -101,8 +71,8 @@ export class NitriteChart {
         {
           label: 'Limit (ppm)',
           data: points.map((p) => ({ x: dayMs(p.day), y: p.limit })),
-          borderColor: LIMIT_INK,
-          backgroundColor: LIMIT_INK,
+          borderColor: CHART_LIMIT_INK,
+          backgroundColor: CHART_LIMIT_INK,
           borderDash: [8, 5],
           borderWidth: 2,
           pointRadius: 0,
@@ -131,29 +101,15 @@ export class NitriteChart {
           beginAtZero: true,
           suggestedMax: Math.ceil((top * 1.1) / 10) * 10,
           title: { display: true, text: 'ppm of green weight' },
-          grid: { color: GRID },
+          grid: { color: CHART_GRID },
         },
-        x: {
-          type: 'linear',
-          min: first - pad,
-          max: last + pad,
-          title: { display: true, text: 'Day recorded (to scale)' },
-          grid: { color: GRID },
-          ticks: {
-            maxTicksLimit: 8,
-            maxRotation: 0,
-            callback: (value) => axisDayWords(Number(value), first - pad, last + pad),
-          },
-        },
+        x: dayAxis(first - pad, last + pad, 'Day recorded (to scale)', { maxTicksLimit: 8 }),
       },
       plugins: {
         legend: { position: 'bottom', labels: { usePointStyle: true } },
         tooltip: {
           callbacks: {
-            title: (items) => {
-              const point = points[items[0]?.dataIndex ?? 0];
-              return point ? `${point.lot} · ${dayWords(point.day)}` : '';
-            },
+            title: (items) => lotDayTitle(points[items[0]?.dataIndex ?? 0]),
             label: (item) => `${item.dataset.label ?? ''}: ${Number(item.parsed.y).toFixed(1)}`,
           },
         },

@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { BatchListItem } from '../batch-types';
-import { axisDayWords, nitritePoints, nitriteSummary } from './nitrite-points.ts';
+import { nitritePoints, nitriteSummary } from './nitrite-points.ts';
 
 /** A cure batch as the list gives it, with just what the chart reads. */
 function cure(
@@ -53,24 +53,5 @@ describe('nitriteSummary', () => {
 
   it('should say so when there is nothing to draw', () => {
     assert.equal(nitriteSummary([], 'Ham'), 'No recorded batches of Ham yet.');
-  });
-});
-
-describe('axisDayWords', () => {
-  const at = (day: string): number => Date.parse(`${day}T00:00:00Z`);
-
-  it('should label the time axis with short days, as the product writes them', () => {
-    assert.equal(axisDayWords(at('2026-11-08'), at('2026-11-01'), at('2026-12-03')), '8 Nov');
-    // A tick between midnights is the day it falls in.
-    assert.equal(
-      axisDayWords(at('2026-09-30') + 3_600_000, at('2026-09-01'), at('2026-10-01')),
-      '30 Sep',
-    );
-  });
-
-  it('should give the year when the axis runs over New Year', () => {
-    const [min, max] = [at('2026-12-20'), at('2027-01-10')];
-    assert.equal(axisDayWords(at('2026-12-28'), min, max), '28 Dec 2026');
-    assert.equal(axisDayWords(at('2027-01-04'), min, max), '4 Jan 2027');
   });
 });

@@ -1,4 +1,4 @@
-import { dayWords, dayMonthWords } from '../../../../shared/presentation/date-words.ts';
+import { dayWords } from '../../../../shared/presentation/date-words.ts';
 import type { BatchListItem } from '../batch-types';
 
 /** One recorded cure batch on the nitrite chart. */
@@ -73,23 +73,4 @@ export function nitriteSummary(points: readonly NitritePoint[], title: string): 
         : `limits ${limits.join(', ')} ppm`;
   const overWords = over === 0 ? 'none over the limit' : `${over} over the limit`;
   return `Ingoing nitrite of ${title}, ${count} ${span}; ${limitWords}; ${overWords}.`;
-}
-
-/**
- * A label of the chart's time axis, whose days are milliseconds at UTC midnight: "3 Dec", or
- * "3 Dec 2026" when the axis from `min` to `max` spans more than one year.
- */
-export function axisDayWords(ms: number, min: number, max: number): string {
-  const day = new Date(ms).toISOString().slice(0, 10);
-  const oneYear = new Date(min).getUTCFullYear() === new Date(max).getUTCFullYear();
-  return oneYear ? dayMonthWords(day) : dayWords(day);
-}
-
-/** One day in milliseconds, a step of a chart's time axis. */
-export const DAY_MS = 86_400_000;
-
-/** A calendar day (YYYY-MM-DD) as milliseconds at its UTC midnight: days an equal step apart. */
-export function dayMs(iso: string): number {
-  const [year, month, day] = iso.split('-').map(Number);
-  return Date.UTC(year, month - 1, day);
 }

@@ -1,17 +1,8 @@
-import {
-  ChangeDetectionStrategy,
-  Component,
-  computed,
-  effect,
-  inject,
-  input,
-  signal,
-  untracked,
-} from '@angular/core';
-import { MatProgressBar } from '@angular/material/progress-bar';
-import { messageOf } from '../../core/api/message-of';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { SessionStore } from '../../core/auth/session-store';
-import { CostApi, type BatchCostRecord } from '../cost-api';
+import { latestRead } from '../../ui/latest-read';
+import { LoadState } from '../../ui/load-state/load-state';
+import { CostApi } from '../cost-api';
 import { costSourceWords, unpricedWords } from '../cost-words';
 
 /**
@@ -21,7 +12,7 @@ import { costSourceWords, unpricedWords } from '../cost-words';
  */
 @Component({
   selector: 'app-batch-cost',
-  imports: [MatProgressBar],
+  imports: [LoadState],
   templateUrl: './batch-cost.html',
   styleUrl: './batch-cost.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -34,31 +25,10 @@ export class BatchCost {
   readonly lot = input.required<string>();
 
   protected readonly shown = computed(() => this.session.hasRole('admin', 'reviewer'));
-  protected readonly cost = signal<BatchCostRecord | null>(null);
-  protected readonly error = signal<string | null>(null);
-  protected readonly loading = signal(false);
-  protected readonly unpriced = computed(() => unpricedWords(this.cost()?.unpriced ?? []));
+  protected readonly cost = latestRead(
+    () => (this.shown() ? this.lot() : null),
+    (lot: string) => this.api.batchCost(lot),
+  );
+  protected readonly unpriced = computed(() => unpricedWords(this.cost.value()?.unpriced ?? []));
   protected readonly sourceWords = costSourceWords;
-  private request = 0;
-
-  constructor() {
-    effect(() => {
-      const lot = this.lot();
-      if (this.shown()) untracked(() => void this.load(lot));
-    });
-  }
-
-  private async load(lot: string): Promise<void> {
-    const request = ++this.request;
-    this.loading.set(true);
-    this.error.set(null);
-    try {
-      const cost = await this.api.batchCost(lot);
-      if (request === this.request) this.cost.set(cost);
-    } catch (error) {
-      if (request === this.request) this.error.set(messageOf(error));
-    } finally {
-      if (request === this.request) this.loading.set(false);
-    }
-  }
 }

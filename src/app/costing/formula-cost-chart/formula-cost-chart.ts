@@ -1,52 +1,26 @@
-import {
-  ChangeDetectionStrategy,
-  Component,
-  computed,
-  effect,
-  inject,
-  input,
-  signal,
-  untracked,
-} from '@angular/core';
-import {
-  Chart,
-  LineController,
-  LineElement,
-  LinearScale,
-  PointElement,
-  Tooltip,
-  type ChartData,
-  type ChartOptions,
-} from 'chart.js';
-import { BaseChartDirective, provideCharts } from 'ng2-charts';
-import { dayWords } from '../../../../shared/presentation/date-words.ts';
-import { messageOf } from '../../core/api/message-of';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import type { ChartData, ChartOptions } from 'chart.js';
 import { SessionStore } from '../../core/auth/session-store';
-import { DAY_MS, axisDayWords, dayMs } from '../../batches/nitrite-chart/nitrite-points';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { ChartFrame } from '../../ui/chart-frame/chart-frame';
+import { CHART_GRID, CHART_INK } from '../../ui/chart-frame/chart-inks';
+import { DAY_MS, dayAxis, dayMs, lotDayTitle } from '../../ui/chart-frame/day-axis';
+import { provideLineChart } from '../../ui/chart-frame/line-chart-parts';
+import { latestRead } from '../../ui/latest-read';
+import { LoadState } from '../../ui/load-state/load-state';
 import { CostApi } from '../cost-api';
-import { costPoints, costSummary, type CostPoint } from './cost-points';
-
-Chart.defaults.font.family = 'Fira Sans';
-
-// As the nitrite chart (batches/nitrite-chart): a canvas cannot read CSS custom properties. Batches
-// priced in full in blue circles; those priced in part in hollow triangles, apart by shape too.
-const INK = '#1f5fa8';
-const GRID = '#e8e0da';
+import { costPoints, costSummary } from './cost-points';
 
 /**
  * A formula's cost per finished kilogram, one point a batch by the day it started, for admins
  * and reviewers: a dearer delivery shows as a step. Time runs to scale. The same figures are in
- * a table for screen readers and summed up in words under the chart.
+ * a table for screen readers and summed up in words under the chart. Batches priced in full are
+ * blue circles; those priced in part hollow triangles, apart by shape too.
  */
 @Component({
   selector: 'app-formula-cost-chart',
-  imports: [BaseChartDirective, IsoDayPipe],
-  providers: [
-    provideCharts({
-      registerables: [LineController, LineElement, PointElement, LinearScale, Tooltip],
-    }),
-  ],
+  imports: [ChartFrame, IsoDayPipe, LoadState],
+  providers: [provideLineChart()],
   templateUrl: './formula-cost-chart.html',
   styleUrl: './formula-cost-chart.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -59,9 +33,14 @@ export class FormulaCostChart {
   readonly formulaId = input.required<string>();
 
   protected readonly shown = computed(() => this.session.hasRole('admin', 'reviewer'));
-  protected readonly points = signal<readonly CostPoint[] | null>(null);
-  protected readonly truncated = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly costs = latestRead(
+    () => (this.shown() ? this.formulaId() : null),
+    (id: string) => this.api.formulaCosts(id),
+  );
+  protected readonly points = computed(() => {
+    const costs = this.costs.value();
+    return costs ? costPoints(costs.points) : null;
+  });
   protected readonly summary = computed(() => costSummary(this.points() ?? []));
   protected readonly data = computed<ChartData<'line'>>(() => {
     const points = this.points() ?? [];
@@ -70,9 +49,9 @@ export class FormulaCostChart {
         {
           label: 'Cost per finished kg of each batch',
           data: points.map((p) => ({ x: dayMs(p.day), y: p.perKg })),
-          borderColor: INK,
-          backgroundColor: points.map((p) => (p.complete ? INK : '#ffffff')),
-          pointBorderColor: INK,
+          borderColor: CHART_INK,
+          backgroundColor: points.map((p) => (p.complete ? CHART_INK : '#ffffff')),
+          pointBorderColor: CHART_INK,
           pointStyle: points.map((p) => (p.complete ? 'circle' : 'triangle')),
           pointRadius: points.map((p) => (p.complete ? 4 : 6)),
           borderWidth: 2,
@@ -99,29 +78,17 @@ export class FormulaCostChart {
           beginAtZero: true,
           grace: '10%',
           title: { display: true, text: 'per finished kg' },
-          grid: { color: GRID },
+          grid: { color: CHART_GRID },
         },
-        x: {
-          type: 'linear',
-          min: first - pad,
-          max: last + pad,
-          title: { display: true, text: 'Day the batch started (to scale)' },
-          grid: { color: GRID },
-          ticks: {
-            stepSize: step,
-            maxRotation: 0,
-            callback: (value) => axisDayWords(Number(value), first - pad, last + pad),
-          },
-        },
+        x: dayAxis(first - pad, last + pad, 'Day the batch started (to scale)', {
+          stepSize: step,
+        }),
       },
       plugins: {
         legend: { display: false },
         tooltip: {
           callbacks: {
-            title: (items) => {
-              const point = points[items[0]?.dataIndex ?? 0];
-              return point ? `${point.lot} · ${dayWords(point.day)}` : '';
-            },
+            title: (items) => lotDayTitle(points[items[0]?.dataIndex ?? 0]),
             label: (item) => {
               const point = points[item.dataIndex];
               return point
@@ -133,26 +100,4 @@ export class FormulaCostChart {
       },
     };
   });
-  private request = 0;
-
-  constructor() {
-    effect(() => {
-      const id = this.formulaId();
-      if (this.shown()) untracked(() => void this.load(id));
-    });
-  }
-
-  private async load(id: string): Promise<void> {
-    const request = ++this.request;
-    this.points.set(null);
-    this.error.set(null);
-    try {
-      const costs = await this.api.formulaCosts(id);
-      if (request !== this.request) return;
-      this.points.set(costPoints(costs.points));
-      this.truncated.set(costs.truncated);
-    } catch (error) {
-      if (request === this.request) this.error.set(messageOf(error));
-    }
-  }
 }

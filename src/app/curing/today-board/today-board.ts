@@ -6,10 +6,8 @@ import {
   inject,
   signal,
 } from '@angular/core';
-import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
-import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
@@ -18,6 +16,8 @@ import { offeredMoves } from '../../batches/batch-status';
 import { BatchLog } from '../../batches/batch-log/batch-log';
 import { ReasonDialog, type ReasonDialogData } from '../../batches/batch-page/reason-dialog';
 import { SessionStore } from '../../core/auth/session-store';
+import { LoadState } from '../../ui/load-state/load-state';
+import { PageHead } from '../../ui/page-head/page-head';
 import { AttentionNow } from '../attention-now';
 import { weekdayDayWords } from '../../../../shared/presentation/date-words.ts';
 import { BoardCard } from '../board-card/board-card';
@@ -34,7 +34,7 @@ import { SignOffQueue } from '../sign-off-queue';
  */
 @Component({
   selector: 'app-today-board',
-  imports: [RouterLink, MatButton, MatIcon, MatProgressBar, BoardCard, NeedsAttention],
+  imports: [RouterLink, MatIcon, BoardCard, LoadState, NeedsAttention, PageHead],
   templateUrl: './today-board.html',
   styleUrl: './today-board.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

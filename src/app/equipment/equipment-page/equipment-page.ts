@@ -2,13 +2,14 @@ import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@a
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
-import { MatProgressBar } from '@angular/material/progress-bar';
 import { temperatureWords } from '../../../../shared/process/control-words.ts';
 import { SessionStore } from '../../core/auth/session-store';
 import { EquipmentStore } from '../equipment-store';
 import type { Equipment } from '../equipment-types';
 import { KIND_WORDS, standingOf } from '../equipment-words';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { LoadState } from '../../ui/load-state/load-state';
+import { PageHead } from '../../ui/page-head/page-head';
 
 /** The width every dialog of this page opens at, narrowed to the screen on a phone. */
 const DIALOG = { width: '560px', maxWidth: '96vw', autoFocus: 'first-tabbable' } as const;
@@ -20,7 +21,7 @@ const DIALOG = { width: '560px', maxWidth: '96vw', autoFocus: 'first-tabbable' }
  */
 @Component({
   selector: 'app-equipment-page',
-  imports: [IsoDayPipe, MatButton, MatIcon, MatProgressBar],
+  imports: [IsoDayPipe, LoadState, MatButton, MatIcon, PageHead],
   templateUrl: './equipment-page.html',
   styleUrl: './equipment-page.css',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -19,12 +19,13 @@ import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
-import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ApiError } from '../../core/api/api-error';
 import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { LoadState } from '../../ui/load-state/load-state';
+import { PageHead } from '../../ui/page-head/page-head';
 import { StockStore, type Receipt, type ReceiptRequest, type StockLotView } from '../stock-store';
 
 /** What was done with a delivery, in a cook's words. */
@@ -43,6 +44,9 @@ const DISPOSITIONS = [
   { value: 'recooked', label: 'Cooked again' },
 ] as const;
 
+/** The latest deliveries shown at first. */
+const RECENT_FEW = 6;
+
 /**
  * Deliveries: the receiving form (the item's limit beside the temperature; over it, refuse or
  * take it in with a corrective action), stock on hand by item with its lots first to expire
@@ -53,6 +57,7 @@ const DISPOSITIONS = [
   imports: [
     ReactiveFormsModule,
     IsoDayPipe,
+    LoadState,
     MatButton,
     MatCheckbox,
     MatFormField,
@@ -61,8 +66,8 @@ const DISPOSITIONS = [
     MatInput,
     MatLabel,
     MatOption,
-    MatProgressBar,
     MatSelect,
+    PageHead,
   ],
   templateUrl: './deliveries-page.html',
   styleUrl: './deliveries-page.css',
@@ -122,6 +127,12 @@ export default class DeliveriesPage implements OnInit {
   /** Taking it in: the corrective action is being asked for. */
   protected readonly takingIn = signal(false);
   protected readonly saved = signal<Receipt | null>(null);
+  /** How many of the latest deliveries show until all are asked for: the stock stays in reach. */
+  protected readonly recentFew = RECENT_FEW;
+  protected readonly allRecent = signal(false);
+  protected readonly recentShown = computed(() =>
+    this.allRecent() ? this.store.recent() : this.store.recent().slice(0, RECENT_FEW),
+  );
   /** The lot whose discard is being confirmed, and the reason typed. */
   protected readonly discarding = signal<string | null>(null);
   protected readonly discardReason = this.fb.control('');
@@ -180,6 +191,8 @@ export default class DeliveriesPage implements OnInit {
     }
     this.busy.set(true);
     this.failure.set(null);
+    // The last delivery's "Taken in" must not stand beside this one's question.
+    this.saved.set(null);
     try {
       const receipt = await this.store.receive(this.request(decision));
       this.saved.set(receipt);

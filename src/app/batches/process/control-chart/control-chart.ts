@@ -1,32 +1,24 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import {
-  Chart,
   Decimation,
   Filler,
   Legend,
-  LineController,
-  LineElement,
-  LinearScale,
-  PointElement,
-  Tooltip,
   type ChartData,
   type ChartDataset,
   type ChartOptions,
 } from 'chart.js';
-import { BaseChartDirective, provideCharts } from 'ng2-charts';
+import { ChartFrame } from '../../../ui/chart-frame/chart-frame';
+import { CHART_GRID, CHART_LIMIT_INK } from '../../../ui/chart-frame/chart-inks';
+import { provideLineChart } from '../../../ui/chart-frame/line-chart-parts';
 import { curvePoints, limitBands, type CurvePoint, type LimitBand } from '../curve-points';
 import type { BatchControl } from '../process-types';
 import { clockWords, limitWords, valueWords } from '../process-words';
 import { clockTicks } from './clock-ticks';
 
-Chart.defaults.font.family = 'Fira Sans';
-
-// A canvas cannot read CSS custom properties: these are tones of our palette (_theme-colors.scss).
+// Tones of our palette (_theme-colors.scss), as chart-inks.ts: readings in brown, a range in olive.
 const INK = '#974824';
-const LIMIT_INK = '#ba1a1a';
 const RANGE_INK = '#566433';
 const RANGE_FILL = 'rgba(86, 100, 51, 0.14)';
-const GRID = '#e8e0da';
 
 /** Above this many readings the curve is thinned for drawing (the table keeps every reading). */
 const DECIMATE_ABOVE = 400;
@@ -39,49 +31,22 @@ const DECIMATE_ABOVE = 400;
  */
 @Component({
   selector: 'app-control-chart',
-  imports: [BaseChartDirective],
-  providers: [
-    provideCharts({
-      registerables: [
-        LineController,
-        LineElement,
-        PointElement,
-        LinearScale,
-        Tooltip,
-        Legend,
-        Filler,
-        Decimation,
-      ],
-    }),
-  ],
+  imports: [ChartFrame],
+  providers: [provideLineChart(Legend, Filler, Decimation)],
   template: `
-    <figure class="figure">
-      <div class="canvas-box">
-        <canvas
-          baseChart
-          type="line"
-          [data]="data()"
-          [options]="options()"
-          role="img"
-          [attr.aria-label]="summary()"
-          data-testid="control-chart"
-        ></canvas>
-      </div>
-      <figcaption>{{ summary() }}</figcaption>
-    </figure>
+    <app-chart-frame
+      [data]="data()"
+      [options]="options()"
+      [summary]="summary()"
+      [height]="260"
+      [small]="true"
+      testId="control-chart"
+      >{{ summary() }}</app-chart-frame
+    >
   `,
   styles: `
-    .figure {
-      margin: 12px 0 0;
-    }
-    .canvas-box {
-      position: relative;
-      height: 260px;
-    }
-    figcaption {
-      margin-top: 4px;
-      color: var(--mat-sys-on-surface-variant);
-      font: var(--mat-sys-body-small);
+    app-chart-frame {
+      margin-top: 12px;
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -157,7 +122,7 @@ export class ControlChart {
           type: 'linear',
           min: from,
           max: to,
-          grid: { color: GRID },
+          grid: { color: CHART_GRID },
           // Round clock times; the browser's zone is the kitchen's (clockWords says them there).
           afterBuildTicks: (axis) => {
             const offset = -new Date(from).getTimezoneOffset() * 60_000;
@@ -167,7 +132,7 @@ export class ControlChart {
             callback: (value) => clockWords(new Date(Number(value)).toISOString()),
           },
         },
-        y: { title: { display: true, text: '°C' }, grid: { color: GRID } },
+        y: { title: { display: true, text: '°C' }, grid: { color: CHART_GRID } },
       },
       plugins: {
         decimation: {
@@ -226,8 +191,8 @@ function bandDatasets(band: LimitBand): ChartDataset<'line', CurvePoint[]>[] {
       ...dashed,
       label: band.label,
       data: [...band.points],
-      borderColor: LIMIT_INK,
-      backgroundColor: LIMIT_INK,
+      borderColor: CHART_LIMIT_INK,
+      backgroundColor: CHART_LIMIT_INK,
     },
   ];
 }
