@@ -1,4 +1,5 @@
 import type { ProductLabel } from '../../shared/labels/product-label.ts';
+import { SHORTEN_ADDRESS_WORDS, TOO_FULL_WORDS } from '../../shared/labels/label-lettering.ts';
 import { leastTypeSize } from './label-lettering.ts';
 import { drawSafeHandling, shiHeight } from './label-safe-handling.ts';
 import { labelSizeRefusal, type LabelSize } from '../../shared/labels/label-sizes.ts';
@@ -128,12 +129,9 @@ const STATEMENT_GAP = 3;
  * @param short how much more room the statement needs, points
  */
 function tooFullWords(foot: KitchenFoot, short: number): string {
-  const words =
-    'the ingredient statement does not fit on a 4 × 6 label beside everything else it must say, ' +
-    'with letters no smaller than the labelling rules allow (1/16 in)';
   return foot.oneLineSaves >= short
-    ? `${words}: shorten the kitchen's address to fit on one line with its name`
-    : words;
+    ? `${TOO_FULL_WORDS}: ${SHORTEN_ADDRESS_WORDS}`
+    : TOO_FULL_WORDS;
 }
 
 /**

@@ -30,3 +30,12 @@ import { SHI_LAYOUT } from './safe-handling-text.ts';
  * label approval is the kitchen's stands over the preview).
  */
 export const LEAST_LETTER_POINTS: number = SHI_LAYOUT.minLetterPoints;
+
+/** Why a 4 × 6 label is refused, in a cook's words: its content does not fit at that least. */
+export const TOO_FULL_WORDS =
+  'the ingredient statement does not fit on a 4 × 6 label beside everything else it must say, ' +
+  'with letters no smaller than the labelling rules allow (1/16 in)';
+
+/** What to do when the kitchen's address on its name's line would make the room. */
+export const SHORTEN_ADDRESS_WORDS =
+  "shorten the kitchen's address to fit on one line with its name";

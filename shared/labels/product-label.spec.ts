@@ -252,4 +252,9 @@ describe('noSizeFits', () => {
   it('should give the 4 × 6 label’s own reason while the small labels still print', () => {
     assert.equal(noSizeFits(tooFull, false), tooFull);
   });
+
+  it('should say what to do, not that nothing prints, when shortening the address makes room', () => {
+    const fixable = `${tooFull}: shorten the kitchen's address to fit on one line with its name`;
+    assert.equal(noSizeFits(fixable, true), fixable);
+  });
 });
