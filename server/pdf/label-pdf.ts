@@ -1,4 +1,6 @@
 import type { ProductLabel } from '../../shared/labels/product-label.ts';
+import { SHORTEN_ADDRESS_WORDS, TOO_FULL_WORDS } from '../../shared/labels/label-lettering.ts';
+import { leastTypeSize } from './label-lettering.ts';
 import { drawSafeHandling, shiHeight } from './label-safe-handling.ts';
 import { labelSizeRefusal, type LabelSize } from '../../shared/labels/label-sizes.ts';
 import { CELL, labelQr, labelSheet, smallLabel, type SheetGrid } from './label-small.ts';
@@ -32,9 +34,6 @@ const PAGES: Record<LabelSize, PageSize> = {
   a4: { size: SHEETS.a4.paper, margins: { top: 4, bottom: 4, left: 4, right: 4 } },
 };
 
-/** Sizes of the ingredient statement on a 4 × 6 label, largest first, points. */
-const STATEMENT_SIZES = [8.5, 8, 7.5, 7, 6.5, 6] as const;
-
 /**
  * A label whose content does not fit its size, or a size too small for what the product must
  * carry; the route answers it in words, knowing it by its
@@ -49,28 +48,54 @@ function line(layout: SheetLayout, text: string, style: TextStyle, after = 2): v
   layout.y += layout.draw(text, style, layout.left, layout.y, layout.width) + after;
 }
 
+/** One line or block of text and how it is set. */
+type Fact = readonly [string, TextStyle];
+
+/** The height of lines set one under the other in a width. */
+function heightOf(layout: SheetLayout, lines: readonly Fact[], width: number, gap = 0): number {
+  return lines.reduce((h, [text, style]) => h + layout.measure(text, style, width) + gap, 0);
+}
+
+/** The kitchen's name and address at the foot of the label: their height and how to draw them. */
+interface KitchenFoot {
+  readonly height: number;
+  /** How much lower the foot would be with the address on the name's line, points. */
+  readonly oneLineSaves: number;
+  draw(y: number): void;
+}
+
 /**
- * The kitchen's name and address, at the foot of the label; returns where it starts.
+ * The kitchen's name and address, for the foot of the label, at the least lettering allowed: on
+ * one line when they fit it, the name in semibold, else the address on a line of its own.
  * source: 9 CFR 317.2(c)(3), "The name and place of business of the manufacturer, packer, or
  * distributor for whom the product is prepared" (read at foodcompliance.com)
  */
-function kitchenFoot(layout: SheetLayout, label: ProductLabel, bottom: number): number {
-  const lines = [
-    { text: label.kitchen.name, style: { size: 8.5, weight: 'semibold' } as const },
-    ...(label.kitchen.address ? [{ text: label.kitchen.address, style: { size: 8 } }] : []),
-  ];
-  const heights = lines.map((l) => layout.measure(l.text, l.style, layout.width));
-  let y = bottom - heights.reduce((a, b) => a + b, 0);
-  const top = y;
-  lines.forEach((l, i) => {
-    layout.draw(l.text, l.style, layout.left, y, layout.width);
-    y += heights[i];
-  });
-  return top;
+function kitchenFoot(layout: SheetLayout, label: ProductLabel, least: number): KitchenFoot {
+  const { name, address } = label.kitchen;
+  const named: TextStyle = { size: least, weight: 'semibold' };
+  const placed: TextStyle = { size: least };
+  const line = layout.measure(name, named, layout.width);
+  const after = layout.widthOf(name, named) + least * 0.75;
+  if (!address || after + layout.widthOf(address, placed) <= layout.width)
+    return {
+      height: line,
+      oneLineSaves: 0,
+      draw: (y) => {
+        layout.draw(name, named, layout.left, y, layout.width);
+        if (address) layout.draw(address, placed, layout.left + after, y, layout.width - after);
+      },
+    };
+  const nameHeight = layout.measure(name, named, layout.width);
+  const height = nameHeight + layout.measure(address, placed, layout.width);
+  return {
+    height,
+    oneLineSaves: height - line,
+    draw: (y) => {
+      layout.draw(name, named, layout.left, y, layout.width);
+      layout.draw(address, placed, layout.left, y + nameHeight, layout.width);
+    },
+  };
 }
-
-/** One line of the block beside the QR code: its text and how it is set. */
-type Fact = readonly [string, TextStyle];
 
 /**
  * The net weight, the lot, the packed-on and use-by days, each on a line of its own. Where each
@@ -79,7 +104,8 @@ type Fact = readonly [string, TextStyle];
  * food shall be consumed on the premises, sold, or discarded" (FDA Food Code 2022, 3-501.17(A),
  * read as quoted in shared/labels/date-mark.ts) and names no words for the label, so "Use by" is
  * common practice, no source; "Lot" and "Packed on" — common practice, no source (a lot code and
- * a packing date are what a recall asks for, FSIS Directive 8080.1, from memory).
+ * a packing date are what a recall asks for, FSIS Directive 8080.1, from memory). Every size is
+ * above the least lettering allowed (9 points in the shipped font).
  */
 function factsOf(label: ProductLabel): Fact[] {
   return [
@@ -94,54 +120,72 @@ function factsOf(label: ProductLabel): Fact[] {
 
 /** Gap under each fact, points (our own). */
 const FACT_GAP = 3;
+/** Gap under each paragraph of the statement, points (our own). */
+const STATEMENT_GAP = 3;
+
+/**
+ * Why the 4 × 6 label cannot hold a label's content, in a cook's words, and what to do when
+ * something can be done: the kitchen's address on the name's line, when that would make room.
+ * @param short how much more room the statement needs, points
+ */
+function tooFullWords(foot: KitchenFoot, short: number): string {
+  return foot.oneLineSaves >= short
+    ? `${TOO_FULL_WORDS}: ${SHORTEN_ADDRESS_WORDS}`
+    : TOO_FULL_WORDS;
+}
 
 /**
  * The 4 × 6 in label: the product's name, the ingredient statement and what it contains, then
  * the net weight, the lot code, the packed-on and use-by days beside the lot's QR code, the keep
  * statement on a dark band, the safe handling instructions in their box when the product needs
- * them, and the kitchen at the foot. The statement is set as large as the label allows, from 8.5
- * down to 6 points; a label whose content does not fit even so is refused.
+ * them, and the kitchen at the foot. No word the label must carry is set with lower-case letters
+ * under 1/16 inch (leastTypeSize): the statement is set as large as the label allows, from one
+ * point above that size down to it, and a label whose content does not fit even so is refused,
+ * never set smaller.
  */
 function fourBySix(layout: SheetLayout, label: ProductLabel): void {
+  const least = leastTypeSize(layout);
   const bottom = layout.doc.page.height - layout.doc.page.margins.bottom;
-  let floor = kitchenFoot(layout, label, bottom) - 6;
-  if (label.instructions) {
-    floor -= shiHeight(layout, label.instructions, layout.width);
-    drawSafeHandling(layout, label.instructions, layout.left, floor, layout.width);
-    floor -= 6;
-  }
-  line(layout, label.product, { size: 15, weight: 'semibold' }, 5);
+  const foot = kitchenFoot(layout, label, least);
+  const footTop = bottom - foot.height;
+  let floor = footTop - 5;
+  const shi = label.instructions && shiHeight(layout, label.instructions, layout.width);
+  if (shi) floor -= shi + 5;
+  const title: Fact = [label.product, { size: 15, weight: 'semibold' }];
   const side = label.instructions ? 64 : 84;
   const facts = factsOf(label);
   const factsWidth = layout.width - side;
-  const factsHeight = facts.reduce(
-    (h, [text, style]) => h + layout.measure(text, style, factsWidth) + FACT_GAP,
-    0,
-  );
-  const band = label.handling ? 20 : 0;
+  const band = label.handling ? 18 : 0;
   // Under the statement: the rule, the block beside the QR code, and the band.
-  const below = 10 + Math.max(side, factsHeight) + (band ? 6 + band : 0);
+  const below =
+    9 + Math.max(side, heightOf(layout, facts, factsWidth, FACT_GAP)) + (band ? 6 + band : 0);
   const statement = [label.ingredients.text, label.contains].filter(Boolean) as string[];
-  const room = floor - layout.y - below;
-  const size = STATEMENT_SIZES.find(
-    (s) =>
-      statement.reduce((h, text) => h + layout.measure(text, { size: s }, layout.width) + 3, 0) <=
-      room,
-  );
-  if (size === undefined)
-    throw new LabelTooFullError(
-      'the ingredient statement does not fit on a 4 × 6 label beside everything else it must say',
+  const room = floor - layout.y - heightOf(layout, [title], layout.width) - 4 - below;
+  const statementAt = (size: number) =>
+    heightOf(
+      layout,
+      statement.map((text): Fact => [text, { size }]),
+      layout.width,
+      STATEMENT_GAP,
     );
-  line(layout, label.ingredients.text, { size }, 3);
-  if (label.contains) line(layout, label.contains, { size, weight: 'semibold' }, 3);
+  const size = [least + 1, least + 0.5, least].find((s) => statementAt(s) <= room);
+  if (size === undefined)
+    throw new LabelTooFullError(tooFullWords(foot, statementAt(least) - room));
+  foot.draw(footTop);
+  if (shi && label.instructions)
+    drawSafeHandling(layout, label.instructions, layout.left, floor, layout.width);
+  line(layout, title[0], title[1], 4);
+  line(layout, label.ingredients.text, { size }, STATEMENT_GAP);
+  if (label.contains) line(layout, label.contains, { size, weight: 'semibold' }, STATEMENT_GAP);
   layout.gap(3);
   layout.rule(INK.black, 0.8);
-  layout.gap(7);
+  layout.gap(6);
   const top = layout.y;
   let y = top;
   for (const [text, style] of facts)
     y += layout.draw(text, style, layout.left, y, factsWidth) + FACT_GAP;
-  // The QR code's quiet zone is its own margin on the right.
+  // The QR code's quiet zone is its own margin on the right. The code is not a word the label
+  // must carry: the lot code is printed beside it in words.
   labelQr(layout, label.lotCode, layout.right - side + 4, top - 4, side);
   layout.y = Math.max(y, top + side - 4) + 6;
   if (label.handling) {
@@ -150,7 +194,7 @@ function fourBySix(layout: SheetLayout, label: ProductLabel): void {
       label.handling.toUpperCase(),
       { size: 12, weight: 'semibold', color: INK.white, align: 'center' },
       layout.left,
-      layout.y + 4,
+      layout.y + 3,
       layout.width,
     );
   }

@@ -1,5 +1,5 @@
 import type { SafeHandlingInstructions } from '../../shared/labels/product-label.ts';
-import { SHI_LAYOUT } from '../../shared/labels/safe-handling-text.ts';
+import { leastTypeSize } from './label-lettering.ts';
 import { drawPicture } from './label-pictures.ts';
 import { INK, type SheetLayout, type TextStyle } from './sheet-layout.ts';
 
@@ -9,21 +9,12 @@ const PADDING = 5;
 const BETWEEN = 3;
 
 /**
- * The x-height of the sheet's regular font as a share of its size, as pdfkit reads it from the
- * font (Fira Sans: 527 thousandths of an em); 0.5 if it cannot be read.
- */
-function xHeightShare(layout: SheetLayout): number {
-  const font = (layout.doc as unknown as { _font?: { xHeight?: number } })._font;
-  return font?.xHeight ? font.xHeight / 1000 : 0.5;
-}
-
-/**
  * The type sizes of the instructions: the statements at the least size whose lower-case letters
- * stand 1/16 inch tall (rounded up to half a point: 9 points in Fira Sans), the heading 2 points
+ * stand 1/16 inch tall (leastTypeSize: 9 points in Fira Sans), the heading 2 points
  * larger and semibold. See SHI_LAYOUT for which rules were read, and where.
  */
 export function shiSizes(layout: SheetLayout): { body: TextStyle; heading: TextStyle } {
-  const body = Math.ceil((SHI_LAYOUT.minLetterPoints / xHeightShare(layout)) * 2) / 2;
+  const body = leastTypeSize(layout);
   return {
     body: { size: body, color: INK.black },
     heading: { size: body + 2, weight: 'semibold', color: INK.black },

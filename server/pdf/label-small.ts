@@ -30,7 +30,9 @@ export function labelQr(
  * "Packed" is "Packed on" shortened, our own). It carries no ingredient statement, allergens or
  * kitchen: it goes on a pack that carries the 4 × 6 label or a carton that does. It has no room
  * for the safe handling instructions, so a product that must carry them is not printed on it
- * (shared/labels/label-sizes.ts).
+ * (shared/labels/label-sizes.ts). Its words are set at 6 to 8 points, under the 1/16 inch least of
+ * the words a label must carry (shared/labels/label-lettering.ts): it is not that label, but a
+ * mark of the lot and days on a pack that, or whose carton, carries the 4 × 6 label.
  */
 export function smallLabel(layout: SheetLayout, label: ProductLabel, box: Box, inset = 4): void {
   const side = box.height - 2 * inset;

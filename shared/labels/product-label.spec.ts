@@ -8,7 +8,7 @@ import { dec } from '../decimal.ts';
 import { readFormula } from '../formula/read-formula.ts';
 import type { Formula } from '../formula/formula-types.ts';
 import { presentResult } from '../presentation/present-result.ts';
-import { productLabel } from './product-label.ts';
+import { noSizeFits, productLabel } from './product-label.ts';
 import { safeHandling } from './safe-handling.ts';
 
 const FORMULAS = new URL('../../formulas/', import.meta.url);
@@ -234,5 +234,27 @@ describe('productLabel', () => {
     assert.equal(ham.kind, 'cure');
     const raw = { ...ham, label: { storage: 'refrigerated' as const, ready_to_eat: false } };
     assert.equal(safeHandling(raw).required, true);
+  });
+});
+
+describe('noSizeFits', () => {
+  const tooFull = 'The ingredient statement does not fit on a 4 × 6 label';
+
+  it('should say no size prints a label the small sizes refuse too, and that a served dish needs none', () => {
+    assert.equal(
+      noSizeFits(tooFull, true),
+      'This label is too long for any size we print: the ingredient statement does not fit on ' +
+        'a 4 × 6 label, and the small labels have no room for the safe handling instructions. ' +
+        'A dish you serve rather than pack, such as a burger from the grill, needs no package label',
+    );
+  });
+
+  it('should give the 4 × 6 label’s own reason while the small labels still print', () => {
+    assert.equal(noSizeFits(tooFull, false), tooFull);
+  });
+
+  it('should say what to do, not that nothing prints, when shortening the address makes room', () => {
+    const fixable = `${tooFull}: shorten the kitchen's address to fit on one line with its name`;
+    assert.equal(noSizeFits(fixable, true), fixable);
   });
 });

@@ -8,7 +8,8 @@ import type { ProductLabelView } from '../api/product-label-view.ts';
 import { allergenStatement } from './allergen-statement.ts';
 import { ingredientStatement, type IngredientStatement } from './ingredient-statement.ts';
 import { labelIngredients } from './label-ingredients.ts';
-import { LABEL_SIZES, labelSizeRefusal } from './label-sizes.ts';
+import { SHORTEN_ADDRESS_WORDS } from './label-lettering.ts';
+import { LABEL_SIZES, labelSizeRefusal, type LabelSize } from './label-sizes.ts';
 import { keepStatement, useByOf, type KeepStatement, type UseBy } from './label-keeping.ts';
 import { netWeight, type NetWeight } from './net-weight.ts';
 import { safeHandling, type SafeHandling } from './safe-handling.ts';
@@ -146,12 +147,32 @@ export function productLabel(input: ProductLabelInput): ProductLabel {
 }
 
 /**
+ * Why the 4 × 6 label is refused, in a cook's words, as the preview offers it: its own reason,
+ * and what to do when something can be done (the kitchen's address on one line). When nothing
+ * can and the small sizes are refused too, no size carries the label: a dish served from the
+ * kitchen needs no package label (FDA Food Code 2022, 3-602.11(A): food "packaged in a food
+ * establishment" is labeled; from memory), which is what the demo burger is.
+ * @param tooFull why the 4 × 6 label cannot hold this content
+ * @param smallRefused whether the small sizes are refused as well
+ */
+export function noSizeFits(tooFull: string, smallRefused: boolean): string {
+  if (!smallRefused || tooFull.endsWith(SHORTEN_ADDRESS_WORDS))
+    return tooFull.charAt(0).toUpperCase() + tooFull.slice(1);
+  return (
+    `This label is too long for any size we print: ${tooFull.charAt(0).toLowerCase()}` +
+    `${tooFull.slice(1)}, and the small labels have no room for the safe handling instructions. ` +
+    'A dish you serve rather than pack, such as a burger from the grill, needs no package label'
+  );
+}
+
+/**
  * A label's content as the API sends it (shared/api/product-label-view.ts), with every size and
  * why this product cannot go on it, if it cannot.
  * @param tooFull why the 4 × 6 label cannot hold this content, when it cannot (found by laying it
  *   out, which only the PDF stack can)
  */
 export function productLabelView(label: ProductLabel, tooFull?: string): ProductLabelView {
+  const small = (size: LabelSize) => labelSizeRefusal(size, label.safeHandling.required, !tooFull);
   return {
     product: label.product,
     ingredients: label.ingredients.text,
@@ -169,9 +190,7 @@ export function productLabelView(label: ProductLabel, tooFull?: string): Product
     netNote: label.netNote,
     sizes: LABEL_SIZES.map((size) => {
       const refused =
-        size === '4x6' && tooFull
-          ? tooFull
-          : labelSizeRefusal(size, label.safeHandling.required, !tooFull);
+        size === '4x6' && tooFull ? noSizeFits(tooFull, small('2x1') !== undefined) : small(size);
       return refused ? { size, refused } : { size };
     }),
   };

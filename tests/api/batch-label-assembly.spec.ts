@@ -91,14 +91,18 @@ describe('the label of an assembly batch', () => {
     assert.equal(small.json.error.code, 'too-small-for-safe-handling');
 
     // Its 929 characters of ingredients do not fit a 4 × 6 label beside the safe handling
-    // instructions, even at the smallest size the label sets them in: refused, not cut short.
+    // instructions with letters 1/16 in tall: refused, not cut short nor set smaller.
     const full = await rosa.get(`/api/batches/${burgers}/label.pdf?size=4x6&net=14%20oz`);
     assert.equal(view.ingredients.length, 929);
     assert.equal(full.status, 422, full.text);
     assert.equal(full.json.error.code, 'label-too-full');
-    // The preview says so before anyone prints: no size is offered for this label.
+    // The preview says so before anyone prints: no size is offered for this label, and the
+    // burger, served rather than packed, needs none.
     const refused = view.sizes.map((size: { refused?: string }) => size.refused ?? '');
-    assert.match(refused[0], /^The ingredient statement does not fit on a 4 × 6 label/);
+    assert.match(
+      refused[0],
+      /^This label is too long for any size we print: the ingredient statement does not fit on a 4 × 6 label .*\(1\/16 in\), and the small labels have no room for the safe handling instructions\. A dish you serve rather than pack, such as a burger from the grill, needs no package label$/,
+    );
     for (const why of refused.slice(1)) assert.match(why, /too small for the safe handling/);
   });
 

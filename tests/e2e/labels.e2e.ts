@@ -10,7 +10,7 @@ import {
 import { insertAssemblyBatch } from '../helpers/lot-use-fixture.ts';
 import { pdfText } from '../helpers/pdf-text.ts';
 import type { Page } from 'playwright-core';
-import { collectConsoleErrors, startConsole, ARTIFACTS } from './browser.ts';
+import { collectConsoleErrors, startConsole, ARTIFACTS, type ConsoleSession } from './browser.ts';
 import { shootAtWidths } from './screens.ts';
 import path from 'node:path';
 
@@ -44,6 +44,16 @@ async function shootSection(page: Page, name: string): Promise<void> {
       .screenshot({ path: path.join(ARTIFACTS, `${name}-section-${width}.png`) });
   }
   await page.setViewportSize({ width: 1280, height: 860 });
+}
+
+/** Records a batch of the raw bacon started today, as Tobin; returns its lot code. */
+async function recordRawBacon(session: ConsoleSession): Promise<string> {
+  const recorded = await session.server.as('tobin').post('/api/batches', {
+    formula: 'quillmoor-belly',
+    batch: { meat: '4.26kg', thickness: '4cm', start: TODAY },
+  });
+  assert.equal(recorded.status, 201, recorded.text);
+  return recorded.json.batch.lotCode as string;
 }
 
 describe('product labels in the console', () => {
@@ -97,12 +107,7 @@ describe('product labels in the console', () => {
 
   it('should show the raw bacon’s safe handling instructions and no use-by day', async (t) => {
     const session = await startConsole(t);
-    const recorded = await session.server.as('tobin').post('/api/batches', {
-      formula: 'quillmoor-belly',
-      batch: { meat: '4.26kg', thickness: '4cm', start: TODAY },
-    });
-    assert.equal(recorded.status, 201, recorded.text);
-    const lot = recorded.json.batch.lotCode as string;
+    const lot = await recordRawBacon(session);
     const page = await session.page('rosa');
     const errors = collectConsoleErrors(page);
     await page.goto(`${session.server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
@@ -142,6 +147,41 @@ describe('product labels in the console', () => {
     const text = await pdfText(readFileSync(await download.path()));
     assert.deepEqual(text.sizes, [[288, 432]]);
     assert.match(text.all, /Safe Handling Instructions/);
+    assert.deepEqual(errors, []);
+  });
+
+  it('should offer no 4 × 6 label the kitchen’s long address crowds out, saying to shorten it', async (t) => {
+    // An address of two lines at 9 points (the least lettering a label's words may have, 1/16 in
+    // lower-case letters: tests/pdf/label-lettering.spec.ts) leaves the raw bacon's statement no
+    // room above its safe handling box; on the name's line it would fit.
+    const session = await startConsole(t, {
+      env: {
+        LARDER_KITCHEN_ADDRESS:
+          '14 Kiln Lane, behind the old tannery yard, Quillmoor, Marsh County 00000',
+      },
+    });
+    const lot = await recordRawBacon(session);
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    await page.getByTestId('label-net').fill('12 oz');
+    const problem = page.getByTestId('label-problem');
+    await problem.waitFor();
+    assert.equal(
+      await problem.innerText(),
+      'The ingredient statement does not fit on a 4 × 6 label beside everything else it must ' +
+        'say, with letters no smaller than the labelling rules allow (1/16 in): shorten the ' +
+        "kitchen's address to fit on one line with its name.",
+    );
+    assert.equal(await page.getByTestId('label-print').count(), 0);
+    await shootAtWidths(session, page, 'label-preview-too-long');
+    await shootSection(page, 'label-preview-too-long');
+    await page.getByTestId('label-size').click();
+    const option = page.getByRole('option', { name: /^4 × 6 in/ });
+    assert.equal(await option.getAttribute('aria-disabled'), 'true');
+    assert.match(await option.innerText(), /this label is too long for it$/);
+    await page.keyboard.press('Escape');
+    await page.getByRole('listbox').waitFor({ state: 'detached' });
     assert.deepEqual(errors, []);
   });
 
