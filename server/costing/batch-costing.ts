@@ -123,6 +123,17 @@ export class BatchCosting {
     const lines: CostInput[] = [];
     const lineItems = new Set<string>();
     for (const line of weighedLines(result)) {
+      // An assembly's part comes from a batch of it: priced by the batch recorded, if any.
+      if (line.part !== undefined) {
+        if (!recorded.has(line.part))
+          lines.push({
+            name: line.name,
+            amount: new Decimal(line.grams),
+            source: 'latest-price',
+            unpriced: 'no batch of it is recorded as used',
+          });
+        continue;
+      }
       const item =
         linked.find((link) => namesLine(link.name, line.name))?.item ?? this.byName(line.name);
       if (item) lineItems.add(item.key);
