@@ -69,7 +69,7 @@ export function planCommand(io: Io): Command {
     )
     .option(
       '--record',
-      'record every batch as planned, starting on its day (as $LARDER_USER, password in $LARDER_PASSWORD)',
+      "record every batch as planned, starting on its day, and the menu item's own for the service day (as $LARDER_USER, password in $LARDER_PASSWORD)",
     )
     .option(
       '--again',
