@@ -33,7 +33,7 @@ describe('larder calc for an assembly', () => {
     assertCleanFailure(
       await runLarder(['calc', 'smokehouse-burger']),
       2,
-      /give --count: how many units of Smokehouse burger were made/,
+      /give --count: how many of Smokehouse burger were made/,
     );
     assertCleanFailure(
       await runLarder(['calc', 'quillmoor-belly', '--meat', '4kg', '--count', '3']),

@@ -87,7 +87,7 @@ describe('calculateAssembly: one batch of an assembly, its parts as the plan wor
       (error: unknown) =>
         error instanceof BatchError &&
         error.option === 'count' &&
-        /how many units of Smokehouse burger were made/.test(error.message),
+        /how many of Smokehouse burger were made/.test(error.message),
     );
     const noGrind = new Map([...KITCHEN].filter(([id]) => id !== 'chuck-grind'));
     assert.throws(

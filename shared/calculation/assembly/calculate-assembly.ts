@@ -41,7 +41,7 @@ export function calculateAssembly(
 ): CalcResult {
   if (batch.count === undefined)
     throw new BatchError(
-      `give --count: how many units of ${assembly.title} were made (one unit as the formula serves it)`,
+      `give --count: how many of ${assembly.title} were made, one unit as the formula serves it`,
       'count',
     );
   const count = new Decimal(batch.count);
