@@ -132,7 +132,11 @@ interface CandidateRow {
 /** A batch that may be drawn on, with its id and its formula's title. */
 export type SourceRow = SourceCandidate & { readonly id: number; readonly title: string };
 
-/** The batches of these formulas started by a day: candidates for an assembly's parts. */
+/**
+ * The batches of these formulas started by a day, the latest 200: candidates for an assembly's
+ * parts (sourceBatchOrder puts them in the order to suggest). The latest, so that years of
+ * batches never push this week's out of the list.
+ */
 export async function sourceCandidates(
   db: Database,
   formulas: readonly string[],
@@ -146,7 +150,7 @@ export async function sourceCandidates(
        EXISTS (SELECT 1 FROM verifications v WHERE v.batch_id = b.id) AS released
      FROM batches b
      WHERE b.formula_id IN (${formulas.map(() => '?').join(', ')}) AND b.started_on <= ?
-     ORDER BY b.started_on, b.lot_code LIMIT 200`,
+     ORDER BY b.started_on DESC, b.lot_code DESC LIMIT 200`,
     [...formulas, usedOn],
     t,
   );
