@@ -77,10 +77,12 @@ describe('an assembly drawing on batches', () => {
       ]),
       [[done, '2270', 'Smokehouse burger grind 80/20']],
     );
+    // The burgers' own use (the demo's packs and burgers have theirs too).
     const [row] = await db.sequelize.query<{ source: string; receipt_id: number | null }>(
       `SELECT s.lot_code AS source, u.receipt_id FROM lot_uses u
-       JOIN batches s ON s.id = u.source_batch_id`,
-      { type: QueryTypes.SELECT },
+       JOIN batches s ON s.id = u.source_batch_id
+       JOIN batches b ON b.id = u.batch_id WHERE b.lot_code = ?`,
+      { replacements: [burgers], type: QueryTypes.SELECT },
     );
     assert.deepEqual(row, { source: done, receipt_id: null });
     // A grind recorded (wrongly, by hand) as made from these burgers would close a loop.
