@@ -104,7 +104,12 @@ export class BatchCosting {
       return { ...base, unpriced: `made from batches more than ${MOST_LEVELS} levels deep` };
     const earlier = await this.ofBatch(source, undefined, level + 1);
     if (earlier.perFinishedKg === null)
-      return { ...base, unpriced: 'the earlier batch finished at nothing' };
+      return {
+        ...base,
+        unpriced: earlier.finishedGrams.greaterThan(0)
+          ? 'nothing in the earlier batch has a price'
+          : 'the earlier batch finished at nothing',
+      };
     return { ...base, price: { perUnit: earlier.perFinishedKg, unit: 'kg' } };
   }
 
