@@ -14,6 +14,7 @@ import {
 } from '../../shared/index.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import { formulasFolder, loadFormula } from '../formula-files.ts';
+import { libraryIn, partsFolder } from '../formula-library.ts';
 import { today, type Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
 import { recordKeeper, serverOption } from '../records/record-keeper.ts';
@@ -77,6 +78,10 @@ const BATCH_OPTIONS: Readonly<Record<BatchOptionName, readonly [flags: string, h
   ],
   portion: ['--portion <weight>', "blend: portion weight, instead of the formula's"],
   base: ['--base <weight>', 'mix: weight of the base ingredient'],
+  count: [
+    '--count <number>',
+    'assembly: units made (burgers, packs); the parts come from their formulas',
+  ],
   start: [
     '--start <date>',
     'day the batch starts, YYYY-MM-DD, within a year of today (default: today)',
@@ -111,7 +116,7 @@ interface CalcOptions extends RawBatchOptions {
   formulas?: string;
   record?: boolean;
   server?: string;
-  status?: 'planned' | 'in-progress';
+  status?: 'planned' | 'in-progress' | 'done';
   notes?: string;
   pdf?: string;
   force?: boolean;
@@ -138,10 +143,10 @@ export function calcCommand(io: Io): Command {
     )
     .addOption(serverOption('with --record: record on this server'))
     .addOption(
-      new Option('--status <status>', 'with --record: planned or in-progress (default)').choices([
-        'planned',
-        'in-progress',
-      ]),
+      new Option(
+        '--status <status>',
+        'with --record: planned, or in-progress (the default); an assembly: planned, or done (its default: made on its day)',
+      ).choices(['planned', 'in-progress', 'done']),
     )
     .option('--notes <text>', 'with --record: a note kept with the batch')
     .option(
@@ -163,6 +168,8 @@ Examples:
   larder calc chuck-grind --total 20kg --target-fat 20
   larder calc chuck-grind --on-hand lean=12kg --json
   larder calc chuck-grind --total 20kg --fat-test lean=17.5
+  larder calc bacon-pack --count 40
+  larder calc smokehouse-burger --count 120 --record
   LARDER_USER=tobin LARDER_PASSWORD=… larder calc quillmoor-belly --meat 4.26kg --thickness 4cm --record
   larder calc quillmoor-belly --meat 4.26kg --record --server http://127.0.0.1:4310
   larder calc quillmoor-belly --meat 4.26kg --thickness 4cm --pdf belly-sheet.pdf
@@ -189,9 +196,14 @@ async function runCalc(reference: string, options: CalcOptions, io: Io): Promise
   // The path is checked before anything is worked out or recorded.
   if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
   if (options.record) return recordBatch(formula.id, file, raw, options, pdf, io);
+  // An assembly's parts are worked out from their own formulas, read when one is asked for.
+  const library =
+    formula.kind === 'assembly'
+      ? libraryIn(partsFolder(reference, file, options.formulas), file, io)
+      : undefined;
   let result;
   try {
-    result = calculate(formula, parseBatchOptions(raw, formula, { today: day }));
+    result = calculate(formula, parseBatchOptions(raw, formula, { today: day }), library);
   } catch (error) {
     if (error instanceof BatchError) throw new CliError(error.message, EXIT.usage);
     throw error;

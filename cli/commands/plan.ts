@@ -1,12 +1,7 @@
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { Command, Option } from 'commander';
 import {
   FORMULA_REFUSALS,
   PlanError,
-  checkLibrary,
-  formatProblem,
-  formulaLibrary,
   isIsoDate,
   planAssembly,
   presentPlan,
@@ -18,7 +13,8 @@ import {
 } from '../../shared/index.ts';
 import type { PlanWithStock } from '../../shared/api/plan-record.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
-import { formulaFilesIn, formulasFolder, loadFormula, readFormulaFile } from '../formula-files.ts';
+import { formulasFolder, loadFormula } from '../formula-files.ts';
+import { libraryIn, partsFolder } from '../formula-library.ts';
 import { today, type Io } from '../io.ts';
 import type { PdfTarget } from '../output/pdf-file.ts';
 import { renderPlanSheet } from '../output/plan-sheet.ts';
@@ -73,7 +69,7 @@ export function planCommand(io: Io): Command {
     )
     .option(
       '--record',
-      'record every batch as planned, starting on its day (as $LARDER_USER, password in $LARDER_PASSWORD)',
+      "record every batch as planned, starting on its day, and the menu item's own for the service day (as $LARDER_USER, password in $LARDER_PASSWORD)",
     )
     .option(
       '--again',
@@ -134,28 +130,6 @@ function planFailure(error: PlanError): CliError {
   return new CliError(error.message, code);
 }
 
-/**
- * The formulas of a folder, each assembly checked against the others, by id. The errors of the
- * assembly's own file are printed; another file's are summed up by the plan's refusal when the
- * plan needs that file (`larder check` lists them all).
- */
-function libraryIn(folder: string, assemblyFile: string, io: Io) {
-  const readings = formulaFilesIn(folder).map((file) => ({ file, reading: readFormulaFile(file) }));
-  const checked = checkLibrary(readings, (file) => readFileSync(file, 'utf8'));
-  const own = path.resolve(assemblyFile);
-  checked.forEach((reading, i) => {
-    if (path.resolve(readings[i].file) !== own) return;
-    for (const problem of reading.problems.filter((p) => p.severity === 'error')) {
-      io.err(`${formatProblem(problem)}\n`);
-    }
-  });
-  return formulaLibrary(readings.map(({ file }, i) => ({ file, reading: checked[i] })));
-}
-
-function isPath(reference: string): boolean {
-  return reference.includes('/') || reference.includes(path.sep) || /\.ya?ml$/i.test(reference);
-}
-
 async function runPlan(reference: string, options: PlanOptions, io: Io): Promise<void> {
   const count = readCount(options.count);
   const serviceDate = readDate(options.for, 'for');
@@ -190,8 +164,7 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
       EXIT.usage,
     );
   }
-  // The formulas the assembly names: --formulas, else the folder of the assembly's own file.
-  const folder = options.formulas ?? (isPath(reference) ? path.dirname(file) : formulasFolder());
+  const folder = partsFolder(reference, file, options.formulas);
   // Made once, when first asked for: a server makes its own plan.
   let library: FormulaLibrary | undefined;
   const formulas = (): FormulaLibrary => (library ??= libraryIn(folder, file, io));

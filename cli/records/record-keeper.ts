@@ -20,7 +20,8 @@ export interface BatchToRecord {
   readonly folder: string;
   readonly batch: RawBatchOptions;
   readonly units: UnitSystem;
-  readonly status?: 'planned' | 'in-progress';
+  /** Planned or in progress; an assembly also done (its default on its day). */
+  readonly status?: 'planned' | 'in-progress' | 'done';
   readonly notes?: string;
 }
 

@@ -1,4 +1,4 @@
-import { isIsoDate, type BatchKind } from '../../shared/index.ts';
+import { isIsoDate, type FormulaKind } from '../../shared/index.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
 import type { BatchStatus } from '../../shared/api/batch-record.ts';
 import { isFormulaId } from '../../shared/formula/formula-id.ts';
@@ -29,7 +29,7 @@ export const SORTS: Readonly<
 /** What a list or export is narrowed to; every field is optional and they combine with AND. */
 export interface BatchFilter {
   readonly formula?: string;
-  readonly kind?: BatchKind;
+  readonly kind?: FormulaKind;
   readonly statuses?: readonly BatchStatus[];
   readonly operatorId?: number;
   /** Recorded on or after this day (UTC), YYYY-MM-DD. */
@@ -83,7 +83,7 @@ const FILTER_KEYS = [
 ];
 const SORT_KEYS = ['sort', 'order'];
 const PAGE_KEYS = ['limit', 'cursor'];
-const KINDS: readonly BatchKind[] = ['cure', 'dough', 'blend', 'mix'];
+const KINDS: readonly FormulaKind[] = ['cure', 'dough', 'blend', 'mix', 'assembly'];
 
 interface CursorJson {
   s: SortKey;
@@ -166,7 +166,7 @@ function parseFilter(query: Record<string, unknown>, problems: Problem[]): Batch
   }
   const kind = single(query, 'kind', problems);
   if (kind !== undefined) {
-    if ((KINDS as readonly string[]).includes(kind)) filter.kind = kind as BatchKind;
+    if ((KINDS as readonly string[]).includes(kind)) filter.kind = kind as FormulaKind;
     else problems.push({ field: 'kind', message: `must be one of ${KINDS.join(', ')}` });
   }
   const status = single(query, 'status', problems);

@@ -1,5 +1,5 @@
 import type {
-  BatchKind,
+  FormulaKind,
   PresentedResult,
   RawBatchOptions,
   UnitSystem,
@@ -22,7 +22,7 @@ export interface BatchRow {
   formula_id: string;
   formula_revision: string;
   formula_title: string;
-  kind: BatchKind;
+  kind: FormulaKind;
   status: BatchStatus;
   operator_id: number;
   operator_name: string | null;

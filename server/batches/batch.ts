@@ -1,7 +1,7 @@
-import type { RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
+import type { RecordStatus } from '../../shared/workflow/batch-status.ts';
 import type { Role } from '../../shared/api/person.ts';
 import type {
-  BatchKind,
+  FormulaKind,
   PresentedResult,
   RawBatchOptions,
   UnitSystem,
@@ -10,8 +10,8 @@ import type {
 /** What is stored for a new batch; the lot code and times are added when it is written. */
 export interface NewBatch {
   readonly formula: { readonly id: string; readonly revision: string; readonly title: string };
-  readonly kind: BatchKind;
-  readonly status: (typeof RECORD_STATUSES)[number];
+  readonly kind: FormulaKind;
+  readonly status: RecordStatus;
   readonly operatorId: number;
   readonly startedOn: string;
   readonly readyOn: string | null;

@@ -22,13 +22,15 @@ export async function recordBatch(
   options: ChangeOptions,
 ): Promise<Batch> {
   const current = await deps.history.current(request.formula);
+  // An assembly's parts are worked out from the other formulas as they are now.
+  const library = current.formula.kind === 'assembly' ? await deps.history.library() : undefined;
   const tried = {
     formula: request.formula,
     revision: current.revision,
     inputs: { start: today, ...request.batch },
   };
   const prepared = await keepingRefusals(deps, tried, options, () =>
-    prepareBatch(current, request, options.actor.id, today),
+    prepareBatch(current, request, options.actor.id, today, library),
   );
   if (prepared.status !== 'planned') requireHoldSize(prepared.result);
   return deps.batches.record(prepared, options);

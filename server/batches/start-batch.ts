@@ -98,6 +98,7 @@ export async function startBatch(
       `batch ${seen.lotCode} is ${seen.status}: only a planned batch is started`,
     );
   const { formula, revision, warnings } = await startFormula(deps.history, seen);
+  const library = formula.kind === 'assembly' ? await deps.history.library() : undefined;
   const inputs: RawBatchOptions = { start: today, ...request.batch };
   const started = await keepingRefusals(
     deps,
@@ -109,6 +110,7 @@ export async function startBatch(
         { formula: seen.formulaId, batch: inputs, units: seen.result.units, status: 'in-progress' },
         seen.operatorId,
         today,
+        library,
       ),
   );
   warnings.push(...startDayWarning(seen.startedOn, started.startedOn, started.readyOn));

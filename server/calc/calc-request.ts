@@ -6,6 +6,7 @@ import {
   presentResult,
   readFormula,
   type Formula,
+  type FormulaLibrary,
   type PresentedResult,
   type RawBatchOptions,
   type UnitSystem,
@@ -50,16 +51,18 @@ export function formulaFromText(yaml: string, name: string): Formula {
  * Calculates and presents one batch, turning batch-input mistakes into 400s that name the option.
  * @param today the server's today, YYYY-MM-DD: the start day when none is given, and the middle
  *   of the days a start may lie in
+ * @param library the formulas an assembly's parts are made from (only an assembly needs it)
  */
 export function calculateBatch(
   formula: Formula,
   raw: RawBatchOptions,
   units: UnitSystem,
   today: string,
+  library?: FormulaLibrary,
 ): PresentedResult {
   try {
     const input = parseBatchOptions({ start: today, ...raw }, formula, { today });
-    return presentResult(calculate(formula, input), units);
+    return presentResult(calculate(formula, input, library), units);
   } catch (error) {
     if (error instanceof BatchError)
       throw new AppError(

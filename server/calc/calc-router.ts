@@ -50,7 +50,10 @@ export function calcRouter(context: AppContext): Router {
       typeof body.formula === 'string'
         ? (await context.formulas.current(body.formula)).formula
         : formulaFromText(body.formula.yaml, 'inline formula');
-    res.json(calculateBatch(formula, body.batch, body.units ?? 'metric', serverToday(context)));
+    const library = formula.kind === 'assembly' ? await context.formulas.library() : undefined;
+    res.json(
+      calculateBatch(formula, body.batch, body.units ?? 'metric', serverToday(context), library),
+    );
   });
   return router;
 }

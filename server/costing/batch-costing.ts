@@ -104,7 +104,12 @@ export class BatchCosting {
       return { ...base, unpriced: `made from batches more than ${MOST_LEVELS} levels deep` };
     const earlier = await this.ofBatch(source, undefined, level + 1);
     if (earlier.perFinishedKg === null)
-      return { ...base, unpriced: 'the earlier batch finished at nothing' };
+      return {
+        ...base,
+        unpriced: earlier.finishedGrams.greaterThan(0)
+          ? 'nothing in the earlier batch has a price'
+          : 'the earlier batch finished at nothing',
+      };
     return { ...base, price: { perUnit: earlier.perFinishedKg, unit: 'kg' } };
   }
 
@@ -123,6 +128,17 @@ export class BatchCosting {
     const lines: CostInput[] = [];
     const lineItems = new Set<string>();
     for (const line of weighedLines(result)) {
+      // An assembly's part comes from a batch of it: priced by the batch recorded, if any.
+      if (line.part !== undefined) {
+        if (!recorded.has(line.part))
+          lines.push({
+            name: line.name,
+            amount: new Decimal(line.grams),
+            source: 'latest-price',
+            unpriced: 'no batch of it is recorded as used',
+          });
+        continue;
+      }
       const item =
         linked.find((link) => namesLine(link.name, line.name))?.item ?? this.byName(line.name);
       if (item) lineItems.add(item.key);

@@ -84,13 +84,16 @@ export class CostRepository {
     );
   }
 
-  /** The batches recorded from a plan for a menu item and day of service, not discarded. */
+  /**
+   * The batches recorded from a plan for a menu item and day of service, not discarded; not the
+   * menu item's own batch, which is those batches put together (its cost would count them twice).
+   */
   planBatches(assembly: string, serviceDate: string): Promise<CostBatchRow[]> {
     return readRows<CostBatchRow>(
       this.db.sequelize,
       `SELECT ${BATCH_COLUMNS} FROM batches WHERE notes LIKE ? AND status <> 'discarded'
-       ORDER BY started_on, id`,
-      [planNotePattern(assembly, serviceDate)],
+         AND formula_id <> ? ORDER BY started_on, id`,
+      [planNotePattern(assembly, serviceDate), assembly],
     );
   }
 

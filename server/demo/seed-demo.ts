@@ -1,5 +1,6 @@
 import type { AppContext } from '../app-context.ts';
 import { DEMO_PEOPLE } from './demo-people.ts';
+import { seedAssemblies } from './seed-assemblies.ts';
 import { seedBatches } from './seed-batches.ts';
 import { seedDeliveries } from './seed-deliveries.ts';
 import { seedDemoLotUses } from './demo-lot-uses.ts';
@@ -8,8 +9,8 @@ import { seedProcess } from './seed-process.ts';
 
 /**
  * Fills an empty demo database with the invented kitchen's people, a few weeks of their batches
- * and of the deliveries they could be made from, the process records of a few of them and a few
- * days of their equipment logs. Runs only in demo mode and only when there is nobody yet, so
+ * and of the deliveries they could be made from, the packs and burgers made from those batches,
+ * the process records of a few of them and a few days of their equipment logs. Runs only in demo mode and only when there is nobody yet, so
  * restarting the demo keeps what was done in it.
  */
 export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }> {
@@ -22,6 +23,8 @@ export async function seedDemo(context: AppContext): Promise<{ seeded: boolean }
   await seedProcess(context);
   // After the deliveries and the weights as weighed: the batches draw on the lots first to expire.
   await seedDemoLotUses(context);
+  // The packs and burgers made from those batches, drawing on the batches named for them.
+  await seedAssemblies(context);
   await seedEquipment(context);
   return { seeded: true };
 }

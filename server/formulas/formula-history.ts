@@ -92,6 +92,11 @@ export class FormulaHistory {
     return this.store.folder;
   }
 
+  /** Every formula as it is now, by id: what an assembly's parts are worked out from. */
+  library(): ReturnType<FormulaStore['library']> {
+    return this.store.library();
+  }
+
   /** Records a revision; returns its row id. */
   async insert(revision: NewRevision, transaction: Transaction): Promise<number> {
     // sqlite answers an INSERT with [last row id, rows changed]. Bound, not replaced into the SQL:

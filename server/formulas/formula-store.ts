@@ -1,4 +1,9 @@
-import { checkLibrary, type Formula } from '../../shared/index.ts';
+import {
+  checkLibrary,
+  formulaLibrary,
+  type Formula,
+  type FormulaLibrary,
+} from '../../shared/index.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import { FolderWatch } from './folder-watch.ts';
 import { filesById, readFormulaFolder, type FormulaFile } from './formula-files.ts';
@@ -98,6 +103,12 @@ export class FormulaStore {
    */
   async fileOf(id: string): Promise<FormulaFile | undefined> {
     return filesById(await this.files()).get(id);
+  }
+
+  /** Every formula that reads cleanly (assemblies checked against the others), by id. */
+  async library(): Promise<FormulaLibrary> {
+    const files = await this.files();
+    return formulaLibrary(files.map((file) => ({ file: file.name, reading: file.reading })));
   }
 
   /**

@@ -189,6 +189,7 @@ export function formulasRouter(context: AppContext): Router {
       body.batch,
       body.units ?? 'metric',
       serverToday(context),
+      formula.kind === 'assembly' ? await store.library() : undefined,
     );
     res.json({ id, saved: body.yaml === undefined, revision, result } satisfies FormulaPreview);
   });

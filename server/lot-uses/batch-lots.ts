@@ -17,6 +17,7 @@ import { batchNeeds, type BatchNeeds } from '../../shared/stock/batch-needs.ts';
 import { suggestLots, type StockLot } from '../../shared/stock/fifo.ts';
 import {
   assemblyParts,
+  partNeeds,
   sourceBatchesExpired,
   sourceBatchOrder,
   suggestForNeeds,
@@ -171,8 +172,8 @@ function firstToExpire(lots: readonly StockLot[], item: string, usedOn: string):
 
 /**
  * The suggestion for a batch on its day of use: per item, the lots first to expire first and any
- * shortfall; per assembly part, the batches of its formula best first, for the cook to say how
- * much of one went in.
+ * shortfall; per assembly part, the batches of its formula best first, and the part's finished
+ * weight from the first of them (the cook may change the batch, or split it over several).
  */
 export async function suggestionFor(
   deps: LotUsesDeps,
@@ -225,21 +226,41 @@ export async function suggestionFor(
     deps.history,
     await sourceCandidates(deps.db, of.parts, usedOn, t),
   );
+  const needs = partNeeds(batch.result);
   const parts = of.parts.map((part): SuggestedItem => {
     const order = sourceBatchOrder(candidates, part, batch.lotCode, usedOn);
     const expired = sourceBatchesExpired(candidates, part, batch.lotCode, usedOn);
-    const title = candidates.find((c) => c.formulaId === part)?.title ?? part;
+    const line = batch.result.groups.flatMap((g) => g.lines).find((l) => l.part === part);
+    const title = candidates.find((c) => c.formulaId === part)?.title ?? line?.name ?? part;
+    const need = needs.get(part);
+    const first = order[0];
     return {
       item: part,
       name: title,
       source: 'batch',
       unit: 'g',
       measure: 'g',
-      need: null,
+      need: need?.toString() ?? null,
       grams: null,
       weighs: null,
       weighed: false,
-      takes: [],
+      takes:
+        need && first
+          ? [
+              useView(
+                { item: part, amount: need, usedOn },
+                {
+                  source: 'batch',
+                  lotCode: first.lotCode,
+                  itemName: first.title,
+                  supplier: null,
+                  supplierLot: null,
+                  unit: null,
+                  useBy: first.useBy ?? null,
+                },
+              ),
+            ]
+          : [],
       shortfall: null,
       expired: expired.map(sourceOnHand),
       onHand: order.map(sourceOnHand),

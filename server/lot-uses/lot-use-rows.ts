@@ -161,8 +161,9 @@ function sourceRow(row: CandidateRow): SourceRow {
 }
 
 /**
- * The batches of these formulas started by a day: candidates for an assembly's parts, the 200
- * started last (older ones are long used or past their use-by).
+ * The batches of these formulas started by a day, the latest 200: candidates for an assembly's
+ * parts (sourceBatchOrder puts them in the order to suggest). The latest, so that years of
+ * batches never push this week's out of the list.
  */
 export async function sourceCandidates(
   db: Database,

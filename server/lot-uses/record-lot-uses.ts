@@ -132,7 +132,11 @@ async function accepted(
       'accept',
       'no lot on hand is suggested for this batch: receive the lots, or pick them',
     );
-  const picks = uses.map((use) => ({ item: use.item, lot: use.lotCode, amount: use.amount }));
+  const picks = uses.map((use): LotPick =>
+    use.source === 'batch'
+      ? { part: use.item, batch: use.lotCode, amount: use.amount }
+      : { item: use.item, lot: use.lotCode, amount: use.amount },
+  );
   return picked(deps, t, batch, of, picks, true);
 }
 
@@ -150,7 +154,7 @@ async function picked(
   for (const [i, pick] of picks.entries()) {
     const field = `picks.${i}`;
     if ('part' in pick) {
-      uses.push(await sourcePick(deps, t, batch, of, pick, field));
+      uses.push(await sourcePick(deps, t, batch, of, pick, field, baseAmounts));
       continue;
     }
     const need = of.needs.items.find((n) => n.item === pick.item);
@@ -205,7 +209,7 @@ function amountOf(text: string, need: NeedsOf['needs']['items'][number], field: 
   }
 }
 
-/** An earlier batch picked as an assembly's part. */
+/** An earlier batch picked as an assembly's part; its amount in grams as typed, or exact. */
 async function sourcePick(
   deps: LotUsesDeps,
   t: Transaction,
@@ -213,6 +217,7 @@ async function sourcePick(
   of: NeedsOf,
   pick: Extract<LotPick, { part: string }>,
   field: string,
+  baseAmount: boolean,
 ): Promise<NewUse> {
   if (!of.parts.includes(pick.part))
     throw refused('not-a-part', `${field}.part`, `${pick.part} is not a part of this batch`);
@@ -227,6 +232,7 @@ async function sourcePick(
     );
   }
   const code = source.lotCode;
+  const drawn = { id: source.id, code };
   if (source.id === batch.id)
     throw refused('self-source', `${field}.batch`, `batch ${code} cannot be made from itself`);
   if (source.formulaId !== pick.part)
@@ -254,6 +260,7 @@ async function sourcePick(
       `${field}.batch`,
       `batch ${code} is made from this batch already: it cannot go into it as well`,
     );
+  if (baseAmount) return { item: pick.part, amount: new Decimal(pick.amount), source: drawn };
   let amount: Decimal;
   try {
     amount = parseBaseAmount(pick.amount, 'g');
@@ -262,7 +269,7 @@ async function sourcePick(
       throw refused('bad-amount', `${field}.amount`, error.message);
     throw error;
   }
-  return { item: pick.part, amount, source: { id: source.id, code } };
+  return { item: pick.part, amount, source: drawn };
 }
 
 /** One lot use written, and what it took off its lot. */

@@ -204,7 +204,11 @@ export function batchBody(
       })),
     ];
     if (result.steps.length || worked.length) {
-      heading(layout, numbered('Mix and apply'));
+      // An assembly's parts are put together, not mixed.
+      heading(
+        layout,
+        numbered(result.formula.kind === 'assembly' ? 'Put together' : 'Mix and apply'),
+      );
       numberedSteps(layout, result.steps);
       if (worked.length) {
         layout.gap(4);

@@ -15,13 +15,16 @@ export function planNote(plan: PlanResult): string {
 }
 
 /**
- * Records every batch of a plan as a 'planned' batch starting on its start day, through the same
- * path as POST /api/batches: each formula's current revision (noted in its history first), then
+ * Records every batch of a plan as a 'planned' batch starting on its start day, and the menu
+ * item's own batch (the count, put together from those batches) planned for the day of service,
+ * so that a trace forward from any lot reaches the day it was served. Always: a plan is made for
+ * a service, and the service is what a recall must find. Through the same path as POST
+ * /api/batches: each formula's current revision (noted in its history first), then
  * prepareBatch, which calculates the batch again and refuses it over a critical limit; then all
  * of them in one write transaction, so either every batch is recorded or none is.
  * Batches already recorded from a plan for the same menu item and day of service (any count, not
  * discarded) refuse it, in that same write, unless `again` says the cook means to record more.
- * @returns the recorded batches, earliest start first
+ * @returns the recorded batches, earliest start first: the menu item's own last
  * @throws AppError 409 'plan-already-recorded' with {@link PlanAlreadyRecorded} as its detail
  */
 export async function recordPlan(
@@ -45,6 +48,22 @@ export async function recordPlan(
       ),
     );
   }
+  const assembly = await history.current(plan.assembly.id);
+  prepared.push(
+    prepareBatch(
+      assembly,
+      {
+        formula: plan.assembly.id,
+        batch: { count: String(plan.count), start: plan.serviceDate },
+        units,
+        status: 'planned',
+        notes,
+      },
+      operatorId,
+      plan.today,
+      await history.library(),
+    ),
+  );
   const again = options.again === true;
   return batches.recordAll(prepared, options, {
     before: async (t) => {

@@ -4,7 +4,7 @@
  * can import it without the rest of the core.
  */
 import type { RawBatchOptions } from '../calculation/batch-input.ts';
-import type { BatchKind } from '../formula/formula-types.ts';
+import type { FormulaKind } from '../formula/formula-types.ts';
 import type { PresentedCheck, PresentedResult } from '../presentation/presented-result.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 
@@ -45,7 +45,8 @@ export interface BatchSummary {
   readonly lotCode: string;
   /** The formula as it was when the batch was calculated; revision is the file's sha-256. */
   readonly formula: { readonly id: string; readonly revision: string; readonly title: string };
-  readonly kind: BatchKind;
+  /** The formula's kind: an assembly's batch is its parts put together. */
+  readonly kind: FormulaKind;
   readonly status: BatchStatus;
   readonly operator: PersonRef;
   /** ISO date the batch starts (the calculation's start). */

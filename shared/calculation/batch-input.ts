@@ -64,6 +64,10 @@ export interface BatchInput {
   // mix
   /** Weight of the base ingredient, grams. */
   base?: Decimal;
+
+  // assembly
+  /** Units made (burgers, packs), each one unit as the assembly serves it. */
+  count?: number;
 }
 
 /** Batch options as typed by a person or sent to the API: every value a string with its unit. */

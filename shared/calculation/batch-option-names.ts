@@ -32,6 +32,7 @@ export const BATCH_OPTION_NAMES = [
   'fatTest',
   'portion',
   'base',
+  'count',
 ] as const satisfies readonly (keyof BatchInput)[];
 
 /** One of {@link BATCH_OPTION_NAMES}. */

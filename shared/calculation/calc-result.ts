@@ -1,5 +1,5 @@
 import type { Decimal } from '../decimal.ts';
-import type { Allergen, BatchKind } from '../formula/formula-types.ts';
+import type { Allergen, FormulaKind } from '../formula/formula-types.ts';
 
 /** What sort of number a figure is; the presenter picks unit and precision from it. */
 export type FigureKind =
@@ -35,6 +35,8 @@ export interface AmountLine {
   readonly percent?: Decimal;
   readonly role: LineRole;
   readonly note?: string;
+  /** An assembly's part: the id of the formula whose batch it is drawn from. */
+  readonly part?: string;
 }
 
 /** A block of lines weighed together, e.g. "Cure mix" or "Final dough". */
@@ -110,7 +112,8 @@ export interface Portions {
 
 /** The full, exact outcome of one batch calculation. Rounding happens only when presenting it. */
 export interface CalcResult {
-  readonly formula: { readonly id: string; readonly title: string; readonly kind: BatchKind };
+  /** The formula; an assembly's batch is its parts put together (assembly/calculate-assembly.ts). */
+  readonly formula: { readonly id: string; readonly title: string; readonly kind: FormulaKind };
   /** The batch inputs as the calculation understood them. */
   readonly inputs: readonly Figure[];
   readonly groups: readonly LineGroup[];

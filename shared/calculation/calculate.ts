@@ -1,14 +1,15 @@
 import type { Formula } from '../formula/formula-types.ts';
 import { CAUTIONS } from '../reference/cautions.ts';
+import { calculateAssembly } from './assembly/calculate-assembly.ts';
 import { calculateBlend } from './blend/calculate-blend.ts';
-import { assemblyIsPlanned } from './batch-error.ts';
 import type { BatchInput } from './batch-input.ts';
 import type { CalcResult, Caution } from './calc-result.ts';
 import { calculateCure } from './cure/calculate-cure.ts';
 import { calculateDough } from './dough/calculate-dough.ts';
 import { calculateMix } from './mix/calculate-mix.ts';
+import type { FormulaLibrary } from './plan/check-assembly-library.ts';
 
-function byKind(formula: Formula, batch: BatchInput): CalcResult {
+function byKind(formula: Formula, batch: BatchInput, library: FormulaLibrary): CalcResult {
   switch (formula.kind) {
     case 'cure':
       return calculateCure(formula, batch);
@@ -19,18 +20,23 @@ function byKind(formula: Formula, batch: BatchInput): CalcResult {
     case 'mix':
       return calculateMix(formula, batch);
     case 'assembly':
-      throw assemblyIsPlanned(formula.id);
+      return calculateAssembly(formula, library, batch);
   }
 }
 
 /**
  * Calculates one batch of any formula. The formula's own cautions are printed with the standard
  * ones, before the reminder that local codes come first.
- * @throws BatchError when the batch input cannot make a batch, or the formula is an assembly
- *   (planned with planAssembly, not calculated)
+ * @param library the formulas an assembly's parts are made from, by id (only an assembly needs it)
+ * @throws BatchError when the batch input cannot make a batch, or an assembly's parts cannot be
+ *   worked out from the library
  */
-export function calculate(formula: Formula, batch: BatchInput): CalcResult {
-  const result = byKind(formula, batch);
+export function calculate(
+  formula: Formula,
+  batch: BatchInput,
+  library: FormulaLibrary = new Map(),
+): CalcResult {
+  const result = byKind(formula, batch, library);
   const own: Caution[] = (formula.cautions ?? []).map((text, i) => ({
     id: `formula-${i + 1}`,
     text,

@@ -1,12 +1,12 @@
 import { Decimal } from '../decimal.ts';
-import type { BatchKind, Formula, YeastKind } from '../formula/formula-types.ts';
+import type { BatchKind, Formula, FormulaKind, YeastKind } from '../formula/formula-types.ts';
 import { parseLength } from '../units/length.ts';
 import { parseMass } from '../units/mass.ts';
 import { parseCount, parsePercent } from '../units/percent.ts';
 import { QuantityError } from '../units/quantity-error.ts';
 import { parseTemperature, parseTemperatureDifference } from '../units/temperature.ts';
 import { parseVolume, waterGramsFromLitres } from '../units/volume.ts';
-import { BatchError, assemblyIsPlanned } from './batch-error.ts';
+import { BatchError } from './batch-error.ts';
 import type { BatchInput, RawBatchOptions } from './batch-input.ts';
 import { isIsoDate } from './dates.ts';
 import { checkStartDate } from './start-window.ts';
@@ -23,6 +23,19 @@ type Reader = (text: string, option: string, context: ReadContext) => unknown;
 
 const ALL: readonly BatchKind[] = ['cure', 'dough', 'blend', 'mix'];
 const KG = new Decimal(1000);
+
+/** Most units one batch of an assembly makes, as a plan's count: beyond this it is a typo. */
+const MAX_UNITS = 100_000;
+
+/** A reader for a whole number from 1 to `max`. */
+function counted(max: number): Reader {
+  return (text, option) => {
+    const count = parseCount(text);
+    if (count < 1 || count > max)
+      throw new BatchError(`--${option} must be between 1 and ${max}`, option);
+    return count;
+  };
+}
 
 /** A reader for a mass that must be more than zero and at most `maxKg`. */
 function mass(maxKg: number): (text: string, option: string) => Decimal {
@@ -95,9 +108,9 @@ function fatTestReader(text: string, option: string, context: ReadContext): Batc
 const YEASTS: readonly YeastKind[] = ['fresh', 'active-dry', 'instant'];
 
 /** Every batch option: which kinds take it and how to read it. */
-const OPTIONS: Record<keyof BatchInput, { kinds: readonly BatchKind[]; read: Reader }> = {
+const OPTIONS: Record<keyof BatchInput, { kinds: readonly FormulaKind[]; read: Reader }> = {
   start: {
-    kinds: ALL,
+    kinds: [...ALL, 'assembly'],
     read: (text, option, { today }) => {
       if (!isIsoDate(text))
         throw new BatchError(`--${option} takes a date written YYYY-MM-DD, not "${text}"`, option);
@@ -111,15 +124,7 @@ const OPTIONS: Record<keyof BatchInput, { kinds: readonly BatchKind[]; read: Rea
   water: { kinds: ['cure'], read: waterReader },
   pump: { kinds: ['cure'], read: ranged(parsePercent, 1, 100, '%') },
   pumpedWeight: { kinds: ['cure'], read: mass(1000) },
-  pieces: {
-    kinds: ['dough'],
-    read: (text, option) => {
-      const count = parseCount(text);
-      if (count < 1 || count > 100_000)
-        throw new BatchError(`--${option} must be between 1 and 100000`, option);
-      return count;
-    },
-  },
+  pieces: { kinds: ['dough'], read: counted(100_000) },
   piece: { kinds: ['dough'], read: mass(10) },
   loss: { kinds: ['dough'], read: ranged(parsePercent, 0, 49, '%') },
   flour: { kinds: ['dough'], read: mass(1000) },
@@ -143,6 +148,7 @@ const OPTIONS: Record<keyof BatchInput, { kinds: readonly BatchKind[]; read: Rea
   fatTest: { kinds: ['blend'], read: fatTestReader },
   portion: { kinds: ['blend'], read: mass(10) },
   base: { kinds: ['mix'], read: mass(1000) },
+  count: { kinds: ['assembly'], read: counted(MAX_UNITS) },
 };
 
 /** Options that apply only to one cure method. */
@@ -162,14 +168,13 @@ export function optionName(key: string): string {
  * its kind (or cure method) and values that cannot be right, such as a start day more than a
  * year from today (start-window.ts).
  * @param context today, from the caller's clock
- * @throws BatchError naming the option at fault, or saying that an assembly is planned instead
+ * @throws BatchError naming the option at fault
  */
 export function parseBatchOptions(
   raw: RawBatchOptions,
   formula: Formula,
   context: ReadContext,
 ): BatchInput {
-  if (formula.kind === 'assembly') throw assemblyIsPlanned(formula.id);
   const input: Record<string, unknown> = {};
   for (const [key, text] of Object.entries(raw)) {
     if (text === undefined) continue;
@@ -177,7 +182,10 @@ export function parseBatchOptions(
     const spec = OPTIONS[key as keyof BatchInput];
     if (!spec) throw new BatchError(`there is no batch option --${option}`, option);
     if (!spec.kinds.includes(formula.kind))
-      throw new BatchError(`--${option} does not apply to a ${formula.kind} formula`, option);
+      throw new BatchError(
+        `--${option} does not apply to ${formula.kind === 'assembly' ? 'an' : 'a'} ${formula.kind} formula`,
+        option,
+      );
     const method = CURE_METHOD_OPTIONS[key as keyof BatchInput];
     if (method && formula.kind === 'cure' && formula.method !== method) {
       throw new BatchError(

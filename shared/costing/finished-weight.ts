@@ -1,4 +1,5 @@
 import { Decimal } from '../decimal.ts';
+import { UNITS_INPUT, UNIT_WEIGHT } from '../calculation/assembly/assembly-words.ts';
 import { BEFORE_TRIM } from '../calculation/yields.ts';
 import type { PresentedFigure, PresentedResult } from '../presentation/presented-result.ts';
 
@@ -51,7 +52,8 @@ function portionsOf(grams: Decimal, fromGrams: Decimal, count?: number): Portion
  *   from that raw weight (a 4 oz raw patty), whatever the cook yield;
  * - a dough: the dough divided into pieces, so a loss allowance the dough was scaled up by is not
  *   counted (a dough formula has no baking yield);
- * - a mix: its total weight.
+ * - a mix: its total weight;
+ * - an assembly: its parts' weight added up, one unit (a burger, a pack) its portion.
  * A portion weight given here (150 g of sliced bacon) is of the finished weight and replaces the
  * formula's own.
  * @param portionGrams a portion of the finished product, grams, if the caller names one
@@ -89,6 +91,9 @@ export function finishedWeight(result: PresentedResult, portionGrams?: Decimal):
   } else {
     const total = exact(result.figures, 'Total weight');
     if (total) base = { grams: total, basis: 'the total weight' };
+    const unit = kind === 'assembly' ? exact(result.figures, UNIT_WEIGHT) : undefined;
+    const units = exact(result.inputs, UNITS_INPUT);
+    if (total && unit && units) own = portionsOf(unit, total, units.toNumber());
   }
   if (!base) throw new RangeError(`finishedWeight: the ${kind} result has no weight to cost`);
   const finished = stage

@@ -9,7 +9,7 @@ export type BatchKind = 'cure' | 'dough' | 'blend' | 'mix';
 
 /**
  * The formula kinds: the batch kinds, and `assembly` (a menu item built from other formulas),
- * which is planned (`larder plan`), never calculated as a batch of its own.
+ * planned (`larder plan`) or made as a batch of its own from batches of its parts.
  */
 export type FormulaKind = BatchKind | 'assembly';
 
@@ -45,7 +45,8 @@ export interface FormulaBase {
   notes?: string;
   /**
    * Process controls at the critical control points of a batch of it (shared/process). Any kind
-   * may write the key; an assembly, never made as a batch, may only leave it empty.
+   * may write the key; an assembly, put together from batches with their own controls, may only
+   * leave it empty.
    */
   controls?: FormulaControl[];
 }

@@ -32,7 +32,7 @@ export const OPTION_WORDS: Readonly<Record<string, string>> = {
   'fat-test': 'the fat test',
   portion: 'the portion weight',
   base: 'the base ingredient weight',
-  count: 'how many',
+  count: 'the number of units',
   for: 'the service date',
 };
 

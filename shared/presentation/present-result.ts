@@ -65,6 +65,7 @@ function presentLine(
     ...(line.percent ? { percent: formatPercent(line.percent) } : {}),
     role: line.role,
     ...(line.note ? { note: line.note } : {}),
+    ...(line.part ? { part: line.part } : {}),
   };
 }
 

@@ -1,5 +1,5 @@
 import type { CheckStatus, LineRole } from '../calculation/calc-result.ts';
-import type { BatchKind } from '../formula/formula-types.ts';
+import type { FormulaKind } from '../formula/formula-types.ts';
 import type { UnitSystem } from '../units/scale-amount.ts';
 
 /**
@@ -7,7 +7,7 @@ import type { UnitSystem } from '../units/scale-amount.ts';
  * matters, the exact decimal as a string (grams, ppm, °C, percent).
  */
 export interface PresentedResult {
-  readonly formula: { readonly id: string; readonly title: string; readonly kind: BatchKind };
+  readonly formula: { readonly id: string; readonly title: string; readonly kind: FormulaKind };
   readonly units: UnitSystem;
   readonly inputs: readonly PresentedFigure[];
   readonly groups: readonly PresentedGroup[];
@@ -74,6 +74,8 @@ export interface PresentedLine {
   readonly percent?: string;
   readonly role: LineRole;
   readonly note?: string;
+  /** An assembly's part: the id of the formula whose batch it is drawn from. */
+  readonly part?: string;
 }
 
 export interface PresentedGroup {

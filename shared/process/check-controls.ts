@@ -193,8 +193,8 @@ export function checkControls(formula: Formula): ContentProblem[] {
     return [
       contentError(
         ['controls'],
-        'an assembly is planned, never made as a batch, so no reading is taken against it: put ' +
-          'the controls on the formulas it is built from',
+        'an assembly is put together from batches that carry their own controls, so no reading ' +
+          'is taken against it: put the controls on the formulas it is built from',
       ),
     ];
   }

@@ -121,8 +121,8 @@ function itemOfLine(
  * lines its sheet weighs in: a line weighed counts at its standing weight (a name on two lines,
  * a brine's and its cover's water, is weighed once for both), else at its calculated grams.
  * Lines of one item add up; a cure's meat, its green weight (the 'green' stage when weighed),
- * needs the formula's meat_item; a line linked to no item is listed apart. An assembly is no batch and needs nothing here: its
- * parts are batches (see sourceBatchOrder).
+ * needs the formula's meat_item; a line linked to no item is listed apart. An assembly needs
+ * nothing from stock here: its parts are batches (see partNeeds and sourceBatchOrder).
  * @param catalogue the catalogue of materials; without one every line is listed apart
  */
 export function batchNeeds(
@@ -131,6 +131,7 @@ export function batchNeeds(
   weights: StandingWeights,
   catalogue?: Catalogue,
 ): BatchNeeds {
+  if (formula.kind === 'assembly') return { items: [], unlinked: [] };
   const linked = catalogue
     ? linkLines(formula, catalogue).map(({ line, index }) => ({
         name: line.name,

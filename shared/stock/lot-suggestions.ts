@@ -4,11 +4,11 @@
  */
 import type { BatchStatus } from '../api/batch-record.ts';
 import { addDays } from '../calculation/dates.ts';
-import type { Decimal } from '../decimal.ts';
+import { Decimal, ZERO } from '../decimal.ts';
 import type { AssemblyFormula } from '../formula/formula-types.ts';
 import type { BatchNeeds, ItemNeed } from './batch-needs.ts';
 import { suggestLots, type LotTake, type StockLot } from './fifo.ts';
-import { ZERO } from '../decimal.ts';
+import type { PresentedResult } from '../presentation/presented-result.ts';
 
 /** The lots suggested for one item. */
 export interface ItemSuggestion {
@@ -42,6 +42,19 @@ export function suggestForNeeds(
 /** The formulas an assembly's parts are made from, each once, in the order the assembly names them. */
 export function assemblyParts(formula: AssemblyFormula): string[] {
   return [...new Set(formula.components.map((component) => component.formula))];
+}
+
+/**
+ * What an assembly batch needs of each part, finished grams by the part's formula id, from the
+ * parts its result lists (calculate-assembly.ts); none for a batch recorded without them.
+ */
+export function partNeeds(result: PresentedResult): Map<string, Decimal> {
+  const needs = new Map<string, Decimal>();
+  for (const line of result.groups.flatMap((group) => group.lines)) {
+    if (line.part === undefined) continue;
+    needs.set(line.part, (needs.get(line.part) ?? ZERO).plus(new Decimal(line.grams)));
+  }
+  return needs;
 }
 
 /** A batch that might be drawn on as a part of another. */

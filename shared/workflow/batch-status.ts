@@ -4,7 +4,7 @@
  * from one definition.
  */
 import type { BatchStatus } from '../api/batch-record.ts';
-import type { BatchKind } from '../formula/formula-types.ts';
+import type { BatchKind, FormulaKind } from '../formula/formula-types.ts';
 
 /** Every status, in the order of the work. */
 export const BATCH_STATUSES: readonly BatchStatus[] = [
@@ -16,8 +16,42 @@ export const BATCH_STATUSES: readonly BatchStatus[] = [
   'discarded',
 ];
 
-/** The statuses a batch may be recorded with. */
-export const RECORD_STATUSES = ['planned', 'in-progress'] as const;
+/**
+ * The statuses a batch may be recorded with: planned, or in progress; an assembly also done,
+ * made on its day (see recordedStatus).
+ */
+export const RECORD_STATUSES = ['planned', 'in-progress', 'done'] as const;
+
+/** One of {@link RECORD_STATUSES}. */
+export type RecordStatus = (typeof RECORD_STATUSES)[number];
+
+/**
+ * The status a new batch is recorded with, or why it cannot be (in a cook's words). A batch of a
+ * cure, dough, blend or mix is recorded planned or in progress (the default), then moved along
+ * as it is made. An assembly (burgers, packs) is put together in one go on its day, with no hold
+ * and no process controls to read (a formula may give an assembly none), so it is recorded done
+ * unless it is for a later day, when it is planned; a cook may still say planned or in progress.
+ * @param startedOn the batch's day (ISO date); today the recorder's
+ */
+export function recordedStatus(
+  kind: FormulaKind,
+  asked: RecordStatus | undefined,
+  startedOn: string,
+  today: string,
+): { status: RecordStatus } | { refusal: string } {
+  if (kind !== 'assembly') {
+    if (asked === 'done')
+      return {
+        refusal:
+          'only an assembly is recorded as done: record this batch planned or in progress, then move it along as it is made',
+      };
+    return { status: asked ?? 'in-progress' };
+  }
+  const later = startedOn > today;
+  if (asked === 'done' && later)
+    return { refusal: 'an assembly for a later day is not made yet: record it as planned' };
+  return { status: asked ?? (later ? 'planned' : 'done') };
+}
 
 /** The moves each status allows; done and discarded are final. */
 export const TRANSITIONS: Readonly<Record<BatchStatus, readonly BatchStatus[]>> = {
@@ -42,7 +76,7 @@ export const UNSIGNABLE_STATUSES: readonly BatchStatus[] = ['planned', 'discarde
 export function refusedMove(
   from: BatchStatus,
   to: BatchStatus,
-  kind: BatchKind,
+  kind: FormulaKind,
 ): string | undefined {
   if (TRANSITIONS[from].length === 0) return `a ${from} batch is final; its status cannot change`;
   if (!TRANSITIONS[from].includes(to))
@@ -54,7 +88,7 @@ export function refusedMove(
 }
 
 /** The moves a batch of this kind may make from its status, in the order of the work. */
-export function movesFrom(from: BatchStatus, kind: BatchKind): BatchStatus[] {
+export function movesFrom(from: BatchStatus, kind: FormulaKind): BatchStatus[] {
   return TRANSITIONS[from].filter((to) => refusedMove(from, to, kind) === undefined);
 }
 

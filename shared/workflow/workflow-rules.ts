@@ -4,7 +4,7 @@
  * from one definition. The server's settings turn each rule off; every rule is on by default.
  */
 import type { BatchStatus } from '../api/batch-record.ts';
-import type { BatchKind } from '../formula/formula-types.ts';
+import type { FormulaKind } from '../formula/formula-types.ts';
 
 /** Which rules hold; each is on unless the kitchen turns it off (server/README.md, "Settings"). */
 export interface WorkflowRules {
@@ -33,7 +33,7 @@ export interface WorkflowRefusal {
 
 /** What the rules look at of a batch. */
 export interface WorkflowBatch {
-  readonly kind: BatchKind;
+  readonly kind: FormulaKind;
   readonly status: BatchStatus;
   readonly signedOff: boolean;
   /** Who recorded it. */

@@ -7,7 +7,7 @@ import {
   writeAssembly,
 } from '../helpers/assembly-label-fixture.ts';
 import { fetchLabel } from '../helpers/batch-calls.ts';
-import { insertAssemblyBatch } from '../helpers/lot-use-fixture.ts';
+import { recordAssembly } from '../helpers/lot-use-fixture.ts';
 import { pdfText } from '../helpers/pdf-text.ts';
 import { clockFrom, startTestServer, type TestServer } from '../helpers/test-server.ts';
 
@@ -32,13 +32,7 @@ describe('the label of an assembly batch', () => {
       start: '2026-11-20',
     });
     const sauce = await made(server, 'house-sauce', { total: '2 kg', start: '2026-12-01' });
-    const burgers = await insertAssemblyBatch(
-      server.context.db,
-      server.formulasDir,
-      BURGER,
-      '261203-SB-01',
-      '2026-12-03',
-    );
+    const burgers = await recordAssembly(server, BURGER.id, '2026-12-03');
     const rosa = server.as('rosa');
 
     // Nothing recorded yet: the label would not know what went into each part.
@@ -128,10 +122,8 @@ describe('the label of an assembly batch', () => {
       start: '2026-11-25',
     });
     const sauce = await made(server, 'house-sauce', { total: '2 kg', start: '2026-12-01' });
-    const assembled = (id: string, title: string, lot: string) =>
-      insertAssemblyBatch(server.context.db, server.formulasDir, { id, title }, lot, '2026-12-03');
-    const bacon = await assembled(BACON_PACK.formula.id, BACON_PACK.formula.title, '261203-BP-01');
-    const hams = await assembled('test-ham-pack', 'Ham and sauce', '261203-HP-01');
+    const bacon = await recordAssembly(server, BACON_PACK.formula.id, '2026-12-03');
+    const hams = await recordAssembly(server, 'test-ham-pack', '2026-12-03');
     await madeFrom(server, bacon, [['quillmoor-belly', belly, '3 kg']]);
     await madeFrom(server, hams, [
       ['ham-pump', ham, '2 kg'],

@@ -1,11 +1,9 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
-import { insertAssemblyBatch } from '../helpers/lot-use-fixture.ts';
 import { clockFrom, startTestServer, type TestServer } from '../helpers/test-server.ts';
 
 const CLOCK = clockFrom('2026-12-03');
-const BURGER = { id: 'smokehouse-burger', title: 'Smokehouse burger' };
 
 /** A burger-grind batch started on a day, moved to a status; its lot code. */
 async function grind(server: TestServer, start: string, to?: string): Promise<string> {
@@ -33,14 +31,16 @@ describe('an assembly drawing on batches', () => {
     const underWay = await grind(server, '2026-12-01');
     const done = await grind(server, '2026-12-02', 'done');
     const thrown = await grind(server, '2026-11-30', 'discarded');
-    const burgers = await insertAssemblyBatch(
-      db,
-      server.formulasDir,
-      BURGER,
-      '261203-SB-01',
-      '2026-12-03',
-    );
-    const read = await server.as('tobin').get(`/api/batches/${burgers}/lots`);
+    const tobin = server.as('tobin');
+    // Ten burgers, recorded as any batch is: made today.
+    const recorded = await tobin.post('/api/batches', {
+      formula: 'smokehouse-burger',
+      batch: { count: '10' },
+    });
+    assert.equal(recorded.status, 201, recorded.text);
+    const burgers = recorded.json.batch.lotCode as string;
+    assert.equal(burgers, '261203-SB-01');
+    const read = await tobin.get(`/api/batches/${burgers}/lots`);
     assert.equal(read.status, 200, read.text);
     const part = read.json.suggested.find((s: { item: string }) => s.item === 'chuck-grind');
     assert.equal(part.source, 'batch');
@@ -49,7 +49,13 @@ describe('an assembly drawing on batches', () => {
     const offered: string[] = part.onHand.map((b: { lotCode: string }) => b.lotCode);
     assert.ok(offered.indexOf(done) >= 0 && offered.indexOf(done) < offered.indexOf(underWay));
     assert.ok(!offered.includes(thrown));
-    const tobin = server.as('tobin');
+    // 10 burgers × 2 portions × 4 oz (113.3980925 g; source: NIST Handbook 44 (2024), Appendix C,
+    // avoirdupois ounce = 28.349523125 g) = 2 267.96185 g, all from the first batch offered.
+    assert.equal(part.need, '2267.96185');
+    assert.deepEqual(
+      part.takes.map((take: { lotCode: string; amount: string }) => [take.lotCode, take.amount]),
+      [[offered[0], '2267.96185']],
+    );
     const discarded = await tobin.post(`/api/batches/${burgers}/lots`, {
       picks: [{ part: 'chuck-grind', batch: thrown, amount: '2 kg' }],
     });
@@ -71,10 +77,12 @@ describe('an assembly drawing on batches', () => {
       ]),
       [[done, '2270', 'Smokehouse burger grind 80/20']],
     );
+    // The burgers' own use (the demo's packs and burgers have theirs too).
     const [row] = await db.sequelize.query<{ source: string; receipt_id: number | null }>(
       `SELECT s.lot_code AS source, u.receipt_id FROM lot_uses u
-       JOIN batches s ON s.id = u.source_batch_id`,
-      { type: QueryTypes.SELECT },
+       JOIN batches s ON s.id = u.source_batch_id
+       JOIN batches b ON b.id = u.batch_id WHERE b.lot_code = ?`,
+      { replacements: [burgers], type: QueryTypes.SELECT },
     );
     assert.deepEqual(row, { source: done, receipt_id: null });
     // A grind recorded (wrongly, by hand) as made from these burgers would close a loop.

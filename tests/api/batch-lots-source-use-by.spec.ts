@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { insertAssemblyBatch } from '../helpers/lot-use-fixture.ts';
+import { recordAssembly } from '../helpers/lot-use-fixture.ts';
 import { clockFrom, startTestServer, type TestServer } from '../helpers/test-server.ts';
 
 const BURGER = { id: 'smokehouse-burger', title: 'Smokehouse burger' };
@@ -24,8 +24,7 @@ async function sauce(server: TestServer): Promise<string> {
 
 /** A burger assembly batch started on the clock's day, as the lot-use tests insert one; its lot code. */
 function burgersOn(server: TestServer, day: string): Promise<string> {
-  const code = `${day.slice(2).replaceAll('-', '')}-SB-01`;
-  return insertAssemblyBatch(server.context.db, server.formulasDir, BURGER, code, day);
+  return recordAssembly(server, BURGER.id, day);
 }
 
 async function markDone(server: TestServer, lot: string): Promise<void> {

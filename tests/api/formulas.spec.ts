@@ -67,6 +67,7 @@ describe('reading formulas', () => {
     const assemblies = await server.as('tobin').get('/api/formulas?kind=assembly');
     assert.equal(assemblies.status, 200);
     assert.deepEqual(assemblies.json.formulas.map((f: { id: string }) => f.id).sort(), [
+      'bacon-pack',
       'corned-beef-sandwich',
       'smokehouse-burger',
     ]);

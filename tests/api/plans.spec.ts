@@ -114,6 +114,8 @@ describe('POST /api/plans', () => {
       lotCode: string;
       status: string;
       startedOn: string;
+      formula: { id: string };
+      inputs: { count?: string };
     }[];
     assert.deepEqual(
       batches.map((b) => [b.startedOn, b.status]),
@@ -122,7 +124,13 @@ describe('POST /api/plans', () => {
         [addDays(SERVICE, -1), 'planned'],
         [SERVICE, 'planned'],
         [SERVICE, 'planned'],
+        [SERVICE, 'planned'],
       ],
+    );
+    // Last, the 120 burgers themselves, put together on the day of service from the others.
+    assert.deepEqual(
+      [batches[4].formula.id, batches[4].inputs.count],
+      ['smokehouse-burger', '120'],
     );
     const listed = await server().as('imke').get('/api/batches?status=planned&limit=50');
     assert.equal(listed.status, 200);
@@ -141,7 +149,8 @@ describe('POST /api/plans', () => {
       .post('/api/plans/record', { ...BURGERS, for: day });
     assert.equal(first.status, 201, first.text);
     const lots = first.json.batches.map((b: { lotCode: string }) => b.lotCode);
-    assert.equal(lots.length, 4);
+    // Grind, bun, bacon and sauce, and the burgers' own batch.
+    assert.equal(lots.length, 5);
 
     const before = await snapshot(server());
     const twice = await server()
@@ -165,7 +174,7 @@ describe('POST /api/plans', () => {
       .as('tobin')
       .post('/api/plans/record', { ...BURGERS, count: 150, for: day, again: true });
     assert.equal(again.status, 201, again.text);
-    assert.equal(again.json.batches.length, 4);
+    assert.equal(again.json.batches.length, 5);
     const bad = await server()
       .as('tobin')
       .post('/api/plans/record', { ...BURGERS, for: day, again: 'yes' });
@@ -231,7 +240,8 @@ describe('POST /api/plans', () => {
     const sixty = mine.find((p: { count: number }) => p.count === 60);
     // source: server/demo/demo-people.ts, the demo crew's names
     assert.equal(forty.madeBy.displayName, 'Imke Tressaly (food safety)');
-    assert.equal(sixty.recorded.batches, 4);
+    // Grind, bun, bacon and sauce, and the burgers' own batch.
+    assert.equal(sixty.recorded.batches, 5);
     assert.equal(sixty.assembly.id, 'smokehouse-burger');
   });
 });

@@ -32,11 +32,12 @@ async function recordTwiceThenAgain(env: Record<string, string>, where: string[]
   const first = await runLarder([...plan, '--record', ...where, '--json'], { env });
   assertExit(first, 0);
   const lots = lotsOf(first);
-  // Belly, bun, grind and sauce. source: formulas/smokehouse-burger.yaml
-  assert.equal(lots.length, 4);
+  // Belly, bun, grind and sauce, and the burgers' own batch for the day of service.
+  // source: formulas/smokehouse-burger.yaml
+  assert.equal(lots.length, 5);
 
   const twice = await runLarder([...plan, '--record', ...where], { env });
-  assertCleanFailure(twice, 2, /4 batches are already recorded for Smokehouse burger on /);
+  assertCleanFailure(twice, 2, /5 batches are already recorded for Smokehouse burger on /);
   for (const lot of lots) assert.match(twice.stderr, new RegExp(`lot ${lot} `));
   assert.match(twice.stderr, /give --again to record new batches for it as well/);
   assert.doesNotMatch(twice.stderr, /\{"/, 'no JSON in the words');
@@ -44,7 +45,7 @@ async function recordTwiceThenAgain(env: Record<string, string>, where: string[]
   const again = await runLarder([...plan, '--record', '--again', ...where, '--json'], { env });
   assertExit(again, 0);
   const more = lotsOf(again);
-  assert.equal(more.length, 4);
+  assert.equal(more.length, 5);
   assert.deepEqual(
     more.filter((lot) => lots.includes(lot)),
     [],

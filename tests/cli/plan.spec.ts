@@ -158,17 +158,17 @@ describe('larder plan', () => {
     const { batches } = stdoutJson<{
       batches: { lotCode: string; status: string; startedOn: string }[];
     }>(recorded);
-    // Belly 8 + 2 days before service, the bun 1 day before, grind and sauce on the day.
-    // source: the demo formulas' hold and lead days
+    // Belly 8 + 2 days before service, the bun 1 day before, grind and sauce on the day, and
+    // the burgers themselves on the day. source: the demo formulas' hold and lead days
     const belly = addDays(service, -10);
     assert.deepEqual(
       batches.map((b) => `${b.startedOn} ${b.status}`),
-      [belly, addDays(service, -1), service, service].map((day) => `${day} planned`),
+      [belly, addDays(service, -1), service, service, service].map((day) => `${day} planned`),
     );
     // Lot codes carry the start day. source: our lot code format (server/README.md "Batches")
     assert.ok(batches[0].lotCode.startsWith(`${belly.slice(2).replaceAll('-', '')}-`));
     const list = await runLarder(['batches', 'list', '--status', 'planned', '--json'], { env });
     assertExit(list, 0);
-    assert.equal(stdoutJson<{ items: unknown[] }>(list).items.length, 4);
+    assert.equal(stdoutJson<{ items: unknown[] }>(list).items.length, 5);
   });
 });

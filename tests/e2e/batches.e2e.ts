@@ -1,8 +1,7 @@
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
-import type { Page } from 'playwright-core';
-import { collectConsoleErrors, startConsole } from './browser.ts';
+import { choose, collectConsoleErrors, startConsole } from './browser.ts';
 import { recordMarkedBatches } from './marked-batches.ts';
 import { shoot } from './screens.ts';
 
@@ -19,12 +18,6 @@ function luminance(css: string): number {
 function contrast(a: string, b: string): number {
   const [hi, lo] = [luminance(a), luminance(b)].sort((x, y) => y - x);
   return (hi + 0.05) / (lo + 0.05);
-}
-
-/** Chooses an option of a Material select by its visible text. */
-async function choose(page: Page, testId: string, option: RegExp): Promise<void> {
-  await page.getByTestId(testId).click();
-  await page.getByRole('option', { name: option }).click();
 }
 
 describe('the batch log in the console', () => {

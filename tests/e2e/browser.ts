@@ -110,6 +110,12 @@ export async function startConsole(
   };
 }
 
+/** Chooses an option of a Material select, found by its test id, by the option's visible text. */
+export async function choose(page: Page, testId: string, option: RegExp): Promise<void> {
+  await page.getByTestId(testId).click();
+  await page.getByRole('option', { name: option }).click();
+}
+
 /**
  * Waits until the dialog opened last has taken the keyboard focus. A dialog moves focus to its
  * first field when its opening animation ends; text typed before that, under load, can land in

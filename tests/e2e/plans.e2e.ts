@@ -133,7 +133,8 @@ describe('plans in the console', () => {
     await page.getByTestId('plan-record').click();
     const recorded = page.getByTestId('plan-recorded-batch');
     await page.getByTestId('plan-recorded').waitFor();
-    assert.equal(await recorded.count(), 4);
+    // The four batches of the plan, and the 120 burgers' own batch for the day of service.
+    assert.equal(await recorded.count(), 5);
     const lots = await recorded.allInnerTexts();
     assert.equal(await page.getByTestId('plan-record').count(), 0, 'a plan is recorded once');
     await session.screenshot(page, 'plan-recorded');
@@ -150,7 +151,7 @@ describe('plans in the console', () => {
     const mine = (planned.json.items as { lotCode: string; notes: string; startedOn: string }[])
       .filter((batch) => lots.includes(batch.lotCode))
       .map((batch) => [batch.notes, batch.startedOn]);
-    assert.equal(mine.length, 4);
+    assert.equal(mine.length, 5);
     for (const [notes] of mine) assert.equal(notes, `plan: smokehouse-burger ×120 for ${SERVICE}`);
     assert.deepEqual(errors, []);
   });
@@ -188,7 +189,7 @@ describe('plans in the console', () => {
     await items.filter({ hasText: '120 × Smokehouse burger' }).waitFor();
     assert.match(
       await items.filter({ hasText: '100 × Smokehouse burger' }).first().innerText(),
-      /Recorded: 4 batches, by Rosa/,
+      /Recorded: 5 batches, by Rosa/,
     );
     assert.match(
       await items.filter({ hasText: '120 × Smokehouse burger' }).first().innerText(),
@@ -201,13 +202,13 @@ describe('plans in the console', () => {
     assert.equal((await again).postDataJSON().again, true);
     await page.getByTestId('plan-recorded').waitFor();
     const lots = await page.getByTestId('plan-recorded-batch').allInnerTexts();
-    assert.equal(lots.length, 4);
+    assert.equal(lots.length, 5);
     for (const lot of lots) assert.ok(!already.includes(lot), `${lot} is a new batch`);
     await page.getByTestId('plan-already-recorded').waitFor({ state: 'detached' });
     // The list of plans made is read again once the batches are recorded.
     await items
       .filter({ hasText: '120 × Smokehouse burger' })
-      .filter({ hasText: /Recorded: 4 batches, by Tobin/ })
+      .filter({ hasText: /Recorded: 5 batches, by Tobin/ })
       .waitFor();
     // The browser logs the refusal it was given; nothing else went wrong.
     assert.deepEqual(

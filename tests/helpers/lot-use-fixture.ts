@@ -1,14 +1,12 @@
 /**
  * Received lots for the lot-use tests, written by plain SQL (the receiving routes are another
- * part's), and an assembly batch, which the product itself does not record: an assembly is
- * planned, its parts are the batches. Invented Quillmoor suppliers.
+ * part's). Invented Quillmoor suppliers.
  */
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
+import assert from 'node:assert/strict';
 import { QueryTypes } from 'sequelize';
-import { revisionOf } from '../../files/revision.ts';
 import type { Database } from '../../server/db/database.ts';
 import { insertRow } from '../../server/db/insert-row.ts';
+import type { TestServer } from './test-server.ts';
 
 /** A lot as received, in the item's base measure (grams for a kg item). */
 export interface FixtureReceipt {
@@ -89,51 +87,19 @@ export async function lotsLeft(
 }
 
 /**
- * Inserts a batch of an assembly formula from the formulas folder, at the file's revision, under
- * way since a day; its lot code.
+ * Records a batch of an assembly formula through the product's own route, as a cook would: a
+ * count of units on a day (done on its day, planned for a later one); its lot code.
  */
-export async function insertAssemblyBatch(
-  db: Database,
-  formulasDir: string,
-  formula: { id: string; title: string },
-  lotCode: string,
-  startedOn: string,
+export async function recordAssembly(
+  server: TestServer,
+  formula: string,
+  start: string,
+  count = '10',
 ): Promise<string> {
-  const text = readFileSync(path.join(formulasDir, `${formula.id}.yaml`), 'utf8');
-  const by = await personId(db, 'tobin');
-  const result = {
-    formula: { ...formula, kind: 'assembly' },
-    units: 'metric',
-    inputs: [],
-    groups: [],
-    steps: [],
-    figures: [],
-    checks: [],
-    critical: false,
-    warnings: [],
-    cautions: [],
-    allergens: [],
-    rounding: '',
-  };
-  await db.write((t) =>
-    insertRow(
-      db,
-      t,
-      `INSERT INTO batches (lot_code, formula_id, formula_revision, formula_title, kind, status,
-         operator_id, started_on, recorded_at, updated_at, units, inputs, result, checks_passed)
-       VALUES (?, ?, ?, ?, 'assembly', 'in-progress', ?, ?, ?, ?, 'metric', '{}', ?, 1)`,
-      [
-        lotCode,
-        formula.id,
-        revisionOf(text),
-        formula.title,
-        by,
-        startedOn,
-        `${startedOn}T09:00:00Z`,
-        `${startedOn}T09:00:00Z`,
-        JSON.stringify(result),
-      ],
-    ),
-  );
-  return lotCode;
+  const response = await server.as('tobin').post('/api/batches', {
+    formula,
+    batch: { count, start },
+  });
+  assert.equal(response.status, 201, response.text);
+  return response.json.batch.lotCode as string;
 }

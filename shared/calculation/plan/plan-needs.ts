@@ -157,6 +157,57 @@ function demandOf(
   return { ...none, grams, words: `${component.amount} each = ${text(grams)} g` };
 }
 
+/** A fresh need of a formula, nothing added yet. */
+function emptyNeed(formula: BatchFormula): Need {
+  return {
+    formula,
+    purposes: [],
+    portions: ZERO,
+    pieces: ZERO,
+    grams: ZERO,
+    sizes: {},
+    served: false,
+    goesOn: [],
+  };
+}
+
+/**
+ * Adds what one component of an assembly asks of its batch formula to that formula's need.
+ * @param level every component of the assembly the component is in (for a part applied to another)
+ * @param where the assembly in words, for the purpose line
+ */
+export function addNeed(
+  needs: Map<string, Need>,
+  component: AssemblyComponent,
+  formula: BatchFormula,
+  library: FormulaLibrary,
+  units: Decimal,
+  level: readonly AssemblyComponent[],
+  where: string,
+): void {
+  const demand = demandOf(component, formula, library, units, level);
+  const need = needs.get(formula.id) ?? emptyNeed(formula);
+  if (component.on === undefined) need.served = true;
+  else if (!need.goesOn.includes(component.on)) need.goesOn.push(component.on);
+  need.purposes.push(`${where}: ${demand.words}`);
+  need.portions = need.portions.plus(demand.portions);
+  need.pieces = need.pieces.plus(demand.pieces);
+  need.grams = need.grams.plus(demand.grams);
+  const sizes = componentSizes(component);
+  const thicknessMm = larger(need.sizes.thicknessMm, sizes.thicknessMm);
+  const largestPieceGrams = larger(need.sizes.largestPieceGrams, sizes.largestPieceGrams);
+  need.sizes = {
+    ...(thicknessMm ? { thicknessMm } : {}),
+    ...(largestPieceGrams ? { largestPieceGrams } : {}),
+  };
+  needs.set(formula.id, need);
+}
+
+/** An assembly and its count in words: "Smokehouse burger › Bun (2 units)". */
+export function whereIn(path: readonly AssemblyFormula[], units: Decimal): string {
+  return `${path.map((a) => a.title).join(' › ')} (${counted(units, 'unit', 'units')})`;
+}
+
 /**
  * Walks an assembly, and the assemblies inside it, into what each formula is needed for: one
  * {@link Need} per formula, in the order first met. Nested assemblies multiply through (units ×
@@ -184,7 +235,7 @@ export function collectNeeds(
   }
   refuseIfInvalid(assembly, library);
   const path = [...trail, assembly];
-  const where = `${path.map((a) => a.title).join(' › ')} (${counted(units, 'unit', 'units')})`;
+  const where = whereIn(path, units);
   for (const component of assembly.components) {
     // refuseIfInvalid has made sure the formula is there and fits its quantity.
     const formula = library.get(component.formula);
@@ -193,31 +244,7 @@ export function collectNeeds(
       collectNeeds(formula, library, units.times(component.units ?? 1), needs, path);
       continue;
     }
-    const demand = demandOf(component, formula, library, units, assembly.components);
-    const need = needs.get(formula.id) ?? {
-      formula,
-      purposes: [],
-      portions: ZERO,
-      pieces: ZERO,
-      grams: ZERO,
-      sizes: {},
-      served: false,
-      goesOn: [],
-    };
-    if (component.on === undefined) need.served = true;
-    else if (!need.goesOn.includes(component.on)) need.goesOn.push(component.on);
-    need.purposes.push(`${where}: ${demand.words}`);
-    need.portions = need.portions.plus(demand.portions);
-    need.pieces = need.pieces.plus(demand.pieces);
-    need.grams = need.grams.plus(demand.grams);
-    const sizes = componentSizes(component);
-    const thicknessMm = larger(need.sizes.thicknessMm, sizes.thicknessMm);
-    const largestPieceGrams = larger(need.sizes.largestPieceGrams, sizes.largestPieceGrams);
-    need.sizes = {
-      ...(thicknessMm ? { thicknessMm } : {}),
-      ...(largestPieceGrams ? { largestPieceGrams } : {}),
-    };
-    needs.set(formula.id, need);
+    addNeed(needs, component, formula, library, units, assembly.components, where);
   }
   return needs;
 }

@@ -12,8 +12,9 @@ export interface FormulaOption {
 }
 
 /**
- * The formulas batches are made from, read once from GET /api/formulas for the selects of the
- * batch log, the record form and the nitrite chart. Only files that read as a formula are offered.
+ * The formulas batches are made from, assemblies among them, read once from GET /api/formulas for
+ * the selects of the batch log, the record form and the nitrite chart. Only files that read as a
+ * formula are offered.
  */
 @Injectable({ providedIn: 'root' })
 export class FormulaOptions {
@@ -62,7 +63,6 @@ function usable(items: readonly FormulaListItem[]): FormulaOption[] {
   const options: FormulaOption[] = [];
   for (const item of items) {
     if (!item.valid || item.duplicate || item.id === null || item.kind === null) continue;
-    if (item.kind === 'assembly') continue;
     options.push({ id: item.id, title: item.title ?? item.id, kind: item.kind });
   }
   return options.sort((a, b) => a.title.localeCompare(b.title));

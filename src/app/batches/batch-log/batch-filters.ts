@@ -26,6 +26,7 @@ import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import type { BatchStatus, FormulaKind, PersonRef } from '../batch-types';
 import type { FormulaOption } from '../formula-options';
+import { FORMULA_KIND_WORDS } from '../formula-kind-words';
 import { isFiltered, type LogQuery } from './log-query';
 
 /** The operator select's value: a person's id, "another id" typed by hand, or anyone. */
@@ -81,12 +82,9 @@ export class BatchFilters {
     value: status,
     words: statusInWords(status),
   }));
-  protected readonly kinds: readonly { value: FormulaKind; words: string }[] = [
-    { value: 'cure', words: 'Cure' },
-    { value: 'dough', words: 'Dough' },
-    { value: 'blend', words: 'Blend' },
-    { value: 'mix', words: 'Mix' },
-  ];
+  protected readonly kinds = (Object.entries(FORMULA_KIND_WORDS) as [FormulaKind, string][]).map(
+    ([value, words]) => ({ value, words }),
+  );
   protected readonly form = this.fb.group({
     formula: this.fb.control<string | null>(null),
     kind: this.fb.control<FormulaKind | null>(null),

@@ -68,7 +68,7 @@ export const DEFAULT_QUERY: LogQuery = {
   size: 25,
 };
 
-const KINDS: readonly FormulaKind[] = ['cure', 'dough', 'blend', 'mix'];
+const KINDS: readonly FormulaKind[] = ['cure', 'dough', 'blend', 'mix', 'assembly'];
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 
 /** The query parameters of the address bar, as the router gives them. */

@@ -15,7 +15,7 @@ import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect, MatSelectTrigger } from '@angular/material/select';
-import { ActivatedRoute } from '@angular/router';
+import { ActivatedRoute, RouterLink } from '@angular/router';
 import type { LotOnHand, LotUseView, SuggestedItem } from '../../../../shared/api/batch-lots.ts';
 import { Decimal } from '../../../../shared/decimal.ts';
 import { dayWords } from '../../../../shared/presentation/date-words.ts';
@@ -65,6 +65,7 @@ function lineForm(line: PickLine): LineForm {
   selector: 'app-made-from',
   imports: [
     ReactiveFormsModule,
+    RouterLink,
     MatButton,
     MatIconButton,
     MatIcon,
@@ -180,6 +181,12 @@ export class MadeFrom {
       this.startForm();
     }
   }
+
+  /** Whether the batch is made from batches (an assembly's parts), not from lots received. */
+  protected readonly fromBatches = computed(
+    () =>
+      !!this.lots()?.suggested.length && this.lots()!.suggested.every((s) => s.source === 'batch'),
+  );
 
   /** Whether there is anything to record. */
   /** Lines in the form: the form arrays are not signals, so adding one is counted here. */

@@ -127,8 +127,10 @@ export function fieldsFor(formula: FormulaFacts, missing: HoldSize | null = null
         f('total', 'Total weight', 'mass', 'Or scale to the total'),
       ];
     case 'assembly':
-      // An assembly is planned, not recorded as a batch of its own.
-      return [];
+      // Its parts come from their own formulas, at the count made.
+      return [
+        f('count', 'Number of units', 'count', 'Burgers, packs: one unit as the formula serves it'),
+      ];
   }
 }
 

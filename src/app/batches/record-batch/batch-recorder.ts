@@ -12,7 +12,8 @@ export interface RecordRequest {
   readonly formula: string;
   readonly batch: RawBatchOptions;
   readonly units: Units;
-  readonly status: 'planned' | 'in-progress';
+  /** Done only for an assembly, made on its day. */
+  readonly status: 'planned' | 'in-progress' | 'done';
   readonly notes?: string;
 }
 

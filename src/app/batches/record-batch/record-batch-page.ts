@@ -124,7 +124,7 @@ export default class RecordBatchPage implements OnInit {
     >([]),
     start: this.fb.control<Date | null>(new Date()),
     units: this.fb.control<Units>('metric'),
-    status: this.fb.control<'in-progress' | 'planned'>('in-progress'),
+    status: this.fb.control<'in-progress' | 'planned' | 'done'>('in-progress'),
     notes: this.fb.control('', Validators.maxLength(2000)),
   });
   protected readonly trimmingBoxes = TRIMMING_BOXES;
@@ -180,6 +180,7 @@ export default class RecordBatchPage implements OnInit {
         return;
       }
       this.facts.set(detail.formula);
+      this.statusForKind(detail.formula.kind);
       const trimmings = this.form.controls.trimmings;
       trimmings.clear();
       for (const _ of detail.formula.components ?? []) {
@@ -189,6 +190,16 @@ export default class RecordBatchPage implements OnInit {
     } catch (error) {
       this.factsError.set(messageOf(error));
     }
+  }
+
+  /**
+   * An assembly is put together in one go, so it is made (done) on its day unless planned; any
+   * other batch starts in progress. A planned choice stays as it is.
+   */
+  private statusForKind(kind: FormulaFacts['kind']): void {
+    const status = this.form.controls.status;
+    if (kind === 'assembly' && status.value === 'in-progress') status.setValue('done');
+    if (kind !== 'assembly' && status.value === 'done') status.setValue('in-progress');
   }
 
   protected chooseUnits(): void {

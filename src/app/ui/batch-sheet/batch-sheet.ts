@@ -47,7 +47,7 @@ export class BatchSheet {
     const refused = this.refused();
     const shown = [
       ['weigh', 'Weigh', !refused],
-      ['method', 'Mix and apply', !refused && this.methodShown()],
+      ['method', this.methodWords(), !refused && this.methodShown()],
       ['hold', 'Hold', !refused && !!this.result().schedule],
       ['check', 'Check', this.checksShown()],
     ] as const;
@@ -57,6 +57,11 @@ export class BatchSheet {
     ) as Record<(typeof shown)[number][0], string>;
   });
   protected readonly kindWords = computed(() => KIND_WORDS[this.result().formula.kind]);
+  /** An assembly's parts are put together, not mixed; its lines are parts, not ingredients. */
+  protected readonly assembly = computed(() => this.result().formula.kind === 'assembly');
+  protected readonly methodWords = computed(() =>
+    this.assembly() ? 'Put together' : 'Mix and apply',
+  );
   protected readonly unitWords = computed(() =>
     this.result().units === 'us' ? 'US units' : 'metric units',
   );
