@@ -20,6 +20,7 @@ import {
 import { parseMass } from '../../shared/units/mass.ts';
 import { QuantityError } from '../../shared/units/quantity-error.ts';
 import { sendPdf } from '../http/send-pdf.ts';
+import type { LabelNotYet } from '../../shared/api/product-label-view.ts';
 import { assemblyBatchLabel } from './assembly-batch-label.ts';
 
 /** What a label request asks for, read from its query. */
@@ -150,12 +151,24 @@ async function fullLabel(label: ProductLabel): Promise<string | undefined> {
 /**
  * GET /api/batches/:lot/label?net=MASS&packed=YYYY-MM-DD: the label's content as it prints, for
  * the console's preview; the net weight is optional here. The 4 × 6 label is laid out to say
- * whether its content fits, so the preview never offers a label that would be refused.
+ * whether its content fits, so the preview never offers a label that would be refused. An assembly
+ * whose parts are not recorded yet answers `{ notYet }` with the reason.
  */
 export function labelContentRoute(context: AppContext): RequestHandler {
   return async (req, res) => {
     const query = labelQuery(req, serverToday(context));
-    const label = await batchLabel(context, req, query);
+    let label: ProductLabel;
+    try {
+      label = await batchLabel(context, req, query);
+    } catch (error) {
+      // Not a fault of the request: the preview says so, as content, until the parts are recorded.
+      if (error instanceof AppError && error.code === 'parts-not-recorded') {
+        const notYet: LabelNotYet = { notYet: error.message };
+        res.json(notYet);
+        return;
+      }
+      throw error;
+    }
     res.json(productLabelView(label, await fullLabel(label)));
   };
 }

@@ -40,3 +40,11 @@ export interface ProductLabelView {
   /** Every size, in the order offered, each with why it is refused for this product, if it is. */
   readonly sizes: readonly LabelSizeView[];
 }
+
+/**
+ * The preview's answer for a batch whose label cannot be worked out yet (an assembly before its
+ * parts' batches are recorded): why, in a cook's words. The PDF route refuses with 409 instead.
+ */
+export interface LabelNotYet {
+  readonly notYet: string;
+}

@@ -36,11 +36,15 @@ describe('the label of an assembly batch', () => {
     const rosa = server.as('rosa');
 
     // Nothing recorded yet: the label would not know what went into each part.
+    // The preview is told why as content; the PDF is refused.
     const early = await rosa.get(`/api/batches/${burgers}/label`);
-    assert.equal(early.status, 409, early.text);
-    assert.equal(early.json.error.code, 'parts-not-recorded');
+    assert.equal(early.status, 200, early.text);
+    const earlyPdf = await rosa.get(`/api/batches/${burgers}/label.pdf?size=4x6&net=20+oz`);
+    assert.equal(earlyPdf.status, 409, earlyPdf.text);
+    assert.equal(earlyPdf.json.error.code, 'parts-not-recorded');
+    assert.equal(early.json.notYet, earlyPdf.json.error.message);
     assert.match(
-      early.json.error.message,
+      early.json.notYet,
       /none is recorded for Smokehouse burger grind 80\/20, Milk and honey bun, with sponge, Quillmoor belly, dry equilibrium cure, Pit-house sandwich sauce$/,
     );
 

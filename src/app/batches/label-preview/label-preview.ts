@@ -8,7 +8,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect, MatSelectTrigger } from '@angular/material/select';
 import { catchError, combineLatest, debounceTime, map, of, startWith, switchMap } from 'rxjs';
-import type { ProductLabelView } from '../../../../shared/api/product-label-view.ts';
+import type { LabelNotYet, ProductLabelView } from '../../../../shared/api/product-label-view.ts';
 import type { ShiPicture } from '../../../../shared/labels/safe-handling-text.ts';
 import { messageOf } from '../../core/api/message-of';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
@@ -93,8 +93,8 @@ export class LabelPreview {
       ),
     ]).pipe(
       switchMap(([lot, ask]) =>
-        this.http.get<ProductLabelView>(labelContentUrl(lot, ask)).pipe(
-          map((view): Preview => ({ view })),
+        this.http.get<ProductLabelView | LabelNotYet>(labelContentUrl(lot, ask)).pipe(
+          map((view): Preview => ('notYet' in view ? { error: view.notYet } : { view })),
           catchError((error: unknown) => of<Preview>({ error: messageOf(error) })),
         ),
       ),
