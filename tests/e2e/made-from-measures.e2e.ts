@@ -3,7 +3,7 @@ import path from 'node:path';
 import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import { addDays } from '../../shared/calculation/dates.ts';
-import { insertAssemblyBatch, insertReceipts, lotsLeft } from '../helpers/lot-use-fixture.ts';
+import { insertReceipts, lotsLeft, recordAssembly } from '../helpers/lot-use-fixture.ts';
 import { DAIRY_LOTS, dairyDelivery } from '../helpers/dairy-fixture.ts';
 import { clearStock } from '../helpers/pull-list-fixture.ts';
 import { clockFrom, type TestServer } from '../helpers/test-server.ts';
@@ -80,13 +80,7 @@ describe('what a batch was made from: eggs counted, and batches with a use-by', 
     clock.day = addDays(TODAY, -1);
     const grind = await madeToday(server, 'chuck-grind', { want: '5 kg' });
     clock.day = TODAY;
-    const burgers = await insertAssemblyBatch(
-      server.context.db,
-      server.formulasDir,
-      { id: 'smokehouse-burger', title: 'Smokehouse burger' },
-      `${TODAY.slice(2).replaceAll('-', '')}-SB-09`,
-      TODAY,
-    );
+    const burgers = await recordAssembly(server, 'smokehouse-burger', TODAY);
     const page = await session.page('tobin');
     const errors = collectConsoleErrors(page);
     await page.goto(`${server.url}/batches/${burgers}#made-from`, { waitUntil: 'networkidle' });
@@ -101,7 +95,8 @@ describe('what a batch was made from: eggs counted, and batches with a use-by', 
       await section.getByTestId('lots-of-chuck-grind').getByTestId('no-use-by').innerText(),
       /^No use-by: not ready to eat/,
     );
-    await sauce.getByRole('button', { name: /Add a lot of/ }).click();
+    // The sauce's line comes suggested (the first batch on offer at its weight); its choices:
+    assert.equal(await sauce.getByLabel('Batch').count(), 1);
     await sauce.getByLabel('Batch').click();
     const freshWords = `${fresh} · use by ${dayWords(addDays(TODAY, 4))} · made ${dayWords(addDays(TODAY, -2))}`;
     const options = await page.getByRole('option').allInnerTexts();
@@ -131,8 +126,11 @@ describe('what a batch was made from: eggs counted, and batches with a use-by', 
       });
     });
     const [row] = await server.context.db.sequelize.query<{ lot_code: string }>(
-      'SELECT s.lot_code FROM lot_uses u JOIN batches s ON s.id = u.source_batch_id',
-      { type: QueryTypes.SELECT },
+      `SELECT s.lot_code FROM lot_uses u
+       JOIN batches s ON s.id = u.source_batch_id
+       JOIN batches b ON b.id = u.batch_id
+       WHERE b.lot_code = ? AND s.formula_id = 'house-sauce' AND u.replaced_at IS NULL`,
+      { type: QueryTypes.SELECT, replacements: [burgers] },
     );
     assert.equal(row.lot_code, fresh);
     assert.ok(grind);
