@@ -104,7 +104,7 @@ async function batchLabel(
 /**
  * GET /api/batches/:lot/label.pdf?size=4x6|2x1|letter|a4&net=MASS&packed=YYYY-MM-DD: a product
  * label for a recorded batch, packed today unless another day is given; letter and a4 are sheets
- * of the 2 × 1 label. A batch not made yet, or thrown away, has no label; a small label for a
+ * of the 2 × 1 lot and date sticker. A batch not made yet, or thrown away, has no label; a small label for a
  * product that must carry the safe handling instructions is refused with 422
  * too-small-for-safe-handling, and a 4 × 6 label or a lot and date sticker whose words do not
  * fit at the least lettering allowed with 422 label-too-full.
