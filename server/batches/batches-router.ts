@@ -90,8 +90,8 @@ export function batchesRouter(context: AppContext): Router {
     sendPdf(res, pdf, `${batch.lotCode}.pdf`);
   });
 
-  // A product label for the batch's packages (4 × 6 in, 2 × 1 in, or a letter or A4 sheet of
-  // small labels), and its content for the console's preview, for any signed-in role.
+  // A product label for the batch's packages (4 × 6 in), or its 2 × 1 in lot and date sticker
+  // alone or on a letter or A4 sheet, and its content for the console's preview, for any role.
   router.get('/:lot/label.pdf', labelRoute(context));
   router.get('/:lot/label', labelContentRoute(context));
 

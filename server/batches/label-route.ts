@@ -105,10 +105,10 @@ async function batchLabel(
 /**
  * GET /api/batches/:lot/label.pdf?size=4x6|2x1|letter|a4&net=MASS&packed=YYYY-MM-DD: a product
  * label for a recorded batch, packed today unless another day is given; letter and a4 are sheets
- * of the 2 × 1 label. A batch not made yet, or thrown away, has no label; a small label for a
+ * of the 2 × 1 lot and date sticker. A batch not made yet, or thrown away, has no label; a small label for a
  * product that must carry the safe handling instructions is refused with 422
- * too-small-for-safe-handling, and a 4 × 6 label whose content does not fit with 422
- * label-too-full.
+ * too-small-for-safe-handling, and a 4 × 6 label or a lot and date sticker whose words do not
+ * fit at the least lettering allowed with 422 label-too-full.
  */
 export function labelRoute(context: AppContext): RequestHandler {
   return async (req, res) => {
@@ -134,13 +134,13 @@ function tooFull(error: unknown): error is Error {
 }
 
 /**
- * Why a label's content does not fit the 4 × 6 label, as a sentence, or undefined when it fits:
- * found by laying the label out, as printing it would. A label not yet given its net weight is
- * laid out with one (any weight takes the one line), so that giving it cannot make it too full.
+ * Why a label's content does not fit a size, as a sentence, or undefined when it fits: found by
+ * laying the label out, as printing it would. A label not yet given its net weight is laid out
+ * with one (any weight takes the one line), so that giving it cannot make it too full.
  */
-async function fullLabel(label: ProductLabel): Promise<string | undefined> {
+async function refusedAt(label: ProductLabel, size: '4x6' | '2x1'): Promise<string | undefined> {
   try {
-    await labelPdf({ ...label, net: label.net ?? netWeight(dec('1000')) }, '4x6');
+    await labelPdf({ ...label, net: label.net ?? netWeight(dec('1000')) }, size);
     return undefined;
   } catch (error) {
     if (!tooFull(error)) throw error;
@@ -150,9 +150,10 @@ async function fullLabel(label: ProductLabel): Promise<string | undefined> {
 
 /**
  * GET /api/batches/:lot/label?net=MASS&packed=YYYY-MM-DD: the label's content as it prints, for
- * the console's preview; the net weight is optional here. The 4 × 6 label is laid out to say
- * whether its content fits, so the preview never offers a label that would be refused. An assembly
- * whose parts are not recorded yet answers `{ notYet }` with the reason.
+ * the console's preview; the net weight is optional here. The 4 × 6 label and the lot and date
+ * sticker are laid out to say whether their content fits, so the preview never offers a label
+ * that would be refused.
+ * An assembly whose parts are not recorded yet answers `{ notYet }` with the reason.
  */
 export function labelContentRoute(context: AppContext): RequestHandler {
   return async (req, res) => {
@@ -169,6 +170,8 @@ export function labelContentRoute(context: AppContext): RequestHandler {
       }
       throw error;
     }
-    res.json(productLabelView(label, await fullLabel(label)));
+    // The sticker is laid out only for a product it may carry (label-sizes.ts).
+    const sticker = label.safeHandling.required ? undefined : await refusedAt(label, '2x1');
+    res.json(productLabelView(label, await refusedAt(label, '4x6'), sticker));
   };
 }

@@ -1,6 +1,7 @@
 import type { ProductLabel } from '../../shared/labels/product-label.ts';
 import { SHORTEN_ADDRESS_WORDS, TOO_FULL_WORDS } from '../../shared/labels/label-lettering.ts';
 import { leastTypeSize } from './label-lettering.ts';
+import { STICKER_GOES_WITH, STICKER_WORDS } from '../../shared/labels/lot-date-sticker.ts';
 import { drawSafeHandling, shiHeight } from './label-safe-handling.ts';
 import { labelSizeRefusal, type LabelSize } from '../../shared/labels/label-sizes.ts';
 import { CELL, labelQr, labelSheet, smallLabel, type SheetGrid } from './label-small.ts';
@@ -202,10 +203,11 @@ function fourBySix(layout: SheetLayout, label: ProductLabel): void {
 
 /**
  * A product label as a PDF in the sheet's fonts (Fira Sans, shipped with the console), its lot
- * code in words and as a QR code: one page at a thermal label's size (4 × 6 or 2 × 1 in), or a
- * letter or A4 sheet of the small label.
- * @throws LabelTooFullError when the 4 × 6 label cannot hold its content, or a small label is
- *   asked for a product that must carry the safe handling instructions
+ * code in words and as a QR code: one page at a thermal label's size, the 4 × 6 in product label
+ * or the 2 × 1 in lot and date sticker (label-small.ts), or a letter or A4 sheet of the sticker.
+ * @throws LabelTooFullError when the 4 × 6 label or the sticker cannot hold its content at the
+ *   least lettering allowed, or a sticker is asked for a product that must carry the safe handling
+ *   instructions
  */
 export async function renderLabelPdf(label: ProductLabel, size: LabelSize): Promise<Buffer> {
   const refusal = labelSizeRefusal(size, label.safeHandling.required);
@@ -213,7 +215,10 @@ export async function renderLabelPdf(label: ProductLabel, size: LabelSize): Prom
   const layout = openLabel(
     {
       title: label.product,
-      subject: `Product label, lot ${label.lotCode}`,
+      subject:
+        size === '4x6'
+          ? `Product label, lot ${label.lotCode}`
+          : `${STICKER_WORDS.charAt(0).toUpperCase()}${STICKER_WORDS.slice(1)}, lot ${label.lotCode}. ${STICKER_GOES_WITH}.`,
       units: size === 'a4' ? 'metric' : 'us',
       created: label.packedOn,
       lot: label.lotCode,

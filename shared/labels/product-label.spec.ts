@@ -8,7 +8,7 @@ import { dec } from '../decimal.ts';
 import { readFormula } from '../formula/read-formula.ts';
 import type { Formula } from '../formula/formula-types.ts';
 import { presentResult } from '../presentation/present-result.ts';
-import { noSizeFits, productLabel } from './product-label.ts';
+import { noSizeFits, productLabel, productLabelView } from './product-label.ts';
 import { safeHandling } from './safe-handling.ts';
 
 const FORMULAS = new URL('../../formulas/', import.meta.url);
@@ -256,5 +256,29 @@ describe('noSizeFits', () => {
   it('should say what to do, not that nothing prints, when shortening the address makes room', () => {
     const fixable = `${tooFull}: shorten the kitchen's address to fit on one line with its name`;
     assert.equal(noSizeFits(fixable, true), fixable);
+  });
+});
+
+describe('productLabelView', () => {
+  const sticker = 'The product’s name, lot and days do not fit on a 2 × 1 in lot and date sticker';
+  const tooFull = 'The ingredient statement does not fit on a 4 × 6 label';
+
+  it('should refuse every small size with the sticker’s reason, and not the 4 × 6', () => {
+    // The ham is ready to eat: no safe handling instructions to refuse the small sizes for.
+    const ham = labelOf('ham-pump', { meat: dec('5000'), start: '2026-02-20' }, '1360.8');
+    assert.deepEqual(productLabelView(ham, undefined, sticker).sizes, [
+      { size: '4x6' },
+      { size: '2x1', refused: sticker },
+      { size: 'letter', refused: sticker },
+      { size: 'a4', refused: sticker },
+    ]);
+    // Both too full: the 4 × 6 keeps its own reason, not the safe handling instructions'.
+    assert.equal(productLabelView(ham, tooFull, sticker).sizes[0]?.refused, tooFull);
+  });
+
+  it('should give the safe handling instructions’ reason before the sticker’s', () => {
+    const bacon = labelOf('quillmoor-belly', { meat: dec('5000'), start: '2026-02-20' }, '340');
+    const refused = productLabelView(bacon, undefined, sticker).sizes[1]?.refused;
+    assert.match(refused ?? '', /too small for the safe handling instructions/);
   });
 });

@@ -170,9 +170,16 @@ export function noSizeFits(tooFull: string, smallRefused: boolean): string {
  * why this product cannot go on it, if it cannot.
  * @param tooFull why the 4 × 6 label cannot hold this content, when it cannot (found by laying it
  *   out, which only the PDF stack can)
+ * @param stickerTooFull why the lot and date sticker cannot hold its words, when it cannot (found
+ *   the same way); the small sizes all print it
  */
-export function productLabelView(label: ProductLabel, tooFull?: string): ProductLabelView {
-  const small = (size: LabelSize) => labelSizeRefusal(size, label.safeHandling.required, !tooFull);
+export function productLabelView(
+  label: ProductLabel,
+  tooFull?: string,
+  stickerTooFull?: string,
+): ProductLabelView {
+  const shiRefusal = (size: LabelSize) =>
+    labelSizeRefusal(size, label.safeHandling.required, !tooFull);
   return {
     product: label.product,
     ingredients: label.ingredients.text,
@@ -189,8 +196,11 @@ export function productLabelView(label: ProductLabel, tooFull?: string): Product
     kitchen: label.kitchen,
     netNote: label.netNote,
     sizes: LABEL_SIZES.map((size) => {
+      // noSizeFits speaks of the safe handling instructions: only their refusal is told it.
       const refused =
-        size === '4x6' && tooFull ? noSizeFits(tooFull, small('2x1') !== undefined) : small(size);
+        size === '4x6'
+          ? tooFull && noSizeFits(tooFull, shiRefusal('2x1') !== undefined)
+          : (shiRefusal(size) ?? stickerTooFull);
       return refused ? { size, refused } : { size };
     }),
   };

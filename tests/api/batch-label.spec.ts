@@ -1,4 +1,6 @@
 import assert from 'node:assert/strict';
+import { readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
 import { describe, it } from 'node:test';
 import { BELLY, BUN, fetchLabel, recordBatch } from '../helpers/batch-calls.ts';
 import { pdfText } from '../helpers/pdf-text.ts';
@@ -75,6 +77,41 @@ describe('GET /api/batches/:lot/label.pdf', () => {
         ['a4', true],
       ],
     );
+  });
+
+  // A sticker's words are set at 9 points, lower-case letters 1/16 in tall (21 CFR 101.2(c), from
+  // memory past "in no case may the letter…"; 9 CFR 381.125(b)(1)(i), read), set solid at Fira
+  // Sans's 1.2 em: 10.8 points a line, 66 points of room in a 1 in label less 3 at top and foot.
+  // A name of four lines (46.8 points) and the lot and packed-on lines (21.6) need 68.4.
+  it('should refuse a lot and date sticker whose name leaves no room, and offer none', async (t) => {
+    const server = await startTestServer(t);
+    const tobin = server.as('tobin');
+    const bun = readFileSync(path.join(server.formulasDir, 'pit-bun.yaml'), 'utf8')
+      .replace('id: pit-bun', 'id: pit-bun-long')
+      .replace(
+        /^title: .*$/m,
+        'title: Milk and honey bun, with sponge, brushed with butter and honey, split and ' +
+          'toasted for the pit-house sandwich',
+      );
+    writeFileSync(path.join(server.formulasDir, 'pit-bun-long.yaml'), bun);
+    const lot = await recordBatch(tobin, { ...BUN, formula: 'pit-bun-long' });
+    const words =
+      "the product's name, lot and days do not fit on a 2 × 1 in lot and date sticker with " +
+      'letters no smaller than the labelling rules allow (1/16 in)';
+    for (const size of ['2x1', 'letter', 'a4']) {
+      const response = await tobin.get(`/api/batches/${lot}/label.pdf?size=${size}`);
+      assert.equal(response.status, 422, size);
+      assert.equal(response.json.error.code, 'label-too-full');
+      assert.equal(response.json.error.message, words);
+    }
+    const view = (await tobin.get(`/api/batches/${lot}/label`)).json;
+    const refusal = words.charAt(0).toUpperCase() + words.slice(1);
+    assert.deepEqual(view.sizes, [
+      { size: '4x6' },
+      { size: '2x1', refused: refusal },
+      { size: 'letter', refused: refusal },
+      { size: 'a4', refused: refusal },
+    ]);
   });
 
   it('should give the label’s content for the preview, the net weight optional', async (t) => {

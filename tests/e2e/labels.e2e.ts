@@ -46,6 +46,16 @@ async function shootSection(page: Page, name: string): Promise<void> {
   await page.setViewportSize({ width: 1280, height: 860 });
 }
 
+/** Records a batch of the house sauce, ready to eat and held cold, as Tobin; returns its lot. */
+async function recordSauce(session: ConsoleSession): Promise<string> {
+  const recorded = await session.server.as('tobin').post('/api/batches', {
+    formula: 'house-sauce',
+    batch: { total: '2 kg', start: TODAY },
+  });
+  assert.equal(recorded.status, 201, recorded.text);
+  return recorded.json.batch.lotCode as string;
+}
+
 /** Records a batch of the raw bacon started today, as Tobin; returns its lot code. */
 async function recordRawBacon(session: ConsoleSession): Promise<string> {
   const recorded = await session.server.as('tobin').post('/api/batches', {
@@ -59,12 +69,7 @@ async function recordRawBacon(session: ConsoleSession): Promise<string> {
 describe('product labels in the console', () => {
   it('should preview a batch’s label, print it and read the PDF back', async (t) => {
     const session = await startConsole(t);
-    const recorded = await session.server.as('tobin').post('/api/batches', {
-      formula: 'house-sauce',
-      batch: { total: '2 kg', start: TODAY },
-    });
-    assert.equal(recorded.status, 201, recorded.text);
-    const lot = recorded.json.batch.lotCode as string;
+    const lot = await recordSauce(session);
 
     const page = await session.page('tobin');
     const errors = collectConsoleErrors(page);
@@ -105,6 +110,50 @@ describe('product labels in the console', () => {
     assert.deepEqual(errors, []);
   });
 
+  it('should print the sauce’s lot and date stickers on a letter sheet, every word at 9 points', async (t) => {
+    const session = await startConsole(t);
+    const lot = await recordSauce(session);
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${session.server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    await page.getByTestId('label-packed').fill('2026-03-02');
+    await page.getByTestId('label-size').click();
+    await page.getByRole('option', { name: /^Letter sheet, 40 stickers$/ }).click();
+    await page.getByRole('listbox').waitFor({ state: 'detached' });
+    // The sticker says what it is, and that it is not the package label.
+    assert.match(
+      await page.getByTestId('label-size-about').innerText(),
+      /^A lot and date sticker: .* It is not the package label: it goes with the full label on the pack or carton\.$/,
+    );
+    assert.match(
+      await page.getByTestId('label-sticker-note').innerText(),
+      /Goes with the full label on the pack or carton\.$/,
+    );
+    // Ready to eat and held cold: use by day 7, the packed day counted as day 1.
+    // source: FDA Food Code 2022, 3-501.17(A)
+    await page.getByTestId('label-use-by').filter({ hasText: '8 Mar 2026' }).waitFor();
+    assert.equal(await page.getByTestId('label-handling').innerText(), 'Keep refrigerated');
+    assert.equal(await page.getByTestId('label-ingredients').count(), 0);
+    // A sticker declares no net weight, so none is asked for.
+    assert.equal(await page.getByTestId('label-net').count(), 0);
+    await page.getByTestId('label-preview').scrollIntoViewIfNeeded();
+    await shootAtWidths(session, page, 'label-preview-sticker');
+    await shootSection(page, 'label-preview-sticker');
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByTestId('label-print').click(),
+    ]);
+    assert.equal(download.suggestedFilename(), `${lot}-label-letter.pdf`);
+    const text = await pdfText(readFileSync(await download.path()));
+    // Letter paper, 8.5 × 11 in at 72 points to the inch (from memory; ISO 32000-1:2008, 8.3.2.3)
+    assert.deepEqual(text.sizes, [[612, 792]]);
+    assert.equal(text.all.split(`Lot ${lot}`).length - 1, 40);
+    // 9 points of Fira Sans: lower-case letters 1/16 in tall (tests/pdf/label-lettering.spec.ts).
+    assert.equal(Math.min(...text.items.map((item) => item.size)), 9);
+    assert.match(text.all, /Goes with the full label on the pack or carton/);
+    assert.deepEqual(errors, []);
+  });
+
   it('should show the raw bacon’s safe handling instructions and no use-by day', async (t) => {
     const session = await startConsole(t);
     const lot = await recordRawBacon(session);
@@ -130,12 +179,24 @@ describe('product labels in the console', () => {
     for (const name of ['2 × 1 in', 'Letter sheet', 'A4 sheet']) {
       const option = page.getByRole('option', { name: new RegExp(`^${name}`) });
       assert.equal(await option.getAttribute('aria-disabled'), 'true', name);
-      assert.match(await option.innerText(), /too small for this product/);
+      assert.match(await option.innerText(), /not for this product, see why below$/);
     }
     await shootAtWidths(session, page, 'label-preview-raw-sizes');
     await page.keyboard.press('Escape');
     // The list of sizes closes with an animation; the screenshots wait for it to go.
     await page.getByRole('listbox').waitFor({ state: 'detached' });
+    // The list on a phone, where each size's note must wrap, not run off the edge.
+    await page.setViewportSize({ width: 390, height: 860 });
+    await page.getByTestId('label-size').scrollIntoViewIfNeeded();
+    await page.getByTestId('label-size').click();
+    await page.getByRole('listbox').waitFor();
+    await page.screenshot({
+      path: path.join(ARTIFACTS, 'label-preview-raw-sizes-list-390.png'),
+      animations: 'disabled',
+    });
+    await page.keyboard.press('Escape');
+    await page.getByRole('listbox').waitFor({ state: 'detached' });
+    await page.setViewportSize({ width: 1280, height: 860 });
     await page.getByTestId('label-net').fill('12 oz');
     await page.getByTestId('label-print').waitFor();
     await shootAtWidths(session, page, 'label-preview-raw');

@@ -1,40 +1,13 @@
 import assert from 'node:assert/strict';
-import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdirSync, writeFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
 import { renderLabelPdf } from '../../server/pdf/label-pdf.ts';
 import type { LabelSize } from '../../shared/labels/label-sizes.ts';
-import { readCatalogue } from '../../shared/catalogue/read-catalogue.ts';
-import { productLabel } from '../../shared/labels/product-label.ts';
-import {
-  calculate,
-  dec,
-  parseBatchOptions,
-  presentResult,
-  readFormula,
-  type RawBatchOptions,
-} from '../../shared/index.ts';
+import { demoLabel } from '../helpers/demo-label.ts';
 import { pdfText } from '../helpers/pdf-text.ts';
 
 // A label is read back with pdf.js, an independent reader: one page at the label's size, with
 // what a person reading it must find.
-
-const read = (file: string): string => readFileSync(`formulas/${file}`, 'utf8');
-const catalogue = readCatalogue(read('catalogue.yaml'), 'catalogue.yaml').catalogue;
-
-function labelOf(id: string, options: RawBatchOptions, lotCode: string, net?: string) {
-  const formula = readFormula(read(`${id}.yaml`), `${id}.yaml`).formula;
-  assert.ok(formula && formula.kind !== 'assembly');
-  const batch = parseBatchOptions(options, formula, { today: '2026-03-02' });
-  return productLabel({
-    formula,
-    result: presentResult(calculate(formula, batch), 'us'),
-    catalogue,
-    lotCode,
-    packedOn: '2026-03-02',
-    netGrams: net === undefined ? undefined : dec(net),
-    kitchen: { name: 'Quillmoor Smokehouse', address: '14 Kiln Lane, Quillmoor' },
-  });
-}
 
 /**
  * Label sizes in points, 72 to the inch. source: ISO 32000-1:2008, 8.3.2.3. Letter paper is
@@ -48,10 +21,10 @@ const SIZES: Record<LabelSize, readonly [number, number]> = {
 };
 
 const LABELS = [
-  labelOf('quillmoor-belly', { meat: '5 kg', start: '2026-02-20' }, '260220-QB-01', '340'),
-  labelOf('chuck-grind', { total: '20 kg' }, '260302-CG-02', '453.59237'),
-  labelOf('house-sauce', { total: '2 kg' }, '260302-HS-01', '250'),
-  labelOf('ham-pump', { meat: '5 kg', start: '2026-02-20' }, '260220-HP-01', '1360.8'),
+  demoLabel('quillmoor-belly', { meat: '5 kg', start: '2026-02-20' }, '260220-QB-01', '340'),
+  demoLabel('chuck-grind', { total: '20 kg' }, '260302-CG-02', '453.59237'),
+  demoLabel('house-sauce', { total: '2 kg' }, '260302-HS-01', '250'),
+  demoLabel('ham-pump', { meat: '5 kg', start: '2026-02-20' }, '260220-HP-01', '1360.8'),
 ];
 
 /** The text pdf.js reads, spaces collapsed, as the label's own words must appear in it. */
@@ -76,13 +49,18 @@ describe('product label PDF', () => {
         // 3-501.17(A)); the raw bacon and grind have no use-by day (label-keeping.ts).
         if (label.useBy.mark) assert.match(text.all, /Use by 8 Mar 2026/);
         else assert.doesNotMatch(text.all, /Use by/);
-        assert.ok(label.net && text.all.includes(label.net.text), text.all);
         if (size === '4x6') {
+          assert.ok(label.net && text.all.includes(label.net.text), text.all);
           assert.ok(text.all.includes(label.ingredients.text), text.all);
           if (label.contains) assert.ok(text.all.includes(label.contains));
           if (label.handling) assert.match(text.all, /KEEP REFRIGERATED/);
           assert.match(text.all, /Quillmoor Smokehouse 14 Kiln Lane, Quillmoor/);
-        } else assert.doesNotMatch(text.all, /Ingredients/);
+        } else {
+          // The 2 × 1 in label is a lot and date sticker, not the package label: its keep
+          // statement, but no ingredients, net weight or kitchen (label-sticker.spec.ts).
+          if (label.handling) assert.match(text.all, /Keep refrigerated/);
+          assert.doesNotMatch(text.all, /Ingredients|Net wt|Kiln Lane/);
+        }
       });
     }
   }
@@ -130,14 +108,14 @@ describe('product label PDF', () => {
     ['letter', 40],
     ['a4', 33],
   ] as const) {
-    it(`should print ${count} small labels on one ${size} sheet, saying how many`, async () => {
+    it(`should print ${count} stickers on one ${size} sheet, saying how many`, async () => {
       const label = LABELS[3];
       const bytes = await renderLabelPdf(label, size);
       writeFileSync(`test-artifacts/label-${label.lotCode}-${size}.pdf`, bytes);
       const text = await pdfText(bytes);
       assert.deepEqual(text.sizes, [SIZES[size]]);
       assert.equal(text.all.split(`Lot ${label.lotCode}`).length - 1, count);
-      assert.match(text.all, new RegExp(`^${count} labels, 2 × 1 in`));
+      assert.match(text.all, new RegExp(`^${count} lot and date stickers, 2 × 1 in`));
     });
   }
 });

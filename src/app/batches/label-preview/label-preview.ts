@@ -80,6 +80,10 @@ export class LabelPreview {
   protected readonly chosenWords = computed(
     () => this.sizes.find((choice) => choice.size === this.ask().size)?.words ?? '',
   );
+  /** What the chosen size prints, in a cook's words. */
+  protected readonly chosenAbout = computed(
+    () => this.sizes.find((choice) => choice.size === this.ask().size)?.about ?? '',
+  );
   protected readonly pdfUrl = computed(() => labelPdfUrl(this.lot(), this.ask()));
 
   /** The content, asked for again a moment after the net weight or the day changes. */
@@ -112,7 +116,7 @@ export class LabelPreview {
 
   /** The sizes this product cannot go on, with why, as the label's content says. */
   protected readonly refused = computed(() => refusedSizes(this.view()?.sizes));
-  /** Why the smallest size is refused, for the notes under the label: the small sizes share it. */
+  /** Why the small sizes are refused, for the notes under the label: they print one sticker. */
   protected readonly smallRefused = computed(() => this.refused().get('2x1'));
   protected readonly problem = computed(() => labelProblem(this.ask(), this.view()));
 }

@@ -1,11 +1,23 @@
 import type { LabelSizeView, ProductLabelView } from '../../../../shared/api/product-label-view.ts';
 
-/** The sizes a product label prints at, as the API names them, with a cook's words for each. */
+/** What a small size prints: the lot and date sticker, not the package label. */
+const STICKER_ABOUT =
+  'A lot and date sticker: the product, lot, packed-on and use-by days and how to keep it. ' +
+  'It is not the package label: it goes with the full label on the pack or carton.';
+
+/**
+ * The sizes a product label prints at, as the API names them, with a cook's words for each and
+ * what it prints (the small sizes are lot and date stickers: shared/labels/lot-date-sticker.ts).
+ */
 export const LABEL_SIZE_CHOICES = [
-  { size: '4x6', words: '4 × 6 in, the full label' },
-  { size: '2x1', words: '2 × 1 in, lot and days' },
-  { size: 'letter', words: 'Letter sheet, 40 small labels' },
-  { size: 'a4', words: 'A4 sheet, 33 small labels' },
+  {
+    size: '4x6',
+    words: '4 × 6 in, the full label',
+    about: 'The package label: everything the package must say, for the pack or its carton.',
+  },
+  { size: '2x1', words: '2 × 1 in, lot and date sticker', about: STICKER_ABOUT },
+  { size: 'letter', words: 'Letter sheet, 40 stickers', about: STICKER_ABOUT },
+  { size: 'a4', words: 'A4 sheet, 33 stickers', about: STICKER_ABOUT },
 ] as const;
 
 /** One of the label sizes. */
