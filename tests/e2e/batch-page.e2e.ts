@@ -178,6 +178,44 @@ describe('the batch page asks before it ends something', () => {
     const title = await admin.getByTestId('batch-revision').getAttribute('title');
     assert.equal(title, `Revision ${recorded.json.batch.formula.revision}`);
   });
+
+  it('should ask why before discarding a batch, and keep it when the cook backs out', async (t) => {
+    const session = await startConsole(t);
+    const { server } = session;
+    const recorded = await server.as('tobin').post('/api/batches', {
+      formula: 'quillmoor-belly',
+      batch: { meat: '4.26kg', thickness: '4cm', start: TODAY },
+    });
+    assert.equal(recorded.status, 201, recorded.text);
+    const lot = recorded.json.batch.lotCode as string;
+    const statusNow = async (): Promise<string> =>
+      (await server.as('rosa').get(`/api/batches/${lot}`)).json.batch.status;
+
+    const page = await session.page('tobin');
+    await page.goto(`${server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    await page.getByTestId('status-to-discarded').click();
+    // The dialog is named by its title, which says which batch goes.
+    const dialog = page.getByRole('dialog', { name: `Discard batch ${lot}?` });
+    await dialog.waitFor();
+    await atEveryWidth(session, page, 'confirm-discard');
+
+    // Backing out changes nothing.
+    await page.getByTestId('reason-cancel').click();
+    await dialog.waitFor({ state: 'detached' });
+    assert.equal(await statusNow(), 'in-progress');
+
+    // No reason, no discard: the dialog says what is missing and stays open.
+    await page.getByTestId('status-to-discarded').click();
+    await page.getByTestId('reason-confirm').click();
+    await dialog.getByText('Say why the batch is discarded.').waitFor();
+    assert.equal(await statusNow(), 'in-progress');
+
+    await page.getByTestId('reason-input').fill('Cooler failed overnight');
+    await page.getByTestId('reason-confirm').click();
+    await dialog.waitFor({ state: 'detached' });
+    await page.getByText('Cooler failed overnight').first().waitFor();
+    assert.equal(await statusNow(), 'discarded');
+  });
 });
 
 describe('signing off a batch that is not plainly good', () => {

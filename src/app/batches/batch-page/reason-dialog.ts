@@ -23,6 +23,7 @@ export interface ReasonDialogData {
 
 /** The dialog's words: discarding any batch, or moving one already signed off. */
 interface ReasonWords {
+  /** The title before the lot code: "Discard batch". */
   readonly title: string;
   readonly lead: string;
   readonly hint: string;
@@ -34,7 +35,7 @@ interface ReasonWords {
 function wordsFor(data: ReasonDialogData): ReasonWords {
   if (data.to === 'discarded')
     return {
-      title: `Discard batch ${data.lotCode}?`,
+      title: 'Discard batch',
       lead: 'A discarded batch stays in the log with your reason and cannot be moved on again. Say why, for the record.',
       hint: 'For example: dropped on the floor; cooler failed overnight',
       missing: 'Say why the batch is discarded.',
@@ -42,7 +43,7 @@ function wordsFor(data: ReasonDialogData): ReasonWords {
       confirm: 'Discard',
     };
   return {
-    title: `Move signed-off batch ${data.lotCode}?`,
+    title: 'Move signed-off batch',
     lead: 'This batch is signed off, so its record was reviewed as it stands. Say why its status changes now: the reason is kept with the change for the reviewer to see.',
     hint: 'For example: signed off while curing; the probe reading came in after',
     missing: 'Say why the status changes.',
@@ -71,11 +72,14 @@ function wordsFor(data: ReasonDialogData): ReasonWords {
     MatButton,
   ],
   template: `
-    <h2 mat-dialog-title>{{ words.title }}</h2>
+    <!-- The lot code is kept on one line (a phone would break it at its hyphens); one line of
+    markup, so no space goes before the title. -->
+    <!-- prettier-ignore -->
+    <h2 mat-dialog-title>{{ words.title }} <span class="lot">{{ data.lotCode }}</span>?</h2>
     <form [formGroup]="form" (ngSubmit)="confirm()" data-testid="reason-dialog">
       <mat-dialog-content>
         <p>{{ words.lead }}</p>
-        <mat-form-field class="reason">
+        <mat-form-field class="reason" subscriptSizing="dynamic">
           <mat-label>Reason</mat-label>
           <textarea
             matInput
@@ -108,6 +112,9 @@ function wordsFor(data: ReasonDialogData): ReasonWords {
     </form>
   `,
   styles: `
+    .lot {
+      white-space: nowrap;
+    }
     .reason {
       width: 100%;
     }
