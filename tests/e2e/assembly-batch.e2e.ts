@@ -38,10 +38,22 @@ describe('an assembly recorded as a batch in the console', () => {
     assert.match(await part.innerText(), /Needs 2\.4 kg/);
     assert.match(await part.innerText(), new RegExp(belly));
     await shootAtWidths(session, page, 'assembly-made-from');
+    // Until its parts are recorded the pack has no label: it lists what went into each part.
+    assert.match(
+      await page.getByTestId('label-error').innerText(),
+      /record the batches this .* was made from first/,
+    );
     await madeFrom.getByTestId('use-these-lots').click();
     const used = madeFrom.getByTestId('lots-used');
     await used.waitFor();
     assert.match(await used.innerText(), new RegExp(`${belly}[\\s\\S]*made here[\\s\\S]*2\\.4 kg`));
+    // The label follows at once, with no reload: the part's own ingredients in parentheses.
+    await page.getByTestId('label-ingredients').waitFor({ timeout: 10_000 });
+    assert.match(
+      await page.getByTestId('label-ingredients').innerText(),
+      /Quillmoor belly, dry equilibrium cure \(pork/,
+    );
+    assert.equal(await page.getByTestId('label-error').count(), 0);
     await shootAtWidths(session, page, 'assembly-batch-page');
 
     // 3. Its trace back: the pack ← the belly batch ← the belly's received lot.

@@ -1,7 +1,7 @@
 /**
  * Assemblies for the label tests: an assembly formula of the test's own written beside the demo
  * formulas, batches of its parts, and what an assembly batch was made from (the assembly batch
- * itself comes from insertAssemblyBatch in lot-use-fixture.ts).
+ * itself is recorded by recordAssembly in lot-use-fixture.ts).
  */
 import assert from 'node:assert/strict';
 import { writeFileSync } from 'node:fs';

@@ -5,6 +5,7 @@ import {
   effect,
   inject,
   input,
+  signal,
   untracked,
 } from '@angular/core';
 import { MatButton, MatIconButton } from '@angular/material/button';
@@ -78,6 +79,8 @@ export default class BatchPage {
   readonly lot = input.required<string>();
 
   protected readonly batch = this.store.batch;
+  /** How many times Made from was recorded on this page: the label reads again each time. */
+  protected readonly lotsRecorded = signal(0);
   protected readonly kindWords = KIND_WORDS;
   protected readonly moves = computed<OfferedMove[]>(() => {
     const batch = this.batch();

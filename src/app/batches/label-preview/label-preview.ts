@@ -63,6 +63,8 @@ export class LabelPreview {
 
   /** The batch's lot code. */
   readonly lot = input.required<string>();
+  /** Changes when the batch's lots are recorded: an assembly's label is made of its parts. */
+  readonly lotsRecorded = input(0);
 
   protected readonly sizes = LABEL_SIZE_CHOICES;
   protected readonly icons = PICTURE_ICONS;
@@ -90,13 +92,14 @@ export class LabelPreview {
   protected readonly preview = toSignal(
     combineLatest([
       toObservable(this.lot),
+      toObservable(this.lotsRecorded),
       this.form.valueChanges.pipe(
         startWith(null),
         map(() => this.form.getRawValue()),
         debounceTime(300),
       ),
     ]).pipe(
-      switchMap(([lot, ask]) =>
+      switchMap(([lot, , ask]) =>
         this.http.get<ProductLabelView | LabelNotYet>(labelContentUrl(lot, ask)).pipe(
           map((view): Preview => ('notYet' in view ? { error: view.notYet } : { view })),
           catchError((error: unknown) => of<Preview>({ error: messageOf(error) })),

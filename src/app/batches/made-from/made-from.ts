@@ -6,6 +6,7 @@ import {
   effect,
   inject,
   input,
+  output,
   signal,
   untracked,
 } from '@angular/core';
@@ -91,6 +92,8 @@ export class MadeFrom {
 
   /** The batch's lot code. */
   readonly lot = input.required<string>();
+  /** Emitted once the lots used are recorded, so what depends on them (the label) reads again. */
+  readonly recorded = output<void>();
 
   protected readonly lots = this.store.lots;
   protected readonly canRecord = computed(
@@ -179,6 +182,7 @@ export class MadeFrom {
     if (await this.store.record(this.lot(), body)) {
       this.replacing.set(false);
       this.startForm();
+      this.recorded.emit();
     }
   }
 
