@@ -84,6 +84,13 @@ async function walk(page: Page, url: string, name: string): Promise<string[]> {
   const found: string[] = [];
   await page.setViewportSize(SIZES[0]);
   await page.goto(url, { waitUntil: 'networkidle' });
+  // Every screen says what it is in a heading: a page that never drew one (a chunk that failed
+  // to load, an error before the first render) would otherwise pass axe as an empty page.
+  try {
+    await page.locator('h1').first().waitFor({ state: 'visible', timeout: 20_000 });
+  } catch {
+    return [`${name}: the screen showed no heading (it did not draw)`];
+  }
   for (const size of SIZES) {
     await page.setViewportSize(size);
     await settle(page);
