@@ -61,7 +61,8 @@ describe('people, the audit log and the outbox in the console', () => {
     assert.equal(await refusal.getByTestId('audit-who').innerText(), TOBIN);
     assert.match(await refusal.innerText(), /over the 120 ppm limit/);
     assert.equal(
-      await refusal.getByRole('link', { name: 'maple-pump-belly' }).getAttribute('href'),
+      // By its title (formulas/maple-pump-belly.yaml), not its id.
+      await refusal.getByRole('link', { name: 'Maple belly, injected' }).getAttribute('href'),
       '/formulas/maple-pump-belly',
     );
     // The demo's corrective action: by name, its lot linked, no record numbers in the detail.

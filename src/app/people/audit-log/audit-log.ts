@@ -26,6 +26,7 @@ import { AUDIT_ACTIONS, AuditAction, AuditEvent, actionText, detailText } from '
 import { AuditFilter, AuditStore } from '../audit-store';
 import { AuditSubject, actorText, subjectOf } from '../audit-subject';
 import { PeopleStore } from '../people-store';
+import { FormulaStore } from '../../formulas/formula-store';
 import { OlderPagesFooter } from '../older-pages-footer/older-pages-footer';
 import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 import { PHONE_WIDTH, mediaMatch } from '../../ui/media-match';
@@ -87,6 +88,16 @@ type FilterForm = FormGroup<{
 export default class AuditLog implements OnInit {
   private readonly store = inject(AuditStore);
   private readonly peopleStore = inject(PeopleStore);
+  private readonly formulaStore = inject(FormulaStore);
+  /** Formulas by title in the "to what" column; ids until the list has arrived. */
+  private readonly titles = computed(
+    () =>
+      new Map(
+        (this.formulaStore.formulas() ?? []).flatMap((formula) =>
+          formula.id && formula.title ? [[formula.id, formula.title] as const] : [],
+        ),
+      ),
+  );
 
   protected readonly actions = AUDIT_ACTIONS;
   protected readonly people = this.peopleStore.people;
@@ -102,7 +113,7 @@ export default class AuditLog implements OnInit {
       event,
       who: actorText(event),
       action: actionText(event),
-      subject: subjectOf(event),
+      subject: subjectOf(event, this.titles()),
       detail: detailText(event),
     })),
   );
@@ -140,6 +151,7 @@ export default class AuditLog implements OnInit {
     );
     void this.store.load();
     if (!this.peopleStore.loaded()) void this.peopleStore.load();
+    if (!this.formulaStore.formulas()) void this.formulaStore.loadList();
   }
 
   protected clearFilters(): void {
