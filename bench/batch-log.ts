@@ -1,7 +1,8 @@
 // Benchmark: the batch log API at a million recorded batches — first page, a filtered page, a page
-// deep in the list, a lot-code search — p50/p95 of sequential requests against the 30 ms target,
-// with the query plans the log relies on, each page's with a verdict on whether it picks the page's
-// ids before building rows. Reuses BENCH_LOG_DIR when it already holds a seeded log.
+// deep in the list, a lot-code search (p95 target 10 ms on SQLite), then the console's view and its
+// quick filters (30 ms) — p50/p95 of sequential requests, with the query plans the log relies on,
+// each page's with a verdict on whether it picks the page's ids before building rows. Reuses
+// BENCH_LOG_DIR when it already holds a seeded log.
 import { existsSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -10,7 +11,7 @@ import { encodeCursor, parseListQuery } from '../server/batches/batch-query.ts';
 import { TOTAL_COUNTED } from '../server/batches/batch-repository.ts';
 import { countSql, pageSql } from '../server/batches/batch-sql.ts';
 import { SEED_VERSION, seedLog } from './seed-log.ts';
-import { signInCookie, startBenchServer } from './server-process.ts';
+import { signInCookie, startBenchServer, type BenchServer } from './server-process.ts';
 
 const ROWS = Number(process.env.BENCH_LOG_ROWS ?? 1_000_000);
 const REQUESTS = Number(process.env.BENCH_LOG_REQUESTS ?? 100);
@@ -95,6 +96,21 @@ function pageVerdict(plan: string): string {
     : 'walks an index in order, builds the page';
 }
 
+/**
+ * Waits until the server has used under 20 ms of CPU in half a second (at most 30 s): its own
+ * work after a start — the PDF warm-up 2 s after it listens (about a second of CPU), the first
+ * runs of its jobs — would otherwise land in the first requests timed. Returns the seconds waited.
+ */
+async function settled(server: BenchServer): Promise<number> {
+  const start = performance.now();
+  for (;;) {
+    const before = server.cpuSeconds();
+    await new Promise((resolve) => setTimeout(resolve, 500));
+    const waited = (performance.now() - start) / 1000;
+    if (server.cpuSeconds() - before < 0.02 || waited > 30) return waited;
+  }
+}
+
 /** Runs the log benchmark and prints it. */
 export async function benchBatchLog(): Promise<void> {
   const dataDir = process.env.BENCH_LOG_DIR ?? path.join(tmpdir(), `larder-log-${ROWS}`);
@@ -110,74 +126,88 @@ export async function benchBatchLog(): Promise<void> {
     );
     await seedLog(dataDir, ROWS, (text) => process.stdout.write(text));
   }
-  const db = new sqlite3.Database(databaseFile, sqlite3.OPEN_READONLY);
-  const [{ n }] = await all<{ n: number }>(db, 'SELECT COUNT(*) AS n FROM batches');
-  const [deep] = await all<{ recorded_at: string; id: number }>(
-    db,
-    'SELECT recorded_at, id FROM batches ORDER BY recorded_at DESC, id DESC LIMIT 1 OFFSET ?',
-    [Math.floor(n / 2)],
-  );
-  const [lot] = await all<{ lot_code: string }>(db, 'SELECT lot_code FROM batches WHERE id = ?', [
-    Math.floor(n / 3),
-  ]);
-  const lotSearch = lot.lot_code.slice(0, 9);
-  const cases: [string, Record<string, string>][] = [
-    ['first page', { limit: '50' }],
-    [
-      'filtered page (formula + status)',
-      { formula: 'quillmoor-belly', status: 'done', limit: '50' },
-    ],
-    [
-      'page deep in the list (half-way)',
-      {
-        limit: '50',
-        cursor: encodeCursor('recorded', 'desc', {
-          key: deep.recorded_at,
-          id: deep.id,
-          direction: 'next',
-        }),
-      },
-    ],
-    [`lot-code search (${lotSearch})`, { lot: lotSearch, limit: '50' }],
-    // The console's log: newest started first, and its quick filters (a reviewer's queue).
-    ['console first page (started, desc)', { sort: 'started', order: 'desc', limit: '25' }],
-    ['needs sign-off (started, desc)', { needsSignOff: 'true', sort: 'started', limit: '25' }],
-    ['failed checks (started, desc)', { checks: 'failed', sort: 'started', limit: '25' }],
-    ['overdue (started, desc)', { overdueOn: TODAY, sort: 'started', limit: '25' }],
-    // The quick filters in the log's own order (recorded, newest first), as the API defaults.
-    ['needs sign-off (recorded, desc)', { needsSignOff: 'true', limit: '25' }],
-    ['failed checks (recorded, desc)', { checks: 'failed', limit: '25' }],
-    ['overdue (recorded, desc)', { overdueOn: TODAY, limit: '25' }],
-  ];
-
-  process.stdout.write(
-    `Batch log at ${n} batches: query plans (the page, then its count up to ${TOTAL_COUNTED + 1})\n`,
-  );
-  for (const [label, params] of cases) {
-    const query = parseListQuery(params, true);
-    const page = pageSql(query, 'list');
-    for (const part of [page, countSql(query.filter, TOTAL_COUNTED)]) {
-      const plan = await all<{ detail: string }>(db, `EXPLAIN QUERY PLAN ${part.sql}`, part.values);
-      const detail = plan.map((row) => row.detail).join(' | ');
-      const verdict = part === page ? ` [${pageVerdict(detail)}]` : '';
-      process.stdout.write(`  ${label}: ${detail}${verdict}\n`);
-    }
-  }
-  db.close();
-
+  // The server first: it brings the log's schema up to date (a new index is built on its first
+  // start), and the plans below are the ones it will use.
   const server = await startBenchServer(
     { LARDER_DATA: dataDir, LARDER_FORMULAS: path.join(dataDir, 'formulas') },
     { keepData: true },
   );
   try {
-    const { cookie } = await signInCookie(server.url, 'imke', 'quillmoor-review');
+    const db = new sqlite3.Database(databaseFile, sqlite3.OPEN_READONLY);
+    const [{ n }] = await all<{ n: number }>(db, 'SELECT COUNT(*) AS n FROM batches');
+    const [deep] = await all<{ recorded_at: string; id: number }>(
+      db,
+      'SELECT recorded_at, id FROM batches ORDER BY recorded_at DESC, id DESC LIMIT 1 OFFSET ?',
+      [Math.floor(n / 2)],
+    );
+    const [lot] = await all<{ lot_code: string }>(db, 'SELECT lot_code FROM batches WHERE id = ?', [
+      Math.floor(n / 3),
+    ]);
+    const lotSearch = lot.lot_code.slice(0, 9);
+    const cases: [string, Record<string, string>][] = [
+      ['first page', { limit: '50' }],
+      [
+        'filtered page (formula + status)',
+        { formula: 'quillmoor-belly', status: 'done', limit: '50' },
+      ],
+      [
+        'page deep in the list (half-way)',
+        {
+          limit: '50',
+          cursor: encodeCursor('recorded', 'desc', {
+            key: deep.recorded_at,
+            id: deep.id,
+            direction: 'next',
+          }),
+        },
+      ],
+      [`lot-code search (${lotSearch})`, { lot: lotSearch, limit: '50' }],
+      // The console's log: newest started first, and its quick filters (a reviewer's queue).
+      ['console first page (started, desc)', { sort: 'started', order: 'desc', limit: '25' }],
+      ['needs sign-off (started, desc)', { needsSignOff: 'true', sort: 'started', limit: '25' }],
+      ['failed checks (started, desc)', { checks: 'failed', sort: 'started', limit: '25' }],
+      ['overdue (started, desc)', { overdueOn: TODAY, sort: 'started', limit: '25' }],
+      // The quick filters in the log's own order (recorded, newest first), as the API defaults.
+      ['needs sign-off (recorded, desc)', { needsSignOff: 'true', limit: '25' }],
+      ['failed checks (recorded, desc)', { checks: 'failed', limit: '25' }],
+      ['overdue (recorded, desc)', { overdueOn: TODAY, limit: '25' }],
+    ];
+
     process.stdout.write(
-      `Batch log at ${n} batches: GET /api/batches, ${REQUESTS} requests in turn\n`,
+      `Batch log at ${n} batches: query plans (the page, then its count up to ${TOTAL_COUNTED + 1})\n`,
     );
     for (const [label, params] of cases) {
+      const query = parseListQuery(params, true);
+      const page = pageSql(query, 'list');
+      for (const part of [page, countSql(query.filter, TOTAL_COUNTED)]) {
+        const plan = await all<{ detail: string }>(
+          db,
+          `EXPLAIN QUERY PLAN ${part.sql}`,
+          part.values,
+        );
+        const detail = plan.map((row) => row.detail).join(' | ');
+        const verdict = part === page ? ` [${pageVerdict(detail)}]` : '';
+        process.stdout.write(`  ${label}: ${detail}${verdict}\n`);
+      }
+    }
+    db.close();
+
+    const { cookie } = await signInCookie(server.url, 'imke', 'quillmoor-review');
+    const waited = await settled(server);
+    process.stdout.write(
+      `Batch log at ${n} batches: GET /api/batches, ${REQUESTS} requests in turn (server settled ${waited.toFixed(1)} s after the plans)\n`,
+    );
+    for (const [index, [label, params]] of cases.entries()) {
+      // The first four are the log's own pages, held to SQLite's target; the console's view and
+      // its quick filters to the API's.
+      const target = index < 4 ? 10 : 30;
+      // The server's CPU (all its threads, SQLite's included) moves less with the machine's load
+      // than the times do.
+      const cpuBefore = server.cpuSeconds();
       const t = await time(`${server.url}/api/batches?${new URLSearchParams(params)}`, { cookie });
+      const cpuMs = ((server.cpuSeconds() - cpuBefore) * 1000) / REQUESTS;
       process.stdout.write(
-        `  ${label}: p50 ${t.p50.toFixed(1)} ms, p95 ${t.p95.toFixed(1)} ms (target p95 ≤ 30 ms); min ${t.min.toFixed(1)} ms, first ${t.first.toFixed(0)} ms; ` +
+        `  ${label}: p50 ${t.p50.toFixed(1)} ms, p95 ${t.p95.toFixed(1)} ms (target p95 ≤ ${target} ms); min ${t.min.toFixed(1)} ms, first ${t.first.toFixed(0)} ms; server CPU ${cpuMs.toFixed(1)} ms a request; ` +
           `${t.items} items of ${t.total}, ${t.kb.toFixed(0)} kB\n`,
       );
     }
