@@ -62,7 +62,7 @@ export function createApp(context: AppContext): Express {
   // A data logger's CSV is read as text on its one route, before the JSON parser.
   api.post('/batches/:lot/readings/upload', loggerText);
   api.use(express.json({ limit: JSON_LIMIT }), requireJsonBody);
-  api.use(sessionMiddleware(context.db, context.config.sessionSecret, httpsOnly));
+  api.use(sessionMiddleware(context.db, context.config.sessionSecret, httpsOnly, context.people));
   // No passport.initialize(): passport.authenticate() sets up the request itself, and Basic is
   // the one strategy, so the rest of the API need not pay for it.
   // One limit of sign-in attempts per address, whether by the form or by HTTP Basic.
