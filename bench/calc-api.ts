@@ -5,7 +5,7 @@
 // (cookie) and for HTTP Basic (scripts, the CLI).
 import autocannon from 'autocannon';
 import { spawn } from 'node:child_process';
-import { basicAuth, signInCookie, startBenchServer } from './server-process.ts';
+import { basicAuth, processCpuSeconds, signInCookie, startBenchServer } from './server-process.ts';
 
 const CONNECTIONS = 50;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
@@ -20,9 +20,12 @@ interface Run {
   p99: number;
   non2xx: number;
   errors: number;
+  /** The answering process's CPU time per request, ms: steadier than req/s on a busy machine. */
+  cpuMs: number;
 }
 
-async function run(url: string, headers: Record<string, string>): Promise<Run> {
+async function run(url: string, headers: Record<string, string>, pid?: number): Promise<Run> {
+  const cpuBefore = processCpuSeconds(pid);
   const result = await autocannon({
     url,
     method: 'POST',
@@ -36,11 +39,14 @@ async function run(url: string, headers: Record<string, string>): Promise<Run> {
     p99: result.latency.p99,
     non2xx: result.non2xx,
     errors: result.errors + result.timeouts,
+    cpuMs: ((processCpuSeconds(pid) - cpuBefore) * 1000) / Math.max(1, result.requests.total),
   };
 }
 
 /** Starts bench/bare-route.ts answering `body`; returns its URL and how to stop it. */
-async function startBareRoute(body: string): Promise<{ url: string; stop: () => Promise<void> }> {
+async function startBareRoute(
+  body: string,
+): Promise<{ url: string; pid?: number; stop: () => Promise<void> }> {
   const child = spawn(process.execPath, ['--import', 'tsx', 'bench/bare-route.ts'], {
     stdio: ['pipe', 'pipe', 'inherit'],
   });
@@ -56,6 +62,7 @@ async function startBareRoute(body: string): Promise<{ url: string; stop: () => 
   });
   return {
     url: `http://127.0.0.1:${port}/calc`,
+    pid: child.pid,
     stop: async () => {
       const exited = new Promise((resolve) => child.once('exit', resolve));
       child.kill('SIGTERM');
@@ -67,7 +74,7 @@ async function startBareRoute(body: string): Promise<{ url: string; stop: () => 
 function line(label: string, ours: Run, bare: number): string {
   const ratio = ours.perSecond / bare;
   return (
-    `  ${label}: ${ours.perSecond.toFixed(0)} req/s, p99 ${ours.p99} ms, ${ours.non2xx} non-2xx, ${ours.errors} errors; ` +
+    `  ${label}: ${ours.perSecond.toFixed(0)} req/s, p99 ${ours.p99} ms, ${ours.cpuMs.toFixed(2)} ms of server CPU a request, ${ours.non2xx} non-2xx, ${ours.errors} errors; ` +
     `ratio ${(ratio * 100).toFixed(0)} % of bare (target ≥ 50 %, p99 ≤ 25 ms)\n`
   );
 }
@@ -95,13 +102,13 @@ export async function benchCalcApi(): Promise<{ ratio: number; p99: number; rssM
     // Requests still queued when a run stops are answered before the next run starts.
     const settle = (): Promise<void> => new Promise((resolve) => setTimeout(resolve, 1500));
     try {
-      before = await run(bareRoute.url, {});
+      before = await run(bareRoute.url, {}, bareRoute.pid);
       await settle();
-      cookieRun = await run(`${server.url}/api/calc`, session);
+      cookieRun = await run(`${server.url}/api/calc`, session, server.child.pid);
       await settle();
-      basicRun = await run(`${server.url}/api/calc`, basic);
+      basicRun = await run(`${server.url}/api/calc`, basic, server.child.pid);
       await settle();
-      after = await run(bareRoute.url, {});
+      after = await run(bareRoute.url, {}, bareRoute.pid);
     } finally {
       await bareRoute.stop();
     }
@@ -109,7 +116,7 @@ export async function benchCalcApi(): Promise<{ ratio: number; p99: number; rssM
     const rssMb = server.peakRssMb();
     process.stdout.write(
       `POST /api/calc (${CONNECTIONS} connections, ${SECONDS} s per run, ${sample.length} B answer)\n` +
-        `  bare Express route: ${bare.toFixed(0)} req/s (${before.perSecond.toFixed(0)} before, ${after.perSecond.toFixed(0)} after), p99 ${Math.max(before.p99, after.p99)} ms\n` +
+        `  bare Express route: ${bare.toFixed(0)} req/s (${before.perSecond.toFixed(0)} before, ${after.perSecond.toFixed(0)} after), p99 ${Math.max(before.p99, after.p99)} ms, ${((before.cpuMs + after.cpuMs) / 2).toFixed(2)} ms of CPU a request\n` +
         line('signed in (session cookie)', cookieRun, bare) +
         line('HTTP Basic', basicRun, bare) +
         `  server peak RSS ${rssMb.toFixed(0)} MB (target ≤ 250 MB)\n`,

@@ -32,8 +32,13 @@ export async function startBenchServer(
   await buildBundle('server');
   const dataDir = env.LARDER_DATA ?? mkdtempSync(path.join(tmpdir(), 'larder-bench-'));
   if (!env.LARDER_DATA) cpSync('formulas', path.join(dataDir, 'formulas'), { recursive: true });
-  // As npm start runs it (scripts/start.mjs), node options included.
-  const child = spawn(process.execPath, [...BUNDLES.server.nodeOptions, BUNDLES.server.outfile], {
+  // As npm start runs it (scripts/start.mjs), node options included; BENCH_PROFILE_DIR has the
+  // server write a CPU profile there when it stops (node --cpu-prof), for the README's profile.
+  const profile = process.env.BENCH_PROFILE_DIR
+    ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE_DIR}`]
+    : [];
+  const serverArgs = [...BUNDLES.server.nodeOptions, ...profile, BUNDLES.server.outfile];
+  const child = spawn(process.execPath, serverArgs, {
     env: {
       ...process.env,
       LARDER_DATA: dataDir,
@@ -69,15 +74,7 @@ export async function startBenchServer(
     dataDir,
     rssMb: () => statusMb('VmRSS'),
     peakRssMb: () => statusMb('VmHWM'),
-    cpuSeconds: () => {
-      try {
-        // utime and stime, the 14th and 15th fields, in clock ticks of 1/100 s.
-        const fields = readFileSync(`/proc/${child.pid}/stat`, 'utf8').split(') ')[1].split(' ');
-        return (Number(fields[11]) + Number(fields[12])) / 100;
-      } catch {
-        return 0;
-      }
-    },
+    cpuSeconds: () => processCpuSeconds(child.pid),
     resetPeakRss: () => {
       try {
         writeFileSync(`/proc/${child.pid}/clear_refs`, '5');
@@ -93,6 +90,17 @@ export async function startBenchServer(
       if (!options.keepData) rmSync(dataDir, { recursive: true, force: true });
     },
   };
+}
+
+/** CPU time a process has used so far, seconds (Linux: /proc/PID/stat); 0 where there is no /proc. */
+export function processCpuSeconds(pid: number | undefined): number {
+  try {
+    // utime and stime, the 14th and 15th fields, in clock ticks of 1/100 s.
+    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
+    return (Number(fields[11]) + Number(fields[12])) / 100;
+  } catch {
+    return 0;
+  }
 }
 
 /** Signs in through the form and returns the cookie and CSRF token. */

@@ -25,6 +25,7 @@ import {
 import { formulasRouter } from './formulas/formulas-router.ts';
 import { consoleRouter, cspNonce } from './http/console-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
+import { fixedHeaders } from './http/fixed-headers.ts';
 import { requireJsonBody } from './http/require-json.ts';
 import { refuseCrossSiteWrites } from './http/same-origin.ts';
 import { invitationsRouter } from './invitations/invitations-router.ts';
@@ -53,8 +54,9 @@ export function createApp(context: AppContext): Express {
   // (Secure cookies) come from the proxy's X-Forwarded-* headers, believed only from it.
   app.set('trust proxy', context.config.trustProxy);
   const { httpsOnly } = context.config;
-  // API answers (JSON, CSV, PDF) need the policy but no nonce: no random bytes for them.
-  app.use('/api', securityHeaders(httpsOnly));
+  // API answers (JSON, CSV, PDF) need the policy but no nonce: no random bytes for them, and the
+  // same headers on every answer, worked out once.
+  app.use('/api', fixedHeaders(securityHeaders(httpsOnly)));
 
   const api = express.Router();
   // First of all: a change another site's page sent is refused before anything reads it.
@@ -62,7 +64,7 @@ export function createApp(context: AppContext): Express {
   // A data logger's CSV is read as text on its one route, before the JSON parser.
   api.post('/batches/:lot/readings/upload', loggerText);
   api.use(express.json({ limit: JSON_LIMIT }), requireJsonBody);
-  api.use(sessionMiddleware(context.db, context.config.sessionSecret, httpsOnly));
+  api.use(sessionMiddleware(context.db, context.config.sessionSecret, httpsOnly, context.people));
   // No passport.initialize(): passport.authenticate() sets up the request itself, and Basic is
   // the one strategy, so the rest of the API need not pay for it.
   // One limit of sign-in attempts per address, whether by the form or by HTTP Basic.

@@ -55,8 +55,12 @@ export function authenticate(people: PeopleRepository): RequestHandler {
   return (req: Request, res: Response, next: NextFunction) => {
     const personId = req.session?.personId;
     if (personId !== undefined) {
-      people
-        .findForSession(personId)
+      // Read with the session when the reader gave it (one statement), otherwise here.
+      const person =
+        req.sessionPerson !== undefined
+          ? Promise.resolve(req.sessionPerson ?? undefined)
+          : people.findForSession(personId);
+      person
         .then((found) => {
           // Deactivated, or the password changed since this session signed in: the session ends.
           const signedInAt = req.session.signedInAt ?? '';

@@ -1,6 +1,7 @@
 import type { Request } from 'express';
 import type { ChangeOptions } from '../batches/batch.ts';
 import type { Person } from '../../shared/api/person.ts';
+import type { SessionPerson } from '../people/people-repository.ts';
 import { AppError } from '../http/app-error.ts';
 
 declare module 'express-session' {
@@ -20,6 +21,11 @@ declare module 'express-serve-static-core' {
     person?: Person;
     /** How they proved it: a session cookie (console) or HTTP Basic (scripts, CLI). */
     authVia?: 'session' | 'basic';
+    /**
+     * The session's person, read with the session itself (sessionReader); null when it names
+     * no person; undefined when not read that way (authenticate reads the person then).
+     */
+    sessionPerson?: SessionPerson | null;
   }
 }
 

@@ -1,8 +1,16 @@
 import session, { type SessionData } from 'express-session';
 import connectSessionSequelize from 'connect-session-sequelize';
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
+import type { PeopleRepository } from '../people/people-repository.ts';
+import { sessionReader } from './session-reader.ts';
+
+/** When a stored session ends, and what it holds (JSON), as the Sessions table keeps them. */
+interface SessionRowTimes {
+  data: string | null;
+  expires: string | null;
+}
 
 /** How long a console session lasts after signing in. */
 export const SESSION_IDLE_MS = 12 * 60 * 60 * 1000;
@@ -10,26 +18,36 @@ export const SESSION_IDLE_MS = 12 * 60 * 60 * 1000;
 export const SESSION_COOKIE = 'larder.sid';
 
 /**
- * Sessions kept in SQLite, with an httpOnly, SameSite=Strict cookie. The table comes from our
- * migrations, so the store is never asked to create it.
+ * A stored session's data, or null when there is none or it is past its expiry (even before the
+ * periodic clean-up removes it).
  */
-export function sessionMiddleware(db: Database, secret: string, secure: boolean): RequestHandler {
+export function liveSessionData(row: SessionRowTimes | undefined): SessionData | null {
+  const expired = !!row?.expires && new Date(row.expires).getTime() <= Date.now();
+  return row?.data && !expired ? (JSON.parse(row.data) as SessionData) : null;
+}
+
+/**
+ * Sessions kept in SQLite, with an httpOnly, SameSite=Strict cookie. The table comes from our
+ * migrations, so the store is never asked to create it. A request that only reads its session
+ * gets it, with its person, from one read (sessionReader, people.findSession); signing in and out
+ * and one's own new password go through express-session.
+ */
+export function sessionMiddleware(
+  db: Database,
+  secret: string,
+  secure: boolean,
+  people: PeopleRepository,
+): RequestHandler {
   const SequelizeStore = connectSessionSequelize(session.Store);
   /**
-   * The library's store, but every request's read is one plain SELECT (readRow) rather than a
-   * Sequelize model lookup, which cost more than the rest of a calculation request; a session
-   * past its expiry is not found, even before the periodic clean-up removes it.
+   * The library's store, but its read is one plain SELECT (readRow) rather than a Sequelize
+   * model lookup, which cost more than the rest of a calculation request.
    */
   class SessionStore extends SequelizeStore {
     override get(sid: string, done: (error: unknown, data?: SessionData | null) => void): void {
-      readRow<{ data: string | null; expires: string | null }>(
-        db.sequelize,
-        'SELECT data, expires FROM "Sessions" WHERE sid = ?',
-        [sid],
-      ).then((row) => {
-        const expired = !!row?.expires && new Date(row.expires).getTime() <= Date.now();
-        done(null, row?.data && !expired ? (JSON.parse(row.data) as SessionData) : null);
-      }, done);
+      readRow<SessionRowTimes>(db.sequelize, 'SELECT data, expires FROM "Sessions" WHERE sid = ?', [
+        sid,
+      ]).then((row) => done(null, liveSessionData(row)), done);
     }
   }
   // disableTouch is in the store's options but not its type declarations.
@@ -54,12 +72,30 @@ export function sessionMiddleware(db: Database, secret: string, secure: boolean)
   // with a random id and a hash of it, only for it to be thrown away unsaved: it gets none.
   // Signing in (POST /session, under the API's mount) is the one such request that starts one.
   const cookieName = `${SESSION_COOKIE}=`;
+  const readSession = sessionReader(store, secret, SESSION_COOKIE, async (sid) => {
+    const row = await people.findSession(sid);
+    const data = liveSessionData(row);
+    return data ? { data, person: row?.person ?? null } : undefined;
+  });
   return (req, res, next) => {
-    if (
-      req.headers.cookie?.includes(cookieName) ||
-      (req.method === 'POST' && req.path === '/session')
-    )
-      return sessions(req, res, next);
-    next();
+    if (changesSession(req)) return sessions(req, res, next);
+    if (!req.headers.cookie?.includes(cookieName)) return next();
+    // Every other request only reads its session: the lighter reader, when its cookie proves.
+    if (!readSession(req, next)) sessions(req, res, next);
   };
+}
+
+/**
+ * The requests that start, end or change their own session, under the API's mount: signing in
+ * and out (/session), and one's own new password, which moves the session's sign-in time past
+ * the cut-off that ends one's other sessions (people-router.ts). The session the reader gives
+ * any other request is frozen, so a route that changes it without being named here fails loudly.
+ */
+function changesSession(req: Request): boolean {
+  // As the router matches them: whatever the case, with or without a trailing slash.
+  const path = req.path.toLowerCase().replace(/\/+$/, '');
+  return (
+    path === '/session' ||
+    (path === '/people/me/password' && req.method !== 'GET' && req.method !== 'HEAD')
+  );
 }

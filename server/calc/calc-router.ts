@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { FORMULA_ID_PATTERN, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { YAML_TEXT } from '../formulas/formula-http.ts';
+import { sendJsonAnswer } from '../http/json-answer.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { serverToday } from '../server-today.ts';
 import {
@@ -51,7 +52,8 @@ export function calcRouter(context: AppContext): Router {
         ? (await context.formulas.current(body.formula)).formula
         : formulaFromText(body.formula.yaml, 'inline formula');
     const library = formula.kind === 'assembly' ? await context.formulas.library() : undefined;
-    res.json(
+    sendJsonAnswer(
+      res,
       calculateBatch(formula, body.batch, body.units ?? 'metric', serverToday(context), library),
     );
   });

@@ -30,7 +30,9 @@ export const requireJsonBody: RequestHandler = (req, _res, next) => {
   const hasBody =
     Number(req.headers['content-length'] ?? 0) > 0 ||
     req.headers['transfer-encoding'] !== undefined;
-  const nul = req.is('application/json') ? nulAt(req.body) : undefined;
+  // Asked once: each req.is parses the Content-Type header again.
+  const json = Boolean(req.is('application/json'));
+  const nul = json ? nulAt(req.body) : undefined;
   if (nul !== undefined)
     return next(
       new AppError(400, 'bad-request', `${nul} holds a NUL character (U+0000); delete it`, [
@@ -38,7 +40,7 @@ export const requireJsonBody: RequestHandler = (req, _res, next) => {
       ]),
     );
   // A string body was read as text by a route's own parser (a logger's CSV, server/app.ts).
-  if (!hasBody || req.is('application/json') || req.is('multipart/form-data')) return next();
+  if (!hasBody || json || req.is('multipart/form-data')) return next();
   if (typeof req.body === 'string' && req.is('text/csv')) return next();
   next(
     new AppError(

@@ -32,6 +32,21 @@ function toPerson(row: PersonRow): Person {
   };
 }
 
+/** A signed-in person as a session sees them: who, and since when their sessions count. */
+export interface SessionPerson {
+  person: Person;
+  /** Sessions signed in before this time (ISO) have ended: a password changed then. */
+  sessionsValidFrom: string | null;
+}
+
+/** A stored session's row, with its person's read in the same statement. */
+export interface SessionRow {
+  data: string | null;
+  expires: string | null;
+  /** Undefined when the session names no person, or one that is not in the table. */
+  person?: SessionPerson;
+}
+
 /** What it takes to add a person. */
 export interface NewPerson {
   username: string;
@@ -185,14 +200,37 @@ export class PeopleRepository {
    * The person a session belongs to, with the time their sessions must have started to still
    * count (moved to now by a password reset); null when every session counts.
    */
-  async findForSession(
-    id: number,
-  ): Promise<{ person: Person; sessionsValidFrom: string | null } | undefined> {
+  async findForSession(id: number): Promise<SessionPerson | undefined> {
     // Every signed-in request asks this: one plain read (readRow), not Sequelize's query path.
     const row = await readRow<PersonRow>(this.db.sequelize, 'SELECT * FROM people WHERE id = ?', [
       id,
     ]);
     return row ? { person: toPerson(row), sessionsValidFrom: row.sessions_valid_from } : undefined;
+  }
+
+  /**
+   * A session's row and its person in one read (every signed-in request asks this): one trip to
+   * SQLite instead of two, and both read afresh, so a sign-out, deactivation, role change or new
+   * password made by any server process on this database shows on the next request.
+   */
+  async findSession(sid: string): Promise<SessionRow | undefined> {
+    const row = await readRow<
+      PersonRow & { session_data: string | null; session_expires: string | null }
+    >(
+      this.db.sequelize,
+      `SELECT s.data AS session_data, s.expires AS session_expires, p.*
+         FROM "Sessions" s LEFT JOIN people p ON p.id = json_extract(s.data, '$.personId')
+        WHERE s.sid = ?`,
+      [sid],
+    );
+    if (!row) return undefined;
+    return {
+      data: row.session_data,
+      expires: row.session_expires,
+      ...(row.id === null
+        ? {}
+        : { person: { person: toPerson(row), sessionsValidFrom: row.sessions_valid_from } }),
+    };
   }
 
   /** Sets a password and ends the person's sessions signed in before now; returns the cut-off. */
