@@ -117,7 +117,10 @@ async function migrate(sequelize: Sequelize): Promise<void> {
  * Connects to a PostgreSQL server's database and applies pending migrations. Two processes
  * starting at once take turns: an advisory lock held for the migration keeps the second waiting.
  */
-async function openPostgres(url: string): Promise<Database> {
+async function openPostgres(
+  url: string,
+  { busyTimeoutMs = BUSY_TIMEOUT_MS }: OpenOptions,
+): Promise<Database> {
   const sequelize = await connectPostgres(url);
   try {
     await sequelize.transaction(async (transaction) => {
@@ -137,7 +140,8 @@ async function openPostgres(url: string): Promise<Database> {
   return {
     sequelize,
     dialect: 'postgres',
-    write: postgresWrite(sequelize),
+    // How long a write keeps trying after lost races: the same setting as SQLite's busy wait.
+    write: postgresWrite(sequelize, busyTimeoutMs),
     close: () => sequelize.close(),
   };
 }
@@ -148,7 +152,7 @@ async function openPostgres(url: string): Promise<Database> {
  * Applies pending migrations. Never uses sync(): the schema is migrations only.
  */
 export async function openDatabase(location: string, options: OpenOptions = {}): Promise<Database> {
-  return isPostgresUrl(location) ? openPostgres(location) : openSqlite(location, options);
+  return isPostgresUrl(location) ? openPostgres(location, options) : openSqlite(location, options);
 }
 
 async function openSqlite(

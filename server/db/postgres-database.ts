@@ -7,21 +7,24 @@ export function isPostgresUrl(location: string): boolean {
   return /^postgres(ql)?:\/\//.test(location);
 }
 
-/** Pauses between tries of a write that lost a race, in milliseconds (jittered): about 3 s. */
-const CONFLICT_PAUSES = [5, 10, 20, 40, 80, 160, 320, 500, 800, 1000];
+/** Pauses between tries of a write that lost a race, in milliseconds (jittered), the last repeated. */
+const CONFLICT_PAUSES = [5, 10, 20, 40, 80, 160, 250];
 
 /**
  * Runs a whole write transaction again after a serialization failure or a deadlock, which
- * PostgreSQL rolled back whole. The pause is jittered so that two writers that collided do not
- * collide again on the next try.
+ * PostgreSQL rolled back whole. Each round of a race lets at least one writer through, so tries
+ * go on (as SQLite's writers wait for its lock) until `patienceMs` has gone by since the first;
+ * the pause is jittered so that two writers that collided do not collide again on the next try.
  */
-export async function retryConflicts<T>(work: () => Promise<T>): Promise<T> {
+export async function retryConflicts<T>(work: () => Promise<T>, patienceMs = 10_000): Promise<T> {
+  const started = Date.now();
   for (let attempt = 0; ; attempt++) {
     try {
       return await work();
     } catch (error) {
-      if (!isWriteConflict(error) || attempt >= CONFLICT_PAUSES.length) throw error;
-      const pause = CONFLICT_PAUSES[attempt] * (0.5 + Math.random());
+      const pause =
+        CONFLICT_PAUSES[Math.min(attempt, CONFLICT_PAUSES.length - 1)] * (0.5 + Math.random());
+      if (!isWriteConflict(error) || Date.now() - started + pause > patienceMs) throw error;
       await new Promise((resolve) => setTimeout(resolve, pause));
     }
   }
@@ -55,9 +58,11 @@ export async function connectPostgres(url: string): Promise<Sequelize> {
  * serialization failure, any that could not have run one after the other; that one runs again.
  * Nothing queues the writers in this process, which SQLite needed and PostgreSQL does not.
  */
-export function postgresWrite(sequelize: Sequelize): Database['write'] {
+export function postgresWrite(sequelize: Sequelize, patienceMs: number): Database['write'] {
   return (work) =>
-    retryConflicts(() =>
-      sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.SERIALIZABLE }, work),
+    retryConflicts(
+      () =>
+        sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.SERIALIZABLE }, work),
+      patienceMs,
     );
 }
