@@ -26,6 +26,7 @@ export const BUNDLES = {
     external: [
       'sequelize',
       'sqlite3',
+      'pg',
       'umzug',
       'connect-session-sequelize',
       'express-session',

@@ -11,8 +11,13 @@ export interface ServerConfig {
   readonly port: number;
   /** Folder for the database file and other data. */
   readonly dataDir: string;
-  /** The SQLite database file. */
+  /** The SQLite database file (unused when databaseUrl is set). */
   readonly databaseFile: string;
+  /**
+   * postgres:// URL of a PostgreSQL database (LARDER_DB_URL) for a group of kitchens or several
+   * server processes; null keeps the records in the SQLite file.
+   */
+  readonly databaseUrl: string | null;
   /** The folder of formula YAML files: the source of truth for formulas. */
   readonly formulasDir: string;
   readonly sessionSecret: string;
@@ -118,6 +123,13 @@ function url(env: NodeJS.ProcessEnv, name: string, protocols: readonly string[])
   return text;
 }
 
+/** Where the records are kept: the PostgreSQL URL when one is set, else the SQLite file. */
+export function databaseLocation(
+  config: Pick<ServerConfig, 'databaseFile' | 'databaseUrl'>,
+): string {
+  return config.databaseUrl ?? config.databaseFile;
+}
+
 /**
  * Reads and checks the settings. Production refuses to start without a real session secret.
  * @throws ConfigError naming the setting at fault
@@ -156,6 +168,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     port: integer(env, 'LARDER_PORT', 4310, 0, 65535),
     dataDir,
     databaseFile: path.resolve(env.LARDER_DB ?? path.join(dataDir, 'larderbook.sqlite')),
+    databaseUrl: url(env, 'LARDER_DB_URL', ['postgres:', 'postgresql:']),
     // The demo edits a copy of the demo formulas in its data folder, never the checkout's own files.
     formulasDir: path.resolve(
       env.LARDER_FORMULAS ?? (mode === 'demo' ? path.join(dataDir, 'formulas') : 'formulas'),

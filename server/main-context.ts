@@ -2,7 +2,7 @@ import path from 'node:path';
 import type { AppContext } from './app-context.ts';
 import { AuditRepository } from './audit/audit-repository.ts';
 import { BatchRepository } from './batches/batch-repository.ts';
-import type { ServerConfig } from './config.ts';
+import { databaseLocation, type ServerConfig } from './config.ts';
 import { openDatabase } from './db/database.ts';
 import { FormulaHistory } from './formulas/formula-history.ts';
 import { FormulaStore } from './formulas/formula-store.ts';
@@ -28,7 +28,7 @@ export async function openContext(
       `Removed ${path.join(config.formulasDir, name)}: left over from a formula save that did not finish`,
     );
   }
-  const db = await openDatabase(config.databaseFile, { busyTimeoutMs: config.busyTimeoutMs });
+  const db = await openDatabase(databaseLocation(config), { busyTimeoutMs: config.busyTimeoutMs });
   const audit = new AuditRepository(db);
   const people = new PeopleRepository(db);
   const formulas = new FormulaStore(config.formulasDir, { watch: true });

@@ -1,4 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import { insertNew } from '../db/insert-row.ts';
 import { appendChange } from '../audit/append-change.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
@@ -104,37 +105,35 @@ export class BatchWrites {
         `${MAX_LOT_SEQUENCE} batches of ${batch.formula.title} already start on ${dayWords(batch.startedOn)}`,
       );
     const lot = lotCode(prefix, sequence);
-    const [id] = (await this.db.sequelize.query(
+    const id = await insertNew(
+      this.db,
       `INSERT INTO batches (lot_code, formula_id, formula_revision, formula_title, kind, status,
          operator_id, started_on, ready_on, recorded_at, updated_at, units, inputs, result,
          checks_passed, nitrite_ppm, notes, planned_by)
        VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
-      {
-        type: QueryTypes.INSERT,
-        transaction: t,
-        replacements: [
-          lot,
-          batch.formula.id,
-          batch.formula.revision,
-          batch.formula.title,
-          batch.kind,
-          batch.status,
-          batch.operatorId,
-          batch.startedOn,
-          batch.readyOn,
-          at,
-          at,
-          batch.units,
-          JSON.stringify(batch.inputs),
-          JSON.stringify(batch.result),
-          batch.checksPassed ? 1 : 0,
-          batch.nitritePpm,
-          batch.notes,
-          // Who recorded it as planned: kept when it is started, by them or someone else.
-          batch.status === 'planned' ? batch.operatorId : null,
-        ],
-      },
-    )) as unknown as [number, number];
+      [
+        lot,
+        batch.formula.id,
+        batch.formula.revision,
+        batch.formula.title,
+        batch.kind,
+        batch.status,
+        batch.operatorId,
+        batch.startedOn,
+        batch.readyOn,
+        at,
+        at,
+        batch.units,
+        JSON.stringify(batch.inputs),
+        JSON.stringify(batch.result),
+        batch.checksPassed ? 1 : 0,
+        batch.nitritePpm,
+        batch.notes,
+        // Who recorded it as planned: kept when it is started, by them or someone else.
+        batch.status === 'planned' ? batch.operatorId : null,
+      ],
+      t,
+    );
     await this.event(t, id, at, options, {
       type: 'recorded',
       from: null,

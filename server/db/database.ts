@@ -4,6 +4,7 @@ import { Sequelize, Transaction } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as initial from './migrations/001-initial.ts';
 import { WriteQueue, retryWhileBusy } from './write-queue.ts';
+import { connectPostgres, isPostgresUrl, postgresWrite } from './postgres-database.ts';
 import * as batchSortIndexes from './migrations/002-batch-sort-indexes.ts';
 import * as sessionCutoff from './migrations/003-session-cutoff.ts';
 import * as outbox from './migrations/004-outbox.ts';
@@ -58,7 +59,12 @@ const MIGRATIONS = [
 /** An open database: the Sequelize instance the repositories share. */
 export interface Database {
   readonly sequelize: Sequelize;
-  /** Runs `work` in one write transaction that takes the write lock at once (BEGIN IMMEDIATE). */
+  /** Which database: the embedded SQLite file, or a PostgreSQL server (LARDER_DB_URL). */
+  readonly dialect: 'sqlite' | 'postgres';
+  /**
+   * Runs `work` in one write transaction: on SQLite one that takes the write lock at once (BEGIN
+   * IMMEDIATE), on PostgreSQL a serializable one, run again when it loses a race.
+   */
   write<T>(work: (transaction: Transaction) => Promise<T>): Promise<T>;
   close(): Promise<void>;
 }
@@ -96,13 +102,64 @@ interface SqliteConnection {
   on(event: 'error', listener: (error: Error) => void): void;
 }
 
+/** Applies the migrations not applied yet, the same list on either database. */
+async function migrate(sequelize: Sequelize): Promise<void> {
+  const umzug = new Umzug({
+    migrations: MIGRATIONS.map((migration) => ({
+      name: migration.name,
+      up: () => migration.up(sequelize.getQueryInterface()),
+    })),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+  await umzug.up();
+}
+
 /**
- * Opens (creating if needed) the SQLite file, sets WAL mode and a busy timeout on every
- * connection, and applies pending migrations. Never uses sync(): the schema is migrations only.
+ * Connects to a PostgreSQL server's database and applies pending migrations. Two processes
+ * starting at once take turns: an advisory lock held for the migration keeps the second waiting.
  */
-export async function openDatabase(
+async function openPostgres(
+  url: string,
+  { busyTimeoutMs = BUSY_TIMEOUT_MS }: OpenOptions,
+): Promise<Database> {
+  const sequelize = await connectPostgres(url);
+  try {
+    await sequelize.transaction(async (transaction) => {
+      // Any fixed number names the lock: it is this database's migration lock.
+      await sequelize.query('SELECT pg_advisory_xact_lock(1765)', { transaction });
+      await migrate(sequelize);
+    });
+  } catch (error) {
+    await sequelize.close();
+    const where = new URL(url);
+    // Say which server, without its password.
+    throw new Error(
+      `cannot open the database ${where.hostname}:${where.port || 5432}${where.pathname}: ${(error as Error).message}`,
+      { cause: error },
+    );
+  }
+  return {
+    sequelize,
+    dialect: 'postgres',
+    // How long a write keeps trying after lost races: the same setting as SQLite's busy wait.
+    write: postgresWrite(sequelize, busyTimeoutMs),
+    close: () => sequelize.close(),
+  };
+}
+
+/**
+ * Opens the database: a PostgreSQL server when `location` is a postgres:// URL, else the SQLite
+ * file at that path (created if needed; WAL mode and a busy timeout on every connection).
+ * Applies pending migrations. Never uses sync(): the schema is migrations only.
+ */
+export async function openDatabase(location: string, options: OpenOptions = {}): Promise<Database> {
+  return isPostgresUrl(location) ? openPostgres(location, options) : openSqlite(location, options);
+}
+
+async function openSqlite(
   file: string,
-  { busyTimeoutMs = BUSY_TIMEOUT_MS }: OpenOptions = {},
+  { busyTimeoutMs = BUSY_TIMEOUT_MS }: OpenOptions,
 ): Promise<Database> {
   if (file !== ':memory:') mkdirSync(path.dirname(file), { recursive: true });
   const sequelize = new Sequelize({
@@ -123,18 +180,11 @@ export async function openDatabase(
       cause: error,
     });
   }
-  const umzug = new Umzug({
-    migrations: MIGRATIONS.map((migration) => ({
-      name: migration.name,
-      up: () => migration.up(sequelize.getQueryInterface()),
-    })),
-    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
-    logger: undefined,
-  });
-  await umzug.up();
+  await migrate(sequelize);
   const queue = new WriteQueue();
   return {
     sequelize,
+    dialect: 'sqlite',
     // One write transaction at a time in this process (see write-queue.ts), retried while another
     // process or an autocommit statement holds the lock.
     write: (work) =>

@@ -1,4 +1,5 @@
 import type { Sequelize } from 'sequelize';
+import { postgresRows } from './postgres-read.ts';
 
 type Callback<T> = (error: Error | null, value: T) => void;
 
@@ -72,6 +73,8 @@ export async function readRow<T>(
   sql: string,
   values: readonly (string | number)[],
 ): Promise<T | undefined> {
+  if (sequelize.getDialect() === 'postgres')
+    return (await postgresRows<T>(sequelize, sql, values))[0];
   const statement = await statementFor(await sharedConnection(sequelize), sql);
   return new Promise((resolve, reject) => {
     // all, not get: it steps the statement to its end, so no read transaction stays open on the
@@ -93,6 +96,7 @@ export async function readRows<T>(
   sql: string,
   values: readonly (string | number)[],
 ): Promise<T[]> {
+  if (sequelize.getDialect() === 'postgres') return postgresRows<T>(sequelize, sql, values);
   const connection = await sharedConnection(sequelize);
   return new Promise((resolve, reject) => {
     connection.all(sql, [...values], (error, rows) =>

@@ -1,4 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import { insertNew } from '../db/insert-row.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import type { FormulaRevision, RevisionSource } from '../../shared/api/formula-api.ts';
@@ -99,29 +100,27 @@ export class FormulaHistory {
 
   /** Records a revision; returns its row id. */
   async insert(revision: NewRevision, transaction: Transaction): Promise<number> {
-    // sqlite answers an INSERT with [last row id, rows changed]. Bound, not replaced into the SQL:
-    // a file's text may hold any character, and a NUL would end the statement early.
-    const [rowId] = (await this.db.sequelize.query(
+    // Bound, not replaced into the SQL: a file's text may hold any character, and a NUL would end
+    // the statement early.
+    return insertNew(
+      this.db,
       `INSERT INTO formula_revisions
          (formula_id, revision, yaml, title, kind, message, source, author_id, created_at)
        VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
-      {
-        bind: [
-          revision.formulaId,
-          revision.revision,
-          revision.yaml,
-          revision.title,
-          revision.kind,
-          revision.message,
-          revision.source,
-          revision.authorId,
-          new Date().toISOString(),
-        ],
-        type: QueryTypes.INSERT,
-        transaction,
-      },
-    )) as unknown as [number, number];
-    return rowId;
+      [
+        revision.formulaId,
+        revision.revision,
+        revision.yaml,
+        revision.title,
+        revision.kind,
+        revision.message,
+        revision.source,
+        revision.authorId,
+        new Date().toISOString(),
+      ],
+      transaction,
+      { bound: true },
+    );
   }
 
   /** Stores the git commit of a revision once git has made it. */

@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { ApiErrorBody } from '../../shared/api/api-error.ts';
 import { BatchError } from '../../shared/index.ts';
 import { RecordsError } from '../records/records-error.ts';
+import { postgresCode, postgresFault } from '../db/postgres-faults.ts';
 import { AppError } from './app-error.ts';
 import { appErrorOf } from './failure-status.ts';
 import { RetryLaterError } from './retry-later.ts';
@@ -31,13 +32,8 @@ function sqliteCode(error: unknown): string | undefined {
  */
 function storageError(error: unknown): AppError | undefined {
   const code = sqliteCode(error);
-  if (code === undefined) return undefined;
-  if (code.startsWith('SQLITE_BUSY') || code.startsWith('SQLITE_LOCKED'))
-    return new AppError(
-      503,
-      'database-busy',
-      'the database is locked by another program; nothing was saved, try again in a moment',
-    );
+  if (code === undefined) return postgresStorageError(error);
+  if (code.startsWith('SQLITE_BUSY') || code.startsWith('SQLITE_LOCKED')) return busy();
   if (code.startsWith('SQLITE_READONLY'))
     return new AppError(
       503,
@@ -53,6 +49,36 @@ function storageError(error: unknown): AppError | undefined {
       503,
       'database-unavailable',
       `the database cannot be written just now (${code}); nothing was saved`,
+    );
+  return undefined;
+}
+
+const busy = () =>
+  new AppError(
+    503,
+    'database-busy',
+    'the database is locked by another program; nothing was saved, try again in a moment',
+  );
+
+/**
+ * PostgreSQL's equivalents of SQLite's busy and read-only files, as the same 503s: conflicts that
+ * outlasted their tries are busy; a lost connection or a server restarting is unavailable.
+ * PostgreSQL rolled the transaction back: nothing was saved.
+ */
+function postgresStorageError(error: unknown): AppError | undefined {
+  const fault = postgresFault(error);
+  if (fault === 'busy') return busy();
+  if (fault === 'read-only')
+    return new AppError(
+      503,
+      'database-read-only',
+      'the database server takes no writes just now (it is read-only); nothing was saved',
+    );
+  if (fault === 'unavailable')
+    return new AppError(
+      503,
+      'database-unavailable',
+      `the database server cannot be reached just now (${postgresCode(error)}); nothing was saved`,
     );
   return undefined;
 }

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { QueryTypes, type Transaction } from 'sequelize';
+import { insertNew } from '../db/insert-row.ts';
 import type { Database } from '../db/database.ts';
 import type {
   MessageKind,
@@ -115,29 +116,26 @@ export class OutboxRepository {
         ? withoutToken(given, 'local')
         : given;
     const messageId = `<${randomBytes(12).toString('hex')}.larderbook@${this.idDomain}>`;
-    const [id] = (await this.db.sequelize.query(
+    return insertNew(
+      this.db,
       `INSERT INTO outbox (created_at, to_address, to_name, person_id, subject, text, html, kind,
          related, message_id, transport, state)
        VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 'pending')`,
-      {
-        type: QueryTypes.INSERT,
-        transaction,
-        replacements: [
-          this.now().toISOString(),
-          entry.to.address,
-          entry.to.name,
-          entry.personId,
-          entry.subject,
-          entry.text,
-          entry.html,
-          entry.kind,
-          entry.related,
-          messageId,
-          this.transport,
-        ],
-      },
-    )) as unknown as [number, number];
-    return id;
+      [
+        this.now().toISOString(),
+        entry.to.address,
+        entry.to.name,
+        entry.personId,
+        entry.subject,
+        entry.text,
+        entry.html,
+        entry.kind,
+        entry.related,
+        messageId,
+        this.transport,
+      ],
+      transaction,
+    );
   }
 
   /** The newest messages first, `limit` at a time, before the message with id `before`. */

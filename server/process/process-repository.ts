@@ -1,3 +1,4 @@
+import { jsonArrayText, jsonObject, type Dialect } from '../db/dialect-sql.ts';
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { BatchStatus } from '../../shared/api/batch-record.ts';
 import type {
@@ -73,11 +74,19 @@ const BATCH_SQL = `SELECT b.id, b.lot_code, b.status, b.formula_id, b.formula_re
 // driver building each of a day's thousands of rows as an object, column by column, took about
 // a third longer. The keys are the columns' names and SQLite's types are kept (integers as
 // numbers, text as strings, NULL as null), so each element is the row the driver would give.
-const READINGS_SQL = `SELECT json_group_array(json_object('id', x.id,
+const readingsSql = (dialect: Dialect) => `SELECT ${jsonArrayText(
+  dialect,
+  jsonObject(
+    dialect,
+    `'id', x.id,
   'recorded_by', x.recorded_by, 'recorded_at', x.recorded_at, 'corrects_id', x.corrects_id,
   'reason', x.reason, 'control', x.control, 'taken_at', x.taken_at, 'value', x.value,
-  'entered_as', x.entered_as, 'source', x.source) ORDER BY x.control, x.taken_at, x.id) AS rows
+  'entered_as', x.entered_as, 'source', x.source`,
+  ),
+  ' ORDER BY x.control, x.taken_at, x.id',
+)} AS rows
   FROM readings x WHERE x.batch_id = ?`;
+const READINGS_SQL = { sqlite: readingsSql('sqlite'), postgres: readingsSql('postgres') };
 
 const DEVIATIONS_SQL = `SELECT d.id, d.control, d.kind, d.what, d.opened_at, d.opened_by,
   op.display_name AS opener_name, d.dedupe_key
@@ -166,7 +175,11 @@ export class ProcessRepository {
 
   /** Every reading of a batch, corrected ones included (marked correctedBy). */
   async readings(batchId: number, t?: Transaction): Promise<Reading[]> {
-    const [array] = await this.select<{ rows: string }>(READINGS_SQL, [batchId], t);
+    const [array] = await this.select<{ rows: string }>(
+      READINGS_SQL[this.db.dialect],
+      [batchId],
+      t,
+    );
     const rows = JSON.parse(array.rows) as Omit<ReadingRow, 'recorder_name'>[];
     const ids = [
       ...new Set(rows.flatMap((row) => (row.recorded_by === null ? [] : [row.recorded_by]))),

@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { AuditRepository } from '../audit/audit-repository.ts';
 import { BatchRepository } from '../batches/batch-repository.ts';
-import type { ServerConfig } from '../config.ts';
+import { databaseLocation, type ServerConfig } from '../config.ts';
 import { openDatabase } from '../db/database.ts';
 import { FormulaHistory } from '../formulas/formula-history.ts';
 import { FormulaStore } from '../formulas/formula-store.ts';
@@ -16,7 +16,7 @@ export async function openLocalRecords(
   config: ServerConfig,
   formulasFolder: string = config.formulasDir,
 ): Promise<Records> {
-  const db = await openDatabase(config.databaseFile);
+  const db = await openDatabase(databaseLocation(config));
   const audit = new AuditRepository(db);
   return new Records({
     db,

@@ -7,6 +7,7 @@ import path from 'node:path';
 import sqlite3 from 'sqlite3';
 import { PASSWORDS, type DemoUser } from '../helpers/test-server.ts';
 import { REPO_ROOT } from '../helpers/run-larder.ts';
+import { testDatabaseEnv, testPostgresUrl } from '../helpers/test-database.ts';
 
 /** The part of a node:test context these helpers need. */
 export interface AfterHook {
@@ -58,6 +59,9 @@ export function chownTree(dir: string, { uid, gid }: RunAs): void {
 /** The database file of a data folder (LARDER_DB is left at its default). */
 export const databaseOf = (dataDir: string): string => path.join(dataDir, 'larderbook.sqlite');
 
+/** The PostgreSQL database settings of each data folder, when the suites run on PostgreSQL. */
+const databases = new Map<string, Record<string, string>>();
+
 /**
  * Starts server/main.ts through tsx (the source as it is, nothing to build) in demo mode on a
  * free port over `dataDir`, and waits until it listens. `as` runs it as another user.
@@ -73,6 +77,10 @@ export async function startServerProcess(
       ([name]) => !name.startsWith('LARDER_') && !name.startsWith('NODE_TEST'),
     ),
   );
+  // On the PostgreSQL cluster of `npm run test:pg`, one database per data folder: a restart on the
+  // same folder finds the records it left.
+  if (!env.LARDER_DB_URL && testPostgresUrl() && !databases.has(dataDir))
+    databases.set(dataDir, await testDatabaseEnv(t));
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
     cwd: REPO_ROOT,
     env: {
@@ -83,6 +91,7 @@ export async function startServerProcess(
       LARDER_CONSOLE: path.join(dataDir, 'no-console'),
       LARDER_SIGN_IN_LIMIT: '10000',
       LARDER_REMINDER_MINUTES: '1440',
+      ...databases.get(dataDir),
       ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],

@@ -8,6 +8,7 @@ import { loadConfig } from '../../server/config.ts';
 import { seedDemo } from '../../server/demo/seed-demo.ts';
 import { openContext } from '../../server/main-context.ts';
 import { REPO_ROOT } from './run-larder.ts';
+import { testDatabaseEnv } from './test-database.ts';
 
 /** The demo sign-ins the test server starts with. */
 export const PASSWORDS = {
@@ -106,8 +107,9 @@ export function clockFrom(day: string): () => Date {
 }
 
 /**
- * Starts the real server (createApp over a real SQLite file) on an ephemeral port, with the demo
- * people and a copy of formulas/, and stops it when the test ends.
+ * Starts the real server (createApp over a real SQLite file, or a fresh PostgreSQL database when
+ * LARDER_TEST_PG_URL is set) on an ephemeral port, with the demo people and a copy of formulas/,
+ * and stops it when the test ends.
  */
 export async function startTestServer(
   t: AfterHook,
@@ -119,7 +121,11 @@ export async function startTestServer(
   t.after(() => rmSync(dir, { recursive: true, force: true }));
   const formulasDir = path.join(dir, 'formulas');
   cpSync(path.join(REPO_ROOT, 'formulas'), formulasDir, { recursive: true });
+  // On the PostgreSQL cluster of `npm run test:pg`, a database of the test's own; the caller's
+  // LARDER_DB_URL (a second server on the same database) wins.
+  const database = env.LARDER_DB_URL ? {} : await testDatabaseEnv(t);
   const config = loadConfig({
+    ...database,
     LARDER_MODE: 'demo',
     LARDER_DATA: path.join(dir, 'data'),
     LARDER_FORMULAS: formulasDir,

@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { onPostgres, runStatements } from './run-statements.ts';
 
 /** The first schema: people, sessions, the audit log, formula revisions, batches and their events. */
 export const name = '001-initial';
@@ -94,7 +95,9 @@ const STATEMENTS = [
 ];
 
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  // PostgreSQL's case-insensitive text (usernames, as SQLite's COLLATE NOCASE), a trusted
+  // extension the database's owner may create.
+  if (onPostgres(queryInterface))
+    await queryInterface.sequelize.query('CREATE EXTENSION IF NOT EXISTS citext');
+  await runStatements(queryInterface, STATEMENTS);
 }

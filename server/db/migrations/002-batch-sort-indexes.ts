@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { runStatements } from './run-statements.ts';
 
 /**
  * Indexes for the batch log's other sort orders, so that every page, however deep, is a seek to
@@ -34,7 +35,5 @@ const STATEMENTS = [
 ];
 
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(queryInterface, STATEMENTS);
 }

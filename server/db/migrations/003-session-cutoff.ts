@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { statementFor } from './run-statements.ts';
 
 /**
  * A per-person cut-off for sessions: a password reset or a deactivation moves it to now, and any
@@ -7,5 +8,7 @@ import type { QueryInterface } from 'sequelize';
 export const name = '003-session-cutoff';
 
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.query('ALTER TABLE people ADD COLUMN sessions_valid_from TEXT');
+  await queryInterface.sequelize.query(
+    statementFor(queryInterface, 'ALTER TABLE people ADD COLUMN sessions_valid_from TEXT'),
+  );
 }

@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { runStatements } from './run-statements.ts';
 
 /**
  * The outbox: every message Larderbook sends (invitations, reminders), written in the same
@@ -33,7 +34,5 @@ const STATEMENTS = [
 ];
 
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(queryInterface, STATEMENTS);
 }

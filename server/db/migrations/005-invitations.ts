@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { runStatements } from './run-statements.ts';
 
 /**
  * Invitations to set a password: a single-use token per invitation, of which only the sha-256
@@ -21,7 +22,5 @@ const STATEMENTS = [
 ];
 
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(queryInterface, STATEMENTS);
 }

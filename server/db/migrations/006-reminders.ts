@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { runStatements } from './run-statements.ts';
 
 /**
  * Reminders: each person's choices (no row means the defaults of their role), and one row per
@@ -27,7 +28,5 @@ const STATEMENTS = [
 ];
 
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(queryInterface, STATEMENTS);
 }

@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { runStatements } from './run-statements.ts';
 
 /**
  * Process records (the HACCP side of a batch): readings at each control, weights as weighed,
@@ -123,7 +124,5 @@ const STATEMENTS = [
 ];
 
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(queryInterface, STATEMENTS);
 }

@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { runStatements } from './run-statements.ts';
 
 /**
  * A planned batch started on what was really there keeps its planned calculation: the batch's
@@ -12,7 +13,5 @@ export const name = '008-started-calculation';
 const STATEMENTS = ['ALTER TABLE batches ADD COLUMN planned_calculation TEXT'];
 
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(queryInterface, STATEMENTS);
 }

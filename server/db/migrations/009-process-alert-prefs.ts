@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { onPostgres, runStatements } from './run-statements.ts';
 
 /**
  * Process alerts (a reading overdue, a cooling stage near its deadline, a deviation opened):
@@ -38,8 +39,16 @@ const STATEMENTS = [
   "CREATE INDEX outbox_waiting ON outbox (id) WHERE state IN ('pending', 'sending')",
 ];
 
+/** PostgreSQL changes a CHECK in place (its name is PostgreSQL's own for a column's CHECK). */
+const POSTGRES_STATEMENTS = [
+  STATEMENTS[0],
+  `ALTER TABLE outbox DROP CONSTRAINT outbox_kind_check, ADD CONSTRAINT outbox_kind_check
+    CHECK (kind IN ('invitation', 'reminder-flip', 'reminder-ready', 'reminder-overdue', 'process-alert'))`,
+];
+
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(
+    queryInterface,
+    onPostgres(queryInterface) ? POSTGRES_STATEMENTS : STATEMENTS,
+  );
 }

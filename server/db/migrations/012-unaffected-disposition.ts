@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { onPostgres, runStatements } from './run-statements.ts';
 
 /**
  * A corrective action may say the product was not affected: the server closes so a deadline
@@ -32,8 +33,16 @@ const STATEMENTS = [
   'CREATE INDEX corrective_actions_deviation ON corrective_actions (deviation_id, id)',
 ];
 
+/** PostgreSQL changes a CHECK in place (its name is PostgreSQL's own for a column's CHECK). */
+const POSTGRES_STATEMENTS = [
+  `ALTER TABLE corrective_actions DROP CONSTRAINT corrective_actions_disposition_check,
+    ADD CONSTRAINT corrective_actions_disposition_check CHECK (disposition IN
+      ('recooked', 'rechilled', 'reworked', 'diverted', 'discarded', 'unaffected'))`,
+];
+
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(
+    queryInterface,
+    onPostgres(queryInterface) ? POSTGRES_STATEMENTS : STATEMENTS,
+  );
 }

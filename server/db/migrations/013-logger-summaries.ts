@@ -1,4 +1,5 @@
 import type { QueryInterface } from 'sequelize';
+import { onPostgres, runStatements } from './run-statements.ts';
 
 /**
  * A data logger's readings of a batch summed up per control as they are written: how many stand,
@@ -17,16 +18,16 @@ const STANDING = `x.source = 'logger' AND x.batch_id IS NOT NULL
   AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = x.id)`;
 
 /** The lowest (ASC) or highest (DESC) standing value of x's batch and control, earlier entry first. */
-const extreme = (order: 'ASC' | 'DESC') =>
+const extreme = (order: 'ASC' | 'DESC', real = 'REAL') =>
   `(SELECT m.value FROM readings m WHERE m.batch_id = x.batch_id AND m.control = x.control
      AND m.source = 'logger' AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = m.id)
-     ORDER BY CAST(m.value AS REAL) ${order}, m.id LIMIT 1)`;
+     ORDER BY CAST(m.value AS ${real}) ${order}, m.id LIMIT 1)`;
 
 /** Sums up the standing logger readings of the groups `where` picks, from the readings table. */
-const summed = (where: string) =>
+const summed = (where: string, real = 'REAL') =>
   `INSERT INTO logger_summaries (batch_id, control, readings, first_at, last_at, lowest, highest)
    SELECT x.batch_id, x.control, COUNT(*), MIN(x.taken_at), MAX(x.taken_at),
-     ${extreme('ASC')}, ${extreme('DESC')}
+     ${extreme('ASC', real)}, ${extreme('DESC', real)}
    FROM readings x WHERE ${where} AND ${STANDING}
    GROUP BY x.batch_id, x.control`;
 
@@ -89,8 +90,62 @@ const STATEMENTS = [
    WHERE source <> 'logger'`,
 ];
 
+// PostgreSQL's REAL is 4 bytes; SQLite's is 8, which is DOUBLE PRECISION.
+const DOUBLE = 'DOUBLE PRECISION';
+
+/**
+ * The same table kept by PostgreSQL's triggers, which call functions: one sums up a batch's
+ * control again, one handles a reading written, one a reading changed or removed.
+ */
+const POSTGRES_STATEMENTS = [
+  STATEMENTS[0],
+  `CREATE FUNCTION logger_summaries_again(b BIGINT, c TEXT) RETURNS void LANGUAGE plpgsql AS $fn$
+   BEGIN
+     DELETE FROM logger_summaries WHERE batch_id = b AND control = c;
+     ${summed('x.batch_id = b AND x.control = c', DOUBLE)};
+   END $fn$`,
+  `CREATE FUNCTION logger_summaries_written() RETURNS trigger LANGUAGE plpgsql AS $fn$
+   BEGIN
+     IF NEW.source = 'logger' AND NEW.batch_id IS NOT NULL AND NEW.corrects_id IS NULL
+       AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = NEW.id) THEN
+       INSERT INTO logger_summaries AS s (batch_id, control, readings, first_at, last_at, lowest, highest)
+       VALUES (NEW.batch_id, NEW.control, 1, NEW.taken_at, NEW.taken_at, NEW.value, NEW.value)
+       ON CONFLICT (batch_id, control) DO UPDATE SET
+         readings = s.readings + 1,
+         first_at = LEAST(s.first_at, excluded.first_at),
+         last_at = GREATEST(s.last_at, excluded.last_at),
+         lowest = CASE WHEN CAST(excluded.lowest AS ${DOUBLE}) < CAST(s.lowest AS ${DOUBLE})
+           THEN excluded.lowest ELSE s.lowest END,
+         highest = CASE WHEN CAST(excluded.highest AS ${DOUBLE}) > CAST(s.highest AS ${DOUBLE})
+           THEN excluded.highest ELSE s.highest END;
+     END IF;
+     IF NEW.corrects_id IS NOT NULL THEN
+       PERFORM logger_summaries_again(${corrected('NEW').join(', ')});
+       PERFORM logger_summaries_again(NEW.batch_id, NEW.control);
+     END IF;
+     RETURN NULL;
+   END $fn$`,
+  `CREATE FUNCTION logger_summaries_changed() RETURNS trigger LANGUAGE plpgsql AS $fn$
+   BEGIN
+     PERFORM logger_summaries_again(OLD.batch_id, OLD.control);
+     PERFORM logger_summaries_again(${corrected('OLD').join(', ')});
+     IF TG_OP = 'UPDATE' THEN
+       PERFORM logger_summaries_again(NEW.batch_id, NEW.control);
+       PERFORM logger_summaries_again(${corrected('NEW').join(', ')});
+     END IF;
+     RETURN NULL;
+   END $fn$`,
+  `CREATE TRIGGER logger_summaries_add AFTER INSERT ON readings
+   FOR EACH ROW EXECUTE FUNCTION logger_summaries_written()`,
+  `CREATE TRIGGER logger_summaries_update AFTER UPDATE OR DELETE ON readings
+   FOR EACH ROW EXECUTE FUNCTION logger_summaries_changed()`,
+  summed('1 = 1', DOUBLE),
+  STATEMENTS[STATEMENTS.length - 1],
+];
+
 export async function up(queryInterface: QueryInterface): Promise<void> {
-  await queryInterface.sequelize.transaction(async (transaction) => {
-    for (const sql of STATEMENTS) await queryInterface.sequelize.query(sql, { transaction });
-  });
+  await runStatements(
+    queryInterface,
+    onPostgres(queryInterface) ? POSTGRES_STATEMENTS : STATEMENTS,
+  );
 }

@@ -1,0 +1,51 @@
+// `npm run test:pg`: the API and fault suites that pass on PostgreSQL so far (listed in
+// tests/postgres-suites-passing-so-far.txt, which grows until it names them all), run against a
+// throw-away cluster started for them and stopped afterwards, whether they pass or not.
+import { spawn } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { startCluster, stopCluster } from './pg-cluster.mjs';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+const LIST = path.join(root, 'tests/postgres-suites-passing-so-far.txt');
+
+/** The spec files of the list: one a line, # starts a comment. */
+const suites = readFileSync(LIST, 'utf8')
+  .split('\n')
+  .map((line) => line.replace(/#.*/, '').trim())
+  .filter(Boolean);
+
+// A cluster already running (CI starts one and stops it in a trap) is used as it is.
+const given = process.env.LARDER_TEST_PG_URL;
+const { url, dir } = given ? { url: given, dir: null } : await startCluster();
+let stopped = false;
+const stop = () => {
+  if (stopped || !dir) return;
+  stopped = true;
+  stopCluster(dir);
+};
+// An interrupted run stops its cluster too: nothing is left behind.
+for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'])
+  process.on(signal, () => {
+    stop();
+    process.exit(130);
+  });
+try {
+  process.stdout.write(
+    `PostgreSQL suites (${suites.length}) on ${dir ? `a throw-away cluster in ${dir}` : 'the cluster of LARDER_TEST_PG_URL'}\n`,
+  );
+  // Five minutes a test, not two: every test server seeds the demo, which takes several times
+  // longer on PostgreSQL (one round trip a statement) than on the embedded file.
+  const code = await new Promise((resolve) => {
+    const child = spawn(
+      process.execPath,
+      ['--import', 'tsx', '--test', '--test-timeout=300000', ...suites],
+      { cwd: root, stdio: 'inherit', env: { ...process.env, LARDER_TEST_PG_URL: url } },
+    );
+    child.once('exit', (exitCode, signal) => resolve(exitCode ?? (signal ? 1 : 0)));
+  });
+  process.exitCode = code;
+} finally {
+  stop();
+}

@@ -1,0 +1,47 @@
+// A fresh PostgreSQL database for each test server when LARDER_TEST_PG_URL names a cluster
+// (`npm run test:pg` starts a throw-away one); nothing at all when it is not set (SQLite).
+import { randomBytes } from 'node:crypto';
+import pg from 'pg';
+
+/** The part of a node:test context these helpers need. */
+interface AfterHook {
+  after(fn: () => unknown): void;
+}
+
+/** The admin URL of the PostgreSQL cluster the suites run against, or undefined for SQLite. */
+export function testPostgresUrl(): string | undefined {
+  return process.env.LARDER_TEST_PG_URL || undefined;
+}
+
+/** Runs one statement as the cluster's admin, on a connection of its own. */
+async function asAdmin(adminUrl: string, sql: string): Promise<void> {
+  const client = new pg.Client({ connectionString: adminUrl });
+  await client.connect();
+  try {
+    await client.query(sql);
+  } finally {
+    await client.end();
+  }
+}
+
+/**
+ * Creates an empty database with a random name on the test cluster and drops it when the test
+ * ends (its connections ended first, WITH FORCE); returns its URL.
+ */
+export async function freshPostgresDatabase(t: AfterHook, adminUrl: string): Promise<string> {
+  const name = `larder_test_${randomBytes(6).toString('hex')}`;
+  await asAdmin(adminUrl, `CREATE DATABASE ${name}`);
+  t.after(() => asAdmin(adminUrl, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`));
+  const url = new URL(adminUrl);
+  url.pathname = `/${name}`;
+  return url.toString();
+}
+
+/**
+ * The database settings of a test server: LARDER_DB_URL of a fresh database on the test cluster,
+ * or none (the SQLite file in the server's data folder).
+ */
+export async function testDatabaseEnv(t: AfterHook): Promise<Record<string, string>> {
+  const adminUrl = testPostgresUrl();
+  return adminUrl ? { LARDER_DB_URL: await freshPostgresDatabase(t, adminUrl) } : {};
+}
