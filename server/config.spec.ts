@@ -55,3 +55,12 @@ describe('settings for running behind a reverse proxy', () => {
     assert.equal(config.httpsOnly, false);
   });
 });
+
+describe('the number of server processes', () => {
+  it('should run one server process on SQLite unless LARDER_PROCESSES asks for more', () => {
+    assert.equal(loadConfig({}).processes, 1);
+    assert.equal(loadConfig({ LARDER_PROCESSES: '2' }).processes, 2);
+    assert.throws(() => loadConfig({ LARDER_PROCESSES: '0' }), ConfigError);
+    assert.throws(() => loadConfig({ LARDER_PROCESSES: 'many' }), /LARDER_PROCESSES must be/);
+  });
+});
