@@ -21,6 +21,7 @@ import * as stock from './migrations/015-stock.ts';
 import * as lotUsesReplaced from './migrations/016-lot-uses-replaced.ts';
 import * as receiptJudgement from './migrations/017-receipt-judgement.ts';
 import * as costIndexes from './migrations/018-cost-indexes.ts';
+import * as signInAttempts from './migrations/020-sign-in-attempts.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -51,6 +52,7 @@ const MIGRATIONS = [
   lotUsesReplaced,
   receiptJudgement,
   costIndexes,
+  signInAttempts,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */
