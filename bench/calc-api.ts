@@ -46,9 +46,11 @@ async function run(url: string, headers: Record<string, string>, pid?: number): 
 /** Starts bench/bare-route.ts answering `body`; returns its URL and how to stop it. */
 async function startBareRoute(
   body: string,
+  processes = 1,
 ): Promise<{ url: string; pid?: number; stop: () => Promise<void> }> {
   const child = spawn(process.execPath, ['--import', 'tsx', 'bench/bare-route.ts'], {
     stdio: ['pipe', 'pipe', 'inherit'],
+    env: { ...process.env, BARE_PROCESSES: String(processes) },
   });
   child.stdin.end(body);
   const port = await new Promise<string>((resolve, reject) => {
@@ -79,9 +81,14 @@ function line(label: string, ours: Run, bare: number): string {
   );
 }
 
-/** Runs the comparison and prints it. */
-export async function benchCalcApi(): Promise<{ ratio: number; p99: number; rssMb: number }> {
-  const server = await startBenchServer();
+/**
+ * Runs the comparison and prints it, with `processes` server processes and as many bare-route
+ * processes (like for like).
+ */
+export async function benchCalcApi(
+  processes = 1,
+): Promise<{ ratio: number; p99: number; rssMb: number; perSecond: number }> {
+  const server = await startBenchServer({ LARDER_PROCESSES: String(processes) });
   try {
     const { cookie, csrf } = await signInCookie(server.url, 'imke', 'quillmoor-review');
     const session = { cookie, 'x-csrf-token': csrf };
@@ -94,7 +101,7 @@ export async function benchCalcApi(): Promise<{ ratio: number; p99: number; rssM
     const sample = await response.text();
     if (response.status !== 200) throw new Error(`POST /api/calc: HTTP ${response.status}`);
 
-    const bareRoute = await startBareRoute(sample);
+    const bareRoute = await startBareRoute(sample, processes);
     let before: Run;
     let after: Run;
     let cookieRun: Run;
@@ -115,13 +122,18 @@ export async function benchCalcApi(): Promise<{ ratio: number; p99: number; rssM
     const bare = (before.perSecond + after.perSecond) / 2;
     const rssMb = server.peakRssMb();
     process.stdout.write(
-      `POST /api/calc (${CONNECTIONS} connections, ${SECONDS} s per run, ${sample.length} B answer)\n` +
+      `POST /api/calc (${processes} process${processes > 1 ? 'es' : ''} each, ${CONNECTIONS} connections, ${SECONDS} s per run, ${sample.length} B answer)\n` +
         `  bare Express route: ${bare.toFixed(0)} req/s (${before.perSecond.toFixed(0)} before, ${after.perSecond.toFixed(0)} after), p99 ${Math.max(before.p99, after.p99)} ms, ${((before.cpuMs + after.cpuMs) / 2).toFixed(2)} ms of CPU a request\n` +
         line('signed in (session cookie)', cookieRun, bare) +
         line('HTTP Basic', basicRun, bare) +
         `  server peak RSS ${rssMb.toFixed(0)} MB (target ≤ 250 MB)\n`,
     );
-    return { ratio: cookieRun.perSecond / bare, p99: cookieRun.p99, rssMb };
+    return {
+      ratio: cookieRun.perSecond / bare,
+      p99: cookieRun.p99,
+      rssMb,
+      perSecond: cookieRun.perSecond,
+    };
   } finally {
     await server.stop();
   }

@@ -35,8 +35,10 @@ function percentile(sorted: readonly number[], p: number): number {
 }
 
 /** Runs the recording burst and prints it. */
-export async function benchRecordBatches(): Promise<{ perSecond: number; consistent: boolean }> {
-  const server = await startBenchServer();
+export async function benchRecordBatches(
+  processes = 1,
+): Promise<{ perSecond: number; consistent: boolean }> {
+  const server = await startBenchServer({ LARDER_PROCESSES: String(processes) });
   try {
     const { cookie, csrf } = await signInCookie(server.url, 'tobin', 'quillmoor-cook');
     const headers = { cookie, 'x-csrf-token': csrf, 'content-type': 'application/json' };
@@ -70,7 +72,7 @@ export async function benchRecordBatches(): Promise<{ perSecond: number; consist
     const others = [...refused].map(([status, n]) => `${n} × HTTP ${status}`).join(', ') || 'none';
     const rssMb = server.peakRssMb();
     process.stdout.write(
-      `Recording batches (${CLIENTS} clients, ${SECONDS} s, POST /api/batches)\n` +
+      `Recording batches (${processes} server process${processes > 1 ? 'es' : ''}, ${CLIENTS} clients, ${SECONDS} s, POST /api/batches)\n` +
         `  ${perSecond.toFixed(0)} records/s, p50 ${percentile(times, 50).toFixed(0)} ms, p99 ${percentile(times, 99).toFixed(0)} ms; other answers: ${others}\n` +
         `  acknowledged (201) ${acknowledged}, new in the database ${stored}: ${stored === acknowledged ? 'equal' : 'DIFFERENT'}\n` +
         `  server peak RSS ${rssMb.toFixed(0)} MB (target ≤ 250 MB)\n`,

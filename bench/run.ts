@@ -11,12 +11,25 @@ import { benchProcessRecords } from './process-records.ts';
 import { benchRecall } from './recall.ts';
 import { benchRecordBatches } from './record-batches.ts';
 
+/** Runs a benchmark with one server process, then two, and prints the ratio of the two. */
+function oneThenTwo(
+  bench: (processes: number) => Promise<{ perSecond: number }>,
+): () => Promise<void> {
+  return async () => {
+    const one = await bench(1);
+    const two = await bench(2);
+    process.stdout.write(
+      `  N = 2 against N = 1: ${(two.perSecond / one.perSecond).toFixed(2)} × (${two.perSecond.toFixed(0)} against ${one.perSecond.toFixed(0)} per second)\n`,
+    );
+  };
+}
+
 const BENCHES: Record<string, () => unknown> = {
   'cli-start': benchCliStart,
   'check-many': benchCheckMany,
-  'calc-api': benchCalcApi,
+  'calc-api': oneThenTwo(benchCalcApi),
   'batch-log': benchBatchLog,
-  'record-batches': benchRecordBatches,
+  'record-batches': oneThenTwo(benchRecordBatches),
   'process-records': benchProcessRecords,
   recall: benchRecall,
   'console-bundle': benchConsoleBundle,

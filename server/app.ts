@@ -68,7 +68,12 @@ export function createApp(context: AppContext): Express {
   // No passport.initialize(): passport.authenticate() sets up the request itself, and Basic is
   // the one strategy, so the rest of the API need not pay for it.
   // One limit of sign-in attempts per address, whether by the form or by HTTP Basic.
-  const signIns = new SignIns(context.people, context.config.signInLimit, context.audit);
+  const signIns = new SignIns(
+    context.people,
+    context.config.signInLimit,
+    context.audit,
+    context.db,
+  );
   useBasicStrategy(signIns, context.audit);
   api.get('/health', (_req, res) => void res.json({ ok: true }));
   api.use(

@@ -76,3 +76,12 @@ describe('the database setting', () => {
     );
   });
 });
+
+describe('the number of server processes', () => {
+  it('should run one server process on SQLite unless LARDER_PROCESSES asks for more', () => {
+    assert.equal(loadConfig({}).processes, 1);
+    assert.equal(loadConfig({ LARDER_PROCESSES: '2' }).processes, 2);
+    assert.throws(() => loadConfig({ LARDER_PROCESSES: '0' }), ConfigError);
+    assert.throws(() => loadConfig({ LARDER_PROCESSES: 'many' }), /LARDER_PROCESSES must be/);
+  });
+});

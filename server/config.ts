@@ -57,6 +57,24 @@ export interface ServerConfig {
   readonly httpsOnly: boolean;
   /** The sign-off and curing rules (shared/workflow/workflow-rules.ts); all on by default. */
   readonly workflow: WorkflowRules;
+  /**
+   * Server processes sharing the port (node:cluster): LARDER_PROCESSES, by default
+   * defaultProcesses() of the database in use.
+   */
+  readonly processes: number;
+}
+
+/** The most server processes LARDER_PROCESSES may ask for. */
+const MAX_PROCESSES = 64;
+
+/**
+ * How many server processes run when LARDER_PROCESSES is not set. SQLite has one writer at a
+ * time, so more processes only queue for its lock: one. PostgreSQL takes writers in parallel and
+ * will default to one process per CPU (os.availableParallelism()) once it lands: this is the
+ * place to say so, by the database the settings choose.
+ */
+export function defaultProcesses(_env: NodeJS.ProcessEnv): number {
+  return 1;
 }
 
 /** Proxies to believe: none (false), the nearest N hops, or a list of addresses and subnets. */
@@ -188,6 +206,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     trustProxy,
     httpsOnly,
     workflow: workflowRules(env),
+    processes: integer(env, 'LARDER_PROCESSES', defaultProcesses(env), 1, MAX_PROCESSES),
   };
 }
 

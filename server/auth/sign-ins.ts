@@ -1,4 +1,5 @@
 import type { AuditRepository } from '../audit/audit-repository.ts';
+import type { Database } from '../db/database.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
 import type { Person } from '../../shared/api/person.ts';
 import { verifyPassword } from './passwords.ts';
@@ -20,8 +21,9 @@ export class SignIns {
     private readonly people: PeopleRepository,
     limit: number,
     private readonly audit: AuditRepository,
+    db: Database,
   ) {
-    this.attempts = new SignInAttempts(limit);
+    this.attempts = new SignInAttempts(db, limit);
   }
 
   /**
@@ -59,20 +61,20 @@ export class SignIns {
     password: string,
     remember: boolean,
   ): Promise<Person | undefined> {
-    this.attempts.admit(address);
+    await this.attempts.admit(address);
     const account = await this.people.credentials(username);
     const person = account?.person.active ? account.person : undefined;
     const verify = async (): Promise<boolean> => {
-      const attempt = this.attempts.begin(address);
+      const attempt = await this.attempts.begin(address);
       let right: boolean;
       try {
         right = await verifyPassword(password, account?.passwordHash, 'sign-in');
       } catch (error) {
         // Never checked (the queue was full, or the hash failed): it was no wrong guess.
-        attempt.end(false);
+        await attempt.end(false);
         throw error;
       }
-      attempt.end(!(right && person));
+      await attempt.end(!(right && person));
       return right;
     };
     const right =

@@ -23,6 +23,7 @@ import * as lotUsesReplaced from './migrations/016-lot-uses-replaced.ts';
 import * as receiptJudgement from './migrations/017-receipt-judgement.ts';
 import * as costIndexes from './migrations/018-cost-indexes.ts';
 import * as formulaStatusIndex from './migrations/019-formula-status-index.ts';
+import * as signInAttempts from './migrations/020-sign-in-attempts.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -54,6 +55,7 @@ const MIGRATIONS = [
   receiptJudgement,
   costIndexes,
   formulaStatusIndex,
+  signInAttempts,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

@@ -64,7 +64,8 @@ const databases = new Map<string, Record<string, string>>();
 
 /**
  * Starts server/main.ts through tsx (the source as it is, nothing to build) in demo mode on a
- * free port over `dataDir`, and waits until it listens. `as` runs it as another user.
+ * free port over `dataDir`, and waits until it listens (90 s: several processes on a busy machine
+ * are slow to start). `as` runs it as another user.
  */
 export async function startServerProcess(
   t: AfterHook,
@@ -109,8 +110,8 @@ export async function startServerProcess(
   });
   const url = await new Promise<string>((resolve, reject) => {
     const timer = setTimeout(
-      () => reject(new Error(`the server did not listen within 30 s:\n${seen}`)),
-      30_000,
+      () => reject(new Error(`the server did not listen within 90 s:\n${seen}`)),
+      90_000,
     );
     const look = (): void => {
       const match = /at (http:\/\/[\d.]+:\d+)\//.exec(seen);

@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { AppContext } from '../../server/app-context.ts';
 import { createApp } from '../../server/app.ts';
+import { closeGracefully } from '../../server/cluster/graceful-close.ts';
 import { loadConfig } from '../../server/config.ts';
 import { seedDemo } from '../../server/demo/seed-demo.ts';
 import { openContext } from '../../server/main-context.ts';
@@ -140,10 +141,9 @@ export async function startTestServer(
     await new Promise<void>((resolve) => server.once('listening', () => resolve()));
     context.mail.links.listeningOn((server.address() as AddressInfo).port);
     const close = async (): Promise<void> => {
-      await new Promise<void>((resolve) => {
-        server.close(() => resolve());
-        server.closeAllConnections?.();
-      });
+      // As the server's own stop: requests in flight finish before the database closes, so none
+      // of them queries a closed database ("connection manager was closed", SQLITE_MISUSE).
+      await closeGracefully(server);
       context.formulas.close();
       await context.mail.close();
       await context.db.close();
