@@ -1,6 +1,6 @@
 // Starts the built server as its own process for benchmarks, on a fresh data folder.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { cpSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { buildBundle, BUNDLES } from '../scripts/bundles.mjs';
@@ -12,7 +12,7 @@ export interface BenchServer {
   readonly dataDir: string;
   /** Resident memory of the server process now, in MB. */
   rssMb(): number;
-  /** The most resident memory the server process has held since it started (VmHWM), in MB. */
+  /** The most resident memory a server process has held since it started (VmHWM), in MB. */
   peakRssMb(): number;
   /** CPU time the server has used so far, seconds (Linux: /proc/PID/stat); 0 where there is no /proc. */
   cpuSeconds(): number;
@@ -60,14 +60,19 @@ export async function startBenchServer(
     );
   });
   // Linux's account of the process; 0 where there is no /proc.
-  const statusMb = (field: 'VmRSS' | 'VmHWM'): number => {
-    try {
-      const status = readFileSync(`/proc/${child.pid}/status`, 'utf8');
-      return Number(new RegExp(`${field}:\\s+(\\d+) kB`).exec(status)?.[1] ?? 0) / 1024;
-    } catch {
-      return 0;
-    }
-  };
+  // With several processes, the largest of them: the target is per process.
+  const statusMb = (field: 'VmRSS' | 'VmHWM'): number =>
+    Math.max(
+      0,
+      ...familyOf(child.pid ?? 0).map((pid) => {
+        try {
+          const status = readFileSync(`/proc/${pid}/status`, 'utf8');
+          return Number(new RegExp(`${field}:\\s+(\\d+) kB`).exec(status)?.[1] ?? 0) / 1024;
+        } catch {
+          return 0;
+        }
+      }),
+    );
   return {
     url,
     child,
@@ -77,7 +82,7 @@ export async function startBenchServer(
     cpuSeconds: () => processCpuSeconds(child.pid),
     resetPeakRss: () => {
       try {
-        writeFileSync(`/proc/${child.pid}/clear_refs`, '5');
+        for (const pid of familyOf(child.pid ?? 0)) writeFileSync(`/proc/${pid}/clear_refs`, '5');
         return true;
       } catch {
         return false;
@@ -92,15 +97,36 @@ export async function startBenchServer(
   };
 }
 
-/** CPU time a process has used so far, seconds (Linux: /proc/PID/stat); 0 where there is no /proc. */
-export function processCpuSeconds(pid: number | undefined): number {
+/** One process's /proc/PID/stat fields after its name: state, ppid, …; null where there is none. */
+function statFields(pid: number | string): string[] | null {
   try {
-    // utime and stime, the 14th and 15th fields, in clock ticks of 1/100 s.
-    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
-    return (Number(fields[11]) + Number(fields[12])) / 100;
+    return readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
   } catch {
-    return 0;
+    return null;
   }
+}
+
+/** A process and its live children (the workers of a server of several processes), by pid. */
+function familyOf(pid: number): number[] {
+  const children = readdirSync('/proc')
+    .filter((entry) => /^\d+$/.test(entry) && Number(statFields(entry)?.[1]) === pid)
+    .map(Number);
+  return [pid, ...children];
+}
+
+/**
+ * CPU time a process and its live children have used so far, seconds (Linux: /proc/PID/stat);
+ * 0 where there is no /proc.
+ */
+export function processCpuSeconds(pid: number | undefined): number {
+  if (pid === undefined) return 0;
+  // utime and stime, the 14th and 15th fields, in clock ticks of 1/100 s.
+  return familyOf(pid)
+    .map((one) => statFields(one))
+    .reduce(
+      (total, fields) => total + (fields ? (Number(fields[11]) + Number(fields[12])) / 100 : 0),
+      0,
+    );
 }
 
 /** Signs in through the form and returns the cookie and CSRF token. */
