@@ -1,7 +1,12 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { Locator } from 'playwright-core';
-import { collectConsoleErrors, dialogSettled, startConsole } from './browser.ts';
+import {
+  collectConsoleErrors,
+  dialogSettled,
+  startConsole,
+  type ConsoleSession,
+} from './browser.ts';
 import { shoot, shootAtWidths } from './screens.ts';
 
 /** A day ahead of today on this machine, YYYY-MM-DD. */
@@ -12,6 +17,17 @@ const inDays = (days: number): string =>
 async function typeDay(box: Locator, day: string): Promise<void> {
   await box.fill(day);
   await box.press('Tab');
+}
+
+/** Plans a batch of the demo's belly for today, as Rosa; its lot code. */
+async function plannedBelly({ server }: ConsoleSession): Promise<string> {
+  const planned = await server.as('rosa').post('/api/batches', {
+    formula: 'quillmoor-belly',
+    batch: { meat: '4.26kg', thickness: '4cm', start: inDays(0) },
+    status: 'planned',
+  });
+  assert.equal(planned.status, 201, planned.text);
+  return planned.json.batch.lotCode as string;
 }
 
 describe('date boxes in the console', () => {
@@ -69,13 +85,7 @@ describe('date boxes in the console', () => {
     await shootAtWidths(session, page, 'date-boxes-audit');
 
     // A planned batch's start dialog: the start day in words, and the warning names that day.
-    const planned = await server.as('rosa').post('/api/batches', {
-      formula: 'quillmoor-belly',
-      batch: { meat: '4.26kg', thickness: '4cm', start: inDays(0) },
-      status: 'planned',
-    });
-    assert.equal(planned.status, 201, planned.text);
-    const plannedLot = planned.json.batch.lotCode as string;
+    const plannedLot = await plannedBelly(session);
     await page.goto(`${server.url}/batches/${plannedLot}`, { waitUntil: 'networkidle' });
     await page.getByTestId('start-batch').click();
     const dialog = page.getByTestId('start-dialog');
@@ -89,6 +99,39 @@ describe('date boxes in the console', () => {
       await page.setViewportSize({ width, height: width === 390 ? 844 : 1000 });
       await shoot(session, page, `date-boxes-start-${width}`);
     }
+    assert.deepEqual(errors, []);
+  });
+
+  it('should keep a lot code on one line in a heading on a phone', async (t) => {
+    const session = await startConsole(t);
+    const { server } = session;
+    const lot = await plannedBelly(session);
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    await page.setViewportSize({ width: 390, height: 844 });
+    /** How many lines the lot code takes in the heading that names it. */
+    const linesOf = async (heading: Locator): Promise<number> =>
+      heading.evaluate((element, code) => {
+        const range = document.createRange();
+        const text = [...element.querySelectorAll('*'), element]
+          .flatMap((node) => [...node.childNodes])
+          .find((node) => node.nodeType === Node.TEXT_NODE && node.textContent?.includes(code))!;
+        const at = text.textContent!.indexOf(code);
+        range.setStart(text, at);
+        range.setEnd(text, at + code.length);
+        return new Set([...range.getClientRects()].map((rect) => Math.round(rect.top))).size;
+      }, lot);
+
+    await page.goto(`${server.url}/trace?lot=${lot}`, { waitUntil: 'networkidle' });
+    const recall = page.getByRole('heading', { name: `Recall report of lot ${lot}` });
+    await recall.waitFor();
+    assert.equal(await linesOf(recall), 1, 'the recall heading keeps the lot code whole');
+    await shoot(session, page, 'lot-code-trace-390');
+
+    await page.goto(`${server.url}/batches/${lot}`, { waitUntil: 'networkidle' });
+    const title = page.getByTestId('batch-lot');
+    assert.equal((await title.innerText()).trim(), `Lot ${lot}`);
+    assert.equal(await linesOf(title), 1);
     assert.deepEqual(errors, []);
   });
 });
