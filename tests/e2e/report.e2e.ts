@@ -22,7 +22,7 @@ describe('the HACCP report in the console', () => {
     await page.getByTestId('report-from').fill(today);
     await page.getByTestId('report-to').fill(today);
     await session.screenshot(page, 'haccp-report');
-    // A native date box takes the day as YYYY-MM-DD.
+    // The date boxes read a day typed as YYYY-MM-DD.
     const [download] = await Promise.all([
       page.waitForEvent('download'),
       page.getByTestId('report-pdf').click(),

@@ -75,7 +75,7 @@ function wordsFor(data: ReasonDialogData): ReasonWords {
     <!-- The lot code is kept on one line (a phone would break it at its hyphens); one line of
     markup, so no space goes before the title. -->
     <!-- prettier-ignore -->
-    <h2 mat-dialog-title>{{ words.title }} <span class="lot">{{ data.lotCode }}</span>?</h2>
+    <h2 mat-dialog-title>{{ words.title }} <span class="lot-code">{{ data.lotCode }}</span>?</h2>
     <form [formGroup]="form" (ngSubmit)="confirm()" data-testid="reason-dialog">
       <mat-dialog-content>
         <p>{{ words.lead }}</p>
@@ -112,9 +112,6 @@ function wordsFor(data: ReasonDialogData): ReasonWords {
     </form>
   `,
   styles: `
-    .lot {
-      white-space: nowrap;
-    }
     .reason {
       width: 100%;
     }

@@ -3,7 +3,12 @@ import { ChangeDetectionStrategy, Component, computed, inject, input } from '@an
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatAnchor } from '@angular/material/button';
-import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import {
+  MatDatepicker,
+  MatDatepickerInput,
+  MatDatepickerToggle,
+} from '@angular/material/datepicker';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect, MatSelectTrigger } from '@angular/material/select';
@@ -11,7 +16,8 @@ import { catchError, combineLatest, debounceTime, map, of, startWith, switchMap 
 import type { LabelNotYet, ProductLabelView } from '../../../../shared/api/product-label-view.ts';
 import type { ShiPicture } from '../../../../shared/labels/safe-handling-text.ts';
 import { messageOf } from '../../core/api/message-of';
-import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import {
   LABEL_SIZE_CHOICES,
   labelContentUrl,
@@ -46,7 +52,11 @@ const PICTURE_ICONS: Readonly<Record<ShiPicture, string>> = {
     MatFormField,
     MatLabel,
     MatHint,
+    MatSuffix,
     MatInput,
+    MatDatepicker,
+    MatDatepickerInput,
+    MatDatepickerToggle,
     MatSelect,
     MatSelectTrigger,
     MatOption,
@@ -54,6 +64,7 @@ const PICTURE_ICONS: Readonly<Record<ShiPicture, string>> = {
     MatIcon,
     IsoDayPipe,
   ],
+  providers: [provideDayInputs()],
   templateUrl: './label-preview.html',
   styleUrl: './label-preview.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -71,10 +82,10 @@ export class LabelPreview {
   protected readonly form = new FormGroup({
     size: new FormControl<LabelSizeChoice>('4x6', { nonNullable: true }),
     net: new FormControl('', { nonNullable: true }),
-    packed: new FormControl('', { nonNullable: true }),
+    packed: new FormControl<Date | null>(null),
   });
-  private readonly ask = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), {
-    initialValue: this.form.getRawValue() as LabelAsk,
+  private readonly ask = toSignal(this.form.valueChanges.pipe(map(() => this.asked())), {
+    initialValue: this.asked(),
   });
 
   protected readonly small = computed(() => this.ask().size !== '4x6');
@@ -95,7 +106,7 @@ export class LabelPreview {
       toObservable(this.lotsRecorded),
       this.form.valueChanges.pipe(
         startWith(null),
-        map(() => this.form.getRawValue()),
+        map(() => this.asked()),
         debounceTime(300),
       ),
     ]).pipe(
@@ -122,4 +133,10 @@ export class LabelPreview {
   /** Why the small sizes are refused, for the notes under the label: they print one sticker. */
   protected readonly smallRefused = computed(() => this.refused().get('2x1'));
   protected readonly problem = computed(() => labelProblem(this.ask(), this.view()));
+
+  /** What the form asks for, the packed-on day as YYYY-MM-DD ('' for today). */
+  private asked(): LabelAsk {
+    const { size, net, packed } = this.form.getRawValue();
+    return { size, net, packed: isoDateOf(packed) ?? '' };
+  }
 }

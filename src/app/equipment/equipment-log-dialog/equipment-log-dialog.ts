@@ -9,11 +9,17 @@ import {
   MatDialogContent,
   MatDialogTitle,
 } from '@angular/material/dialog';
-import { MatFormField, MatLabel } from '@angular/material/form-field';
+import {
+  MatDatepicker,
+  MatDatepickerInput,
+  MatDatepickerToggle,
+} from '@angular/material/datepicker';
+import { MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { temperatureWords } from '../../../../shared/process/control-words.ts';
 import { messageOf } from '../../core/api/message-of';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { recordEquipmentAction } from '../equipment-action';
 import { EquipmentStore } from '../equipment-store';
@@ -33,10 +39,15 @@ const WEEK_MS = 7 * 86_400_000;
     MatDialogClose,
     MatFormField,
     MatLabel,
+    MatSuffix,
     MatInput,
+    MatDatepicker,
+    MatDatepickerInput,
+    MatDatepickerToggle,
     MatButton,
     MatProgressBar,
   ],
+  providers: [provideDayInputs()],
   templateUrl: './equipment-log-dialog.html',
   styleUrl: '../equipment-dialog.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -45,8 +56,8 @@ export class EquipmentLogDialog implements OnInit {
   protected readonly equipment = inject<Equipment>(MAT_DIALOG_DATA);
   private readonly store = inject(EquipmentStore);
   protected readonly form = inject(NonNullableFormBuilder).group({
-    from: [isoDateOf(new Date(Date.now() - WEEK_MS)) ?? '', Validators.required],
-    to: [isoDateOf(new Date()) ?? '', Validators.required],
+    from: [new Date(Date.now() - WEEK_MS) as Date | null, Validators.required],
+    to: [new Date() as Date | null, Validators.required],
   });
   protected readonly log = signal<EquipmentLog | null>(null);
   protected readonly busy = signal(false);
@@ -66,7 +77,9 @@ export class EquipmentLogDialog implements OnInit {
 
   protected async show(): Promise<void> {
     if (this.form.invalid) return;
-    const { from, to } = this.form.getRawValue();
+    const from = isoDateOf(this.form.controls.from.value);
+    const to = isoDateOf(this.form.controls.to.value);
+    if (!from || !to) return;
     this.busy.set(true);
     this.failure.set(null);
     try {

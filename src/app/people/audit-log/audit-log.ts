@@ -3,7 +3,12 @@ import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@a
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import {
+  MatDatepicker,
+  MatDatepickerInput,
+  MatDatepickerToggle,
+} from '@angular/material/datepicker';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -28,7 +33,8 @@ import { AuditSubject, actorText, subjectOf } from '../audit-subject';
 import { PeopleStore } from '../people-store';
 import { FormulaStore } from '../../formulas/formula-store';
 import { OlderPagesFooter } from '../older-pages-footer/older-pages-footer';
-import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { IsoDayPipe, isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { PHONE_WIDTH, mediaMatch } from '../../ui/media-match';
 
 /** A row of the log with its words worked out once. */
@@ -40,13 +46,13 @@ interface AuditRow {
   readonly detail: string;
 }
 
-/** The filter as the form holds it: '' for "any". */
+/** The filter as the form holds it: '' (or no day) for "any". */
 type FilterForm = FormGroup<{
   action: FormControl<AuditAction | ''>;
   actor: FormControl<string>;
   subject: FormControl<string>;
-  fromDay: FormControl<string>;
-  toDay: FormControl<string>;
+  fromDay: FormControl<Date | null>;
+  toDay: FormControl<Date | null>;
 }>;
 
 /**
@@ -62,7 +68,11 @@ type FilterForm = FormGroup<{
     RouterLink,
     MatButton,
     MatInput,
+    MatDatepicker,
+    MatDatepickerInput,
+    MatDatepickerToggle,
     MatHint,
+    MatSuffix,
     MatTable,
     MatColumnDef,
     MatHeaderCellDef,
@@ -81,6 +91,7 @@ type FilterForm = FormGroup<{
     MatProgressBar,
     OlderPagesFooter,
   ],
+  providers: [provideDayInputs()],
   templateUrl: './audit-log.html',
   styleUrls: ['../people-tab.css', './audit-log.css'],
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -126,8 +137,8 @@ export default class AuditLog implements OnInit {
     action: new FormControl<AuditAction | ''>('', { nonNullable: true }),
     actor: new FormControl('', { nonNullable: true }),
     subject: new FormControl('', { nonNullable: true }),
-    fromDay: new FormControl('', { nonNullable: true }),
-    toDay: new FormControl('', { nonNullable: true }),
+    fromDay: new FormControl<Date | null>(null),
+    toDay: new FormControl<Date | null>(null),
   });
 
   constructor() {
@@ -144,8 +155,8 @@ export default class AuditLog implements OnInit {
         action: filter.action ?? '',
         actor: filter.actor ?? '',
         subject: filter.subject ?? '',
-        fromDay: filter.fromDay ?? '',
-        toDay: filter.toDay ?? '',
+        fromDay: filter.fromDay ? localDateOf(filter.fromDay) : null,
+        toDay: filter.toDay ? localDateOf(filter.toDay) : null,
       },
       { emitEvent: false },
     );
@@ -172,8 +183,8 @@ export default class AuditLog implements OnInit {
       action: action || undefined,
       actor: actor || undefined,
       subject: subject.trim() || undefined,
-      fromDay: fromDay || undefined,
-      toDay: toDay || undefined,
+      fromDay: isoDateOf(fromDay) ?? undefined,
+      toDay: isoDateOf(toDay) ?? undefined,
     };
   }
 }

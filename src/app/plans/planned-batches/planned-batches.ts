@@ -14,9 +14,12 @@ import type { BatchSummary } from '../../batches/batch-types';
     <ul>
       @for (batch of batches(); track batch.lotCode) {
         <li>
-          <a [routerLink]="['/batches', batch.lotCode]" [attr.data-testid]="linkTestId()">{{
-            batch.lotCode
-          }}</a>
+          <a
+            class="lot-code"
+            [routerLink]="['/batches', batch.lotCode]"
+            [attr.data-testid]="linkTestId()"
+            >{{ batch.lotCode }}</a
+          >
           {{ batch.formula.title }}, starts
           <time [attr.datetime]="batch.startedOn">{{ batch.startedOn | isoDay }}</time>
           @if (withWho()) {

@@ -2,9 +2,16 @@ import { ChangeDetectionStrategy, Component, computed } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatAnchor } from '@angular/material/button';
-import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import {
+  MatDatepicker,
+  MatDatepickerInput,
+  MatDatepickerToggle,
+} from '@angular/material/datepicker';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { lastThirtyDays, periodProblem, reportUrl, type ReportPeriod } from '../report-period';
 
 /**
@@ -13,7 +20,20 @@ import { lastThirtyDays, periodProblem, reportUrl, type ReportPeriod } from '../
  */
 @Component({
   selector: 'app-haccp-report',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatInput, MatAnchor, MatIcon],
+  imports: [
+    ReactiveFormsModule,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatSuffix,
+    MatInput,
+    MatDatepicker,
+    MatDatepickerInput,
+    MatDatepickerToggle,
+    MatAnchor,
+    MatIcon,
+  ],
+  providers: [provideDayInputs()],
   templateUrl: './haccp-report.html',
   styleUrl: './haccp-report.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -21,13 +41,16 @@ import { lastThirtyDays, periodProblem, reportUrl, type ReportPeriod } from '../
 export default class HaccpReport {
   private readonly initial = lastThirtyDays();
   protected readonly form = new FormGroup({
-    from: new FormControl(this.initial.from, { nonNullable: true }),
-    to: new FormControl(this.initial.to, { nonNullable: true }),
+    from: new FormControl<Date | null>(localDateOf(this.initial.from)),
+    to: new FormControl<Date | null>(localDateOf(this.initial.to)),
   });
-  private readonly period = toSignal(this.form.valueChanges, { initialValue: this.initial });
+  private readonly period = toSignal(this.form.valueChanges, {
+    initialValue: this.form.getRawValue(),
+  });
+  /** The period as days YYYY-MM-DD; a box left empty, or not a day, is ''. */
   private readonly chosen = computed<ReportPeriod>(() => ({
-    from: this.period().from ?? '',
-    to: this.period().to ?? '',
+    from: isoDateOf(this.period().from ?? null) ?? '',
+    to: isoDateOf(this.period().to ?? null) ?? '',
   }));
   protected readonly problem = computed(() => periodProblem(this.chosen()));
   protected readonly pdfUrl = computed(() => reportUrl('pdf', this.chosen()));

@@ -16,14 +16,20 @@ import {
 } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
-import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import {
+  MatDatepicker,
+  MatDatepickerInput,
+  MatDatepickerToggle,
+} from '@angular/material/datepicker';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ApiError } from '../../core/api/api-error';
 import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
-import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
+import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { LoadState } from '../../ui/load-state/load-state';
 import { PageHead } from '../../ui/page-head/page-head';
 import { StockStore, type Receipt, type ReceiptRequest, type StockLotView } from '../stock-store';
@@ -60,6 +66,9 @@ const RECENT_FEW = 6;
     LoadState,
     MatButton,
     MatCheckbox,
+    MatDatepicker,
+    MatDatepickerInput,
+    MatDatepickerToggle,
     MatFormField,
     MatHint,
     MatIcon,
@@ -67,8 +76,10 @@ const RECENT_FEW = 6;
     MatLabel,
     MatOption,
     MatSelect,
+    MatSuffix,
     PageHead,
   ],
+  providers: [provideDayInputs()],
   templateUrl: './deliveries-page.html',
   styleUrl: './deliveries-page.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -86,8 +97,8 @@ export default class DeliveriesPage implements OnInit {
     supplier: ['', Validators.required],
     supplierLot: ['', Validators.required],
     establishment: [''],
-    packedOn: [''],
-    useBy: [''],
+    packedOn: [null as Date | null],
+    useBy: [null as Date | null],
     quantity: ['', Validators.required],
     unit: [''],
     unitCost: [''],
@@ -153,6 +164,8 @@ export default class DeliveriesPage implements OnInit {
     const v = this.form.getRawValue();
     const text = (value: string) => value.trim() || undefined;
     const temperature = text(v.temperature);
+    const packedOn = isoDateOf(v.packedOn);
+    const useBy = isoDateOf(v.useBy);
     const a = this.action.getRawValue();
     return {
       item: v.item,
@@ -163,8 +176,8 @@ export default class DeliveriesPage implements OnInit {
       ...(this.item()?.establishment && text(v.establishment)
         ? { establishment: text(v.establishment) }
         : {}),
-      ...(v.packedOn ? { packedOn: v.packedOn } : {}),
-      ...(v.useBy ? { useBy: v.useBy } : {}),
+      ...(packedOn ? { packedOn } : {}),
+      ...(useBy ? { useBy } : {}),
       ...(text(v.unitCost) ? { unitCost: text(v.unitCost) } : {}),
       ...(temperature ? { temperature: `${temperature} ${v.scale}` } : {}),
       ...(v.shippedFrozen ? { shippedFrozen: true, frozenSolid: v.frozenSolid } : {}),

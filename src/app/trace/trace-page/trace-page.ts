@@ -62,9 +62,16 @@ export default class TracePage {
     const params = this.params();
     return params ? searchFromParams(params) : null;
   });
+  /** What was traced in words, split around its code, so the heading keeps the code on one line. */
   protected readonly searched = computed(() => {
     const result = this.store.result();
-    return result ? searchWords(result.forward.searched) : '';
+    if (!result) return { before: '', code: '', after: '' };
+    const search = result.forward.searched;
+    const words = searchWords(search);
+    const code = 'lot' in search ? search.lot : search.supplierLot;
+    const at = words.indexOf(code);
+    if (at < 0) return { before: words, code: '', after: '' };
+    return { before: words.slice(0, at), code, after: words.slice(at + code.length) };
   });
   protected readonly pdfUrl = computed(() => this.downloadUrl('pdf'));
   protected readonly csvUrl = computed(() => this.downloadUrl('csv'));

@@ -16,12 +16,18 @@ import {
   MatDialogRef,
   MatDialogTitle,
 } from '@angular/material/dialog';
+import {
+  MatDatepicker,
+  MatDatepickerInput,
+  MatDatepickerToggle,
+} from '@angular/material/datepicker';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { messageOf } from '../../../core/api/message-of';
 import { BatchSheet } from '../../../ui/batch-sheet/batch-sheet';
+import { provideDayInputs } from '../../../ui/batch-sheet/day-input-formats';
 import { IsoDayPipe, isoDateOf } from '../../../ui/batch-sheet/iso-day-pipe';
 import type { Batch, RawBatchOptions } from '../../batch-types';
 import { FormulaOptions } from '../../formula-options';
@@ -68,13 +74,16 @@ const PREVIEW_DELAY_MS = 400;
     MatHint,
     MatSuffix,
     MatInput,
+    MatDatepicker,
+    MatDatepickerInput,
+    MatDatepickerToggle,
     MatButton,
     MatIcon,
     MatProgressBar,
     BatchSheet,
     IsoDayPipe,
   ],
-  providers: [BatchRecorder],
+  providers: [BatchRecorder, provideDayInputs()],
   templateUrl: './start-batch-dialog.html',
   styleUrl: './start-batch-dialog.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -87,8 +96,9 @@ export class StartBatchDialog implements OnInit {
 
   protected readonly fields = signal<readonly BatchField[]>([]);
   protected readonly form = new FormGroup<Record<string, FormControl<string>>>({});
-  protected readonly start = new FormControl(isoDateOf(new Date()) ?? '', { nonNullable: true });
-  protected readonly startDay = signal(this.start.value);
+  protected readonly start = new FormControl<Date | null>(new Date());
+  /** The start day chosen, YYYY-MM-DD; '' while the box is empty or holds no day. */
+  protected readonly startDay = signal(isoDateOf(this.start.value) ?? '');
   protected readonly unitOf = unitsOf(this.data.batch.units === 'us' ? 'us' : 'metric');
   protected readonly problem = signal<string | null>(null);
   protected readonly starting = signal(false);
@@ -118,7 +128,7 @@ export class StartBatchDialog implements OnInit {
   }
 
   protected changed(): void {
-    this.startDay.set(this.start.value);
+    this.startDay.set(isoDateOf(this.start.value) ?? '');
     clearTimeout(this.timer);
     this.timer = setTimeout(() => this.preview(), PREVIEW_DELAY_MS);
   }
@@ -155,7 +165,8 @@ export class StartBatchDialog implements OnInit {
       if (typed === '') delete options[field.key];
       else options[field.key] = withUnit(typed, field.measure, units);
     }
-    if (this.start.value) options['start'] = this.start.value;
+    const start = isoDateOf(this.start.value);
+    if (start) options['start'] = start;
     return options as RawBatchOptions;
   }
 }
