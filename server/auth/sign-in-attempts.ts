@@ -2,6 +2,8 @@ import { randomUUID } from 'node:crypto';
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
+import { postgresFault } from '../db/postgres-faults.ts';
+import { sqliteCode } from '../http/error-handler.ts';
 import { RetryLaterError } from '../http/retry-later.ts';
 
 /** The window sign-in attempts are counted in: 15 minutes. common practice, no source */
@@ -87,6 +89,12 @@ export class SignInAttempts {
   ) {}
 
   /**
+   * Failures counted in this process while the database takes no writes (a read-only file after
+   * a restore): reading must go on, and the address is still held to the limit, here alone.
+   */
+  private readonly unsaved = new Map<string, { failed: number; resetAt: number }>();
+
+  /**
    * Refuses an address whose failed attempts and attempts being checked reach the limit. An
    * address with no failures (nearly every request signed with HTTP Basic) costs one read.
    * @throws RetryLaterError 429 too-many-attempts, with the seconds to wait
@@ -98,7 +106,12 @@ export class SignInAttempts {
     );
     if (!counts || (counts.resetAt > now && counts.failed + counts.checking < this.limit)) return;
     // A window ended or a refusal to note: decided again under the write lock.
-    raise(await this.db.write((t) => this.judge(t, address)));
+    try {
+      raise(await this.db.write((t) => this.judge(t, address)));
+    } catch (error) {
+      // A read-only database keeps its windows as they are: this process counts (beginUnsaved).
+      if (!isReadOnly(error)) throw error;
+    }
   }
 
   /**
@@ -106,6 +119,33 @@ export class SignInAttempts {
    * @throws RetryLaterError 429 too-many-attempts when the address may not try now
    */
   async begin(address: string): Promise<SignInAttempt> {
+    try {
+      return await this.beginSaved(address);
+    } catch (error) {
+      if (!isReadOnly(error)) throw error;
+      return this.beginUnsaved(address);
+    }
+  }
+
+  /** Counts an attempt in this process, the database being read-only. */
+  private beginUnsaved(address: string): SignInAttempt {
+    const now = this.now();
+    let entry = this.unsaved.get(address);
+    if (!entry || entry.resetAt <= now) {
+      entry = { failed: 0, resetAt: now + WINDOW_MS };
+      this.unsaved.set(address, entry);
+    }
+    if (entry.failed >= this.limit)
+      raise({ kind: 'refused', seconds: Math.ceil((entry.resetAt - now) / 1000), first: false });
+    const counted = entry;
+    return {
+      end: async (failed) => {
+        if (failed) counted.failed += 1;
+      },
+    };
+  }
+
+  private async beginSaved(address: string): Promise<SignInAttempt> {
     const id = randomUUID();
     raise(
       await this.db.write(async (t) => {
@@ -226,4 +266,9 @@ function raise(verdict: Verdict): void {
       verdict.first,
     );
   }
+}
+
+/** Whether a write failed because the database takes no writes at all (not busy: read-only). */
+function isReadOnly(error: unknown): boolean {
+  return !!sqliteCode(error)?.startsWith('SQLITE_READONLY') || postgresFault(error) === 'read-only';
 }

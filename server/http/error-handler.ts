@@ -18,7 +18,7 @@ interface BodyParserError {
 }
 
 /** SQLite's result code of a failed query ("SQLITE_BUSY", "SQLITE_READONLY"…), if it is one. */
-function sqliteCode(error: unknown): string | undefined {
+export function sqliteCode(error: unknown): string | undefined {
   const e = error as { parent?: { code?: unknown }; original?: { code?: unknown }; code?: unknown };
   const code = [e?.parent?.code, e?.original?.code, e?.code].find(
     (c): c is string => typeof c === 'string' && c.startsWith('SQLITE_'),
