@@ -21,3 +21,13 @@ export function jsonArrayText(dialect: Dialect, value: string, order = ''): stri
     ? `COALESCE(json_agg(${value}${order})::text, '[]')`
     : `json_group_array(${value}${order})`;
 }
+
+/**
+ * The integer at a top-level key of a JSON object stored as text (`key` a plain name), for joins
+ * on an id kept inside JSON (a session's person).
+ */
+export function jsonInteger(dialect: Dialect, column: string, key: string): string {
+  return dialect === 'postgres'
+    ? `(${column}::json ->> '${key}')::integer`
+    : `json_extract(${column}, '$.${key}')`;
+}

@@ -1,6 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
+import { jsonInteger, type Dialect } from '../db/dialect-sql.ts';
 import { hashPassword, verifyPassword } from '../auth/passwords.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
 
@@ -58,6 +59,13 @@ export interface NewPerson {
 }
 
 /** People and their passwords: plain objects in, plain objects out. */
+/** A session and its person, joined on the person id the session's JSON keeps. */
+const findSessionSql = (dialect: Dialect) =>
+  `SELECT s.data AS session_data, s.expires AS session_expires, p.*
+     FROM "Sessions" s LEFT JOIN people p ON p.id = ${jsonInteger(dialect, 's.data', 'personId')}
+    WHERE s.sid = ?`;
+const FIND_SESSION_SQL = { sqlite: findSessionSql('sqlite'), postgres: findSessionSql('postgres') };
+
 export class PeopleRepository {
   constructor(private readonly db: Database) {}
 
@@ -218,9 +226,7 @@ export class PeopleRepository {
       PersonRow & { session_data: string | null; session_expires: string | null }
     >(
       this.db.sequelize,
-      `SELECT s.data AS session_data, s.expires AS session_expires, p.*
-         FROM "Sessions" s LEFT JOIN people p ON p.id = json_extract(s.data, '$.personId')
-        WHERE s.sid = ?`,
+      FIND_SESSION_SQL[this.db.dialect],
       [sid],
     );
     if (!row) return undefined;
