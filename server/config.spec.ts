@@ -1,6 +1,7 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { ConfigError, databaseLocation, loadConfig } from './config.ts';
+import { availableParallelism } from 'node:os';
+import { ConfigError, databaseLocation, defaultProcesses, loadConfig } from './config.ts';
 
 const SECRET = 'x'.repeat(40);
 const PRODUCTION = { LARDER_MODE: 'production', LARDER_SESSION_SECRET: SECRET };
@@ -83,5 +84,14 @@ describe('the number of server processes', () => {
     assert.equal(loadConfig({ LARDER_PROCESSES: '2' }).processes, 2);
     assert.throws(() => loadConfig({ LARDER_PROCESSES: '0' }), ConfigError);
     assert.throws(() => loadConfig({ LARDER_PROCESSES: 'many' }), /LARDER_PROCESSES must be/);
+  });
+
+  it('should run one server process per CPU on PostgreSQL unless LARDER_PROCESSES says otherwise', () => {
+    const pg = { LARDER_DB_URL: 'postgres://larder@127.0.0.1:5432/larderbook' };
+    assert.equal(defaultProcesses(pg, 2), 2);
+    assert.equal(defaultProcesses(pg, 6), 6);
+    assert.equal(defaultProcesses({}, 6), 1);
+    assert.equal(loadConfig(pg).processes, availableParallelism());
+    assert.equal(loadConfig({ ...pg, LARDER_PROCESSES: '1' }).processes, 1);
   });
 });

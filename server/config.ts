@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import path from 'node:path';
 import { SAFE_WORKFLOW_RULES, type WorkflowRules } from '../shared/workflow/workflow-rules.ts';
 
@@ -69,12 +70,14 @@ const MAX_PROCESSES = 64;
 
 /**
  * How many server processes run when LARDER_PROCESSES is not set. SQLite has one writer at a
- * time, so more processes only queue for its lock: one. PostgreSQL takes writers in parallel and
- * will default to one process per CPU (os.availableParallelism()) once it lands: this is the
- * place to say so, by the database the settings choose.
+ * time, so more processes only queue for its lock: one. PostgreSQL takes writers side by side,
+ * so one process per CPU the server may use (never more than MAX_PROCESSES).
  */
-export function defaultProcesses(_env: NodeJS.ProcessEnv): number {
-  return 1;
+export function defaultProcesses(
+  env: NodeJS.ProcessEnv,
+  cpus: number = availableParallelism(),
+): number {
+  return env.LARDER_DB_URL ? Math.min(Math.max(cpus, 1), MAX_PROCESSES) : 1;
 }
 
 /** Proxies to believe: none (false), the nearest N hops, or a list of addresses and subnets. */
