@@ -3,11 +3,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, input } from '@an
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatAnchor } from '@angular/material/button';
-import {
-  MatDatepicker,
-  MatDatepickerInput,
-  MatDatepickerToggle,
-} from '@angular/material/datepicker';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
@@ -16,7 +11,7 @@ import { catchError, combineLatest, debounceTime, map, of, startWith, switchMap 
 import type { LabelNotYet, ProductLabelView } from '../../../../shared/api/product-label-view.ts';
 import type { ShiPicture } from '../../../../shared/labels/safe-handling-text.ts';
 import { messageOf } from '../../core/api/message-of';
-import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { DAY_INPUT_IMPORTS, provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import {
   LABEL_SIZE_CHOICES,
@@ -54,9 +49,7 @@ const PICTURE_ICONS: Readonly<Record<ShiPicture, string>> = {
     MatHint,
     MatSuffix,
     MatInput,
-    MatDatepicker,
-    MatDatepickerInput,
-    MatDatepickerToggle,
+    DAY_INPUT_IMPORTS,
     MatSelect,
     MatSelectTrigger,
     MatOption,

@@ -19,11 +19,6 @@ import {
 } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { ErrorStateMatcher, MatOption } from '@angular/material/core';
-import {
-  MatDatepicker,
-  MatDatepickerInput,
-  MatDatepickerToggle,
-} from '@angular/material/datepicker';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
@@ -33,7 +28,7 @@ import { Router, RouterLink } from '@angular/router';
 import type { HoldSize } from '../../../../shared/calculation/cure/hold-size.ts';
 import { messageOf } from '../../core/api/message-of';
 import { BatchSheet } from '../../ui/batch-sheet/batch-sheet';
-import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { DAY_INPUT_IMPORTS, provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { BatchLog } from '../batch-log/batch-log';
 import type { FormulaFacts } from '../batch-types';
@@ -86,9 +81,7 @@ const SHOW_WHEN_TYPED: ErrorStateMatcher = {
     MatIconButton,
     MatIcon,
     MatProgressBar,
-    MatDatepicker,
-    MatDatepickerInput,
-    MatDatepickerToggle,
+    DAY_INPUT_IMPORTS,
     BatchSheet,
   ],
   providers: [

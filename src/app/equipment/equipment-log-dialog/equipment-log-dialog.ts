@@ -9,17 +9,12 @@ import {
   MatDialogContent,
   MatDialogTitle,
 } from '@angular/material/dialog';
-import {
-  MatDatepicker,
-  MatDatepickerInput,
-  MatDatepickerToggle,
-} from '@angular/material/datepicker';
 import { MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { temperatureWords } from '../../../../shared/process/control-words.ts';
 import { messageOf } from '../../core/api/message-of';
-import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { DAY_INPUT_IMPORTS, provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { IsoDayPipe, isoDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { recordEquipmentAction } from '../equipment-action';
 import { EquipmentStore } from '../equipment-store';
@@ -41,9 +36,7 @@ const WEEK_MS = 7 * 86_400_000;
     MatLabel,
     MatSuffix,
     MatInput,
-    MatDatepicker,
-    MatDatepickerInput,
-    MatDatepickerToggle,
+    DAY_INPUT_IMPORTS,
     MatButton,
     MatProgressBar,
   ],

@@ -2,11 +2,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, input } from '@an
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 
-import {
-  MatDatepicker,
-  MatDatepickerInput,
-  MatDatepickerToggle,
-} from '@angular/material/datepicker';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
@@ -23,7 +18,7 @@ import {
   startWith,
   switchMap,
 } from 'rxjs';
-import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { DAY_INPUT_IMPORTS, provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { PlanApi } from '../../plans/plan-api';
 import { MAX_COUNT, addDays, paramsOfPlan } from '../../plans/plan-query';
@@ -59,9 +54,7 @@ const START: PreviewState = { loading: false, plan: null, refusal: null };
     MatHint,
     MatSuffix,
     MatInput,
-    MatDatepicker,
-    MatDatepickerInput,
-    MatDatepickerToggle,
+    DAY_INPUT_IMPORTS,
     MatIcon,
     MatProgressBar,
     PlanSchedule,

@@ -3,11 +3,6 @@ import { ChangeDetectionStrategy, Component, OnInit, computed, inject } from '@a
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import {
-  MatDatepicker,
-  MatDatepickerInput,
-  MatDatepickerToggle,
-} from '@angular/material/datepicker';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatIcon } from '@angular/material/icon';
@@ -33,7 +28,7 @@ import { AuditSubject, actorText, subjectOf } from '../audit-subject';
 import { PeopleStore } from '../people-store';
 import { FormulaStore } from '../../formulas/formula-store';
 import { OlderPagesFooter } from '../older-pages-footer/older-pages-footer';
-import { provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
+import { DAY_INPUT_IMPORTS, provideDayInputs } from '../../ui/batch-sheet/day-input-formats';
 import { IsoDayPipe, isoDateOf, localDateOf } from '../../ui/batch-sheet/iso-day-pipe';
 import { PHONE_WIDTH, mediaMatch } from '../../ui/media-match';
 
@@ -68,9 +63,7 @@ type FilterForm = FormGroup<{
     RouterLink,
     MatButton,
     MatInput,
-    MatDatepicker,
-    MatDatepickerInput,
-    MatDatepickerToggle,
+    DAY_INPUT_IMPORTS,
     MatHint,
     MatSuffix,
     MatTable,

@@ -1,5 +1,10 @@
 import { Injectable, type Provider } from '@angular/core';
 import {
+  MatDatepicker,
+  MatDatepickerInput,
+  MatDatepickerToggle,
+} from '@angular/material/datepicker';
+import {
   DateAdapter,
   MAT_DATE_FORMATS,
   MAT_NATIVE_DATE_FORMATS,
@@ -46,3 +51,6 @@ export function provideDayInputs(): Provider[] {
     { provide: MAT_DATE_FORMATS, useValue: DAY_INPUT_FORMATS },
   ];
 }
+
+/** What a component's template needs for a date box with its picker (with provideDayInputs()). */
+export const DAY_INPUT_IMPORTS = [MatDatepicker, MatDatepickerInput, MatDatepickerToggle] as const;

@@ -16,18 +16,13 @@ import {
   MatDialogRef,
   MatDialogTitle,
 } from '@angular/material/dialog';
-import {
-  MatDatepicker,
-  MatDatepickerInput,
-  MatDatepickerToggle,
-} from '@angular/material/datepicker';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { messageOf } from '../../../core/api/message-of';
 import { BatchSheet } from '../../../ui/batch-sheet/batch-sheet';
-import { provideDayInputs } from '../../../ui/batch-sheet/day-input-formats';
+import { DAY_INPUT_IMPORTS, provideDayInputs } from '../../../ui/batch-sheet/day-input-formats';
 import { IsoDayPipe, isoDateOf } from '../../../ui/batch-sheet/iso-day-pipe';
 import type { Batch, RawBatchOptions } from '../../batch-types';
 import { FormulaOptions } from '../../formula-options';
@@ -74,9 +69,7 @@ const PREVIEW_DELAY_MS = 400;
     MatHint,
     MatSuffix,
     MatInput,
-    MatDatepicker,
-    MatDatepickerInput,
-    MatDatepickerToggle,
+    DAY_INPUT_IMPORTS,
     MatButton,
     MatIcon,
     MatProgressBar,
