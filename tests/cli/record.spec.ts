@@ -1,10 +1,9 @@
 import assert from 'node:assert/strict';
-import path from 'node:path';
 import { describe, it } from 'node:test';
 import { today } from '../../cli/io.ts';
 import { addDays } from '../../shared/index.ts';
 import { assertCleanFailure, assertExit, runLarder, stdoutJson } from '../helpers/run-larder.ts';
-import { makeTempDir } from '../helpers/temp-files.ts';
+import { localRecordsEnv } from '../helpers/local-records-env.ts';
 import { PASSWORDS, startTestServer } from '../helpers/test-server.ts';
 
 // Yesterday on this machine's clock: a start must lie within a year of it.
@@ -33,14 +32,14 @@ interface RecordedBatch {
 
 describe('larder calc --record and larder batches', () => {
   it('should record on this machine, list and show the batch, and refuse an over-limit cure', async (t) => {
-    const data = path.join(makeTempDir(t), 'data');
+    const records = await localRecordsEnv(t);
     assertExit(
       await runLarder(['users', 'add', 'tobin', '--role', 'cook'], {
-        env: { LARDER_DATA: data, LARDER_NEW_PASSWORD: 'tobin-pass-1' },
+        env: { ...records, LARDER_NEW_PASSWORD: 'tobin-pass-1' },
       }),
       0,
     );
-    const env = { LARDER_DATA: data, LARDER_USER: 'tobin', LARDER_PASSWORD: 'tobin-pass-1' };
+    const env = { ...records, LARDER_USER: 'tobin', LARDER_PASSWORD: 'tobin-pass-1' };
 
     const recorded = await runLarder([...BELLY, '--record', '--json'], { env });
     assertExit(recorded, 0);
@@ -80,21 +79,21 @@ describe('larder calc --record and larder batches', () => {
   });
 
   it('should refuse to record without credentials or as a reviewer', async (t) => {
-    const data = path.join(makeTempDir(t), 'data');
+    const records = await localRecordsEnv(t);
     assertExit(
       await runLarder(['users', 'add', 'imke', '--role', 'reviewer'], {
-        env: { LARDER_DATA: data, LARDER_NEW_PASSWORD: 'imke-pass-12' },
+        env: { ...records, LARDER_NEW_PASSWORD: 'imke-pass-12' },
       }),
       0,
     );
     assertCleanFailure(
-      await runLarder([...BELLY, '--record'], { env: { LARDER_DATA: data } }),
+      await runLarder([...BELLY, '--record'], { env: { ...records } }),
       2,
       /set LARDER_USER and LARDER_PASSWORD/,
     );
     assertCleanFailure(
       await runLarder([...BELLY, '--record'], {
-        env: { LARDER_DATA: data, LARDER_USER: 'imke', LARDER_PASSWORD: 'imke-pass-12' },
+        env: { ...records, LARDER_USER: 'imke', LARDER_PASSWORD: 'imke-pass-12' },
       }),
       2,
       /imke is a reviewer; this needs admin or cook/,

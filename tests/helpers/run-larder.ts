@@ -16,6 +16,7 @@ const BUNDLE = path.join(REPO_ROOT, 'dist', 'cli', 'larder.js');
 const CLEARED_VARIABLES = [
   'LARDER_DATA',
   'LARDER_DB',
+  'LARDER_DB_URL',
   'LARDER_MODE',
   'LARDER_NEW_PASSWORD',
   'LARDER_SERVER',
