@@ -10,11 +10,12 @@ import sqlite3 from 'sqlite3';
 import { encodeCursor, parseListQuery } from '../server/batches/batch-query.ts';
 import { TOTAL_COUNTED } from '../server/batches/batch-repository.ts';
 import { countSql, pageSql } from '../server/batches/batch-sql.ts';
+import { benchBatchLogPostgres } from './batch-log-postgres.ts';
 import { SEED_VERSION, seedLog } from './seed-log.ts';
 import { signInCookie, startBenchServer, type BenchServer } from './server-process.ts';
 
-const ROWS = Number(process.env.BENCH_LOG_ROWS ?? 1_000_000);
-const REQUESTS = Number(process.env.BENCH_LOG_REQUESTS ?? 100);
+export const ROWS = Number(process.env.BENCH_LOG_ROWS ?? 1_000_000);
+export const REQUESTS = Number(process.env.BENCH_LOG_REQUESTS ?? 100);
 /** The day the overdue filter counts from, as the console sends it. */
 const TODAY = new Date().toLocaleDateString('en-CA');
 
@@ -54,7 +55,8 @@ interface Timing {
   kb: number;
 }
 
-async function time(url: string, headers: Record<string, string>): Promise<Timing> {
+/** Times REQUESTS GETs of a URL in turn. */
+export async function time(url: string, headers: Record<string, string>): Promise<Timing> {
   const times: number[] = [];
   let body: ArrayBuffer = new ArrayBuffer(0);
   for (let i = 0; i < REQUESTS; i++) {
@@ -101,7 +103,7 @@ function pageVerdict(plan: string): string {
  * work after a start — the PDF warm-up 2 s after it listens (about a second of CPU), the first
  * runs of its jobs — would otherwise land in the first requests timed. Returns the seconds waited.
  */
-async function settled(server: BenchServer): Promise<number> {
+export async function settled(server: BenchServer): Promise<number> {
   const start = performance.now();
   for (;;) {
     const before = server.cpuSeconds();
@@ -113,6 +115,8 @@ async function settled(server: BenchServer): Promise<number> {
 
 /** Runs the log benchmark and prints it. */
 export async function benchBatchLog(): Promise<void> {
+  // BENCH_DB_URL: the same pages on PostgreSQL (batch-log-postgres.ts).
+  if (process.env.BENCH_DB_URL) return benchBatchLogPostgres(process.env.BENCH_DB_URL);
   const dataDir = process.env.BENCH_LOG_DIR ?? path.join(tmpdir(), `larder-log-${ROWS}`);
   const databaseFile = path.join(dataDir, 'larderbook.sqlite');
   // A log left half-seeded (an interrupted run) or seeded differently is seeded again.

@@ -24,7 +24,7 @@ const SAMPLE: Record<string, RawBatchOptions> = {
   mix: { total: '2 kg' },
 };
 /** The statuses of the last fortnight's batches; every older batch is done, or now and then discarded. */
-const RECENT_STATUSES = [
+export const RECENT_STATUSES = [
   'done',
   'done',
   'done',
@@ -37,12 +37,13 @@ const RECENT_STATUSES = [
   'planned',
 ];
 /** Days before the end of the log whose batches can still be under way. */
-const RECENT_DAYS = 14;
+export const RECENT_DAYS = 14;
 
 /** What changed in how the log is seeded: a log seeded otherwise is seeded again. */
 export const SEED_VERSION = '2';
 
-interface Template {
+/** A demo formula as seeded batches copy it. */
+export interface Template {
   id: string;
   title: string;
   kind: string;
@@ -53,7 +54,8 @@ interface Template {
   readyDays: number | null;
 }
 
-function templates(): Template[] {
+/** One template a demo formula of a kind the log seeds, with its real calculated result. */
+export function templates(): Template[] {
   return readdirSync('formulas')
     .filter(isFormulaFileName)
     .flatMap((name) => {

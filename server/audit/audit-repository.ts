@@ -5,6 +5,7 @@ import {
   type AuditEvent,
 } from '../../shared/api/audit-event.ts';
 import type { Database } from '../db/database.ts';
+import { asUsername, equalsIgnoringCase } from '../db/dialect-sql.ts';
 
 /** What to append: who did what to what. */
 export interface AuditEntry {
@@ -75,6 +76,7 @@ export class AuditRepository {
    * is a person, of its subject, as they are now.
    */
   async list(options: AuditQuery): Promise<AuditEvent[]> {
+    const dialect = this.db.dialect;
     const where: string[] = [];
     const values: unknown[] = [];
     if (options.before !== undefined) {
@@ -86,11 +88,11 @@ export class AuditRepository {
       values.push(options.action);
     }
     if (options.actor) {
-      where.push('a.actor_name = ? COLLATE NOCASE');
+      where.push(equalsIgnoringCase(dialect, 'a.actor_name', '?'));
       values.push(options.actor);
     }
     if (options.subject) {
-      where.push('a.subject = ? COLLATE NOCASE');
+      where.push(equalsIgnoringCase(dialect, 'a.subject', '?'));
       values.push(options.subject);
     }
     // Instants are written by toISOString, so comparing the text compares the times.
@@ -107,8 +109,8 @@ export class AuditRepository {
          subject.display_name AS subject_display_name
        FROM audit_events a
        LEFT JOIN people actor ON actor.id = a.actor_id
-         OR (a.actor_id IS NULL AND actor.username = a.actor_name)
-       LEFT JOIN people subject ON subject.username = a.subject
+         OR (a.actor_id IS NULL AND actor.username = ${asUsername(dialect, 'a.actor_name')})
+       LEFT JOIN people subject ON subject.username = ${asUsername(dialect, 'a.subject')}
          AND a.action IN (${PERSON_SUBJECTS.map(() => '?').join(', ')})
        ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY a.id DESC LIMIT ?`,
       {

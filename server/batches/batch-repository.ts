@@ -199,21 +199,23 @@ export class BatchRepository {
 
   /** How many batches match a filter (all of them by default). */
   async count(filter: BatchFilter = {}): Promise<number> {
-    const { sql, values } = countSql(filter);
-    const [row] = await this.select<{ n: number }>(sql, values);
-    return row.n;
+    const { sql, values } = countSql(filter, undefined, this.db.dialect);
+    const [row] = await this.select<{ n: number | string }>(sql, values);
+    // PostgreSQL's COUNT is a bigint, which pg gives as text.
+    return Number(row.n);
   }
 
   /** How many batches match, counting no further than upTo + 1 (see TOTAL_COUNTED). */
   async countUpTo(filter: BatchFilter, upTo: number): Promise<{ total: number; exact: boolean }> {
-    const { sql, values } = countSql(filter, upTo);
-    const [row] = await this.select<{ n: number }>(sql, values);
-    return row.n > upTo ? { total: upTo, exact: false } : { total: row.n, exact: true };
+    const { sql, values } = countSql(filter, upTo, this.db.dialect);
+    const [row] = await this.select<{ n: number | string }>(sql, values);
+    const n = Number(row.n);
+    return n > upTo ? { total: upTo, exact: false } : { total: n, exact: true };
   }
 
   /** One page of the log: list items (no full result), cursors either side, the total. */
   async list(query: ListQuery): Promise<BatchPage> {
-    const { sql, values } = pageSql(query, 'list');
+    const { sql, values } = pageSql(query, 'list', this.db.dialect);
     const rows = await this.select<SortedRow>(sql, values);
     const more = rows.length > query.limit;
     const page = rows.slice(0, query.limit);
@@ -256,7 +258,7 @@ export class BatchRepository {
   ): AsyncGenerator<BatchSummary[]> {
     let page: ListQuery = { ...query, limit: pageSize };
     for (;;) {
-      const { sql, values } = pageSql(page, 'summary');
+      const { sql, values } = pageSql(page, 'summary', this.db.dialect);
       const rows = await this.select<SortedRow>(sql, values);
       const kept = rows.slice(0, pageSize);
       if (kept.length > 0) yield kept.map(toSummary);

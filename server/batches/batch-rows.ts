@@ -13,7 +13,14 @@ import type {
   BatchSummary,
   BatchTurn,
 } from '../../shared/api/batch-record.ts';
-import { LAST_TURN_COLUMN, lastTurnOf } from './batch-turns.ts';
+import {
+  jsonEach,
+  jsonMember,
+  jsonNumberAt,
+  jsonObjectText,
+  type Dialect,
+} from '../db/dialect-sql.ts';
+import { lastTurnColumn, lastTurnOf } from './batch-turns.ts';
 
 /** A batch row joined with the names of its operator and reviewer. */
 export interface BatchRow {
@@ -45,7 +52,7 @@ export interface BatchRow {
   nitrite_max?: string | null;
   /** Only in a list: a curing batch's turning rule, days (LIST_COLUMNS). */
   flip_every_days?: number | null;
-  /** Only in a list: a curing batch's latest turn as JSON (LAST_TURN_COLUMN). */
+  /** Only in a list: a curing batch's latest turn as JSON (lastTurnColumn). */
   last_turn?: string | null;
 }
 
@@ -69,17 +76,29 @@ export const SUMMARY_COLUMNS = `b.id, b.lot_code, b.formula_id, b.formula_revisi
 
 /**
  * The columns of a list item: a summary, and the limit and status of the batch's 'nitrite-max'
- * check picked out of its stored result by SQLite, at about 15 µs a cure. Parsing every result in
- * JavaScript and sending it whole was most of the list's time (240 kB for a page of 50, eight
- * times the summaries). Only a batch with a nitrite figure (a cure) has the check.
+ * check picked out of its stored result by the database, at about 15 µs a cure on SQLite. Parsing
+ * every result in JavaScript and sending it whole was most of the list's time (240 kB for a page
+ * of 50, eight times the summaries). Only a batch with a nitrite figure (a cure) has the check.
  */
-export const LIST_COLUMNS = `${SUMMARY_COLUMNS},
+function listColumnsOf(dialect: Dialect): string {
+  const check = jsonObjectText(
+    dialect,
+    `'limit', ${jsonMember(dialect, 'c.value', 'limit')}, 'status', ${jsonMember(dialect, 'c.value', 'status')}`,
+  );
+  return `${SUMMARY_COLUMNS},
   CASE WHEN b.nitrite_ppm IS NOT NULL THEN (
-    SELECT json_object('limit', c.value ->> 'limit', 'status', c.value ->> 'status')
-    FROM json_each(b.result, '$.checks') c WHERE c.value ->> 'id' = 'nitrite-max'
+    SELECT ${check}
+    FROM ${jsonEach(dialect, 'b.result', 'checks', 'c')} WHERE c.value ->> 'id' = 'nitrite-max'
   ) END AS nitrite_max,
-  CASE WHEN b.status = 'curing' THEN b.result ->> '$.schedule.flipEveryDays' END AS flip_every_days,
-  ${LAST_TURN_COLUMN}`;
+  CASE WHEN b.status = 'curing' THEN ${jsonNumberAt(dialect, 'b.result', ['schedule', 'flipEveryDays'])} END AS flip_every_days,
+  ${lastTurnColumn(dialect)}`;
+}
+
+/** The columns of a list item (see listColumnsOf) in each database's words. */
+export const LIST_COLUMNS: Readonly<Record<Dialect, string>> = {
+  sqlite: listColumnsOf('sqlite'),
+  postgres: listColumnsOf('postgres'),
+};
 
 /**
  * batches joined to the people it names. LEFT JOINs keep batches the outer loop of the query,

@@ -1,4 +1,5 @@
 import { addDays } from '../../shared/index.ts';
+import { withoutIndex, type Dialect } from '../db/dialect-sql.ts';
 import { UNSIGNABLE_STATUSES } from '../../shared/workflow/batch-status.ts';
 import { SORTS, type BatchFilter, type ListQuery, type SortKey } from './batch-query.ts';
 import { BATCHES_WITH_PEOPLE, LIST_COLUMNS, SUMMARY_COLUMNS } from './batch-rows.ts';
@@ -30,11 +31,12 @@ const NEEDS_SIGN_OFF = `b.signed_off_at IS NULL AND b.status NOT IN (${UNSIGNABL
 export function whereOf(
   filter: BatchFilter,
   walking?: SortKey,
+  dialect: Dialect = 'sqlite',
 ): { clauses: string[]; values: (string | number)[] } {
   const clauses: string[] = [];
   const values: (string | number)[] = [];
   const broad = (column: string, sort?: SortKey): string =>
-    walking && walking !== 'recorded' && walking !== sort ? `+${column}` : column;
+    walking && walking !== 'recorded' && walking !== sort ? withoutIndex(dialect, column) : column;
   if (filter.formula !== undefined) {
     clauses.push(`${broad('b.formula_id', 'formula')} = ?`);
     values.push(filter.formula);
@@ -94,12 +96,12 @@ function where(clauses: readonly string[]): string {
  * cheap: it reads every match, and a filter on two columns (formula and status, say) reads each
  * match's row, not an index alone. Stopping early keeps it within a page's time on any log.
  */
-export function countSql(filter: BatchFilter, upTo?: number): SqlPart {
-  const { clauses, values } = whereOf(filter);
+export function countSql(filter: BatchFilter, upTo?: number, dialect: Dialect = 'sqlite'): SqlPart {
+  const { clauses, values } = whereOf(filter, undefined, dialect);
   if (upTo === undefined)
     return { sql: `SELECT COUNT(*) AS n FROM batches b ${where(clauses)}`, values };
   return {
-    sql: `SELECT COUNT(*) AS n FROM (SELECT 1 FROM batches b ${where(clauses)} LIMIT ?)`,
+    sql: `SELECT COUNT(*) AS n FROM (SELECT 1 FROM batches b ${where(clauses)} LIMIT ?) matches`,
     values: [...values, upTo + 1],
   };
 }
@@ -116,8 +118,12 @@ export function countSql(filter: BatchFilter, upTo?: number): SqlPart {
  * nitrite check picked out of the stored result) to the page's rows, not every match. The outer
  * query reads the ids in the order the inner one gives them, so it sorts nothing again.
  */
-export function pageSql(query: ListQuery, columns: 'list' | 'summary'): SqlPart {
-  const { clauses, values } = whereOf(query.filter, query.sort);
+export function pageSql(
+  query: ListQuery,
+  columns: 'list' | 'summary',
+  dialect: Dialect = 'sqlite',
+): SqlPart {
+  const { clauses, values } = whereOf(query.filter, query.sort, dialect);
   const sort = SORTS[query.sort];
   const backwards = query.cursor?.direction === 'prev';
   const descending = (query.order === 'desc') !== backwards;
@@ -136,7 +142,7 @@ export function pageSql(query: ListQuery, columns: 'list' | 'summary'): SqlPart 
   }
   const direction = descending ? 'DESC' : 'ASC';
   return {
-    sql: `SELECT ${columns === 'list' ? LIST_COLUMNS : SUMMARY_COLUMNS}, page.sort_key
+    sql: `SELECT ${columns === 'list' ? LIST_COLUMNS[dialect] : SUMMARY_COLUMNS}, page.sort_key
       FROM (
         SELECT b.id, ${sort.expr} AS sort_key FROM batches b
         ${where(clauses)}

@@ -4,6 +4,7 @@ import { statusInWords } from '../../shared/workflow/batch-status.ts';
 import { appendChange } from '../audit/append-change.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
+import { jsonObjectText, type Dialect } from '../db/dialect-sql.ts';
 import { conflict, notFound } from '../http/app-error.ts';
 import { kitchenTime } from '../process/kitchen-clock.ts';
 import { refuseOnReleased } from '../process/released.ts';
@@ -32,16 +33,21 @@ function toTurn(row: TurnRow): BatchTurn {
 }
 
 /**
- * A curing batch's latest turn as a list item carries it, picked by SQLite from the turns'
+ * A curing batch's latest turn as a list item carries it, picked by the database from the turns'
  * (batch, day) index: one seek a curing batch, none for the rest (`b` is batches).
  */
-export const LAST_TURN_COLUMN = `CASE WHEN b.status = 'curing' THEN (
-    SELECT json_object('on', t.turned_on, 'at', t.recorded_at, 'id', t.person_id,
-      'name', (SELECT display_name FROM people WHERE id = t.person_id))
+export function lastTurnColumn(dialect: Dialect): string {
+  return `CASE WHEN b.status = 'curing' THEN (
+    SELECT ${jsonObjectText(
+      dialect,
+      `'on', t.turned_on, 'at', t.recorded_at, 'id', t.person_id,
+      'name', (SELECT display_name FROM people WHERE id = t.person_id)`,
+    )}
     FROM batch_turns t WHERE t.batch_id = b.id ORDER BY t.turned_on DESC LIMIT 1
   ) END AS last_turn`;
+}
 
-/** The last_turn column (LAST_TURN_COLUMN) as a list item's lastTurn. */
+/** The last_turn column (lastTurnColumn) as a list item's lastTurn. */
 export function lastTurnOf(json: string | null | undefined): Omit<BatchTurn, 'note'> | null {
   if (!json) return null;
   const row = JSON.parse(json) as { on: string; at: string; id: number; name: string | null };

@@ -125,9 +125,11 @@ async function openPostgres(
   url: string,
   { busyTimeoutMs = BUSY_TIMEOUT_MS }: OpenOptions,
 ): Promise<Database> {
-  const sequelize = await connectPostgres(url);
+  const sequelize = await connectPostgres(url, busyTimeoutMs);
   try {
     await sequelize.transaction(async (transaction) => {
+      // A second process waits out the first's migrations however long they take.
+      await sequelize.query('SET LOCAL lock_timeout = 0', { transaction });
       // Any fixed number names the lock: it is this database's migration lock.
       await sequelize.query('SELECT pg_advisory_xact_lock(1765)', { transaction });
       await migrate(sequelize);

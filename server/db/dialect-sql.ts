@@ -31,3 +31,60 @@ export function jsonInteger(dialect: Dialect, column: string, key: string): stri
     ? `(${column}::json ->> '${key}')::integer`
     : `json_extract(${column}, '$.${key}')`;
 }
+
+/** A JSON object of the given 'key', value pairs (SQL text), as a text column of a row. */
+export function jsonObjectText(dialect: Dialect, pairs: string): string {
+  return dialect === 'postgres' ? `json_build_object(${pairs})::text` : `json_object(${pairs})`;
+}
+
+/**
+ * The elements of the JSON array at a top-level key of a JSON text column, as a FROM item named
+ * `alias` whose `value` column is each element (`key` a plain name).
+ */
+export function jsonEach(dialect: Dialect, column: string, key: string, alias: string): string {
+  return dialect === 'postgres'
+    ? `json_array_elements(${column}::json -> '${key}') ${alias}(value)`
+    : `json_each(${column}, '$.${key}') ${alias}`;
+}
+
+/** A member of a JSON value (`key` a plain name), as a value put into other JSON as it is. */
+export function jsonMember(dialect: Dialect, json: string, key: string): string {
+  // SQLite's ->> gives the SQL value (a number stays a number); PostgreSQL's would give text, so
+  // there the member stays JSON.
+  return dialect === 'postgres' ? `${json} -> '${key}'` : `${json} ->> '${key}'`;
+}
+
+/** The number at a path of plain names inside a JSON text column; NULL when there is none. */
+export function jsonNumberAt(dialect: Dialect, column: string, path: readonly string[]): string {
+  return dialect === 'postgres'
+    ? `(${column}::json #>> '{${path.join(',')}}')::float8`
+    : `${column} ->> '$.${path.join('.')}'`;
+}
+
+/**
+ * A column compared as SQLite compares it without its index: SQLite has no statistics, and `+`
+ * keeps it from driving a query with a broad filter's index. PostgreSQL's planner has them, and
+ * has no unary + on text.
+ */
+export function withoutIndex(dialect: Dialect, column: string): string {
+  return dialect === 'postgres' ? column : `+${column}`;
+}
+
+/**
+ * `left` equal to `right` ignoring case: SQLite's NOCASE folds ASCII letters, PostgreSQL's lower()
+ * every letter.
+ */
+export function equalsIgnoringCase(dialect: Dialect, left: string, right: string): string {
+  return dialect === 'postgres'
+    ? `lower(${left}) = lower(${right})`
+    : `${left} = ${right} COLLATE NOCASE`;
+}
+
+/**
+ * A text value compared with a username column as a username: without case. SQLite's column
+ * carries NOCASE into the comparison; PostgreSQL's citext column compares case-sensitively with
+ * plain text unless the text is citext too.
+ */
+export function asUsername(dialect: Dialect, value: string): string {
+  return dialect === 'postgres' ? `${value}::citext` : value;
+}

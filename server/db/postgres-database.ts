@@ -36,8 +36,10 @@ const POOL_SIZE = 10;
 /**
  * Connects to PostgreSQL through Sequelize's pg dialect. Counts and ids come back as numbers, as
  * SQLite gives them: PostgreSQL's COUNT is a 64-bit integer, which pg hands over as a string.
+ * A statement waits at most `lockTimeoutMs` for a lock another connection holds (a stuck script's
+ * LOCK TABLE, a long transaction), then fails with 55P03, answered as SQLite's busy file is.
  */
-export async function connectPostgres(url: string): Promise<Sequelize> {
+export async function connectPostgres(url: string, lockTimeoutMs?: number): Promise<Sequelize> {
   const pg = (await import('pg')).default;
   pg.types.setTypeParser(pg.types.builtins.INT8, (text: string) => Number(text));
   return new Sequelize(url, {
@@ -47,6 +49,7 @@ export async function connectPostgres(url: string): Promise<Sequelize> {
     pool: { max: POOL_SIZE },
     // Our own retry (retryConflicts) tries a whole transaction again; one statement alone never.
     retry: { max: 1 },
+    ...(lockTimeoutMs === undefined ? {} : { dialectOptions: { lock_timeout: lockTimeoutMs } }),
   });
 }
 

@@ -1,7 +1,6 @@
 import assert from 'node:assert/strict';
 import { readdirSync } from 'node:fs';
 import { before, describe, it } from 'node:test';
-import { QueryTypes } from 'sequelize';
 import {
   BELLY,
   cookieSession,
@@ -10,15 +9,12 @@ import {
   suiteServer,
   type CookieSession,
 } from '../helpers/api-calls.ts';
+import { tableNames } from '../helpers/table-names.ts';
 import { PASSWORDS, type TestServer } from '../helpers/test-server.ts';
 
-/** The tables SQLite holds, by name. */
-async function tableNames(server: TestServer): Promise<string[]> {
-  const rows = await server.context.db.sequelize.query<{ name: string }>(
-    "SELECT name FROM sqlite_master WHERE type = 'table' ORDER BY name",
-    { type: QueryTypes.SELECT },
-  );
-  return rows.map((row) => row.name);
+/** The tables the server's database holds, by name. */
+function tableNamesOf(server: TestServer): Promise<string[]> {
+  return tableNames(server.context.db);
 }
 
 const SQL = [
@@ -85,7 +81,7 @@ describe('hostile input: paths, filters, markup', () => {
 
   it('should answer SQL-like filters with 200 and nothing, or 400, and keep every table', async () => {
     const before = await snapshot(server());
-    const tables = await tableNames(server());
+    const tables = await tableNamesOf(server());
     const total = (await send(server(), rosa, { method: 'GET', path: '/api/batches?limit=1' })).json
       .total;
     const queries = SQL.flatMap((text) => {
@@ -111,7 +107,7 @@ describe('hostile input: paths, filters, markup', () => {
         assert.deepEqual(found, [], `${what}: such a filter must match nothing`);
       }
     }
-    assert.deepEqual(await tableNames(server()), tables);
+    assert.deepEqual(await tableNamesOf(server()), tables);
     assert.deepEqual(await snapshot(server()), before);
     const after = await send(server(), rosa, { method: 'GET', path: '/api/batches?limit=1' });
     assert.equal(after.json.total, total);
@@ -128,7 +124,7 @@ describe('hostile input: paths, filters, markup', () => {
     const lot = recorded.json.batch.lotCode as string;
     const read = await send(server(), rosa, { method: 'GET', path: `/api/batches/${lot}` });
     assert.equal(read.json.batch.notes, notes);
-    assert.ok((await tableNames(server())).includes('batches'));
+    assert.ok((await tableNamesOf(server())).includes('batches'));
   });
 
   it('should return a script tag in a formula title as plain JSON text', async () => {

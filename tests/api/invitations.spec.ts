@@ -4,6 +4,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import { handClock, readMessage, readOutbox, tokenOf } from '../helpers/mail.ts';
+import { tableNames } from '../helpers/table-names.ts';
 import { startTestServer, type TestServer } from '../helpers/test-server.ts';
 
 const WREN = {
@@ -26,15 +27,10 @@ async function inviteWren(server: TestServer): Promise<{ id: number; token: stri
 /** Every row of every table of the database, as text. */
 async function everyRow(server: TestServer): Promise<string> {
   const { sequelize } = server.context.db;
-  const tables = await sequelize.query<{ name: string }>(
-    "SELECT name FROM sqlite_master WHERE type = 'table'",
-    { type: QueryTypes.SELECT },
-  );
-  assert.ok(tables.some((table) => table.name === 'outbox'));
+  const tables = await tableNames(server.context.db);
+  assert.ok(tables.includes('outbox'));
   const rows = await Promise.all(
-    tables.map((table) =>
-      sequelize.query(`SELECT * FROM "${table.name}"`, { type: QueryTypes.SELECT }),
-    ),
+    tables.map((table) => sequelize.query(`SELECT * FROM "${table}"`, { type: QueryTypes.SELECT })),
   );
   return JSON.stringify(rows);
 }
@@ -60,8 +56,12 @@ async function assertNowhere(server: TestServer, token: string): Promise<void> {
     assert.ok(!(await rosa.get(route)).text.includes(token), route);
   assert.ok(!(await everyRow(server)).includes(token), 'a row of the database');
   assert.ok(!(await everyRow(server)).includes(encodeURIComponent(token)), 'an encoded link');
-  await server.context.db.sequelize.query('PRAGMA wal_checkpoint(FULL)');
-  assert.ok(!databaseBytes(server).includes(token), 'a byte of the database file');
+  // The SQLite file is a copy of the data folder away; PostgreSQL's own files are not the
+  // server's to read, and every row of its tables is checked above.
+  if (server.context.db.dialect === 'sqlite') {
+    await server.context.db.sequelize.query('PRAGMA wal_checkpoint(FULL)');
+    assert.ok(!databaseBytes(server).includes(token), 'a byte of the database file');
+  }
 }
 
 const anonymous = (server: TestServer) => server.as('anonymous');

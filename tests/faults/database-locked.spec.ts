@@ -10,6 +10,7 @@ import {
 } from '../helpers/api-calls.ts';
 import { PASSWORDS, startTestServer, type ApiResponse } from '../helpers/test-server.ts';
 import { holdWriteLock } from './lock-holder.ts';
+import { databaseLocation } from '../../server/config.ts';
 import { integrityCheck } from './server-process.ts';
 
 /** How long a write waits for the lock in these tests (LARDER_BUSY_TIMEOUT_MS; 10 s by default). */
@@ -59,7 +60,7 @@ describe('another program holding the database write lock', () => {
     const admin: CookieSession = await cookieSession(server, 'rosa');
     const before = await snapshot(server);
 
-    const holder = await holdWriteLock(t, server.context.config.databaseFile);
+    const holder = await holdWriteLock(t, databaseLocation(server.context.config));
     const started = Date.now();
     const refused = await Promise.all(writes(lot).map((call) => send(server, admin, call)));
     const signIn = await send(server, 'anonymous', {
@@ -103,13 +104,13 @@ describe('another program holding the database write lock', () => {
     }
     const moved = await send(server, admin, { method: 'GET', path: `/api/batches/${lot}` });
     assert.equal(moved.json.batch.status, 'curing');
-    assert.equal(await integrityCheck(server.context.config.databaseFile), 'ok');
+    assert.equal(await integrityCheck(databaseLocation(server.context.config)), 'ok');
   });
 
   it('should wait for a lock held shorter than the busy timeout, and then store the write', async (t) => {
     const server = await startTestServer(t, { LARDER_BUSY_TIMEOUT_MS: '5000' });
     const admin = await cookieSession(server, 'rosa');
-    const holder = await holdWriteLock(t, server.context.config.databaseFile);
+    const holder = await holdWriteLock(t, databaseLocation(server.context.config));
     const started = Date.now();
     const pending = send(server, admin, { method: 'POST', path: '/api/batches', body: BELLY });
     setTimeout(() => void holder.release(), 600);

@@ -3,10 +3,10 @@ import { describe, it } from 'node:test';
 import { BELLY } from '../helpers/api-calls.ts';
 import {
   call,
-  databaseOf,
+  dataQuery,
+  databaseLocationOf,
   integrityCheck,
   makeDataDir,
-  query,
   signIn,
   startServerProcess,
   type Answer,
@@ -51,7 +51,8 @@ describe('the server killed in the middle of a burst of records', () => {
     assert.ok(answered >= KILL_AFTER, `${answered} records answered 201`);
     assert.ok(answered < BURST, 'the kill must land before the burst has finished');
 
-    // The next start recovers the write-ahead log on the same file.
+    // The next start recovers the write-ahead log on the same file (on PostgreSQL, the same
+    // database: the server process died, not the database).
     const second = await startServerProcess(t, data);
     for (const answer of created) {
       const lot = answer.json.batch.lotCode as string;
@@ -66,14 +67,19 @@ describe('the server killed in the middle of a burst of records', () => {
     }
     await second.stop();
 
-    const file = databaseOf(data);
-    assert.equal(await integrityCheck(file), 'ok');
+    assert.equal(await integrityCheck(databaseLocationOf(data)), 'ok');
     // Nothing half-written: each burst batch has its one recorded event and its audit entry.
-    const rows = await query<{ lot_code: string; events: number; audits: number; result: string }>(
-      file,
+    // The counts as integers: PostgreSQL's COUNT is a bigint, which pg gives as text.
+    const rows = await dataQuery<{
+      lot_code: string;
+      events: number;
+      audits: number;
+      result: string;
+    }>(
+      data,
       `SELECT b.lot_code, b.result,
-         (SELECT COUNT(*) FROM batch_events e WHERE e.batch_id = b.id AND e.type = 'recorded') AS events,
-         (SELECT COUNT(*) FROM audit_events a WHERE a.subject = b.lot_code) AS audits
+         CAST((SELECT COUNT(*) FROM batch_events e WHERE e.batch_id = b.id AND e.type = 'recorded') AS INTEGER) AS events,
+         CAST((SELECT COUNT(*) FROM audit_events a WHERE a.subject = b.lot_code) AS INTEGER) AS audits
        FROM batches b WHERE b.notes LIKE 'burst %'`,
     );
     assert.ok(rows.length >= answered, `${rows.length} burst batches stored`);

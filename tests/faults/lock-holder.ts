@@ -1,6 +1,7 @@
 // Another program with the database open in a write transaction: what a backup tool, the
 // sqlite3 shell or a stuck script does to the server.
 import { spawn, type ChildProcess } from 'node:child_process';
+import pg from 'pg';
 import { REPO_ROOT } from '../helpers/run-larder.ts';
 import type { AfterHook } from './server-process.ts';
 
@@ -24,8 +25,13 @@ export interface LockHolder {
   release(): Promise<void>;
 }
 
-/** Starts a process that takes the write lock of a database file, and waits until it holds it. */
+/**
+ * Starts a process that takes the write lock of a database file, and waits until it holds it; on
+ * PostgreSQL (a postgres:// location), a connection that locks every table against writes
+ * (EXCLUSIVE: reads go on) in a transaction left open, as a stuck script would.
+ */
 export async function holdWriteLock(t: AfterHook, file: string): Promise<LockHolder> {
+  if (/^postgres(ql)?:/.test(file)) return holdPostgresTables(t, file);
   const child: ChildProcess = spawn(process.execPath, ['-e', HOLDER, file], {
     cwd: REPO_ROOT,
     stdio: ['pipe', 'pipe', 'pipe'],
@@ -50,4 +56,23 @@ export async function holdWriteLock(t: AfterHook, file: string): Promise<LockHol
       await exited;
     },
   };
+}
+
+async function holdPostgresTables(t: AfterHook, url: string): Promise<LockHolder> {
+  const client = new pg.Client({ connectionString: url });
+  await client.connect();
+  let released = false;
+  const release = async (): Promise<void> => {
+    if (released) return;
+    released = true;
+    await client.query('ROLLBACK');
+    await client.end();
+  };
+  t.after(release);
+  const { rows } = await client.query<{ name: string }>(
+    "SELECT quote_ident(tablename) AS name FROM pg_tables WHERE schemaname = 'public'",
+  );
+  await client.query('BEGIN');
+  await client.query(`LOCK TABLE ${rows.map((row) => row.name).join(', ')} IN EXCLUSIVE MODE`);
+  return { release };
 }

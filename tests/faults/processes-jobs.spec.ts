@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { databaseOf, makeDataDir, query, startServerProcess } from './server-process.ts';
+import { dataQuery, makeDataDir, startServerProcess } from './server-process.ts';
 
 /** Waits until `ready` holds, trying every half second for up to a minute. */
 async function until(ready: () => Promise<boolean>, what: string): Promise<void> {
@@ -14,7 +14,6 @@ async function until(ready: () => Promise<boolean>, what: string): Promise<void>
 describe('the once-only jobs of a server of two processes', () => {
   it('should send each reminder the demo has due exactly once', async (t) => {
     const data = makeDataDir(t);
-    const file = databaseOf(data);
     const server = await startServerProcess(t, data, { env: { LARDER_PROCESSES: '2' } });
     assert.match(server.output(), /Processes: 2 sharing the port/);
     // The demo's held batches have reminders due today (flip, ready, overdue): the first run
@@ -22,20 +21,23 @@ describe('the once-only jobs of a server of two processes', () => {
     // for a second sender to show itself.
     await until(
       async () =>
-        (await query(file, "SELECT id FROM audit_events WHERE action = 'reminder-send'")).length >
-        0,
+        (await dataQuery(data, "SELECT id FROM audit_events WHERE action = 'reminder-send'"))
+          .length > 0,
       'a reminder',
     );
     await new Promise((resolve) => setTimeout(resolve, 3000));
-    const decided = await query<{ n: number }>(file, 'SELECT COUNT(*) AS n FROM reminders_sent');
-    const audited = await query<{ n: number }>(
-      file,
+    const decided = await dataQuery<{ n: number }>(
+      data,
+      'SELECT COUNT(*) AS n FROM reminders_sent',
+    );
+    const audited = await dataQuery<{ n: number }>(
+      data,
       "SELECT COUNT(*) AS n FROM audit_events WHERE action = 'reminder-send'",
     );
     assert.ok(decided[0].n > 0);
     assert.equal(audited[0].n, decided[0].n, 'one audit entry per reminder decided');
-    const twice = await query<{ person_id: number; kind: string; related: string; n: number }>(
-      file,
+    const twice = await dataQuery<{ person_id: number; kind: string; related: string; n: number }>(
+      data,
       `SELECT person_id, kind, related, subject, COUNT(*) AS n FROM outbox
        WHERE kind LIKE 'reminder-%' GROUP BY person_id, kind, related, subject HAVING COUNT(*) > 1`,
     );

@@ -4,6 +4,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { chmodSync, chownSync, cpSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import pg from 'pg';
 import sqlite3 from 'sqlite3';
 import { PASSWORDS, type DemoUser } from '../helpers/test-server.ts';
 import { REPO_ROOT } from '../helpers/run-larder.ts';
@@ -220,9 +221,65 @@ export async function query<T = Record<string, unknown>>(
   }
 }
 
-/** SQLite's own check of every page and index of the file: 'ok' when nothing is damaged. */
+/**
+ * The database's own check that nothing is damaged, 'ok' when nothing is: SQLite's
+ * integrity_check of every page and index of the file, or for a postgres:// location amcheck's
+ * (postgresIntegrityCheck).
+ */
 export async function integrityCheck(file: string): Promise<string> {
+  if (/^postgres(ql)?:/.test(file)) return postgresIntegrityCheck(file);
   const rows = await query<{ integrity_check: string }>(file, 'PRAGMA integrity_check');
   assert.ok(rows.length > 0);
   return rows.map((row) => row.integrity_check).join('\n');
+}
+
+/** Where the database of a data folder is: its PostgreSQL database's URL, or its SQLite file. */
+export function databaseLocationOf(dataDir: string): string {
+  return databases.get(dataDir)?.LARDER_DB_URL ?? databaseOf(dataDir);
+}
+
+/** Runs one statement on a PostgreSQL database through a connection of its own. */
+async function postgresQuery<T>(url: string, sql: string): Promise<T[]> {
+  const client = new pg.Client({ connectionString: url });
+  await client.connect();
+  try {
+    return (await client.query(sql)).rows as T[];
+  } finally {
+    await client.end();
+  }
+}
+
+/**
+ * Runs a read on the database of a data folder: its PostgreSQL database when the suites run on
+ * PostgreSQL, its SQLite file otherwise.
+ */
+export async function dataQuery<T = Record<string, unknown>>(
+  dataDir: string,
+  sql: string,
+): Promise<T[]> {
+  const url = databases.get(dataDir)?.LARDER_DB_URL;
+  return url ? postgresQuery<T>(url, sql) : query<T>(databaseOf(dataDir), sql);
+}
+
+/**
+ * amcheck's check of a PostgreSQL database, 'ok' when nothing is damaged: every table's rows
+ * (verify_heapam, its findings listed) and every index against its table (bt_index_check with
+ * heapallindexed, which fails on damage).
+ */
+async function postgresIntegrityCheck(url: string): Promise<string> {
+  await postgresQuery(url, 'CREATE EXTENSION IF NOT EXISTS amcheck');
+  const damaged = await postgresQuery<{ relname: string; msg: string }>(
+    url,
+    `SELECT c.relname, v.msg FROM pg_class c
+       JOIN pg_namespace n ON n.oid = c.relnamespace AND n.nspname = 'public'
+       CROSS JOIN LATERAL verify_heapam(c.oid) v WHERE c.relkind = 'r'`,
+  );
+  await postgresQuery(
+    url,
+    `SELECT bt_index_check(c.oid, true) FROM pg_index i
+       JOIN pg_class c ON c.oid = i.indexrelid
+       JOIN pg_namespace n ON n.oid = c.relnamespace AND n.nspname = 'public'
+       JOIN pg_am am ON am.oid = c.relam AND am.amname = 'btree'`,
+  );
+  return damaged.length ? damaged.map((row) => `${row.relname}: ${row.msg}`).join('\n') : 'ok';
 }

@@ -3,9 +3,8 @@ import { describe, it } from 'node:test';
 import { BELLY } from '../helpers/api-calls.ts';
 import {
   call,
-  databaseOf,
+  dataQuery,
   makeDataDir,
-  query,
   signIn,
   startServerProcess,
   type Answer,
@@ -44,8 +43,8 @@ describe('a server of two processes stopped in the middle of a burst of records'
     for (const reason of refused) assert.match(reason, /ECONNREFUSED/);
     // Nothing acknowledged lost, and nothing stored that no one was told of: no request was cut
     // off between its commit and its answer.
-    const stored = await query<{ lot_code: string }>(
-      databaseOf(data),
+    const stored = await dataQuery<{ lot_code: string }>(
+      data,
       "SELECT lot_code FROM batches WHERE notes LIKE 'burst %'",
     );
     assert.deepEqual(
