@@ -1,6 +1,7 @@
 import { Sequelize, Transaction } from 'sequelize';
 import type { Database } from './database.ts';
 import { isWriteConflict } from './postgres-faults.ts';
+import { WriteQueue } from './write-queue.ts';
 
 /** Whether a database setting names a PostgreSQL server rather than a SQLite file. */
 export function isPostgresUrl(location: string): boolean {
@@ -57,15 +58,24 @@ export async function connectPostgres(url: string, lockTimeoutMs?: number): Prom
  * The write of a PostgreSQL database. SERIALIZABLE, because every write of Larderbook was made
  * for SQLite's single writer: it reads (the last lot code of a day, a formula's revision, a
  * reminder already sent) and then writes on what it read. Serializable transactions keep that
- * true with many writers at once: PostgreSQL lets them run side by side and refuses, with a
- * serialization failure, any that could not have run one after the other; that one runs again.
- * Nothing queues the writers in this process, which SQLite needed and PostgreSQL does not.
+ * true with many writers at once: PostgreSQL refuses, with a serialization failure, any that could
+ * not have run one after the other, and that one runs again. Within one process the writes still
+ * queue (as on SQLite): thirty records of one burst all read and extend the same day's lot codes,
+ * so run side by side they mostly refuse each other, and some ran out of patience (503) before
+ * their turn came. Queued, a process has one writer, the processes' writers run side by side, and
+ * only a race between processes is tried again.
  */
 export function postgresWrite(sequelize: Sequelize, patienceMs: number): Database['write'] {
+  const queue = new WriteQueue();
   return (work) =>
-    retryConflicts(
-      () =>
-        sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.SERIALIZABLE }, work),
-      patienceMs,
+    queue.run(() =>
+      retryConflicts(
+        () =>
+          sequelize.transaction(
+            { isolationLevel: Transaction.ISOLATION_LEVELS.SERIALIZABLE },
+            work,
+          ),
+        patienceMs,
+      ),
     );
 }
