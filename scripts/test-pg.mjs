@@ -35,12 +35,12 @@ try {
   process.stdout.write(
     `PostgreSQL suites (${suites.length}) on ${dir ? `a throw-away cluster in ${dir}` : 'the cluster of LARDER_TEST_PG_URL'}\n`,
   );
-  // Five minutes a test, not two: every test server seeds the demo, which takes several times
+  // Ten minutes a test, not two (a suite's describe counts as one test, so its whole file): every test server seeds the demo, which takes several times
   // longer on PostgreSQL (one round trip a statement) than on the embedded file.
   const code = await new Promise((resolve) => {
     const child = spawn(
       process.execPath,
-      ['--import', 'tsx', '--test', '--test-timeout=300000', ...suites],
+      ['--import', 'tsx', '--test', '--test-timeout=600000', ...suites],
       { cwd: root, stdio: 'inherit', env: { ...process.env, LARDER_TEST_PG_URL: url } },
     );
     child.once('exit', (exitCode, signal) => resolve(exitCode ?? (signal ? 1 : 0)));
