@@ -35,8 +35,9 @@ try {
   process.stdout.write(
     `PostgreSQL suites (${suites.length}) on ${dir ? `a throw-away cluster in ${dir}` : 'the cluster of LARDER_TEST_PG_URL'}\n`,
   );
-  // Ten minutes a test, not two (a suite's describe counts as one test, so its whole file): every test server seeds the demo, which takes several times
-  // longer on PostgreSQL (one round trip a statement) than on the embedded file.
+  // Ten minutes a test, not two (a suite's describe counts as one test: so does its whole file):
+  // every test server seeds the demo, which takes several times longer on PostgreSQL (one round
+  // trip a statement) than on the embedded file.
   const code = await new Promise((resolve) => {
     const child = spawn(
       process.execPath,
