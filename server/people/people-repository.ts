@@ -224,11 +224,7 @@ export class PeopleRepository {
   async findSession(sid: string): Promise<SessionRow | undefined> {
     const row = await readRow<
       PersonRow & { session_data: string | null; session_expires: string | null }
-    >(
-      this.db.sequelize,
-      FIND_SESSION_SQL[this.db.dialect],
-      [sid],
-    );
+    >(this.db.sequelize, FIND_SESSION_SQL[this.db.dialect], [sid]);
     if (!row) return undefined;
     return {
       data: row.session_data,
