@@ -91,6 +91,27 @@ describe('calculation answers kept by the server', () => {
     assert.equal(mended.text, before.text);
   });
 
+  it('should work out an assembly afresh when a formula it is made from changes', async (t) => {
+    const server = await startTestServer(t);
+    const fresh = await startTestServer(t, { LARDER_CALC_CACHE: '0' });
+    const pack = { formula: 'bacon-pack', batch: { count: '40' } };
+    await server.as('tobin').post('/api/calc', pack);
+    const before = await server.as('tobin').post('/api/calc', pack);
+    assert.equal(before.status, 200, before.text);
+    // The belly is renamed, as the pack's answer names it. The pack's own file is unchanged.
+    const belly = path.join(server.formulasDir, 'quillmoor-belly.yaml');
+    const changed = readFileSync(belly, 'utf8').replace(
+      'title: Quillmoor belly, dry equilibrium cure',
+      'title: Quillmoor belly, dry equilibrium cure (house)',
+    );
+    writeFileSync(belly, changed);
+    const after = await askUntilChanged(server, pack, before.text);
+    assert.equal(after.status, 200, after.text);
+    assert.notEqual(after.text, before.text);
+    writeFileSync(path.join(fresh.formulasDir, 'quillmoor-belly.yaml'), changed);
+    assert.equal(after.text, (await fresh.as('tobin').post('/api/calc', pack)).text);
+  });
+
   it('should give each batch its own answer, in any order of its options, and keep no refusal', async (t) => {
     const server = await startTestServer(t);
     const fresh = await startTestServer(t, { LARDER_CALC_CACHE: '0' });
