@@ -11,9 +11,9 @@ import { encodeCursor, parseListQuery } from '../server/batches/batch-query.ts';
 import { TOTAL_COUNTED } from '../server/batches/batch-repository.ts';
 import { countSql, pageSql } from '../server/batches/batch-sql.ts';
 import { numberedParameters } from '../server/db/postgres-read.ts';
-import { REQUESTS, ROWS, settled, time } from './batch-log.ts';
+import { REQUESTS, ROWS, time } from './batch-log.ts';
 import { countPostgresBatches, seedPostgresLog } from './seed-log-postgres.ts';
-import { signInCookie, startBenchServer } from './server-process.ts';
+import { settled, signInCookie, startBenchServer } from './server-process.ts';
 
 /** A node of EXPLAIN (FORMAT JSON)'s plan tree. */
 interface PlanNode {

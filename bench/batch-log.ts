@@ -12,7 +12,7 @@ import { TOTAL_COUNTED } from '../server/batches/batch-repository.ts';
 import { countSql, pageSql } from '../server/batches/batch-sql.ts';
 import { benchBatchLogPostgres } from './batch-log-postgres.ts';
 import { SEED_VERSION, seedLog } from './seed-log.ts';
-import { signInCookie, startBenchServer, type BenchServer } from './server-process.ts';
+import { settled, signInCookie, startBenchServer } from './server-process.ts';
 
 export const ROWS = Number(process.env.BENCH_LOG_ROWS ?? 1_000_000);
 export const REQUESTS = Number(process.env.BENCH_LOG_REQUESTS ?? 100);
@@ -96,21 +96,6 @@ function pageVerdict(plan: string): string {
   return /TEMP B-TREE/.test(picked)
     ? 'sorts ids and keys, builds the page'
     : 'walks an index in order, builds the page';
-}
-
-/**
- * Waits until the server has used under 20 ms of CPU in half a second (at most 30 s): its own
- * work after a start — the PDF warm-up 2 s after it listens (about a second of CPU), the first
- * runs of its jobs — would otherwise land in the first requests timed. Returns the seconds waited.
- */
-export async function settled(server: BenchServer): Promise<number> {
-  const start = performance.now();
-  for (;;) {
-    const before = server.cpuSeconds();
-    await new Promise((resolve) => setTimeout(resolve, 500));
-    const waited = (performance.now() - start) / 1000;
-    if (server.cpuSeconds() - before < 0.02 || waited > 30) return waited;
-  }
 }
 
 /** Runs the log benchmark and prints it. */

@@ -18,6 +18,9 @@ export interface BenchServer {
   cpuSeconds(): number;
   /** Starts the peak RSS over from now (Linux: /proc/PID/clear_refs); false where it cannot. */
   resetPeakRss(): boolean;
+  /** Everything the server (all its processes) has printed on its standard output so far. */
+  output(): string;
+  /** Stops the server; its output then holds what it printed while stopping. */
   stop(): Promise<void>;
 }
 
@@ -48,8 +51,8 @@ export async function startBenchServer(
     },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
+  let seen = '';
   const url = await new Promise<string>((resolve, reject) => {
-    let seen = '';
     child.stdout?.on('data', (chunk: Buffer) => {
       seen += chunk.toString();
       const match = /at (http:\/\/[\d.]+:\d+)\//.exec(seen);
@@ -88,8 +91,10 @@ export async function startBenchServer(
         return false;
       }
     },
+    output: () => seen,
     stop: async () => {
-      const exited = new Promise((resolve) => child.once('exit', resolve));
+      // 'close', not 'exit': the last lines it printed have been read too.
+      const exited = new Promise((resolve) => child.once('close', resolve));
       child.kill('SIGTERM');
       await exited;
       if (!options.keepData) rmSync(dataDir, { recursive: true, force: true });
@@ -148,4 +153,19 @@ export async function signInCookie(
 /** The Authorization header of HTTP Basic, as scripts and the CLI sign their requests. */
 export function basicAuth(username: string, password: string): { authorization: string } {
   return { authorization: `Basic ${Buffer.from(`${username}:${password}`).toString('base64')}` };
+}
+
+/**
+ * Waits until the server has used under 20 ms of CPU in half a second (at most 30 s): its own
+ * work after a start — the PDF warm-up 2 s after it listens (about a second of CPU), the first
+ * runs of its jobs — would otherwise land in the first requests timed. Returns the seconds waited.
+ */
+export async function settled(server: BenchServer): Promise<number> {
+  const start = performance.now();
+  for (;;) {
+    const before = server.cpuSeconds();
+    await new Promise((resolve) => setTimeout(resolve, 500));
+    const waited = (performance.now() - start) / 1000;
+    if (server.cpuSeconds() - before < 0.02 || waited > 30) return waited;
+  }
 }

@@ -1,3 +1,4 @@
+import type { CalcAnswers } from './calc/calc-answers.ts';
 import type { AuditRepository } from './audit/audit-repository.ts';
 import type { BatchRepository } from './batches/batch-repository.ts';
 import type { ServerConfig } from './config.ts';
@@ -25,4 +26,6 @@ export interface AppContext {
   readonly reminderPrefs: ReminderPrefsRepository;
   /** The clock of invitations, reminders, the outbox and the batch routes' today; tests move it. */
   readonly now: () => Date;
+  /** Finished calculation answers, kept by everything they depend on (POST /api/calc). */
+  readonly calcAnswers: CalcAnswers;
 }

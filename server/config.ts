@@ -63,6 +63,11 @@ export interface ServerConfig {
    * defaultProcesses() of the database in use.
    */
   readonly processes: number;
+  /**
+   * How many finished calculation answers each process keeps (LARDER_CALC_CACHE, default 500;
+   * 0 keeps none): see server/calc/calc-answers.ts.
+   */
+  readonly calcCacheEntries: number;
 }
 
 /** The most server processes LARDER_PROCESSES may ask for. */
@@ -210,6 +215,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     httpsOnly,
     workflow: workflowRules(env),
     processes: integer(env, 'LARDER_PROCESSES', defaultProcesses(env), 1, MAX_PROCESSES),
+    calcCacheEntries: integer(env, 'LARDER_CALC_CACHE', 500, 0, 100_000),
   };
 }
 

@@ -1,6 +1,7 @@
 import path from 'node:path';
 import type { AppContext } from './app-context.ts';
 import { AuditRepository } from './audit/audit-repository.ts';
+import { CalcAnswers } from './calc/calc-answers.ts';
 import { BatchRepository } from './batches/batch-repository.ts';
 import { databaseLocation, type ServerConfig } from './config.ts';
 import { openDatabase } from './db/database.ts';
@@ -47,5 +48,6 @@ export async function openContext(
     invitations: new InvitationRepository(db, now),
     reminderPrefs: new ReminderPrefsRepository(db),
     now,
+    calcAnswers: new CalcAnswers(config.calcCacheEntries),
   };
 }

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { FORMULA_ID_PATTERN, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { YAML_TEXT } from '../formulas/formula-http.ts';
-import { sendJsonAnswer } from '../http/json-answer.ts';
+import { sendJsonAnswer, sendJsonBytes } from '../http/json-answer.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { serverToday } from '../server-today.ts';
 import {
@@ -11,6 +11,7 @@ import {
   calculateBatch,
   formulaFromText,
 } from './calc-request.ts';
+import { calcAnswerKeyText } from './calc-answers.ts';
 
 const CALC_BODY = {
   type: 'object',
@@ -42,20 +43,43 @@ interface CalcBody {
 /**
  * POST /api/calc: a stateless calculation of any formula (by id, or YAML sent inline) — the same
  * JSON `larder calc --json` prints. A refused batch comes back with critical: true and no amounts.
+ * An answer for a formula by id is kept (context.calcAnswers) under the formula file's revision,
+ * the batch, the units and today, and sent again as it was for the same ones; the person is
+ * still signed in and checked on every request before this route. Formulas sent inline are
+ * worked out each time: each edit in the console's editor is a new text, seldom asked twice.
  */
 export function calcRouter(context: AppContext): Router {
   const router = Router();
+  const answers = context.calcAnswers;
   router.post('/', validateBody(CALC_BODY), async (req, res) => {
     const body = req.body as CalcBody;
-    const formula =
-      typeof body.formula === 'string'
-        ? (await context.formulas.current(body.formula)).formula
-        : formulaFromText(body.formula.yaml, 'inline formula');
-    const library = formula.kind === 'assembly' ? await context.formulas.library() : undefined;
-    sendJsonAnswer(
-      res,
-      calculateBatch(formula, body.batch, body.units ?? 'metric', serverToday(context), library),
+    const units = body.units ?? 'metric';
+    const today = serverToday(context);
+    if (typeof body.formula !== 'string') {
+      const formula = formulaFromText(body.formula.yaml, 'inline formula');
+      const library = formula.kind === 'assembly' ? await context.formulas.library() : undefined;
+      sendJsonAnswer(res, calculateBatch(formula, body.batch, units, today, library));
+      return;
+    }
+    const { formula, file } = await context.formulas.current(body.formula);
+    const library =
+      formula.kind === 'assembly' ? await context.formulas.libraryWithRevision() : undefined;
+    const key = calcAnswerKeyText({
+      file: file.name,
+      revision: file.revision,
+      libraryRevision: library?.revision ?? '',
+      units,
+      today,
+      batch: body.batch,
+    });
+    const kept = answers.get(key);
+    if (kept) return sendJsonBytes(res, kept);
+    // Thrown refusals (400, 404, 422) leave before this line: only a 200 answer is kept.
+    const answer = Buffer.from(
+      JSON.stringify(calculateBatch(formula, body.batch, units, today, library?.library)),
     );
+    answers.set(key, answer);
+    sendJsonBytes(res, answer);
   });
   return router;
 }

@@ -4,6 +4,7 @@ import {
   type Formula,
   type FormulaLibrary,
 } from '../../shared/index.ts';
+import { revisionOf } from '../../files/revision.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import { FolderWatch } from './folder-watch.ts';
 import { filesById, readFormulaFolder, type FormulaFile } from './formula-files.ts';
@@ -107,8 +108,19 @@ export class FormulaStore {
 
   /** Every formula that reads cleanly (assemblies checked against the others), by id. */
   async library(): Promise<FormulaLibrary> {
+    return (await this.libraryWithRevision()).library;
+  }
+
+  /**
+   * The library with one revision for the whole of it, read from the same files: the same names
+   * and texts give the same revision, any file added, removed, renamed or changed a new one.
+   */
+  async libraryWithRevision(): Promise<{ library: FormulaLibrary; revision: string }> {
     const files = await this.files();
-    return formulaLibrary(files.map((file) => ({ file: file.name, reading: file.reading })));
+    return {
+      library: formulaLibrary(files.map((file) => ({ file: file.name, reading: file.reading }))),
+      revision: revisionOf(files.map((file) => `${file.name}\0${file.revision}`).join('\n')),
+    };
   }
 
   /**

@@ -10,3 +10,9 @@ export function sendJsonAnswer(res: Response, value: unknown): void {
   res.setHeader('Content-Type', 'application/json; charset=utf-8');
   res.end(JSON.stringify(value));
 }
+
+/** As sendJsonAnswer, for an answer already written as JSON bytes (a kept calculation). */
+export function sendJsonBytes(res: Response, json: Buffer): void {
+  res.setHeader('Content-Type', 'application/json; charset=utf-8');
+  res.end(json);
+}
