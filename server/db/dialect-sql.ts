@@ -4,8 +4,15 @@
  * before PostgreSQL was added.
  */
 
+import type { Sequelize } from 'sequelize';
+
 /** Which database a statement is for. */
 export type Dialect = 'sqlite' | 'postgres';
+
+/** The database a Sequelize instance talks to, for code that holds the instance alone. */
+export function dialectOf(sequelize: Sequelize): Dialect {
+  return sequelize.getDialect() === 'postgres' ? 'postgres' : 'sqlite';
+}
 
 /** A JSON object of the given 'key', value pairs (SQL text), as a value inside other JSON. */
 export function jsonObject(dialect: Dialect, pairs: string): string {
@@ -30,4 +37,46 @@ export function jsonInteger(dialect: Dialect, column: string, key: string): stri
   return dialect === 'postgres'
     ? `(${column}::json ->> '${key}')::integer`
     : `json_extract(${column}, '$.${key}')`;
+}
+
+/**
+ * SQLite's INDEXED BY, with its leading space, which holds a read to the index it was planned on;
+ * PostgreSQL has no such clause (its planner chooses from the statistics), so nothing there.
+ */
+export function indexedBy(dialect: Dialect, index: string): string {
+  return dialect === 'postgres' ? '' : ` INDEXED BY ${index}`;
+}
+
+/** `column` equal to `value` in any case, as people type a name (SQLite's NOCASE: ASCII). */
+export function equalsAnyCase(dialect: Dialect, column: string, value: string): string {
+  return dialect === 'postgres'
+    ? `lower(${column}) = lower(${value})`
+    : `${column} = ${value} COLLATE NOCASE`;
+}
+
+/** LIKE in any case: SQLite's LIKE ignores ASCII case; PostgreSQL's needs ILIKE for that. */
+export function likeAnyCase(dialect: Dialect): string {
+  return dialect === 'postgres' ? 'ILIKE' : 'LIKE';
+}
+
+/**
+ * The integer ids of a JSON array parameter (`[1,2]`) as a table of one column, `value`, to join
+ * on: a list of any length is then one statement, prepared once.
+ */
+export function jsonIdTable(dialect: Dialect, parameter: string): string {
+  return dialect === 'postgres'
+    ? `(SELECT CAST(value AS integer) AS value FROM json_array_elements_text(CAST(${parameter} AS json)))`
+    : `json_each(${parameter})`;
+}
+
+/**
+ * A parameter whose type nothing around it says (a VALUES row, `? IS NULL`): PostgreSQL must be
+ * told, SQLite takes the value as bound.
+ */
+export function typedParameter(
+  dialect: Dialect,
+  parameter: string,
+  type: 'integer' | 'text',
+): string {
+  return dialect === 'postgres' ? `CAST(${parameter} AS ${type})` : parameter;
 }
