@@ -21,12 +21,12 @@ export function jsonObject(dialect: Dialect, pairs: string): string {
 
 /**
  * The JSON array of an aggregate's values as text ('[]' for no rows), `order` an ORDER BY clause
- * with its leading space or empty.
+ * with its leading space or empty, `filter` a FILTER clause with its leading space or empty.
  */
-export function jsonArrayText(dialect: Dialect, value: string, order = ''): string {
+export function jsonArrayText(dialect: Dialect, value: string, order = '', filter = ''): string {
   return dialect === 'postgres'
-    ? `COALESCE(json_agg(${value}${order})::text, '[]')`
-    : `json_group_array(${value}${order})`;
+    ? `COALESCE(json_agg(${value}${order})${filter}::text, '[]')`
+    : `json_group_array(${value}${order})${filter}`;
 }
 
 /**
@@ -79,4 +79,27 @@ export function typedParameter(
   type: 'integer' | 'text',
 ): string {
   return dialect === 'postgres' ? `CAST(${parameter} AS ${type})` : parameter;
+}
+
+/**
+ * The value at a path of keys (`['schedule', 'start']`) inside JSON stored as text: as text, or
+ * as an integer (SQLite hands back a JSON number as a number; PostgreSQL's ->> gives text).
+ */
+export function jsonAt(
+  dialect: Dialect,
+  column: string,
+  keys: readonly string[],
+  type: 'text' | 'integer',
+): string {
+  if (dialect === 'sqlite') return `json_extract(${column}, '$.${keys.join('.')}')`;
+  const text = `(${column}::json #>> '{${keys.join(',')}}')`;
+  return type === 'integer' ? `${text}::integer` : text;
+}
+
+/**
+ * Text that holds a number (a reading's value) as a floating-point number, to order by: SQLite's
+ * REAL is 8 bytes, PostgreSQL's only 4, so there DOUBLE PRECISION.
+ */
+export function asReal(dialect: Dialect, value: string): string {
+  return `CAST(${value} AS ${dialect === 'postgres' ? 'DOUBLE PRECISION' : 'REAL'})`;
 }

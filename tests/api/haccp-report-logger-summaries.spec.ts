@@ -29,7 +29,9 @@ async function rows(server: TestServer, sql: string, values: unknown[]): Promise
 async function bothWays(server: TestServer, batchId: number) {
   return {
     kept: await rows(server, LOGGER_SUMMARIES_SQL(1), [batchId]),
-    summed: await rows(server, LOGGER_SUMMARY_SQL('batch_id', 1), [batchId]),
+    summed: await rows(server, LOGGER_SUMMARY_SQL(server.context.db.dialect, 'batch_id', 1), [
+      batchId,
+    ]),
   };
 }
 
