@@ -117,7 +117,7 @@ export const LOGGER_SUMMARY_SQL = (
         ORDER BY ${asReal(dialect, 'm.value')} DESC, m.id LIMIT 1) AS max
    FROM readings x WHERE x.${owner} IN (${Array.from({ length: n }, () => '?').join(', ')})
      ${period ? 'AND x.taken_at >= ? AND x.taken_at < ?' : ''} AND ${STANDING_LOGGER}
-   GROUP BY x.${owner}, x.control`;
+   GROUP BY x.${owner}, x.control ORDER BY x.${owner}, x.control`;
 
 /**
  * The standing logger readings of some batches summed up per control, as the triggers of the
