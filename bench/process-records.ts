@@ -268,7 +268,7 @@ export async function benchProcessRecords(): Promise<void> {
       ['report: a page of logger summaries', LOGGER_SUMMARIES_SQL(3), [1, 2, 3]],
       [
         'report: an equipment log summed up',
-        LOGGER_SUMMARY_SQL('equipment_id', 1, true),
+        LOGGER_SUMMARY_SQL('sqlite', 'equipment_id', 1, true),
         [start, end, start, end, 1, start, end],
       ],
     ];

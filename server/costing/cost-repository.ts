@@ -1,4 +1,5 @@
 import type { Database } from '../db/database.ts';
+import { indexedBy } from '../db/dialect-sql.ts';
 import { readRow, readRows } from '../db/read-row.ts';
 import { planNotePattern } from '../plans/plan-repository.ts';
 
@@ -77,7 +78,7 @@ export class CostRepository {
   formulaBatches(formula: string): Promise<CostBatchRow[]> {
     return readRows<CostBatchRow>(
       this.db.sequelize,
-      `SELECT ${BATCH_COLUMNS} FROM batches INDEXED BY batches_formula
+      `SELECT ${BATCH_COLUMNS} FROM batches${indexedBy(this.db.dialect, 'batches_formula')}
        WHERE formula_id = ? AND status NOT IN ('planned', 'discarded')
        ORDER BY recorded_at DESC, id DESC LIMIT ?`,
       [formula, COST_POINTS + 1],
@@ -117,7 +118,7 @@ export class CostRepository {
    */
   async latestPrice(item: string, day: string): Promise<PriceRow | undefined> {
     const sql = (upTo: boolean) =>
-      `SELECT unit, unit_cost FROM receipts INDEXED BY receipts_latest_price
+      `SELECT unit, unit_cost FROM receipts${indexedBy(this.db.dialect, 'receipts_latest_price')}
        WHERE item = ? AND unit_cost IS NOT NULL AND decision <> 'refused'
        ${upTo ? 'AND received_on <= ?' : ''}
        ORDER BY received_on DESC, received_at DESC, id DESC LIMIT 1`;
@@ -132,7 +133,7 @@ export class CostRepository {
     if (items.length === 0) return [];
     const rows = await readRows<{ item: string; remaining: string }>(
       this.db.sequelize,
-      `SELECT item, remaining FROM receipts INDEXED BY receipts_on_hand
+      `SELECT item, remaining FROM receipts${indexedBy(this.db.dialect, 'receipts_on_hand')}
        WHERE item IN (${items.map(() => '?').join(', ')})
          AND emptied_on IS NULL AND decision <> 'refused'`,
       items,

@@ -97,7 +97,7 @@ interface DeviationRow {
   opened_by: number | null;
   by_name: string | null;
   reading_id: number | null;
-  closed: number;
+  closed: number | boolean;
 }
 
 /**
@@ -233,7 +233,8 @@ export class EquipmentRows {
       openedAt: row.opened_at,
       openedBy: person(row.opened_by, row.by_name),
       readingId: row.reading_id,
-      closed: row.closed === 1,
+      // EXISTS is 0 or 1 on SQLite, a boolean on PostgreSQL.
+      closed: Boolean(row.closed),
     }));
   }
 }

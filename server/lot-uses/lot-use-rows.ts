@@ -127,7 +127,7 @@ interface CandidateRow {
   readonly formula_title: string;
   readonly status: BatchStatus;
   readonly started_on: string;
-  readonly released: number;
+  readonly released: number | boolean;
   readonly done_at: string | null;
 }
 
@@ -154,7 +154,8 @@ function sourceRow(row: CandidateRow): SourceRow {
     formulaRevision: row.formula_revision,
     title: row.formula_title,
     status: row.status,
-    released: row.released === 1,
+    // EXISTS is 0 or 1 on SQLite, a boolean on PostgreSQL.
+    released: Boolean(row.released),
     startedOn: row.started_on,
     finishedOn: row.done_at === null ? null : new Date(row.done_at).toISOString().slice(0, 10),
   };
@@ -210,7 +211,7 @@ export async function drawsOn(
   target: number,
   t: Transaction,
 ): Promise<boolean> {
-  const [row] = await select<{ found: number }>(
+  const [row] = await select<{ found: number | boolean }>(
     db,
     `WITH RECURSIVE up(id) AS (
        SELECT ? UNION
@@ -220,5 +221,6 @@ export async function drawsOn(
     [from, target],
     t,
   );
-  return row?.found === 1;
+  // EXISTS is 0 or 1 on SQLite, a boolean on PostgreSQL.
+  return Boolean(row?.found);
 }

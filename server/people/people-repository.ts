@@ -1,7 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
-import { jsonInteger, type Dialect } from '../db/dialect-sql.ts';
+import { jsonAt, type Dialect } from '../db/dialect-sql.ts';
 import { hashPassword, verifyPassword } from '../auth/passwords.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
 
@@ -62,7 +62,7 @@ export interface NewPerson {
 /** A session and its person, joined on the person id the session's JSON keeps. */
 const findSessionSql = (dialect: Dialect) =>
   `SELECT s.data AS session_data, s.expires AS session_expires, p.*
-     FROM "Sessions" s LEFT JOIN people p ON p.id = ${jsonInteger(dialect, 's.data', 'personId')}
+     FROM "Sessions" s LEFT JOIN people p ON p.id = ${jsonAt(dialect, 's.data', ['personId'], 'integer')}
     WHERE s.sid = ?`;
 const FIND_SESSION_SQL = { sqlite: findSessionSql('sqlite'), postgres: findSessionSql('postgres') };
 

@@ -16,6 +16,15 @@ interface LastRow {
   received_on: string;
 }
 
+// The latest delivery of each item. PostgreSQL has no bare columns beside an aggregate: there,
+// the first row of each item newest first (DISTINCT ON).
+const LAST_DELIVERIES_SQL = {
+  sqlite: `SELECT item, supplier, received_on, MAX(received_at) AS latest FROM receipts
+     WHERE decision <> 'refused' GROUP BY item`,
+  postgres: `SELECT DISTINCT ON (item) item, supplier, received_on, received_at AS latest
+     FROM receipts WHERE decision <> 'refused' ORDER BY item, received_at DESC, id DESC`,
+};
+
 /**
  * The lots on hand (not emptied, not refused at the door), through the receipts_on_hand index,
  * and the latest delivery taken in of each item (SQLite gives a bare column of the row holding
@@ -35,12 +44,7 @@ export async function readStockOnHand(db: Database): Promise<StockOnHand | undef
      WHERE emptied_on IS NULL AND decision <> 'refused' ORDER BY item, use_by, received_at`,
     [],
   );
-  const last = await readRows<LastRow>(
-    db.sequelize,
-    `SELECT item, supplier, received_on, MAX(received_at) AS latest FROM receipts
-     WHERE decision <> 'refused' GROUP BY item`,
-    [],
-  );
+  const last = await readRows<LastRow>(db.sequelize, LAST_DELIVERIES_SQL[db.dialect], []);
   return {
     lots: lots.map((row): StockLot => ({
       item: row.item,

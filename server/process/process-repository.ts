@@ -287,7 +287,7 @@ export class ProcessRepository {
     const batch = toBatch(row);
     const [controls, readings, rest] = await Promise.all([
       this.controlsOf(batch),
-      recordReadings((sql, values) => this.select(sql, values), batch.id),
+      recordReadings((sql, values) => this.select(sql, values), batch.id, this.db.dialect),
       this.recordRest(row),
     ]);
     const standing = new Map([...readings].map(([id, r]) => [id, r.standing]));

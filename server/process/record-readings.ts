@@ -5,6 +5,7 @@
  * values of the standing readings.
  */
 import type { ReadingPoint } from '../../shared/process/control-types.ts';
+import { jsonArrayText, type Dialect } from '../db/dialect-sql.ts';
 
 /** A control's readings as the process record sends them, and what the judging needs. */
 export interface ControlReadings {
@@ -36,27 +37,44 @@ export type Select = <T extends object>(sql: string, values: readonly number[]) 
 // and collecting those strings took longer than the rest of the request. Without an ORDER BY in the aggregates, SQLite hands them the rows in the index's
 // order (sorting them again cost about a quarter of the read); every aggregate gets the same
 // rows in the same order, so the check below proves the text's order from the ids and times.
-function readingsSql(ordered: boolean): string {
+function readingsSql(dialect: Dialect, ordered: boolean): string {
   const order = ordered ? ' ORDER BY x.taken_at, x.id' : '';
-  return `SELECT x.control,
-  CAST(json_group_array(json_object('id', x.id,
+  const readings =
+    dialect === 'postgres'
+      ? `convert_to('[' || string_agg(to_json(r)::text, ','${order}) || ']', 'UTF8')`
+      : `CAST(json_group_array(json_object('id', x.id,
     'by', CASE WHEN x.recorded_by IS NULL THEN NULL ELSE json_object('id', x.recorded_by,
       'displayName', coalesce((SELECT p.display_name FROM people p WHERE p.id = x.recorded_by), ''))
     END,
     'recordedAt', x.recorded_at, 'corrects', x.corrects_id, 'reason', x.reason,
     'correctedBy', (SELECT c.id FROM readings c WHERE c.corrects_id = x.id),
     'control', x.control, 'at', x.taken_at, 'value', x.value, 'enteredAs', x.entered_as,
-    'source', x.source)${order}) AS BLOB) AS readings,
-  json_group_array(x.id${order}) AS ids,
-  json_group_array(x.taken_at${order}) AS times,
-  json_group_array(x.value${order}) AS vals,
-  json_group_array(x.corrects_id) FILTER (WHERE x.corrects_id IS NOT NULL) AS fixes
-  FROM readings x WHERE x.batch_id = ? GROUP BY x.control`;
+    'source', x.source)${order}) AS BLOB)`;
+  return `SELECT x.control,
+  ${readings} AS readings,
+  ${jsonArrayText(dialect, 'x.id', order)} AS ids,
+  ${jsonArrayText(dialect, 'x.taken_at', order)} AS times,
+  ${jsonArrayText(dialect, 'x.value', order)} AS vals,
+  ${jsonArrayText(dialect, 'x.corrects_id', '', ' FILTER (WHERE x.corrects_id IS NOT NULL)')} AS fixes
+  FROM readings x${dialect === 'postgres' ? POSTGRES_READING : ''} WHERE x.batch_id = ? GROUP BY x.control`;
 }
 
+// PostgreSQL's json_build_object spaces its text (`"id" : 1`), which would not be the bytes
+// res.json sends; a row's own JSON (to_json) is compact, its nested row (the recorder) an object
+// or null, so each reading is built as a row with the API's names, in toReading's order.
+const POSTGRES_READING = ` CROSS JOIN LATERAL (SELECT x.id AS "id",
+    (SELECT p FROM (SELECT x.recorded_by AS "id", coalesce((SELECT d.display_name FROM people d
+      WHERE d.id = x.recorded_by), '') AS "displayName") p WHERE x.recorded_by IS NOT NULL) AS "by",
+    x.recorded_at AS "recordedAt", x.corrects_id AS "corrects", x.reason AS "reason",
+    (SELECT c.id FROM readings c WHERE c.corrects_id = x.id) AS "correctedBy",
+    x.control AS "control", x.taken_at AS "at", x.value AS "value", x.entered_as AS "enteredAs",
+    x.source AS "source") r`;
+
 /** The record's readings query as SQLite runs it first (the benchmark prints its plan). */
-export const RECORD_READINGS_SQL = readingsSql(false);
-const ORDERED_SQL = readingsSql(true);
+export const RECORD_READINGS_SQL = readingsSql('sqlite', false);
+const ORDERED_SQL = readingsSql('sqlite', true);
+// PostgreSQL's grouping hands an aggregate its rows in no set order: there, always sorted.
+const POSTGRES_SQL = readingsSql('postgres', true);
 
 /** Whether readings are oldest first: by time, then by id (the judging's order, and the API's). */
 export function inTakenOrder(ids: readonly number[], times: readonly string[]): boolean {
@@ -71,21 +89,23 @@ export function inTakenOrder(ids: readonly number[], times: readonly string[]): 
 /**
  * Every reading of a batch, by control: the API's text and the standing points. Read a second
  * time with the aggregates sorted when SQLite ever hands the rows over out of order.
- * @param ordered sort in the aggregates from the start (tests)
+ * @param ordered sort in the aggregates from the start (tests; always on PostgreSQL)
  */
 export async function recordReadings(
   select: Select,
   batchId: number,
-  ordered = false,
+  dialect: Dialect,
+  ordered = dialect === 'postgres',
 ): Promise<Map<string, ControlReadings>> {
-  const rows = await select<ControlRow>(ordered ? ORDERED_SQL : RECORD_READINGS_SQL, [batchId]);
+  const sql = dialect === 'postgres' ? POSTGRES_SQL : ordered ? ORDERED_SQL : RECORD_READINGS_SQL;
+  const rows = await select<ControlRow>(sql, [batchId]);
   const parsed = rows.map((row) => ({
     row,
     ids: JSON.parse(row.ids) as number[],
     times: JSON.parse(row.times) as string[],
   }));
   if (!ordered && !parsed.every(({ ids, times }) => inTakenOrder(ids, times)))
-    return recordReadings(select, batchId, true);
+    return recordReadings(select, batchId, dialect, true);
   // A reading is corrected when a reading of the batch names it (correctedByOf's rule).
   const corrected = new Set<number>();
   for (const { row } of parsed)

@@ -115,7 +115,7 @@ export class ReminderPrefsRepository {
    */
   async processAlertRecipients(transaction: Transaction): Promise<Recipient[]> {
     return this.db.sequelize.query<Recipient>(
-      `SELECT p.id, p.username, p.display_name AS displayName, p.email
+      `SELECT p.id, p.username, p.display_name AS "displayName", p.email
        FROM people p LEFT JOIN reminder_prefs r ON r.person_id = p.id
        WHERE p.active = 1 AND p.email IS NOT NULL AND p.email <> ''
          AND COALESCE(r.process, CASE p.role ${byRole(PROCESS_ALERT_DEFAULTS)} ELSE 0 END) = 1
@@ -158,7 +158,7 @@ export class ReminderPrefsRepository {
       (Object.keys(DEFAULT_CHOICES) as Role[]).map((role) => [role, DEFAULT_CHOICES[role][kind]]),
     ) as Record<Role, boolean>;
     return this.db.sequelize.query<Recipient>(
-      `SELECT p.id, p.username, p.display_name AS displayName, p.email
+      `SELECT p.id, p.username, p.display_name AS "displayName", p.email
        FROM people p LEFT JOIN reminder_prefs r ON r.person_id = p.id
        WHERE p.active = 1 AND p.email IS NOT NULL AND p.email <> ''
          AND COALESCE(r.${name}, CASE p.role ${byRole(defaults)} ELSE 0 END) = 1

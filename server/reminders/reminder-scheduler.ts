@@ -1,6 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { AppContext } from '../app-context.ts';
 import type { BatchStatus } from '../../shared/api/batch-record.ts';
+import { jsonAt } from '../db/dialect-sql.ts';
 import { PeriodicRun } from './periodic-run.ts';
 import { reminderMessage, type RemindedBatch } from './reminder-message.ts';
 import {
@@ -96,9 +97,9 @@ export class ReminderScheduler extends PeriodicRun<ReminderRun> {
     const today = localDate(this.now());
     const held = await db.sequelize.query<HeldRow>(
       `SELECT id, lot_code, formula_title, status, started_on, ready_on, recorded_at,
-         json_extract(result, '$.schedule.start') AS schedule_start,
-         json_extract(result, '$.schedule.ready') AS schedule_ready,
-         json_extract(result, '$.schedule.flipEveryDays') AS flip_every_days,
+         ${jsonAt(db.dialect, 'result', ['schedule', 'start'], 'text')} AS schedule_start,
+         ${jsonAt(db.dialect, 'result', ['schedule', 'ready'], 'text')} AS schedule_ready,
+         ${jsonAt(db.dialect, 'result', ['schedule', 'flipEveryDays'], 'integer')} AS flip_every_days,
          (SELECT MAX(turned_on) FROM batch_turns t WHERE t.batch_id = batches.id) AS last_turned_on
        FROM batches WHERE status IN ('curing', 'proofing') ORDER BY id`,
       { type: QueryTypes.SELECT },

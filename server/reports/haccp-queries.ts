@@ -1,4 +1,5 @@
 import type { Sequelize } from 'sequelize';
+import { asReal, dialectOf, type Dialect } from '../db/dialect-sql.ts';
 import { readRows } from '../db/read-row.ts';
 import type { ReportPeriod } from './report-period.ts';
 import {
@@ -98,20 +99,25 @@ const STANDING_LOGGER = `x.source = 'logger'
  * equal values, the earlier entry's text. A batch's are kept summed up as they are written
  * (LOGGER_SUMMARIES_SQL); this sums up an equipment log's readings of a period.
  */
-export const LOGGER_SUMMARY_SQL = (owner: 'batch_id' | 'equipment_id', n: number, period = false) =>
+export const LOGGER_SUMMARY_SQL = (
+  dialect: Dialect,
+  owner: 'batch_id' | 'equipment_id',
+  n: number,
+  period = false,
+) =>
   `SELECT x.${owner} AS owner, x.control, COUNT(*) AS count, MIN(x.taken_at) AS first,
      MAX(x.taken_at) AS last,
      (SELECT m.value FROM readings m WHERE m.${owner} = x.${owner} AND m.control = x.control
         AND m.source = 'logger' ${period ? 'AND m.taken_at >= ? AND m.taken_at < ?' : ''}
         AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = m.id)
-        ORDER BY CAST(m.value AS REAL), m.id LIMIT 1) AS min,
+        ORDER BY ${asReal(dialect, 'm.value')}, m.id LIMIT 1) AS min,
      (SELECT m.value FROM readings m WHERE m.${owner} = x.${owner} AND m.control = x.control
         AND m.source = 'logger' ${period ? 'AND m.taken_at >= ? AND m.taken_at < ?' : ''}
         AND NOT EXISTS (SELECT 1 FROM readings c WHERE c.corrects_id = m.id)
-        ORDER BY CAST(m.value AS REAL) DESC, m.id LIMIT 1) AS max
+        ORDER BY ${asReal(dialect, 'm.value')} DESC, m.id LIMIT 1) AS max
    FROM readings x WHERE x.${owner} IN (${Array.from({ length: n }, () => '?').join(', ')})
      ${period ? 'AND x.taken_at >= ? AND x.taken_at < ?' : ''} AND ${STANDING_LOGGER}
-   GROUP BY x.${owner}, x.control`;
+   GROUP BY x.${owner}, x.control ORDER BY x.${owner}, x.control`;
 
 /**
  * The standing logger readings of some batches summed up per control, as the triggers of the
@@ -263,12 +269,10 @@ export async function periodEquipment(
      ORDER BY x.equipment_id, x.taken_at, x.id`,
     [...ids, ...span, ...ids],
   );
-  const logged = await read<LoggerRow>(LOGGER_SUMMARY_SQL('equipment_id', ids.length, true), [
-    ...span,
-    ...span,
-    ...ids,
-    ...span,
-  ]);
+  const logged = await read<LoggerRow>(
+    LOGGER_SUMMARY_SQL(dialectOf(sequelize), 'equipment_id', ids.length, true),
+    [...span, ...span, ...ids, ...span],
+  );
   const calibrations = await read<CalibrationRow>(
     `SELECT ${STAMP_COLUMNS}, x.equipment_id, x.checked_at, x.reading, x.outcome, x.note
      FROM calibrations x LEFT JOIN people rp ON rp.id = x.recorded_by

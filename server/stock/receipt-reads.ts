@@ -3,6 +3,7 @@ import { daysBetween, isIsoDate } from '../../shared/calculation/dates.ts';
 import { Decimal, sum } from '../../shared/decimal.ts';
 import { remainingInUnit } from '../../shared/stock/base-measure.ts';
 import { suggestLots, type StockLot } from '../../shared/stock/fifo.ts';
+import { likeAnyCase } from '../db/dialect-sql.ts';
 import { readRows } from '../db/read-row.ts';
 import { badRequest, notFound } from '../http/app-error.ts';
 import { RECEIPT_LOT_PATTERN } from './receipt-lot-code.ts';
@@ -58,7 +59,10 @@ export async function listReceipts(deps: StockDeps, query: ReceiptQuery): Promis
   if (query.item) add('r.item = ?', query.item);
   // Any part of the supplier's name: LIKE's own characters typed are taken as themselves.
   if (query.supplier)
-    add("r.supplier LIKE ? ESCAPE '\\'", `%${query.supplier.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
+    add(
+      `r.supplier ${likeAnyCase(deps.db.dialect)} ? ESCAPE '\\'`,
+      `%${query.supplier.replace(/[\\%_]/g, (c) => `\\${c}`)}%`,
+    );
   if (query.supplierLot) add('r.supplier_lot = ?', query.supplierLot);
   for (const [key, op] of [
     ['from', '>='],

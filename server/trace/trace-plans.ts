@@ -9,12 +9,13 @@ import {
   RECEIPT_BY_LOT_SQL,
   RECEIPTS_BY_ID_SQL,
   RECEIPTS_BY_SUPPLIER_LOT_SQL,
+  type DialectSql,
 } from './trace-sql.ts';
 
 /** A statement of the trace, with values to plan it with and the indexes its steps must use. */
 export interface TraceStatement {
   readonly name: string;
-  readonly sql: string;
+  readonly sql: string | DialectSql;
   readonly values: readonly (string | number)[];
   readonly indexes: readonly string[];
 }
@@ -64,7 +65,7 @@ export const TRACE_STATEMENTS: readonly TraceStatement[] = [
 export async function planOf(sequelize: Sequelize, statement: TraceStatement): Promise<string[]> {
   const rows = await readRows<{ detail: string }>(
     sequelize,
-    `EXPLAIN QUERY PLAN ${statement.sql}`,
+    `EXPLAIN QUERY PLAN ${sqliteText(statement)}`,
     statement.values as (string | number)[],
   );
   return rows.map((row) => row.detail);
@@ -79,4 +80,9 @@ export function fullScans(plan: readonly string[]): string[] {
   return plan.filter(
     (line) => /^SCAN (lot_uses|batches|receipts|u|b|r)\b/.test(line) || /AUTOMATIC/.test(line),
   );
+}
+
+/** The statement's text on SQLite. */
+function sqliteText(statement: TraceStatement): string {
+  return typeof statement.sql === 'string' ? statement.sql : statement.sql.sqlite;
 }

@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import type { LotMeasure, TraceAnswer, TraceSearch } from '../../shared/api/trace-record.ts';
 import type { TracedLot } from '../../shared/api/trace-record.ts';
+import { dialectOf } from '../db/dialect-sql.ts';
 import { readRows } from '../db/read-row.ts';
 import { RecordsError } from '../records/records-error.ts';
 import { tracedBatch, tracedReceipt } from './trace-lots.ts';
@@ -14,6 +15,7 @@ import {
   RECEIPTS_BY_ID_SQL,
   RECEIPTS_BY_SUPPLIER_LOT_SQL,
   type BatchRow,
+  type DialectSql,
   type ReceiptRow,
   type UseRow,
 } from './trace-sql.ts';
@@ -45,8 +47,9 @@ function notFound(message: string): RecordsError {
 export class TraceReader {
   constructor(private readonly sequelize: Sequelize) {}
 
-  private rows<T>(sql: string, values: readonly (string | number)[]): Promise<T[]> {
-    return readRows<T>(this.sequelize, sql, values);
+  private rows<T>(sql: string | DialectSql, values: readonly (string | number)[]): Promise<T[]> {
+    const text = typeof sql === 'string' ? sql : sql[dialectOf(this.sequelize)];
+    return readRows<T>(this.sequelize, text, values);
   }
 
   /** A received lot or a batch by the code on its label, in either case. */

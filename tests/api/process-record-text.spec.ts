@@ -96,8 +96,9 @@ describe('the process record as the API writes it', () => {
         type: QueryTypes.SELECT,
       });
     const batchId = await idOf(server, 'batches', lot);
-    const asStored = await recordReadings(select, batchId);
-    assert.deepEqual(await recordReadings(select, batchId, true), asStored);
+    const { dialect } = server.context.db;
+    const asStored = await recordReadings(select, batchId, dialect);
+    assert.deepEqual(await recordReadings(select, batchId, dialect, true), asStored);
     assert.deepEqual([...asStored.keys()].sort(), ['chill', 'hold', 'smoker']);
     // The corrected 17 °C is not among the smoker's standing readings.
     assert.deepEqual(

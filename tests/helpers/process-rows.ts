@@ -1,13 +1,11 @@
 import { QueryTypes } from 'sequelize';
+import { insertNew } from '../../server/db/insert-row.ts';
 import type { TestServer } from './test-server.ts';
 
-/** Runs one INSERT on the test server's database; the new row's id. */
+/** Runs one INSERT on the test server's database (either kind); the new row's id. */
 async function insert(server: TestServer, sql: string, values: unknown[]): Promise<number> {
-  const [id] = (await server.context.db.sequelize.query(sql, {
-    replacements: values,
-    type: QueryTypes.INSERT,
-  })) as unknown as [number];
-  return id;
+  const { db } = server.context;
+  return db.write((t) => insertNew(db, sql, values, t));
 }
 
 /** The id of a batch by its lot code, and of a demo person by username. */

@@ -124,7 +124,12 @@ export async function startTestServer(
   cpSync(path.join(REPO_ROOT, 'formulas'), formulasDir, { recursive: true });
   // On the PostgreSQL cluster of `npm run test:pg`, a database of the test's own; the caller's
   // LARDER_DB_URL (a second server on the same database) wins.
-  const database = env.LARDER_DB_URL ? {} : await testDatabaseEnv(t);
+  // Its database is dropped once the server has closed (after hooks run in the order given): a
+  // database dropped first ends the connections of jobs still running (57P01).
+  const drops: (() => unknown)[] = [];
+  const database = env.LARDER_DB_URL
+    ? {}
+    : await testDatabaseEnv({ after: (drop) => drops.push(drop) });
   const config = loadConfig({
     ...database,
     LARDER_MODE: 'demo',
@@ -150,8 +155,14 @@ export async function startTestServer(
     };
     return { context, server, close };
   };
-  let running = await open(0);
-  t.after(() => running.close());
+  let running = await open(0).catch(async (error: unknown) => {
+    for (const drop of drops) await drop();
+    throw error;
+  });
+  t.after(async () => {
+    await running.close();
+    for (const drop of drops) await drop();
+  });
   await seedDemo(running.context);
   const port = (running.server.address() as AddressInfo).port;
   const url = `http://127.0.0.1:${port}`;

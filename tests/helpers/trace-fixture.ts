@@ -3,6 +3,7 @@
 // only the rows (migration 015). Amounts are Decimal text in the base measure (grams here).
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../../server/db/database.ts';
+import { insertNew } from '../../server/db/insert-row.ts';
 
 /** A received lot; what is not given is a plausible delivery of the demo kitchen. */
 export interface FixtureReceipt {
@@ -41,13 +42,9 @@ export interface FixtureUse {
   readonly usedOn: string;
 }
 
+/** One INSERT in the caller's write, on either database; the new row's id. */
 async function insert(t: Transaction, db: Database, sql: string, values: unknown[]) {
-  const [id] = await db.sequelize.query(sql, {
-    replacements: values,
-    type: QueryTypes.INSERT,
-    transaction: t,
-  });
-  return id as number;
+  return insertNew(db, sql, values, t);
 }
 
 /** The first person in the records, to receive and record as. */
