@@ -169,4 +169,26 @@ describe('sites: the batch log belongs to a site', () => {
       assert.equal(response.status, 403, `${call.method} ${call.path}: ${response.text}`);
     }
   });
+
+  it('should keep equipment added at a site to that site', async () => {
+    const added = await send(server(), 'rosa', {
+      method: 'POST',
+      path: '/api/equipment',
+      body: {
+        name: 'Harbour walk-in',
+        kind: 'cooler',
+        control: { rule: 'cold-holding', every: '4 h' },
+      },
+      headers: { 'x-larder-site': OTHER_SITE.key },
+    });
+    assert.equal(added.status, 201, added.text);
+    const log = `/api/equipment/${added.json.equipment.id}/log`;
+    const atMain = await send(server(), 'rosa', { method: 'GET', path: log });
+    assert.equal(atMain.status, 404, atMain.text);
+    const atOther = await send(server(), 'rosa', {
+      method: 'GET',
+      path: `${log}?site=${OTHER_SITE.key}`,
+    });
+    assert.equal(atOther.status, 200, atOther.text);
+  });
 });
