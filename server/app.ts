@@ -39,6 +39,10 @@ import { batchWeighingsRouter, weighingsRouter } from './process/weighings-route
 import { lotUsesRouter } from './lot-uses/lot-uses-router.ts';
 import { traceRouter } from './trace/trace-router.ts';
 import { receiptsRouter, stockRouter } from './stock/receipts-router.ts';
+import { resolveSite } from './sites/resolve-site.ts';
+import { recordAtSite } from './sites/site-guards.ts';
+import { SiteRepository } from './sites/site-repository.ts';
+import { sitesRouter } from './sites/sites-router.ts';
 
 /** Largest JSON body the API reads; a formula is a few kilobytes. */
 const JSON_LIMIT = '512kb';
@@ -76,15 +80,30 @@ export function createApp(context: AppContext): Express {
   );
   useBasicStrategy(signIns, context.audit);
   api.get('/health', (_req, res) => void res.json({ ok: true }));
+  const sites = new SiteRepository(context.db);
   api.use(
     '/session',
-    sessionRouter(context.people, context.audit, signIns, demoInfo(context.config)),
+    sessionRouter(context.people, context.audit, signIns, demoInfo(context.config), sites),
   );
   // Anyone holding an invitation link; the token is the proof, so no sign-in and no CSRF token.
   api.use('/invitations', invitationsRouter(context));
   // Everything below needs a signed-in person, and a CSRF token for cookie-signed changes or a
   // script's own marks for password-signed ones.
   api.use(authenticate(context.people), requireCsrfToken, requireScriptWrite);
+  // The sites one may choose from, before a site is chosen; then every route works at one site,
+  // with the person's role there.
+  api.use('/sites', sitesRouter(context, sites));
+  api.use(resolveSite(sites));
+  // A record of another site, named in a path, is not found by any route under that path.
+  const { db } = context;
+  api.use('/batches/:lot', recordAtSite(db, 'batch', 'lot', true));
+  api.use('/receipts/:lot', recordAtSite(db, 'receipt', 'lot', true));
+  api.use('/equipment/:id', recordAtSite(db, 'equipment', 'id'));
+  api.use('/readings/:id', recordAtSite(db, 'reading', 'id'));
+  api.use('/weighings/:id', recordAtSite(db, 'weighing', 'id'));
+  api.use('/deviations/:id', recordAtSite(db, 'deviation', 'id'));
+  api.use('/trace/back/:lot', recordAtSite(db, 'lot', 'lot', true));
+  api.use('/trace/forward/:lot', recordAtSite(db, 'lot', 'lot', true));
   api.use('/calc', calcRouter(context));
   api.use('/plans', plansRouter(context));
   api.use('/formulas', formulasRouter(context));

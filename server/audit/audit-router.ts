@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { AppContext } from '../app-context.ts';
-import { requireRole } from '../auth/authenticate.ts';
+import { requireGroupRole } from '../auth/authenticate.ts';
 import { badRequest } from '../http/app-error.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { AUDIT_ACTIONS, type AuditAction, type AuditPage } from '../../shared/api/audit-event.ts';
@@ -35,7 +35,8 @@ export function auditRouter({ audit }: AppContext): Router {
   const router = Router();
   router.get(
     '/',
-    requireRole('admin'),
+    // One log for the group: its admins read it.
+    requireGroupRole('admin'),
     allowQuery('limit', 'before', 'action', 'actor', 'subject', 'from', 'to'),
     async (req, res) => {
       const { limit: limitText, before: beforeText, action } = req.query;

@@ -120,3 +120,28 @@ export function requireRole(...roles: Role[]): RequestHandler {
     next();
   };
 }
+
+/**
+ * Lets the request through only for a person with one of the roles at every site of the group
+ * (managing people, sites and formulas, the group's audit log): a role at one site is not enough.
+ * Before resolveSite has run (no req.groupRole yet), the stored role at every site decides.
+ */
+export function requireGroupRole(...roles: Role[]): RequestHandler {
+  return (req, _res, next) => {
+    const person = req.person;
+    if (!person) return next(new AppError(401, 'unauthenticated', 'sign in first'));
+    const role =
+      req.groupRole !== undefined
+        ? req.groupRole
+        : person.roleEverywhere === false
+          ? null
+          : person.role;
+    if (!role || !roles.includes(role))
+      return next(
+        forbidden(
+          `this needs the role ${roles.join(' or ')} at every site; you are ${role ?? 'not'}`,
+        ),
+      );
+    next();
+  };
+}

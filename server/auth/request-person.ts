@@ -1,6 +1,8 @@
 import type { Request } from 'express';
 import type { ChangeOptions } from '../batches/batch.ts';
-import type { Person } from '../../shared/api/person.ts';
+import type { Person, Role } from '../../shared/api/person.ts';
+import type { SiteInfo } from '../../shared/api/site.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 import type { SessionPerson } from '../people/people-repository.ts';
 import { AppError } from '../http/app-error.ts';
 
@@ -26,6 +28,12 @@ declare module 'express-serve-static-core' {
      * no person; undefined when not read that way (authenticate reads the person then).
      */
     sessionPerson?: SessionPerson | null;
+    /** The site the request works at (resolveSite); `person.role` is the role there. */
+    site?: SiteScope;
+    /** The person's role at every site of the group; null when they have roles at single sites only. */
+    groupRole?: Role | null;
+    /** The sites the person can see, with their role at each. */
+    siteRoles?: readonly SiteInfo[];
   }
 }
 
@@ -35,11 +43,21 @@ export function personOf(req: Request): Person {
   return req.person;
 }
 
-/** Who makes a change, from where, and when by the server's clock (reminders count from it). */
+/** The site of a request, once resolveSite has run (every route behind it has one). */
+export function siteOf(req: Request): SiteScope {
+  if (!req.site) throw new AppError(400, 'site-required', 'say which site');
+  return req.site;
+}
+
+/**
+ * Who makes a change, from where, at which site, and when by the server's clock (reminders count
+ * from it).
+ */
 export function changeBy(req: Request, { now }: { now: () => Date }): ChangeOptions {
   return {
     actor: personOf(req),
     at: now().toISOString(),
     ...(req.ip === undefined ? {} : { ip: req.ip }),
+    ...(req.site ? { site: req.site } : {}),
   };
 }

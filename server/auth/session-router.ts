@@ -7,6 +7,7 @@ import type { DemoInfo, Person, SessionInfo, SessionState } from '../../shared/a
 import { newCsrfToken, showsCsrfToken, wrongCsrfToken } from './csrf.ts';
 import { SESSION_COOKIE } from './session.ts';
 import type { SignIns } from './sign-ins.ts';
+import type { SiteRepository } from '../sites/site-repository.ts';
 import './request-person.ts';
 
 const SIGN_IN_BODY = {
@@ -45,7 +46,11 @@ export function sessionRouter(
   audit: AuditRepository,
   signIns: SignIns,
   demo: DemoInfo = { demo: false, kitchen: null, signIns: [] },
+  sites?: SiteRepository,
 ): Router {
+  // How many sites the install has: 1 tells the console never to speak of sites.
+  const siteCount = async (): Promise<{ siteCount?: number }> =>
+    sites ? { siteCount: await sites.count() } : {};
   const router = Router();
 
   router.post('/', validateBody(SIGN_IN_BODY), async (req, res) => {
@@ -66,7 +71,7 @@ export function sessionRouter(
     }
     const csrfToken = await startSession(req, person);
     await audit.append({ actor: person, action: 'sign-in', detail: { via: 'form' }, ip: req.ip });
-    res.status(201).json({ person, csrfToken } satisfies SessionInfo);
+    res.status(201).json({ person, csrfToken, ...(await siteCount()) } satisfies SessionInfo);
   });
 
   router.get('/', async (req, res) => {
@@ -75,7 +80,11 @@ export function sessionRouter(
     // Signed out is an answer, not a failure: the console asks on every load.
     if (!person?.active)
       return void res.json({ person: null, csrfToken: null } satisfies SessionState);
-    res.json({ person, csrfToken: req.session.csrfToken ?? '' } satisfies SessionState);
+    res.json({
+      person,
+      csrfToken: req.session.csrfToken ?? '',
+      ...(await siteCount()),
+    } satisfies SessionState);
   });
 
   // Only a demo server tells its sign-ins, for its sign-in page; any other says it is not one.

@@ -28,6 +28,8 @@ export const SORTS: Readonly<
 
 /** What a list or export is narrowed to; every field is optional and they combine with AND. */
 export interface BatchFilter {
+  /** The site's batches only; set by the server (never a query parameter) when there are several. */
+  readonly siteId?: number;
   readonly formula?: string;
   readonly kind?: FormulaKind;
   readonly statuses?: readonly BatchStatus[];

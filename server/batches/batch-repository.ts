@@ -1,3 +1,4 @@
+import { andSite, type SiteScope } from '../sites/site-scope.ts';
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { WorkflowRules } from '../../shared/workflow/workflow-rules.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
@@ -172,11 +173,15 @@ export class BatchRepository {
     });
   }
 
-  /** One batch with its events, oldest first; undefined when there is no such lot. */
-  async get(lot: string, transaction?: Transaction): Promise<Batch | undefined> {
+  /**
+   * One batch with its events, oldest first; undefined when there is no such lot at the site
+   * (another site's batch is not found; no site: any).
+   */
+  async get(lot: string, transaction?: Transaction, site?: SiteScope): Promise<Batch | undefined> {
+    const atSite = andSite(site, 'b.site_id');
     const [row] = await this.select<BatchRow>(
-      `SELECT ${SUMMARY_COLUMNS}, b.result FROM ${BATCHES_WITH_PEOPLE} WHERE b.lot_code = ?`,
-      [lot],
+      `SELECT ${SUMMARY_COLUMNS}, b.result FROM ${BATCHES_WITH_PEOPLE} WHERE b.lot_code = ?${atSite.sql}`,
+      [lot, ...atSite.values],
       transaction,
     );
     if (!row) return undefined;

@@ -37,6 +37,13 @@ export function whereOf(
   const values: (string | number)[] = [];
   const broad = (column: string, sort?: SortKey): string =>
     walking && walking !== 'recorded' && walking !== sort ? withoutIndex(dialect, column) : column;
+  // Set only on an install with several sites (a single site's log needs no condition). The
+  // default order walks 021's (site_id, recorded_at, id); another sort walks its own index and
+  // tests the site, as it does a broad filter.
+  if (filter.siteId !== undefined) {
+    clauses.push(`${broad('b.site_id')} = ?`);
+    values.push(filter.siteId);
+  }
   if (filter.formula !== undefined) {
     clauses.push(`${broad('b.formula_id', 'formula')} = ?`);
     values.push(filter.formula);

@@ -1,3 +1,4 @@
+import { andSite } from '../sites/site-scope.ts';
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { BatchTurn } from '../../shared/api/batch-record.ts';
 import { statusInWords } from '../../shared/workflow/batch-status.ts';
@@ -87,9 +88,11 @@ export async function recordTurn(
 ): Promise<void> {
   const at = options.at ?? new Date().toISOString();
   const day = localDate(new Date(at));
+  // At the change's site only: another site's batch is not found.
+  const site = andSite(options.site, 'site_id');
   const [batch] = await db.sequelize.query<Pick<CurrentRow, 'id' | 'status'>>(
-    'SELECT id, status FROM batches WHERE lot_code = ?',
-    { replacements: [lot], type: QueryTypes.SELECT, transaction: t },
+    `SELECT id, status FROM batches WHERE lot_code = ?${site.sql}`,
+    { replacements: [lot, ...site.values], type: QueryTypes.SELECT, transaction: t },
   );
   if (!batch) throw notFound(`no batch with lot code ${lot}`);
   if (batch.status === 'discarded')

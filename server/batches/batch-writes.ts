@@ -1,3 +1,4 @@
+import { andSite, siteIdOf } from '../sites/site-scope.ts';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { insertNew } from '../db/insert-row.ts';
 import { appendChange } from '../audit/append-change.ts';
@@ -109,8 +110,8 @@ export class BatchWrites {
       this.db,
       `INSERT INTO batches (lot_code, formula_id, formula_revision, formula_title, kind, status,
          operator_id, started_on, ready_on, recorded_at, updated_at, units, inputs, result,
-         checks_passed, nitrite_ppm, notes, planned_by)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+         checks_passed, nitrite_ppm, notes, planned_by, site_id)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
       [
         lot,
         batch.formula.id,
@@ -131,6 +132,7 @@ export class BatchWrites {
         batch.notes,
         // Who recorded it as planned: kept when it is started, by them or someone else.
         batch.status === 'planned' ? batch.operatorId : null,
+        siteIdOf(options.site),
       ],
       t,
     );
@@ -150,11 +152,13 @@ export class BatchWrites {
     return lot;
   }
 
-  private async current(t: Transaction, lot: string): Promise<CurrentRow> {
+  /** The batch a change names, at the change's site: another site's is not found. */
+  private async current(t: Transaction, lot: string, options: ChangeOptions): Promise<CurrentRow> {
+    const site = andSite(options.site, 'site_id');
     const [row] = await this.select<CurrentRow>(
       t,
-      'SELECT id, status, kind, operator_id, signed_off_at FROM batches WHERE lot_code = ?',
-      [lot],
+      `SELECT id, status, kind, operator_id, signed_off_at FROM batches WHERE lot_code = ?${site.sql}`,
+      [lot, ...site.values],
     );
     if (!row) throw notFound(`no batch with lot code ${lot}`);
     return row;
@@ -171,7 +175,7 @@ export class BatchWrites {
     reason: string | null,
     options: ChangeOptions,
   ): Promise<CurrentRow> {
-    const batch = await this.current(t, lot);
+    const batch = await this.current(t, lot, options);
     const refused =
       batch.status === to
         ? `the batch is already ${to}`
@@ -249,7 +253,7 @@ export class BatchWrites {
     options: ChangeOptions,
   ): Promise<void> {
     const at = options.at ?? new Date().toISOString();
-    const batch = await this.current(t, lot);
+    const batch = await this.current(t, lot, options);
     if (batch.signed_off_at !== null)
       throw conflict('already-signed-off', `batch ${lot} was signed off at ${batch.signed_off_at}`);
     if (UNSIGNABLE_STATUSES.includes(batch.status))

@@ -1,5 +1,6 @@
 import type { RecordStatus } from '../../shared/workflow/batch-status.ts';
 import type { Role } from '../../shared/api/person.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 import type {
   FormulaKind,
   PresentedResult,
@@ -38,4 +39,9 @@ export interface ChangeOptions {
   readonly at?: string;
   /** Whether to append to the audit log; only the demo seed, writing history, turns it off. */
   readonly audit?: boolean;
+  /**
+   * The site the change is made at: a new row belongs to it, and a row named by lot code or id
+   * must be its. None: the first site (a single-site install, the demo's seed).
+   */
+  readonly site?: SiteScope;
 }

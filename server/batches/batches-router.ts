@@ -1,7 +1,7 @@
 import { Router, type Request, type RequestHandler, type Response } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { changeBy } from '../auth/request-person.ts';
+import { changeBy, siteOf } from '../auth/request-person.ts';
 import { BATCH_OPTIONS_SCHEMA, UNITS_SCHEMA } from '../calc/calc-request.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { RECORDING_ROLES, batchSheetPdf, type RecordRequest } from '../records/records.ts';
@@ -11,6 +11,7 @@ import { FORMULA_ID_PATTERN } from '../../shared/formula/formula-id.ts';
 import { BATCH_STATUSES, RECORD_STATUSES } from '../../shared/workflow/batch-status.ts';
 import { CSV_HEADER, batchCsvLine } from './batch-csv.ts';
 import { parseListQuery } from './batch-query.ts';
+import { atSite } from './read-batches.ts';
 import { labelContentRoute, labelRoute } from './label-route.ts';
 import { sendPdf } from '../http/send-pdf.ts';
 
@@ -65,7 +66,7 @@ export function batchesRouter(context: AppContext): Router {
   const lotOf = (req: Request): string => String(req.params.lot);
 
   router.get('/', async (req, res) => {
-    res.json(await records.listBatches(req.query));
+    res.json(await records.listBatches(req.query, siteOf(req)));
   });
 
   router.post('/', requireRole(...RECORDING_ROLES), validateBody(RECORD_BODY), async (req, res) => {
@@ -78,14 +79,14 @@ export function batchesRouter(context: AppContext): Router {
   });
 
   router.get('/:lot', async (req, res) => {
-    const batch = await records.showBatch(lotOf(req));
+    const batch = await records.showBatch(lotOf(req), siteOf(req));
     // The rules in force, so the console can say why an action is not offered.
     res.json({ batch, rules: config.workflow });
   });
 
   // The batch sheet as a PDF to print or file; pdfkit loads on the first request, not at start.
   router.get('/:lot/sheet.pdf', async (req, res) => {
-    const batch = await records.showBatch(lotOf(req));
+    const batch = await records.showBatch(lotOf(req), siteOf(req));
     const pdf = await batchSheetPdf(batch.result, batch);
     sendPdf(res, pdf, `${batch.lotCode}.pdf`);
   });
@@ -162,7 +163,7 @@ export function drained(res: Response): Promise<void> {
  */
 export function batchesCsv({ batches }: AppContext): RequestHandler {
   return async (req, res) => {
-    const query = parseListQuery(req.query, false);
+    const query = atSite(parseListQuery(req.query, false), siteOf(req));
     const stamp = new Date().toISOString().slice(0, 10);
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
     res.setHeader('Content-Disposition', `attachment; filename="larderbook-batches-${stamp}.csv"`);

@@ -1,4 +1,5 @@
 import { existsSync, readFileSync } from 'node:fs';
+import { siteOf } from '../auth/request-person.ts';
 import path from 'node:path';
 import type { Request, RequestHandler } from 'express';
 import type { AppContext } from '../app-context.ts';
@@ -79,7 +80,8 @@ async function batchLabel(
   query: LabelQuery,
 ): Promise<ProductLabel> {
   const { records, config } = context;
-  const batch = await records.showBatch(String(req.params.lot));
+  // The site's batch only; its parts are read through it (assemblyParts), whatever they are.
+  const batch = await records.showBatch(String(req.params.lot), siteOf(req));
   if (batch.status === 'planned' || batch.status === 'discarded')
     throw conflict(
       'not-packed',

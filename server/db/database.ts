@@ -24,6 +24,7 @@ import * as receiptJudgement from './migrations/017-receipt-judgement.ts';
 import * as costIndexes from './migrations/018-cost-indexes.ts';
 import * as formulaStatusIndex from './migrations/019-formula-status-index.ts';
 import * as signInAttempts from './migrations/020-sign-in-attempts.ts';
+import * as sites from './migrations/021-sites.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -56,6 +57,7 @@ const MIGRATIONS = [
   costIndexes,
   formulaStatusIndex,
   signInAttempts,
+  sites,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */
@@ -104,8 +106,11 @@ interface SqliteConnection {
   on(event: 'error', listener: (error: Error) => void): void;
 }
 
-/** Applies the migrations not applied yet, the same list on either database. */
-async function migrate(sequelize: Sequelize): Promise<void> {
+/**
+ * Applies the migrations not applied yet, the same list on either database; with `to`, only
+ * those up to that one (a spec makes a database as an older version left it).
+ */
+export async function migrate(sequelize: Sequelize, to?: string): Promise<void> {
   const umzug = new Umzug({
     migrations: MIGRATIONS.map((migration) => ({
       name: migration.name,
@@ -114,7 +119,7 @@ async function migrate(sequelize: Sequelize): Promise<void> {
     storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
     logger: undefined,
   });
-  await umzug.up();
+  await umzug.up(to === undefined ? undefined : { to });
 }
 
 /**

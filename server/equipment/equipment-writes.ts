@@ -1,4 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import { siteIdOf } from '../sites/site-scope.ts';
 import type {
   EquipmentAddRequest,
   EquipmentChangeRequest,
@@ -70,8 +71,9 @@ export async function addEquipment(
     if (await nameTaken(db, t, name)) throw taken(name);
     const insertedId = await insertNew(
       db,
-      `INSERT INTO equipment (name, kind, control, active, created_at) VALUES (?, ?, ?, 1, ?)`,
-      [name, request.kind, JSON.stringify(request.control), by.at],
+      `INSERT INTO equipment (name, kind, control, active, created_at, site_id)
+       VALUES (?, ?, ?, 1, ?, ?)`,
+      [name, request.kind, JSON.stringify(request.control), by.at, siteIdOf(by.site)],
       t,
     );
     if (by.audit !== false)

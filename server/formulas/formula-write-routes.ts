@@ -1,7 +1,7 @@
 import type { RequestHandler, Response, Router } from 'express';
 import multer from 'multer';
 import { MAX_FORMULA_BYTES } from '../../shared/index.ts';
-import { requireRole } from '../auth/authenticate.ts';
+import { requireGroupRole } from '../auth/authenticate.ts';
 import { personOf } from '../auth/request-person.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
@@ -99,7 +99,8 @@ function decodeUtf8(buffer: Buffer): string {
  * written atomically, recorded in the history and the audit log, and committed to git.
  */
 export function formulaWriteRoutes(router: Router, writer: FormulaWriter): void {
-  const admin = requireRole('admin');
+  // The formulas are the group's: a role at one site does not change them.
+  const admin = requireGroupRole('admin');
 
   router.post('/upload', admin, readUpload, async (req, res) => {
     const file = req.file;

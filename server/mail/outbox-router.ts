@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { OutboxPage } from '../../shared/api/outbox-message.ts';
 import type { AppContext } from '../app-context.ts';
-import { requireRole } from '../auth/authenticate.ts';
+import { requireGroupRole } from '../auth/authenticate.ts';
 import { badRequest, notFound } from '../http/app-error.ts';
 import { allowQuery } from '../http/require-json.ts';
 
@@ -16,7 +16,7 @@ function wholeNumber(text: unknown): number | undefined {
  */
 export function outboxRouter({ mail }: AppContext): Router {
   const router = Router();
-  router.use(requireRole('admin'));
+  router.use(requireGroupRole('admin'));
 
   router.get('/', allowQuery('limit', 'before'), async (req, res) => {
     const { limit: limitText, before: beforeText } = req.query;

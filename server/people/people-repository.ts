@@ -17,6 +17,7 @@ interface PersonRow {
   updated_at: string;
   password_hash: string;
   sessions_valid_from: string | null;
+  role_everywhere: number;
 }
 
 function toPerson(row: PersonRow): Person {
@@ -26,6 +27,7 @@ function toPerson(row: PersonRow): Person {
     displayName: row.display_name,
     email: row.email,
     role: row.role,
+    roleEverywhere: row.role_everywhere !== 0,
     active: row.active === 1,
     demo: row.demo === 1,
     createdAt: row.created_at,
@@ -171,7 +173,13 @@ export class PeopleRepository {
   /** Changes name, e-mail, role or active state; returns the person as they are now. */
   async update(
     id: number,
-    changes: { displayName?: string; email?: string | null; role?: Role; active?: boolean },
+    changes: {
+      displayName?: string;
+      email?: string | null;
+      role?: Role;
+      roleEverywhere?: boolean;
+      active?: boolean;
+    },
     transaction?: Transaction,
   ): Promise<Person | undefined> {
     const sets: string[] = [];
@@ -187,6 +195,10 @@ export class PeopleRepository {
     if (changes.role !== undefined) {
       sets.push('role = ?');
       values.push(changes.role);
+    }
+    if (changes.roleEverywhere !== undefined) {
+      sets.push('role_everywhere = ?');
+      values.push(changes.roleEverywhere ? 1 : 0);
     }
     if (changes.active !== undefined) {
       sets.push('active = ?');
@@ -253,7 +265,7 @@ export class PeopleRepository {
   /** How many active admins there are, so the last one is never demoted or deactivated. */
   async activeAdmins(transaction?: Transaction): Promise<number> {
     const [row] = await this.db.sequelize.query<{ n: number }>(
-      "SELECT COUNT(*) AS n FROM people WHERE role = 'admin' AND active = 1",
+      "SELECT COUNT(*) AS n FROM people WHERE role = 'admin' AND role_everywhere = 1 AND active = 1",
       {
         type: QueryTypes.SELECT,
         transaction,

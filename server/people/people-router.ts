@@ -1,12 +1,16 @@
 import { Router, type Request, type RequestHandler } from 'express';
+import type { Transaction } from 'sequelize';
 import type { AppContext } from '../app-context.ts';
-import { requireRole } from '../auth/authenticate.ts';
+import { requireGroupRole } from '../auth/authenticate.ts';
 import { MIN_PASSWORD_LENGTH, randomPassword } from '../auth/passwords.ts';
 import { personOf } from '../auth/request-person.ts';
 import { AppError, badRequest, conflict, notFound } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { sendInvitation, type InvitationSent } from '../invitations/send-invitation.ts';
-import { ROLES, type Role } from '../../shared/api/person.ts';
+import { ROLES, type Person, type Role } from '../../shared/api/person.ts';
+import { SITE_KEY_PATTERN, type SiteRole } from '../../shared/api/site.ts';
+import { noSuchSite } from '../sites/resolve-site.ts';
+import { SiteRepository } from '../sites/site-repository.ts';
 
 const USERNAME = { type: 'string', pattern: '^[a-z][a-z0-9._-]{1,31}$' } as const;
 const DISPLAY_NAME = { type: 'string', minLength: 1, maxLength: 80 } as const;
@@ -32,12 +36,42 @@ const ADD_BODY = {
   },
 } as const;
 
+/** Roles at single sites: the whole list, replacing the one before; each site once. */
+const SITE_ROLES = {
+  type: 'array',
+  maxItems: 200,
+  items: {
+    type: 'object',
+    additionalProperties: false,
+    required: ['key', 'role'],
+    properties: { key: { type: 'string', pattern: SITE_KEY_PATTERN }, role: ROLE },
+  },
+} as const;
+
 const CHANGE_BODY = {
   type: 'object',
   additionalProperties: false,
   minProperties: 1,
-  properties: { displayName: DISPLAY_NAME, email: EMAIL, role: ROLE, active: { type: 'boolean' } },
+  properties: {
+    displayName: DISPLAY_NAME,
+    email: EMAIL,
+    role: ROLE,
+    // false: no role at every site, only the roles `sites` gives; a `role` sent makes it true.
+    roleEverywhere: { type: 'boolean' },
+    sites: SITE_ROLES,
+    active: { type: 'boolean' },
+  },
 } as const;
+
+/** What PATCH /api/people/:id may change. */
+interface PersonChanges {
+  displayName?: string;
+  email?: string | null;
+  role?: Role;
+  roleEverywhere?: boolean;
+  sites?: SiteRole[];
+  active?: boolean;
+}
 
 const RESET_BODY = {
   type: 'object',
@@ -73,7 +107,13 @@ function idParam(req: Request): number {
  */
 export function peopleRouter(context: AppContext): Router {
   const { db, people, audit, mail, records } = context;
+  const sites = new SiteRepository(db);
   const router = Router();
+  /** People with their roles at single sites. */
+  const withSites = async (list: Person[]): Promise<Person[]> => {
+    const roles = await sites.rolesOfPeople();
+    return list.map((person) => ({ ...person, sites: roles.get(person.id) ?? [] }));
+  };
 
   router.put('/me/password', validateBody(OWN_PASSWORD_BODY), async (req, res) => {
     const me = personOf(req);
@@ -102,15 +142,16 @@ export function peopleRouter(context: AppContext): Router {
   // Whom to ask: a page for admins tells anyone else the names of the active admins, no more.
   router.get('/admins', async (_req, res) => {
     const admins = (await people.list())
-      .filter((person) => person.active && person.role === 'admin')
+      .filter((person) => person.active && person.role === 'admin' && person.roleEverywhere)
       .map((person) => ({ displayName: person.displayName }));
     res.json({ admins });
   });
 
-  router.use(requireRole('admin'));
+  // People are the group's: its admins manage them, not an admin of one site.
+  router.use(requireGroupRole('admin'));
 
   router.get('/', async (_req, res) => {
-    res.json({ people: await people.list() });
+    res.json({ people: await withSites(await people.list()) });
   });
 
   router.post('/', validateBody(ADD_BODY), async (req, res) => {
@@ -148,39 +189,40 @@ export function peopleRouter(context: AppContext): Router {
 
   router.patch('/:id', validateBody(CHANGE_BODY), async (req, res) => {
     const id = idParam(req);
-    const changes = req.body as {
-      displayName?: string;
-      email?: string | null;
-      role?: Role;
-      active?: boolean;
-    };
+    const { sites: siteRoles, ...changes } = req.body as PersonChanges;
+    // A role at every site given is a role at every site held.
+    if (changes.role !== undefined) changes.roleEverywhere ??= true;
     const person = await db.write(async (transaction) => {
       const before = await people.findById(id, transaction);
       if (!before) throw notFound(`no person with id ${id}`);
       const losesAdmin =
         before.role === 'admin' &&
+        before.roleEverywhere !== false &&
         before.active &&
-        (changes.active === false || (changes.role && changes.role !== 'admin'));
+        (changes.active === false ||
+          changes.roleEverywhere === false ||
+          (changes.role && changes.role !== 'admin'));
       if (losesAdmin && (await people.activeAdmins(transaction)) <= 1) {
         throw conflict(
           'last-admin',
           'this is the last active admin; make someone else admin first',
         );
       }
+      if (siteRoles) await setSiteRoles(sites, id, siteRoles, transaction);
       const after = await people.update(id, changes, transaction);
       await audit.append(
         {
           actor: personOf(req),
           action: 'person-change',
           subject: before.username,
-          detail: changes,
+          detail: siteRoles ? { ...changes, sites: siteRoles } : changes,
           ip: req.ip,
         },
         transaction,
       );
       return after;
     });
-    res.json({ person });
+    res.json({ person: person && (await withSites([person]))[0] });
   });
 
   router.post('/:id/password', validateBody(RESET_BODY), async (req, res) => {
@@ -192,4 +234,24 @@ export function peopleRouter(context: AppContext): Router {
   });
 
   return router;
+}
+
+/** Puts a person's roles at single sites to the list given; 404 for a site that does not exist. */
+async function setSiteRoles(
+  sites: SiteRepository,
+  personId: number,
+  roles: readonly SiteRole[],
+  transaction: Transaction,
+): Promise<void> {
+  const all = await sites.list(transaction);
+  const keys = new Set<string>();
+  const byKey: { siteId: number; role: Role }[] = [];
+  for (const { key, role } of roles) {
+    const site = all.find((s) => s.key === key);
+    if (!site) throw noSuchSite(key);
+    if (keys.has(key)) throw badRequest(`site ${key} is given twice`);
+    keys.add(key);
+    byKey.push({ siteId: site.id, role });
+  }
+  await sites.setRoles(personId, byKey, transaction);
 }

@@ -1,4 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import { siteIdOf } from '../sites/site-scope.ts';
 import type { PlanResult } from '../../shared/index.ts';
 import type { BatchSummary } from '../../shared/api/batch-record.ts';
 import type { PlanListItem } from '../../shared/api/plan-record.ts';
@@ -81,9 +82,15 @@ export class PlanRepository {
       const { changes } = await insertRow(
         this.db,
         t,
-        `INSERT INTO plans (assembly_id, assembly_title, count, service_date, made_by, made_at)
-         VALUES (?, ?, ?, ?, ?, ?) ON CONFLICT DO NOTHING`,
-        [...this.key(plan), options.actor.id, options.at ?? new Date().toISOString()],
+        `INSERT INTO plans (assembly_id, assembly_title, count, service_date, made_by, made_at,
+           site_id)
+         VALUES (?, ?, ?, ?, ?, ?, ?) ON CONFLICT DO NOTHING`,
+        [
+          ...this.key(plan),
+          options.actor.id,
+          options.at ?? new Date().toISOString(),
+          siteIdOf(options.site),
+        ],
       );
       if (changes > 0) await this.audited(t, options, 'plan-make', plan, {});
     });
@@ -102,11 +109,19 @@ export class PlanRepository {
       this.db,
       t,
       `INSERT INTO plans (assembly_id, assembly_title, count, service_date, made_by, made_at,
-         recorded_by, recorded_at, recorded_batches) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)
+         recorded_by, recorded_at, recorded_batches, site_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
        ON CONFLICT (assembly_id, count, service_date) DO UPDATE SET
          recorded_by = excluded.recorded_by, recorded_at = excluded.recorded_at,
          recorded_batches = plans.recorded_batches + excluded.recorded_batches`,
-      [...this.key(plan), options.actor.id, at, options.actor.id, at, lots.length],
+      [
+        ...this.key(plan),
+        options.actor.id,
+        at,
+        options.actor.id,
+        at,
+        lots.length,
+        siteIdOf(options.site),
+      ],
     );
     await this.audited(t, options, 'plan-record', plan, { lots, again });
   }

@@ -1,4 +1,5 @@
 import { QueryTypes } from 'sequelize';
+import { siteIdOf } from '../sites/site-scope.ts';
 import type { RawBatchOptions } from '../../shared/index.ts';
 import type { Refusal } from '../../shared/api/process-record.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
@@ -55,8 +56,9 @@ async function writeRefusal(
     const { lastId: id } = await insertRow(
       db,
       t,
-      `INSERT INTO refusals (at, person_id, formula_id, formula_revision, inputs, failed, lot_code)
-       VALUES (?, ?, ?, ?, ?, ?, ?)`,
+      `INSERT INTO refusals (at, person_id, formula_id, formula_revision, inputs, failed, lot_code,
+         site_id)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?)`,
       [
         at,
         by.actor.id,
@@ -65,6 +67,7 @@ async function writeRefusal(
         JSON.stringify(tried.inputs),
         JSON.stringify(failed),
         tried.lotCode ?? null,
+        siteIdOf(by.site),
       ],
     );
     await audit.append(

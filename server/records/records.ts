@@ -1,5 +1,6 @@
 // The back end's one door to the records: the API's routers and the larder command both keep
 // records through it. It loads light; the database stack and the PDF stack load when first used.
+import type { SiteScope } from '../sites/site-scope.ts';
 import type { Transaction } from 'sequelize';
 import type {
   CatalogueReading,
@@ -189,14 +190,17 @@ export class Records {
     return this.planRepository;
   }
 
-  /** A page of the batch log, filtered and sorted as the query says (formula, status, from…). */
-  listBatches(query: Record<string, unknown>): Promise<BatchPage> {
-    return this.guard(() => listBatches(query, this.deps.batches));
+  /**
+   * A page of the batch log, filtered and sorted as the query says (formula, status, from…), of
+   * the site's batches (no site: the whole log, as on a single-site install).
+   */
+  listBatches(query: Record<string, unknown>, site?: SiteScope): Promise<BatchPage> {
+    return this.guard(() => listBatches(query, this.deps.batches, site));
   }
 
-  /** One batch with its events, by lot code in either case. */
-  showBatch(lot: string): Promise<Batch> {
-    return this.guard(() => showBatch(lot, this.deps.batches));
+  /** One batch with its events, by lot code in either case; another site's is not found. */
+  showBatch(lot: string, site?: SiteScope): Promise<Batch> {
+    return this.guard(() => showBatch(lot, this.deps.batches, site));
   }
 
   /**

@@ -1,4 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import { siteIdOf } from '../sites/site-scope.ts';
 import type { ReceiptRequest, ReceivingAction } from '../../shared/api/receipt.ts';
 import { appendChange } from '../audit/append-change.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
@@ -84,8 +85,8 @@ async function insertReceipt(
     `INSERT INTO receipts (lot_code, item, item_name, supplier, supplier_lot, establishment,
        packed_on, use_by, quantity, unit, amount, remaining, unit_cost, temperature_c, frozen,
        decision, received_at, received_on, person_id, note, emptied_on, limit_words,
-       limit_source, found)
-     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+       limit_source, found, site_id)
+     VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
     [
       lot,
       checked.item.key,
@@ -113,6 +114,7 @@ async function insertReceipt(
       checked.judgement.limit.words,
       checked.judgement.limit.source,
       checked.judgement.words,
+      siteIdOf(by.site),
     ],
     t,
   );

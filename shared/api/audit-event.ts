@@ -43,6 +43,8 @@ export const AUDIT_ACTIONS = [
   'recall-produce',
   'receipt-record',
   'receipt-discard',
+  'site-add',
+  'site-change',
 ] as const;
 
 /** One of {@link AUDIT_ACTIONS}. */

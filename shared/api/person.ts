@@ -1,3 +1,5 @@
+import type { SiteRole } from './site.ts';
+
 /**
  * People as the API shows them (/api/people, /api/session): one definition for the server, the
  * command line and the console. The console imports these as types only.
@@ -15,7 +17,15 @@ export interface Person {
   readonly username: string;
   readonly displayName: string;
   readonly email: string | null;
+  /**
+   * The role in force: at the request's site for the signed-in person; in the people API the
+   * role at every site, which holds nowhere when `roleEverywhere` is false.
+   */
   readonly role: Role;
+  /** Whether `role` holds at every site of the group; false: only `sites` give roles. */
+  readonly roleEverywhere?: boolean;
+  /** Roles at single sites, each winning over `role` there (the people API only). */
+  readonly sites?: readonly SiteRole[];
   readonly active: boolean;
   /** Whether this is one of the demo sign-ins of the invented kitchen. */
   readonly demo: boolean;
@@ -27,6 +37,11 @@ export interface Person {
 export interface SessionInfo {
   readonly person: Person;
   readonly csrfToken: string;
+  /**
+   * How many sites the install has (1 for a single kitchen, which then never speaks of sites);
+   * absent from servers before sites.
+   */
+  readonly siteCount?: number;
 }
 
 /** GET /api/session when nobody is signed in: an answer, not an error. */
