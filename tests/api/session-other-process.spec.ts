@@ -16,7 +16,11 @@ interface Session {
 }
 
 /** Starts server/main.ts as a process of its own on the test server's data and formulas. */
-async function secondProcess(t: { after(fn: () => unknown): void }, dir: string): Promise<string> {
+async function secondProcess(
+  t: { after(fn: () => unknown): void },
+  dir: string,
+  databaseUrl: string | null | undefined,
+): Promise<string> {
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
     cwd: REPO_ROOT,
     env: {
@@ -27,6 +31,8 @@ async function secondProcess(t: { after(fn: () => unknown): void }, dir: string)
       LARDER_CONSOLE: path.join(dir, 'no-console'),
       LARDER_SIGN_IN_LIMIT: '1000',
       LARDER_PORT: '0',
+      // On the PostgreSQL cluster of `npm run test:pg`, the first server's database.
+      ...(databaseUrl ? { LARDER_DB_URL: databaseUrl } : {}),
     },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
@@ -75,7 +81,7 @@ async function statusOf(url: string, session: Session, what: 'calc' | 'people'):
 describe('a session seen by another server process on the same database', () => {
   it('should follow a sign-out, a deactivation, a role change and a new password at once', async (t) => {
     const server = await startTestServer(t);
-    const other = await secondProcess(t, server.dir);
+    const other = await secondProcess(t, server.dir, server.context.config.databaseUrl);
     const people = (await server.as('rosa').get('/api/people')).json.people as {
       id: number;
       username: string;
