@@ -7,10 +7,11 @@ import { mkdtempSync, cpSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
-import { encodeCursor, parseListQuery } from '../server/batches/batch-query.ts';
+import { parseListQuery } from '../server/batches/batch-query.ts';
 import { TOTAL_COUNTED } from '../server/batches/batch-repository.ts';
 import { countSql, pageSql } from '../server/batches/batch-sql.ts';
 import { numberedParameters } from '../server/db/postgres-read.ts';
+import { logPageCases } from './batch-log-cases.ts';
 import { REQUESTS, ROWS, time } from './batch-log.ts';
 import { countPostgresBatches, seedPostgresLog } from './seed-log-postgres.ts';
 import { settled, signInCookie, startBenchServer } from './server-process.ts';
@@ -56,25 +57,7 @@ export async function benchBatchLogPostgres(url: string): Promise<void> {
       [Math.floor(n / 3)],
     );
     const lotSearch = lot[0].lot_code.slice(0, 9);
-    const cases: [string, Record<string, string>][] = [
-      ['first page', { limit: '50' }],
-      [
-        'filtered page (formula + status)',
-        { formula: 'quillmoor-belly', status: 'done', limit: '50' },
-      ],
-      [
-        'page deep in the list (half-way)',
-        {
-          limit: '50',
-          cursor: encodeCursor('recorded', 'desc', {
-            key: deep[0].recorded_at,
-            id: deep[0].id,
-            direction: 'next',
-          }),
-        },
-      ],
-      [`lot-code search (${lotSearch})`, { lot: lotSearch, limit: '50' }],
-    ];
+    const cases = logPageCases(deep[0], lotSearch);
     process.stdout.write(
       `Batch log on PostgreSQL at ${n} batches: the scans of each plan (the page, then its count up to ${TOTAL_COUNTED + 1})\n`,
     );

@@ -7,9 +7,10 @@ import { existsSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import sqlite3 from 'sqlite3';
-import { encodeCursor, parseListQuery } from '../server/batches/batch-query.ts';
+import { parseListQuery } from '../server/batches/batch-query.ts';
 import { TOTAL_COUNTED } from '../server/batches/batch-repository.ts';
 import { countSql, pageSql } from '../server/batches/batch-sql.ts';
+import { logPageCases, type LogPageCase } from './batch-log-cases.ts';
 import { benchBatchLogPostgres } from './batch-log-postgres.ts';
 import { SEED_VERSION, seedLog } from './seed-log.ts';
 import { settled, signInCookie, startBenchServer } from './server-process.ts';
@@ -133,24 +134,8 @@ export async function benchBatchLog(): Promise<void> {
       Math.floor(n / 3),
     ]);
     const lotSearch = lot.lot_code.slice(0, 9);
-    const cases: [string, Record<string, string>][] = [
-      ['first page', { limit: '50' }],
-      [
-        'filtered page (formula + status)',
-        { formula: 'quillmoor-belly', status: 'done', limit: '50' },
-      ],
-      [
-        'page deep in the list (half-way)',
-        {
-          limit: '50',
-          cursor: encodeCursor('recorded', 'desc', {
-            key: deep.recorded_at,
-            id: deep.id,
-            direction: 'next',
-          }),
-        },
-      ],
-      [`lot-code search (${lotSearch})`, { lot: lotSearch, limit: '50' }],
+    const cases: LogPageCase[] = [
+      ...logPageCases(deep, lotSearch),
       // The console's log: newest started first, and its quick filters (a reviewer's queue).
       ['console first page (started, desc)', { sort: 'started', order: 'desc', limit: '25' }],
       ['needs sign-off (started, desc)', { needsSignOff: 'true', sort: 'started', limit: '25' }],

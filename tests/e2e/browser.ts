@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { REPO_ROOT } from '../helpers/run-larder.ts';
+import { closeBrowser, watchForHang, watchRequests } from './hang-watch.ts';
 import {
   PASSWORDS,
   startTestServer,
@@ -16,6 +17,8 @@ export const ARTIFACTS = path.join(REPO_ROOT, 'test-artifacts');
 
 interface AfterHook {
   after(fn: () => unknown): void;
+  /** The test's name, for the word a stuck test leaves (hang-watch.ts). */
+  readonly name?: string;
 }
 
 /** A running server with the built console, and a browser to drive it. */
@@ -55,6 +58,8 @@ export async function launchChromium(t: AfterHook): Promise<Browser> {
   const browser = await chromium.launch({
     executablePath: CHROMIUM,
     headless: true,
+    // Well inside the runner's limit for the whole file, so a browser that never starts says so.
+    timeout: 60_000,
     args: [
       '--no-sandbox',
       '--disable-gpu',
@@ -64,7 +69,7 @@ export async function launchChromium(t: AfterHook): Promise<Browser> {
       '--no-first-run',
     ],
   });
-  t.after(() => browser.close());
+  t.after(() => closeBrowser(browser));
   return browser;
 }
 
@@ -85,6 +90,7 @@ export async function startConsole(
   );
   const browser = await launchChromium(t);
   mkdirSync(ARTIFACTS, { recursive: true });
+  watchForHang(t, browser, ARTIFACTS);
   return {
     server,
     browser,
@@ -99,6 +105,7 @@ export async function startConsole(
         (route) => route.abort(),
       );
       const page = await context.newPage();
+      watchRequests(page);
       await page.goto(`${server.url}/`, { waitUntil: 'networkidle' });
       if (user) await signIn(page, user);
       return page;
@@ -134,10 +141,14 @@ export async function dialogSettled(page: Page): Promise<void> {
  * shut, and a picture taken on its way shows it half drawn over the screen.
  */
 export async function transitionsDone(page: Page): Promise<void> {
-  // A resize is answered a frame or two later (the layout's media queries, then the drawer).
+  // A resize is answered a frame or two later (the layout's media queries, then the drawer). A
+  // page that draws no frames (hidden, or stuck) would never answer: a second is the most to wait.
   await page.evaluate(
     () =>
-      new Promise<void>((done) => requestAnimationFrame(() => requestAnimationFrame(() => done()))),
+      new Promise<void>((done) => {
+        requestAnimationFrame(() => requestAnimationFrame(() => done()));
+        setTimeout(done, 1000);
+      }),
   );
   await page.waitForFunction(() =>
     document
