@@ -2,6 +2,7 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
 import { jsonAt, type Dialect } from '../db/dialect-sql.ts';
+import { sitesOfPersonJson, type SiteWithSiteRole } from '../sites/site-repository.ts';
 import { hashPassword, verifyPassword } from '../auth/passwords.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
 
@@ -40,6 +41,8 @@ export interface SessionPerson {
   person: Person;
   /** Sessions signed in before this time (ISO) have ended: a password changed then. */
   sessionsValidFrom: string | null;
+  /** Every site with the person's own role there, when read with the session (resolveSite). */
+  sites?: readonly SiteWithSiteRole[];
 }
 
 /** A stored session's row, with its person's read in the same statement. */
@@ -63,7 +66,8 @@ export interface NewPerson {
 /** People and their passwords: plain objects in, plain objects out. */
 /** A session and its person, joined on the person id the session's JSON keeps. */
 const findSessionSql = (dialect: Dialect) =>
-  `SELECT s.data AS session_data, s.expires AS session_expires, p.*
+  `SELECT s.data AS session_data, s.expires AS session_expires, p.*,
+          ${sitesOfPersonJson(dialect, 'p.id')} AS sites_json
      FROM "Sessions" s LEFT JOIN people p ON p.id = ${jsonAt(dialect, 's.data', ['personId'], 'integer')}
     WHERE s.sid = ?`;
 const FIND_SESSION_SQL = { sqlite: findSessionSql('sqlite'), postgres: findSessionSql('postgres') };
@@ -235,7 +239,11 @@ export class PeopleRepository {
    */
   async findSession(sid: string): Promise<SessionRow | undefined> {
     const row = await readRow<
-      PersonRow & { session_data: string | null; session_expires: string | null }
+      PersonRow & {
+        session_data: string | null;
+        session_expires: string | null;
+        sites_json: string;
+      }
     >(this.db.sequelize, FIND_SESSION_SQL[this.db.dialect], [sid]);
     if (!row) return undefined;
     return {
@@ -243,7 +251,13 @@ export class PeopleRepository {
       expires: row.session_expires,
       ...(row.id === null
         ? {}
-        : { person: { person: toPerson(row), sessionsValidFrom: row.sessions_valid_from } }),
+        : {
+            person: {
+              person: toPerson(row),
+              sessionsValidFrom: row.sessions_valid_from,
+              sites: JSON.parse(row.sites_json) as SiteWithSiteRole[],
+            },
+          }),
     };
   }
 
