@@ -32,8 +32,8 @@ declare module 'express-serve-static-core' {
     site?: SiteScope;
     /** The person's role at every site of the group; null when they have roles at single sites only. */
     groupRole?: Role | null;
-    /** The sites the person can see, with their role at each. */
-    siteRoles?: readonly SiteInfo[];
+    /** The sites the person can see, with their role at each (and the id, for queries). */
+    siteRoles?: readonly (SiteInfo & { readonly id: number })[];
   }
 }
 

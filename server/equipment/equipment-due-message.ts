@@ -3,6 +3,7 @@ import { composeMessage, standardFooter, type MessageContent } from '../mail/mai
 import { kitchenTimeZone } from '../process/kitchen-clock.ts';
 import { shortMomentWords } from '../../shared/presentation/date-words.ts';
 import { PROCESS_ALERT_REASON } from '../process/process-alert-message.ts';
+import { subjectAt, type MessageSite } from '../mail/message-site.ts';
 
 /** Everything an equipment-due reminder's words depend on. */
 export interface EquipmentDueFacts {
@@ -13,6 +14,8 @@ export interface EquipmentDueFacts {
   readonly equipmentUrl: string;
   readonly consoleUrl: string;
   readonly kitchen: string;
+  /** The site it is about, named in the subject when the install has several. */
+  readonly site?: MessageSite;
 }
 
 /** A time as the kitchen reads it, the short form of the console's boards: "Thu 3 Dec, 14:00". */
@@ -27,7 +30,10 @@ export function equipmentDueMessage(facts: EquipmentDueFacts): MessageContent {
   const what = thermometer ? 'ice-point check' : 'reading';
   const last = thermometer ? equipment.lastCalibration?.at : equipment.lastReading?.at;
   return composeMessage({
-    subject: `Overdue: ${equipment.name} ${what}, due ${timeText(facts.dueAt)}`,
+    subject: subjectAt(
+      `Overdue: ${equipment.name} ${what}, due ${timeText(facts.dueAt)}`,
+      facts.site,
+    ),
     greeting: `Hello ${facts.recipientName},`,
     paragraphs: [
       `The ${what} of ${equipment.name} was due at ${timeText(facts.dueAt)} and none is recorded yet.`,

@@ -7,6 +7,7 @@ import { EquipmentRows } from './equipment-rows.ts';
 import { viewOf } from './equipment-view.ts';
 import { insertRow } from '../db/insert-row.ts';
 import { deliveryFact } from '../mail/mail-service.ts';
+import { kitchenAt, messageSite } from '../mail/message-site.ts';
 
 /**
  * How long after a reading or check falls due it is chased: a cook on their round is not
@@ -80,7 +81,8 @@ export class EquipmentDueScheduler extends PeriodicRun<SentEquipmentDue[]> {
     const equipment = await viewOf(this.rows, row, now, t);
     const dueAt = equipment.nextDue;
     if (!dueAt || !isChased(dueAt, now)) return undefined;
-    const recipients = await reminderPrefs.processAlertRecipients(t);
+    const site = await messageSite(db, t, { equipmentId: id });
+    const recipients = await reminderPrefs.processAlertRecipients(t, site.id);
     const inserted = await insertRow(
       db,
       t,
@@ -96,7 +98,8 @@ export class EquipmentDueScheduler extends PeriodicRun<SentEquipmentDue[]> {
         recipientName: person.displayName,
         equipmentUrl: `${mail.links.base()}/equipment`,
         consoleUrl: mail.links.base(),
-        kitchen: mail.kitchen,
+        kitchen: kitchenAt(mail.kitchen, site),
+        site,
       });
       await mail.outbox.enqueue(t, {
         ...content,

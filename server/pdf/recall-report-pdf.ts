@@ -25,6 +25,7 @@ function head(layout: SheetLayout, report: RecallReport): void {
     `${report.kitchen} · produced by ${report.producedBy}, ${momentInWords(report.producedAt)} · ${report.totals.batches} affected batch(es)`,
   );
   layout.paragraph(report.caution, { weight: 'semibold', color: INK.warn });
+  if (report.elsewhere) layout.paragraph(report.elsewhere, { weight: 'semibold', color: INK.warn });
 }
 
 /** The lots recalled, each with its facts. */
@@ -76,7 +77,7 @@ function totals(layout: SheetLayout, report: RecallReport): void {
     .map(([status, n]) => `${n} ${batchStatusWords(status)}`)
     .join(', ');
   layout.paragraph(
-    `${report.totals.batches} batch(es)${statuses ? ` (${statuses})` : ''}. Received: ${amounts(report.totals.received)}; used straight from the recalled lots: ${amounts(report.totals.used)}.`,
+    `${report.totals.batches} batch(es)${statuses ? ` (${statuses})` : ''}. Received: ${amounts(report.totals.received)}; used straight from the recalled lots: ${amounts(report.totals.used)}${report.totals.usedElsewhere ? `; used straight from them at another site of the group: ${amounts(report.totals.usedElsewhere)}` : ''}.`,
   );
   heading(layout, 'Still on hand');
   const { lots, batches } = report.onHand;
@@ -114,8 +115,11 @@ function tree(layout: SheetLayout, report: RecallReport): void {
     if (lines++ < TREE_LINES) {
       const use = node.use ? ` — ${useWords(node.use)}` : '';
       const cut = node.cut ? ` (${CUT_WORDS[node.cut]})` : '';
+      const away = node.elsewhere
+        ? ` (and ${node.elsewhere.map((a) => lotAmountWords(a.amount, a.measure)).join(' + ')} at another site)`
+        : '';
       layout.paragraph(
-        `${lotName(node.lot)}${use}${cut}`,
+        `${lotName(node.lot)}${use}${cut}${away}`,
         node.level === 0 ? { weight: 'semibold' } : {},
         { indent: Math.min(node.level, 8) * 14, after: 2 },
       );

@@ -1,6 +1,7 @@
 import { composeMessage, standardFooter, type MessageContent } from '../mail/mail-message.ts';
 import { shortMomentWords } from '../../shared/presentation/date-words.ts';
 import { kitchenTimeZone } from './kitchen-clock.ts';
+import { subjectAt, type MessageSite } from '../mail/message-site.ts';
 import type { ProcessAlert } from './process-alerts.ts';
 
 /** Everything an alert's words depend on. */
@@ -13,6 +14,8 @@ export interface ProcessAlertFacts {
   readonly url: string;
   readonly consoleUrl: string;
   readonly kitchen: string;
+  /** The site it is about, named in the subject when the install has several. */
+  readonly site?: MessageSite;
 }
 
 function subjectOf({ alert }: ProcessAlertFacts): string {
@@ -60,7 +63,7 @@ export const PROCESS_ALERT_REASON =
 /** A process alert's words, plain text and HTML. */
 export function processAlertMessage(facts: ProcessAlertFacts): MessageContent {
   return composeMessage({
-    subject: subjectOf(facts),
+    subject: subjectAt(subjectOf(facts), facts.site),
     greeting: `Hello ${facts.recipientName},`,
     paragraphs: paragraphsOf(facts),
     action: {

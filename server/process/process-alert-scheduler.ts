@@ -10,6 +10,7 @@ import { processAlertMessage } from './process-alert-message.ts';
 import { batchAlerts, type ProcessAlert } from './process-alerts.ts';
 import { BEING_MADE, type ProcessBatch } from './process-repository.ts';
 import { deliveryFact } from '../mail/mail-service.ts';
+import { kitchenAt, messageSite } from '../mail/message-site.ts';
 
 /** How often alerts are decided: a cooling deadline is to the minute. common practice, no source */
 export const ALERT_EVERY_MS = 60_000;
@@ -149,7 +150,8 @@ export class ProcessAlertScheduler extends PeriodicRun<SentAlert[]> {
   ): Promise<string[] | undefined> {
     const { db, mail, reminderPrefs, audit } = this.context;
     if (batch && !(await this.stillOwed(t, alert, batch, at))) return undefined;
-    const recipients = await reminderPrefs.processAlertRecipients(t);
+    const site = await messageSite(db, t, alert);
+    const recipients = await reminderPrefs.processAlertRecipients(t, site.id);
     const row = await insertRow(
       db,
       t,
@@ -167,7 +169,8 @@ export class ProcessAlertScheduler extends PeriodicRun<SentAlert[]> {
           recipientName: person.displayName,
           url,
           consoleUrl: mail.links.base(),
-          kitchen: mail.kitchen,
+          kitchen: kitchenAt(mail.kitchen, site),
+          site,
         }),
         to: { address: person.email, name: person.displayName },
         personId: person.id,

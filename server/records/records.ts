@@ -81,6 +81,7 @@ import type { ProcessUseCases } from '../process/process-writes.ts';
 import type { CorrectionRequest } from '../process/reading-writes.ts';
 import type { TraceAnswer, TraceSearch } from '../../shared/api/trace-record.ts';
 import type { ProducedRecall, RecallFormat, RecallRequest } from '../trace/produce-recall.ts';
+import type { TraceSites } from '../trace/trace-sites.ts';
 
 export { RecordsError, type RecordsFailure } from './records-error.ts';
 export { failureOfStatus } from '../http/failure-status.ts';
@@ -446,16 +447,19 @@ export class Records {
 
   // Trace and recall (server/trace): loaded when first asked for.
 
-  /** Everything that went into a lot (a batch, or a received lot, which has nothing behind it). */
-  async traceBack(lot: string): Promise<TraceAnswer> {
+  /**
+   * Everything that went into a lot (a batch, or a received lot, which has nothing behind it);
+   * kept to `sites` when given (a request on an install with several).
+   */
+  async traceBack(lot: string, sites?: TraceSites): Promise<TraceAnswer> {
     const { TraceReader } = await import('../trace/trace-reader.ts');
-    return this.guard(() => new TraceReader(this.deps.db.sequelize).back(lot));
+    return this.guard(() => new TraceReader(this.deps.db.sequelize, sites).back(lot));
   }
 
-  /** Everywhere a lot or a supplier's lot went, through batches made from batches. */
-  async traceForward(search: TraceSearch): Promise<TraceAnswer> {
+  /** Everywhere a lot or a supplier's lot went, through batches made from batches; see traceBack. */
+  async traceForward(search: TraceSearch, sites?: TraceSites): Promise<TraceAnswer> {
     const { TraceReader } = await import('../trace/trace-reader.ts');
-    const reader = new TraceReader(this.deps.db.sequelize);
+    const reader = new TraceReader(this.deps.db.sequelize, sites);
     return this.guard(async () => reader.forward(search, await reader.forwardRoots(search)));
   }
 

@@ -5,6 +5,7 @@ import {
   type MessageContent,
 } from '../mail/mail-message.ts';
 import type { HoldDates, ReminderKind } from './reminder-schedule.ts';
+import { subjectAt, type MessageSite } from '../mail/message-site.ts';
 
 /** The batch a reminder is about. */
 export interface RemindedBatch extends HoldDates {
@@ -25,6 +26,8 @@ export interface ReminderFacts {
   readonly batchUrl: string;
   readonly consoleUrl: string;
   readonly kitchen: string;
+  /** The site it is about, named in the subject when the install has several. */
+  readonly site?: MessageSite;
 }
 
 const KIND_WORDS: Readonly<Record<ReminderKind, string>> = {
@@ -79,7 +82,7 @@ function paragraphsOf(facts: ReminderFacts, late: boolean): string[] {
 export function reminderMessage(facts: ReminderFacts): MessageContent {
   const late = facts.kind !== 'overdue' && facts.dueOn < facts.today;
   return composeMessage({
-    subject: subjectOf(facts, late),
+    subject: subjectAt(subjectOf(facts, late), facts.site),
     greeting: `Hello ${facts.recipientName},`,
     paragraphs: paragraphsOf(facts, late),
     action: { label: 'Open the batch', url: facts.batchUrl },

@@ -55,6 +55,16 @@ function column(kind: ReminderKind): string {
   return kind;
 }
 
+/**
+ * The people with a role at site ?: their role there (site_roles), else their role at every
+ * site; a person with neither is not joined. The recipients' queries select from it as `p`, so a
+ * role's default choice is the default of the role at the record's site.
+ */
+const PEOPLE_AT_SITE = `(SELECT p.id, p.username, p.display_name, p.email, p.active,
+    COALESCE(sr.role, CASE WHEN p.role_everywhere = 1 THEN p.role END) AS role
+  FROM people p LEFT JOIN site_roles sr ON sr.person_id = p.id AND sr.site_id = ?
+  WHERE sr.role IS NOT NULL OR p.role_everywhere = 1)`;
+
 /** Each person's reminder choices; without a row of their own, the defaults of their role apply. */
 export class ReminderPrefsRepository {
   constructor(private readonly db: Database) {}
@@ -110,17 +120,17 @@ export class ReminderPrefsRepository {
   }
 
   /**
-   * Everyone who gets process alerts: active, with an e-mail address, and wanting them (by their
-   * own choice, or their role's default).
+   * Everyone with a role at the site who gets process alerts: active, with an e-mail address,
+   * and wanting them (by their own choice, or the default of their role there).
    */
-  async processAlertRecipients(transaction: Transaction): Promise<Recipient[]> {
+  async processAlertRecipients(transaction: Transaction, siteId: number): Promise<Recipient[]> {
     return this.db.sequelize.query<Recipient>(
       `SELECT p.id, p.username, p.display_name AS "displayName", p.email
-       FROM people p LEFT JOIN reminder_prefs r ON r.person_id = p.id
+       FROM ${PEOPLE_AT_SITE} p LEFT JOIN reminder_prefs r ON r.person_id = p.id
        WHERE p.active = 1 AND p.email IS NOT NULL AND p.email <> ''
          AND COALESCE(r.process, CASE p.role ${byRole(PROCESS_ALERT_DEFAULTS)} ELSE 0 END) = 1
        ORDER BY p.id`,
-      { type: QueryTypes.SELECT, transaction },
+      { replacements: [siteId], type: QueryTypes.SELECT, transaction },
     );
   }
 
@@ -149,21 +159,25 @@ export class ReminderPrefsRepository {
   }
 
   /**
-   * Everyone who gets a kind of reminder: active, with an e-mail address, and wanting it (by
-   * their own choice, or their role's default).
+   * Everyone with a role at the site who gets a kind of reminder: active, with an e-mail address,
+   * and wanting it (by their own choice, or the default of their role there).
    */
-  async recipients(transaction: Transaction, kind: ReminderKind): Promise<Recipient[]> {
+  async recipients(
+    transaction: Transaction,
+    kind: ReminderKind,
+    siteId: number,
+  ): Promise<Recipient[]> {
     const name = column(kind);
     const defaults = Object.fromEntries(
       (Object.keys(DEFAULT_CHOICES) as Role[]).map((role) => [role, DEFAULT_CHOICES[role][kind]]),
     ) as Record<Role, boolean>;
     return this.db.sequelize.query<Recipient>(
       `SELECT p.id, p.username, p.display_name AS "displayName", p.email
-       FROM people p LEFT JOIN reminder_prefs r ON r.person_id = p.id
+       FROM ${PEOPLE_AT_SITE} p LEFT JOIN reminder_prefs r ON r.person_id = p.id
        WHERE p.active = 1 AND p.email IS NOT NULL AND p.email <> ''
          AND COALESCE(r.${name}, CASE p.role ${byRole(defaults)} ELSE 0 END) = 1
        ORDER BY p.id`,
-      { type: QueryTypes.SELECT, transaction },
+      { replacements: [siteId], type: QueryTypes.SELECT, transaction },
     );
   }
 }

@@ -12,6 +12,7 @@ import {
   type ReminderKind,
 } from './reminder-schedule.ts';
 import { deliveryFact } from '../mail/mail-service.ts';
+import { kitchenAt, messageSite } from '../mail/message-site.ts';
 
 /** The statuses that are a hold: a cure curing, a dough proofing. */
 const HELD: readonly BatchStatus[] = ['curing', 'proofing'];
@@ -167,7 +168,8 @@ export class ReminderScheduler extends PeriodicRun<ReminderRun> {
       );
       if (turned) return undefined;
     }
-    const recipients = await reminderPrefs.recipients(t, due.kind);
+    const site = await messageSite(db, t, { batchId });
+    const recipients = await reminderPrefs.recipients(t, due.kind, site.id);
     const at = this.now().toISOString();
     await db.sequelize.query(
       'INSERT INTO reminders_sent (batch_id, kind, due_on, sent_at, recipients) VALUES (?, ?, ?, ?, ?)',
@@ -182,7 +184,8 @@ export class ReminderScheduler extends PeriodicRun<ReminderRun> {
         recipientName: person.displayName,
         batchUrl: mail.links.batch(batch.lotCode),
         consoleUrl: mail.links.base(),
-        kitchen: mail.kitchen,
+        kitchen: kitchenAt(mail.kitchen, site),
+        site,
       });
       await mail.outbox.enqueue(t, {
         ...content,

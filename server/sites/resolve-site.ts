@@ -67,7 +67,12 @@ export function resolveSite(sites: SiteRepository) {
     }
     req.site = { id: chosen.id, key: chosen.key, name: chosen.name, filters: all.length > 1 };
     req.groupRole = person.roleEverywhere === false ? null : person.role;
-    req.siteRoles = visible.map((site) => ({ key: site.key, name: site.name, role: site.role }));
+    req.siteRoles = visible.map((site) => ({
+      id: site.id,
+      key: site.key,
+      name: site.name,
+      role: site.role,
+    }));
     req.person = { ...person, role: chosen.role };
     next();
   };

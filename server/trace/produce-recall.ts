@@ -7,6 +7,7 @@ import { RecordsError } from '../records/records-error.ts';
 import { recallCsv } from './recall-csv.ts';
 import { recallReport } from './recall-report.ts';
 import { TraceReader } from './trace-reader.ts';
+import type { TraceSites } from './trace-sites.ts';
 
 /** The formats a recall report is produced in. */
 export type RecallFormat = 'pdf' | 'csv' | 'json';
@@ -19,6 +20,8 @@ export interface RecallRequest {
   readonly now: Date;
   /** The address asked from, for the audit log. */
   readonly ip?: string;
+  /** The sites the report keeps to (a request on an install with several); all when absent. */
+  readonly sites?: TraceSites;
 }
 
 /** A recall report ready to write: its file name, and its body. */
@@ -71,7 +74,7 @@ export async function produceRecall(
   format: RecallFormat,
   request: RecallRequest,
 ): Promise<ProducedRecall> {
-  const reader = new TraceReader(db.sequelize);
+  const reader = new TraceReader(db.sequelize, request.sites);
   const tree = await reader.forward(request.search, await reader.forwardRoots(request.search));
   const report = recallReport(tree, {
     kitchen: request.kitchen,

@@ -1,4 +1,4 @@
-import type { RecallReport } from '../../shared/api/trace-record.ts';
+import type { RecallReport, TraceNode } from '../../shared/api/trace-record.ts';
 import { csvLine } from '../batches/batch-csv.ts';
 
 /** The columns of a recall's CSV: one record per recalled lot, then one per use of each batch. */
@@ -23,8 +23,34 @@ const HEADER = [
 ];
 
 /**
+ * One record per lot of the tree with links to sites not shown: how much went there from it, the
+ * lot it went to unnamed (record "elsewhere", lot_code empty, made_from the lot it came from).
+ */
+function elsewhereLines(nodes: readonly TraceNode[], lines: string[]): void {
+  for (const node of nodes) {
+    if (!node.cut)
+      for (const away of node.elsewhere ?? [])
+        lines.push(
+          csvLine([
+            'elsewhere',
+            node.level + 1,
+            ...Array<null>(9).fill(null),
+            node.lot.lotCode,
+            away.amount,
+            away.measure,
+            null,
+            null,
+            null,
+          ]),
+        );
+    elsewhereLines(node.children, lines);
+  }
+}
+
+/**
  * A recall report as CSV (RFC 4180, CRLF): the lots recalled with what is left of them, then every
- * affected batch once per use that links it to the recall, with the amount and the day used.
+ * affected batch once per use that links it to the recall, with the amount and the day used, then
+ * what went to sites of the group the asker has no role at, unnamed.
  */
 export function recallCsv(report: RecallReport): string {
   const onHand = new Set([
@@ -98,5 +124,6 @@ export function recallCsv(report: RecallReport): string {
           onHand.has(batch.lotCode) ? 'yes' : 'no',
         ]),
       );
+  elsewhereLines(report.tree.roots, lines);
   return lines.join('');
 }

@@ -1,5 +1,4 @@
 import type {
-  LotMeasure,
   RecallBatch,
   RecallReport,
   TraceAnswer,
@@ -7,8 +6,9 @@ import type {
   TracedBatch,
   TracedLot,
 } from '../../shared/api/trace-record.ts';
-import { Decimal, ZERO } from '../../shared/decimal.ts';
-import { RECALL_CAUTION } from '../../shared/reference/recall-caution.ts';
+import { Decimal } from '../../shared/decimal.ts';
+import { RECALL_CAUTION, RECALL_ELSEWHERE } from '../../shared/reference/recall-caution.ts';
+import { totalsByMeasure } from './lot-amounts.ts';
 
 /** The statuses of a batch still being made: what of it there is, is in the kitchen. */
 const BEING_MADE: readonly string[] = ['planned', 'in-progress', 'curing', 'proofing'];
@@ -48,14 +48,9 @@ function affectedBatches(tree: TraceAnswer): RecallBatch[] {
     );
 }
 
-/** Amounts added up per measure, in the order the measures first come. */
-function totalsByMeasure(
-  amounts: readonly { amount: string; measure: LotMeasure }[],
-): { amount: string; measure: LotMeasure }[] {
-  const totals = new Map<LotMeasure, Decimal>();
-  for (const { amount, measure } of amounts)
-    totals.set(measure, (totals.get(measure) ?? ZERO).plus(new Decimal(amount)));
-  return [...totals].map(([measure, amount]) => ({ amount: amount.toString(), measure }));
+/** Whether a node of the tree has links to lots at sites not shown. */
+function reachesElsewhere(nodes: readonly TraceNode[]): boolean {
+  return nodes.some((node) => node.elsewhere !== undefined || reachesElsewhere(node.children));
 }
 
 /**
@@ -70,6 +65,8 @@ export function recallReport(tree: TraceAnswer, head: RecallHead): RecallReport 
   const recalledCodes = new Set(recalled.map((lot) => lot.lotCode));
   const byStatus: Record<string, number> = {};
   for (const batch of batches) byStatus[batch.status] = (byStatus[batch.status] ?? 0) + 1;
+  // Straight from the recalled lots to sites not shown: the rest of the mass balance.
+  const usedElsewhere = totalsByMeasure(tree.roots.flatMap((root) => root.elsewhere ?? []));
   return {
     kitchen: head.kitchen,
     searched: tree.searched,
@@ -84,7 +81,9 @@ export function recallReport(tree: TraceAnswer, head: RecallHead): RecallReport 
       used: totalsByMeasure(
         batches.flatMap((b) => b.uses.filter((use) => recalledCodes.has(use.from))),
       ),
+      ...(usedElsewhere.length ? { usedElsewhere } : {}),
     },
+    ...(reachesElsewhere(tree.roots) ? { elsewhere: RECALL_ELSEWHERE } : {}),
     onHand: {
       lots: receipts
         .filter(

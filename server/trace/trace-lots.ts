@@ -19,8 +19,8 @@ export function serviceDayOf(notes: string | null): string | null {
   return /^plan: \S+ ×\d+ for (\d{4}-\d{2}-\d{2})/.exec(notes ?? '')?.[1] ?? null;
 }
 
-/** A received lot's row as a trace shows it. */
-export function tracedReceipt(row: ReceiptRow): TracedReceipt {
+/** A received lot's row as a trace shows it, with its site's key when one is given. */
+export function tracedReceipt(row: ReceiptRow, site?: string): TracedReceipt {
   return {
     kind: 'receipt',
     lotCode: row.lot_code,
@@ -37,11 +37,12 @@ export function tracedReceipt(row: ReceiptRow): TracedReceipt {
     measure: measureOf(row.unit),
     emptiedOn: row.emptied_on,
     decision: row.decision,
+    ...(site === undefined ? {} : { site }),
   };
 }
 
-/** A batch's row as a trace shows it. */
-export function tracedBatch(row: BatchRow): TracedBatch {
+/** A batch's row as a trace shows it, with its site's key when one is given. */
+export function tracedBatch(row: BatchRow, site?: string): TracedBatch {
   return {
     kind: 'batch',
     lotCode: row.lot_code,
@@ -50,5 +51,6 @@ export function tracedBatch(row: BatchRow): TracedBatch {
     startedOn: row.started_on,
     readyOn: row.ready_on,
     serviceDay: serviceDayOf(row.notes),
+    ...(site === undefined ? {} : { site }),
   };
 }

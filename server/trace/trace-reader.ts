@@ -1,5 +1,10 @@
 import type { Sequelize } from 'sequelize';
-import type { LotMeasure, TraceAnswer, TraceSearch } from '../../shared/api/trace-record.ts';
+import type {
+  LotMeasure,
+  LotUse,
+  TraceAnswer,
+  TraceSearch,
+} from '../../shared/api/trace-record.ts';
 import type { TracedLot } from '../../shared/api/trace-record.ts';
 import { dialectOf } from '../db/dialect-sql.ts';
 import { readRows } from '../db/read-row.ts';
@@ -19,6 +24,7 @@ import {
   type ReceiptRow,
   type UseRow,
 } from './trace-sql.ts';
+import { splitBySite, type TraceSites } from './trace-sites.ts';
 import { buildTree, type LotKey, type TraceEdge } from './trace-tree.ts';
 
 /** A lot found by its code: a received lot or a batch, with its row. */
@@ -39,13 +45,39 @@ function notFound(message: string): RecordsError {
   return new RecordsError('not-found', 'not-found', message);
 }
 
+/** The lots a walk reached, as shown, and the site id of each. */
+interface ReadLots {
+  readonly lots: Map<LotKey, TracedLot>;
+  readonly siteOf: Map<LotKey, number>;
+}
+
 /**
  * Reads traces from the records: trace back from a batch, trace forward from received lots or a
  * batch, each walk one recursive query whose every step is an index lookup (trace-sql.ts), then
- * the lots it reached by their primary keys.
+ * the lots it reached by their primary keys. Given the sites of a request (several-site
+ * installs), its roots are the request's site's only and the lots of sites the asker has no role
+ * at are cut off (trace-sites.ts); the queries stay the same, so their plans do.
  */
 export class TraceReader {
-  constructor(private readonly sequelize: Sequelize) {}
+  constructor(
+    private readonly sequelize: Sequelize,
+    private readonly sites?: TraceSites,
+  ) {}
+
+  /** Whether a root's row is at the request's site (always, without sites). */
+  private atSite(row: { site_id: number }): boolean {
+    return !this.sites || Number(row.site_id) === this.sites.at;
+  }
+
+  /** A lot as shown: with its site's key when the trace keeps to sites. */
+  private shown(kind: 'r', row: ReceiptRow): TracedLot;
+  private shown(kind: 'b', row: BatchRow): TracedLot;
+  private shown(kind: 'r' | 'b', row: ReceiptRow | BatchRow): TracedLot {
+    const site = this.sites?.seen.get(Number(row.site_id));
+    return kind === 'r'
+      ? tracedReceipt(row as ReceiptRow, site)
+      : tracedBatch(row as BatchRow, site);
+  }
 
   private rows<T>(sql: string | DialectSql, values: readonly (string | number)[]): Promise<T[]> {
     const text = typeof sql === 'string' ? sql : sql[dialectOf(this.sequelize)];
@@ -56,10 +88,14 @@ export class TraceReader {
   async findLot(code: string): Promise<FoundLot> {
     const wanted = code.trim().toUpperCase();
     if (wanted && wanted.length <= LONGEST_CODE) {
+      // Another site's lot is not found, in the same words as one that does not exist.
       const [receipt] = await this.rows<ReceiptRow>(RECEIPT_BY_LOT_SQL, [wanted]);
-      if (receipt) return { kind: 'receipt', row: receipt };
-      const [batch] = await this.rows<BatchRow>(BATCH_BY_LOT_SQL, [wanted]);
-      if (batch) return { kind: 'batch', row: batch };
+      if (receipt) {
+        if (this.atSite(receipt)) return { kind: 'receipt', row: receipt };
+      } else {
+        const [batch] = await this.rows<BatchRow>(BATCH_BY_LOT_SQL, [wanted]);
+        if (batch && this.atSite(batch)) return { kind: 'batch', row: batch };
+      }
     }
     throw notFound(`no received lot or batch with lot code ${code.trim()}`);
   }
@@ -70,7 +106,9 @@ export class TraceReader {
     const who = supplier?.trim() || null;
     const rows =
       lot && lot.length <= LONGEST_CODE
-        ? await this.rows<ReceiptRow>(RECEIPTS_BY_SUPPLIER_LOT_SQL, [lot, who] as string[])
+        ? (
+            await this.rows<ReceiptRow>(RECEIPTS_BY_SUPPLIER_LOT_SQL, [lot, who] as string[])
+          ).filter((row) => this.atSite(row))
         : [];
     if (rows.length === 0)
       throw notFound(`no delivery of supplier lot ${lot}${who ? ` from ${who}` : ''} was received`);
@@ -92,7 +130,7 @@ export class TraceReader {
     const found = await this.findLot(lot);
     const searched = { lot: found.row.lot_code };
     if (found.kind === 'receipt') {
-      const root = { lot: tracedReceipt(found.row), level: 0, children: [] };
+      const root = { lot: this.shown('r', found.row), level: 0, children: [] };
       return { direction: 'back', searched, roots: [root], batches: 0, incomplete: false };
     }
     const uses = await this.rows<UseRow>(BACK_USES_SQL, [found.row.id, MOST_LEVELS]);
@@ -101,8 +139,8 @@ export class TraceReader {
       to: u.receipt_id === null ? `b${u.source_batch_id ?? 0}` : `r${u.receipt_id}`,
       use: { item: u.item, amount: u.amount, measure: 'g', usedOn: u.used_on },
     }));
-    const lots = await this.lotsOf(edges, [], [found.row]);
-    const tree = buildTree({ roots: [`b${found.row.id}`], edges: measured(edges, lots), lots });
+    const read = await this.lotsOf(edges, [], [found.row]);
+    const tree = buildTree({ roots: [`b${found.row.id}`], ...this.keptToSites(edges, read) });
     return { direction: 'back', searched, ...tree };
   }
 
@@ -116,16 +154,30 @@ export class TraceReader {
       to: `b${u.batch_id}`,
       use: { item: u.item, amount: u.amount, measure: 'g', usedOn: u.used_on },
     }));
-    const lots = await this.lotsOf(edges, roots.receipts, roots.batches);
+    const read = await this.lotsOf(edges, roots.receipts, roots.batches);
     const keys: LotKey[] = [
       ...roots.receipts.map((r): LotKey => `r${r.id}`),
       ...roots.batches.map((b): LotKey => `b${b.id}`),
     ];
-    const tree = buildTree({ roots: keys, edges: measured(edges, lots), lots });
+    const tree = buildTree({ roots: keys, ...this.keptToSites(edges, read) });
     // A lot asked for in any case is named as its label has it.
     const root = roots.receipts[0] ?? roots.batches[0];
     const named = 'lot' in searched && root ? { lot: root.lot_code } : searched;
     return { direction: 'forward', searched: named, ...tree };
+  }
+
+  /**
+   * The links measured, and without the lots of sites the asker has no role at: those are
+   * counted on the lot that links to them (`elsewhere`), never named.
+   */
+  private keptToSites(
+    edges: readonly TraceEdge[],
+    { lots, siteOf }: ReadLots,
+  ): { edges: TraceEdge[]; lots: Map<LotKey, TracedLot>; elsewhere?: Map<LotKey, LotUse[]> } {
+    const all = measured(edges, lots);
+    if (!this.sites) return { edges: all, lots };
+    const { shown, elsewhere } = splitBySite(all, siteOf, this.sites);
+    return { edges: shown, lots, elsewhere };
   }
 
   /** Every lot the links name, read by primary key, with the rows already at hand. */
@@ -133,10 +185,15 @@ export class TraceReader {
     edges: readonly TraceEdge[],
     receipts: readonly ReceiptRow[],
     batches: readonly BatchRow[],
-  ): Promise<Map<LotKey, TracedLot>> {
+  ): Promise<ReadLots> {
     const lots = new Map<LotKey, TracedLot>();
-    for (const r of receipts) lots.set(`r${r.id}`, tracedReceipt(r));
-    for (const b of batches) lots.set(`b${b.id}`, tracedBatch(b));
+    const siteOf = new Map<LotKey, number>();
+    const keep = (key: LotKey, lot: TracedLot, row: { site_id: number }): void => {
+      lots.set(key, lot);
+      siteOf.set(key, Number(row.site_id));
+    };
+    for (const r of receipts) keep(`r${r.id}`, this.shown('r', r), r);
+    for (const b of batches) keep(`b${b.id}`, this.shown('b', b), b);
     const wanted = (prefix: 'r' | 'b'): number[] => [
       ...new Set(
         edges
@@ -148,10 +205,10 @@ export class TraceReader {
     const receiptRows = await this.rows<ReceiptRow>(RECEIPTS_BY_ID_SQL, [
       JSON.stringify(wanted('r')),
     ]);
-    for (const r of receiptRows) lots.set(`r${r.id}`, tracedReceipt(r));
+    for (const r of receiptRows) keep(`r${r.id}`, this.shown('r', r), r);
     const batchRows = await this.rows<BatchRow>(BATCHES_BY_ID_SQL, [JSON.stringify(wanted('b'))]);
-    for (const b of batchRows) lots.set(`b${b.id}`, tracedBatch(b));
-    return lots;
+    for (const b of batchRows) keep(`b${b.id}`, this.shown('b', b), b);
+    return { lots, siteOf };
   }
 }
 

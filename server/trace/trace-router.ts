@@ -5,14 +5,25 @@ import { personOf } from '../auth/request-person.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { TRACE_ROLES, type RecallFormat } from '../records/records.ts';
 import { searchOf } from './produce-recall.ts';
+import { traceSitesOf, type TraceSites } from './trace-sites.ts';
 
 const CONTENT_TYPE: Readonly<Record<Exclude<RecallFormat, 'json'>, string>> = {
   pdf: 'application/pdf',
   csv: 'text/csv; charset=utf-8',
 };
 
+/** The sites a request's trace keeps to: undefined on a single-site install. */
+const sitesOf = (req: Request): TraceSites | undefined => traceSitesOf(req.site, req.siteRoles);
+
+/** sitesOf as an optional property. */
+function sitesIn(req: Request): { sites?: TraceSites } {
+  const sites = sitesOf(req);
+  return sites ? { sites } : {};
+}
+
 /**
- * /api/trace, for everyone signed in:
+ * /api/trace, for everyone signed in, kept to the request's site and the sites the person has a
+ * role at (server/README.md, Sites):
  * - GET /back/:lot — everything that went into a batch (or a received lot), through every level;
  * - GET /forward/:lot, or GET /forward?supplierLot=…&supplier=… — everywhere it went;
  * - GET /recall, /recall.pdf, /recall.csv ?lot=… or ?supplierLot=…&supplier=… — the recall
@@ -25,13 +36,14 @@ export function traceRouter(context: AppContext): Router {
   const searchQuery = allowQuery('lot', 'supplierLot', 'supplier');
 
   router.get('/back/:lot', everyone, noQuery, async (req, res) => {
-    res.json(await context.records.traceBack(String(req.params['lot'])));
+    res.json(await context.records.traceBack(String(req.params['lot']), sitesOf(req)));
   });
   router.get('/forward/:lot', everyone, noQuery, async (req, res) => {
-    res.json(await context.records.traceForward({ lot: String(req.params['lot']) }));
+    const lot = String(req.params['lot']);
+    res.json(await context.records.traceForward({ lot }, sitesOf(req)));
   });
   router.get('/forward', everyone, searchQuery, async (req, res) => {
-    res.json(await context.records.traceForward(searchOf(req.query)));
+    res.json(await context.records.traceForward(searchOf(req.query), sitesOf(req)));
   });
 
   const recall = (format: RecallFormat) => async (req: Request, res: Response) => {
@@ -41,6 +53,7 @@ export function traceRouter(context: AppContext): Router {
       kitchen: context.config.kitchenName,
       now: context.now(),
       ...(req.ip === undefined ? {} : { ip: req.ip }),
+      ...sitesIn(req),
     });
     res.setHeader('Cache-Control', 'no-store');
     if (produced.format === 'json') return void res.json(produced.body);

@@ -100,11 +100,12 @@ export interface ReceiptRow {
   readonly remaining: string;
   readonly emptied_on: string | null;
   readonly decision: 'accepted' | 'accepted-with-action' | 'refused';
+  readonly site_id: number;
 }
 
 const RECEIPT_COLUMNS = `r.id, r.lot_code, r.item, r.item_name, r.supplier, r.supplier_lot,
   r.establishment, r.packed_on, r.use_by, r.received_on, r.unit, r.amount, r.remaining,
-  r.emptied_on, r.decision`;
+  r.emptied_on, r.decision, r.site_id`;
 
 /** Received lots by id (?1, a JSON array). */
 export const RECEIPTS_BY_ID_SQL = bothDialects(
@@ -135,10 +136,11 @@ export interface BatchRow {
   readonly started_on: string;
   readonly ready_on: string | null;
   readonly notes: string | null;
+  readonly site_id: number;
 }
 
 const BATCH_COLUMNS =
-  'b.id, b.lot_code, b.formula_id, b.formula_title, b.status, b.started_on, b.ready_on, b.notes';
+  'b.id, b.lot_code, b.formula_id, b.formula_title, b.status, b.started_on, b.ready_on, b.notes, b.site_id';
 
 /** Batches by id (?1, a JSON array). */
 export const BATCHES_BY_ID_SQL = bothDialects(

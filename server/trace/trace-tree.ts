@@ -1,4 +1,5 @@
 import type { LotUse, TraceCut, TraceNode, TracedLot } from '../../shared/api/trace-record.ts';
+import { totalsByMeasure } from './lot-amounts.ts';
 import { MOST_LEVELS } from './trace-sql.ts';
 
 /** A lot in a walk: "r12" a received lot, "b34" a batch, by row id. */
@@ -16,6 +17,8 @@ export interface TreeParts {
   readonly roots: readonly LotKey[];
   readonly edges: readonly TraceEdge[];
   readonly lots: ReadonlyMap<LotKey, TracedLot>;
+  /** Per lot, its links to lots at sites not shown (trace-sites.ts), added up on its node. */
+  readonly elsewhere?: ReadonlyMap<LotKey, readonly LotUse[]>;
 }
 
 /** A built tree: its roots, the distinct batches below them, and whether a branch was cut short. */
@@ -32,7 +35,7 @@ export interface BuiltTree {
  * a record in error: its loop is not followed ('cycle'). Nothing goes deeper than MOST_LEVELS
  * ('depth').
  */
-export function buildTree({ roots, edges, lots }: TreeParts): BuiltTree {
+export function buildTree({ roots, edges, lots, elsewhere }: TreeParts): BuiltTree {
   const onward = new Map<LotKey, TraceEdge[]>();
   for (const edge of edges) {
     const list = onward.get(edge.from);
@@ -49,9 +52,10 @@ export function buildTree({ roots, edges, lots }: TreeParts): BuiltTree {
     if (!lot) return undefined;
     if (level > 0 && key.startsWith('b')) batches.add(key);
     const links = onward.get(key) ?? [];
+    const hidden = elsewhere?.get(key) ?? [];
     const stop: TraceCut | undefined = ancestors.has(key)
       ? 'cycle'
-      : links.length === 0
+      : links.length === 0 && hidden.length === 0
         ? undefined
         : expanded.has(key)
           ? 'shown-above'
@@ -67,7 +71,10 @@ export function buildTree({ roots, edges, lots }: TreeParts): BuiltTree {
     ancestors.add(key);
     const children = links.flatMap((edge) => node(edge.to, level + 1, edge.use) ?? []);
     ancestors.delete(key);
-    return { ...base, children };
+    // Said once, where the lot's branches are shown, as its links are.
+    return hidden.length === 0
+      ? { ...base, children }
+      : { ...base, children, elsewhere: totalsByMeasure(hidden) };
   };
 
   const built = roots.flatMap((root) => node(root, 0) ?? []);

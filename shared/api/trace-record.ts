@@ -26,6 +26,8 @@ export interface TracedReceipt {
   /** The day it was used up or discarded; null while some is on hand. */
   readonly emptiedOn: string | null;
   readonly decision: 'accepted' | 'accepted-with-action' | 'refused';
+  /** The key of the site it was received at; only on an install with several sites. */
+  readonly site?: string;
 }
 
 /** A batch, as a trace shows it. */
@@ -38,6 +40,8 @@ export interface TracedBatch {
   readonly readyOn: string | null;
   /** The day of service it was recorded for, when it was recorded from a plan. */
   readonly serviceDay: string | null;
+  /** The key of the site it was made at; only on an install with several sites. */
+  readonly site?: string;
 }
 
 /** A lot of either kind. */
@@ -70,6 +74,17 @@ export interface TraceNode {
   readonly level: number;
   readonly children: readonly TraceNode[];
   readonly cut?: TraceCut;
+  /**
+   * How much, per measure, the links of this lot to lots at sites of the group the asker has no
+   * role at come to: those lots are neither named nor followed. Absent when there are none.
+   */
+  readonly elsewhere?: readonly LotAmount[];
+}
+
+/** An amount in a measure. */
+export interface LotAmount {
+  readonly amount: string;
+  readonly measure: LotMeasure;
 }
 
 /** What a trace or recall searched for. */
@@ -123,7 +138,17 @@ export interface RecallReport {
     /** Received, used directly by batches, and left, per measure of the recalled receipts. */
     readonly received: readonly { readonly amount: string; readonly measure: LotMeasure }[];
     readonly used: readonly { readonly amount: string; readonly measure: LotMeasure }[];
+    /**
+     * Used straight from the recalled lots by batches at sites the asker has no role at, per
+     * measure; absent when none was.
+     */
+    readonly usedElsewhere?: readonly LotAmount[];
   };
+  /**
+   * Present when some of the recall went to a site of the group the asker has no role at, at any
+   * level: what to do about it. Those lots are not named.
+   */
+  readonly elsewhere?: string;
   readonly onHand: RecallOnHand;
   /** The tree forward from the recalled lots. */
   readonly tree: TraceAnswer;

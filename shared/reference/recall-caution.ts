@@ -7,3 +7,11 @@
  */
 export const RECALL_CAUTION =
   "This report lists what the kitchen's records say about where the lot went. Act on a recall by the kitchen's own recall plan and the instructions of the supplier and the food safety authority: hold what is on hand apart and labelled, and do not serve or sell it until they say.";
+
+/**
+ * What a recall report says when some of the lot went to a site of the group the person asking
+ * has no role at: those lots stay unnamed to them, so the recall must be followed there by
+ * someone who may see that site. common practice, no source
+ */
+export const RECALL_ELSEWHERE =
+  'Some of it went to another site of the group, which this report does not name: ask an admin of the group, or a person with a role at every site, to produce the recall report there too.';
