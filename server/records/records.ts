@@ -164,9 +164,9 @@ export class Records {
     return this.guard(() => this.plans().made(plan, by));
   }
 
-  /** The latest plans made, newest first, recorded or not. */
-  listPlans(): Promise<PlanListItem[]> {
-    return this.guard(() => this.plans().list());
+  /** The latest plans made at the site (no site: anywhere), newest first, recorded or not. */
+  listPlans(site?: SiteScope): Promise<PlanListItem[]> {
+    return this.guard(() => this.plans().list(site));
   }
 
   /**
@@ -179,8 +179,11 @@ export class Records {
     formulas: FormulaLibrary,
     catalogue: CatalogueReading | undefined,
     units: UnitSystem,
+    site?: SiteScope,
   ): Promise<PlanStock> {
-    return this.guard(() => comparePlanWithStock(this.deps.db, plan, formulas, catalogue, units));
+    return this.guard(() =>
+      comparePlanWithStock(this.deps.db, plan, formulas, catalogue, units, site),
+    );
   }
 
   private planRepository: PlanRepository | undefined;
