@@ -268,8 +268,8 @@ export class Records {
   }
 
   /** The calculations refused over a critical limit from one day to another (both included). */
-  listRefusals(range: { from?: string; to?: string }): Promise<Refusal[]> {
-    return this.guard(() => listRefusals(this.deps.db, range));
+  listRefusals(range: { from?: string; to?: string }, site?: SiteScope): Promise<Refusal[]> {
+    return this.guard(() => listRefusals(this.deps.db, range, site));
   }
 
   // Process records (HACCP): the readings at each control, their corrections, logger files,
@@ -376,9 +376,9 @@ export class Records {
     return this.withStock((s) => s.receiveAll(deliveries));
   }
 
-  /** A page of deliveries, newest first, filtered. */
-  listReceipts(query: ReceiptQuery): Promise<ReceiptPage> {
-    return this.withStock((s) => s.list(query));
+  /** A page of deliveries, newest first, filtered; with a site, that site's only. */
+  listReceipts(query: ReceiptQuery, site?: SiteScope): Promise<ReceiptPage> {
+    return this.withStock((s) => s.list(query, site));
   }
 
   /** One delivery by the kitchen's lot code. */
@@ -386,9 +386,9 @@ export class Records {
     return this.withStock((s) => s.show(lot));
   }
 
-  /** What is on hand by item on a day, first to expire first. */
-  stockOnHand(today: string): Promise<StockView> {
-    return this.withStock((s) => s.stock(today));
+  /** What is on hand by item on a day, first to expire first; with a site, that site's lots. */
+  stockOnHand(today: string, site?: SiteScope): Promise<StockView> {
+    return this.withStock((s) => s.stock(today, site));
   }
 
   /** The catalogue's items as the receiving door shows them, with their limits. */

@@ -77,6 +77,7 @@ describe('sites: the lists and writes of plans, stock, equipment, the board, rep
       ...receipts.map((r: { lotCode: string }) => r.lotCode),
     ];
     assert.ok(!mainLots.includes(harbourBatch), 'main lists no batch of the shop');
+    assert.ok(!mainLots.includes(harbourReceipt), 'main lists no delivery of the shop');
   });
 
   /** Asserts an answer names no lot of main (and so can fail: main has many). */
@@ -127,6 +128,41 @@ describe('sites: the lists and writes of plans, stock, equipment, the board, rep
       const mainCost = ok(await at.main(PLAN_COST));
       const mainPriced = mainCost.json.batches.map((b: { lot: string | null }) => b.lot);
       assert.ok(mainPriced.every((lot: string) => mainPlanLots.includes(lot)));
+    });
+  });
+
+  describe('deliveries, stock and refusals', () => {
+    it("should list a site's deliveries only, and count them", async () => {
+      const harbour = ok(await at.harbourCook('/api/receipts'));
+      assert.deepEqual(
+        harbour.json.receipts.map((r: { lotCode: string }) => r.lotCode),
+        [harbourReceipt],
+      );
+      assert.equal(harbour.json.total, 1);
+      const group = ok(await at.groupAtHarbour('/api/receipts'));
+      assert.equal(group.json.total, 1);
+      const main = ok(await at.main('/api/receipts?pageSize=100'));
+      assert.ok(main.json.total > 1);
+      assert.ok(!main.text.includes(harbourReceipt));
+      assert.equal((await at.main(`/api/receipts/${harbourReceipt}`)).status, 404);
+      assert.equal((await at.harbourCook(`/api/receipts/${mainReceipt}`)).status, 404);
+    });
+
+    it("should show a site's stock on hand only", async () => {
+      const harbour = ok(await at.harbourCook('/api/stock'));
+      noMainLot(harbour, "the shop's stock");
+      assert.ok(harbour.text.includes(harbourReceipt));
+      const main = ok(await at.main('/api/stock'));
+      assert.ok(main.text.includes(mainReceipt) && !main.text.includes(harbourReceipt));
+    });
+
+    it("should list a site's refused calculations only", async () => {
+      const by = (response: ApiResponse) =>
+        response.json.refusals.map((r: { by: { displayName: string } }) => r.by.displayName);
+      assert.deepEqual(by(ok(await at.harbourReviewer('/api/refusals'))), ['harbour-cook']);
+      assert.deepEqual(by(ok(await at.groupAtHarbour('/api/refusals'))), ['harbour-cook']);
+      const main = by(ok(await at.main('/api/refusals')));
+      assert.ok(main.length > 0 && !main.includes('harbour-cook'));
     });
   });
 });
