@@ -54,6 +54,7 @@ describe('sites: the lists and writes of plans, stock, equipment, the board, rep
   let harbourBatch: string;
   let harbourReceipt: string;
   let mainReceipt: string;
+  let harbourEquipment: number;
   /** The lot codes of every batch and delivery at main, the demo's included. */
   let mainLots: string[];
 
@@ -163,6 +164,50 @@ describe('sites: the lists and writes of plans, stock, equipment, the board, rep
       assert.deepEqual(by(ok(await at.groupAtHarbour('/api/refusals'))), ['harbour-cook']);
       const main = by(ok(await at.main('/api/refusals')));
       assert.ok(main.length > 0 && !main.includes('harbour-cook'));
+    });
+  });
+
+  describe('equipment', () => {
+    before(async () => {
+      // Under the name main's demo walk-in has: names are unique within a site.
+      harbourEquipment = ok(
+        await at.groupAtHarbour('/api/equipment', 'POST', {
+          name: 'Walk-in cooler',
+          kind: 'cooler',
+          control: { rule: 'cold-holding', every: '4 h' },
+        }),
+        201,
+      ).json.equipment.id;
+    });
+
+    it("should list a site's equipment only, and not find another site's by id", async () => {
+      const ids = (response: ApiResponse) =>
+        response.json.equipment.map((e: { id: number }) => e.id);
+      assert.deepEqual(ids(ok(await at.harbourCook('/api/equipment'))), [harbourEquipment]);
+      assert.deepEqual(ids(ok(await at.groupAtHarbour('/api/equipment'))), [harbourEquipment]);
+      const main = ok(await at.main('/api/equipment'));
+      assert.ok(main.json.equipment.length > 0 && !ids(main).includes(harbourEquipment));
+      const mainId = ids(main)[0];
+      assert.equal((await at.harbourCook(`/api/equipment/${mainId}/log`)).status, 404);
+      assert.equal((await at.main(`/api/equipment/${harbourEquipment}/log`)).status, 404);
+      const renamed = await at.main(`/api/equipment/${harbourEquipment}`, 'PATCH', {
+        name: 'Cooler by the door',
+      });
+      assert.equal(renamed.status, 404, renamed.text);
+    });
+
+    it('should keep equipment names unique within a site, not across the group', async () => {
+      const names = ok(await at.main('/api/equipment')).json.equipment.map(
+        (e: { name: string }) => e.name,
+      );
+      assert.ok(names.includes('Walk-in cooler'));
+      const twice = await at.groupAtHarbour('/api/equipment', 'POST', {
+        name: 'walk-in COOLER',
+        kind: 'cooler',
+        control: { rule: 'cold-holding', every: '4 h' },
+      });
+      assert.equal(twice.status, 409, twice.text);
+      assert.equal(twice.json.error.code, 'name-taken');
     });
   });
 });
