@@ -345,9 +345,9 @@ export class Records {
     );
   }
 
-  /** What needs attention now across the batches being made. */
-  processNow(now: string = new Date().toISOString()): Promise<ProcessNow> {
-    return this.withProcess((p) => p.use.processNow(p.process, now));
+  /** What needs attention now across the batches being made (at the site, when one is given). */
+  processNow(now: string = new Date().toISOString(), site?: SiteScope): Promise<ProcessNow> {
+    return this.withProcess((p) => p.use.processNow(p.process, now, site));
   }
 
   // Receiving and stock by lot. The stock code loads on first use, with the process records'.

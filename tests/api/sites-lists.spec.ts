@@ -210,4 +210,65 @@ describe('sites: the lists and writes of plans, stock, equipment, the board, rep
       assert.equal(twice.json.error.code, 'name-taken');
     });
   });
+
+  describe('the process board and the HACCP report', () => {
+    it("should show on a site's board its own batches only", async () => {
+      const main = ok(await at.main('/api/process/now'));
+      assert.ok(main.json.items.length > 0, 'the demo has something on its board');
+      assert.ok(!main.text.includes(harbourBatch));
+      noMainLot(ok(await at.harbourCook('/api/process/now')), "the shop's board");
+      noMainLot(ok(await at.groupAtHarbour('/api/process/now')), "the shop's board for the group");
+    });
+
+    it("should report a site's records only, under the site's name", async () => {
+      const harbour = ok(await at.harbourReviewer('/api/reports/haccp'));
+      noMainLot(harbour, "the shop's report");
+      assert.equal(harbour.json.kitchen, OTHER_SITE.name);
+      assert.ok(harbour.text.includes(harbourBatch) && harbour.text.includes(harbourReceipt));
+      assert.equal(harbour.json.refusals.length, 1);
+      const csv = await at.harbourReviewer('/api/reports/haccp.csv');
+      noMainLot(csv, "the shop's report as CSV");
+      const main = ok(await at.main('/api/reports/haccp'));
+      assert.ok(main.json.batches.length > 0);
+      assert.ok(!main.text.includes(harbourBatch) && !main.text.includes(harbourReceipt));
+    });
+  });
+
+  describe('costs and the blend', () => {
+    it("should chart a formula's costs over the site's batches only", async () => {
+      const path = `/api/formulas/${BELLY.formula}/costs`;
+      const lots = (response: ApiResponse) =>
+        response.json.points.map((p: { lot: string }) => p.lot);
+      assert.deepEqual(lots(ok(await at.harbourReviewer(path))), [harbourBatch]);
+      assert.deepEqual(lots(ok(await at.groupAtHarbour(path))), [harbourBatch]);
+      const main = lots(ok(await at.main(path)));
+      assert.ok(main.length > 0 && !main.includes(harbourBatch));
+      assert.equal((await at.main(`/api/batches/${harbourBatch}/cost`)).status, 404);
+    });
+
+    it("should offer the blend the site's trims only", async () => {
+      const main = ok(await at.main('/api/blends/trims'));
+      assert.ok(main.json.trims.length > 0, 'the demo has trims on hand');
+      // The shop received belly only, which is no trim.
+      assert.deepEqual(ok(await at.harbourReviewer('/api/blends/trims')).json.trims, []);
+      assert.deepEqual(ok(await at.groupAtHarbour('/api/blends/trims')).json.trims, []);
+    });
+  });
+
+  describe('made-from lots', () => {
+    it("should refuse a lot of another site as one that is not at this kitchen, and take the site's own", async () => {
+      const pick = (lot: string) => ({ picks: [{ item: 'pork-belly', lot, amount: '4.26 kg' }] });
+      const path = `/api/batches/${harbourBatch}/lots`;
+      const elsewhere = await at.harbourCook(path, 'POST', pick(mainReceipt));
+      assert.equal(elsewhere.status, 422, elsewhere.text);
+      assert.equal(elsewhere.json.error.code, 'no-such-lot');
+      assert.equal(
+        elsewhere.json.error.message,
+        `there is no received lot ${mainReceipt} at ${OTHER_SITE.name}`,
+      );
+      const suggested = ok(await at.harbourCook(path));
+      noMainLot(suggested, "the shop's suggested lots");
+      ok(await at.harbourCook(path, 'POST', pick(harbourReceipt)), 201);
+    });
+  });
 });
