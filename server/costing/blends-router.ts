@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
+import { siteOf } from '../auth/request-person.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { serverToday } from '../server-today.ts';
@@ -73,8 +74,12 @@ export function blendsRouter(context: AppContext): Router {
   const router = Router();
   router.use(requireRole(...COST_ROLES));
 
-  router.get('/trims', async (_req, res) => {
-    const trims = await stockTrims(repo, context.formulas.folder, serverToday(context));
+  router.get('/trims', async (req, res) => {
+    const trims = await stockTrims(
+      repo.at(siteOf(req)),
+      context.formulas.folder,
+      serverToday(context),
+    );
     res.json({ trims } satisfies BlendTrims);
   });
 
@@ -90,7 +95,9 @@ export function blendsRouter(context: AppContext): Router {
           availableGrams: grams(trim.onHand, `what is on hand of ${trim.name}`),
           ...(trim.fatAsSuch ? { fatAsSuch: true } : {}),
         }))
-      : (await stockTrims(repo, context.formulas.folder, serverToday(context))).flatMap((trim) =>
+      : (
+          await stockTrims(repo.at(siteOf(req)), context.formulas.folder, serverToday(context))
+        ).flatMap((trim) =>
           trim.pricePerKg === null
             ? []
             : [

@@ -1,6 +1,7 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
+import { siteOf } from '../auth/request-person.ts';
 import { filesById } from '../formulas/formula-files.ts';
 import { badRequest, notFound } from '../http/app-error.ts';
 import { planFromStore } from '../plans/plan-request.ts';
@@ -67,7 +68,9 @@ function recordedCount(notes: string | null): number | undefined {
  * its batches (GET /api/formulas/:id/costs). Admins and reviewers only (cost-roles.ts).
  */
 export function costsRouter(context: AppContext): Router {
-  const repo = new CostRepository(context.db);
+  const everywhere = new CostRepository(context.db);
+  // The costs of the request's site: its batches, its deliveries' prices.
+  const atSite = (req: Request): CostRepository => everywhere.at(siteOf(req));
   const router = Router();
   router.use(
     ['/batches/:lot/cost', '/plans/:assembly/:day/cost', '/formulas/:id/costs'],
@@ -75,7 +78,7 @@ export function costsRouter(context: AppContext): Router {
   );
 
   /** A costing for one request: the catalogue and formulas as they are now. */
-  async function costing(): Promise<BatchCosting> {
+  async function costing(repo: CostRepository): Promise<BatchCosting> {
     const files = await context.formulas.files();
     const formulas = new Map<string, Formula>();
     for (const [id, file] of filesById(files))
@@ -84,21 +87,23 @@ export function costsRouter(context: AppContext): Router {
   }
 
   router.get('/batches/:lot/cost', async (req, res) => {
+    const repo = atSite(req);
     const portion = portionOf(req.query.portion);
     const row = await repo.batch(req.params.lot);
     if (!row) throw notFound(`no batch with lot code ${req.params.lot}`);
-    const cost = await (await costing()).ofBatch(row, portion);
+    const cost = await (await costing(repo)).ofBatch(row, portion);
     res.json(batchCostRecord(cost, row.lot_code, { id: row.formula_id, title: row.formula_title }));
   });
 
   // One point a batch: each batch used its own lots at their own prices, and a kitchen makes few
   // batches of one formula in a week, so a weekly mean would hide the batch made from a dear lot.
   router.get('/formulas/:id/costs', async (req, res) => {
+    const repo = atSite(req);
     const id = req.params.id;
     if (!isFormulaId(id)) throw notFound(`no formula "${id}"`);
     const rows = await repo.formulaBatches(id);
     const shown = rows.slice(0, COST_POINTS).reverse();
-    const costs = await costing();
+    const costs = await costing(repo);
     const points = [];
     for (const row of shown) {
       const cost = await costs.ofBatch(row);
@@ -115,12 +120,13 @@ export function costsRouter(context: AppContext): Router {
   });
 
   router.get('/plans/:assembly/:day/cost', async (req, res) => {
+    const repo = atSite(req);
     const { assembly, day } = req.params;
     if (!isFormulaId(assembly) || !DAY.test(day))
       throw badRequest('a plan is named by its menu item and day of service, YYYY-MM-DD');
     const asked = countOf(req.query.count);
     const rows = await repo.planBatches(assembly, day);
-    const costs = await costing();
+    const costs = await costing(repo);
     let batches: BatchCostRecord[];
     let totals;
     const count = asked ?? recordedCount(rows[0]?.notes ?? null);

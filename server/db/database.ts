@@ -25,6 +25,7 @@ import * as costIndexes from './migrations/018-cost-indexes.ts';
 import * as formulaStatusIndex from './migrations/019-formula-status-index.ts';
 import * as signInAttempts from './migrations/020-sign-in-attempts.ts';
 import * as sites from './migrations/021-sites.ts';
+import * as siteUniqueNames from './migrations/022-site-unique-names.ts';
 
 /** Milliseconds a connection waits for another writer before giving up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -58,6 +59,7 @@ const MIGRATIONS = [
   formulaStatusIndex,
   signInAttempts,
   sites,
+  siteUniqueNames,
 ];
 
 /** An open database: the Sequelize instance the repositories share. */

@@ -9,7 +9,7 @@ import type {
 import { EQUIPMENT_KINDS } from '../../shared/api/equipment.ts';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { changeBy } from '../auth/request-person.ts';
+import { changeBy, siteOf } from '../auth/request-person.ts';
 import { badRequest, notFound } from '../http/app-error.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { validateBody } from '../http/validate-body.ts';
@@ -101,15 +101,16 @@ export function equipmentRouter(context: AppContext): Router {
   const admin = requireRole('admin');
   const recorders = requireRole('admin', 'cook', 'reviewer');
   const by = (req: Request) => ({ ...changeBy(req, context), at: now().toISOString() });
-  const view = async (id: number) => {
-    const [row] = await rows.equipment(id);
+  const view = async (id: number, req: Request) => {
+    const [row] = await rows.equipment(id, undefined, siteOf(req));
     if (!row) throw notFound(`there is no equipment ${id}`);
     return viewOf(rows, row, now());
   };
 
-  router.get('/', allowQuery(), async (_req, res) => {
+  router.get('/', allowQuery(), async (req, res) => {
     const at = now();
-    const all = await Promise.all((await rows.equipment()).map((row) => viewOf(rows, row, at)));
+    const atSite = await rows.equipment(undefined, undefined, siteOf(req));
+    const all = await Promise.all(atSite.map((row) => viewOf(rows, row, at)));
     res.json({ equipment: all.sort(byNextDue) });
   });
 
@@ -135,7 +136,7 @@ export function equipmentRouter(context: AppContext): Router {
     );
     res.status(201).json({
       reading: await rows.reading(written.readingId),
-      equipment: await view(id),
+      equipment: await view(id, req),
       deviation: written.deviationId === null ? null : await rows.deviation(written.deviationId),
     });
   });
@@ -145,11 +146,11 @@ export function equipmentRouter(context: AppContext): Router {
     const written = await recordCalibration(deps, id, req.body as CalibrationRequest, by(req));
     res
       .status(201)
-      .json({ calibration: await rows.calibration(written), equipment: await view(id) });
+      .json({ calibration: await rows.calibration(written), equipment: await view(id, req) });
   });
 
   router.get('/:id/log', allowQuery('from', 'to'), async (req, res) => {
-    const equipment = await view(idOf(req));
+    const equipment = await view(idOf(req), req);
     const period = logPeriod(req.query as { from?: string; to?: string }, now());
     if (typeof period === 'string') throw badRequest(period, [{ field: 'from' }]);
     const id = equipment.id;

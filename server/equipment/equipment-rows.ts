@@ -1,4 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
+import { siteCondition, type SiteScope } from '../sites/site-scope.ts';
 import type {
   Calibration,
   CalibrationOutcome,
@@ -119,8 +120,19 @@ export class EquipmentRows {
     });
   }
 
-  /** Every piece of equipment, or one by id. */
-  async equipment(id?: number, transaction?: Transaction): Promise<EquipmentRow[]> {
+  /**
+   * Every piece of equipment, or one by id; with a site, that site's only (the reminder job works
+   * for the whole group and gives none).
+   */
+  async equipment(
+    id?: number,
+    transaction?: Transaction,
+    site?: SiteScope,
+  ): Promise<EquipmentRow[]> {
+    const where = [
+      ...(id === undefined ? [] : [{ sql: 'id = ?', values: [id] }]),
+      siteCondition(site, 'site_id'),
+    ].filter((part) => part.sql);
     const rows = await this.select<{
       id: number;
       name: string;
@@ -130,8 +142,8 @@ export class EquipmentRows {
       created_at: string;
     }>(
       `SELECT id, name, kind, control, active, created_at FROM equipment
-       ${id === undefined ? '' : 'WHERE id = ?'} ORDER BY id`,
-      id === undefined ? [] : [id],
+       ${where.length ? `WHERE ${where.map((part) => part.sql).join(' AND ')}` : ''} ORDER BY id`,
+      where.flatMap((part) => part.values),
       transaction,
     );
     return rows.map((row) => ({

@@ -46,10 +46,21 @@ function refuseBadControl(name: string, kind: EquipmentKind, control: EquipmentC
     );
 }
 
-async function nameTaken(db: Database, t: Transaction, name: string, id = 0): Promise<boolean> {
+/**
+ * Whether another piece of equipment at the same site has the name (names are unique within a
+ * site, migration 022): the site of the piece being renamed, else the site it is added at.
+ */
+async function nameTaken(
+  db: Database,
+  t: Transaction,
+  name: string,
+  site: number,
+  id = 0,
+): Promise<boolean> {
   const [row] = await db.sequelize.query<{ id: number }>(
-    'SELECT id FROM equipment WHERE name = ? AND id <> ?',
-    { replacements: [name, id], type: QueryTypes.SELECT, transaction: t },
+    `SELECT id FROM equipment WHERE name = ? AND id <> ?
+       AND site_id = COALESCE((SELECT site_id FROM equipment WHERE id = ?), ?)`,
+    { replacements: [name, id, id, site], type: QueryTypes.SELECT, transaction: t },
   );
   return row !== undefined;
 }
@@ -68,7 +79,7 @@ export async function addEquipment(
   const name = request.name.trim();
   refuseBadControl(name, request.kind, request.control);
   return db.write(async (t) => {
-    if (await nameTaken(db, t, name)) throw taken(name);
+    if (await nameTaken(db, t, name, siteIdOf(by.site))) throw taken(name);
     const insertedId = await insertNew(
       db,
       `INSERT INTO equipment (name, kind, control, active, created_at, site_id)
@@ -123,7 +134,7 @@ export async function changeEquipment(
           [{ field: 'reason' }],
         );
     }
-    if (changed['name'] && (await nameTaken(db, t, name, id))) throw taken(name);
+    if (changed['name'] && (await nameTaken(db, t, name, siteIdOf(by.site), id))) throw taken(name);
     await db.sequelize.query(
       'UPDATE equipment SET name = ?, control = ?, active = ? WHERE id = ?',
       {

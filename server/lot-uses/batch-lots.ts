@@ -37,6 +37,7 @@ import {
   type UseRow,
 } from './lot-use-rows.ts';
 import { datedSources, datedSourcesById, type DatedSource } from './source-use-bys.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 
 /** What lot uses work with. */
 export interface LotUsesDeps {
@@ -45,6 +46,8 @@ export interface LotUsesDeps {
   readonly history: FormulaHistory;
   /** The formulas folder, where the catalogue of materials is. */
   readonly folder: string;
+  /** The site of the request: the batch's own (its path is guarded), whose lots it may use. */
+  readonly site?: SiteScope;
 }
 
 /** The catalogue of materials beside the formulas; undefined when there is none or it does not read. */
@@ -187,6 +190,7 @@ export async function suggestionFor(
     of.needs.items.map((need) => need.item),
     usedOn,
     t,
+    deps.site,
   );
   const byCode = new Map(rows.map((row) => [row.lot_code, row]));
   const lots = rows.map(stockLotOf);
@@ -224,7 +228,7 @@ export async function suggestionFor(
   if (of.parts.length === 0) return items;
   const candidates = await datedSources(
     deps.history,
-    await sourceCandidates(deps.db, of.parts, usedOn, t),
+    await sourceCandidates(deps.db, of.parts, usedOn, t, deps.site),
   );
   const needs = partNeeds(batch.result);
   const parts = of.parts.map((part): SuggestedItem => {

@@ -4,6 +4,7 @@ import { Decimal } from '../../shared/decimal.ts';
 import type { StockLot } from '../../shared/stock/fifo.ts';
 import type { SourceCandidate } from '../../shared/stock/lot-suggestions.ts';
 import type { Database } from '../db/database.ts';
+import { andSite, type SiteScope } from '../sites/site-scope.ts';
 
 /** A received lot as lot uses read it. */
 export interface ReceiptRow {
@@ -41,35 +42,40 @@ function select<T extends object>(
 /**
  * The lots of these items on hand on a day of use: accepted, not emptied, something left, and
  * received by that day (a lot that came in later cannot have gone in). Along receipts_on_hand.
+ * With a site, that site's lots only: a kitchen uses what it received.
  */
 export function receiptsOnHand(
   db: Database,
   items: readonly string[],
   usedOn: string,
   t?: Transaction,
+  site?: SiteScope,
 ): Promise<ReceiptRow[]> {
   if (items.length === 0) return Promise.resolve([]);
+  const atSite = andSite(site, 'r.site_id');
   return select<ReceiptRow>(
     db,
     `SELECT ${RECEIPT_COLUMNS} FROM receipts r
      WHERE r.item IN (${items.map(() => '?').join(', ')})
-       AND r.emptied_on IS NULL AND r.decision <> 'refused' AND r.received_on <= ?
+       AND r.emptied_on IS NULL AND r.decision <> 'refused' AND r.received_on <= ?${atSite.sql}
      ORDER BY r.item, r.use_by, r.received_at, r.id`,
-    [...items, usedOn],
+    [...items, usedOn, ...atSite.values],
     t,
   ).then((rows) => rows.filter((row) => new Decimal(row.remaining).greaterThan(0)));
 }
 
-/** One received lot by the kitchen's lot code (either case). */
+/** One received lot by the kitchen's lot code (either case); with a site, only one of its own. */
 export async function receiptByCode(
   db: Database,
   code: string,
   t: Transaction,
+  site?: SiteScope,
 ): Promise<ReceiptRow | undefined> {
+  const atSite = andSite(site, 'r.site_id');
   const [row] = await select<ReceiptRow>(
     db,
-    `SELECT ${RECEIPT_COLUMNS} FROM receipts r WHERE r.lot_code = ?`,
-    [code.trim().toUpperCase()],
+    `SELECT ${RECEIPT_COLUMNS} FROM receipts r WHERE r.lot_code = ?${atSite.sql}`,
+    [code.trim().toUpperCase(), ...atSite.values],
     t,
   );
   return row;
@@ -164,22 +170,24 @@ function sourceRow(row: CandidateRow): SourceRow {
 /**
  * The batches of these formulas started by a day, the latest 200: candidates for an assembly's
  * parts (sourceBatchOrder puts them in the order to suggest). The latest, so that years of
- * batches never push this week's out of the list.
+ * batches never push this week's out of the list. With a site, that site's batches only.
  */
 export async function sourceCandidates(
   db: Database,
   formulas: readonly string[],
   usedOn: string,
   t?: Transaction,
+  site?: SiteScope,
 ): Promise<SourceRow[]> {
   if (formulas.length === 0) return [];
+  const atSite = andSite(site, 'b.site_id');
   const rows = await select<CandidateRow>(
     db,
     `SELECT ${CANDIDATE_COLUMNS}
      FROM batches b
-     WHERE b.formula_id IN (${formulas.map(() => '?').join(', ')}) AND b.started_on <= ?
+     WHERE b.formula_id IN (${formulas.map(() => '?').join(', ')}) AND b.started_on <= ?${atSite.sql}
      ORDER BY b.started_on DESC, b.lot_code DESC LIMIT 200`,
-    [...formulas, usedOn],
+    [...formulas, usedOn, ...atSite.values],
     t,
   );
   return rows.map(sourceRow);

@@ -2,7 +2,7 @@ import { Router, type Request } from 'express';
 import type { LotUsesRequest } from '../../shared/api/batch-lots.ts';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { changeBy } from '../auth/request-person.ts';
+import { changeBy, siteOf } from '../auth/request-person.ts';
 import { FormulaHistory } from '../formulas/formula-history.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { RECORDING_ROLES } from '../records/records.ts';
@@ -54,7 +54,7 @@ export function lotUsesRouter(context: AppContext): Router {
     folder: context.formulas.folder,
   };
   router.get('/:lot/lots', async (req: Request, res) => {
-    res.json(await batchLots(deps, String(req.params.lot)));
+    res.json(await batchLots({ ...deps, site: siteOf(req) }, String(req.params.lot)));
   });
   router.post(
     '/:lot/lots',
@@ -62,7 +62,7 @@ export function lotUsesRouter(context: AppContext): Router {
     validateBody(LOTS_BODY),
     async (req: Request, res) => {
       const lots = await recordLotUses(
-        deps,
+        { ...deps, site: siteOf(req) },
         String(req.params.lot),
         req.body as LotUsesRequest,
         changeBy(req, context),

@@ -14,6 +14,7 @@ import { formulaOf } from '../process/weighing-writes.ts';
 import { batchLots, needsOf, suggestionFor, type LotUsesDeps, type NeedsOf } from './batch-lots.ts';
 import { drawsOn, receiptByCode, standingUses } from './lot-use-rows.ts';
 import { datedSourcesById } from './source-use-bys.ts';
+import { isAtOtherSite } from '../sites/site-guards.ts';
 
 /** A lot use about to be written. */
 interface NewUse {
@@ -22,6 +23,9 @@ interface NewUse {
   readonly receipt?: { readonly id: number; readonly code: string };
   readonly source?: { readonly id: number; readonly code: string };
 }
+
+/** " at KITCHEN" on a group's install, where a lot of another site is not this batch's to use. */
+const here = ({ site }: LotUsesDeps): string => (site?.filters ? ` at ${site.name}` : '');
 
 /** A pick that cannot be recorded: 422 with a stable code, naming the pick at fault. */
 function refused(code: string, field: string, message: string): AppError {
@@ -160,8 +164,15 @@ async function picked(
     const need = of.needs.items.find((n) => n.item === pick.item);
     if (!need)
       throw refused('not-needed', `${field}.item`, `no line of this batch uses ${pick.item}`);
-    const row = await receiptByCode(deps.db, pick.lot, t);
-    if (!row) throw refused('no-such-lot', `${field}.lot`, `there is no received lot ${pick.lot}`);
+    // Another site's lot is answered as one that does not exist: a kitchen uses what it
+    // received, and a cook at one shop is not told what another shop holds.
+    const row = await receiptByCode(deps.db, pick.lot, t, deps.site);
+    if (!row)
+      throw refused(
+        'no-such-lot',
+        `${field}.lot`,
+        `there is no received lot ${pick.lot}${here(deps)}`,
+      );
     const lot = row.lot_code;
     if (row.item !== need.item)
       throw refused(
@@ -224,11 +235,13 @@ async function sourcePick(
   let source: RecordedBatch;
   try {
     source = await recordedBatch(deps.db, pick.batch, t);
+    if (await isAtOtherSite(deps.db, 'batch', source.lotCode, deps.site))
+      throw new Error('elsewhere');
   } catch {
     throw refused(
       'no-such-batch',
       `${field}.batch`,
-      `there is no batch ${pick.batch.toUpperCase()}`,
+      `there is no batch ${pick.batch.toUpperCase()}${here(deps)}`,
     );
   }
   const code = source.lotCode;

@@ -1,5 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import { siteIdOf } from '../sites/site-scope.ts';
+import { andSite, siteCondition, siteIdOf, type SiteScope } from '../sites/site-scope.ts';
 import type { PlanResult } from '../../shared/index.ts';
 import type { BatchSummary } from '../../shared/api/batch-record.ts';
 import type { PlanListItem } from '../../shared/api/plan-record.ts';
@@ -110,7 +110,7 @@ export class PlanRepository {
       t,
       `INSERT INTO plans (assembly_id, assembly_title, count, service_date, made_by, made_at,
          recorded_by, recorded_at, recorded_batches, site_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
-       ON CONFLICT (assembly_id, count, service_date) DO UPDATE SET
+       ON CONFLICT (site_id, assembly_id, count, service_date) DO UPDATE SET
          recorded_by = excluded.recorded_by, recorded_at = excluded.recorded_at,
          recorded_batches = plans.recorded_batches + excluded.recorded_batches`,
       [
@@ -128,12 +128,18 @@ export class PlanRepository {
 
   /**
    * The batches, not discarded, already recorded from a plan for this menu item and day of
-   * service (any count), earliest start first; inside a write when given one.
+   * service (any count) at the site, earliest start first; inside a write when given one.
    */
-  async batchesOf(assembly: string, serviceDate: string, t?: Transaction): Promise<BatchSummary[]> {
+  async batchesOf(
+    assembly: string,
+    serviceDate: string,
+    t?: Transaction,
+    site?: SiteScope,
+  ): Promise<BatchSummary[]> {
+    const atSite = andSite(site, 'b.site_id');
     const sql = `SELECT ${SUMMARY_COLUMNS} FROM ${BATCHES_WITH_PEOPLE}
-      WHERE b.notes LIKE ? AND b.status <> 'discarded' ORDER BY b.started_on, b.id`;
-    const values = [planNotePattern(assembly, serviceDate)];
+      WHERE b.notes LIKE ? AND b.status <> 'discarded'${atSite.sql} ORDER BY b.started_on, b.id`;
+    const values = [planNotePattern(assembly, serviceDate), ...atSite.values];
     const rows = t
       ? await this.db.sequelize.query<BatchRow>(sql, {
           replacements: values,
@@ -144,16 +150,18 @@ export class PlanRepository {
     return rows.map(toSummary);
   }
 
-  /** The latest plans made, newest first. */
-  async list(): Promise<PlanListItem[]> {
+  /** The latest plans made at the site (no site: anywhere), newest first. */
+  async list(site?: SiteScope): Promise<PlanListItem[]> {
+    const where = siteCondition(site, 'p.site_id');
     const rows = await readRows<PlanRow>(
       this.db.sequelize,
       `SELECT p.assembly_id, p.assembly_title, p.count, p.service_date, p.made_by,
          mb.display_name AS made_by_name, p.made_at, p.recorded_by,
          rb.display_name AS recorded_by_name, p.recorded_at, p.recorded_batches
        FROM plans p LEFT JOIN people mb ON mb.id = p.made_by LEFT JOIN people rb ON rb.id = p.recorded_by
+       ${where.sql ? `WHERE ${where.sql}` : ''}
        ORDER BY p.made_at DESC, p.id DESC LIMIT ?`,
-      [PLANS_LISTED],
+      [...where.values, PLANS_LISTED],
     );
     return rows.map(toItem);
   }

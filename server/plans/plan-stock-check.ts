@@ -12,6 +12,7 @@ import {
 } from '../../shared/index.ts';
 import type { Database } from '../db/database.ts';
 import { readStockOnHand } from './stock-on-hand.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 
 /**
  * The catalogue of materials beside a formulas folder, read; undefined when there is none (the
@@ -39,6 +40,7 @@ export async function comparePlanWithStock(
   formulas: ReadonlyMap<string, Formula>,
   catalogue: CatalogueReading | undefined,
   units: UnitSystem,
+  site?: SiteScope,
 ): Promise<PlanStock> {
   if (!catalogue) {
     return {
@@ -54,7 +56,7 @@ export async function comparePlanWithStock(
         'The catalogue of materials has errors, so the pull list cannot be matched to the lots received: put it right first.',
     };
   }
-  const stock = await readStockOnHand(db);
+  const stock = await readStockOnHand(db, site);
   if (!stock) {
     return {
       compared: false,

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { presentPlan } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { changeBy } from '../auth/request-person.ts';
+import { changeBy, siteOf } from '../auth/request-person.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { RECORDING_ROLES, planSheetPdf } from '../records/records.ts';
 import { serverToday } from '../server-today.ts';
@@ -33,8 +33,8 @@ export function plansRouter(context: AppContext): Router {
   const router = Router();
 
   // The plans made, newest first, recorded or not.
-  router.get('/', async (_req, res) => {
-    res.json({ plans: await records.listPlans() } satisfies PlanList);
+  router.get('/', async (req, res) => {
+    res.json({ plans: await records.listPlans(siteOf(req)) } satisfies PlanList);
   });
 
   // A plan worked out is noted as made (once per menu item, count and day), for the list; it
@@ -53,6 +53,7 @@ export function plansRouter(context: AppContext): Router {
       library,
       await catalogueBeside(formulas.folder),
       units,
+      siteOf(req),
     );
     res.json({ ...presentPlan(plan, units), stock } satisfies PlanWithStock);
   });
@@ -74,7 +75,7 @@ export function plansRouter(context: AppContext): Router {
       const catalogue = await catalogueBeside(formulas.folder);
       res.json({
         ...presentPlan(plan, units),
-        stock: await records.planStock(plan, library, catalogue, units),
+        stock: await records.planStock(plan, library, catalogue, units, siteOf(req)),
       } satisfies PlanWithStock);
     },
   );

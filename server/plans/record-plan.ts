@@ -68,7 +68,7 @@ export async function recordPlan(
   return batches.recordAll(prepared, options, {
     before: async (t) => {
       if (again) return;
-      const already = await plans.batchesOf(plan.assembly.id, plan.serviceDate, t);
+      const already = await plans.batchesOf(plan.assembly.id, plan.serviceDate, t, options.site);
       if (already.length > 0) throw alreadyRecorded(plan, already);
     },
     after: (t, recorded) =>

@@ -2,6 +2,7 @@ import type { NowItem, ProcessNow } from '../../shared/api/process-record.ts';
 import { judgeBatch } from './judge-batch.ts';
 import { kitchenClock, kitchenTime } from './kitchen-clock.ts';
 import type { ProcessRepository } from './process-repository.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 
 /** How far ahead a reading due soon is listed. common practice, no source */
 export const DUE_SOON_MS = 15 * 60_000;
@@ -11,11 +12,15 @@ const byTime = (a: NowItem, b: NowItem): number => (a.at < b.at ? -1 : a.at > b.
 /**
  * GET /api/process/now: what needs attention now, most urgent first — open deviations (product
  * on hold), then readings overdue or due within 15 minutes and cooling stages with a deadline,
- * soonest first — for the batches being made.
+ * soonest first — for the batches being made (at the site, when one is given).
  */
-export async function processNow(process: ProcessRepository, now: string): Promise<ProcessNow> {
+export async function processNow(
+  process: ProcessRepository,
+  now: string,
+  site?: SiteScope,
+): Promise<ProcessNow> {
   const deviations: NowItem[] = [];
-  for (const d of await process.openDeviations()) {
+  for (const d of await process.openDeviations(site)) {
     const controls = await process.controls.of(d.formula_id, d.formula_revision);
     deviations.push({
       kind: 'deviation',
@@ -29,7 +34,7 @@ export async function processNow(process: ProcessRepository, now: string): Promi
   }
   const soon = Date.parse(now) + DUE_SOON_MS;
   const due: NowItem[] = [];
-  for (const batch of await process.beingMade()) {
+  for (const batch of await process.beingMade(site)) {
     const controls = await process.controlsOf(batch);
     if (controls.length === 0) continue;
     const readings = await process.readings(batch.id);

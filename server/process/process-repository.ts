@@ -9,6 +9,7 @@ import type {
   Verification,
 } from '../../shared/api/process-record.ts';
 import type { ResolvedControl } from '../../shared/process/control-types.ts';
+import { andSite, type SiteScope } from '../sites/site-scope.ts';
 import type { Database } from '../db/database.ts';
 import { readRows } from '../db/read-row.ts';
 import { notFound } from '../http/app-error.ts';
@@ -108,16 +109,19 @@ const VERIFICATION_SQL = `SELECT ${STAMP_COLUMNS}, x.note
 /** The statuses of a batch being made: its controls are watched. */
 export const BEING_MADE: readonly BatchStatus[] = ['in-progress', 'curing', 'proofing'];
 
-const BEING_MADE_SQL = `SELECT b.id, b.lot_code, b.status, b.formula_id, b.formula_revision,
-  b.formula_title, b.operator_id FROM batches b
-  WHERE b.status IN (${BEING_MADE.map((s) => `'${s}'`).join(', ')}) ORDER BY b.id`;
+// `site` is a site condition on b (` AND b.site_id = ?`) or nothing.
+const BEING_MADE_SQL = (site = '') => `SELECT b.id, b.lot_code, b.status, b.formula_id,
+  b.formula_revision, b.formula_title, b.operator_id FROM batches b
+  WHERE b.status IN (${BEING_MADE.map((s) => `'${s}'`).join(', ')})${site} ORDER BY b.id`;
 
 // Open: no corrective action. Discarded product needs none; it is gone.
-const OPEN_DEVIATIONS_SQL = `SELECT d.id, d.control, d.kind, d.what, d.opened_at, d.opened_by,
+const OPEN_DEVIATIONS_SQL = (
+  site = '',
+) => `SELECT d.id, d.control, d.kind, d.what, d.opened_at, d.opened_by,
   op.display_name AS opener_name, d.dedupe_key, b.lot_code, b.formula_title,
   b.formula_id, b.formula_revision
   FROM deviations d JOIN batches b ON b.id = d.batch_id LEFT JOIN people op ON op.id = d.opened_by
-  WHERE b.status <> 'discarded'
+  WHERE b.status <> 'discarded'${site}
     AND NOT EXISTS (SELECT 1 FROM corrective_actions a WHERE a.deviation_id = d.id)
   ORDER BY d.opened_at, d.id`;
 
@@ -241,14 +245,22 @@ export class ProcessRepository {
     return row ? toVerification(row) : null;
   }
 
-  /** The batches being made (in progress, curing, proofing), oldest first. */
-  async beingMade(): Promise<ProcessBatch[]> {
-    return (await this.select<BatchRow>(BEING_MADE_SQL, [])).map(toBatch);
+  /**
+   * The batches being made (in progress, curing, proofing), oldest first; with a site, that
+   * site's only (the jobs that chase them work for the whole group and give none).
+   */
+  async beingMade(site?: SiteScope): Promise<ProcessBatch[]> {
+    const atSite = andSite(site, 'b.site_id');
+    return (await this.select<BatchRow>(BEING_MADE_SQL(atSite.sql), atSite.values)).map(toBatch);
   }
 
-  /** Every deviation without a corrective action, of batches not discarded, oldest first. */
-  openDeviations(): Promise<OpenDeviationRow[]> {
-    return this.select<OpenDeviationRow>(OPEN_DEVIATIONS_SQL, []);
+  /**
+   * Every deviation without a corrective action, of batches not discarded, oldest first; with a
+   * site, of that site's batches only.
+   */
+  openDeviations(site?: SiteScope): Promise<OpenDeviationRow[]> {
+    const atSite = andSite(site, 'b.site_id');
+    return this.select<OpenDeviationRow>(OPEN_DEVIATIONS_SQL(atSite.sql), atSite.values);
   }
 
   /** Every control of a batch judged at `now`, with its readings. */

@@ -2,7 +2,7 @@ import { Router, type Request, type RequestHandler } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
 import { CLIENT_HEADER } from '../auth/basic-writes.ts';
-import { changeBy } from '../auth/request-person.ts';
+import { changeBy, siteOf } from '../auth/request-person.ts';
 import { notFound } from '../http/app-error.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { validateBody } from '../http/validate-body.ts';
@@ -190,8 +190,8 @@ export function deviationsRouter(context: AppContext): Router {
 /** GET /api/process/now: what needs attention across the batches being made. */
 export function processNowRouter(context: AppContext): Router {
   const router = Router();
-  router.get('/now', async (_req, res) => {
-    res.json(await context.records.processNow(context.now().toISOString()));
+  router.get('/now', async (req, res) => {
+    res.json(await context.records.processNow(context.now().toISOString(), siteOf(req)));
   });
   return router;
 }

@@ -1,5 +1,5 @@
 import { QueryTypes } from 'sequelize';
-import { siteIdOf } from '../sites/site-scope.ts';
+import { andSite, siteIdOf, type SiteScope } from '../sites/site-scope.ts';
 import type { RawBatchOptions } from '../../shared/index.ts';
 import type { Refusal } from '../../shared/api/process-record.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
@@ -116,7 +116,9 @@ function dayAfter(day: string): string {
 export async function listRefusals(
   db: Database,
   range: { from?: string; to?: string },
+  site?: SiteScope,
 ): Promise<Refusal[]> {
+  const atSite = andSite(site, 'r.site_id');
   for (const [name, day] of Object.entries(range))
     if (day !== undefined && (!DAY.test(day) || Number.isNaN(Date.parse(day))))
       throw badRequest(`${name} must be a day as YYYY-MM-DD`, [
@@ -126,9 +128,13 @@ export async function listRefusals(
     `SELECT r.id, r.at, r.person_id, p.display_name, r.formula_id, r.formula_revision, r.inputs,
        r.failed, r.lot_code
      FROM refusals r LEFT JOIN people p ON p.id = r.person_id
-     WHERE r.at >= ? AND r.at < ? ORDER BY r.at DESC, r.id DESC LIMIT 1000`,
+     WHERE r.at >= ? AND r.at < ?${atSite.sql} ORDER BY r.at DESC, r.id DESC LIMIT 1000`,
     {
-      replacements: [range.from ?? '0000', range.to ? dayAfter(range.to) : '9999'],
+      replacements: [
+        range.from ?? '0000',
+        range.to ? dayAfter(range.to) : '9999',
+        ...atSite.values,
+      ],
       type: QueryTypes.SELECT,
     },
   );

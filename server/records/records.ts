@@ -165,9 +165,9 @@ export class Records {
     return this.guard(() => this.plans().made(plan, by));
   }
 
-  /** The latest plans made, newest first, recorded or not. */
-  listPlans(): Promise<PlanListItem[]> {
-    return this.guard(() => this.plans().list());
+  /** The latest plans made at the site (no site: anywhere), newest first, recorded or not. */
+  listPlans(site?: SiteScope): Promise<PlanListItem[]> {
+    return this.guard(() => this.plans().list(site));
   }
 
   /**
@@ -180,8 +180,11 @@ export class Records {
     formulas: FormulaLibrary,
     catalogue: CatalogueReading | undefined,
     units: UnitSystem,
+    site?: SiteScope,
   ): Promise<PlanStock> {
-    return this.guard(() => comparePlanWithStock(this.deps.db, plan, formulas, catalogue, units));
+    return this.guard(() =>
+      comparePlanWithStock(this.deps.db, plan, formulas, catalogue, units, site),
+    );
   }
 
   private planRepository: PlanRepository | undefined;
@@ -266,8 +269,8 @@ export class Records {
   }
 
   /** The calculations refused over a critical limit from one day to another (both included). */
-  listRefusals(range: { from?: string; to?: string }): Promise<Refusal[]> {
-    return this.guard(() => listRefusals(this.deps.db, range));
+  listRefusals(range: { from?: string; to?: string }, site?: SiteScope): Promise<Refusal[]> {
+    return this.guard(() => listRefusals(this.deps.db, range, site));
   }
 
   // Process records (HACCP): the readings at each control, their corrections, logger files,
@@ -343,9 +346,9 @@ export class Records {
     );
   }
 
-  /** What needs attention now across the batches being made. */
-  processNow(now: string = new Date().toISOString()): Promise<ProcessNow> {
-    return this.withProcess((p) => p.use.processNow(p.process, now));
+  /** What needs attention now across the batches being made (at the site, when one is given). */
+  processNow(now: string = new Date().toISOString(), site?: SiteScope): Promise<ProcessNow> {
+    return this.withProcess((p) => p.use.processNow(p.process, now, site));
   }
 
   // Receiving and stock by lot. The stock code loads on first use, with the process records'.
@@ -374,9 +377,9 @@ export class Records {
     return this.withStock((s) => s.receiveAll(deliveries));
   }
 
-  /** A page of deliveries, newest first, filtered. */
-  listReceipts(query: ReceiptQuery): Promise<ReceiptPage> {
-    return this.withStock((s) => s.list(query));
+  /** A page of deliveries, newest first, filtered; with a site, that site's only. */
+  listReceipts(query: ReceiptQuery, site?: SiteScope): Promise<ReceiptPage> {
+    return this.withStock((s) => s.list(query, site));
   }
 
   /** One delivery by the kitchen's lot code. */
@@ -384,9 +387,9 @@ export class Records {
     return this.withStock((s) => s.show(lot));
   }
 
-  /** What is on hand by item on a day, first to expire first. */
-  stockOnHand(today: string): Promise<StockView> {
-    return this.withStock((s) => s.stock(today));
+  /** What is on hand by item on a day, first to expire first; with a site, that site's lots. */
+  stockOnHand(today: string, site?: SiteScope): Promise<StockView> {
+    return this.withStock((s) => s.stock(today, site));
   }
 
   /** The catalogue's items as the receiving door shows them, with their limits. */

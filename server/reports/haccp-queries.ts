@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { asReal, dialectOf, type Dialect } from '../db/dialect-sql.ts';
 import { readRows } from '../db/read-row.ts';
+import { andSite } from '../sites/site-scope.ts';
 import type { ReportPeriod } from './report-period.ts';
 import {
   STAMP_COLUMNS,
@@ -59,7 +60,11 @@ export const PERIOD_BATCHES_SQL = `SELECT b.id FROM batches b WHERE b.id IN (
       WHERE a.recorded_at >= ? AND a.recorded_at < ? AND d.batch_id IS NOT NULL
     UNION SELECT batch_id FROM verifications WHERE recorded_at >= ? AND recorded_at < ?
     UNION SELECT batch_id FROM weighings WHERE weighed_at >= ? AND weighed_at < ?
-  ) ORDER BY b.started_on, b.id`;
+  )`;
+const PERIOD_BATCHES_ORDER = ' ORDER BY b.started_on, b.id';
+/** The period's batches as one site's report reads them (`AND b.site_id = ?`), or every one. */
+const periodBatchesSql = (site: string): string =>
+  `${PERIOD_BATCHES_SQL.replace(PERIOD_BATCHES_ORDER, '')}${site}${PERIOD_BATCHES_ORDER}`;
 
 /** The ids of the period's batches, in the order they started. */
 export async function periodBatchIds(
@@ -67,10 +72,12 @@ export async function periodBatchIds(
   period: ReportPeriod,
 ): Promise<number[]> {
   const { from, to, start, end } = period;
-  const rows = await readRows<{ id: number }>(sequelize, PERIOD_BATCHES_SQL, [
+  const atSite = andSite(period.site, 'b.site_id');
+  const rows = await readRows<{ id: number }>(sequelize, periodBatchesSql(atSite.sql), [
     from,
     to,
     ...Array<string[]>(5).fill([start, end]).flat(),
+    ...atSite.values,
   ]);
   return rows.map((row) => row.id);
 }
@@ -211,8 +218,8 @@ export function periodRefusals(sequelize: Sequelize, period: ReportPeriod): Prom
     `SELECT r.at, r.person_id, p.display_name AS person_name, r.formula_id, r.formula_revision,
        r.inputs, r.failed, r.lot_code
      FROM refusals r LEFT JOIN people p ON p.id = r.person_id
-     WHERE r.at >= ? AND r.at < ? ORDER BY r.at, r.id`,
-    [period.start, period.end],
+     WHERE r.at >= ? AND r.at < ?${andSite(period.site, 'r.site_id').sql} ORDER BY r.at, r.id`,
+    [period.start, period.end, ...andSite(period.site, 'r.site_id').values],
   );
 }
 
@@ -243,13 +250,14 @@ export async function periodEquipment(
   const span = [period.start, period.end];
   const read = <T>(sql: string, values: readonly (string | number)[] = span): Promise<T[]> =>
     readRows<T>(sequelize, sql, values);
+  const atSite = andSite(period.site, 'e.site_id');
   const equipment = await read<EquipmentRow>(
-    `SELECT e.id, e.name, e.kind FROM equipment e WHERE
+    `SELECT e.id, e.name, e.kind FROM equipment e WHERE (
        EXISTS (SELECT 1 FROM readings r WHERE r.equipment_id = e.id AND r.taken_at >= ? AND r.taken_at < ?)
        OR EXISTS (SELECT 1 FROM calibrations c WHERE c.equipment_id = e.id AND c.checked_at >= ? AND c.checked_at < ?)
        OR EXISTS (SELECT 1 FROM deviations d WHERE d.equipment_id = e.id AND d.opened_at >= ? AND d.opened_at < ?)
-     ORDER BY e.name`,
-    [...span, ...span, ...span],
+     )${atSite.sql} ORDER BY e.name`,
+    [...span, ...span, ...span, ...atSite.values],
   );
   const ids = equipment.map((e) => e.id);
   if (!ids.length)

@@ -5,6 +5,7 @@ import { FormulaControls } from '../process/formula-controls.ts';
 import { kitchenTimeZone } from '../process/kitchen-clock.ts';
 import type { HaccpReport, ReportHead } from '../../shared/api/haccp-report.ts';
 import type { Person } from '../../shared/api/person.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 import { RecordsError } from '../records/records-error.ts';
 import {
   HACCP_CSV_HEADER,
@@ -37,6 +38,8 @@ export interface ReportRequest {
   readonly now: Date;
   /** The address asked from, for the audit log. */
   readonly ip?: string;
+  /** The site whose records the report holds; none: every record. */
+  readonly site?: SiteScope;
 }
 
 /** A report ready to write: its name, and its body as chunks (PDF bytes, CSV text) or JSON. */
@@ -70,7 +73,10 @@ export async function produceReport(
       'forbidden',
       `${request.by.username} is a ${request.by.role}; the HACCP report needs ${REPORT_ROLES.join(' or ')}`,
     );
-  const period = reportPeriod(request.query, request.now);
+  const period = {
+    ...reportPeriod(request.query, request.now),
+    ...(request.site ? { site: request.site } : {}),
+  };
   const head: ReportHead = {
     kitchen: request.kitchen,
     from: period.from,

@@ -1,6 +1,7 @@
 import { addDays, daysBetween, isIsoDate } from '../../shared/calculation/dates.ts';
 import { localDate } from '../reminders/reminder-schedule.ts';
 import { RecordsError } from '../records/records-error.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 
 /** Days a report covers when no period is given: the last 30, today included. */
 export const DEFAULT_DAYS = 30;
@@ -15,6 +16,8 @@ export interface ReportPeriod {
   /** ISO instants: local midnight starting `from`, and local midnight ending `to` (excluded). */
   readonly start: string;
   readonly end: string;
+  /** The site whose records the report holds; none: every record (a single-site install). */
+  readonly site?: SiteScope;
 }
 
 /** Local midnight (the server's time zone, TZ) starting a day, as an ISO instant. */

@@ -1,5 +1,6 @@
 import type { ReportReceipt } from '../../shared/api/haccp-report.ts';
 import { readRows } from '../db/read-row.ts';
+import { andSite } from '../sites/site-scope.ts';
 import type { ReceiptRow } from '../stock/receipt-rows.ts';
 import { ACTION_SELECT, DEVIATION_SELECT } from './haccp-queries.ts';
 import type { Sequelize } from 'sequelize';
@@ -38,6 +39,7 @@ export async function reportReceiving(
   period: ReportPeriod,
 ): Promise<ReportReceipt[]> {
   const span = [period.start, period.end];
+  const atSite = andSite(period.site, 'r.site_id');
   const rows = await readRows<ReceivingRow>(
     sequelize,
     `SELECT r.id, r.lot_code, r.item, r.item_name, r.supplier, r.supplier_lot, r.establishment,
@@ -48,9 +50,9 @@ export async function reportReceiving(
        SELECT id FROM receipts WHERE received_at >= ? AND received_at < ?
        UNION SELECT receipt_id FROM deviations WHERE opened_at >= ? AND opened_at < ? AND receipt_id IS NOT NULL
        UNION SELECT d.receipt_id FROM corrective_actions a JOIN deviations d ON d.id = a.deviation_id
-         WHERE a.recorded_at >= ? AND a.recorded_at < ? AND d.receipt_id IS NOT NULL)
+         WHERE a.recorded_at >= ? AND a.recorded_at < ? AND d.receipt_id IS NOT NULL)${atSite.sql}
      ORDER BY r.received_at, r.id`,
-    [...span, ...span, ...span],
+    [...span, ...span, ...span, ...atSite.values],
   );
   if (!rows.length) return [];
   const ids = rows.map((row) => row.id);

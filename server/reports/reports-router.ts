@@ -1,7 +1,7 @@
 import { Router, type Request, type Response } from 'express';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { personOf } from '../auth/request-person.ts';
+import { personOf, siteOf } from '../auth/request-person.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { REPORT_ROLES, type ReportFormat } from '../records/records.ts';
 import { drained } from '../batches/batches-router.ts';
@@ -19,10 +19,13 @@ const CONTENT_TYPE: Readonly<Record<ReportFormat, string>> = {
 export function reportsRouter(context: AppContext): Router {
   const router = Router();
   const produce = (format: ReportFormat) => async (req: Request, res: Response) => {
+    const site = siteOf(req);
     const report = await context.records.produceReport(format, {
       query: req.query,
       by: personOf(req),
-      kitchen: context.config.kitchenName,
+      // A group's report is one site's records, and says which kitchen they are.
+      kitchen: site.filters ? site.name : context.config.kitchenName,
+      site,
       now: context.now(),
       ...(req.ip === undefined ? {} : { ip: req.ip }),
     });

@@ -24,7 +24,19 @@ export const SITE_OF = {
     LEFT JOIN receipts r ON r.id = d.receipt_id WHERE d.id = ?`,
 } as const;
 
-/** Whether a record that exists belongs to another site than the request's. */
+/**
+ * Whether a record that exists belongs to another site than the request's (never on a
+ * single-site install, where it reads nothing).
+ */
+export function isAtOtherSite(
+  db: Database,
+  kind: keyof typeof SITE_OF,
+  key: string,
+  site: SiteScope | undefined,
+): Promise<boolean> {
+  return atOtherSite(db, SITE_OF[kind], key, site);
+}
+
 async function atOtherSite(
   db: Database,
   sql: string,

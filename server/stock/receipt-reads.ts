@@ -5,6 +5,7 @@ import { remainingInUnit } from '../../shared/stock/base-measure.ts';
 import { suggestLots, type StockLot } from '../../shared/stock/fifo.ts';
 import { likeAnyCase } from '../db/dialect-sql.ts';
 import { readRows } from '../db/read-row.ts';
+import { andSite, siteCondition, type SiteScope } from '../sites/site-scope.ts';
 import { badRequest, notFound } from '../http/app-error.ts';
 import { RECEIPT_LOT_PATTERN } from './receipt-lot-code.ts';
 import { RECEIPT_SELECT, toReceipt, type ReceiptRow } from './receipt-rows.ts';
@@ -47,11 +48,17 @@ function whole(text: string | undefined, field: string, fallback: number, max: n
 /**
  * A page of deliveries, newest first, filtered by item, supplier (any part of its name, any
  * case), supplier's lot (exactly) and receiving days from/to (both included).
+ * With a site, that site's deliveries only.
  * @throws AppError 400 a day that is no date, a page out of range
  */
-export async function listReceipts(deps: StockDeps, query: ReceiptQuery): Promise<ReceiptPage> {
-  const where: string[] = [];
-  const values: (string | number)[] = [];
+export async function listReceipts(
+  deps: StockDeps,
+  query: ReceiptQuery,
+  site?: SiteScope,
+): Promise<ReceiptPage> {
+  const atSite = siteCondition(site, 'r.site_id');
+  const where: string[] = atSite.sql ? [atSite.sql] : [];
+  const values: (string | number)[] = [...atSite.values];
   const add = (clause: string, value: string): void => {
     where.push(clause);
     values.push(value);
@@ -111,14 +118,19 @@ export async function showReceipt(deps: StockDeps, lot: string): Promise<Receipt
 /**
  * What is on hand by item, on `today`: each item's usable lots in the order they should be used
  * (first to expire first out, as suggestLots orders them), then its expired lots, marked, to be
- * discarded. Items by name.
+ * discarded. Items by name. With a site, that site's lots only.
  */
-export async function stockOnHand(deps: StockDeps, today: string): Promise<StockView> {
+export async function stockOnHand(
+  deps: StockDeps,
+  today: string,
+  site?: SiteScope,
+): Promise<StockView> {
+  const atSite = andSite(site, 'r.site_id');
   const rows = await readRows<ReceiptRow>(
     deps.db.sequelize,
-    `${RECEIPT_SELECT} WHERE r.emptied_on IS NULL AND r.decision <> 'refused'
+    `${RECEIPT_SELECT} WHERE r.emptied_on IS NULL AND r.decision <> 'refused'${atSite.sql}
      ORDER BY r.item, r.use_by, r.received_at`,
-    [],
+    atSite.values,
   );
   const byItem = new Map<string, ReceiptRow[]>();
   for (const row of rows) byItem.set(row.item, [...(byItem.get(row.item) ?? []), row]);

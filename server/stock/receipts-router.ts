@@ -3,7 +3,7 @@ import type { ReceiptRequest } from '../../shared/api/receipt.ts';
 import { RECEIVED_UNITS } from '../../shared/stock/base-measure.ts';
 import type { AppContext } from '../app-context.ts';
 import { requireRole } from '../auth/authenticate.ts';
-import { changeBy } from '../auth/request-person.ts';
+import { changeBy, siteOf } from '../auth/request-person.ts';
 import { allowQuery } from '../http/require-json.ts';
 import { validateBody } from '../http/validate-body.ts';
 import { serverToday } from '../server-today.ts';
@@ -71,7 +71,7 @@ export function receiptsRouter(context: AppContext): Router {
     '/',
     allowQuery('item', 'supplier', 'supplierLot', 'from', 'to', 'page', 'pageSize'),
     async (req, res) => {
-      res.json(await records.listReceipts(req.query as ReceiptQuery));
+      res.json(await records.listReceipts(req.query as ReceiptQuery, siteOf(req)));
     },
   );
 
@@ -103,8 +103,8 @@ export function stockRouter(context: AppContext): Router {
   router.get('/items', allowQuery(), async (_req, res) => {
     res.json({ items: await context.records.receivingItems() });
   });
-  router.get('/', allowQuery(), async (_req, res) => {
-    res.json(await context.records.stockOnHand(serverToday(context)));
+  router.get('/', allowQuery(), async (req, res) => {
+    res.json(await context.records.stockOnHand(serverToday(context), siteOf(req)));
   });
   return router;
 }

@@ -8,6 +8,7 @@ import type {
 import { RECEIVED_UNITS, baseMeasureOf } from '../../shared/stock/base-measure.ts';
 import { receivingLimit } from '../../shared/stock/receiving-limit.ts';
 import type { ChangeOptions } from '../batches/batch.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 import type { ProcessDeps } from '../process/judge-and-open.ts';
 import { CatalogueItems } from './catalogue-items.ts';
 import {
@@ -27,9 +28,11 @@ export interface StockUseCases {
   receiveAll(
     deliveries: readonly { readonly request: ReceiptRequest; readonly by: ChangeOptions }[],
   ): Promise<string[]>;
-  list(query: ReceiptQuery): Promise<ReceiptPage>;
+  /** A page of deliveries; with a site, that site's only. */
+  list(query: ReceiptQuery, site?: SiteScope): Promise<ReceiptPage>;
   show(lot: string): Promise<Receipt>;
-  stock(today: string): Promise<StockView>;
+  /** What is on hand; with a site, that site's lots only. */
+  stock(today: string, site?: SiteScope): Promise<StockView>;
   discard(lot: string, reason: string, by: ChangeOptions): Promise<Receipt>;
   items(): Promise<ReceivingItem[]>;
 }
@@ -40,9 +43,9 @@ export function stockUseCases(process: ProcessDeps, formulasFolder: string): Sto
   return {
     receive: async (request, by) => showReceipt(deps, await receive(deps, request, by)),
     receiveAll: (deliveries) => receiveAll(deps, deliveries),
-    list: (query) => listReceipts(deps, query),
+    list: (query, site) => listReceipts(deps, query, site),
     show: (lot) => showReceipt(deps, lot),
-    stock: (today) => stockOnHand(deps, today),
+    stock: (today, site) => stockOnHand(deps, today, site),
     items: async () =>
       [...(await deps.catalogue.items()).values()]
         .filter((item) => item.kind !== 'water')
