@@ -45,3 +45,18 @@ export async function testDatabaseEnv(t: AfterHook): Promise<Record<string, stri
   const adminUrl = testPostgresUrl();
   return adminUrl ? { LARDER_DB_URL: await freshPostgresDatabase(t, adminUrl) } : {};
 }
+
+/**
+ * Makes a test database take no writes, as a hot standby does (every write refused with 25006
+ * read_only_sql_transaction), or take them again: default_transaction_read_only for every session
+ * that starts from now on, set by the cluster's admin.
+ */
+export async function setPostgresReadOnly(url: string, readOnly: boolean): Promise<void> {
+  const adminUrl = testPostgresUrl();
+  if (!adminUrl) throw new Error('LARDER_TEST_PG_URL is not set');
+  const name = decodeURIComponent(new URL(url).pathname.slice(1));
+  await asAdmin(
+    adminUrl,
+    `ALTER DATABASE "${name}" SET default_transaction_read_only = ${readOnly ? 'on' : 'off'}`,
+  );
+}
