@@ -1,6 +1,7 @@
+import type pgModule from 'pg';
 import { Sequelize, Transaction } from 'sequelize';
 import type { Database } from './database.ts';
-import { isWriteConflict } from './postgres-faults.ts';
+import { isWriteConflict, postgresCode } from './postgres-faults.ts';
 import { WriteQueue } from './write-queue.ts';
 
 /** Whether a database setting names a PostgreSQL server rather than a SQLite file. */
@@ -31,6 +32,53 @@ export async function retryConflicts<T>(work: () => Promise<T>, patienceMs = 10_
   }
 }
 
+/** The pg module, as imported. */
+type PgModule = typeof pgModule;
+
+/** A pg connection as Sequelize's pool sees it, with the time it was opened. */
+interface PooledClient {
+  _invalid?: boolean;
+  _ending?: boolean;
+  generation?: number;
+}
+
+/**
+ * pg with one change to its Client, and the pool check that goes with it. A PostgreSQL session
+ * keeps the read-only setting it started with (a standby's, or ALTER DATABASE … SET
+ * default_transaction_read_only), so once any connection of the process is refused a write
+ * (25006), every connection opened before that refusal is ended rather than handed out again
+ * (`validate`); a new connection reads the database's current setting, so the server takes
+ * writes again as soon as the database does, without a restart.
+ */
+function watchReadOnly(pg: PgModule): { module: PgModule; validate: (c: unknown) => boolean } {
+  // Raised at each refusal: a connection of an older generation is ended.
+  let generation = 0;
+  class Client extends pg.Client {
+    readonly generation = generation;
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any -- pg's query has many overloads
+    override query(...args: any[]): any {
+      const last = args.length - 1;
+      if (typeof args[last] === 'function') {
+        const callback = args[last] as (error: unknown, result: unknown) => void;
+        args[last] = (error: unknown, result: unknown) => {
+          if (error && postgresCode(error) === '25006') generation += 1;
+          callback(error, result);
+        };
+      }
+      return (super.query as (...a: any[]) => any)(...args); // eslint-disable-line @typescript-eslint/no-explicit-any
+    }
+  }
+  return {
+    // Everything else (types, defaults) is pg's own, read through the prototype.
+    module: Object.assign(Object.create(pg) as typeof pg, { Client }),
+    // Sequelize's own check (a broken or ending connection), and not opened before a refusal.
+    validate: (connection) => {
+      const c = connection as PooledClient;
+      return !c._invalid && !c._ending && c.generation === generation;
+    },
+  };
+}
+
 /** Connections each server process keeps to PostgreSQL (Sequelize's pool). */
 const POOL_SIZE = 10;
 
@@ -43,11 +91,12 @@ const POOL_SIZE = 10;
 export async function connectPostgres(url: string, lockTimeoutMs?: number): Promise<Sequelize> {
   const pg = (await import('pg')).default;
   pg.types.setTypeParser(pg.types.builtins.INT8, (text: string) => Number(text));
+  const watched = watchReadOnly(pg);
   return new Sequelize(url, {
     dialect: 'postgres',
-    dialectModule: pg,
+    dialectModule: watched.module,
     logging: false,
-    pool: { max: POOL_SIZE },
+    pool: { max: POOL_SIZE, validate: watched.validate },
     // Our own retry (retryConflicts) tries a whole transaction again; one statement alone never.
     retry: { max: 1 },
     ...(lockTimeoutMs === undefined ? {} : { dialectOptions: { lock_timeout: lockTimeoutMs } }),
@@ -67,15 +116,21 @@ export async function connectPostgres(url: string, lockTimeoutMs?: number): Prom
  */
 export function postgresWrite(sequelize: Sequelize, patienceMs: number): Database['write'] {
   const queue = new WriteQueue();
-  return (work) =>
-    queue.run(() =>
-      retryConflicts(
-        () =>
-          sequelize.transaction(
-            { isolationLevel: Transaction.ISOLATION_LEVELS.SERIALIZABLE },
-            work,
-          ),
-        patienceMs,
-      ),
+  const tries = <T>(work: (transaction: Transaction) => Promise<T>): Promise<T> =>
+    retryConflicts(
+      () =>
+        sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.SERIALIZABLE }, work),
+      patienceMs,
     );
+  return (work) =>
+    queue.run(async () => {
+      try {
+        return await tries(work);
+      } catch (error) {
+        // Refused as read-only (nothing written): perhaps on a connection opened before the
+        // database took writes again. Once more, on a connection opened since (watchReadOnly).
+        if (postgresCode(error) !== '25006') throw error;
+        return tries(work);
+      }
+    });
 }

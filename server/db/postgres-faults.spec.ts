@@ -28,6 +28,20 @@ describe('PostgreSQL failures that are about the database', () => {
     assert.equal(postgresFault({ name: 'SequelizeConnectionRefusedError' }), 'unavailable');
   });
 
+  it('should answer a connection ended under a query, which pg reports without a code, as unavailable', () => {
+    // source: pg's own messages for a connection lost under a query, node_modules/pg/lib/client.js
+    for (const message of [
+      'Connection terminated unexpectedly',
+      'Client has encountered a connection error and is not queryable',
+    ])
+      assert.equal(
+        postgresFault({ name: 'SequelizeDatabaseError', parent: new Error(message) }),
+        'unavailable',
+        message,
+      );
+    assert.equal(postgresFault(new Error('a bug')), undefined);
+  });
+
   it('should answer conflicts that outlasted their tries as busy and a read-only server as read-only', () => {
     assert.equal(postgresFault(failed('40001')), 'busy');
     assert.equal(postgresFault(failed('25006')), 'read-only');

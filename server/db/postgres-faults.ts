@@ -3,6 +3,9 @@
  * again, and the ones answered with the same 503s as SQLite's busy and read-only files.
  */
 
+/** pg's words for a connection lost under a query or used after it was lost. */
+const LOST_CONNECTION = /^Connection terminated|is not queryable|Client was closed/;
+
 /** PostgreSQL's SQLSTATE (or node's socket code) of a failed query, if there is one. */
 export function postgresCode(error: unknown): string | undefined {
   const e = error as {
@@ -18,6 +21,10 @@ export function postgresCode(error: unknown): string | undefined {
   // Sequelize names a connection it could not open without always keeping the socket's code.
   if (typeof e?.name === 'string' && e.name.startsWith('SequelizeConnection'))
     return 'ECONNREFUSED';
+  // pg's own errors for a connection the server ended under a query (pg_terminate_backend, a
+  // restart) carry no code at all: named here as SQLSTATE's connection failure.
+  const messages = [e?.parent, e?.original, e].map((part) => (part as Error | undefined)?.message);
+  if (messages.some((m) => typeof m === 'string' && LOST_CONNECTION.test(m))) return '08006';
   return undefined;
 }
 

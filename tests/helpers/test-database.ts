@@ -45,3 +45,40 @@ export async function testDatabaseEnv(t: AfterHook): Promise<Record<string, stri
   const adminUrl = testPostgresUrl();
   return adminUrl ? { LARDER_DB_URL: await freshPostgresDatabase(t, adminUrl) } : {};
 }
+
+/**
+ * Makes a test database take no writes, as a hot standby does (every write refused with 25006
+ * read_only_sql_transaction), or take them again: default_transaction_read_only for every session
+ * that starts from now on, set by the cluster's admin.
+ */
+export async function setPostgresReadOnly(url: string, readOnly: boolean): Promise<void> {
+  const adminUrl = testPostgresUrl();
+  if (!adminUrl) throw new Error('LARDER_TEST_PG_URL is not set');
+  const name = decodeURIComponent(new URL(url).pathname.slice(1));
+  await asAdmin(
+    adminUrl,
+    `ALTER DATABASE "${name}" SET default_transaction_read_only = ${readOnly ? 'on' : 'off'}`,
+  );
+}
+
+/**
+ * Ends every connection to a test database from the cluster's admin connection
+ * (pg_terminate_backend), as a database server's restart or a network cut does to its clients;
+ * returns how many were ended. The cluster itself goes on serving every other database.
+ */
+export async function endPostgresConnections(url: string): Promise<number> {
+  const adminUrl = testPostgresUrl();
+  if (!adminUrl) throw new Error('LARDER_TEST_PG_URL is not set');
+  const client = new pg.Client({ connectionString: adminUrl });
+  await client.connect();
+  try {
+    const { rows } = await client.query<{ ended: number }>(
+      `SELECT CAST(COUNT(pg_terminate_backend(pid)) AS INTEGER) AS ended FROM pg_stat_activity
+        WHERE datname = $1 AND pid <> pg_backend_pid()`,
+      [decodeURIComponent(new URL(url).pathname.slice(1))],
+    );
+    return rows[0].ended;
+  } finally {
+    await client.end();
+  }
+}
