@@ -1,4 +1,5 @@
 import type { AppContext } from '../app-context.ts';
+import { DEFAULT_SITE_NAME, MAIN_SITE_KEY } from '../sites/main-site.ts';
 import { SiteRepository } from '../sites/site-repository.ts';
 import type { SiteScope } from '../sites/site-scope.ts';
 import { DEMO_SHOP, DEMO_SHOP_COOK } from './demo-people.ts';
@@ -34,6 +35,11 @@ export async function seedShop(context: AppContext, now = new Date()): Promise<s
   if (!imke) return [];
   const sites = new SiteRepository(context.db);
   const { site, maren } = await context.db.write(async (transaction) => {
+    // The smokehouse is named as the demo names its kitchen, beside its shop (the first site
+    // takes LARDER_KITCHEN's name when set, else a name that says nothing of the demo).
+    const main = await sites.byKey(MAIN_SITE_KEY, transaction);
+    if (main?.name === DEFAULT_SITE_NAME)
+      await sites.rename(main.id, context.config.kitchenName, transaction);
     const added = await sites.add(DEMO_SHOP.key, DEMO_SHOP.name, transaction);
     const cook = await context.people.add(DEMO_SHOP_COOK, transaction);
     await context.people.update(cook.id, { roleEverywhere: false }, transaction);
