@@ -15,6 +15,7 @@ import { traceCommand } from './commands/trace.ts';
 import { receiveCommand } from './commands/receive.ts';
 import { reportCommand } from './commands/report.ts';
 import { stockCommand } from './commands/stock.ts';
+import { sitesCommand } from './commands/sites.ts';
 import { usersCommand } from './commands/users.ts';
 import type { Io } from './io.ts';
 
@@ -44,6 +45,7 @@ export function createProgram(io: Io): Command {
     receiveCommand(io),
     stockCommand(io),
     usersCommand(io),
+    sitesCommand(io),
     backupCommand(io),
   ]) {
     command

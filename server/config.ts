@@ -42,6 +42,11 @@ export interface ServerConfig {
   readonly mailFrom: string;
   /** How the messages name the kitchen: "Larderbook at …". */
   readonly kitchenName: string;
+  /**
+   * How many sites the demo seeds (LARDER_DEMO_SITES): 2, the smokehouse and its second shop
+   * (the default), or 1, the smokehouse alone, as a single kitchen sees Larderbook.
+   */
+  readonly demoSites: 1 | 2;
   /** The kitchen's address as its product labels print it; null when not given. */
   readonly kitchenAddress: string | null;
   /** Minutes between two runs of the reminder scheduler. */
@@ -207,6 +212,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     smtpUrl,
     mailFrom: env.LARDER_MAIL_FROM || 'Larderbook <larderbook@localhost>',
     kitchenName: env.LARDER_KITCHEN || (mode === 'demo' ? 'Quillmoor Smokehouse' : 'the kitchen'),
+    demoSites: integer(env, 'LARDER_DEMO_SITES', 2, 1, 2) as 1 | 2,
     // The demo's address is invented, as its kitchen is.
     kitchenAddress:
       env.LARDER_KITCHEN_ADDRESS?.trim() || (mode === 'demo' ? '14 Kiln Lane, Quillmoor' : null),

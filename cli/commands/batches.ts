@@ -3,7 +3,7 @@ import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
 import { textTable } from '../output/text-table.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, siteOption } from '../records/record-keeper.ts';
 
 const FILTERS = [
   'formula',
@@ -21,6 +21,8 @@ const FILTERS = [
 
 interface ShowOptions {
   server?: string;
+  /** The site of the group to work at. */
+  site?: string;
   json?: boolean;
   pdf?: string;
   force?: boolean;
@@ -28,6 +30,8 @@ interface ShowOptions {
 
 interface ListOptions extends Partial<Record<(typeof FILTERS)[number], string>> {
   server?: string;
+  /** The site of the group to work at. */
+  site?: string;
   json?: boolean;
 }
 
@@ -55,6 +59,7 @@ export function batchesCommand(io: Io): Command {
     .option('--limit <n>', 'batches per page, 1–200 (default 50)')
     .option('--cursor <cursor>', 'the page after this one (printed at the end of a page)')
     .addOption(serverOption('read from this server'))
+    .addOption(siteOption())
     .option('--json', 'print the page as JSON')
     .addHelpText(
       'after',
@@ -63,7 +68,7 @@ export function batchesCommand(io: Io): Command {
     .action(async (options: ListOptions) => {
       const query: Record<string, string> = {};
       for (const key of FILTERS) if (options[key] !== undefined) query[key] = options[key];
-      const page = await (await recordKeeper(options.server)).listBatches(query);
+      const page = await (await recordKeeper(options.server, options.site)).listBatches(query);
       if (options.json) return io.out(`${JSON.stringify(page, null, 2)}\n`);
       const rows = page.items.map((b) => [
         b.lotCode,
@@ -101,6 +106,7 @@ export function batchesCommand(io: Io): Command {
     .description('one batch: its sheet as recorded, checks, and every event')
     .argument('<lot>', 'lot code')
     .addOption(serverOption('read from this server'))
+    .addOption(siteOption())
     .option('--json', 'print the batch as JSON')
     .option('--pdf <file>', 'write the batch sheet as recorded to a PDF file, with its lot code')
     .option('--force', 'with --pdf: replace the file if it exists')
@@ -113,7 +119,7 @@ export function batchesCommand(io: Io): Command {
       const pdf = options.pdf ? { file: options.pdf, force: !!options.force } : undefined;
       // The PDF tools load only for --pdf; the path is checked before the batch is read.
       if (pdf) await (await import('../output/pdf-file.ts')).checkPdfTarget(pdf);
-      const batch = await (await recordKeeper(options.server)).showBatch(lot);
+      const batch = await (await recordKeeper(options.server, options.site)).showBatch(lot);
       if (pdf)
         await (await import('../output/pdf-file.ts')).writeBatchSheet(pdf, batch.result, batch);
       if (options.json) return io.out(`${JSON.stringify(batch, null, 2)}\n`);

@@ -17,7 +17,7 @@ import { formulasFolder, loadFormula } from '../formula-files.ts';
 import { libraryIn, partsFolder } from '../formula-library.ts';
 import { today, type Io } from '../io.ts';
 import { renderBatchSheet } from '../output/batch-sheet.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, siteOption } from '../records/record-keeper.ts';
 
 /**
  * Every batch option's flag, value name and help, in the order --help lists them. Commander turns
@@ -116,6 +116,8 @@ interface CalcOptions extends RawBatchOptions {
   formulas?: string;
   record?: boolean;
   server?: string;
+  /** The site of the group to work at. */
+  site?: string;
   status?: 'planned' | 'in-progress' | 'done';
   notes?: string;
   pdf?: string;
@@ -142,6 +144,7 @@ export function calcCommand(io: Io): Command {
       'record the batch with its lot code (as $LARDER_USER, password in $LARDER_PASSWORD)',
     )
     .addOption(serverOption('with --record: record on this server'))
+    .addOption(siteOption())
     .addOption(
       new Option(
         '--status <status>',
@@ -240,7 +243,7 @@ async function recordBatch(
   pdf: PdfTarget | undefined,
   io: Io,
 ): Promise<void> {
-  const keeper = await recordKeeper(options.server);
+  const keeper = await recordKeeper(options.server, options.site);
   const batch = await keeper.recordBatch({
     formula: formulaId,
     folder: path.dirname(path.resolve(file)),

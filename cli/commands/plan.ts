@@ -19,7 +19,12 @@ import { today, type Io } from '../io.ts';
 import type { PdfTarget } from '../output/pdf-file.ts';
 import { renderPlanSheet } from '../output/plan-sheet.ts';
 import { renderPlanStock } from '../output/plan-stock-sheet.ts';
-import { localRecordKeeper, recordKeeper, type PlanToRecord } from '../records/record-keeper.ts';
+import {
+  localRecordKeeper,
+  recordKeeper,
+  siteOption,
+  type PlanToRecord,
+} from '../records/record-keeper.ts';
 
 interface PlanOptions {
   count: string;
@@ -31,6 +36,8 @@ interface PlanOptions {
   record?: boolean;
   again?: boolean;
   server?: string;
+  /** The site of the group to work at. */
+  site?: string;
   pdf?: string;
   force?: boolean;
 }
@@ -81,6 +88,7 @@ export function planCommand(io: Io): Command {
         'plan on this server and compare the pull list with its stock; with --record, record there (for --record the default is $LARDER_SERVER, else this machine)',
       ),
     )
+    .addOption(siteOption())
     .option(
       '--pdf <file>',
       'write the plan to a PDF file: an overview, then one production sheet per start day',
@@ -190,7 +198,7 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
   };
   const json = options.json === true;
   if (options.record) {
-    const keeper = await recordKeeper(options.server);
+    const keeper = await recordKeeper(options.server, options.site);
     const recorded = await keeper.recordPlan(request);
     const stock = (await keeper.planStock(request))?.stock;
     if (pdf) await writePlanPdf(pdf, recorded.plan);
@@ -198,7 +206,9 @@ async function runPlan(reference: string, options: PlanOptions, io: Io): Promise
   }
   // With --server the server plans and compares with its stock; else this machine's records,
   // when it keeps any, give the stock.
-  const keeper = options.server ? await recordKeeper(options.server) : await localRecordKeeper();
+  const keeper = options.server
+    ? await recordKeeper(options.server, options.site)
+    : await localRecordKeeper(options.site);
   const withStock = options.server ? await keeper.planStock(request) : undefined;
   const presented = withStock ? withoutStock(withStock) : presentPlan(plan(), options.units);
   const stock = withStock?.stock ?? (await keeper.planStock(request))?.stock;

@@ -2,11 +2,13 @@ import { Command } from 'commander';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { readingWords, reportDeviations } from '../output/process-words.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, siteOption } from '../records/record-keeper.ts';
 
 interface ReadingOptions {
   at?: string;
   server?: string;
+  /** The site of the group to work at. */
+  site?: string;
   json?: boolean;
 }
 
@@ -37,6 +39,7 @@ export function readingCommand(io: Io): Command {
     )
     .option('--at <time>', 'when it was taken: HH:MM today, or ISO 8601 with a zone (default: now)')
     .addOption(serverOption('record on this server'))
+    .addOption(siteOption())
     .option('--json', "print the reading, the control's state and any deviation as JSON")
     .addHelpText(
       'after',
@@ -48,7 +51,9 @@ export function readingCommand(io: Io): Command {
         value,
         ...(options.at ? { at: readingTime(options.at) } : {}),
       };
-      const answer = await (await recordKeeper(options.server)).addReading(lot, request);
+      const answer = await (
+        await recordKeeper(options.server, options.site)
+      ).addReading(lot, request);
       if (options.json) io.out(`${JSON.stringify(answer, null, 2)}\n`);
       else io.out(readingWords(lot.toUpperCase(), value, answer));
       reportDeviations(io, answer.deviation ? [answer.deviation] : [], !!options.json);

@@ -3,10 +3,12 @@ import { Command } from 'commander';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { reportDeviations } from '../output/process-words.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, siteOption } from '../records/record-keeper.ts';
 
 interface ReadingsOptions {
   server?: string;
+  /** The site of the group to work at. */
+  site?: string;
   json?: boolean;
 }
 
@@ -27,6 +29,7 @@ export function readingsCommand(io: Io): Command {
     .argument('<control>', "the control's id in the formula, e.g. chill")
     .argument('<file>', "the logger's CSV export (time, temperature per line)")
     .addOption(serverOption('store on this server'))
+    .addOption(siteOption())
     .option('--json', 'print what was stored and the deviations opened as JSON')
     .addHelpText(
       'after',
@@ -34,7 +37,7 @@ export function readingsCommand(io: Io): Command {
     )
     .action(async (lot: string, control: string, file: string, options: ReadingsOptions) => {
       const text = await loggerText(file);
-      const keeper = await recordKeeper(options.server);
+      const keeper = await recordKeeper(options.server, options.site);
       let stored;
       try {
         stored = await keeper.uploadReadings(lot, control, text);

@@ -4,7 +4,7 @@ import { dayWords } from '../../shared/presentation/date-words.ts';
 import { RECEIVED_UNITS, type ReceivedUnit } from '../../shared/stock/base-measure.ts';
 import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, siteOption } from '../records/record-keeper.ts';
 
 interface ReceiveOptions {
   supplier: string;
@@ -25,6 +25,8 @@ interface ReceiveOptions {
   amount?: string;
   note?: string;
   server?: string;
+  /** The site of the group to work at. */
+  site?: string;
   json?: boolean;
 }
 
@@ -141,6 +143,7 @@ export function receiveCommand(io: Io): Command {
     )
     .option('--note <text>', 'anything else about the delivery')
     .addOption(serverOption('record on this server'))
+    .addOption(siteOption())
     .option('--json', 'print the delivery as recorded, as JSON')
     .addHelpText(
       'after',
@@ -148,7 +151,7 @@ export function receiveCommand(io: Io): Command {
     )
     .action(async (item: string, options: ReceiveOptions) => {
       const receipt = await (
-        await recordKeeper(options.server)
+        await recordKeeper(options.server, options.site)
       ).receive(receiptRequest(item, options));
       io.out(options.json ? `${JSON.stringify(receipt, null, 2)}\n` : receiptWords(receipt));
     });

@@ -17,6 +17,7 @@ import {
   recordsFile,
   type Person,
   type Role,
+  type SiteScope,
 } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
 import { today } from '../io.ts';
@@ -57,13 +58,15 @@ export async function withLocalRecords<T>(
 
 /**
  * The person recording, from $LARDER_USER and $LARDER_PASSWORD, checked as the server checks a
- * sign-in: the command line is held to the same accounts and roles.
+ * sign-in, at the site the command works at (`--site`, else their default): the command line is
+ * held to the same accounts and roles, the role in force being their role at that site.
  */
 async function recorder(
   records: Records,
   verb: PersonVerb,
   roles: readonly Role[],
-): Promise<Person> {
+  siteKey: string | undefined,
+): Promise<{ actor: Person; site: SiteScope }> {
   const { username, password } = credentialsFor(verb);
   const person = await records.signIn(username, password);
   if (!person)
@@ -71,27 +74,29 @@ async function recorder(
       'wrong LARDER_USER or LARDER_PASSWORD, or the account is not active',
       EXIT.usage,
     );
-  if (!roles.includes(person.role))
+  const { site, person: there = person } = await records.siteAtWork(siteKey, person);
+  if (!roles.includes(there.role))
     throw new CliError(
-      `${person.username} is a ${person.role}; this needs ${roles.join(' or ')}`,
+      `${there.username} is a ${there.role}${site.filters ? ` at ${site.key}` : ''}; this needs ${roles.join(' or ')}`,
       EXIT.usage,
     );
-  return person;
+  return { actor: there, site };
 }
 
 /**
  * Opens this machine's records for a verb that acts as a person, signs in $LARDER_USER with a
- * role the verb needs, and runs `work` as them.
+ * role the verb needs at the site, and runs `work` as them there.
  */
 function asPerson<T>(
   verb: PersonVerb,
   roles: readonly Role[],
-  work: (records: Records, actor: Person) => Promise<T>,
+  siteKey: string | undefined,
+  work: (records: Records, by: { actor: Person; site: SiteScope }) => Promise<T>,
   formulasFolder?: string,
 ): Promise<T> {
   return withLocalRecords(
     verb,
-    async (records) => work(records, await recorder(records, verb, roles)),
+    async (records) => work(records, await recorder(records, verb, roles, siteKey)),
     formulasFolder,
   );
 }
@@ -112,12 +117,16 @@ function localRecordsFile(): string {
 export class LocalRecords implements RecordKeeper {
   readonly server = undefined;
 
+  /** @param site the key of the site to work at (`--site`); none: the default, as the API's */
+  constructor(private readonly site?: string) {}
+
   /** Records a batch from the formula file as it is now; its revision joins the formula's history. */
   recordBatch({ folder, ...request }: BatchToRecord): Promise<Batch> {
     return asPerson(
       'record',
       RECORDING_ROLES,
-      (records, actor) => records.recordBatch(request, today(), { actor }),
+      this.site,
+      (records, by) => records.recordBatch(request, today(), by),
       folder,
     );
   }
@@ -129,10 +138,11 @@ export class LocalRecords implements RecordKeeper {
     return asPerson(
       'record',
       RECORDING_ROLES,
-      async (records, actor) => ({
+      this.site,
+      async (records, by) => ({
         plan: presentPlan(plan, request.units),
         batches: await records.recordPlan(plan, request.units, {
-          actor,
+          ...by,
           again: request.again === true,
         }),
       }),
@@ -154,29 +164,35 @@ export class LocalRecords implements RecordKeeper {
     }));
   }
 
+  /** The log of the site (`--site`, else `main`); reading needs no one. */
   listBatches(query: Record<string, string>): Promise<BatchPage> {
-    return withLocalRecords('list', (records) => records.listBatches(query));
+    return withLocalRecords('list', async (records) =>
+      records.listBatches(query, (await records.siteAtWork(this.site)).site),
+    );
   }
 
+  /** A batch of the site; another site's is not found. */
   showBatch(lot: string): Promise<Batch> {
-    return withLocalRecords('show', (records) => records.showBatch(lot));
+    return withLocalRecords('show', async (records) =>
+      records.showBatch(lot, (await records.siteAtWork(this.site)).site),
+    );
   }
 
   addReading(lot: string, request: ReadingRequest): Promise<ReadingAnswer> {
-    return asPerson('reading', PROCESS_ROLES, (records, actor) =>
-      records.addReading(lot, request, 'command', { actor }),
+    return asPerson('reading', PROCESS_ROLES, this.site, (records, by) =>
+      records.addReading(lot, request, 'command', by),
     );
   }
 
   uploadReadings(lot: string, control: string, text: string): Promise<UploadedReadings> {
-    return asPerson('reading', PROCESS_ROLES, (records, actor) =>
-      records.uploadReadings(lot, control, text, { actor }),
+    return asPerson('reading', PROCESS_ROLES, this.site, (records, by) =>
+      records.uploadReadings(lot, control, text, by),
     );
   }
 
   receive(request: ReceiptRequest): Promise<Receipt> {
-    return asPerson('receive', RECORDING_ROLES, (records, actor) =>
-      records.receive(request, { actor }),
+    return asPerson('receive', RECORDING_ROLES, this.site, (records, by) =>
+      records.receive(request, by),
     );
   }
 
@@ -187,7 +203,7 @@ export class LocalRecords implements RecordKeeper {
 
   /** The report from this machine's records, as whoever $LARDER_USER is (admin or reviewer). */
   report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput> {
-    return asPerson('report', REPORT_ROLES, async (records, by) => {
+    return asPerson('report', REPORT_ROLES, this.site, async (records, { actor: by }) => {
       const produced = await records.produceReport(format, {
         query: period,
         by,
@@ -217,7 +233,7 @@ export class LocalRecords implements RecordKeeper {
 
   /** The recall report from this machine's records, produced as $LARDER_USER (any role). */
   recall(format: RecallOutput['format'], search: TraceSearch): Promise<RecallOutput> {
-    return asPerson('recall', TRACE_ROLES, async (records, by) => {
+    return asPerson('recall', TRACE_ROLES, this.site, async (records, { actor: by }) => {
       const produced = await records.produceRecall(format, {
         search,
         by,

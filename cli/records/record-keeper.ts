@@ -113,18 +113,32 @@ export interface RecordKeeper {
  * stack, a server's with none of it.
  * @param option the verb's --server, if given
  */
-export async function recordKeeper(option: string | undefined): Promise<RecordKeeper> {
+export async function recordKeeper(
+  option: string | undefined,
+  site?: string,
+): Promise<RecordKeeper> {
   const server = option ?? process.env.LARDER_SERVER;
-  if (server) return new (await import('./server-records.ts')).ServerRecords(server);
-  return new (await import('./local-records.ts')).LocalRecords();
+  if (server) return new (await import('./server-records.ts')).ServerRecords(server, site);
+  return new (await import('./local-records.ts')).LocalRecords(site);
 }
 
 /**
  * This machine's records, whatever $LARDER_SERVER says: for a verb that reads them only when
  * --server is not given.
  */
-export async function localRecordKeeper(): Promise<RecordKeeper> {
-  return new (await import('./local-records.ts')).LocalRecords();
+export async function localRecordKeeper(site?: string): Promise<RecordKeeper> {
+  return new (await import('./local-records.ts')).LocalRecords(site);
+}
+
+/**
+ * The --site option of a verb that reads or writes a site's records: the key of the site (see
+ * `larder sites`); without it, the person's only site or `main`, as the API's default.
+ */
+export function siteOption(): Option {
+  return new Option(
+    '--site <key>',
+    "the site of the group to work at (default: the person's only site, else main)",
+  );
 }
 
 /** The --server option of a verb that reads or writes the records: `what` it does there. */

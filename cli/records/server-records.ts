@@ -37,7 +37,11 @@ interface ErrorBody {
  * $LARDER_USER. The server plans, calculates and dates batches by its own today.
  */
 export class ServerRecords implements RecordKeeper {
-  constructor(readonly server: string) {}
+  /** @param site the key of the site to work at, sent as X-Larder-Site; none: the server's default */
+  constructor(
+    readonly server: string,
+    private readonly site?: string,
+  ) {}
 
   async recordBatch({ formula, batch, units, status, notes }: BatchToRecord): Promise<Batch> {
     const request = {
@@ -141,6 +145,7 @@ export class ServerRecords implements RecordKeeper {
           authorization: `Basic ${Buffer.from(`${username}:${password}`, 'utf8').toString('base64')}`,
           // The server takes a password-signed change only from a client that names itself.
           'x-larder-client': 'larder',
+          ...(this.site === undefined ? {} : { 'x-larder-site': this.site }),
           ...(body === undefined
             ? {}
             : { 'content-type': body instanceof TextBody ? body.type : 'application/json' }),

@@ -1,5 +1,5 @@
 import type { AppContext } from '../app-context.ts';
-import { DEMO_PEOPLE } from '../demo/demo-people.ts';
+import { demoPeople } from '../demo/demo-people.ts';
 import { SHIPPED_FORMULAS } from '../demo/demo-formulas.ts';
 import { startBanner } from '../start-banner.ts';
 
@@ -19,7 +19,7 @@ export async function printStartBanner(
     config,
     url: `http://${config.host}:${port}/`,
     shippedFormulas: SHIPPED_FORMULAS,
-    demoPeople: config.mode === 'demo' ? DEMO_PEOPLE : [],
+    demoPeople: config.mode === 'demo' ? demoPeople(config.demoSites) : [],
     nobodyYet: config.mode !== 'demo' && (await context.people.count()) === 0,
     mail: `${context.mail.mailer.description}; links to ${context.mail.links.base()}; reminders every ${config.reminderMinutes} min`,
   });

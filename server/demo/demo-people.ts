@@ -34,17 +34,40 @@ export const DEMO_PEOPLE: readonly NewPerson[] = [
   },
 ];
 
+/** The demo group's second shop (invented, as the smokehouse is): its key and name. */
+export const DEMO_SHOP = { key: 'saltmarrow', name: 'Saltmarrow Quay shop' } as const;
+
+/**
+ * The second shop's own cook: a cook there and nowhere else (no role at the smokehouse), so the
+ * demo shows a person who sees one site of a group.
+ */
+export const DEMO_SHOP_COOK: NewPerson = {
+  username: 'maren',
+  email: 'maren@quillmoor.invalid',
+  displayName: 'Maren Oskelby (cook, Saltmarrow Quay)',
+  role: 'cook',
+  password: 'quillmoor-quay',
+  demo: true,
+};
+
+/** The demo's sign-ins for a demo of `sites` sites: the second shop's cook only with two. */
+export function demoPeople(sites: 1 | 2): readonly NewPerson[] {
+  return sites === 2 ? [...DEMO_PEOPLE, DEMO_SHOP_COOK] : DEMO_PEOPLE;
+}
+
 /**
  * What the demo's sign-in page shows: its kitchen and its sign-ins, only when the server runs
  * as the demo (LARDER_MODE unset or demo); any other install tells nothing, whoever is in its
  * database.
  */
-export function demoInfo(config: Pick<ServerConfig, 'mode' | 'kitchenName'>): DemoInfo {
+export function demoInfo(
+  config: Pick<ServerConfig, 'mode' | 'kitchenName' | 'demoSites'>,
+): DemoInfo {
   if (config.mode !== 'demo') return { demo: false, kitchen: null, signIns: [] };
   return {
     demo: true,
     kitchen: config.kitchenName,
-    signIns: DEMO_PEOPLE.map(({ username, displayName, role, password }) => ({
+    signIns: demoPeople(config.demoSites).map(({ username, displayName, role, password }) => ({
       username,
       displayName,
       role,

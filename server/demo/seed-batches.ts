@@ -6,10 +6,11 @@ import type { BatchActor, ChangeOptions } from '../batches/batch.ts';
 import { prepareBatch } from '../batches/prepare-batch.ts';
 import type { CurrentFormula } from '../formulas/formula-store.ts';
 import { AppError } from '../http/app-error.ts';
+import type { SiteScope } from '../sites/site-scope.ts';
 import { seedTurns } from './seed-turns.ts';
 
 /** One batch of the invented kitchen's recent weeks: which formula, which day, how big. */
-interface DemoBatch {
+export interface DemoBatch {
   readonly formula: string;
   /** Start day, counted from today (negative: days ago). */
   readonly day: number;
@@ -96,8 +97,8 @@ function demoBatches(): DemoBatch[] {
   return batches.sort((a, b) => a.day - b.day);
 }
 
-/** The demo people who make, and review, the batches. */
-interface Crew {
+/** The demo people who make (tobin, and rosa one batch in four), and review, the batches. */
+export interface Crew {
   readonly tobin: BatchActor;
   readonly rosa: BatchActor;
   readonly imke: BatchActor;
@@ -186,36 +187,56 @@ const SIGN_OFF_NOTES = [
  * starting state, not something anyone did.
  */
 export async function seedBatches(context: AppContext, now = new Date()): Promise<number> {
-  const today = now.toISOString().slice(0, 10);
   const [tobin, rosa, imke] = await Promise.all(
     ['tobin', 'rosa', 'imke'].map((name) => context.people.findByUsername(name)),
   );
   if (!tobin || !rosa || !imke) return 0;
-  const crew: Crew = { tobin, rosa, imke };
-  const plan = demoBatches();
+  return (await seedBatchPlan(context, demoBatches(), { tobin, rosa, imke }, { now })).length;
+}
+
+/**
+ * Records a plan of demo batches in one write, made by the crew at a site (none: the first),
+ * through the same calculation path, story and sign-offs as the smokehouse's own.
+ * @returns their lot codes in the plan's order (a formula missing from the folder is skipped)
+ */
+export async function seedBatchPlan(
+  context: AppContext,
+  plan: readonly DemoBatch[],
+  crew: Crew,
+  { now, site }: { now: Date; site?: SiteScope },
+): Promise<string[]> {
+  const today = now.toISOString().slice(0, 10);
   const formulas = await demoFormulas(
     context,
     plan.map((b) => b.formula),
   );
-  let count = 0;
+  const lots: string[] = [];
   await context.db.write(async (transaction) => {
     for (const [index, demo] of plan.entries()) {
       const current = formulas.get(demo.formula);
       if (!current) continue;
-      await seedOne(context, transaction, crew, { demo, current, index, today, now });
-      count++;
+      lots.push(
+        await seedOne(context, transaction, crew, { demo, current, index, today, now, site }),
+      );
     }
   });
-  return count;
+  return lots;
 }
 
 async function seedOne(
   context: AppContext,
   transaction: Transaction,
   crew: Crew,
-  where: { demo: DemoBatch; current: CurrentFormula; index: number; today: string; now: Date },
-): Promise<void> {
-  const { demo, current, index, today, now } = where;
+  where: {
+    demo: DemoBatch;
+    current: CurrentFormula;
+    index: number;
+    today: string;
+    now: Date;
+    site: SiteScope | undefined;
+  },
+): Promise<string> {
+  const { demo, current, index, today, now, site } = where;
   const operator = index % 4 === 3 ? crew.rosa : crew.tobin;
   const start = addDays(today, demo.day);
   const prepared = prepareBatch(
@@ -243,6 +264,7 @@ async function seedOne(
     actor,
     at: when,
     audit: false,
+    ...(site ? { site } : {}),
   });
   const lot = await context.batches.writes.insert(transaction, prepared, by(operator, recordedAt));
   const readyDay = prepared.readyOn
@@ -278,4 +300,5 @@ async function seedOne(
       SIGN_OFF_NOTES[index % SIGN_OFF_NOTES.length],
       by(crew.imke, stamp(today, signOffDay, 14 * 60 + (index % 6) * 9)),
     );
+  return lot;
 }

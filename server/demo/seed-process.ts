@@ -18,13 +18,13 @@ import { after, demoReadings, type DemoPoint } from './demo-readings.ts';
 const OVER_INDEX = 3;
 
 /** The demo people of the stories. */
-interface Crew {
+export interface Crew {
   readonly tobin: BatchActor;
   readonly imke: BatchActor;
 }
 
 /** What the stories work with. */
-interface Seeding {
+export interface Seeding {
   readonly context: AppContext;
   readonly history: FormulaHistory;
   readonly deps: ProcessDeps;
@@ -116,7 +116,7 @@ function weighStage(
  * Writes readings at a batch's controls as one write, judged at `judgedAt` (a miss opens its
  * deviation then); returns the deviations opened.
  */
-async function readings(
+export async function readings(
   seeding: Seeding,
   lot: string,
   points: readonly { control: ResolvedControl; point: DemoPoint }[],
@@ -164,7 +164,7 @@ interface Windows {
  * smoke (its fourth reading the demo's deviation when `over`); the product's own checks one after
  * another from late in the smoke (a cook, a cool), a cold holding the morning after.
  */
-function dayOfProcess(
+export function dayOfProcess(
   controls: readonly ResolvedControl[],
   windows: Windows,
   { over = false }: { over?: boolean } = {},
@@ -315,16 +315,24 @@ export async function seedProcess(context: AppContext, now = new Date()): Promis
     ['tobin', 'imke'].map((name) => context.people.findByUsername(name)),
   );
   if (!tobin || !imke) return;
-  const history = new FormulaHistory(context.formulas, context.db, context.audit);
-  const seeding: Seeding = {
-    context,
-    history,
-    deps: processDeps({ db: context.db, audit: context.audit, history }),
-    crew: { tobin, imke },
-    now,
-    today: now.toISOString().slice(0, 10),
-  };
+  const seeding = seedingOf(context, { tobin, imke }, now);
   await smokedBelly(seeding);
   await coolingNow(seeding);
   await plannedBelly(seeding);
+}
+
+/**
+ * What a demo story works with, `crew.tobin` the cook who records: the formulas' revisions are
+ * noted in their history first, so each batch's controls are known.
+ */
+export function seedingOf(context: AppContext, crew: Crew, now: Date): Seeding {
+  const history = new FormulaHistory(context.formulas, context.db, context.audit);
+  return {
+    context,
+    history,
+    deps: processDeps({ db: context.db, audit: context.audit, history }),
+    crew,
+    now,
+    today: now.toISOString().slice(0, 10),
+  };
 }

@@ -1,6 +1,8 @@
 // The back end's one door to the records: the API's routers and the larder command both keep
 // records through it. It loads light; the database stack and the PDF stack load when first used.
 import type { SiteScope } from '../sites/site-scope.ts';
+import type { Site } from '../sites/site-repository.ts';
+import type { SiteAtWork } from './records-sites.ts';
 import type { Transaction } from 'sequelize';
 import type {
   CatalogueReading,
@@ -102,6 +104,7 @@ export type {
   WeighingRequest,
 };
 export type { SheetRecord, SheetSource };
+export type { Site, SiteAtWork, SiteScope };
 export type { ProducedReport, ReportFormat, ReportRequest };
 export type { ActionRequest, CorrectionRequest, UploadAnswer };
 export type { ProducedRecall, RecallFormat, RecallRequest };
@@ -405,6 +408,29 @@ export class Records {
   /** The active person with this username and password, if there is one. */
   signIn(username: string, password: string): Promise<Person | undefined> {
     return this.guard(() => this.deps.people.authenticate(username, password));
+  }
+
+  /**
+   * The site a command works at: the one named, else the default; with a person, one of theirs,
+   * and the person with their role there.
+   */
+  siteAtWork(key: string | undefined, person?: Person): Promise<SiteAtWork> {
+    // The site stack loads when first asked for, as the database's does.
+    return this.guard(async () =>
+      (await import('./records-sites.ts')).siteAtWork(this.deps.db, key, person),
+    );
+  }
+
+  /** Every site of the install, first made first. */
+  listSites(): Promise<Site[]> {
+    return this.guard(async () => (await import('./records-sites.ts')).listSites(this.deps.db));
+  }
+
+  /** Adds a site of the group. */
+  addSite(key: string, name: string, by: AuditedBy): Promise<Site> {
+    return this.guard(async () =>
+      (await import('./records-sites.ts')).addSite(this.deps, key, name, by),
+    );
   }
 
   /** Everyone, active or not. */

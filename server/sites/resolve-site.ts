@@ -30,7 +30,7 @@ function askedSite(req: Request): string | undefined {
  * The site when the request names none: the person's only site, else the `main` site (or the
  * first one made when there is no `main`) when they can see it; else undefined.
  */
-function defaultSite(all: readonly SiteWithRole[]): SiteWithRole | undefined {
+export function defaultSite(all: readonly SiteWithRole[]): SiteWithRole | undefined {
   const visible = all.filter((site) => site.role !== null);
   if (visible.length === 1) return visible[0];
   const first = all.find((site) => site.key === MAIN_SITE_KEY) ?? all[0];

@@ -16,6 +16,8 @@ export const PASSWORDS = {
   rosa: 'quillmoor-admin',
   tobin: 'quillmoor-cook',
   imke: 'quillmoor-review',
+  // The second shop's cook: only on a server started with LARDER_DEMO_SITES '2'.
+  maren: 'quillmoor-quay',
 } as const;
 export type DemoUser = keyof typeof PASSWORDS;
 
@@ -137,6 +139,9 @@ export async function startTestServer(
     LARDER_FORMULAS: formulasDir,
     LARDER_CONSOLE: path.join(dir, 'no-console'),
     LARDER_SIGN_IN_LIMIT: '1000',
+    // The smokehouse alone, as the suites have always seen it: a test of sites asks for the
+    // demo's second shop with LARDER_DEMO_SITES '2' or adds a site of its own.
+    LARDER_DEMO_SITES: '1',
     ...env,
   });
   // Opens the database and serves it; a restart does the same again on the same file and port.

@@ -8,3 +8,4 @@ export type {
   SessionInfo,
   SessionState,
 } from '../../../../shared/api/person.ts';
+export type { SiteInfo, SiteList } from '../../../../shared/api/site.ts';

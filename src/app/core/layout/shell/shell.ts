@@ -1,5 +1,5 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
-import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatIconButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -13,6 +13,7 @@ import { NavigationEnd, Router, RouterLink, RouterOutlet } from '@angular/router
 import { filter, map } from 'rxjs';
 import { Role } from '../../api/api-types';
 import { SessionStore } from '../../auth/session-store';
+import { SitePicker } from '../../sites/site-picker/site-picker';
 
 /** One area of the console in the left navigation. */
 interface Area {
@@ -67,6 +68,7 @@ const ROLE_NAMES: Record<Role, string> = { admin: 'Admin', cook: 'Cook', reviewe
     MatListItem,
     MatListItemIcon,
     MatListItemTitle,
+    SitePicker,
   ],
   templateUrl: './shell.html',
   styleUrl: './shell.css',
@@ -120,6 +122,21 @@ export default class Shell {
         .sort((a, b) => weight(b) - weight(a))[0] ?? null
     );
   });
+
+  /** Counts site changes: the page's outlet is made afresh on each. */
+  protected readonly outletRound = signal(0);
+
+  /**
+   * The site changed: the page shows the new site's records. A record's own page (a batch, a
+   * delivery) belonged to the site left, so its list is shown instead; any other page is made
+   * afresh where it is, with its filters.
+   */
+  protected async siteChanged(): Promise<void> {
+    const tree = this.router.parseUrl(this.router.url);
+    const segments = tree.root.children['primary']?.segments ?? [];
+    if (segments.length > 1) await this.router.navigateByUrl(`/${segments[0].path}`);
+    else this.outletRound.update((round) => round + 1);
+  }
 
   protected async changePassword(): Promise<void> {
     const { openChangePassword } = await import('../../../account/change-password/change-password');

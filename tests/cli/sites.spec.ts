@@ -1,0 +1,89 @@
+import assert from 'node:assert/strict';
+import { describe, it } from 'node:test';
+import { today } from '../../cli/io.ts';
+import { addDays } from '../../shared/index.ts';
+import { assertCleanFailure, assertExit, runLarder, stdoutJson } from '../helpers/run-larder.ts';
+import { localRecordsEnv } from '../helpers/local-records-env.ts';
+
+// Yesterday on this machine's clock: a start must lie within a year of it.
+const START = addDays(today(), -1);
+const BELLY = [
+  'calc',
+  'quillmoor-belly',
+  '--meat',
+  '4.26kg',
+  '--thickness',
+  '4cm',
+  '--start',
+  START,
+];
+
+interface SiteList {
+  sites: { key: string; name: string }[];
+}
+
+/** The lot codes `larder batches list` prints as JSON, with its further arguments. */
+async function lots(env: Record<string, string>, ...more: string[]): Promise<string[]> {
+  const list = await runLarder(['batches', 'list', '--json', ...more], { env });
+  assertExit(list, 0);
+  return stdoutJson<{ items: { lotCode: string }[] }>(list).items.map((b) => b.lotCode);
+}
+
+describe('larder sites and --site', () => {
+  it('should list the first site, add a second and refuse a key taken or malformed', async (t) => {
+    const env = await localRecordsEnv(t);
+    const first = await runLarder(['sites', '--json'], { env });
+    assertExit(first, 0);
+    // Migration 021's first site. source: server/sites/main-site.ts
+    assert.deepEqual(
+      stdoutJson<SiteList>(first).sites.map((s) => s.key),
+      ['main'],
+    );
+    const added = await runLarder(['sites', 'add', 'harbour', '--name', 'Harbour Street shop'], {
+      env,
+    });
+    assertExit(added, 0);
+    assert.match(added.stdout, /Added the site Harbour Street shop \(harbour\)/);
+    const table = await runLarder(['sites'], { env });
+    assertExit(table, 0);
+    assert.match(table.stdout, /harbour\s+Harbour Street shop/);
+    assertCleanFailure(
+      await runLarder(['sites', 'add', 'harbour', '--name', 'Again'], { env }),
+      2,
+      /there is a site "harbour" already/,
+    );
+    assertCleanFailure(
+      await runLarder(['sites', 'add', 'Harbour Shop', '--name', 'Bad'], { env }),
+      2,
+      /a site key is 1 to 32 lower-case letters/,
+    );
+  });
+
+  it('should record and list a batch at the site named, and keep it out of the main log', async (t) => {
+    const records = await localRecordsEnv(t);
+    assertExit(
+      await runLarder(['users', 'add', 'tobin', '--role', 'cook'], {
+        env: { ...records, LARDER_NEW_PASSWORD: 'tobin-pass-1' },
+      }),
+      0,
+    );
+    const env = { ...records, LARDER_USER: 'tobin', LARDER_PASSWORD: 'tobin-pass-1' };
+    assertExit(await runLarder(['sites', 'add', 'harbour', '--name', 'Harbour'], { env }), 0);
+    const atMain = await runLarder([...BELLY, '--record', '--json'], { env });
+    assertExit(atMain, 0);
+    const mainLot = stdoutJson<{ lotCode: string }>(atMain).lotCode;
+    const atShop = await runLarder([...BELLY, '--record', '--json', '--site', 'harbour'], { env });
+    assertExit(atShop, 0);
+    const shopLot = stdoutJson<{ lotCode: string }>(atShop).lotCode;
+    assert.notEqual(shopLot, mainLot, 'lot codes stay unique across the group');
+    assert.deepEqual(await lots(env, '--site', 'harbour'), [shopLot]);
+    assert.deepEqual(await lots(env), [mainLot]);
+    assertExit(await runLarder(['batches', 'show', shopLot, '--site', 'harbour'], { env }), 0);
+    assertCleanFailure(await runLarder(['batches', 'show', shopLot], { env }), 2, /no batch/);
+    assertCleanFailure(
+      await runLarder(['batches', 'list', '--site', 'nowhere'], { env }),
+      2,
+      /no site "nowhere"/,
+    );
+  });
+});
