@@ -44,7 +44,7 @@ export const DEMO_SHOP = { key: 'saltmarrow', name: 'Saltmarrow Quay shop' } as 
 export const DEMO_SHOP_COOK: NewPerson = {
   username: 'maren',
   email: 'maren@quillmoor.invalid',
-  displayName: 'Maren Oskelby (cook, Saltmarrow Quay)',
+  displayName: 'Maren Oskelby (shop cook)',
   role: 'cook',
   password: 'quillmoor-quay',
   demo: true,
