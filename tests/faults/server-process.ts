@@ -93,6 +93,9 @@ export async function startServerProcess(
       LARDER_CONSOLE: path.join(dataDir, 'no-console'),
       LARDER_SIGN_IN_LIMIT: '10000',
       LARDER_REMINDER_MINUTES: '1440',
+      // The demo of one kitchen, as the in-process test servers seed: these tests count every
+      // batch in the database against what one site's lists show.
+      LARDER_DEMO_SITES: '1',
       ...databases.get(dataDir),
       ...env,
     },
