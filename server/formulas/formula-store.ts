@@ -56,7 +56,12 @@ export class FormulaStore {
    * (checkLibrary): one that names a missing or unfitting formula has errors like any other.
    */
   async files(at?: FormulaSite): Promise<FormulaFile[]> {
-    return filesAtSite(await this.allFiles(), at);
+    const all = await this.allFiles();
+    const seen = filesAtSite(all, at);
+    // An assembly of the group naming another site's formula cannot be made at this site: its
+    // parts are checked again against what the site sees (only when the site sees less).
+    const same = seen.length === all.length && seen.every((file, i) => file === all[i]);
+    return same ? seen : withLibraryChecks(seen);
   }
 
   /** Every formula file of the folder, checked, read again only when something changed. */

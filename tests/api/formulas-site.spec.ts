@@ -30,6 +30,14 @@ describe('formulas: a formula of one site only', () => {
     copyFormula(server(), 'quillmoor-belly', 'harbour-belly', OTHER_SITE.key);
     copyFormula(server(), 'smokehouse-burger', 'harbour-burger', OTHER_SITE.key);
     copyFormula(server(), 'quillmoor-belly', 'stray-belly', 'no-such-shop');
+    // An assembly of the whole group with the shop's bacon in it.
+    const burger = readFileSync(path.join(server().formulasDir, 'smokehouse-burger.yaml'), 'utf8');
+    writeFileSync(
+      path.join(server().formulasDir, 'group-burger.yaml'),
+      burger
+        .replace('id: smokehouse-burger', 'id: group-burger')
+        .replace('formula: quillmoor-belly', 'formula: harbour-belly'),
+    );
   });
 
   it('should list, show and calculate it at its own site', async () => {
@@ -112,6 +120,30 @@ describe('formulas: a formula of one site only', () => {
       path: `/api/formulas/harbour-belly?site=${OTHER_SITE.key}`,
     });
     assert.equal(atShop.status, 200, atShop.text);
+  });
+
+  it("should show a group's assembly of another site's formula as broken there only", async () => {
+    const atMain = await sendAs(server(), 'main-cook', {
+      method: 'GET',
+      path: '/api/formulas/group-burger',
+    });
+    assert.equal(atMain.status, 200, atMain.text);
+    assert.equal(atMain.json.valid, false);
+    assert.ok(
+      atMain.json.problems.some((p: { message: string }) => p.message.includes('harbour-belly')),
+      atMain.text,
+    );
+    const atShop = await sendAs(server(), 'harbour-cook', {
+      method: 'GET',
+      path: '/api/formulas/group-burger',
+    });
+    assert.equal(atShop.json.valid, true, atShop.text);
+    const plan = await sendAs(server(), 'main-cook', {
+      method: 'POST',
+      path: '/api/plans',
+      body: { assembly: 'group-burger', count: 10, for: SERVICE },
+    });
+    assert.equal(plan.status, 422, plan.text);
   });
 
   it('should show a formula naming no site of the install as a file with an error', async () => {
