@@ -5,6 +5,7 @@ import type { SiteInfo } from '../../shared/api/site.ts';
 import type { SiteScope } from '../sites/site-scope.ts';
 import type { SessionPerson } from '../people/people-repository.ts';
 import { AppError } from '../http/app-error.ts';
+import { formulaSiteOf } from '../formulas/formula-site.ts';
 
 declare module 'express-session' {
   interface SessionData {
@@ -32,6 +33,8 @@ declare module 'express-serve-static-core' {
     site?: SiteScope;
     /** The person's role at every site of the group; null when they have roles at single sites only. */
     groupRole?: Role | null;
+    /** The key of every site of the install, seen or not (a formula's `site:` must be one). */
+    installSiteKeys?: readonly string[];
     /** The sites the person can see, with their role at each (and the id, for queries). */
     siteRoles?: readonly (SiteInfo & { readonly id: number })[];
   }
@@ -54,10 +57,12 @@ export function siteOf(req: Request): SiteScope {
  * from it).
  */
 export function changeBy(req: Request, { now }: { now: () => Date }): ChangeOptions {
+  const formulas = formulaSiteOf(req);
   return {
     actor: personOf(req),
     at: now().toISOString(),
     ...(req.ip === undefined ? {} : { ip: req.ip }),
     ...(req.site ? { site: req.site } : {}),
+    ...(formulas ? { formulas } : {}),
   };
 }

@@ -1,6 +1,7 @@
 import type { RecordStatus } from '../../shared/workflow/batch-status.ts';
 import type { Role } from '../../shared/api/person.ts';
 import type { SiteScope } from '../sites/site-scope.ts';
+import type { FormulaSite } from '../formulas/formula-site.ts';
 import type {
   FormulaKind,
   PresentedResult,
@@ -44,4 +45,6 @@ export interface ChangeOptions {
    * must be its. None: the first site (a single-site install, the demo's seed).
    */
   readonly site?: SiteScope;
+  /** The formulas that site sees (filesAtSite); none: every formula. */
+  readonly formulas?: FormulaSite;
 }

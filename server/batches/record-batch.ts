@@ -21,9 +21,10 @@ export async function recordBatch(
   deps: { db: Database; audit: AuditRepository; history: FormulaHistory; batches: BatchRepository },
   options: ChangeOptions,
 ): Promise<Batch> {
-  const current = await deps.history.current(request.formula);
+  const current = await deps.history.current(request.formula, options.formulas);
   // An assembly's parts are worked out from the other formulas as they are now.
-  const library = current.formula.kind === 'assembly' ? await deps.history.library() : undefined;
+  const library =
+    current.formula.kind === 'assembly' ? await deps.history.library(options.formulas) : undefined;
   const tried = {
     formula: request.formula,
     revision: current.revision,

@@ -98,7 +98,7 @@ export async function startBatch(
       `batch ${seen.lotCode} is ${seen.status}: only a planned batch is started`,
     );
   const { formula, revision, warnings } = await startFormula(deps.history, seen);
-  const library = formula.kind === 'assembly' ? await deps.history.library() : undefined;
+  const library = formula.kind === 'assembly' ? await deps.history.library(by.formulas) : undefined;
   const inputs: RawBatchOptions = { start: today, ...request.batch };
   const started = await keepingRefusals(
     deps,

@@ -12,6 +12,7 @@ import {
   formulaFromText,
 } from './calc-request.ts';
 import { calcAnswerKeyText } from './calc-answers.ts';
+import { formulaSiteOf } from '../formulas/formula-site.ts';
 
 const CALC_BODY = {
   type: 'object',
@@ -55,15 +56,16 @@ export function calcRouter(context: AppContext): Router {
     const body = req.body as CalcBody;
     const units = body.units ?? 'metric';
     const today = serverToday(context);
+    const at = formulaSiteOf(req);
     if (typeof body.formula !== 'string') {
       const formula = formulaFromText(body.formula.yaml, 'inline formula');
-      const library = formula.kind === 'assembly' ? await context.formulas.library() : undefined;
+      const library = formula.kind === 'assembly' ? await context.formulas.library(at) : undefined;
       sendJsonAnswer(res, calculateBatch(formula, body.batch, units, today, library));
       return;
     }
-    const { formula, file } = await context.formulas.current(body.formula);
+    const { formula, file } = await context.formulas.current(body.formula, at);
     const library =
-      formula.kind === 'assembly' ? await context.formulas.libraryWithRevision() : undefined;
+      formula.kind === 'assembly' ? await context.formulas.libraryWithRevision(at) : undefined;
     const key = calcAnswerKeyText({
       file: file.name,
       revision: file.revision,

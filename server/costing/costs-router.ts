@@ -22,6 +22,7 @@ import { catalogueNow } from './catalogue-now.ts';
 import { batchCostRecord, money } from './cost-records.ts';
 import { COST_POINTS, CostRepository } from './cost-repository.ts';
 import { COST_ROLES } from './cost-roles.ts';
+import { formulaSiteOf } from '../formulas/formula-site.ts';
 
 const DAY = /^\d{4}-\d{2}-\d{2}$/;
 
@@ -78,8 +79,8 @@ export function costsRouter(context: AppContext): Router {
   );
 
   /** A costing for one request: the catalogue and formulas as they are now. */
-  async function costing(repo: CostRepository): Promise<BatchCosting> {
-    const files = await context.formulas.files();
+  async function costing(repo: CostRepository, req: Request): Promise<BatchCosting> {
+    const files = await context.formulas.files(formulaSiteOf(req));
     const formulas = new Map<string, Formula>();
     for (const [id, file] of filesById(files))
       if (file.reading.formula) formulas.set(id, file.reading.formula);
@@ -91,7 +92,7 @@ export function costsRouter(context: AppContext): Router {
     const portion = portionOf(req.query.portion);
     const row = await repo.batch(req.params.lot);
     if (!row) throw notFound(`no batch with lot code ${req.params.lot}`);
-    const cost = await (await costing(repo)).ofBatch(row, portion);
+    const cost = await (await costing(repo, req)).ofBatch(row, portion);
     res.json(batchCostRecord(cost, row.lot_code, { id: row.formula_id, title: row.formula_title }));
   });
 
@@ -103,7 +104,7 @@ export function costsRouter(context: AppContext): Router {
     if (!isFormulaId(id)) throw notFound(`no formula "${id}"`);
     const rows = await repo.formulaBatches(id);
     const shown = rows.slice(0, COST_POINTS).reverse();
-    const costs = await costing(repo);
+    const costs = await costing(repo, req);
     const points = [];
     for (const row of shown) {
       const cost = await costs.ofBatch(row);
@@ -126,7 +127,7 @@ export function costsRouter(context: AppContext): Router {
       throw badRequest('a plan is named by its menu item and day of service, YYYY-MM-DD');
     const asked = countOf(req.query.count);
     const rows = await repo.planBatches(assembly, day);
-    const costs = await costing(repo);
+    const costs = await costing(repo, req);
     let batches: BatchCostRecord[];
     let totals;
     const count = asked ?? recordedCount(rows[0]?.notes ?? null);
@@ -145,7 +146,12 @@ export function costsRouter(context: AppContext): Router {
           `no batches are recorded for ${assembly} on ${day}; give a count to price the plan`,
         );
       const today = serverToday(context);
-      const plan = await planFromStore(context.formulas, { assembly, count, for: day }, today);
+      const plan = await planFromStore(
+        context.formulas,
+        { assembly, count, for: day },
+        today,
+        formulaSiteOf(req),
+      );
       const each = await Promise.all(
         plan.batches.map((batch) =>
           costs.ofPlanned(presentResult(batch.result, 'metric'), batch.formula.id, today),

@@ -11,6 +11,7 @@ import {
   type FormulaFile,
 } from './formula-files.ts';
 import type { CurrentFormula, FormulaStore } from './formula-store.ts';
+import type { FormulaSite } from './formula-site.ts';
 
 /** One row of a formula's history: the API's entry without `current`, with its row and formula. */
 export interface RevisionRecord extends Omit<FormulaRevision, 'current'> {
@@ -94,8 +95,8 @@ export class FormulaHistory {
   }
 
   /** Every formula as it is now, by id: what an assembly's parts are worked out from. */
-  library(): ReturnType<FormulaStore['library']> {
-    return this.store.library();
+  library(at?: FormulaSite): ReturnType<FormulaStore['library']> {
+    return this.store.library(at);
   }
 
   /** Records a revision; returns its row id. */
@@ -246,8 +247,8 @@ export class FormulaHistory {
    * FormulaStore.current, with the revision recorded in the history first. For callers that keep
    * the revision (a batch record): call it before, not inside, a write transaction of your own.
    */
-  async current(id: string): Promise<CurrentFormula> {
-    const current = await this.store.current(id);
+  async current(id: string, at?: FormulaSite): Promise<CurrentFormula> {
+    const current = await this.store.current(id, at);
     await this.note([current.file]);
     return current;
   }

@@ -8,6 +8,7 @@ import { revisionOf } from '../../files/revision.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import { FolderWatch } from './folder-watch.ts';
 import { filesById, readFormulaFolder, type FormulaFile } from './formula-files.ts';
+import { filesAtSite, type FormulaSite } from './formula-site.ts';
 
 /** A formula that can be calculated, with the revision it was read at. */
 export interface CurrentFormula {
@@ -50,10 +51,21 @@ export class FormulaStore {
   }
 
   /**
-   * Every formula file, valid or not. Each assembly is also checked against the other formulas
+   * Every formula file a site sees, valid or not (filesAtSite: another site's formulas left out);
+   * without a site, every file. Each assembly is also checked against the other formulas
    * (checkLibrary): one that names a missing or unfitting formula has errors like any other.
    */
-  async files(): Promise<FormulaFile[]> {
+  async files(at?: FormulaSite): Promise<FormulaFile[]> {
+    const all = await this.allFiles();
+    const seen = filesAtSite(all, at);
+    // An assembly of the group naming another site's formula cannot be made at this site: its
+    // parts are checked again against what the site sees (only when the site sees less).
+    const same = seen.length === all.length && seen.every((file, i) => file === all[i]);
+    return same ? seen : withLibraryChecks(seen);
+  }
+
+  /** Every formula file of the folder, checked, read again only when something changed. */
+  private async allFiles(): Promise<FormulaFile[]> {
     const last = this.checked;
     // While another call is reading, this one reads too: what it would reuse may be outdated.
     if (last && this.readsRunning === 0 && this.changes && !this.changes.needsRead())
@@ -89,9 +101,9 @@ export class FormulaStore {
     return [...checked];
   }
 
-  /** The file holding a formula id, or undefined. */
-  async find(id: string): Promise<FormulaFile | undefined> {
-    const files = await this.files();
+  /** The file holding a formula id (among those the site sees), or undefined. */
+  async find(id: string, at?: FormulaSite): Promise<FormulaFile | undefined> {
+    const files = await this.files(at);
     return (
       files.find((file) => file.reading.formula?.id === id) ??
       files.find((file) => file.name.replace(/\.ya?ml$/i, '') === id)
@@ -102,21 +114,33 @@ export class FormulaStore {
    * The file that answers to exactly this id (see filesById): unlike find, never a valid formula
    * of another id that happens to have this file name. The formulas API reads and writes by this.
    */
-  async fileOf(id: string): Promise<FormulaFile | undefined> {
-    return filesById(await this.files()).get(id);
+  async fileOf(id: string, at?: FormulaSite): Promise<FormulaFile | undefined> {
+    return filesById(await this.files(at)).get(id);
+  }
+
+  /**
+   * Whether the formula of this id is another site's: the site must not see it, nor its history,
+   * as if it did not exist.
+   */
+  async elsewhere(id: string, at: FormulaSite | undefined): Promise<boolean> {
+    if (!at) return false;
+    const site = filesById(await this.allFiles()).get(id)?.reading.formula?.site;
+    return site !== undefined && site !== at.key && at.known.includes(site);
   }
 
   /** Every formula that reads cleanly (assemblies checked against the others), by id. */
-  async library(): Promise<FormulaLibrary> {
-    return (await this.libraryWithRevision()).library;
+  async library(at?: FormulaSite): Promise<FormulaLibrary> {
+    return (await this.libraryWithRevision(at)).library;
   }
 
   /**
    * The library with one revision for the whole of it, read from the same files: the same names
    * and texts give the same revision, any file added, removed, renamed or changed a new one.
    */
-  async libraryWithRevision(): Promise<{ library: FormulaLibrary; revision: string }> {
-    const files = await this.files();
+  async libraryWithRevision(
+    at?: FormulaSite,
+  ): Promise<{ library: FormulaLibrary; revision: string }> {
+    const files = await this.files(at);
     return {
       library: formulaLibrary(files.map((file) => ({ file: file.name, reading: file.reading }))),
       revision: revisionOf(files.map((file) => `${file.name}\0${file.revision}`).join('\n')),
@@ -127,8 +151,8 @@ export class FormulaStore {
    * The formula with this id as it is now.
    * @throws AppError 404 when there is none, 422 when its file has errors
    */
-  async current(id: string): Promise<CurrentFormula> {
-    const file = await this.find(id);
+  async current(id: string, at?: FormulaSite): Promise<CurrentFormula> {
+    const file = await this.find(id, at);
     if (!file) throw notFound(`no formula "${id}"`);
     const formula = file.reading.formula;
     if (!formula)

@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
 import type {
   FormulaDetail,
   FormulaPreview,
@@ -34,6 +34,7 @@ import {
   setRevision,
 } from './formula-http.ts';
 import { FormulaWriter } from './formula-writer.ts';
+import { formulaSiteOf } from './formula-site.ts';
 import { formulaWriteRoutes } from './formula-write-routes.ts';
 import { diffHunks, diffLines } from './line-diff.ts';
 
@@ -91,9 +92,14 @@ export function formulasRouter(context: AppContext): Router {
   router.param('revision', checkRevisionParam);
   const anyone = requireRole('admin', 'cook', 'reviewer');
 
-  /** The file of an id as it is now, with its revision recorded in the history. */
-  const fileOf = async (id: string): Promise<FormulaFile | undefined> => {
-    const file = await store.fileOf(id);
+  /**
+   * The file of an id as the request's site sees it now, with its revision recorded in the
+   * history. @throws AppError 404 for another site's formula, as for one that does not exist
+   */
+  const fileOf = async (req: Request, id: string): Promise<FormulaFile | undefined> => {
+    const at = formulaSiteOf(req);
+    if (await store.elsewhere(id, at)) throw notFound(`no formula "${id}"`);
+    const file = await store.fileOf(id, at);
     if (file) await history.note([file]);
     return file;
   };
@@ -110,7 +116,7 @@ export function formulasRouter(context: AppContext): Router {
     const kind = req.query.kind;
     if (kind !== undefined && (typeof kind !== 'string' || !KINDS.includes(kind)))
       throw badRequest(`kind must be one of ${KINDS.join(', ')}`, [{ field: 'kind' }]);
-    const files = await store.files();
+    const files = await store.files(formulaSiteOf(req));
     await history.note(files);
     const chosen = filesById(files);
     const latest = await history.latestOfEach();
@@ -155,7 +161,7 @@ export function formulasRouter(context: AppContext): Router {
 
   router.get('/:id', anyone, async (req, res) => {
     const id = idOf(req);
-    const file = await fileOf(id);
+    const file = await fileOf(req, id);
     if (!file) throw notFound(`no formula "${id}"`);
     const latest = await history.latest(id);
     setRevision(res, file.revision);
@@ -180,7 +186,7 @@ export function formulasRouter(context: AppContext): Router {
       formula = formulaFromText(body.yaml, `${id}.yaml`);
       revision = revisionOf(body.yaml);
     } else {
-      const current = await store.current(id);
+      const current = await store.current(id, formulaSiteOf(req));
       formula = current.formula;
       revision = current.revision;
     }
@@ -189,14 +195,14 @@ export function formulasRouter(context: AppContext): Router {
       body.batch,
       body.units ?? 'metric',
       serverToday(context),
-      formula.kind === 'assembly' ? await store.library() : undefined,
+      formula.kind === 'assembly' ? await store.library(formulaSiteOf(req)) : undefined,
     );
     res.json({ id, saved: body.yaml === undefined, revision, result } satisfies FormulaPreview);
   });
 
   router.get('/:id/revisions', anyone, async (req, res) => {
     const id = idOf(req);
-    const file = await fileOf(id);
+    const file = await fileOf(req, id);
     const rows = await history.list(id);
     if (!file && rows.length === 0) throw notFound(`no formula "${id}"`);
     res.json({
@@ -209,7 +215,7 @@ export function formulasRouter(context: AppContext): Router {
   router.get('/:id/revisions/:revision', anyone, async (req, res) => {
     const id = idOf(req);
     const revision = String(req.params.revision);
-    const file = await fileOf(id);
+    const file = await fileOf(req, id);
     const row = await history.find(id, revision);
     if (!row && file?.revision !== revision)
       throw notFound(`formula "${id}" has no revision ${revision}`);
@@ -230,7 +236,7 @@ export function formulasRouter(context: AppContext): Router {
       throw badRequest('to must be a revision (64 hex digits), or left out for the current one', [
         { field: 'to' },
       ]);
-    const file = await fileOf(id);
+    const file = await fileOf(req, id);
     const toRevision = to ?? file?.revision;
     if (toRevision === undefined) throw notFound(`no formula "${id}"`);
     const oldText = await textOf(id, from, file);

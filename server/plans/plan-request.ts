@@ -11,6 +11,7 @@ import {
 import { filesById } from '../formulas/formula-files.ts';
 import type { FormulaStore } from '../formulas/formula-store.ts';
 import { AppError, badRequest, notFound } from '../http/app-error.ts';
+import type { FormulaSite } from '../formulas/formula-site.ts';
 
 /** What POST /api/plans and /api/plans/record take. */
 export interface PlanRequest {
@@ -78,6 +79,7 @@ export function planRefusal(error: PlanError): AppError {
  * Plans an assembly from the formulas folder as it is now (every file read fresh, assemblies
  * checked against the others).
  * @param today the day the plan is made, YYYY-MM-DD: nothing may start before it
+ * @param at the site planning: it plans with the formulas it sees only (filesAtSite)
  * @throws AppError 404 no such formula; 422 'invalid-formula' when its file has errors,
  *   'not-an-assembly' for a batch formula, and see planRefusal for a plan that cannot be made
  */
@@ -85,8 +87,9 @@ export async function planFromStore(
   store: FormulaStore,
   request: PlanRequest,
   today: string,
+  at?: FormulaSite,
 ): Promise<PlanResult> {
-  return (await planWithFormulas(store, request, today)).plan;
+  return (await planWithFormulas(store, request, today, at)).plan;
 }
 
 /**
@@ -97,8 +100,9 @@ export async function planWithFormulas(
   store: FormulaStore,
   request: PlanRequest,
   today: string,
+  at?: FormulaSite,
 ): Promise<{ plan: PlanResult; formulas: FormulaLibrary }> {
-  const files = await store.files();
+  const files = await store.files(at);
   const file = filesById(files).get(request.assembly);
   if (!file) throw notFound(`no formula "${request.assembly}"`);
   const formula = file.reading.formula;

@@ -19,6 +19,7 @@ import {
   type PlanRequest,
 } from './plan-request.ts';
 import { catalogueBeside } from './plan-stock-check.ts';
+import { formulaSiteOf } from '../formulas/formula-site.ts';
 
 /**
  * /api/plans: the plans made (every signed-in role), plan N units of an assembly for a service
@@ -45,6 +46,7 @@ export function plansRouter(context: AppContext): Router {
       formulas,
       request,
       serverToday(context),
+      formulaSiteOf(req),
     );
     await records.planMade(plan, changeBy(req, context));
     const units = request.units ?? 'metric';
@@ -70,6 +72,7 @@ export function plansRouter(context: AppContext): Router {
         formulas,
         request,
         serverToday(context),
+        formulaSiteOf(req),
       );
       const units = request.units ?? 'metric';
       const catalogue = await catalogueBeside(formulas.folder);
@@ -84,7 +87,7 @@ export function plansRouter(context: AppContext): Router {
   router.post('/sheet.pdf', validateBody(PLAN_BODY), async (req, res) => {
     const request = req.body as PlanRequest;
     const plan = presentPlan(
-      await planFromStore(formulas, request, serverToday(context)),
+      await planFromStore(formulas, request, serverToday(context), formulaSiteOf(req)),
       request.units ?? 'metric',
     );
     // pdfkit loads on the first sheet, not at start.
@@ -98,7 +101,7 @@ export function plansRouter(context: AppContext): Router {
     validateBody(RECORD_BODY),
     async (req, res) => {
       const { again, ...request } = req.body as PlanRequest & { again?: boolean };
-      const plan = await planFromStore(formulas, request, serverToday(context));
+      const plan = await planFromStore(formulas, request, serverToday(context), formulaSiteOf(req));
       const units = request.units ?? 'metric';
       const recorded = await records.recordPlan(plan, units, {
         ...changeBy(req, context),

@@ -38,7 +38,7 @@ export async function recordPlan(
   const notes = planNote(plan);
   const prepared = [];
   for (const batch of plan.batches) {
-    const current = await history.current(batch.formula.id);
+    const current = await history.current(batch.formula.id, options.formulas);
     prepared.push(
       prepareBatch(
         current,
@@ -48,7 +48,7 @@ export async function recordPlan(
       ),
     );
   }
-  const assembly = await history.current(plan.assembly.id);
+  const assembly = await history.current(plan.assembly.id, options.formulas);
   prepared.push(
     prepareBatch(
       assembly,
@@ -61,7 +61,7 @@ export async function recordPlan(
       },
       operatorId,
       plan.today,
-      await history.library(),
+      await history.library(options.formulas),
     ),
   );
   const again = options.again === true;

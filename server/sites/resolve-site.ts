@@ -66,6 +66,7 @@ export function resolveSite(sites: SiteRepository) {
       );
     }
     req.site = { id: chosen.id, key: chosen.key, name: chosen.name, filters: all.length > 1 };
+    req.installSiteKeys = all.map((site) => site.key);
     req.groupRole = person.roleEverywhere === false ? null : person.role;
     req.siteRoles = visible.map((site) => ({
       id: site.id,

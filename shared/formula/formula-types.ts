@@ -44,6 +44,11 @@ export interface FormulaBase {
   cautions?: string[];
   notes?: string;
   /**
+   * The key of the one site of a group this formula belongs to; left out, the formula is the
+   * whole group's. A key that is not a site of the install is an error of the file (server).
+   */
+  site?: string;
+  /**
    * Process controls at the critical control points of a batch of it (shared/process). Any kind
    * may write the key; an assembly, put together from batches with their own controls, may only
    * leave it empty.
