@@ -217,8 +217,11 @@ export function formulasRouter(context: AppContext): Router {
     const revision = String(req.params.revision);
     const file = await fileOf(req, id);
     const row = await history.find(id, revision);
-    if (!row && file?.revision !== revision)
+    if (!row && file?.revision !== revision) {
+      // Worded as the other formula routes word an id that is no formula (or another site's).
+      if (!file && (await history.list(id)).length === 0) throw notFound(`no formula "${id}"`);
       throw notFound(`formula "${id}" has no revision ${revision}`);
+    }
     setRevision(res, revision);
     res.json({
       id,
