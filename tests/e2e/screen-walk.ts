@@ -114,7 +114,12 @@ export function describeScreenWalk(who: readonly (DemoUser | null)[]): void {
   let demo: DemoRecords;
 
   before(async () => {
-    session = await startConsole({ after: (fn) => cleanups.push(fn) });
+    // One server and browser for the whole walk: the hang watch times the walk, not one screen.
+    const walkers = who.map((user) => user ?? 'before signing in').join(', ');
+    session = await startConsole({
+      after: (fn) => cleanups.push(fn),
+      name: `the screenshot walk (${walkers}), all its screens`,
+    });
     const rosa = session.server.as('rosa');
     const batches = await rosa.get('/api/batches?limit=1');
     const formulas = await rosa.get('/api/formulas');
