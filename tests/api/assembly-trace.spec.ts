@@ -5,14 +5,16 @@ import { clockFrom, startTestServer, type ApiClient } from '../helpers/test-serv
 
 // Three levels, every record made through the product's own routes, the way a cook makes them:
 //
-//   pack 261203-BP-01 (Sliced bacon, 200 g pack, 20 packs)
-//   └── belly 261203-QB-01 (Quillmoor belly), 4 000 g of it
+//   pack 201203-BP-01 (Sliced bacon, 200 g pack, 20 packs)
+//   └── belly 201203-QB-01 (Quillmoor belly), 4 000 g of it
 //       ├── R… pork belly, Fenwick Hollow Pork lot FH-TRACE-1, 4 000 g
 //       └── R… curing salt, Tallis & Crane lot TC-TRACE-2, 10 g
 //
 // and forward from the belly's supplier lot: FH-TRACE-1 → the belly → the pack.
 
-const TODAY = '2026-12-03';
+// A fixed day years before the demo's, which is seeded around the real today: none of this
+// test's lot codes can meet one of the demo's.
+const TODAY = '2020-12-03';
 
 /** A delivery received at the door; its lot code. */
 async function receive(
@@ -83,11 +85,11 @@ describe('a sliced bacon pack traced through three levels', () => {
     const answer = back.json as TraceAnswer;
     assert.deepEqual(answer.roots.map(drawn), [
       [
-        '261203-BP-01',
+        '201203-BP-01',
         undefined,
         [
           [
-            '261203-QB-01',
+            '201203-QB-01',
             '4000',
             [
               [bellies.lot, '4000', []],
@@ -108,15 +110,15 @@ describe('a sliced bacon pack traced through three levels', () => {
     const forward = await tobin.get('/api/trace/forward?supplierLot=FH-TRACE-1');
     assert.equal(forward.status, 200, forward.text);
     assert.deepEqual((forward.json as TraceAnswer).roots.map(drawn), [
-      [bellies.lot, undefined, [['261203-QB-01', '4000', [['261203-BP-01', '4000', []]]]]],
+      [bellies.lot, undefined, [['201203-QB-01', '4000', [['201203-BP-01', '4000', []]]]]],
     ]);
     const recall = await server.as('imke').get('/api/trace/recall?supplierLot=FH-TRACE-1');
     assert.equal(recall.status, 200, recall.text);
     assert.deepEqual(
       recall.json.batches.map((b: { lotCode: string; level: number }) => [b.lotCode, b.level]),
       [
-        ['261203-QB-01', 1],
-        ['261203-BP-01', 2],
+        ['201203-QB-01', 1],
+        ['201203-BP-01', 2],
       ],
     );
   });
@@ -124,7 +126,7 @@ describe('a sliced bacon pack traced through three levels', () => {
   it('should reach the day of service from a plan: the packs are recorded for it', async (t) => {
     const server = await startTestServer(t, {}, { now: clockFrom(TODAY) });
     const tobin = server.as('tobin');
-    const service = '2026-12-20';
+    const service = '2020-12-20';
     const plan = await tobin.post('/api/plans/record', {
       assembly: 'bacon-pack',
       count: 40,
@@ -137,8 +139,8 @@ describe('a sliced bacon pack traced through three levels', () => {
     ]);
     // The belly, 8 days' hold at 4 cm and 2 lead days before the 20th; the packs on the day.
     assert.deepEqual(lots, [
-      ['quillmoor-belly', '261210-QB-01'],
-      ['bacon-pack', '261220-BP-01'],
+      ['quillmoor-belly', '201210-QB-01'],
+      ['bacon-pack', '201220-BP-01'],
     ]);
     const bellies = await receive(tobin, {
       item: 'pork-belly',
@@ -150,20 +152,20 @@ describe('a sliced bacon pack traced through three levels', () => {
       // source: FDA Food Code 2022, §3-202.11(A): 5 °C (41 °F) or below; 2 °C is within it
       temperature: '2 °C',
     });
-    const started = await tobin.post('/api/batches/261210-QB-01/start', {
+    const started = await tobin.post('/api/batches/201210-QB-01/start', {
       batch: { meat: '10.6 kg', thickness: '4 cm' },
     });
     assert.equal(started.status, 200, started.text);
-    await madeFrom(tobin, '261210-QB-01', [
+    await madeFrom(tobin, '201210-QB-01', [
       { item: 'pork-belly', lot: bellies.lot, amount: '10.6 kg' },
     ]);
-    const packed = await tobin.post('/api/batches/261220-BP-01/start', {
+    const packed = await tobin.post('/api/batches/201220-BP-01/start', {
       batch: { count: '40', start: service },
     });
     assert.equal(packed.status, 200, packed.text);
     // 40 packs × 8 slices × 25 g = 8 000 g of the sliced belly.
-    await madeFrom(tobin, '261220-BP-01', [
-      { part: 'quillmoor-belly', batch: '261210-QB-01', amount: '8 kg' },
+    await madeFrom(tobin, '201220-BP-01', [
+      { part: 'quillmoor-belly', batch: '201210-QB-01', amount: '8 kg' },
     ]);
     const forward = await tobin.get('/api/trace/forward?supplierLot=FH-TRACE-3');
     const [root] = (forward.json as TraceAnswer).roots;
@@ -171,7 +173,7 @@ describe('a sliced bacon pack traced through three levels', () => {
     const [packs] = belly.children;
     assert.deepEqual(
       [packs.lot.lotCode, packs.lot.kind === 'batch' && packs.lot.serviceDay],
-      ['261220-BP-01', service],
+      ['201220-BP-01', service],
     );
   });
 });

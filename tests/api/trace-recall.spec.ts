@@ -8,12 +8,14 @@ import { PASSWORDS, clockFrom, startTestServer, type TestServer } from '../helpe
 import { insertSmokehouseLots } from '../helpers/trace-fixture.ts';
 
 // The kitchen drawn in tests/helpers/trace-fixture.ts: Hollin Farm's lot HF-4471 came in twice
-// (R261201-91, R261203-91) and went into both smoked bellies, the sliced bacon made from them and
-// the burger assembly made from that, planned for service on 8 Dec 2026.
+// (R201201-91, R201203-91) and went into both smoked bellies, the sliced bacon made from them and
+// the burger assembly made from that, planned for service on 8 Dec 2020.
 
-/** A server whose today is 7 Dec 2026, the day before the burger's service, with the drawn lots. */
+/** A server whose today is 7 Dec 2020, the day before the burger's service, with the drawn lots. */
 async function kitchen(t: Parameters<typeof startTestServer>[0]): Promise<TestServer> {
-  const server = await startTestServer(t, {}, { now: clockFrom('2026-12-07') });
+  // A fixed day years before the demo's, which is seeded around the real today: none of this
+  // test's lot codes can meet one of the demo's.
+  const server = await startTestServer(t, {}, { now: clockFrom('2020-12-07') });
   await insertSmokehouseLots(server.context.db);
   return server;
 }
@@ -34,15 +36,15 @@ const HOLLIN = '/api/trace/recall?supplierLot=HF-4471&supplier=Hollin%20Farm';
 describe('trace and recall over the API', () => {
   it('should trace a batch back and a received lot forward for a cook', async (t) => {
     const server = await kitchen(t);
-    const back = await server.as('tobin').get('/api/trace/back/261205-sl-01');
+    const back = await server.as('tobin').get('/api/trace/back/201205-sl-01');
     assert.equal(back.status, 200, back.text);
     const answer = back.json as TraceAnswer;
     assert.equal(answer.direction, 'back');
     assert.deepEqual(
       answer.roots[0].children.map((c) => c.lot.lotCode),
-      ['261201-SB-01', '261203-SB-02'],
+      ['201201-SB-01', '201203-SB-02'],
     );
-    const forward = await server.as('tobin').get('/api/trace/forward/R261205-91');
+    const forward = await server.as('tobin').get('/api/trace/forward/R201205-91');
     assert.equal(forward.status, 200, forward.text);
     assert.deepEqual(
       (forward.json as TraceAnswer).roots[0].children.map((c) => [
@@ -50,7 +52,7 @@ describe('trace and recall over the API', () => {
         c.use?.amount,
         c.use?.measure,
       ]),
-      [['261206-BA-01', '120', 'each']],
+      [['201206-BA-01', '120', 'each']],
     );
     const bySupplier = await server.as('imke').get('/api/trace/forward?supplierLot=TR-302');
     assert.equal((bySupplier.json as TraceAnswer).batches, 2, 'the grind and the burger');
@@ -65,7 +67,7 @@ describe('trace and recall over the API', () => {
     assert.equal(report.producedBy, 'Tobin Marrowfeld (cook)');
     assert.deepEqual(
       report.recalled.map((l) => l.lotCode),
-      ['R261201-91', 'R261203-91'],
+      ['R201201-91', 'R201203-91'],
     );
     // Nearest first, then by start day: as drawn.
     assert.deepEqual(
@@ -76,10 +78,10 @@ describe('trace and recall over the API', () => {
         b.uses.map((u) => `${u.from} ${u.amount}`).join(' + '),
       ]),
       [
-        [1, '261201-SB-01', 'done', 'R261201-91 6000'],
-        [1, '261203-SB-02', 'curing', 'R261201-91 4000 + R261203-91 2000'],
-        [2, '261205-SL-01', 'done', '261201-SB-01 5000 + 261203-SB-02 3000'],
-        [3, '261206-BA-01', 'planned', '261205-SL-01 1200'],
+        [1, '201201-SB-01', 'done', 'R201201-91 6000'],
+        [1, '201203-SB-02', 'curing', 'R201201-91 4000 + R201203-91 2000'],
+        [2, '201205-SL-01', 'done', '201201-SB-01 5000 + 201203-SB-02 3000'],
+        [3, '201206-BA-01', 'planned', '201205-SL-01 1200'],
       ],
     );
     // Received 12 000 g + 2000 g; used straight from them 6000 + 4000 + 2000 g.
@@ -88,8 +90,8 @@ describe('trace and recall over the API', () => {
     assert.deepEqual(report.totals.byStatus, { done: 2, curing: 1, planned: 1 });
     // 2000 g of the first delivery is left; the curing belly and the burger for 8 Dec are still here.
     assert.deepEqual(report.onHand, {
-      lots: [{ lotCode: 'R261201-91', remaining: '2000', measure: 'g' }],
-      batches: ['261203-SB-02', '261206-BA-01'],
+      lots: [{ lotCode: 'R201201-91', remaining: '2000', measure: 'g' }],
+      batches: ['201203-SB-02', '201206-BA-01'],
     });
     assert.match(report.caution, /recall plan/);
     const [audit] = await server.context.db.sequelize.query<{
@@ -115,10 +117,10 @@ describe('trace and recall over the API', () => {
     for (const words of [
       'Recall: supplier lot HF-4471 from Hollin Farm',
       'produced by',
-      '261206-BA-01',
-      'service 8 Dec 2026',
-      'R261201-91: 4000 g on 3 Dec 2026',
-      'Received lot R261201-91: 2000 g left',
+      '201206-BA-01',
+      'service 8 Dec 2020',
+      'R201201-91: 4000 g on 3 Dec 2020',
+      'Received lot R201201-91: 2000 g left',
       "kitchen's own recall plan",
     ])
       assert.ok(all.includes(words), `${words} in ${all}`);
@@ -129,23 +131,23 @@ describe('trace and recall over the API', () => {
     const batchRows = rows.filter((row) => row[0] === 'batch');
     assert.equal(batchRows.length, 6, 'one record per use: 1 + 2 + 2 + 1');
     assert.deepEqual(
-      batchRows.find((row) => row[2] === '261206-BA-01'),
+      batchRows.find((row) => row[2] === '201206-BA-01'),
       [
         'batch',
         '3',
-        '261206-BA-01',
+        '201206-BA-01',
         'Burger assembly',
         '',
         '',
         '',
         'planned',
-        '2026-12-06',
-        '2026-12-06',
-        '2026-12-08',
-        '261205-SL-01',
+        '2020-12-06',
+        '2020-12-06',
+        '2020-12-08',
+        '201205-SL-01',
         '1200',
         'g',
-        '2026-12-06',
+        '2020-12-06',
         '',
         'yes',
       ],
@@ -159,9 +161,9 @@ describe('trace and recall over the API', () => {
     assert.equal((await cook.get('/api/trace/recall?supplierLot=9999')).status, 404);
     assert.equal((await cook.get('/api/trace/recall')).status, 400);
     assert.equal(
-      (await cook.get('/api/trace/recall?lot=R261201-91&supplierLot=HF-4471')).status,
+      (await cook.get('/api/trace/recall?lot=R201201-91&supplierLot=HF-4471')).status,
       400,
     );
-    assert.equal((await cook.get('/api/trace/recall?lot=R261201-91&color=red')).status, 400);
+    assert.equal((await cook.get('/api/trace/recall?lot=R201201-91&color=red')).status, 400);
   });
 });

@@ -33,7 +33,7 @@ describe('larder trace and larder recall', () => {
   for (const where of ['server', 'local'] as const) {
     it(`should draw a lot's tree back and forward, on the ${where === 'server' ? "server's records" : "machine's own records"}`, async (t) => {
       const server = await kitchen(t);
-      const run = await runLarder(['trace', '261205-sl-01'], { env: as(server, where) });
+      const run = await runLarder(['trace', '201205-sl-01'], { env: as(server, where) });
       assertExit(run, 0);
       const lines = run.stdout.split('\n');
       const back = lines.slice(lines.indexOf('Made from:') + 1, lines.indexOf('Made from:') + 9);
@@ -41,23 +41,23 @@ describe('larder trace and larder recall', () => {
       assert.deepEqual(
         back.map((line) => line.replace(/ · .*$/, '')),
         [
-          'Sliced bacon 261205-SL-01',
-          '├─ Smoked belly 261201-SB-01: 5000 g on 5 Dec 2026',
-          '│  ├─ Pork belly R261201-91: 6000 g on 1 Dec 2026',
-          '│  └─ Curing salt R261201-92: 15.0 g on 1 Dec 2026',
-          '└─ Smoked belly 261203-SB-02: 3000 g on 5 Dec 2026',
-          '   ├─ Pork belly R261201-91: 4000 g on 3 Dec 2026',
-          '   ├─ Pork belly R261203-91: 2000 g on 3 Dec 2026',
-          '   └─ Curing salt R261201-92: 15.0 g on 3 Dec 2026',
+          'Sliced bacon 201205-SL-01',
+          '├─ Smoked belly 201201-SB-01: 5000 g on 5 Dec 2020',
+          '│  ├─ Pork belly R201201-91: 6000 g on 1 Dec 2020',
+          '│  └─ Curing salt R201201-92: 15.0 g on 1 Dec 2020',
+          '└─ Smoked belly 201203-SB-02: 3000 g on 5 Dec 2020',
+          '   ├─ Pork belly R201201-91: 4000 g on 3 Dec 2020',
+          '   ├─ Pork belly R201203-91: 2000 g on 3 Dec 2020',
+          '   └─ Curing salt R201201-92: 15.0 g on 3 Dec 2020',
         ],
       );
       assert.match(
         run.stdout,
-        /Went into:\nSliced bacon 261205-SL-01 · done.*\n└─ Burger assembly 261206-BA-01: 1200 g on 6 Dec 2026 · planned · .* · for service 8 Dec 2026/,
+        /Went into:\nSliced bacon 201205-SL-01 · done.*\n└─ Burger assembly 201206-BA-01: 1200 g on 6 Dec 2020 · planned · .* · for service 8 Dec 2020/,
       );
       assert.match(
         run.stdout,
-        /Pork belly R261201-91: 6000 g on 1 Dec 2026 · Hollin Farm lot HF-4471 · est\. M1234/,
+        /Pork belly R201201-91: 6000 g on 1 Dec 2020 · Hollin Farm lot HF-4471 · est\. M1234/,
       );
     });
   }
@@ -69,7 +69,7 @@ describe('larder trace and larder recall', () => {
     assertExit(json, 0);
     assert.deepEqual(
       stdoutJson<RecallReport>(json).batches.map((b) => b.lotCode),
-      ['261201-SB-01', '261203-SB-02', '261205-SL-01', '261206-BA-01'],
+      ['201201-SB-01', '201203-SB-02', '201205-SL-01', '201206-BA-01'],
     );
     const summary = await runLarder(
       ['recall', '--supplier-lot', 'HF-4471', '--supplier', 'Hollin Farm'],
@@ -84,27 +84,27 @@ describe('larder trace and larder recall', () => {
       summary.stdout,
       /4 affected batch\(es\)\. Received 14.000 kg; used straight from the recalled lots 12.000 kg\./,
     );
-    assert.match(summary.stdout, /Still on hand: R261201-91 \(2000 g left\), 261203-SB-02/);
+    assert.match(summary.stdout, /Still on hand: R201201-91 \(2000 g left\), 201203-SB-02/);
     const dir = makeTempDir(t);
     const pdf = path.join(dir, 'recall.pdf');
     assertExit(
-      await runLarder(['recall', '--lot', 'R261202-92', '--pdf', pdf], {
+      await runLarder(['recall', '--lot', 'R201202-92', '--pdf', pdf], {
         env: as(server, 'local'),
       }),
       0,
     );
     const { all } = await pdfText(readFileSync(pdf));
-    assert.ok(all.includes('Recall: lot R261202-92'), all);
-    assert.ok(all.includes('261206-BA-01'), all);
+    assert.ok(all.includes('Recall: lot R201202-92'), all);
+    assert.ok(all.includes('201206-BA-01'), all);
     const csv = path.join(dir, 'recall.csv');
-    assertExit(await runLarder(['recall', '--lot', 'R261202-92', '--csv', csv], { env }), 0);
+    assertExit(await runLarder(['recall', '--lot', 'R201202-92', '--csv', csv], { env }), 0);
     const rows = parseCsv(readFileSync(csv, 'utf8'));
     assert.deepEqual(
       rows.slice(1).map((row) => [row[0], row[2]]),
       [
-        ['recalled lot', 'R261202-92'],
-        ['batch', '261204-BG-01'],
-        ['batch', '261206-BA-01'],
+        ['recalled lot', 'R201202-92'],
+        ['batch', '201204-BG-01'],
+        ['batch', '201206-BA-01'],
       ],
     );
   });

@@ -133,22 +133,22 @@ export function insertUse(db: Database, u: FixtureUse): Promise<number> {
   );
 }
 
-// The hand-drawn kitchen of the trace tests (invented, Quillmoor Smokehouse, December 2026). Arrows point from what
+// The hand-drawn kitchen of the trace tests (invented, Quillmoor Smokehouse, December 2020). Arrows point from what
 // was made to what it was made from; amounts in grams unless said, day used in brackets.
 //
-//   burger assembly 261206-BA-01 (for service 8 Dec)
-//     ├─ burger grind 261204-BG-01        4000 g [12-06]
-//     │    ├─ beef trim R261202-91        6000 g [12-04]   Brackenmoor Meats lot TR-301
-//     │    └─ beef trim R261202-92        4000 g [12-04]   Brackenmoor Meats lot TR-302  (two lots of one item)
-//     ├─ sliced bacon 261205-SL-01        1200 g [12-06]
-//     │    ├─ smoked belly 261201-SB-01   5000 g [12-05]
-//     │    │    ├─ pork belly R261201-91  6000 g [12-01]   Hollin Farm lot HF-4471
-//     │    │    └─ curing salt R261201-92   15 g [12-01]   Saltmarsh Supply lot CS-88
-//     │    └─ smoked belly 261203-SB-02   3000 g [12-05]
-//     │         ├─ pork belly R261201-91  4000 g [12-03]   (the same belly lot in a second batch)
-//     │         ├─ pork belly R261203-91  2000 g [12-03]   Hollin Farm lot HF-4471, delivered again
-//     │         └─ curing salt R261201-92   15 g [12-03]
-//     └─ brioche buns R261205-91           120 each [12-06]  Fernlea Bakery lot BUN-771
+//   burger assembly 201206-BA-01 (for service 8 Dec)
+//     ├─ burger grind 201204-BG-01        4000 g [12-06]
+//     │    ├─ beef trim R201202-91        6000 g [12-04]   Brackenmoor Meats lot TR-301
+//     │    └─ beef trim R201202-92        4000 g [12-04]   Brackenmoor Meats lot TR-302  (two lots of one item)
+//     ├─ sliced bacon 201205-SL-01        1200 g [12-06]
+//     │    ├─ smoked belly 201201-SB-01   5000 g [12-05]
+//     │    │    ├─ pork belly R201201-91  6000 g [12-01]   Hollin Farm lot HF-4471
+//     │    │    └─ curing salt R201201-92   15 g [12-01]   Saltmarsh Supply lot CS-88
+//     │    └─ smoked belly 201203-SB-02   3000 g [12-05]
+//     │         ├─ pork belly R201201-91  4000 g [12-03]   (the same belly lot in a second batch)
+//     │         ├─ pork belly R201203-91  2000 g [12-03]   Hollin Farm lot HF-4471, delivered again
+//     │         └─ curing salt R201201-92   15 g [12-03]
+//     └─ brioche buns R201205-91           120 each [12-06]  Fernlea Bakery lot BUN-771
 //
 // So Hollin Farm's lot HF-4471 (two receipts) went forward to both smoked bellies, the sliced bacon
 // made from them and the burger assembly made from that: four batches over three levels.
@@ -177,60 +177,60 @@ export async function insertSmokehouseLots(db: Database): Promise<Record<string,
       ...extra,
     });
   const belly1 = await receipt(
-    'R261201-91',
+    'R201201-91',
     'pork-belly',
     'Pork belly',
     'Hollin Farm',
     'HF-4471',
-    '2026-12-01',
+    '2020-12-01',
     '12000',
     { remaining: '2000' },
   );
   const salt = await receipt(
-    'R261201-92',
+    'R201201-92',
     'curing-salt',
     'Curing salt',
     'Saltmarsh Supply',
     'CS-88',
-    '2026-12-01',
+    '2020-12-01',
     '1000',
     { remaining: '970' },
   );
   const trim1 = await receipt(
-    'R261202-91',
+    'R201202-91',
     'beef-trim',
     'Beef trim',
     'Brackenmoor Meats',
     'TR-301',
-    '2026-12-02',
+    '2020-12-02',
     '6000',
   );
   const trim2 = await receipt(
-    'R261202-92',
+    'R201202-92',
     'beef-trim',
     'Beef trim',
     'Brackenmoor Meats',
     'TR-302',
-    '2026-12-02',
+    '2020-12-02',
     '8000',
     { remaining: '4000' },
   );
   const belly2 = await receipt(
-    'R261203-91',
+    'R201203-91',
     'pork-belly',
     'Pork belly',
     'Hollin Farm',
     'HF-4471',
-    '2026-12-03',
+    '2020-12-03',
     '2000',
   );
   const buns = await receipt(
-    'R261205-91',
+    'R201205-91',
     'brioche-bun',
     'Brioche bun',
     'Fernlea Bakery',
     'BUN-771',
-    '2026-12-05',
+    '2020-12-05',
     '240',
     { unit: 'each', remaining: '120' },
   );
@@ -244,45 +244,45 @@ export async function insertSmokehouseLots(db: Database): Promise<Record<string,
     notes: string | null = null,
   ) => insertBatch(db, { lot, formula, title, status, startedOn, readyOn, notes });
   const sb1 = await batch(
-    '261201-SB-01',
+    '201201-SB-01',
     'smoked-belly',
     'Smoked belly',
     'done',
-    '2026-12-01',
-    '2026-12-04',
+    '2020-12-01',
+    '2020-12-04',
   );
   const sb2 = await batch(
-    '261203-SB-02',
+    '201203-SB-02',
     'smoked-belly',
     'Smoked belly',
     'curing',
-    '2026-12-03',
-    '2026-12-10',
+    '2020-12-03',
+    '2020-12-10',
   );
   const bg = await batch(
-    '261204-BG-01',
+    '201204-BG-01',
     'burger-grind',
     'Burger grind',
     'done',
-    '2026-12-04',
-    '2026-12-04',
+    '2020-12-04',
+    '2020-12-04',
   );
   const sl = await batch(
-    '261205-SL-01',
+    '201205-SL-01',
     'sliced-bacon',
     'Sliced bacon',
     'done',
-    '2026-12-05',
-    '2026-12-05',
+    '2020-12-05',
+    '2020-12-05',
   );
   const ba = await batch(
-    '261206-BA-01',
+    '201206-BA-01',
     'burger-assembly',
     'Burger assembly',
     'planned',
-    '2026-12-06',
-    '2026-12-06',
-    'plan: smokehouse-burger ×120 for 2026-12-08',
+    '2020-12-06',
+    '2020-12-06',
+    'plan: smokehouse-burger ×120 for 2020-12-08',
   );
   const use = (
     batchId: number,
@@ -291,17 +291,17 @@ export async function insertSmokehouseLots(db: Database): Promise<Record<string,
     amount: string,
     usedOn: string,
   ) => insertUse(db, { batch: batchId, ...from, item, amount, usedOn });
-  await use(sb1, { receipt: belly1 }, 'pork-belly', '6000', '2026-12-01');
-  await use(sb1, { receipt: salt }, 'curing-salt', '15', '2026-12-01');
-  await use(sb2, { receipt: belly1 }, 'pork-belly', '4000', '2026-12-03');
-  await use(sb2, { receipt: belly2 }, 'pork-belly', '2000', '2026-12-03');
-  await use(sb2, { receipt: salt }, 'curing-salt', '15', '2026-12-03');
-  await use(bg, { receipt: trim1 }, 'beef-trim', '6000', '2026-12-04');
-  await use(bg, { receipt: trim2 }, 'beef-trim', '4000', '2026-12-04');
-  await use(sl, { source: sb1 }, 'smoked-belly', '5000', '2026-12-05');
-  await use(sl, { source: sb2 }, 'smoked-belly', '3000', '2026-12-05');
-  await use(ba, { source: bg }, 'burger-grind', '4000', '2026-12-06');
-  await use(ba, { source: sl }, 'sliced-bacon', '1200', '2026-12-06');
-  await use(ba, { receipt: buns }, 'brioche-bun', '120', '2026-12-06');
+  await use(sb1, { receipt: belly1 }, 'pork-belly', '6000', '2020-12-01');
+  await use(sb1, { receipt: salt }, 'curing-salt', '15', '2020-12-01');
+  await use(sb2, { receipt: belly1 }, 'pork-belly', '4000', '2020-12-03');
+  await use(sb2, { receipt: belly2 }, 'pork-belly', '2000', '2020-12-03');
+  await use(sb2, { receipt: salt }, 'curing-salt', '15', '2020-12-03');
+  await use(bg, { receipt: trim1 }, 'beef-trim', '6000', '2020-12-04');
+  await use(bg, { receipt: trim2 }, 'beef-trim', '4000', '2020-12-04');
+  await use(sl, { source: sb1 }, 'smoked-belly', '5000', '2020-12-05');
+  await use(sl, { source: sb2 }, 'smoked-belly', '3000', '2020-12-05');
+  await use(ba, { source: bg }, 'burger-grind', '4000', '2020-12-06');
+  await use(ba, { source: sl }, 'sliced-bacon', '1200', '2020-12-06');
+  await use(ba, { receipt: buns }, 'brioche-bun', '120', '2020-12-06');
   return { sb1, sb2, bg, sl, ba };
 }

@@ -22,10 +22,10 @@ function route(method: string, template: string, path: string): RouteCase {
 
 /** The trace and recall routes (server/trace/trace-router.ts): every signed-in role reads them. */
 export const TRACE_ROUTES: readonly RouteCase[] = [
-  route('GET', '/api/trace/back/:lot', '/api/trace/back/261206-BA-01'),
-  route('GET', '/api/trace/forward/:lot', '/api/trace/forward/R261201-91'),
+  route('GET', '/api/trace/back/:lot', '/api/trace/back/201206-BA-01'),
+  route('GET', '/api/trace/forward/:lot', '/api/trace/forward/R201201-91'),
   route('GET', '/api/trace/forward', '/api/trace/forward?supplierLot=HF-4471'),
   route('GET', '/api/trace/recall', '/api/trace/recall?supplierLot=HF-4471&supplier=Hollin%20Farm'),
-  route('GET', '/api/trace/recall.pdf', '/api/trace/recall.pdf?lot=261201-SB-01'),
+  route('GET', '/api/trace/recall.pdf', '/api/trace/recall.pdf?lot=201201-SB-01'),
   route('GET', '/api/trace/recall.csv', '/api/trace/recall.csv?supplierLot=TR-301'),
 ];
