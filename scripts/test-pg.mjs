@@ -28,13 +28,18 @@ const ownTemplate = !process.env.LARDER_TEST_PG_TEMPLATE;
 const template =
   process.env.LARDER_TEST_PG_TEMPLATE || `larder_template_${randomBytes(6).toString('hex')}`;
 
-/** Drops this run's template (and its unfinished form, if a run was cut short making it). */
+/** Drops this run's template, the demos seeded from it and any unfinished forms of them. */
 async function dropTemplate() {
   const admin = new pg.Client({ connectionString: url });
   await admin.connect();
   try {
-    for (const name of [template, `${template.slice(0, 50)}_building`])
-      await admin.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+    // With the seeded demos made from it (tests/helpers/demo-template.ts), named after it.
+    const { rows } = await admin.query(
+      'SELECT datname FROM pg_database WHERE starts_with(datname, $1) OR starts_with(datname, $2)',
+      [template, template.slice(0, 40)],
+    );
+    for (const { datname } of rows)
+      await admin.query(`DROP DATABASE IF EXISTS ${datname} WITH (FORCE)`);
   } finally {
     await admin.end();
   }

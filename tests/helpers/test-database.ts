@@ -26,7 +26,7 @@ async function asAdmin(adminUrl: string, sql: string): Promise<void> {
 }
 
 /** The URL of database `name` on the cluster of `adminUrl`. */
-function databaseUrl(adminUrl: string, name: string): string {
+export function databaseUrl(adminUrl: string, name: string): string {
   const url = new URL(adminUrl);
   url.pathname = `/${name}`;
   return url.toString();
@@ -36,7 +36,7 @@ function databaseUrl(adminUrl: string, name: string): string {
  * Creates a database with a random name on the test cluster, empty or copied from `template`,
  * and drops it when the test ends (its connections ended first, WITH FORCE); returns its URL.
  */
-async function createTestDatabase(
+export async function createTestDatabase(
   t: AfterHook,
   adminUrl: string,
   template?: string,
@@ -70,7 +70,7 @@ export function testPostgresTemplate(): string | undefined {
 }
 
 /** Any fixed number names the lock: it is the test cluster's template lock. */
-const TEMPLATE_LOCK = 1_729_017;
+export const TEMPLATE_LOCK = 1_729_017;
 
 /** This process's wait for the template (each spec file runs in a process of its own). */
 let templateMade: Promise<void> | undefined;
@@ -81,7 +81,7 @@ let templateMade: Promise<void> | undefined;
  * killed mid-migration leaves no half-made template behind for the others to copy. Connections
  * to it are then refused: a database is copied only while nobody is connected to it.
  */
-async function makeTemplate(adminUrl: string, name: string): Promise<void> {
+export async function makeTemplate(adminUrl: string, name: string): Promise<void> {
   const admin = new pg.Client({ connectionString: adminUrl });
   await admin.connect();
   try {

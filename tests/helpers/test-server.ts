@@ -9,7 +9,8 @@ import { loadConfig } from '../../server/config.ts';
 import { seedDemo } from '../../server/demo/seed-demo.ts';
 import { openContext } from '../../server/main-context.ts';
 import { REPO_ROOT } from './run-larder.ts';
-import { testDatabaseEnv } from './test-database.ts';
+import { seedableDemo, seededDemoTemplate } from './demo-template.ts';
+import { createTestDatabase, testDatabaseEnv, testPostgresUrl } from './test-database.ts';
 
 /** The demo sign-ins the test server starts with. */
 export const PASSWORDS = {
@@ -110,6 +111,23 @@ export function clockFrom(day: string): () => Date {
 }
 
 /**
+ * The database of a test server: on the PostgreSQL cluster, a copy of the run's seeded demo when
+ * the server would seed that very demo (its seed then finds people and does nothing), else a
+ * migrated database of its own; on SQLite, none (the file in the server's data folder).
+ */
+async function serverDatabaseEnv(
+  t: AfterHook,
+  env: Record<string, string>,
+  now: (() => Date) | undefined,
+): Promise<Record<string, string>> {
+  const adminUrl = testPostgresUrl();
+  const demo = seedableDemo(env, now);
+  const seeded = adminUrl && demo ? await seededDemoTemplate(adminUrl, demo) : undefined;
+  if (adminUrl && seeded) return { LARDER_DB_URL: await createTestDatabase(t, adminUrl, seeded) };
+  return testDatabaseEnv(t);
+}
+
+/**
  * Starts the real server (createApp over a real SQLite file, or a fresh PostgreSQL database when
  * LARDER_TEST_PG_URL is set) on an ephemeral port, with the demo people and a copy of formulas/,
  * and stops it when the test ends.
@@ -131,7 +149,7 @@ export async function startTestServer(
   const drops: (() => unknown)[] = [];
   const database = env.LARDER_DB_URL
     ? {}
-    : await testDatabaseEnv({ after: (drop) => drops.push(drop) });
+    : await serverDatabaseEnv({ after: (drop) => drops.push(drop) }, env, now);
   const config = loadConfig({
     ...database,
     LARDER_MODE: 'demo',
