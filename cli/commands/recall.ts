@@ -4,7 +4,7 @@ import { CliError, EXIT, EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { recallText } from '../output/trace-text.ts';
 import { reportFile, writeReportFile } from '../output/report-file.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, siteOption } from '../records/record-keeper.ts';
 
 interface RecallOptions {
   supplierLot?: string;
@@ -15,6 +15,7 @@ interface RecallOptions {
   json?: boolean;
   force?: boolean;
   server?: string;
+  site?: string;
 }
 
 /** The search the options name: a lot, or a supplier lot with its supplier if given. */
@@ -38,6 +39,7 @@ export function recallCommand(io: Io): Command {
     .option('--csv <file>', 'write the report as CSV, one line per recalled lot and per use')
     .option('--force', 'with --pdf or --csv: replace the file if it exists')
     .addOption(serverOption('from this server'))
+    .addOption(siteOption())
     .option('--json', 'print the report as JSON')
     .addHelpText(
       'after',
@@ -46,7 +48,9 @@ export function recallCommand(io: Io): Command {
     .action(async (options: RecallOptions) => {
       const search = searchOf(options);
       const { format, target } = await reportFile(options);
-      const report = await (await recordKeeper(options.server)).recall(format, search);
+      const report = await (
+        await recordKeeper(options.server, options.site)
+      ).recall(format, search);
       if (report.format === 'json')
         return io.out(
           options.json ? `${JSON.stringify(report.body, null, 2)}\n` : recallText(report.body),

@@ -4,7 +4,7 @@ import { EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { textTable } from '../output/text-table.ts';
 import { reportFile, writeReportFile } from '../output/report-file.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, siteOption } from '../records/record-keeper.ts';
 
 interface ReportOptions {
   from?: string;
@@ -14,6 +14,7 @@ interface ReportOptions {
   json?: boolean;
   force?: boolean;
   server?: string;
+  site?: string;
 }
 
 /** One batch as a line of the summary: its controls, deviations and release. */
@@ -57,6 +58,7 @@ export function reportCommand(io: Io): Command {
     .option('--csv <file>', 'write the report as CSV, one line per record entry')
     .option('--force', 'with --pdf or --csv: replace the file if it exists')
     .addOption(serverOption('from this server'))
+    .addOption(siteOption())
     .option('--json', 'print the report as JSON')
     .addHelpText(
       'after',
@@ -68,7 +70,9 @@ export function reportCommand(io: Io): Command {
         ...(options.from ? { from: options.from } : {}),
         ...(options.to ? { to: options.to } : {}),
       };
-      const report = await (await recordKeeper(options.server)).report(format, period);
+      const report = await (
+        await recordKeeper(options.server, options.site)
+      ).report(format, period);
       if (report.format === 'json')
         return io.out(
           options.json ? `${JSON.stringify(report.body, null, 2)}\n` : summary(report.body),

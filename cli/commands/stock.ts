@@ -4,10 +4,11 @@ import { dayWords } from '../../shared/presentation/date-words.ts';
 import { EXIT_CODES_HELP } from '../cli-error.ts';
 import type { Io } from '../io.ts';
 import { textTable } from '../output/text-table.ts';
-import { recordKeeper, serverOption } from '../records/record-keeper.ts';
+import { recordKeeper, serverOption, siteOption } from '../records/record-keeper.ts';
 
 interface StockOptions {
   server?: string;
+  site?: string;
   json?: boolean;
 }
 
@@ -45,13 +46,14 @@ export function stockCommand(io: Io): Command {
   return new Command('stock')
     .description('what is on hand by item and lot, first to expire first')
     .addOption(serverOption('read from this server'))
+    .addOption(siteOption())
     .option('--json', 'print the stock as JSON')
     .addHelpText(
       'after',
       `\nOn a server, signs in as $LARDER_USER with $LARDER_PASSWORD.\n\nExamples:\n  larder stock\n  larder stock --json\n${EXIT_CODES_HELP}`,
     )
     .action(async (options: StockOptions) => {
-      const stock = await (await recordKeeper(options.server)).stock();
+      const stock = await (await recordKeeper(options.server, options.site)).stock();
       io.out(options.json ? `${JSON.stringify(stock, null, 2)}\n` : stockTable(stock));
     });
 }

@@ -15,8 +15,10 @@ import {
   RecordsError,
   openRecords,
   recordsFile,
+  traceSitesOf,
   type Person,
   type Role,
+  type SiteAtWork,
   type SiteScope,
 } from '../../server/records/records.ts';
 import { CliError, EXIT } from '../cli-error.ts';
@@ -56,6 +58,13 @@ export async function withLocalRecords<T>(
   }
 }
 
+/** Who a command acts as, the site it works at, and the sites a trace from there may show. */
+interface At {
+  readonly actor: Person;
+  readonly site: SiteScope;
+  readonly seen: SiteAtWork['seen'];
+}
+
 /**
  * The person recording, from $LARDER_USER and $LARDER_PASSWORD, checked as the server checks a
  * sign-in, at the site the command works at (`--site`, else their default): the command line is
@@ -66,7 +75,7 @@ async function recorder(
   verb: PersonVerb,
   roles: readonly Role[],
   siteKey: string | undefined,
-): Promise<{ actor: Person; site: SiteScope }> {
+): Promise<At> {
   const { username, password } = credentialsFor(verb);
   const person = await records.signIn(username, password);
   if (!person)
@@ -74,13 +83,13 @@ async function recorder(
       'wrong LARDER_USER or LARDER_PASSWORD, or the account is not active',
       EXIT.usage,
     );
-  const { site, person: there = person } = await records.siteAtWork(siteKey, person);
+  const { site, seen, person: there = person } = await records.siteAtWork(siteKey, person);
   if (!roles.includes(there.role))
     throw new CliError(
       `${there.username} is a ${there.role}${site.filters ? ` at ${site.key}` : ''}; this needs ${roles.join(' or ')}`,
       EXIT.usage,
     );
-  return { actor: there, site };
+  return { actor: there, site, seen };
 }
 
 /**
@@ -91,7 +100,7 @@ function asPerson<T>(
   verb: PersonVerb,
   roles: readonly Role[],
   siteKey: string | undefined,
-  work: (records: Records, by: { actor: Person; site: SiteScope }) => Promise<T>,
+  work: (records: Records, by: At) => Promise<T>,
   formulasFolder?: string,
 ): Promise<T> {
   return withLocalRecords(
@@ -196,19 +205,23 @@ export class LocalRecords implements RecordKeeper {
     );
   }
 
-  /** Stock on this machine's today (the kitchen's day). */
+  /** Stock of the site (`--site`, else `main`) on this machine's today (the kitchen's day). */
   stock(): Promise<StockView> {
-    return withLocalRecords('stock', (records) => records.stockOnHand(today()));
+    return withLocalRecords('stock', async (records) =>
+      records.stockOnHand(today(), (await records.siteAtWork(this.site)).site),
+    );
   }
 
   /** The report from this machine's records, as whoever $LARDER_USER is (admin or reviewer). */
   report(format: ReportOutput['format'], period: ReportPeriodOptions): Promise<ReportOutput> {
-    return asPerson('report', REPORT_ROLES, this.site, async (records, { actor: by }) => {
+    return asPerson('report', REPORT_ROLES, this.site, async (records, { actor: by, site }) => {
       const produced = await records.produceReport(format, {
         query: period,
         by,
-        kitchen: Records.kitchenName(),
+        // A group's report is one site's records, named for it, as the API's.
+        kitchen: site.filters ? site.name : Records.kitchenName(),
         now: new Date(),
+        site,
       });
       if (produced.format === 'json') return produced;
       // Read whole before the records close.
@@ -223,25 +236,40 @@ export class LocalRecords implements RecordKeeper {
     });
   }
 
-  /** Both ways from a lot, from this machine's records; reading needs no one. */
+  /**
+   * Both ways from a lot of the site (`--site`, else `main`), from this machine's records; reading
+   * needs no one, so the lots it reaches at other sites are shown with their site's key.
+   */
   trace(lot: string): Promise<TracedBothWays> {
-    return withLocalRecords('trace', async (records) => ({
-      back: await records.traceBack(lot),
-      forward: await records.traceForward({ lot }),
-    }));
+    return withLocalRecords('trace', async (records) => {
+      const { site, seen } = await records.siteAtWork(this.site);
+      const sites = traceSitesOf(site, seen);
+      return {
+        back: await records.traceBack(lot, sites),
+        forward: await records.traceForward({ lot }, sites),
+      };
+    });
   }
 
   /** The recall report from this machine's records, produced as $LARDER_USER (any role). */
   recall(format: RecallOutput['format'], search: TraceSearch): Promise<RecallOutput> {
-    return asPerson('recall', TRACE_ROLES, this.site, async (records, { actor: by }) => {
-      const produced = await records.produceRecall(format, {
-        search,
-        by,
-        kitchen: Records.kitchenName(),
-        now: new Date(),
-      });
-      if (produced.format === 'pdf') return { format: 'pdf', body: new Uint8Array(produced.body) };
-      return produced;
-    });
+    return asPerson(
+      'recall',
+      TRACE_ROLES,
+      this.site,
+      async (records, { actor: by, site, seen }) => {
+        const sites = traceSitesOf(site, seen);
+        const produced = await records.produceRecall(format, {
+          search,
+          by,
+          kitchen: Records.kitchenName(),
+          now: new Date(),
+          ...(sites ? { sites } : {}),
+        });
+        if (produced.format === 'pdf')
+          return { format: 'pdf', body: new Uint8Array(produced.body) };
+        return produced;
+      },
+    );
   }
 }

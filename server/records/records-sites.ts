@@ -13,6 +13,8 @@ import { RecordsError } from './records-error.ts';
 export interface SiteAtWork {
   readonly site: SiteScope;
   readonly person?: Person;
+  /** The sites whose lots a trace from here may show: the person's, or every one for nobody. */
+  readonly seen: readonly { readonly id: number; readonly key: string }[];
 }
 
 const noSuchSite = (key: string): RecordsError =>
@@ -48,7 +50,7 @@ export async function siteAtWork(
         ? (all.find((site) => site.key === MAIN_SITE_KEY) ?? all[0])
         : all.find((site) => site.key === key);
     if (!chosen) throw noSuchSite(key ?? MAIN_SITE_KEY);
-    return { site: scope(chosen) };
+    return { site: scope(chosen), seen: all };
   }
   const chosen =
     key === undefined ? defaultSite(all) : all.find((site) => site.key === key && site.role);
@@ -63,7 +65,11 @@ export async function siteAtWork(
         : `${person.username} has a role at no site; an admin gives one`,
     );
   }
-  return { site: scope(chosen), person: { ...person, role: chosen.role } };
+  return {
+    site: scope(chosen),
+    person: { ...person, role: chosen.role },
+    seen: all.filter((site) => site.role),
+  };
 }
 
 /** Every site of the install, first made first. */

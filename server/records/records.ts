@@ -105,6 +105,8 @@ export type {
 };
 export type { SheetRecord, SheetSource };
 export type { Site, SiteAtWork, SiteScope };
+// A trace's sites from a command's site at work (a small pure module, not the trace stack).
+export { traceSitesOf } from '../trace/trace-sites.ts';
 export type { ProducedReport, ReportFormat, ReportRequest };
 export type { ActionRequest, CorrectionRequest, UploadAnswer };
 export type { ProducedRecall, RecallFormat, RecallRequest };

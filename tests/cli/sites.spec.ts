@@ -1,8 +1,15 @@
 import assert from 'node:assert/strict';
+import path from 'node:path';
 import { describe, it } from 'node:test';
 import { today } from '../../cli/io.ts';
 import { addDays } from '../../shared/index.ts';
-import { assertCleanFailure, assertExit, runLarder, stdoutJson } from '../helpers/run-larder.ts';
+import {
+  REPO_ROOT,
+  assertCleanFailure,
+  assertExit,
+  runLarder,
+  stdoutJson,
+} from '../helpers/run-larder.ts';
 import { localRecordsEnv } from '../helpers/local-records-env.ts';
 
 // Yesterday on this machine's clock: a start must lie within a year of it.
@@ -84,6 +91,83 @@ describe('larder sites and --site', () => {
       await runLarder(['batches', 'list', '--site', 'nowhere'], { env }),
       2,
       /no site "nowhere"/,
+    );
+  });
+});
+
+describe('larder stock, trace, report and recall at a site', () => {
+  it('should keep each to the site named, on this machine’s records', async (t) => {
+    const records = await localRecordsEnv(t);
+    assertExit(
+      await runLarder(['users', 'add', 'rosa', '--role', 'admin'], {
+        env: { ...records, LARDER_NEW_PASSWORD: 'rosa-pass-1' },
+      }),
+      0,
+    );
+    const env = {
+      ...records,
+      LARDER_USER: 'rosa',
+      LARDER_PASSWORD: 'rosa-pass-1',
+      // The demo's catalogue of materials, which a delivery's item must be in (read only).
+      LARDER_FORMULAS: path.join(REPO_ROOT, 'formulas'),
+    };
+    assertExit(await runLarder(['sites', 'add', 'harbour', '--name', 'Harbour'], { env }), 0);
+    const received = await runLarder(
+      [
+        'receive',
+        'pork-belly',
+        '--supplier',
+        'Harbour Farm',
+        '--supplier-lot',
+        'HB-SITE-1',
+        '--establishment',
+        'EST. 9012',
+        '--quantity',
+        '10 kg',
+        // source: FDA Food Code 2022, §3-202.11(A): 5 °C (41 °F) or below; 3 °C is within it
+        '--temperature',
+        '3 °C',
+        '--site',
+        'harbour',
+        '--json',
+      ],
+      { env },
+    );
+    assertExit(received, 0);
+    const receipt = stdoutJson<{ lotCode: string }>(received).lotCode;
+    const recorded = await runLarder([...BELLY, '--record', '--json', '--site', 'harbour'], {
+      env,
+    });
+    assertExit(recorded, 0);
+    const shopLot = stdoutJson<{ lotCode: string }>(recorded).lotCode;
+
+    const stock = (...site: string[]) => runLarder(['stock', '--json', ...site], { env });
+    assert.match((await stock('--site', 'harbour')).stdout, new RegExp(receipt));
+    assert.doesNotMatch((await stock()).stdout, new RegExp(receipt));
+
+    assertExit(await runLarder(['trace', shopLot, '--site', 'harbour'], { env }), 0);
+    assertCleanFailure(await runLarder(['trace', shopLot], { env }), 2, new RegExp(shopLot));
+
+    const report = (...site: string[]) =>
+      runLarder(['report', '--from', START, '--to', START, '--json', ...site], { env });
+    const atShop = await report('--site', 'harbour');
+    assertExit(atShop, 0);
+    assert.match(atShop.stdout, new RegExp(shopLot));
+    assert.match(atShop.stdout, /Harbour/);
+    const atMain = await report();
+    assertExit(atMain, 0);
+    assert.doesNotMatch(atMain.stdout, new RegExp(shopLot));
+
+    const recall = (...site: string[]) =>
+      runLarder(['recall', '--supplier-lot', 'HB-SITE-1', '--json', ...site], { env });
+    const recalled = await recall('--site', 'harbour');
+    assertExit(recalled, 0);
+    assert.match(recalled.stdout, new RegExp(receipt));
+    // At main, as a delivery nobody received: the shop's lot is not named.
+    assertCleanFailure(
+      await runLarder(['recall', '--supplier-lot', 'HB-SITE-1'], { env }),
+      2,
+      /no delivery of supplier lot HB-SITE-1 was received/,
     );
   });
 });

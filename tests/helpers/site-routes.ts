@@ -1,7 +1,7 @@
 // What each API route answers a person with a role only at another site, when the request names
 // the main site's records (the role matrix's own preparations, tests/helpers/api-routes.ts).
-// A route not kept to the site yet is not in this table (server/README.md, "Not at a site yet");
-// adding it is one row.
+// A route of the whole group (people, the audit log) answers a site's admin 403; a new route kept
+// to the site is one row more.
 
 /**
  * - `not-found`: 404, as a record that does not exist, and nothing changes;
