@@ -1,9 +1,11 @@
 // `npm run test:pg`: the API and fault suites that pass on PostgreSQL so far (listed in
 // tests/postgres-suites-passing-so-far.txt, which grows until it names them all), run against a
 // throw-away cluster started for them and stopped afterwards, whether they pass or not.
+// `--browser` (`npm run test:e2e:pg`): the browser suites instead, every one, on the console
+// `ng build` made, one at a time as `npm run test:e2e` runs them.
 import { spawn } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
-import { readFileSync } from 'node:fs';
+import { readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import pg from 'pg';
@@ -12,11 +14,27 @@ import { startCluster, stopCluster } from './pg-cluster.mjs';
 const root = fileURLToPath(new URL('..', import.meta.url));
 const LIST = path.join(root, 'tests/postgres-suites-passing-so-far.txt');
 
-/** The spec files of the list: one a line, # starts a comment. */
-const suites = readFileSync(LIST, 'utf8')
-  .split('\n')
-  .map((line) => line.replace(/#.*/, '').trim())
-  .filter(Boolean);
+const browser = process.argv.includes('--browser');
+
+/** The spec files of the list (one a line, # starts a comment), or every browser suite. */
+const suites = browser
+  ? readdirSync(path.join(root, 'tests/e2e'))
+      .filter((name) => name.endsWith('.e2e.ts'))
+      .sort()
+      .map((name) => `tests/e2e/${name}`)
+  : readFileSync(LIST, 'utf8')
+      .split('\n')
+      .map((line) => line.replace(/#.*/, '').trim())
+      .filter(Boolean);
+/**
+ * The runner's limits. The API suites get ten minutes a test, not two (a suite's describe counts
+ * as one test: so does its whole file), as a server that seeds its own demo on PostgreSQL takes
+ * several times longer (one round trip a statement). The browser suites keep their own
+ * (package.json's test:e2e), one file at a time.
+ */
+const runnerArgs = browser
+  ? ['--test-timeout=180000', '--test-concurrency=1']
+  : ['--test-timeout=600000'];
 
 // A cluster already running (CI starts one and stops it in a trap) is used as it is.
 const given = process.env.LARDER_TEST_PG_URL;
@@ -59,21 +77,14 @@ for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'])
   });
 try {
   process.stdout.write(
-    `PostgreSQL suites (${suites.length}) on ${dir ? `a throw-away cluster in ${dir}` : 'the cluster of LARDER_TEST_PG_URL'}\n`,
+    `PostgreSQL ${browser ? 'browser ' : ''}suites (${suites.length}) on ${dir ? `a throw-away cluster in ${dir}` : 'the cluster of LARDER_TEST_PG_URL'}\n`,
   );
-  // Ten minutes a test, not two (a suite's describe counts as one test: so does its whole file):
-  // every test server seeds the demo, which takes several times longer on PostgreSQL (one round
-  // trip a statement) than on the embedded file.
   const code = await new Promise((resolve) => {
-    const child = spawn(
-      process.execPath,
-      ['--import', 'tsx', '--test', '--test-timeout=600000', ...suites],
-      {
-        cwd: root,
-        stdio: 'inherit',
-        env: { ...process.env, LARDER_TEST_PG_URL: url, LARDER_TEST_PG_TEMPLATE: template },
-      },
-    );
+    const child = spawn(process.execPath, ['--import', 'tsx', '--test', ...runnerArgs, ...suites], {
+      cwd: root,
+      stdio: 'inherit',
+      env: { ...process.env, LARDER_TEST_PG_URL: url, LARDER_TEST_PG_TEMPLATE: template },
+    });
     child.once('exit', (exitCode, signal) => resolve(exitCode ?? (signal ? 1 : 0)));
   });
   process.exitCode = code;
