@@ -27,6 +27,27 @@ async function fillBelly(page: Page, lot: string, temperature: string): Promise<
 }
 
 describe('receiving in the console', () => {
+  it('should hold the item list until the items arrive on a slow line, then take a tap', async (t) => {
+    const session = await startConsole(t);
+    const page = await session.page('tobin');
+    const errors = collectConsoleErrors(page);
+    // The items answer 2 s late, as on a slow kitchen connection.
+    await page.route('**/api/stock/items', async (route) => {
+      await new Promise((resolve) => setTimeout(resolve, 2000));
+      await route.continue();
+    });
+    await page.getByRole('link', { name: 'Deliveries' }).click();
+    await page.waitForURL(/\/deliveries$/);
+    const item = page.getByTestId('receive-form').getByTestId('receive-item');
+    await page.getByText('Loading the items…').waitFor();
+    // An empty list would open nothing on a tap: it is shown as not ready instead.
+    assert.equal(await item.getAttribute('aria-disabled'), 'true');
+    await item.click();
+    await page.getByRole('option', { name: 'pork belly', exact: true }).click();
+    assert.match(await item.innerText(), /pork belly/);
+    assert.deepEqual(errors, []);
+  });
+
   it('should receive a delivery at a desk and on a phone, and refuse one over its limit', async (t) => {
     const session = await startConsole(t);
     const page = await session.page('tobin');

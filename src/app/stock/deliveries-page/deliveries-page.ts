@@ -3,6 +3,7 @@ import {
   Component,
   OnInit,
   computed,
+  effect,
   inject,
   signal,
   viewChild,
@@ -140,6 +141,16 @@ export default class DeliveriesPage implements OnInit {
   /** The lot whose discard is being confirmed, and the reason typed. */
   protected readonly discarding = signal<string | null>(null);
   protected readonly discardReason = this.fb.control('');
+
+  constructor() {
+    // A tap on an empty item list opens nothing; until the items arrive the list is shown as
+    // not ready instead, and taps wait for it.
+    effect(() => {
+      const item = this.form.controls.item;
+      if (this.store.items().length) item.enable({ emitEvent: false });
+      else item.disable({ emitEvent: false });
+    });
+  }
 
   ngOnInit(): void {
     void this.store.load();
