@@ -1,10 +1,8 @@
 import assert from 'node:assert/strict';
-import { randomBytes } from 'node:crypto';
-import { after, describe, it } from 'node:test';
-import pg from 'pg';
+import { describe, it } from 'node:test';
 import { QueryTypes } from 'sequelize';
 import { seedableDemo } from './demo-template.ts';
-import { testPostgresTemplate, testPostgresUrl } from './test-database.ts';
+import { ownTemplateWhenAlone, testPostgresUrl } from './test-database.ts';
 import { startTestServer, type TestServer } from './test-server.ts';
 
 describe('which test servers copy the seeded demo', () => {
@@ -46,26 +44,7 @@ async function demoRecords(server: TestServer): Promise<Record<string, unknown[]
 const adminUrl = testPostgresUrl();
 if (adminUrl)
   describe('the seeded demo on PostgreSQL', () => {
-    // Run alone, the spec names a template of its own and drops it and its demos afterwards.
-    if (!testPostgresTemplate()) {
-      const name = `larder_template_${randomBytes(6).toString('hex')}`;
-      process.env.LARDER_TEST_PG_TEMPLATE = name;
-      after(async () => {
-        delete process.env.LARDER_TEST_PG_TEMPLATE;
-        const admin = new pg.Client({ connectionString: adminUrl });
-        await admin.connect();
-        try {
-          const { rows } = await admin.query(
-            'SELECT datname FROM pg_database WHERE starts_with(datname, $1)',
-            [name],
-          );
-          for (const { datname } of rows)
-            await admin.query(`DROP DATABASE IF EXISTS ${datname} WITH (FORCE)`);
-        } finally {
-          await admin.end();
-        }
-      });
-    }
+    ownTemplateWhenAlone(adminUrl);
 
     for (const sites of ['1', '2'])
       it(`should give a server of ${sites} site(s) the records it would have seeded itself`, async (t) => {

@@ -1,11 +1,11 @@
 import assert from 'node:assert/strict';
-import { randomBytes } from 'node:crypto';
-import { after, describe, it } from 'node:test';
+import { describe, it } from 'node:test';
 import pg from 'pg';
 import { openDatabase } from '../../server/db/database.ts';
 import {
   freshPostgresDatabase,
   migratedPostgresDatabase,
+  ownTemplateWhenAlone,
   testPostgresTemplate,
   testPostgresUrl,
 } from './test-database.ts';
@@ -29,16 +29,7 @@ const TABLES = `SELECT COUNT(*)::int AS count FROM information_schema.tables
 const adminUrl = testPostgresUrl();
 if (adminUrl)
   describe('test databases on PostgreSQL: copies of one migrated template, or empty', () => {
-    // Run alone, the spec names a template of its own and drops it afterwards; under
-    // `npm run test:pg` it copies the run's template, as every other spec does.
-    if (!testPostgresTemplate()) {
-      const name = `larder_template_${randomBytes(6).toString('hex')}`;
-      process.env.LARDER_TEST_PG_TEMPLATE = name;
-      after(async () => {
-        delete process.env.LARDER_TEST_PG_TEMPLATE;
-        await rowsOf(adminUrl, `DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
-      });
-    }
+    ownTemplateWhenAlone(adminUrl);
 
     it('should give a copy holding every migration a server would apply itself', async (t) => {
       const copy = await migratedPostgresDatabase(t, adminUrl);

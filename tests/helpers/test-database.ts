@@ -1,6 +1,7 @@
 // A fresh PostgreSQL database for each test server when LARDER_TEST_PG_URL names a cluster
 // (`npm run test:pg` starts a throw-away one); nothing at all when it is not set (SQLite).
 import { randomBytes } from 'node:crypto';
+import { after } from 'node:test';
 import pg from 'pg';
 import { openDatabase } from '../../server/db/database.ts';
 
@@ -67,6 +68,32 @@ export function testPostgresTemplate(): string | undefined {
   if (name !== undefined && !/^[a-z_][a-z0-9_]{0,62}$/.test(name))
     throw new Error(`LARDER_TEST_PG_TEMPLATE must be a plain lower-case name, not ${name}`);
   return name;
+}
+
+/**
+ * For a spec of the templates run alone (no `npm run test:pg` around it): names a template of the
+ * spec's own, and drops it and the demos seeded from it when the suite ends. Call it inside the
+ * suite's describe; under `npm run test:pg` the spec copies the run's template, as every other.
+ */
+export function ownTemplateWhenAlone(adminUrl: string): void {
+  if (testPostgresTemplate()) return;
+  const name = `larder_template_${randomBytes(6).toString('hex')}`;
+  process.env.LARDER_TEST_PG_TEMPLATE = name;
+  after(async () => {
+    delete process.env.LARDER_TEST_PG_TEMPLATE;
+    const admin = new pg.Client({ connectionString: adminUrl });
+    await admin.connect();
+    try {
+      const { rows } = await admin.query<{ datname: string }>(
+        'SELECT datname FROM pg_database WHERE starts_with(datname, $1)',
+        [name],
+      );
+      for (const { datname } of rows)
+        await admin.query(`DROP DATABASE IF EXISTS ${datname} WITH (FORCE)`);
+    } finally {
+      await admin.end();
+    }
+  });
 }
 
 /** Any fixed number names the lock: it is the test cluster's template lock. */
