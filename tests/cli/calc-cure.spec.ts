@@ -13,6 +13,7 @@ import {
   stdoutJson,
 } from '../helpers/run-larder.ts';
 import { makeTempDir, writeText } from '../helpers/temp-files.ts';
+import { bellyCalc } from '../helpers/cli-belly.ts';
 
 // Today on this machine's clock (a start must lie within a year of it), and 8 days on, counted on
 // the calendar here: 2 days per cm × 4 cm (the formula's own rule).
@@ -20,16 +21,7 @@ const START = today();
 const READY = new Date(Date.parse(`${START}T00:00:00Z`) + 8 * 86_400_000)
   .toISOString()
   .slice(0, 10);
-const BELLY = [
-  'calc',
-  'formulas/quillmoor-belly.yaml',
-  '--meat',
-  '4.26kg',
-  '--thickness',
-  '4cm',
-  '--start',
-  START,
-];
+const BELLY = bellyCalc(START, 'formulas/quillmoor-belly.yaml');
 const REFUSED = [
   'calc',
   'maple-pump-belly',

@@ -5,22 +5,14 @@ import { addDays } from '../../shared/index.ts';
 import { assertCleanFailure, assertExit, runLarder, stdoutJson } from '../helpers/run-larder.ts';
 import { localRecordsEnv } from '../helpers/local-records-env.ts';
 import { PASSWORDS, startTestServer } from '../helpers/test-server.ts';
+import { bellyCalc } from '../helpers/cli-belly.ts';
 
 // Yesterday on this machine's clock: a start must lie within a year of it.
 const START = addDays(today(), -1);
 // Lot code: start date YYMMDD, the formula id's initials, a sequence. source: our lot code format
 // (server/README.md "Batches")
 const LOT = `${START.slice(2).replaceAll('-', '')}-QB-01`;
-const BELLY = [
-  'calc',
-  'quillmoor-belly',
-  '--meat',
-  '4.26kg',
-  '--thickness',
-  '4cm',
-  '--start',
-  START,
-];
+const BELLY = bellyCalc(START);
 const REFUSED = ['calc', 'maple-pump-belly', '--meat', '10kg', '--pumped-weight', '11.2kg'];
 
 interface RecordedBatch {

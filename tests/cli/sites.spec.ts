@@ -11,19 +11,11 @@ import {
   stdoutJson,
 } from '../helpers/run-larder.ts';
 import { localRecordsEnv } from '../helpers/local-records-env.ts';
+import { bellyCalc } from '../helpers/cli-belly.ts';
 
 // Yesterday on this machine's clock: a start must lie within a year of it.
 const START = addDays(today(), -1);
-const BELLY = [
-  'calc',
-  'quillmoor-belly',
-  '--meat',
-  '4.26kg',
-  '--thickness',
-  '4cm',
-  '--start',
-  START,
-];
+const BELLY = bellyCalc(START);
 
 interface SiteList {
   sites: { key: string; name: string }[];
