@@ -1,7 +1,7 @@
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app.ts';
 import { runPrimary } from './cluster/primary.ts';
-import { closeGracefully } from './cluster/graceful-close.ts';
+import { closeGracefully, trackRequests } from './cluster/graceful-close.ts';
 import { printStartBanner } from './cluster/print-banner.ts';
 import { processRole, type ProcessRole } from './cluster/process-role.ts';
 import { ConfigError, loadConfig, type ServerConfig } from './config.ts';
@@ -35,6 +35,7 @@ async function serve(config: ServerConfig, role: ProcessRole): Promise<void> {
       ]
     : [];
   const server = createApp(context).listen(config.port, config.host);
+  trackRequests(server);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;
     // Links in messages need the port; reminders start once it is known.

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { AppContext } from '../../server/app-context.ts';
 import { createApp } from '../../server/app.ts';
-import { closeGracefully } from '../../server/cluster/graceful-close.ts';
+import { closeGracefully, trackRequests } from '../../server/cluster/graceful-close.ts';
 import { loadConfig } from '../../server/config.ts';
 import { seedDemo } from '../../server/demo/seed-demo.ts';
 import { openContext } from '../../server/main-context.ts';
@@ -166,6 +166,7 @@ export async function startTestServer(
   const open = async (port: number) => {
     const context = await openContext(config, now ? { now } : {});
     const server = createApp(context).listen(port, '127.0.0.1');
+    trackRequests(server);
     await new Promise<void>((resolve) => server.once('listening', () => resolve()));
     context.mail.links.listeningOn((server.address() as AddressInfo).port);
     const close = async (): Promise<void> => {
