@@ -83,8 +83,10 @@ export async function seedPostgresLog(
         `INSERT INTO batches (lot_code, formula_id, formula_revision, formula_title, kind, status,
            operator_id, started_on, ready_on, recorded_at, updated_at, units, inputs, result,
            checks_passed, nitrite_ppm, signed_off_by, signed_off_at, notes)
-         SELECT to_char(at, 'YYMMDD') || '-' || f.prefix || '-' || lpad((row_number() OVER (
-             PARTITION BY to_char(at, 'YYYY-MM-DD'), f.prefix ORDER BY i))::text, 2, '0'),
+         SELECT to_char(at, 'YYMMDD') || '-' || f.prefix || '-'
+             -- Two digits at least, as lotCode writes them (lpad would cut 100 to "10").
+             || CASE WHEN row_number() OVER day_prefix < 10 THEN '0' ELSE '' END
+             || (row_number() OVER day_prefix)::text,
            f.id, f.revision, f.title, f.kind, s.status, 1 + i % 3, to_char(at, 'YYYY-MM-DD'),
            to_char(at + f.ready_days * interval '1 day', 'YYYY-MM-DD'), iso, iso, 'metric', '{}',
            f.result, 1, f.nitrite,
@@ -101,6 +103,7 @@ export async function seedPostgresLog(
          CROSS JOIN LATERAL (SELECT CASE WHEN p.picked = 'curing' AND f.kind <> 'cure'
            THEN CASE WHEN f.kind = 'dough' THEN 'proofing' ELSE 'done' END
            ELSE p.picked END AS status) s
+         WINDOW day_prefix AS (PARTITION BY to_char(at, 'YYYY-MM-DD'), f.prefix ORDER BY i)
          ORDER BY i`,
         [first, last, forms.length, perDay, recentFrom],
       );
