@@ -2,8 +2,12 @@
 // check that the database holds exactly as many new batches as the 201s the clients received.
 // Each client sends its next request only when the last one was answered, and stops at the
 // deadline only between requests, so no request is cut off with its outcome unknown.
+// BENCH_DB_URL=postgres://…/db runs it on PostgreSQL instead: on a fresh database of its own beside
+// that one (named after it, `…_record`), made before each run and dropped after.
 import path from 'node:path';
+import pg from 'pg';
 import sqlite3 from 'sqlite3';
+import { countPostgresBatches } from './seed-log-postgres.ts';
 import { signInCookie, startBenchServer } from './server-process.ts';
 
 const CLIENTS = 20;
@@ -30,6 +34,29 @@ function countBatches(databaseFile: string): Promise<number> {
   ).finally(() => db.close());
 }
 
+/** A fresh PostgreSQL database beside the one at `url`, and how to drop it. */
+async function freshPostgresDatabase(
+  url: string,
+): Promise<{ url: string; drop: () => Promise<void> }> {
+  const given = new URL(url);
+  const name = `${given.pathname.slice(1)}_record`;
+  const admin = new pg.Client({ connectionString: url });
+  await admin.connect();
+  const drop = async () =>
+    void (await admin.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`));
+  await drop();
+  await admin.query(`CREATE DATABASE "${name}"`);
+  const fresh = new URL(url);
+  fresh.pathname = `/${name}`;
+  return {
+    url: fresh.toString(),
+    drop: async () => {
+      await drop();
+      await admin.end();
+    },
+  };
+}
+
 function percentile(sorted: readonly number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? 0;
 }
@@ -38,12 +65,22 @@ function percentile(sorted: readonly number[], p: number): number {
 export async function benchRecordBatches(
   processes = 1,
 ): Promise<{ perSecond: number; consistent: boolean }> {
-  const server = await startBenchServer({ LARDER_PROCESSES: String(processes) });
+  const postgres = process.env.BENCH_DB_URL
+    ? await freshPostgresDatabase(process.env.BENCH_DB_URL)
+    : undefined;
+  const server = await startBenchServer({
+    LARDER_PROCESSES: String(processes),
+    ...(postgres ? { LARDER_DB_URL: postgres.url } : {}),
+  });
+  // Batches in the server's database, read from the database itself (not the API's total).
+  const count = (): Promise<number> =>
+    postgres
+      ? countPostgresBatches(postgres.url)
+      : countBatches(path.join(server.dataDir, 'larderbook.sqlite'));
   try {
     const { cookie, csrf } = await signInCookie(server.url, 'tobin', 'quillmoor-cook');
     const headers = { cookie, 'x-csrf-token': csrf, 'content-type': 'application/json' };
-    const databaseFile = path.join(server.dataDir, 'larderbook.sqlite');
-    const before = await countBatches(databaseFile);
+    const before = await count();
     let acknowledged = 0;
     const refused = new Map<number, number>();
     const times: number[] = [];
@@ -66,13 +103,13 @@ export async function benchRecordBatches(
     };
     await Promise.all(Array.from({ length: CLIENTS }, (_, i) => client(i)));
     const elapsed = (performance.now() - started) / 1000;
-    const stored = (await countBatches(databaseFile)) - before;
+    const stored = (await count()) - before;
     times.sort((a, b) => a - b);
     const perSecond = acknowledged / elapsed;
     const others = [...refused].map(([status, n]) => `${n} × HTTP ${status}`).join(', ') || 'none';
     const rssMb = server.peakRssMb();
     process.stdout.write(
-      `Recording batches (${processes} server process${processes > 1 ? 'es' : ''}, ${CLIENTS} clients, ${SECONDS} s, POST /api/batches)\n` +
+      `Recording batches (${postgres ? 'PostgreSQL, ' : ''}${processes} server process${processes > 1 ? 'es' : ''}, ${CLIENTS} clients, ${SECONDS} s, POST /api/batches)\n` +
         `  ${perSecond.toFixed(0)} records/s, p50 ${percentile(times, 50).toFixed(0)} ms, p99 ${percentile(times, 99).toFixed(0)} ms; other answers: ${others}\n` +
         `  acknowledged (201) ${acknowledged}, new in the database ${stored}: ${stored === acknowledged ? 'equal' : 'DIFFERENT'}\n` +
         `  server peak RSS ${rssMb.toFixed(0)} MB (target ≤ 250 MB)\n`,
@@ -80,5 +117,6 @@ export async function benchRecordBatches(
     return { perSecond, consistent: stored === acknowledged };
   } finally {
     await server.stop();
+    await postgres?.drop();
   }
 }

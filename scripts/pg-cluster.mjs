@@ -100,12 +100,13 @@ export async function startCluster() {
     rmSync(pwfile);
     const port = await freePort();
     // fsync off: the cluster is thrown away after the tests, and a crash of the machine with it.
+    // LARDER_PG_DURABLE=1 keeps PostgreSQL's defaults, for benchmarks of writes a kitchen would see.
+    const durable = process.env.LARDER_PG_DURABLE === '1';
     const settings = [
       '-c listen_addresses=127.0.0.1',
       `-p ${port}`,
       `-c unix_socket_directories=${dir}`,
-      '-c fsync=off',
-      '-c full_page_writes=off',
+      ...(durable ? [] : ['-c fsync=off', '-c full_page_writes=off']),
       '-c max_connections=300',
     ].join(' ');
     runAs(owner, path.join(bin, 'pg_ctl'), [
