@@ -4,12 +4,15 @@ import { cpSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync }
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { buildBundle, BUNDLES } from '../scripts/bundles.mjs';
+import { WARM_UP_AFTER_MS } from '../server/pdf/warm-pdf.ts';
 
 /** A running server and how to reach and stop it. */
 export interface BenchServer {
   readonly url: string;
   readonly child: ChildProcess;
   readonly dataDir: string;
+  /** When the server said it listens (performance.now()). */
+  readonly listenedAt: number;
   /** Resident memory of the server process now, in MB. */
   rssMb(): number;
   /** The most resident memory a server process has held since it started (VmHWM), in MB. */
@@ -76,10 +79,12 @@ export async function startBenchServer(
         }
       }),
     );
+  const listenedAt = performance.now();
   return {
     url,
     child,
     dataDir,
+    listenedAt,
     rssMb: () => statusMb('VmRSS'),
     peakRssMb: () => statusMb('VmHWM'),
     cpuSeconds: () => processCpuSeconds(child.pid),
@@ -162,6 +167,9 @@ export function basicAuth(username: string, password: string): { authorization: 
  */
 export async function settled(server: BenchServer): Promise<number> {
   const start = performance.now();
+  // A quiet half second before the warm-up has begun proves nothing: it is still to come.
+  const warmUpDone = server.listenedAt + WARM_UP_AFTER_MS + 500;
+  if (start < warmUpDone) await new Promise((resolve) => setTimeout(resolve, warmUpDone - start));
   for (;;) {
     const before = server.cpuSeconds();
     await new Promise((resolve) => setTimeout(resolve, 500));
