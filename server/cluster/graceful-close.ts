@@ -4,6 +4,11 @@ import type { IncomingMessage, Server, ServerResponse } from 'node:http';
 export const GRACE_MS = 10_000;
 /** How often idle keep-alive connections are closed while the server drains. */
 const IDLE_SWEEP_MS = 50;
+/**
+ * How long a request whose client went away still counts as at work if its handler never ends
+ * the answer: a file or PDF being streamed stops with its connection and never calls `end()`.
+ */
+export const ABANDONED_MS = 2_000;
 
 /** Requests a server's handlers are still working on, and who waits for there to be none. */
 interface AtWork {
@@ -27,13 +32,18 @@ export function trackRequests(server: Server): void {
     work.count++;
     const end = res.end.bind(res);
     let ended = false;
+    const done = (): void => {
+      if (ended) return;
+      ended = true;
+      if (--work.count === 0) for (const resolve of work.idle.splice(0)) resolve();
+    };
     res.end = ((...args: Parameters<ServerResponse['end']>) => {
-      if (!ended) {
-        ended = true;
-        if (--work.count === 0) for (const resolve of work.idle.splice(0)) resolve();
-      }
+      done();
       return end(...args);
     }) as ServerResponse['end'];
+    res.once('close', () => {
+      if (!ended) setTimeout(done, ABANDONED_MS).unref();
+    });
   });
 }
 
