@@ -7,6 +7,7 @@ interface AddOptions {
   name?: string;
   role: 'admin' | 'cook' | 'reviewer';
   email?: string;
+  site?: string;
   json?: boolean;
 }
 
@@ -29,10 +30,11 @@ export function usersCommand(io: Io): Command {
         .makeOptionMandatory(),
     )
     .option('--email <address>', 'e-mail address')
+    .option('--site <key>', 'the role holds at this site only (default: at every site)')
     .option('--json', 'print the person as JSON')
     .addHelpText(
       'after',
-      `\nExamples:\n  larder users add rosa --name "Rosa Quennick" --role admin\n  echo "$PASSWORD" | larder users add tobin --role cook\n${EXIT_CODES_HELP}`,
+      `\nExamples:\n  larder users add rosa --name "Rosa Quennick" --role admin\n  echo "$PASSWORD" | larder users add tobin --role cook\n  larder users add maren --role cook --site quay\n${EXIT_CODES_HELP}`,
     )
     .action(async (username: string, options: AddOptions) => {
       if (!/^[a-z][a-z0-9._-]{1,31}$/.test(username)) {
@@ -47,11 +49,13 @@ export function usersCommand(io: Io): Command {
         displayName: options.name ?? username,
         role: options.role,
         email: options.email,
+        site: options.site,
       });
+      const where = options.site === undefined ? '' : ` at ${options.site} only`;
       io.out(
         options.json
           ? `${JSON.stringify(person, null, 2)}\n`
-          : `Added ${person.username} (${person.role}).\n`,
+          : `Added ${person.username} (${person.role}${where}).\n`,
       );
     });
 

@@ -1,4 +1,9 @@
-import { MIN_PASSWORD_LENGTH, type Person, type Role } from '../../server/records/records.ts';
+import {
+  MIN_PASSWORD_LENGTH,
+  RecordsError,
+  type Person,
+  type Role,
+} from '../../server/records/records.ts';
 import { withLocalRecords } from '../records/local-records.ts';
 import { readNewPassword } from './read-password.ts';
 
@@ -8,16 +13,24 @@ export function addUser(options: {
   displayName: string;
   role: Role;
   email?: string;
+  /** The one site the role holds at; without it, the role holds at every site. */
+  site?: string;
 }): Promise<Person> {
   return withLocalRecords('users', async (records) => {
-    // A taken name is refused before a password is asked for.
-    await records.usernameFree(options.username);
+    const { site, ...person } = options;
+    // A taken name or an unknown site is refused before a password is asked for.
+    await records.usernameFree(person.username);
+    if (site !== undefined && !(await records.listSites()).some((s) => s.key === site))
+      throw new RecordsError(
+        'not-found',
+        'no-such-site',
+        `no site "${site}"; larder sites lists them`,
+      );
     const password = await readNewPassword(MIN_PASSWORD_LENGTH);
-    const { person } = await records.addPerson(
-      { ...options, email: options.email ?? null, password },
-      { actorName: 'larder users add (command line)' },
-    );
-    return person;
+    const request = { ...person, email: person.email ?? null, password };
+    const by = { actorName: 'larder users add (command line)' };
+    if (site !== undefined) return records.addPersonAtSite(request, site, by);
+    return (await records.addPerson(request, by)).person;
   });
 }
 

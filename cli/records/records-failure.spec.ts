@@ -37,6 +37,11 @@ describe('record keeping failures as the command says them', () => {
       assert.equal(cliErrorOf(failure({ kind: 'not-found' }), verb).exitCode, EXIT.usage);
   });
 
+  it('should exit 2, not 3, for a site that is not there or not theirs, even while recording', () => {
+    const site = failure({ kind: 'not-found', code: 'no-such-site' });
+    assert.equal(cliErrorOf(site, 'record').exitCode, EXIT.usage);
+  });
+
   it('should exit 2 for bad input, a taken name or a role that may not, with each detail a line', () => {
     for (const kind of ['bad-input', 'conflict', 'forbidden'] as const)
       assert.equal(cliErrorOf(failure({ kind }), 'list').exitCode, EXIT.usage);

@@ -51,7 +51,8 @@ function formulaAtFault({ code, details }: RecordsFailureFacts): boolean {
 function exitCodeOf(failure: RecordsFailureFacts, verb: RecordsVerb): number {
   if (failure.code === 'critical-limit') return EXIT.critical;
   if (formulaAtFault(failure)) return EXIT.formula;
-  if (failure.kind === 'not-found') return NOT_FOUND_EXIT[verb];
+  // A site named with --site is the command line's, whatever the verb.
+  if (failure.kind === 'not-found' && failure.code !== 'no-such-site') return NOT_FOUND_EXIT[verb];
   return EXIT.usage;
 }
 

@@ -1,7 +1,8 @@
 import type { Person } from '../../shared/api/person.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
-import type { AuditedBy } from '../people/add-person.ts';
+import { addPerson, type AuditedBy, type NewPersonRequest } from '../people/add-person.ts';
+import type { PeopleRepository } from '../people/people-repository.ts';
 import { defaultSite } from '../sites/resolve-site.ts';
 import { SiteRepository, type Site } from '../sites/site-repository.ts';
 import type { SiteScope } from '../sites/site-scope.ts';
@@ -104,4 +105,39 @@ export async function addSite(
     );
     return site;
   });
+}
+
+/**
+ * Adds a person whose role holds at one site only (a cook at one shop), as the API's change of a
+ * person's sites does: no role at every site, a role at that one, and both in the audit log.
+ */
+export async function addPersonAtSite(
+  deps: { db: Database; audit: AuditRepository; people: PeopleRepository },
+  request: NewPersonRequest,
+  key: string,
+  by: AuditedBy,
+): Promise<Person> {
+  const sites = new SiteRepository(deps.db);
+  const { alongside } = await addPerson(request, by, deps, async (transaction, added) => {
+    const site = await sites.byKey(key, transaction);
+    if (!site)
+      throw new RecordsError(
+        'not-found',
+        'no-such-site',
+        `no site "${key}"; larder sites lists them`,
+      );
+    await sites.setRoles(added.id, [{ siteId: site.id, role: request.role }], transaction);
+    const person = await deps.people.update(added.id, { roleEverywhere: false }, transaction);
+    await deps.audit.append(
+      {
+        ...by,
+        action: 'person-change',
+        subject: added.username,
+        detail: { roleEverywhere: false, sites: [{ key, role: request.role }] },
+      },
+      transaction,
+    );
+    return person ?? added;
+  });
+  return alongside as Person;
 }

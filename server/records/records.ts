@@ -435,6 +435,13 @@ export class Records {
     );
   }
 
+  /** Adds a person whose role holds at the site `key` only. */
+  addPersonAtSite(request: NewPersonRequest, key: string, by: AuditedBy): Promise<Person> {
+    return this.guard(async () =>
+      (await import('./records-sites.ts')).addPersonAtSite(this.deps, request, key, by),
+    );
+  }
+
   /** Everyone, active or not. */
   listPeople(): Promise<Person[]> {
     return this.guard(() => this.deps.people.list());

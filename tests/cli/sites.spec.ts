@@ -85,6 +85,43 @@ describe('larder sites and --site', () => {
       /no site "nowhere"/,
     );
   });
+
+  it('should add a cook whose role holds at one site only, and refuse a site that does not exist', async (t) => {
+    const records = await localRecordsEnv(t);
+    assertExit(
+      await runLarder(['sites', 'add', 'harbour', '--name', 'Harbour'], { env: records }),
+      0,
+    );
+    const added = await runLarder(['users', 'add', 'pell', '--role', 'cook', '--site', 'harbour'], {
+      env: { ...records, LARDER_NEW_PASSWORD: 'pell-pass-01' },
+    });
+    assertExit(added, 0);
+    assert.match(added.stdout, /Added pell \(cook at harbour only\)/);
+    const env = { ...records, LARDER_USER: 'pell', LARDER_PASSWORD: 'pell-pass-01' };
+    // Their one site is the default: the batch is the shop's.
+    const recorded = await runLarder([...BELLY, '--record', '--json'], { env });
+    assertExit(recorded, 0);
+    const lot = stdoutJson<{ lotCode: string }>(recorded).lotCode;
+    assert.deepEqual(await lots(env, '--site', 'harbour'), [lot]);
+    // No role at the main kitchen: it is not theirs to name. A site is the command line's
+    // fault (2), not the formula's (3).
+    assertCleanFailure(
+      await runLarder([...BELLY, '--record', '--site', 'main'], { env }),
+      2,
+      /no site "main" of yours/,
+    );
+    assertCleanFailure(
+      await runLarder(['users', 'add', 'wren', '--role', 'cook', '--site', 'nowhere'], {
+        env: { ...records, LARDER_NEW_PASSWORD: 'wren-pass-01' },
+      }),
+      2,
+      /no site "nowhere"; larder sites lists them/,
+    );
+    const people = await runLarder(['users', 'list', '--json'], { env: records });
+    assertExit(people, 0);
+    const names = stdoutJson<{ username: string }[]>(people).map((p) => p.username);
+    assert.ok(names.includes('pell') && !names.includes('wren'), names.join(', '));
+  });
 });
 
 describe('larder stock, trace, report and recall at a site', () => {
