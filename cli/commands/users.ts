@@ -34,7 +34,7 @@ export function usersCommand(io: Io): Command {
     .option('--json', 'print the person as JSON')
     .addHelpText(
       'after',
-      `\nExamples:\n  larder users add rosa --name "Rosa Quennick" --role admin\n  echo "$PASSWORD" | larder users add tobin --role cook\n  larder users add maren --role cook --site quay\n${EXIT_CODES_HELP}`,
+      `\nExamples:\n  larder users add rosa --name "Rosa Quennick" --role admin\n  echo "$PASSWORD" | larder users add tobin --role cook\n  larder users add pell --role cook --site saltmarrow\n${EXIT_CODES_HELP}`,
     )
     .action(async (username: string, options: AddOptions) => {
       if (!/^[a-z][a-z0-9._-]{1,31}$/.test(username)) {

@@ -1,9 +1,4 @@
-import {
-  MIN_PASSWORD_LENGTH,
-  RecordsError,
-  type Person,
-  type Role,
-} from '../../server/records/records.ts';
+import { MIN_PASSWORD_LENGTH, type Person, type Role } from '../../server/records/records.ts';
 import { withLocalRecords } from '../records/local-records.ts';
 import { readNewPassword } from './read-password.ts';
 
@@ -20,12 +15,7 @@ export function addUser(options: {
     const { site, ...person } = options;
     // A taken name or an unknown site is refused before a password is asked for.
     await records.usernameFree(person.username);
-    if (site !== undefined && !(await records.listSites()).some((s) => s.key === site))
-      throw new RecordsError(
-        'not-found',
-        'no-such-site',
-        `no site "${site}"; larder sites lists them`,
-      );
+    if (site !== undefined) await records.requireSite(site);
     const password = await readNewPassword(MIN_PASSWORD_LENGTH);
     const request = { ...person, email: person.email ?? null, password };
     const by = { actorName: 'larder users add (command line)' };

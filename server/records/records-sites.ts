@@ -1,3 +1,4 @@
+import type { Transaction } from 'sequelize';
 import type { Person } from '../../shared/api/person.ts';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
@@ -107,6 +108,22 @@ export async function addSite(
   });
 }
 
+/** The site with this key; refused as not found (a site of the install, not only the person's). */
+export async function requireSite(
+  db: Database,
+  key: string,
+  transaction?: Transaction,
+): Promise<Site> {
+  const site = await new SiteRepository(db).byKey(key, transaction);
+  if (!site)
+    throw new RecordsError(
+      'not-found',
+      'no-such-site',
+      `no site "${key}"; larder sites lists them`,
+    );
+  return site;
+}
+
 /**
  * Adds a person whose role holds at one site only (a cook at one shop), as the API's change of a
  * person's sites does: no role at every site, a role at that one, and both in the audit log.
@@ -117,16 +134,13 @@ export async function addPersonAtSite(
   key: string,
   by: AuditedBy,
 ): Promise<Person> {
-  const sites = new SiteRepository(deps.db);
   const { alongside } = await addPerson(request, by, deps, async (transaction, added) => {
-    const site = await sites.byKey(key, transaction);
-    if (!site)
-      throw new RecordsError(
-        'not-found',
-        'no-such-site',
-        `no site "${key}"; larder sites lists them`,
-      );
-    await sites.setRoles(added.id, [{ siteId: site.id, role: request.role }], transaction);
+    const site = await requireSite(deps.db, key, transaction);
+    await new SiteRepository(deps.db).setRoles(
+      added.id,
+      [{ siteId: site.id, role: request.role }],
+      transaction,
+    );
     const person = await deps.people.update(added.id, { roleEverywhere: false }, transaction);
     await deps.audit.append(
       {

@@ -435,6 +435,13 @@ export class Records {
     );
   }
 
+  /** The site with this key; refused as not found when the install has none. */
+  requireSite(key: string): Promise<Site> {
+    return this.guard(async () =>
+      (await import('./records-sites.ts')).requireSite(this.deps.db, key),
+    );
+  }
+
   /** Adds a person whose role holds at the site `key` only. */
   addPersonAtSite(request: NewPersonRequest, key: string, by: AuditedBy): Promise<Person> {
     return this.guard(async () =>
