@@ -2,7 +2,13 @@ import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
 import type { Page } from 'playwright-core';
 import { assertAccessible } from './accessibility.ts';
-import { collectConsoleErrors, startConsole, type ConsoleSession } from './browser.ts';
+import {
+  choose,
+  collectConsoleErrors,
+  dialogSettled,
+  startConsole,
+  type ConsoleSession,
+} from './browser.ts';
 import { SIZES } from './screen-walk.ts';
 
 const TOBIN = 'Tobin Marrowfeld (cook)';
@@ -193,5 +199,60 @@ describe('people, the audit log and the outbox in the console', () => {
     await reviewer.getByRole('heading', { name: 'This page is for admins and cooks' }).waitFor();
     await reviewer.getByRole('link', { name: 'Go to the batch log' }).click();
     await reviewer.waitForURL(/\/batches$/);
+  });
+
+  it('should give a person a role per site of a group, and name the sites in the list', async (t) => {
+    const session = await startConsole(t, { env: { LARDER_DEMO_SITES: '2' } });
+    const { server } = session;
+    const page = await session.page('rosa');
+    const errors = collectConsoleErrors(page);
+    await page.goto(`${server.url}/people`, { waitUntil: 'networkidle' });
+    const row = (username: string) =>
+      page.getByTestId('person-row').and(page.locator(`[data-username="${username}"]`));
+    const roles = async (username: string) =>
+      (await row(username).getByTestId('person-role-text').innerText()).trim();
+    /** Tobin's sites as the server gives them to him: [key, role] each. */
+    const tobinsSites = async () =>
+      (await server.as('tobin').get('/api/sites')).json.sites.map(
+        (site: { key: string; role: string }) => [site.key, site.role],
+      );
+    // The demo's shop cook cooks at the shop and nowhere else (server/demo/demo-people.ts).
+    assert.equal(await roles('maren'), 'Cook at Saltmarrow Quay shop only');
+    assert.equal(await roles('tobin'), 'Cook');
+    await atEveryWidth(session, page, 'sites-list');
+
+    // Tobin stops cooking at the smokehouse and reviews at the shop only.
+    await row('tobin')
+      .getByRole('button', { name: `Edit ${TOBIN}` })
+      .click();
+    await dialogSettled(page);
+    const dialog = page.getByTestId('edit-person-dialog');
+    assert.match(await dialog.innerText(), /At Quillmoor Smokehouse[\s\S]*At Saltmarrow Quay shop/);
+    await choose(page, 'person-role', /^None/);
+    assert.match(await page.getByTestId('site-role-main').innerText(), /No role here/);
+    await choose(page, 'site-role-saltmarrow', /^Reviewer$/);
+    await atEveryWidth(session, page, 'sites-edit');
+    await page.getByTestId('person-submit').click();
+    await dialog.waitFor({ state: 'detached' });
+    assert.equal(await roles('tobin'), 'Reviewer at Saltmarrow Quay shop only');
+
+    // The server holds it: Tobin sees the shop alone, as its reviewer.
+    assert.deepEqual(await tobinsSites(), [['saltmarrow', 'reviewer']]);
+
+    // A cook at every site again, still the shop's reviewer.
+    await row('tobin')
+      .getByRole('button', { name: `Edit ${TOBIN}` })
+      .click();
+    await dialogSettled(page);
+    await choose(page, 'person-role', /^Cook/);
+    assert.match(await page.getByTestId('site-role-main').innerText(), /As at every site \(Cook\)/);
+    await page.getByTestId('person-submit').click();
+    await dialog.waitFor({ state: 'detached' });
+    assert.equal(await roles('tobin'), 'Cook; Reviewer at Saltmarrow Quay shop');
+    assert.deepEqual(await tobinsSites(), [
+      ['main', 'cook'],
+      ['saltmarrow', 'reviewer'],
+    ]);
+    assert.deepEqual(errors, []);
   });
 });

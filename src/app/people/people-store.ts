@@ -15,7 +15,9 @@ export interface NewPerson {
 }
 
 /** What an admin may change about a person (PATCH /api/people/:id). */
-export type PersonChanges = Partial<Pick<Person, 'displayName' | 'email' | 'role' | 'active'>>;
+export type PersonChanges = Partial<
+  Pick<Person, 'displayName' | 'email' | 'role' | 'active' | 'roleEverywhere' | 'sites'>
+>;
 
 /**
  * A person just added, with the password the server made up for them (null when one was given)

@@ -8,4 +8,4 @@ export type {
   SessionInfo,
   SessionState,
 } from '../../../../shared/api/person.ts';
-export type { SiteInfo, SiteList } from '../../../../shared/api/site.ts';
+export type { SiteInfo, SiteList, SiteRole } from '../../../../shared/api/site.ts';

@@ -40,6 +40,7 @@ import { PersonAddDialog } from '../person-add-dialog/person-add-dialog';
 import { PersonEditDialog } from '../person-edit-dialog/person-edit-dialog';
 import { PersonStatusDialog } from '../person-status-dialog/person-status-dialog';
 import { roleLabel } from '../role-options';
+import { adminEverywhere, rolesInWords } from '../site-roles';
 
 const FORM_DIALOG: MatDialogConfig = { width: '520px', maxWidth: '95vw' };
 const CONFIRM_DIALOG: MatDialogConfig = { width: '480px', maxWidth: '95vw', role: 'alertdialog' };
@@ -88,7 +89,16 @@ export default class PeopleList implements OnInit {
       ? ['name', 'actions']
       : ['name', 'username', 'role', 'email', 'status', 'actions'],
   );
-  protected readonly roleLabel = roleLabel;
+  /** The group's sites, when there are several (an admin of the group sees them all). */
+  private readonly sites = computed(() =>
+    this.session.siteCount() > 1 ? this.session.sites() : [],
+  );
+  /** A person's role in words; on an install of several sites, with the site of each role. */
+  protected readonly roleText = computed(() => {
+    const sites = this.sites();
+    return (person: Person) =>
+      sites.length > 0 ? rolesInWords(person, sites) : roleLabel(person.role);
+  });
   /** The id of the person whose invitation is being sent again, or null. */
   protected readonly resending = signal<number | null>(null);
   /** "5 people: 4 active, 1 inactive". */
@@ -133,7 +143,7 @@ export default class PeopleList implements OnInit {
       .afterClosed()
       .subscribe((changed) => {
         if (!changed) return;
-        if (changed.id === this.meId() && changed.role !== 'admin') {
+        if (changed.id === this.meId() && !adminEverywhere(changed)) {
           // The session still says admin; a fresh page load asks the server who we are now.
           this.document.location.assign('/batches');
           return;

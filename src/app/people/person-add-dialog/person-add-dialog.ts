@@ -25,6 +25,7 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { ApiError } from '../../core/api/api-error';
 import { Role } from '../../core/api/api-types';
 import { messageOf } from '../../core/api/message-of';
+import { SessionStore } from '../../core/auth/session-store';
 import { GeneratedPassword } from '../generated-password/generated-password';
 import { InvitationLink } from '../invitation-link/invitation-link';
 import { AddedPerson, PeopleStore } from '../people-store';
@@ -74,6 +75,8 @@ import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 })
 export class PersonAddDialog {
   private readonly store = inject(PeopleStore);
+  /** Whether the install has several sites: the role chosen here holds at every one. */
+  protected readonly severalSites = inject(SessionStore).siteCount() > 1;
   private readonly dialogRef = inject<MatDialogRef<PersonAddDialog, AddedPerson>>(MatDialogRef);
   private readonly injector = inject(Injector);
   private readonly reveal = viewChild(GeneratedPassword);

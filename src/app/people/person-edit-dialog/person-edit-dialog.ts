@@ -19,9 +19,19 @@ import { messageOf } from '../../core/api/message-of';
 import { SessionStore } from '../../core/auth/session-store';
 import { PeopleStore, PersonChanges } from '../people-store';
 import { DISPLAY_NAME_MAX, EMAIL_MAX, EMAIL_PATTERN } from '../person-rules';
-import { ROLE_OPTIONS } from '../role-options';
+import { ROLE_OPTIONS, roleLabel } from '../role-options';
+import {
+  EverywhereChoice,
+  SiteChoice,
+  adminEverywhere,
+  roleChanges,
+  roleChoices,
+} from '../site-roles';
 
-/** Changes a person's display name, e-mail and role. Closes with the changed person. */
+/**
+ * Changes a person's display name, e-mail and role; on an install of several sites, their role at
+ * every site and at each site. Closes with the changed person.
+ */
 @Component({
   selector: 'app-person-edit-dialog',
   imports: [
@@ -50,10 +60,15 @@ export class PersonEditDialog {
 
   /** The person as the list showed them. */
   protected readonly person = inject<Person>(MAT_DIALOG_DATA);
-  protected readonly isSelf = inject(SessionStore).person()?.id === this.person.id;
+  private readonly session = inject(SessionStore);
+  protected readonly isSelf = this.session.person()?.id === this.person.id;
   protected readonly roles = ROLE_OPTIONS;
   protected readonly rules = { DISPLAY_NAME_MAX };
-  protected readonly form = inject(NonNullableFormBuilder).group({
+  /** The sites of the group, when there are several (an admin of the group sees them all). */
+  protected readonly sites = this.session.siteCount() > 1 ? this.session.sites() : [];
+  private readonly startChoices = roleChoices(this.person, this.sites);
+  private readonly fb = inject(NonNullableFormBuilder);
+  protected readonly form = this.fb.group({
     displayName: [
       this.person.displayName,
       [Validators.required, Validators.maxLength(DISPLAY_NAME_MAX)],
@@ -62,15 +77,21 @@ export class PersonEditDialog {
       this.person.email ?? '',
       [Validators.pattern(EMAIL_PATTERN), Validators.maxLength(EMAIL_MAX)],
     ],
-    role: [this.person.role],
+    role: [this.startChoices.everywhere as EverywhereChoice],
+    siteRoles: this.fb.record<SiteChoice>(this.startChoices.sites),
   });
-  private readonly role = toSignal(this.form.controls.role.valueChanges, {
-    initialValue: this.person.role,
+  protected readonly role = toSignal(this.form.controls.role.valueChanges, {
+    initialValue: this.startChoices.everywhere,
   });
-  /** Whether an admin is about to take away their own admin role. */
+  /** Whether an admin is about to take away their own admin role (at every site). */
   protected readonly losesOwnAdmin = computed(
-    () => this.isSelf && this.person.role === 'admin' && this.role() !== 'admin',
+    () => this.isSelf && adminEverywhere(this.person) && this.role() !== 'admin',
   );
+  /** What a site without a role of its own gets, in words. */
+  protected readonly sameChoice = computed(() => {
+    const role = this.role();
+    return role === 'none' ? 'No role here' : `As at every site (${roleLabel(role)})`;
+  });
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
 
@@ -97,14 +118,14 @@ export class PersonEditDialog {
 
   // Only what changed goes to the server, so the audit log records only that.
   private changes(): PersonChanges {
-    const { displayName, email, role } = this.form.getRawValue();
+    const { displayName, email, role, siteRoles } = this.form.getRawValue();
     const newEmail = email.trim() || null;
     return {
       ...(displayName.trim() !== this.person.displayName
         ? { displayName: displayName.trim() }
         : {}),
       ...(newEmail !== this.person.email ? { email: newEmail } : {}),
-      ...(role !== this.person.role ? { role } : {}),
+      ...roleChanges(this.person, { everywhere: role, sites: siteRoles }),
     };
   }
 }
