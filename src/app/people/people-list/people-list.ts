@@ -148,6 +148,8 @@ export default class PeopleList implements OnInit {
           this.document.location.assign('/batches');
           return;
         }
+        // Our own role at a site may have changed: the site picker shows the new one.
+        if (changed.id === this.meId()) void this.session.loadSites();
         this.tell(`Changes to ${changed.displayName} are saved.`);
       });
   }
