@@ -33,7 +33,7 @@ const suites = browser
  * (package.json's test:e2e), one file at a time.
  */
 const runnerArgs = browser
-  ? ['--test-timeout=180000', '--test-concurrency=1']
+  ? ['--test-timeout=300000', '--test-concurrency=1']
   : ['--test-timeout=600000'];
 
 // A cluster already running (CI starts one and stops it in a trap) is used as it is.
