@@ -11,6 +11,7 @@ import { ROLES, type Person, type Role } from '../../shared/api/person.ts';
 import { SITE_KEY_PATTERN, type SiteRole } from '../../shared/api/site.ts';
 import { noSuchSite } from '../sites/resolve-site.ts';
 import { SiteRepository } from '../sites/site-repository.ts';
+import { holdRoleAtOneSite } from './role-at-one-site.ts';
 
 const USERNAME = { type: 'string', pattern: '^[a-z][a-z0-9._-]{1,31}$' } as const;
 const DISPLAY_NAME = { type: 'string', minLength: 1, maxLength: 80 } as const;
@@ -33,6 +34,8 @@ const ADD_BODY = {
     email: EMAIL,
     role: ROLE,
     password: PASSWORD,
+    // The role holds at this site only (a cook of one shop); without it, at every site.
+    site: { type: 'string', pattern: SITE_KEY_PATTERN },
   },
 } as const;
 
@@ -161,19 +164,39 @@ export function peopleRouter(context: AppContext): Router {
       email?: string | null;
       role: Role;
       password?: string;
+      site?: string;
     };
+    const { site: key, ...request } = body;
     const password = body.password ?? randomPassword();
     const by = { actor: personOf(req), ip: req.ip };
-    const { person, alongside: invitation } = await records.addPerson(
-      { ...body, email: body.email ?? null, password },
+    const { alongside } = await records.addPerson(
+      { ...request, email: body.email ?? null, password },
       by,
-      // With an address, an invitation to set their own password goes out with the add.
-      async (transaction, added): Promise<InvitationSent | null> =>
-        added.email ? sendInvitation(context, transaction, added, by) : null,
+      async (transaction, added) => {
+        let person = added;
+        if (key !== undefined) {
+          const site = await sites.byKey(key, transaction);
+          if (!site) throw noSuchSite(key);
+          person = await holdRoleAtOneSite(context, transaction, added, site, by);
+        }
+        // With an address, an invitation to set their own password goes out with the add.
+        const invitation: InvitationSent | null = added.email
+          ? await sendInvitation(context, transaction, added, by)
+          : null;
+        return { person, invitation };
+      },
     );
+    const { person, invitation } = alongside as {
+      person: Person;
+      invitation: InvitationSent | null;
+    };
     if (invitation) mail.delivery.kick();
     // A generated password is shown this once, for the admin to pass on.
-    res.status(201).json({ person, ...(body.password ? {} : { password }), invitation });
+    res.status(201).json({
+      person: (await withSites([person]))[0],
+      ...(body.password ? {} : { password }),
+      invitation,
+    });
   });
 
   router.post('/:id/invitation', noBody, validateBody(EMPTY_BODY), async (req, res) => {

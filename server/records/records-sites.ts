@@ -4,6 +4,7 @@ import type { AuditRepository } from '../audit/audit-repository.ts';
 import type { Database } from '../db/database.ts';
 import { addPerson, type AuditedBy, type NewPersonRequest } from '../people/add-person.ts';
 import type { PeopleRepository } from '../people/people-repository.ts';
+import { holdRoleAtOneSite } from '../people/role-at-one-site.ts';
 import { defaultSite } from '../sites/resolve-site.ts';
 import { SiteRepository, type Site } from '../sites/site-repository.ts';
 import type { SiteScope } from '../sites/site-scope.ts';
@@ -134,24 +135,8 @@ export async function addPersonAtSite(
   key: string,
   by: AuditedBy,
 ): Promise<Person> {
-  const { alongside } = await addPerson(request, by, deps, async (transaction, added) => {
-    const site = await requireSite(deps.db, key, transaction);
-    await new SiteRepository(deps.db).setRoles(
-      added.id,
-      [{ siteId: site.id, role: request.role }],
-      transaction,
-    );
-    const person = await deps.people.update(added.id, { roleEverywhere: false }, transaction);
-    await deps.audit.append(
-      {
-        ...by,
-        action: 'person-change',
-        subject: added.username,
-        detail: { roleEverywhere: false, sites: [{ key, role: request.role }] },
-      },
-      transaction,
-    );
-    return person ?? added;
-  });
+  const { alongside } = await addPerson(request, by, deps, async (transaction, added) =>
+    holdRoleAtOneSite(deps, transaction, added, await requireSite(deps.db, key, transaction), by),
+  );
   return alongside as Person;
 }

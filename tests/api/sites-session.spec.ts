@@ -89,4 +89,52 @@ describe('sites: a signed-in console person', () => {
     assert.equal(none.status, 403, none.text);
     assert.equal(none.json.error.code, 'no-site');
   });
+
+  it('should add a person whose role holds at one site only, from the start', async () => {
+    const added = await send(server(), 'rosa', {
+      method: 'POST',
+      path: '/api/people',
+      body: {
+        username: 'harbour-reviewer',
+        displayName: 'Harbour reviewer',
+        role: 'reviewer',
+        password: SITE_PASSWORD,
+        site: OTHER_SITE.key,
+      },
+    });
+    assert.equal(added.status, 201, added.text);
+    assert.equal(added.json.person.roleEverywhere, false);
+    assert.deepEqual(added.json.person.sites, [{ key: OTHER_SITE.key, role: 'reviewer' }]);
+    const session = await signInAs(server(), 'harbour-reviewer');
+    const sites = await send(server(), session, { method: 'GET', path: '/api/sites' });
+    assert.deepEqual(
+      sites.json.sites.map((site: { key: string; role: string }) => [site.key, site.role]),
+      [[OTHER_SITE.key, 'reviewer']],
+    );
+    const audit = await send(server(), 'rosa', {
+      method: 'GET',
+      path: '/api/audit?subject=harbour-reviewer',
+    });
+    assert.deepEqual(audit.json.events.map((event: { action: string }) => event.action).sort(), [
+      'person-add',
+      'person-change',
+    ]);
+  });
+
+  it('should add nobody for a site that does not exist', async () => {
+    const refused = await send(server(), 'rosa', {
+      method: 'POST',
+      path: '/api/people',
+      body: { username: 'nowhere-cook', displayName: 'Nowhere', role: 'cook', site: 'nowhere' },
+    });
+    assert.equal(refused.status, 404, refused.text);
+    assert.equal(refused.json.error.code, 'no-such-site');
+    const people = await send(server(), 'rosa', { method: 'GET', path: '/api/people' });
+    assert.ok(
+      !people.json.people.some(
+        (person: { username: string }) => person.username === 'nowhere-cook',
+      ),
+      'no half-added person',
+    );
+  });
 });

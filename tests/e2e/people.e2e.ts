@@ -253,6 +253,24 @@ describe('people, the audit log and the outbox in the console', () => {
       ['main', 'cook'],
       ['saltmarrow', 'reviewer'],
     ]);
+
+    // A reviewer for the shop alone, added so from the start.
+    await page.getByTestId('add-person').click();
+    await dialogSettled(page);
+    await page.getByTestId('person-username').fill('quay-review');
+    await page.getByTestId('person-display-name').fill('Quay reviewer');
+    await choose(page, 'person-role', /^Reviewer/);
+    await choose(page, 'person-site', /^Only at Saltmarrow Quay shop$/);
+    await atEveryWidth(session, page, 'sites-add');
+    await page.getByTestId('person-submit').click();
+    await page.getByTestId('person-done').click();
+    await page.getByTestId('add-person-dialog').waitFor({ state: 'detached' });
+    assert.equal(await roles('quay-review'), 'Reviewer at Saltmarrow Quay shop only');
+    // The message of the change before may still be on its way out.
+    await page
+      .locator('mat-snack-bar-container')
+      .filter({ hasText: 'Quay reviewer is added as reviewer at Saltmarrow Quay shop only.' })
+      .waitFor();
     assert.deepEqual(errors, []);
   });
 });

@@ -11,6 +11,8 @@ export interface NewPerson {
   readonly displayName: string;
   readonly email: string | null;
   readonly role: Role;
+  /** The one site the role holds at; without it, every site. */
+  readonly site?: string;
   readonly password?: string;
 }
 

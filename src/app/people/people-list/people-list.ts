@@ -126,7 +126,9 @@ export default class PeopleList implements OnInit {
       .subscribe((added) => {
         if (!added) return;
         const { person, invitation } = added;
-        const role = roleLabel(person.role).toLowerCase();
+        // "cook", or "cook at Saltmarrow Quay shop only".
+        const words = this.roleText()(person);
+        const role = words.charAt(0).toLowerCase() + words.slice(1);
         this.tell(
           invitation?.link
             ? `${person.displayName} is added as ${role}; pass them the invitation link you copied.`

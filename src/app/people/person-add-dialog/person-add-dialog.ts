@@ -17,7 +17,14 @@ import {
   MatDialogRef,
   MatDialogTitle,
 } from '@angular/material/dialog';
-import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import {
+  MAT_FORM_FIELD_DEFAULT_OPTIONS,
+  MatError,
+  MatFormField,
+  MatHint,
+  MatLabel,
+  MatSuffix,
+} from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -69,14 +76,22 @@ import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
     GeneratedPassword,
     InvitationLink,
   ],
+  // A hint runs to two lines on a phone: let it push the next field down rather than overlap it.
+  providers: [
+    {
+      provide: MAT_FORM_FIELD_DEFAULT_OPTIONS,
+      useValue: { appearance: 'outline', subscriptSizing: 'dynamic' },
+    },
+  ],
   templateUrl: './person-add-dialog.html',
   styleUrl: './person-add-dialog.css',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PersonAddDialog {
   private readonly store = inject(PeopleStore);
-  /** Whether the install has several sites: the role chosen here holds at every one. */
-  protected readonly severalSites = inject(SessionStore).siteCount() > 1;
+  private readonly session = inject(SessionStore);
+  /** The sites of the group, when there are several: the role holds at every one, or one. */
+  protected readonly sites = this.session.siteCount() > 1 ? this.session.sites() : [];
   private readonly dialogRef = inject<MatDialogRef<PersonAddDialog, AddedPerson>>(MatDialogRef);
   private readonly injector = inject(Injector);
   private readonly reveal = viewChild(GeneratedPassword);
@@ -89,6 +104,8 @@ export class PersonAddDialog {
     displayName: ['', [Validators.required, Validators.maxLength(DISPLAY_NAME_MAX)]],
     email: ['', [Validators.pattern(EMAIL_PATTERN), Validators.maxLength(EMAIL_MAX)]],
     role: ['cook' as Role],
+    /** The one site the role holds at; '' for every site. */
+    site: [''],
     password: ['', [Validators.minLength(PASSWORD_MIN), Validators.maxLength(PASSWORD_MAX)]],
   });
   protected readonly busy = signal(false);
@@ -112,13 +129,14 @@ export class PersonAddDialog {
     }
     this.busy.set(true);
     this.failure.set(null);
-    const { username, displayName, email, role, password } = this.form.getRawValue();
+    const { username, displayName, email, role, site, password } = this.form.getRawValue();
     try {
       const added = await this.store.add({
         username: username.trim(),
         displayName: displayName.trim(),
         email: email.trim() || null,
         role,
+        ...(site ? { site } : {}),
         ...(password ? { password } : {}),
       });
       if (added.password === null && !added.invitation?.link) {
