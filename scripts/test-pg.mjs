@@ -27,7 +27,7 @@ const suites = browser
       .map((line) => line.replace(/#.*/, '').trim())
       .filter(Boolean);
 /**
- * The runner's limits. The API suites get ten minutes a test, not two (a suite's describe counts
+ * The runner's limits. The API suites get ten minutes a test, not five (a suite's describe counts
  * as one test: so does its whole file), as a server that seeds its own demo on PostgreSQL takes
  * several times longer (one round trip a statement). The browser suites keep their own
  * (package.json's test:e2e), one file at a time.
@@ -36,7 +36,7 @@ const runnerArgs = browser
   ? ['--test-timeout=300000', '--test-concurrency=1']
   : ['--test-timeout=600000'];
 
-// A cluster already running (CI starts one and stops it in a trap) is used as it is.
+// A cluster already running (LARDER_TEST_PG_URL, as a developer may have one) is used as it is.
 const given = process.env.LARDER_TEST_PG_URL;
 const { url, dir } = given ? { url: given, dir: null } : await startCluster();
 // Each test database is copied from one migrated template, made once for this run by the first
