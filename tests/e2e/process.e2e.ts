@@ -330,11 +330,18 @@ describe('the process record in the console', () => {
     const drawn = Date.now() - began;
     // Redraw: the chart's box narrows (a tablet turned on its side), the chart sees it and draws
     // the 1,440 points again at the new size; timed from the change to the frame after the
-    // canvas took its new width, i.e. the redrawn chart painted.
+    // canvas took its new width, i.e. the redrawn chart painted. The same number of frames with
+    // nothing to draw is timed first: on a busy machine frames come late whatever the page does
+    // (four took 164 ms with the API suites running beside this one), and only the rest is the
+    // redraw's own cost.
     const redraw = await page.evaluate(async () => {
       const canvas = document.querySelector('[data-testid="control-chart"]') as HTMLCanvasElement;
       const box = canvas.parentElement as HTMLElement;
       const before = canvas.width;
+      const idleFrom = performance.now();
+      for (let frame = 0; frame < 4; frame++)
+        await new Promise((resolve) => requestAnimationFrame(resolve));
+      const idlePerFrame = (performance.now() - idleFrom) / 4;
       const t0 = performance.now();
       box.style.width = `${Math.round(box.clientWidth * 0.7)}px`;
       let frames = 0;
@@ -343,16 +350,19 @@ describe('the process record in the console', () => {
         frames++;
       }
       await new Promise((resolve) => requestAnimationFrame(resolve));
-      return { ms: performance.now() - t0, frames: frames + 1, before, after: canvas.width };
+      const ms = performance.now() - t0;
+      const idle = idlePerFrame * (frames + 1);
+      return { ms, idle, frames: frames + 1, before, after: canvas.width };
     });
     const longest = await page.evaluate(() => (window as unknown as { longest: number }).longest);
     t.diagnostic(
-      `1440 readings: page and chart in ${drawn} ms; narrowed to redrawn and painted ${redraw.ms.toFixed(1)} ms (${redraw.frames} frames, canvas ${redraw.before} → ${redraw.after} px); longest task after the page opened ${longest.toFixed(0)} ms`,
+      `1440 readings: page and chart in ${drawn} ms; narrowed to redrawn and painted ${redraw.ms.toFixed(1)} ms (${redraw.frames} frames, canvas ${redraw.before} → ${redraw.after} px; as many idle frames ${redraw.idle.toFixed(1)} ms); longest task after the page opened ${longest.toFixed(0)} ms`,
     );
     assert.ok(redraw.after < redraw.before, 'the chart was drawn again at the narrower width');
-    // A frame at 60 Hz is about 16.7 ms; a redraw within a few frames is no jank a cook sees.
+    // A frame at 60 Hz is about 16.7 ms; a redraw costing a few frames is no jank a cook sees.
     // common practice, no source
-    assert.ok(redraw.ms < 100, `a redraw took ${redraw.ms} ms`);
+    const cost = redraw.ms - redraw.idle;
+    assert.ok(cost < 100, `a redraw took ${cost.toFixed(1)} ms more than idle frames`);
     await shoot(session, page, 'process-logger-820');
   });
 });
