@@ -89,13 +89,10 @@ export default class PeopleList implements OnInit {
       ? ['name', 'actions']
       : ['name', 'username', 'role', 'email', 'status', 'actions'],
   );
-  /** The group's sites, when there are several (an admin of the group sees them all). */
-  private readonly sites = computed(() =>
-    this.session.siteCount() > 1 ? this.session.sites() : [],
-  );
   /** A person's role in words; on an install of several sites, with the site of each role. */
   protected readonly roleText = computed(() => {
-    const sites = this.sites();
+    // The group's sites (an admin of the group sees them all); none on a single kitchen.
+    const sites = this.session.sites();
     return (person: Person) =>
       sites.length > 0 ? rolesInWords(person, sites) : roleLabel(person.role);
   });

@@ -90,8 +90,8 @@ import { IsoDayPipe } from '../../ui/batch-sheet/iso-day-pipe';
 export class PersonAddDialog {
   private readonly store = inject(PeopleStore);
   private readonly session = inject(SessionStore);
-  /** The sites of the group, when there are several: the role holds at every one, or one. */
-  protected readonly sites = this.session.siteCount() > 1 ? this.session.sites() : [];
+  /** The sites of a group (none on a single kitchen): the role holds at every one, or one. */
+  protected readonly sites = this.session.sites();
   private readonly dialogRef = inject<MatDialogRef<PersonAddDialog, AddedPerson>>(MatDialogRef);
   private readonly injector = inject(Injector);
   private readonly reveal = viewChild(GeneratedPassword);

@@ -64,8 +64,8 @@ export class PersonEditDialog {
   protected readonly isSelf = this.session.person()?.id === this.person.id;
   protected readonly roles = ROLE_OPTIONS;
   protected readonly rules = { DISPLAY_NAME_MAX };
-  /** The sites of the group, when there are several (an admin of the group sees them all). */
-  protected readonly sites = this.session.siteCount() > 1 ? this.session.sites() : [];
+  /** The sites of a group (an admin of the group sees them all); none on a single kitchen. */
+  protected readonly sites = this.session.sites();
   private readonly startChoices = roleChoices(this.person, this.sites);
   private readonly fb = inject(NonNullableFormBuilder);
   protected readonly form = this.fb.group({
