@@ -61,21 +61,28 @@ function readOnlySession(store: Store, sid: string, data: SessionData): Session 
   return Object.freeze(session) as unknown as Session;
 }
 
+/** A live session's data and its person (null when the person is gone). */
+export interface SessionFound {
+  data: SessionData;
+  person: SessionPerson | null;
+}
+
 /**
  * Reads the session of a request that cannot change it, without express-session's work for a
  * session that may change (a fresh session object, hashing it before and after the route to see
  * whether it changed, wrapping the response's end): its signed cookie is proved once per process
  * (the same value always proves the same way; a changed secret is a new process), and its row
- * and its person are read afresh on every request (`read`, one statement), so a sign-out, an
- * expiry, a deactivation, a role change or a new password takes effect at once, whichever server
- * process on the database made it. Returns false, having done nothing, when the cookie is
+ * and its person come from `read` on every request, which must reflect every commit already
+ * made (session-cache.ts), so a sign-out, an expiry, a deactivation, a role change or a new
+ * password takes effect at once, whichever server process on the database made it. `read` may
+ * answer at once (a kept session) or later (a query). Returns false, having done nothing, when the cookie is
  * missing or does not prove: express-session then handles the request exactly as before.
  */
 export function sessionReader(
   store: Store,
   secret: string,
   cookieName: string,
-  read: (sid: string) => Promise<{ data: SessionData; person: SessionPerson | null } | undefined>,
+  read: (sid: string) => SessionFound | undefined | Promise<SessionFound | undefined>,
 ): (req: Request, next: (error?: unknown) => void) => boolean {
   const proved = new Map<string, string>();
   return (req, next) => {
@@ -90,13 +97,16 @@ export function sessionReader(
       proved.set(value, sid);
     }
     const id = sid;
-    read(id).then((found) => {
+    const use = (found: SessionFound | undefined): void => {
       if (found) {
         req.session = readOnlySession(store, id, found.data) as Request['session'];
         req.sessionPerson = found.person;
       }
       next();
-    }, next);
+    };
+    const found = read(id);
+    if (found instanceof Promise) found.then(use, next);
+    else use(found);
     return true;
   };
 }

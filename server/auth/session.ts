@@ -3,8 +3,9 @@ import connectSessionSequelize from 'connect-session-sequelize';
 import type { Request, RequestHandler } from 'express';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
-import type { PeopleRepository } from '../people/people-repository.ts';
-import { sessionReader } from './session-reader.ts';
+import type { PeopleRepository, SessionRow } from '../people/people-repository.ts';
+import { SessionCache } from './session-cache.ts';
+import { sessionReader, type SessionFound } from './session-reader.ts';
 
 /** When a stored session ends, and what it holds (JSON), as the Sessions table keeps them. */
 interface SessionRowTimes {
@@ -72,10 +73,16 @@ export function sessionMiddleware(
   // with a random id and a hash of it, only for it to be thrown away unsaved: it gets none.
   // Signing in (POST /session, under the API's mount) is the one such request that starts one.
   const cookieName = `${SESSION_COOKIE}=`;
-  const readSession = sessionReader(store, secret, SESSION_COOKIE, async (sid) => {
-    const row = await people.findSession(sid);
+  // The row is kept while nothing is committed (session-cache.ts); its expiry is checked on
+  // every request all the same.
+  const rows = new SessionCache(db.commitMark, (sid) => people.findSession(sid));
+  const live = (row: SessionRow | undefined): SessionFound | undefined => {
     const data = liveSessionData(row);
     return data ? { data, person: row?.person ?? null } : undefined;
+  };
+  const readSession = sessionReader(store, secret, SESSION_COOKIE, (sid) => {
+    const row = rows.read(sid);
+    return row instanceof Promise ? row.then(live) : live(row);
   });
   return (req, res, next) => {
     if (changesSession(req)) return sessions(req, res, next);

@@ -4,6 +4,7 @@ import { Sequelize, Transaction } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as initial from './migrations/001-initial.ts';
 import { WriteQueue, retryWhileBusy } from './write-queue.ts';
+import { sqliteCommitMark } from './commit-mark.ts';
 import { connectPostgres, isPostgresUrl, postgresWrite } from './postgres-database.ts';
 import * as batchSortIndexes from './migrations/002-batch-sort-indexes.ts';
 import * as sessionCutoff from './migrations/003-session-cutoff.ts';
@@ -72,6 +73,12 @@ export interface Database {
    * IMMEDIATE), on PostgreSQL a serializable one, run again when it loses a race.
    */
   write<T>(work: (transaction: Transaction) => Promise<T>): Promise<T>;
+  /**
+   * Text that changes whenever any connection of any process commits, read without a query;
+   * undefined when the database cannot say so cheaply (PostgreSQL, SQLite in memory). What is
+   * kept under one mark holds until the mark changes (server/auth/session-cache.ts).
+   */
+  commitMark(): string | undefined;
   close(): Promise<void>;
 }
 
@@ -155,6 +162,8 @@ async function openPostgres(
     dialect: 'postgres',
     // How long a write keeps trying after lost races: the same setting as SQLite's busy wait.
     write: postgresWrite(sequelize, busyTimeoutMs),
+    // No cheap way to know of other processes' commits: every request asks the database.
+    commitMark: () => undefined,
     close: () => sequelize.close(),
   };
 }
@@ -205,6 +214,7 @@ async function openSqlite(
           busyTimeoutMs,
         ),
       ),
+    commitMark: file === ':memory:' ? () => undefined : sqliteCommitMark(file),
     close: () => sequelize.close(),
   };
 }

@@ -1,14 +1,21 @@
 // A session read by a second server process on the same database: signing in on one, then a
 // sign-out, a deactivation, a role change or a new password made on the first shows on the
-// second's very next request. Each signed-in request reads its session and person afresh (one
-// statement, server/auth/session-reader.ts); a cache of either in the second process would fail
-// here, since the second process is warmed up before each change.
+// second's very next request; and a change another program writes straight into the database
+// shows on both. On SQLite each process keeps what it read of a session until anything is
+// committed (server/auth/session-cache.ts); both processes are warmed up before each change, so
+// a kept session that outlived a commit would fail here.
 import assert from 'node:assert/strict';
 import { spawn } from 'node:child_process';
 import path from 'node:path';
 import { describe, it } from 'node:test';
 import { REPO_ROOT } from '../helpers/run-larder.ts';
-import { PASSWORDS, startTestServer, type DemoUser } from '../helpers/test-server.ts';
+import { Sequelize } from 'sequelize';
+import {
+  PASSWORDS,
+  startTestServer,
+  type DemoUser,
+  type TestServer,
+} from '../helpers/test-server.ts';
 
 interface Session {
   cookie: string;
@@ -50,6 +57,19 @@ async function secondProcess(
     });
     child.once('exit', (code) => reject(new Error(`the second server exited (${code}):\n${seen}`)));
   });
+}
+
+/** Runs one statement on a database connection of its own, as another program would. */
+async function writeElsewhere(server: TestServer, sql: string): Promise<void> {
+  const { databaseUrl, databaseFile } = server.context.config;
+  const sequelize = databaseUrl
+    ? new Sequelize(databaseUrl, { logging: false })
+    : new Sequelize({ dialect: 'sqlite', storage: databaseFile, logging: false });
+  try {
+    await sequelize.query(sql);
+  } finally {
+    await sequelize.close();
+  }
 }
 
 async function signIn(url: string, user: DemoUser): Promise<Session> {
@@ -126,5 +146,13 @@ describe('a session seen by another server process on the same database', () => 
       .request('PATCH', `/api/people/${idOf('tobin')}`, { active: false });
     assert.equal(deactivated.status, 200);
     assert.equal(await statusOf(other, cook, 'calc'), 401, 'deactivated elsewhere');
+
+    // An admin made a cook by another program, writing on a connection of its own.
+    const admin = await signIn(server.url, 'rosa');
+    assert.equal(await statusOf(server.url, admin, 'people'), 200);
+    assert.equal(await statusOf(other, admin, 'people'), 200);
+    await writeElsewhere(server, "UPDATE people SET role = 'cook' WHERE username = 'rosa'");
+    assert.equal(await statusOf(server.url, admin, 'people'), 403, 'changed by another program');
+    assert.equal(await statusOf(other, admin, 'people'), 403, 'on both processes');
   });
 });
