@@ -30,7 +30,8 @@ describe('the commit mark of a SQLite file', () => {
     await run(writer, 'PRAGMA journal_mode = WAL');
     await run(writer, 'CREATE TABLE t (x INTEGER)');
     const reader = open(file);
-    const mark = sqliteCommitMark(file);
+    const marks = sqliteCommitMark(file);
+    const mark = marks.read;
 
     const first = mark();
     assert.ok(first, 'a WAL file in use has a mark');
@@ -50,6 +51,7 @@ describe('the commit mark of a SQLite file', () => {
     await run(writer, 'PRAGMA wal_checkpoint(TRUNCATE)');
     await run(reader, 'INSERT INTO t VALUES (3)');
     assert.notEqual(mark(), third, 'and one after the log was emptied');
+    marks.close();
     await close(reader);
     await close(writer);
   });
@@ -58,8 +60,8 @@ describe('the commit mark of a SQLite file', () => {
     const file = path.join(dir, 'rollback.db');
     const db = open(file);
     await run(db, 'CREATE TABLE t (x INTEGER)');
-    assert.equal(sqliteCommitMark(file)(), undefined, 'a rollback journal, not WAL');
+    assert.equal(sqliteCommitMark(file).read(), undefined, 'a rollback journal, not WAL');
     await close(db);
-    assert.equal(sqliteCommitMark(path.join(dir, 'none.db'))(), undefined, 'no file');
+    assert.equal(sqliteCommitMark(path.join(dir, 'none.db')).read(), undefined, 'no file');
   });
 });

@@ -1,4 +1,4 @@
-import { closeSync, fstatSync, openSync, readSync } from 'node:fs';
+import { closeSync, openSync, readSync } from 'node:fs';
 
 /** The WAL-index header: two copies of 48 bytes at the start of the -shm file. */
 const HEADER_BYTES = 48;
@@ -11,23 +11,23 @@ const HEADER_BYTES = 48;
  * WAL-Index Format" (the header's iChange, "incremented with each transaction"). Reading it is
  * one pread, where asking SQLite is a trip through the thread pool.
  *
- * The returned function gives the header's bytes as text, or undefined when they cannot be
- * trusted: no -shm file (yet), the file since removed, or the two copies differing while a
- * commit writes them. A caller keeps nothing on undefined.
+ * `read` gives the header's bytes as text, or undefined when they cannot be trusted: no -shm
+ * file (yet), or the two copies differing while a commit writes them. A caller keeps nothing on
+ * undefined. `close` lets go of the file, when the database is closed.
  */
-export function sqliteCommitMark(file: string): () => string | undefined {
+export function sqliteCommitMark(file: string): { read(): string | undefined; close(): void } {
   const header = Buffer.alloc(2 * HEADER_BYTES);
   let fd: number | undefined;
-  return () => {
+  const close = (): void => {
+    if (fd !== undefined) closeSync(fd);
+    fd = undefined;
+  };
+  const read = (): string | undefined => {
     try {
-      // Opened on first use: the -shm file appears when the first connection goes into WAL.
+      // Opened on first use, once this process's own connection has the file in WAL. SQLite
+      // removes the -shm file only when the last connection closes, and this process keeps its
+      // connection open until it stops: the file opened is the one every commit writes to.
       fd ??= openSync(`${file}-shm`, 'r');
-      // A file removed (the last connection closed) and made anew is another file: look again.
-      if (fstatSync(fd).nlink === 0) {
-        closeSync(fd);
-        fd = undefined;
-        return undefined;
-      }
       if (readSync(fd, header, 0, header.length, 0) !== header.length) return undefined;
     } catch {
       return undefined;
@@ -36,4 +36,5 @@ export function sqliteCommitMark(file: string): () => string | undefined {
     if (!first.equals(header.subarray(HEADER_BYTES))) return undefined;
     return first.toString('latin1');
   };
+  return { read, close };
 }

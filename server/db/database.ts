@@ -202,6 +202,7 @@ async function openSqlite(
   }
   await migrate(sequelize);
   const queue = new WriteQueue();
+  const marks = file === ':memory:' ? undefined : sqliteCommitMark(file);
   return {
     sequelize,
     dialect: 'sqlite',
@@ -214,7 +215,10 @@ async function openSqlite(
           busyTimeoutMs,
         ),
       ),
-    commitMark: file === ':memory:' ? () => undefined : sqliteCommitMark(file),
-    close: () => sequelize.close(),
+    commitMark: () => marks?.read(),
+    close: async () => {
+      marks?.close();
+      await sequelize.close();
+    },
   };
 }
