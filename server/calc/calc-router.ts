@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type RequestHandler } from 'express';
 import { FORMULA_ID_PATTERN, type RawBatchOptions, type UnitSystem } from '../../shared/index.ts';
 import type { AppContext } from '../app-context.ts';
 import { YAML_TEXT } from '../formulas/formula-http.ts';
@@ -49,10 +49,9 @@ interface CalcBody {
  * still signed in and checked on every request before this route. Formulas sent inline are
  * worked out each time: each edit in the console's editor is a new text, seldom asked twice.
  */
-export function calcRouter(context: AppContext): Router {
-  const router = Router();
+export function calcHandlers(context: AppContext): RequestHandler[] {
   const answers = context.calcAnswers;
-  router.post('/', validateBody(CALC_BODY), async (req, res) => {
+  const calculate: RequestHandler = async (req, res) => {
     const body = req.body as CalcBody;
     const units = body.units ?? 'metric';
     const today = serverToday(context);
@@ -82,6 +81,11 @@ export function calcRouter(context: AppContext): Router {
     );
     answers.set(key, answer);
     sendJsonBytes(res, answer);
-  });
-  return router;
+  };
+  return [validateBody(CALC_BODY), calculate];
+}
+
+/** The calculation route under its mount (/api/calc), for any spelling the direct route leaves. */
+export function calcRouter(handlers: readonly RequestHandler[]): Router {
+  return Router().post('/', ...handlers);
 }

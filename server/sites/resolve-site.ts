@@ -1,7 +1,7 @@
 import type { NextFunction, Request, Response } from 'express';
 import { personOf } from '../auth/request-person.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
-import type { Role } from '../../shared/api/person.ts';
+import type { Person, Role } from '../../shared/api/person.ts';
 import { SITE_HEADER } from '../../shared/api/site.ts';
 import { MAIN_SITE_KEY } from './main-site.ts';
 import { withRoles, type SiteRepository, type SiteWithRole } from './site-repository.ts';
@@ -13,6 +13,8 @@ export const noSuchSite = (key: string): AppError =>
 /** The site a request names: the X-Larder-Site header, else the `site` query parameter. */
 function askedSite(req: Request): string | undefined {
   const header = req.get(SITE_HEADER);
+  // No query string, no parameter: Express parses one afresh on every read of req.query.
+  if (!req.url.includes('?')) return header?.trim();
   const query = req.query as Record<string, unknown>;
   const param = query.site;
   if (param !== undefined) {
@@ -45,36 +47,44 @@ export function defaultSite(all: readonly SiteWithRole[]): SiteWithRole | undefi
  * the sites they may choose.
  */
 export function resolveSite(sites: SiteRepository) {
-  return async (req: Request, _res: Response, next: NextFunction): Promise<void> => {
+  return (req: Request, _res: Response, next: NextFunction): void => {
     const person = personOf(req);
-    const asked = askedSite(req);
-    // A cookie-signed request read its sites with its session (one statement); others read them.
+    // A cookie-signed request read its sites with its session (one statement): no wait for them.
     const read = req.sessionPerson?.sites;
-    const all = read ? withRoles(person, read) : await sites.forPerson(person);
-    const chosen =
-      asked === undefined ? defaultSite(all) : all.find((s) => s.key === asked && s.role !== null);
-    if (asked !== undefined && !chosen) throw noSuchSite(asked);
-    const visible = all.filter((site): site is SiteWithRole & { role: Role } => site.role !== null);
-    if (!chosen?.role) {
-      if (visible.length === 0)
-        throw new AppError(403, 'no-site', 'you have a role at no site; ask an admin for one');
-      throw new AppError(
-        400,
-        'site-required',
-        `say which site: ${visible.map((s) => s.key).join(', ')} (the ${SITE_HEADER} header or ?site=)`,
-        visible.map((site) => ({ key: site.key, name: site.name, role: site.role })),
-      );
-    }
-    req.site = { id: chosen.id, key: chosen.key, name: chosen.name, filters: all.length > 1 };
-    req.installSiteKeys = all.map((site) => site.key);
-    req.groupRole = person.roleEverywhere === false ? null : person.role;
-    req.siteRoles = visible.map((site) => ({
-      id: site.id,
-      key: site.key,
-      name: site.name,
-      role: site.role,
-    }));
-    req.person = { ...person, role: chosen.role };
-    next();
+    if (read) return atSite(req, person, withRoles(person, read), next);
+    sites
+      .forPerson(person)
+      .then((all) => atSite(req, person, all, next))
+      .catch(next);
   };
+}
+
+/** Picks the request's site among all of them, with the person's role at each (resolveSite). */
+function atSite(req: Request, person: Person, all: SiteWithRole[], next: NextFunction): void {
+  const asked = askedSite(req);
+  const chosen =
+    asked === undefined ? defaultSite(all) : all.find((s) => s.key === asked && s.role !== null);
+  if (asked !== undefined && !chosen) throw noSuchSite(asked);
+  const visible = all.filter((site): site is SiteWithRole & { role: Role } => site.role !== null);
+  if (!chosen?.role) {
+    if (visible.length === 0)
+      throw new AppError(403, 'no-site', 'you have a role at no site; ask an admin for one');
+    throw new AppError(
+      400,
+      'site-required',
+      `say which site: ${visible.map((s) => s.key).join(', ')} (the ${SITE_HEADER} header or ?site=)`,
+      visible.map((site) => ({ key: site.key, name: site.name, role: site.role })),
+    );
+  }
+  req.site = { id: chosen.id, key: chosen.key, name: chosen.name, filters: all.length > 1 };
+  req.installSiteKeys = all.map((site) => site.key);
+  req.groupRole = person.roleEverywhere === false ? null : person.role;
+  req.siteRoles = visible.map((site) => ({
+    id: site.id,
+    key: site.key,
+    name: site.name,
+    role: site.role,
+  }));
+  req.person = { ...person, role: chosen.role };
+  next();
 }
