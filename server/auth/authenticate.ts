@@ -3,7 +3,7 @@ import { BasicStrategy } from 'passport-http';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { AuditRepository } from '../audit/audit-repository.ts';
 import { AppError, forbidden } from '../http/app-error.ts';
-import type { PeopleRepository } from '../people/people-repository.ts';
+import type { PeopleRepository, SessionPerson } from '../people/people-repository.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
 import type { SignIns } from './sign-ins.ts';
 import './request-person.ts';
@@ -55,29 +55,25 @@ export function authenticate(people: PeopleRepository): RequestHandler {
   return (req: Request, res: Response, next: NextFunction) => {
     const personId = req.session?.personId;
     if (personId !== undefined) {
+      const decide = (found: SessionPerson | undefined): void => {
+        // Deactivated, or the password changed since this session signed in: the session ends.
+        const signedInAt = req.session.signedInAt ?? '';
+        const ended =
+          !found?.person.active ||
+          (found.sessionsValidFrom !== null && signedInAt < found.sessionsValidFrom);
+        if (!found || ended) {
+          req.session.destroy(() =>
+            next(new AppError(401, 'unauthenticated', 'your session has ended; sign in again')),
+          );
+          return;
+        }
+        req.person = found.person;
+        req.authVia = 'session';
+        next();
+      };
       // Read with the session when the reader gave it (one statement), otherwise here.
-      const person =
-        req.sessionPerson !== undefined
-          ? Promise.resolve(req.sessionPerson ?? undefined)
-          : people.findForSession(personId);
-      person
-        .then((found) => {
-          // Deactivated, or the password changed since this session signed in: the session ends.
-          const signedInAt = req.session.signedInAt ?? '';
-          const ended =
-            !found?.person.active ||
-            (found.sessionsValidFrom !== null && signedInAt < found.sessionsValidFrom);
-          if (!found || ended) {
-            req.session.destroy(() =>
-              next(new AppError(401, 'unauthenticated', 'your session has ended; sign in again')),
-            );
-            return;
-          }
-          req.person = found.person;
-          req.authVia = 'session';
-          next();
-        })
-        .catch(next);
+      if (req.sessionPerson !== undefined) decide(req.sessionPerson ?? undefined);
+      else people.findForSession(personId).then(decide).catch(next);
       return;
     }
     if (req.headers.authorization?.startsWith('Basic ')) {

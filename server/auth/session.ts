@@ -3,7 +3,7 @@ import connectSessionSequelize from 'connect-session-sequelize';
 import type { Request, RequestHandler } from 'express';
 import type { Database } from '../db/database.ts';
 import { readRow } from '../db/read-row.ts';
-import type { PeopleRepository, SessionRow } from '../people/people-repository.ts';
+import type { PeopleRepository, SessionPerson } from '../people/people-repository.ts';
 import { SessionCache } from './session-cache.ts';
 import { sessionReader, type SessionFound } from './session-reader.ts';
 
@@ -11,6 +11,13 @@ import { sessionReader, type SessionFound } from './session-reader.ts';
 interface SessionRowTimes {
   data: string | null;
   expires: string | null;
+}
+
+/** A stored session as a process keeps it: its data, when it ends (ms), and its person. */
+interface KeptSession {
+  readonly data: SessionData | null;
+  readonly endsAt: number | null;
+  readonly person: SessionPerson | null;
 }
 
 /** How long a console session lasts after signing in. */
@@ -73,16 +80,25 @@ export function sessionMiddleware(
   // with a random id and a hash of it, only for it to be thrown away unsaved: it gets none.
   // Signing in (POST /session, under the API's mount) is the one such request that starts one.
   const cookieName = `${SESSION_COOKIE}=`;
-  // The row is kept while nothing is committed (session-cache.ts); its expiry is checked on
-  // every request all the same.
-  const rows = new SessionCache(db.commitMark, (sid) => people.findSession(sid));
-  const live = (row: SessionRow | undefined): SessionFound | undefined => {
-    const data = liveSessionData(row);
-    return data ? { data, person: row?.person ?? null } : undefined;
-  };
+  // The session is kept, read and parsed, while nothing is committed (session-cache.ts); its
+  // expiry is checked on every request all the same.
+  const kept = new SessionCache(db.commitMark, async (sid) => {
+    const row = await people.findSession(sid);
+    return (
+      row && {
+        data: row.data ? (JSON.parse(row.data) as SessionData) : null,
+        endsAt: row.expires ? new Date(row.expires).getTime() : null,
+        person: row.person ?? null,
+      }
+    );
+  });
+  const live = (session: KeptSession | undefined): SessionFound | undefined =>
+    session?.data && !(session.endsAt !== null && session.endsAt <= Date.now())
+      ? { data: session.data, person: session.person }
+      : undefined;
   const readSession = sessionReader(store, secret, SESSION_COOKIE, (sid) => {
-    const row = rows.read(sid);
-    return row instanceof Promise ? row.then(live) : live(row);
+    const session = kept.read(sid);
+    return session instanceof Promise ? session.then(live) : live(session);
   });
   return (req, res, next) => {
     if (changesSession(req)) return sessions(req, res, next);

@@ -62,7 +62,10 @@ export function calcHandlers(context: AppContext): RequestHandler[] {
       sendJsonAnswer(res, calculateBatch(formula, body.batch, units, today, library));
       return;
     }
-    const { formula, file } = await context.formulas.current(body.formula, at);
+    // At once while the folder is unchanged, as it nearly always is; else read first.
+    const { formula, file } =
+      context.formulas.currentNow(body.formula, at) ??
+      (await context.formulas.current(body.formula, at));
     const library =
       formula.kind === 'assembly' ? await context.formulas.libraryWithRevision(at) : undefined;
     const key = calcAnswerKeyText({

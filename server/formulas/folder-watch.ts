@@ -23,6 +23,11 @@ export class FolderWatch {
     return needed;
   }
 
+  /** Whether nothing has changed since the last needsRead, without asking as needsRead does. */
+  unchanged(): boolean {
+    return this.watcher !== undefined && !this.changed;
+  }
+
   /** The folder changed in a way no notification may have told yet (a save, a failed read). */
   markChanged(): void {
     this.changed = true;

@@ -57,6 +57,22 @@ describe('FormulaStore watching its folder', () => {
     assert.equal(await title(store), 'Second');
   });
 
+  it('should answer at once only while nothing has changed, and leave a change to be read', async (t) => {
+    const { store, folder } = watchedStore(t);
+    assert.equal(store.currentNow('house-sauce'), undefined, 'not read yet');
+    assert.equal(await title(store), 'First');
+    assert.equal(await title(store), 'First'); // the watch is in place from here on
+    assert.equal(store.currentNow('house-sauce')?.formula.title, 'First');
+    assert.throws(() => store.currentNow('no-such'), /no formula "no-such"/);
+
+    writeFileSync(path.join(folder, 'house-sauce.yaml'), sauceTitled('Second'));
+    await delay(NOTICE_MS);
+    assert.equal(store.currentNow('house-sauce'), undefined, 'a change told: read first');
+    assert.equal(store.currentNow('house-sauce'), undefined, 'still, until it is read');
+    assert.equal(await title(store), 'Second');
+    assert.equal(store.currentNow('house-sauce')?.formula.title, 'Second');
+  });
+
   it('should see a file added, replaced by a rename, and deleted', async (t) => {
     const { store, folder } = watchedStore(t);
     await store.files();

@@ -56,7 +56,11 @@ export class FormulaStore {
    * (checkLibrary): one that names a missing or unfitting formula has errors like any other.
    */
   async files(at?: FormulaSite): Promise<FormulaFile[]> {
-    const all = await this.allFiles();
+    return this.seenAt(await this.allFiles(), at);
+  }
+
+  /** Of all the files, those the site sees, assemblies checked against them (files). */
+  private seenAt(all: readonly FormulaFile[], at?: FormulaSite): FormulaFile[] {
     const seen = filesAtSite(all, at);
     // An assembly of the group naming another site's formula cannot be made at this site: its
     // parts are checked again against what the site sees (only when the site sees less).
@@ -103,11 +107,7 @@ export class FormulaStore {
 
   /** The file holding a formula id (among those the site sees), or undefined. */
   async find(id: string, at?: FormulaSite): Promise<FormulaFile | undefined> {
-    const files = await this.files(at);
-    return (
-      files.find((file) => file.reading.formula?.id === id) ??
-      files.find((file) => file.name.replace(/\.ya?ml$/i, '') === id)
-    );
+    return fileFor(await this.files(at), id);
   }
 
   /**
@@ -152,18 +152,45 @@ export class FormulaStore {
    * @throws AppError 404 when there is none, 422 when its file has errors
    */
   async current(id: string, at?: FormulaSite): Promise<CurrentFormula> {
-    const file = await this.find(id, at);
-    if (!file) throw notFound(`no formula "${id}"`);
-    const formula = file.reading.formula;
-    if (!formula)
-      throw new AppError(
-        422,
-        'invalid-formula',
-        `the formula file ${file.name} has errors`,
-        file.reading.problems,
-      );
-    return { formula, revision: file.revision, file };
+    return currentOf(await this.find(id, at), id);
   }
+
+  /**
+   * current(), at once when nothing in the folder has changed since it was last read (nearly
+   * every call on a server, which watches the folder); undefined when it must be read first.
+   * @throws AppError as current() does
+   */
+  currentNow(id: string, at?: FormulaSite): CurrentFormula | undefined {
+    const last = this.checked;
+    // As allFiles reuses the last read, but only looking: a change seen is left for it to read.
+    if (!last || this.readsRunning !== 0 || !this.changes?.unchanged()) return undefined;
+    return currentOf(fileFor(this.seenAt(last.files, at), id), id);
+  }
+}
+
+/** The file holding a formula id among these files: its formula's id, else its file name. */
+function fileFor(files: readonly FormulaFile[], id: string): FormulaFile | undefined {
+  return (
+    files.find((file) => file.reading.formula?.id === id) ??
+    files.find((file) => file.name.replace(/\.ya?ml$/i, '') === id)
+  );
+}
+
+/**
+ * The formula of this file, with its revision.
+ * @throws AppError 404 when there is no file, 422 when it has errors
+ */
+function currentOf(file: FormulaFile | undefined, id: string): CurrentFormula {
+  if (!file) throw notFound(`no formula "${id}"`);
+  const formula = file.reading.formula;
+  if (!formula)
+    throw new AppError(
+      422,
+      'invalid-formula',
+      `the formula file ${file.name} has errors`,
+      file.reading.problems,
+    );
+  return { formula, revision: file.revision, file };
 }
 
 /** The files with each assembly's cross-file problems added to its reading. */
