@@ -75,8 +75,8 @@ export interface SessionFound {
  * and its person come from `read` on every request, which must reflect every commit already
  * made (session-cache.ts), so a sign-out, an expiry, a deactivation, a role change or a new
  * password takes effect at once, whichever server process on the database made it. `read` may
- * answer at once (a kept session) or later (a query). Returns false, having done nothing, when the cookie is
- * missing or does not prove: express-session then handles the request exactly as before.
+ * answer at once (a kept session) or later (a query). Returns false, having done nothing, when
+ * the cookie is missing or does not prove: express-session then handles the request as before.
  */
 export function sessionReader(
   store: Store,
