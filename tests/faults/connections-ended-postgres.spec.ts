@@ -10,6 +10,7 @@ import {
   signIn,
   startServerProcess,
   type Answer,
+  type ServerProcess,
 } from './server-process.ts';
 
 /** Records and reads in flight at once. */
@@ -19,14 +20,33 @@ const END_AFTER = 6;
 /** Longer than any request may take on a busy machine: past it, the request hangs. */
 const HANG_MS = 60_000;
 
-/** One request, failing the test when it has no answer within HANG_MS. */
-async function answered(request: Promise<Answer>, what: string): Promise<Answer> {
+/**
+ * One request, failing the test when it has no answer within HANG_MS. A request the server
+ * never answered says why the client gave up and what the server printed, so that a failure on
+ * a machine of CI's can be read from its log.
+ */
+async function answered(
+  server: ServerProcess,
+  request: Promise<Answer>,
+  what: string,
+): Promise<Answer> {
   let timer: NodeJS.Timeout | undefined;
   const hang = new Promise<never>((_, reject) => {
     timer = setTimeout(() => reject(new Error(`${what}: no answer in ${HANG_MS} ms`)), HANG_MS);
   });
   try {
     return await Promise.race([request, hang]);
+  } catch (error) {
+    const cause = error instanceof Error && error.cause instanceof Error ? error.cause : undefined;
+    const state =
+      server.child.exitCode === null && server.child.signalCode === null
+        ? 'the server is still running'
+        : `the server ended (${String(server.child.exitCode ?? server.child.signalCode)})`;
+    throw new Error(
+      `${what}: ${String(error)}${cause ? ` (${String(cause)})` : ''}; ${state}; it printed:\n` +
+        server.output().slice(-4000),
+      { cause: error },
+    );
   } finally {
     clearTimeout(timer);
   }
@@ -55,6 +75,7 @@ if (testPostgresUrl())
       const records = Array.from({ length: BURST }, async (_, i) => {
         const what = `record ${i}`;
         const answer = await answered(
+          server,
           call(server.url, tobin, 'POST', '/api/batches', { ...BELLY, notes: `burst ${i}` }),
           what,
         );
@@ -65,7 +86,11 @@ if (testPostgresUrl())
       });
       const reads = Array.from({ length: BURST }, async (_, i) => {
         const what = `read ${i}`;
-        const answer = await answered(call(server.url, tobin, 'GET', '/api/batches?limit=5'), what);
+        const answer = await answered(
+          server,
+          call(server.url, tobin, 'GET', '/api/batches?limit=5'),
+          what,
+        );
         assertDoneOrClear503(answer, what);
         if (answer.status !== 200) refused.push(answer.json.error.code as string);
       });
@@ -79,6 +104,7 @@ if (testPostgresUrl())
 
       // The same process, no restart: its pool has let the ended connections go.
       const next = await answered(
+        server,
         call(server.url, tobin, 'POST', '/api/batches', { ...BELLY, notes: 'after' }),
         'record after',
       );
