@@ -1,3 +1,5 @@
+import { deepFreeze } from './deep-freeze.ts';
+
 /** How many sessions a process keeps before it starts over. */
 const MAX_KEPT = 10_000;
 
@@ -55,12 +57,4 @@ export class SessionCache<T extends object> {
     this.kept.clear();
     this.mark = undefined;
   }
-}
-
-function deepFreeze<T>(value: T): T {
-  if (value !== null && typeof value === 'object' && !Object.isFrozen(value)) {
-    Object.freeze(value);
-    for (const item of Object.values(value)) deepFreeze(item);
-  }
-  return value;
 }

@@ -2,9 +2,17 @@ import type { NextFunction, Request, Response } from 'express';
 import { personOf } from '../auth/request-person.ts';
 import { AppError, badRequest } from '../http/app-error.ts';
 import type { Person, Role } from '../../shared/api/person.ts';
-import { SITE_HEADER } from '../../shared/api/site.ts';
+import { SITE_HEADER, type SiteInfo } from '../../shared/api/site.ts';
 import { MAIN_SITE_KEY } from './main-site.ts';
-import { withRoles, type SiteRepository, type SiteWithRole } from './site-repository.ts';
+import {
+  withRoles,
+  type SiteRepository,
+  type SiteWithRole,
+  type SiteWithSiteRole,
+} from './site-repository.ts';
+import type { SiteScope } from './site-scope.ts';
+import type { SessionPerson } from '../people/people-repository.ts';
+import { deepFreeze } from '../auth/deep-freeze.ts';
 
 /** 404 for a site the person has no role at, the same words whether it exists or not. */
 export const noSuchSite = (key: string): AppError =>
@@ -50,18 +58,68 @@ export function resolveSite(sites: SiteRepository) {
   return (req: Request, _res: Response, next: NextFunction): void => {
     const person = personOf(req);
     // A cookie-signed request read its sites with its session (one statement): no wait for them.
-    const read = req.sessionPerson?.sites;
-    if (read) return atSite(req, person, withRoles(person, read), next);
+    const read = req.sessionPerson;
+    if (read?.sites) return keptChoice(req, read, read.sites, person, next);
     sites
       .forPerson(person)
-      .then((all) => atSite(req, person, all, next))
+      .then((all) => {
+        applyChoice(req, chooseSite(person, all, askedSite(req)));
+        next();
+      })
       .catch(next);
   };
 }
 
-/** Picks the request's site among all of them, with the person's role at each (resolveSite). */
-function atSite(req: Request, person: Person, all: SiteWithRole[], next: NextFunction): void {
+/** What resolveSite sets on a request: the site, the role there and the sites around it. */
+interface SiteChoice {
+  readonly site: SiteScope;
+  readonly installSiteKeys: readonly string[];
+  readonly groupRole: Role | null;
+  readonly siteRoles: readonly (SiteInfo & { readonly id: number })[];
+  readonly person: Person;
+}
+
+/** The most sites asked of one kept session that are remembered (a header can name anything). */
+const CHOICES_PER_SESSION = 16;
+
+/**
+ * Choices made for a session's person and sites as read, by the site asked. A kept session
+ * (session-cache.ts) hands every request the same read, frozen, until anything is committed:
+ * the same read and the same site asked make the same choice, so it is made once, frozen, and
+ * shared. A new read (a role or site changed, any commit at all) is a new key.
+ */
+const choicesOf = new WeakMap<SessionPerson, Map<string | undefined, SiteChoice>>();
+
+function keptChoice(
+  req: Request,
+  read: SessionPerson,
+  sites: readonly SiteWithSiteRole[],
+  person: Person,
+  next: NextFunction,
+): void {
   const asked = askedSite(req);
+  let choices = choicesOf.get(read);
+  if (!choices) choicesOf.set(read, (choices = new Map()));
+  let choice = choices.get(asked);
+  if (!choice) {
+    // A refusal throws, and so is never remembered.
+    choice = deepFreeze(chooseSite(person, withRoles(person, sites), asked));
+    if (choices.size < CHOICES_PER_SESSION) choices.set(asked, choice);
+  }
+  applyChoice(req, choice);
+  next();
+}
+
+function applyChoice(req: Request, choice: SiteChoice): void {
+  req.site = choice.site;
+  req.installSiteKeys = choice.installSiteKeys;
+  req.groupRole = choice.groupRole;
+  req.siteRoles = choice.siteRoles;
+  req.person = choice.person;
+}
+
+/** Picks the request's site among all of them, with the person's role at each (resolveSite). */
+function chooseSite(person: Person, all: SiteWithRole[], asked: string | undefined): SiteChoice {
   const chosen =
     asked === undefined ? defaultSite(all) : all.find((s) => s.key === asked && s.role !== null);
   if (asked !== undefined && !chosen) throw noSuchSite(asked);
@@ -76,15 +134,16 @@ function atSite(req: Request, person: Person, all: SiteWithRole[], next: NextFun
       visible.map((site) => ({ key: site.key, name: site.name, role: site.role })),
     );
   }
-  req.site = { id: chosen.id, key: chosen.key, name: chosen.name, filters: all.length > 1 };
-  req.installSiteKeys = all.map((site) => site.key);
-  req.groupRole = person.roleEverywhere === false ? null : person.role;
-  req.siteRoles = visible.map((site) => ({
-    id: site.id,
-    key: site.key,
-    name: site.name,
-    role: site.role,
-  }));
-  req.person = { ...person, role: chosen.role };
-  next();
+  return {
+    site: { id: chosen.id, key: chosen.key, name: chosen.name, filters: all.length > 1 },
+    installSiteKeys: all.map((site) => site.key),
+    groupRole: person.roleEverywhere === false ? null : person.role,
+    siteRoles: visible.map((site) => ({
+      id: site.id,
+      key: site.key,
+      name: site.name,
+      role: site.role,
+    })),
+    person: { ...person, role: chosen.role },
+  };
 }

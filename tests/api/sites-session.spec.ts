@@ -90,6 +90,32 @@ describe('sites: a signed-in console person', () => {
     assert.equal(none.json.error.code, 'no-site');
   });
 
+  // Nothing is committed between these requests, so the session is kept and so is each choice
+  // of site made for it (resolve-site.ts): each site asked must still get its own.
+  it('should give each site asked in turn its own role, with nothing changed between', async () => {
+    await addPerson(server(), 'two-site-cook', null, [
+      { key: 'main', role: 'cook' },
+      { key: OTHER_SITE.key, role: 'reviewer' },
+    ]);
+    const session = await signInAs(server(), 'two-site-cook');
+    // An empty body: a cook may record, so 400 for the body; a reviewer may not, so 403 first.
+    // Neither stores anything.
+    const roleAt = async (site?: string): Promise<number> => {
+      const answer = await send(server(), session, {
+        method: 'POST',
+        path: '/api/batches',
+        body: {},
+        headers: site ? { 'x-larder-site': site } : {},
+      });
+      return answer.status;
+    };
+    const asked = ['main', OTHER_SITE.key, 'main', undefined, OTHER_SITE.key, OTHER_SITE.key];
+    const statuses = [];
+    for (const site of asked) statuses.push(await roleAt(site));
+    // A role per site; of two sites, the main kitchen is the default.
+    assert.deepEqual(statuses, [400, 403, 400, 400, 403, 403]);
+  });
+
   it('should add a person whose role holds at one site only, from the start', async () => {
     const added = await send(server(), 'rosa', {
       method: 'POST',
