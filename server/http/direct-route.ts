@@ -1,14 +1,12 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 
 /**
- * One busy route answered without walking the router: for exactly this method and URL (no
- * query, no trailing slash, as sent), the handlers run in turn as the router would run them —
- * each one's next runs the following one, and an error, passed, thrown or rejected, leaves for
- * the app's error handler. Any other request goes on to the router unchanged, and so does this
- * route asked in any other spelling, so both ways must be given the same handlers in the same
- * order (app.ts builds them from one list). The router's walk (some forty layers, each matched
- * against the path, and the mount points' bookkeeping) was about a sixth of what a kept
- * calculation allocated.
+ * One busy route's handlers run in turn without a router: for exactly this method and URL (no
+ * query, no trailing slash, as sent), each handler's next runs the following one, as the router
+ * would run them, and an error, passed, thrown or rejected, leaves for the app's error handler.
+ * Any other request leaves at once, with no error, and so does this route asked in any other
+ * spelling, which the router answers: both ways must be given the same handlers in the same order
+ * (app.ts builds them from one list). ahead-of-router.ts runs it before Express's own entry.
  *
  * The last handler must answer: one that passes the request on leaves with an error.
  */
