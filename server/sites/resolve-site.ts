@@ -98,6 +98,12 @@ function keptChoice(
   next: NextFunction,
 ): void {
   const asked = askedSite(req);
+  // Only a kept read (frozen by session-cache.ts) comes again; a fresh one (PostgreSQL, a first
+  // read) is chosen for once, with nothing remembered.
+  if (!Object.isFrozen(read)) {
+    applyChoice(req, chooseSite(person, withRoles(person, sites), asked));
+    return next();
+  }
   let choices = choicesOf.get(read);
   if (!choices) choicesOf.set(read, (choices = new Map()));
   let choice = choices.get(asked);
