@@ -1,5 +1,6 @@
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app.ts';
+import { appServer } from './http/app-server.ts';
 import { runPrimary } from './cluster/primary.ts';
 import { closeGracefully, trackRequests } from './cluster/graceful-close.ts';
 import { printStartBanner } from './cluster/print-banner.ts';
@@ -34,7 +35,7 @@ async function serve(config: ServerConfig, role: ProcessRole): Promise<void> {
         new EquipmentDueScheduler(context),
       ]
     : [];
-  const server = createApp(context).listen(config.port, config.host);
+  const server = appServer(createApp(context)).listen(config.port, config.host);
   trackRequests(server);
   server.on('listening', async () => {
     const { port } = server.address() as AddressInfo;

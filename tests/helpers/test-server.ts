@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { AppContext } from '../../server/app-context.ts';
 import { createApp } from '../../server/app.ts';
+import { appServer } from '../../server/http/app-server.ts';
 import { closeGracefully, trackRequests } from '../../server/cluster/graceful-close.ts';
 import { loadConfig } from '../../server/config.ts';
 import { seedDemo } from '../../server/demo/seed-demo.ts';
@@ -165,7 +166,7 @@ export async function startTestServer(
   // Opens the database and serves it; a restart does the same again on the same file and port.
   const open = async (port: number) => {
     const context = await openContext(config, now ? { now } : {});
-    const server = createApp(context).listen(port, '127.0.0.1');
+    const server = appServer(createApp(context)).listen(port, '127.0.0.1');
     trackRequests(server);
     await new Promise<void>((resolve) => server.once('listening', () => resolve()));
     context.mail.links.listeningOn((server.address() as AddressInfo).port);
