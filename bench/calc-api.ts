@@ -116,9 +116,13 @@ async function checkMix(url: string, session: Record<string, string>): Promise<s
  * Runs the comparison and prints it, with `processes` server processes and as many bare-route
  * processes (like for like).
  */
-export async function benchCalcApi(
-  processes = 1,
-): Promise<{ ratio: number; p99: number; rssMb: number; perSecond: number }> {
+export async function benchCalcApi(processes = 1): Promise<{
+  ratio: number;
+  p99: number;
+  rssMb: number;
+  perSecond: number;
+  barePerSecond: number;
+}> {
   const env = { LARDER_PROCESSES: String(processes) };
   // The server that keeps no answers runs after the other has stopped: one server at a time.
   let server = await startBenchServer(env);
@@ -185,6 +189,7 @@ export async function benchCalcApi(
       p99: cookieRun.p99,
       rssMb,
       perSecond: cookieRun.perSecond,
+      barePerSecond: bare,
     };
   } finally {
     if (!stopped) await server.stop();

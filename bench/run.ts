@@ -11,15 +11,23 @@ import { benchProcessRecords } from './process-records.ts';
 import { benchRecall } from './recall.ts';
 import { benchRecordBatches } from './record-batches.ts';
 
-/** Runs a benchmark with one server process, then two, and prints the ratio of the two. */
+/**
+ * Runs a benchmark with one server process, then two, and prints the ratio of the two; and the
+ * baseline's own ratio where it has one (calc-api's bare route): what this machine lets two
+ * processes gain, with the load generator on the same CPUs.
+ */
 function oneThenTwo(
-  bench: (processes: number) => Promise<{ perSecond: number }>,
+  bench: (processes: number) => Promise<{ perSecond: number; barePerSecond?: number }>,
 ): () => Promise<void> {
   return async () => {
     const one = await bench(1);
     const two = await bench(2);
+    const bare =
+      one.barePerSecond && two.barePerSecond
+        ? `; the bare route's own: ${(two.barePerSecond / one.barePerSecond).toFixed(2)} × (${two.barePerSecond.toFixed(0)} against ${one.barePerSecond.toFixed(0)})`
+        : '';
     process.stdout.write(
-      `  N = 2 against N = 1: ${(two.perSecond / one.perSecond).toFixed(2)} × (${two.perSecond.toFixed(0)} against ${one.perSecond.toFixed(0)} per second)\n`,
+      `  N = 2 against N = 1: ${(two.perSecond / one.perSecond).toFixed(2)} × (${two.perSecond.toFixed(0)} against ${one.perSecond.toFixed(0)} per second)${bare}\n`,
     );
   };
 }
